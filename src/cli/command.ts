@@ -1,0 +1,39 @@
+/**
+ * @module cli/command
+ * The shape of a CLI subcommand. Commands parse their own options (node:util parseArgs), read files
+ * through `io`, call the core and print. They hold no science.
+ */
+
+/** What a command may touch: output streams and file reading, so tests can run commands in-process. */
+export interface CliIo {
+  stdout: (text: string) => void
+  stderr: (text: string) => void
+  readFile: (path: string) => Promise<Uint8Array>
+  writeFile: (path: string, data: string | Uint8Array) => Promise<void>
+}
+
+export interface CliCommand {
+  name: string
+  /** One line for the command list. */
+  summary: string
+  /** Full `--help` text. */
+  help: string
+  /** Runs the command; returns the exit code (0 success). Throw {@link UsageError} for bad input. */
+  run: (args: string[], io: CliIo) => Promise<number>
+}
+
+/** Bad input from the user: printed as one line on stderr, exit code 2. */
+export class UsageError extends Error {
+  override name = 'UsageError'
+}
+
+/** Parse a finite number option or throw a UsageError naming the option. */
+export function numberOption(name: string, value: string | undefined): number | undefined {
+  if (value === undefined) return undefined
+  const trimmed = value.trim()
+  const n = Number(trimmed)
+  if (trimmed === '' || !Number.isFinite(n)) {
+    throw new UsageError(`--${name} must be a number, got '${value}'`)
+  }
+  return n
+}

@@ -1,0 +1,44 @@
+/**
+ * @module cli/main
+ * Dispatch `dryhours <command> …`. Exit codes: 0 success, 2 bad input (one line on stderr), 1 internal error.
+ */
+import { type CliIo, UsageError } from './command.ts'
+import { commands } from './registry.ts'
+
+export function usage(): string {
+  const width = Math.max(...commands.map((c) => c.name.length))
+  return `dryhours: can this site's weather dry this crop?
+
+Usage: dryhours <command> [options]   (dryhours <command> --help for details)
+
+Commands:
+${commands.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`).join('\n')}
+`
+}
+
+export async function runCli(argv: string[], io: CliIo): Promise<number> {
+  const [name, ...rest] = argv
+  if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
+    io.stdout(usage())
+    return name === undefined ? 2 : 0
+  }
+  const command = commands.find((c) => c.name === name)
+  if (!command) {
+    io.stderr(`dryhours: unknown command '${name}' (try dryhours --help)\n`)
+    return 2
+  }
+  if (rest.includes('--help') || rest.includes('-h')) {
+    io.stdout(`${command.help}\n`)
+    return 0
+  }
+  try {
+    return await command.run(rest, io)
+  } catch (e) {
+    if (e instanceof UsageError) {
+      io.stderr(`dryhours ${name}: ${e.message}\n`)
+      return 2
+    }
+    io.stderr(`dryhours ${name}: internal error: ${(e as Error).message ?? String(e)}\n`)
+    return 1
+  }
+}

@@ -1,0 +1,83 @@
+/**
+ * @module physics/air-columns
+ * Column form of the moist-air state for hourly series: fills preallocated Float64Arrays without
+ * allocating per hour. Same equations as {@link airState} (ASHRAE HOF 2017 ch. 1), RH over liquid water.
+ * Missing input (NaN) or input outside the valid domain gives NaN in every output for that hour.
+ */
+import {
+  DRY_BULB_MAX_C,
+  DRY_BULB_MIN_C,
+  dewPointFromVaporPressureC,
+  MOLAR_MASS_RATIO_WATER_AIR,
+  PRESSURE_MAX_KPA,
+  PRESSURE_MIN_KPA,
+  wetBulbWithDewPointC,
+} from './moist-air.ts'
+import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from './saturation.ts'
+
+export interface AirColumnsInput {
+  dryBulbC: Float64Array
+  /** RH over liquid water [%]. */
+  relativeHumidityPct: Float64Array
+  pressureKpa: Float64Array
+}
+
+/** Output columns; any may be omitted, and omitted ones are not computed (the wet bulb costs most). */
+export interface AirColumnsOutput {
+  humidityRatioKgPerKg?: Float64Array
+  vaporPressureKpa?: Float64Array
+  dewPointC?: Float64Array
+  wetBulbC?: Float64Array
+  enthalpyKjPerKg?: Float64Array
+  densityKgPerM3?: Float64Array
+}
+
+/**
+ * Fill `out` for every hour of `input`. Returns the number of hours whose input was missing or outside
+ * the domain (those hours are NaN in every output).
+ */
+export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutput): number {
+  const n = input.dryBulbC.length
+  const { dryBulbC, relativeHumidityPct, pressureKpa } = input
+  const wOut = out.humidityRatioKgPerKg
+  const pwOut = out.vaporPressureKpa
+  const tdOut = out.dewPointC
+  const twbOut = out.wetBulbC
+  const hOut = out.enthalpyKjPerKg
+  const rhoOut = out.densityKgPerM3
+  let invalid = 0
+  for (let i = 0; i < n; i++) {
+    const t = dryBulbC[i]
+    const rh = relativeHumidityPct[i]
+    const p = pressureKpa[i]
+    if (
+      !(t >= DRY_BULB_MIN_C && t <= DRY_BULB_MAX_C) ||
+      !(rh > 0 && rh <= 100) ||
+      !(p >= PRESSURE_MIN_KPA && p <= PRESSURE_MAX_KPA)
+    ) {
+      invalid++
+      if (wOut) wOut[i] = Number.NaN
+      if (pwOut) pwOut[i] = Number.NaN
+      if (tdOut) tdOut[i] = Number.NaN
+      if (twbOut) twbOut[i] = Number.NaN
+      if (hOut) hOut[i] = Number.NaN
+      if (rhoOut) rhoOut[i] = Number.NaN
+      continue
+    }
+    const pws = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)) / 1000
+    const pw = (rh / 100) * pws
+    const w = (MOLAR_MASS_RATIO_WATER_AIR * pw) / (p - pw)
+    if (wOut) wOut[i] = w
+    if (pwOut) pwOut[i] = pw
+    let td = Number.NaN
+    if (tdOut || twbOut) {
+      td = dewPointFromVaporPressureC(pw)
+      if (td > t) td = t
+      if (tdOut) tdOut[i] = td
+    }
+    if (twbOut) twbOut[i] = wetBulbWithDewPointC(t, w, p, td)
+    if (hOut) hOut[i] = 1.006 * t + w * (2501 + 1.86 * t)
+    if (rhoOut) rhoOut[i] = ((1 + w) * p) / (0.287042 * (t + KELVIN_OFFSET) * (1 + 1.607858 * w))
+  }
+  return invalid
+}
