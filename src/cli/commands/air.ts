@@ -1,6 +1,9 @@
 import { parseArgs } from 'node:util'
 import { type AirState, airState } from '../../physics/air-state.ts'
+import { airStateJson } from '../../report/air-json.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
+
+export { airStateJson }
 
 const help = `dryhours air: the full moist-air state from dry bulb and one humidity variable
 
@@ -10,23 +13,6 @@ Usage:
 
 Relative humidity is over liquid water (as weather stations report it). Sea level (101.325 kPa)
 when neither elevation nor pressure is given.`
-
-/** The JSON keys of `dryhours air --json` and of GET /v1/air, in this order. */
-export function airStateJson(s: AirState): Record<string, number> {
-  return {
-    dryBulbC: s.dryBulbC,
-    wetBulbC: s.wetBulbC,
-    dewPointC: s.dewPointC,
-    relativeHumidityPct: s.relativeHumidityPct,
-    humidityRatioGPerKg: s.humidityRatioGPerKg,
-    enthalpyKjPerKg: s.enthalpyKjPerKg,
-    specificVolumeM3PerKg: s.specificVolumeM3PerKg,
-    densityKgPerM3: s.densityKgPerM3,
-    vaporPressureKpa: s.vaporPressureKpa,
-    saturationVaporPressureKpa: s.saturationVaporPressureKpa,
-    pressureKpa: s.pressureKpa,
-  }
-}
 
 function table(s: AirState): string {
   const rows: [string, string, string][] = [
