@@ -59,7 +59,8 @@ export function standardPressureKpaAtElevation(elevationM: number): number {
   if (!(elevationM >= -500 && elevationM <= 9000)) {
     throw new RangeError(`elevation must be between -500 and 9000 m, got ${elevationM}`)
   }
-  return STANDARD_PRESSURE_KPA * (1 - 2.25577e-5 * elevationM) ** 5.2559
+  // exp/log rather than `**`: Math.pow differs in the last bit between V8 versions (Node vs workerd).
+  return STANDARD_PRESSURE_KPA * Math.exp(5.2559 * Math.log(1 - 2.25577e-5 * elevationM))
 }
 
 /** Humidity ratio [kg/kg] from vapour pressure and total pressure [kPa]; ASHRAE HOF 2017 ch. 1 eq 20. */
