@@ -4,5 +4,6 @@
  */
 import type { CliCommand } from './command.ts'
 import { airCommand } from './commands/air.ts'
+import { serveCommand } from './commands/serve.ts'
 
-export const commands: CliCommand[] = [airCommand]
+export const commands: CliCommand[] = [airCommand, serveCommand]
