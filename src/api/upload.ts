@@ -1,0 +1,89 @@
+/**
+ * @module api/upload
+ * Reading uploaded files from a request: a raw body (`text/csv`, `text/plain`, `application/octet-stream`)
+ * with options in the query string, or `multipart/form-data` with file parts and an `options` JSON part.
+ * Anything else is a 415 problem that says which types are accepted.
+ */
+import type { Context } from 'hono'
+import { ApiProblem } from './problem.ts'
+
+export interface UploadedFile {
+  /** Name as sent by the client (untrusted; escape before display), or a default. */
+  name: string
+  /** Multipart field name ('' for a raw body). */
+  field: string
+  bytes: Uint8Array
+}
+
+export interface Upload {
+  files: UploadedFile[]
+  /** The `options` part parsed as JSON, or the query-string options; undefined when none were sent. */
+  options: unknown
+  /** Query-string parameters (always available). */
+  query: Record<string, string>
+}
+
+const RAW_TYPES = ['text/csv', 'text/plain', 'application/octet-stream', 'text/tab-separated-values']
+
+function mediaType(c: Context): string {
+  return (c.req.header('content-type') ?? '').split(';')[0].trim().toLowerCase()
+}
+
+/**
+ * Decode uploaded bytes to text: UTF-8 (BOM removed), or UTF-16 LE/BE when a UTF-16 byte-order mark is
+ * present. Invalid UTF-8 sequences become U+FFFD, which the readers then report on their line.
+ */
+export function decodeUploadText(bytes: Uint8Array): string {
+  if (bytes.length >= 2 && bytes[0] === 0xff && bytes[1] === 0xfe)
+    return new TextDecoder('utf-16le').decode(bytes.subarray(2))
+  if (bytes.length >= 2 && bytes[0] === 0xfe && bytes[1] === 0xff)
+    return new TextDecoder('utf-16be').decode(bytes.subarray(2))
+  return new TextDecoder('utf-8', { ignoreBOM: false }).decode(bytes)
+}
+
+/** Read the request's files and options; `fileFields` are the multipart fields that carry files. */
+export async function readUpload(c: Context, opts: { defaultName: string }): Promise<Upload> {
+  const query: Record<string, string> = {}
+  for (const [k, v] of new URL(c.req.url).searchParams) query[k] = v
+  const type = mediaType(c)
+  if (type === 'multipart/form-data') {
+    let form: FormData
+    try {
+      form = await c.req.formData()
+    } catch {
+      throw new ApiProblem(400, 'the multipart body could not be parsed (check the boundary and the parts)')
+    }
+    const files: UploadedFile[] = []
+    let options: unknown
+    for (const [field, value] of form.entries()) {
+      if (field === 'options') {
+        const text = typeof value === 'string' ? value : await value.text()
+        try {
+          options = JSON.parse(text)
+        } catch (e) {
+          throw new ApiProblem(400, `the options part is not valid JSON: ${(e as Error).message}`, [
+            { path: 'options', message: 'not valid JSON' },
+          ])
+        }
+      } else if (typeof value !== 'string') {
+        files.push({
+          name: value.name || opts.defaultName,
+          field,
+          bytes: new Uint8Array(await value.arrayBuffer()),
+        })
+      } else if (field === 'file' || field.startsWith('file') || field === 'site') {
+        // A file pasted as a text field.
+        files.push({ name: opts.defaultName, field, bytes: new TextEncoder().encode(value) })
+      }
+    }
+    return { files, options, query }
+  }
+  if (RAW_TYPES.includes(type)) {
+    const bytes = new Uint8Array(await c.req.arrayBuffer())
+    return { files: [{ name: query.name ?? opts.defaultName, field: '', bytes }], options: undefined, query }
+  }
+  throw new ApiProblem(
+    415,
+    `content type '${type || '(none)'}' is not accepted; send the file as text/csv, text/plain or application/octet-stream, or as multipart/form-data with a file part`,
+  )
+}
