@@ -1,0 +1,230 @@
+/**
+ * @module physics/evaporation
+ * Evaporation from a wet surface (free water on a product, open water) by the Penman combination
+ * equation in resistance form, λE = [Δ (Rn − G) + ρa cp (es − ea)/ra] / [Δ + γ (1 + rs/ra)], rs = 0 for a
+ * wet surface (Penman 1948; Monteith 1965 resistance form; FAO-56 eq 3, Allen et al. 1998), with its
+ * building blocks. Units: °C, kPa, W/m² (mean over the hour), s/m, m/s, kg m⁻² h⁻¹ (= mm/h of water).
+ *
+ * Saturation pressure and its slope come from the Hyland–Wexler curve over liquid water in
+ * ./saturation.ts (ASHRAE HOF 2017 ch. 1 eq 6) and air density from ./moist-air.ts; the FAO-56 Tetens
+ * forms used by the reference-ET check are in ./fao56-reference-et.ts.
+ */
+import { checkPressure, humidityRatioFromVaporPressure, moistAirDensityKgPerM3 } from './moist-air.ts'
+import {
+  dLnSaturationPressureLiquidDT,
+  KELVIN_OFFSET,
+  saturationVaporPressureLiquidKpa,
+} from './saturation.ts'
+
+/** Seconds per hour. Definition. */
+const S_PER_HOUR = 3600
+/** Seconds per day. Definition. */
+const S_PER_DAY = 86400
+/** Ratio of molar masses water/dry air used by FAO-56 eq 8 (ε = 0.622). */
+export const EPSILON_FAO56 = 0.622
+/** Specific heat of dry air [kJ kg⁻¹ K⁻¹] of the ASHRAE enthalpy relation (ASHRAE HOF 2017 ch. 1 eq 30). */
+export const CP_DRY_AIR_KJ_PER_KG_K = 1.006
+/** Specific heat of water vapour [kJ kg⁻¹ K⁻¹] of the same relation (ASHRAE HOF 2017 ch. 1 eq 30). */
+export const CP_WATER_VAPOR_KJ_PER_KG_K = 1.86
+
+/**
+ * Latent heat of vaporization of water [MJ/kg] at surface temperature `tC` [°C]: λ = 2.501 − 2.361×10⁻³ T,
+ * FAO-56 Annex 3 eq 3-1 (Harrison 1963). 20 °C → 2.454 MJ/kg.
+ */
+export function latentHeatVaporizationMjPerKg(tC: number): number {
+  if (!(tC >= -50 && tC <= 100)) throw new RangeError(`temperature must be between -50 and 100 °C, got ${tC}`)
+  return 2.501 - 2.361e-3 * tC
+}
+
+/**
+ * Slope of the saturation vapour-pressure curve over liquid water [kPa/°C] at `tC`: d pws/dT of
+ * Hyland–Wexler (ASHRAE HOF 2017 ch. 1 eq 6), analytic. Within 0.3 % of FAO-56 eq 13 from 0 to 45 °C.
+ */
+export function saturationSlopeLiquidKpaPerC(tC: number): number {
+  return saturationVaporPressureLiquidKpa(tC) * dLnSaturationPressureLiquidDT(tC + KELVIN_OFFSET)
+}
+
+/**
+ * Psychrometric constant γ [kPa/°C] = cp P / (ε λ), FAO-56 eq 8 in its general form, with total pressure
+ * `pressureKpa`, latent heat `latentHeatMjPerKg` [MJ/kg] and specific heat of (moist) air `cpMjPerKgK`
+ * (FAO-56 uses 1.013×10⁻³ MJ kg⁻¹ °C⁻¹; with λ = 2.45 this is 0.665×10⁻³ P).
+ */
+export function psychrometricConstantKpaPerC(
+  pressureKpa: number,
+  latentHeatMjPerKg: number,
+  cpMjPerKgK = 1.013e-3,
+): number {
+  checkPressure(pressureKpa)
+  return (cpMjPerKgK * pressureKpa) / (EPSILON_FAO56 * latentHeatMjPerKg)
+}
+
+/**
+ * Wind speed at 2 m [m/s] from wind `windMs` measured at `heightM` [m] over short grass, FAO-56 eq 47:
+ * u2 = uz · 4.87 / ln(67.8 z − 5.42). Example 14: 3.2 m/s at 10 m → 2.4 m/s.
+ */
+export function windSpeedAt2mMs(windMs: number, heightM: number): number {
+  if (!(windMs >= 0 && windMs < 100))
+    throw new RangeError(`wind speed must be between 0 and 100 m/s, got ${windMs}`)
+  if (!(heightM >= 0.5 && heightM <= 200))
+    throw new RangeError(`wind height must be between 0.5 and 200 m, got ${heightM}`)
+  return (windMs * 4.87) / Math.log(67.8 * heightM - 5.42)
+}
+
+/**
+ * Aerodynamic resistance of the FAO-56 grass reference surface [s/m] = 208/u2 (FAO-56 eq 4 with h = 0.12 m,
+ * measurements at 2 m; Allen et al. 1998 Box 4). Infinite for calm air.
+ */
+export function aerodynamicResistanceGrassSPerM(windAt2mMs: number): number {
+  if (!(windAt2mMs >= 0)) throw new RangeError(`wind speed at 2 m must be >= 0 m/s, got ${windAt2mMs}`)
+  return 208 / windAt2mMs
+}
+
+/**
+ * Penman (1948) open-water wind function [mm d⁻¹ kPa⁻¹] = 2.626 + 1.381 u2, in the SI form of McMahon et
+ * al. (2013), HESS 17:1331, Supplement eq S4.11. Its intercept stands for free convection in calm air.
+ */
+export function windFunctionPenman1948MmPerDayKpa(windAt2mMs: number): number {
+  if (!(windAt2mMs >= 0)) throw new RangeError(`wind speed at 2 m must be >= 0 m/s, got ${windAt2mMs}`)
+  return 2.626 + 1.381 * windAt2mMs
+}
+
+/** Penman (1956) wind function [mm d⁻¹ kPa⁻¹] = 1.313 + 1.381 u2; McMahon et al. (2013) Supplement eq S4.3. */
+export function windFunctionPenman1956MmPerDayKpa(windAt2mMs: number): number {
+  if (!(windAt2mMs >= 0)) throw new RangeError(`wind speed at 2 m must be >= 0 m/s, got ${windAt2mMs}`)
+  return 1.313 + 1.381 * windAt2mMs
+}
+
+/**
+ * Aerodynamic resistance [s/m] equivalent to a Penman wind function f(u) [mm d⁻¹ kPa⁻¹]:
+ * ra = ρa cp / (γ λ f(u)), the identity that makes γ/(Δ+γ)·f(u)(es − ea) equal ρa cp (es − ea)/ra/(Δ+γ)
+ * (McMahon et al. 2013 Supplement S11.23, there with f in energy units). Inputs: air density [kg/m³], air
+ * specific heat [kJ kg⁻¹ K⁻¹], γ [kPa/°C], λ [MJ/kg].
+ */
+export function aerodynamicResistanceFromWindFunctionSPerM(
+  windFunctionMmPerDayKpa: number,
+  airDensityKgPerM3: number,
+  cpKjPerKgK: number,
+  psychrometricKpaPerC: number,
+  latentHeatMjPerKg: number,
+): number {
+  if (!(windFunctionMmPerDayKpa > 0)) {
+    throw new RangeError(`wind function must be > 0 mm/d/kPa, got ${windFunctionMmPerDayKpa}`)
+  }
+  const fKgPerM2SKpa = windFunctionMmPerDayKpa / S_PER_DAY
+  return (airDensityKgPerM3 * cpKjPerKgK) / (psychrometricKpaPerC * latentHeatMjPerKg * 1000 * fKgPerM2SKpa)
+}
+
+/**
+ * Convective heat-transfer coefficient of a flat plate in wind [W m⁻² K⁻¹], hc = 2.8 + 3.0 u (Watmuff,
+ * Charters & Proctor 1977, as quoted in Duffie & Beckman 2013 §3.15; from memory), u the wind at the
+ * surface [m/s]. With the Lewis analogy (Le ≈ 1 for water vapour in air) ra = ρa cp / hc is the resistance
+ * to heat and to vapour of a small wet plate (see {@link aerodynamicResistanceFlatPlateSPerM}).
+ */
+export function flatPlateHeatTransferCoefficientWm2K(windMs: number): number {
+  if (!(windMs >= 0)) throw new RangeError(`wind speed must be >= 0 m/s, got ${windMs}`)
+  return 2.8 + 3.0 * windMs
+}
+
+/** ra = ρa cp / hc [s/m] for a flat wet plate (Lewis analogy) with hc of {@link flatPlateHeatTransferCoefficientWm2K}. */
+export function aerodynamicResistanceFlatPlateSPerM(
+  windMs: number,
+  airDensityKgPerM3: number,
+  cpKjPerKgK: number,
+): number {
+  return (airDensityKgPerM3 * cpKjPerKgK * 1000) / flatPlateHeatTransferCoefficientWm2K(windMs)
+}
+
+/**
+ * Penman–Monteith combination equation, latent heat flux λE [W/m²] (FAO-56 eq 3, Allen et al. 1998):
+ * λE = [Δ A + ρa cp (es − ea)/ra] / [Δ + γ (1 + rs/ra)], with Δ and γ [kPa/°C], available energy
+ * A = Rn − G [W/m²], volumetric heat capacity ρa cp [J m⁻³ K⁻¹], vapour-pressure deficit es − ea [kPa],
+ * aerodynamic and surface resistances ra, rs [s/m]. rs = 0 is the Penman wet-surface form. ra = ∞ (calm,
+ * no free convection term) leaves the radiation term only. Any consistent energy unit may replace W/m².
+ */
+export function penmanMonteithLatentFlux(
+  slopeKpaPerC: number,
+  psychrometricKpaPerC: number,
+  availableEnergyWm2: number,
+  volumetricHeatCapacityJPerM3K: number,
+  vaporPressureDeficitKpa: number,
+  aerodynamicResistanceSPerM: number,
+  surfaceResistanceSPerM = 0,
+): number {
+  if (!(aerodynamicResistanceSPerM > 0)) {
+    throw new RangeError(`aerodynamic resistance must be > 0 s/m, got ${aerodynamicResistanceSPerM}`)
+  }
+  if (!(surfaceResistanceSPerM >= 0)) {
+    throw new RangeError(`surface resistance must be >= 0 s/m, got ${surfaceResistanceSPerM}`)
+  }
+  const aero = (volumetricHeatCapacityJPerM3K * vaporPressureDeficitKpa) / aerodynamicResistanceSPerM
+  const rsOverRa = Number.isFinite(aerodynamicResistanceSPerM)
+    ? surfaceResistanceSPerM / aerodynamicResistanceSPerM
+    : 0
+  return (slopeKpaPerC * availableEnergyWm2 + aero) / (slopeKpaPerC + psychrometricKpaPerC * (1 + rsOverRa))
+}
+
+/**
+ * Latent heat flux [W/m²] from a wet surface at air temperature (Penman 1948 in resistance form, rs = 0):
+ * Δ at `airTempC` from Hyland–Wexler, λ(T) FAO-56 Annex 3, γ = cp P/(ε λ) with cp of the moist air,
+ * ρa from the ASHRAE perfect-gas relations, es − ea from `airTempC` and `vaporPressureKpa`.
+ * Inputs: net radiation and ground/product heat flux [W/m²], air temperature [°C], actual vapour
+ * pressure [kPa], total pressure [kPa], aerodynamic resistance [s/m]. No allocation.
+ * Negative values mean condensation (dew) on the surface.
+ */
+export function wetSurfaceLatentFluxWm2(
+  netRadiationWm2: number,
+  heatFluxIntoSurfaceWm2: number,
+  airTempC: number,
+  vaporPressureKpa: number,
+  pressureKpa: number,
+  aerodynamicResistanceSPerM: number,
+): number {
+  checkPressure(pressureKpa)
+  const es = saturationVaporPressureLiquidKpa(airTempC)
+  if (!(vaporPressureKpa >= 0 && vaporPressureKpa <= es * 1.0001)) {
+    throw new RangeError(
+      `vapour pressure must be between 0 and the saturation pressure ${es.toFixed(4)} kPa at ${airTempC} °C, got ${vaporPressureKpa}`,
+    )
+  }
+  const w = humidityRatioFromVaporPressure(vaporPressureKpa, pressureKpa)
+  const density = moistAirDensityKgPerM3(airTempC, w, pressureKpa)
+  const cpKjPerKgK = (CP_DRY_AIR_KJ_PER_KG_K + w * CP_WATER_VAPOR_KJ_PER_KG_K) / (1 + w) // per kg moist air
+  const lambda = latentHeatVaporizationMjPerKg(airTempC)
+  const gamma = psychrometricConstantKpaPerC(pressureKpa, lambda, cpKjPerKgK / 1000)
+  return penmanMonteithLatentFlux(
+    saturationSlopeLiquidKpaPerC(airTempC),
+    gamma,
+    netRadiationWm2 - heatFluxIntoSurfaceWm2,
+    density * cpKjPerKgK * 1000,
+    es - vaporPressureKpa,
+    aerodynamicResistanceSPerM,
+  )
+}
+
+/** Evaporation [kg m⁻² h⁻¹ = mm/h] from latent heat flux [W/m²] at surface temperature `tC` (λ of FAO-56 Annex 3). */
+export function evaporationKgPerM2HFromLatentFlux(latentFluxWm2: number, tC: number): number {
+  return (latentFluxWm2 * S_PER_HOUR) / (latentHeatVaporizationMjPerKg(tC) * 1e6)
+}
+
+/**
+ * Evaporation from a wet surface [kg m⁻² h⁻¹ = mm/h]: {@link wetSurfaceLatentFluxWm2} divided by λ at the
+ * air temperature. Same inputs; negative means condensation.
+ */
+export function wetSurfaceEvaporationKgPerM2H(
+  netRadiationWm2: number,
+  heatFluxIntoSurfaceWm2: number,
+  airTempC: number,
+  vaporPressureKpa: number,
+  pressureKpa: number,
+  aerodynamicResistanceSPerM: number,
+): number {
+  const flux = wetSurfaceLatentFluxWm2(
+    netRadiationWm2,
+    heatFluxIntoSurfaceWm2,
+    airTempC,
+    vaporPressureKpa,
+    pressureKpa,
+    aerodynamicResistanceSPerM,
+  )
+  return evaporationKgPerM2HFromLatentFlux(flux, airTempC)
+}

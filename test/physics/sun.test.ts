@@ -1,0 +1,123 @@
+import fc from 'fast-check'
+import * as SunCalc from 'suncalc'
+import { describe, expect, it } from 'vitest'
+import {
+  intervalMidpointUtcMs,
+  MS_PER_HOUR,
+  sinGeometricSunAltitude,
+  sunAltitudeColumn,
+  sunPosition,
+  sunPositionColumns,
+} from '../../src/physics/sun.ts'
+
+// Reda & Andreas (2004), Solar Position Algorithm for Solar Radiation Applications, NREL/TP-560-34302,
+// Table A5.1: 2003-10-17 12:30:30 local (UTC−7), 39.742476 N, 105.1786 W, 820 mbar, 11 °C.
+// Published: topocentric zenith 50.11162°, azimuth 194.34024° (from north); geometric elevation e0 39.872046°.
+const SPA_UTC_MS = Date.UTC(2003, 9, 17, 19, 30, 30)
+const SPA_LAT = 39.742476
+const SPA_LON = -105.1786
+
+describe('sun position against the NREL SPA worked example (Reda & Andreas 2004)', () => {
+  const p = sunPosition(SPA_UTC_MS, SPA_LAT, SPA_LON)
+  it('zenith within 0.01° of 50.11162°', () => {
+    // suncalc computes refraction for ~1010 mbar/10 °C (0.0202°), SPA for the example's 820 mbar/11 °C
+    // (0.0163°), and uses the Meeus ch. 25 low-accuracy series (≈0.001°): a gap of about 0.004° is expected,
+    // so 0.01° is the tolerance.
+    expect(Math.abs(90 - p.altitudeDeg - 50.11162)).toBeLessThan(0.01)
+  })
+  it('azimuth within 0.005° of 194.34024° (clockwise from north)', () => {
+    expect(Math.abs(p.azimuthDeg - 194.34024)).toBeLessThan(0.005)
+  })
+  it('geometric elevation within 0.002° of SPA e0 = 39.872046° (no refraction in either)', () => {
+    const e0 = (Math.asin(sinGeometricSunAltitude(SPA_UTC_MS, SPA_LAT, SPA_LON)) * 180) / Math.PI
+    expect(Math.abs(e0 - 39.872046)).toBeLessThan(0.002)
+  })
+  it('the column path gives the same answer as suncalc at the SPA instant', () => {
+    const alt = new Float64Array(1)
+    const az = new Float64Array(1)
+    sunPositionColumns(new Float64Array([SPA_UTC_MS]), SPA_LAT, SPA_LON, alt, az, 0)
+    expect(Math.abs(alt[0] - p.altitudeDeg)).toBeLessThan(1e-9)
+    expect(Math.abs(az[0] - p.azimuthDeg)).toBeLessThan(1e-9)
+  })
+})
+
+describe('NOAA solar-calculation spreadsheet, 2010-06-21 00:06 UTC−7, 40 N 105 W', () => {
+  // Published: azimuth 1.09867118°, apparent elevation −26.54221643°. suncalc 2 clamps refraction at 0°,
+  // raising below-horizon altitudes by ~0.48°, so only the night sign and azimuth are compared.
+  const p = sunPosition(Date.UTC(2010, 5, 21, 7, 6), 40, -105)
+  it('azimuth within 0.02°', () => expect(Math.abs(p.azimuthDeg - 1.09867118)).toBeLessThan(0.02))
+  it('night: altitude < 0, within 0.6° of the published value', () => {
+    expect(p.altitudeDeg).toBeLessThan(0)
+    expect(Math.abs(p.altitudeDeg - -26.54221643)).toBeLessThan(0.6)
+  })
+})
+
+describe('column path agrees with suncalc 2.0.2 getPosition', () => {
+  it('1e-9° on random instants 1950–2080 and places', () => {
+    fc.assert(
+      fc.property(
+        // whole milliseconds: Date truncates fractions, which would move the sun by ~1e-7°
+        fc.integer({ min: Date.UTC(1950, 0, 1), max: Date.UTC(2080, 0, 1) }),
+        fc.double({ min: -89.9, max: 89.9, noNaN: true }),
+        fc.double({ min: -180, max: 180, noNaN: true }),
+        (t, lat, lon) => {
+          const alt = new Float64Array(1)
+          const az = new Float64Array(1)
+          sunPositionColumns(new Float64Array([t]), lat, lon, alt, az, 0)
+          const ref = SunCalc.getPosition(new Date(t), lat, lon)
+          return Math.abs(alt[0] - ref.altitude) < 1e-9 && Math.abs(az[0] - ref.azimuth) < 1e-9
+        },
+      ),
+      { numRuns: 500 },
+    )
+  })
+  it('sunAltitudeColumn evaluates at hour start + 30 min, NaN instants give NaN', () => {
+    const starts = new Float64Array([Date.UTC(2024, 5, 21, 11), Number.NaN, Date.UTC(2024, 11, 21, 0)])
+    const out = new Float64Array(3)
+    expect(sunAltitudeColumn(starts, 38.5, -121.7, out)).toBe(3)
+    expect(Math.abs(out[0] - sunPosition(starts[0] + 30 * 60_000, 38.5, -121.7).altitudeDeg)).toBeLessThan(
+      1e-9,
+    )
+    expect(Number.isNaN(out[1])).toBe(true)
+    expect(Math.abs(out[2] - sunPosition(starts[2] + 30 * 60_000, 38.5, -121.7).altitudeDeg)).toBeLessThan(
+      1e-9,
+    )
+  })
+})
+
+describe('properties', () => {
+  it('altitude within [−90, 90] and azimuth within [0, 360) everywhere', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: Date.UTC(1900, 0, 1), max: Date.UTC(2150, 0, 1), noNaN: true }),
+        fc.double({ min: -90, max: 90, noNaN: true }),
+        fc.double({ min: -180, max: 180, noNaN: true }),
+        (t, lat, lon) => {
+          const p = sunPosition(t, lat, lon)
+          return p.altitudeDeg >= -90 && p.altitudeDeg <= 90 && p.azimuthDeg >= 0 && p.azimuthDeg < 360
+        },
+      ),
+      { numRuns: 300 },
+    )
+  })
+  it('on the equator at an equinox, noon sun is near the zenith and midnight is night', () => {
+    // Geometry, no source needed beyond the definition: declination ≈ 0 on 2024-03-20 (equinox 03:06 UTC).
+    const noon = sunPosition(Date.UTC(2024, 2, 20, 12, 7), 0, 0)
+    expect(noon.altitudeDeg).toBeGreaterThan(89)
+    expect(sunPosition(Date.UTC(2024, 2, 20, 0, 7), 0, 0).altitudeDeg).toBeLessThan(-80)
+  })
+})
+
+describe('helpers and errors', () => {
+  it('interval midpoint: hour start + 30 min; 10-minute interval + 5 min', () => {
+    expect(intervalMidpointUtcMs(0)).toBe(MS_PER_HOUR / 2)
+    expect(intervalMidpointUtcMs(1000, 10)).toBe(1000 + 5 * 60_000)
+  })
+  it('RangeErrors name the input', () => {
+    expect(() => sunPosition(0, 91, 0)).toThrow(/latitude.*91/)
+    expect(() => sunPosition(0, 0, 200)).toThrow(/longitude.*200/)
+    expect(() => sunPosition(Number.NaN, 0, 0)).toThrow(/UTC instant/)
+    expect(() => intervalMidpointUtcMs(0, 0)).toThrow(/interval/)
+    expect(() => sunAltitudeColumn(new Float64Array(3), 0, 0, new Float64Array(2))).toThrow(/altitude output/)
+  })
+})
