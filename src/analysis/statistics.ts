@@ -1,0 +1,60 @@
+/**
+ * @module analysis/statistics
+ * Percentiles across years. Convention used everywhere in dryhours: `pXX` is the XX-th percentile of
+ * the values across years, by linear interpolation between order statistics (Hyndman & Fan 1996,
+ * "Sample quantiles in statistical packages", Am. Stat. 50:361, definition 7, the default of R and
+ * NumPy). For usable drying hours, p10 is therefore the figure **exceeded in 9 of 10 years** (a bad
+ * year) and p90 the figure exceeded in 1 of 10 years (a good year). For days to target, p90 is the
+ * time within which 9 of 10 years finish.
+ */
+
+/** The convention, in words, for the assumptions list of an assessment. */
+export const PERCENTILE_CONVENTION =
+  'pXX = XX-th percentile across years (Hyndman & Fan 1996 definition 7, linear interpolation). ' +
+  'For usable hours p10 is exceeded in 9 of 10 years (bad year), p90 in 1 of 10 (good year); ' +
+  'for days to target p90 is the time within which 9 of 10 years finish.'
+
+/**
+ * Quantile `q` ∈ [0, 1] of `sorted` (ascending, finite or +Infinity), Hyndman–Fan definition 7:
+ * h = (n − 1)q, x⌊h⌋ + (h − ⌊h⌋)(x⌊h⌋+1 − x⌊h⌋). Example: [1, 2, 3, 4] at 0.1 → 1.3.
+ * Returns NaN for an empty array. +Infinity entries (e.g. batches that never finished) propagate.
+ */
+export function quantileSorted(sorted: ArrayLike<number>, q: number): number {
+  const n = sorted.length
+  if (n === 0) return Number.NaN
+  if (!(q >= 0 && q <= 1)) throw new RangeError(`quantile must be between 0 and 1, got ${q}`)
+  const h = (n - 1) * q
+  const lo = Math.floor(h)
+  const hi = Math.min(lo + 1, n - 1)
+  const a = sorted[lo]
+  const b = sorted[hi]
+  if (a === b) return a
+  if (b === Number.POSITIVE_INFINITY) return h === lo ? a : Number.POSITIVE_INFINITY
+  return a + (h - lo) * (b - a)
+}
+
+export interface Spread {
+  median: number | null
+  p10: number | null
+  p90: number | null
+}
+
+/** Round to `digits` decimals, mapping non-finite to null (JSON-safe). */
+export function roundOrNull(x: number, digits = 1): number | null {
+  if (!Number.isFinite(x)) return null
+  const f = 10 ** digits
+  return Math.round(x * f) / f
+}
+
+/**
+ * Median, p10 and p90 of `values` (any order). Non-finite results (no data, or +Infinity meaning
+ * "not reached") become null. Example: [10, 20, 30, 40, 50] → median 30, p10 14, p90 46.
+ */
+export function spread(values: readonly number[], digits = 1): Spread {
+  const sorted = values.filter((v) => !Number.isNaN(v)).sort((a, b) => a - b)
+  return {
+    median: roundOrNull(quantileSorted(sorted, 0.5), digits),
+    p10: roundOrNull(quantileSorted(sorted, 0.1), digits),
+    p90: roundOrNull(quantileSorted(sorted, 0.9), digits),
+  }
+}

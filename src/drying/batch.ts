@@ -1,0 +1,187 @@
+/**
+ * @module drying/batch
+ * One batch, hour by hour, over precomputed {@link HourlyConditions} (model.md §5):
+ * - drying (M above the desorption equilibrium): thin-layer step by equivalent time
+ *   (drying/product-response.ts), never removing more than the hour's constant-rate limit (wet-surface
+ *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air);
+ * - rewetting (M below the adsorption equilibrium): M → Me_ads − (Me_ads − M)·exp(−f·k·1 h), f the profile's
+ *   rewetting rate factor (Lewis form; stated simplification);
+ * - rain on an exposed product: rewetting toward the equilibrium at 99.5 % RH, counted as rain exposure;
+ *   that water comes from rain, not from the air;
+ * - paused (covered, fans off) and missing hours: no change.
+ * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
+ * dry: the supplemental-heat strategy of model.md §6.
+ */
+import { type HourlyConditions, HourMode } from './hourly-conditions.ts'
+import {
+  EMC_RH_CAP_PCT,
+  firstOrderRateConstant,
+  type ProductResponse,
+  stepMoistureRatio,
+} from './product-response.ts'
+import { HourStatus } from './thresholds.ts'
+
+export interface BatchOptions {
+  /** Index of the first hour. */
+  startIndex: number
+  /** Hours simulated at most (the maximum duration). */
+  maxHours: number
+  initialDb: number
+  targetDb: number
+  /** When the series is a typical year, wrap past its end to its start. */
+  wrap?: boolean
+  /** Record the moisture after every hour (tests, single-batch reports). */
+  recordTrace?: boolean
+}
+
+export interface BatchResult {
+  reached: boolean
+  /** Hours from start until the target was reached (elapsed, paused hours included); NaN when not reached. */
+  hoursToTarget: number
+  /** Hours simulated (to target, or all when not reached, or until the series ended). */
+  hoursSimulated: number
+  /** True when the series ended before the target or the maximum duration. */
+  ranOutOfData: boolean
+  finalDb: number
+  rewettingHours: number
+  rainExposureHours: number
+  missingHours: number
+  /** Hours in which the backup (heated) air was used. */
+  backupHours: number
+  /** Heat from the heater into the air [kWh per tonne fresh]. */
+  heaterKwhPerTonne: number
+  /** Heat from the solar collector into the air [kWh per tonne fresh]. */
+  solarKwhPerTonne: number
+  /** Water the air carried off [kg per kg dry matter] (positive) net of water the air gave back as rewetting. */
+  waterToAirDb: number
+  /** Water taken up from rain [kg per kg dry matter]. */
+  waterFromRainDb: number
+  /** Moisture [kg/kg db] after each hour, when recordTrace. */
+  trace?: Float64Array
+  /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
+  usedBackup?: Uint8Array
+}
+
+/**
+ * Simulate one batch. `primary` is the method's own hourly conditions; `backup`, when given, is used in
+ * every hour whose primary status is not usable (and not missing).
+ */
+export function simulateBatch(
+  primary: HourlyConditions,
+  product: ProductResponse,
+  options: BatchOptions,
+  backup?: HourlyConditions,
+): BatchResult {
+  const { startIndex, maxHours, initialDb, targetDb } = options
+  const n = primary.hours
+  if (!(startIndex >= 0 && startIndex < n)) {
+    throw new RangeError(`batch start index must be between 0 and ${n - 1}, got ${startIndex}`)
+  }
+  if (!(initialDb > targetDb)) {
+    throw new RangeError(
+      `initial moisture ${initialDb} kg/kg db must be above the target ${targetDb} kg/kg db`,
+    )
+  }
+  const wrap = options.wrap === true
+  const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
+  const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
+  const f = product.rewettingRateFactor
+  const ts = product.thompsonTimeScale
+  let m = initialDb
+  let rewettingHours = 0
+  let rainExposureHours = 0
+  let missingHours = 0
+  let backupHours = 0
+  let heater = 0
+  let solar = 0
+  let toAir = 0
+  let fromRain = 0
+  let hoursToTarget = Number.NaN
+  let simulated = 0
+  let ranOut = false
+  for (let h = 0; h < maxHours; h++) {
+    let i = startIndex + h
+    if (i >= n) {
+      if (!wrap) {
+        ranOut = true
+        break
+      }
+      i %= n
+    }
+    simulated++
+    let c = primary
+    if (
+      backup !== undefined &&
+      primary.status[i] !== HourStatus.usable &&
+      primary.mode[i] !== HourMode.missing
+    ) {
+      c = backup
+      backupHours++
+      if (usedBackup) usedBackup[h] = 1
+    }
+    const mode = c.mode[i]
+    if (mode === HourMode.missing) {
+      missingHours++
+    } else if (mode !== HourMode.paused) {
+      heater += c.heaterKwhPerTonne[i]
+      solar += c.solarKwhPerTonne[i]
+      if (mode === HourMode.rainExposed) {
+        rainExposureHours++
+        // rain-wetted surface: toward the equilibrium at the highest RH evaluated
+        const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
+        if (meWet > m) {
+          const next = meWet - (meWet - m) * Math.exp(-f * firstOrderRateConstant(c.rateK[i], c.rateN[i], ts))
+          fromRain += next - m
+          m = next
+        }
+      } else {
+        const meDes = c.emcDesorptionDb[i]
+        const meAds = c.emcAdsorptionDb[i]
+        if (m > meDes) {
+          let next: number
+          if (initialDb > meDes) {
+            const mr = (m - meDes) / (initialDb - meDes)
+            next = meDes + stepMoistureRatio(mr, c.rateK[i], c.rateN[i], 1, ts) * (initialDb - meDes)
+          } else {
+            next = meDes + (m - meDes) * Math.exp(-firstOrderRateConstant(c.rateK[i], c.rateN[i], ts))
+          }
+          let drop = m - next
+          const cap = c.capDbPerH[i]
+          if (drop > cap) drop = cap
+          if (drop > 0) {
+            m -= drop
+            toAir += drop
+          }
+        } else if (m < meAds) {
+          rewettingHours++
+          const k = firstOrderRateConstant(c.rateK[i], c.rateN[i], ts)
+          const next = meAds - (meAds - m) * Math.exp(-f * k)
+          toAir -= next - m
+          m = next
+        }
+      }
+    }
+    if (trace) trace[h] = m
+    if (m <= targetDb) {
+      hoursToTarget = h + 1
+      break
+    }
+  }
+  return {
+    reached: Number.isFinite(hoursToTarget),
+    hoursToTarget,
+    hoursSimulated: simulated,
+    ranOutOfData: ranOut,
+    finalDb: m,
+    rewettingHours,
+    rainExposureHours,
+    missingHours,
+    backupHours,
+    heaterKwhPerTonne: heater,
+    solarKwhPerTonne: solar,
+    waterToAirDb: toAir,
+    waterFromRainDb: fromRain,
+    trace,
+    usedBackup,
+  }
+}

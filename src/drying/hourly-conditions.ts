@@ -1,0 +1,404 @@
+/**
+ * @module drying/hourly-conditions
+ * For one weather series, drying method and product: the air at the product, the product's
+ * temperature, both views of drying potential (humidity-ratio deficit and wet-surface evaporation),
+ * the equilibrium moisture in both directions, the thin-layer step parameters, the heat added, and the
+ * usable-hour verdict with its reason, for every hour. Computed once per method and reused by every
+ * batch (start date) of an assessment. Columns, no allocation per hour.
+ *
+ * Air at the product, by method (model.md §3):
+ * - open air: ambient air; the product surface is warmed by absorbed sun,
+ *   ΔT = α·G / ((hc + hr)·A_s), hc = 2.8 + 3.0·u (Watmuff et al. 1977 via Duffie & Beckman, in
+ *   physics/evaporation.ts), hr = 4εσT³ with ε = 0.9 (assumption), A_s the surface per tray area; at
+ *   night an uncovered surface is cooled below the air by the stated sky-cooling threshold.
+ * - shade: ambient air, no sun, reduced wind.
+ * - solar cabinet: ambient air heated by the collector gain at constant humidity ratio
+ *   (Hottel–Whillier–Bliss with inlet = ambient, Erbs split and Liu–Jordan transposition, physics/).
+ * - heated: ambient air heated at constant humidity ratio to a set point or to the target RH.
+ * The RH at the product surface is the air's vapour pressure over saturation at the surface temperature.
+ */
+
+import { collectorUsefulGainWm2 } from '../physics/collector.ts'
+import {
+  aerodynamicResistanceFromWindFunctionSPerM,
+  CP_DRY_AIR_KJ_PER_KG_K,
+  evaporationKgPerM2HFromLatentFlux,
+  flatPlateHeatTransferCoefficientWm2K,
+  latentHeatVaporizationMjPerKg,
+  psychrometricConstantKpaPerC,
+  wetSurfaceLatentFluxWm2,
+  windFunctionPenman1948MmPerDayKpa,
+  windSpeedAt2mMs,
+} from '../physics/evaporation.ts'
+import { fillNightShortwaveRatioColumn, netLongwaveHourlyMjM2 } from '../physics/fao56-reference-et.ts'
+import { extraterrestrialRadiationForPeriodUtcMjM2 } from '../physics/fao56-solar.ts'
+import {
+  clearSkyRadiationFao56,
+  cosIncidenceAngle,
+  diffuseHorizontalErbsWm2,
+  tiltedIrradianceIsotropicWm2,
+} from '../physics/irradiance.ts'
+import { moistAirDensityKgPerM3, moistAirEnthalpyKjPerKg } from '../physics/moist-air.ts'
+import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from '../physics/saturation.ts'
+import { sunPositionColumns } from '../physics/sun.ts'
+import type { HourlySeries } from '../weather/series.ts'
+import { adiabaticHumidityRatioAtRh, heatedDryBulbForTargetRhC } from './air-processes.ts'
+import type { DryingMethod } from './method.ts'
+import { EMC_RH_CAP_PCT, type ProductResponse } from './product-response.ts'
+import { type DryingThresholds, HourStatus } from './thresholds.ts'
+
+/** Emissivity of a moist product surface for the radiative coefficient hr (assumption, 0.9; from memory). */
+export const PRODUCT_EMISSIVITY = 0.9
+/** Stefan–Boltzmann constant [W m⁻² K⁻⁴] (CODATA 2018). */
+const STEFAN_BOLTZMANN_W = 5.670374419e-8
+/** Wind [m/s] assumed when the file has none for an hour (calm-ish air; assumption, no source). */
+export const DEFAULT_WIND_MS = 1
+
+/** What an hour does to the product in a batch. */
+export const HourMode = { active: 0, paused: 1, rainExposed: 2, missing: 3 } as const
+
+export interface HourlyConditionsOptions {
+  /** Target moisture [kg/kg db] for the usable-hour test. */
+  targetDb: number
+  /** Initial moisture [% wb], which sets the dry matter per kg fresh product for the per-tonne caps. */
+  initialWbPct: number
+  /** Loading [kg fresh / m²] for exposed methods (open air, shade). */
+  loadingKgPerM2: number
+  thresholds: DryingThresholds
+  /** Highest product temperature for quality [°C], or null. */
+  maxProductTempC: number | null
+}
+
+export interface HourlyConditions {
+  hours: number
+  method: DryingMethod
+  /** Air temperature at the product [°C] (after collector or heater). */
+  airC: Float64Array
+  /** RH of that air [%]. */
+  airRhPct: Float64Array
+  /** Product (surface) temperature [°C]. */
+  productC: Float64Array
+  /** RH at the product surface [%]: ambient vapour pressure over saturation at the product temperature. */
+  surfaceRhPct: Float64Array
+  /** Ambient (and product-air) humidity ratio [kg/kg]; heating does not change it. */
+  humidityRatio: Float64Array
+  /** Deficit to free-water saturation along the constant-enthalpy line [g/kg]. */
+  deficitToSaturationGPerKg: Float64Array
+  /** Deficit to the product's equilibrium RH at its target moisture [g/kg]. */
+  deficitToTargetGPerKg: Float64Array
+  /** Wet-surface (Penman) evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN for forced-air methods. */
+  evaporationKgPerM2H: Float64Array
+  /** Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit. */
+  capDbPerH: Float64Array
+  emcDesorptionDb: Float64Array
+  emcAdsorptionDb: Float64Array
+  rateK: Float64Array
+  rateN: Float64Array
+  /** Heat from the heater into the air [kWh per tonne fresh product in this hour]. */
+  heaterKwhPerTonne: Float64Array
+  /** Heat from the solar collector into the air [kWh per tonne fresh product in this hour]. */
+  solarKwhPerTonne: Float64Array
+  /** Dry-air flow per tonne of fresh product [kg/s]; 0 for exposed methods. */
+  airFlowKgPerSPerTonne: number
+  /** {@link HourMode} per hour. */
+  mode: Uint8Array
+  /** {@link HourStatus} per hour (0 = usable). */
+  status: Uint8Array
+  /** 1 at night (sun below the threshold altitude). */
+  night: Uint8Array
+  /** Hours whose irradiance or wind was missing and was taken as 0 W/m² / {@link DEFAULT_WIND_MS}. */
+  assumedIrradianceHours: number
+  assumedWindHours: number
+  /** True when the series had no rain column values at all. */
+  noRainData: boolean
+}
+
+function alloc(n: number): Float64Array {
+  return new Float64Array(n)
+}
+
+/** Default collector azimuth: facing the equator (180° in the north, 0° in the south). */
+function equatorFacingAzimuthDeg(latDeg: number): number {
+  return latDeg >= 0 ? 180 : 0
+}
+
+/** Compute every hour's conditions. Throws RangeError when the method needs coordinates the file lacks. */
+export function computeHourlyConditions(
+  series: HourlySeries,
+  method: DryingMethod,
+  product: ProductResponse,
+  options: HourlyConditionsOptions,
+): HourlyConditions {
+  const n = series.hours
+  const { thresholds, targetDb } = options
+  const lat = series.site.latitudeDeg
+  const lon = series.site.longitudeDeg
+  const elevation = series.site.elevationM ?? 0
+  const hasCoords = lat !== null && lon !== null
+  if (method.kind === 'solar-cabinet' && !hasCoords) {
+    throw new RangeError('method solar-cabinet needs the site latitude and longitude (the file has none)')
+  }
+  const altitude = alloc(n)
+  const azimuth = alloc(n)
+  if (hasCoords) sunPositionColumns(series.startUtcMs, lat, lon, altitude, azimuth)
+  // Rs/Rso for the net longwave term (FAO-56 eq 39), with the evening ratio carried through the night.
+  const rsOverRso = alloc(n)
+  const raWm2 = alloc(n)
+  if (hasCoords) {
+    const rso = alloc(n)
+    const rs = alloc(n)
+    for (let i = 0; i < n; i++) {
+      const ra = extraterrestrialRadiationForPeriodUtcMjM2(series.startUtcMs[i], lat, lon)
+      raWm2[i] = (ra * 1e6) / 3600
+      rso[i] = clearSkyRadiationFao56(ra, elevation)
+      const g = series.ghiWm2[i]
+      rs[i] = Number.isFinite(g) ? (g * 3600) / 1e6 : Number.NaN
+    }
+    fillNightShortwaveRatioColumn(rs, rso, altitude, rsOverRso)
+  } else {
+    rsOverRso.fill(0.8)
+  }
+
+  const airC = alloc(n)
+  const airRhPct = alloc(n)
+  const productC = alloc(n)
+  const surfaceRhPct = alloc(n)
+  const humidityRatio = alloc(n)
+  const deficitToSaturationGPerKg = alloc(n)
+  const deficitToTargetGPerKg = alloc(n)
+  const evaporationKgPerM2H = alloc(n)
+  const capDbPerH = alloc(n)
+  const emcDesorptionDb = alloc(n)
+  const emcAdsorptionDb = alloc(n)
+  const rateK = alloc(n)
+  const rateN = alloc(n)
+  const heaterKwhPerTonne = alloc(n)
+  const solarKwhPerTonne = alloc(n)
+  const mode = new Uint8Array(n)
+  const status = new Uint8Array(n)
+  const night = new Uint8Array(n)
+  const step = new Float64Array(2)
+
+  const dmPerKgFresh = 1 - options.initialWbPct / 100
+  const exposed = method.kind === 'open-air' || method.kind === 'shade'
+  let airFlowKgPerSPerTonne = 0
+  if (method.kind === 'solar-cabinet')
+    airFlowKgPerSPerTonne = method.collectorAreaM2PerTonne * method.airFlowKgPerSPerM2
+  if (method.kind === 'heated') airFlowKgPerSPerTonne = method.airFlowKgPerSPerTonne
+  const forcedCapFactor = (airFlowKgPerSPerTonne * 3600) / (1000 * dmPerKgFresh) // × deficit [kg/kg]
+  const exposedCapFactor = 1 / (options.loadingKgPerM2 * dmPerKgFresh) // × E [kg/m²/h]
+  const maxT = options.maxProductTempC
+  const collectorAzimuth =
+    method.kind === 'solar-cabinet' ? (method.azimuthDeg ?? equatorFacingAzimuthDeg(lat ?? 0)) : 0
+  const collectorParams =
+    method.kind === 'solar-cabinet'
+      ? { interceptFrTauAlpha: method.frTauAlpha, lossSlopeFrUlWm2K: method.frUlWm2K }
+      : null
+  let assumedIrradianceHours = 0
+  let assumedWindHours = 0
+  let anyRain = false
+
+  for (let i = 0; i < n; i++) {
+    const t = series.dryBulbC[i]
+    const rh = series.relativeHumidityPct[i]
+    const p = series.pressureKpa[i]
+    const isNight = hasCoords ? altitude[i] < thresholds.nightSunAltitudeDeg : !(series.ghiWm2[i] > 0)
+    night[i] = isNight ? 1 : 0
+    if (!(t >= -60 && t <= 70) || !(rh > 0 && rh <= 100) || !(p >= 30 && p <= 110)) {
+      mode[i] = HourMode.missing
+      status[i] = HourStatus.missingData
+      airC[i] = airRhPct[i] = productC[i] = surfaceRhPct[i] = humidityRatio[i] = Number.NaN
+      deficitToSaturationGPerKg[i] = deficitToTargetGPerKg[i] = evaporationKgPerM2H[i] = Number.NaN
+      emcDesorptionDb[i] = emcAdsorptionDb[i] = Number.NaN
+      continue
+    }
+    let ghi = series.ghiWm2[i]
+    if (!Number.isFinite(ghi)) {
+      if (!isNight) assumedIrradianceHours++
+      ghi = 0
+    } else if (ghi < 0) ghi = 0
+    let wind = series.windMs[i]
+    if (!(wind >= 0)) {
+      assumedWindHours++
+      wind = DEFAULT_WIND_MS
+    }
+    const rain = series.rainMm[i]
+    if (Number.isFinite(rain)) anyRain = true
+    const raining = rain >= thresholds.rainMm
+    const u2 = windSpeedAt2mMs(wind, Math.max(series.site.windHeightM, 0.5))
+    const pws = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)) * 1e-3
+    const pw = (rh / 100) * pws
+    const w = (0.621945 * pw) / (p - pw)
+    humidityRatio[i] = w
+
+    let tAir = t
+    let tProduct = t
+    let hourMode: number = HourMode.active
+    let pausedByNight = false
+    let coveredForRain = false
+    let uncoveredNight = false
+    let evaporation = Number.NaN
+    switch (method.kind) {
+      case 'open-air': {
+        if (method.coveredAtNight && isNight) {
+          hourMode = HourMode.paused
+          pausedByNight = true
+        } else if (raining && method.coveredInRain) {
+          hourMode = HourMode.paused
+          coveredForRain = true
+        } else if (raining) hourMode = HourMode.rainExposed
+        const uProduct = u2 * (Math.log(67.8 * method.productHeightM - 5.42) / 4.87) // FAO-56 eq 47 inverted
+        const tK = t + KELVIN_OFFSET
+        const hr = 4 * PRODUCT_EMISSIVITY * STEFAN_BOLTZMANN_W * tK * tK * tK
+        const absorbed = method.absorptivity * ghi
+        if (isNight) {
+          uncoveredNight = !method.coveredAtNight
+          tProduct = t - thresholds.nightSurfaceCoolingK
+        } else {
+          tProduct =
+            t +
+            absorbed / ((flatPlateHeatTransferCoefficientWm2K(uProduct) + hr) * method.surfaceAreaPerTrayArea)
+        }
+        const rnl = (netLongwaveHourlyMjM2(t, pw, rsOverRso[i]) * 1e6) / 3600
+        evaporation = wetSurfaceEvaporation(absorbed - rnl, t, pw, p, w, u2)
+        break
+      }
+      case 'shade': {
+        const u = Math.max(method.minimumAirSpeedMs, method.windFraction * u2)
+        evaporation = wetSurfaceEvaporation(0, t, pw, p, w, u)
+        break
+      }
+      case 'solar-cabinet': {
+        let gTilt = 0
+        if (!isNight && ghi > 0) {
+          const diffuse = diffuseHorizontalErbsWm2(ghi, raWm2[i])
+          const zenith = 90 - altitude[i]
+          const cosZ = Math.cos((zenith * Math.PI) / 180)
+          const cosInc = cosIncidenceAngle(zenith, azimuth[i], method.tiltDeg, collectorAzimuth)
+          gTilt = tiltedIrradianceIsotropicWm2(
+            ghi - diffuse,
+            diffuse,
+            cosZ,
+            cosInc,
+            method.tiltDeg,
+            method.groundAlbedo,
+          )
+        }
+        const fansOn = !method.fansOnlyInSun || gTilt >= thresholds.collectorOnWm2
+        if (!fansOn) {
+          hourMode = HourMode.paused
+          pausedByNight = true
+        }
+        const gain = collectorParams && gTilt > 0 ? collectorUsefulGainWm2(collectorParams, gTilt, t, t) : 0
+        if (fansOn && gain > 0) {
+          const cp = (CP_DRY_AIR_KJ_PER_KG_K + 1.86 * w) * 1000
+          tAir = t + gain / (method.airFlowKgPerSPerM2 * cp)
+          solarKwhPerTonne[i] = (gain * method.collectorAreaM2PerTonne) / 1000
+        }
+        tProduct = tAir
+        break
+      }
+      case 'heated': {
+        let tHeat =
+          method.setPointC !== undefined
+            ? Math.max(t, method.setPointC)
+            : heatedDryBulbForTargetRhC(t, w, p, method.targetRhPct)
+        if (maxT !== null && tHeat > maxT) tHeat = Math.max(t, maxT)
+        if (tHeat > 100) tHeat = 100
+        tAir = tHeat
+        tProduct = tHeat
+        heaterKwhPerTonne[i] =
+          airFlowKgPerSPerTonne * (moistAirEnthalpyKjPerKg(tHeat, w) - moistAirEnthalpyKjPerKg(t, w)) // kW → kWh in 1 h
+        break
+      }
+    }
+    mode[i] = hourMode
+    airC[i] = tAir
+    productC[i] = tProduct
+    const pwsAir = Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET)) * 1e-3
+    airRhPct[i] = (100 * pw) / pwsAir
+    const pwsSurface = Math.exp(lnSaturationPressureLiquidPa(tProduct + KELVIN_OFFSET)) * 1e-3
+    let rhSurface = (100 * pw) / pwsSurface
+    if (rhSurface > 100) rhSurface = 100
+    surfaceRhPct[i] = rhSurface
+    const rhForEmc = rhSurface > EMC_RH_CAP_PCT ? EMC_RH_CAP_PCT : rhSurface
+    emcDesorptionDb[i] = product.emcDesorptionDb(tProduct, rhForEmc)
+    emcAdsorptionDb[i] = product.emcAdsorptionDb(tProduct, rhForEmc)
+    product.stepParameters(tProduct, rhForEmc, step)
+    rateK[i] = step[0]
+    rateN[i] = step[1]
+    // Deficits are taken for air at the product temperature (it is what touches the product).
+    const dSat = rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1) - w
+    deficitToSaturationGPerKg[i] = 1000 * dSat
+    const erhTarget = product.erhPct(tProduct, targetDb)
+    const dTarget =
+      rhSurface >= erhTarget ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, erhTarget / 100) - w
+    deficitToTargetGPerKg[i] = 1000 * dTarget
+    evaporationKgPerM2H[i] = evaporation
+    capDbPerH[i] = exposed ? Math.max(0, evaporation) * exposedCapFactor : dSat * forcedCapFactor
+
+    // Usable-hour test, reasons in the order of HourStatus.
+    let s: number = HourStatus.usable
+    if (pausedByNight) s = HourStatus.nightWithoutDrying
+    else if (coveredForRain || hourMode === HourMode.rainExposed) s = HourStatus.rain
+    else if (tProduct < thresholds.minProductTempC) s = HourStatus.tooCold
+    else if (maxT !== null && tProduct > maxT) s = HourStatus.aboveProductTempLimit
+    else if (uncoveredNight && rhSurface >= 100) s = HourStatus.dewRisk
+    else if (rhSurface >= erhTarget || 1000 * dTarget < thresholds.minDeficitGPerKg) s = HourStatus.tooHumid
+    status[i] = s
+  }
+  return {
+    hours: n,
+    method,
+    airC,
+    airRhPct,
+    productC,
+    surfaceRhPct,
+    humidityRatio,
+    deficitToSaturationGPerKg,
+    deficitToTargetGPerKg,
+    evaporationKgPerM2H,
+    capDbPerH,
+    emcDesorptionDb,
+    emcAdsorptionDb,
+    rateK,
+    rateN,
+    heaterKwhPerTonne,
+    solarKwhPerTonne,
+    airFlowKgPerSPerTonne,
+    mode,
+    status,
+    night,
+    assumedIrradianceHours,
+    assumedWindHours,
+    noRainData: !anyRain,
+  }
+}
+
+/**
+ * Penman wet-surface evaporation [kg m⁻² h⁻¹] with available energy `rnWm2` and the Penman (1948) wind
+ * function at wind `uMs` (McMahon et al. 2013, Supplement S4.11) converted to an aerodynamic resistance
+ * (S11.23), via physics/evaporation.ts. Negative: condensation.
+ */
+export function wetSurfaceEvaporation(
+  rnWm2: number,
+  airC: number,
+  vaporPressureKpa: number,
+  pressureKpa: number,
+  w: number,
+  uMs: number,
+): number {
+  const lambda = latentHeatVaporizationMjPerKg(airC)
+  const cp = (CP_DRY_AIR_KJ_PER_KG_K + 1.86 * w) / (1 + w)
+  const gamma = psychrometricConstantKpaPerC(pressureKpa, lambda, cp / 1000)
+  const density = moistAirDensityKgPerM3(airC, w, pressureKpa)
+  const ra = aerodynamicResistanceFromWindFunctionSPerM(
+    windFunctionPenman1948MmPerDayKpa(uMs),
+    density,
+    cp,
+    gamma,
+    lambda,
+  )
+  const latent = wetSurfaceLatentFluxWm2(rnWm2, 0, airC, vaporPressureKpa, pressureKpa, ra)
+  return evaporationKgPerM2HFromLatentFlux(latent, airC)
+}
