@@ -115,6 +115,25 @@ export function aerodynamicResistanceFromWindFunctionSPerM(
 }
 
 /**
+ * Aerodynamic resistance [s/m] equivalent to a Penman wind function f(u) [mm d⁻¹ kPa⁻¹] at air temperature
+ * `airTempC`, with the FAO-56 forms: γ λ = cp P/ε (eq 8) and ρa = P/(1.01 (T + 273) R), R = 0.287 kJ kg⁻¹ K⁻¹
+ * (FAO-56 Annex 3, from memory for the equation number), so cp and P cancel: ra = ε / (1.01 (T + 273) R f).
+ * Example 18 weather (16.9 °C, u2 2.078 m/s): Penman 1948 → 116.3 s/m, Penman 1956 → 152.9 s/m.
+ */
+export function aerodynamicResistanceFromPenmanWindSPerM(
+  windFunctionMmPerDayKpa: number,
+  airTempC: number,
+): number {
+  if (!(windFunctionMmPerDayKpa > 0)) {
+    throw new RangeError(`wind function must be > 0 mm/d/kPa, got ${windFunctionMmPerDayKpa}`)
+  }
+  if (!(airTempC >= -50 && airTempC <= 100)) {
+    throw new RangeError(`air temperature must be between -50 and 100 °C, got ${airTempC}`)
+  }
+  return (EPSILON_FAO56 * S_PER_DAY) / (1.01 * (airTempC + 273) * 0.287 * windFunctionMmPerDayKpa)
+}
+
+/**
  * Convective heat-transfer coefficient of a flat plate in wind [W m⁻² K⁻¹], hc = 2.8 + 3.0 u (Watmuff,
  * Charters & Proctor 1977, as quoted in Duffie & Beckman 2013 §3.15; from memory), u the wind at the
  * surface [m/s]. With the Lewis analogy (Le ≈ 1 for water vapour in air) ra = ρa cp / hc is the resistance
