@@ -1,0 +1,86 @@
+/**
+ * @module product/profile
+ * The `ProductProfile` type: what the drying engine needs to know about a product, with the source and
+ * a confidence flag for every number. Catalogue profiles live in `catalogue-*.ts`; user profiles are
+ * validated by `profile-schema.ts`.
+ */
+import type { IsothermEquation } from './isotherm-models.ts'
+import type { KineticsEquation } from './kinetics-models.ts'
+
+/**
+ * How a number was obtained:
+ * - `published`: read in the cited paper, standard or extension publication (or code citing it, said so);
+ * - `fitted`: fitted by dryhours to published data named in the source;
+ * - `memory`: recalled, not verified in a document: treat as approximate;
+ * - `user`: given by the user (own weighings or own values).
+ */
+export type Confidence = 'published' | 'fitted' | 'memory' | 'user'
+
+export interface Sourced<T> {
+  value: T
+  source: string
+  confidence: Confidence
+}
+
+export interface IsothermSpec {
+  equation: IsothermEquation
+  source: string
+  confidence: Confidence
+  /** Range of the data behind the constants: the model extrapolates outside it. */
+  validTempC: [number, number]
+  validRhPct: [number, number]
+}
+
+export type Shape = 'slab' | 'cylinder' | 'sphere'
+
+export interface KineticsSpec {
+  equation: KineticsEquation
+  /** Thickness (slab) or diameter (cylinder, sphere) [mm] at which `equation` was measured or fitted. */
+  referenceThicknessMm: number
+  shape: Shape
+  source: string
+  confidence: Confidence
+  /**
+   * Rewetting rate constant as a fraction of the drying rate constant at the same conditions.
+   * Always an assumption unless a source is given (adsorption is slower than desorption).
+   */
+  rewettingRateFactor: Sourced<number>
+  /**
+   * Air-velocity effect: drying time scales with (vRef/v)^exponent. Absent: velocity is ignored
+   * (Madamba, Driscoll & Buckle 1996 found air flow not significant for garlic slices above 0.5 m/s).
+   */
+  airVelocity?: { referenceMs: number; exponent: number; source: string; confidence: Confidence }
+}
+
+export type ProductCategory = 'grain' | 'oilseed' | 'fruit' | 'vegetable' | 'herb' | 'fish' | 'beverage-crop'
+
+export interface ProductProfile {
+  /** kebab-case id, e.g. `shelled-corn`. */
+  id: string
+  name: string
+  category: ProductCategory
+  /** Id of the catalogue profile this one was derived from (a variant), if any. */
+  variantOf?: string
+  initialMoistureWbPct: Sourced<number>
+  targetMoistureWbPct: Sourced<number>
+  /** Water activity (0–1) at or below which the dried product is considered safe. */
+  waterActivityTarget: Sourced<number>
+  /** Highest product (or drying-air) temperature for quality [°C], where one applies; null otherwise. */
+  maxProductTempC: Sourced<number> | null
+  isotherm: { desorption: IsothermSpec; adsorption?: IsothermSpec }
+  kinetics: KineticsSpec
+  /** Default thickness (slab) or diameter (cylinder/sphere) [mm]. */
+  defaultThicknessMm: Sourced<number>
+  /** Default loading [kg fresh product per m² of tray or floor]. */
+  defaultLoadingKgPerM2: Sourced<number>
+  /** Food-safety and quality cautions the report must show. */
+  cautions: string[]
+  notes?: string
+}
+
+/** The isotherm for a direction: desorption (drying) or adsorption (rewetting, falls back to desorption). */
+export function isothermFor(profile: ProductProfile, direction: 'desorption' | 'adsorption'): IsothermSpec {
+  return direction === 'adsorption'
+    ? (profile.isotherm.adsorption ?? profile.isotherm.desorption)
+    : profile.isotherm.desorption
+}
