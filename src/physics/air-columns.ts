@@ -2,15 +2,21 @@
  * @module physics/air-columns
  * Column form of the moist-air state for hourly series: fills preallocated Float64Arrays without
  * allocating per hour. Same equations as {@link airState} (ASHRAE HOF 2017 ch. 1), RH over liquid water.
- * Missing input (NaN) or input outside the valid domain gives NaN in every output for that hour.
+ * Missing input (NaN) or input outside the valid domain (the ranges of {@link airState}, and a dry bulb
+ * at or above the boiling point at that pressure) gives NaN in every output for that hour.
+ *
+ * Speed: ln pws at the dry bulb is computed once and reused for the dew point (ln pw = ln pws + ln φ)
+ * and, through Ws at the dry bulb, for the wet-bulb start value; see bench/sections/moist-air.ts.
  */
 import {
   DRY_BULB_MAX_C,
   DRY_BULB_MIN_C,
-  dewPointFromVaporPressureC,
+  GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K,
   MOLAR_MASS_RATIO_WATER_AIR,
   PRESSURE_MAX_KPA,
   PRESSURE_MIN_KPA,
+  saturationTemperatureFromLnPressureC,
+  VAPOR_PRESSURE_MIN_KPA,
   wetBulbWithDewPointC,
 } from './moist-air.ts'
 import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from './saturation.ts'
@@ -64,20 +70,37 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
       if (rhoOut) rhoOut[i] = Number.NaN
       continue
     }
-    const pws = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)) / 1000
+    const lnPwsPa = lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)
+    const pws = Math.exp(lnPwsPa) / 1000
     const pw = (rh / 100) * pws
+    if (!(pws < p) || !(pw >= VAPOR_PRESSURE_MIN_KPA)) {
+      invalid++
+      if (wOut) wOut[i] = Number.NaN
+      if (pwOut) pwOut[i] = Number.NaN
+      if (tdOut) tdOut[i] = Number.NaN
+      if (twbOut) twbOut[i] = Number.NaN
+      if (hOut) hOut[i] = Number.NaN
+      if (rhoOut) rhoOut[i] = Number.NaN
+      continue
+    }
     const w = (MOLAR_MASS_RATIO_WATER_AIR * pw) / (p - pw)
     if (wOut) wOut[i] = w
     if (pwOut) pwOut[i] = pw
-    let td = Number.NaN
     if (tdOut || twbOut) {
-      td = dewPointFromVaporPressureC(pw)
+      // Dew point over liquid water from ln pw = ln pws + ln φ (one logarithm instead of two).
+      let td = saturationTemperatureFromLnPressureC(lnPwsPa + Math.log(rh / 100), false)
       if (td > t) td = t
       if (tdOut) tdOut[i] = td
+      if (twbOut) {
+        const wst = (MOLAR_MASS_RATIO_WATER_AIR * pws) / (p - pws)
+        twbOut[i] = wetBulbWithDewPointC(t, w, p, td, wst)
+      }
     }
-    if (twbOut) twbOut[i] = wetBulbWithDewPointC(t, w, p, td)
     if (hOut) hOut[i] = 1.006 * t + w * (2501 + 1.86 * t)
-    if (rhoOut) rhoOut[i] = ((1 + w) * p) / (0.287042 * (t + KELVIN_OFFSET) * (1 + 1.607858 * w))
+    if (rhoOut) {
+      rhoOut[i] =
+        ((1 + w) * p) / (GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K * (t + KELVIN_OFFSET) * (1 + 1.607858 * w))
+    }
   }
   return invalid
 }

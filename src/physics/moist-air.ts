@@ -6,6 +6,8 @@
  * editions).
  */
 import {
+  d2LnSaturationPressureIceDT2,
+  d2LnSaturationPressureLiquidDT2,
   dLnSaturationPressureIceDT,
   dLnSaturationPressureLiquidDT,
   KELVIN_OFFSET,
@@ -30,8 +32,16 @@ export const PRESSURE_MAX_KPA = 110
 /** Accepted dry-bulb range of the state functions [°C]; the wet-bulb relations are not valid above 100 °C. */
 export const DRY_BULB_MIN_C = -60
 export const DRY_BULB_MAX_C = 100
-/** Convergence tolerance of the temperature solvers [°C]; the step at which iteration stops. */
+/**
+ * Accuracy of the temperature solvers (dew/frost point, wet bulb) [°C]. They are Halley iterations
+ * (cubic convergence) that stop once a step is below {@link SOLVER_STOP_STEP_C}; the error left after
+ * such a step is of order 1e-4·step³ (measured below 1e-7 °C over the whole domain in
+ * test/physics/solver-accuracy.test.ts against a 1e-12 °C bisection). Bisection fallback steps stop
+ * when the bracket is narrower than this value.
+ */
 export const SOLVER_TOLERANCE_C = 1e-5
+/** Halley step [°C] below which the temperature solvers stop (see {@link SOLVER_TOLERANCE_C}). */
+export const SOLVER_STOP_STEP_C = 0.02
 /** Iteration cap of the temperature solvers. */
 export const SOLVER_MAX_ITERATIONS = 60
 
@@ -117,36 +127,46 @@ export function moistAirDensityKgPerM3(
   )
 }
 
+/** ln(610.94 Pa): the Magnus formula's saturation pressure at 0 °C (Alduchov & Eskridge 1996). */
+const LN_MAGNUS_P0_PA = Math.log(610.94)
+
 /**
  * Temperature [°C] at which the saturation pressure over liquid water (ice = false) or over ice
- * (ice = true) equals `vaporPressureKpa`: the dew point, or the frost point. Newton's method on ln pws
- * (ASHRAE HOF 2017 ch. 1 eq 36 inverted), started from the Magnus approximation and kept inside the
- * bracket [−100, 200] °C; stops when the step is below {@link SOLVER_TOLERANCE_C}.
+ * (ice = true) equals exp(`lnVaporPressurePa`) Pa: the dew point, or the frost point (ASHRAE HOF 2017
+ * ch. 1 eq 36 inverted). Halley's method on ln pws, started from the Magnus approximation (Alduchov &
+ * Eskridge 1996 coefficients), kept inside the bracket [−100, 200] °C; see {@link SOLVER_TOLERANCE_C}.
  */
-function saturationTemperatureC(vaporPressureKpa: number, ice: boolean): number {
-  const lnTarget = Math.log(vaporPressureKpa * 1000)
-  // Magnus (Alduchov & Eskridge 1996 coefficients) as starting value only.
-  const g = Math.log(vaporPressureKpa / 0.61094)
+export function saturationTemperatureFromLnPressureC(lnVaporPressurePa: number, ice: boolean): number {
+  const g = lnVaporPressurePa - LN_MAGNUS_P0_PA
   let tC = ice ? (272.62 * g) / (22.46 - g) : (243.04 * g) / (17.625 - g)
   if (!(tC > SATURATION_MIN_C && tC < SATURATION_MAX_C)) tC = 0
   for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
     const tK = tC + KELVIN_OFFSET
-    const f = (ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)) - lnTarget
-    const d = ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK)
-    let next = tC - f / d
+    const f = (ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)) - lnVaporPressurePa
+    const d1 = ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK)
+    const d2 = ice ? d2LnSaturationPressureIceDT2(tK) : d2LnSaturationPressureLiquidDT2(tK)
+    const step = (2 * f * d1) / (2 * d1 * d1 - f * d2)
+    let next = tC - step
     if (next < SATURATION_MIN_C) next = (tC + SATURATION_MIN_C) / 2
     else if (next > SATURATION_MAX_C) next = (tC + SATURATION_MAX_C) / 2
-    if (Math.abs(next - tC) < SOLVER_TOLERANCE_C) return next
+    else if (Math.abs(step) < SOLVER_STOP_STEP_C) return next
     tC = next
   }
-  throw new RangeError(`saturation temperature did not converge for vapour pressure ${vaporPressureKpa} kPa`)
+  throw new RangeError(
+    `saturation temperature did not converge for ln(vapour pressure/Pa) ${lnVaporPressurePa}`,
+  )
 }
 
+/** Lowest vapour pressure the dew/frost point solvers accept [kPa]: saturation over ice at −100 °C (eq 5). */
+export const VAPOR_PRESSURE_MIN_KPA =
+  Math.exp(lnSaturationPressureIcePa(SATURATION_MIN_C + KELVIN_OFFSET)) / 1000
+/** Highest vapour pressure the dew/frost point solvers accept [kPa]. */
+export const VAPOR_PRESSURE_MAX_KPA = 1000
+
 function checkVaporPressure(vaporPressureKpa: number): void {
-  const lowKpa = Math.exp(lnSaturationPressureIcePa(SATURATION_MIN_C + KELVIN_OFFSET)) / 1000
-  if (!(vaporPressureKpa >= lowKpa && vaporPressureKpa < 1000)) {
+  if (!(vaporPressureKpa >= VAPOR_PRESSURE_MIN_KPA && vaporPressureKpa < VAPOR_PRESSURE_MAX_KPA)) {
     throw new RangeError(
-      `vapour pressure must be between ${lowKpa.toExponential(3)} and 1000 kPa, got ${vaporPressureKpa}`,
+      `vapour pressure must be between ${VAPOR_PRESSURE_MIN_KPA.toExponential(3)} and ${VAPOR_PRESSURE_MAX_KPA} kPa, got ${vaporPressureKpa}`,
     )
   }
 }
@@ -157,7 +177,7 @@ function checkVaporPressure(vaporPressureKpa: number): void {
  */
 export function dewPointFromVaporPressureC(vaporPressureKpa: number): number {
   checkVaporPressure(vaporPressureKpa)
-  return saturationTemperatureC(vaporPressureKpa, false)
+  return saturationTemperatureFromLnPressureC(Math.log(vaporPressureKpa * 1000), false)
 }
 
 /**
@@ -166,8 +186,9 @@ export function dewPointFromVaporPressureC(vaporPressureKpa: number): number {
  */
 export function frostPointFromVaporPressureC(vaporPressureKpa: number): number {
   checkVaporPressure(vaporPressureKpa)
-  const ice = saturationTemperatureC(vaporPressureKpa, true)
-  return ice < TRIPLE_POINT_C ? ice : saturationTemperatureC(vaporPressureKpa, false)
+  const lnPa = Math.log(vaporPressureKpa * 1000)
+  const ice = saturationTemperatureFromLnPressureC(lnPa, true)
+  return ice < TRIPLE_POINT_C ? ice : saturationTemperatureFromLnPressureC(lnPa, false)
 }
 
 /**
@@ -177,10 +198,6 @@ export function frostPointFromVaporPressureC(vaporPressureKpa: number): number {
  */
 export function humidityRatioFromWetBulb(dryBulbC: number, wetBulbC: number, pressureKpa: number): number {
   const wsStar = saturationHumidityRatio(wetBulbC, pressureKpa)
-  return wetBulbBalance(dryBulbC, wetBulbC, wsStar)
-}
-
-function wetBulbBalance(dryBulbC: number, wetBulbC: number, wsStar: number): number {
   if (wetBulbC >= 0) {
     return (
       ((2501 - 2.326 * wetBulbC) * wsStar - 1.006 * (dryBulbC - wetBulbC)) /
@@ -193,72 +210,94 @@ function wetBulbBalance(dryBulbC: number, wetBulbC: number, wsStar: number): num
   )
 }
 
-/** Balance W(t*) and its derivative dW/dt* for the solver; same branch rule as humidityRatioFromWetBulb. */
-function wetBulbBalanceWithSlope(
-  dryBulbC: number,
-  wetBulbC: number,
-  pressureKpa: number,
-  out: Float64Array,
-): void {
-  const tK = wetBulbC + KELVIN_OFFSET
-  const ice = wetBulbC < TRIPLE_POINT_C
-  const lnP = ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)
-  const dLnP = ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK)
-  const pws = Math.exp(lnP) / 1000
-  const denomP = pressureKpa - pws
-  const ws = (MOLAR_MASS_RATIO_WATER_AIR * pws) / denomP
-  // dWs/dT = 0.621945 p pws' / (p − pws)², pws' = pws · dln pws/dT
-  const dWs = (MOLAR_MASS_RATIO_WATER_AIR * pressureKpa * pws * dLnP) / (denomP * denomP)
-  let a: number
-  let da: number
-  let b: number
-  let db: number
-  if (wetBulbC >= 0) {
-    a = 2501 - 2.326 * wetBulbC
-    da = -2.326
-    b = 2501 + 1.86 * dryBulbC - 4.186 * wetBulbC
-    db = -4.186
-  } else {
-    a = 2830 - 0.24 * wetBulbC
-    da = -0.24
-    b = 2830 + 1.86 * dryBulbC - 2.1 * wetBulbC
-    db = -2.1
-  }
-  const num = a * ws - 1.006 * (dryBulbC - wetBulbC)
-  const dNum = da * ws + a * dWs + 1.006
-  out[0] = num / b
-  out[1] = (dNum * b - num * db) / (b * b)
-}
+/** Saturation pressure over ice at 0 °C [kPa] (eq 5): Ws* at t* = 0, where eq 33 meets eq 35. */
+const SATURATION_PRESSURE_AT_ZERO_KPA = Math.exp(lnSaturationPressureIcePa(KELVIN_OFFSET)) / 1000
 
-const scratch = new Float64Array(2)
-
-/** Safeguarded Newton (bisection fallback) for W(t*) = target on [lo, hi]; W(t*) increases with t*. */
-function solveWetBulbOnBranch(
+/**
+ * Root of the psychrometer balance W(t*) = `targetW` on one branch, t* in [lo, hi]: eq 33 (wet wick,
+ * liquid = true) or eq 35 (iced wick). Halley's method with the analytic first and second derivatives,
+ * started at `start`, falling back to bisection whenever a step leaves the bracket; W(t*) increases
+ * with t*, so the sign of W(t*) − targetW keeps the bracket. Returns hi if W(hi) is still below the
+ * target (no root at or below the dry bulb), lo if W(lo) is above it.
+ */
+function solveWetBulbBranch(
   dryBulbC: number,
   targetW: number,
   pressureKpa: number,
+  liquid: boolean,
   lo: number,
   hi: number,
   start: number,
 ): number {
-  let t = Math.min(Math.max(start, lo), hi)
+  const a0 = liquid ? 2501 : 2830 // eq 33 / eq 35 numerator constant [kJ/kg]
+  const ka = liquid ? 2.326 : 0.24
+  const b0 = (liquid ? 2501 : 2830) + 1.86 * dryBulbC
+  const kb = liquid ? 4.186 : 2.1
+  const p = pressureKpa
+  let x = start > lo && start < hi ? start : 0.5 * (lo + hi)
   for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
-    wetBulbBalanceWithSlope(dryBulbC, t, pressureKpa, scratch)
-    const f = scratch[0] - targetW
-    if (f > 0) hi = t
-    else lo = t
-    let next = scratch[1] > 0 ? t - f / scratch[1] : Number.NaN
-    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi)
-    if (Math.abs(next - t) < SOLVER_TOLERANCE_C || hi - lo < SOLVER_TOLERANCE_C) return next
-    t = next
+    const tK = x + KELVIN_OFFSET
+    // Ws* over ice below the triple point, also on the wet-wick branch for 0 ≤ t* < 0.01 (psychrolib 2.5.0).
+    const ice = x < TRIPLE_POINT_C
+    const ln = ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)
+    const d1 = ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK)
+    const d2 = ice ? d2LnSaturationPressureIceDT2(tK) : d2LnSaturationPressureLiquidDT2(tK)
+    const pv = Math.exp(ln) / 1000
+    const pv1 = pv * d1
+    const pv2 = pv * (d1 * d1 + d2)
+    const den = p - pv
+    const ws = (MOLAR_MASS_RATIO_WATER_AIR * pv) / den
+    const ws1 = (MOLAR_MASS_RATIO_WATER_AIR * p * pv1) / (den * den)
+    const ws2 = (MOLAR_MASS_RATIO_WATER_AIR * p * (pv2 * den + 2 * pv1 * pv1)) / (den * den * den)
+    const a = a0 - ka * x
+    const b = b0 - kb * x
+    const num = a * ws - 1.006 * (dryBulbC - x)
+    const q = num / b
+    const q1 = (-ka * ws + a * ws1 + 1.006 + kb * q) / b
+    const q2 = (-2 * ka * ws1 + a * ws2 + 2 * kb * q1) / b
+    const f = q - targetW
+    if (f === 0) return x
+    if (f > 0) hi = x
+    else lo = x
+    const step = (2 * f * q1) / (2 * q1 * q1 - f * q2)
+    const next = x - step
+    if (next > lo && next < hi) {
+      if (Math.abs(step) < SOLVER_STOP_STEP_C) return next
+      x = next
+    } else {
+      x = 0.5 * (lo + hi)
+      if (hi - lo < SOLVER_TOLERANCE_C) return x
+    }
   }
   throw new RangeError(`wet bulb did not converge for dry bulb ${dryBulbC} °C, W ${targetW}`)
 }
 
 /**
+ * Start value for {@link solveWetBulbBranch}: the balance solved with Ws* replaced by its chord between
+ * (xa, wa) and (xb, wb) and the t*-dependent terms taken at the midpoint. Ws* is convex, so this lands
+ * at or below the root, usually within a few tenths of a degree.
+ */
+function chordStartC(
+  dryBulbC: number,
+  targetW: number,
+  liquid: boolean,
+  xa: number,
+  wa: number,
+  xb: number,
+  wb: number,
+): number {
+  if (!(xb - xa > 1e-9)) return xb
+  const m = 0.5 * (xa + xb)
+  const a = liquid ? 2501 - 2.326 * m : 2830 - 0.24 * m
+  const b = liquid ? 2501 + 1.86 * dryBulbC - 4.186 * m : 2830 + 1.86 * dryBulbC - 2.1 * m
+  const s = (wb - wa) / (xb - xa)
+  return xa + (targetW * b - a * wa + 1.006 * (dryBulbC - xa)) / (a * s + 1.006)
+}
+
+/**
  * Thermodynamic wet-bulb temperature [°C] from dry bulb [°C], humidity ratio [kg/kg] and pressure [kPa]:
  * the root of the psychrometer balance (ASHRAE HOF 2017 ch. 1 eqs 33/35) between the frost/dew point and
- * the dry bulb, tolerance {@link SOLVER_TOLERANCE_C}.
+ * the dry bulb, accuracy {@link SOLVER_TOLERANCE_C}.
  *
  * Two roots near 0 °C: eq 35 just below 0 °C gives a higher W than eq 33 just above it, so for dry bulbs
  * of roughly 0–10 °C a narrow band of W has a root on each side of 0 °C. We then always return the
@@ -270,39 +309,51 @@ export function wetBulbFromHumidityRatioC(
   pressureKpa: number,
 ): number {
   const pw = vaporPressureFromHumidityRatio(humidityRatioKgPerKg, pressureKpa)
-  const dewC = saturationTemperatureC(
-    Math.max(pw, 1e-9),
+  const lnPa = Math.log(Math.max(pw, 1e-9) * 1000)
+  const dewC = saturationTemperatureFromLnPressureC(
+    lnPa,
     pw < saturationVaporPressureLiquidKpa(TRIPLE_POINT_C),
   )
   return wetBulbWithDewPointC(dryBulbC, humidityRatioKgPerKg, pressureKpa, dewC)
 }
 
 /**
- * As {@link wetBulbFromHumidityRatioC} when the dew (or frost) point `dewC` [°C] is already known; it only
- * serves as the lower end of the bracket and the starting value, so either the dew or the frost point will do.
+ * As {@link wetBulbFromHumidityRatioC} when the dew (or frost) point `dewC` [°C] is already known; it is
+ * the lower end of the bracket and the chord start, so either the dew or the frost point will do.
+ * `saturationHumidityRatioAtDryBulb` (Ws at the dry bulb, over liquid water or ice) only sharpens the
+ * start value; it is computed when omitted. The choice between the two roots near 0 °C (see
+ * {@link wetBulbFromHumidityRatioC}) is made here: the liquid-wick root whenever W ≥ W(t* = 0) by eq 33.
+ *
+ * Where W exceeds saturation over ice at a dry bulb at or below 0 °C (station RH over water above
+ * pws,ice/pws,liquid, e.g. above 82 % at −20 °C) the iced-wick balance has no root at or below the dry
+ * bulb; the dry bulb is returned.
  */
 export function wetBulbWithDewPointC(
   dryBulbC: number,
   humidityRatioKgPerKg: number,
   pressureKpa: number,
   dewC: number,
+  saturationHumidityRatioAtDryBulb?: number,
 ): number {
-  const low = Math.max(Math.min(dewC, dryBulbC) - 1, SATURATION_MIN_C)
-  // Starting value: one third of the way from dew point to dry bulb (a rule of thumb, only a start).
-  const start = dewC + (dryBulbC - dewC) / 3
-  if (dryBulbC > 0) {
-    wetBulbBalanceWithSlope(dryBulbC, 0, pressureKpa, scratch)
-    const wAtZero = scratch[0]
-    if (humidityRatioKgPerKg >= wAtZero)
-      return solveWetBulbOnBranch(dryBulbC, humidityRatioKgPerKg, pressureKpa, 0, dryBulbC, start)
-    return solveWetBulbOnBranch(
-      dryBulbC,
-      humidityRatioKgPerKg,
-      pressureKpa,
-      low,
-      -1e-12,
-      Math.min(start, -1e-3),
-    )
+  const t = dryBulbC
+  const w = humidityRatioKgPerKg
+  const dew = Math.min(dewC, t)
+  if (t > 0) {
+    const ws0 =
+      (MOLAR_MASS_RATIO_WATER_AIR * SATURATION_PRESSURE_AT_ZERO_KPA) /
+      (pressureKpa - SATURATION_PRESSURE_AT_ZERO_KPA)
+    const wAtZeroLiquid = (2501 * ws0 - 1.006 * t) / (2501 + 1.86 * t) // eq 33 at t* = 0
+    if (w >= wAtZeroLiquid) {
+      const wst = saturationHumidityRatioAtDryBulb ?? saturationHumidityRatio(t, pressureKpa)
+      const lo = Math.max(dew, 0)
+      const start = chordStartC(t, w, true, lo, dew >= 0 ? w : ws0, t, wst)
+      return solveWetBulbBranch(t, w, pressureKpa, true, lo, t, start)
+    }
+    const lo = Math.max(dew - 1, SATURATION_MIN_C)
+    const start = chordStartC(t, w, false, dew, w, 0, ws0)
+    return solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start)
   }
-  return solveWetBulbOnBranch(dryBulbC, humidityRatioKgPerKg, pressureKpa, low, dryBulbC, start)
+  const lo = Math.max(dew - 1, SATURATION_MIN_C)
+  const start = chordStartC(t, w, false, dew, w, t, saturationHumidityRatio(t, pressureKpa))
+  return solveWetBulbBranch(t, w, pressureKpa, false, lo, t, start)
 }

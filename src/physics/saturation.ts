@@ -47,6 +47,11 @@ export function dLnSaturationPressureLiquidDT(tK: number): number {
   return -C8 / (tK * tK) + C10 + tK * (2 * C11 + 3 * C12 * tK) + C13 / tK
 }
 
+/** d² ln(pws)/dT² over liquid water [1/K²]; second derivative of eq 6 (for the Halley solvers). */
+export function d2LnSaturationPressureLiquidDT2(tK: number): number {
+  return (2 * C8) / (tK * tK * tK) + 2 * C11 + 6 * C12 * tK - C13 / (tK * tK)
+}
+
 /** ln(pws / Pa) over ice at `tK` [K]; eq 5. */
 export function lnSaturationPressureIcePa(tK: number): number {
   return C1 / tK + C2 + tK * (C3 + tK * (C4 + tK * (C5 + tK * C6))) + C7 * Math.log(tK)
@@ -55,6 +60,11 @@ export function lnSaturationPressureIcePa(tK: number): number {
 /** d ln(pws)/dT over ice [1/K]; derivative of eq 5. */
 export function dLnSaturationPressureIceDT(tK: number): number {
   return -C1 / (tK * tK) + C3 + tK * (2 * C4 + tK * (3 * C5 + 4 * C6 * tK)) + C7 / tK
+}
+
+/** d² ln(pws)/dT² over ice [1/K²]; second derivative of eq 5 (for the Halley solvers). */
+export function d2LnSaturationPressureIceDT2(tK: number): number {
+  return (2 * C1) / (tK * tK * tK) + 2 * C4 + tK * (6 * C5 + 12 * C6 * tK) - C7 / (tK * tK)
 }
 
 function checkTemperature(name: string, tC: number): void {

@@ -1,0 +1,77 @@
+/**
+ * Benchmark runner: `npm run bench` (tsx bench/run.ts [section-id …]).
+ * Runs every section listed in {@link sections} (or only the ids given on the command line), prints
+ * one table per section and writes every figure, with a description of the machine, to
+ * bench/latest.json. Timings are not tests: they depend on the machine and its load.
+ *
+ * To add a section: write `bench/sections/<id>.ts` exporting `section: BenchSection` (see
+ * bench/section.ts) and add one line to the array below.
+ */
+import { writeFileSync } from 'node:fs'
+import { cpus, platform, release, totalmem, type } from 'node:os'
+import { dirname, join } from 'node:path'
+import { fileURLToPath } from 'node:url'
+import type { BenchFigure, BenchSection } from './section.ts'
+
+/** Every section, in run order. Each entry loads its module lazily. */
+const sections: Array<() => Promise<{ section: BenchSection }>> = [() => import('./sections/moist-air.ts')]
+
+function formatValue(f: BenchFigure): string {
+  const v = f.value
+  if (!Number.isFinite(v)) return String(v)
+  const a = Math.abs(v)
+  if (a !== 0 && (a < 1e-3 || a >= 1e7)) return v.toExponential(3)
+  if (Number.isInteger(v)) return v.toLocaleString('en-US')
+  return v.toPrecision(4)
+}
+
+function printTable(section: BenchSection, figures: BenchFigure[], seconds: number): void {
+  const rows = figures.map((f) => [f.name, formatValue(f), f.unit, f.note ?? ''])
+  const widths = [0, 1, 2].map((c) => Math.max(...rows.map((r) => r[c].length)))
+  console.log(`\n${section.id}: ${section.title} (${seconds.toFixed(1)} s)`)
+  for (const r of rows) {
+    console.log(`  ${r[0].padEnd(widths[0])}  ${r[1].padStart(widths[1])} ${r[2].padEnd(widths[2])}  ${r[3]}`)
+  }
+}
+
+function machine() {
+  const list = cpus()
+  return {
+    os: `${type()} ${release()} (${platform()})`,
+    cpuModel: list[0]?.model ?? 'unknown',
+    cores: list.length,
+    memoryGb: Math.round(totalmem() / 2 ** 30),
+    node: process.version,
+  }
+}
+
+async function main(wanted: string[]): Promise<number> {
+  const result: {
+    date: string
+    machine: ReturnType<typeof machine>
+    sections: Record<string, { title: string; seconds: number; figures: BenchFigure[] }>
+  } = { date: new Date().toISOString(), machine: machine(), sections: {} }
+  const m = result.machine
+  console.log(`dryhours benchmark, ${m.os}, ${m.cpuModel} × ${m.cores}, Node ${m.node}`)
+  let failures = 0
+  for (const load of sections) {
+    const { section } = await load()
+    if (wanted.length > 0 && !wanted.includes(section.id)) continue
+    const t0 = performance.now()
+    try {
+      const figures = await section.run()
+      const seconds = (performance.now() - t0) / 1000
+      printTable(section, figures, seconds)
+      result.sections[section.id] = { title: section.title, seconds, figures }
+    } catch (e) {
+      failures++
+      console.error(`\n${section.id}: failed: ${(e as Error).stack ?? String(e)}`)
+    }
+  }
+  const out = join(dirname(fileURLToPath(import.meta.url)), 'latest.json')
+  writeFileSync(out, `${JSON.stringify(result, null, 2)}\n`)
+  console.log(`\nwrote ${out}`)
+  return failures > 0 ? 1 : 0
+}
+
+process.exitCode = await main(process.argv.slice(2))
