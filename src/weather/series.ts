@@ -68,6 +68,14 @@ export interface HourlySeries {
   quality: Uint8Array
   /** True when the file is a typical (synthetic) year assembled from months of different years. */
   typicalYear: boolean
+  /** Total sky cover [%] when the file has it (optional; not used by the drying engine yet). */
+  cloudCoverPct?: Float64Array
+  /**
+   * How each variable's value relates to its hour, keyed by reader variable name (dryBulb,
+   * relativeHumidity, dewPoint, wetBulb, pressure, wind, ghi, rain, cloudCover). Instants are read
+   * at the hour's labelled time (EPW: its end), interval values cover the hour. Set by the readers.
+   */
+  timing?: Partial<Record<string, ValueTiming>>
 }
 
 /** Allocate an empty series of `hours` hours starting at `firstStartUtcMs`, every value missing. */

@@ -1,0 +1,30 @@
+/**
+ * @module weather/coverage
+ * Share of usable hours (dry bulb and humidity present) per calendar month, in site standard time.
+ */
+import type { MonthCoverage } from './result.ts'
+import type { HourlySeries } from './series.ts'
+import { daysInMonth } from './timestamps.ts'
+
+/** Coverage per month and the distinct years, months taken in the site's standard time (UTC when unknown). */
+export function summarizeCoverage(
+  series: HourlySeries,
+  missing: Uint8Array,
+): { months: MonthCoverage[]; years: number[] } {
+  const offsetMs = (series.site.utcOffsetHours ?? 0) * 3_600_000
+  const counts = new Map<number, number>()
+  for (let s = 0; s < series.hours; s++) {
+    const d = new Date(series.startUtcMs[s] + offsetMs)
+    const key = d.getUTCFullYear() * 100 + d.getUTCMonth() + 1
+    counts.set(key, (counts.get(key) ?? 0) + (missing[s] ? 0 : 1))
+  }
+  const months: MonthCoverage[] = []
+  const years = new Set<number>()
+  for (const [key, count] of [...counts].sort((a, b) => a[0] - b[0])) {
+    const year = Math.floor(key / 100)
+    const month = key % 100
+    years.add(year)
+    months.push({ year, month, percent: Math.round((1000 * count) / (24 * daysInMonth(year, month))) / 10 })
+  }
+  return { months, years: [...years] }
+}

@@ -1,0 +1,67 @@
+/**
+ * @module weather/numbers
+ * Field text to numbers: blanks and missing-value words (NA, null, M, ---, …) become NaN, decimal
+ * commas are accepted when the file uses them, and anything else unreadable is reported.
+ */
+
+/** Words that mean "no value" in station exports. Common practice, no source. */
+const MISSING_WORDS = new Set([
+  'na',
+  'n/a',
+  'nan',
+  'null',
+  'none',
+  'm',
+  '-',
+  '--',
+  '---',
+  'missing',
+  '*',
+  '**',
+  '***',
+  '#n/a',
+  'nd',
+  'x',
+])
+
+/** Result codes of {@link parseField}. */
+export const FIELD_OK = 0
+export const FIELD_MISSING = 1
+export const FIELD_UNREADABLE = 2
+
+/** Parse `text` into `out[i]`; returns FIELD_OK, FIELD_MISSING (blank or a missing word) or FIELD_UNREADABLE. */
+export function parseField(
+  text: string | undefined,
+  decimalComma: boolean,
+  out: Float64Array,
+  i: number,
+): number {
+  if (text === undefined || text.length === 0) {
+    out[i] = Number.NaN
+    return FIELD_MISSING
+  }
+  let s = text
+  if (decimalComma && s.indexOf(',') >= 0) s = s.replace(',', '.')
+  const x = +s
+  if (!Number.isNaN(x)) {
+    if (x === 0 && s.trim() === '') {
+      out[i] = Number.NaN
+      return FIELD_MISSING
+    }
+    if (x === Number.POSITIVE_INFINITY || x === Number.NEGATIVE_INFINITY) {
+      out[i] = Number.NaN
+      return FIELD_UNREADABLE
+    }
+    out[i] = x
+    return FIELD_OK
+  }
+  out[i] = Number.NaN
+  const t = s.trim().toLowerCase()
+  if (MISSING_WORDS.has(t)) return FIELD_MISSING
+  if (/^[-+]?\d+(\.\d+)?\s*[a-z%°]+$/i.test(t)) {
+    const v = Number.parseFloat(t)
+    out[i] = v
+    return FIELD_OK
+  }
+  return FIELD_UNREADABLE
+}

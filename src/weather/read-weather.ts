@@ -1,0 +1,144 @@
+/**
+ * @module weather/read-weather
+ * The public entry: weather file text (or bytes) and options → a complete hourly series and an
+ * account of how the file was read. Pure: no file access, no clock.
+ */
+
+import { assemble } from './assemble.ts'
+import { type DelimitedInfo, readDelimited } from './delimited.ts'
+import { looksLikeEpw, readEpw } from './epw.ts'
+import { type WeatherReadOptions, weatherReadOptionsSchema } from './options.ts'
+import { ProblemLog } from './problem-log.ts'
+import type { WeatherReadResult } from './result.ts'
+import type { SiteInfo } from './series.ts'
+import { WeatherInputError } from './weather-input-error.ts'
+
+/** Default wind measurement height [m]: WMO standard 10 m (WMO-No. 8, 2018, Vol. I ch. 5). */
+export const DEFAULT_WIND_HEIGHT_M = 10
+
+/** Validate options with the shared schema; a WeatherInputError names the option and the accepted range. */
+export function parseWeatherOptions(options: unknown): WeatherReadOptions {
+  const parsed = weatherReadOptionsSchema.safeParse(options ?? {})
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0]
+    throw new WeatherInputError(`option ${issue.path.join('.') || '(options)'}: ${issue.message}`, [
+      issue.path.join('.'),
+    ])
+  }
+  return parsed.data
+}
+
+/**
+ * Read a weather file's text. Format from `options.format` or detected (EPW when the first line
+ * starts with LOCATION). Throws {@link WeatherInputError} when the file cannot give a usable series
+ * (no rows, no timestamps, no time zone for local times, no dry bulb or humidity, ambiguous columns).
+ */
+export function readWeather(
+  text: string,
+  options: WeatherReadOptions | Record<string, unknown> = {},
+): WeatherReadResult {
+  const opts = parseWeatherOptions(options)
+  const log = new ProblemLog()
+  const warnings: string[] = []
+  const format =
+    opts.format === undefined || opts.format === 'auto' ? (looksLikeEpw(text) ? 'epw' : 'csv') : opts.format
+  if (format === 'epw') {
+    const { table, header } = readEpw(text, log, warnings)
+    if (opts.mapping !== undefined)
+      warnings.push('the column mapping is ignored for EPW files (fixed fields)')
+    if (opts.timeZone !== undefined)
+      warnings.push(
+        `EPW files are in local standard time (header: UTC${header.utcOffsetHours >= 0 ? '+' : ''}${header.utcOffsetHours}); --tz ${opts.timeZone} is ignored`,
+      )
+    const offset = opts.utcOffsetHours ?? header.utcOffsetHours
+    if (opts.utcOffsetHours !== undefined && opts.utcOffsetHours !== header.utcOffsetHours) {
+      warnings.push(
+        `the given UTC offset ${opts.utcOffsetHours} h overrides the EPW header's ${header.utcOffsetHours} h`,
+      )
+    }
+    const site: SiteInfo = {
+      name:
+        opts.siteName ??
+        [header.city, header.region, header.country].filter((s) => s !== '' && s !== '-').join(', '),
+      latitudeDeg: opts.latitudeDeg ?? header.latitudeDeg,
+      longitudeDeg: opts.longitudeDeg ?? header.longitudeDeg,
+      elevationM: opts.elevationM ?? clampElevation(header.elevationM),
+      timeZone: null,
+      utcOffsetHours: offset,
+      windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+    }
+    return assemble(table, {
+      site,
+      time: {
+        labels: 'hour-end',
+        alwaysHourEnd: true,
+        fixedOffsetHours: offset,
+        zone: null,
+        headerSaysUtc: false,
+      },
+      log,
+      warnings,
+      elevationKnown: true,
+    })
+  }
+  const { table, info } = readDelimited(text, opts.mapping ?? {}, log, warnings)
+  const site: SiteInfo = {
+    name: opts.siteName ?? '',
+    latitudeDeg: opts.latitudeDeg ?? null,
+    longitudeDeg: opts.longitudeDeg ?? null,
+    elevationM: opts.elevationM ?? null,
+    timeZone: opts.timeZone ?? null,
+    utcOffsetHours: opts.utcOffsetHours ?? null,
+    windHeightM: opts.windHeightM ?? info.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+  }
+  if (opts.windHeightM === undefined && info.windHeightM === null && table.columns.wind) {
+    warnings.push(
+      `wind height not given: assumed ${DEFAULT_WIND_HEIGHT_M} m (WMO standard); give windHeightM if it differs`,
+    )
+  }
+  const result = assemble(table, {
+    site,
+    time: {
+      declaredOrder: opts.dateOrder ?? info.headerDateOrder ?? undefined,
+      labels: opts.timestampLabels ?? null,
+      fixedOffsetHours: opts.utcOffsetHours ?? null,
+      zone: opts.timeZone ?? null,
+      headerSaysUtc: info.plan.headerSaysUtc,
+    },
+    log,
+    warnings,
+    elevationKnown: opts.elevationM !== undefined,
+  })
+  if (site.utcOffsetHours === null && site.timeZone === null && result.timeBasis.startsWith('UTC'))
+    site.utcOffsetHours = 0
+  describeCsv(result, info)
+  return result
+}
+
+function describeCsv(result: WeatherReadResult, info: DelimitedInfo): void {
+  const name = info.delimiter === '\t' ? 'tab' : info.delimiter === ';' ? 'semicolon' : 'comma'
+  result.warnings.unshift(
+    `${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,
+  )
+}
+
+function clampElevation(m: number): number {
+  return Math.max(-500, Math.min(9000, m))
+}
+
+/**
+ * Read a weather file's bytes: UTF-8 (BOM allowed), or ISO-8859-1 when the bytes are not valid
+ * UTF-8 (older station and typical-year exports use it).
+ */
+export function readWeatherBytes(
+  bytes: Uint8Array,
+  options: WeatherReadOptions | Record<string, unknown> = {},
+): WeatherReadResult {
+  let text: string
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes)
+  } catch {
+    text = new TextDecoder('iso-8859-1').decode(bytes)
+  }
+  return readWeather(text, options)
+}

@@ -1,0 +1,292 @@
+/**
+ * @module weather/time-basis
+ * Row timestamps to UTC hour starts: date order, typical-year recognition (months from different
+ * years mapped onto one nominal year, leap day kept), hour-ending labels (EPW, and CSV files that
+ * run 01:00–24:00), offsets written in the text, a fixed offset, or an IANA zone with daylight
+ * saving (spring gap and autumn doubled hour reported).
+ */
+import type { ProblemLog } from './problem-log.ts'
+import { offsetAtUtc, utcCandidates, zoneOffsets } from './time-zone.ts'
+import {
+  type DateOrder,
+  daysFromCivil,
+  detectDateOrder,
+  monthDayOf,
+  type TimestampColumns,
+  wallClockMs,
+} from './timestamps.ts'
+import { WeatherInputError } from './weather-input-error.ts'
+
+const MS_PER_HOUR = 3_600_000
+
+/** Nominal year of a typical-year file without 29 February (any common year would do). */
+export const NOMINAL_COMMON_YEAR = 2001
+/** Nominal year of a typical-year file that contains 29 February (a leap year, so the day is kept). */
+export const NOMINAL_LEAP_YEAR = 2000
+
+export interface TimeBasisInput {
+  declaredOrder?: DateOrder
+  /** Label convention: declared, or null to detect (hour 24 present → hour-end). */
+  labels: 'hour-start' | 'hour-end' | null
+  fixedOffsetHours: number | null
+  zone: string | null
+  /** The header says the times are UTC. */
+  headerSaysUtc: boolean
+  /** EPW and similar: local standard time labelled at the end of each hour. */
+  alwaysHourEnd?: boolean
+}
+
+export interface DstEvent {
+  kind: 'spring-gap' | 'autumn-overlap'
+  /** UTC instant of the change, ISO. */
+  atUtc: string
+  /** Rows whose local time fell in the missing (spring) or doubled (autumn) hour. */
+  rows: number
+}
+
+export interface ResolvedTimes {
+  /** UTC start of the hour each row describes [ms]; NaN when the row is rejected. */
+  hourStartUtcMs: Float64Array
+  typicalYear: boolean
+  /** Distinct source years of a typical-year file (sorted), else []. */
+  sourceYears: number[]
+  labels: 'hour-start' | 'hour-end'
+  /** How local times became UTC, in words. */
+  description: string
+  dstEvents: DstEvent[]
+  warnings: string[]
+}
+
+function detectTypicalYear(
+  ts: TimestampColumns,
+  order: 'mdy' | 'dmy',
+): { typical: boolean; years: number[]; leap: boolean } {
+  const years = new Set<number>()
+  let previousKey = -1
+  let monotonic = true
+  let leap = false
+  let valid = 0
+  for (let i = 0; i < ts.year.length; i++) {
+    if (Number.isNaN(ts.year[i]) || Number.isNaN(ts.minuteOfDay[i])) continue
+    valid++
+    years.add(ts.year[i])
+    const [month, day] = monthDayOf(ts, i, order)
+    if (month === 2 && day === 29) leap = true
+    const key = (month * 32 + day) * 1441 + ts.minuteOfDay[i]
+    if (key < previousKey) monotonic = false
+    previousKey = key
+  }
+  const typical = years.size > 1 && monotonic && valid <= 8784 + 48
+  return { typical, years: [...years].sort((a, b) => a - b), leap }
+}
+
+export function resolveRowTimes(
+  ts: TimestampColumns,
+  lines: Int32Array,
+  input: TimeBasisInput,
+  log: ProblemLog,
+): ResolvedTimes {
+  const n = ts.year.length
+  const warnings: string[] = []
+  let order: 'mdy' | 'dmy' = 'mdy'
+  let detected: DateOrder | 'ambiguous' | null
+  try {
+    detected = detectDateOrder(ts)
+  } catch (e) {
+    throw new WeatherInputError(`${(e as Error).message}; give the date order (--date-order mdy or dmy)`, [
+      'date order',
+    ])
+  }
+  if (input.declaredOrder === 'dmy' || input.declaredOrder === 'mdy') order = input.declaredOrder
+  else if (detected === 'ambiguous') {
+    throw new WeatherInputError(
+      'dates like 03/04/2020 could be month/day or day/month and no date has a number above 12 to tell: ' +
+        'give the date order (--date-order mdy or --date-order dmy, or dateOrder in the options)',
+      ['date order'],
+    )
+  } else if (detected === 'dmy' || detected === 'mdy') order = detected
+  if (
+    detected !== null &&
+    detected !== 'ambiguous' &&
+    input.declaredOrder &&
+    input.declaredOrder !== 'ymd' &&
+    detected !== input.declaredOrder
+  ) {
+    warnings.push(
+      `dates were declared ${input.declaredOrder} but some only fit ${detected}; those rows are rejected`,
+    )
+  }
+
+  const { typical, years, leap } = detectTypicalYear(ts, order)
+  const nominal = leap ? NOMINAL_LEAP_YEAR : NOMINAL_COMMON_YEAR
+  if (typical) {
+    warnings.push(
+      `typical year: months come from ${years.length} different years (${years.join(', ')}); ` +
+        `placed on the nominal year ${nominal}${leap ? ' (a leap year, as the file has 29 February)' : ''}`,
+    )
+  }
+
+  let labels: 'hour-start' | 'hour-end' = 'hour-start'
+  if (input.alwaysHourEnd) labels = 'hour-end'
+  else if (input.labels) labels = input.labels
+  else {
+    let has24 = false
+    let has0 = false
+    for (let i = 0; i < n; i++) {
+      if (ts.minuteOfDay[i] === 1440) has24 = true
+      else if (ts.minuteOfDay[i] === 0) has0 = true
+    }
+    if (has24 && !has0) {
+      labels = 'hour-end'
+      warnings.push('hours run 01:00–24:00: read as hour-ending labels (01:00 = the hour 00:00–01:00)')
+    }
+  }
+
+  const wall = new Float64Array(n)
+  let anyOffsetInText = false
+  let anyWithoutOffset = false
+  let minWall = Number.POSITIVE_INFINITY
+  let maxWall = Number.NEGATIVE_INFINITY
+  for (let i = 0; i < n; i++) {
+    const year = typical ? nominal : ts.year[i]
+    const w = Number.isNaN(ts.minuteOfDay[i]) ? Number.NaN : wallClockMs(ts, i, order, year)
+    wall[i] = w
+    if (Number.isNaN(w)) continue
+    if (w < minWall) minWall = w
+    if (w > maxWall) maxWall = w
+    if (Number.isNaN(ts.offsetMin[i])) anyWithoutOffset = true
+    else anyOffsetInText = true
+  }
+
+  let fixedOffsetMs: number | null =
+    input.fixedOffsetHours === null ? null : input.fixedOffsetHours * MS_PER_HOUR
+  let description: string
+  if (anyOffsetInText && !anyWithoutOffset) description = 'offsets written in each timestamp'
+  else if (fixedOffsetMs !== null)
+    description = `local standard time, UTC${formatOffset(input.fixedOffsetHours!)} (no daylight saving)`
+  else if (input.zone !== null)
+    description = `local time in ${input.zone} (daylight saving applied by the zone's rules)`
+  else if (input.headerSaysUtc) {
+    fixedOffsetMs = 0
+    description = 'UTC (the header says so)'
+  } else if (anyWithoutOffset) {
+    throw new WeatherInputError(
+      "the timestamps carry no UTC offset and none was given: say how the file's clock relates to UTC with " +
+        '--utc-offset <hours> (standard time, e.g. -8) or --tz <IANA zone> (e.g. America/Los_Angeles, when the ' +
+        'file follows daylight saving); use --utc-offset 0 for UTC',
+      ['time zone'],
+    )
+  } else description = 'no valid timestamps'
+  if (anyOffsetInText && anyWithoutOffset) warnings.push('some timestamps carry an offset and some do not')
+  if (anyOffsetInText && (fixedOffsetMs !== null || input.zone !== null)) {
+    warnings.push('timestamps with a written offset use it; the given offset or zone applies to the others')
+  }
+
+  const zone =
+    input.zone !== null && fixedOffsetMs === null && Number.isFinite(minWall)
+      ? zoneOffsets(input.zone, minWall - 14 * MS_PER_HOUR, maxWall + 14 * MS_PER_HOUR)
+      : null
+  const labelShift = labels === 'hour-end' ? MS_PER_HOUR : 0
+  const out = new Float64Array(n).fill(Number.NaN)
+  let subHourly = 0
+  let lastUtc = Number.NEGATIVE_INFINITY
+  const gapRows = new Map<number, number>()
+  const overlapRows = new Map<number, number>()
+  for (let i = 0; i < n; i++) {
+    const w = wall[i]
+    if (Number.isNaN(w)) {
+      if (!Number.isNaN(ts.minuteOfDay[i]))
+        log.add(
+          lines[i],
+          null,
+          'bad-timestamp',
+          'not a calendar date (day beyond the month, or year outside 1800–2200)',
+        )
+      continue
+    }
+    let utc: number
+    if (!Number.isNaN(ts.offsetMin[i])) utc = w - ts.offsetMin[i] * 60_000
+    else if (fixedOffsetMs !== null) utc = w - fixedOffsetMs
+    else if (zone !== null) {
+      const c = utcCandidates(zone, w)
+      if (c.length === 0) {
+        const at = transitionNear(zone.fromUtcMs, w - offsetAtUtc(zone, w))
+        gapRows.set(at, (gapRows.get(at) ?? 0) + 1)
+        log.add(
+          lines[i],
+          null,
+          'dst-gap',
+          `local time ${isoWall(w)} does not exist in ${zone.zone} (clocks went forward): row rejected`,
+        )
+        continue
+      }
+      if (c.length === 2) {
+        const at = transitionNear(zone.fromUtcMs, c[1])
+        overlapRows.set(at, (overlapRows.get(at) ?? 0) + 1)
+        utc = lastUtc >= c[0] ? c[1] : c[0]
+        if (utc === c[1]) {
+          log.add(
+            lines[i],
+            null,
+            'dst-doubled-hour',
+            `local time ${isoWall(w)} happens twice in ${zone.zone}; this row is read as the second (standard time)`,
+          )
+        }
+      } else utc = c[0]
+    } else continue
+    const start = Math.floor((utc - labelShift) / MS_PER_HOUR) * MS_PER_HOUR
+    if (start !== utc - labelShift) subHourly++
+    out[i] = start
+    lastUtc = utc
+  }
+  if (subHourly > 0) {
+    warnings.push(
+      `${subHourly} timestamps are not on the hour; each is counted in the hour it falls in (further readings in the same hour are duplicates)`,
+    )
+  }
+  const dstEvents: DstEvent[] = []
+  if (zone !== null) {
+    for (let k = 1; k < zone.fromUtcMs.length; k++) {
+      const at = zone.fromUtcMs[k]
+      if (at < minWall - 14 * MS_PER_HOUR || at > maxWall + 14 * MS_PER_HOUR) continue
+      const forward = zone.offsetMs[k] > zone.offsetMs[k - 1]
+      dstEvents.push({
+        kind: forward ? 'spring-gap' : 'autumn-overlap',
+        atUtc: new Date(at).toISOString(),
+        rows: (forward ? gapRows.get(at) : overlapRows.get(at)) ?? 0,
+      })
+    }
+  }
+  return {
+    hourStartUtcMs: out,
+    typicalYear: typical,
+    sourceYears: typical ? years : [],
+    labels,
+    description: `${description}; timestamps label the ${labels === 'hour-end' ? 'end' : 'start'} of each hour`,
+    dstEvents,
+    warnings,
+  }
+}
+
+function transitionNear(fromUtcMs: number[], utc: number): number {
+  let best = fromUtcMs[1] ?? 0
+  for (const t of fromUtcMs) if (Math.abs(t - utc) < Math.abs(best - utc)) best = t
+  return best
+}
+
+function isoWall(wallMs: number): string {
+  return new Date(wallMs).toISOString().slice(0, 16).replace('T', ' ')
+}
+
+export function formatOffset(hours: number): string {
+  const sign = hours < 0 ? '−' : '+'
+  const abs = Math.abs(hours)
+  const h = Math.floor(abs)
+  const m = Math.round((abs - h) * 60)
+  return `${sign}${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`
+}
+
+/** Midnight UTC [ms] of a civil date; exported for tests and writers. */
+export function civilMidnightUtcMs(year: number, month: number, day: number): number {
+  return daysFromCivil(year, month, day) * 86_400_000
+}
