@@ -20,7 +20,7 @@ const J0_ROOTS = [
 ]
 
 /** Characteristic length L [m]: half of a slab's thickness (both faces dry), or the radius (cylinder, sphere). */
-export function characteristicLengthM(shape: Shape, thicknessMm: number): number {
+export function characteristicLengthM(thicknessMm: number): number {
   if (!(thicknessMm > 0 && thicknessMm < 1000)) {
     throw new RangeError(`thickness must be between 0 and 1000 mm, got ${thicknessMm}`)
   }
@@ -43,7 +43,7 @@ export function diffusionRateConstantPerH(
   if (!(diffusivityM2PerS > 0 && diffusivityM2PerS < 1e-5)) {
     throw new RangeError(`effective diffusivity must be between 0 and 1e-5 m²/s, got ${diffusivityM2PerS}`)
   }
-  const l = characteristicLengthM(shape, thicknessMm)
+  const l = characteristicLengthM(thicknessMm)
   return (firstEigenvalue(shape) * diffusivityM2PerS * 3600) / (l * l)
 }
 
@@ -90,6 +90,6 @@ export function diffusionMoistureRatioAt(
   thicknessMm: number,
   tH: number,
 ): number {
-  const l = characteristicLengthM(shape, thicknessMm)
+  const l = characteristicLengthM(thicknessMm)
   return diffusionMoistureRatio(shape, (diffusivityM2PerS * tH * 3600) / (l * l))
 }
