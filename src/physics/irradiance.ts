@@ -116,7 +116,8 @@ function checkTilt(tiltDeg: number): void {
  * Inputs: beam and diffuse horizontal [W/m²], cos θz of the sun, cos θ on the plane (from
  * {@link cosIncidenceAngle}), tilt β [°] and ground albedo ρg [–] (0.2 is the common default; common
  * practice, no source). Beam on the plane is 0 when the sun is behind it; cos θz is floored at
- * {@link MIN_COS_ZENITH}. Tilt 0 returns beam + diffuse = GHI.
+ * {@link MIN_COS_ZENITH}; with the sun below the horizon (cos θz ≤ 0, e.g. the middle of a sunrise hour)
+ * the beam part is treated as diffuse (common practice, no source). Tilt 0 returns beam + diffuse = GHI.
  */
 export function tiltedIrradianceIsotropicWm2(
   beamHorizontalWm2: number,
@@ -134,10 +135,11 @@ export function tiltedIrradianceIsotropicWm2(
   checkFinite('diffuse horizontal irradiance', diffuseHorizontalWm2, 'W/m2')
   const cosB = Math.cos(tiltDeg * RAD)
   const global = beamHorizontalWm2 + diffuseHorizontalWm2
+  let diffuse = diffuseHorizontalWm2
   let beam = 0
   if (tiltDeg === 0) beam = beamHorizontalWm2
-  else if (cosIncidence > 0 && cosZenith > 0) {
-    beam = (beamHorizontalWm2 * cosIncidence) / Math.max(cosZenith, MIN_COS_ZENITH)
-  }
-  return beam + (diffuseHorizontalWm2 * (1 + cosB)) / 2 + (global * groundAlbedo * (1 - cosB)) / 2
+  else if (!(cosZenith > 0))
+    diffuse = global // sun below the horizon at the evaluation instant: all diffuse
+  else if (cosIncidence > 0) beam = (beamHorizontalWm2 * cosIncidence) / Math.max(cosZenith, MIN_COS_ZENITH)
+  return beam + (diffuse * (1 + cosB)) / 2 + (global * groundAlbedo * (1 - cosB)) / 2
 }

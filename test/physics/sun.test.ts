@@ -53,7 +53,10 @@ describe('NOAA solar-calculation spreadsheet, 2010-06-21 00:06 UTC−7, 40 N 105
 })
 
 describe('column path agrees with suncalc 2.0.2 getPosition', () => {
-  it('1e-9° on random instants 1950–2080 and places', () => {
+  // Tolerance: the two differ only in floating-point rounding (suncalc forms a ~1e4 rad sidereal angle, the column
+  // reduces it mod 360° first): measured ≤ 3e-9° in altitude over 200,000 random cases, and azimuth, ill-conditioned
+  // near the zenith, ≤ 2e-7°.
+  it('altitude to 1e-8°, azimuth to 1e-6° on random instants 1950–2080 and places', () => {
     fc.assert(
       fc.property(
         // whole milliseconds: Date truncates fractions, which would move the sun by ~1e-7°
@@ -65,7 +68,8 @@ describe('column path agrees with suncalc 2.0.2 getPosition', () => {
           const az = new Float64Array(1)
           sunPositionColumns(new Float64Array([t]), lat, lon, alt, az, 0)
           const ref = SunCalc.getPosition(new Date(t), lat, lon)
-          return Math.abs(alt[0] - ref.altitude) < 1e-9 && Math.abs(az[0] - ref.azimuth) < 1e-9
+          const dAz = Math.abs(az[0] - ref.azimuth)
+          return Math.abs(alt[0] - ref.altitude) < 1e-8 && Math.min(dAz, 360 - dAz) < 1e-6
         },
       ),
       { numRuns: 500 },
