@@ -1,0 +1,387 @@
+/**
+ * @module analysis/energy/energy-chart
+ * The energy control-chart assessment of a dryer batch log: per-batch specific energy and efficiency,
+ * individuals/moving-range and EWMA charts with a phase I baseline, and the same charts on the residuals
+ * of a regression of specific energy on outside humidity ratio, outside temperature and load fitted over
+ * the baseline (what the weather and the load do not explain). Plain JSON-safe data for report/.
+ */
+import type { FuelId } from '../../drying/method.ts'
+import { STANDARD_PRESSURE_KPA, standardPressureKpaAtElevation } from '../../physics/moist-air.ts'
+import type { ProductProfile } from '../../product/profile.ts'
+import type { HourlySeries } from '../../weather/series.ts'
+import { type BatchAmbientValues, type BatchEnergy, batchEnergy } from './batch-energy.ts'
+import { type BatchLogAccounting, type BatchRowRejection, readBatchLog } from './batch-log.ts'
+import { estimateChangeStart } from './change-start.ts'
+import { CONTROL_CHART_SOURCE } from './control-constants.ts'
+import { type EwmaChart, ewmaChart } from './ewma-chart.ts'
+import { type IndividualsChart, individualsChart, MIN_BASELINE_POINTS } from './individuals-chart.ts'
+import { type LinearRegression, ordinaryLeastSquares } from './linear-regression.ts'
+import type { RunRuleId } from './run-rules.ts'
+import { batchAmbientFromSeries, humidityRatioGPerKgFromRh, MIN_WEATHER_COVERAGE } from './weather-join.ts'
+
+export interface EnergyChartOptions {
+  /** Batches in the baseline (phase I); default min(20, half the batches), at least 5. */
+  baselineCount?: number
+  /** Fuel of `fuel_amount` rows without a `fuel` column. */
+  fuel?: FuelId
+  /** Drying-air temperature [°C] for rows without `drying_temp_c`; default 60 °C (assumption). */
+  dryingTempC?: number
+  /** Offset of the log's local start times from UTC [h]; else the weather file's, else 0. */
+  utcOffsetHours?: number
+  /** Site elevation [m] for the pressure when neither log nor weather gives one; else sea level. */
+  elevationM?: number
+  /** Hourly weather to fill ambient temperature and RH of batches whose row lacks them. */
+  weather?: HourlySeries
+  /** Product, for the heat of sorption from its isotherm. */
+  profile?: ProductProfile
+}
+
+/** Default drying-air temperature [°C]: mid-range of heated grain and fruit dryers (assumption, no source). */
+export const DEFAULT_DRYING_TEMP_C = 60
+/** Regressors of the adjusted chart, in order. */
+export const ADJUSTMENT_REGRESSORS = ['ambientHumidityRatioGPerKg', 'ambientTempC', 'freshMassT'] as const
+
+export interface ChartSignal {
+  batchIndex: number
+  batchId: string
+  startText: string
+  /** Rules that fired on this batch (on this side). */
+  rules: (RunRuleId | 'EWMA')[]
+  /** `above`: more energy per kg water than the baseline (worse); `below`: less (better). */
+  side: 'above' | 'below'
+  /** 1 for the first batch after the baseline. */
+  batchesAfterBaseline: number
+}
+
+export interface ChartFinding {
+  /** First monitored batch with any signal, or null when the chart stays in control after the baseline. */
+  firstSignal: ChartSignal | null
+  /** First monitored batch signalling a rise in energy use (the dryer doing worse), or null. */
+  firstRiseSignal: ChartSignal | null
+  /** Most likely first batch of the rise (change-point estimate), when a rise signal fired. */
+  estimatedChangeStart: { batchIndex: number; batchId: string; startText: string } | null
+  /** Mean of the charted value from the estimated change to the end, minus the centre line. */
+  shiftAfterChange: number | null
+  /** Signals inside the baseline itself: a baseline that is not in control gives limits to distrust. */
+  baselineSignals: number
+}
+
+export interface ChartSet {
+  /** Batch index (into `batches`) of each charted point. */
+  batchIndices: number[]
+  individuals: IndividualsChart
+  ewma: EwmaChart
+  finding: ChartFinding
+}
+
+export interface EnergyChartAssessment {
+  kind: 'energy-chart'
+  accounting: BatchLogAccounting
+  rejections: BatchRowRejection[]
+  batches: BatchEnergy[]
+  baselineCount: number
+  /** Specific energy [MJ/kg water] chart. */
+  raw: ChartSet
+  /** Residual [MJ/kg water] chart after the weather-and-load regression, or null (see reason). */
+  adjusted:
+    | (ChartSet & { regression: Omit<LinearRegression, 'residuals'>; fitted: number[]; residuals: number[] })
+    | null
+  adjustedUnavailableReason: string | null
+  assumptions: string[]
+  sources: string[]
+  /** Plain-language findings, one sentence each. */
+  summary: string[]
+}
+
+function signalAt(
+  set: Omit<ChartSet, 'finding'>,
+  batches: BatchEnergy[],
+  baselineCount: number,
+  side: 'above' | 'below' | 'any',
+): ChartSignal | null {
+  const { individuals, ewma, batchIndices } = set
+  const first = <T extends { index: number; side: 'above' | 'below' }>(list: T[]) =>
+    list.find((s) => s.index >= individuals.baselineCount && (side === 'any' || s.side === side))
+  const a = first(individuals.signals)
+  const b = first(ewma.signals)
+  const pick = a && b ? (a.index <= b.index ? a : b) : (a ?? b)
+  if (!pick) return null
+  const point = pick.index
+  const pointSide = pick.side
+  const rules: (RunRuleId | 'EWMA')[] = individuals.signals
+    .filter((s) => s.index === point && s.side === pointSide)
+    .map((s) => s.rule)
+  if (ewma.signals.some((s) => s.index === point && s.side === pointSide)) rules.push('EWMA')
+  const batch = batches[batchIndices[point]]
+  return {
+    batchIndex: batch.index,
+    batchId: batch.batchId,
+    startText: batch.startText,
+    rules: [...new Set(rules)],
+    side: pointSide,
+    batchesAfterBaseline: batch.index - baselineCount + 1,
+  }
+}
+
+function finding(
+  set: Omit<ChartSet, 'finding'>,
+  batches: BatchEnergy[],
+  baselineCount: number,
+): ChartFinding {
+  const { individuals, batchIndices } = set
+  const baselineSignals = new Set(
+    individuals.signals.filter((s) => s.index < individuals.baselineCount).map((s) => s.index),
+  ).size
+  const firstSignal = signalAt(set, batches, baselineCount, 'any')
+  const firstRiseSignal = signalAt(set, batches, baselineCount, 'above')
+  if (!firstRiseSignal)
+    return {
+      firstSignal,
+      firstRiseSignal,
+      estimatedChangeStart: null,
+      shiftAfterChange: null,
+      baselineSignals,
+    }
+  const point = batchIndices.indexOf(firstRiseSignal.batchIndex)
+  const changePoint = estimateChangeStart(
+    individuals.values,
+    individuals.centerLine,
+    individuals.baselineCount,
+    point,
+  )
+  const c = batches[batchIndices[changePoint]]
+  const after = individuals.values.slice(changePoint)
+  return {
+    firstSignal,
+    firstRiseSignal,
+    estimatedChangeStart: { batchIndex: c.index, batchId: c.batchId, startText: c.startText },
+    shiftAfterChange: after.reduce((s, v) => s + v, 0) / after.length - individuals.centerLine,
+    baselineSignals,
+  }
+}
+
+function chartSet(
+  values: number[],
+  batchIndices: number[],
+  baseline: number,
+  batches: BatchEnergy[],
+  batchBaseline: number,
+): ChartSet {
+  const individuals = individualsChart(values, baseline)
+  const ewma = ewmaChart(values, individuals.centerLine, individuals.sigma, baseline)
+  const set = { batchIndices, individuals, ewma }
+  return { ...set, finding: finding(set, batches, batchBaseline) }
+}
+
+/** Resolve the ambient air of one batch: the log's own values, else the weather file, else null. */
+function ambientOf(
+  row: {
+    ambientTempC: number | null
+    ambientRhPct: number | null
+    ambientPressureKpa: number | null
+    durationH: number
+  },
+  startUtcMs: number,
+  options: EnergyChartOptions,
+  fallbackPressureKpa: number,
+): BatchAmbientValues | null {
+  if (row.ambientTempC !== null && row.ambientRhPct !== null) {
+    const p = row.ambientPressureKpa ?? fallbackPressureKpa
+    return {
+      dryBulbC: row.ambientTempC,
+      relativeHumidityPct: row.ambientRhPct,
+      humidityRatioGPerKg: humidityRatioGPerKgFromRh(row.ambientTempC, row.ambientRhPct, p),
+      source: 'log',
+    }
+  }
+  if (!options.weather) return null
+  const a = batchAmbientFromSeries(options.weather, startUtcMs, row.durationH, fallbackPressureKpa)
+  return a
+    ? {
+        dryBulbC: a.dryBulbC,
+        relativeHumidityPct: a.relativeHumidityPct,
+        humidityRatioGPerKg: a.humidityRatioGPerKg,
+        source: 'weather',
+      }
+    : null
+}
+
+/**
+ * Read a batch log and chart its energy. Throws BatchLogError for an unusable log and RangeError for bad
+ * options (baseline outside 5…number of batches, drying temperature outside 0–100 °C).
+ */
+export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {}): EnergyChartAssessment {
+  const log = readBatchLog(text, { fuel: options.fuel })
+  const assumptions: string[] = []
+  const dryingTempC = options.dryingTempC ?? DEFAULT_DRYING_TEMP_C
+  if (!(dryingTempC >= 0 && dryingTempC <= 100)) {
+    throw new RangeError(`drying temperature must be between 0 and 100 °C, got ${dryingTempC}`)
+  }
+  if (log.batches.some((b) => b.dryingTempC === null)) {
+    assumptions.push(
+      `Latent heat taken at ${dryingTempC} °C drying-air temperature for batches without drying_temp_c` +
+        (options.dryingTempC === undefined ? ' (default, an assumption: give --drying-temp)' : ''),
+    )
+  }
+  const offset = options.utcOffsetHours ?? options.weather?.site.utcOffsetHours ?? null
+  if (log.batches.some((b) => b.startOffsetHours === null)) {
+    assumptions.push(
+      offset === null
+        ? 'Start times without an offset are taken as UTC (no --utc-offset and no offset in the weather file)'
+        : `Start times without an offset are local standard time at UTC${offset >= 0 ? '+' : ''}${offset} h`,
+    )
+  }
+  const elevation = options.elevationM ?? options.weather?.site.elevationM ?? null
+  const fallbackPressureKpa =
+    elevation === null ? STANDARD_PRESSURE_KPA : standardPressureKpaAtElevation(elevation)
+  const timed = log.batches
+    .map((b) => ({ b, startUtcMs: b.startLocalMs - (b.startOffsetHours ?? offset ?? 0) * 3_600_000 }))
+    .sort((x, y) => x.startUtcMs - y.startUtcMs)
+  const batches = timed.map(({ b, startUtcMs }, i) =>
+    batchEnergy(b, i, startUtcMs, ambientOf(b, startUtcMs, options, fallbackPressureKpa), {
+      dryingTempC,
+      profile: options.profile,
+    }),
+  )
+  if (timed.some(({ b }, i) => i > 0 && b.line < timed[i - 1].b.line))
+    assumptions.push('Rows were put in order of start time')
+  if (batches.some((b) => b.ambient?.source === 'weather')) {
+    assumptions.push(
+      `Outside air from the weather file: mean of the batch's hours, needing ${MIN_WEATHER_COVERAGE * 100} % of them`,
+    )
+  }
+  const n = batches.length
+  const baselineCount =
+    options.baselineCount ?? Math.max(MIN_BASELINE_POINTS, Math.min(20, Math.floor(n / 2)))
+  if (options.baselineCount === undefined)
+    assumptions.push(`Baseline (phase I): the first ${baselineCount} batches (default; set --baseline)`)
+  if (!(Number.isInteger(baselineCount) && baselineCount >= MIN_BASELINE_POINTS && baselineCount <= n)) {
+    throw new RangeError(
+      `baseline must be a whole number of batches from ${MIN_BASELINE_POINTS} to ${n} (batches in the log), got ${baselineCount}`,
+    )
+  }
+  const all = batches.map((b) => b.index)
+  const raw = chartSet(
+    batches.map((b) => b.specificEnergyMjPerKg),
+    all,
+    baselineCount,
+    batches,
+    baselineCount,
+  )
+
+  let adjusted: EnergyChartAssessment['adjusted'] = null
+  let adjustedUnavailableReason: string | null = null
+  const complete = batches.filter((b) => b.ambient !== null)
+  const completeBaseline = complete.filter((b) => b.index < baselineCount)
+  const regressorsOf = (b: BatchEnergy): number[] => [
+    b.ambient!.humidityRatioGPerKg,
+    b.ambient!.dryBulbC,
+    b.freshMassKg / 1000,
+  ]
+  if (completeBaseline.length < baselineCount) {
+    adjustedUnavailableReason = `${baselineCount - completeBaseline.length} baseline batches have no outside temperature and RH (add ambient_temp_c and ambient_rh_pct, or a weather file covering them)`
+  } else if (completeBaseline.length < ADJUSTMENT_REGRESSORS.length + 3) {
+    adjustedUnavailableReason = `the regression needs at least ${ADJUSTMENT_REGRESSORS.length + 3} baseline batches, got ${completeBaseline.length}`
+  } else {
+    try {
+      const { residuals: _fitResiduals, ...regression } = ordinaryLeastSquares(
+        completeBaseline.map(regressorsOf),
+        completeBaseline.map((b) => b.specificEnergyMjPerKg),
+        ADJUSTMENT_REGRESSORS,
+      )
+      const c = regression.coefficients
+      const fitted = complete.map((b) =>
+        regressorsOf(b).reduce((s, v, j) => s + v * c[j + 1].estimate, c[0].estimate),
+      )
+      const residuals = complete.map((b, i) => b.specificEnergyMjPerKg - fitted[i])
+      const set = chartSet(
+        residuals,
+        complete.map((b) => b.index),
+        completeBaseline.length,
+        batches,
+        baselineCount,
+      )
+      adjusted = { ...set, regression, fitted, residuals }
+      if (complete.length < n)
+        assumptions.push(
+          `${n - complete.length} monitored batches lack outside air and are left off the adjusted chart`,
+        )
+    } catch (e) {
+      if (!(e instanceof RangeError)) throw e
+      adjustedUnavailableReason = e.message
+    }
+  }
+  return {
+    kind: 'energy-chart',
+    accounting: log.accounting,
+    rejections: log.rejections,
+    batches,
+    baselineCount,
+    raw,
+    adjusted,
+    adjustedUnavailableReason,
+    assumptions,
+    sources: [
+      CONTROL_CHART_SOURCE,
+      'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',
+      'Heating values: higher heating values of src/drying/fuels.ts (US EIA Btu conversion factors).',
+      'Regression: ordinary least squares over the baseline batches (specific energy on outside humidity ratio, outside temperature, load).',
+    ],
+    summary: summaryLines(batches, baselineCount, raw, adjusted, adjustedUnavailableReason),
+  }
+}
+
+function describe(name: string, set: ChartSet): string {
+  const f = set.finding
+  const parts: string[] = []
+  if (f.baselineSignals > 0) {
+    parts.push(
+      `${name}: ${f.baselineSignals} baseline batches already break a run rule, so this chart's limits are not from an in-control baseline.`,
+    )
+  }
+  const text = (s: ChartSignal) =>
+    `batch ${s.batchId} (${s.startText}), ${s.batchesAfterBaseline} batches after the baseline, rule ${s.rules.join(' + ')}`
+  if (!f.firstSignal) {
+    parts.push(`${name}: no signal after the baseline; the dryer looks in control on this chart.`)
+    return parts.join(' ')
+  }
+  if (f.firstSignal.side === 'below') {
+    parts.push(`${name}: first signal, of LESS energy than the baseline, at ${text(f.firstSignal)}.`)
+  }
+  if (!f.firstRiseSignal) {
+    parts.push(`${name}: no signal of more energy use after the baseline.`)
+    return parts.join(' ')
+  }
+  const shift =
+    f.shiftAfterChange === null
+      ? ''
+      : `, running ${f.shiftAfterChange >= 0 ? '+' : ''}${f.shiftAfterChange.toFixed(2)} MJ/kg against the baseline since then`
+  const change = f.estimatedChangeStart
+    ? ` The rise most likely began with batch ${f.estimatedChangeStart.batchId} (${f.estimatedChangeStart.startText})${shift}.`
+    : ''
+  parts.push(`${name}: first signal of MORE energy per kg water at ${text(f.firstRiseSignal)}.${change}`)
+  return parts.join(' ')
+}
+
+function summaryLines(
+  batches: BatchEnergy[],
+  baselineCount: number,
+  raw: ChartSet,
+  adjusted: EnergyChartAssessment['adjusted'],
+  reason: string | null,
+): string[] {
+  const base = batches.slice(0, baselineCount)
+  const meanEff = base.reduce((s, b) => s + b.thermalEfficiencyPct, 0) / base.length
+  const lines = [
+    `${batches.length} batches; baseline ${baselineCount} batches at ${raw.individuals.centerLine.toFixed(2)} MJ per kg water ` +
+      `(σ̂ ${raw.individuals.sigma.toFixed(2)}), mean thermal efficiency ${meanEff.toFixed(1)} %.`,
+    describe('Specific energy chart', raw),
+  ]
+  if (adjusted) {
+    lines.push(
+      `Weather and load explain R² = ${adjusted.regression.rSquared.toFixed(2)} of the baseline's specific energy; residual σ̂ ${adjusted.individuals.sigma.toFixed(2)} MJ/kg.`,
+      describe('Weather- and load-adjusted chart', adjusted),
+    )
+  } else lines.push(`Weather- and load-adjusted chart not drawn: ${reason}.`)
+  return lines
+}
