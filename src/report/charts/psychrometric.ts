@@ -1,0 +1,125 @@
+/**
+ * @module report/charts/psychrometric
+ * The site's hours on a psychrometric chart: dry bulb (x) against humidity ratio (y), with curves of
+ * constant relative humidity computed from the moist-air core (Hyland–Wexler saturation over liquid
+ * water, ASHRAE HOF 2017 ch. 1 eqs 6 and 20 — liquid water also below 0 °C, as weather stations report
+ * RH), the hours as a density of cells, and the region of air that dries the product to its target
+ * shaded and hatched. Cells carry `data-t`, `data-w`, `data-hours`; the region carries its boundary.
+ */
+
+import { humidityRatioFromVaporPressure } from '../../physics/moist-air.ts'
+import { saturationVaporPressureLiquidKpa } from '../../physics/saturation.ts'
+import type { UnitFormatter } from '../display-units.ts'
+import { escapeHtml } from '../escape.ts'
+import { HIGH_CONTRAST, INK, sequentialColour } from '../palette.ts'
+import type { PsychroDensity, RegionPoint } from '../psychro-data.ts'
+import { type Frame, linearScale, niceTicks, px, svgDocument, tickLabel, xAxis, yAxis } from './svg.ts'
+
+export interface PsychrometricOptions {
+  id: string
+  title: string
+  description: string
+  pressureKpa: number
+  density: PsychroDensity
+  /** Boundary of the drying region (humidity ratio at the product's equilibrium RH at target, by dry bulb). */
+  region: RegionPoint[] | null
+  /** Label of the region, e.g. "dries raisins to 15 %". */
+  regionLabel: string
+  units: UnitFormatter
+}
+
+const FRAME: Frame = { width: 640, height: 400, left: 56, right: 40, top: 30, bottom: 40 }
+const RH_CURVES = [10, 20, 30, 40, 50, 60, 70, 80, 90, 100]
+
+/** Humidity ratio [g/kg] at dry bulb tC and RH rhPct (over liquid water) at pressureKpa; eq 20. */
+export function humidityRatioAtRhGPerKg(tC: number, rhPct: number, pressureKpa: number): number {
+  return (
+    1000 * humidityRatioFromVaporPressure((rhPct / 100) * saturationVaporPressureLiquidKpa(tC), pressureKpa)
+  )
+}
+
+export function psychrometricChart(o: PsychrometricOptions): string {
+  const f = FRAME
+  const d = o.density
+  const [t0, t1] = d.dryBulbRangeC
+  const wTop = d.humidityRatioMaxGPerKg
+  const x = linearScale([t0, t1], [f.left, f.width - f.right])
+  const y = linearScale([0, wTop], [f.height - f.bottom, f.top])
+  const clipId = `${o.id}-clip`
+  const hatchId = `${o.id}-hatch`
+  const defs =
+    `<clipPath id="${clipId}"><rect x="${f.left}" y="${f.top}" width="${f.width - f.left - f.right}" height="${f.height - f.top - f.bottom}"/></clipPath>` +
+    `<pattern id="${hatchId}" patternUnits="userSpaceOnUse" width="7" height="7" patternTransform="rotate(45)"><rect width="7" height="7" fill="${HIGH_CONTRAST.blue}" fill-opacity="0.10"/><line x1="0" y1="0" x2="0" y2="7" stroke="${HIGH_CONTRAST.blue}" stroke-width="1.2" stroke-opacity="0.55"/></pattern>`
+  const parts: string[] = []
+  // Drying region.
+  if (o.region && o.region.length > 1) {
+    const pts = o.region.map(
+      (p) => `${px(x(p.dryBulbC))},${px(y(Math.min(p.humidityRatioGPerKg, wTop * 2)))}`,
+    )
+    const last = o.region[o.region.length - 1]
+    const first = o.region[0]
+    const poly = [...pts, `${px(x(last.dryBulbC))},${px(y(0))}`, `${px(x(first.dryBulbC))},${px(y(0))}`]
+    parts.push(
+      `<g class="drying-region" data-boundary="${escapeHtml(o.region.map((p) => `${p.dryBulbC}:${p.humidityRatioGPerKg}`).join(' '))}"><title>${escapeHtml(o.regionLabel)}</title><polygon points="${poly.join(' ')}" fill="url(#${hatchId})"/><polyline points="${pts.join(' ')}" fill="none" stroke="${HIGH_CONTRAST.blue}" stroke-width="2"/></g>`,
+    )
+  }
+  // Density cells: colour by share of the busiest cell, on a square-root scale so rare states still show.
+  let maxCount = 0
+  for (const c of d.cells) if (c.hours > maxCount) maxCount = c.hours
+  const cw = Math.abs(x(t0 + d.binDryBulbC) - x(t0))
+  const ch = Math.abs(y(0) - y(d.binHumidityRatioGPerKg))
+  for (const c of d.cells) {
+    const share = maxCount > 0 ? Math.sqrt(c.hours / maxCount) : 0
+    const label = `${c.dryBulbC} to ${c.dryBulbC + d.binDryBulbC} °C, ${c.humidityRatioGPerKg} to ${c.humidityRatioGPerKg + d.binHumidityRatioGPerKg} g/kg: ${c.hours} h`
+    parts.push(
+      `<rect class="hours" data-t="${c.dryBulbC}" data-w="${c.humidityRatioGPerKg}" data-hours="${c.hours}" x="${px(x(c.dryBulbC))}" y="${px(y(c.humidityRatioGPerKg + d.binHumidityRatioGPerKg))}" width="${px(cw)}" height="${px(ch)}" fill="${sequentialColour(0.15 + 0.85 * share)}" fill-opacity="0.9"><title>${escapeHtml(label)}</title></rect>`,
+    )
+  }
+  // RH curves.
+  const curves: string[] = []
+  for (const rh of RH_CURVES) {
+    const pts: string[] = []
+    let labelAt: { x: number; y: number } | null = null
+    const steps = 80
+    for (let i = 0; i <= steps; i++) {
+      const t = t0 + ((t1 - t0) * i) / steps
+      const w = humidityRatioAtRhGPerKg(t, rh, o.pressureKpa)
+      pts.push(`${px(x(t))},${px(y(w))}`)
+      if (w <= wTop) labelAt = { x: x(t), y: y(w) }
+      else break
+    }
+    const sat = rh === 100
+    curves.push(
+      `<polyline class="rh" data-rh="${rh}" points="${pts.join(' ')}" fill="none" stroke="${sat ? INK.text : INK.muted}" stroke-width="${sat ? 1.6 : 0.7}"${sat ? '' : ' stroke-dasharray="3 2"'}/>`,
+    )
+    if (labelAt) {
+      curves.push(
+        `<text x="${px(labelAt.x + 2)}" y="${px(labelAt.y - 2)}" font-size="8.5" fill="${INK.muted}">${rh} %</text>`,
+      )
+    }
+  }
+  const tTicks = niceTicks(t0, t1, 8)
+  const wTicks = niceTicks(0, wTop, 6)
+  const u = o.units
+  const body =
+    yAxis(f, y, wTicks, `humidity ratio [${u.humidityRatioUnit}]`, (w) =>
+      tickLabel(Number(u.humidityRatio(w).value.toFixed(1))),
+    ) +
+    xAxis(
+      f,
+      tTicks.map((t) => ({ x: x(t), label: tickLabel(Number(u.temperature(t).value.toFixed(1))) })),
+      `dry bulb [${u.temperatureUnit}]`,
+      true,
+    ) +
+    `<g clip-path="url(#${clipId})">${parts.join('')}${curves.join('')}</g>` +
+    `<g class="legend" font-size="10" fill="${INK.text}"><rect x="${f.left}" y="6" width="14" height="10" fill="url(#${hatchId})" stroke="${HIGH_CONTRAST.blue}"/><text x="${f.left + 18}" y="14">${escapeHtml(o.regionLabel)}</text><rect x="${f.left + 300}" y="6" width="14" height="10" fill="${sequentialColour(0.2)}"/><rect x="${f.left + 314}" y="6" width="14" height="10" fill="${sequentialColour(0.6)}"/><rect x="${f.left + 328}" y="6" width="14" height="10" fill="${sequentialColour(1)}"/><text x="${f.left + 346}" y="14">hours: few → many</text><text x="${f.left + 470}" y="14">dashed: RH</text></g>`
+  return svgDocument({
+    id: o.id,
+    frame: f,
+    title: o.title,
+    description: o.description,
+    body,
+    defs,
+    chart: 'psychrometric',
+  })
+}

@@ -1,0 +1,86 @@
+/**
+ * @module report/report-csv
+ * Every table of the report as CSV: the same `ReportTable`s the HTML table views show, so the download and
+ * the page agree. Text cells are neutralised against spreadsheet formula injection (`csvCell`).
+ */
+
+import type { HourlySeries } from './../weather/series.ts'
+import type { AssessmentView } from './assessment-view.ts'
+import { type UnitSystem, unitFormatter } from './display-units.ts'
+import { psychroDensity } from './psychro-data.ts'
+import type { SectionContext } from './sections/context.ts'
+import { fuelTable, heatTable } from './sections/heat.ts'
+import { hourOfDayFractions, hourOfDayTable } from './sections/hour-of-day.ts'
+import { monthlyTable, usableHoursByYearTable } from './sections/monthly.ts'
+import { psychroTable } from './sections/psychrometric.ts'
+import { startDatesTable } from './sections/start-dates.ts'
+import { headerRows } from './sections/summary.ts'
+import { type ReportTable, tableCsv, tablesCsv } from './tables.ts'
+
+export interface CsvOptions {
+  units?: UnitSystem
+  series?: HourlySeries
+}
+
+/** All tables of the report, in report order; the first is the header (site, product, method …). */
+export function reportTables(a: AssessmentView, o: CsvOptions = {}): ReportTable[] {
+  const ctx: SectionContext = {
+    units: unitFormatter(o.units ?? 'si'),
+    idPrefix: '',
+    nextFigure: () => 0,
+    series: o.series,
+  }
+  const out: ReportTable[] = [
+    { id: 'summary', title: 'Assessment', columns: ['item', 'value'], rows: headerRows(a, ctx) },
+    monthlyTable(a),
+  ]
+  const byYear = usableHoursByYearTable(a)
+  if (byYear) out.push(byYear)
+  const fr = hourOfDayFractions(a)
+  if (fr) out.push(hourOfDayTable(fr))
+  if (o.series) out.push(psychroTable(psychroDensity(o.series)))
+  if (a.startDates.length) out.push(startDatesTable(a, ctx))
+  const heat = heatTable(a, ctx)
+  if (heat) out.push(heat)
+  const fuel = fuelTable(a, ctx)
+  if (fuel) out.push(fuel)
+  if (a.assumptions.length)
+    out.push({
+      id: 'assumptions',
+      title: 'Assumptions',
+      columns: ['assumption'],
+      rows: a.assumptions.map((s) => [s]),
+    })
+  if (a.warnings.length)
+    out.push({ id: 'warnings', title: 'Warnings', columns: ['warning'], rows: a.warnings.map((s) => [s]) })
+  return out
+}
+
+export const REPORT_TABLE_IDS = [
+  'summary',
+  'monthly-usable-hours',
+  'usable-hours-by-year',
+  'hour-of-day-usable-share',
+  'psychrometric-hours',
+  'start-dates',
+  'supplemental-heat-by-month',
+  'fuel-per-tonne',
+  'assumptions',
+  'warnings',
+] as const
+
+/**
+ * The report's tables as CSV: all tables in one file (titled blocks), or only the table `tableId`.
+ * Throws a RangeError naming the accepted ids when `tableId` is not a table of this report.
+ */
+export function renderReportCsv(a: AssessmentView, o: CsvOptions & { table?: string } = {}): string {
+  const tables = reportTables(a, o)
+  if (o.table === undefined || o.table === 'all') return tablesCsv(tables)
+  const t = tables.find((x) => x.id === o.table)
+  if (!t) {
+    throw new RangeError(
+      `table must be one of ${['all', ...tables.map((x) => x.id)].join(', ')}; got ${JSON.stringify(o.table)}`,
+    )
+  }
+  return tableCsv(t)
+}

@@ -1,0 +1,85 @@
+/**
+ * @module report/report-html
+ * The seasonal summary: one self-contained HTML document (inline CSS and SVG, no scripts, no external
+ * assets) from an assessment. The same function serves `dryhours assess --format html`,
+ * `POST /v1/assess?format=html` and the web page (which embeds the `<article>` fragment).
+ */
+import type { ProductProfile } from '../product/profile.ts'
+import type { HourlySeries } from '../weather/series.ts'
+import type { AssessmentView } from './assessment-view.ts'
+import { type UnitSystem, unitFormatter } from './display-units.ts'
+import { escapeHtml } from './escape.ts'
+import { type Paper, reportCss } from './report-css.ts'
+import { cautionsSection } from './sections/cautions.ts'
+import type { SectionContext } from './sections/context.ts'
+import { heatSection } from './sections/heat.ts'
+import { hourOfDaySection } from './sections/hour-of-day.ts'
+import { monthlySection } from './sections/monthly.ts'
+import { psychrometricSection } from './sections/psychrometric.ts'
+import { startDatesSection } from './sections/start-dates.ts'
+import { answerHtml, headerHtml } from './sections/summary.ts'
+
+export interface ReportOptions {
+  /** Display units; SI by default. */
+  units?: UnitSystem
+  /** Paper for print (`@page size`); 'auto' lets the printer dialogue choose. */
+  paper?: Paper
+  /** The weather series the assessment was made from: enables the psychrometric chart. */
+  series?: HourlySeries
+  /** The product profile: enables the drying region on the psychrometric chart and the product cautions. */
+  profile?: ProductProfile
+  /** Prefix for element ids (several reports on one page). */
+  idPrefix?: string
+  /** Text for the footer, e.g. the program version and when the report was made (the core reads no clock). */
+  footer?: string
+}
+
+function context(o: ReportOptions): SectionContext {
+  let n = 0
+  return {
+    units: unitFormatter(o.units ?? 'si'),
+    series: o.series,
+    profile: o.profile,
+    idPrefix: o.idPrefix ?? '',
+    nextFigure: () => ++n,
+  }
+}
+
+/** The report as an `<article class="dryhours-report">` fragment (no `<html>`), for embedding. */
+export function renderReportArticle(a: AssessmentView, o: ReportOptions = {}): string {
+  const ctx = context(o)
+  const productCautions = o.profile?.cautions ?? []
+  return `<article class="dryhours-report" data-report="assessment" data-units="${ctx.units.system}">
+${headerHtml(a, ctx)}
+${answerHtml(a, ctx)}
+${monthlySection(a, ctx)}
+${hourOfDaySection(a, ctx)}
+${psychrometricSection(a, ctx)}
+${startDatesSection(a, ctx)}
+${heatSection(a, ctx)}
+${cautionsSection(a, ctx, productCautions)}
+<footer>${escapeHtml(o.footer ?? 'Made by dryhours from the weather file and the options shown above. Check the numbers against local experience before you build or buy.')}</footer>
+</article>`
+}
+
+/** A complete HTML document with the report's stylesheet. */
+export function htmlDocument(title: string, article: string, paper: Paper = 'auto'): string {
+  return `<!doctype html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width,initial-scale=1">
+<title>${escapeHtml(title)}</title>
+<style>${reportCss(paper)}</style>
+</head>
+<body>
+${article}
+</body>
+</html>
+`
+}
+
+/** The complete, self-contained HTML report for one assessment. */
+export function renderReportHtml(a: AssessmentView, o: ReportOptions = {}): string {
+  return htmlDocument(`Drying summary: ${a.site.name}, ${a.product.name}`, renderReportArticle(a, o), o.paper)
+}

@@ -1,0 +1,35 @@
+/**
+ * @module report/sections/cautions
+ * Cautions (food safety, mycotoxins, combustion heaters, licensed trades, local codes), the model's
+ * limits, and the assessment's own assumptions. Safety text follows the project conventions: say it
+ * plainly and defer to local codes and licensed practice.
+ */
+import type { AssessmentView } from '../assessment-view.ts'
+import { escapeHtml } from '../escape.ts'
+import type { SectionContext } from './context.ts'
+
+export const GENERAL_CAUTIONS: readonly string[] = [
+  'Food safety: dried food is safe to store only at a low enough water activity; check the dried product (a water-activity meter or an accredited laboratory) rather than relying on a drying time from this report.',
+  'Mycotoxins: slow or stalled drying of grain, nuts, figs, coffee and cocoa lets moulds grow and produce toxins such as aflatoxin; when batches take long or rewet, dry faster (heat, thinner layers) or sort and test.',
+  'Combustion heaters: direct-fired heaters put carbon monoxide and other combustion products into the drying air; prefer indirect heaters for food, ventilate, and use a carbon-monoxide alarm wherever people work.',
+  'Gas and electrical work on dryers, heaters and fans must be done by licensed trades, following local codes.',
+  'Fire: dryers, dust and dry product burn; keep heaters clear of product and dust, and follow local fire codes.',
+]
+
+export const MODEL_LIMITS: readonly string[] = [
+  'The weather file is taken as the climate: a few years cannot show the rare bad year, and a typical-year file shows no spread at all.',
+  'Usable hours and batch times come from published isotherm and drying-rate models fitted to other lots of the product; varieties, pretreatments (dipping, blanching, cutting) and loading change them.',
+  'The air at the product is modelled from the weather station; shelter, ground, nearby water and the dryer itself change it.',
+  'Rain, dew and night handling follow the method options (covered or not); real handling delays are not modelled.',
+  'Supplemental heat assumes the heater raises the intake air at constant humidity ratio with the stated efficiency; losses from the dryer shell are not included.',
+]
+
+export function cautionsSection(
+  a: AssessmentView,
+  ctx: SectionContext,
+  productCautions: string[] = [],
+): string {
+  const list = (xs: readonly string[]) => `<ul>${xs.map((x) => `<li>${escapeHtml(x)}</li>`).join('')}</ul>`
+  return `<section class="report-section cautions" id="${ctx.idPrefix}sec-cautions" data-section="cautions"><h2>Cautions</h2>${list([...productCautions, ...GENERAL_CAUTIONS])}</section>
+<section class="report-section limits" id="${ctx.idPrefix}sec-limits" data-section="limits"><h2>Limits of the model and assumptions</h2>${list(MODEL_LIMITS)}${a.assumptions.length ? `<h3>Assumptions of this assessment</h3>${list(a.assumptions)}` : ''}</section>`
+}
