@@ -135,7 +135,9 @@ export function aerodynamicResistanceFromPenmanWindSPerM(
 
 /**
  * Convective heat-transfer coefficient of a flat plate in wind [W m⁻² K⁻¹], hc = 2.8 + 3.0 u (Watmuff,
- * Charters & Proctor 1977, as quoted in Duffie & Beckman 2013 §3.15; from memory), u the wind at the
+ * Charters & Proctor 1977, from memory as quoted in Duffie & Beckman 2013 §3.15; the same form is cited as
+ * "h = 3 v + 2.8" after Kumar et al. in a public BenWinchester/PVTModel issue thread; de Winter (2002) notes such
+ * wind coefficients scatter widely), u the wind at the
  * surface [m/s]. With the Lewis analogy (Le ≈ 1 for water vapour in air) ra = ρa cp / hc is the resistance
  * to heat and to vapour of a small wet plate (see {@link aerodynamicResistanceFlatPlateSPerM}).
  */

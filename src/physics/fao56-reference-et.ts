@@ -19,8 +19,11 @@ export const STEFAN_BOLTZMANN_MJ_PER_HOUR = 2.043e-10
 export const GRASS_REFERENCE_ALBEDO = 0.23
 /** Rs/Rso used at night when no daytime ratio is known yet; FAO-56 Example 19 assumes 0.8. */
 export const NIGHT_RS_RSO_DEFAULT = 0.8
-/** Sun altitude above which an hour's Rs/Rso is kept for the following night [°]: 0.3 rad (ASCE-EWRI 2005, from memory). */
-export const RS_RSO_CARRY_MIN_ALTITUDE_DEG = 17.19
+/**
+ * Sun altitude above which an hour's Rs/Rso is kept for the following night [°]: 0.3 rad, the ASCE-EWRI (2005)
+ * eq 45 threshold (as in WSWUP/RefET `fcd_hourly`).
+ */
+export const RS_RSO_CARRY_MIN_ALTITUDE_DEG = (0.3 * 180) / Math.PI
 
 /** Atmospheric pressure [kPa] at elevation z [m], FAO-56 eq 7: 101.3 [(293 − 0.0065 z)/293]^5.26. Example 2: 1800 m → 81.8. */
 export function atmosphericPressureFao56Kpa(elevationM: number): number {
@@ -50,13 +53,13 @@ export function psychrometricConstantFao56KpaPerC(pressureKpa: number): number {
 }
 
 /**
- * Ratio Rs/Rso [–] for eq 39, limited to 0.25…1 (FAO-56 eq 39 requires Rs/Rso ≤ 1; Rs ≥ 0.25 Rso is the
- * overcast limit of eq 35 with n = 0). NaN when Rso is 0 (night): use the evening value instead.
+ * Ratio Rs/Rso [–] for eq 39, limited to 0.3…1 (FAO-56 eq 39 requires Rs/Rso ≤ 1; the lower limit 0.3 is
+ * ASCE-EWRI (2005) eq 45, as in WSWUP/RefET `fcd_hourly`). NaN when Rso is 0 (night): use the evening value.
  */
 export function shortwaveRatio(rs: number, rso: number): number {
   if (!(rso > 0)) return Number.NaN
   const r = rs / rso
-  return r > 1 ? 1 : Math.max(r, 0.25)
+  return r > 1 ? 1 : Math.max(r, 0.3)
 }
 
 /**

@@ -95,7 +95,7 @@ export function hourAngleFromUtcRad(utcHourMid: number, lonEastDeg: number, dayO
  * Extraterrestrial radiation on a horizontal surface for a period [MJ m⁻² per period], FAO-56 eq 28:
  * Ra = (12·60/π) Gsc dr [(ω2 − ω1) sinφ sinδ + cosφ cosδ (sin ω2 − sin ω1)], with ω1,2 = ω ∓ π t1/24
  * (eqs 29–30) and `periodHours` t1 (1 for hourly). The period ends are clipped to the daylight span
- * [−ωs, ωs], as the ASCE-EWRI (2005) standardized reference ET report does (from memory); FAO-56 sets
+ * [−ωs, ωs], as ASCE-EWRI (2005) eq 56 does (as implemented in WSWUP/RefET `ra_hourly`); FAO-56 sets
  * Ra = 0 when ω is outside ±ωs, which the clipping also gives. Never negative.
  */
 export function extraterrestrialRadiationPeriodMjM2(

@@ -90,9 +90,9 @@ describe('eq 39 and the night Rs/Rso ratio', () => {
     const tEffC = tK4 ** 0.25 - 273.16
     expect(24 * netLongwaveHourlyMjM2(tEffC, 2.1, 14.5 / 18.8)).toBeCloseTo(3.5, 1)
   })
-  it('ratio limited to 0.25…1 (eq 39, eq 35 with n = 0), NaN at night', () => {
+  it('ratio limited to 0.3…1 (FAO-56 eq 39 upper, ASCE-EWRI 2005 eq 45 lower), NaN at night', () => {
     expect(shortwaveRatio(3, 2)).toBe(1)
-    expect(shortwaveRatio(0.1, 2)).toBe(0.25)
+    expect(shortwaveRatio(0.1, 2)).toBe(0.3)
     expect(Number.isNaN(shortwaveRatio(0, 0))).toBe(true)
   })
   it('column: night hours carry the last ratio with the sun above 0.3 rad; start of series uses 0.8', () => {
@@ -101,7 +101,7 @@ describe('eq 39 and the night Rs/Rso ratio', () => {
     const alt = new Float64Array([-5, 10, 40, 30, 5, -3, -20])
     const out = new Float64Array(7)
     fillNightShortwaveRatioColumn(rs, rso, alt, out)
-    expect(Array.from(out)).toEqual([NIGHT_RS_RSO_DEFAULT, 0.5, 0.9, 0.6, 0.25, 0.6, 0.6])
+    expect(Array.from(out)).toEqual([NIGHT_RS_RSO_DEFAULT, 0.5, 0.9, 0.6, 0.3, 0.6, 0.6])
   })
   it('G = 0.1 Rn by day (eq 45), 0.5 Rn at night (eq 46)', () => {
     expect(soilHeatFluxHourlyMjM2(2, true)).toBeCloseTo(0.2, 12)
