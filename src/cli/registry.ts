@@ -4,6 +4,10 @@
  */
 import type { CliCommand } from './command.ts'
 import { airCommand } from './commands/air.ts'
+import { equilibriumCommand } from './commands/equilibrium.ts'
+import { fitCommand } from './commands/fit.ts'
+import { inspectCommand } from './commands/inspect.ts'
+import { productsCommand } from './commands/products.ts'
 import { serveCommand } from './commands/serve.ts'
 
-export const commands: CliCommand[] = [airCommand, serveCommand]
+export const commands: CliCommand[] = [airCommand, serveCommand, inspectCommand, productsCommand, equilibriumCommand, fitCommand]

@@ -205,6 +205,8 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     if (v === undefined) continue
     spikeCheck(grid, log, variable, v, SERIES_UNIT[variable])
     stuckCheck(grid, log, variable, v, SERIES_UNIT[variable])
+    // RH gaps are left to the dew point or wet bulb when the file has one (measured beats interpolated).
+    if (variable === 'relativeHumidity' && (si.dewPoint || si.wetBulb)) continue
     interpolateShortGaps(grid, log, variable, v)
   }
 
