@@ -71,6 +71,39 @@ export function windSpeedAt2mMs(windMs: number, heightM: number): number {
 }
 
 /**
+ * Wind speed [m/s] at height `toHeightM` from wind `windMs` at `fromHeightM` [m] by the neutral logarithmic
+ * profile u(z) ∝ ln((z − d)/z0) with zero-plane displacement `displacementM` d and roughness length
+ * `roughnessM` z0 (FAO-56 eq 4 profile; McMahon et al. 2013 Supplement S4.4 with d = 0). FAO-56 eq 47 is this
+ * with d = 0.08 m, z0 = 0.01476 m (grass of 0.12 m: d = 2h/3, z0 = 0.123h) and z = 2 m.
+ */
+export function windSpeedAtHeightLogProfileMs(
+  windMs: number,
+  fromHeightM: number,
+  toHeightM: number,
+  roughnessM: number,
+  displacementM = 0,
+): number {
+  if (!(windMs >= 0 && windMs < 100))
+    throw new RangeError(`wind speed must be between 0 and 100 m/s, got ${windMs}`)
+  if (!(roughnessM > 0 && roughnessM < 5))
+    throw new RangeError(`roughness length must be between 0 and 5 m, got ${roughnessM}`)
+  for (const [name, z] of [
+    ['measurement height', fromHeightM],
+    ['target height', toHeightM],
+  ] as const) {
+    if (!(z - displacementM > roughnessM && z <= 200)) {
+      throw new RangeError(
+        `${name} must exceed displacement + roughness (${displacementM + roughnessM} m) and be at most 200 m, got ${z}`,
+      )
+    }
+  }
+  return (
+    (windMs * Math.log((toHeightM - displacementM) / roughnessM)) /
+    Math.log((fromHeightM - displacementM) / roughnessM)
+  )
+}
+
+/**
  * Aerodynamic resistance of the FAO-56 grass reference surface [s/m] = 208/u2 (FAO-56 eq 4 with h = 0.12 m,
  * measurements at 2 m; Allen et al. 1998 Box 4). Infinite for calm air.
  */

@@ -15,6 +15,7 @@ import {
   windFunctionPenman1948MmPerDayKpa,
   windFunctionPenman1956MmPerDayKpa,
   windSpeedAt2mMs,
+  windSpeedAtHeightLogProfileMs,
 } from '../../src/physics/evaporation.ts'
 import {
   atmosphericPressureFao56Kpa,
@@ -45,6 +46,13 @@ describe('FAO-56 small examples', () => {
     expect(windSpeedAt2mMs(3.2, 10)).toBeCloseTo(2.4, 1))
   it('Example 18: 2.78 m/s at 10 m → u2 2.078 m/s (eq 47)', () =>
     expect(windSpeedAt2mMs(10 / 3.6, 10)).toBeCloseTo(2.078, 3))
+  it('log profile with grass d = 0.08 m, z0 = 0.01476 m (FAO-56 eq 4 with h = 0.12 m) reproduces eq 47 within 0.2 %', () => {
+    for (const z of [3, 6, 10, 20]) {
+      const u2 = windSpeedAtHeightLogProfileMs(5, z, 2, 0.01476, 0.08)
+      expect(Math.abs(u2 / windSpeedAt2mMs(5, z) - 1)).toBeLessThan(0.002)
+    }
+    expect(() => windSpeedAtHeightLogProfileMs(5, 10, 0.05, 0.1)).toThrow(/target height/)
+  })
   it('eq 8 general form with cp 1.013e-3, ε 0.622, λ 2.45 equals 0.665e-3 P to 0.1 %', () => {
     expect(psychrometricConstantKpaPerC(100, 2.45) / psychrometricConstantFao56KpaPerC(100)).toBeCloseTo(1, 3)
   })
