@@ -10,4 +10,11 @@ import { inspectCommand } from './commands/inspect.ts'
 import { productsCommand } from './commands/products.ts'
 import { serveCommand } from './commands/serve.ts'
 
-export const commands: CliCommand[] = [airCommand, serveCommand, inspectCommand, productsCommand, equilibriumCommand, fitCommand]
+export const commands: CliCommand[] = [
+  airCommand,
+  serveCommand,
+  inspectCommand,
+  productsCommand,
+  equilibriumCommand,
+  fitCommand,
+]
