@@ -79,7 +79,12 @@ export function classifyHeader(name: string): HeaderMeaning {
   if (/ (wet bulb|wetbulb|twb|tw) /.test(n) || n.includes('wet bulb') || n.includes('wetbulb')) {
     return { kind: 'variable', variable: 'wetBulb' }
   }
-  if (/ (rh|relh|hum|humidity|relative humidity|rel hum|rhum|hr) /.test(n) || n.includes('humid')) {
+  if (
+    / (rh|relh|hum|humidity|relative humidity|rel hum|rhum|hr) /.test(n) ||
+    n.includes('humid') ||
+    n.includes('feuchte') ||
+    n.includes('humedad')
+  ) {
     if (/ (abs|absolute|specific|ratio|mixing) /.test(n)) return null
     return { kind: 'variable', variable: 'relativeHumidity' }
   }

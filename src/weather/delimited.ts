@@ -103,6 +103,7 @@ export function readDelimited(
   if (
     t.timestamp === undefined &&
     t.date === undefined &&
+    t.time === undefined &&
     (t.year === undefined || t.month === undefined || t.day === undefined)
   ) {
     throw new WeatherInputError(
@@ -110,6 +111,10 @@ export function readDelimited(
         'or --map date=<column> --map time=<column>, or --map year=… --map month=… --map day=… --map hour=…',
       ['timestamps'],
     )
+  }
+  if (t.timestamp === undefined && t.date === undefined && t.time !== undefined) {
+    t.timestamp = t.time // a lone 'time' column holds date and time
+    t.time = undefined
   }
   const scratch = new Float64Array(1)
   for (let i = 0; i < n; i++) {

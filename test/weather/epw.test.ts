@@ -90,6 +90,8 @@ describe('EPW reader', () => {
   })
 
   it('sub-hourly EPW (DATA PERIODS with 4 records per hour) is refused with a message', () => {
-    expect(() => readWeather(text.replace('DATA PERIODS,1,1,', 'DATA PERIODS,1,4,'))).toThrow(/records per hour/)
+    expect(() => readWeather(text.replace('DATA PERIODS,1,1,', 'DATA PERIODS,1,4,'))).toThrow(
+      /records per hour/,
+    )
   })
 })

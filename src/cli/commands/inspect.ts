@@ -40,7 +40,14 @@ export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
     sourceYears: r.sourceYears,
     timeBasis: r.timeBasis,
     dstEvents: r.dstEvents,
-    columns: r.columns.map((c) => ({ variable: c.variable, source: c.source, unit: c.unit, unitFrom: c.unitFrom, timing: c.timing, missing: c.missing })),
+    columns: r.columns.map((c) => ({
+      variable: c.variable,
+      source: c.source,
+      unit: c.unit,
+      unitFrom: c.unitFrom,
+      timing: c.timing,
+      missing: c.missing,
+    })),
     site: s.site,
     coverage: r.coverage,
     hoursWithoutRow: r.hoursWithoutRow,
@@ -66,19 +73,29 @@ function text(r: WeatherReadResult, file: string): string {
     site.elevationM !== null ? `${site.elevationM} m` : 'elevation unknown',
   ].filter(Boolean)
   out.push(`site        ${where.join(', ')}`)
-  out.push(`period      ${r.period.start} to ${r.period.end} (UTC), ${s.hours} hours, years ${r.years.join(', ')}`)
+  out.push(
+    `period      ${r.period.start} to ${r.period.end} (UTC), ${s.hours} hours, years ${r.years.join(', ')}`,
+  )
   if (r.sourceYears.length > 0) out.push(`            months taken from ${r.sourceYears.join(', ')}`)
   out.push(`time basis  ${r.timeBasis}`)
   for (const e of r.dstEvents) {
-    out.push(`            ${e.kind === 'spring-gap' ? 'clocks forward' : 'clocks back'} at ${e.atUtc}: ${e.rows} row(s) in the ${e.kind === 'spring-gap' ? 'missing' : 'doubled'} hour`)
+    out.push(
+      `            ${e.kind === 'spring-gap' ? 'clocks forward' : 'clocks back'} at ${e.atUtc}: ${e.rows} row(s) in the ${e.kind === 'spring-gap' ? 'missing' : 'doubled'} hour`,
+    )
   }
   out.push('columns')
   const w = Math.max(...r.columns.map((c) => c.variable.length))
   for (const c of r.columns) {
-    out.push(`  ${c.variable.padEnd(w)}  ${c.source}  [${c.unit}, ${c.unitFrom}; ${c.timing}]${c.missing ? `  ${c.missing} missing` : ''}`)
+    out.push(
+      `  ${c.variable.padEnd(w)}  ${c.source}  [${c.unit}, ${c.unitFrom}; ${c.timing}]${c.missing ? `  ${c.missing} missing` : ''}`,
+    )
   }
-  out.push(`rows        read ${r.rows.read}, used ${r.rows.used}, repaired ${r.rows.repaired}, rejected ${r.rows.rejected}`)
-  out.push(`hours       ${r.hoursWithoutRow} without a row, ${r.hoursMissingCore} without dry bulb or humidity (excluded)`)
+  out.push(
+    `rows        read ${r.rows.read}, used ${r.rows.used}, repaired ${r.rows.repaired}, rejected ${r.rows.rejected}`,
+  )
+  out.push(
+    `hours       ${r.hoursWithoutRow} without a row, ${r.hoursMissingCore} without dry bulb or humidity (excluded)`,
+  )
   out.push('coverage    % of hours with dry bulb and humidity')
   const byYear = new Map<number, string[]>()
   for (const c of r.coverage) {
@@ -93,9 +110,14 @@ function text(r: WeatherReadResult, file: string): string {
   if (counts.length > 0) {
     out.push(`problems    ${counts.map(([k, v]) => `${k} ${v}`).join(', ')}`)
     for (const p of r.problems.slice(0, 20)) {
-      out.push(`  ${p.line === null ? '(no row)' : `line ${p.line}`}: ${p.variable ? `${p.variable}: ` : ''}${p.message}`)
+      out.push(
+        `  ${p.line === null ? '(no row)' : `line ${p.line}`}: ${p.variable ? `${p.variable}: ` : ''}${p.message}`,
+      )
     }
-    if (r.problems.length > 20) out.push(`  … ${Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0) - 20} more (--json lists 100)`)
+    if (r.problems.length > 20)
+      out.push(
+        `  … ${Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0) - 20} more (--json lists 100)`,
+      )
   } else out.push('problems    none')
   return `${out.join('\n')}\n`
 }
@@ -142,7 +164,8 @@ export const inspectCommand: CliCommand = {
     }
     const values = parsed.values as Record<string, string | string[] | boolean | undefined>
     const str = (k: string): string | undefined => values[k] as string | undefined
-    if (parsed.positionals.length !== 1) throw new UsageError('give exactly one weather file: dryhours inspect <file>')
+    if (parsed.positionals.length !== 1)
+      throw new UsageError('give exactly one weather file: dryhours inspect <file>')
     const file = parsed.positionals[0]
     const mapping: Partial<Record<MappingKey, ColumnMapping>> = {}
     for (const arg of (values.map as string[] | undefined) ?? []) {
