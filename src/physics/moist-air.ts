@@ -262,12 +262,13 @@ function solveWetBulbBranch(
     const step = (2 * f * q1) / (2 * q1 * q1 - f * q2)
     const next = x - step
     if (next > lo && next < hi) {
-      if (Math.abs(step) < SOLVER_STOP_STEP_C) return next
+      // Stop on a small step, but not across the kink of Ws* at the triple point (ice → liquid pws).
+      if (Math.abs(step) < SOLVER_STOP_STEP_C && next < TRIPLE_POINT_C === ice) return next
       x = next
     } else {
       x = 0.5 * (lo + hi)
-      if (hi - lo < SOLVER_TOLERANCE_C) return x
     }
+    if (hi - lo < SOLVER_TOLERANCE_C) return x
   }
   throw new RangeError(`wet bulb did not converge for dry bulb ${dryBulbC} °C, W ${targetW}`)
 }
