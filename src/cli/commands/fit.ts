@@ -64,32 +64,31 @@ function report(f: WeighingsFit): string {
   return `${lines.join('\n')}\n`
 }
 
+const fitOptions = {
+  'dry-mass': { type: 'string' },
+  'initial-wb': { type: 'string' },
+  'final-wb': { type: 'string' },
+  thickness: { type: 'string' },
+  shape: { type: 'string' },
+  'target-wb': { type: 'string' },
+  product: { type: 'string' },
+  save: { type: 'string' },
+  id: { type: 'string' },
+  json: { type: 'boolean' },
+} as const
+
 export const fitCommand: CliCommand = {
   name: 'fit',
   summary: 'fit drying kinetics to tray weighings (Lewis, Page, diffusion; AICc)',
   help,
   async run(args, io) {
-    let parsed
-    try {
-      parsed = parseArgs({
-        args,
-        options: {
-          'dry-mass': { type: 'string' },
-          'initial-wb': { type: 'string' },
-          'final-wb': { type: 'string' },
-          thickness: { type: 'string' },
-          shape: { type: 'string' },
-          'target-wb': { type: 'string' },
-          product: { type: 'string' },
-          save: { type: 'string' },
-          id: { type: 'string' },
-          json: { type: 'boolean' },
-        },
-        allowPositionals: true,
-      })
-    } catch (e) {
-      throw new UsageError((e as Error).message)
-    }
+    const parsed = (() => {
+      try {
+        return parseArgs({ args, options: fitOptions, allowPositionals: true })
+      } catch (e) {
+        throw new UsageError((e as Error).message)
+      }
+    })()
     const { values, positionals } = parsed
     if (positionals.length !== 1) throw new UsageError('give exactly one weighings CSV file')
     const refs = (['dry-mass', 'initial-wb', 'final-wb'] as const).filter((k) => values[k] !== undefined)
