@@ -67,6 +67,47 @@ export interface HourlyConditionsOptions {
   thresholds: DryingThresholds
   /** Highest product temperature for quality [°C], or null. */
   maxProductTempC: number | null
+  /** Sun and radiation columns of the series, when already computed (shared between methods). */
+  solar?: SolarColumns
+}
+
+/** Per-hour sun and radiation columns of a series, independent of the method. */
+export interface SolarColumns {
+  /** Apparent sun altitude at mid-hour [°] (0 when the site has no coordinates). */
+  altitudeDeg: Float64Array
+  azimuthDeg: Float64Array
+  /** Extraterrestrial horizontal irradiance, hour mean [W/m²]. */
+  raWm2: Float64Array
+  /** Rs/Rso for FAO-56 eq 39, the evening value carried through the night. */
+  rsOverRso: Float64Array
+}
+
+/** Sun position (physics/sun.ts) and FAO-56 extraterrestrial and clear-sky radiation for every hour. */
+export function computeSolarColumns(series: HourlySeries): SolarColumns {
+  const n = series.hours
+  const lat = series.site.latitudeDeg
+  const lon = series.site.longitudeDeg
+  const elevation = series.site.elevationM ?? 0
+  const altitudeDeg = alloc(n)
+  const azimuthDeg = alloc(n)
+  const raWm2 = alloc(n)
+  const rsOverRso = alloc(n)
+  if (lat === null || lon === null) {
+    rsOverRso.fill(0.8)
+    return { altitudeDeg, azimuthDeg, raWm2, rsOverRso }
+  }
+  sunPositionColumns(series.startUtcMs, lat, lon, altitudeDeg, azimuthDeg)
+  const rso = alloc(n)
+  const rs = alloc(n)
+  for (let i = 0; i < n; i++) {
+    const ra = extraterrestrialRadiationForPeriodUtcMjM2(series.startUtcMs[i], lat, lon)
+    raWm2[i] = (ra * 1e6) / 3600
+    rso[i] = clearSkyRadiationFao56(ra, elevation)
+    const g = series.ghiWm2[i]
+    rs[i] = Number.isFinite(g) ? (g * 3600) / 1e6 : Number.NaN
+  }
+  fillNightShortwaveRatioColumn(rs, rso, altitudeDeg, rsOverRso)
+  return { altitudeDeg, azimuthDeg, raWm2, rsOverRso }
 }
 
 export interface HourlyConditions {
@@ -133,31 +174,12 @@ export function computeHourlyConditions(
   const { thresholds, targetDb } = options
   const lat = series.site.latitudeDeg
   const lon = series.site.longitudeDeg
-  const elevation = series.site.elevationM ?? 0
   const hasCoords = lat !== null && lon !== null
   if (method.kind === 'solar-cabinet' && !hasCoords) {
     throw new RangeError('method solar-cabinet needs the site latitude and longitude (the file has none)')
   }
-  const altitude = alloc(n)
-  const azimuth = alloc(n)
-  if (hasCoords) sunPositionColumns(series.startUtcMs, lat, lon, altitude, azimuth)
-  // Rs/Rso for the net longwave term (FAO-56 eq 39), with the evening ratio carried through the night.
-  const rsOverRso = alloc(n)
-  const raWm2 = alloc(n)
-  if (hasCoords) {
-    const rso = alloc(n)
-    const rs = alloc(n)
-    for (let i = 0; i < n; i++) {
-      const ra = extraterrestrialRadiationForPeriodUtcMjM2(series.startUtcMs[i], lat, lon)
-      raWm2[i] = (ra * 1e6) / 3600
-      rso[i] = clearSkyRadiationFao56(ra, elevation)
-      const g = series.ghiWm2[i]
-      rs[i] = Number.isFinite(g) ? (g * 3600) / 1e6 : Number.NaN
-    }
-    fillNightShortwaveRatioColumn(rs, rso, altitude, rsOverRso)
-  } else {
-    rsOverRso.fill(0.8)
-  }
+  const solar = options.solar ?? computeSolarColumns(series)
+  const { altitudeDeg: altitude, azimuthDeg: azimuth, raWm2, rsOverRso } = solar
 
   const airC = alloc(n)
   const airRhPct = alloc(n)

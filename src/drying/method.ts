@@ -28,8 +28,8 @@ export const openAirSchema = z.object({
    * and apricot halves is an assumption from memory (dark, moist surfaces absorb 0.6–0.85).
    */
   absorptivity: fraction('absorptivity').default(0.7),
-  /** Product on the drying surface [kg fresh per m²]. 10 kg/m² is a typical tray load for grapes (from memory). */
-  loadingKgPerM2: z.number().gt(0).max(200).default(10),
+  /** Product on the drying surface [kg fresh per m²]; when absent, the product profile's default loading. */
+  loadingKgPerM2: z.number().gt(0).max(200).optional(),
   /** Product gathered or covered from sunset to sunrise: no drying, no rewetting, no dew. */
   coveredAtNight: z.boolean().default(true),
   /** Product covered during rain: no rain exposure, no drying in that hour. */
@@ -47,7 +47,8 @@ export const openAirSchema = z.object({
 /** Ventilated shade or shed: ambient air, no sun on the product, no rain, reduced wind. */
 export const shadeSchema = z.object({
   kind: z.literal('shade'),
-  loadingKgPerM2: z.number().gt(0).max(200).default(10),
+  /** Product on the drying surface [kg fresh per m²]; when absent, the product profile's default loading. */
+  loadingKgPerM2: z.number().gt(0).max(200).optional(),
   /**
    * Air speed at the product as a fraction of the 2 m wind outside. 0.3 for an open-sided shed is an
    * assumption (from memory, no source).

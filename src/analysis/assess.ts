@@ -1,0 +1,415 @@
+/**
+ * @module analysis/assess
+ * `assess(series, options)`: can this site's weather dry this product by this method, when, how fast,
+ * and with how much supplemental heat. Hourly conditions are computed once per method (and once for the
+ * backup heater) and reused by every batch. Returns a JSON-safe {@link Assessment}.
+ */
+import { FUELS, fuelForHeat } from '../drying/fuels.ts'
+import {
+  computeHourlyConditions,
+  computeSolarColumns,
+  type HourlyConditions,
+} from '../drying/hourly-conditions.ts'
+import {
+  type DryingMethod,
+  type DryingMethodInput,
+  type FuelId,
+  type HeatedMethod,
+  heatedSchema,
+  parseDryingMethod,
+} from '../drying/method.ts'
+import { productResponse } from '../drying/product-response.ts'
+import { tabulatedResponse } from '../drying/product-tables.ts'
+import { type DryingThresholds, parseDryingThresholds } from '../drying/thresholds.ts'
+import { heatOfSorption } from '../product/equilibrium.ts'
+import { moistureDbFromWbPct, waterToRemoveKg } from '../product/moisture-basis.ts'
+import type { ProductProfile } from '../product/profile.ts'
+import type { HourlySeries } from '../weather/series.ts'
+import { ASSESSMENT_SCHEMA, type Assessment, type FuelFigure, type HeatSummary } from './assessment.ts'
+import { assessmentAssumptions } from './assumptions.ts'
+import { localTimeColumns, parseMonthDay } from './local-time.ts'
+import {
+  countMonthly,
+  hourOfDayTable,
+  MONTH_COVERAGE_REQUIRED,
+  monthlyRows,
+  totalReasons,
+} from './monthly-tables.ts'
+import {
+  bestStartWindows,
+  type MonthDay,
+  runStart,
+  type StartContext,
+  type StartOutcome,
+  seasonDays,
+  startDateTable,
+  startIndexFor,
+} from './start-dates.ts'
+import { quantileSorted, roundOrNull, spread } from './statistics.ts'
+
+export interface AssessProgress {
+  stage: 'hourly-conditions' | 'monthly-heat' | 'start-dates' | 'done'
+  done: number
+  total: number
+}
+
+export interface AssessOptions {
+  product: ProductProfile
+  method: DryingMethodInput | DryingMethod
+  /** Target moisture [% wb]; default the profile's. */
+  targetWbPct?: number
+  /** Initial moisture [% wb]; default the profile's. */
+  initialWbPct?: number
+  thicknessMm?: number
+  /** Season of start dates, 'MM-DD'; default the whole year. */
+  seasonStart?: string
+  seasonEnd?: string
+  /** Days between start dates; default 1 when a season is given, else 7. */
+  startStepDays?: number
+  /** Local standard hour at which batches start; default 8. */
+  startHourLocal?: number
+  /** The user's window to finish [days]; default 14. */
+  deadlineDays?: number
+  /** Maximum duration of a batch before it counts as failed [days]; default 60. */
+  maxDays?: number
+  /** Batch size [kg fresh]; default 1000. */
+  batchKgFresh?: number
+  thresholds?: Partial<DryingThresholds>
+  /** Backup heater for supplemental heat (ignored when the method is heated). Defaults of `heatedSchema`. */
+  backupHeater?: Partial<Omit<HeatedMethod, 'kind'>>
+  /** Fuel for the heat figures; default the heater's fuel. */
+  fuel?: FuelId
+  /** Prices per fuel unit; missing prices use the marked examples. */
+  fuelPrices?: Partial<Record<FuelId, number>>
+  onProgress?: (p: AssessProgress) => void
+}
+
+function checkRange(name: string, value: number, lo: number, hi: number, unit: string): void {
+  if (!(value >= lo && value <= hi))
+    throw new RangeError(`${name} must be between ${lo} and ${hi} ${unit}, got ${value}`)
+}
+
+function isoHour(ms: number): string {
+  return new Date(ms).toISOString().slice(0, 13) + ':00Z'
+}
+
+/** Assess one site (one series) for one product and method. Throws RangeError for bad options. */
+export function assess(series: HourlySeries, options: AssessOptions): Assessment {
+  if (series.hours < 24)
+    throw new RangeError(`the weather series must hold at least 24 hours, got ${series.hours}`)
+  const profile = options.product
+  const method = parseDryingMethod(options.method)
+  const thresholds = parseDryingThresholds(options.thresholds ?? {})
+  const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
+  const targetWbPct = options.targetWbPct ?? profile.targetMoistureWbPct.value
+  checkRange('initial moisture', initialWbPct, 1, 95, '% wb')
+  checkRange('target moisture', targetWbPct, 0.5, 90, '% wb')
+  if (!(targetWbPct < initialWbPct)) {
+    throw new RangeError(
+      `target moisture ${targetWbPct} % wb must be below the initial moisture ${initialWbPct} % wb`,
+    )
+  }
+  const deadlineDays = options.deadlineDays ?? 14
+  const maxDays = options.maxDays ?? Math.max(60, deadlineDays)
+  checkRange('deadline', deadlineDays, 0.25, 365, 'days')
+  checkRange('maximum duration', maxDays, deadlineDays, 366, 'days (and at least the deadline)')
+  const batchKgFresh = options.batchKgFresh ?? 1000
+  checkRange('batch size', batchKgFresh, 1, 1e7, 'kg')
+  const startHourLocal = options.startHourLocal ?? 8
+  if (!(Number.isInteger(startHourLocal) && startHourLocal >= 0 && startHourLocal <= 23)) {
+    throw new RangeError(`start hour must be a whole hour from 0 to 23, got ${startHourLocal}`)
+  }
+  const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
+  const seasonStart = parseMonthDay(options.seasonStart ?? '01-01', 'season start')
+  const seasonEnd = parseMonthDay(options.seasonEnd ?? '12-31', 'season end')
+  const stepDays = options.startStepDays ?? (seasonGiven ? 1 : 7)
+
+  const product = tabulatedResponse(productResponse(profile, options.thicknessMm))
+  const initialDb = moistureDbFromWbPct(initialWbPct)
+  const targetDb = moistureDbFromWbPct(targetWbPct)
+  const loadingKgPerM2 =
+    (method.kind === 'open-air' || method.kind === 'shade' ? method.loadingKgPerM2 : undefined) ??
+    profile.defaultLoadingKgPerM2.value
+  const maxT = profile.maxProductTempC?.value ?? null
+  const solar = computeSolarColumns(series)
+  const conditionOptions = {
+    targetDb,
+    initialWbPct,
+    loadingKgPerM2,
+    thresholds,
+    maxProductTempC: maxT,
+    solar,
+  }
+  const progress = options.onProgress
+  progress?.({ stage: 'hourly-conditions', done: 0, total: 2 })
+  const primary = computeHourlyConditions(series, method, product, conditionOptions)
+  const backupMethod: HeatedMethod =
+    method.kind === 'heated' ? method : heatedBackup(options.backupHeater, product.erhPct(25, targetDb))
+  const backup: HourlyConditions =
+    method.kind === 'heated'
+      ? primary
+      : computeHourlyConditions(series, backupMethod, product, conditionOptions)
+  progress?.({ stage: 'hourly-conditions', done: 2, total: 2 })
+
+  const time = localTimeColumns(series)
+  const counts = countMonthly(primary, time)
+  const monthly = monthlyRows(counts)
+  const warnings: string[] = []
+  const ctx: StartContext = {
+    series,
+    utcOffsetHours: time.utcOffsetHours,
+    primary,
+    backup,
+    product,
+    initialDb,
+    targetDb,
+    deadlineHours: Math.round(deadlineDays * 24),
+    maxHours: Math.round(maxDays * 24),
+    startHourLocal,
+    wrap: series.typicalYear,
+  }
+  const years = counts.years
+
+  // Monthly heat: batches from the 1st and 16th of every month.
+  for (let month = 1; month <= 12; month++) {
+    const outcomes: StartOutcome[] = []
+    for (const day of [1, 16]) {
+      for (const year of years) {
+        const index = startIndexFor(ctx, year, { month, day })
+        if (index !== null) outcomes.push(runStart(ctx, index))
+      }
+    }
+    const row = monthly[month - 1]
+    row.supplementalHeatKwhPerTonne = spread(
+      outcomes.map((o) => o.heatKwhPerTonne),
+      1,
+    )
+    if (outcomes.length < 5) row.supplementalHeatKwhPerTonne.p10 = row.supplementalHeatKwhPerTonne.p90 = null
+    const days = outcomes.map((o) => o.hoursToTarget / 24).sort((a, b) => a - b)
+    row.medianDaysToTarget = roundOrNull(quantileSorted(days, 0.5), 1)
+    progress?.({ stage: 'monthly-heat', done: month, total: 12 })
+  }
+
+  const days: MonthDay[] = seasonDays(seasonStart, seasonEnd, stepDays)
+  const table = startDateTable(ctx, days, years, (di) =>
+    progress?.({ stage: 'start-dates', done: di + 1, total: days.length }),
+  )
+  const best = bestStartWindows(table.rows)
+  const heat = heatSummary(table.outcomes, backupMethod, backup, options, batchKgFresh, {
+    profile,
+    initialWbPct,
+    targetWbPct,
+    targetDb,
+    ctx,
+  })
+
+  if (series.typicalYear || years.length < 2) {
+    warnings.push(
+      series.typicalYear
+        ? 'typical-year file: one synthetic year, so spread across years (P10/P90) cannot be computed; the figures describe that one year only'
+        : 'the file holds one year: spread across years (P10/P90) cannot be computed',
+    )
+  } else if (years.length < 10) {
+    warnings.push(`only ${years.length} years of data: P10 and P90 across so few years are rough`)
+  }
+  if (primary.noRainData && method.kind === 'open-air') {
+    warnings.push(
+      'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
+    )
+  }
+  if (time.offsetSource !== 'file') {
+    warnings.push(
+      `the file gives no UTC offset: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'})`,
+    )
+  }
+  if (primary.assumedIrradianceHours > 0) {
+    warnings.push(
+      `${primary.assumedIrradianceHours} daylight hours had no irradiance and were taken as 0 W/m²`,
+    )
+  }
+  if (table.batches === 0) warnings.push('no start date in the season had a complete batch in the data')
+  const reasons = totalReasons(counts)
+  return {
+    schema: ASSESSMENT_SCHEMA,
+    site: {
+      name: series.site.name,
+      latitudeDeg: series.site.latitudeDeg,
+      longitudeDeg: series.site.longitudeDeg,
+      elevationM: series.site.elevationM,
+      utcOffsetHours: time.utcOffsetHours,
+      utcOffsetSource: time.offsetSource,
+      typicalYear: series.typicalYear,
+    },
+    product: {
+      id: profile.id,
+      name: profile.name,
+      initialMoistureWbPct: initialWbPct,
+      targetMoistureWbPct: targetWbPct,
+      targetErhPctAt25C: roundOrNull(product.erhPct(25, targetDb), 1) ?? 0,
+      maxProductTempC: maxT,
+      thicknessMm: product.thicknessMm,
+      loadingKgPerM2,
+      cautions: [...profile.cautions],
+    },
+    method,
+    season: {
+      start: options.seasonStart ?? '01-01',
+      end: options.seasonEnd ?? '12-31',
+      stepDays,
+      startHourLocal,
+    },
+    deadlineDays,
+    maxDays,
+    monthly,
+    hourOfDay: hourOfDayTable(counts),
+    hoursByReason: reasons,
+    startDates: table.rows,
+    bestStartWindows: best.windows,
+    bestStartWindowCriterion: best.criterion,
+    heat,
+    assumptions: assessmentAssumptions(
+      method,
+      backupMethod,
+      thresholds,
+      profile,
+      product.thicknessMm,
+      loadingKgPerM2,
+    ),
+    warnings,
+    coverage: {
+      firstHourUtc: isoHour(series.startUtcMs[0]),
+      lastHourUtc: isoHour(series.startUtcMs[series.hours - 1]),
+      hours: series.hours,
+      missingHours: reasons.missingData,
+      years,
+      monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
+      assumedIrradianceHours: primary.assumedIrradianceHours,
+      assumedWindHours: primary.assumedWindHours,
+      hasRainData: !primary.noRainData,
+      startDateBatchesRun: table.batches,
+      startDateBatchesSkippedForData: table.skipped,
+    },
+  }
+}
+
+/**
+ * The backup heater: the user's values over `heatedSchema` defaults; its target RH is at most 80 % of the
+ * product's equilibrium RH at target (at 25 °C), so heated air always dries toward the target.
+ */
+function heatedBackup(given: AssessOptions['backupHeater'], targetErhPct: number): HeatedMethod {
+  const base = heatedSchema.parse({ kind: 'heated', ...(given ?? {}) })
+  if (base.setPointC === undefined && given?.targetRhPct === undefined) {
+    base.targetRhPct = Math.min(base.targetRhPct, 0.8 * targetErhPct)
+  }
+  return base
+}
+
+interface HeatContext {
+  profile: ProductProfile
+  initialWbPct: number
+  targetWbPct: number
+  targetDb: number
+  ctx: StartContext
+}
+
+function heatSummary(
+  outcomes: StartOutcome[],
+  heater: HeatedMethod,
+  backup: HourlyConditions,
+  options: AssessOptions,
+  batchKgFresh: number,
+  h: HeatContext,
+): HeatSummary {
+  const perTonne = outcomes.map((o) => o.heatKwhPerTonne)
+  const tonnes = batchKgFresh / 1000
+  const eff = heater.heaterEfficiency
+  const s = spread(perTonne, 1)
+  const scale = (x: number | null, f: number): number | null => (x === null ? null : roundOrNull(x * f, 1))
+  const selectedFuel = options.fuel ?? heater.fuel
+  const fuels: FuelFigure[] = (Object.keys(FUELS) as FuelId[]).map((id) => {
+    const price = options.fuelPrices?.[id]
+    const use = s.median === null ? null : fuelForHeat(s.median, eff, id, price)
+    return {
+      fuel: id,
+      unit: FUELS[id].unit,
+      quantityPerTonne: use ? roundOrNull(use.quantity, 2) : null,
+      quantityPerBatch: use ? roundOrNull(use.quantity * tonnes, 2) : null,
+      costPerTonne: use ? roundOrNull(use.cost, 2) : null,
+      costPerBatch: use ? roundOrNull(use.cost * tonnes, 2) : null,
+      pricePerUnit: price ?? FUELS[id].examplePricePerUnit,
+      priceIsExample: price === undefined,
+      heatingValueMjPerUnit: roundOrNull(FUELS[id].heatingValueMjPerUnit, 3) ?? 0,
+      heatingValueSource: FUELS[id].source,
+    }
+  })
+  // Cross-check: water to remove × (λ + net sorption heat at the target) ÷ efficiency.
+  const water = waterToRemoveKg(1000, h.initialWbPct, h.targetWbPct)
+  const meanHeatedC = meanOf(backup.airC)
+  const sorption = heatOfSorption(h.profile, Math.min(Math.max(meanHeatedC, 0), 90), h.targetDb)
+  const evaporationFuelKwh = (water * sorption.totalKjPerKg) / 3600 / eff
+  const heatedOnly = heatedEveryHourSample(h.ctx, 30)
+  const ratio =
+    heatedOnly.length > 0
+      ? quantileSorted(
+          heatedOnly.sort((a, b) => a - b),
+          0.5,
+        ) /
+        eff /
+        evaporationFuelKwh
+      : Number.NaN
+  return {
+    heaterEfficiency: eff,
+    airFlowKgPerSPerTonne: heater.airFlowKgPerSPerTonne,
+    targetRhPct: heater.setPointC === undefined ? roundOrNull(heater.targetRhPct, 1) : null,
+    setPointC: heater.setPointC ?? null,
+    batchKgFresh,
+    heatToAirKwhPerTonne: s,
+    heatToAirKwhPerBatch: {
+      median: scale(s.median, tonnes),
+      p10: scale(s.p10, tonnes),
+      p90: scale(s.p90, tonnes),
+    },
+    fuelHeatKwhPerTonne: {
+      median: scale(s.median, 1 / eff),
+      p10: scale(s.p10, 1 / eff),
+      p90: scale(s.p90, 1 / eff),
+    },
+    fuels,
+    selectedFuel,
+    crossCheck: {
+      waterToRemoveKgPerTonne: roundOrNull(water, 1) ?? 0,
+      heatOfEvaporationKjPerKg: roundOrNull(sorption.totalKjPerKg, 0) ?? 0,
+      heatOfEvaporationMethod: `latent heat of free water 2501 − 2.361·T (FAO-56 form) at the mean heated-air temperature ${meanHeatedC.toFixed(1)} °C, plus ${sorption.method}`,
+      evaporationHeatFuelKwhPerTonne: roundOrNull(evaporationFuelKwh, 1) ?? 0,
+      ratioHeatedEveryHour: roundOrNull(ratio, 2),
+      note: 'A dryer heated every hour spends more than the evaporation heat because its exhaust leaves warm and unsaturated (ratio > 1); supplemental heat can be below it because ambient air does part of the drying.',
+    },
+  }
+}
+
+function meanOf(column: Float64Array): number {
+  let sum = 0
+  let count = 0
+  for (let i = 0; i < column.length; i++) {
+    const v = column[i]
+    if (Number.isFinite(v)) {
+      sum += v
+      count++
+    }
+  }
+  return count > 0 ? sum / count : Number.NaN
+}
+
+/** Heater heat [kWh/t] of up to `count` batches heated every hour, started evenly through the file. */
+function heatedEveryHourSample(ctx: StartContext, count: number): number[] {
+  const out: number[] = []
+  const last = ctx.series.hours - (ctx.wrap ? 1 : ctx.maxHours)
+  if (last <= 0) return out
+  const heated: StartContext = { ...ctx, primary: ctx.backup }
+  for (let k = 0; k < count; k++) {
+    const index = Math.floor((k * last) / count)
+    const o = runStart(heated, index)
+    if (Number.isFinite(o.heatKwhPerTonne)) out.push(o.heatKwhPerTonne)
+  }
+  return out
+}

@@ -1,0 +1,179 @@
+/**
+ * @module analysis/assessment
+ * The `Assessment`: what analysis/ returns and report/ renders. Plain data, JSON-safe (no functions,
+ * no typed arrays, no NaN or Infinity: a figure that cannot be computed is null and a warning says why).
+ */
+import type { DryingMethod, FuelId } from '../drying/method.ts'
+import type { HourStatusName } from '../drying/thresholds.ts'
+import type { Spread } from './statistics.ts'
+
+export const ASSESSMENT_SCHEMA = 'dryhours.assessment/1'
+
+export interface AssessmentSite {
+  name: string
+  latitudeDeg: number | null
+  longitudeDeg: number | null
+  elevationM: number | null
+  /** Offset of the local standard time used for months, hours and start dates [h]. */
+  utcOffsetHours: number
+  utcOffsetSource: 'file' | 'longitude' | 'assumed-utc'
+  typicalYear: boolean
+}
+
+export interface AssessmentProduct {
+  id: string
+  name: string
+  initialMoistureWbPct: number
+  targetMoistureWbPct: number
+  /** Equilibrium RH [%] of the product at its target moisture, at 25 °C (desorption isotherm). */
+  targetErhPctAt25C: number
+  maxProductTempC: number | null
+  thicknessMm: number
+  loadingKgPerM2: number
+  cautions: string[]
+}
+
+export interface YearValue {
+  year: number
+  hours: number
+}
+
+export interface MonthlyRow {
+  month: number
+  /** Usable drying hours in the month: per year and across years (see assumptions for the convention). */
+  usableHours: Spread & { byYear: YearValue[] }
+  /** Usable share of the month's hours with data, all years pooled [0–1]. */
+  usableFraction: number | null
+  /** Hours per reason, median across years. */
+  medianHoursByReason: Record<HourStatusName, number>
+  /** Mean humidity-ratio deficit to the product's equilibrium RH at target, over daylight hours [g/kg]. */
+  meanDaytimeDeficitToTargetGPerKg: number | null
+  /** Mean wet-surface evaporation for exposed methods [kg m⁻² d⁻¹], null for forced air. */
+  meanEvaporationKgPerM2Day: number | null
+  /** Heat to reach the target by the deadline for batches starting on the 1st and 16th [kWh per tonne fresh]. */
+  supplementalHeatKwhPerTonne: Spread
+  /** Median days to target for those batches; null when the median batch does not finish within the maximum duration. */
+  medianDaysToTarget: number | null
+  /** Years with enough data in the month (≥ the stated coverage). */
+  yearsWithData: number
+}
+
+export interface HourOfDayTable {
+  /** Local standard hour 0–23 (start of the hour). */
+  hours: number[]
+  months: number[]
+  /** usableFraction[month − 1][hour], null where there is no data. */
+  usableFraction: (number | null)[][]
+}
+
+export interface StartDateRow {
+  /** 'MM-DD' in local standard time. */
+  start: string
+  /** Years with a complete batch from this start. */
+  years: number
+  daysToTarget: { median: number | null; p90: number | null }
+  /** Share of years finishing within the deadline [0–1]. */
+  probabilityWithinDeadline: number
+  /** Share of years finishing within the maximum duration [0–1]. */
+  probabilityWithinMaxDuration: number
+  rewettingHours: { median: number | null; p90: number | null }
+  rainExposureHours: { median: number | null; p90: number | null }
+  /** Heat into the air to reach the target by the deadline [kWh per tonne fresh]. */
+  supplementalHeat: {
+    medianKwhPerTonne: number | null
+    p90KwhPerTonne: number | null
+    yearsNeedingHeat: number
+  }
+  /** Years in which even heating every hour could not reach the target by the deadline. */
+  yearsNotReachable: number
+}
+
+export interface StartWindow {
+  from: string
+  to: string
+  days: number
+  minProbabilityWithinDeadline: number
+  medianDaysToTarget: number | null
+}
+
+export interface FuelFigure {
+  fuel: FuelId
+  unit: string
+  quantityPerTonne: number | null
+  quantityPerBatch: number | null
+  costPerTonne: number | null
+  costPerBatch: number | null
+  pricePerUnit: number
+  priceIsExample: boolean
+  heatingValueMjPerUnit: number
+  heatingValueSource: string
+}
+
+export interface HeatSummary {
+  /** Heater used for supplemental heat (the method itself when it is heated). */
+  heaterEfficiency: number
+  airFlowKgPerSPerTonne: number
+  targetRhPct: number | null
+  setPointC: number | null
+  batchKgFresh: number
+  /** Across all start dates and years of the season. */
+  heatToAirKwhPerTonne: Spread
+  heatToAirKwhPerBatch: Spread
+  fuelHeatKwhPerTonne: Spread
+  /** Fuel quantity and cost at the median heat, for every fuel. */
+  fuels: FuelFigure[]
+  selectedFuel: FuelId
+  crossCheck: {
+    waterToRemoveKgPerTonne: number
+    /** λ(T) + net heat of sorption at the target moisture [kJ/kg water], and how it was obtained. */
+    heatOfEvaporationKjPerKg: number
+    heatOfEvaporationMethod: string
+    /** Water to remove × heat of evaporation ÷ heater efficiency [kWh fuel heat per tonne]. */
+    evaporationHeatFuelKwhPerTonne: number
+    /** Median fuel heat of batches heated every hour ÷ the figure above (air leaves warm and unsaturated: > 1). */
+    ratioHeatedEveryHour: number | null
+    note: string
+  }
+}
+
+export interface Assumption {
+  name: string
+  value: string
+  source: string
+}
+
+export interface Coverage {
+  firstHourUtc: string
+  lastHourUtc: string
+  hours: number
+  missingHours: number
+  years: number[]
+  /** Minimum share of a month's hours with data for that month-year to enter the statistics. */
+  monthCoverageRequired: number
+  assumedIrradianceHours: number
+  assumedWindHours: number
+  hasRainData: boolean
+  startDateBatchesRun: number
+  startDateBatchesSkippedForData: number
+}
+
+export interface Assessment {
+  schema: typeof ASSESSMENT_SCHEMA
+  site: AssessmentSite
+  product: AssessmentProduct
+  method: DryingMethod
+  season: { start: string; end: string; stepDays: number; startHourLocal: number }
+  deadlineDays: number
+  maxDays: number
+  monthly: MonthlyRow[]
+  hourOfDay: HourOfDayTable
+  /** Hours per reason over the whole file. */
+  hoursByReason: Record<HourStatusName, number>
+  startDates: StartDateRow[]
+  bestStartWindows: StartWindow[]
+  bestStartWindowCriterion: string
+  heat: HeatSummary
+  assumptions: Assumption[]
+  warnings: string[]
+  coverage: Coverage
+}

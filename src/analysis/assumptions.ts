@@ -1,0 +1,160 @@
+/**
+ * @module analysis/assumptions
+ * Every threshold, default and model choice behind an assessment, stated with its source, so that a
+ * reader can see (and change) what the figures rest on.
+ */
+import type { DryingMethod, HeatedMethod } from '../drying/method.ts'
+import { type DryingThresholds, HOUR_STATUS_MEANINGS } from '../drying/thresholds.ts'
+import type { ProductProfile } from '../product/profile.ts'
+import type { Assumption } from './assessment.ts'
+import { MONTH_COVERAGE_REQUIRED } from './monthly-tables.ts'
+import { GOOD_START_PROBABILITY } from './start-dates.ts'
+import { PERCENTILE_CONVENTION } from './statistics.ts'
+
+function methodAssumptions(method: DryingMethod): Assumption[] {
+  switch (method.kind) {
+    case 'open-air':
+      return [
+        {
+          name: 'absorptivity',
+          value: String(method.absorptivity),
+          source: 'assumption for dark moist fruit (from memory)',
+        },
+        {
+          name: 'product surface per tray area',
+          value: String(method.surfaceAreaPerTrayArea),
+          source: 'own estimate for a single layer of 17 mm berries at 10 kg/m²',
+        },
+        {
+          name: 'covered at night / in rain',
+          value: `${method.coveredAtNight} / ${method.coveredInRain}`,
+          source: 'common practice for fruit and grain, no source',
+        },
+        {
+          name: 'product temperature in sun',
+          value: 'T_air + α·G/((hc + hr)·surface ratio), hc = 2.8 + 3.0·u, hr = 4·0.9·σ·T³',
+          source: 'Watmuff et al. 1977 via Duffie & Beckman 2013 §3.15 (from memory); emissivity 0.9 assumed',
+        },
+        {
+          name: 'wet-surface evaporation',
+          value: 'Penman combination equation, Rn = α·G − Rnl (FAO-56 eq 39), Penman 1948 wind function',
+          source: 'Penman 1948; McMahon et al. 2013 HESS 17:1331 Suppl. S4.11, S11.23',
+        },
+      ]
+    case 'shade':
+      return [
+        {
+          name: 'air speed at the product',
+          value: `max(${method.minimumAirSpeedMs} m/s, ${method.windFraction} × u2)`,
+          source: 'assumption, no source',
+        },
+        { name: 'wet-surface evaporation', value: 'Penman with Rn = 0 (no sun)', source: 'Penman 1948' },
+      ]
+    case 'solar-cabinet':
+      return [
+        {
+          name: 'collector',
+          value: `${method.collectorAreaM2PerTonne} m²/t, tilt ${method.tiltDeg}°, FR(τα) ${method.frTauAlpha}, FR·UL ${method.frUlWm2K} W m⁻² K⁻¹, ${method.airFlowKgPerSPerM2} kg s⁻¹ m⁻²`,
+          source:
+            'Hottel–Whillier–Bliss (Duffie & Beckman 2013 ch. 6) with inlet = ambient; single-glazed air-heater mid-range (from memory)',
+        },
+        {
+          name: 'irradiance on the collector',
+          value: 'Erbs diffuse split, Liu–Jordan isotropic sky',
+          source: 'Erbs, Klein & Duffie 1982; Liu & Jordan 1963',
+        },
+        {
+          name: 'fans',
+          value: method.fansOnlyInSun ? 'run only while the collector gains heat' : 'run every hour',
+          source: 'method setting',
+        },
+      ]
+    case 'heated':
+      return []
+  }
+}
+
+export function assessmentAssumptions(
+  method: DryingMethod,
+  heater: HeatedMethod,
+  t: DryingThresholds,
+  profile: ProductProfile,
+  thicknessMm: number,
+  loadingKgPerM2: number,
+): Assumption[] {
+  const list: Assumption[] = [
+    { name: 'percentiles', value: PERCENTILE_CONVENTION, source: 'Hyndman & Fan 1996, Am. Stat. 50:361' },
+    {
+      name: 'usable drying hour',
+      value:
+        'the air at the product (at the product temperature) has an equilibrium moisture below the target, a humidity-ratio deficit to the equilibrium RH at target of at least the threshold, no rain on an exposed product, and the product temperature within its limits',
+      source: 'dryhours model, model.md §4',
+    },
+    ...Object.entries(HOUR_STATUS_MEANINGS).map(([name, meaning]) => ({
+      name: `reason ${name}`,
+      value: meaning,
+      source: 'definition',
+    })),
+    {
+      name: 'minimum product temperature',
+      value: `${t.minProductTempC} °C`,
+      source: 'common practice, no source',
+    },
+    { name: 'minimum deficit', value: `${t.minDeficitGPerKg} g/kg`, source: 'assumption, no source' },
+    { name: 'rain threshold', value: `${t.rainMm} mm/h`, source: 'tipping-bucket resolution (from memory)' },
+    {
+      name: 'night sky cooling of exposed surfaces',
+      value: `${t.nightSurfaceCoolingK} K`,
+      source: 'common practice, no source',
+    },
+    { name: 'night', value: `sun altitude below ${t.nightSunAltitudeDeg}°`, source: 'suncalc 2 convention' },
+    {
+      name: 'month coverage',
+      value: `a month-year enters the statistics with at least ${MONTH_COVERAGE_REQUIRED * 100} % of its hours`,
+      source: 'assumption',
+    },
+    {
+      name: 'isotherm',
+      value: `${profile.isotherm.desorption.equation.model} (desorption)${profile.isotherm.adsorption ? `, ${profile.isotherm.adsorption.equation.model} (adsorption)` : ', same constants for rewetting'}`,
+      source: profile.isotherm.desorption.source,
+    },
+    {
+      name: 'kinetics',
+      value: `${profile.kinetics.equation.model}, stepped by equivalent time, at ${thicknessMm} mm`,
+      source: profile.kinetics.source,
+    },
+    {
+      name: 'rewetting',
+      value: `first order toward the adsorption equilibrium at ${profile.kinetics.rewettingRateFactor.value} × the drying rate`,
+      source: profile.kinetics.rewettingRateFactor.source,
+    },
+    {
+      name: 'constant-rate limit',
+      value:
+        'water removed per hour ≤ wet-surface evaporation per m² ÷ dry matter per m² (exposed) or ≤ deficit to saturation × air mass (forced air)',
+      source: 'model.md §5',
+    },
+    { name: 'loading', value: `${loadingKgPerM2} kg fresh per m²`, source: 'method or product default' },
+    {
+      name: 'supplemental heat',
+      value: `a forced-air dryer at ${heater.airFlowKgPerSPerTonne} kg dry air s⁻¹ t⁻¹ heated ${heater.setPointC !== undefined ? `to ${heater.setPointC} °C` : `to ${heater.targetRhPct.toFixed(0)} % RH`} (capped at the product limit), used in every hour the method's own air does not dry; if that misses the deadline, heated every hour`,
+      source: 'model.md §6; defaults of the heated method (assumptions)',
+    },
+    {
+      name: 'heater efficiency',
+      value: `${heater.heaterEfficiency} of the fuel's higher heating value reaches the air`,
+      source: 'indirect-fired mid-range (drying-science.md §4.2, from memory)',
+    },
+    {
+      name: 'best start windows',
+      value: `runs of start dates finishing within the deadline in ≥ ${GOOD_START_PROBABILITY * 100} % of years`,
+      source: 'assumption',
+    },
+    {
+      name: 'fuel prices',
+      value: 'examples only unless given; not market data',
+      source: 'user input',
+    },
+  ]
+  return [...list, ...methodAssumptions(method)]
+}

@@ -1,0 +1,230 @@
+/**
+ * @module analysis/start-dates
+ * The start-date table: for each start day of a season, one batch per year from the same local hour,
+ * with the supplemental heat needed to finish by the deadline; the best start windows; and the batches
+ * from the 1st and 16th of every month for the monthly heat column. Every batch reuses the hourly
+ * conditions computed once per method.
+ */
+import type { HourlyConditions } from '../drying/hourly-conditions.ts'
+import type { ProductResponse } from '../drying/product-response.ts'
+import { type HeatStrategy, supplementalHeat } from '../drying/supplemental-heat.ts'
+import type { HourlySeries } from '../weather/series.ts'
+import type { StartDateRow, StartWindow } from './assessment.ts'
+import { quantileSorted, roundOrNull } from './statistics.ts'
+
+/** Windows are runs of start days whose probability of finishing within the deadline is at least this (assumption). */
+export const GOOD_START_PROBABILITY = 0.8
+
+export interface StartContext {
+  series: HourlySeries
+  utcOffsetHours: number
+  primary: HourlyConditions
+  backup: HourlyConditions
+  product: ProductResponse
+  initialDb: number
+  targetDb: number
+  deadlineHours: number
+  maxHours: number
+  startHourLocal: number
+  /** Typical year: batches wrap from the end of the file to its start. */
+  wrap: boolean
+}
+
+export interface StartOutcome {
+  /** Hours to target by the method alone; +Infinity when not within the maximum duration. */
+  hoursToTarget: number
+  withinDeadline: boolean
+  rewettingHours: number
+  rainExposureHours: number
+  /** Heat into the air to finish by the deadline [kWh/t]; NaN when not reachable. */
+  heatKwhPerTonne: number
+  strategy: HeatStrategy
+}
+
+export interface MonthDay {
+  month: number
+  day: number
+}
+
+const pad = (x: number): string => String(x).padStart(2, '0')
+export const formatMonthDay = (d: MonthDay): string => `${pad(d.month)}-${pad(d.day)}`
+
+/** Start days from `start` to `end` inclusive (wrapping the year end), every `stepDays`; 29 Feb skipped. */
+export function seasonDays(start: MonthDay, end: MonthDay, stepDays: number): MonthDay[] {
+  if (!(Number.isInteger(stepDays) && stepDays >= 1 && stepDays <= 365)) {
+    throw new RangeError(`start-date step must be a whole number of days from 1 to 365, got ${stepDays}`)
+  }
+  const ref = 2001 // a non-leap year
+  const startMs = Date.UTC(ref, start.month - 1, start.day)
+  let endMs = Date.UTC(ref, end.month - 1, end.day)
+  if (endMs < startMs) endMs = Date.UTC(ref + 1, end.month - 1, end.day)
+  const days: MonthDay[] = []
+  for (let t = startMs; t <= endMs; t += stepDays * 86_400_000) {
+    const d = new Date(t)
+    days.push({ month: d.getUTCMonth() + 1, day: d.getUTCDate() })
+  }
+  return days
+}
+
+/** Index of the hour starting at local standard `hour` on year-month-day, or null when outside the series. */
+export function startIndexFor(ctx: StartContext, year: number, d: MonthDay): number | null {
+  if (d.month === 2 && d.day === 29) return null
+  const utcMs = Date.UTC(year, d.month - 1, d.day, ctx.startHourLocal) - ctx.utcOffsetHours * 3_600_000
+  const index = Math.round((utcMs - ctx.series.startUtcMs[0]) / 3_600_000)
+  if (index < 0 || index >= ctx.series.hours) return null
+  if (!ctx.wrap && index + ctx.maxHours > ctx.series.hours) return null
+  return index
+}
+
+/** One batch from hour `index`: the method alone, then the heat needed by the deadline. */
+export function runStart(ctx: StartContext, index: number): StartOutcome {
+  const r = supplementalHeat(
+    ctx.primary,
+    ctx.backup,
+    ctx.product,
+    {
+      startIndex: index,
+      maxHours: ctx.maxHours,
+      initialDb: ctx.initialDb,
+      targetDb: ctx.targetDb,
+      wrap: ctx.wrap,
+    },
+    ctx.deadlineHours,
+  )
+  const hours = r.natural.reached ? r.natural.hoursToTarget : Number.POSITIVE_INFINITY
+  return {
+    hoursToTarget: hours,
+    withinDeadline: hours <= ctx.deadlineHours,
+    rewettingHours: r.natural.rewettingHours,
+    rainExposureHours: r.natural.rainExposureHours,
+    heatKwhPerTonne: r.heatKwhPerTonne,
+    strategy: r.strategy,
+  }
+}
+
+function sortedFinite(values: number[]): number[] {
+  return values.filter((v) => !Number.isNaN(v)).sort((a, b) => a - b)
+}
+
+function medianP90(values: number[], digits: number): { median: number | null; p90: number | null } {
+  const s = sortedFinite(values)
+  return {
+    median: roundOrNull(quantileSorted(s, 0.5), digits),
+    p90: roundOrNull(quantileSorted(s, 0.9), digits),
+  }
+}
+
+/** Summarise the outcomes of one start day across years. */
+export function startDateRow(start: MonthDay, outcomes: StartOutcome[]): StartDateRow {
+  const n = outcomes.length
+  const days = outcomes.map((o) => o.hoursToTarget / 24)
+  const heat = outcomes.map((o) => o.heatKwhPerTonne)
+  return {
+    start: formatMonthDay(start),
+    years: n,
+    daysToTarget: medianP90(days, 1),
+    probabilityWithinDeadline:
+      n > 0 ? (roundOrNull(outcomes.filter((o) => o.withinDeadline).length / n, 3) ?? 0) : 0,
+    probabilityWithinMaxDuration:
+      n > 0 ? (roundOrNull(outcomes.filter((o) => Number.isFinite(o.hoursToTarget)).length / n, 3) ?? 0) : 0,
+    rewettingHours: medianP90(
+      outcomes.map((o) => o.rewettingHours),
+      0,
+    ),
+    rainExposureHours: medianP90(
+      outcomes.map((o) => o.rainExposureHours),
+      0,
+    ),
+    supplementalHeat: {
+      medianKwhPerTonne: medianP90(heat, 1).median,
+      p90KwhPerTonne: medianP90(heat, 1).p90,
+      yearsNeedingHeat: outcomes.filter((o) => o.strategy !== 'none-needed').length,
+    },
+    yearsNotReachable: outcomes.filter((o) => o.strategy === 'not-reachable').length,
+  }
+}
+
+export interface StartTableResult {
+  rows: StartDateRow[]
+  /** Every outcome, for season-wide heat figures. */
+  outcomes: StartOutcome[]
+  batches: number
+  skipped: number
+}
+
+/** Run every start day × year. `onBatch` is called after each start day with the number of batches so far. */
+export function startDateTable(
+  ctx: StartContext,
+  days: MonthDay[],
+  years: number[],
+  onDay?: (dayIndex: number) => void,
+): StartTableResult {
+  const rows: StartDateRow[] = []
+  const all: StartOutcome[] = []
+  let batches = 0
+  let skipped = 0
+  days.forEach((d, di) => {
+    const outcomes: StartOutcome[] = []
+    for (const year of years) {
+      const index = startIndexFor(ctx, year, d)
+      if (index === null) {
+        skipped++
+        continue
+      }
+      outcomes.push(runStart(ctx, index))
+      batches++
+    }
+    rows.push(startDateRow(d, outcomes))
+    all.push(...outcomes)
+    onDay?.(di)
+  })
+  return { rows, outcomes: all, batches, skipped: ctx.wrap ? 0 : skipped - countMissingLeapDays(days, years) }
+}
+
+function countMissingLeapDays(days: MonthDay[], years: number[]): number {
+  return days.some((d) => d.month === 2 && d.day === 29) ? years.length : 0
+}
+
+/**
+ * Best start windows: runs of consecutive start rows with probability within the deadline ≥
+ * {@link GOOD_START_PROBABILITY}; when none reaches it, runs at the season's highest probability (within
+ * 0.05). Ranked by their lowest probability, then by median days to target. At most 3.
+ */
+export function bestStartWindows(rows: StartDateRow[]): { windows: StartWindow[]; criterion: string } {
+  const withYears = rows.filter((r) => r.years > 0)
+  if (withYears.length === 0) return { windows: [], criterion: 'no start date had a complete batch' }
+  const best = Math.max(...withYears.map((r) => r.probabilityWithinDeadline))
+  const threshold = best >= GOOD_START_PROBABILITY ? GOOD_START_PROBABILITY : Math.max(best - 0.05, 0)
+  const criterion =
+    best >= GOOD_START_PROBABILITY
+      ? `consecutive start dates whose batches finish within the deadline in at least ${GOOD_START_PROBABILITY * 100} % of years`
+      : `no start date reaches ${GOOD_START_PROBABILITY * 100} % of years within the deadline; windows at the best probability found (${Math.round(best * 100)} %, within 5 points)`
+  if (best <= 0) return { windows: [], criterion: 'no start date finishes within the deadline in any year' }
+  const windows: StartWindow[] = []
+  let run: StartDateRow[] = []
+  const flush = (): void => {
+    if (run.length === 0) return
+    const medians = run.map((r) => r.daysToTarget.median ?? Number.POSITIVE_INFINITY).sort((a, b) => a - b)
+    windows.push({
+      from: run[0].start,
+      to: run[run.length - 1].start,
+      days: run.length,
+      minProbabilityWithinDeadline: Math.min(...run.map((r) => r.probabilityWithinDeadline)),
+      medianDaysToTarget: roundOrNull(quantileSorted(medians, 0.5), 1),
+    })
+    run = []
+  }
+  for (const r of rows) {
+    if (r.years > 0 && r.probabilityWithinDeadline >= threshold) run.push(r)
+    else flush()
+  }
+  flush()
+  windows.sort(
+    (a, b) =>
+      b.minProbabilityWithinDeadline - a.minProbabilityWithinDeadline ||
+      (a.medianDaysToTarget ?? Number.POSITIVE_INFINITY) -
+        (b.medianDaysToTarget ?? Number.POSITIVE_INFINITY) ||
+      b.days - a.days,
+  )
+  return { windows: windows.slice(0, 3), criterion }
+}
