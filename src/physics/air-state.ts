@@ -17,6 +17,7 @@ import {
   moistAirSpecificVolumeM3PerKg,
   STANDARD_PRESSURE_KPA,
   standardPressureKpaAtElevation,
+  VAPOR_PRESSURE_MIN_KPA,
   vaporPressureFromHumidityRatio,
   wetBulbFromHumidityRatioC,
 } from './moist-air.ts'
@@ -118,6 +119,17 @@ export function airState(input: AirStateInput): AirState {
       )
     }
     vaporPressureKpa = vaporPressureFromHumidityRatio(wG / 1000, pressureKpa)
+  }
+  if (!(vaporPressureKpa >= VAPOR_PRESSURE_MIN_KPA)) {
+    const [name, value] =
+      input.relativeHumidityPct !== undefined
+        ? ['relative humidity', `${input.relativeHumidityPct} %`]
+        : input.wetBulbC !== undefined
+          ? ['wet bulb', `${input.wetBulbC} °C`]
+          : ['humidity ratio', `${input.humidityRatioGPerKg} g/kg`]
+    throw new RangeError(
+      `${name} ${value} at ${dryBulbC} °C gives a dew point below -100 °C, outside ASHRAE HOF 2017 ch. 1 eqs 5–6`,
+    )
   }
   if (vaporPressureKpa > pwsLiquidKpa * (1 + 1e-9)) {
     throw new RangeError(`the humidity given is above saturation at ${dryBulbC} °C`)

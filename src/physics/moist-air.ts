@@ -150,6 +150,7 @@ export function saturationTemperatureFromLnPressureC(lnVaporPressurePa: number, 
     if (next < SATURATION_MIN_C) next = (tC + SATURATION_MIN_C) / 2
     else if (next > SATURATION_MAX_C) next = (tC + SATURATION_MAX_C) / 2
     else if (Math.abs(step) < SOLVER_STOP_STEP_C) return next
+    if (Math.abs(next - tC) < SOLVER_TOLERANCE_C) return next
     tC = next
   }
   throw new RangeError(
@@ -157,16 +158,23 @@ export function saturationTemperatureFromLnPressureC(lnVaporPressurePa: number, 
   )
 }
 
-/** Lowest vapour pressure the dew/frost point solvers accept [kPa]: saturation over ice at −100 °C (eq 5). */
+/**
+ * Lowest vapour pressure with a dew point over liquid water in the range of eqs 5–6 [kPa]: pws over
+ * liquid water at −100 °C (eq 6). Lower vapour pressures have no dew point the formulas can give.
+ */
 export const VAPOR_PRESSURE_MIN_KPA =
+  Math.exp(lnSaturationPressureLiquidPa(SATURATION_MIN_C + KELVIN_OFFSET)) / 1000
+/** Lowest vapour pressure with a frost point in range [kPa]: pws over ice at −100 °C (eq 5). */
+const VAPOR_PRESSURE_MIN_ICE_KPA =
   Math.exp(lnSaturationPressureIcePa(SATURATION_MIN_C + KELVIN_OFFSET)) / 1000
-/** Highest vapour pressure the dew/frost point solvers accept [kPa]. */
-export const VAPOR_PRESSURE_MAX_KPA = 1000
+/** Highest vapour pressure the dew-point solver accepts [kPa]: pws at 200 °C (eq 6). */
+export const VAPOR_PRESSURE_MAX_KPA =
+  Math.exp(lnSaturationPressureLiquidPa(SATURATION_MAX_C + KELVIN_OFFSET)) / 1000
 
-function checkVaporPressure(vaporPressureKpa: number): void {
-  if (!(vaporPressureKpa >= VAPOR_PRESSURE_MIN_KPA && vaporPressureKpa < VAPOR_PRESSURE_MAX_KPA)) {
+function checkVaporPressure(vaporPressureKpa: number, minKpa: number): void {
+  if (!(vaporPressureKpa >= minKpa && vaporPressureKpa <= VAPOR_PRESSURE_MAX_KPA)) {
     throw new RangeError(
-      `vapour pressure must be between ${VAPOR_PRESSURE_MIN_KPA.toExponential(3)} and ${VAPOR_PRESSURE_MAX_KPA} kPa, got ${vaporPressureKpa}`,
+      `vapour pressure must be between ${minKpa.toExponential(3)} and ${VAPOR_PRESSURE_MAX_KPA.toFixed(0)} kPa (saturation at ${SATURATION_MIN_C} and ${SATURATION_MAX_C} °C), got ${vaporPressureKpa}`,
     )
   }
 }
@@ -176,7 +184,7 @@ function checkVaporPressure(vaporPressureKpa: number): void {
  * point (WMO), which below 0 °C refers to supercooled water. Example: 1.0 kPa → 6.98 °C.
  */
 export function dewPointFromVaporPressureC(vaporPressureKpa: number): number {
-  checkVaporPressure(vaporPressureKpa)
+  checkVaporPressure(vaporPressureKpa, VAPOR_PRESSURE_MIN_KPA)
   return saturationTemperatureFromLnPressureC(Math.log(vaporPressureKpa * 1000), false)
 }
 
@@ -185,7 +193,7 @@ export function dewPointFromVaporPressureC(vaporPressureKpa: number): number {
  * below the triple point; above it this returns the dew point over liquid water (ASHRAE convention).
  */
 export function frostPointFromVaporPressureC(vaporPressureKpa: number): number {
-  checkVaporPressure(vaporPressureKpa)
+  checkVaporPressure(vaporPressureKpa, VAPOR_PRESSURE_MIN_ICE_KPA)
   const lnPa = Math.log(vaporPressureKpa * 1000)
   const ice = saturationTemperatureFromLnPressureC(lnPa, true)
   return ice < TRIPLE_POINT_C ? ice : saturationTemperatureFromLnPressureC(lnPa, false)
@@ -352,9 +360,11 @@ export function wetBulbWithDewPointC(
     }
     const lo = Math.max(dew - 1, SATURATION_MIN_C)
     const start = chordStartC(t, w, false, dew, w, 0, ws0)
-    return solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start)
+    return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start), dew)
   }
   const lo = Math.max(dew - 1, SATURATION_MIN_C)
   const start = chordStartC(t, w, false, dew, w, t, saturationHumidityRatio(t, pressureKpa))
-  return solveWetBulbBranch(t, w, pressureKpa, false, lo, t, start)
+  // The root is at or above the dew/frost point (ASHRAE eq 35 at t* = dew gives W* ≤ W), so clamping
+  // there only removes the bisection's last 1e-5 °C.
+  return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, t, start), dew)
 }
