@@ -47,7 +47,9 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
     // → intercept 4.6 + 0.5 − 0.84 + 1.54 = 5.80, W 0.12 per g/kg, T −0.05 per K, load −0.14 per t.
     const truth = [5.8, 0.12, -0.05, -0.14]
     const coefficients = assessment.adjusted!.regression.coefficients
-    coefficients.forEach((c, j) => expect(Math.abs(c.estimate - truth[j])).toBeLessThan(3 * c.standardError))
+    coefficients.forEach((c, j) => {
+      expect(Math.abs(c.estimate - truth[j])).toBeLessThan(3 * c.standardError)
+    })
     expect(assessment.adjusted!.regression.rSquared).toBeGreaterThan(0.8)
   })
   it('the residual chart flags the step change in fewer batches than the raw chart (measured)', () => {
