@@ -101,8 +101,8 @@ export const fishFilletsSalted: ProductProfile = {
   ),
   isotherm: {
     desorption: isotherm(
-      gab(0.12, 1.5, 1.0),
-      'type III GAB (Xm 0.12, C 1.5, K 1.0) from memory; the real behaviour is isohalic (Curran & Poulter 1983; Doe et al. 1983): aw near 0.75 while salt-saturated',
+      gab(0.16454, 1.5, 1.0),
+      'type III GAB, C 1.5 and K 1.0 from memory, Xm 0.16454 set by dryhours so that aw = 0.75 at the 35 % wb target (saturated-brine aw, ICAR e-course); the real behaviour is isohalic (Curran & Poulter 1983; Doe et al. 1983): aw near 0.75 while salt-saturated',
       'memory',
       [20, 40],
       [10, 75],

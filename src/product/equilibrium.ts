@@ -6,6 +6,7 @@
  * *LWT* 37:429): q_net = −R·∂ln aw/∂(1/T) at constant moisture.
  */
 import { emcDb, erhPct, GAS_CONSTANT_J_PER_MOL_K } from './isotherm-models.ts'
+import { moistureWbPctFromDb } from './moisture-basis.ts'
 import { isothermFor, type ProductProfile } from './profile.ts'
 
 export type SorptionDirection = 'desorption' | 'adsorption'
@@ -80,4 +81,24 @@ export function heatOfSorption(
     totalKjPerKg: latentHeatFreeWaterKjPerKg(tC) + netKjPerKg,
     method: `Clausius–Clapeyron on the ${isothermFor(profile, direction).equation.model} ${direction} isotherm, ±1 K`,
   }
+}
+
+/**
+ * The moisture [% wb] at which the product reaches its water-activity target at tC [°C] (desorption
+ * isotherm), and the stricter (lower) of that and the profile's target moisture. The two differ where the
+ * trade's moisture limit and the isotherm disagree (e.g. rough rice at 14 % wb sits near aw 0.74 at 25 °C).
+ */
+export function safeMoistureWbPct(
+  profile: ProductProfile,
+  tC: number,
+): {
+  atWaterActivityTargetWbPct: number
+  stricterWbPct: number
+} {
+  const aw = profile.waterActivityTarget.value
+  const at =
+    aw >= 1
+      ? profile.targetMoistureWbPct.value
+      : moistureWbPctFromDb(equilibriumMoistureDb(profile, tC, 100 * aw, 'desorption'))
+  return { atWaterActivityTargetWbPct: at, stricterWbPct: Math.min(at, profile.targetMoistureWbPct.value) }
 }

@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest'
+import { productById } from '../../src/product/catalogue.ts'
+import { equilibriumMoistureDb } from '../../src/product/equilibrium.ts'
+import { emcDb } from '../../src/product/isotherm-models.ts'
+import { moistureWbPctFromDb } from '../../src/product/moisture-basis.ts'
+
+const wb = (id: string, tC: number, rh: number) =>
+  moistureWbPctFromDb(equilibriumMoistureDb(productById(id), tC, rh))
+
+// Wikipedia, "Equilibrium moisture content", grain EMC table (% wb) at 1.7/10/21.1/37.8 °C (35/50/70/100 °F).
+const T = [1.7, 10, 21.1, 37.8]
+const WIKI: Record<string, Record<number, number[]>> = {
+  corn: {
+    25: [9.3, 8.6, 7.9, 7.1],
+    30: [10.3, 9.5, 8.7, 7.8],
+    35: [11.2, 10.4, 9.5, 8.5],
+    40: [12.1, 11.2, 10.3, 9.2],
+  },
+  rice: { 25: [9.2, 8.6, 8.0, 7.3], 30: [10.1, 9.5, 8.8, 8.0], 35: [10.9, 10.3, 9.5, 8.7] },
+}
+
+describe('shelled corn, modified Chung–Pfost (Chen & Morey 1989, ASAE D245.6 constants)', () => {
+  it('15.6 °C, 80 % RH → 16.1 % wb (extension value quoted in the reference, ±0.1 pt)', () => {
+    expect(Math.abs(wb('shelled-corn', 15.6, 80) - 16.1)).toBeLessThan(0.1)
+  })
+  it('21.1 °C, 50 % RH → 11.3 % wb (University of Kentucky EMC chart, McNeill) within 0.4 pt', () => {
+    expect(Math.abs(wb('shelled-corn', 21.1, 50) - 11.3)).toBeLessThan(0.4)
+  })
+  // measured: largest deviation 0.77 pt at 1.7 °C/25 % (Chung–Pfost is weakest at low RH and cold), others ≤ 0.53
+  it('Wikipedia corn table at RH 25–40 %, all four temperatures, within 0.8 pt', () => {
+    for (const [rh, row] of Object.entries(WIKI.corn)) {
+      T.forEach((t, i) => expect(Math.abs(wb('shelled-corn', t, Number(rh)) - row[i])).toBeLessThan(0.8))
+    }
+  })
+})
+
+describe('shelled corn, modified Henderson (constants 8.6541e-5, 1.8634, 49.81, reference §1.2)', () => {
+  it('15.6 °C, 80 % → 17.2 % wb, the published Henderson–Thompson EMC grid value (±0.1 pt)', () => {
+    const db = emcDb({ model: 'modified-henderson', a: 8.6541e-5, b: 1.8634, c: 49.81 }, 15.6, 80)
+    expect(Math.abs(moistureWbPctFromDb(db) - 17.2)).toBeLessThan(0.1)
+  })
+})
+
+describe('rough rice, modified Henderson (1.9187e-5, 2.4451, 51.161; constants from memory)', () => {
+  it('Wikipedia long-grain rice table at RH 25–35 %, 1.7–37.8 °C, within 0.3 pt (measured max 0.28)', () => {
+    for (const [rh, row] of Object.entries(WIKI.rice)) {
+      T.forEach((t, i) => expect(Math.abs(wb('rough-rice', t, Number(rh)) - row[i])).toBeLessThan(0.3))
+    }
+  })
+})
+
+describe('wheat, modified Chung–Pfost (Storage of Cereal Grains, 5th ed., p. 272)', () => {
+  it('32.2 °C (90 °F), 50 % RH → 10.8 % wb for soft red winter wheat (extension table), within 0.5 pt', () => {
+    expect(Math.abs(wb('wheat', 32.2, 50) - 10.8)).toBeLessThan(0.5)
+  })
+})
+
+describe('soybean and sorghum, fitted by dryhours to the Wikipedia table (fit quality, not an independent check)', () => {
+  it('soybean within 0.1 pt of the table and 21.1 °C/50 % → 8.8 % (Kentucky chart)', () => {
+    expect(Math.abs(wb('soybean', 21.1, 25) - 5.5)).toBeLessThan(0.1)
+    expect(Math.abs(wb('soybean', 37.8, 40) - 6.9)).toBeLessThan(0.1)
+    expect(Math.abs(wb('soybean', 21.1, 50) - 8.8)).toBeLessThan(0.1)
+  })
+  it('sorghum within 0.1 pt at the table corners', () => {
+    expect(Math.abs(wb('sorghum', 1.7, 25) - 11.5)).toBeLessThan(0.1)
+    expect(Math.abs(wb('sorghum', 37.8, 40) - 11.1)).toBeLessThan(0.1)
+  })
+})
+
+describe('domain errors instead of NaN', () => {
+  const corn = productById('shelled-corn')
+  it('RH 0 and 100 % are rejected', () => {
+    expect(() => equilibriumMoistureDb(corn, 20, 0)).toThrow(RangeError)
+    expect(() => equilibriumMoistureDb(corn, 20, 100)).toThrow(/below 100 %/)
+  })
+  it('modified Chung–Pfost below its lowest RH says where it is valid', () => {
+    expect(() => equilibriumMoistureDb(corn, 20, 0.01)).toThrow(/valid above RH/)
+  })
+  it('temperature out of range', () =>
+    expect(() => equilibriumMoistureDb(corn, 150, 50)).toThrow(/temperature/))
+})
