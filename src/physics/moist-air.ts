@@ -363,7 +363,9 @@ export function wetBulbWithDewPointC(
     return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start), dew)
   }
   const lo = Math.max(dew - 1, SATURATION_MIN_C)
-  const start = chordStartC(t, w, false, dew, w, t, saturationHumidityRatio(t, pressureKpa))
+  const wsIce = saturationHumidityRatio(t, pressureKpa)
+  if (w >= wsIce) return t // supersaturated over ice: no iced-wick root at or below the dry bulb
+  const start = chordStartC(t, w, false, dew, w, t, wsIce)
   // The root is at or above the dew/frost point (ASHRAE eq 35 at t* = dew gives W* ≤ W), so clamping
   // there only removes the bisection's last 1e-5 °C.
   return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, t, start), dew)
