@@ -80,6 +80,9 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   }
   if (missingColumns.length > 0) throw mergeErrors(missingColumns)
   warnings.push(...times.warnings)
+  if (ctx.site.utcOffsetHours === null && times.zoneStandardOffsetHours !== null) {
+    ctx.site.utcOffsetHours = times.zoneStandardOffsetHours
+  }
   const starts = times.hourStartUtcMs
   let first = Number.POSITIVE_INFINITY
   let last = Number.NEGATIVE_INFINITY
@@ -307,6 +310,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   for (let i = 0; i < n; i++) if (rowStatus[i] === 2) rejected++
   series.timing = Object.fromEntries(columns.map((c) => [c.variable, c.timing]))
   const coverage = summarizeCoverage(series, missingCoreHours(series))
+  log.problems.sort((a, b) => (a.line ?? Number.MAX_SAFE_INTEGER) - (b.line ?? Number.MAX_SAFE_INTEGER))
   return {
     series,
     format: raw.format,

@@ -131,8 +131,10 @@ export interface ChosenColumn {
 export interface ColumnPlan {
   variables: Partial<Record<WeatherVariable, ChosenColumn>>
   time: Partial<Record<TimeField, number>>
-  /** Set when the header row names UTC (e.g. `time (UTC)`, `timestamp_utc`). */
+  /** Set when the header row names UTC (e.g. `time (UTC)`, `timestamp_utc`) without an offset. */
   headerSaysUtc: boolean
+  /** Offset written in a time header such as `time (local standard time, UTC+07:00)` [h], or null. */
+  headerUtcOffsetHours: number | null
   /** Columns recognised as nothing. */
   unused: string[]
 }
@@ -163,7 +165,7 @@ export function planColumns(
   headers: string[],
   mapping: Partial<Record<MappingKey, ColumnMapping>> = {},
 ): ColumnPlan {
-  const plan: ColumnPlan = { variables: {}, time: {}, headerSaysUtc: false, unused: [] }
+  const plan: ColumnPlan = { variables: {}, time: {}, headerSaysUtc: false, headerUtcOffsetHours: null, unused: [] }
   const taken = new Set<number>()
   const ignored = new Set<MappingKey>()
   for (const [key, m] of Object.entries(mapping) as [MappingKey, ColumnMapping][]) {
@@ -202,8 +204,8 @@ export function planColumns(
   headers.forEach((h, index) => {
     if (taken.has(index)) return
     const parts = splitHeader(h)
-    if (/\butc\b|\bgmt\b|\bzulu\b/i.test(h)) plan.headerSaysUtc = true
     const meaning = classifyHeader(parts.name)
+    if (meaning?.kind === 'time') readHeaderTimeBasis(h, plan)
     if (meaning === null) {
       plan.unused.push(h)
       return
@@ -247,6 +249,18 @@ export function planColumns(
     }
   }
   return plan
+}
+
+/** `UTC+07:00`, `GMT-5`, `UTC−03:30` in a time header → offset; bare `UTC`/`GMT`/`Zulu` → UTC. */
+function readHeaderTimeBasis(header: string, plan: ColumnPlan): void {
+  const m = /\b(?:utc|gmt)\s*([+\-\u2212])\s*(\d{1,2})(?::?(\d{2}))?/i.exec(header)
+  if (m) {
+    const sign = m[1] === '+' ? 1 : -1
+    const hours = Number(m[2]) + (m[3] === undefined ? 0 : Number(m[3]) / 60)
+    if (hours <= 14) plan.headerUtcOffsetHours = sign * hours
+    return
+  }
+  if (/\butc\b|\bgmt\b|\bzulu\b/i.test(header)) plan.headerSaysUtc = true
 }
 
 function isTimeField(key: MappingKey): key is TimeField {

@@ -75,7 +75,7 @@ export function readDelimited(
       headerIndex = r
     }
   }
-  const headers = data[headerIndex].map((h) => h.replace(/^\uFEFF/, '').trim())
+  const headers = mergeUnbalancedHeaders(data[headerIndex], delimiter, warnings).map((h) => h.replace(/^\uFEFF/, '').trim())
   if (bestScore <= 0 && Object.keys(mapping).length === 0) {
     throw new WeatherInputError(
       `no header row with known column names in the first lines (first line: ${JSON.stringify(headers.slice(0, 8).join(delimiter)).slice(0, 120)}); ` +
@@ -214,6 +214,28 @@ export function readDelimited(
       plan,
     },
   }
+}
+
+/**
+ * Rejoin header cells split by an unquoted delimiter inside brackets, e.g.
+ * `time (local standard time, UTC+07:00)` written without quotes in a comma-separated file.
+ */
+export function mergeUnbalancedHeaders(cells: string[], delimiter: string, warnings: string[]): string[] {
+  const out: string[] = []
+  let open = ''
+  for (const cell of cells) {
+    const text = open === '' ? cell : `${open}${delimiter}${cell}`
+    const depth = (text.match(/[([]/g)?.length ?? 0) - (text.match(/[)\]]/g)?.length ?? 0)
+    if (depth > 0) {
+      open = text
+      continue
+    }
+    if (open !== '') warnings.push(`header '${text}' contains the delimiter inside brackets without quotes: read as one column`)
+    out.push(text)
+    open = ''
+  }
+  if (open !== '') out.push(...open.split(delimiter))
+  return out
 }
 
 function truncate(s: string): string {

@@ -57,8 +57,8 @@ export const SPIKE_LIMIT: Partial<Record<WeatherVariable, number>> = {
 
 /**
  * Number of consecutive identical readings after which a sensor is called stuck; the whole run is
- * rejected. Calm wind (0), saturated air (RH ≥ 99 %) and zero rain or irradiance are ordinary and
- * never count. Common practice, no source.
+ * rejected. Calm wind (0), saturated air (RH ≥ 90 %) and zero rain or irradiance are ordinary and
+ * never count; nor does RH at or above {@link WET_RH_PLATEAU_PCT}. Common practice, no source.
  */
 export const STUCK_RUN_HOURS: Partial<Record<WeatherVariable, number>> = {
   dryBulb: 12,
@@ -68,6 +68,13 @@ export const STUCK_RUN_HOURS: Partial<Record<WeatherVariable, number>> = {
   pressure: 24,
   wind: 12,
 }
+
+/**
+ * RH at or above this [%] may sit unchanged for many hours in fog, drizzle or rain (sensors plateau
+ * near saturation, and many exports round RH to whole percent), so such runs are not called stuck.
+ * Common practice, no source.
+ */
+export const WET_RH_PLATEAU_PCT = 90
 
 /** RH up to this value [%] is clamped to 100 %, above it rejected. Common practice, no source (EnergyPlus clamps and warns past 101 %). */
 export const RH_CLAMP_MAX_PCT = 103

@@ -82,13 +82,18 @@ export function readWeather(
     })
   }
   const { table, info } = readDelimited(text, opts.mapping ?? {}, log, warnings)
+  const headerOffset = info.plan.headerUtcOffsetHours
+  if (headerOffset !== null && opts.utcOffsetHours === undefined && opts.timeZone === undefined) {
+    warnings.push(`the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`)
+  }
+  const fixedOffset = opts.utcOffsetHours ?? (opts.timeZone === undefined ? headerOffset : null)
   const site: SiteInfo = {
     name: opts.siteName ?? '',
     latitudeDeg: opts.latitudeDeg ?? null,
     longitudeDeg: opts.longitudeDeg ?? null,
     elevationM: opts.elevationM ?? null,
     timeZone: opts.timeZone ?? null,
-    utcOffsetHours: opts.utcOffsetHours ?? null,
+    utcOffsetHours: fixedOffset,
     windHeightM: opts.windHeightM ?? info.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
   }
   if (opts.windHeightM === undefined && info.windHeightM === null && table.columns.wind) {
@@ -101,7 +106,7 @@ export function readWeather(
     time: {
       declaredOrder: opts.dateOrder ?? info.headerDateOrder ?? undefined,
       labels: opts.timestampLabels ?? null,
-      fixedOffsetHours: opts.utcOffsetHours ?? null,
+      fixedOffsetHours: fixedOffset,
       zone: opts.timeZone ?? null,
       headerSaysUtc: info.plan.headerSaysUtc,
     },

@@ -55,6 +55,8 @@ export interface ResolvedTimes {
   description: string
   dstEvents: DstEvent[]
   warnings: string[]
+  /** Standard-time offset of the zone over the span (its smallest offset) [h], when a zone was used. */
+  zoneStandardOffsetHours: number | null
 }
 
 function detectTypicalYear(
@@ -265,6 +267,7 @@ export function resolveRowTimes(
     description: `${description}; timestamps label the ${labels === 'hour-end' ? 'end' : 'start'} of each hour`,
     dstEvents,
     warnings,
+    zoneStandardOffsetHours: zone === null ? null : Math.min(...zone.offsetMs) / MS_PER_HOUR,
   }
 }
 
