@@ -4,11 +4,11 @@
  * the page agree. Text cells are neutralised against spreadsheet formula injection (`csvCell`).
  */
 
-import type { HourlySeries } from './../weather/series.ts'
-import type { AssessmentView } from './assessment-view.ts'
-import { type UnitSystem, unitFormatter } from './display-units.ts'
+import type { HourlySeries } from '../weather/series.ts'
+import type { Assessment, ReportInputInfo } from './assessment-view.ts'
+import type { UnitSystem } from './display-units.ts'
 import { psychroDensity } from './psychro-data.ts'
-import type { SectionContext } from './sections/context.ts'
+import { sectionContext } from './report-html.ts'
 import { fuelTable, heatTable } from './sections/heat.ts'
 import { hourOfDayFractions, hourOfDayTable } from './sections/hour-of-day.ts'
 import { monthlyTable, usableHoursByYearTable } from './sections/monthly.ts'
@@ -20,16 +20,12 @@ import { type ReportTable, tableCsv, tablesCsv } from './tables.ts'
 export interface CsvOptions {
   units?: UnitSystem
   series?: HourlySeries
+  info?: ReportInputInfo
 }
 
 /** All tables of the report, in report order; the first is the header (site, product, method …). */
-export function reportTables(a: AssessmentView, o: CsvOptions = {}): ReportTable[] {
-  const ctx: SectionContext = {
-    units: unitFormatter(o.units ?? 'si'),
-    idPrefix: '',
-    nextFigure: () => 0,
-    series: o.series,
-  }
+export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
+  const ctx = sectionContext(a, o)
   const out: ReportTable[] = [
     { id: 'summary', title: 'Assessment', columns: ['item', 'value'], rows: headerRows(a, ctx) },
     monthlyTable(a),
@@ -38,19 +34,17 @@ export function reportTables(a: AssessmentView, o: CsvOptions = {}): ReportTable
   if (byYear) out.push(byYear)
   const fr = hourOfDayFractions(a)
   if (fr) out.push(hourOfDayTable(fr))
-  if (o.series) out.push(psychroTable(psychroDensity(o.series)))
+  if (o.series) out.push(psychroTable(psychroDensity(o.series, { utcOffsetHours: a.site.utcOffsetHours })))
   if (a.startDates.length) out.push(startDatesTable(a, ctx))
-  const heat = heatTable(a, ctx)
-  if (heat) out.push(heat)
-  const fuel = fuelTable(a, ctx)
-  if (fuel) out.push(fuel)
-  if (a.assumptions.length)
+  out.push(heatTable(a, ctx), fuelTable(a, ctx))
+  if (a.assumptions.length) {
     out.push({
       id: 'assumptions',
       title: 'Assumptions',
-      columns: ['assumption'],
-      rows: a.assumptions.map((s) => [s]),
+      columns: ['name', 'value', 'source'],
+      rows: a.assumptions.map((x) => [x.name, x.value, x.source]),
     })
+  }
   if (a.warnings.length)
     out.push({ id: 'warnings', title: 'Warnings', columns: ['warning'], rows: a.warnings.map((s) => [s]) })
   return out
@@ -64,7 +58,7 @@ export const REPORT_TABLE_IDS = [
   'psychrometric-hours',
   'start-dates',
   'supplemental-heat-by-month',
-  'fuel-per-tonne',
+  'fuel',
   'assumptions',
   'warnings',
 ] as const
@@ -73,7 +67,7 @@ export const REPORT_TABLE_IDS = [
  * The report's tables as CSV: all tables in one file (titled blocks), or only the table `tableId`.
  * Throws a RangeError naming the accepted ids when `tableId` is not a table of this report.
  */
-export function renderReportCsv(a: AssessmentView, o: CsvOptions & { table?: string } = {}): string {
+export function renderReportCsv(a: Assessment, o: CsvOptions & { table?: string } = {}): string {
   const tables = reportTables(a, o)
   if (o.table === undefined || o.table === 'all') return tablesCsv(tables)
   const t = tables.find((x) => x.id === o.table)

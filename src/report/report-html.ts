@@ -4,9 +4,11 @@
  * assets) from an assessment. The same function serves `dryhours assess --format html`,
  * `POST /v1/assess?format=html` and the web page (which embeds the `<article>` fragment).
  */
+
+import { productById } from '../product/catalogue.ts'
 import type { ProductProfile } from '../product/profile.ts'
 import type { HourlySeries } from '../weather/series.ts'
-import type { AssessmentView } from './assessment-view.ts'
+import { type Assessment, type ReportInputInfo, siteDisplayName } from './assessment-view.ts'
 import { type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
 import { type Paper, reportCss } from './report-css.ts'
@@ -26,29 +28,44 @@ export interface ReportOptions {
   paper?: Paper
   /** The weather series the assessment was made from: enables the psychrometric chart. */
   series?: HourlySeries
-  /** The product profile: enables the drying region on the psychrometric chart and the product cautions. */
+  /**
+   * The product profile (for the drying region on the psychrometric chart); the catalogue profile of the
+   * assessment's product id is used when absent.
+   */
   profile?: ProductProfile
+  /** Uploaded file name and a line on the data source, shown in the header. */
+  info?: ReportInputInfo
   /** Prefix for element ids (several reports on one page). */
   idPrefix?: string
   /** Text for the footer, e.g. the program version and when the report was made (the core reads no clock). */
   footer?: string
 }
 
-function context(o: ReportOptions): SectionContext {
+function catalogueProfile(id: string): ProductProfile | undefined {
+  try {
+    return productById(id)
+  } catch {
+    return undefined
+  }
+}
+
+export function sectionContext(a: Assessment, o: ReportOptions): SectionContext {
   let n = 0
+  const info = o.info ?? {}
   return {
+    info,
+    siteName: siteDisplayName(a, info),
     units: unitFormatter(o.units ?? 'si'),
     series: o.series,
-    profile: o.profile,
+    profile: o.profile ?? catalogueProfile(a.product.id),
     idPrefix: o.idPrefix ?? '',
     nextFigure: () => ++n,
   }
 }
 
 /** The report as an `<article class="dryhours-report">` fragment (no `<html>`), for embedding. */
-export function renderReportArticle(a: AssessmentView, o: ReportOptions = {}): string {
-  const ctx = context(o)
-  const productCautions = o.profile?.cautions ?? []
+export function renderReportArticle(a: Assessment, o: ReportOptions = {}): string {
+  const ctx = sectionContext(a, o)
   return `<article class="dryhours-report" data-report="assessment" data-units="${ctx.units.system}">
 ${headerHtml(a, ctx)}
 ${answerHtml(a, ctx)}
@@ -57,7 +74,7 @@ ${hourOfDaySection(a, ctx)}
 ${psychrometricSection(a, ctx)}
 ${startDatesSection(a, ctx)}
 ${heatSection(a, ctx)}
-${cautionsSection(a, ctx, productCautions)}
+${cautionsSection(a, ctx)}
 <footer>${escapeHtml(o.footer ?? 'Made by dryhours from the weather file and the options shown above. Check the numbers against local experience before you build or buy.')}</footer>
 </article>`
 }
@@ -80,6 +97,10 @@ ${article}
 }
 
 /** The complete, self-contained HTML report for one assessment. */
-export function renderReportHtml(a: AssessmentView, o: ReportOptions = {}): string {
-  return htmlDocument(`Drying summary: ${a.site.name}, ${a.product.name}`, renderReportArticle(a, o), o.paper)
+export function renderReportHtml(a: Assessment, o: ReportOptions = {}): string {
+  return htmlDocument(
+    `Drying summary: ${siteDisplayName(a, o.info)}, ${a.product.name}`,
+    renderReportArticle(a, o),
+    o.paper,
+  )
 }

@@ -28,7 +28,7 @@ export interface PsychrometricOptions {
   units: UnitFormatter
 }
 
-const FRAME: Frame = { width: 640, height: 400, left: 56, right: 40, top: 30, bottom: 40 }
+const FRAME: Frame = { width: 640, height: 400, left: 56, right: 40, top: 36, bottom: 40 }
 const RH_CURVES = [10, 20, 30, 40, 50, 60, 70, 80, 90, 100]
 
 /** Humidity ratio [g/kg] at dry bulb tC and RH rhPct (over liquid water) at pressureKpa; eq 20. */
@@ -49,8 +49,11 @@ export function psychrometricChart(o: PsychrometricOptions): string {
   const hatchId = `${o.id}-hatch`
   const defs =
     `<clipPath id="${clipId}"><rect x="${f.left}" y="${f.top}" width="${f.width - f.left - f.right}" height="${f.height - f.top - f.bottom}"/></clipPath>` +
-    `<pattern id="${hatchId}" patternUnits="userSpaceOnUse" width="7" height="7" patternTransform="rotate(45)"><rect width="7" height="7" fill="${HIGH_CONTRAST.blue}" fill-opacity="0.10"/><line x1="0" y1="0" x2="0" y2="7" stroke="${HIGH_CONTRAST.blue}" stroke-width="1.2" stroke-opacity="0.55"/></pattern>`
+    `<pattern id="${hatchId}" patternUnits="userSpaceOnUse" width="7" height="7" patternTransform="rotate(45)"><rect width="7" height="7" fill="${HIGH_CONTRAST.blue}" fill-opacity="0.10"/><line x1="0" y1="0" x2="0" y2="7" stroke="${HIGH_CONTRAST.blue}" stroke-width="1.2" stroke-opacity="0.55"/></pattern>` +
+    `<pattern id="${hatchId}-lines" patternUnits="userSpaceOnUse" width="7" height="7" patternTransform="rotate(45)"><line x1="0" y1="0" x2="0" y2="7" stroke="${HIGH_CONTRAST.blue}" stroke-width="1" stroke-opacity="0.45"/></pattern>`
   const parts: string[] = []
+  const labels: string[] = []
+  const overlay: string[] = []
   // Drying region.
   if (o.region && o.region.length > 1) {
     const pts = o.region.map(
@@ -60,7 +63,11 @@ export function psychrometricChart(o: PsychrometricOptions): string {
     const first = o.region[0]
     const poly = [...pts, `${px(x(last.dryBulbC))},${px(y(0))}`, `${px(x(first.dryBulbC))},${px(y(0))}`]
     parts.push(
-      `<g class="drying-region" data-boundary="${escapeHtml(o.region.map((p) => `${p.dryBulbC}:${p.humidityRatioGPerKg}`).join(' '))}"><title>${escapeHtml(o.regionLabel)}</title><polygon points="${poly.join(' ')}" fill="url(#${hatchId})"/><polyline points="${pts.join(' ')}" fill="none" stroke="${HIGH_CONTRAST.blue}" stroke-width="2"/></g>`,
+      `<g class="drying-region" data-boundary="${escapeHtml(o.region.map((p) => `${p.dryBulbC}:${p.humidityRatioGPerKg}`).join(' '))}"><title>${escapeHtml(o.regionLabel)}</title><polygon points="${poly.join(' ')}" fill="url(#${hatchId})"/></g>`,
+    )
+    overlay.push(`<polygon points="${poly.join(' ')}" fill="url(#${hatchId}-lines)"/>`)
+    overlay.push(
+      `<polyline class="region-edge" points="${pts.join(' ')}" fill="none" stroke="${HIGH_CONTRAST.blue}" stroke-width="2.2"/>`,
     )
   }
   // Density cells: colour by share of the busiest cell, on a square-root scale so rare states still show.
@@ -75,27 +82,36 @@ export function psychrometricChart(o: PsychrometricOptions): string {
       `<rect class="hours" data-t="${c.dryBulbC}" data-w="${c.humidityRatioGPerKg}" data-hours="${c.hours}" x="${px(x(c.dryBulbC))}" y="${px(y(c.humidityRatioGPerKg + d.binHumidityRatioGPerKg))}" width="${px(cw)}" height="${px(ch)}" fill="${sequentialColour(0.15 + 0.85 * share)}" fill-opacity="0.9"><title>${escapeHtml(label)}</title></rect>`,
     )
   }
-  // RH curves.
+  // RH curves, labelled where they leave the plot (right edge: beside it; top edge: if there is room).
   const curves: string[] = []
+  let lastTopLabelX = Number.NEGATIVE_INFINITY
   for (const rh of RH_CURVES) {
     const pts: string[] = []
-    let labelAt: { x: number; y: number } | null = null
+    let exit: { x: number; y: number; side: 'right' | 'top' } = { x: x(t1), y: y(0), side: 'right' }
     const steps = 80
     for (let i = 0; i <= steps; i++) {
       const t = t0 + ((t1 - t0) * i) / steps
       const w = humidityRatioAtRhGPerKg(t, rh, o.pressureKpa)
       pts.push(`${px(x(t))},${px(y(w))}`)
-      if (w <= wTop) labelAt = { x: x(t), y: y(w) }
-      else break
+      if (w > wTop) {
+        exit = { x: x(t), y: y(wTop), side: 'top' }
+        break
+      }
+      exit = { x: x(t), y: y(w), side: 'right' }
     }
     const sat = rh === 100
     curves.push(
       `<polyline class="rh" data-rh="${rh}" points="${pts.join(' ')}" fill="none" stroke="${sat ? INK.text : INK.muted}" stroke-width="${sat ? 1.6 : 0.7}"${sat ? '' : ' stroke-dasharray="3 2"'}/>`,
     )
-    if (labelAt) {
-      curves.push(
-        `<text x="${px(labelAt.x + 2)}" y="${px(labelAt.y - 2)}" font-size="8.5" fill="${INK.muted}">${rh} %</text>`,
+    if (exit.side === 'right') {
+      labels.push(
+        `<text x="${px(exit.x + 3)}" y="${px(exit.y)}" dy="0.32em" font-size="8.5" fill="${INK.muted}">${rh} %</text>`,
       )
+    } else if (exit.x - lastTopLabelX > 26 || sat) {
+      labels.push(
+        `<text x="${px(exit.x)}" y="${px(exit.y - 3)}" text-anchor="middle" font-size="8.5" fill="${sat ? INK.text : INK.muted}">${rh} %</text>`,
+      )
+      lastTopLabelX = exit.x
     }
   }
   const tTicks = niceTicks(t0, t1, 8)
@@ -111,7 +127,7 @@ export function psychrometricChart(o: PsychrometricOptions): string {
       `dry bulb [${u.temperatureUnit}]`,
       true,
     ) +
-    `<g clip-path="url(#${clipId})">${parts.join('')}${curves.join('')}</g>` +
+    `<g clip-path="url(#${clipId})">${parts.join('')}${curves.join('')}${overlay.join('')}</g>${labels.join('')}` +
     `<g class="legend" font-size="10" fill="${INK.text}"><rect x="${f.left}" y="6" width="14" height="10" fill="url(#${hatchId})" stroke="${HIGH_CONTRAST.blue}"/><text x="${f.left + 18}" y="14">${escapeHtml(o.regionLabel)}</text><rect x="${f.left + 300}" y="6" width="14" height="10" fill="${sequentialColour(0.2)}"/><rect x="${f.left + 314}" y="6" width="14" height="10" fill="${sequentialColour(0.6)}"/><rect x="${f.left + 328}" y="6" width="14" height="10" fill="${sequentialColour(1)}"/><text x="${f.left + 346}" y="14">hours: few → many</text><text x="${f.left + 470}" y="14">dashed: RH</text></g>`
   return svgDocument({
     id: o.id,

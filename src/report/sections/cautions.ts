@@ -4,7 +4,7 @@
  * limits, and the assessment's own assumptions. Safety text follows the project conventions: say it
  * plainly and defer to local codes and licensed practice.
  */
-import type { AssessmentView } from '../assessment-view.ts'
+import type { Assessment } from '../assessment-view.ts'
 import { escapeHtml } from '../escape.ts'
 import type { SectionContext } from './context.ts'
 
@@ -24,12 +24,17 @@ export const MODEL_LIMITS: readonly string[] = [
   'Supplemental heat assumes the heater raises the intake air at constant humidity ratio with the stated efficiency; losses from the dryer shell are not included.',
 ]
 
-export function cautionsSection(
-  a: AssessmentView,
-  ctx: SectionContext,
-  productCautions: string[] = [],
-): string {
+export function cautionsSection(a: Assessment, ctx: SectionContext, productCautions: string[] = []): string {
   const list = (xs: readonly string[]) => `<ul>${xs.map((x) => `<li>${escapeHtml(x)}</li>`).join('')}</ul>`
   return `<section class="report-section cautions" id="${ctx.idPrefix}sec-cautions" data-section="cautions"><h2>Cautions</h2>${list([...productCautions, ...GENERAL_CAUTIONS])}</section>
-<section class="report-section limits" id="${ctx.idPrefix}sec-limits" data-section="limits"><h2>Limits of the model and assumptions</h2>${list(MODEL_LIMITS)}${a.assumptions.length ? `<h3>Assumptions of this assessment</h3>${list(a.assumptions)}` : ''}</section>`
+<section class="report-section limits" id="${ctx.idPrefix}sec-limits" data-section="limits"><h2>Limits of the model and assumptions</h2>${list(MODEL_LIMITS)}${a.assumptions.length ? `<h3>Assumptions of this assessment</h3>${assumptionsHtml(a)}` : ''}</section>`
+}
+
+function assumptionsHtml(a: Assessment): string {
+  return `<dl class="assumptions">${a.assumptions
+    .map(
+      (x) =>
+        `<div><dt>${escapeHtml(x.name)}</dt><dd>${escapeHtml(x.value)}${x.source ? ` <span class="source">(${escapeHtml(x.source)})</span>` : ''}</dd></div>`,
+    )
+    .join('')}</dl>`
 }

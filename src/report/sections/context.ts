@@ -1,17 +1,21 @@
 /**
  * @module report/sections/context
  * What every report section needs: the display units, optional extras (the weather series for the
- * psychrometric chart, the product profile for its drying region), and a figure counter.
+ * psychrometric chart, the product profile for its drying region), input info and a figure counter.
  */
+import type { Spread } from '../../analysis/statistics.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
-import type { SpreadView } from '../assessment-view.ts'
+import type { ReportInputInfo } from '../assessment-view.ts'
 import type { UnitFormatter } from '../display-units.ts'
 
 export interface SectionContext {
   units: UnitFormatter
   series?: HourlySeries
   profile?: ProductProfile
+  info: ReportInputInfo
+  /** Display name of the site (never empty). */
+  siteName: string
   /** Prefix for element ids, so that several reports can share one page. */
   idPrefix: string
   nextFigure: () => number
@@ -19,15 +23,8 @@ export interface SectionContext {
 
 export const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v)
 
-/** A spread from either a spread object or a single number (typical year); null when absent. */
-export function asSpread(v: SpreadView | number | null | undefined): SpreadView | null {
-  if (v === null || v === undefined) return null
-  if (typeof v === 'number') return Number.isFinite(v) ? { median: v, p10: v, p90: v } : null
-  return v
-}
-
 /** Map a spread through a unit conversion, keeping nulls. */
-export function convertSpread(s: SpreadView | null, f: (v: number) => number): SpreadView | null {
+export function convertSpread(s: Spread | null | undefined, f: (v: number) => number): Spread | null {
   if (!s) return null
   const c = (v: number | null) => (finite(v) ? f(v) : null)
   return { median: c(s.median), p10: c(s.p10), p90: c(s.p90) }
@@ -38,4 +35,14 @@ export function round(v: number | null | undefined, digits = 1): number | null {
   if (!finite(v)) return null
   const k = 10 ** digits
   return Math.round(v * k) / k
+}
+
+/** "per tonne" or "per short ton" for the unit system. */
+export function perMassWords(ctx: SectionContext): string {
+  return ctx.units.system === 'us' ? 'per short ton' : 'per tonne'
+}
+
+/** Fresh-product mass factor from per tonne to the display mass unit (1, or 0.907 for short tons). */
+export function perMassFactor(ctx: SectionContext): number {
+  return ctx.units.system === 'us' ? 0.90718474 : 1
 }

@@ -3,7 +3,9 @@
  * Supplemental heat and fuel by start month: bars of the median heat per tonne with the spread, the
  * monthly heat table, and the fuel table (quantity and cost per tonne, in the display units).
  */
-import type { AssessmentView, FuelView } from '../assessment-view.ts'
+import type { FuelFigure } from '../../analysis/assessment.ts'
+import { FUELS } from '../../drying/fuels.ts'
+import type { Assessment } from '../assessment-view.ts'
 import { spreadBarsChart } from '../charts/spread-bars.ts'
 import { MONTH_LONG, MONTH_SHORT } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
@@ -11,100 +13,96 @@ import { escapeHtml } from '../escape.ts'
 import { figureHtml } from '../figure.ts'
 import { HIGH_CONTRAST } from '../palette.ts'
 import { type ReportTable, tableHtml } from '../tables.ts'
-import { asSpread, convertSpread, finite, round, type SectionContext } from './context.ts'
+import { convertSpread, finite, perMassFactor, perMassWords, round, type SectionContext } from './context.ts'
 
-export function heatTable(a: AssessmentView, ctx: SectionContext): ReportTable | null {
+export function fuelName(id: string): string {
+  return (FUELS as Record<string, { name: string } | undefined>)[id]?.name ?? id
+}
+
+export function heatTable(a: Assessment, ctx: SectionContext): ReportTable {
   const u = ctx.units
-  if (
-    !a.monthly.some(
-      (m) =>
-        asSpread(m.supplementalHeatKwhPerTonne)?.median !== undefined &&
-        asSpread(m.supplementalHeatKwhPerTonne) !== null,
-    )
-  )
-    return null
+  const unit = u.energyPerMassUnit
   return {
     id: 'supplemental-heat-by-month',
-    title: `Supplemental heat for batches started in each month [${u.energyPerMassUnit} of fresh product]`,
-    columns: [
-      'month',
-      `median [${u.energyPerMassUnit}]`,
-      `P10 [${u.energyPerMassUnit}]`,
-      `P90 [${u.energyPerMassUnit}]`,
-    ],
+    title: `Supplemental heat into the air for batches started on the 1st and 16th of each month [${unit} of fresh product]`,
+    columns: ['month', `median [${unit}]`, `P10 [${unit}]`, `P90 [${unit}]`],
     rows: a.monthly.map((m) => {
-      const s = convertSpread(asSpread(m.supplementalHeatKwhPerTonne), (v) => u.energyPerMass(v).value)
+      const s = convertSpread(m.supplementalHeatKwhPerTonne, (v) => u.energyPerMass(v).value)
       return [MONTH_LONG[m.month - 1] ?? String(m.month), round(s?.median), round(s?.p10), round(s?.p90)]
     }),
-    digits: [0, 0, 0, 0],
   }
 }
 
-export function fuelsOf(a: AssessmentView): FuelView[] {
-  const h = a.supplementalHeat
-  if (!h) return []
-  return [...(h.fuels ?? []), ...(h.fuel ? [h.fuel] : [])]
+/** Fuel quantity and cost per display mass unit (tonne or short ton) at the median heat. */
+export function fuelRows(
+  a: Assessment,
+  ctx: SectionContext,
+): { fuel: FuelFigure; quantity: number | null; unit: string; price: number; cost: number | null }[] {
+  const u = ctx.units
+  const f = perMassFactor(ctx)
+  return a.heat.fuels.map((fuel) => {
+    const q = finite(fuel.quantityPerTonne) ? u.fuel(fuel.quantityPerTonne * f, fuel.unit) : null
+    return {
+      fuel,
+      quantity: q ? q.value : null,
+      unit: q ? q.unit : u.fuel(1, fuel.unit).unit,
+      price: u.pricePerFuelUnit(fuel.pricePerUnit, fuel.unit).value,
+      cost: finite(fuel.costPerTonne) ? fuel.costPerTonne * f : null,
+    }
+  })
 }
 
-export function fuelTable(a: AssessmentView, ctx: SectionContext): ReportTable | null {
-  const fuels = fuelsOf(a)
-  if (fuels.length === 0) return null
-  const u = ctx.units
+export function fuelTable(a: Assessment, ctx: SectionContext): ReportTable {
   return {
-    id: 'fuel-per-tonne',
-    title: `Fuel for the supplemental heat, per ${u.system === 'us' ? 'short ton' : 'tonne'} of fresh product (median year)`,
-    columns: ['fuel', 'quantity', 'unit', 'price per unit', 'cost', 'price is'],
-    digits: [0, 1, 0, 2, 0, 0],
-    rows: fuels.map((f) => {
-      const perMass = u.system === 'us' ? 907.18474 / 1000 : 1
-      const q = asSpread(f.quantityPerTonne)?.median
-      const qty = finite(q)
-        ? u.fuel(q * perMass, f.unit)
-        : { value: Number.NaN, unit: u.fuel(1, f.unit).unit }
-      const price = finite(f.pricePerUnit) ? u.pricePerFuelUnit(f.pricePerUnit, f.unit).value : null
-      const cost = asSpread(f.costPerTonne)?.median
-      return [
-        f.name,
-        finite(qty.value) ? round(qty.value, 1) : null,
-        qty.unit,
-        finite(price) ? round(price, 3) : null,
-        finite(cost) ? round(cost * perMass, 1) : null,
-        f.examplePrice === false ? 'yours' : 'an example, not market data',
-      ]
-    }),
+    id: 'fuel',
+    title: `Fuel for the median supplemental heat, ${perMassWords(ctx)} of fresh product (heater efficiency ${Math.round(a.heat.heaterEfficiency * 100)} %)`,
+    columns: ['fuel', 'quantity', 'unit', 'price per unit', 'cost', 'price is', 'heating value source'],
+    digits: [0, 1, 0, 2, 1, 0, 0],
+    rows: fuelRows(a, ctx).map((r) => [
+      `${fuelName(r.fuel.fuel)}${r.fuel.fuel === a.heat.selectedFuel ? ' (selected)' : ''}`,
+      round(r.quantity, 2),
+      r.unit,
+      round(r.price, 3),
+      round(r.cost, 2),
+      r.fuel.priceIsExample ? 'an example, not market data' : 'yours',
+      r.fuel.heatingValueSource,
+    ]),
   }
 }
 
-export function heatAlt(a: AssessmentView, ctx: SectionContext): string {
+export function heatAlt(a: Assessment, ctx: SectionContext): string {
   const u = ctx.units
-  const rows = a.monthly
-    .map((m) => ({ m: m.month, s: asSpread(m.supplementalHeatKwhPerTonne) }))
-    .filter((r) => r.s && finite(r.s.median))
-  if (rows.length === 0) return 'No supplemental heat was computed.'
-  const min = rows.reduce((x, y) => ((y.s?.median as number) < (x.s?.median as number) ? y : x))
-  const max = rows.reduce((x, y) => ((y.s?.median as number) > (x.s?.median as number) ? y : x))
+  const rows = a.monthly.filter((m) => finite(m.supplementalHeatKwhPerTonne.median))
+  if (rows.length === 0) return 'No supplemental heat figure could be computed for any month.'
+  const min = rows.reduce((x, y) =>
+    (y.supplementalHeatKwhPerTonne.median as number) < (x.supplementalHeatKwhPerTonne.median as number)
+      ? y
+      : x,
+  )
+  const max = rows.reduce((x, y) =>
+    (y.supplementalHeatKwhPerTonne.median as number) > (x.supplementalHeatKwhPerTonne.median as number)
+      ? y
+      : x,
+  )
+  const v = (m: typeof min) =>
+    formatNumber(u.energyPerMass(m.supplementalHeatKwhPerTonne.median as number).value)
   return (
-    `Bars show the median supplemental heat per ${u.system === 'us' ? 'short ton' : 'tonne'} of fresh product for batches started in each month, whiskers P10 to P90. ` +
-    `Least in ${MONTH_LONG[min.m - 1]} (${formatNumber(u.energyPerMass(min.s?.median as number).value)} ${u.energyPerMassUnit}), most in ${MONTH_LONG[max.m - 1]} (${formatNumber(u.energyPerMass(max.s?.median as number).value)} ${u.energyPerMassUnit}).`
+    `Bars show the median heat a dryer must add to the air ${perMassWords(ctx)} of fresh product to finish by the ${a.deadlineDays}-day deadline, for batches started in each month; whiskers P10 to P90 across years. ` +
+    `Least in ${MONTH_LONG[min.month - 1]} (${v(min)} ${u.energyPerMassUnit}), most in ${MONTH_LONG[max.month - 1]} (${v(max)} ${u.energyPerMassUnit}).`
   )
 }
 
-export function heatSection(a: AssessmentView, ctx: SectionContext): string {
+export function heatSection(a: Assessment, ctx: SectionContext): string {
   const head = `<section class="report-section" id="${ctx.idPrefix}sec-heat" data-section="heat"><h2>Supplemental heat and fuel</h2>`
-  const table = heatTable(a, ctx)
-  const fuel = fuelTable(a, ctx)
-  if (!table) {
-    return `${head}<p class="missing">No supplemental heat was computed for this method and season.</p>${fuel ? tableHtml(fuel) : ''}</section>`
-  }
   const u = ctx.units
   const id = `${ctx.idPrefix}fig-heat`
   const alt = heatAlt(a, ctx)
   const svg = spreadBarsChart({
     id: `${id}-svg`,
-    title: `Supplemental heat by start month, ${a.site.name}`,
+    title: `Supplemental heat by start month, ${ctx.siteName}`,
     description: alt,
     bars: a.monthly.map((m) => {
-      const s = convertSpread(asSpread(m.supplementalHeatKwhPerTonne), (v) => u.energyPerMass(v).value)
+      const s = convertSpread(m.supplementalHeatKwhPerTonne, (v) => u.energyPerMass(v).value)
       return {
         key: String(m.month),
         label: MONTH_SHORT[m.month - 1] ?? String(m.month),
@@ -113,16 +111,18 @@ export function heatSection(a: AssessmentView, ctx: SectionContext): string {
         p90: round(s?.p90),
       }
     }),
-    yLabel: `heat per ${u.system === 'us' ? 'ton' : 'tonne'} [${u.energyPerMassUnit}]`,
+    yLabel: `heat into the air [${u.energyPerMassUnit}]`,
     unit: u.energyPerMassUnit,
     colour: HIGH_CONTRAST.red,
   })
+  const cc = a.heat.crossCheck
+  const check = `Cross-check: removing ${formatNumber(u.system === 'us' ? (cc.waterToRemoveKgPerTonne / 0.45359237) * perMassFactor(ctx) : cc.waterToRemoveKgPerTonne)} ${u.system === 'us' ? 'lb' : 'kg'} of water ${perMassWords(ctx)} at ${formatNumber(cc.heatOfEvaporationKjPerKg)} kJ/kg through a heater of ${Math.round(a.heat.heaterEfficiency * 100)} % efficiency takes at least ${formatNumber(u.energyPerMass(cc.evaporationHeatFuelKwhPerTonne).value)} ${u.energyPerMassUnit} of fuel heat when every hour is heated. ${cc.note}`
   return `${head}${figureHtml({
     id,
     number: ctx.nextFigure(),
     caption: 'Supplemental heat to reach the target by the deadline, by start month',
     svg,
     alt,
-    table,
-  })}${fuel ? `<div class="fuel">${tableHtml(fuel)}<p class="note">${escapeHtml('Prices marked as examples are placeholders in no particular currency; enter your own prices for a cost you can use.')}</p></div>` : ''}</section>`
+    table: heatTable(a, ctx),
+  })}<div class="fuel">${tableHtml(fuelTable(a, ctx))}<p class="note">${escapeHtml('Prices marked as examples are placeholders in no particular currency; enter your own prices for a cost you can use.')}</p><p class="note">${escapeHtml(check)}</p></div></section>`
 }

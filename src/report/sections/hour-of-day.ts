@@ -2,30 +2,28 @@
  * @module report/sections/hour-of-day
  * The hour-of-day × month map of the usable share of hours, with its table (hours as rows).
  */
-import type { AssessmentView } from '../assessment-view.ts'
+import type { Assessment } from '../assessment-view.ts'
 import { heatMapChart } from '../charts/heat-map.ts'
 import { MONTH_LONG, MONTH_SHORT } from '../charts/svg.ts'
 import { figureHtml } from '../figure.ts'
 import type { ReportTable } from '../tables.ts'
 import { finite, round, type SectionContext } from './context.ts'
 
-/** `fractions[month-1][hour]`, whichever of the two accepted shapes the assessment uses; null when absent. */
-export function hourOfDayFractions(a: AssessmentView): (number | null)[][] | null {
+/** `fractions[month-1][hour]` (12 × 24, null where no data); null when the assessment has none. */
+export function hourOfDayFractions(a: Assessment): (number | null)[][] | null {
   const h = a.hourOfDay
-  if (!h || h.length === 0) return null
+  if (!h || !Array.isArray(h.usableFraction) || h.usableFraction.length === 0) return null
   const out: (number | null)[][] = Array.from({ length: 12 }, () => Array<number | null>(24).fill(null))
-  if (Array.isArray(h[0])) {
-    ;(h as (number | null)[][]).forEach((row, m) => {
-      if (m < 12) for (let i = 0; i < 24; i++) out[m][i] = finite(row[i]) ? row[i] : null
-    })
-  } else {
-    for (const row of h as { month: number; usableFraction: (number | null)[] }[]) {
-      if (row.month >= 1 && row.month <= 12) {
-        for (let i = 0; i < 24; i++)
-          out[row.month - 1][i] = finite(row.usableFraction[i]) ? row.usableFraction[i] : null
+  h.usableFraction.forEach((row, i) => {
+    const month = h.months?.[i] ?? i + 1
+    if (month >= 1 && month <= 12 && Array.isArray(row)) {
+      for (let hr = 0; hr < 24; hr++) {
+        const hourIndex = h.hours ? h.hours.indexOf(hr) : hr
+        const v = hourIndex >= 0 ? row[hourIndex] : null
+        out[month - 1][hr] = finite(v) ? v : null
       }
     }
-  }
+  })
   return out
 }
 
@@ -64,7 +62,7 @@ export function hourOfDayAlt(fr: (number | null)[][]): string {
   )
 }
 
-export function hourOfDaySection(a: AssessmentView, ctx: SectionContext): string {
+export function hourOfDaySection(a: Assessment, ctx: SectionContext): string {
   const fr = hourOfDayFractions(a)
   if (!fr) {
     return `<section class="report-section" id="${ctx.idPrefix}sec-hours" data-section="hour-of-day"><h2>Hours of the day</h2><p class="missing">The assessment has no hour-of-day table.</p></section>`
@@ -73,10 +71,10 @@ export function hourOfDaySection(a: AssessmentView, ctx: SectionContext): string
   const alt = hourOfDayAlt(fr)
   const svg = heatMapChart({
     id: `${id}-svg`,
-    title: `Usable share by hour of day and month, ${a.site.name}`,
+    title: `Usable share by hour of day and month, ${ctx.siteName}`,
     description: alt,
     fractions: fr,
-    hourLabel: 'local hour',
+    hourLabel: `local standard time (UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours})`,
   })
   return `<section class="report-section" id="${ctx.idPrefix}sec-hours" data-section="hour-of-day"><h2>Hours of the day</h2>${figureHtml(
     {

@@ -3,14 +3,14 @@
  * Usable drying hours per month: median with the P10–P90 spread across years (figure), the monthly
  * table and the year × month table.
  */
-import type { AssessmentView } from '../assessment-view.ts'
+import type { Assessment } from '../assessment-view.ts'
 import { spreadBarsChart } from '../charts/spread-bars.ts'
 import { MONTH_LONG, MONTH_SHORT } from '../charts/svg.ts'
 import { figureHtml } from '../figure.ts'
 import type { ReportTable } from '../tables.ts'
 import { finite, type SectionContext } from './context.ts'
 
-export function monthlyTable(a: AssessmentView): ReportTable {
+export function monthlyTable(a: Assessment): ReportTable {
   return {
     id: 'monthly-usable-hours',
     title: 'Usable drying hours per month across years',
@@ -26,14 +26,17 @@ export function monthlyTable(a: AssessmentView): ReportTable {
       m.usableHours.median,
       m.usableHours.p10,
       m.usableHours.p90,
-      m.usableHours.byYear?.length ?? null,
+      m.yearsWithData,
+      finite(m.usableFraction) ? Math.round(m.usableFraction * 1000) / 10 : null,
+      m.medianDaysToTarget,
     ]),
+    digits: [0, 0, 0, 0, 0, 1, 1],
   }
 }
 
-export function usableHoursByYearTable(a: AssessmentView): ReportTable | null {
+export function usableHoursByYearTable(a: Assessment): ReportTable | null {
   const years = new Set<number>()
-  for (const m of a.monthly) for (const y of m.usableHours.byYear ?? []) years.add(y.year)
+  for (const m of a.monthly) for (const y of m.usableHours.byYear) years.add(y.year)
   if (years.size === 0) return null
   const sorted = [...years].sort((x, y) => x - y)
   return {
@@ -42,7 +45,7 @@ export function usableHoursByYearTable(a: AssessmentView): ReportTable | null {
     columns: ['year', ...a.monthly.map((m) => MONTH_SHORT[m.month - 1] ?? String(m.month))],
     rows: sorted.map((yr) => [
       String(yr),
-      ...a.monthly.map((m) => m.usableHours.byYear?.find((y) => y.year === yr)?.hours ?? null),
+      ...a.monthly.map((m) => m.usableHours.byYear.find((y) => y.year === yr)?.hours ?? null),
     ]),
   }
 }
@@ -68,13 +71,13 @@ function monthList(months: number[]): string {
 /** Usable hours in 9 of 10 years at or above which a month counts as suitable in the summary [h]. */
 export const SUITABLE_MONTH_P10_HOURS = 100
 
-export function suitableMonths(a: AssessmentView): number[] {
+export function suitableMonths(a: Assessment): number[] {
   return a.monthly
     .filter((m) => finite(m.usableHours.p10) && m.usableHours.p10 >= SUITABLE_MONTH_P10_HOURS)
     .map((m) => m.month)
 }
 
-export function monthlyAlt(a: AssessmentView): string {
+export function monthlyAlt(a: Assessment): string {
   const withMedian = a.monthly.filter((m) => finite(m.usableHours.median))
   if (withMedian.length === 0) return 'No month has usable drying hours data.'
   const best = withMedian.reduce((x, y) =>
@@ -93,11 +96,11 @@ export function monthlyAlt(a: AssessmentView): string {
   )
 }
 
-export function monthlySection(a: AssessmentView, ctx: SectionContext): string {
+export function monthlySection(a: Assessment, ctx: SectionContext): string {
   const id = `${ctx.idPrefix}fig-monthly`
   const svg = spreadBarsChart({
     id: `${id}-svg`,
-    title: `Usable drying hours per month, ${a.site.name}`,
+    title: `Usable drying hours per month, ${ctx.siteName}`,
     description: monthlyAlt(a),
     bars: a.monthly.map((m) => ({
       key: String(m.month),
@@ -105,12 +108,12 @@ export function monthlySection(a: AssessmentView, ctx: SectionContext): string {
       median: m.usableHours.median,
       p10: m.usableHours.p10,
       p90: m.usableHours.p90,
-      byYear: (m.usableHours.byYear ?? []).map((y) => ({ year: y.year, value: y.hours })),
+      byYear: m.usableHours.byYear.map((y) => ({ year: y.year, value: y.hours })),
     })),
     yLabel: 'usable drying hours [h]',
     unit: 'h',
   })
-  const typical = a.period?.typicalYear === true
+  const typical = a.site.typicalYear
   return `<section class="report-section" id="${ctx.idPrefix}sec-monthly" data-section="monthly"><h2>When the air dries</h2>${figureHtml(
     {
       id,

@@ -3,7 +3,7 @@
  * The site's hours on a psychrometric chart with the air that dries the product shaded. Needs the weather
  * series (for the hours) and the product profile (for the region); says so when either is missing.
  */
-import type { AssessmentView } from '../assessment-view.ts'
+import type { Assessment } from '../assessment-view.ts'
 import { psychrometricChart } from '../charts/psychrometric.ts'
 import { formatNumber } from '../display-units.ts'
 import { figureHtml } from '../figure.ts'
@@ -57,13 +57,13 @@ export function psychroTable(d: PsychroDensity): ReportTable {
   }
 }
 
-export function psychrometricSection(a: AssessmentView, ctx: SectionContext): string {
+export function psychrometricSection(a: Assessment, ctx: SectionContext): string {
   const head = `<section class="report-section" id="${ctx.idPrefix}sec-psychro" data-section="psychrometric"><h2>The air on a psychrometric chart</h2>`
   if (!ctx.series) {
     return `${head}<p class="missing">The psychrometric chart needs the hourly weather; it is drawn when the report is made from the weather file (page, CLI or API with the file).</p></section>`
   }
-  const d = psychroDensity(ctx.series)
-  const target = a.product.targetMoistureWbPct ?? ctx.profile?.targetMoistureWbPct.value ?? null
+  const d = psychroDensity(ctx.series, { utcOffsetHours: a.site.utcOffsetHours })
+  const target = a.product.targetMoistureWbPct
   const region =
     ctx.profile && finite(target)
       ? dryingRegionBoundary(ctx.profile, target, d.pressureKpa, d.dryBulbRangeC)
@@ -83,7 +83,7 @@ export function psychrometricSection(a: AssessmentView, ctx: SectionContext): st
       : 'The drying region is not drawn: the product isotherm is not available to the report.')
   const svg = psychrometricChart({
     id: `${ctx.idPrefix}fig-psychro-svg`,
-    title: `Hours of ${a.site.name} on a psychrometric chart`,
+    title: `Hours of ${ctx.siteName} on a psychrometric chart`,
     description: alt,
     pressureKpa: d.pressureKpa,
     density: d,

@@ -2,11 +2,11 @@
  * @module report/sections/summary
  * The header (site, data, coverage, product, method, target) and the answer in plain sentences.
  */
-import type { AssessmentView } from '../assessment-view.ts'
+import type { Assessment } from '../assessment-view.ts'
 import { formatNumber } from '../display-units.ts'
 import { escapeHtml } from '../escape.ts'
-import { asSpread, finite, type SectionContext } from './context.ts'
-import { fuelsOf } from './heat.ts'
+import { finite, perMassFactor, perMassWords, type SectionContext } from './context.ts'
+import { fuelName } from './heat.ts'
 import { monthList, SUITABLE_MONTH_P10_HOURS, suitableMonths } from './monthly.ts'
 import { bestStartWindow } from './start-dates.ts'
 
@@ -25,11 +25,15 @@ function coord(v: number | null | undefined, pos: string, neg: string): string {
   return finite(v) ? `${formatNumber(Math.abs(v), 2)}° ${v >= 0 ? pos : neg}` : 'unknown'
 }
 
+function offsetText(h: number): string {
+  return `UTC${h >= 0 ? '+' : '−'}${Math.abs(h)}`
+}
+
 /** Rows of the header as label/value pairs (plain text; escaped when rendered). */
-export function headerRows(a: AssessmentView, ctx: SectionContext): [string, string][] {
+export function headerRows(a: Assessment, ctx: SectionContext): [string, string][] {
   const s = a.site
   const u = ctx.units
-  const rows: [string, string][] = [['Site', s.name]]
+  const rows: [string, string][] = [['Site', ctx.siteName]]
   if (finite(s.latitudeDeg) || finite(s.longitudeDeg) || finite(s.elevationM)) {
     const elev = finite(s.elevationM)
       ? u.system === 'us'
@@ -41,86 +45,97 @@ export function headerRows(a: AssessmentView, ctx: SectionContext): [string, str
       `${coord(s.latitudeDeg, 'N', 'S')}, ${coord(s.longitudeDeg, 'E', 'W')}, elevation ${elev}`,
     ])
   }
-  if (s.fileName || s.source)
-    rows.push(['Data', [s.source, s.fileName ? `file ${s.fileName}` : null].filter(Boolean).join(', ')])
-  const p = a.period
-  if (p) {
-    const years = p.years ?? []
-    const span = p.start && p.end ? `${p.start.slice(0, 10)} to ${p.end.slice(0, 10)}` : ''
-    rows.push([
-      'Period',
-      p.typicalYear
-        ? `typical year${span ? ` (${span})` : ''}`
-        : `${span}${years.length ? `, ${years.length} year${years.length === 1 ? '' : 's'}` : ''}`,
-    ])
-  }
+  const data = [ctx.info.dataSource, ctx.info.fileName ? `file ${ctx.info.fileName}` : null]
+    .filter(Boolean)
+    .join('; ')
+  if (data) rows.push(['Data', data])
   const c = a.coverage
-  if (c && finite(c.fraction)) {
-    rows.push([
-      'Coverage',
-      `${formatNumber(c.fraction * 100, 1)} % of hours usable for the assessment${finite(c.hoursTotal) ? ` (${formatNumber(c.hoursUsable ?? null)} of ${formatNumber(c.hoursTotal)} h)` : ''}`,
-    ])
-  }
-  const t = a.product.targetMoistureWbPct
-  const i = a.product.initialMoistureWbPct
+  const years = c.years.length
+  rows.push([
+    'Period',
+    s.typicalYear
+      ? 'typical year (months from different years)'
+      : `${c.firstHourUtc.slice(0, 10)} to ${c.lastHourUtc.slice(0, 10)}, ${years} year${years === 1 ? '' : 's'}`,
+  ])
+  const withData = c.hours - c.missingHours
+  rows.push([
+    'Coverage',
+    `${formatNumber(c.hours > 0 ? (100 * withData) / c.hours : null, 1)} % of ${formatNumber(c.hours)} hours with data${c.hasRainData ? '' : '; no rain data'}`,
+  ])
+  rows.push([
+    'Local time',
+    `${offsetText(s.utcOffsetHours)} (${s.utcOffsetSource === 'file' ? 'from the file' : s.utcOffsetSource === 'longitude' ? 'from the longitude' : 'assumed'})`,
+  ])
   rows.push(['Product', `${a.product.name} (${a.product.id})`])
   rows.push([
     'Moisture',
-    `${finite(i) ? `from ${formatNumber(i, 1)} % ` : ''}${finite(t) ? `to ${formatNumber(t, 1)} %` : ''} wet basis`,
+    `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
   ])
   rows.push(['Method', methodName(a.method.kind)])
-  if (a.season?.start && a.season.end)
-    rows.push(['Season', `start days ${a.season.start} to ${a.season.end}`])
-  if (finite(a.deadlineDays)) rows.push(['Deadline', `${a.deadlineDays} days per batch`])
+  rows.push([
+    'Season',
+    `start days ${a.season.start} to ${a.season.end}, every ${a.season.stepDays} day${a.season.stepDays === 1 ? '' : 's'} at ${String(a.season.startHourLocal).padStart(2, '0')}:00`,
+  ])
+  rows.push(['Deadline', `${a.deadlineDays} days per batch (counted as failed after ${a.maxDays} days)`])
   rows.push(['Units', u.system === 'us' ? 'US customary (°F, lb, gal)' : 'SI'])
   return rows
 }
 
-export function headerHtml(a: AssessmentView, ctx: SectionContext): string {
+export function headerHtml(a: Assessment, ctx: SectionContext): string {
   const rows = headerRows(a, ctx)
     .map(([k, v]) => `<div class="kv"><dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd></div>`)
     .join('')
-  return `<header class="report-header" data-section="header"><p class="kicker">dryhours seasonal drying summary</p><h1>Can ${escapeHtml(a.site.name)} dry ${escapeHtml(a.product.name)}?</h1><dl class="facts">${rows}</dl></header>`
+  return `<header class="report-header" data-section="header"><p class="kicker">dryhours · seasonal drying summary</p><h1>Can ${escapeHtml(ctx.siteName)} dry ${escapeHtml(a.product.name)}?</h1><dl class="facts">${rows}</dl></header>`
 }
 
 /** The answer in plain sentences, most important first. */
-export function answerSentences(a: AssessmentView, ctx: SectionContext): string[] {
+export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
   const out: string[] = []
   const u = ctx.units
   const method = methodName(a.method.kind)
   const suit = suitableMonths(a)
-  const typical = a.period?.typicalYear === true
-  if (a.monthly.length > 0) {
-    out.push(
-      suit.length > 0
-        ? `${typical ? 'In this typical year' : 'In 9 of 10 years'}, ${monthList(suit)} give${suit.length === 1 ? 's' : ''} at least ${SUITABLE_MONTH_P10_HOURS} usable drying hours for ${a.product.name} by ${method}.`
-        : `No month gives ${SUITABLE_MONTH_P10_HOURS} usable drying hours ${typical ? 'in this typical year' : 'in 9 of 10 years'} for ${a.product.name} by ${method}.`,
-    )
-  }
+  const typical = a.site.typicalYear
+  const when = typical ? 'In this typical year' : 'In 9 of 10 years'
+  out.push(
+    suit.length > 0
+      ? `${when}, ${monthList(suit)} give${suit.length === 1 ? 's' : ''} at least ${SUITABLE_MONTH_P10_HOURS} usable drying hours for ${a.product.name} by ${method}.`
+      : `No month gives ${SUITABLE_MONTH_P10_HOURS} usable drying hours ${typical ? 'in this typical year' : 'in 9 of 10 years'} for ${a.product.name} by ${method}.`,
+  )
   const w = bestStartWindow(a)
-  const target = a.product.targetMoistureWbPct
+  const target = `${formatNumber(a.product.targetMoistureWbPct, 1)} %`
   if (w) {
-    const pct = finite(w.probability)
-      ? `${Math.round(w.probability * 100)} % of years finish within ${finite(a.deadlineDays) ? `${a.deadlineDays} days` : 'the deadline'}`
-      : ''
     out.push(
-      `The best start window is ${w.start} to ${w.end}: batches reach ${finite(target) ? `${formatNumber(target, 1)} %` : 'the target'} in about ${formatNumber(w.medianDays, 1)} days in a median year and within ${formatNumber(w.p90Days, 1)} days in 9 of 10 years${pct ? `; ${pct}` : ''}.`,
+      `The best start window is ${w.from} to ${w.to}: batches reach ${target} in about ${formatNumber(w.medianDays, 1)} days in a median year` +
+        (finite(w.p90Days) ? ` and within ${formatNumber(w.p90Days, 1)} days in 9 of 10 years` : '') +
+        `; at least ${Math.round(w.minProbability * 100)} % of years finish within ${a.deadlineDays} days.`,
     )
   } else if (a.startDates.length > 0) {
-    out.push('No start date in the season reaches the target in the median year.')
-  }
-  const heat = asSpread(a.supplementalHeat?.kwhPerTonne)
-  if (heat && finite(heat.median)) {
-    const fuel = fuelsOf(a)[0]
-    const cost = fuel ? asSpread(fuel.costPerTonne)?.median : null
-    const perMass = u.system === 'us' ? 0.90718474 : 1
-    out.push(
-      `To finish by the deadline, a heated dryer needs about ${formatNumber(u.energyPerMass(heat.median).value)} ${u.energyPerMassUnit} of supplemental heat in a median year (P90 ${formatNumber(finite(heat.p90) ? u.energyPerMass(heat.p90).value : null)} ${u.energyPerMassUnit})` +
-        (fuel && finite(cost)
-          ? `, about ${formatNumber(cost * perMass, 0)} per ${u.system === 'us' ? 'ton' : 'tonne'} in ${fuel.name}${fuel.examplePrice === false ? '' : ' at the example price'}`
-          : '') +
-        '.',
+    const best = a.startDates.reduce((x, y) =>
+      y.probabilityWithinDeadline > x.probabilityWithinDeadline ? y : x,
     )
+    out.push(
+      `No start day finishes within ${a.deadlineDays} days in most years${best.probabilityWithinDeadline > 0 ? `; the best, ${best.start}, does in ${Math.round(best.probabilityWithinDeadline * 100)} % of years` : ''}.`,
+    )
+  }
+  const heat = a.heat.heatToAirKwhPerTonne
+  const fuelHeat = a.heat.fuelHeatKwhPerTonne
+  if (finite(heat.median)) {
+    const fuel = a.heat.fuels.find((f) => f.fuel === a.heat.selectedFuel)
+    const cost = fuel && finite(fuel.costPerTonne) ? fuel.costPerTonne * perMassFactor(ctx) : null
+    if (heat.median === 0 && (!finite(heat.p90) || heat.p90 === 0)) {
+      out.push(`Batches in this season need no supplemental heat to finish by the deadline in most years.`)
+    } else {
+      out.push(
+        `To finish every batch by the deadline, a backup heater adds about ${formatNumber(u.energyPerMass(heat.median).value)} ${u.energyPerMassUnit} to the air in a median batch (P90 ${formatNumber(finite(heat.p90) ? u.energyPerMass(heat.p90).value : null)} ${u.energyPerMassUnit})` +
+          (finite(fuelHeat.median)
+            ? `, ${formatNumber(u.energyPerMass(fuelHeat.median).value)} ${u.energyPerMassUnit} of fuel heat`
+            : '') +
+          (fuel && finite(cost)
+            ? `, costing about ${formatNumber(cost, 0)} ${perMassWords(ctx)} in ${fuelName(fuel.fuel)}${fuel.priceIsExample ? ' at the example price' : ''}`
+            : '') +
+          '.',
+      )
+    }
   }
   if (a.method.kind === 'open-air' || a.method.kind === 'shade') {
     out.push(
@@ -130,7 +145,7 @@ export function answerSentences(a: AssessmentView, ctx: SectionContext): string[
   return out
 }
 
-export function answerHtml(a: AssessmentView, ctx: SectionContext): string {
+export function answerHtml(a: Assessment, ctx: SectionContext): string {
   const items = answerSentences(a, ctx)
     .map((s) => `<li>${escapeHtml(s)}</li>`)
     .join('')
