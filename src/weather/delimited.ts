@@ -75,6 +75,7 @@ export function readDelimited(
       headerIndex = r
     }
   }
+  if (headerIndex < 0) throw new WeatherInputError('the file has no rows with content', ['rows'])
   const headers = mergeUnbalancedHeaders(data[headerIndex], delimiter, warnings).map((h) => h.replace(/^\uFEFF/, '').trim())
   if (bestScore <= 0 && Object.keys(mapping).length === 0) {
     throw new WeatherInputError(
