@@ -4,6 +4,8 @@
  */
 import type { CliCommand } from './command.ts'
 import { airCommand } from './commands/air.ts'
+import { assessCommand } from './commands/assess.ts'
+import { compareCommand } from './commands/compare.ts'
 import { equilibriumCommand } from './commands/equilibrium.ts'
 import { fitCommand } from './commands/fit.ts'
 import { inspectCommand } from './commands/inspect.ts'
@@ -17,4 +19,6 @@ export const commands: CliCommand[] = [
   productsCommand,
   equilibriumCommand,
   fitCommand,
+  assessCommand,
+  compareCommand,
 ]

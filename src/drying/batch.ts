@@ -85,7 +85,6 @@ export function simulateBatch(
   const wrap = options.wrap === true
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
-  const f = product.rewettingRateFactor
   const ts = product.thompsonTimeScale
   let m = initialDb
   let rewettingHours = 0
@@ -130,7 +129,7 @@ export function simulateBatch(
         // rain-wetted surface: toward the equilibrium at the highest RH evaluated
         const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
         if (meWet > m) {
-          const next = meWet - (meWet - m) * Math.exp(-f * firstOrderRateConstant(c.rateK[i], c.rateN[i], ts))
+          const next = meWet - (meWet - m) * c.rewetDecayPerHour[i]
           fromRain += next - m
           m = next
         }
@@ -139,7 +138,11 @@ export function simulateBatch(
         const meAds = c.emcAdsorptionDb[i]
         if (m > meDes) {
           let next: number
-          if (initialDb > meDes) {
+          const decay = c.decayPerHour[i]
+          if (decay === decay) {
+            // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
+            next = meDes + (m - meDes) * decay
+          } else if (initialDb > meDes) {
             const mr = (m - meDes) / (initialDb - meDes)
             next = meDes + stepMoistureRatio(mr, c.rateK[i], c.rateN[i], 1, ts) * (initialDb - meDes)
           } else {
@@ -154,8 +157,7 @@ export function simulateBatch(
           }
         } else if (m < meAds) {
           rewettingHours++
-          const k = firstOrderRateConstant(c.rateK[i], c.rateN[i], ts)
-          const next = meAds - (meAds - m) * Math.exp(-f * k)
+          const next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
           toAir -= next - m
           m = next
         }

@@ -44,7 +44,7 @@ import { sunPositionColumns } from '../physics/sun.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { adiabaticHumidityRatioAtRh, heatedDryBulbForTargetRhC } from './air-processes.ts'
 import type { DryingMethod } from './method.ts'
-import { EMC_RH_CAP_PCT, type ProductResponse } from './product-response.ts'
+import { EMC_RH_CAP_PCT, firstOrderRateConstant, type ProductResponse } from './product-response.ts'
 import { type DryingThresholds, HourStatus } from './thresholds.ts'
 
 /** Emissivity of a moist product surface for the radiative coefficient hr (assumption, 0.9; from memory). */
@@ -135,6 +135,10 @@ export interface HourlyConditions {
   emcAdsorptionDb: Float64Array
   rateK: Float64Array
   rateN: Float64Array
+  /** exp(−k·1 h) where n = 1 (first-order models), NaN otherwise: the batch step without an exp. */
+  decayPerHour: Float64Array
+  /** exp(−f·k₁·1 h), f the rewetting rate factor and k₁ the first-order rate constant. */
+  rewetDecayPerHour: Float64Array
   /** Heat from the heater into the air [kWh per tonne fresh product in this hour]. */
   heaterKwhPerTonne: Float64Array
   /** Heat from the solar collector into the air [kWh per tonne fresh product in this hour]. */
@@ -194,6 +198,8 @@ export function computeHourlyConditions(
   const emcAdsorptionDb = alloc(n)
   const rateK = alloc(n)
   const rateN = alloc(n)
+  const decayPerHour = alloc(n)
+  const rewetDecayPerHour = alloc(n)
   const heaterKwhPerTonne = alloc(n)
   const solarKwhPerTonne = alloc(n)
   const mode = new Uint8Array(n)
@@ -349,6 +355,10 @@ export function computeHourlyConditions(
     product.stepParameters(tProduct, rhForEmc, step)
     rateK[i] = step[0]
     rateN[i] = step[1]
+    decayPerHour[i] = step[1] === 1 ? Math.exp(-step[0]) : Number.NaN
+    rewetDecayPerHour[i] = Math.exp(
+      -product.rewettingRateFactor * firstOrderRateConstant(step[0], step[1], product.thompsonTimeScale),
+    )
     // Deficits are taken for air at the product temperature (it is what touches the product).
     const dSat = rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1) - w
     deficitToSaturationGPerKg[i] = 1000 * dSat
@@ -385,6 +395,8 @@ export function computeHourlyConditions(
     emcAdsorptionDb,
     rateK,
     rateN,
+    decayPerHour,
+    rewetDecayPerHour,
     heaterKwhPerTonne,
     solarKwhPerTonne,
     airFlowKgPerSPerTonne,

@@ -92,6 +92,11 @@ export const heatedSchema = z.object({
   setPointC: z.number().min(0).max(120).optional(),
   /** RH the heater aims for when no set point is given [%]; 40 % is an assumption for fruit and grain. */
   targetRhPct: z.number().gt(1).lt(100).default(40),
+  /**
+   * Lowest temperature of the heated air when heating to a target RH [°C]: in cold weather the target RH
+   * alone would give air too cold to dry. 20 °C is an assumption (no source). Ignored with a set point.
+   */
+  minAirC: z.number().min(-10).max(100).default(20),
   /** Dry-air flow per tonne of fresh product [kg s⁻¹ t⁻¹]; 0.5 is an assumption for tray/bin batch dryers. */
   airFlowKgPerSPerTonne: z.number().gt(0).max(50).default(0.5),
   /**

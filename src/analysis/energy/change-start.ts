@@ -3,7 +3,8 @@
  * Where a sustained shift most likely began, given that a chart signalled: the maximum-likelihood change
  * point for a step in the mean of independent normal values with known in-control mean μ₀ and σ, τ̂ =
  * argmax_k (Σ_{i=k}^{s} (xᵢ − μ₀))² / (s − k + 1) over k ≤ s (Hinkley 1970, Biometrika 57:1; the estimate
- * Montgomery suggests reading off a CUSUM). Searched from the end of the baseline to the signal `s`.
+ * Montgomery suggests reading off a CUSUM). Searched from the end of the baseline to the signal `s`;
+ * with `direction` 'up' (or 'down') only candidate steps in that direction count.
  */
 
 /**
@@ -15,6 +16,7 @@ export function estimateChangeStart(
   inControlMean: number,
   from: number,
   signalIndex: number,
+  direction: 'up' | 'down' | 'either' = 'either',
 ): number {
   if (!(from >= 0 && signalIndex >= from && signalIndex < values.length)) {
     throw new RangeError(
@@ -26,7 +28,8 @@ export function estimateChangeStart(
   let sum = 0
   for (let k = signalIndex; k >= from; k--) {
     sum += values[k] - inControlMean
-    const score = (sum * sum) / (signalIndex - k + 1)
+    const rightWay = direction === 'either' || (direction === 'up' ? sum > 0 : sum < 0)
+    const score = rightWay ? (sum * sum) / (signalIndex - k + 1) : -1
     if (score > bestScore) {
       bestScore = score
       best = k

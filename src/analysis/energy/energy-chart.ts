@@ -148,6 +148,7 @@ function finding(
     individuals.centerLine,
     individuals.baselineCount,
     point,
+    'up',
   )
   const c = batches[batchIndices[changePoint]]
   const after = individuals.values.slice(changePoint)
@@ -355,7 +356,7 @@ function describe(name: string, set: ChartSet): string {
   const shift =
     f.shiftAfterChange === null
       ? ''
-      : `, running ${f.shiftAfterChange >= 0 ? '+' : ''}${f.shiftAfterChange.toFixed(2)} MJ/kg against the baseline since then`
+      : `, with a mean of ${f.shiftAfterChange >= 0 ? '+' : ''}${f.shiftAfterChange.toFixed(2)} MJ/kg against the baseline from there to the last batch`
   const change = f.estimatedChangeStart
     ? ` The rise most likely began with batch ${f.estimatedChangeStart.batchId} (${f.estimatedChangeStart.startText})${shift}.`
     : ''

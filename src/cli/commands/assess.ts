@@ -1,0 +1,331 @@
+import { parseArgs } from 'node:util'
+import { type AssessOptions, type AssessProgress, assess } from '../../analysis/assess.ts'
+import type { Assessment } from '../../analysis/assessment.ts'
+import { FUELS } from '../../drying/fuels.ts'
+import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
+import { HOUR_STATUS_NAMES } from '../../drying/thresholds.ts'
+import { productById } from '../../product/catalogue.ts'
+import type { ProductProfile } from '../../product/profile.ts'
+import { parseUserProfile } from '../../product/profile-schema.ts'
+import { readWeatherBytes } from '../../weather/read-weather.ts'
+import type { HourlySeries } from '../../weather/series.ts'
+import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
+
+export const ENGINE_OPTIONS_HELP = `Product and method:
+  --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
+  --method <kind>           open-air | shade | solar-cabinet | heated
+  --target-wb <%>  --initial-wb <%>  --thickness <mm>
+  open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
+  shade:          --loading <kg/m²>
+  solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
+  heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
+Season and batches:
+  --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every 7 days)
+  --step-days <n>  --start-hour <0–23>  --deadline-days <n> (default 14)  --max-days <n> (default 60)
+  --batch-kg <kg> (default 1000)
+Heat and fuel:
+  --fuel <${FUEL_IDS.join('|')}>  --price <fuel>=<price per unit> (repeatable; defaults are examples)
+Weather file:
+  --lat <°N> --lon <°E> --elevation <m> --utc-offset <h> | --tz <zone>  --wind-height <m>
+  --quiet  no progress on stderr`
+
+const help = `dryhours assess: can this site's weather dry this product, when, how fast, with how much heat
+
+Usage:
+  dryhours assess <file> --product <id|profile.json> --method <kind> [options] [--json]
+
+Prints the usable drying hours per month (median and the P10–P90 range across years), the best
+start windows, a start-date table and the supplemental heat and fuel; --json prints the full
+assessment (monthly, hourOfDay, startDates, heat, assumptions, warnings, coverage).
+
+${ENGINE_OPTIONS_HELP}
+
+Safety: dried food must reach a safe water activity; combustion heaters put CO and combustion
+products in the air (prefer indirect heaters for food); gas and electrical work by licensed trades.`
+
+export const ENGINE_PARSE_OPTIONS = {
+  product: { type: 'string' },
+  method: { type: 'string' },
+  'target-wb': { type: 'string' },
+  'initial-wb': { type: 'string' },
+  thickness: { type: 'string' },
+  absorptivity: { type: 'string' },
+  loading: { type: 'string' },
+  'uncovered-night': { type: 'boolean' },
+  'uncovered-rain': { type: 'boolean' },
+  'collector-area': { type: 'string' },
+  tilt: { type: 'string' },
+  azimuth: { type: 'string' },
+  'air-flow': { type: 'string' },
+  'set-point': { type: 'string' },
+  'target-rh': { type: 'string' },
+  efficiency: { type: 'string' },
+  fuel: { type: 'string' },
+  price: { type: 'string', multiple: true },
+  start: { type: 'string' },
+  end: { type: 'string' },
+  'step-days': { type: 'string' },
+  'start-hour': { type: 'string' },
+  'deadline-days': { type: 'string' },
+  'max-days': { type: 'string' },
+  'batch-kg': { type: 'string' },
+  lat: { type: 'string' },
+  lon: { type: 'string' },
+  elevation: { type: 'string' },
+  'utc-offset': { type: 'string' },
+  tz: { type: 'string' },
+  'wind-height': { type: 'string' },
+  json: { type: 'boolean' },
+  quiet: { type: 'boolean' },
+} as const
+
+export type EngineValues = Record<string, string | string[] | boolean | undefined>
+
+/** Join "-5" style values to their option so parseArgs does not read them as flags. */
+export function joinNegativeValues(args: string[]): string[] {
+  const out: string[] = []
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i]
+    const next = args[i + 1]
+    if (a.startsWith('--') && !a.includes('=') && next !== undefined && /^-\d/.test(next)) {
+      out.push(`${a}=${next}`)
+      i++
+    } else out.push(a)
+  }
+  return out
+}
+
+async function loadProduct(value: string | undefined, io: CliIo): Promise<ProductProfile> {
+  if (value === undefined)
+    throw new UsageError('--product <id|profile.json> is required (list: dryhours products)')
+  if (!value.toLowerCase().endsWith('.json')) return productById(value)
+  const bytes = await io.readFile(value)
+  let json: unknown
+  try {
+    json = JSON.parse(new TextDecoder().decode(bytes))
+  } catch (e) {
+    throw new UsageError(`${value}: not valid JSON (${(e as Error).message})`)
+  }
+  return parseUserProfile(json)
+}
+
+/** Build the assess options from parsed CLI values (method options, season, heat, prices). */
+export async function engineOptions(values: EngineValues, io: CliIo): Promise<AssessOptions> {
+  const str = (k: string): string | undefined => values[k] as string | undefined
+  const num = (k: string): number | undefined => numberOption(k, str(k))
+  const kind = str('method')
+  if (kind === undefined) throw new UsageError(`--method is required: ${DRYING_METHOD_KINDS.join(', ')}`)
+  if (!(DRYING_METHOD_KINDS as readonly string[]).includes(kind)) {
+    throw new UsageError(`--method must be one of ${DRYING_METHOD_KINDS.join(', ')}, got '${kind}'`)
+  }
+  const product = await loadProduct(str('product'), io)
+  const method: Record<string, unknown> = { kind }
+  const set = (key: string, v: unknown): void => {
+    if (v !== undefined) method[key] = v
+  }
+  const fuel = str('fuel') as FuelId | undefined
+  if (fuel !== undefined && !(FUEL_IDS as readonly string[]).includes(fuel)) {
+    throw new UsageError(`--fuel must be one of ${FUEL_IDS.join(', ')}, got '${fuel}'`)
+  }
+  const backupHeater: Record<string, unknown> = {}
+  if (kind === 'open-air') {
+    set('absorptivity', num('absorptivity'))
+    set('loadingKgPerM2', num('loading'))
+    if (values['uncovered-night']) method.coveredAtNight = false
+    if (values['uncovered-rain']) method.coveredInRain = false
+  } else if (kind === 'shade') {
+    set('loadingKgPerM2', num('loading'))
+  } else if (kind === 'solar-cabinet') {
+    set('collectorAreaM2PerTonne', num('collector-area'))
+    set('tiltDeg', num('tilt'))
+    set('azimuthDeg', num('azimuth'))
+    set('airFlowKgPerSPerM2', num('air-flow'))
+  } else {
+    set('setPointC', num('set-point'))
+    set('targetRhPct', num('target-rh'))
+    set('airFlowKgPerSPerTonne', num('air-flow'))
+    set('heaterEfficiency', num('efficiency'))
+    set('fuel', fuel)
+  }
+  if (kind !== 'heated') {
+    if (num('efficiency') !== undefined) backupHeater.heaterEfficiency = num('efficiency')
+    if (fuel !== undefined) backupHeater.fuel = fuel
+    if (num('target-rh') !== undefined) backupHeater.targetRhPct = num('target-rh')
+    if (num('set-point') !== undefined) backupHeater.setPointC = num('set-point')
+  }
+  const fuelPrices: Partial<Record<FuelId, number>> = {}
+  for (const p of (values.price as string[] | undefined) ?? []) {
+    const m = /^([a-z-]+)=(.+)$/.exec(p)
+    if (!m || !(FUEL_IDS as readonly string[]).includes(m[1])) {
+      throw new UsageError(`--price must be <fuel>=<price>, fuel one of ${FUEL_IDS.join(', ')}; got '${p}'`)
+    }
+    const price = numberOption('price', m[2]) as number
+    fuelPrices[m[1] as FuelId] = price
+  }
+  return {
+    product,
+    method: method as AssessOptions['method'],
+    targetWbPct: num('target-wb'),
+    initialWbPct: num('initial-wb'),
+    thicknessMm: num('thickness'),
+    seasonStart: str('start'),
+    seasonEnd: str('end'),
+    startStepDays: num('step-days'),
+    startHourLocal: num('start-hour'),
+    deadlineDays: num('deadline-days'),
+    maxDays: num('max-days'),
+    batchKgFresh: num('batch-kg'),
+    backupHeater,
+    fuel,
+    fuelPrices,
+  }
+}
+
+/** Read a weather file through io with the CLI's weather options. */
+export async function readSeries(file: string, values: EngineValues, io: CliIo): Promise<HourlySeries> {
+  const str = (k: string): string | undefined => values[k] as string | undefined
+  const options: Record<string, unknown> = {
+    latitudeDeg: numberOption('lat', str('lat')),
+    longitudeDeg: numberOption('lon', str('lon')),
+    elevationM: numberOption('elevation', str('elevation')),
+    utcOffsetHours: numberOption('utc-offset', str('utc-offset')),
+    timeZone: str('tz'),
+    windHeightM: numberOption('wind-height', str('wind-height')),
+  }
+  for (const k of Object.keys(options)) if (options[k] === undefined) delete options[k]
+  const bytes = await io.readFile(file)
+  try {
+    const series = readWeatherBytes(bytes, options).series
+    if (series.site.name.trim() === '') series.site.name = file.split(/[\\/]/).pop() ?? file
+    return series
+  } catch (e) {
+    if (e instanceof WeatherInputError || e instanceof RangeError)
+      throw new UsageError(`${file}: ${e.message}`)
+    throw e
+  }
+}
+
+/** A progress printer for stderr: one line per stage step, at most every 10 %. */
+export function progressPrinter(io: CliIo, label: string): (p: AssessProgress) => void {
+  let lastStage = ''
+  let lastTenth = -1
+  return (p) => {
+    const tenth = Math.floor((10 * p.done) / Math.max(1, p.total))
+    if (p.stage === lastStage && tenth === lastTenth) return
+    lastStage = p.stage
+    lastTenth = tenth
+    io.stderr(`${label}: ${p.stage} ${p.done}/${p.total}\n`)
+  }
+}
+
+const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
+const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
+const f1 = (x: number | null): string => (x === null ? '–' : x.toFixed(1))
+
+/** The readable summary of an assessment. */
+export function assessmentText(a: Assessment): string {
+  const out: string[] = []
+  const p = a.product
+  out.push(
+    `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
+  )
+  out.push(
+    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.join(', ')}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
+  )
+  out.push('')
+  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
+  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
+  for (const m of a.monthly) {
+    const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
+      .map((r) => [r, m.medianHoursByReason[r]] as const)
+      .sort((x, y) => y[1] - x[1])
+    const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
+    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
+    out.push(
+      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
+    )
+  }
+  out.push('')
+  out.push(`Best start windows (${a.bestStartWindowCriterion}):`)
+  if (a.bestStartWindows.length === 0) out.push('  none')
+  for (const w of a.bestStartWindows) {
+    out.push(
+      `  ${w.from} to ${w.to}: finishes within ${a.deadlineDays} days in ≥ ${(100 * w.minProbabilityWithinDeadline).toFixed(0)} % of years, median ${f1(w.medianDaysToTarget)} days`,
+    )
+  }
+  out.push('')
+  out.push(
+    `Start dates (${a.season.start} to ${a.season.end}, batch starts ${a.season.startHourLocal}:00 local)`,
+  )
+  out.push('start  years  days median  days P90  P(within deadline)  rewet h  heat kWh/t median (P90)')
+  const every = Math.max(1, Math.ceil(a.startDates.length / 20))
+  a.startDates.forEach((r, i) => {
+    if (i % every !== 0) return
+    out.push(
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})`,
+    )
+  })
+  const h = a.heat
+  out.push('')
+  out.push(
+    `Supplemental heat to finish within ${a.deadlineDays} days: median ${f0(h.heatToAirKwhPerTonne.median)} kWh/t into the air (P10 ${f0(h.heatToAirKwhPerTonne.p10)}, P90 ${f0(h.heatToAirKwhPerTonne.p90)}), ${f0(h.fuelHeatKwhPerTonne.median)} kWh/t of fuel at efficiency ${h.heaterEfficiency}; batch of ${h.batchKgFresh} kg: ${f0(h.heatToAirKwhPerBatch.median)} kWh`,
+  )
+  for (const fu of h.fuels) {
+    const mark = fu.priceIsExample ? ' (example price)' : ''
+    out.push(
+      `  ${FUELS[fu.fuel].name.padEnd(36)} ${f1(fu.quantityPerTonne).padStart(8)} ${fu.unit}/t  cost ${f1(fu.costPerTonne)}/t at ${fu.pricePerUnit}/${fu.unit}${mark}`,
+    )
+  }
+  const c = h.crossCheck
+  out.push(
+    `  cross-check: ${c.waterToRemoveKgPerTonne} kg water/t × ${c.heatOfEvaporationKjPerKg} kJ/kg ÷ efficiency = ${c.evaporationHeatFuelKwhPerTonne} kWh/t; heated every hour uses ${c.ratioHeatedEveryHour ?? '–'} × that`,
+  )
+  if (a.warnings.length > 0) {
+    out.push('')
+    out.push('Warnings:')
+    for (const w of a.warnings) out.push(`  - ${w}`)
+  }
+  if (p.cautions.length > 0) {
+    out.push('')
+    out.push('Cautions:')
+    for (const w of p.cautions) out.push(`  - ${w}`)
+  }
+  out.push('')
+  out.push(`${a.assumptions.length} assumptions (thresholds, defaults and their sources): see --json`)
+  return `${out.join('\n')}\n`
+}
+
+export const assessCommand: CliCommand = {
+  name: 'assess',
+  summary: 'usable drying hours, start-date table, batch times and supplemental heat for one site',
+  help,
+  async run(args, io) {
+    let parsed: { values: EngineValues; positionals: string[] }
+    try {
+      parsed = parseArgs({
+        args: joinNegativeValues(args),
+        options: ENGINE_PARSE_OPTIONS,
+        allowPositionals: true,
+      })
+    } catch (e) {
+      throw new UsageError((e as Error).message)
+    }
+    if (parsed.positionals.length !== 1)
+      throw new UsageError('give exactly one weather file: dryhours assess <file>')
+    const file = parsed.positionals[0]
+    const values = parsed.values
+    let assessment: Assessment
+    try {
+      const options = await engineOptions(values, io)
+      const series = await readSeries(file, values, io)
+      if (!values.quiet) options.onProgress = progressPrinter(io, `assess ${file}`)
+      assessment = assess(series, options)
+    } catch (e) {
+      if (e instanceof RangeError) throw new UsageError(e.message)
+      throw e
+    }
+    io.stdout(values.json ? `${JSON.stringify(assessment)}\n` : assessmentText(assessment))
+    return 0
+  },
+}
