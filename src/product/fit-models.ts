@@ -1,8 +1,10 @@
 /**
  * @module product/fit-models
  * Fit thin-layer models to moisture-vs-time points by Levenberg–Marquardt (`least-squares.ts`):
- * Lewis [k, Me], Page [k, n, Me], Fick diffusion (slab/cylinder/sphere, full series) [Deff/L², Me], with
- * M0 fixed at the first weighing. Models are ranked by the small-sample Akaike criterion
+ * Lewis [k, Me, M0], Page [k, n, Me, M0], Fick diffusion (slab/cylinder/sphere, full series) [Deff/L², Me, M0].
+ * M0 is fitted, not fixed at the first weighing, because that weighing carries the same scale error as the
+ * others. Starting values come from a grid over the rate parameters with Me and M0 solved by linear least
+ * squares at each grid point (the model is linear in Me and M0; cf. variable projection, Golub & Pereyra 1973). Models are ranked by the small-sample Akaike criterion
  * AICc = n·ln(SSE/n) + 2p + 2p(p+1)/(n − p − 1) (Akaike 1974; Hurvich & Tsai 1989; Burnham & Anderson 2002,
  * *Model Selection and Multimodel Inference*, eq 2.14).
  */
@@ -15,7 +17,7 @@ export type FittedModelName = 'lewis' | 'page' | 'diffusion'
 
 export interface FittedModel {
   model: FittedModelName
-  /** Parameter values by name: kPerH (Lewis), kPerHn and n (Page), tauRatePerH = Deff/L² (diffusion), equilibriumMoistureDb. */
+  /** Parameter values by name: kPerH (Lewis), kPerHn and n (Page), tauRatePerH = Deff/L² (diffusion), equilibriumMoistureDb, initialMoistureDb. */
   params: Record<string, number>
   standardErrors: Record<string, number>
   sse: number
@@ -30,73 +32,104 @@ export interface FittedModel {
 
 interface ModelDef {
   model: FittedModelName
+  /** Names of the rate parameters (Me and M0 follow). */
   names: string[]
-  mr: (p: number[], tH: number) => number
-  start: (k0: number, me0: number) => number[]
+  mr: (rate: number[], tH: number) => number
+  /** Grid of rate-parameter vectors for the starting values. */
+  grid: number[][]
 }
 
+const LOG_GRID = Array.from({ length: 61 }, (_, i) => 10 ** (-3 + (i * 5) / 60))
+
 function defs(shape: Shape): ModelDef[] {
-  const checkPositive = (p: number[]) => {
-    if (!(p[0] > 0)) throw new RangeError('rate must be positive')
-  }
   return [
     {
       model: 'lewis',
-      names: ['kPerH', 'equilibriumMoistureDb'],
+      names: ['kPerH'],
       mr: (p, t) => {
-        checkPositive(p)
+        if (!(p[0] > 0)) throw new RangeError('rate must be positive')
         return Math.exp(-p[0] * t)
       },
-      start: (k0, me0) => [k0, me0],
+      grid: LOG_GRID.map((k) => [k]),
     },
     {
       model: 'page',
-      names: ['kPerHn', 'n', 'equilibriumMoistureDb'],
+      names: ['kPerHn', 'n'],
       mr: (p, t) => {
-        checkPositive(p)
+        if (!(p[0] > 0)) throw new RangeError('rate must be positive')
         if (!(p[1] > 0.1 && p[1] < 5)) throw new RangeError('n out of range')
         return Math.exp(-p[0] * t ** p[1])
       },
-      start: (k0, me0) => [k0, 1, me0],
+      grid: LOG_GRID.filter((_, i) => i % 2 === 0).flatMap((k) =>
+        [0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.1, 1.2, 1.35, 1.5, 1.75, 2, 2.5].map((n) => [k, n]),
+      ),
     },
     {
       model: 'diffusion',
-      names: ['tauRatePerH', 'equilibriumMoistureDb'],
+      names: ['tauRatePerH'],
       mr: (p, t) => {
-        checkPositive(p)
+        if (!(p[0] > 0)) throw new RangeError('rate must be positive')
         return diffusionMoistureRatio(shape, p[0] * t)
       },
-      // k ≈ λ1·(D/L²): slab λ1 = π²/4
-      start: (k0, me0) => [k0 / (shape === 'slab' ? 2.4674 : shape === 'cylinder' ? 5.783 : 9.8696), me0],
+      grid: LOG_GRID.map((k) => [k]),
     },
   ]
 }
 
+/** Me and M0 by linear least squares for a given MR curve f: M = Me·(1 − f) + M0·f. */
+function linearMeM0(f: number[], pts: MoisturePoint[]): { me: number; m0: number; sse: number } | null {
+  let saa = 0
+  let sab = 0
+  let sbb = 0
+  let say = 0
+  let sby = 0
+  pts.forEach((p, i) => {
+    const a = 1 - f[i]
+    const b = f[i]
+    saa += a * a
+    sab += a * b
+    sbb += b * b
+    say += a * p.moistureDb
+    sby += b * p.moistureDb
+  })
+  const det = saa * sbb - sab * sab
+  if (!(Math.abs(det) > 1e-14)) return null
+  const me = (say * sbb - sby * sab) / det
+  const m0 = (saa * sby - sab * say) / det
+  const sse = pts.reduce((s, p, i) => s + (me * (1 - f[i]) + m0 * f[i] - p.moistureDb) ** 2, 0)
+  return { me, m0, sse }
+}
+
 function fitOne(def: ModelDef, pts: MoisturePoint[]): FittedModel {
-  const m0 = pts[0].moistureDb
-  const mLast = pts[pts.length - 1].moistureDb
-  const tLast = pts[pts.length - 1].timeH
-  const me0 = Math.max(0, 0.8 * Math.min(...pts.map((p) => p.moistureDb)))
-  const k0 = Math.max(1e-4, -Math.log(Math.max(1e-3, (mLast - me0) / (m0 - me0))) / tLast)
-  const model = (p: number[], t: number): number => {
-    const me = p[p.length - 1]
-    if (!(me >= 0 && me < m0)) throw new RangeError('equilibrium moisture out of range')
-    return me + (m0 - me) * def.mr(p, t)
+  const nr = def.names.length
+  let start: number[] | null = null
+  let bestSse = Number.POSITIVE_INFINITY
+  for (const g of def.grid) {
+    const f = pts.map((p) => def.mr(g, p.timeH))
+    const lin = linearMeM0(f, pts)
+    if (lin && lin.me >= 0 && lin.m0 > lin.me && lin.sse < bestSse) {
+      bestSse = lin.sse
+      start = [...g, lin.me, lin.m0]
+    }
   }
-  const res = levenbergMarquardt(
-    (p) => pts.map((q) => model(p, q.timeH) - q.moistureDb),
-    def.start(k0, me0),
-    {
-      maxIterations: 300,
-    },
-  )
+  if (!start) throw new RangeError(`${def.model}: no starting point with a positive equilibrium moisture`)
+  const model = (p: number[], t: number): number => {
+    const me = p[nr]
+    const m0 = p[nr + 1]
+    if (!(me >= 0 && m0 > me)) throw new RangeError('equilibrium moisture out of range')
+    return me + (m0 - me) * def.mr(p.slice(0, nr), t)
+  }
+  const res = levenbergMarquardt((p) => pts.map((q) => model(p, q.timeH) - q.moistureDb), start, {
+    maxIterations: 300,
+  })
   const n = pts.length
-  const k = def.names.length
+  const names = [...def.names, 'equilibriumMoistureDb', 'initialMoistureDb']
+  const k = names.length
   const mean = pts.reduce((s, q) => s + q.moistureDb, 0) / n
   const sst = pts.reduce((s, q) => s + (q.moistureDb - mean) ** 2, 0)
   const params: Record<string, number> = {}
   const standardErrors: Record<string, number> = {}
-  def.names.forEach((name, i) => {
+  names.forEach((name, i) => {
     params[name] = res.params[i]
     standardErrors[name] = res.standardErrors[i]
   })
@@ -116,8 +149,8 @@ function fitOne(def: ModelDef, pts: MoisturePoint[]): FittedModel {
   }
 }
 
-/** Minimum number of weighings for a fit: the 3-parameter Page model needs n − p − 1 > 0 and some spare. */
-export const MIN_WEIGHINGS = 5
+/** Minimum number of weighings for a fit: the 4-parameter Page model needs n − p − 1 > 0 and a spare. */
+export const MIN_WEIGHINGS = 6
 
 /** Fit every model; sorted best first by AICc. Models that fail to fit are left out. */
 export function fitDryingModels(pts: MoisturePoint[], shape: Shape): FittedModel[] {

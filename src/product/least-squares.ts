@@ -60,7 +60,7 @@ export function levenbergMarquardt(
   options: { maxIterations?: number; tolerance?: number } = {},
 ): LeastSquaresResult {
   const maxIter = options.maxIterations ?? 200
-  const tol = options.tolerance ?? 1e-10
+  const tol = options.tolerance ?? 1e-9
   const evalSse = (p: number[]): { r: number[]; sse: number } | null => {
     try {
       const r = residuals(p)
