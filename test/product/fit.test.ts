@@ -122,7 +122,9 @@ describe('messy weighings', () => {
       '# tray 1\ntime;mass_g;air_c\n2026-07-01T08:00;1000;30\n2026-07-01T08:40;950;31\n2026-07-01T10:00;;32\n',
     )
     expect(w).toHaveLength(3)
-    ;[0, 40 / 60, 2].forEach((t, i) => expect(w[i].timeH).toBeCloseTo(t, 9))
+    ;[0, 40 / 60, 2].forEach((t, i) => {
+      expect(w[i].timeH).toBeCloseTo(t, 9)
+    })
     expect(w[2].massG).toBeNull()
     expect(() => parseWeighingsCsv('elapsed_h,mass_g\n0,100\n1,abc\n')).toThrow(/line 3: mass_g 'abc'/)
     expect(() => parseWeighingsCsv('elapsed_h,mass_g\n0,100\n0,90\n')).toThrow(/line 3: time must increase/)

@@ -29,7 +29,9 @@ describe('shelled corn, modified Chung–Pfost (Chen & Morey 1989, ASAE D245.6 c
   // measured: largest deviation 0.77 pt at 1.7 °C/25 % (Chung–Pfost is weakest at low RH and cold), others ≤ 0.53
   it('Wikipedia corn table at RH 25–40 %, all four temperatures, within 0.8 pt', () => {
     for (const [rh, row] of Object.entries(WIKI.corn)) {
-      T.forEach((t, i) => expect(Math.abs(wb('shelled-corn', t, Number(rh)) - row[i])).toBeLessThan(0.8))
+      T.forEach((t, i) => {
+        expect(Math.abs(wb('shelled-corn', t, Number(rh)) - row[i])).toBeLessThan(0.8)
+      })
     }
   })
 })
@@ -44,7 +46,9 @@ describe('shelled corn, modified Henderson (constants 8.6541e-5, 1.8634, 49.81, 
 describe('rough rice, modified Henderson (1.9187e-5, 2.4451, 51.161; constants from memory)', () => {
   it('Wikipedia long-grain rice table at RH 25–35 %, 1.7–37.8 °C, within 0.3 pt (measured max 0.28)', () => {
     for (const [rh, row] of Object.entries(WIKI.rice)) {
-      T.forEach((t, i) => expect(Math.abs(wb('rough-rice', t, Number(rh)) - row[i])).toBeLessThan(0.3))
+      T.forEach((t, i) => {
+        expect(Math.abs(wb('rough-rice', t, Number(rh)) - row[i])).toBeLessThan(0.3)
+      })
     }
   })
 })
