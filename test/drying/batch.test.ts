@@ -1,0 +1,137 @@
+import fc from 'fast-check'
+import { describe, expect, it } from 'vitest'
+import { simulateBatch } from '../../src/drying/batch.ts'
+import { computeHourlyConditions, type HourlyConditionsOptions } from '../../src/drying/hourly-conditions.ts'
+import { forcedAirLedger } from '../../src/drying/mass-balance.ts'
+import { parseDryingMethod } from '../../src/drying/method.ts'
+import { productResponse } from '../../src/drying/product-response.ts'
+import { tabulatedResponse } from '../../src/drying/product-tables.ts'
+import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
+import { productById } from '../../src/product/catalogue.ts'
+import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
+import { initialMoistureState, prepareProduct, stepMoisture } from '../../src/product/stepping.ts'
+import { demoSeries, sliceSeries } from './demo-weather.ts'
+import { constantSeries } from './synthetic-weather.ts'
+
+const apricot = productById('apricot-halves')
+const raisin = productById('grapes-to-raisins')
+
+function options(profile = apricot, loadingKgPerM2 = 10): HourlyConditionsOptions {
+  return {
+    targetDb: moistureDbFromWbPct(profile.targetMoistureWbPct.value),
+    initialWbPct: profile.initialMoistureWbPct.value,
+    loadingKgPerM2,
+    thresholds: parseDryingThresholds({}),
+    maxProductTempC: profile.maxProductTempC?.value ?? null,
+  }
+}
+
+describe('constant weather: the batch follows the analytic approach to equilibrium', () => {
+  // Lewis model under constant air: M(t) = Me + (M0 − Me)·exp(−k t) (drying-science.md §2.1, exact solution
+  // of dM/dt = −k(M − Me)). Shade at 30 °C/40 %, light loading so the constant-rate limit never binds.
+  const series = constantSeries({ dryBulbC: 30, relativeHumidityPct: 40, hours: 24 * 20 })
+  const direct = productResponse(apricot)
+  const c = computeHourlyConditions(series, parseDryingMethod({ kind: 'shade' }), direct, options(apricot, 0.2))
+  const m0 = moistureDbFromWbPct(86)
+  const target = moistureDbFromWbPct(25)
+  const b = simulateBatch(c, direct, { startIndex: 0, maxHours: 24 * 20, initialDb: m0, targetDb: target, recordTrace: true })
+  const me = direct.emcDesorptionDb(30, 40)
+  const k = c.rateK[0]
+  it('every hour matches Me + (M0 − Me)·exp(−k t) to 1e-9 kg/kg', () => {
+    for (let h = 0; h < b.hoursSimulated; h++) {
+      expect(Math.abs(b.trace![h] - (me + (m0 - me) * Math.exp(-k * (h + 1))))).toBeLessThan(1e-9)
+    }
+  })
+  it('the time to target is the analytic ln((M0 − Me)/(Mt − Me))/k rounded up to the hour', () => {
+    expect(b.reached).toBe(true)
+    expect(b.hoursToTarget).toBe(Math.ceil(Math.log((m0 - me) / (target - me)) / k))
+  })
+  it('with the tabulated product response the time to target is the same within 1 h', () => {
+    const tab = tabulatedResponse(direct)
+    const ct = computeHourlyConditions(series, parseDryingMethod({ kind: 'shade' }), tab, options(apricot, 0.2))
+    const bt = simulateBatch(ct, tab, { startIndex: 0, maxHours: 24 * 20, initialDb: m0, targetDb: target })
+    expect(Math.abs(bt.hoursToTarget - b.hoursToTarget)).toBeLessThanOrEqual(1)
+  })
+  it('at normal loading the constant-rate limit binds first: moisture falls linearly at the Penman rate', () => {
+    const cl = computeHourlyConditions(series, parseDryingMethod({ kind: 'shade' }), direct, options(apricot, 10))
+    const bl = simulateBatch(cl, direct, { startIndex: 0, maxHours: 10, initialDb: m0, targetDb: target, recordTrace: true })
+    const cap = cl.capDbPerH[0]
+    expect(cap).toBeGreaterThan(0)
+    for (let h = 0; h < 10; h++) expect(bl.trace![h]).toBeCloseTo(m0 - cap * (h + 1), 9)
+  })
+  it('in air wetter than the product it rewets toward the adsorption equilibrium and counts the hours', () => {
+    const humid = constantSeries({ dryBulbC: 20, relativeHumidityPct: 85, hours: 48 })
+    const ch = computeHourlyConditions(humid, parseDryingMethod({ kind: 'shade' }), direct, options())
+    const dry = moistureDbFromWbPct(20)
+    const bh = simulateBatch(ch, direct, { startIndex: 0, maxHours: 48, initialDb: 4, targetDb: 0.1 * dry, recordTrace: false })
+    expect(bh.rewettingHours).toBe(0) // starts wet: no rewetting
+    const bw = simulateBatch(ch, direct, { startIndex: 0, maxHours: 48, initialDb: dry + 1e-9, targetDb: dry * 0.5 })
+    expect(bw.finalDb).toBeGreaterThan(dry)
+    expect(bw.rewettingHours).toBe(48)
+    expect(bw.waterToAirDb).toBeLessThan(0)
+  })
+})
+
+describe('the batch step equals product/stepping.ts stepMoisture hour by hour', () => {
+  it('open air on 10 days of the dry upland in August (raisins, untabulated response)', () => {
+    const s = sliceSeries(demoSeries('dryUpland'), 5064, 240)
+    const direct = productResponse(raisin)
+    const opts = options(raisin, 12)
+    const c = computeHourlyConditions(s, parseDryingMethod({ kind: 'open-air', loadingKgPerM2: 12 }), direct, opts)
+    const m0 = moistureDbFromWbPct(78.2)
+    const b = simulateBatch(c, direct, { startIndex: 0, maxHours: 240, initialDb: m0, targetDb: 0.01, recordTrace: true })
+    let state = initialMoistureState(prepareProduct(raisin, { loadingKgPerM2: 12, initialMoistureWbPct: 78.2 }), 78.2)
+    for (let h = 0; h < 240; h++) {
+      if (c.mode[h] === 0) {
+        const r = stepMoisture(
+          state,
+          {
+            tC: c.productC[h],
+            rhPct: Math.min(c.surfaceRhPct[h], 99.5),
+            maxEvaporationKgPerM2H: Math.max(0, c.evaporationKgPerM2H[h]),
+          },
+          1,
+        )
+        state = r.state
+      }
+      expect(Math.abs(b.trace![h] - state.moistureDb)).toBeLessThan(1e-6)
+    }
+  })
+})
+
+describe('mass balance: water leaving the product = water carried by the air', () => {
+  // Tolerance 1e-9 relative: the air side is recomputed from outlet T and RH through the moist-air relations.
+  for (const kind of ['heated', 'solar-cabinet'] as const) {
+    it(`${kind}, 20 days of the humid valley in September`, () => {
+      const s = sliceSeries(demoSeries('humidValley'), 5800, 24 * 20)
+      const tab = tabulatedResponse(productResponse(apricot))
+      const c = computeHourlyConditions(s, parseDryingMethod({ kind }), tab, options())
+      const m0 = moistureDbFromWbPct(86)
+      const b = simulateBatch(c, tab, { startIndex: 0, maxHours: 24 * 20, initialDb: m0, targetDb: 0.2, recordTrace: true })
+      const ledger = forcedAirLedger(c, s.pressureKpa, b, 0, m0, 1000 * (1 - 0.86))
+      expect(ledger.waterFromProductKgPerTonne).toBeGreaterThan(100)
+      expect(Math.abs(ledger.waterCarriedByAirKgPerTonne - ledger.waterFromProductKgPerTonne)).toBeLessThan(
+        1e-9 * ledger.waterFromProductKgPerTonne,
+      )
+      // evaporation never exceeds deficit × air mass: no outlet above saturation (Newton tolerance 1e-4 K)
+      expect(ledger.maxOutletRhPct).toBeLessThanOrEqual(100.01)
+      // net water to the air (drying minus rewetting) cannot exceed the gross drying water
+      expect(b.waterToAirDb * 140).toBeLessThanOrEqual(ledger.waterFromProductKgPerTonne + 1e-6)
+    })
+  }
+})
+
+describe('heated drying with enough heat always reaches the target', () => {
+  const tab = tabulatedResponse(productResponse(raisin))
+  it('any constant ambient air (−10…35 °C, RH 20–100 %), set point 60 °C: raisins finish within 10 days', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -10, max: 35, noNaN: true }), fc.double({ min: 20, max: 100, noNaN: true }), (t, rh) => {
+        const s = constantSeries({ dryBulbC: t, relativeHumidityPct: rh, hours: 240 })
+        const c = computeHourlyConditions(s, parseDryingMethod({ kind: 'heated', setPointC: 60 }), tab, options(raisin))
+        const b = simulateBatch(c, tab, { startIndex: 0, maxHours: 240, initialDb: moistureDbFromWbPct(78.2), targetDb: moistureDbFromWbPct(18) })
+        return b.reached && b.heaterKwhPerTonne > 0
+      }),
+      { numRuns: 40 },
+    )
+  })
+})
