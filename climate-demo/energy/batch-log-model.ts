@@ -54,7 +54,7 @@ export function buildDemoBatchLog(seed: number = BATCH_LOG_SEED): { csv: string;
   const pressureKpa = standardPressureKpaAtElevation(site.elevationM)
   const lines = [
     '# INVENTED demo data (dryhours climate-demo/energy): batch log of a propane batch grain dryer, Quillow Landing.',
-    '# Local standard time UTC-6. A step change in dryer performance is built in; see climate-demo/energy/README.md.',
+    '# Start times in local standard time (UTC-06:00). A step change in dryer performance is built in; see climate-demo/energy/README.md.',
     'batch_id,start,duration_h,fresh_mass_kg,final_mass_kg,initial_moisture_wb_pct,final_moisture_wb_pct,fuel_amount,fuel_unit,fuel,drying_temp_c,ambient_temp_c,ambient_rh_pct',
   ]
   const truth: DemoBatchTruth[] = []
@@ -85,7 +85,7 @@ export function buildDemoBatchLog(seed: number = BATCH_LOG_SEED): { csv: string;
     const litres = (se * (freshKg - finalKg)) / PROPANE_MJ_PER_L
     const hours = (freshKg - finalKg) / 450 + 1.5 // invented evaporation rate 450 kg/h plus cooling
     const d = new Date(startLocalMs)
-    const start = `${d.getUTCFullYear()}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())}T${pad(d.getUTCHours())}:00`
+    const start = `${d.getUTCFullYear()}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())}T${pad(d.getUTCHours())}:00-06:00`
     truth.push({ number: k, faulty, trueSpecificEnergyMjPerKg: se })
     lines.push(
       [
@@ -107,7 +107,7 @@ export function buildDemoBatchLog(seed: number = BATCH_LOG_SEED): { csv: string;
     if (k === 23) {
       // One row as a tired operator might leave it: no final weighing, no moisture readings. It is rejected.
       lines.push(
-        `Q26-${String(k).padStart(3, '0')}b,${start.slice(0, 11)}16:00,2.0,3000,,,,40.0,L,propane,70,,`,
+        `Q26-${String(k).padStart(3, '0')}b,${start.slice(0, 11)}16:00-06:00,2.0,3000,,,,40.0,L,propane,70,,`,
       )
     }
   }

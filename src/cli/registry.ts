@@ -6,6 +6,7 @@ import type { CliCommand } from './command.ts'
 import { airCommand } from './commands/air.ts'
 import { assessCommand } from './commands/assess.ts'
 import { compareCommand } from './commands/compare.ts'
+import { energyChartCommand } from './commands/energy-chart.ts'
 import { equilibriumCommand } from './commands/equilibrium.ts'
 import { fitCommand } from './commands/fit.ts'
 import { inspectCommand } from './commands/inspect.ts'
@@ -21,4 +22,5 @@ export const commands: CliCommand[] = [
   fitCommand,
   assessCommand,
   compareCommand,
+  energyChartCommand,
 ]

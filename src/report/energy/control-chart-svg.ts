@@ -49,8 +49,6 @@ export interface ControlChartSvgOptions {
 
 const FRAME: Frame = { width: 680, height: 260, left: 58, right: 14, top: 30, bottom: 40 }
 
-const at = (v: number | number[], i: number) => (Array.isArray(v) ? v[i] : v)
-
 export function controlChartSvg(o: ControlChartSvgOptions): string {
   const f = FRAME
   const n = o.points.length

@@ -11,7 +11,14 @@ import { figureHtml } from '../figure.ts'
 import { htmlDocument } from '../report-html.ts'
 import { type ReportTable, tableHtml } from '../tables.ts'
 import { controlChartSvg } from './control-chart-svg.ts'
-import { batchTable, limitsTable, regressionTable, rejectionsTable, rulesByPoint } from './energy-tables.ts'
+import {
+  batchTable,
+  limitsTable,
+  regressionTable,
+  rejectionsTable,
+  rulesByPoint,
+  signalLabel,
+} from './energy-tables.ts'
 
 export interface EnergyReportOptions {
   /** Name of the log (file name), shown in the header. Untrusted: escaped. */
@@ -78,7 +85,7 @@ function chartFigures(
         rows: ind.values.map((v, i) => [labels[i], v, ind.movingRanges[i], rules[i].join(' ')]),
         digits: [0, 3, 3, 0],
       },
-      note: 'Dotted lines: 1σ and 2σ zones of the Western Electric rules. Grey area: the baseline (phase I) the limits come from.',
+      note: 'Dotted lines: 1σ and 2σ zones of the Western Electric rules (WE1 one point beyond 3σ; WE2 two of three beyond 2σ; WE3 four of five beyond 1σ; WE4 eight in a row on one side). ↑ more energy than the baseline, ↓ less. Grey area: the baseline (phase I) the limits come from.',
     }),
   )
   const mrValues = ind.movingRanges.slice(1) as number[]
@@ -128,7 +135,7 @@ function chartFigures(
         points: e.ewma.map((v, i) => ({
           label: labels[i],
           value: v,
-          rules: e.signals.some((s) => s.index === i) ? ['EWMA'] : [],
+          rules: e.signals.filter((s) => s.index === i).map((s) => signalLabel('EWMA', s.side)),
         })),
         baselineCount: baseline,
         centerLine: e.centerLine,

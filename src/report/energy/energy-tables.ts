@@ -6,11 +6,19 @@
 import type { ChartSet, EnergyChartAssessment } from '../../analysis/energy/energy-chart.ts'
 import type { Cell, ReportTable } from '../tables.ts'
 
-/** Rules (and EWMA) that fired on each charted point, by point index. */
+/** Signal label: the rule and an arrow for its side (↑ more energy than the baseline, ↓ less). */
+export function signalLabel(rule: string, side: 'above' | 'below'): string {
+  return `${rule}${side === 'above' ? '↑' : '↓'}`
+}
+
+/** Rules (and EWMA) that fired on each charted point, by point index, e.g. ['WE1↑', 'EWMA↑']. */
 export function rulesByPoint(set: ChartSet): string[][] {
   const out: string[][] = set.batchIndices.map(() => [])
-  for (const s of set.individuals.signals) if (!out[s.index].includes(s.rule)) out[s.index].push(s.rule)
-  for (const s of set.ewma.signals) if (!out[s.index].includes('EWMA')) out[s.index].push('EWMA')
+  const add = (i: number, label: string) => {
+    if (!out[i].includes(label)) out[i].push(label)
+  }
+  for (const s of set.individuals.signals) add(s.index, signalLabel(s.rule, s.side))
+  for (const s of set.ewma.signals) add(s.index, signalLabel('EWMA', s.side))
   return out
 }
 

@@ -9,7 +9,7 @@ import { analyzeEnergyLog, type ChartSet } from '../../../src/analysis/energy/en
 
 const DEMO_PATH = new URL('../../../climate-demo/energy/quillow-dryer-batches-2026.csv', import.meta.url)
 const text = readFileSync(DEMO_PATH, 'utf8')
-const assessment = analyzeEnergyLog(text, { utcOffsetHours: -6 })
+const assessment = analyzeEnergyLog(text)
 /** 0-based batch index of the first batch after the invented fault. */
 const CHANGE = STEP_BATCH_NUMBER - 1
 
