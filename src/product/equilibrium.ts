@@ -51,6 +51,11 @@ export interface HeatOfSorption {
   netKjPerKg: number
   /** Total heat to evaporate bound water = λ(T) + q_net [kJ/kg water]. */
   totalKjPerKg: number
+  /**
+   * False when the isotherm has no temperature dependence (GAB fitted at one temperature): q_net is then
+   * reported as 0 for lack of data, not because the water is free; use a published isosteric heat instead.
+   */
+  temperatureDependent: boolean
   method: string
 }
 
@@ -75,7 +80,11 @@ export function heatOfSorption(
     net = (-GAS_CONSTANT_J_PER_MOL_K * (Math.log(awHi) - Math.log(awLo))) / (invHi - invLo) / 1000
   }
   const netKjPerKg = net / MOLAR_MASS_WATER_KG_PER_MOL
+  const eq = isothermFor(profile, direction).equation
+  const temperatureDependent =
+    eq.model !== 'gab' || eq.hxJPerMol !== 0 || eq.hcJPerMol !== 0 || eq.hkJPerMol !== 0
   return {
+    temperatureDependent,
     netKjPerMol: net,
     netKjPerKg,
     totalKjPerKg: latentHeatFreeWaterKjPerKg(tC) + netKjPerKg,

@@ -147,3 +147,11 @@ describe('heat of sorption from the isotherm (Clausius–Clapeyron)', () => {
     )
   })
 })
+
+describe('heat of sorption availability', () => {
+  it('a GAB isotherm measured at one temperature says it cannot give a heat of sorption', () => {
+    const h = heatOfSorption(productById('cocoa-beans'), 25, 0.08)
+    expect(h.temperatureDependent).toBe(false)
+    expect(heatOfSorption(productById('wheat'), 25, 0.12).temperatureDependent).toBe(true)
+  })
+})
