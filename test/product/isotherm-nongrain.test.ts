@@ -5,6 +5,7 @@ import {
   equilibriumRelativeHumidityPct,
   safeMoistureWbPct,
 } from '../../src/product/equilibrium.ts'
+import { emcDb, erhPct, gabConstantsAt } from '../../src/product/isotherm-models.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../../src/product/moisture-basis.ts'
 
 const wb = (id: string, tC: number, rh: number) =>
@@ -71,5 +72,30 @@ describe('water-activity limits used for targets (Beuchat 1981; ICO; Oksar et al
 describe('GAB free-water limit', () => {
   it('a GAB product wetter than its saturation moisture reports ERH 100 % (free water), not NaN', () => {
     expect(equilibriumRelativeHumidityPct(productById('hops'), 25, 4)).toBe(100)
+  })
+})
+
+describe('GAB with temperature dependence (Kiranoudis et al. 1993, potato, as quoted in reference §1.3)', () => {
+  // Xm0 0.056, Hx 1.39 kJ/mol; C0 0.017, Hc 20 kJ/mol; K0 0.94, Hk −0.92 kJ/mol
+  const eq = {
+    model: 'gab',
+    xm0: 0.056,
+    c0: 0.017,
+    k0: 0.94,
+    hxJPerMol: 1390,
+    hcJPerMol: 20000,
+    hkJPerMol: -920,
+  } as const
+  it('constants follow X = X0·exp(H/RT): C at 30 °C = 0.017·exp(20000/(8.314·303.15)) ≈ 47.5', () => {
+    expect(gabConstantsAt(eq, 30).c).toBeCloseTo(0.017 * Math.exp(20000 / (8.314462618 * 303.15)), 9)
+    expect(gabConstantsAt(eq, 30).c).toBeCloseTo(47.5, 0)
+  })
+  it('EMC falls with temperature at fixed RH over 30–60 °C and ERH inverts it', () => {
+    for (const rh of [20, 50, 80]) {
+      const m30 = emcDb(eq, 30, rh)
+      const m60 = emcDb(eq, 60, rh)
+      expect(m60).toBeLessThan(m30)
+      expect(erhPct(eq, 60, m60)).toBeCloseTo(rh, 8)
+    }
   })
 })
