@@ -15,7 +15,7 @@ import {
   MOLAR_MASS_RATIO_WATER_AIR,
   PRESSURE_MAX_KPA,
   PRESSURE_MIN_KPA,
-  saturationTemperatureFromLnPressureC,
+  saturationTemperatureC,
   VAPOR_PRESSURE_MIN_KPA,
   wetBulbWithDewPointC,
 } from './moist-air.ts'
@@ -88,7 +88,7 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     if (pwOut) pwOut[i] = pw
     if (tdOut || twbOut) {
       // Dew point over liquid water from ln pw = ln pws + ln φ (one logarithm instead of two).
-      let td = saturationTemperatureFromLnPressureC(lnPwsPa + Math.log(rh / 100), false)
+      let td = saturationTemperatureC(pw, lnPwsPa + Math.log(rh / 100), false)
       if (td > t) td = t
       if (tdOut) tdOut[i] = td
       if (twbOut) {

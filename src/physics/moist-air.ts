@@ -6,10 +6,6 @@
  * editions).
  */
 import {
-  d2LnSaturationPressureIceDT2,
-  d2LnSaturationPressureLiquidDT2,
-  dLnSaturationPressureIceDT,
-  dLnSaturationPressureLiquidDT,
   KELVIN_OFFSET,
   lnSaturationPressureIcePa,
   lnSaturationPressureLiquidPa,
@@ -19,6 +15,7 @@ import {
   saturationVaporPressureLiquidKpa,
   TRIPLE_POINT_C,
 } from './saturation.ts'
+import { saturationPressureFromTableKpa, saturationTableSlopes } from './saturation-table.ts'
 
 /** Ratio of molar masses of water and dry air, 18.015268/28.966 (ASHRAE HOF 2017 ch. 1 eq 20). */
 export const MOLAR_MASS_RATIO_WATER_AIR = 0.621945
@@ -132,19 +129,24 @@ const LN_MAGNUS_P0_PA = Math.log(610.94)
 
 /**
  * Temperature [°C] at which the saturation pressure over liquid water (ice = false) or over ice
- * (ice = true) equals exp(`lnVaporPressurePa`) Pa: the dew point, or the frost point (ASHRAE HOF 2017
- * ch. 1 eq 36 inverted). Halley's method on ln pws, started from the Magnus approximation (Alduchov &
- * Eskridge 1996 coefficients), kept inside the bracket [−100, 200] °C; see {@link SOLVER_TOLERANCE_C}.
+ * (ice = true) equals `vaporPressureKpa` (whose natural log in Pa, `lnVaporPressurePa`, the caller
+ * passes as well): the dew point, or the frost point (ASHRAE HOF 2017 ch. 1 eq 36 inverted). Halley's
+ * method on pws(t) − pw with pws and its derivatives from {@link saturationPressureFromTableKpa},
+ * started from the Magnus approximation (Alduchov & Eskridge 1996 coefficients), kept inside the
+ * bracket [−100, 200] °C; see {@link SOLVER_TOLERANCE_C}.
  */
-export function saturationTemperatureFromLnPressureC(lnVaporPressurePa: number, ice: boolean): number {
+export function saturationTemperatureC(
+  vaporPressureKpa: number,
+  lnVaporPressurePa: number,
+  ice: boolean,
+): number {
   const g = lnVaporPressurePa - LN_MAGNUS_P0_PA
   let tC = ice ? (272.62 * g) / (22.46 - g) : (243.04 * g) / (17.625 - g)
   if (!(tC > SATURATION_MIN_C && tC < SATURATION_MAX_C)) tC = 0
   for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
-    const tK = tC + KELVIN_OFFSET
-    const f = (ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)) - lnVaporPressurePa
-    const d1 = ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK)
-    const d2 = ice ? d2LnSaturationPressureIceDT2(tK) : d2LnSaturationPressureLiquidDT2(tK)
+    const f = saturationPressureFromTableKpa(tC, ice) - vaporPressureKpa
+    const d1 = saturationTableSlopes[0]
+    const d2 = saturationTableSlopes[1]
     const step = (2 * f * d1) / (2 * d1 * d1 - f * d2)
     let next = tC - step
     if (next < SATURATION_MIN_C) next = (tC + SATURATION_MIN_C) / 2
@@ -153,9 +155,7 @@ export function saturationTemperatureFromLnPressureC(lnVaporPressurePa: number, 
     if (Math.abs(next - tC) < SOLVER_TOLERANCE_C) return next
     tC = next
   }
-  throw new RangeError(
-    `saturation temperature did not converge for ln(vapour pressure/Pa) ${lnVaporPressurePa}`,
-  )
+  throw new RangeError(`saturation temperature did not converge for vapour pressure ${vaporPressureKpa} kPa`)
 }
 
 /**
@@ -185,7 +185,7 @@ function checkVaporPressure(vaporPressureKpa: number, minKpa: number): void {
  */
 export function dewPointFromVaporPressureC(vaporPressureKpa: number): number {
   checkVaporPressure(vaporPressureKpa, VAPOR_PRESSURE_MIN_KPA)
-  return saturationTemperatureFromLnPressureC(Math.log(vaporPressureKpa * 1000), false)
+  return saturationTemperatureC(vaporPressureKpa, Math.log(vaporPressureKpa * 1000), false)
 }
 
 /**
@@ -195,8 +195,8 @@ export function dewPointFromVaporPressureC(vaporPressureKpa: number): number {
 export function frostPointFromVaporPressureC(vaporPressureKpa: number): number {
   checkVaporPressure(vaporPressureKpa, VAPOR_PRESSURE_MIN_ICE_KPA)
   const lnPa = Math.log(vaporPressureKpa * 1000)
-  const ice = saturationTemperatureFromLnPressureC(lnPa, true)
-  return ice < TRIPLE_POINT_C ? ice : saturationTemperatureFromLnPressureC(lnPa, false)
+  const ice = saturationTemperatureC(vaporPressureKpa, lnPa, true)
+  return ice < TRIPLE_POINT_C ? ice : saturationTemperatureC(vaporPressureKpa, lnPa, false)
 }
 
 /**
@@ -223,7 +223,8 @@ const SATURATION_PRESSURE_AT_ZERO_KPA = Math.exp(lnSaturationPressureIcePa(KELVI
 
 /**
  * Root of the psychrometer balance W(t*) = `targetW` on one branch, t* in [lo, hi]: eq 33 (wet wick,
- * liquid = true) or eq 35 (iced wick). Halley's method with the analytic first and second derivatives,
+ * liquid = true) or eq 35 (iced wick). Halley's method with the first and second derivatives (pws and
+ * its derivatives from {@link saturationPressureFromTableKpa}),
  * started at `start`, falling back to bisection whenever a step leaves the bracket; W(t*) increases
  * with t*, so the sign of W(t*) − targetW keeps the bracket. Returns hi if W(hi) is still below the
  * target (no root at or below the dry bulb), lo if W(lo) is above it.
@@ -244,15 +245,11 @@ function solveWetBulbBranch(
   const p = pressureKpa
   let x = start > lo && start < hi ? start : 0.5 * (lo + hi)
   for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
-    const tK = x + KELVIN_OFFSET
     // Ws* over ice below the triple point, also on the wet-wick branch for 0 ≤ t* < 0.01 (psychrolib 2.5.0).
     const ice = x < TRIPLE_POINT_C
-    const ln = ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)
-    const d1 = ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK)
-    const d2 = ice ? d2LnSaturationPressureIceDT2(tK) : d2LnSaturationPressureLiquidDT2(tK)
-    const pv = Math.exp(ln) / 1000
-    const pv1 = pv * d1
-    const pv2 = pv * (d1 * d1 + d2)
+    const pv = saturationPressureFromTableKpa(x, ice)
+    const pv1 = saturationTableSlopes[0]
+    const pv2 = saturationTableSlopes[1]
     const den = p - pv
     const ws = (MOLAR_MASS_RATIO_WATER_AIR * pv) / den
     const ws1 = (MOLAR_MASS_RATIO_WATER_AIR * p * pv1) / (den * den)
@@ -273,6 +270,10 @@ function solveWetBulbBranch(
       // Stop on a small step, but not across the kink of Ws* at the triple point (ice → liquid pws).
       if (Math.abs(step) < SOLVER_STOP_STEP_C && next < TRIPLE_POINT_C === ice) return next
       x = next
+    } else if (next >= hi && x < hi) {
+      // Overshoot past the upper end (a root close to it, as in air near saturation): restart there;
+      // W(t*) is convex, so from above the steps approach the root without leaving the bracket.
+      x = hi
     } else {
       x = 0.5 * (lo + hi)
     }
@@ -317,12 +318,9 @@ export function wetBulbFromHumidityRatioC(
   humidityRatioKgPerKg: number,
   pressureKpa: number,
 ): number {
-  const pw = vaporPressureFromHumidityRatio(humidityRatioKgPerKg, pressureKpa)
-  const lnPa = Math.log(Math.max(pw, 1e-9) * 1000)
-  const dewC = saturationTemperatureFromLnPressureC(
-    lnPa,
-    pw < saturationVaporPressureLiquidKpa(TRIPLE_POINT_C),
-  )
+  const pw = Math.max(vaporPressureFromHumidityRatio(humidityRatioKgPerKg, pressureKpa), 1e-9)
+  const ice = pw < saturationVaporPressureLiquidKpa(TRIPLE_POINT_C)
+  const dewC = saturationTemperatureC(pw, Math.log(pw * 1000), ice)
   return wetBulbWithDewPointC(dryBulbC, humidityRatioKgPerKg, pressureKpa, dewC)
 }
 

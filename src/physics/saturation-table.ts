@@ -1,0 +1,75 @@
+/**
+ * @module physics/saturation-table
+ * Saturation vapour pressure (ASHRAE HOF 2017 ch. 1 eqs 5–6, Hyland–Wexler) and its first two
+ * derivatives, by piecewise cubic Hermite interpolation of a table built once from the exact formulas.
+ * The temperature solvers (dew point, wet bulb) evaluate saturation several times per state; the table
+ * replaces an exp and a log per evaluation by a few multiplications.
+ *
+ * Accuracy: nodes every 1/8 K carry the exact pws and dpws/dT, so the interpolation error is at most
+ * max|pws⁗|·h⁴/384 ≈ (d ln pws/dT)⁴·h⁴/384 relative: below 1e-9 from −100 to 200 °C over liquid
+ * water and over ice, largest at −100 °C (checked against eqs 5–6 in
+ * test/physics/saturation-table.test.ts), i.e. under 1e-8 °C in a dew point or wet bulb.
+ */
+import {
+  dLnSaturationPressureIceDT,
+  dLnSaturationPressureLiquidDT,
+  KELVIN_OFFSET,
+  lnSaturationPressureIcePa,
+  lnSaturationPressureLiquidPa,
+  SATURATION_MAX_C,
+  SATURATION_MIN_C,
+} from './saturation.ts'
+
+/** Node spacing [K]. */
+const STEP_C = 0.125
+const INV_STEP = 1 / STEP_C
+/** Highest tabulated temperature over ice [°C]: the first node above the triple point. */
+const ICE_MAX_C = 0.125
+
+function build(minC: number, maxC: number, ice: boolean): Float64Array {
+  const nodes = Math.round((maxC - minC) * INV_STEP) + 1
+  // Per node: pws [kPa], H·dpws/dT [kPa] (slope already multiplied by the spacing).
+  const table = new Float64Array(2 * nodes)
+  for (let k = 0; k < nodes; k++) {
+    const tK = minC + k * STEP_C + KELVIN_OFFSET
+    const pws = Math.exp(ice ? lnSaturationPressureIcePa(tK) : lnSaturationPressureLiquidPa(tK)) / 1000
+    table[2 * k] = pws
+    table[2 * k + 1] =
+      STEP_C * pws * (ice ? dLnSaturationPressureIceDT(tK) : dLnSaturationPressureLiquidDT(tK))
+  }
+  return table
+}
+
+const LIQUID = build(SATURATION_MIN_C, SATURATION_MAX_C, false)
+const ICE = build(SATURATION_MIN_C, ICE_MAX_C, true)
+const LIQUID_LAST = LIQUID.length / 2 - 2
+const ICE_LAST = ICE.length / 2 - 2
+
+/** dpws/dT [kPa/K] and d²pws/dT² [kPa/K²] of the last {@link saturationPressureFromTableKpa} call. */
+export const saturationTableSlopes = new Float64Array(2)
+
+/**
+ * Saturation pressure [kPa] at `tC` [°C] over ice (`ice`) or liquid water, from the table; also writes
+ * its first and second derivatives to {@link saturationTableSlopes}. Valid for −100…200 °C (ice:
+ * −100…0.125 °C); outside, the end intervals are extrapolated (callers keep inside).
+ */
+export function saturationPressureFromTableKpa(tC: number, ice: boolean): number {
+  const table = ice ? ICE : LIQUID
+  const last = ice ? ICE_LAST : LIQUID_LAST
+  const s = (tC - SATURATION_MIN_C) * INV_STEP
+  let k = Math.floor(s)
+  if (k < 0) k = 0
+  else if (k > last) k = last
+  const u = s - k
+  const j = 2 * k
+  const y0 = table[j]
+  const m0 = table[j + 1]
+  const y1 = table[j + 2]
+  const m1 = table[j + 3]
+  // Cubic Hermite in u ∈ [0, 1): p = y0 + m0 u + c2 u² + c3 u³.
+  const c2 = 3 * (y1 - y0) - 2 * m0 - m1
+  const c3 = 2 * (y0 - y1) + m0 + m1
+  saturationTableSlopes[0] = (m0 + u * (2 * c2 + 3 * c3 * u)) * INV_STEP
+  saturationTableSlopes[1] = (2 * c2 + 6 * c3 * u) * INV_STEP * INV_STEP
+  return y0 + u * (m0 + u * (c2 + u * c3))
+}
