@@ -6,8 +6,10 @@ import type { Hono } from 'hono'
 import type { ApiConfig } from '../config.ts'
 import { airRouter } from './air.ts'
 import { docsRouter } from './docs.ts'
+import { energyRouter } from './energy.ts'
 import { healthRouter } from './health.ts'
 import { openApiRouter } from './openapi.ts'
+import { pageRouter } from './page.ts'
 
 export interface MountedRoute {
   path: string
@@ -19,7 +21,9 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
   return [
     { path: '/healthz', router: healthRouter },
     { path: '/v1/air', router: airRouter },
+    { path: '/v1/energy-chart', router: energyRouter },
     { path: '/openapi.json', router: openApiRouter },
     { path: '/docs', router: docsRouter },
+    { path: '/', router: pageRouter(_config) },
   ]
 }
