@@ -4,7 +4,7 @@
  * read, the constants are either from code citing it (said so), from memory (checked against published
  * EMC tables in the tests), or fitted by dryhours to the published EMC table named.
  */
-import { isotherm, kinetics, REF, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
+import { isotherm, kinetics, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
 import type { ProductProfile } from './profile.ts'
 
 const GRAIN_CAUTIONS = [
@@ -14,16 +14,20 @@ const GRAIN_CAUTIONS = [
 ]
 
 const WIKI_EMC =
-  'Wikipedia, "Equilibrium moisture content", grain EMC table at 1.7/10/21.1/37.8 °C and RH 25–40 % (REF §1.2)'
+  'Wikipedia, "Equilibrium moisture content", grain EMC table at 1.7/10/21.1/37.8 °C and RH 25–40 % (drying-science.md §1.2)'
 
 export const shelledCorn: ProductProfile = {
   id: 'shelled-corn',
   name: 'Shelled corn (maize), yellow dent',
   category: 'grain',
-  initialMoistureWbPct: sourced(25, 'NDSU maturity table; harvested at 20–30 % wb (REF §3)', 'published'),
+  initialMoistureWbPct: sourced(
+    25,
+    'NDSU maturity table; harvested at 20–30 % wb (drying-science.md §3)',
+    'published',
+  ),
   targetMoistureWbPct: sourced(
     13,
-    'Arkansas grain drying handbook: 15.5 % to market, 12–13 % for storage over months (REF §3)',
+    'Arkansas grain drying handbook: 15.5 % to market, 12–13 % for storage over months (drying-science.md §3)',
     'published',
   ),
   waterActivityTarget: SAFE_AW_MOULD,
@@ -31,7 +35,7 @@ export const shelledCorn: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 374.34, b: 0.18662, c: 31.696 },
-      'Modified Chung–Pfost, Chen & Morey 1989 as listed in ASAE D245.6 (constants as transcribed in public code); 15.6 °C/80 % → 16.1 % wb (extension value, REF §1.2)',
+      'Modified Chung–Pfost, Chen & Morey 1989 as listed in ASAE D245.6 (constants as transcribed in public code); 15.6 °C/80 % → 16.1 % wb (extension value, drying-science.md §1.2)',
       'published',
       [0, 50],
       [20, 90],
@@ -41,7 +45,7 @@ export const shelledCorn: ProductProfile = {
     { model: 'thompson-corn' },
     8,
     'sphere',
-    'Thompson, Peart & Foster 1968, Trans. ASAE 11:582: t = A·ln MR + B·(ln MR)², A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T) (REF §2.2)',
+    'Thompson, Peart & Foster 1968, Trans. ASAE 11:582: t = A·ln MR + B·(ln MR)², A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T) (drying-science.md §2.2)',
     'memory',
   ),
   defaultThicknessMm: sourced(
@@ -57,7 +61,11 @@ export const wheat: ProductProfile = {
   id: 'wheat',
   name: 'Wheat',
   category: 'grain',
-  initialMoistureWbPct: sourced(18, 'typical 14–20 % at harvest; from memory (REF §3)', 'memory'),
+  initialMoistureWbPct: sourced(
+    18,
+    'typical 14–20 % at harvest; from memory (drying-science.md §3)',
+    'memory',
+  ),
   targetMoistureWbPct: sourced(12, `${WIKI_EMC}: about 12 % for long-term storage`, 'published'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(
@@ -68,7 +76,7 @@ export const wheat: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 610.34, b: 0.15526, c: 93.213 },
-      'Modified Chung–Pfost, from code citing Storage of Cereal Grains and Their Products, 5th ed., p. 272; 32.2 °C/50 % → 11.2 % wb vs 10.8 % extension value for soft red winter wheat (REF §1.2)',
+      'Modified Chung–Pfost, from code citing Storage of Cereal Grains and Their Products, 5th ed., p. 272; 32.2 °C/50 % → 11.2 % wb vs 10.8 % extension value for soft red winter wheat (drying-science.md §1.2)',
       'published',
       [0, 50],
       [20, 90],
@@ -90,16 +98,20 @@ export const roughRice: ProductProfile = {
   id: 'rough-rice',
   name: 'Rough rice (paddy)',
   category: 'grain',
-  initialMoistureWbPct: sourced(24, 'IRRI Knowledge Bank: 20–28 %, 24–26 % typical (REF §3)', 'published'),
+  initialMoistureWbPct: sourced(
+    24,
+    'IRRI Knowledge Bank: 20–28 %, 24–26 % typical (drying-science.md §3)',
+    'published',
+  ),
   targetMoistureWbPct: sourced(
     14,
-    'IRRI Knowledge Bank: 14 % for storage of weeks and milling; 13 % for 8–12 months (REF §3)',
+    'IRRI Knowledge Bank: 14 % for storage of weeks and milling; 13 % for 8–12 months (drying-science.md §3)',
     'published',
   ),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(
     50,
-    'paddy sun-drying practice: cover the grain above 50 °C (42 °C for seed), fissuring (REF §5.3)',
+    'paddy sun-drying practice: cover the grain above 50 °C (42 °C for seed), fissuring (drying-science.md §5.3)',
     'published',
   ),
   isotherm: {
@@ -119,18 +131,18 @@ export const roughRice: ProductProfile = {
     },
     2.5,
     'sphere',
-    'Page, Wang & Singh 1978 (ASAE paper 78-3001), t in min: k = 0.01579 + 0.0001746·T − 0.01413·RH, n = 0.6545 + 0.002425·T + 0.07867·RH (REF §2.2)',
+    'Page, Wang & Singh 1978 (ASAE paper 78-3001), t in min: k = 0.01579 + 0.0001746·T − 0.01413·RH, n = 0.6545 + 0.002425·T + 0.07867·RH (drying-science.md §2.2)',
     'memory',
   ),
   defaultThicknessMm: sourced(2.5, 'kernel thickness; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(
     17,
-    'a 3 cm layer (IRRI 3–5 cm, KALRO 2–3 cm; REF §5.3) at about 580 kg/m³ (bulk density from memory)',
+    'a 3 cm layer (IRRI 3–5 cm, KALRO 2–3 cm; drying-science.md §5.3) at about 580 kg/m³ (bulk density from memory)',
     'memory',
   ),
   cautions: [
     ...GRAIN_CAUTIONS,
-    'Dry paddy within 24 h of harvest; stir the layer every 30 min; gather or cover at night and in rain: re-wetting fissures the grain (IRRI, KALRO; REF §5.2–5.3).',
+    'Dry paddy within 24 h of harvest; stir the layer every 30 min; gather or cover at night and in rain: re-wetting fissures the grain (IRRI, KALRO; drying-science.md §5.2–5.3).',
   ],
 }
 
@@ -141,10 +153,10 @@ export const roughRiceSeed: ProductProfile = {
   variantOf: 'rough-rice',
   targetMoistureWbPct: sourced(
     12,
-    'IRRI Knowledge Bank: 12 % for farm seed, 9 % for seed kept over a year (REF §3)',
+    'IRRI Knowledge Bank: 12 % for farm seed, 9 % for seed kept over a year (drying-science.md §3)',
     'published',
   ),
-  maxProductTempC: sourced(42, 'paddy practice: 42 °C limit for seed (REF §5.3)', 'published'),
+  maxProductTempC: sourced(42, 'paddy practice: 42 °C limit for seed (drying-science.md §5.3)', 'published'),
   cautions: [...roughRice.cautions, 'Seed viability is lost above 42 °C grain temperature.'],
 }
 
@@ -152,7 +164,11 @@ export const soybean: ProductProfile = {
   id: 'soybean',
   name: 'Soybean',
   category: 'oilseed',
-  initialMoistureWbPct: sourced(18, 'typical 13–18 % at harvest; from memory (REF §3)', 'memory'),
+  initialMoistureWbPct: sourced(
+    18,
+    'typical 13–18 % at harvest; from memory (drying-science.md §3)',
+    'memory',
+  ),
   targetMoistureWbPct: sourced(11, `${WIKI_EMC}: about 11 % for long-term storage`, 'published'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(
@@ -185,7 +201,11 @@ export const sorghum: ProductProfile = {
   id: 'sorghum',
   name: 'Sorghum',
   category: 'grain',
-  initialMoistureWbPct: sourced(20, 'typical 14–20 % at harvest; from memory (REF §3)', 'memory'),
+  initialMoistureWbPct: sourced(
+    20,
+    'typical 14–20 % at harvest; from memory (drying-science.md §3)',
+    'memory',
+  ),
   targetMoistureWbPct: sourced(12, `${WIKI_EMC}: about 12 % for long-term storage`, 'published'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: null,
@@ -218,4 +238,3 @@ export const GRAIN_PROFILES: ProductProfile[] = [
   soybean,
   sorghum,
 ]
-export { REF }

@@ -1,13 +1,11 @@
 /**
  * @module product/catalogue-helpers
- * Small builders that keep the catalogue files readable. `REF` names the project reference file that
- * collected the sources (`../shared/references/drying-science.md`), cited by section.
+ * Small builders that keep the catalogue files readable. Sources cite `drying-science.md §n`, the project
+ * reference file that collected them (`../shared/references/drying-science.md`), by section.
  */
 import type { IsothermEquation } from './isotherm-models.ts'
 import type { KineticsEquation, RateLaw } from './kinetics-models.ts'
 import type { Confidence, IsothermSpec, KineticsSpec, Shape, Sourced } from './profile.ts'
-
-export const REF = 'dryhours reference drying-science.md'
 
 export function sourced<T>(value: T, source: string, confidence: Confidence): Sourced<T> {
   return { value, source, confidence }
@@ -54,11 +52,11 @@ export const ASSUMED_EA_J_PER_MOL = 30000
 
 export const SAFE_AW_MOULD = sourced(
   0.65,
-  'Beuchat 1981, Cereal Foods World 26:345: below aw 0.65 only osmophilic yeasts and a few moulds grow (REF §3)',
+  'Beuchat 1981, Cereal Foods World 26:345: below aw 0.65 only osmophilic yeasts and a few moulds grow (drying-science.md §3)',
   'published',
 )
 export const SAFE_AW_DRIED_FRUIT = sourced(
   0.6,
-  'Beuchat 1981: no microbial proliferation below aw 0.60; trade specification for dried foods < 0.60 (REF §3)',
+  'Beuchat 1981: no microbial proliferation below aw 0.60; trade specification for dried foods < 0.60 (drying-science.md §3)',
   'published',
 )

@@ -17,8 +17,8 @@ export const mintLeaves: ProductProfile = {
   id: 'mint-leaves',
   name: 'Mint leaves',
   category: 'herb',
-  initialMoistureWbPct: sourced(82, 'typical 80–85 %; from memory (REF §3)', 'memory'),
-  targetMoistureWbPct: sourced(10, 'herbs at most 10–12 %; from memory (REF §3)', 'memory'),
+  initialMoistureWbPct: sourced(82, 'typical 80–85 %; from memory (drying-science.md §3)', 'memory'),
+  targetMoistureWbPct: sourced(10, 'herbs at most 10–12 %; from memory (drying-science.md §3)', 'memory'),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(40, 'essential-oil loss above about 40 °C: common practice, no source', 'memory'),
   isotherm: {
@@ -56,11 +56,15 @@ export const fishFillets: ProductProfile = {
   category: 'fish',
   initialMoistureWbPct: sourced(
     80,
-    'fresh fish muscle about 80–83 % (direct solar fish dryer study, SCIRP; REF §3)',
+    'fresh fish muscle about 80–83 % (direct solar fish dryer study, SCIRP; drying-science.md §3)',
     'published',
   ),
-  targetMoistureWbPct: sourced(15, 'about 15–20 % and aw < 0.7; from memory (REF §3)', 'memory'),
-  waterActivityTarget: sourced(0.7, 'aw < 0.7 for dried fish; from memory (REF §3)', 'memory'),
+  targetMoistureWbPct: sourced(
+    15,
+    'about 15–20 % and aw < 0.7; from memory (drying-science.md §3)',
+    'memory',
+  ),
+  waterActivityTarget: sourced(0.7, 'aw < 0.7 for dried fish; from memory (drying-science.md §3)', 'memory'),
   maxProductTempC: sourced(
     55,
     'protein denaturation and case hardening above about 55 °C; from memory',
@@ -96,7 +100,7 @@ export const fishFilletsSalted: ProductProfile = {
   targetMoistureWbPct: sourced(35, 'salted dried fish about 35 %; from memory', 'memory'),
   waterActivityTarget: sourced(
     0.75,
-    'ICAR e-course: aw held near that of saturated brine (0.75) while salt-saturated (REF §1.3)',
+    'ICAR e-course: aw held near that of saturated brine (0.75) while salt-saturated (drying-science.md §1.3)',
     'published',
   ),
   isotherm: {
@@ -115,15 +119,19 @@ export const coffeeParchment: ProductProfile = {
   id: 'coffee-parchment',
   name: 'Coffee in parchment (washed)',
   category: 'beverage-crop',
-  initialMoistureWbPct: sourced(53, 'washed parchment about 50–55 %; from memory (REF §3)', 'memory'),
+  initialMoistureWbPct: sourced(
+    53,
+    'washed parchment about 50–55 %; from memory (drying-science.md §3)',
+    'memory',
+  ),
   targetMoistureWbPct: sourced(
     11.5,
-    'ICO Resolution 420: never ship above 12.5 %; 11–12 % common practice (REF §3)',
+    'ICO Resolution 420: never ship above 12.5 %; 11–12 % common practice (drying-science.md §3)',
     'published',
   ),
   waterActivityTarget: sourced(
     0.68,
-    'ICO good hygiene practice pages: aw < 0.68 means no fungal growth (REF §3)',
+    'ICO good hygiene practice pages: aw < 0.68 means no fungal growth (drying-science.md §3)',
     'published',
   ),
   maxProductTempC: sourced(
@@ -150,7 +158,7 @@ export const coffeeParchment: ProductProfile = {
   defaultThicknessMm: sourced(9, 'bean in parchment; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(15, 'layer of 2–4 cm on raised beds; from memory', 'memory'),
   cautions: [
-    'Ochratoxin A: spend no more than 4 days between aw 0.95 and 0.80 while drying (FAO/ICO mould-prevention guidelines; REF §5.2).',
+    'Ochratoxin A: spend no more than 4 days between aw 0.95 and 0.80 while drying (FAO/ICO mould-prevention guidelines; drying-science.md §5.2).',
     'Do not store fresh cherry or wet parchment; do not rewet dried coffee.',
   ],
 }
@@ -159,8 +167,16 @@ export const cocoaBeans: ProductProfile = {
   id: 'cocoa-beans',
   name: 'Cocoa beans (fermented)',
   category: 'beverage-crop',
-  initialMoistureWbPct: sourced(55, 'fermented wet beans about 55–60 %; from memory (REF §3)', 'memory'),
-  targetMoistureWbPct: sourced(7.5, 'cocoa oven-drying study: 7.5 % end point (REF §3)', 'published'),
+  initialMoistureWbPct: sourced(
+    55,
+    'fermented wet beans about 55–60 %; from memory (drying-science.md §3)',
+    'memory',
+  ),
+  targetMoistureWbPct: sourced(
+    7.5,
+    'cocoa oven-drying study: 7.5 % end point (drying-science.md §3)',
+    'published',
+  ),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(
     60,
@@ -170,7 +186,7 @@ export const cocoaBeans: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.036, 21.63, 0.871),
-      'GAB peeled fermented Trinitario bean at 25 °C: Xm 0.036, C 21.63, K 0.871, Sandoval et al. 2020, Rev. Téc. Ing. Univ. Zulia 43(1) (REF §1.3)',
+      'GAB peeled fermented Trinitario bean at 25 °C: Xm 0.036, C 21.63, K 0.871, Sandoval et al. 2020, Rev. Téc. Ing. Univ. Zulia 43(1) (drying-science.md §1.3)',
       'published',
       [25, 25],
       [10, 90],
@@ -180,10 +196,10 @@ export const cocoaBeans: ProductProfile = {
     { model: 'diffusion', dRefM2PerS: 6.14e-10, tRefC: 55, activationEnergyJPerMol: 39940 },
     10.5,
     'sphere',
-    'Fick diffusion, Deff 6.14e-10 m²/s at 55 °C, Ea 39.94 kJ/mol, batch dryer at 55/70/81 °C, Chilean J. Agric. Res. 70(4):633 (REF §2.3); bean as a 10.5 mm sphere (Hii et al. 2009 layer 1.05 cm) is our assumption',
+    'Fick diffusion, Deff 6.14e-10 m²/s at 55 °C, Ea 39.94 kJ/mol, batch dryer at 55/70/81 °C, Chilean J. Agric. Res. 70(4):633 (drying-science.md §2.3); bean as a 10.5 mm sphere (Hii et al. 2009 layer 1.05 cm) is our assumption',
     'published',
   ),
-  defaultThicknessMm: sourced(10.5, 'Hii et al. 2009 single layer 1.05 cm (REF §6)', 'memory'),
+  defaultThicknessMm: sourced(10.5, 'Hii et al. 2009 single layer 1.05 cm (drying-science.md §6)', 'memory'),
   defaultLoadingKgPerM2: sourced(20, 'layer of a few cm on raised beds; from memory', 'memory'),
   cautions: [
     'Mould and ochratoxin risk in slow drying; smoke contamination from direct-fired dryers (PAH): prefer indirect heaters.',
@@ -194,22 +210,26 @@ export const hops: ProductProfile = {
   id: 'hops',
   name: 'Hop cones',
   category: 'herb',
-  initialMoistureWbPct: sourced(80, 'MSU Extension (Brown 2013): 76–84 % at harvest (REF §3)', 'published'),
+  initialMoistureWbPct: sourced(
+    80,
+    'MSU Extension (Brown 2013): 76–84 % at harvest (drying-science.md §3)',
+    'published',
+  ),
   targetMoistureWbPct: sourced(
     9,
-    'MSU Extension: 8–10 %; at or below 6 % over-dried (shatters) (REF §3)',
+    'MSU Extension: 8–10 %; at or below 6 % over-dried (shatters) (drying-science.md §3)',
     'published',
   ),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(
     60,
-    'MSU Extension, UNL: keep drying air below 60 °C (140 °F) (REF §3)',
+    'MSU Extension, UNL: keep drying air below 60 °C (140 °F) (drying-science.md §3)',
     'published',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.07, 8, 0.85),
-      'no hop isotherm found (REF §1.3); GAB Xm 0.07, C 8, K 0.85 from memory (leafy plant material)',
+      'no hop isotherm found (drying-science.md §1.3); GAB Xm 0.07, C 8, K 0.85 from memory (leafy plant material)',
       'memory',
       [20, 60],
       [10, 90],
