@@ -68,12 +68,13 @@ function monthList(months: number[]): string {
     .join('; ')
 }
 
-/** Usable hours in 9 of 10 years at or above which a month counts as suitable in the summary [h]. */
-export const SUITABLE_MONTH_P10_HOURS = 100
-
+/**
+ * Months that suit the method: batches started in the month (on the 1st and 16th) reach the target
+ * within the deadline in the median year (`medianDaysToTarget` ≤ `deadlineDays`).
+ */
 export function suitableMonths(a: Assessment): number[] {
   return a.monthly
-    .filter((m) => finite(m.usableHours.p10) && m.usableHours.p10 >= SUITABLE_MONTH_P10_HOURS)
+    .filter((m) => finite(m.medianDaysToTarget) && m.medianDaysToTarget <= a.deadlineDays)
     .map((m) => m.month)
 }
 
@@ -92,7 +93,7 @@ export function monthlyAlt(a: Assessment): string {
     `Most in ${MONTH_LONG[best.month - 1]}: median ${Math.round(bm.median as number)} h` +
     (finite(bm.p10) && finite(bm.p90) ? ` (P10 ${Math.round(bm.p10)} h, P90 ${Math.round(bm.p90)} h)` : '') +
     `; fewest in ${MONTH_LONG[worst.month - 1]}: median ${Math.round(worst.usableHours.median as number)} h. ` +
-    `Months with at least ${SUITABLE_MONTH_P10_HOURS} usable hours in 9 of 10 years: ${monthList(suitableMonths(a))}.`
+    `Months whose batches reach the target within ${a.deadlineDays} days in the median year: ${monthList(suitableMonths(a))}.`
   )
 }
 

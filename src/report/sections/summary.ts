@@ -3,11 +3,12 @@
  * The header (site, data, coverage, product, method, target) and the answer in plain sentences.
  */
 import type { Assessment } from '../assessment-view.ts'
+import { MONTH_LONG } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
 import { escapeHtml } from '../escape.ts'
 import { finite, perMassFactor, perMassWords, type SectionContext } from './context.ts'
 import { fuelName } from './heat.ts'
-import { monthList, SUITABLE_MONTH_P10_HOURS, suitableMonths } from './monthly.ts'
+import { monthList, suitableMonths } from './monthly.ts'
 import { bestStartWindow } from './start-dates.ts'
 
 const METHOD_NAMES: Record<string, string> = {
@@ -95,14 +96,31 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
   const method = methodName(a.method.kind)
   const suit = suitableMonths(a)
   const typical = a.site.typicalYear
-  const when = typical ? 'In this typical year' : 'In 9 of 10 years'
-  out.push(
-    suit.length > 0
-      ? `${when}, ${monthList(suit)} give${suit.length === 1 ? 's' : ''} at least ${SUITABLE_MONTH_P10_HOURS} usable drying hours for ${a.product.name} by ${method}.`
-      : `No month gives ${SUITABLE_MONTH_P10_HOURS} usable drying hours ${typical ? 'in this typical year' : 'in 9 of 10 years'} for ${a.product.name} by ${method}.`,
-  )
-  const w = bestStartWindow(a)
   const target = `${formatNumber(a.product.targetMoistureWbPct, 1)} %`
+  const median = typical ? 'in this typical year' : 'in the median year'
+  if (suit.length > 0) {
+    const days = suit.map((m) => a.monthly.find((r) => r.month === m)?.medianDaysToTarget).filter(finite)
+    out.push(
+      `By ${method}, batches of ${a.product.name} started in ${monthList(suit)} reach ${target} within the ${a.deadlineDays}-day deadline ${median} (${formatNumber(Math.min(...days), 1)} to ${formatNumber(Math.max(...days), 1)} days).`,
+    )
+  } else {
+    out.push(
+      `By ${method}, no month's batches of ${a.product.name} reach ${target} within ${a.deadlineDays} days ${median}.`,
+    )
+  }
+  const top = a.monthly.reduce(
+    (x, y) => ((y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x),
+    a.monthly[0],
+  )
+  if (top && finite(top.usableHours.median)) {
+    out.push(
+      `The air dries the product most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} usable hours ${median}` +
+        (typical || !finite(top.usableHours.p10)
+          ? '.'
+          : `, at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
+    )
+  }
+  const w = bestStartWindow(a)
   if (w) {
     out.push(
       `The best start window is ${w.from} to ${w.to}: batches reach ${target} in about ${formatNumber(w.medianDays, 1)} days in a median year` +
@@ -122,18 +140,23 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
   if (finite(heat.median)) {
     const fuel = a.heat.fuels.find((f) => f.fuel === a.heat.selectedFuel)
     const cost = fuel && finite(fuel.costPerTonne) ? fuel.costPerTonne * perMassFactor(ctx) : null
+    const costText =
+      fuel && finite(cost)
+        ? `, costing about ${formatNumber(cost, 0)} ${perMassWords(ctx)} in ${fuelName(fuel.fuel)}${fuel.priceIsExample ? ' at the example price' : ''}`
+        : ''
+    const e = (v: number | null) =>
+      `${formatNumber(finite(v) ? u.energyPerMass(v).value : null)} ${u.energyPerMassUnit}`
     if (heat.median === 0 && (!finite(heat.p90) || heat.p90 === 0)) {
-      out.push(`Batches in this season need no supplemental heat to finish by the deadline in most years.`)
+      out.push(
+        'Batches started in this season need no supplemental heat to finish by the deadline in 9 of 10 cases.',
+      )
+    } else if (heat.median === 0) {
+      out.push(
+        `Most batches in this season need no supplemental heat to finish by the deadline; 1 in 10 needs ${e(heat.p90)} or more added to the air (${e(fuelHeat.p90)} of fuel heat).`,
+      )
     } else {
       out.push(
-        `To finish every batch by the deadline, a backup heater adds about ${formatNumber(u.energyPerMass(heat.median).value)} ${u.energyPerMassUnit} to the air in a median batch (P90 ${formatNumber(finite(heat.p90) ? u.energyPerMass(heat.p90).value : null)} ${u.energyPerMassUnit})` +
-          (finite(fuelHeat.median)
-            ? `, ${formatNumber(u.energyPerMass(fuelHeat.median).value)} ${u.energyPerMassUnit} of fuel heat`
-            : '') +
-          (fuel && finite(cost)
-            ? `, costing about ${formatNumber(cost, 0)} ${perMassWords(ctx)} in ${fuelName(fuel.fuel)}${fuel.priceIsExample ? ' at the example price' : ''}`
-            : '') +
-          '.',
+        `To finish by the deadline, a backup heater adds about ${e(heat.median)} to the air in a median batch (1 in 10 batches: ${e(heat.p90)}), ${e(fuelHeat.median)} of fuel heat${costText}.`,
       )
     }
   }
@@ -149,8 +172,9 @@ export function answerHtml(a: Assessment, ctx: SectionContext): string {
   const items = answerSentences(a, ctx)
     .map((s) => `<li>${escapeHtml(s)}</li>`)
     .join('')
-  const warnings = a.warnings.length
-    ? `<div class="warnings" role="note"><h3>Warnings</h3><ul>${a.warnings.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`
+  const all = [...a.warnings, ...(ctx.info.readerWarnings ?? []).map((w) => `weather file: ${w}`)]
+  const warnings = all.length
+    ? `<div class="warnings" role="note"><h3>Warnings</h3><ul>${all.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`
     : ''
   return `<section class="report-section answer" id="${ctx.idPrefix}sec-answer" data-section="answer"><h2>The answer</h2><ul class="sentences">${items}</ul>${warnings}</section>`
 }

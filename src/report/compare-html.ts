@@ -1,0 +1,222 @@
+/**
+ * @module report/compare-html
+ * Several sites side by side for one product and method: a ranking by a stated criterion, grouped bars
+ * (usable hours, days to target, supplemental heat by month) with their tables, then each site's own
+ * report. Ranking uses only figures already in each assessment; nothing is recomputed here.
+ */
+import type { Assessment } from './assessment-view.ts'
+import { siteDisplayName } from './assessment-view.ts'
+import { groupedBarsChart } from './charts/grouped-bars.ts'
+import { MONTH_SHORT } from './charts/svg.ts'
+import { formatNumber, unitFormatter } from './display-units.ts'
+import { escapeHtml } from './escape.ts'
+import { figureHtml } from './figure.ts'
+import { htmlDocument, type ReportOptions, renderReportArticle } from './report-html.ts'
+import { finite, round } from './sections/context.ts'
+import { methodName } from './sections/summary.ts'
+import type { ReportTable } from './tables.ts'
+import { tableHtml } from './tables.ts'
+
+export interface ComparedSite {
+  assessment: Assessment
+  /** Per-site report options (series, file name, profile). */
+  options?: Omit<ReportOptions, 'units' | 'paper' | 'idPrefix'>
+}
+
+export const RANKING_CRITERION =
+  'mean share of the season’s start days’ years that finish within the deadline (higher first); ties broken by the lower median supplemental heat per tonne'
+
+export interface SiteRank {
+  index: number
+  name: string
+  meanProbabilityWithinDeadline: number | null
+  medianHeatKwhPerTonne: number | null
+  bestWindow: string | null
+  usableHoursSeasonP10: number | null
+}
+
+function seasonMonths(a: Assessment): Set<number> {
+  const months = new Set<number>()
+  for (const s of a.startDates) months.add(Number(s.start.slice(0, 2)))
+  return months
+}
+
+export function rankSites(sites: ComparedSite[]): SiteRank[] {
+  const ranks = sites.map((s, index) => {
+    const a = s.assessment
+    const probs = a.startDates.map((r) => r.probabilityWithinDeadline).filter(finite)
+    const months = seasonMonths(a)
+    const p10s = a.monthly.filter((m) => months.has(m.month)).map((m) => m.usableHours.p10)
+    const w = a.bestStartWindows[0]
+    return {
+      index,
+      name: siteDisplayName(a, s.options?.info),
+      meanProbabilityWithinDeadline: probs.length ? probs.reduce((x, y) => x + y, 0) / probs.length : null,
+      medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
+      bestWindow: w ? `${w.from} to ${w.to}` : null,
+      usableHoursSeasonP10:
+        p10s.length && p10s.every(finite) ? (p10s as number[]).reduce((x, y) => x + y, 0) : null,
+    }
+  })
+  return ranks.sort(
+    (x, y) =>
+      (y.meanProbabilityWithinDeadline ?? -1) - (x.meanProbabilityWithinDeadline ?? -1) ||
+      (x.medianHeatKwhPerTonne ?? Number.POSITIVE_INFINITY) -
+        (y.medianHeatKwhPerTonne ?? Number.POSITIVE_INFINITY),
+  )
+}
+
+export function comparisonTable(sites: ComparedSite[], units: 'si' | 'us' = 'si'): ReportTable {
+  const u = unitFormatter(units)
+  return {
+    id: 'site-comparison',
+    title: 'Sites ranked',
+    columns: [
+      'rank',
+      'site',
+      'finishing within the deadline, mean over start days [%]',
+      'best start window',
+      'usable hours in the season months, sum of monthly P10 [h]',
+      `supplemental heat, median [${u.energyPerMassUnit}]`,
+    ],
+    digits: [0, 0, 0, 0, 0, 0],
+    rows: rankSites(sites).map((r, i) => [
+      String(i + 1),
+      r.name,
+      finite(r.meanProbabilityWithinDeadline) ? round(r.meanProbabilityWithinDeadline * 100, 1) : null,
+      r.bestWindow ?? 'none',
+      r.usableHoursSeasonP10,
+      finite(r.medianHeatKwhPerTonne) ? round(u.energyPerMass(r.medianHeatKwhPerTonne).value, 1) : null,
+    ]),
+  }
+}
+
+function monthlyCompareTable(
+  id: string,
+  title: string,
+  sites: ComparedSite[],
+  names: string[],
+  value: (a: Assessment, m: number) => number | null,
+): ReportTable {
+  return {
+    id,
+    title,
+    columns: ['month', ...names],
+    digits: [0, ...names.map(() => 1)],
+    rows: MONTH_SHORT.map((label, m) => [label, ...sites.map((s) => value(s.assessment, m + 1))]),
+  }
+}
+
+export function renderComparisonArticle(sites: ComparedSite[], o: Pick<ReportOptions, 'units'> = {}): string {
+  if (sites.length === 0) throw new RangeError('a comparison needs at least one site')
+  const units = o.units ?? 'si'
+  const u = unitFormatter(units)
+  const names = sites.map((s) => siteDisplayName(s.assessment, s.options?.info))
+  const first = sites[0].assessment
+  const categories = MONTH_SHORT.map((label, i) => ({ key: String(i + 1), label }))
+  const month = (a: Assessment, m: number) => a.monthly.find((r) => r.month === m)
+  let fig = 0
+  const ranks = rankSites(sites)
+  const best = ranks[0]
+  const sentences = [
+    `${best.name} ranks first for ${first.product.name} by ${methodName(first.method.kind)}` +
+      (finite(best.meanProbabilityWithinDeadline)
+        ? `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years finish a batch within ${first.deadlineDays} days across the season's start days.`
+        : '.'),
+    `Ranking criterion: ${RANKING_CRITERION}.`,
+  ]
+  const usableAlt =
+    `Median usable drying hours per month for ${names.length} sites (${names.join(', ')}); whiskers P10 to P90. ` +
+    names
+      .map((n, i) => {
+        const best = sites[i].assessment.monthly.reduce((x, y) =>
+          (y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x,
+        )
+        return `${n}: most in ${MONTH_SHORT[best.month - 1]} (${formatNumber(best.usableHours.median)} h)`
+      })
+      .join('; ') +
+    '.'
+  const usable = figureHtml({
+    id: 'cmp-fig-usable',
+    number: ++fig,
+    caption: 'Usable drying hours per month, sites side by side (median, P10–P90)',
+    svg: groupedBarsChart({
+      id: 'cmp-fig-usable-svg',
+      title: 'Usable drying hours per month by site',
+      description: usableAlt,
+      categories,
+      series: sites.map((s, i) => ({
+        name: names[i],
+        values: categories.map((c) => month(s.assessment, Number(c.key))?.usableHours.median ?? null),
+        low: categories.map((c) => month(s.assessment, Number(c.key))?.usableHours.p10 ?? null),
+        high: categories.map((c) => month(s.assessment, Number(c.key))?.usableHours.p90 ?? null),
+      })),
+      yLabel: 'usable drying hours [h]',
+      unit: 'h',
+    }),
+    alt: usableAlt,
+    table: monthlyCompareTable(
+      'compare-usable-hours',
+      'Median usable drying hours per month by site [h]',
+      sites,
+      names,
+      (a, m) => month(a, m)?.usableHours.median ?? null,
+    ),
+  })
+  const heatAlt =
+    `Median supplemental heat per ${units === 'us' ? 'short ton' : 'tonne'} for batches started in each month, by site. ` +
+    ranks
+      .map(
+        (r) =>
+          `${r.name}: median over the season ${formatNumber(finite(r.medianHeatKwhPerTonne) ? u.energyPerMass(r.medianHeatKwhPerTonne).value : null)} ${u.energyPerMassUnit}`,
+      )
+      .join('; ') +
+    '.'
+  const heatValue = (a: Assessment, m: number) => {
+    const v = month(a, m)?.supplementalHeatKwhPerTonne.median
+    return finite(v) ? round(u.energyPerMass(v).value, 1) : null
+  }
+  const heat = figureHtml({
+    id: 'cmp-fig-heat',
+    number: ++fig,
+    caption: 'Supplemental heat by start month, sites side by side (median)',
+    svg: groupedBarsChart({
+      id: 'cmp-fig-heat-svg',
+      title: 'Supplemental heat by start month and site',
+      description: heatAlt,
+      categories,
+      series: sites.map((s, i) => ({
+        name: names[i],
+        values: categories.map((c) => heatValue(s.assessment, Number(c.key))),
+      })),
+      yLabel: `heat into the air [${u.energyPerMassUnit}]`,
+      unit: u.energyPerMassUnit,
+    }),
+    alt: heatAlt,
+    table: monthlyCompareTable(
+      'compare-heat',
+      `Median supplemental heat by start month and site [${u.energyPerMassUnit}]`,
+      sites,
+      names,
+      heatValue,
+    ),
+  })
+  const perSite = sites
+    .map((s, i) => renderReportArticle(s.assessment, { ...s.options, units, idPrefix: `s${i + 1}-` }))
+    .join('\n')
+  return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
+<header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
+<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first.method.kind))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
+<section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(sites, units))}</section>
+<section class="report-section" data-section="compare-monthly"><h2>Sites side by side</h2>${usable}${heat}</section>
+</article>
+${perSite}`
+}
+
+export function renderComparisonHtml(
+  sites: ComparedSite[],
+  o: Pick<ReportOptions, 'units' | 'paper'> = {},
+): string {
+  const names = sites.map((s) => siteDisplayName(s.assessment, s.options?.info))
+  return htmlDocument(`Drying comparison: ${names.join(', ')}`, renderComparisonArticle(sites, o), o.paper)
+}

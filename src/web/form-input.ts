@@ -1,0 +1,209 @@
+/**
+ * @module web/form-input
+ * The page's form (multipart/form-data or urlencoded) → validated inputs for the weather reader and the
+ * assessment. Every field is optional except a weather file (or demo id) and a product; a bad value gives
+ * a RangeError naming the form field, the value and what is accepted.
+ */
+import type { AssessOptions } from '../analysis/assess.ts'
+import { FUEL_IDS, type FuelId } from '../drying/method.ts'
+import { productById } from '../product/catalogue.ts'
+import type { ProductProfile } from '../product/profile.ts'
+import { parseUserProfile } from '../product/profile-schema.ts'
+import type { UnitSystem } from '../report/display-units.ts'
+import { parseMappingArgument } from '../weather/options.ts'
+
+/** Most weather files one comparison takes. */
+export const MAX_SITES = 6
+
+export const METHOD_KINDS = ['open-air', 'shade', 'solar-cabinet', 'heated'] as const
+export const RESULT_FORMATS = ['page', 'html', 'csv', 'json', 'bundle'] as const
+export type ResultFormat = (typeof RESULT_FORMATS)[number]
+
+export interface WeatherFile {
+  name: string
+  bytes: Uint8Array
+}
+
+export interface FormInput {
+  files: WeatherFile[]
+  /** Demo site file name chosen instead of (or beside) uploads. */
+  demo: string | null
+  weatherOptions: Record<string, unknown>
+  product: ProductProfile
+  assess: Omit<AssessOptions, 'product' | 'onProgress'>
+  units: UnitSystem
+  format: ResultFormat
+}
+
+type FormValue = string | File
+
+function text(form: FormData, name: string): string | undefined {
+  const v = form.get(name) as FormValue | null
+  if (v === null || typeof v !== 'string') return undefined
+  const t = v.trim()
+  return t === '' ? undefined : t
+}
+
+function numberField(form: FormData, name: string, lo: number, hi: number, unit: string): number | undefined {
+  const t = text(form, name)
+  if (t === undefined) return undefined
+  const n = Number(t.replace(',', '.'))
+  if (!(Number.isFinite(n) && n >= lo && n <= hi)) {
+    throw new RangeError(`${name}: must be a number from ${lo} to ${hi} ${unit}, got ${JSON.stringify(t)}`)
+  }
+  return n
+}
+
+function choice<T extends string>(form: FormData, name: string, options: readonly T[], fallback: T): T {
+  const t = text(form, name)
+  if (t === undefined) return fallback
+  if (!(options as readonly string[]).includes(t)) {
+    throw new RangeError(`${name}: must be one of ${options.join(', ')}, got ${JSON.stringify(t)}`)
+  }
+  return t as T
+}
+
+function monthDay(form: FormData, name: string): string | undefined {
+  const t = text(form, name)
+  if (t === undefined) return undefined
+  if (!/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/.test(t)) {
+    throw new RangeError(`${name}: must be a day as MM-DD (e.g. 06-15), got ${JSON.stringify(t)}`)
+  }
+  return t
+}
+
+async function fileParts(form: FormData, name: string): Promise<WeatherFile[]> {
+  const out: WeatherFile[] = []
+  for (const v of form.getAll(name) as FormValue[]) {
+    if (typeof v === 'string') continue
+    if (v.size === 0 && v.name === '') continue
+    out.push({ name: v.name || 'upload', bytes: new Uint8Array(await v.arrayBuffer()) })
+  }
+  return out
+}
+
+/** Parse the page form. `demoIds` are the demo file names the server can supply (none on a bare app). */
+export async function parseForm(form: FormData, demoIds: readonly string[] = []): Promise<FormInput> {
+  const files = await fileParts(form, 'file')
+  const demoRaw = text(form, 'demo')
+  const demo = demoRaw && demoIds.includes(demoRaw) ? demoRaw : null
+  if (demoRaw && !demo) {
+    throw new RangeError(
+      `demo: unknown demo file ${JSON.stringify(demoRaw)}${demoIds.length ? `; choose one of ${demoIds.join(', ')}` : ' (this server offers no demo files)'}`,
+    )
+  }
+  if (files.length === 0 && !demo)
+    throw new RangeError('file: choose a weather file (CSV or EPW) to upload, or a demo site')
+  if (files.length + (demo ? 1 : 0) > MAX_SITES) {
+    throw new RangeError(
+      `file: at most ${MAX_SITES} weather files can be compared at once, got ${files.length + (demo ? 1 : 0)}`,
+    )
+  }
+
+  const weatherOptions: Record<string, unknown> = {}
+  const siteName = text(form, 'siteName')
+  if (siteName !== undefined) {
+    if (siteName.length > 200) throw new RangeError('siteName: at most 200 characters')
+    weatherOptions.siteName = siteName
+  }
+  const tz = text(form, 'timeZone')
+  if (tz !== undefined) weatherOptions.timeZone = tz
+  const offset = numberField(form, 'utcOffsetHours', -12, 14, 'h')
+  if (offset !== undefined) weatherOptions.utcOffsetHours = offset
+  const lat = numberField(form, 'latitudeDeg', -90, 90, '° (north positive)')
+  if (lat !== undefined) weatherOptions.latitudeDeg = lat
+  const lon = numberField(form, 'longitudeDeg', -180, 180, '° (east positive)')
+  if (lon !== undefined) weatherOptions.longitudeDeg = lon
+  const elev = numberField(form, 'elevationM', -500, 9000, 'm')
+  if (elev !== undefined) weatherOptions.elevationM = elev
+  const order = text(form, 'dateOrder')
+  if (order !== undefined) weatherOptions.dateOrder = choice(form, 'dateOrder', ['ymd', 'mdy', 'dmy'], 'ymd')
+  const mappingText = text(form, 'mapping')
+  if (mappingText !== undefined) {
+    const mapping: Record<string, unknown> = {}
+    mappingText
+      .split(/\r?\n/)
+      .map((l) => l.trim())
+      .filter((l) => l !== '')
+      .forEach((line, i) => {
+        try {
+          const [k, v] = parseMappingArgument(line)
+          mapping[k] = v
+        } catch (e) {
+          throw new RangeError(`mapping line ${i + 1}: ${(e as Error).message}`)
+        }
+      })
+    weatherOptions.mapping = mapping
+  }
+
+  let product: ProductProfile
+  const profileFiles = (form.getAll('profile') as FormValue[]).filter(
+    (v): v is File => typeof v !== 'string' && v.size > 0,
+  )
+  if (profileFiles.length > 0) {
+    let json: unknown
+    try {
+      json = JSON.parse(await profileFiles[0].text())
+    } catch (e) {
+      throw new RangeError(
+        `profile: the uploaded product profile is not valid JSON (${(e as Error).message})`,
+      )
+    }
+    try {
+      product = parseUserProfile(json)
+    } catch (e) {
+      throw new RangeError(`profile: ${(e as Error).message}`)
+    }
+  } else {
+    const id = text(form, 'product')
+    if (id === undefined)
+      throw new RangeError('product: choose a product from the catalogue or upload a profile')
+    try {
+      product = productById(id)
+    } catch (e) {
+      throw new RangeError(`product: ${(e as Error).message}`)
+    }
+  }
+
+  const kind = choice(form, 'method', METHOD_KINDS, 'open-air')
+  const method: Record<string, unknown> = { kind }
+  const loading = numberField(form, 'loadingKgPerM2', 0.1, 200, 'kg/m²')
+  if (loading !== undefined && (kind === 'open-air' || kind === 'shade')) method.loadingKgPerM2 = loading
+  const area = numberField(form, 'collectorAreaM2PerTonne', 1, 10_000, 'm²/t')
+  if (area !== undefined && kind === 'solar-cabinet') method.collectorAreaM2PerTonne = area
+  const setPoint = numberField(form, 'setPointC', 0, 120, '°C')
+  if (setPoint !== undefined && kind === 'heated') method.setPointC = setPoint
+  const efficiency = numberField(form, 'heaterEfficiencyPct', 1, 100, '%')
+  const fuel =
+    text(form, 'fuel') === undefined ? undefined : choice<FuelId>(form, 'fuel', FUEL_IDS, 'propane')
+  if (kind === 'heated') {
+    if (efficiency !== undefined) method.heaterEfficiency = efficiency / 100
+    if (fuel !== undefined) method.fuel = fuel
+  }
+  const assess: FormInput['assess'] = { method: method as AssessOptions['method'] }
+  const target = numberField(form, 'targetWbPct', 0.5, 90, '% wet basis')
+  if (target !== undefined) assess.targetWbPct = target
+  const initial = numberField(form, 'initialWbPct', 1, 95, '% wet basis')
+  if (initial !== undefined) assess.initialWbPct = initial
+  const seasonStart = monthDay(form, 'seasonStart')
+  const seasonEnd = monthDay(form, 'seasonEnd')
+  if (seasonStart !== undefined) assess.seasonStart = seasonStart
+  if (seasonEnd !== undefined) assess.seasonEnd = seasonEnd
+  const deadline = numberField(form, 'deadlineDays', 0.25, 365, 'days')
+  if (deadline !== undefined) assess.deadlineDays = deadline
+  if (fuel !== undefined) assess.fuel = fuel
+  if (kind !== 'heated' && efficiency !== undefined)
+    assess.backupHeater = { heaterEfficiency: efficiency / 100 }
+  const price = numberField(form, 'fuelPrice', 0, 1e6, 'per fuel unit')
+  if (price !== undefined) assess.fuelPrices = { [fuel ?? 'propane']: price }
+
+  return {
+    files,
+    demo,
+    weatherOptions,
+    product,
+    assess,
+    units: choice<UnitSystem>(form, 'units', ['si', 'us'], 'si'),
+    format: choice(form, 'format', RESULT_FORMATS, 'page'),
+  }
+}

@@ -1,0 +1,151 @@
+/**
+ * @module web/run-form
+ * What POST /report does with a parsed form: read each weather file, assess it, and render one report
+ * (one site) or a comparison (several). Runtime-neutral; the demo provider is the only I/O and is passed in.
+ */
+import { assess } from '../analysis/assess.ts'
+import type { Assessment } from '../analysis/assessment.ts'
+import {
+  type ComparedSite,
+  comparisonTable,
+  renderComparisonArticle,
+  renderComparisonHtml,
+} from '../report/compare-html.ts'
+import { renderReportCsv } from '../report/report-csv.ts'
+import { renderReportArticle, renderReportHtml } from '../report/report-html.ts'
+import { tablesCsv } from '../report/tables.ts'
+import { readWeatherBytes } from '../weather/read-weather.ts'
+import type { HourlySeries } from '../weather/series.ts'
+import { WeatherInputError } from '../weather/weather-input-error.ts'
+import type { DemoProvider } from './demo-files.ts'
+import type { FormInput } from './form-input.ts'
+
+/** A weather file that needs answers the form can give (time zone, column mapping …). */
+export class FormQuestion extends Error {
+  override name = 'FormQuestion'
+  constructor(
+    message: string,
+    readonly fileName: string,
+    readonly missing: string[],
+  ) {
+    super(message)
+  }
+}
+
+export interface AssessedSite {
+  fileName: string
+  series: HourlySeries
+  assessment: Assessment
+  readWarnings: string[]
+  dataSource: string
+}
+
+export interface FormResult {
+  sites: AssessedSite[]
+  /** The `<article>` fragment(s) for inline display. */
+  article: string
+  /** The complete standalone HTML document. */
+  document: string
+  csv: string
+  /** The assessment (one site) or the list of assessments (comparison), JSON text. */
+  json: string
+  title: string
+}
+
+async function inputs(
+  input: FormInput,
+  demo?: DemoProvider,
+): Promise<{ name: string; bytes: Uint8Array; options: Record<string, unknown> }[]> {
+  const out: { name: string; bytes: Uint8Array; options: Record<string, unknown> }[] = []
+  if (input.demo && demo) {
+    const entry = demo.list().find((d) => d.file === input.demo)
+    const bytes = await demo.read(input.demo)
+    if (!entry || !bytes)
+      throw new RangeError(
+        `demo: the demo file ${JSON.stringify(input.demo)} is not available on this server`,
+      )
+    out.push({ name: entry.file, bytes, options: { ...entry.readOptions, ...input.weatherOptions } })
+  }
+  for (const f of input.files)
+    out.push({ name: f.name, bytes: f.bytes, options: { ...input.weatherOptions } })
+  return out
+}
+
+export async function runForm(input: FormInput, demo?: DemoProvider): Promise<FormResult> {
+  const sites: AssessedSite[] = []
+  const files = await inputs(input, demo)
+  for (const f of files) {
+    // A site name typed in the form names a single file; with several files, each keeps its own name.
+    const options = files.length > 1 ? { ...f.options, siteName: undefined } : f.options
+    if (options.siteName === undefined) delete options.siteName
+    let read: ReturnType<typeof readWeatherBytes>
+    try {
+      read = readWeatherBytes(f.bytes, options)
+    } catch (e) {
+      if (e instanceof WeatherInputError) throw new FormQuestion(`${f.name}: ${e.message}`, f.name, e.missing)
+      if (e instanceof RangeError) throw new RangeError(`${f.name}: ${e.message}`)
+      throw e
+    }
+    if (!read.series.site.name && files.length > 1) read.series.site.name = f.name.replace(/\.[^.]+$/, '')
+    let assessment: Assessment
+    try {
+      assessment = assess(read.series, { ...input.assess, product: input.product })
+    } catch (e) {
+      if (e instanceof RangeError) throw new RangeError(`${f.name}: ${e.message}`)
+      throw e
+    }
+    const r = read
+    sites.push({
+      fileName: f.name,
+      series: read.series,
+      assessment,
+      readWarnings: r.warnings,
+      dataSource: `${r.format.toUpperCase()}, ${r.rows.read} rows read, ${r.rows.used} used, ${r.rows.repaired} repaired, ${r.rows.rejected} rejected`,
+    })
+  }
+  const units = input.units
+  if (sites.length === 1) {
+    const s = sites[0]
+    const opts = {
+      units,
+      series: s.series,
+      profile: input.product,
+      info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
+    }
+    return {
+      sites,
+      article: renderReportArticle(s.assessment, opts),
+      document: renderReportHtml(s.assessment, opts),
+      csv: renderReportCsv(s.assessment, opts),
+      json: JSON.stringify(s.assessment, null, 2),
+      title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
+    }
+  }
+  const compared: ComparedSite[] = sites.map((s) => ({
+    assessment: s.assessment,
+    options: {
+      series: s.series,
+      profile: input.product,
+      info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
+    },
+  }))
+  return {
+    sites,
+    article: renderComparisonArticle(compared, { units }),
+    document: renderComparisonHtml(compared, { units }),
+    csv:
+      tablesCsv([comparisonTable(compared, units)]) +
+      '\r\n' +
+      sites
+        .map((s) =>
+          renderReportCsv(s.assessment, { units, series: s.series, info: { fileName: s.fileName } }),
+        )
+        .join('\r\n'),
+    json: JSON.stringify(
+      sites.map((s) => s.assessment),
+      null,
+      2,
+    ),
+    title: `comparison of ${sites.length} sites – ${sites[0].assessment.product.name}`,
+  }
+}
