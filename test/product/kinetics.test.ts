@@ -155,3 +155,21 @@ describe('heat of sorption availability', () => {
     expect(heatOfSorption(productById('wheat'), 25, 0.12).temperatureDependent).toBe(true)
   })
 })
+
+describe('air-velocity effect (only when a profile gives one)', () => {
+  it('with exponent 1 at 1 m/s reference, doubling the velocity doubles the first-order rate; absent, velocity is ignored', () => {
+    const base = productById('wheat')
+    const withV = {
+      ...base,
+      kinetics: {
+        ...base.kinetics,
+        airVelocity: { referenceMs: 1, exponent: 1, source: 'test value', confidence: 'user' as const },
+      },
+    }
+    expect(dryingRateConstantPerH(withV, 40, 30, 2) / dryingRateConstantPerH(withV, 40, 30, 1)).toBeCloseTo(
+      2,
+      12,
+    )
+    expect(dryingRateConstantPerH(base, 40, 30, 2)).toBeCloseTo(dryingRateConstantPerH(base, 40, 30, 1), 12)
+  })
+})
