@@ -250,16 +250,17 @@ function solveWetBulbBranch(
     const pv = saturationPressureFromTableKpa(x, ice)
     const pv1 = saturationTableSlopes[0]
     const pv2 = saturationTableSlopes[1]
-    const den = p - pv
-    const ws = (MOLAR_MASS_RATIO_WATER_AIR * pv) / den
-    const ws1 = (MOLAR_MASS_RATIO_WATER_AIR * p * pv1) / (den * den)
-    const ws2 = (MOLAR_MASS_RATIO_WATER_AIR * p * (pv2 * den + 2 * pv1 * pv1)) / (den * den * den)
+    // Ws* = ε pv/(p − pv) (eq 20) and its derivatives; one division each for 1/(p − pv) and 1/b.
+    const inv = 1 / (p - pv)
+    const ws = MOLAR_MASS_RATIO_WATER_AIR * pv * inv
+    const e = MOLAR_MASS_RATIO_WATER_AIR * p * inv * inv
+    const ws1 = e * pv1
+    const ws2 = e * (pv2 + 2 * pv1 * pv1 * inv)
     const a = a0 - ka * x
-    const b = b0 - kb * x
-    const num = a * ws - 1.006 * (dryBulbC - x)
-    const q = num / b
-    const q1 = (-ka * ws + a * ws1 + 1.006 + kb * q) / b
-    const q2 = (-2 * ka * ws1 + a * ws2 + 2 * kb * q1) / b
+    const invB = 1 / (b0 - kb * x)
+    const q = (a * ws - 1.006 * (dryBulbC - x)) * invB
+    const q1 = (-ka * ws + a * ws1 + 1.006 + kb * q) * invB
+    const q2 = (-2 * ka * ws1 + a * ws2 + 2 * kb * q1) * invB
     const f = q - targetW
     if (f === 0) return x
     if (f > 0) hi = x
@@ -345,6 +346,11 @@ export function wetBulbWithDewPointC(
   const t = dryBulbC
   const w = humidityRatioKgPerKg
   const dew = Math.min(dewC, t)
+  if (dew >= TRIPLE_POINT_C) {
+    // Root at or above the dew point, so on the wet-wick branch (eq 33 at t* = dew gives W* ≤ W).
+    const wst = saturationHumidityRatioAtDryBulb ?? saturationHumidityRatio(t, pressureKpa)
+    return solveWetBulbBranch(t, w, pressureKpa, true, dew, t, chordStartC(t, w, true, dew, w, t, wst))
+  }
   if (t > 0) {
     const ws0 =
       (MOLAR_MASS_RATIO_WATER_AIR * SATURATION_PRESSURE_AT_ZERO_KPA) /
