@@ -137,7 +137,7 @@ export function assessmentAssumptions(
     { name: 'loading', value: `${loadingKgPerM2} kg fresh per m²`, source: 'method or product default' },
     {
       name: 'supplemental heat',
-      value: `a forced-air dryer at ${heater.airFlowKgPerSPerTonne} kg dry air s⁻¹ t⁻¹ heated ${heater.setPointC !== undefined ? `to ${heater.setPointC} °C` : `to ${heater.targetRhPct.toFixed(0)} % RH`} (capped at the product limit), used in every hour the method's own air does not dry; if that misses the deadline, heated every hour`,
+      value: `a forced-air dryer at ${heater.airFlowKgPerSPerTonne} kg dry air s⁻¹ t⁻¹ heated ${heater.setPointC !== undefined ? `to ${heater.setPointC} °C` : `to ${heater.targetRhPct.toFixed(0)} % RH, never below ${heater.minAirC} °C`} (capped at the product limit), used in every hour the method's own air does not dry; if that misses the deadline, heated every hour`,
       source: 'model.md §6; defaults of the heated method (assumptions)',
     },
     {

@@ -35,7 +35,7 @@ export function relativeHumidityPctAt(dryBulbC: number, w: number, pressureKpa: 
  * Lowest temperature [°C] at which air of humidity ratio `w` has RH ≤ `targetRhPct` (heating at constant
  * W): the dew point of the vapour pressure pw/φ, i.e. pws(T) = pw/φ exactly. Returns `dryBulbC` when the
  * air is already at or below the target RH (no heating needed).
- * Example: 10 °C, 90 % RH at 101.325 kPa, target 40 % → 22.3 °C.
+ * Example: 10 °C, 90 % RH at 101.325 kPa, target 40 % → 22.7 °C.
  */
 export function heatedDryBulbForTargetRhC(
   dryBulbC: number,

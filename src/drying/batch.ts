@@ -139,7 +139,7 @@ export function simulateBatch(
         if (m > meDes) {
           let next: number
           const decay = c.decayPerHour[i]
-          if (decay === decay) {
+          if (!Number.isNaN(decay)) {
             // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
             next = meDes + (m - meDes) * decay
           } else if (initialDb > meDes) {

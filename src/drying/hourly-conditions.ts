@@ -330,7 +330,7 @@ export function computeHourlyConditions(
         let tHeat =
           method.setPointC !== undefined
             ? Math.max(t, method.setPointC)
-            : heatedDryBulbForTargetRhC(t, w, p, method.targetRhPct)
+            : Math.max(heatedDryBulbForTargetRhC(t, w, p, method.targetRhPct), method.minAirC)
         if (maxT !== null && tHeat > maxT) tHeat = Math.max(t, maxT)
         if (tHeat > 100) tHeat = 100
         tAir = tHeat

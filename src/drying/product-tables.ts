@@ -28,7 +28,7 @@ function makeGrid(compute: (tC: number, rhPct: number) => number): Grid {
 function node(g: Grid, it: number, ir: number): number {
   const k = it * NRH + ir
   let v = g.values[k]
-  if (v !== v) {
+  if (Number.isNaN(v)) {
     v = g.compute(T_MIN + it * GRID_T_STEP_C, Math.min(ir * GRID_RH_STEP_PCT, EMC_RH_CAP_PCT))
     g.values[k] = v
   }

@@ -61,22 +61,42 @@ describe('metamorphic: a drier, warmer, windier or sunnier copy never dries slow
         })
       }
       it('drier: RH × 0.9 every hour (open air)', () => {
-        const t = times(conditions(altered(base, (c, i) => (c.relativeHumidityPct[i] *= 0.9)), { kind: 'open-air' }))
+        const t = times(
+          conditions(
+            altered(base, (c, i) => (c.relativeHumidityPct[i] *= 0.9)),
+            { kind: 'open-air' },
+          ),
+        )
         t.forEach((v, k) => expect(v).toBeLessThanOrEqual(open[k]))
       })
       it('warmer: +2 °C at the same RH (open air)', () => {
-        const t = times(conditions(altered(base, (c, i) => (c.dryBulbC[i] += 2)), { kind: 'open-air' }))
+        const t = times(
+          conditions(
+            altered(base, (c, i) => (c.dryBulbC[i] += 2)),
+            { kind: 'open-air' },
+          ),
+        )
         t.forEach((v, k) => expect(v).toBeLessThanOrEqual(open[k]))
       })
       it('sunnier: GHI × 1.2 (open air)', () => {
-        const t = times(conditions(altered(base, (c, i) => (c.ghiWm2[i] *= 1.2)), { kind: 'open-air' }))
+        const t = times(
+          conditions(
+            altered(base, (c, i) => (c.ghiWm2[i] *= 1.2)),
+            { kind: 'open-air' },
+          ),
+        )
         t.forEach((v, k) => expect(v).toBeLessThanOrEqual(open[k]))
       })
       // Windier is tested under shade: in the sun, more wind also cools the product, which can slow the
       // falling-rate period (as Thompson 1981 found for swaths), so it is not a monotone change there.
       it('windier: wind × 1.5 (shade)', () => {
         const shade = times(conditions(base, { kind: 'shade' }))
-        const t = times(conditions(altered(base, (c, i) => (c.windMs[i] *= 1.5)), { kind: 'shade' }))
+        const t = times(
+          conditions(
+            altered(base, (c, i) => (c.windMs[i] *= 1.5)),
+            { kind: 'shade' },
+          ),
+        )
         t.forEach((v, k) => expect(v).toBeLessThanOrEqual(shade[k]))
       })
     })
@@ -87,7 +107,10 @@ describe('metamorphic: raising every hour’s RH never increases usable hours', 
   for (const key of sites) {
     it(`${key}: RH + 5 points (capped at 100) turns no unusable hour into a usable one`, () => {
       const base = demoSeries(key)
-      const wetter = altered(base, (c, i) => (c.relativeHumidityPct[i] = Math.min(100, c.relativeHumidityPct[i] + 5)))
+      const wetter = altered(
+        base,
+        (c, i) => (c.relativeHumidityPct[i] = Math.min(100, c.relativeHumidityPct[i] + 5)),
+      )
       for (const method of [{ kind: 'open-air' }, { kind: 'shade' }] as const) {
         const a = conditions(base, method)
         const b = conditions(wetter, method)

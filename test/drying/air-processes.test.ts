@@ -41,7 +41,8 @@ describe('heating at constant humidity ratio', () => {
   it('heat added equals the enthalpy rise of the air (psychrolib GetMoistAirEnthalpy)', () => {
     const w = 0.008
     const q = sensibleHeatingKw(2, w, 12, 41)
-    const expected = (2 * (psychrolib.GetMoistAirEnthalpy(41, w) - psychrolib.GetMoistAirEnthalpy(12, w))) / 1000
+    const expected =
+      (2 * (psychrolib.GetMoistAirEnthalpy(41, w) - psychrolib.GetMoistAirEnthalpy(12, w))) / 1000
     expect(q).toBeCloseTo(expected, 6)
     expect(q).toBeCloseTo(2 * (moistAirEnthalpyKjPerKg(41, w) - moistAirEnthalpyKjPerKg(12, w)), 9)
   })

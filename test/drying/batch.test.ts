@@ -31,10 +31,21 @@ describe('constant weather: the batch follows the analytic approach to equilibri
   // of dM/dt = −k(M − Me)). Shade at 30 °C/40 %, light loading so the constant-rate limit never binds.
   const series = constantSeries({ dryBulbC: 30, relativeHumidityPct: 40, hours: 24 * 20 })
   const direct = productResponse(apricot)
-  const c = computeHourlyConditions(series, parseDryingMethod({ kind: 'shade' }), direct, options(apricot, 0.2))
+  const c = computeHourlyConditions(
+    series,
+    parseDryingMethod({ kind: 'shade' }),
+    direct,
+    options(apricot, 0.2),
+  )
   const m0 = moistureDbFromWbPct(86)
   const target = moistureDbFromWbPct(25)
-  const b = simulateBatch(c, direct, { startIndex: 0, maxHours: 24 * 20, initialDb: m0, targetDb: target, recordTrace: true })
+  const b = simulateBatch(c, direct, {
+    startIndex: 0,
+    maxHours: 24 * 20,
+    initialDb: m0,
+    targetDb: target,
+    recordTrace: true,
+  })
   const me = direct.emcDesorptionDb(30, 40)
   const k = c.rateK[0]
   it('every hour matches Me + (M0 − Me)·exp(−k t) to 1e-9 kg/kg', () => {
@@ -48,13 +59,29 @@ describe('constant weather: the batch follows the analytic approach to equilibri
   })
   it('with the tabulated product response the time to target is the same within 1 h', () => {
     const tab = tabulatedResponse(direct)
-    const ct = computeHourlyConditions(series, parseDryingMethod({ kind: 'shade' }), tab, options(apricot, 0.2))
+    const ct = computeHourlyConditions(
+      series,
+      parseDryingMethod({ kind: 'shade' }),
+      tab,
+      options(apricot, 0.2),
+    )
     const bt = simulateBatch(ct, tab, { startIndex: 0, maxHours: 24 * 20, initialDb: m0, targetDb: target })
     expect(Math.abs(bt.hoursToTarget - b.hoursToTarget)).toBeLessThanOrEqual(1)
   })
   it('at normal loading the constant-rate limit binds first: moisture falls linearly at the Penman rate', () => {
-    const cl = computeHourlyConditions(series, parseDryingMethod({ kind: 'shade' }), direct, options(apricot, 10))
-    const bl = simulateBatch(cl, direct, { startIndex: 0, maxHours: 10, initialDb: m0, targetDb: target, recordTrace: true })
+    const cl = computeHourlyConditions(
+      series,
+      parseDryingMethod({ kind: 'shade' }),
+      direct,
+      options(apricot, 10),
+    )
+    const bl = simulateBatch(cl, direct, {
+      startIndex: 0,
+      maxHours: 10,
+      initialDb: m0,
+      targetDb: target,
+      recordTrace: true,
+    })
     const cap = cl.capDbPerH[0]
     expect(cap).toBeGreaterThan(0)
     for (let h = 0; h < 10; h++) expect(bl.trace![h]).toBeCloseTo(m0 - cap * (h + 1), 9)
@@ -63,9 +90,20 @@ describe('constant weather: the batch follows the analytic approach to equilibri
     const humid = constantSeries({ dryBulbC: 20, relativeHumidityPct: 85, hours: 48 })
     const ch = computeHourlyConditions(humid, parseDryingMethod({ kind: 'shade' }), direct, options())
     const dry = moistureDbFromWbPct(20)
-    const bh = simulateBatch(ch, direct, { startIndex: 0, maxHours: 48, initialDb: 4, targetDb: 0.1 * dry, recordTrace: false })
+    const bh = simulateBatch(ch, direct, {
+      startIndex: 0,
+      maxHours: 48,
+      initialDb: 4,
+      targetDb: 0.1 * dry,
+      recordTrace: false,
+    })
     expect(bh.rewettingHours).toBe(0) // starts wet: no rewetting
-    const bw = simulateBatch(ch, direct, { startIndex: 0, maxHours: 48, initialDb: dry + 1e-9, targetDb: dry * 0.5 })
+    const bw = simulateBatch(ch, direct, {
+      startIndex: 0,
+      maxHours: 48,
+      initialDb: dry + 1e-9,
+      targetDb: dry * 0.5,
+    })
     expect(bw.finalDb).toBeGreaterThan(dry)
     expect(bw.rewettingHours).toBe(48)
     expect(bw.waterToAirDb).toBeLessThan(0)
@@ -77,10 +115,24 @@ describe('the batch step equals product/stepping.ts stepMoisture hour by hour', 
     const s = sliceSeries(demoSeries('dryUpland'), 5064, 240)
     const direct = productResponse(raisin)
     const opts = options(raisin, 12)
-    const c = computeHourlyConditions(s, parseDryingMethod({ kind: 'open-air', loadingKgPerM2: 12 }), direct, opts)
+    const c = computeHourlyConditions(
+      s,
+      parseDryingMethod({ kind: 'open-air', loadingKgPerM2: 12 }),
+      direct,
+      opts,
+    )
     const m0 = moistureDbFromWbPct(78.2)
-    const b = simulateBatch(c, direct, { startIndex: 0, maxHours: 240, initialDb: m0, targetDb: 0.01, recordTrace: true })
-    let state = initialMoistureState(prepareProduct(raisin, { loadingKgPerM2: 12, initialMoistureWbPct: 78.2 }), 78.2)
+    const b = simulateBatch(c, direct, {
+      startIndex: 0,
+      maxHours: 240,
+      initialDb: m0,
+      targetDb: 0.01,
+      recordTrace: true,
+    })
+    let state = initialMoistureState(
+      prepareProduct(raisin, { loadingKgPerM2: 12, initialMoistureWbPct: 78.2 }),
+      78.2,
+    )
     for (let h = 0; h < 240; h++) {
       if (c.mode[h] === 0) {
         const r = stepMoisture(
@@ -107,7 +159,13 @@ describe('mass balance: water leaving the product = water carried by the air', (
       const tab = tabulatedResponse(productResponse(apricot))
       const c = computeHourlyConditions(s, parseDryingMethod({ kind }), tab, options())
       const m0 = moistureDbFromWbPct(86)
-      const b = simulateBatch(c, tab, { startIndex: 0, maxHours: 24 * 20, initialDb: m0, targetDb: 0.2, recordTrace: true })
+      const b = simulateBatch(c, tab, {
+        startIndex: 0,
+        maxHours: 24 * 20,
+        initialDb: m0,
+        targetDb: 0.2,
+        recordTrace: true,
+      })
       const ledger = forcedAirLedger(c, s.pressureKpa, b, 0, m0, 1000 * (1 - 0.86))
       expect(ledger.waterFromProductKgPerTonne).toBeGreaterThan(100)
       expect(Math.abs(ledger.waterCarriedByAirKgPerTonne - ledger.waterFromProductKgPerTonne)).toBeLessThan(
@@ -125,12 +183,26 @@ describe('heated drying with enough heat always reaches the target', () => {
   const tab = tabulatedResponse(productResponse(raisin))
   it('any constant ambient air (−10…35 °C, RH 20–100 %), set point 60 °C: raisins finish within 10 days', () => {
     fc.assert(
-      fc.property(fc.double({ min: -10, max: 35, noNaN: true }), fc.double({ min: 20, max: 100, noNaN: true }), (t, rh) => {
-        const s = constantSeries({ dryBulbC: t, relativeHumidityPct: rh, hours: 240 })
-        const c = computeHourlyConditions(s, parseDryingMethod({ kind: 'heated', setPointC: 60 }), tab, options(raisin))
-        const b = simulateBatch(c, tab, { startIndex: 0, maxHours: 240, initialDb: moistureDbFromWbPct(78.2), targetDb: moistureDbFromWbPct(18) })
-        return b.reached && b.heaterKwhPerTonne > 0
-      }),
+      fc.property(
+        fc.double({ min: -10, max: 35, noNaN: true }),
+        fc.double({ min: 20, max: 100, noNaN: true }),
+        (t, rh) => {
+          const s = constantSeries({ dryBulbC: t, relativeHumidityPct: rh, hours: 240 })
+          const c = computeHourlyConditions(
+            s,
+            parseDryingMethod({ kind: 'heated', setPointC: 60 }),
+            tab,
+            options(raisin),
+          )
+          const b = simulateBatch(c, tab, {
+            startIndex: 0,
+            maxHours: 240,
+            initialDb: moistureDbFromWbPct(78.2),
+            targetDb: moistureDbFromWbPct(18),
+          })
+          return b.reached && b.heaterKwhPerTonne > 0
+        },
+      ),
       { numRuns: 40 },
     )
   })

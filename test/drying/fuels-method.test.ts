@@ -5,7 +5,8 @@ import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
 
 describe('fuels', () => {
   // Conversions: US EIA Btu conversion factors, drying-science.md §4.2 (SI column computed there).
-  it('propane 91,333 Btu/gal → 25.5 MJ/L', () => expect(FUELS.propane.heatingValueMjPerUnit).toBeCloseTo(25.46, 2))
+  it('propane 91,333 Btu/gal → 25.5 MJ/L', () =>
+    expect(FUELS.propane.heatingValueMjPerUnit).toBeCloseTo(25.46, 2))
   it('natural gas 1,025 Btu/ft³ → 38.2 MJ/m³', () =>
     expect(FUELS['natural-gas'].heatingValueMjPerUnit).toBeCloseTo(38.19, 1))
   it('heating oil 138,500 Btu/gal → 38.6 MJ/L', () =>
@@ -31,12 +32,19 @@ describe('fuels', () => {
 describe('drying methods', () => {
   it('fills stated defaults', () => {
     const m = parseDryingMethod({ kind: 'open-air' })
-    expect(m).toMatchObject({ kind: 'open-air', absorptivity: 0.7, coveredAtNight: true, coveredInRain: true })
+    expect(m).toMatchObject({
+      kind: 'open-air',
+      absorptivity: 0.7,
+      coveredAtNight: true,
+      coveredInRain: true,
+    })
     const h = parseDryingMethod({ kind: 'heated' })
     expect(h).toMatchObject({ targetRhPct: 40, heaterEfficiency: 0.8, fuel: 'propane' })
   })
   it('names the field, the value and the range of a bad parameter', () => {
-    expect(() => parseDryingMethod({ kind: 'open-air', absorptivity: 1.4 })).toThrow(/method\.absorptivity.*between 0 and 1.*1\.4/)
+    expect(() => parseDryingMethod({ kind: 'open-air', absorptivity: 1.4 })).toThrow(
+      /method\.absorptivity.*between 0 and 1.*1\.4/,
+    )
     expect(() => parseDryingMethod({ kind: 'kiln' })).toThrow(/kinds: open-air, shade, solar-cabinet, heated/)
     expect(() => parseDryingMethod({ kind: 'heated', heaterEfficiency: 0 })).toThrow(/heaterEfficiency/)
   })

@@ -17,11 +17,15 @@ describe('tabulated product response agrees with direct evaluation', () => {
       for (let i = 0; i < 400; i++) {
         const t = (i * 7.31) % 60
         const rh = 10 + ((i * 13.7) % 85)
-        worstEmc = Math.max(worstEmc, Math.abs(tab.emcDesorptionDb(t, rh) / direct.emcDesorptionDb(t, rh) - 1))
+        worstEmc = Math.max(
+          worstEmc,
+          Math.abs(tab.emcDesorptionDb(t, rh) / direct.emcDesorptionDb(t, rh) - 1),
+        )
         direct.stepParameters(t, rh, a)
         tab.stepParameters(t, rh, b)
         // Thompson (n = 0) passes its parameter (the temperature) through untabulated
-        worstK = a[1] === 0 ? Math.max(worstK, Math.abs(b[0] - a[0])) : Math.max(worstK, Math.abs(b[0] / a[0] - 1))
+        worstK =
+          a[1] === 0 ? Math.max(worstK, Math.abs(b[0] - a[0])) : Math.max(worstK, Math.abs(b[0] / a[0] - 1))
         expect(b[1]).toBe(a[1])
       }
       expect(worstEmc).toBeLessThan(0.005)

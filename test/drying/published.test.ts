@@ -4,10 +4,10 @@ import { computeHourlyConditions, wetSurfaceEvaporation } from '../../src/drying
 import { type DryingMethodInput, parseDryingMethod } from '../../src/drying/method.ts'
 import { productResponse } from '../../src/drying/product-response.ts'
 import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
-import { productById } from '../../src/product/catalogue.ts'
-import { moistureDbFromWbPct, moistureWbPctFromDb } from '../../src/product/moisture-basis.ts'
 import { humidityRatioFromVaporPressure } from '../../src/physics/moist-air.ts'
 import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.ts'
+import { productById } from '../../src/product/catalogue.ts'
+import { moistureDbFromWbPct, moistureWbPctFromDb } from '../../src/product/moisture-basis.ts'
 import { constantSeries, type DiurnalWeather, diurnalSeries } from './synthetic-weather.ts'
 
 describe('Penman open-water check (evaporation-and-sun.md §3)', () => {
@@ -44,7 +44,12 @@ describe('equilibrium moisture of shelled corn in natural-air drying air', () =>
     expect(wb).toBeLessThan(16.5)
   })
   it('a thin layer left in that air for 60 days ends within 0.3 points of the EMC and never below it', () => {
-    const b = simulateBatch(c, r, { startIndex: 0, maxHours: 24 * 60, initialDb: moistureDbFromWbPct(25), targetDb: 0.01 })
+    const b = simulateBatch(c, r, {
+      startIndex: 0,
+      maxHours: 24 * 60,
+      initialDb: moistureDbFromWbPct(25),
+      targetDb: 0.01,
+    })
     const endWb = moistureWbPctFromDb(b.finalDb)
     const emcWb = moistureWbPctFromDb(c.emcDesorptionDb[0])
     expect(endWb).toBeGreaterThanOrEqual(emcWb - 1e-9)
@@ -93,7 +98,17 @@ describe('published drying experiments reproduced (time to target within ±35 %)
     // under an assumed 35 °C/35 % at the fruit, so this checks the sun/temperature chain more than k.
     const hours = timeToTarget(
       'grapes-to-raisins',
-      { latitudeDeg: 38.6, longitudeDeg: 27.4, utcOffsetHours: 3, firstDayUtcMs: Date.UTC(2010, 7, 15), days: 31, tMinC: 20, tMaxC: 34, dewPointC: 14, windMs: 2.5 },
+      {
+        latitudeDeg: 38.6,
+        longitudeDeg: 27.4,
+        utcOffsetHours: 3,
+        firstDayUtcMs: Date.UTC(2010, 7, 15),
+        days: 31,
+        tMinC: 20,
+        tMaxC: 34,
+        dewPointC: 14,
+        windMs: 2.5,
+      },
       { kind: 'open-air' },
       78.2,
       22,

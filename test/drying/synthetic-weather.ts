@@ -31,7 +31,11 @@ const site = (lat: number | null, lon: number | null, name = 'test site', offset
 
 export function constantSeries(w: ConstantWeather): HourlySeries {
   const hours = w.hours ?? 24 * 30
-  const s = createEmptySeries(site(w.latitudeDeg ?? null, w.longitudeDeg ?? null), Date.UTC(2021, 6, 1), hours)
+  const s = createEmptySeries(
+    site(w.latitudeDeg ?? null, w.longitudeDeg ?? null),
+    Date.UTC(2021, 6, 1),
+    hours,
+  )
   s.dryBulbC.fill(w.dryBulbC)
   s.relativeHumidityPct.fill(w.relativeHumidityPct)
   s.pressureKpa.fill(w.pressureKpa ?? 101.325)

@@ -367,7 +367,7 @@ export function readBatchLog(text: string, options: BatchLogOptions = {}): Batch
     throw new BatchLogError(
       rowsRead === 0
         ? 'the batch log has a header but no batch rows'
-        : `no usable batch in ${rowsRead} rows; first problem: ${first.message}`,
+        : `no usable batch in ${rowsRead} row${rowsRead === 1 ? '' : 's'}; first problem: ${first.message}`,
       rejections,
     )
   }

@@ -384,5 +384,27 @@ function summaryLines(
       describe('Weather- and load-adjusted chart', adjusted),
     )
   } else lines.push(`Weather- and load-adjusted chart not drawn: ${reason}.`)
+  lines.unshift(conclusion(raw, adjusted))
   return lines
+}
+
+/** The one-sentence answer: when the dryer's energy use rose, from the best chart available. */
+function conclusion(raw: ChartSet, adjusted: EnergyChartAssessment['adjusted']): string {
+  const set = adjusted ?? raw
+  const which = adjusted ? 'after taking out weather and load' : 'on the raw chart (no weather adjustment)'
+  const f = set.finding
+  if (
+    !f.firstRiseSignal ||
+    !f.estimatedChangeStart ||
+    f.shiftAfterChange === null ||
+    !(f.shiftAfterChange > 0)
+  ) {
+    return `Answer: no sign that the dryer uses more energy per kg of water than in the baseline (${which}).`
+  }
+  const pct = (100 * f.shiftAfterChange) / raw.individuals.centerLine
+  return (
+    `Answer: the dryer's energy use per kg of water rose by about ${f.shiftAfterChange.toFixed(2)} MJ/kg ` +
+    `(${pct.toFixed(0)} % of the baseline mean) from batch ${f.estimatedChangeStart.batchId} (${f.estimatedChangeStart.startText}) on, ` +
+    `${which}; first signalled at batch ${f.firstRiseSignal.batchId}. Look at the dryer: burner, heat exchanger, seals, airflow.`
+  )
 }

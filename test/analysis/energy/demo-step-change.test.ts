@@ -69,5 +69,10 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
     const line = assessment.summary.find((s) => s.startsWith('Weather- and load-adjusted chart'))
     expect(line).toMatch(/MORE energy per kg water at batch Q26-041/)
     expect(assessment.adjusted!.finding.estimatedChangeStart?.batchId).toBe('Q26-041')
+    // The answer line: the invented step is +7 % (batch-log-model.ts STEP_FRACTION); measured shift about 8 %.
+    expect(assessment.summary[0]).toMatch(
+      /^Answer: the dryer's energy use per kg of water rose by about 0\.3\d MJ\/kg \([78] % /,
+    )
+    expect(assessment.summary[0]).toMatch(/from batch Q26-041/)
   })
 })
