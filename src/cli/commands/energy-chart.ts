@@ -52,7 +52,8 @@ Example (invented demo data):
 Safety: a rise in energy per kg of water can be a fault that is also a hazard (cracked heat exchanger,
 blocked flue); combustion heaters put CO in the air; gas and electrical work by licensed trades.`
 
-const f2 = (x: number) => x.toFixed(2)
+/** Two decimals without a negative zero. */
+const f2 = (x: number) => (Number(x.toFixed(2)) === 0 ? '0.00' : x.toFixed(2))
 
 /** The readable summary printed by default. */
 export function energyChartText(a: EnergyChartAssessment): string {

@@ -62,7 +62,7 @@ function chartFigures(
       svg: controlChartSvg({
         id: `${prefix}${what.key}-individuals-svg`,
         title: `${what.name}, individuals chart`,
-        description: `Centre ${ind.centerLine.toFixed(3)}, limits ${ind.lowerControlLimit.toFixed(3)} to ${ind.upperControlLimit.toFixed(3)} MJ/kg. ${signalText}`,
+        description: `Centre ${fixed(ind.centerLine, 3)}, limits ${fixed(ind.lowerControlLimit, 3)} to ${fixed(ind.upperControlLimit, 3)} MJ/kg. ${signalText}`,
         points: ind.values.map((v, i) => ({
           label: labels[i],
           value: v,
@@ -77,7 +77,7 @@ function chartFigures(
         unit: 'MJ/kg',
         marker,
       }),
-      alt: `${what.name} for ${ind.values.length} batches against a centre of ${ind.centerLine.toFixed(2)} MJ/kg and 3σ limits ${ind.lowerControlLimit.toFixed(2)} to ${ind.upperControlLimit.toFixed(2)} MJ/kg (σ̂ = MR̄/1.128 = ${ind.sigma.toFixed(3)}). ${signalText}`,
+      alt: `${what.name} for ${ind.values.length} batches against a centre of ${fixed(ind.centerLine, 2)} MJ/kg and 3σ limits ${fixed(ind.lowerControlLimit, 2)} to ${fixed(ind.upperControlLimit, 2)} MJ/kg (σ̂ = MR̄/1.128 = ${fixed(ind.sigma, 3)}). ${signalText}`,
       table: {
         id: `${what.key}-individuals`,
         title: `${what.name} by batch`,
@@ -97,7 +97,7 @@ function chartFigures(
       svg: controlChartSvg({
         id: `${prefix}${what.key}-moving-range-svg`,
         title: `${what.name}, moving-range chart`,
-        description: `Mean moving range ${ind.meanMovingRange.toFixed(3)}, upper limit D4·MR̄ = ${ind.movingRangeUpperLimit.toFixed(3)} MJ/kg; ${ind.movingRangeSignals.length} moving ranges above it.`,
+        description: `Mean moving range ${fixed(ind.meanMovingRange, 3)}, upper limit D4·MR̄ = ${fixed(ind.movingRangeUpperLimit, 3)} MJ/kg; ${ind.movingRangeSignals.length} moving ranges above it.`,
         points: mrValues.map((v, i) => ({
           label: labels[i + 1],
           value: v,
@@ -111,7 +111,7 @@ function chartFigures(
         yLabel: 'moving range [MJ/kg water]',
         unit: 'MJ/kg',
       }),
-      alt: `Moving ranges of ${what.name.toLowerCase()}: mean ${ind.meanMovingRange.toFixed(3)} MJ/kg over the baseline, upper limit ${ind.movingRangeUpperLimit.toFixed(3)} (D4 = 3.267, D3 = 0); ${ind.movingRangeSignals.length} points above it.`,
+      alt: `Moving ranges of ${what.name.toLowerCase()}: mean ${fixed(ind.meanMovingRange, 3)} MJ/kg over the baseline, upper limit ${fixed(ind.movingRangeUpperLimit, 3)} (D4 = 3.267, D3 = 0); ${ind.movingRangeSignals.length} points above it.`,
       table: {
         id: `${what.key}-moving-range`,
         title: `Moving ranges of ${what.name.toLowerCase()}`,
@@ -131,7 +131,7 @@ function chartFigures(
       svg: controlChartSvg({
         id: `${prefix}${what.key}-ewma-svg`,
         title: `${what.name}, EWMA chart`,
-        description: `EWMA with target ${e.centerLine.toFixed(3)} MJ/kg; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]}`}.`,
+        description: `EWMA with target ${fixed(e.centerLine, 3)} MJ/kg; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]}`}.`,
         points: e.ewma.map((v, i) => ({
           label: labels[i],
           value: v,
@@ -145,7 +145,7 @@ function chartFigures(
         yLabel: `EWMA of ${what.yLabel}`,
         unit: 'MJ/kg',
       }),
-      alt: `Exponentially weighted moving average of ${what.name.toLowerCase()} against ${e.centerLine.toFixed(2)} MJ/kg with limits that widen to ±${(e.limitWidthL * e.sigma * Math.sqrt(e.lambda / (2 - e.lambda))).toFixed(3)}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]} (${e.signals.find((s) => s.index === ewmaFirst)?.side === 'above' ? 'more' : 'less'} energy)`}.`,
+      alt: `Exponentially weighted moving average of ${what.name.toLowerCase()} against ${fixed(e.centerLine, 2)} MJ/kg with limits that widen to ±${(e.limitWidthL * e.sigma * Math.sqrt(e.lambda / (2 - e.lambda))).toFixed(3)}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]} (${e.signals.find((s) => s.index === ewmaFirst)?.side === 'above' ? 'more' : 'less'} energy)`}.`,
       table: {
         id: `${what.key}-ewma`,
         title: `EWMA of ${what.name.toLowerCase()}`,
@@ -156,6 +156,12 @@ function chartFigures(
     }),
   )
   return figures.join('\n')
+}
+
+/** Fixed decimals without a negative zero (−0.00 reads as a value). */
+const fixed = (x: number, digits: number) => {
+  const t = x.toFixed(digits)
+  return Number(t) === 0 ? (0).toFixed(digits) : t
 }
 
 function tableSection(t: ReportTable, open = false): string {
