@@ -5,8 +5,10 @@
  * Missing input (NaN) or input outside the valid domain (the ranges of {@link airState}, and a dry bulb
  * at or above the boiling point at that pressure) gives NaN in every output for that hour.
  *
- * Speed: ln pws at the dry bulb is computed once and reused for the dew point (ln pw = ln pws + ln φ)
- * and, through Ws at the dry bulb, for the wet-bulb start value; see bench/sections/moist-air.ts.
+ * Speed: pws at the dry bulb comes from the interpolated table of eq 6 (src/physics/saturation-table.ts,
+ * within 1e-9 relative, so W, h and density agree with airState to about 1e-9 relative), one logarithm
+ * per hour starts the dew point, and Ws at the dry bulb sharpens the wet-bulb start value; see
+ * bench/sections/moist-air.ts.
  */
 import {
   DRY_BULB_MAX_C,
@@ -19,7 +21,8 @@ import {
   VAPOR_PRESSURE_MIN_KPA,
   wetBulbWithDewPointC,
 } from './moist-air.ts'
-import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from './saturation.ts'
+import { KELVIN_OFFSET } from './saturation.ts'
+import { saturationPressureFromTableKpa } from './saturation-table.ts'
 
 export interface AirColumnsInput {
   dryBulbC: Float64Array
@@ -70,8 +73,8 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
       if (rhoOut) rhoOut[i] = Number.NaN
       continue
     }
-    const lnPwsPa = lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)
-    const pws = Math.exp(lnPwsPa) / 1000
+    // pws over liquid water from the interpolated eq 6 table: within 1e-9 relative of the formula.
+    const pws = saturationPressureFromTableKpa(t, false)
     const pw = (rh / 100) * pws
     if (!(pws < p) || !(pw >= VAPOR_PRESSURE_MIN_KPA)) {
       invalid++
@@ -87,8 +90,7 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     if (wOut) wOut[i] = w
     if (pwOut) pwOut[i] = pw
     if (tdOut || twbOut) {
-      // Dew point over liquid water from ln pw = ln pws + ln φ (one logarithm instead of two).
-      let td = saturationTemperatureC(pw, lnPwsPa + Math.log(rh / 100), false)
+      let td = saturationTemperatureC(pw, Math.log(pw * 1000), false)
       if (td > t) td = t
       if (tdOut) tdOut[i] = td
       if (twbOut) {

@@ -15,7 +15,11 @@ import {
   saturationVaporPressureLiquidKpa,
   TRIPLE_POINT_C,
 } from './saturation.ts'
-import { saturationPressureFromTableKpa, saturationTableSlopes } from './saturation-table.ts'
+import {
+  saturationPressureFromTableKpa,
+  saturationTableSlopes,
+  saturationTemperatureFromTableC,
+} from './saturation-table.ts'
 
 /** Ratio of molar masses of water and dry air, 18.015268/28.966 (ASHRAE HOF 2017 ch. 1 eq 20). */
 export const MOLAR_MASS_RATIO_WATER_AIR = 0.621945
@@ -124,24 +128,20 @@ export function moistAirDensityKgPerM3(
   )
 }
 
-/** ln(610.94 Pa): the Magnus formula's saturation pressure at 0 °C (Alduchov & Eskridge 1996). */
-const LN_MAGNUS_P0_PA = Math.log(610.94)
-
 /**
  * Temperature [°C] at which the saturation pressure over liquid water (ice = false) or over ice
  * (ice = true) equals `vaporPressureKpa` (whose natural log in Pa, `lnVaporPressurePa`, the caller
  * passes as well): the dew point, or the frost point (ASHRAE HOF 2017 ch. 1 eq 36 inverted). Halley's
  * method on pws(t) − pw with pws and its derivatives from {@link saturationPressureFromTableKpa},
- * started from the Magnus approximation (Alduchov & Eskridge 1996 coefficients), kept inside the
- * bracket [−100, 200] °C; see {@link SOLVER_TOLERANCE_C}.
+ * started from the inverse table {@link saturationTemperatureFromTableC} (so one step usually
+ * suffices), kept inside the bracket [−100, 200] °C; see {@link SOLVER_TOLERANCE_C}.
  */
 export function saturationTemperatureC(
   vaporPressureKpa: number,
   lnVaporPressurePa: number,
   ice: boolean,
 ): number {
-  const g = lnVaporPressurePa - LN_MAGNUS_P0_PA
-  let tC = ice ? (272.62 * g) / (22.46 - g) : (243.04 * g) / (17.625 - g)
+  let tC = saturationTemperatureFromTableC(lnVaporPressurePa, ice)
   if (!(tC > SATURATION_MIN_C && tC < SATURATION_MAX_C)) tC = 0
   for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
     const f = saturationPressureFromTableKpa(tC, ice) - vaporPressureKpa

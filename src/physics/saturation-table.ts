@@ -5,6 +5,9 @@
  * The temperature solvers (dew point, wet bulb) evaluate saturation several times per state; the table
  * replaces an exp and a log per evaluation by a few multiplications.
  *
+ * The inverse, temperature as a function of ln pws (the dew or frost point of a vapour pressure), is
+ * tabulated the same way on a uniform grid of ln pws, as the start value of the dew-point solver.
+ *
  * Accuracy: nodes every 1/8 K carry the exact pws and dpws/dT, so the interpolation error is at most
  * max|pws⁗|·h⁴/384 ≈ (d ln pws/dT)⁴·h⁴/384 relative: below 1e-9 from −100 to 200 °C over liquid
  * water and over ice, largest at −100 °C (checked against eqs 5–6 in
@@ -71,5 +74,64 @@ export function saturationPressureFromTableKpa(tC: number, ice: boolean): number
   const c3 = 2 * (y0 - y1) + m0 + m1
   saturationTableSlopes[0] = (m0 + u * (2 * c2 + 3 * c3 * u)) * INV_STEP
   saturationTableSlopes[1] = (2 * c2 + 6 * c3 * u) * INV_STEP * INV_STEP
+  return y0 + u * (m0 + u * (c2 + u * c3))
+}
+
+/** Node spacing of the inverse table in ln(pws/Pa). */
+const LN_STEP = 0.02
+const INV_LN_STEP = 1 / LN_STEP
+
+interface InverseTable {
+  lnMin: number
+  last: number
+  /** Per node: t [°C], LN_STEP·dt/d ln pws [K]. */
+  nodes: Float64Array
+}
+
+function buildInverse(ice: boolean): InverseTable {
+  const ln = ice ? lnSaturationPressureIcePa : lnSaturationPressureLiquidPa
+  const dln = ice ? dLnSaturationPressureIceDT : dLnSaturationPressureLiquidDT
+  const lnMin = ln(SATURATION_MIN_C + KELVIN_OFFSET)
+  const lnMax = ln((ice ? ICE_MAX_C : SATURATION_MAX_C) + KELVIN_OFFSET)
+  const count = Math.ceil((lnMax - lnMin) * INV_LN_STEP) + 2
+  const nodes = new Float64Array(2 * count)
+  let tK = SATURATION_MIN_C + KELVIN_OFFSET
+  for (let k = 0; k < count; k++) {
+    const target = lnMin + k * LN_STEP
+    // Newton on the exact eq 5/6 from the previous node: converged to rounding in a few steps.
+    for (let i = 0; i < 50; i++) {
+      const step = (ln(tK) - target) / dln(tK)
+      tK -= step
+      if (Math.abs(step) < 1e-12) break
+    }
+    nodes[2 * k] = tK - KELVIN_OFFSET
+    nodes[2 * k + 1] = LN_STEP / dln(tK)
+  }
+  return { lnMin, last: count - 2, nodes }
+}
+
+const INVERSE_LIQUID = buildInverse(false)
+const INVERSE_ICE = buildInverse(true)
+
+/**
+ * Temperature [°C] at which pws over ice (`ice`) or liquid water equals exp(`lnPressurePa`) Pa, from the
+ * inverse table (cubic Hermite in ln pws; interpolation error below 1e-9 °C). Outside −100…200 °C
+ * (ice: −100…0.125 °C) the end intervals are extrapolated: a start value only there.
+ */
+export function saturationTemperatureFromTableC(lnPressurePa: number, ice: boolean): number {
+  const table = ice ? INVERSE_ICE : INVERSE_LIQUID
+  const s = (lnPressurePa - table.lnMin) * INV_LN_STEP
+  let k = Math.floor(s)
+  if (k < 0) k = 0
+  else if (k > table.last) k = table.last
+  const u = s - k
+  const n = table.nodes
+  const j = 2 * k
+  const y0 = n[j]
+  const m0 = n[j + 1]
+  const y1 = n[j + 2]
+  const m1 = n[j + 3]
+  const c2 = 3 * (y1 - y0) - 2 * m0 - m1
+  const c3 = 2 * (y0 - y1) + m0 + m1
   return y0 + u * (m0 + u * (c2 + u * c3))
 }

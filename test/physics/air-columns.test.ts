@@ -1,6 +1,7 @@
 /**
  * The column form (fillAirStateColumns) against the single-state function (airState), hour by hour:
- * the same ASHRAE HOF 2017 ch. 1 equations, so the same numbers to rounding and solver accuracy.
+ * the same ASHRAE HOF 2017 ch. 1 equations, so the same numbers to solver accuracy and to the 1e-9
+ * relative interpolation error of the saturation table the column form uses at the dry bulb.
  */
 import { describe, expect, it } from 'vitest'
 import { seededRandom } from '../../bench/section.ts'
@@ -32,7 +33,7 @@ describe('fillAirStateColumns', () => {
   const out = outputs(n)
   const invalid = fillAirStateColumns({ dryBulbC, relativeHumidityPct, pressureKpa }, out)
 
-  it('equals airState hour by hour (W, pw, h, density to 1e-12 relative; dew point, wet bulb to 1e-7 °C)', () => {
+  it('equals airState hour by hour (W, pw, h, density to 1e-8 relative; dew point, wet bulb to 1e-7 °C)', () => {
     expect(invalid).toBe(0)
     for (let i = 0; i < n; i++) {
       const s = airState({
@@ -40,10 +41,12 @@ describe('fillAirStateColumns', () => {
         relativeHumidityPct: relativeHumidityPct[i],
         pressureKpa: pressureKpa[i],
       })
-      expect(Math.abs(out.humidityRatioKgPerKg[i] / (s.humidityRatioGPerKg / 1000) - 1)).toBeLessThan(1e-12)
-      expect(Math.abs(out.vaporPressureKpa[i] / s.vaporPressureKpa - 1)).toBeLessThan(1e-12)
-      expect(Math.abs(out.enthalpyKjPerKg[i] - s.enthalpyKjPerKg)).toBeLessThan(1e-10)
-      expect(Math.abs(out.densityKgPerM3[i] / s.densityKgPerM3 - 1)).toBeLessThan(1e-12)
+      expect(Math.abs(out.humidityRatioKgPerKg[i] / (s.humidityRatioGPerKg / 1000) - 1)).toBeLessThan(1e-8)
+      expect(Math.abs(out.vaporPressureKpa[i] / s.vaporPressureKpa - 1)).toBeLessThan(1e-8)
+      expect(Math.abs(out.enthalpyKjPerKg[i] - s.enthalpyKjPerKg)).toBeLessThan(
+        1e-8 * Math.abs(s.enthalpyKjPerKg) + 1e-9,
+      )
+      expect(Math.abs(out.densityKgPerM3[i] / s.densityKgPerM3 - 1)).toBeLessThan(1e-8)
       expect(Math.abs(out.dewPointC[i] - s.dewPointC)).toBeLessThan(1e-7)
       expect(Math.abs(out.wetBulbC[i] - s.wetBulbC)).toBeLessThan(1e-7)
     }
@@ -81,7 +84,7 @@ describe('fillAirStateColumns', () => {
     const s = airState({ dryBulbC: 25, relativeHumidityPct: 40, pressureKpa: 95 })
     for (const i of [0, m - 1]) {
       expect(o.wetBulbC[i]).toBeCloseTo(s.wetBulbC, 7)
-      expect(o.humidityRatioKgPerKg[i]).toBeCloseTo(s.humidityRatioGPerKg / 1000, 12)
+      expect(o.humidityRatioKgPerKg[i]).toBeCloseTo(s.humidityRatioGPerKg / 1000, 10)
     }
   })
 
@@ -96,6 +99,6 @@ describe('fillAirStateColumns', () => {
       only,
     )
     const s = airState({ dryBulbC: 30, relativeHumidityPct: 50, pressureKpa: 101.325 })
-    expect(only.humidityRatioKgPerKg[2]).toBeCloseTo(s.humidityRatioGPerKg / 1000, 12)
+    expect(only.humidityRatioKgPerKg[2]).toBeCloseTo(s.humidityRatioGPerKg / 1000, 10)
   })
 })
