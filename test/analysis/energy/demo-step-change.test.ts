@@ -65,6 +65,17 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
     expect(falseAlarms(assessment.adjusted!, assessment.baselineCount)).toBe(0)
     expect(falseAlarms(assessment.raw, assessment.baselineCount)).toBeGreaterThan(0)
   })
+  it('is JSON-safe: every number in the assessment is finite (no NaN or Infinity turned into null)', () => {
+    const bad: string[] = []
+    const walk = (v: unknown, path: string) => {
+      if (typeof v === 'number' && !Number.isFinite(v)) bad.push(path)
+      else if (Array.isArray(v)) v.forEach((x, i) => walk(x, `${path}[${i}]`))
+      else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) walk(x, `${path}.${k}`)
+    }
+    walk(assessment, '$')
+    expect(bad).toEqual([])
+    expect(JSON.parse(JSON.stringify(assessment))).toEqual(assessment)
+  })
   it('the text names the batch where the change began', () => {
     const line = assessment.summary.find((s) => s.startsWith('Weather- and load-adjusted chart'))
     expect(line).toMatch(/MORE energy per kg water at batch Q26-041/)
