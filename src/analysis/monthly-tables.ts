@@ -75,7 +75,7 @@ export function countMonthly(c: HourlyConditions, t: LocalTimeColumns): MonthlyC
     }
     const e = c.evaporationKgPerM2H[i]
     if (Number.isFinite(e)) {
-      out.evaporationSum[cell] += e > 0 ? e : 0
+      out.evaporationSum[cell] += Math.max(e, 0)
       out.evaporationHours[cell]++
     }
   }

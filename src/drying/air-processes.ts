@@ -48,7 +48,7 @@ export function heatedDryBulbForTargetRhC(
   }
   const pw = vaporPressureFromHumidityRatio(w, pressureKpa)
   const t = dewPointFromVaporPressureC(pw / (targetRhPct / 100))
-  return t > dryBulbC ? t : dryBulbC
+  return Math.max(t, dryBulbC)
 }
 
 /**

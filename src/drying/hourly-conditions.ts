@@ -349,7 +349,7 @@ export function computeHourlyConditions(
     let rhSurface = (100 * pw) / pwsSurface
     if (rhSurface > 100) rhSurface = 100
     surfaceRhPct[i] = rhSurface
-    const rhForEmc = rhSurface > EMC_RH_CAP_PCT ? EMC_RH_CAP_PCT : rhSurface
+    const rhForEmc = Math.min(rhSurface, EMC_RH_CAP_PCT)
     emcDesorptionDb[i] = product.emcDesorptionDb(tProduct, rhForEmc)
     emcAdsorptionDb[i] = product.emcAdsorptionDb(tProduct, rhForEmc)
     product.stepParameters(tProduct, rhForEmc, step)

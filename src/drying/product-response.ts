@@ -41,11 +41,11 @@ export interface ProductResponse {
 }
 
 function clampT(tC: number): number {
-  return tC < ISOTHERM_T_MIN_C ? ISOTHERM_T_MIN_C : tC > ISOTHERM_T_MAX_C ? ISOTHERM_T_MAX_C : tC
+  return tC < ISOTHERM_T_MIN_C ? ISOTHERM_T_MIN_C : Math.min(tC, ISOTHERM_T_MAX_C)
 }
 
 function clampRh(rhPct: number): number {
-  return rhPct > EMC_RH_CAP_PCT ? EMC_RH_CAP_PCT : rhPct < EMC_RH_FLOOR_PCT ? EMC_RH_FLOOR_PCT : rhPct
+  return rhPct > EMC_RH_CAP_PCT ? EMC_RH_CAP_PCT : Math.max(rhPct, EMC_RH_FLOOR_PCT)
 }
 
 /**
@@ -74,8 +74,8 @@ export function productResponse(profile: ProductProfile, thicknessMm?: number): 
   const thick = thicknessMm ?? profile.defaultThicknessMm.value
   const timeScale = timeScaleFactor(profile, thick) // validates the thickness
   const stepParameters = (tC: number, rhPct: number, out: Float64Array): void => {
-    const t = tC < -20 ? -20 : tC > 150 ? 150 : tC
-    const rh = rhPct < 0 ? 0 : rhPct > 100 ? 100 : rhPct
+    const t = tC < -20 ? -20 : Math.min(tC, 150)
+    const rh = rhPct < 0 ? 0 : Math.min(rhPct, 100)
     const p = rateParametersAt(profile, t, rh, undefined, thick)
     if (p) {
       out[0] = p.kPerHn

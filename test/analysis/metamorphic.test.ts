@@ -67,7 +67,7 @@ describe('metamorphic: a drier, warmer, windier or sunnier copy never dries slow
             { kind: 'open-air' },
           ),
         )
-        t.forEach((v, k) => expect(v).toBeLessThanOrEqual(open[k]))
+        for (let k = 0; k < t.length; k++) expect(t[k]).toBeLessThanOrEqual(open[k])
       })
       it('warmer: +2 °C at the same RH (open air)', () => {
         const t = times(
@@ -76,7 +76,7 @@ describe('metamorphic: a drier, warmer, windier or sunnier copy never dries slow
             { kind: 'open-air' },
           ),
         )
-        t.forEach((v, k) => expect(v).toBeLessThanOrEqual(open[k]))
+        for (let k = 0; k < t.length; k++) expect(t[k]).toBeLessThanOrEqual(open[k])
       })
       it('sunnier: GHI × 1.2 (open air)', () => {
         const t = times(
@@ -85,7 +85,7 @@ describe('metamorphic: a drier, warmer, windier or sunnier copy never dries slow
             { kind: 'open-air' },
           ),
         )
-        t.forEach((v, k) => expect(v).toBeLessThanOrEqual(open[k]))
+        for (let k = 0; k < t.length; k++) expect(t[k]).toBeLessThanOrEqual(open[k])
       })
       // Windier is tested under shade: in the sun, more wind also cools the product, which can slow the
       // falling-rate period (as Thompson 1981 found for swaths), so it is not a monotone change there.
@@ -97,7 +97,7 @@ describe('metamorphic: a drier, warmer, windier or sunnier copy never dries slow
             { kind: 'shade' },
           ),
         )
-        t.forEach((v, k) => expect(v).toBeLessThanOrEqual(shade[k]))
+        for (let k = 0; k < t.length; k++) expect(t[k]).toBeLessThanOrEqual(shade[k])
       })
     })
   }

@@ -32,7 +32,7 @@ describe('heating at constant humidity ratio', () => {
   })
   it('10 °C/90 % heated to 40 % RH needs about 22.7 °C (psychrolib dew point of pw/0.4)', () => {
     const w = humidityRatioFromRh(10, 90, 101.325)
-    const pw = psychrolib.GetVapPresFromHumRatio(w, 101325)
+    const pw = psychrolib.GetSatVapPres(psychrolib.GetTDewPointFromHumRatio(10, w, 101325))
     const expected = psychrolib.GetTDewPointFromVapPres(30, pw / 0.4)
     expect(heatedDryBulbForTargetRhC(10, w, 101.325, 40)).toBeCloseTo(expected, 2)
     expect(expected).toBeGreaterThan(22.5)
