@@ -19,3 +19,43 @@ export interface DemoProvider {
   /** The file's bytes, or null when it is not a demo file. */
   read(file: string): Promise<Uint8Array | null>
 }
+
+/** The parts of climate-demo/sites.json that the page uses. */
+export interface DemoCatalogue {
+  sites: {
+    id: string
+    name: string
+    climateType: string
+    latitudeDeg: number
+    longitudeDeg: number
+    elevationM: number
+    timeZone: string
+    utcOffsetHours: number
+    files: { file: string; format: string; timeBasis: string }[]
+  }[]
+}
+
+/**
+ * The page's demo list from the demo catalogue, with the reader options each file needs: CSV files with
+ * UTC time stamps get the site's coordinates and its standard UTC offset (for local months and hours);
+ * local-clock CSV files get the IANA zone when their time basis names one; files whose header states the
+ * site and clock (EPW, or an offset in the header) get nothing but the site name.
+ */
+export function demoFilesFromCatalogue(catalogue: DemoCatalogue): DemoFile[] {
+  const out: DemoFile[] = []
+  for (const s of catalogue.sites) {
+    for (const f of s.files) {
+      const readOptions: Record<string, unknown> = {}
+      if (f.format === 'csv') {
+        readOptions.siteName = s.name
+        readOptions.latitudeDeg = s.latitudeDeg
+        readOptions.longitudeDeg = s.longitudeDeg
+        readOptions.elevationM = s.elevationM
+        if (/^UTC\b/.test(f.timeBasis)) readOptions.utcOffsetHours = s.utcOffsetHours
+        else if (f.timeBasis.includes(s.timeZone)) readOptions.timeZone = s.timeZone
+      }
+      out.push({ file: f.file, label: `${s.name}, ${s.climateType}: ${f.file}`, readOptions })
+    }
+  }
+  return out
+}

@@ -82,7 +82,14 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
     try {
       read = readWeatherBytes(f.bytes, options)
     } catch (e) {
-      if (e instanceof WeatherInputError) throw new FormQuestion(`${f.name}: ${e.message}`, f.name, e.missing)
+      if (e instanceof WeatherInputError) {
+        const where = e.missing.some((m) => /time|zone|offset/i.test(m))
+          ? ' On this page: fill in “Time zone” or “UTC offset” under “Site, time zone and columns”.'
+          : e.missing.length > 0
+            ? ' On this page: name the columns under “Site, time zone and columns” (column mapping).'
+            : ''
+        throw new FormQuestion(`${f.name}: ${e.message}.${where}`, f.name, e.missing)
+      }
       if (e instanceof RangeError) throw new RangeError(`${f.name}: ${e.message}`)
       throw e
     }
