@@ -18,17 +18,18 @@ export const D4_MOVING_RANGE_OF_TWO = 3.267
 export const SHEWHART_SIGMA_MULTIPLE = 3
 
 /**
- * EWMA smoothing constant λ = 0.10 and limit width L = 2.7: the design of Montgomery's EWMA example for
- * individual observations (Introduction to SQC, section on the EWMA chart, p. 428 of the edition cited by the
- * IMSL EWMA documentation), which has an in-control average run length of about 500 (Lucas & Saccucci 1990,
- * Technometrics 32:1, ARL table; from memory).
+ * EWMA smoothing constant λ = 0.10 and limit width L = 2.814: the design with an in-control average run
+ * length of about 500 points for λ = 0.10 (Lucas & Saccucci 1990, Technometrics 32:1, ARL table, as
+ * reproduced in Montgomery's EWMA section; from memory). Checked here by simulation with the exact
+ * (time-varying) limits: ARL0 ≈ 500 (test/analysis/energy/control-chart.test.ts). Montgomery's worked
+ * example uses L = 2.7, which the same simulation puts near 360.
  */
 export const EWMA_LAMBDA = 0.1
-export const EWMA_LIMIT_WIDTH_L = 2.7
+export const EWMA_LIMIT_WIDTH_L = 2.814
 
 /** The citation the report prints beside the limits. */
 export const CONTROL_CHART_SOURCE =
   'Limits: individuals x̄ ± 3·MR̄/d2, moving range UCL = D4·MR̄, LCL = D3·MR̄ with d2 = 1.128, D3 = 0, D4 = 3.267 ' +
   '(Montgomery, Introduction to Statistical Quality Control, Appendix Table VI, n = 2). Run rules: Western Electric ' +
-  'Co. (1956), Statistical Quality Control Handbook. EWMA λ = 0.10, L = 2.7 (Montgomery, EWMA chart example; ' +
-  'Lucas & Saccucci 1990).'
+  'Co. (1956), Statistical Quality Control Handbook. EWMA λ = 0.10, L = 2.814, in-control ARL ≈ 500 ' +
+  '(Lucas & Saccucci 1990, as tabulated by Montgomery).'

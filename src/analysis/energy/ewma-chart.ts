@@ -26,7 +26,7 @@ export interface EwmaChart {
 
 /**
  * EWMA of `values` with target `centerLine` and σ `sigma`. Example: λ = 0.1, μ₀ = 0, x₁ = 1 → z₁ = 0.1,
- * limit 2.7·√(0.1/1.9·(1 − 0.81)) = 0.270.
+ * limit 2.814·√(0.1/1.9·(1 − 0.81)) = 2.814·0.1 = 0.2814.
  */
 export function ewmaChart(
   values: readonly number[],

@@ -65,26 +65,53 @@ describe('individuals and moving-range chart', () => {
 })
 
 describe('EWMA chart', () => {
-  it('worked example computed by hand (λ = 0.1, L = 2.7, μ0 = 0, σ = 1)', () => {
-    // z1 = 0.1·1 + 0.9·0 = 0.1; half-width1 = 2.7·√(0.1/1.9·(1 − 0.9²)) = 2.7·√(0.0526316·0.19) = 0.270000
-    // z2 = 0.1·1 + 0.9·0.1 = 0.19; half-width2 = 2.7·√(0.0526316·(1 − 0.6561)) = 2.7·√0.0181000 = 2.7·0.134536 = 0.363248
+  it('worked example computed by hand (λ = 0.1, L = 2.814, μ0 = 0, σ = 1)', () => {
+    // z1 = 0.1·1 + 0.9·0 = 0.1; half-width1 = 2.814·√(0.1/1.9·(1 − 0.9²)) = 2.814·√(0.0526316·0.19) = 2.814·0.1 = 0.2814
+    // z2 = 0.1·1 + 0.9·0.1 = 0.19; half-width2 = 2.814·√(0.0526316·(1 − 0.6561)) = 2.814·√0.0181000 = 2.814·0.134536
+    //    = 0.378584
     const c = ewmaChart([1, 1], 0, 1, 0)
+    expect(c.lambda).toBe(0.1)
+    expect(c.limitWidthL).toBe(2.814)
     expect(c.ewma[0]).toBeCloseTo(0.1, 12)
     expect(c.ewma[1]).toBeCloseTo(0.19, 12)
-    expect(c.upperLimits[0]).toBeCloseTo(0.27, 6)
-    expect(c.upperLimits[1]).toBeCloseTo(0.363248, 5)
-    expect(c.lowerLimits[1]).toBeCloseTo(-0.363248, 5)
+    expect(c.upperLimits[0]).toBeCloseTo(0.2814, 9)
+    expect(c.upperLimits[1]).toBeCloseTo(0.378584, 5)
+    expect(c.lowerLimits[1]).toBeCloseTo(-0.378584, 5)
   })
   it('limits approach the steady state L·σ·√(λ/(2 − λ)) (Montgomery, EWMA section)', () => {
     const c = ewmaChart(new Array(200).fill(5), 5, 2, 0)
-    expect(c.upperLimits[199]).toBeCloseTo(5 + 2.7 * 2 * Math.sqrt(0.1 / 1.9), 9)
+    expect(c.upperLimits[199]).toBeCloseTo(5 + 2.814 * 2 * Math.sqrt(0.1 / 1.9), 9)
     expect(c.signals).toEqual([])
+  })
+  it('in-control average run length is about 500 (Lucas & Saccucci 1990 design for λ = 0.10, L = 2.814)', () => {
+    // 1000 simulated in-control sequences (xorshift32 + Box–Muller); run length = first signal. The mean of
+    // 1000 run lengths with ARL ≈ 500 has a standard error of about 16: accept 420…580.
+    let x = 2463534242
+    const u = () => {
+      x ^= x << 13
+      x >>>= 0
+      x ^= x >>> 17
+      x ^= x << 5
+      x >>>= 0
+      return (x + 0.5) / 4294967296
+    }
+    const normal = () => Math.sqrt(-2 * Math.log(u())) * Math.cos(2 * Math.PI * u())
+    let total = 0
+    const runs = 1000
+    for (let r = 0; r < runs; r++) {
+      const values = Array.from({ length: 3000 }, normal)
+      const first = ewmaChart(values, 0, 1, 0).firstMonitoringSignal
+      total += first === null ? values.length : first + 1
+    }
+    const arl = total / runs
+    expect(arl).toBeGreaterThan(420)
+    expect(arl).toBeLessThan(580)
   })
   it('signals a sustained 1σ shift that no single point shows beyond 3σ', () => {
     const values = [...new Array(20).fill(0), ...new Array(30).fill(1)]
     const c = ewmaChart(values, 0, 1, 20)
-    // After the shift zᵢ = 1 − 0.9^k; the steady half-width is 2.7·0.2294 = 0.619: crossed when 0.9^k < 0.381,
-    // k ≥ 10, i.e. the 10th shifted point (index 29).
+    // After the shift zᵢ = 1 − 0.9^k; the steady half-width is 2.814·0.229416 = 0.6456: crossed when
+    // 0.9^k < 0.3544, k ≥ 10, i.e. the 10th shifted point (index 29).
     expect(c.firstMonitoringSignal).toBe(29)
     expect(c.signals[0]).toEqual({ index: 29, side: 'above' })
   })
