@@ -263,7 +263,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     const lat = ctx.site.latitudeDeg
     const lon = ctx.site.longitudeDeg
     if (lat !== null && lon !== null) {
-      const sun = hourSun(series.startUtcMs, lat, lon)
+      const sun = hourSun(series.startUtcMs, lat, lon, series.ghiWm2)
       const night = fixNightIrradiance(grid, log, series.ghiWm2, sun)
       fillDaytimeIrradiance(grid, log, series.ghiWm2, sun)
       if (night > 0.02 * hours) {

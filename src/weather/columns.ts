@@ -165,7 +165,13 @@ export function planColumns(
   headers: string[],
   mapping: Partial<Record<MappingKey, ColumnMapping>> = {},
 ): ColumnPlan {
-  const plan: ColumnPlan = { variables: {}, time: {}, headerSaysUtc: false, headerUtcOffsetHours: null, unused: [] }
+  const plan: ColumnPlan = {
+    variables: {},
+    time: {},
+    headerSaysUtc: false,
+    headerUtcOffsetHours: null,
+    unused: [],
+  }
   const taken = new Set<number>()
   const ignored = new Set<MappingKey>()
   for (const [key, m] of Object.entries(mapping) as [MappingKey, ColumnMapping][]) {

@@ -13,11 +13,21 @@ export function summarizeCoverage(
 ): { months: MonthCoverage[]; years: number[] } {
   const offsetMs = (series.site.utcOffsetHours ?? 0) * 3_600_000
   const counts = new Map<number, number>()
+  let key = 0
+  let nextMonthMs = Number.NEGATIVE_INFINITY
+  let count = 0
   for (let s = 0; s < series.hours; s++) {
-    const d = new Date(series.startUtcMs[s] + offsetMs)
-    const key = d.getUTCFullYear() * 100 + d.getUTCMonth() + 1
-    counts.set(key, (counts.get(key) ?? 0) + (missing[s] ? 0 : 1))
+    const local = series.startUtcMs[s] + offsetMs
+    if (local >= nextMonthMs) {
+      if (key !== 0) counts.set(key, (counts.get(key) ?? 0) + count)
+      const d = new Date(local)
+      key = d.getUTCFullYear() * 100 + d.getUTCMonth() + 1
+      nextMonthMs = Date.UTC(d.getUTCFullYear(), d.getUTCMonth() + 1, 1)
+      count = 0
+    }
+    if (!missing[s]) count++
   }
+  if (key !== 0) counts.set(key, (counts.get(key) ?? 0) + count)
   const months: MonthCoverage[] = []
   const years = new Set<number>()
   for (const [key, count] of [...counts].sort((a, b) => a[0] - b[0])) {

@@ -60,23 +60,26 @@ export function readDelimited(
   const firstContent = body.search(/\S/)
   if (firstContent < 0) throw new WeatherInputError('the file is empty', ['rows'])
   const delimiter = detectDelimiter(body.slice(body.lastIndexOf('\n', firstContent) + 1))
-  const parsed = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false })
-  const data = parsed.data
-  // Header: the row among the first ten non-blank rows that names the most known columns.
+  // The head (header search, decimal-comma test) always goes through papaparse; the body too when it
+  // holds quotes. Quote-free bodies are split by a scanner that keeps only the needed columns
+  // (papaparse's own fastMode also splits quote-free text without quote handling).
+  const head = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false, preview: HEAD_ROWS }).data
   let headerIndex = -1
   let bestScore = -1
   let seen = 0
-  for (let r = 0; r < data.length && seen < 10; r++) {
-    if (isBlank(data[r])) continue
+  for (let r = 0; r < head.length && seen < 10; r++) {
+    if (isBlank(head[r])) continue
     seen++
-    const score = recognised(data[r])
+    const score = recognised(head[r])
     if (score > bestScore) {
       bestScore = score
       headerIndex = r
     }
   }
   if (headerIndex < 0) throw new WeatherInputError('the file has no rows with content', ['rows'])
-  const headers = mergeUnbalancedHeaders(data[headerIndex], delimiter, warnings).map((h) => h.replace(/^\uFEFF/, '').trim())
+  const headers = mergeUnbalancedHeaders(head[headerIndex], delimiter, warnings).map((h) =>
+    h.replace(/^\uFEFF/, '').trim(),
+  )
   if (bestScore <= 0 && Object.keys(mapping).length === 0) {
     throw new WeatherInputError(
       `no header row with known column names in the first lines (first line: ${JSON.stringify(headers.slice(0, 8).join(delimiter)).slice(0, 120)}); ` +
@@ -88,16 +91,18 @@ export function readDelimited(
   const plan = planColumns(headers, mapping)
   let decimalComma = false
   if (delimiter !== ',') {
-    for (let r = headerIndex + 1; r < Math.min(data.length, headerIndex + 200) && !decimalComma; r++) {
-      for (const f of data[r]) if (/^\s*[-+]?\d+,\d+\s*$/.test(f)) decimalComma = true
+    for (let r = headerIndex + 1; r < head.length && !decimalComma; r++) {
+      for (const f of head[r]) if (/^\s*[-+]?\d+,\d+\s*$/.test(f)) decimalComma = true
     }
   }
-
-  const rowIndex: number[] = []
-  for (let r = headerIndex + 1; r < data.length; r++) if (!isBlank(data[r])) rowIndex.push(r)
-  const n = rowIndex.length
-  const lines = new Int32Array(n)
-  for (let i = 0; i < n; i++) lines[i] = rowIndex[i] + 1
+  const needed = [...Object.values(plan.time), ...Object.values(plan.variables).map((c) => c!.index)]
+  const numericColumns = Object.values(plan.variables).map((c) => c!.index)
+  const body_ = body.includes('"')
+    ? papaparseBody(body, delimiter, headerIndex, needed)
+    : scanBody(body, delimiter, headerIndex, Object.values(plan.time), numericColumns, decimalComma)
+  const { lines, cells } = body_
+  const n = lines.length
+  const cell = (i: number, col: number): string | undefined => cells[col]?.[i]
   const time = createTimestampColumns(n)
   const timeErrors: (string | undefined)[] = new Array(n)
   const t = plan.time
@@ -119,14 +124,13 @@ export function readDelimited(
   }
   const scratch = new Float64Array(1)
   for (let i = 0; i < n; i++) {
-    const row = data[rowIndex[i]]
     if (t.timestamp !== undefined || (t.date !== undefined && t.year === undefined)) {
-      const dateText = row[t.timestamp ?? t.date!] ?? ''
+      const dateText = cell(i, t.timestamp ?? t.date!) ?? ''
       const timeText =
-        t.timestamp === undefined ? (t.time !== undefined ? (row[t.time] ?? '') : undefined) : undefined
+        t.timestamp === undefined ? (t.time !== undefined ? (cell(i, t.time) ?? '') : undefined) : undefined
       let ok = parseTimestampInto(time, i, dateText, timeText)
       if (!ok && t.timestamp !== undefined && t.time !== undefined)
-        ok = parseTimestampInto(time, i, dateText, row[t.time] ?? '')
+        ok = parseTimestampInto(time, i, dateText, cell(i, t.time) ?? '')
       if (!ok)
         timeErrors[i] =
           `cannot read the timestamp '${truncate(timeText === undefined ? dateText : `${dateText} ${timeText}`)}'`
@@ -134,7 +138,7 @@ export function readDelimited(
     }
     const part = (index: number | undefined, fallback: number): number => {
       if (index === undefined) return fallback
-      parseField(row[index], false, scratch, 0)
+      parseField(cell(i, index), false, scratch, 0)
       return scratch[0]
     }
     const year = part(t.year, Number.NaN)
@@ -142,12 +146,12 @@ export function readDelimited(
     const day = part(t.day, Number.NaN)
     let minutes = Number.NaN
     if (t.hour !== undefined) minutes = part(t.hour, Number.NaN) * 60 + part(t.minute, 0)
-    else if (t.time !== undefined) minutes = parseTimeOfDay(row[t.time] ?? '')
+    else if (t.time !== undefined) minutes = parseTimeOfDay(cell(i, t.time) ?? '')
     const integral =
       Number.isInteger(year) && Number.isInteger(month) && Number.isInteger(day) && Number.isInteger(minutes)
     if (!integral || minutes < 0 || minutes > 1440) {
       timeErrors[i] =
-        `cannot read the date and hour from the year/month/day/hour columns (${[t.year, t.month, t.day, t.hour].map((k) => (k === undefined ? '' : (row[k] ?? ''))).join(' ')})`
+        `cannot read the date and hour from the year/month/day/hour columns (${[t.year, t.month, t.day, t.hour].map((k) => (k === undefined ? '' : (cell(i, k) ?? ''))).join(' ')})`
       continue
     }
     time.year[i] = year
@@ -162,20 +166,30 @@ export function readDelimited(
     WeatherVariable,
     NonNullable<ColumnPlan['variables'][WeatherVariable]>,
   ][]) {
-    const values = new Float64Array(n)
-    let missing = 0
-    const index = chosen.index
-    for (let i = 0; i < n; i++) {
-      const code = parseField(data[rowIndex[i]][index], decimalComma, values, i)
-      if (code === FIELD_MISSING) missing++
-      else if (code === FIELD_UNREADABLE) {
-        missing++
-        log.add(
-          lines[i],
-          variable,
-          'unparseable-number',
-          `'${truncate(data[rowIndex[i]][index] ?? '')}' in column '${chosen.header}' is not a number: read as missing`,
-        )
+    const scanned = body_.numbers?.[chosen.index]
+    const values = scanned?.values ?? new Float64Array(n)
+    let missing = scanned?.blank ?? 0
+    const unreadable = (i: number, text: string | undefined): void => {
+      missing++
+      log.add(
+        lines[i],
+        variable,
+        'unparseable-number',
+        `'${truncate(text ?? '')}' in column '${chosen.header}' is not a number: read as missing`,
+      )
+    }
+    if (scanned) {
+      for (const [i, text] of scanned.other) {
+        const code = parseField(text, decimalComma, values, i)
+        if (code === FIELD_MISSING) missing++
+        else if (code === FIELD_UNREADABLE) unreadable(i, text)
+      }
+    } else {
+      const column = cells[chosen.index]
+      for (let i = 0; i < n; i++) {
+        const code = parseField(column?.[i], decimalComma, values, i)
+        if (code === FIELD_MISSING) missing++
+        else if (code === FIELD_UNREADABLE) unreadable(i, column?.[i])
       }
     }
     columns[variable] = {
@@ -231,12 +245,167 @@ export function mergeUnbalancedHeaders(cells: string[], delimiter: string, warni
       open = text
       continue
     }
-    if (open !== '') warnings.push(`header '${text}' contains the delimiter inside brackets without quotes: read as one column`)
+    if (open !== '')
+      warnings.push(
+        `header '${text}' contains the delimiter inside brackets without quotes: read as one column`,
+      )
     out.push(text)
     open = ''
   }
   if (open !== '') out.push(...open.split(delimiter))
   return out
+}
+
+/** Rows in the head parsed by papaparse for header and decimal-comma detection. */
+const HEAD_ROWS = 210
+
+interface ScannedNumbers {
+  /** Parsed plain decimals; NaN where the field was blank or needs {@link parseField}. */
+  values: Float64Array
+  /** Blank or absent fields. */
+  blank: number
+  /** [row, text] of fields that are not plain decimals. */
+  other: [number, string][]
+}
+
+interface BodyCells {
+  /** 1-based line of each non-blank data row. */
+  lines: Int32Array
+  /** Text of each needed column per row (sparse by column index). */
+  cells: (string | undefined)[][]
+  /** Numeric columns parsed by the scanner (sparse by column index), when it ran. */
+  numbers?: ScannedNumbers[]
+}
+
+/** The body through papaparse (quoted text): rows after the header, blank rows skipped. */
+function papaparseBody(body: string, delimiter: string, headerIndex: number, needed: number[]): BodyCells {
+  const data = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false }).data
+  const rows: number[] = []
+  for (let r = headerIndex + 1; r < data.length; r++) if (!isBlank(data[r])) rows.push(r)
+  const lines = new Int32Array(rows.length)
+  const cells: (string | undefined)[][] = []
+  for (const col of needed) cells[col] = new Array(rows.length)
+  for (let i = 0; i < rows.length; i++) {
+    const row = data[rows[i]]
+    lines[i] = rows[i] + 1
+    for (const col of needed) cells[col][i] = row[col]
+  }
+  return { lines, cells }
+}
+
+/**
+ * The body of quote-free text split directly: line ends as papaparse guesses them (CRLF, LF or CR);
+ * only the needed columns are kept, numbers parsed from the characters (plain decimals: the same
+ * double as `Number`, since m/10^k of integers below 2^53 is correctly rounded), anything else
+ * (blank, missing words, exponents, units) passed on as text. Line numbers are exact: without
+ * quotes no field can hold a line break.
+ */
+function scanBody(
+  body: string,
+  delimiter: string,
+  headerIndex: number,
+  textCols: number[],
+  numericCols: number[],
+  decimalComma: boolean,
+): BodyCells {
+  const newline = body.includes('\r\n') ? '\r\n' : body.includes('\n') ? '\n' : '\r'
+  const all = [...textCols, ...numericCols]
+  const maxCol = all.length === 0 ? -1 : Math.max(...all)
+  // 0 unused, 1 text, 2 number
+  const kind = new Uint8Array(maxCol + 1)
+  for (const c of textCols) kind[c] = 1
+  for (const c of numericCols) kind[c] = 2
+  let capacity = 1
+  for (let k = body.indexOf(newline); k >= 0; k = body.indexOf(newline, k + newline.length)) capacity++
+  const cells: (string | undefined)[][] = []
+  for (const c of textCols) cells[c] = []
+  const numbers: ScannedNumbers[] = []
+  for (const c of numericCols)
+    numbers[c] = { values: new Float64Array(capacity).fill(Number.NaN), blank: 0, other: [] }
+  const lineList = new Int32Array(capacity)
+  const delim = delimiter.charCodeAt(0)
+  const comma = decimalComma ? 44 : -1
+  let rows = 0
+  let pos = 0
+  let line = 0
+  const length = body.length
+  while (pos <= length) {
+    let end = body.indexOf(newline, pos)
+    if (end < 0) end = length
+    if (line > headerIndex && !blankSpan(body, pos, end)) {
+      lineList[rows] = line + 1
+      let start = pos
+      let col = 0
+      for (; col <= maxCol; col++) {
+        let stop = body.indexOf(delimiter, start)
+        if (stop < 0 || stop > end) stop = end
+        const k = kind[col]
+        if (k === 1) cells[col][rows] = body.slice(start, stop)
+        else if (k === 2) {
+          const target = numbers[col]
+          const v = parseDecimal(body, start, stop, delim, comma)
+          if (!Number.isNaN(v)) target.values[rows] = v
+          else if (blankSpan(body, start, stop)) target.blank++
+          else target.other.push([rows, body.slice(start, stop)])
+        }
+        if (stop === end) {
+          col++
+          break
+        }
+        start = stop + 1
+      }
+      for (; col <= maxCol; col++) {
+        if (kind[col] === 1) cells[col][rows] = undefined
+        else if (kind[col] === 2) numbers[col].blank++
+      }
+      rows++
+    }
+    line++
+    if (end === length) break
+    pos = end + newline.length
+  }
+  for (const c of numericCols) numbers[c].values = numbers[c].values.subarray(0, rows)
+  return { lines: lineList.slice(0, rows), cells, numbers }
+}
+
+function blankSpan(text: string, from: number, to: number): boolean {
+  for (let k = from; k < to; k++) {
+    const ch = text.charCodeAt(k)
+    if (ch !== 32 && ch !== 9 && ch !== 13 && ch !== 10) return false
+  }
+  return true
+}
+
+const POW10 = [1, 10, 100, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15]
+
+/** `[-+]?digits[.digits]` between from and to (spaces allowed around), at most 15 digits; NaN otherwise. */
+function parseDecimal(text: string, from: number, to: number, _delim: number, comma: number): number {
+  let k = from
+  while (k < to && text.charCodeAt(k) === 32) k++
+  let end = to
+  while (end > k && text.charCodeAt(end - 1) === 32) end--
+  if (k >= end) return Number.NaN
+  let negative = false
+  let ch = text.charCodeAt(k)
+  if (ch === 45 || ch === 43) {
+    negative = ch === 45
+    k++
+  }
+  let mantissa = 0
+  let digits = 0
+  let fraction = -1
+  for (; k < end; k++) {
+    ch = text.charCodeAt(k)
+    if (ch >= 48 && ch <= 57) {
+      mantissa = mantissa * 10 + (ch - 48)
+      digits++
+      if (fraction >= 0) fraction++
+    } else if ((ch === 46 || ch === comma) && fraction < 0) fraction = 0
+    else return Number.NaN
+  }
+  if (digits === 0 || digits > 15) return Number.NaN
+  const value = fraction > 0 ? mantissa / POW10[fraction] : mantissa
+  return negative ? -value : value
 }
 
 function truncate(s: string): string {

@@ -70,22 +70,60 @@ export interface HourSun {
   clearSkyWm2: Float64Array
   /** 1 when the sun is below the horizon (geometric) at start, middle and end of the hour. */
   night: Uint8Array
+  startUtcMs: Float64Array
+  latDeg: number
+  lonDeg: number
 }
 
-/** Sun geometry per hour for hour-long interval values (hour starts in `startUtcMs`). */
-export function hourSun(startUtcMs: Float64Array, latDeg: number, lonDeg: number): HourSun {
+/**
+ * Sun geometry per hour for hour-long interval values (hour starts in `startUtcMs`). With `ghiWm2`,
+ * only hours whose irradiance needs a decision (missing, or above the night limit) are computed:
+ * a reading between 0 and the limit is acceptable by night and by day. Skipped hours get
+ * clearSky NaN and night 0.
+ */
+export function hourSun(
+  startUtcMs: Float64Array,
+  latDeg: number,
+  lonDeg: number,
+  ghiWm2?: Float64Array,
+): HourSun {
   const n = startUtcMs.length
   const clearSkyWm2 = new Float64Array(n)
   const night = new Uint8Array(n)
   for (let s = 0; s < n; s++) {
-    const t = startUtcMs[s]
-    const a = sinGeometricSunAltitude(t, latDeg, lonDeg)
-    const m = sinGeometricSunAltitude(t + 1_800_000, latDeg, lonDeg)
-    const b = sinGeometricSunAltitude(t + 3_600_000, latDeg, lonDeg)
-    clearSkyWm2[s] = (haurwitzClearSkyWm2(a) + 4 * haurwitzClearSkyWm2(m) + haurwitzClearSkyWm2(b)) / 6
-    night[s] = a <= 0 && m <= 0 && b <= 0 ? 1 : 0
+    if (ghiWm2 !== undefined) {
+      const g = ghiWm2[s]
+      if (g >= 0 && g <= NIGHT_IRRADIANCE_LIMIT_WM2) {
+        clearSkyWm2[s] = Number.NaN
+        continue
+      }
+    }
+    computeHour(startUtcMs[s], latDeg, lonDeg, clearSkyWm2, night, s)
   }
-  return { clearSkyWm2, night }
+  return { clearSkyWm2, night, startUtcMs, latDeg, lonDeg }
+}
+
+function computeHour(
+  t: number,
+  latDeg: number,
+  lonDeg: number,
+  clearSkyWm2: Float64Array,
+  night: Uint8Array,
+  s: number,
+): void {
+  const a = sinGeometricSunAltitude(t, latDeg, lonDeg)
+  const m = sinGeometricSunAltitude(t + 1_800_000, latDeg, lonDeg)
+  const b = sinGeometricSunAltitude(t + 3_600_000, latDeg, lonDeg)
+  // Simpson's rule over the hour: (start + 4·middle + end) / 6
+  clearSkyWm2[s] = (haurwitzClearSkyWm2(a) + 4 * haurwitzClearSkyWm2(m) + haurwitzClearSkyWm2(b)) / 6
+  night[s] = a <= 0 && m <= 0 && b <= 0 ? 1 : 0
+}
+
+/** Clear-sky irradiance of hour `s`, computed now if {@link hourSun} skipped it. */
+export function clearSkyAt(sun: HourSun, s: number): number {
+  if (Number.isNaN(sun.clearSkyWm2[s]))
+    computeHour(sun.startUtcMs[s], sun.latDeg, sun.lonDeg, sun.clearSkyWm2, sun.night, s)
+  return sun.clearSkyWm2[s]
 }
 
 /** Night irradiance above this [W/m²] is an error (time basis or sensor). Common practice, no source. */
@@ -144,14 +182,14 @@ export function fillDaytimeIrradiance(
         if (
           !Number.isNaN(ghi[k]) &&
           !(grid.quality[k] & QualityFlag.irradianceFilled) &&
-          sun.clearSkyWm2[k] >= MIN_CLEAR_SKY_FOR_INDEX_WM2
+          clearSkyAt(sun, k) >= MIN_CLEAR_SKY_FOR_INDEX_WM2
         )
           best = k
       }
     }
     if (best < 0) continue
-    const index = Math.min(1.2, ghi[best] / sun.clearSkyWm2[best])
-    ghi[s] = index * sun.clearSkyWm2[s]
+    const index = Math.min(1.2, ghi[best] / clearSkyAt(sun, best))
+    ghi[s] = index * clearSkyAt(sun, s)
     grid.quality[s] |= QualityFlag.irradianceFilled
     if (grid.slotRow[s] >= 0) grid.changed[s] = 1
     filled++

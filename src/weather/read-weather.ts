@@ -84,7 +84,9 @@ export function readWeather(
   const { table, info } = readDelimited(text, opts.mapping ?? {}, log, warnings)
   const headerOffset = info.plan.headerUtcOffsetHours
   if (headerOffset !== null && opts.utcOffsetHours === undefined && opts.timeZone === undefined) {
-    warnings.push(`the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`)
+    warnings.push(
+      `the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`,
+    )
   }
   const fixedOffset = opts.utcOffsetHours ?? (opts.timeZone === undefined ? headerOffset : null)
   const site: SiteInfo = {

@@ -179,12 +179,21 @@ export function siUnit(variable: WeatherVariable): UnitConversion {
   return u(si, 1)
 }
 
-/** Median of the finite values of `values` (NaN when there are none). Sorts a copy. */
+/** Values sampled for {@link finiteMedian} on long columns (enough for a plausibility test). */
+export const MEDIAN_SAMPLE = 20_001
+
+/**
+ * Median of the finite values of `values` (NaN when there are none); on columns longer than
+ * {@link MEDIAN_SAMPLE}, the median of evenly spaced samples (used only to judge units).
+ */
 export function finiteMedian(values: Float64Array): number {
-  const finite = values.filter((v) => Number.isFinite(v))
-  if (finite.length === 0) return Number.NaN
-  finite.sort()
-  return finite[Math.floor(finite.length / 2)]
+  const step = Math.max(1, Math.floor(values.length / MEDIAN_SAMPLE))
+  const finite = new Float64Array(Math.ceil(values.length / step))
+  let k = 0
+  for (let i = 0; i < values.length; i += step) if (Number.isFinite(values[i])) finite[k++] = values[i]
+  if (k === 0) return Number.NaN
+  const sorted = finite.subarray(0, k).sort()
+  return sorted[Math.floor(k / 2)]
 }
 
 /** Range of plausible column medians in the series unit, per variable. Common practice, no source. */

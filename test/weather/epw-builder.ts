@@ -16,7 +16,10 @@ export interface EpwHour {
   rainMm: number
 }
 
-export function epwText(site: { lat: number; lon: number; tz: number; elevation: number }, hours: EpwHour[]): string {
+export function epwText(
+  site: { lat: number; lon: number; tz: number; elevation: number },
+  hours: EpwHour[],
+): string {
   const header = [
     `LOCATION,Invented Test Town,XX,Nowhere,test builder,000000,${site.lat},${site.lon},${site.tz},${site.elevation}`,
     'DESIGN CONDITIONS,0',
@@ -29,9 +32,41 @@ export function epwText(site: { lat: number; lon: number; tz: number; elevation:
   ]
   const rows = hours.map((h) =>
     [
-      h.year, h.month, h.day, h.hour, 60, '?9?9?9?9E0?9?9?9?9?9?9?9?9?9?9?9?9?9?9?9*9*9?9?9?9',
-      h.dryBulbC, h.dewPointC, h.rhPct, h.pressurePa, 9999, 9999, 300, h.ghiWh, 0, 0, 999999, 999999, 999999, 9999,
-      180, h.windMs, h.skyTenths, h.skyTenths, 9999, 99999, 9, 999999999, 999, 0.999, 999, 99, 999, h.rainMm, 99,
+      h.year,
+      h.month,
+      h.day,
+      h.hour,
+      60,
+      '?9?9?9?9E0?9?9?9?9?9?9?9?9?9?9?9?9?9?9?9*9*9?9?9?9',
+      h.dryBulbC,
+      h.dewPointC,
+      h.rhPct,
+      h.pressurePa,
+      9999,
+      9999,
+      300,
+      h.ghiWh,
+      0,
+      0,
+      999999,
+      999999,
+      999999,
+      9999,
+      180,
+      h.windMs,
+      h.skyTenths,
+      h.skyTenths,
+      9999,
+      99999,
+      9,
+      999999999,
+      999,
+      0.999,
+      999,
+      99,
+      999,
+      h.rainMm,
+      99,
     ].join(','),
   )
   return [...header, ...rows].join('\r\n') + '\r\n'

@@ -23,19 +23,62 @@ function weather(): { epw: string; csvText: string } {
       const windMs = Math.round((1 + 0.1 * (i % 17)) * 10) / 10
       const sky = i % 11
       const rainMm = h === 15 ? 0.4 : 0
-      hours.push({ year: 2024, month: 3, day: d, hour: h, dryBulbC: t, dewPointC: dew, rhPct: rh, pressurePa, ghiWh, windMs, skyTenths: sky, rainMm })
+      hours.push({
+        year: 2024,
+        month: 3,
+        day: d,
+        hour: h,
+        dryBulbC: t,
+        dewPointC: dew,
+        rhPct: rh,
+        pressurePa,
+        ghiWh,
+        windMs,
+        skyTenths: sky,
+        rainMm,
+      })
       const startUtc = Date.UTC(2024, 2, d, h - 1) - site.tz * 3_600_000
-      rows.push([new Date(startUtc).toISOString().replace(':00.000Z', 'Z'), t, dew, rh, pressurePa, windMs, ghiWh, rainMm, sky])
+      rows.push([
+        new Date(startUtc).toISOString().replace(':00.000Z', 'Z'),
+        t,
+        dew,
+        rh,
+        pressurePa,
+        windMs,
+        ghiWh,
+        rainMm,
+        sky,
+      ])
     }
   }
   const csvText = csv(
-    ['time (UTC)', 'dry bulb (°C)', 'dew point (°C)', 'RH (%)', 'station pressure (Pa)', 'wind speed (m/s)', 'GHI (Wh/m2)', 'rain (mm)', 'total sky cover (tenths)'],
+    [
+      'time (UTC)',
+      'dry bulb (°C)',
+      'dew point (°C)',
+      'RH (%)',
+      'station pressure (Pa)',
+      'wind speed (m/s)',
+      'GHI (Wh/m2)',
+      'rain (mm)',
+      'total sky cover (tenths)',
+    ],
     rows,
   )
   return { epw: epwText(site, hours), csvText }
 }
 
-const columns: (keyof HourlySeries)[] = ['startUtcMs', 'dryBulbC', 'relativeHumidityPct', 'pressureKpa', 'windMs', 'ghiWm2', 'rainMm', 'quality', 'cloudCoverPct']
+const columns: (keyof HourlySeries)[] = [
+  'startUtcMs',
+  'dryBulbC',
+  'relativeHumidityPct',
+  'pressureKpa',
+  'windMs',
+  'ghiWm2',
+  'rainMm',
+  'quality',
+  'cloudCoverPct',
+]
 
 describe('EPW and CSV of the same weather', () => {
   it('give identical series, value for value', () => {
@@ -45,7 +88,8 @@ describe('EPW and CSV of the same weather', () => {
     const b = readWeather(csvText, options).series
     expect(a.hours).toBe(48)
     expect(b.hours).toBe(48)
-    for (const c of columns) expect(Array.from(b[c] as ArrayLike<number>), c).toEqual(Array.from(a[c] as ArrayLike<number>))
+    for (const c of columns)
+      expect(Array.from(b[c] as ArrayLike<number>), c).toEqual(Array.from(a[c] as ArrayLike<number>))
     expect(new Date(a.startUtcMs[0]).toISOString()).toBe('2024-02-29T22:00:00.000Z')
   })
 })

@@ -21,14 +21,28 @@ function io(): CliIo & { out: string; err: string } {
 }
 
 const epw = new URL('../fixtures/weather/invented-mesa-2days.epw', import.meta.url).pathname
-const normals = new URL('../../node_modules/vega-datasets/data/seattle-weather-hourly-normals.csv', import.meta.url).pathname
+const normals = new URL(
+  '../../node_modules/vega-datasets/data/seattle-weather-hourly-normals.csv',
+  import.meta.url,
+).pathname
 
 describe('dryhours inspect', () => {
   it('--json has the keys listed in issue 3 with the documented shapes', async () => {
     const c = io()
     expect(await runCli(['inspect', epw, '--json'], c)).toBe(0)
     const j = JSON.parse(c.out)
-    for (const k of ['format', 'rows', 'period', 'hours', 'years', 'typicalYear', 'columns', 'site', 'coverage', 'problems']) {
+    for (const k of [
+      'format',
+      'rows',
+      'period',
+      'hours',
+      'years',
+      'typicalYear',
+      'columns',
+      'site',
+      'coverage',
+      'problems',
+    ]) {
       expect(j).toHaveProperty(k)
     }
     expect(j.format).toBe('epw')
@@ -38,7 +52,11 @@ describe('dryhours inspect', () => {
     expect(j.years).toEqual([2023])
     expect(j.coverage[0]).toMatchObject({ year: 2023, month: 1 })
     expect(Object.keys(j.columns[0]).slice(0, 3)).toEqual(['variable', 'source', 'unit'])
-    expect(j.problems.every((p: Record<string, unknown>) => 'line' in p && 'variable' in p && 'kind' in p && 'message' in p)).toBe(true)
+    expect(
+      j.problems.every(
+        (p: Record<string, unknown>) => 'line' in p && 'variable' in p && 'kind' in p && 'message' in p,
+      ),
+    ).toBe(true)
   })
 
   it('the NOAA normals file without humidity exits 2 with what is missing and how to give it', async () => {

@@ -18,7 +18,13 @@ function readOrInputError(run: () => ReturnType<typeof readWeather>): void {
 
 /** A random walk of `n` integer steps in ±1…±max (never 0, so no stuck runs), as tenths. */
 const walk = (n: number, start: fc.Arbitrary<number>, max: number) =>
-  fc.tuple(start, fc.array(fc.integer({ min: 1, max }).chain((k) => fc.constantFrom(k, -k)), { minLength: n, maxLength: n }))
+  fc.tuple(
+    start,
+    fc.array(
+      fc.integer({ min: 1, max }).chain((k) => fc.constantFrom(k, -k)),
+      { minLength: n, maxLength: n },
+    ),
+  )
 
 describe('reader properties', () => {
   it('arbitrary bytes never crash: a WeatherInputError with a message, or a series whose counts add up', () => {
@@ -31,11 +37,39 @@ describe('reader properties', () => {
   })
 
   it('CSV-like noise (header words, digits, separators, dates) never crashes', () => {
-    const token = fc.constantFrom('timestamp', 'temp', 'rh', 'dew', 'wind', '2021-06-01 00:00', '2021-06-01 24:00', '13/13/2021 1:00', ',', ';', '\t', '\n', '\r\n', '"', '-9999', '99.9', '1,5', 'NA', '', ' ', '°F', '(hPa)', '12')
+    const token = fc.constantFrom(
+      'timestamp',
+      'temp',
+      'rh',
+      'dew',
+      'wind',
+      '2021-06-01 00:00',
+      '2021-06-01 24:00',
+      '13/13/2021 1:00',
+      ',',
+      ';',
+      '\t',
+      '\n',
+      '\r\n',
+      '"',
+      '-9999',
+      '99.9',
+      '1,5',
+      'NA',
+      '',
+      ' ',
+      '°F',
+      '(hPa)',
+      '12',
+    )
     fc.assert(
-      fc.property(fc.array(token, { maxLength: 80 }), fc.constantFrom({}, { utcOffsetHours: 3 }, { timeZone: 'Europe/Paris' }), (tokens, options) => {
-        readOrInputError(() => readWeather(tokens.join(''), options))
-      }),
+      fc.property(
+        fc.array(token, { maxLength: 80 }),
+        fc.constantFrom({}, { utcOffsetHours: 3 }, { timeZone: 'Europe/Paris' }),
+        (tokens, options) => {
+          readOrInputError(() => readWeather(tokens.join(''), options))
+        },
+      ),
       { numRuns: 300 },
     )
   })
@@ -67,7 +101,8 @@ describe('reader properties', () => {
           const ww = series(w, 1, 300).map((k) => k / 10)
           const t0 = Date.UTC(2000, 0, 1) + start * 3_600_000
           const lines = ['timestamp,temp (C),rh (%),pressure (kPa),wind (m/s)']
-          for (let i = 0; i < n; i++) lines.push(`${new Date(t0 + i * 3_600_000).toISOString()},${tt[i]},${rr[i]},${pp[i]},${ww[i]}`)
+          for (let i = 0; i < n; i++)
+            lines.push(`${new Date(t0 + i * 3_600_000).toISOString()},${tt[i]},${rr[i]},${pp[i]},${ww[i]}`)
           const r = readWeather(lines.join('\n'))
           expect(r.rows).toEqual({ read: n, used: n, repaired: 0, rejected: 0 })
           expect(r.series.startUtcMs[0]).toBe(t0)
@@ -82,29 +117,44 @@ describe('reader properties', () => {
   })
 
   it('row counts add up with random blanks, missing codes, junk and duplicated or dropped rows', () => {
-    const cell = fc.oneof(fc.integer({ min: 0, max: 300 }).map((k) => String(k / 10)), fc.constantFrom('', 'NA', '-9999', 'x', '999.9'))
+    const cell = fc.oneof(
+      fc.integer({ min: 0, max: 300 }).map((k) => String(k / 10)),
+      fc.constantFrom('', 'NA', '-9999', 'x', '999.9'),
+    )
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.integer({ min: 0, max: 40 }), cell, cell, fc.constantFrom('keep', 'dup', 'drop', 'badtime')), { minLength: 1, maxLength: 60 }), (rows) => {
-        const lines = ['timestamp,temp,rh']
-        let count = 0
-        for (const [h, t, rh, what] of rows) {
-          if (what === 'drop') continue
-          const stamp = what === 'badtime' ? '2021-02-30 10:00' : new Date(Date.UTC(2021, 5, 1, h)).toISOString()
-          lines.push(`${stamp},${t},${rh}`)
-          count++
-          if (what === 'dup') {
+      fc.property(
+        fc.array(
+          fc.tuple(
+            fc.integer({ min: 0, max: 40 }),
+            cell,
+            cell,
+            fc.constantFrom('keep', 'dup', 'drop', 'badtime'),
+          ),
+          { minLength: 1, maxLength: 60 },
+        ),
+        (rows) => {
+          const lines = ['timestamp,temp,rh']
+          let count = 0
+          for (const [h, t, rh, what] of rows) {
+            if (what === 'drop') continue
+            const stamp =
+              what === 'badtime' ? '2021-02-30 10:00' : new Date(Date.UTC(2021, 5, 1, h)).toISOString()
             lines.push(`${stamp},${t},${rh}`)
             count++
+            if (what === 'dup') {
+              lines.push(`${stamp},${t},${rh}`)
+              count++
+            }
           }
-        }
-        try {
-          const r = readWeather(lines.join('\n'), { utcOffsetHours: 0 })
-          expect(r.rows.read).toBe(count)
-          expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(count)
-        } catch (e) {
-          expect(e).toBeInstanceOf(WeatherInputError)
-        }
-      }),
+          try {
+            const r = readWeather(lines.join('\n'), { utcOffsetHours: 0 })
+            expect(r.rows.read).toBe(count)
+            expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(count)
+          } catch (e) {
+            expect(e).toBeInstanceOf(WeatherInputError)
+          }
+        },
+      ),
       { numRuns: 200 },
     )
   })

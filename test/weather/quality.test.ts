@@ -53,7 +53,9 @@ describe('quality control', () => {
     dew[8] = temps[8] + 3
     const r = read({ temp: temps, dewpoint: dew })
     expect(r.series.relativeHumidityPct[3]).toBeCloseTo(100, 9)
-    expect(r.problems.filter((p) => p.kind === 'dew-point-above-dry-bulb').map((p) => p.line)).toEqual([5, 10])
+    expect(r.problems.filter((p) => p.kind === 'dew-point-above-dry-bulb').map((p) => p.line)).toEqual([
+      5, 10,
+    ])
     // rejected at hour 8, then filled from its neighbours (1-hour gap)
     expect(r.series.quality[8] & QualityFlag.filled).toBeTruthy()
   })
@@ -85,7 +87,13 @@ describe('quality control', () => {
 
   it('missing hours with no row at all are counted, filled when short', () => {
     const stamps = hourStamps('2021-06-01T00:00Z', 10).filter((_, i) => i !== 4)
-    const r = readWeather(csv(['timestamp', 'temp', 'rh'], stamps.map((t, i) => [t, wavy(i), 50 + i])), { utcOffsetHours: 0 })
+    const r = readWeather(
+      csv(
+        ['timestamp', 'temp', 'rh'],
+        stamps.map((t, i) => [t, wavy(i), 50 + i]),
+      ),
+      { utcOffsetHours: 0 },
+    )
     expect(r.series.hours).toBe(10)
     expect(r.hoursWithoutRow).toBe(1)
     expect(r.series.quality[4] & QualityFlag.filled).toBeTruthy()
@@ -96,7 +104,10 @@ describe('quality control', () => {
     const t: (number | string)[] = [...temps]
     t[2] = 'warm'
     const r = read({ temp: t, rh })
-    expect(r.problems.find((p) => p.kind === 'unparseable-number')).toMatchObject({ line: 4, variable: 'dryBulb' })
+    expect(r.problems.find((p) => p.kind === 'unparseable-number')).toMatchObject({
+      line: 4,
+      variable: 'dryBulb',
+    })
   })
 })
 
@@ -104,7 +115,8 @@ describe('irradiance', () => {
   // An invented site at 40° N, 0° E; 2021-06-01 UTC. Night hours come from the sun module.
   const site = { latitudeDeg: 40, longitudeDeg: 0 }
   const hours = 24
-  const mu = (s: number): number => sinGeometricSunAltitude(Date.parse('2021-06-01T00:00Z') + s * 3_600_000 + 1_800_000, 40, 0)
+  const mu = (s: number): number =>
+    sinGeometricSunAltitude(Date.parse('2021-06-01T00:00Z') + s * 3_600_000 + 1_800_000, 40, 0)
   const ghi = Array.from({ length: hours }, (_, s) => Math.round(0.7 * haurwitzClearSkyWm2(mu(s))))
   const t24 = Array.from({ length: hours }, (_, i) => wavy(i))
   const rh24 = Array.from({ length: hours }, (_, i) => 50 + (i % 7))

@@ -8,7 +8,10 @@ import { describe, expect, it } from 'vitest'
 import { readWeather } from '../../src/weather/read-weather.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 
-const path = new URL('../../node_modules/vega-datasets/data/seattle-weather-hourly-normals.csv', import.meta.url)
+const path = new URL(
+  '../../node_modules/vega-datasets/data/seattle-weather-hourly-normals.csv',
+  import.meta.url,
+)
 const text = readFileSync(path, 'utf8')
 
 describe('NOAA Seattle hourly normals (vega-datasets)', () => {
@@ -34,7 +37,10 @@ describe('NOAA Seattle hourly normals (vega-datasets)', () => {
   // The file has no humidity-like column at all, so the mapping test adds one programmatically:
   // a column 'obs_humid' with invented values (not NOAA data), mapped by name with its unit.
   const lines = text.trimEnd().split(/\r?\n/)
-  const withHumidity = [`${lines[0]},obs_humid`, ...lines.slice(1).map((l, i) => `${l},${0.6 + 0.01 * (i % 30)}`)].join('\n')
+  const withHumidity = [
+    `${lines[0]},obs_humid`,
+    ...lines.slice(1).map((l, i) => `${l},${0.6 + 0.01 * (i % 30)}`),
+  ].join('\n')
 
   it('is read fully when a humidity column is supplied by mapping', () => {
     const r = readWeather(withHumidity, {
@@ -50,7 +56,10 @@ describe('NOAA Seattle hourly normals (vega-datasets)', () => {
     expect(r.period.start).toBe('2010-01-01T09:00:00.000Z')
     expect(r.series.dryBulbC[0]).toBe(4.0)
     expect(r.series.pressureKpa[0]).toBeCloseTo(101.66, 9) // 1016.6 hPa, unit detected from the values
-    expect(r.columns.find((c) => c.variable === 'pressure')).toMatchObject({ unit: 'hPa', unitFrom: 'detected' })
+    expect(r.columns.find((c) => c.variable === 'pressure')).toMatchObject({
+      unit: 'hPa',
+      unitFrom: 'detected',
+    })
     expect(r.series.windMs[0]).toBe(3.8)
     expect(r.series.relativeHumidityPct[0]).toBeCloseTo(60, 9)
     expect(r.series.typicalYear).toBe(false)
