@@ -7,7 +7,7 @@
  * Plain ES2017 in a string (no build step), no template literals, no eval, no innerHTML of user text:
  * the only HTML inserted is the server's report, in which every user string is already escaped.
  */
-export const APP_JS = String.raw`(function () {
+export const APP_JS = `(function () {
   'use strict';
   var form = document.getElementById('assess-form');
   if (!form || !window.XMLHttpRequest || !window.FormData) return;

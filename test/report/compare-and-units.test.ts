@@ -1,0 +1,72 @@
+/**
+ * Sites side by side (grouped bars equal each assessment, ranking by the stated criterion, unique ids
+ * when several reports share one document) and the report in US customary units.
+ */
+import { beforeAll, describe, expect, it } from 'vitest'
+import { rankSites, renderComparisonHtml } from '../../src/report/compare-html.ts'
+import { renderReportHtml } from '../../src/report/report-html.ts'
+import { type DemoCase, loadDemoCases } from './demo-cases.ts'
+import { byId, elements, num } from './html-helpers.ts'
+
+let cases: DemoCase[] = []
+beforeAll(() => {
+  cases = loadDemoCases(['ardentine-upland-2021-2024-utc.csv', 'tamarel-lowland-2021-2023-utc.csv'])
+}, 60_000)
+
+describe('comparison of two demo sites', () => {
+  it('draws one bar per site and month with the assessment medians', () => {
+    const h = renderComparisonHtml(
+      cases.map((c) => ({ assessment: c.assessment, options: { series: c.series } })),
+    )
+    const bars = elements(byId(h, 'svg', 'cmp-fig-usable-svg'), 'g', 'class="bar"')
+    expect(bars).toHaveLength(24)
+    cases.forEach((c, si) => {
+      for (const m of c.assessment.monthly) {
+        const b = bars.find((x) => x['data-series'] === String(si) && x['data-category'] === String(m.month))
+        expect(num(b?.['data-value'])).toBe(m.usableHours.median)
+      }
+    })
+    // Each site's own report follows, with prefixed ids: no id repeats in the document.
+    const ids = [...h.matchAll(/\sid="([^"]+)"/g)].map((m) => m[1])
+    expect(ids.length).toBeGreaterThan(40)
+    expect(new Set(ids).size).toBe(ids.length)
+    expect(h).toContain('data-report="comparison"')
+    expect((h.match(/data-report="assessment"/g) ?? []).length).toBe(2)
+  })
+
+  it('ranks by the mean probability of finishing within the deadline', () => {
+    const ranks = rankSites(cases.map((c) => ({ assessment: c.assessment })))
+    const mean = (c: DemoCase) =>
+      c.assessment.startDates.reduce((s, r) => s + r.probabilityWithinDeadline, 0) /
+      c.assessment.startDates.length
+    for (let i = 1; i < ranks.length; i++) {
+      expect(ranks[i - 1].meanProbabilityWithinDeadline ?? -1).toBeGreaterThanOrEqual(
+        ranks[i].meanProbabilityWithinDeadline ?? -1,
+      )
+    }
+    expect(ranks.find((r) => r.index === 0)?.meanProbabilityWithinDeadline).toBeCloseTo(mean(cases[0]), 12)
+  })
+})
+
+describe('US customary report', () => {
+  it('labels and converts: °F axis, kWh per short ton bars, US units in the header', () => {
+    const c = cases[0]
+    const h = renderReportHtml(c.assessment, { series: c.series, units: 'us' })
+    expect(h).toContain('data-units="us"')
+    expect(h).toContain('dry bulb [°F]')
+    expect(h).toContain('humidity ratio [gr/lb]')
+    expect(h).toContain('US customary (°F, lb, gal)')
+    const bars = elements(byId(h, 'svg', 'fig-heat-svg'), 'g', 'class="bar"')
+    for (const m of c.assessment.monthly) {
+      const si = m.supplementalHeatKwhPerTonne.median
+      const b = bars.find((x) => x['data-key'] === String(m.month))
+      if (si === null) expect(num(b?.['data-median'])).toBeNull()
+      else expect(num(b?.['data-median'])).toBeCloseTo(Math.round(si * 0.90718474 * 10) / 10, 6)
+    }
+    // Hours and days do not change with the unit system.
+    const si = renderReportHtml(c.assessment, { series: c.series })
+    expect(elements(byId(h, 'svg', 'fig-monthly-svg'), 'g', 'class="bar"')).toEqual(
+      elements(byId(si, 'svg', 'fig-monthly-svg'), 'g', 'class="bar"'),
+    )
+  })
+})
