@@ -92,7 +92,13 @@ export function buildOpenApiDocument(): Json {
     }
     const apiPath = op.path.replace(/:([a-zA-Z]+)/g, '{$1}')
     for (const m of op.path.matchAll(/:([a-zA-Z]+)/g)) {
-      parameters.push({ name: m[1], in: 'path', required: true, schema: { type: 'string' } })
+      parameters.push({
+        name: m[1],
+        in: 'path',
+        required: true,
+        description: `path parameter: ${m[1]}`,
+        schema: { type: 'string' },
+      })
     }
     paths[apiPath] = { ...(paths[apiPath] ?? {}), [op.method]: operation }
   }

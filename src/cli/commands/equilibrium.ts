@@ -1,15 +1,9 @@
 import { parseArgs } from 'node:util'
 import { productById } from '../../product/catalogue.ts'
-import {
-  equilibriumMoistureDb,
-  equilibriumRelativeHumidityPct,
-  heatOfSorption,
-  type SorptionDirection,
-} from '../../product/equilibrium.ts'
-import { moistureDbFromWbPct, moistureWbPctFromDb } from '../../product/moisture-basis.ts'
+import type { SorptionDirection } from '../../product/equilibrium.ts'
 import type { ProductProfile } from '../../product/profile.ts'
-import { isothermFor } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
+import { equilibriumHumidityJson, equilibriumMoistureJson } from '../../report/product-json.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
 
 const help = `dryhours equilibrium: equilibrium moisture of a product in air, or the air it is in equilibrium with
@@ -78,62 +72,28 @@ export const equilibriumCommand: CliCommand = {
       throw new UsageError('give exactly one of --rh <%> or --moisture-wb <%>')
     const profile = await loadProfile(values, io)
     const direction: SorptionDirection = values.adsorption ? 'adsorption' : 'desorption'
-    const iso = isothermFor(profile, direction)
     try {
-      const base = {
-        productId: profile.id,
-        dryBulbC: tdb,
-        direction,
-        model: iso.equation.model,
-        source: iso.source,
-        confidence: iso.confidence,
-        calibratedTempC: iso.validTempC,
-        calibratedRhPct: iso.validRhPct,
-      }
-      const outside = (t: number, r: number | null) =>
-        t < iso.validTempC[0] ||
-        t > iso.validTempC[1] ||
-        (r !== null && (r < iso.validRhPct[0] || r > iso.validRhPct[1]))
       if (rh !== undefined) {
-        const db = equilibriumMoistureDb(profile, tdb, rh, direction)
-        const heat = heatOfSorption(profile, tdb, db, direction)
-        const out = {
-          ...base,
-          relativeHumidityPct: rh,
-          equilibriumMoistureWbPct: moistureWbPctFromDb(db),
-          equilibriumMoistureDbPct: 100 * db,
-          netIsostericHeatKjPerMol: heat.netKjPerMol,
-          heatOfSorptionMethod: heat.method,
-          extrapolated: outside(tdb, rh),
-        }
+        const out = equilibriumMoistureJson(profile, tdb, rh, direction)
         io.stdout(
           values.json
             ? `${JSON.stringify(out)}\n`
             : `${profile.name} at ${tdb} °C, ${rh} % RH (${direction}):\n` +
                 `  equilibrium moisture ${out.equilibriumMoistureWbPct.toFixed(2)} % wb (${out.equilibriumMoistureDbPct.toFixed(2)} % db)\n` +
-                `  net isosteric heat ${heat.netKjPerMol.toFixed(2)} kJ/mol (${heat.method})\n` +
-                `  model ${iso.equation.model} [${iso.confidence}]: ${iso.source}\n` +
+                `  net isosteric heat ${out.netIsostericHeatKjPerMol.toFixed(2)} kJ/mol (${out.heatOfSorptionMethod})\n` +
+                `  model ${out.model} [${out.confidence}]: ${out.source}\n` +
                 (out.extrapolated
                   ? '  note: outside the calibrated range of the isotherm (extrapolated)\n'
                   : ''),
         )
       } else {
-        const db = moistureDbFromWbPct(mwb as number)
-        const erh = equilibriumRelativeHumidityPct(profile, tdb, db, direction)
-        const out = {
-          ...base,
-          moistureWbPct: mwb,
-          moistureDbPct: 100 * db,
-          equilibriumRelativeHumidityPct: erh,
-          waterActivity: erh / 100,
-          extrapolated: outside(tdb, erh),
-        }
+        const out = equilibriumHumidityJson(profile, tdb, mwb as number, direction)
         io.stdout(
           values.json
             ? `${JSON.stringify(out)}\n`
             : `${profile.name} at ${tdb} °C and ${mwb} % wb (${direction}):\n` +
-                `  equilibrium RH ${erh.toFixed(1)} % (water activity ${(erh / 100).toFixed(3)})\n` +
-                `  model ${iso.equation.model} [${iso.confidence}]: ${iso.source}\n` +
+                `  equilibrium RH ${out.equilibriumRelativeHumidityPct.toFixed(1)} % (water activity ${out.waterActivity.toFixed(3)})\n` +
+                `  model ${out.model} [${out.confidence}]: ${out.source}\n` +
                 (out.extrapolated
                   ? '  note: outside the calibrated range of the isotherm (extrapolated)\n'
                   : ''),

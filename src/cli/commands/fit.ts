@@ -3,6 +3,7 @@ import { productById } from '../../product/catalogue.ts'
 import { fitWeighings, profileFromFit, type WeighingsFit } from '../../product/fit-weighings.ts'
 import type { ProductProfile, Shape } from '../../product/profile.ts'
 import { type MoistureReference, parseWeighingsCsv } from '../../product/weighings.ts'
+import { fitJson } from '../../report/fit-json.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
 
 const help = `dryhours fit: calibrate drying kinetics from your own tray weighings
@@ -131,8 +132,7 @@ export const fitCommand: CliCommand = {
         saved = values.save
       }
       if (values.json) {
-        const { predictMoistureDb: _p, ...plain } = fit
-        io.stdout(`${JSON.stringify({ ...plain, savedProfile: saved })}\n`)
+        io.stdout(`${JSON.stringify({ ...fitJson(fit), savedProfile: saved })}\n`)
       } else {
         io.stdout(report(fit) + (saved ? `profile saved to ${saved}\n` : ''))
       }

@@ -1,6 +1,7 @@
 import { parseArgs } from 'node:util'
 import { PRODUCT_CATALOGUE, productById } from '../../product/catalogue.ts'
 import type { ProductProfile, Sourced } from '../../product/profile.ts'
+import { productSummaryJson } from '../../report/product-json.ts'
 import { type CliCommand, UsageError } from '../command.ts'
 
 const help = `dryhours products: the built-in product catalogue
@@ -95,26 +96,7 @@ export const productsCommand: CliCommand = {
       io.stdout(values.json ? `${JSON.stringify(p)}\n` : detail(p))
       return 0
     }
-    io.stdout(
-      values.json
-        ? `${JSON.stringify(
-            PRODUCT_CATALOGUE.map((p) => ({
-              id: p.id,
-              name: p.name,
-              category: p.category,
-              variantOf: p.variantOf ?? null,
-              initialMoistureWbPct: p.initialMoistureWbPct.value,
-              targetMoistureWbPct: p.targetMoistureWbPct.value,
-              waterActivityTarget: p.waterActivityTarget.value,
-              maxProductTempC: p.maxProductTempC?.value ?? null,
-              isothermModel: p.isotherm.desorption.equation.model,
-              isothermConfidence: p.isotherm.desorption.confidence,
-              kineticsModel: p.kinetics.equation.model,
-              kineticsConfidence: p.kinetics.confidence,
-            })),
-          )}\n`
-        : list(),
-    )
+    io.stdout(values.json ? `${JSON.stringify(PRODUCT_CATALOGUE.map(productSummaryJson))}\n` : list())
     return 0
   },
 }
