@@ -71,6 +71,7 @@ export function parseTimestampInto(
   text: string,
   timeText?: string,
 ): boolean {
+  if (timeText === undefined && parseIsoFast(out, i, text)) return true
   const m = DATE_TIME.exec(text)
   if (m === null) return false
   const a = Number(m[1])
