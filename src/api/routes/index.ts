@@ -10,6 +10,7 @@ import { energyRouter } from './energy.ts'
 import { healthRouter } from './health.ts'
 import { openApiRouter } from './openapi.ts'
 import { pageRouter } from './page.ts'
+import { equilibriumRouter, fitRouter, productsRouter } from './products.ts'
 
 export interface MountedRoute {
   path: string
@@ -22,6 +23,9 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
     { path: '/healthz', router: healthRouter },
     { path: '/v1/air', router: airRouter },
     { path: '/v1/energy-chart', router: energyRouter },
+    { path: '/v1/products', router: productsRouter },
+    { path: '/v1/equilibrium', router: equilibriumRouter },
+    { path: '/v1/fit', router: fitRouter },
     { path: '/openapi.json', router: openApiRouter },
     { path: '/docs', router: docsRouter },
     { path: '/', router: pageRouter(_config) },
