@@ -14,7 +14,11 @@ import { fileURLToPath } from 'node:url'
 import type { BenchFigure, BenchSection } from './section.ts'
 
 /** Every section, in run order. Each entry loads its module lazily. */
-const sections: Array<() => Promise<{ section: BenchSection }>> = [() => import('./sections/moist-air.ts')]
+const sections: Array<() => Promise<{ section: BenchSection }>> = [
+  () => import('./sections/moist-air.ts'),
+  () => import('./sections/ingest.ts'),
+  () => import('./sections/engine.ts'),
+]
 
 function formatValue(f: BenchFigure): string {
   const v = f.value

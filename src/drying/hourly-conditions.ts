@@ -31,7 +31,7 @@ import {
   windSpeedAt2mMs,
 } from '../physics/evaporation.ts'
 import { fillNightShortwaveRatioColumn, netLongwaveHourlyMjM2 } from '../physics/fao56-reference-et.ts'
-import { extraterrestrialRadiationForPeriodUtcMjM2 } from '../physics/fao56-solar.ts'
+import { dayOfYearAt, SOLAR_CONSTANT_WM2 } from '../physics/fao56-solar.ts'
 import {
   clearSkyRadiationFao56,
   cosIncidenceAngle,
@@ -100,9 +100,14 @@ export function computeSolarColumns(series: HourlySeries): SolarColumns {
   const rso = alloc(n)
   const rs = alloc(n)
   for (let i = 0; i < n; i++) {
-    const ra = extraterrestrialRadiationForPeriodUtcMjM2(series.startUtcMs[i], lat, lon)
-    raWm2[i] = (ra * 1e6) / 3600
-    rso[i] = clearSkyRadiationFao56(ra, elevation)
+    // Hour-mean extraterrestrial horizontal irradiance by the midpoint rule: Gsc·dr·sin(altitude at
+    // mid-hour) (FAO-56 eqs 21–23 integrated over the hour ≈ value at its middle; off by up to one
+    // sunrise/sunset hour, which the Rs/Rso carry rule of FAO-56 ch. 4 does not use).
+    const sinAlt = Math.sin((altitudeDeg[i] * Math.PI) / 180)
+    const dr = 1 + 0.033 * Math.cos((2 * Math.PI * dayOfYearAt(series.startUtcMs[i], lon / 15)) / 365)
+    const raW = sinAlt > 0 ? SOLAR_CONSTANT_WM2 * dr * sinAlt : 0
+    raWm2[i] = raW
+    rso[i] = clearSkyRadiationFao56((raW * 3600) / 1e6, elevation)
     const g = series.ghiWm2[i]
     rs[i] = Number.isFinite(g) ? (g * 3600) / 1e6 : Number.NaN
   }
@@ -123,7 +128,7 @@ export interface HourlyConditions {
   surfaceRhPct: Float64Array
   /** Ambient (and product-air) humidity ratio [kg/kg]; heating does not change it. */
   humidityRatio: Float64Array
-  /** Deficit to free-water saturation along the constant-enthalpy line [g/kg]. */
+  /** Deficit to free-water saturation along the constant-enthalpy line [g/kg]; NaN for exposed methods. */
   deficitToSaturationGPerKg: Float64Array
   /** Deficit to the product's equilibrium RH at its target moisture [g/kg]. */
   deficitToTargetGPerKg: Float64Array
@@ -208,6 +213,7 @@ export function computeHourlyConditions(
   const step = new Float64Array(2)
 
   const dmPerKgFresh = 1 - options.initialWbPct / 100
+  const sameIsotherm = product.profile.isotherm.adsorption === undefined
   const exposed = method.kind === 'open-air' || method.kind === 'shade'
   let airFlowKgPerSPerTonne = 0
   if (method.kind === 'solar-cabinet')
@@ -350,8 +356,9 @@ export function computeHourlyConditions(
     if (rhSurface > 100) rhSurface = 100
     surfaceRhPct[i] = rhSurface
     const rhForEmc = Math.min(rhSurface, EMC_RH_CAP_PCT)
-    emcDesorptionDb[i] = product.emcDesorptionDb(tProduct, rhForEmc)
-    emcAdsorptionDb[i] = product.emcAdsorptionDb(tProduct, rhForEmc)
+    const meDes = product.emcDesorptionDb(tProduct, rhForEmc)
+    emcDesorptionDb[i] = meDes
+    emcAdsorptionDb[i] = sameIsotherm ? meDes : product.emcAdsorptionDb(tProduct, rhForEmc)
     product.stepParameters(tProduct, rhForEmc, step)
     rateK[i] = step[0]
     rateN[i] = step[1]
@@ -360,7 +367,13 @@ export function computeHourlyConditions(
       -product.rewettingRateFactor * firstOrderRateConstant(step[0], step[1], product.thompsonTimeScale),
     )
     // Deficits are taken for air at the product temperature (it is what touches the product).
-    const dSat = rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1) - w
+    // Deficit to saturation: the forced-air constant-rate limit. Exposed methods use the Penman rate as
+    // their limit and skip it (NaN), which saves a solver per hour.
+    const dSat = exposed
+      ? Number.NaN
+      : rhSurface >= 100
+        ? 0
+        : adiabaticHumidityRatioAtRh(tProduct, w, p, 1) - w
     deficitToSaturationGPerKg[i] = 1000 * dSat
     const erhTarget = product.erhPct(tProduct, targetDb)
     const dTarget =

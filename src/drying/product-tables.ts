@@ -76,8 +76,9 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
   const constantN =
     direct.profile.kinetics.equation.model !== 'page' ||
     typeof direct.profile.kinetics.equation.n === 'number'
+  // ERH at one moisture (the target, asked every hour) cached per 0.1 °C from −20 to 100 °C.
   let erhMoisture = Number.NaN
-  let erhCache = new Map<number, number>()
+  const erhCache = new Float64Array(1201).fill(Number.NaN)
   return {
     ...direct,
     emcDesorptionDb: (t, rh) => lookup(des, t, rh),
@@ -85,13 +86,15 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
     erhPct: (t, m) => {
       if (m !== erhMoisture) {
         erhMoisture = m
-        erhCache = new Map()
+        erhCache.fill(Number.NaN)
       }
       const key = Math.round(t * 10)
-      let v = erhCache.get(key)
-      if (v === undefined) {
+      const slot = key + 200
+      if (!(slot >= 0 && slot < erhCache.length)) return direct.erhPct(key / 10, m)
+      let v = erhCache[slot]
+      if (Number.isNaN(v)) {
         v = direct.erhPct(key / 10, m)
-        erhCache.set(key, v)
+        erhCache[slot] = v
       }
       return v
     },

@@ -89,6 +89,8 @@ export interface EnergyChartAssessment {
     | null
   adjustedUnavailableReason: string | null
   assumptions: string[]
+  /** Implausible batches kept in the charts (e.g. efficiency above 100 %): check their numbers. */
+  warnings: string[]
   sources: string[]
   /** Plain-language findings, one sentence each. */
   summary: string[]
@@ -323,6 +325,13 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     adjusted,
     adjustedUnavailableReason,
     assumptions,
+    warnings: batches
+      .filter((b) => b.thermalEfficiencyPct > 100)
+      .map(
+        (b) =>
+          `batch ${b.batchId} (line ${b.line}): ${b.specificEnergyMjPerKg.toFixed(2)} MJ/kg water is below the ideal ` +
+          `${(b.idealHeatMj / b.waterRemovedKg).toFixed(2)} MJ/kg (efficiency ${b.thermalEfficiencyPct.toFixed(0)} %): check its energy and masses`,
+      ),
     sources: [
       CONTROL_CHART_SOURCE,
       'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',

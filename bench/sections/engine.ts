@@ -1,0 +1,169 @@
+/**
+ * @module bench/sections/engine
+ * The drying engine on a 30-year hourly file (the dry upland demo site, 1991–2020, generated in memory by
+ * climate-demo `longUtcCsv` and read by the weather reader): a full `assess` with a 90-day start-date
+ * table (one start per day × 30 years), its memory, and the per-hour engine's throughput beside the
+ * moist-air column throughput (physics/air-columns.ts) measured on the same hours in the same process.
+ * Timings: one warm-up, then the median of {@link REPEATS} runs.
+ */
+import { longUtcCsv } from '../../climate-demo/demo-files.ts'
+import { assess } from '../../src/analysis/assess.ts'
+import { simulateBatch } from '../../src/drying/batch.ts'
+import { computeHourlyConditions, computeSolarColumns } from '../../src/drying/hourly-conditions.ts'
+import { parseDryingMethod } from '../../src/drying/method.ts'
+import { productResponse } from '../../src/drying/product-response.ts'
+import { tabulatedResponse } from '../../src/drying/product-tables.ts'
+import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
+import { fillAirStateColumns } from '../../src/physics/air-columns.ts'
+import { productById } from '../../src/product/catalogue.ts'
+import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
+import { readWeather } from '../../src/weather/read-weather.ts'
+import { type BenchFigure, type BenchSection, median } from '../section.ts'
+
+const REPEATS = 3
+const SEED = 20_210_003
+
+function timed<T>(f: () => T): { ms: number; value: T } {
+  const t0 = performance.now()
+  const value = f()
+  return { ms: performance.now() - t0, value }
+}
+
+export const section: BenchSection = {
+  id: 'engine',
+  title: 'drying engine: 30-year assessment with a 90-day start-date table; per-hour throughput vs moist air',
+  run() {
+    const figures: BenchFigure[] = []
+    const read = timed(() =>
+      readWeather(longUtcCsv(SEED, 1991, 2020), {
+        latitudeDeg: 38.3,
+        longitudeDeg: -2.6,
+        elevationM: 1050,
+        utcOffsetHours: 1,
+      }),
+    )
+    const series = read.value.series
+    figures.push({ name: 'hours in the file', value: series.hours, unit: 'h' })
+    figures.push({
+      name: 'generate + read the 30-year CSV',
+      value: Math.round(read.ms),
+      unit: 'ms',
+      note: 'not part of the assessment',
+    })
+
+    const profile = productById('grapes-to-raisins')
+    const options = {
+      product: profile,
+      method: { kind: 'open-air' } as const,
+      seasonStart: '06-15',
+      seasonEnd: '09-12',
+      startStepDays: 1,
+      deadlineDays: 21,
+      maxDays: 40,
+    }
+    assess(series, options) // warm-up
+    const gc = (globalThis as { gc?: () => void }).gc
+    gc?.()
+    const heapBefore = process.memoryUsage().heapUsed
+    const runs: number[] = []
+    let startRows = 0
+    let batches = 0
+    for (let r = 0; r < REPEATS; r++) {
+      const t = timed(() => assess(series, options))
+      runs.push(t.ms)
+      startRows = t.value.startDates.length
+      batches = t.value.coverage.startDateBatchesRun
+    }
+    const heapAfter = process.memoryUsage().heapUsed
+    figures.push({
+      name: '30-year assessment (open-air raisins, 90 start days)',
+      value: Math.round(median(runs)),
+      unit: 'ms',
+      note: `median of ${REPEATS}; best ${Math.round(Math.min(...runs))} ms; target < 1000 ms; ${startRows} start days, ${batches} batches`,
+    })
+    figures.push({
+      name: 'heap growth over the timed assessments',
+      value: Math.round((heapAfter - heapBefore) / 2 ** 20),
+      unit: 'MiB',
+      note: gc ? 'after a forced GC before' : 'no --expose-gc: includes garbage',
+    })
+    figures.push({
+      name: 'resident set size after',
+      value: Math.round(process.memoryUsage().rss / 2 ** 20),
+      unit: 'MiB',
+    })
+
+    // Per-hour engine throughput (open air) vs moist-air columns, same hours.
+    const response = tabulatedResponse(productResponse(profile))
+    const solar = computeSolarColumns(series)
+    const condOptions = {
+      targetDb: moistureDbFromWbPct(18),
+      initialWbPct: 78.2,
+      loadingKgPerM2: 12,
+      thresholds: parseDryingThresholds({}),
+      maxProductTempC: 70,
+      solar,
+    }
+    const method = parseDryingMethod({ kind: 'open-air' })
+    computeHourlyConditions(series, method, response, condOptions)
+    const engineMs = median(
+      Array.from(
+        { length: REPEATS },
+        () => timed(() => computeHourlyConditions(series, method, response, condOptions)).ms,
+      ),
+    )
+    const solarMs = median(Array.from({ length: REPEATS }, () => timed(() => computeSolarColumns(series)).ms))
+    const n = series.hours
+    const w = new Float64Array(n)
+    const h = new Float64Array(n)
+    const twb = new Float64Array(n)
+    const airMs = median(
+      Array.from(
+        { length: REPEATS },
+        () =>
+          timed(() =>
+            fillAirStateColumns(series, { humidityRatioKgPerKg: w, enthalpyKjPerKg: h, wetBulbC: twb }),
+          ).ms,
+      ),
+    )
+    const engineRate = n / (engineMs / 1000)
+    const airRate = n / (airMs / 1000)
+    figures.push({
+      name: 'per-hour engine (open air, all columns + verdict)',
+      value: Math.round(engineRate),
+      unit: 'hours/s',
+    })
+    figures.push({
+      name: 'sun and radiation columns (shared by methods)',
+      value: Math.round(n / (solarMs / 1000)),
+      unit: 'hours/s',
+    })
+    figures.push({
+      name: 'moist-air columns (W, h, wet bulb)',
+      value: Math.round(airRate),
+      unit: 'hours/s',
+      note: 'physics/air-columns.ts, same hours',
+    })
+    figures.push({ name: 'engine / moist-air throughput', value: engineRate / airRate, unit: 'x' })
+
+    const c = computeHourlyConditions(series, method, response, condOptions)
+    let steps = 0
+    const batchMs = timed(() => {
+      for (let start = 8; start + 24 * 40 < n; start += 24 * 7) {
+        steps += simulateBatch(c, response, {
+          startIndex: start,
+          maxHours: 24 * 40,
+          initialDb: moistureDbFromWbPct(78.2),
+          targetDb: moistureDbFromWbPct(18),
+        }).hoursSimulated
+      }
+    }).ms
+    figures.push({
+      name: 'batch simulation',
+      value: Math.round(steps / (batchMs / 1000)),
+      unit: 'batch-hours/s',
+      note: `${steps} hours, weekly starts over 30 years`,
+    })
+    return figures
+  },
+}
