@@ -58,6 +58,7 @@ const f2 = (x: number) => (Number(x.toFixed(2)) === 0 ? '0.00' : x.toFixed(2))
 /** The readable summary printed by default. */
 export function energyChartText(a: EnergyChartAssessment): string {
   const out: string[] = [...a.summary, '']
+  if (a.warnings.length > 0) out.push('Warnings:', ...a.warnings.map((w) => `  - ${w}`), '')
   const acc = a.accounting
   out.push(`Rows: ${acc.rowsRead} read, ${acc.rowsUsed} used, ${acc.rowsRejected} rejected`)
   for (const r of a.rejections) out.push(`  ${r.message}`)

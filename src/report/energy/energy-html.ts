@@ -204,7 +204,11 @@ ${chartFigures(a.adjusted, a, { key: 'residual', name: 'Residual specific energy
   return `<article class="dryhours-report" data-report="energy-chart">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · heated-dryer energy</p><h1>Is the dryer using more energy than it should?</h1>
 <dl class="facts">${facts.map(([k, v]) => `<div class="kv"><dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd></div>`).join('')}</dl></header>
-<section class="answer"><h2>What the charts found</h2><ul class="sentences">${a.summary.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul></section>
+<section class="answer"><h2>What the charts found</h2><ul class="sentences">${a.summary.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${
+    a.warnings.length > 0
+      ? `<div class="warnings"><h3>Check these batches</h3><ul>${a.warnings.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`
+      : ''
+  }</section>
 <section class="raw"><h2>Specific energy, batch by batch</h2>
 <p>Fuel heat (higher heating value) per kg of water removed. Outside air and load move this number from batch to batch, so the limits are wide.</p>
 ${rawFigures}

@@ -47,6 +47,24 @@ describe('per-batch energy', () => {
   })
 })
 
+describe('implausible batches', () => {
+  it('a batch using less than the latent heat of its water is charted but named in the warnings', async () => {
+    const { analyzeEnergyLog } = await import('../../../src/analysis/energy/energy-chart.ts')
+    const rows = Array.from(
+      { length: 8 },
+      (_, i) => `2026-09-0${i + 1}T08:00,5,10000,9000,${i === 6 ? 500 : 1300 + 20 * (i % 3)}`,
+    )
+    const a = analyzeEnergyLog(
+      ['start,duration_h,fresh_mass_kg,final_mass_kg,energy_kwh', ...rows].join('\n'),
+      { baselineCount: 5 },
+    )
+    // Line 8: 500 kWh = 1,800 MJ for 1,000 kg water = 1.80 MJ/kg < λ(60 °C) = 2.36 MJ/kg → efficiency 131 %.
+    expect(a.warnings).toEqual([
+      'batch line 8 (line 8): 1.80 MJ/kg water is below the ideal 2.36 MJ/kg (efficiency 131 %): check its energy and masses',
+    ])
+  })
+})
+
 describe('heat of sorption by Clausius–Clapeyron from the corn isotherm', () => {
   // Outside check: for corn, h_fg/λ − 1 = 1.2925·exp(−16.961·M), M decimal d.b. (Thompson, Peart & Foster 1968;
   // Brooker, Bakker-Arkema & Hall 1992; drying-science.md §4.1): 0.237 at M = 0.10, 0.102 at 0.15, 0.043 at 0.20.
