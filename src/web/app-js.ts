@@ -53,9 +53,6 @@ export const APP_JS = `(function () {
     }
     errorBox.scrollIntoView({ block: 'center' });
   }
-  function fileStem(title) {
-    return 'dryhours-' + (title || 'report').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60);
-  }
   function addDownload(label, text, type, name) {
     var url = URL.createObjectURL(new Blob([text], { type: type }));
     urls.push(url);
@@ -73,7 +70,7 @@ export const APP_JS = `(function () {
     var title = document.createElement('strong');
     title.textContent = 'Download: ';
     downloads.appendChild(title);
-    var stem = fileStem(bundle.title);
+    var stem = bundle.stem || 'dryhours-report';
     addDownload('Report HTML', bundle.document, 'text/html;charset=utf-8', stem + '.html');
     addDownload('Tables CSV', bundle.csv, 'text/csv;charset=utf-8', stem + '.csv');
     addDownload('Assessment JSON', bundle.json, 'application/json', stem + '.json');

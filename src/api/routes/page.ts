@@ -33,6 +33,7 @@ function echoValues(form: FormData): Record<string, string> {
 export function downloadStem(title: string): string {
   const stem = title
     .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, '-')
     .replace(/^-+|-+$/g, '')
@@ -123,6 +124,7 @@ export function pageRouter(config: PageConfig): Hono {
         return c.body(
           JSON.stringify({
             title: out.title,
+            stem,
             article: out.article,
             document: out.document,
             csv: out.csv,
