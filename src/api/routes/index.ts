@@ -8,6 +8,7 @@ import { airRouter } from './air.ts'
 import { docsRouter } from './docs.ts'
 import { energyRouter } from './energy.ts'
 import { healthRouter } from './health.ts'
+import { inspectRouter } from './inspect.ts'
 import { openApiRouter } from './openapi.ts'
 import { pageRouter } from './page.ts'
 import { equilibriumRouter, fitRouter, productsRouter } from './products.ts'
@@ -23,6 +24,7 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
     { path: '/healthz', router: healthRouter },
     { path: '/v1/air', router: airRouter },
     { path: '/v1/energy-chart', router: energyRouter },
+    { path: '/v1/inspect', router: inspectRouter },
     { path: '/v1/products', router: productsRouter },
     { path: '/v1/equilibrium', router: equilibriumRouter },
     { path: '/v1/fit', router: fitRouter },

@@ -1,4 +1,5 @@
 import { parseArgs } from 'node:util'
+import { inspectJson } from '../../report/inspect-json.ts'
 import { type ColumnMapping, type MappingKey, parseMappingArgument } from '../../weather/options.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
@@ -27,38 +28,7 @@ problems with line numbers.
 
 Exit status 2 when the file cannot give a usable series; the message says what to supply.`
 
-/** The JSON of \`dryhours inspect --json\`: the keys listed in issue 3, plus time basis and warnings. */
-export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
-  const s = r.series
-  return {
-    format: r.format,
-    rows: r.rows,
-    period: r.period,
-    hours: s.hours,
-    years: r.years,
-    typicalYear: s.typicalYear,
-    sourceYears: r.sourceYears,
-    timeBasis: r.timeBasis,
-    dstEvents: r.dstEvents,
-    columns: r.columns.map((c) => ({
-      variable: c.variable,
-      source: c.source,
-      unit: c.unit,
-      unitFrom: c.unitFrom,
-      timing: c.timing,
-      missing: c.missing,
-    })),
-    site: s.site,
-    coverage: r.coverage,
-    hoursWithoutRow: r.hoursWithoutRow,
-    hoursMissingCore: r.hoursMissingCore,
-    problemCounts: r.problemCounts,
-    problems: r.problems.slice(0, 100),
-    problemsListed: Math.min(100, r.problems.length),
-    problemsTotal: Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0),
-    warnings: r.warnings,
-  }
-}
+export { inspectJson }
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 

@@ -1,0 +1,57 @@
+/**
+ * @module api/routes/inspect
+ * POST /v1/inspect: what dryhours understood of a weather file (same object as `dryhours inspect --json`).
+ */
+import { Hono } from 'hono'
+import { inspectJson } from '../../report/inspect-json.ts'
+import { readWeather } from '../../weather/read-weather.ts'
+import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import { registerOperation } from '../operations.ts'
+import { ApiProblem } from '../problem.ts'
+import { decodeUploadText, readUpload } from '../upload.ts'
+import { parseOrProblem } from '../validate.ts'
+import { validWeatherOptions, weatherOptionsFromQuery, weatherQuerySchema } from '../weather-options.ts'
+
+export const inspectRouter = new Hono().post('/', async (c) => {
+  const upload = await readUpload(c, { defaultName: 'weather file' })
+  const options =
+    upload.options !== undefined
+      ? validWeatherOptions(upload.options, 'options')
+      : weatherOptionsFromQuery(parseOrProblem(weatherQuerySchema, upload.query))
+  if (upload.files.length !== 1) {
+    throw new ApiProblem(400, `send exactly one weather file, got ${upload.files.length}`, [
+      { path: 'file', message: 'one file part expected' },
+    ])
+  }
+  const text = decodeUploadText(upload.files[0].bytes)
+  try {
+    return c.json(inspectJson(readWeather(text, options)))
+  } catch (e) {
+    if (e instanceof WeatherInputError) throw new ApiProblem(422, e.message)
+    throw e
+  }
+})
+
+registerOperation({
+  method: 'post',
+  path: '/v1/inspect',
+  summary: 'Inspect a weather file',
+  description:
+    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected) and the first problems with line numbers. ' +
+    'Send the file as the body (text/csv, text/plain) with options in the query, or as multipart/form-data with a `file` part and an optional `options` JSON part (latitudeDeg, longitudeDeg, elevationM, utcOffsetHours | timeZone, mapping, dateOrder, timestampLabels, windHeightM, siteName). Same object as `dryhours inspect --json`.',
+  query: weatherQuerySchema,
+  requestBody: [
+    { contentType: 'text/csv', description: 'the weather file' },
+    { contentType: 'multipart/form-data', description: 'file part + optional options JSON part' },
+  ],
+  response: { contentType: 'application/json', description: 'what was understood of the file' },
+  errors: [400, 413, 415, 422],
+  examples: [
+    {
+      name: 'a three-hour UTC file',
+      url: '/v1/inspect?lat=38.3&lon=-2.6&elevation=1050',
+      contentType: 'text/csv',
+      body: 'time,temp_c,rh_pct\n2024-07-01T10:00Z,30.1,25\n2024-07-01T11:00Z,31.5,22\n2024-07-01T12:00Z,32.8,20\n',
+    },
+  ],
+})

@@ -1,0 +1,38 @@
+/**
+ * @module report/inspect-json
+ * The JSON of `dryhours inspect --json` and POST /v1/inspect: what was understood of a weather file.
+ */
+import type { WeatherReadResult } from '../weather/result.ts'
+
+/** The JSON of `dryhours inspect --json`: format, rows, period, hours, years, typicalYear, columns, site, coverage, problems, plus time basis and warnings. */
+export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
+  const s = r.series
+  return {
+    format: r.format,
+    rows: r.rows,
+    period: r.period,
+    hours: s.hours,
+    years: r.years,
+    typicalYear: s.typicalYear,
+    sourceYears: r.sourceYears,
+    timeBasis: r.timeBasis,
+    dstEvents: r.dstEvents,
+    columns: r.columns.map((c) => ({
+      variable: c.variable,
+      source: c.source,
+      unit: c.unit,
+      unitFrom: c.unitFrom,
+      timing: c.timing,
+      missing: c.missing,
+    })),
+    site: s.site,
+    coverage: r.coverage,
+    hoursWithoutRow: r.hoursWithoutRow,
+    hoursMissingCore: r.hoursMissingCore,
+    problemCounts: r.problemCounts,
+    problems: r.problems.slice(0, 100),
+    problemsListed: Math.min(100, r.problems.length),
+    problemsTotal: Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0),
+    warnings: r.warnings,
+  }
+}
