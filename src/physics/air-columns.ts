@@ -17,12 +17,18 @@ import {
   MOLAR_MASS_RATIO_WATER_AIR,
   PRESSURE_MAX_KPA,
   PRESSURE_MIN_KPA,
-  saturationTemperatureC,
+  SOLVER_MAX_ITERATIONS,
+  SOLVER_STOP_STEP_C,
+  SOLVER_TOLERANCE_C,
   VAPOR_PRESSURE_MIN_KPA,
   wetBulbWithDewPointC,
 } from './moist-air.ts'
-import { KELVIN_OFFSET } from './saturation.ts'
-import { saturationPressureFromTableKpa } from './saturation-table.ts'
+import { KELVIN_OFFSET, TRIPLE_POINT_C } from './saturation.ts'
+import {
+  saturationPressureFromTableKpa,
+  saturationTableSlopes,
+  saturationTemperatureFromTableC,
+} from './saturation-table.ts'
 
 export interface AirColumnsInput {
   dryBulbC: Float64Array
@@ -90,12 +96,18 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     if (wOut) wOut[i] = w
     if (pwOut) pwOut[i] = pw
     if (tdOut || twbOut) {
-      let td = saturationTemperatureC(pw, Math.log(pw * 1000), false)
+      // Dew point over liquid water: inverse table (1e-9 °C) and one Halley step on the forward table,
+      // as saturationTemperatureC does, written out here so no number is boxed per hour.
+      let td = saturationTemperatureFromTableC(Math.log(pw * 1000), false)
+      const f = saturationPressureFromTableKpa(td, false) - pw
+      const f1 = saturationTableSlopes[0]
+      td -= (2 * f * f1) / (2 * f1 * f1 - f * saturationTableSlopes[1])
       if (td > t) td = t
       if (tdOut) tdOut[i] = td
       if (twbOut) {
         const wst = (MOLAR_MASS_RATIO_WATER_AIR * pws) / (p - pws)
-        twbOut[i] = wetBulbWithDewPointC(t, w, p, td, wst)
+        twbOut[i] =
+          td >= TRIPLE_POINT_C ? wetWickWetBulbC(t, w, p, td, wst) : wetBulbWithDewPointC(t, w, p, td, wst)
       }
     }
     if (hOut) hOut[i] = 1.006 * t + w * (2501 + 1.86 * t)
@@ -105,4 +117,50 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     }
   }
   return invalid
+}
+
+/**
+ * Wet bulb on the wet-wick branch (eq 33) when the dew point `dewC` is at or above the triple point,
+ * the common case: the same chord start and safeguarded Halley iteration as wetBulbWithDewPointC in
+ * moist-air.ts (bracket [dew point, dry bulb], restart at the upper end on overshoot, bisection
+ * otherwise, stop on a step below SOLVER_STOP_STEP_C), kept small so that it is inlined into the loop.
+ */
+function wetWickWetBulbC(t: number, w: number, p: number, dewC: number, wst: number): number {
+  let lo = dewC
+  let hi = t
+  if (!(hi - lo > 1e-9)) return t
+  const b0 = 2501 + 1.86 * t
+  // Chord start: Ws* linear between (dew, W) and (t, Ws(t)); t*-terms at the midpoint.
+  const m = 0.5 * (lo + hi)
+  const am = 2501 - 2.326 * m
+  let x = lo + (w * (b0 - 4.186 * m - am) + 1.006 * (t - lo)) / ((am * (wst - w)) / (hi - lo) + 1.006)
+  if (!(x > lo && x < hi)) x = m
+  for (let k = 0; k < SOLVER_MAX_ITERATIONS; k++) {
+    const pv = saturationPressureFromTableKpa(x, false)
+    const pv1 = saturationTableSlopes[0]
+    const pv2 = saturationTableSlopes[1]
+    const inv = 1 / (p - pv)
+    const ws = MOLAR_MASS_RATIO_WATER_AIR * pv * inv
+    const e = MOLAR_MASS_RATIO_WATER_AIR * p * inv * inv
+    const ws1 = e * pv1
+    const ws2 = e * (pv2 + 2 * pv1 * pv1 * inv)
+    const a = 2501 - 2.326 * x
+    const invB = 1 / (b0 - 4.186 * x)
+    const q = (a * ws - 1.006 * (t - x)) * invB
+    const q1 = (-2.326 * ws + a * ws1 + 1.006 + 4.186 * q) * invB
+    const q2 = (-4.652 * ws1 + a * ws2 + 8.372 * q1) * invB
+    const f = q - w
+    if (f === 0) return x
+    if (f > 0) hi = x
+    else lo = x
+    const step = (2 * f * q1) / (2 * q1 * q1 - f * q2)
+    const next = x - step
+    if (next > lo && next < hi) {
+      if (Math.abs(step) < SOLVER_STOP_STEP_C) return next
+      x = next
+    } else if (next >= hi && x < hi) x = hi
+    else x = 0.5 * (lo + hi)
+    if (hi - lo < SOLVER_TOLERANCE_C) return x
+  }
+  return x
 }
