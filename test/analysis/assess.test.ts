@@ -91,6 +91,26 @@ describe('the assessment', () => {
     }
     for (const x of uplandRaisins().assumptions) expect(x.source.length).toBeGreaterThan(3)
   })
+  it('cross-checks heat against water × (latent heat + sorption heat) ÷ efficiency', () => {
+    const h = valleyRaisins().heat
+    // 1000 kg from 78.2 to 18 % wb: 1000 − 1000·0.218/0.82 = 734.1 kg water (mass balance on dry matter)
+    expect(h.crossCheck.waterToRemoveKgPerTonne).toBeCloseTo(734.1, 1)
+    expect(h.crossCheck.heatOfEvaporationKjPerKg).toBeGreaterThan(2400)
+    expect(h.crossCheck.evaporationHeatFuelKwhPerTonne).toBeCloseTo(
+      (734.1 * h.crossCheck.heatOfEvaporationKjPerKg) / 3600 / h.heaterEfficiency,
+      0,
+    )
+    // a dryer heated every hour exhausts warm, unsaturated air: it needs more than the evaporation heat
+    expect(h.crossCheck.ratioHeatedEveryHour!).toBeGreaterThan(1)
+    // fuel figures follow from the heat and the heating values
+    const propane = h.fuels.find((f) => f.fuel === 'propane')!
+    if (h.heatToAirKwhPerTonne.median !== null && h.heatToAirKwhPerTonne.median > 0) {
+      expect(propane.quantityPerTonne!).toBeCloseTo(
+        (h.heatToAirKwhPerTonne.median * 3.6) / h.heaterEfficiency / 25.46,
+        0,
+      )
+    }
+  })
   it('a typical-year file gives one year and says that spread cannot be computed', () => {
     const a = assess(demoSeries('typicalUpland'), { ...summerFruit, startStepDays: 14 })
     expect(a.site.typicalYear).toBe(true)

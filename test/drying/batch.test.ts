@@ -1,4 +1,5 @@
 import fc from 'fast-check'
+import psychrolib from 'psychrolib'
 import { describe, expect, it } from 'vitest'
 import { simulateBatch } from '../../src/drying/batch.ts'
 import { computeHourlyConditions, type HourlyConditionsOptions } from '../../src/drying/hourly-conditions.ts'
@@ -205,5 +206,30 @@ describe('heated drying with enough heat always reaches the target', () => {
       ),
       { numRuns: 40 },
     )
+  })
+})
+
+describe('energy: heat added equals the enthalpy rise of the air', () => {
+  psychrolib.SetUnitSystem(psychrolib.SI)
+  it('heated hours of the humid valley: heater kWh/t = ṁ·(h(T_heated, W) − h(T_ambient, W)) by psychrolib', () => {
+    const s = sliceSeries(demoSeries('humidValley'), 7000, 24 * 10)
+    const tab = tabulatedResponse(productResponse(apricot))
+    const c = computeHourlyConditions(
+      s,
+      parseDryingMethod({ kind: 'heated', targetRhPct: 35 }),
+      tab,
+      options(),
+    )
+    let checked = 0
+    for (let i = 0; i < c.hours; i++) {
+      if (c.mode[i] !== 0) continue
+      const w = c.humidityRatio[i]
+      const rise =
+        (psychrolib.GetMoistAirEnthalpy(c.airC[i], w) - psychrolib.GetMoistAirEnthalpy(s.dryBulbC[i], w)) /
+        1000
+      expect(c.heaterKwhPerTonne[i]).toBeCloseTo(c.airFlowKgPerSPerTonne * rise, 6)
+      checked++
+    }
+    expect(checked).toBeGreaterThan(200)
   })
 })
