@@ -8,6 +8,10 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import { csv, hourStamps } from './csv-builder.ts'
 
 psychrolib.SetUnitSystem(psychrolib.SI)
+/** psychrolib 1.1.1 has GetRelHumFromTWetBulb(T [°C], Twb [°C], p [Pa]) → RH [0–1]; the project's type file omits it. */
+const relHumFromWetBulb = (
+  psychrolib as unknown as { GetRelHumFromTWetBulb: (t: number, twb: number, p: number) => number }
+).GetRelHumFromTWetBulb
 
 describe('headers', () => {
   it('split name, unit and measurement height', () => {
@@ -69,7 +73,7 @@ describe('humidity from wet bulb', () => {
         csv(['timestamp', 'dry bulb (C)', 'wet bulb (C)', 'pressure (kPa)'], [[stamp, t, twb, p]]),
         { utcOffsetHours: 0 },
       )
-      const expected = 100 * psychrolib.GetRelHumFromTWetBulb(t, twb, p * 1000)
+      const expected = 100 * relHumFromWetBulb(t, twb, p * 1000)
       expect(r.series.relativeHumidityPct[0]).toBeCloseTo(expected, 6)
     }
   })
