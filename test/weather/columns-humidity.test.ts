@@ -10,8 +10,9 @@ import { csv, hourStamps } from './csv-builder.ts'
 psychrolib.SetUnitSystem(psychrolib.SI)
 /** psychrolib 1.1.1 has GetRelHumFromTWetBulb(T [°C], Twb [°C], p [Pa]) → RH [0–1]; the project's type file omits it. */
 const relHumFromWetBulb = (t: number, twb: number, p: number): number =>
-  (psychrolib as unknown as { GetRelHumFromTWetBulb: (t: number, twb: number, p: number) => number }).GetRelHumFromTWetBulb(t, twb, p)
-).GetRelHumFromTWetBulb
+  (
+    psychrolib as unknown as { GetRelHumFromTWetBulb: (t: number, twb: number, p: number) => number }
+  ).GetRelHumFromTWetBulb(t, twb, p)
 
 describe('headers', () => {
   it('split name, unit and measurement height', () => {
