@@ -275,6 +275,7 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
 
   let adjusted: EnergyChartAssessment['adjusted'] = null
   let adjustedUnavailableReason: string | null = null
+  let extrapolation: string | null = null
   const complete = batches.filter((b) => b.ambient !== null)
   const completeBaseline = complete.filter((b) => b.index < baselineCount)
   const regressorsOf = (b: BatchEnergy): number[] => [
@@ -306,6 +307,10 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
         baselineCount,
       )
       adjusted = { ...set, regression, fitted, residuals }
+      extrapolation = extrapolationWarning(
+        completeBaseline.map(regressorsOf),
+        complete.filter((b) => b.index >= baselineCount).map(regressorsOf),
+      )
       if (complete.length < n)
         assumptions.push(
           `${n - complete.length} monitored batches lack outside air and are left off the adjusted chart`,
@@ -325,13 +330,16 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     adjusted,
     adjustedUnavailableReason,
     assumptions,
-    warnings: batches
-      .filter((b) => b.thermalEfficiencyPct > 100)
-      .map(
-        (b) =>
-          `batch ${b.batchId} (line ${b.line}): ${b.specificEnergyMjPerKg.toFixed(2)} MJ/kg water is below the ideal ` +
-          `${(b.idealHeatMj / b.waterRemovedKg).toFixed(2)} MJ/kg (efficiency ${b.thermalEfficiencyPct.toFixed(0)} %): check its energy and masses`,
-      ),
+    warnings: [
+      ...batches
+        .filter((b) => b.thermalEfficiencyPct > 100)
+        .map(
+          (b) =>
+            `batch ${b.batchId} (line ${b.line}): ${b.specificEnergyMjPerKg.toFixed(2)} MJ/kg water is below the ideal ` +
+            `${(b.idealHeatMj / b.waterRemovedKg).toFixed(2)} MJ/kg (efficiency ${b.thermalEfficiencyPct.toFixed(0)} %): check its energy and masses`,
+        ),
+      ...(extrapolation ? [extrapolation] : []),
+    ],
     sources: [
       CONTROL_CHART_SOURCE,
       'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',
@@ -340,4 +348,29 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     ],
     summary: summaryLines(batches, baselineCount, raw, adjusted, adjustedUnavailableReason),
   }
+}
+
+const REGRESSOR_WORDS = ['outside humidity ratio', 'outside temperature', 'load']
+
+/**
+ * A warning when monitored batches lie outside the baseline's range of a regressor: there the regression
+ * extrapolates, and an error in a coefficient becomes a steady offset of the residuals that the run rules
+ * and the EWMA read as a shift. Null when every monitored batch is inside the baseline's ranges.
+ */
+export function extrapolationWarning(baseline: number[][], monitored: number[][]): string | null {
+  if (monitored.length === 0) return null
+  const parts: string[] = []
+  REGRESSOR_WORDS.forEach((word, j) => {
+    const lo = Math.min(...baseline.map((r) => r[j]))
+    const hi = Math.max(...baseline.map((r) => r[j]))
+    const outside = monitored.filter((r) => r[j] < lo || r[j] > hi).length
+    if (outside > 0)
+      parts.push(`${outside} ${parts.length === 0 ? "lie outside the baseline's range of " : 'of '}${word}`)
+  })
+  if (parts.length === 0) return null
+  return (
+    `Of ${monitored.length} monitored batches, ${parts.length > 1 ? `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}` : parts[0]}: the adjusted chart ` +
+    'extrapolates the regression there, so a run of signals on those batches may come from an error in a coefficient ' +
+    'rather than the dryer. A baseline that spans the season (or a later re-fit) makes the adjusted chart safer.'
+  )
 }

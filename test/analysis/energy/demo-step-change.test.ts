@@ -5,7 +5,11 @@ import {
   buildDemoBatchLog,
   STEP_BATCH_NUMBER,
 } from '../../../climate-demo/energy/batch-log-model.ts'
-import { analyzeEnergyLog, type ChartSet } from '../../../src/analysis/energy/energy-chart.ts'
+import {
+  analyzeEnergyLog,
+  type ChartSet,
+  extrapolationWarning,
+} from '../../../src/analysis/energy/energy-chart.ts'
 
 const DEMO_PATH = new URL('../../../climate-demo/energy/quillow-dryer-batches-2026.csv', import.meta.url)
 const text = readFileSync(DEMO_PATH, 'utf8')
@@ -85,5 +89,52 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
       /^Answer: the dryer's energy use per kg of water rose by about 0\.3\d MJ\/kg \([78] % /,
     )
     expect(assessment.summary[0]).toMatch(/from batch Q26-041/)
+  })
+})
+
+describe('the same comparison over 20 other seeds of the demo generator (same model, other weather and noise)', () => {
+  const results = Array.from({ length: 20 }, (_, k) => {
+    const a = analyzeEnergyLog(buildDemoBatchLog(k + 1).csv)
+    return {
+      raw: detectionDelay(a.raw),
+      adjusted: detectionDelay(a.adjusted!),
+      adjustedFalseAlarms: falseAlarms(a.adjusted!, a.baselineCount),
+    }
+  })
+  it('the residual chart is never later than the raw chart and earlier in most seeds', () => {
+    // Measured: earlier in 17 of 20 seeds, tied in 3 (seeds 14, 15, 16), never later; residual delay 0–1 batches.
+    expect(results.every((r) => r.adjusted !== null && (r.raw === null || r.adjusted <= r.raw))).toBe(true)
+    expect(
+      results.filter((r) => r.adjusted !== null && (r.raw === null || r.adjusted < r.raw)).length,
+    ).toBeGreaterThanOrEqual(15)
+    expect(Math.max(...results.map((r) => r.adjusted as number))).toBeLessThanOrEqual(2)
+  })
+  it('but it is not free of false alarms: with a September-only baseline it extrapolates into colder weather', () => {
+    // Measured: false alarms between the baseline and the change in 13 of 20 seeds (raw chart: 12 of 20; the
+    // committed seed has none on the adjusted chart).
+    // This is why the assessment warns when monitored batches lie outside the baseline's ranges.
+    expect(results.filter((r) => r.adjustedFalseAlarms > 0).length).toBeGreaterThan(0)
+    expect(
+      assessment.warnings.some((w) => /outside the baseline's range of outside humidity ratio/.test(w)),
+    ).toBe(true)
+  })
+})
+
+describe('extrapolation warning', () => {
+  it('counts monitored batches outside the baseline range of each regressor', () => {
+    const baseline = [
+      [5, 10, 8],
+      [9, 20, 12],
+    ]
+    expect(extrapolationWarning(baseline, [[6, 15, 10]])).toBeNull()
+    expect(
+      extrapolationWarning(baseline, [
+        [4, 15, 10],
+        [6, 25, 13],
+        [6, 15, 10],
+      ]),
+    ).toMatch(
+      /^Of 3 monitored batches, 1 lie outside the baseline's range of outside humidity ratio, 1 of outside temperature and 1 of load:/,
+    )
   })
 })
