@@ -381,3 +381,14 @@ describe('delimited-text variants (reference §5: decimal commas in European CSV
     expect(r.series.dryBulbC[0]).toBe(2)
   })
 })
+
+describe('encoding (pitfall 11: some typical-year CSVs are ISO-8859-1)', () => {
+  it('bytes that are not UTF-8 are read as ISO-8859-1, so a Latin-1 degree sign still names °F', async () => {
+    const { readWeatherBytes } = await import('../../src/weather/read-weather.ts')
+    const text = 'timestamp,Temp (\u00b0F),RH (%)\n2021-06-01T00:00Z,68,50\n'
+    const latin1 = Uint8Array.from(text, (c) => c.charCodeAt(0)) // 0xB0 alone is invalid UTF-8
+    const r = readWeatherBytes(latin1)
+    expect(r.series.dryBulbC[0]).toBeCloseTo(20, 9)
+    expect(r.columns[0].unit).toBe('°F')
+  })
+})
