@@ -5,6 +5,7 @@
 import type { Hono } from 'hono'
 import type { ApiConfig } from '../config.ts'
 import { airRouter } from './air.ts'
+import { assessRouter, compareRouter } from './assess.ts'
 import { docsRouter } from './docs.ts'
 import { energyRouter } from './energy.ts'
 import { healthRouter } from './health.ts'
@@ -26,6 +27,8 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
     { path: '/v1/energy-chart', router: energyRouter },
     { path: '/v1/inspect', router: inspectRouter },
     { path: '/v1/products', router: productsRouter },
+    { path: '/v1/assess', router: assessRouter(_config) },
+    { path: '/v1/compare', router: compareRouter(_config) },
     { path: '/v1/equilibrium', router: equilibriumRouter },
     { path: '/v1/fit', router: fitRouter },
     { path: '/openapi.json', router: openApiRouter },

@@ -1,0 +1,213 @@
+/**
+ * @module api/routes/assess
+ * POST /v1/assess (one weather file) and POST /v1/compare (several): the seasonal assessment, as JSON
+ * (same object as `dryhours assess --json`), CSV tables or the HTML summary.
+ */
+import { type Context, Hono } from 'hono'
+import { z } from 'zod'
+import { assess } from '../../analysis/assess.ts'
+import type { Assessment } from '../../analysis/assessment.ts'
+import { compare } from '../../analysis/compare.ts'
+import { renderComparisonHtml } from '../../report/compare-html.ts'
+import { renderReportCsv } from '../../report/report-csv.ts'
+import { renderReportHtml } from '../../report/report-html.ts'
+import { readWeather } from '../../weather/read-weather.ts'
+import type { WeatherReadResult } from '../../weather/result.ts'
+import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import type { ApiConfig } from '../config.ts'
+import { registerOperation } from '../operations.ts'
+import { ApiProblem } from '../problem.ts'
+import {
+  type AssessRequest,
+  assessOptionsJsonSchema,
+  assessQuerySchema,
+  assessRequestFromJson,
+  assessRequestFromQuery,
+} from '../schemas/assess.ts'
+import { decodeUploadText, readUpload, type UploadedFile } from '../upload.ts'
+import { parseOrProblem } from '../validate.ts'
+
+const outputQuerySchema = z.object({
+  format: z.enum(['json', 'csv', 'html']).optional(),
+  units: z.enum(['si', 'us']).optional(),
+  table: z.string().optional(),
+})
+
+interface Parsed {
+  request: AssessRequest
+  output: z.output<typeof outputQuerySchema>
+  files: UploadedFile[]
+}
+
+async function parseRequest(c: Context): Promise<Parsed> {
+  const upload = await readUpload(c, { defaultName: 'weather file' })
+  if (upload.options !== undefined) {
+    const output = parseOrProblem(outputQuerySchema, upload.query)
+    return { request: assessRequestFromJson(upload.options), output, files: upload.files }
+  }
+  const fromQuery = assessRequestFromQuery(upload.query)
+  return { request: fromQuery, output: fromQuery.query, files: upload.files }
+}
+
+function readSite(file: UploadedFile, request: AssessRequest): WeatherReadResult {
+  try {
+    const result = readWeather(decodeUploadText(file.bytes), request.weather)
+    if (result.series.site.name.trim() === '') result.series.site.name = file.name
+    return result
+  } catch (e) {
+    if (e instanceof WeatherInputError) throw new ApiProblem(422, `${file.name}: ${e.message}`)
+    throw e
+  }
+}
+
+function runEngine<T>(fn: () => T): T {
+  try {
+    return fn()
+  } catch (e) {
+    if (e instanceof RangeError) throw new ApiProblem(422, e.message)
+    throw e
+  }
+}
+
+function csvResponse(c: Context, text: string): Response {
+  return c.body(text, 200, {
+    'content-type': 'text/csv; charset=utf-8',
+    'content-disposition': 'attachment; filename="dryhours-assessment.csv"',
+  })
+}
+
+export function assessRouter(_config: ApiConfig): Hono {
+  return new Hono().post('/', async (c) => {
+    const { request, output, files } = await parseRequest(c)
+    if (files.length !== 1) {
+      throw new ApiProblem(
+        400,
+        `send exactly one weather file, got ${files.length} (use /v1/compare for several)`,
+        [{ path: 'file', message: 'one file part expected' }],
+      )
+    }
+    const read = readSite(files[0], request)
+    const assessment: Assessment = runEngine(() => assess(read.series, request.options))
+    const info = { fileName: files[0].name, readerWarnings: read.warnings }
+    if (output.format === 'html') {
+      return c.html(
+        renderReportHtml(assessment, {
+          units: output.units,
+          series: read.series,
+          profile: request.options.product,
+          info,
+        }),
+      )
+    }
+    if (output.format === 'csv') {
+      return csvResponse(
+        c,
+        runEngine(() =>
+          renderReportCsv(assessment, {
+            units: output.units,
+            series: read.series,
+            info,
+            table: output.table,
+          }),
+        ),
+      )
+    }
+    return c.json(assessment)
+  })
+}
+
+export function compareRouter(_config: ApiConfig): Hono {
+  return new Hono().post('/', async (c) => {
+    const { request, output, files } = await parseRequest(c)
+    if (files.length < 2) {
+      throw new ApiProblem(
+        400,
+        `send at least two weather files (one multipart part per site), got ${files.length}`,
+        [{ path: 'file', message: 'two or more file parts expected' }],
+      )
+    }
+    const reads = files.map((f) => readSite(f, request))
+    const comparison = runEngine(() =>
+      compare(
+        reads.map((r) => r.series),
+        { ...request.options, criterion: request.criterion, labels: files.map((f) => f.name) },
+      ),
+    )
+    if (output.format === 'html') {
+      return c.html(
+        renderComparisonHtml(
+          comparison.assessments.map((a, i) => ({
+            assessment: a,
+            options: {
+              series: reads[i].series,
+              profile: request.options.product,
+              info: { fileName: files[i].name },
+            },
+          })),
+          { units: output.units },
+        ),
+      )
+    }
+    if (output.format === 'csv') {
+      throw new ApiProblem(400, 'format=csv is offered per site: call /v1/assess for each file', [
+        { path: 'format', message: 'csv not offered for comparisons' },
+      ])
+    }
+    return c.json(comparison)
+  })
+}
+
+const optionsDescription =
+  'Send the weather file as the body (text/csv, text/plain; EPW too) with the common options in the query, or as multipart/form-data with file part(s) and an `options` JSON part (full control: ' +
+  Object.keys(assessOptionsJsonSchema.shape).join(', ') +
+  '). `format` and `units` are always query parameters.'
+
+registerOperation({
+  method: 'post',
+  path: '/v1/assess',
+  summary: 'Seasonal drying assessment of one site',
+  description: `Usable drying hours per month (median, P10, P90 across years), hour-of-day × month usable fraction, start-date table (days to target, probability within the deadline, rewetting), supplemental heat and fuel, assumptions and warnings. Same object as \`dryhours assess --json\`. ${optionsDescription}`,
+  query: assessQuerySchema,
+  requestBody: [
+    { contentType: 'text/csv', description: 'the weather file (delimited text or EPW)' },
+    { contentType: 'multipart/form-data', description: 'file part + options JSON part' },
+  ],
+  response: {
+    contentType: 'application/json',
+    description: 'the assessment (format=csv: tables; format=html: the summary)',
+  },
+  errors: [400, 404, 413, 415, 422],
+  examples: [
+    {
+      name: 'raisins in the open air, four days of hourly weather (invented)',
+      url: '/v1/assess?product=grapes-to-raisins&method=open-air&lat=38.3&lon=-2.6&elevation=1050&deadlineDays=3&maxDays=3',
+      contentType: 'text/csv',
+      body: Array.from({ length: 96 }, (_, h) => {
+        const hour = h % 24
+        const t = 24 + 10 * Math.sin(((hour - 9) / 24) * 2 * Math.PI)
+        const rh = 45 - 20 * Math.sin(((hour - 9) / 24) * 2 * Math.PI)
+        const ghi = hour >= 6 && hour <= 18 ? Math.round(900 * Math.sin(((hour - 6) / 12) * Math.PI)) : 0
+        const stamp = new Date(Date.UTC(2024, 6, 1, h)).toISOString().slice(0, 16)
+        return `${stamp}Z,${t.toFixed(1)},${rh.toFixed(0)},${ghi},2.5`
+      })
+        .join('\n')
+        .replace(/^/, 'time,temp_c,rh_pct,ghi_wm2,wind_ms\n'),
+    },
+  ],
+})
+registerOperation({
+  method: 'post',
+  path: '/v1/compare',
+  summary: 'Compare candidate sites',
+  description: `Several weather files (multipart, one part per site), one product and method: each site's assessment and a ranking by a stated criterion (probability of finishing within the deadline, usable hours at P10, or heat per tonne). ${optionsDescription}`,
+  query: outputQuerySchema,
+  requestBody: [
+    { contentType: 'multipart/form-data', description: 'one file part per site + options JSON part' },
+  ],
+  response: {
+    contentType: 'application/json',
+    description: 'the comparison (format=html: the side-by-side summary)',
+  },
+  errors: [400, 413, 415, 422],
+  examples: [],
+})

@@ -1,0 +1,207 @@
+/**
+ * @module api/schemas/assess
+ * Options of POST /v1/assess and POST /v1/compare, in two forms that end in the same `AssessOptions`:
+ * a JSON object (the `options` part of a multipart request; full control, the engine's own option names)
+ * and a flat query string (the common options, short names like the CLI flags).
+ */
+import { z } from 'zod'
+import type { AssessOptions, assess } from '../../analysis/assess.ts'
+import { COMPARE_CRITERIA, type CompareCriterion } from '../../analysis/compare.ts'
+import {
+  DRYING_METHOD_KINDS,
+  dryingMethodSchema,
+  FUEL_IDS,
+  type FuelId,
+  heatedSchema,
+} from '../../drying/method.ts'
+import { dryingThresholdsSchema } from '../../drying/thresholds.ts'
+import { productById, productIds } from '../../product/catalogue.ts'
+import type { ProductProfile } from '../../product/profile.ts'
+import { parseUserProfile } from '../../product/profile-schema.ts'
+import { type WeatherReadOptions, weatherReadOptionsSchema } from '../../weather/options.ts'
+import { ApiProblem } from '../problem.ts'
+import { parseOrProblem } from '../validate.ts'
+import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
+import { numberParam } from './params.ts'
+
+const monthDay = z.string().regex(/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, 'must be MM-DD, e.g. 07-15')
+
+const kinds = DRYING_METHOD_KINDS as unknown as [string, ...string[]]
+
+/** JSON form (multipart `options` part). */
+export const assessOptionsJsonSchema = z.strictObject({
+  product: z
+    .union([z.string().min(1), z.record(z.string(), z.unknown())])
+    .describe('catalogue product id, or an inline profile / profile variant (see GET /v1/products/{id})'),
+  method: z
+    .union([z.enum(kinds), z.record(z.string(), z.unknown())])
+    .describe(
+      'drying method kind, or an object {kind, …parameters} (open-air, shade, solar-cabinet, heated)',
+    ),
+  targetWbPct: z
+    .number()
+    .optional()
+    .describe('target moisture, wet basis [%]; default the product profile’s'),
+  initialWbPct: z.number().optional().describe('initial moisture, wet basis [%]; default the profile’s'),
+  thicknessMm: z.number().positive().max(500).optional().describe('product thickness [mm]'),
+  seasonStart: monthDay.optional().describe('first start date of the season [MM-DD]'),
+  seasonEnd: monthDay.optional().describe('last start date of the season [MM-DD]'),
+  startStepDays: z.number().int().min(1).max(60).optional().describe('days between start dates'),
+  startHourLocal: z
+    .number()
+    .int()
+    .min(0)
+    .max(23)
+    .optional()
+    .describe('local standard hour at which batches start'),
+  deadlineDays: z
+    .number()
+    .positive()
+    .max(365)
+    .optional()
+    .describe('window to reach the target [days]; default 14'),
+  maxDays: z
+    .number()
+    .positive()
+    .max(365)
+    .optional()
+    .describe('a batch fails after this many days [days]; default 60'),
+  batchKgFresh: z
+    .number()
+    .positive()
+    .max(1e7)
+    .optional()
+    .describe('batch size [kg fresh product]; default 1000'),
+  thresholds: dryingThresholdsSchema
+    .partial()
+    .optional()
+    .describe('usable-hour thresholds (see assumptions in the answer)'),
+  backupHeater: heatedSchema
+    .omit({ kind: true })
+    .partial()
+    .optional()
+    .describe('heater for the supplemental heat figures'),
+  fuel: z.enum(FUEL_IDS).optional().describe('fuel for the heat and cost figures'),
+  fuelPrices: z
+    .partialRecord(z.enum(FUEL_IDS), z.number().min(0).max(1e6))
+    .optional()
+    .describe('price per fuel unit (currency of your choice); missing prices use marked examples'),
+  weather: weatherReadOptionsSchema.optional().describe('weather-reader options (site, time basis, mapping)'),
+  criterion: z.enum(COMPARE_CRITERIA).optional().describe('compare only: ranking criterion'),
+})
+
+/** Query form (raw file body). */
+export const assessQuerySchema = z.strictObject({
+  product: z.string().min(1).describe('catalogue product id (GET /v1/products)'),
+  method: z.enum(kinds).describe('open-air, shade, solar-cabinet or heated (defaults for its parameters)'),
+  targetWb: numberParam('target moisture, wet basis [%]').optional(),
+  initialWb: numberParam('initial moisture, wet basis [%]').optional(),
+  thickness: numberParam('product thickness [mm]').optional(),
+  start: monthDay.optional().describe('first start date of the season [MM-DD]'),
+  end: monthDay.optional().describe('last start date of the season [MM-DD]'),
+  stepDays: numberParam('days between start dates [days]').optional(),
+  deadlineDays: numberParam('window to reach the target [days]').optional(),
+  maxDays: numberParam('a batch fails after this many days [days]').optional(),
+  batchKg: numberParam('batch size [kg fresh]').optional(),
+  fuel: z.enum(FUEL_IDS).optional().describe('fuel for the heat and cost figures'),
+  price: z.string().optional().describe('fuel prices per unit, e.g. propane=0.9;electricity=0.25'),
+  format: z.enum(['json', 'csv', 'html']).optional().describe('answer format; default json'),
+  units: z.enum(['si', 'us']).optional().describe('display units of html and csv answers; default si'),
+  table: z.string().optional().describe('csv only: one table by id instead of all'),
+  ...weatherQueryFields,
+})
+
+export type AssessQuery = z.output<typeof assessQuerySchema>
+
+export interface AssessRequest {
+  options: AssessOptions
+  weather: WeatherReadOptions
+  criterion?: CompareCriterion
+}
+
+function resolveProduct(value: string | Record<string, unknown>, path: string): ProductProfile {
+  if (typeof value === 'string') {
+    try {
+      return productById(value)
+    } catch {
+      throw new ApiProblem(400, `no product '${value}'; known ids: ${productIds().join(', ')}`, [
+        { path, message: 'unknown product id' },
+      ])
+    }
+  }
+  try {
+    return parseUserProfile(value)
+  } catch (e) {
+    throw new ApiProblem(400, (e as Error).message, [{ path, message: (e as Error).message }])
+  }
+}
+
+function resolveMethod(value: string | Record<string, unknown>, path: string): AssessOptions['method'] {
+  const r = dryingMethodSchema.safeParse(typeof value === 'string' ? { kind: value } : value)
+  if (!r.success) {
+    const errors = r.error.issues.map((i) => ({
+      path: [path, ...i.path.map(String)].join('.'),
+      message: i.message,
+    }))
+    throw new ApiProblem(400, errors.map((e) => `${e.path}: ${e.message}`).join('; '), errors)
+  }
+  return r.data
+}
+
+/** From the JSON form (already an object), with field paths prefixed by `prefix`. */
+export function assessRequestFromJson(value: unknown, prefix = 'options'): AssessRequest {
+  const o = parseOrProblem(assessOptionsJsonSchema, value, prefix)
+  const { product, method, weather, criterion, ...rest } = o
+  return {
+    options: {
+      ...rest,
+      product: resolveProduct(product, `${prefix}.product`),
+      method: resolveMethod(method, `${prefix}.method`),
+    },
+    weather: weather ?? {},
+    criterion,
+  }
+}
+
+/** From the query form. */
+export function assessRequestFromQuery(
+  query: Record<string, string>,
+): AssessRequest & { query: AssessQuery } {
+  const q = parseOrProblem(assessQuerySchema, query)
+  const fuelPrices: Partial<Record<FuelId, number>> = {}
+  for (const part of (q.price ?? '').split(';').filter((p) => p.trim() !== '')) {
+    const m = /^\s*([a-z-]+)\s*=\s*([0-9.eE+-]+)\s*$/.exec(part)
+    const price = m ? Number(m[2]) : Number.NaN
+    if (!m || !(FUEL_IDS as readonly string[]).includes(m[1]) || !(price >= 0 && price <= 1e6)) {
+      throw new ApiProblem(
+        400,
+        `price '${part}' must be <fuel>=<price ≥ 0> with fuel one of ${FUEL_IDS.join(', ')}`,
+        [{ path: 'price', message: 'bad fuel price' }],
+      )
+    }
+    fuelPrices[m[1] as FuelId] = price
+  }
+  const weather = weatherOptionsFromQuery(q)
+  return {
+    query: q,
+    weather,
+    options: {
+      product: resolveProduct(q.product, 'product'),
+      method: resolveMethod(q.method, 'method'),
+      targetWbPct: q.targetWb,
+      initialWbPct: q.initialWb,
+      thicknessMm: q.thickness,
+      seasonStart: q.start,
+      seasonEnd: q.end,
+      startStepDays: q.stepDays,
+      deadlineDays: q.deadlineDays,
+      maxDays: q.maxDays,
+      batchKgFresh: q.batchKg,
+      fuel: q.fuel,
+      fuelPrices,
+    },
+  }
+}
+
+/** Type of the engine entry, for the routes. */
+export type AssessFunction = typeof assess
