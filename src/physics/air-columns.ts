@@ -23,8 +23,10 @@ import {
   VAPOR_PRESSURE_MIN_KPA,
   wetBulbWithDewPointC,
 } from './moist-air.ts'
-import { KELVIN_OFFSET, TRIPLE_POINT_C } from './saturation.ts'
+import { KELVIN_OFFSET, SATURATION_MIN_C, TRIPLE_POINT_C } from './saturation.ts'
 import {
+  LIQUID_SATURATION_TABLE,
+  SATURATION_TABLE_NODES_PER_K,
   saturationPressureFromTableKpa,
   saturationTableSlopes,
   saturationTemperatureFromTableC,
@@ -106,8 +108,65 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
       if (tdOut) tdOut[i] = td
       if (twbOut) {
         const wst = (MOLAR_MASS_RATIO_WATER_AIR * pws) / (p - pws)
-        twbOut[i] =
-          td >= TRIPLE_POINT_C ? wetWickWetBulbC(t, w, p, td, wst) : wetBulbWithDewPointC(t, w, p, td, wst)
+        if (td >= TRIPLE_POINT_C) {
+          // Wet-wick branch (eq 33), the common case, written out: the same chord start and safeguarded
+          // Halley iteration as wetBulbWithDewPointC (bracket [dew point, dry bulb], restart at the upper
+          // end on overshoot, bisection otherwise, stop on a step below SOLVER_STOP_STEP_C).
+          let twb = t
+          if (t - td > 1e-9) {
+            let lo = td
+            let hi = t
+            const b0 = 2501 + 1.86 * t
+            const mid = 0.5 * (lo + hi)
+            const am = 2501 - 2.326 * mid
+            let x =
+              lo + (w * (b0 - 4.186 * mid - am) + 1.006 * (t - lo)) / ((am * (wst - w)) / (hi - lo) + 1.006)
+            if (!(x > lo && x < hi)) x = mid
+            for (let k = 0; k < SOLVER_MAX_ITERATIONS; k++) {
+              // saturationPressureFromTableKpa(x, false) written out (x is within 0…100 °C here).
+              const su = (x - SATURATION_MIN_C) * SATURATION_TABLE_NODES_PER_K
+              const j = 2 * Math.floor(su)
+              const u = su - 0.5 * j
+              const y0 = LIQUID_SATURATION_TABLE[j]
+              const m0 = LIQUID_SATURATION_TABLE[j + 1]
+              const y1 = LIQUID_SATURATION_TABLE[j + 2]
+              const m1 = LIQUID_SATURATION_TABLE[j + 3]
+              const c2 = 3 * (y1 - y0) - 2 * m0 - m1
+              const c3 = 2 * (y0 - y1) + m0 + m1
+              const pv = y0 + u * (m0 + u * (c2 + u * c3))
+              const pv1 = (m0 + u * (2 * c2 + 3 * c3 * u)) * SATURATION_TABLE_NODES_PER_K
+              const pv2 = (2 * c2 + 6 * c3 * u) * SATURATION_TABLE_NODES_PER_K * SATURATION_TABLE_NODES_PER_K
+              const inv = 1 / (p - pv)
+              const ws = MOLAR_MASS_RATIO_WATER_AIR * pv * inv
+              const e = MOLAR_MASS_RATIO_WATER_AIR * p * inv * inv
+              const ws1 = e * pv1
+              const ws2 = e * (pv2 + 2 * pv1 * pv1 * inv)
+              const a = 2501 - 2.326 * x
+              const invB = 1 / (b0 - 4.186 * x)
+              const q = (a * ws - 1.006 * (t - x)) * invB
+              const q1 = (-2.326 * ws + a * ws1 + 1.006 + 4.186 * q) * invB
+              const q2 = (-4.652 * ws1 + a * ws2 + 8.372 * q1) * invB
+              const g = q - w
+              twb = x
+              if (g === 0) break
+              if (g > 0) hi = x
+              else lo = x
+              const step = (2 * g * q1) / (2 * q1 * q1 - g * q2)
+              const next = x - step
+              if (next > lo && next < hi) {
+                twb = next
+                if (Math.abs(step) < SOLVER_STOP_STEP_C) break
+                x = next
+              } else if (next >= hi && x < hi) x = hi
+              else x = 0.5 * (lo + hi)
+              twb = x
+              if (hi - lo < SOLVER_TOLERANCE_C) break
+            }
+          }
+          twbOut[i] = twb
+        } else {
+          twbOut[i] = wetBulbWithDewPointC(t, w, p, td, wst)
+        }
       }
     }
     if (hOut) hOut[i] = 1.006 * t + w * (2501 + 1.86 * t)
@@ -117,50 +176,4 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     }
   }
   return invalid
-}
-
-/**
- * Wet bulb on the wet-wick branch (eq 33) when the dew point `dewC` is at or above the triple point,
- * the common case: the same chord start and safeguarded Halley iteration as wetBulbWithDewPointC in
- * moist-air.ts (bracket [dew point, dry bulb], restart at the upper end on overshoot, bisection
- * otherwise, stop on a step below SOLVER_STOP_STEP_C), kept small so that it is inlined into the loop.
- */
-function wetWickWetBulbC(t: number, w: number, p: number, dewC: number, wst: number): number {
-  let lo = dewC
-  let hi = t
-  if (!(hi - lo > 1e-9)) return t
-  const b0 = 2501 + 1.86 * t
-  // Chord start: Ws* linear between (dew, W) and (t, Ws(t)); t*-terms at the midpoint.
-  const m = 0.5 * (lo + hi)
-  const am = 2501 - 2.326 * m
-  let x = lo + (w * (b0 - 4.186 * m - am) + 1.006 * (t - lo)) / ((am * (wst - w)) / (hi - lo) + 1.006)
-  if (!(x > lo && x < hi)) x = m
-  for (let k = 0; k < SOLVER_MAX_ITERATIONS; k++) {
-    const pv = saturationPressureFromTableKpa(x, false)
-    const pv1 = saturationTableSlopes[0]
-    const pv2 = saturationTableSlopes[1]
-    const inv = 1 / (p - pv)
-    const ws = MOLAR_MASS_RATIO_WATER_AIR * pv * inv
-    const e = MOLAR_MASS_RATIO_WATER_AIR * p * inv * inv
-    const ws1 = e * pv1
-    const ws2 = e * (pv2 + 2 * pv1 * pv1 * inv)
-    const a = 2501 - 2.326 * x
-    const invB = 1 / (b0 - 4.186 * x)
-    const q = (a * ws - 1.006 * (t - x)) * invB
-    const q1 = (-2.326 * ws + a * ws1 + 1.006 + 4.186 * q) * invB
-    const q2 = (-4.652 * ws1 + a * ws2 + 8.372 * q1) * invB
-    const f = q - w
-    if (f === 0) return x
-    if (f > 0) hi = x
-    else lo = x
-    const step = (2 * f * q1) / (2 * q1 * q1 - f * q2)
-    const next = x - step
-    if (next > lo && next < hi) {
-      if (Math.abs(step) < SOLVER_STOP_STEP_C) return next
-      x = next
-    } else if (next >= hi && x < hi) x = hi
-    else x = 0.5 * (lo + hi)
-    if (hi - lo < SOLVER_TOLERANCE_C) return x
-  }
-  return x
 }

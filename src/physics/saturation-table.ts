@@ -44,6 +44,13 @@ function build(minC: number, maxC: number, ice: boolean): Float64Array {
 }
 
 const LIQUID = build(SATURATION_MIN_C, SATURATION_MAX_C, false)
+/**
+ * The liquid-water table itself, for loops that interpolate it inline (air-columns.ts): node k at
+ * −100 + k/8 °C holds [pws kPa, (1/8 K)·dpws/dT kPa]. Read only.
+ */
+export const LIQUID_SATURATION_TABLE: Readonly<Float64Array> = LIQUID
+/** Nodes per kelvin of {@link LIQUID_SATURATION_TABLE}. */
+export const SATURATION_TABLE_NODES_PER_K = INV_STEP
 const ICE = build(SATURATION_MIN_C, ICE_MAX_C, true)
 const LIQUID_LAST = LIQUID.length / 2 - 2
 const ICE_LAST = ICE.length / 2 - 2
