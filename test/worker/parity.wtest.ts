@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { unstable_startWorker } from 'wrangler'
 import { createApp } from '../../src/api/app.ts'
@@ -37,6 +38,26 @@ describe('worker and Node give identical answers', () => {
   ])('GET %s', async (path) => {
     const [w, n] = await both(path)
     expect(w.status).toBe(n.status)
+    expect(await w.text()).toBe(await n.text())
+  })
+})
+
+describe('POST /v1/assess with a demo file: identical JSON from workerd and Node', () => {
+  it.each([
+    [
+      'climate-demo/ardentine-upland-typical-year.epw',
+      'product=grapes-to-raisins&method=open-air&start=08-01&end=09-15&stepDays=3',
+    ],
+    [
+      'climate-demo/tamarel-lowland-2021-2023-utc.csv',
+      'product=cocoa-beans&method=solar-cabinet&start=01-05&end=02-20&stepDays=5&lat=11.9&lon=104.6&elevation=95',
+    ],
+  ])('%s', async (file, query) => {
+    const body = readFileSync(file)
+    const init = { method: 'POST', body, headers: { 'content-type': 'text/csv' } }
+    const [w, n] = await both(`/v1/assess?${query}`, init)
+    expect(n.status).toBe(200)
+    expect(w.status).toBe(200)
     expect(await w.text()).toBe(await n.text())
   })
 })
