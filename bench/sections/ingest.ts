@@ -16,7 +16,7 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import { type BenchFigure, type BenchSection, median, seededRandom } from '../section.ts'
 
 const YEARS = 30
-const REPEATS = 3
+const REPEATS = 5
 const SEED = 20261201
 
 /** Invented 30-year hourly CSV text starting 1991-01-01T00:00Z at an invented site (40° N, 5° E). */
@@ -105,7 +105,18 @@ export const section: BenchSection = {
         unit: 'rows/s',
         note: `median of ${REPEATS}, ${(fullS * 1000).toFixed(0)} ms; best ${(Math.min(...full) * 1000).toFixed(0)} ms`,
       },
-      { name: 'end-to-end / bare parse throughput', value: bareS / fullS, unit: 'x', note: 'target ≥ 0.7' },
+      {
+        name: 'end-to-end / bare parse throughput',
+        value: bareS / fullS,
+        unit: 'x',
+        note: 'medians; target ≥ 0.7',
+      },
+      {
+        name: 'end-to-end / bare parse, best runs',
+        value: Math.min(...bare) / Math.min(...full),
+        unit: 'x',
+        note: 'fastest of each (less sensitive to machine load)',
+      },
       { name: 'readWeather throughput', value: mb / fullS, unit: 'MB/s' },
       {
         name: 'peak RSS after generating the text',
