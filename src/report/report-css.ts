@@ -29,7 +29,6 @@ export function reportCss(paper: Paper = 'auto'): string {
 .dryhours-report figcaption{font-weight:600;margin-bottom:.3rem}
 .dryhours-report .fig-no{color:var(--accent)}
 .dryhours-report svg.chart{width:100%;height:auto;display:block;font-family:inherit}
-.dryhours-report svg.chart text{fill:currentColor}
 .dryhours-report .alt{font-size:.88rem;color:var(--muted);margin:.3rem 0}
 .dryhours-report .alt-label{font-weight:600}
 .dryhours-report .note{font-size:.85rem;color:var(--muted);margin:.3rem 0}

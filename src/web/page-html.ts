@@ -113,7 +113,7 @@ export function renderPage(state: PageState = {}): string {
 <header class="masthead"><div class="wrap"><p class="brand">dryhours</p><p class="tagline">Can this site’s weather dry this crop, when, how fast, and with how much heat?</p><nav><a href="/docs">API</a></nav></div></header>
 <main id="main" class="wrap">
 <form id="assess-form" class="card" method="post" action="/report" enctype="multipart/form-data" novalidate>
-${state.error ? `<div class="error" id="form-error" role="alert"><strong>Please check:</strong> ${escapeHtml(state.error.message)}</div>` : '<div class="error" id="form-error" role="alert" hidden></div>'}
+${state.error ? `<div class="error" id="form-error" role="alert"><strong>Please check:</strong> ${escapeHtml(state.error.message)}<br><small>Browsers do not keep a chosen file across pages: choose the weather file again before you assess.</small></div>` : '<div class="error" id="form-error" role="alert" hidden></div>'}
 <fieldset class="step"><legend><span class="n">1</span> Weather</legend>
 <div class="field"><label for="f-file">Hourly weather file (CSV or EPW)</label><input id="f-file" name="file" type="file" accept=".csv,.txt,.tsv,.epw,text/csv,text/plain" multiple aria-describedby="f-file-hint"><small id="f-file-hint">One file for a report; up to ${MAX_SITES} files to compare sites. Dry bulb and a humidity column at least; time stamps hourly.</small></div>
 ${demoBlock}

@@ -21,7 +21,7 @@ const quillow = readFileSync(join(DEMO, 'quillow-valley-2021-2023-local-dst-impe
 function form(fields: Record<string, string>, files: { name: string; bytes: Uint8Array }[] = []): FormData {
   const f = new FormData()
   for (const [k, v] of Object.entries(fields)) f.set(k, v)
-  for (const file of files) f.append('file', new File([file.bytes], file.name, { type: 'text/csv' }))
+  for (const file of files) f.append('file', new File([file.bytes as Uint8Array<ArrayBuffer>], file.name, { type: 'text/csv' }))
   return f
 }
 

@@ -20,7 +20,7 @@ export interface HeatMapOptions {
   cellText?: boolean
 }
 
-const FRAME: Frame = { width: 640, height: 430, left: 46, right: 14, top: 14, bottom: 58 }
+const FRAME: Frame = { width: 640, height: 430, left: 60, right: 14, top: 14, bottom: 58 }
 
 export function heatMapChart(o: HeatMapOptions): string {
   const f = FRAME
@@ -36,7 +36,7 @@ export function heatMapChart(o: HeatMapOptions): string {
       const pct = v === null || !Number.isFinite(v) ? 'no data' : `${Math.round(v * 100)} %`
       const label = `${MONTH_SHORT[m] ?? m + 1}, ${String(h).padStart(2, '0')}:00–${String(h + 1).padStart(2, '0')}:00: ${pct}`
       let cell = `<g class="cell" data-month="${m + 1}" data-hour="${h}" data-fraction="${v === null || !Number.isFinite(v) ? '' : v}"><title>${escapeHtml(label)}</title><rect x="${px(x)}" y="${px(y)}" width="${px(cw)}" height="${px(ch)}" fill="${sequentialColour(v)}" stroke="#fff" stroke-width="0.5"/>`
-      if (o.cellText !== false && v !== null && Number.isFinite(v)) {
+      if (o.cellText !== false && v !== null && Number.isFinite(v) && v >= 0.005) {
         cell += `<text x="${px(x + cw / 2)}" y="${px(y + ch / 2)}" dy="0.32em" text-anchor="middle" font-size="7.5" fill="${inkOnSequential(v)}">${Math.round(v * 100)}</text>`
       }
       parts.push(`${cell}</g>`)
@@ -54,7 +54,7 @@ export function heatMapChart(o: HeatMapOptions): string {
     )
   }
   axis.push(
-    `<text transform="translate(10 ${px(f.top + 12 * ch)}) rotate(-90)" text-anchor="middle" font-size="10.5">${escapeHtml(o.hourLabel)}</text>`,
+    `<text transform="translate(12 ${px(f.top + 12 * ch)}) rotate(-90)" text-anchor="middle" font-size="10.5">${escapeHtml(o.hourLabel)}</text>`,
   )
   // Colour key: the nine classes, 0 to 100 %.
   const kx = f.left

@@ -28,7 +28,7 @@ export interface PsychrometricOptions {
   units: UnitFormatter
 }
 
-const FRAME: Frame = { width: 640, height: 400, left: 56, right: 40, top: 36, bottom: 40 }
+const FRAME: Frame = { width: 640, height: 410, left: 56, right: 40, top: 50, bottom: 40 }
 const RH_CURVES = [10, 20, 30, 40, 50, 60, 70, 80, 90, 100]
 
 /** Humidity ratio [g/kg] at dry bulb tC and RH rhPct (over liquid water) at pressureKpa; eq 20. */
@@ -128,7 +128,11 @@ export function psychrometricChart(o: PsychrometricOptions): string {
       true,
     ) +
     `<g clip-path="url(#${clipId})">${parts.join('')}${curves.join('')}${overlay.join('')}</g>${labels.join('')}` +
-    `<g class="legend" font-size="10" fill="${INK.text}"><rect x="${f.left}" y="6" width="14" height="10" fill="url(#${hatchId})" stroke="${HIGH_CONTRAST.blue}"/><text x="${f.left + 18}" y="14">${escapeHtml(o.regionLabel)}</text><rect x="${f.left + 300}" y="6" width="14" height="10" fill="${sequentialColour(0.2)}"/><rect x="${f.left + 314}" y="6" width="14" height="10" fill="${sequentialColour(0.6)}"/><rect x="${f.left + 328}" y="6" width="14" height="10" fill="${sequentialColour(1)}"/><text x="${f.left + 346}" y="14">hours: few → many</text><text x="${f.left + 470}" y="14">dashed: RH</text></g>`
+    `<g class="legend" font-size="10" fill="${INK.text}">` +
+    `<rect x="${f.left}" y="4" width="14" height="10" fill="url(#${hatchId})" stroke="${HIGH_CONTRAST.blue}"/><text x="${f.left + 18}" y="12.5">${escapeHtml(o.regionLabel)}</text>` +
+    `<rect x="${f.left}" y="20" width="14" height="10" fill="${sequentialColour(0.2)}"/><rect x="${f.left + 14}" y="20" width="14" height="10" fill="${sequentialColour(0.6)}"/><rect x="${f.left + 28}" y="20" width="14" height="10" fill="${sequentialColour(1)}"/><text x="${f.left + 46}" y="28.5">hours in each cell: few → many</text>` +
+    `<line x1="${f.left + 230}" x2="${f.left + 250}" y1="25" y2="25" stroke="${INK.muted}" stroke-dasharray="3 2"/><text x="${f.left + 254}" y="28.5">relative humidity</text>` +
+    `<line x1="${f.left + 350}" x2="${f.left + 370}" y1="25" y2="25" stroke="${INK.text}" stroke-width="1.6"/><text x="${f.left + 374}" y="28.5">saturation (100 %)</text></g>`
   return svgDocument({
     id: o.id,
     frame: f,

@@ -196,9 +196,9 @@ export function renderEnergyArticle(a: EnergyChartAssessment, o: EnergyReportOpt
   )
   const adjusted = a.adjusted
     ? `<section class="adjusted"><h2>After taking out weather and load</h2>
-<p>Specific energy regressed on outside humidity ratio, outside temperature and load over the baseline; the charts below show the residual, what the weather and the load do not explain.</p>
+<p>Specific energy regressed on outside humidity ratio, outside temperature and load over the baseline; the charts below show the residual, what the weather and the load do not explain, standardized by its leverage h (baseline e/√(1 − h), later batches e/√(1 + h)) so that a batch far from the baseline's weather counts for less.</p>
 ${regression ? `<div class="table-scroll">${tableHtml(regression)}</div>` : ''}
-${chartFigures(a.adjusted, a, { key: 'residual', name: 'Residual specific energy', yLabel: 'residual [MJ/kg water]' }, prefix, next)}
+${chartFigures(a.adjusted, a, { key: 'residual', name: 'Standardized residual', yLabel: 'standardized residual [MJ/kg water]' }, prefix, next)}
 </section>`
     : `<section class="adjusted"><h2>After taking out weather and load</h2><p class="missing">Not drawn: ${escapeHtml(a.adjustedUnavailableReason ?? 'no outside air for the batches')}.</p></section>`
   return `<article class="dryhours-report" data-report="energy-chart">

@@ -74,6 +74,7 @@ export function heatAlt(a: Assessment, ctx: SectionContext): string {
   const u = ctx.units
   const rows = a.monthly.filter((m) => finite(m.supplementalHeatKwhPerTonne.median))
   if (rows.length === 0) return 'No supplemental heat figure could be computed for any month.'
+  const none = a.monthly.filter((m) => !finite(m.supplementalHeatKwhPerTonne.median))
   const min = rows.reduce((x, y) =>
     (y.supplementalHeatKwhPerTonne.median as number) < (x.supplementalHeatKwhPerTonne.median as number)
       ? y
@@ -88,7 +89,10 @@ export function heatAlt(a: Assessment, ctx: SectionContext): string {
     formatNumber(u.energyPerMass(m.supplementalHeatKwhPerTonne.median as number).value)
   return (
     `Bars show the median heat a dryer must add to the air ${perMassWords(ctx)} of fresh product to finish by the ${a.deadlineDays}-day deadline, for batches started in each month; whiskers P10 to P90 across years. ` +
-    `Least in ${MONTH_LONG[min.month - 1]} (${v(min)} ${u.energyPerMassUnit}), most in ${MONTH_LONG[max.month - 1]} (${v(max)} ${u.energyPerMassUnit}).`
+    `Least in ${MONTH_LONG[min.month - 1]} (${v(min)} ${u.energyPerMassUnit}), most in ${MONTH_LONG[max.month - 1]} (${v(max)} ${u.energyPerMassUnit}).` +
+    (none.length
+      ? ` No figure for ${none.map((m) => MONTH_LONG[m.month - 1]).join(', ')} (marked n/a): the assessment could not compute one, e.g. because the batch cannot reach the target in time even with heat.`
+      : '')
   )
 }
 

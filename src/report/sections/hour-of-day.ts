@@ -54,7 +54,7 @@ export function hourOfDayAlt(fr: (number | null)[][]): string {
   })
   if (best.m < 0) return 'No hour-of-day data.'
   return (
-    `Each cell is the share of hours at that local hour in that month that dry the product (darker = more). ` +
+    `Each cell is the share of hours at that local hour in that month that dry the product (darker = more; the number is the percentage, blank = 0 %). ` +
     `Highest: ${MONTH_LONG[best.m]} at ${String(best.h).padStart(2, '0')}:00, ${Math.round(best.v * 100)} %. ` +
     (windows.length
       ? `Hours usable at least half of the time: ${windows.join(', ')}.`

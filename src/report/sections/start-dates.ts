@@ -97,7 +97,7 @@ export function startDatesAlt(a: Assessment): string {
       ? `${notReached} of ${rows.length} start days do not reach the target within ${a.maxDays} days in the median year. `
       : '') +
     (w
-      ? `Best window ${w.from} to ${w.to}: at least ${Math.round(w.minProbability * 100)} % of years finish within the deadline.`
+      ? `Best window ${w.from} to ${w.to}: ${w.minProbability >= 1 ? 'every year finishes' : `at least ${Math.round(w.minProbability * 100)} % of years finish`} within the deadline.`
       : 'No start window finishes within the deadline in most years.')
   )
 }

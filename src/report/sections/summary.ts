@@ -51,12 +51,12 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     .join('; ')
   if (data) rows.push(['Data', data])
   const c = a.coverage
-  const years = c.years.length
+  const years = Math.max(0, ...a.monthly.map((m) => m.yearsWithData))
   rows.push([
     'Period',
     s.typicalYear
       ? 'typical year (months from different years)'
-      : `${c.firstHourUtc.slice(0, 10)} to ${c.lastHourUtc.slice(0, 10)}, ${years} year${years === 1 ? '' : 's'}`,
+      : `${c.firstHourUtc.slice(0, 10)} to ${c.lastHourUtc.slice(0, 10)} (UTC), ${years} year${years === 1 ? '' : 's'} of data per month`,
   ])
   const withData = c.hours - c.missingHours
   rows.push([
@@ -125,7 +125,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     out.push(
       `The best start window is ${w.from} to ${w.to}: batches reach ${target} in about ${formatNumber(w.medianDays, 1)} days in a median year` +
         (finite(w.p90Days) ? ` and within ${formatNumber(w.p90Days, 1)} days in 9 of 10 years` : '') +
-        `; at least ${Math.round(w.minProbability * 100)} % of years finish within ${a.deadlineDays} days.`,
+        `; ${w.minProbability >= 1 ? 'every year finishes' : `at least ${Math.round(w.minProbability * 100)} % of years finish`} within ${a.deadlineDays} days.`,
     )
   } else if (a.startDates.length > 0) {
     const best = a.startDates.reduce((x, y) =>
