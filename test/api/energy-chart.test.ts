@@ -38,7 +38,7 @@ describe('POST /v1/energy-chart', () => {
     const a = (await res.json()) as EnergyChartAssessment
     expect(a.kind).toBe('energy-chart')
     expect(a.accounting.rowsUsed).toBe(64)
-    expect(a.adjusted?.finding.firstRiseSignal?.batchId).toBe('Q26-041')
+    expect(a.adjusted?.finding.estimatedChangeStart?.batchId).toBe('Q26-041')
   })
   it('accepts multipart with log, weather-free options part, and answers HTML or CSV on request', async () => {
     const form = new FormData()

@@ -16,7 +16,7 @@ import { CONTROL_CHART_SOURCE } from './control-constants.ts'
 import { summaryLines } from './energy-summary.ts'
 import { type EwmaChart, ewmaChart } from './ewma-chart.ts'
 import { type IndividualsChart, individualsChart, MIN_BASELINE_POINTS } from './individuals-chart.ts'
-import { type LinearRegression, ordinaryLeastSquares } from './linear-regression.ts'
+import { type LinearRegression, leverage, ordinaryLeastSquares, predict } from './linear-regression.ts'
 import type { RunRuleId } from './run-rules.ts'
 import { batchAmbientFromSeries, humidityRatioGPerKgFromRh, MIN_WEATHER_COVERAGE } from './weather-join.ts'
 
@@ -85,7 +85,16 @@ export interface EnergyChartAssessment {
   raw: ChartSet
   /** Residual [MJ/kg water] chart after the weather-and-load regression, or null (see reason). */
   adjusted:
-    | (ChartSet & { regression: Omit<LinearRegression, 'residuals'>; fitted: number[]; residuals: number[] })
+    | (ChartSet & {
+        regression: Omit<LinearRegression, 'residuals' | 'leverages' | 'regressorMeans' | 'centredInverse'>
+        fitted: number[]
+        /** y − ŷ [MJ/kg water] of each charted batch. */
+        residuals: number[]
+        /** Leverage h of each charted batch (baseline: in the fit; monitored: of a new observation). */
+        leverages: number[]
+        /** What is charted: baseline e/√(1 − h), monitored e/√(1 + h); each has variance σ² when in control. */
+        standardizedResiduals: number[]
+      })
     | null
   adjustedUnavailableReason: string | null
   assumptions: string[]
@@ -289,24 +298,43 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     adjustedUnavailableReason = `the regression needs at least ${ADJUSTMENT_REGRESSORS.length + 3} baseline batches, got ${completeBaseline.length}`
   } else {
     try {
-      const { residuals: _fitResiduals, ...regression } = ordinaryLeastSquares(
+      const model = ordinaryLeastSquares(
         completeBaseline.map(regressorsOf),
         completeBaseline.map((b) => b.specificEnergyMjPerKg),
         ADJUSTMENT_REGRESSORS,
       )
-      const c = regression.coefficients
-      const fitted = complete.map((b) =>
-        regressorsOf(b).reduce((s, v, j) => s + v * c[j + 1].estimate, c[0].estimate),
-      )
+      const {
+        residuals: _fitResiduals,
+        leverages: _fitLeverages,
+        regressorMeans: _means,
+        centredInverse: _inverse,
+        ...regression
+      } = model
+      const fitted = complete.map((b) => predict(model, regressorsOf(b)))
       const residuals = complete.map((b, i) => b.specificEnergyMjPerKg - fitted[i])
+      const leverages = complete.map((b) => leverage(model, regressorsOf(b)))
+      // Internally studentized in the baseline, prediction-standardized after it (Montgomery, Peck & Vining
+      // ch. 4 and 3): the chart then weighs a monitored batch by how far the regression had to reach for it.
+      const standardizedResiduals = residuals.map((e, i) =>
+        complete[i].index < baselineCount
+          ? e / Math.sqrt(Math.max(1e-9, 1 - leverages[i]))
+          : e / Math.sqrt(1 + leverages[i]),
+      )
       const set = chartSet(
-        residuals,
+        standardizedResiduals,
         complete.map((b) => b.index),
         completeBaseline.length,
         batches,
         baselineCount,
       )
-      adjusted = { ...set, regression, fitted, residuals }
+      // The size of a shift is reported in MJ/kg of plain residual (the standardized one is shrunk by √(1 + h)).
+      const change = set.finding.estimatedChangeStart
+      if (change) {
+        const from = set.batchIndices.indexOf(change.batchIndex)
+        const after = residuals.slice(from)
+        set.finding.shiftAfterChange = after.reduce((sum, v) => sum + v, 0) / after.length
+      }
+      adjusted = { ...set, regression, fitted, residuals, leverages, standardizedResiduals }
       extrapolation = extrapolationWarning(
         completeBaseline.map(regressorsOf),
         complete.filter((b) => b.index >= baselineCount).map(regressorsOf),
@@ -344,7 +372,9 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
       CONTROL_CHART_SOURCE,
       'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',
       'Heating values: higher heating values of src/drying/fuels.ts (US EIA Btu conversion factors).',
-      'Regression: ordinary least squares over the baseline batches (specific energy on outside humidity ratio, outside temperature, load).',
+      'Regression: ordinary least squares over the baseline batches (specific energy on outside humidity ratio, outside temperature, load); ' +
+        'the adjusted chart plots residuals standardized by their leverage h, e/√(1 − h) in the baseline and e/√(1 + h) after it ' +
+        '(Montgomery, Peck & Vining, Introduction to Linear Regression Analysis, ch. 3–4).',
     ],
     summary: summaryLines(batches, baselineCount, raw, adjusted, adjustedUnavailableReason),
   }

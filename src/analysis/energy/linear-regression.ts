@@ -26,6 +26,11 @@ export interface LinearRegression {
   degreesOfFreedom: number
   /** y − ŷ for the fitted rows. */
   residuals: number[]
+  /** Leverage hᵢ = xᵢᵀ(XᵀX)⁻¹xᵢ of each fitted row (0 < hᵢ < 1; Σhᵢ = p). */
+  leverages: number[]
+  /** Regressor means and (XᵀX)⁻¹ of the centred design, for {@link leverage} of new rows. */
+  regressorMeans: number[]
+  centredInverse: number[][]
 }
 
 /** Solve the symmetric positive-definite system and return the inverse, by Gauss–Jordan with pivoting. */
@@ -89,6 +94,8 @@ export function ordinaryLeastSquares(
   const beta = inverse.map((row) => row.reduce((s, v, j) => s + v * xty[j], 0))
   const residuals = design.map((row, i) => y[i] - row.reduce((s, v, j) => s + v * beta[j], 0))
   const rss = residuals.reduce((s, r) => s + r * r, 0)
+  const leverageOf = (row: number[]) =>
+    row.reduce((sum, v, a) => sum + v * row.reduce((t, w, b) => t + inverse[a][b] * w, 0), 0)
   const tss = y.reduce((s, v) => s + (v - yMean) ** 2, 0)
   const df = n - p
   const s2 = rss / df
@@ -115,7 +122,22 @@ export function ordinaryLeastSquares(
     observations: n,
     degreesOfFreedom: df,
     residuals,
+    leverages: design.map(leverageOf),
+    regressorMeans: means,
+    centredInverse: inverse,
   }
+}
+
+/**
+ * Leverage of a new row of regressors, h₀ = x₀ᵀ(XᵀX)⁻¹x₀ (with the intercept): the variance of the
+ * prediction there is σ²·h₀, and of the prediction error y₀ − ŷ₀ σ²·(1 + h₀) (Montgomery, Peck & Vining,
+ * *Introduction to Linear Regression Analysis*, ch. 3, prediction of new observations). Grows with the
+ * distance of x₀ from the regressor means: extrapolation.
+ */
+export function leverage(model: LinearRegression, row: readonly number[]): number {
+  const x = [1, ...row.map((v, j) => v - model.regressorMeans[j])]
+  const c = model.centredInverse
+  return x.reduce((sum, v, a) => sum + v * x.reduce((t, w, b) => t + c[a][b] * w, 0), 0)
 }
 
 /** ŷ for one row of regressors from a fitted model. */

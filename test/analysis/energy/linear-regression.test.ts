@@ -1,6 +1,6 @@
 import { linearRegression, rSquared } from 'simple-statistics'
 import { describe, expect, it } from 'vitest'
-import { ordinaryLeastSquares, predict } from '../../../src/analysis/energy/linear-regression.ts'
+import { leverage, ordinaryLeastSquares, predict } from '../../../src/analysis/energy/linear-regression.ts'
 
 /** Small seeded generator for synthetic batches (xorshift32, Marsaglia 2003, J. Stat. Softw. 8:14). */
 function xorshift(seed: number): () => number {
@@ -86,6 +86,23 @@ describe('ordinary least squares', () => {
       fit.residualStandardError * Math.sqrt(1 / 6 + 3.5 ** 2 / sxx),
       12,
     )
+  })
+  it('leverages: Σhᵢ = p (trace of the hat matrix), h = 1/n at the regressor means, growing away from them', () => {
+    // Hat-matrix identities (Montgomery, Peck & Vining ch. 4): trace H = p; for a new x0 at the means, h0 = 1/n.
+    const u = xorshift(3)
+    const rows = Array.from({ length: 25 }, () => [u(), 10 * u(), 100 * u()])
+    const fit = ordinaryLeastSquares(
+      rows,
+      rows.map(([a, b, c]) => a + b + c + u()),
+      ['a', 'b', 'c'],
+    )
+    expect(fit.leverages.reduce((s, h) => s + h, 0)).toBeCloseTo(4, 10)
+    expect(leverage(fit, fit.regressorMeans)).toBeCloseTo(1 / 25, 12)
+    rows.forEach((r, i) => {
+      expect(leverage(fit, r)).toBeCloseTo(fit.leverages[i], 12)
+    })
+    const far = [fit.regressorMeans[0] + 3, fit.regressorMeans[1], fit.regressorMeans[2]]
+    expect(leverage(fit, far)).toBeGreaterThan(1)
   })
   it('refuses collinear regressors and too few rows with a clear message', () => {
     const rows = Array.from({ length: 10 }, (_, i) => [i, 2 * i])
