@@ -21,7 +21,8 @@ const quillow = readFileSync(join(DEMO, 'quillow-valley-2021-2023-local-dst-impe
 function form(fields: Record<string, string>, files: { name: string; bytes: Uint8Array }[] = []): FormData {
   const f = new FormData()
   for (const [k, v] of Object.entries(fields)) f.set(k, v)
-  for (const file of files) f.append('file', new File([file.bytes as Uint8Array<ArrayBuffer>], file.name, { type: 'text/csv' }))
+  for (const file of files)
+    f.append('file', new File([file.bytes as Uint8Array<ArrayBuffer>], file.name, { type: 'text/csv' }))
   return f
 }
 
@@ -194,5 +195,44 @@ describe('POST /report', () => {
       expect(res.status).toBe(400)
       expect(await res.text()).toMatch(msg)
     }
+  })
+})
+
+describe('demo sites supplied by the entry point', () => {
+  // What src/node/server.ts would pass: the catalogue's files, read from climate-demo/ on demand.
+  const files = demoFilesFromCatalogue(JSON.parse(readFileSync(join(DEMO, 'sites.json'), 'utf8')))
+  const demo = {
+    list: () => files,
+    read: async (file: string) =>
+      files.some((d) => d.file === file) ? new Uint8Array(readFileSync(join(DEMO, file))) : null,
+  }
+  const demoApp = createApp({ demo } as Parameters<typeof createApp>[0])
+
+  it('offers them on the page and assesses one by name, with the options the catalogue gives', async () => {
+    const page = await (await demoApp.request('/')).text()
+    expect(page).toContain('<option value="quillow-valley-2021-2023-local-dst-imperial.csv">')
+    const f = form({
+      demo: 'quillow-valley-2021-2023-local-dst-imperial.csv',
+      product: 'shelled-corn',
+      method: 'heated',
+      seasonStart: '10-01',
+      seasonEnd: '10-31',
+      format: 'bundle',
+    })
+    const res = await demoApp.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { json: string }
+    const a = JSON.parse(b.json) as { site: { name: string; utcOffsetHours: number } }
+    expect(a.site.name).toBe('Quillow Landing')
+    expect(a.site.utcOffsetHours).toBe(-6)
+  }, 30_000)
+
+  it('refuses a demo name that is not in the list (no path tricks)', async () => {
+    const res = await demoApp.request('/report', {
+      method: 'POST',
+      body: form({ demo: '../package.json', product: 'wheat' }),
+    })
+    expect(res.status).toBe(400)
+    expect(await res.text()).toContain('demo: unknown demo file &quot;../package.json&quot;')
   })
 })
