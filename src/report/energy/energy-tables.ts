@@ -36,8 +36,12 @@ export function batchTable(a: EnergyChartAssessment): ReportTable {
   const raw = rulesByBatch(a.raw, a.batches.length)
   const adj = rulesByBatch(a.adjusted, a.batches.length)
   const residual: (number | null)[] = new Array(a.batches.length).fill(null)
+  const standardized: (number | null)[] = new Array(a.batches.length).fill(null)
+  const leverage: (number | null)[] = new Array(a.batches.length).fill(null)
   a.adjusted?.batchIndices.forEach((b, i) => {
     residual[b] = a.adjusted!.residuals[i]
+    standardized[b] = a.adjusted!.standardizedResiduals[i]
+    leverage[b] = a.adjusted!.leverages[i]
   })
   const rows: Cell[][] = a.batches.map((b) => [
     b.batchId,
@@ -55,6 +59,8 @@ export function batchTable(a: EnergyChartAssessment): ReportTable {
     b.ambient?.source ?? null,
     raw[b.index],
     residual[b.index],
+    leverage[b.index],
+    standardized[b.index],
     adj[b.index],
   ])
   return {
@@ -76,10 +82,12 @@ export function batchTable(a: EnergyChartAssessment): ReportTable {
       'outside air from',
       'signals, specific energy chart',
       'residual [MJ/kg water]',
+      'leverage h',
+      'standardized residual [MJ/kg water]',
       'signals, adjusted chart',
     ],
     rows,
-    digits: [0, 0, 0, 0, 0, 0, 2, 1, 0, 1, 0, 2, 0, 0, 3, 0],
+    digits: [0, 0, 0, 0, 0, 0, 2, 1, 0, 1, 0, 2, 0, 0, 3, 3, 3, 0],
   }
 }
 
