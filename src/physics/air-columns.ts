@@ -28,7 +28,6 @@ import {
   LIQUID_SATURATION_TABLE,
   SATURATION_TABLE_NODES_PER_K,
   saturationPressureFromTableKpa,
-  saturationTableSlopes,
   saturationTemperatureFromTableC,
 } from './saturation-table.ts'
 
@@ -98,12 +97,9 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     if (wOut) wOut[i] = w
     if (pwOut) pwOut[i] = pw
     if (tdOut || twbOut) {
-      // Dew point over liquid water: inverse table (1e-9 °C) and one Halley step on the forward table,
-      // as saturationTemperatureC does, written out here so no number is boxed per hour.
+      // Dew point over liquid water straight from the inverse table: within 1e-9 °C of the root of eq 6
+      // (test/physics/saturation-table.test.ts), so no solver step is needed here.
       let td = saturationTemperatureFromTableC(Math.log(pw * 1000), false)
-      const f = saturationPressureFromTableKpa(td, false) - pw
-      const f1 = saturationTableSlopes[0]
-      td -= (2 * f * f1) / (2 * f1 * f1 - f * saturationTableSlopes[1])
       if (td > t) td = t
       if (tdOut) tdOut[i] = td
       if (twbOut) {
