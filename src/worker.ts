@@ -1,25 +1,22 @@
 /**
  * @module worker
- * Cloudflare Workers entry: the same app as on Node. Limits come from wrangler.toml `[vars]`.
+ * Cloudflare Workers entry: the same app as on Node. Limits come from wrangler.toml `[vars]`
+ * (DRYHOURS_MAX_BODY_BYTES, DRYHOURS_MAX_ROWS, DRYHOURS_MAX_SITES, DRYHOURS_MAX_BATCH_HOURS,
+ * DRYHOURS_CORS_ORIGINS); the plan's CPU limit bounds the time per request.
  */
 import { createApp } from './api/app.ts'
-
-interface Env {
-  DRYHOURS_MAX_BODY_BYTES?: string
-}
+import { configFromVariables } from './api/config.ts'
 
 let cached: { key: string; app: ReturnType<typeof createApp> } | undefined
 
 export default {
-  fetch(request: Request, env: Env, ctx: unknown): Response | Promise<Response> {
-    const key = env.DRYHOURS_MAX_BODY_BYTES ?? ''
-    if (!cached || cached.key !== key) {
-      const maxBodyBytes = Number(key)
-      cached = {
-        key,
-        app: createApp(Number.isFinite(maxBodyBytes) && maxBodyBytes > 0 ? { maxBodyBytes } : {}),
-      }
-    }
+  fetch(
+    request: Request,
+    env: Record<string, string | undefined>,
+    ctx: unknown,
+  ): Response | Promise<Response> {
+    const key = JSON.stringify(env ?? {})
+    if (!cached || cached.key !== key) cached = { key, app: createApp(configFromVariables(env ?? {})) }
     return cached.app.fetch(request, env, ctx as never)
   },
 }

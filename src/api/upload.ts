@@ -5,6 +5,7 @@
  * Anything else is a 415 problem that says which types are accepted.
  */
 import type { Context } from 'hono'
+import type { ApiConfig } from './config.ts'
 import { ApiProblem } from './problem.ts'
 
 export interface UploadedFile {
@@ -86,4 +87,24 @@ export async function readUpload(c: Context, opts: { defaultName: string }): Pro
     415,
     `content type '${type || '(none)'}' is not accepted; send the file as text/csv, text/plain or application/octet-stream, or as multipart/form-data with a file part`,
   )
+}
+
+/** Data rows of a text, counted cheaply before parsing (line breaks). */
+function roughRowCount(text: string): number {
+  let n = 0
+  for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) n++
+  return n
+}
+
+/** The file's text, refused with a 413 when it has more rows than the configured limit. */
+export function checkedUploadText(file: UploadedFile, config: ApiConfig): string {
+  const text = decodeUploadText(file.bytes)
+  const rows = roughRowCount(text)
+  if (rows > config.maxRows + 10) {
+    throw new ApiProblem(
+      413,
+      `${file.name} has about ${rows} rows, more than the limit of ${config.maxRows}; split it by years and send the parts`,
+    )
+  }
+  return text
 }

@@ -1,20 +1,17 @@
 /**
  * @module node/server
  * `npm start` / `dryhours serve`: the API (and the page) on 127.0.0.1:8787 (HOST, PORT), one log line per
- * request, clean shutdown on SIGINT/SIGTERM. Limits from DRYHOURS_MAX_BODY_BYTES and DRYHOURS_CORS_ORIGINS.
+ * request, clean shutdown on SIGINT/SIGTERM. Limits from the DRYHOURS_* variables (see api/config.ts).
  */
 
 import { pathToFileURL } from 'node:url'
 import { type ServerType, serve } from '@hono/node-server'
 import { createApp } from '../api/app.ts'
-import type { ApiConfig } from '../api/config.ts'
+import { type ApiConfig, configFromVariables } from '../api/config.ts'
 
+/** Node settings: the environment, plus a 60 s wall-clock budget per assessment unless set otherwise. */
 export function configFromEnv(env: NodeJS.ProcessEnv): Partial<ApiConfig> {
-  const out: Partial<ApiConfig> = {}
-  const max = Number(env.DRYHOURS_MAX_BODY_BYTES)
-  if (env.DRYHOURS_MAX_BODY_BYTES !== undefined && Number.isFinite(max) && max > 0) out.maxBodyBytes = max
-  if (env.DRYHOURS_CORS_ORIGINS) out.corsOrigins = env.DRYHOURS_CORS_ORIGINS.split(',').map((s) => s.trim())
-  return out
+  return { timeBudgetMs: 60_000, now: () => performance.now(), ...configFromVariables(env) }
 }
 
 export interface RunningServer {

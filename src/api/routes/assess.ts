@@ -5,14 +5,17 @@
  */
 import { type Context, Hono } from 'hono'
 import { z } from 'zod'
-import { assess } from '../../analysis/assess.ts'
+import { type AssessOptions, assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
 import { compare } from '../../analysis/compare.ts'
+import { parseMonthDay } from '../../analysis/local-time.ts'
+import { seasonDays } from '../../analysis/start-dates.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
+import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
 import { registerOperation } from '../operations.ts'
@@ -24,7 +27,7 @@ import {
   assessRequestFromJson,
   assessRequestFromQuery,
 } from '../schemas/assess.ts'
-import { decodeUploadText, readUpload, type UploadedFile } from '../upload.ts'
+import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 
 const outputQuerySchema = z.object({
@@ -49,9 +52,10 @@ async function parseRequest(c: Context): Promise<Parsed> {
   return { request: fromQuery, output: fromQuery.query, files: upload.files }
 }
 
-function readSite(file: UploadedFile, request: AssessRequest): WeatherReadResult {
+export function readSite(file: UploadedFile, request: AssessRequest, config: ApiConfig): WeatherReadResult {
+  const text = checkedUploadText(file, config)
   try {
-    const result = readWeather(decodeUploadText(file.bytes), request.weather)
+    const result = readWeather(text, request.weather)
     if (result.series.site.name.trim() === '') result.series.site.name = file.name
     return result
   } catch (e) {
@@ -60,11 +64,53 @@ function readSite(file: UploadedFile, request: AssessRequest): WeatherReadResult
   }
 }
 
-function runEngine<T>(fn: () => T): T {
+class TimeBudgetExceeded extends Error {}
+
+/**
+ * Simulated batch-hours of a request: (season start dates + the 24 monthly heat batches) × years ×
+ * maximum batch length [h], summed over the sites. Refused above `config.maxBatchHours` before any work.
+ */
+export function estimatedBatchHours(options: AssessOptions, seriesList: HourlySeries[]): number {
+  const start = parseMonthDay(options.seasonStart ?? '01-01', 'season start')
+  const end = parseMonthDay(options.seasonEnd ?? '12-31', 'season end')
+  const step = options.startStepDays ?? (options.seasonStart || options.seasonEnd ? 1 : 7)
+  const starts = seasonDays(start, end, step).length + 24
+  const maxHours = (options.maxDays ?? 60) * 24
+  return seriesList.reduce((sum, s) => sum + starts * Math.max(1, Math.ceil(s.hours / 8766)) * maxHours, 0)
+}
+
+function checkWork(options: AssessOptions, seriesList: HourlySeries[], config: ApiConfig): void {
+  const work = runEngine(() => estimatedBatchHours(options, seriesList), config)
+  if (work > config.maxBatchHours) {
+    throw new ApiProblem(
+      422,
+      `this request would simulate about ${(work / 1e6).toFixed(1)} million batch-hours (start dates × years × maximum batch length), more than the limit of ${(config.maxBatchHours / 1e6).toFixed(1)} million: use a larger start-date step (startStepDays), a shorter season or maxDays, fewer years per file, or fewer sites per request`,
+      [{ path: 'options', message: 'too much work for one request' }],
+    )
+  }
+}
+
+/** Run the engine; RangeError → 422; the wall-clock budget (when the entry point gives a clock) → 422. */
+function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig): T {
+  const now = config?.now
+  const budget = config?.timeBudgetMs ?? 0
+  const started = now ? now() : 0
+  const onProgress =
+    now && budget > 0
+      ? () => {
+          if (now() - started > budget) throw new TimeBudgetExceeded()
+        }
+      : undefined
   try {
-    return fn()
+    return fn(onProgress)
   } catch (e) {
     if (e instanceof RangeError) throw new ApiProblem(422, e.message)
+    if (e instanceof TimeBudgetExceeded) {
+      throw new ApiProblem(
+        422,
+        `the assessment took longer than this server's budget of ${budget / 1000} s; use a larger start-date step, a shorter season or fewer years per file`,
+      )
+    }
     throw e
   }
 }
@@ -76,7 +122,7 @@ function csvResponse(c: Context, text: string): Response {
   })
 }
 
-export function assessRouter(_config: ApiConfig): Hono {
+export function assessRouter(config: ApiConfig): Hono {
   return new Hono().post('/', async (c) => {
     const { request, output, files } = await parseRequest(c)
     if (files.length !== 1) {
@@ -86,8 +132,12 @@ export function assessRouter(_config: ApiConfig): Hono {
         [{ path: 'file', message: 'one file part expected' }],
       )
     }
-    const read = readSite(files[0], request)
-    const assessment: Assessment = runEngine(() => assess(read.series, request.options))
+    const read = readSite(files[0], request, config)
+    checkWork(request.options, [read.series], config)
+    const assessment: Assessment = runEngine(
+      (onProgress) => assess(read.series, { ...request.options, onProgress }),
+      config,
+    )
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (output.format === 'html') {
       return c.html(
@@ -116,7 +166,7 @@ export function assessRouter(_config: ApiConfig): Hono {
   })
 }
 
-export function compareRouter(_config: ApiConfig): Hono {
+export function compareRouter(config: ApiConfig): Hono {
   return new Hono().post('/', async (c) => {
     const { request, output, files } = await parseRequest(c)
     if (files.length < 2) {
@@ -126,12 +176,25 @@ export function compareRouter(_config: ApiConfig): Hono {
         [{ path: 'file', message: 'two or more file parts expected' }],
       )
     }
-    const reads = files.map((f) => readSite(f, request))
-    const comparison = runEngine(() =>
-      compare(
-        reads.map((r) => r.series),
-        { ...request.options, criterion: request.criterion, labels: files.map((f) => f.name) },
-      ),
+    if (files.length > config.maxSites) {
+      throw new ApiProblem(
+        413,
+        `at most ${config.maxSites} sites per comparison, got ${files.length}; compare them in groups`,
+      )
+    }
+    const reads = files.map((f) => readSite(f, request, config))
+    checkWork(
+      request.options,
+      reads.map((r) => r.series),
+      config,
+    )
+    const comparison = runEngine(
+      (onProgress) =>
+        compare(
+          reads.map((r) => r.series),
+          { ...request.options, onProgress, criterion: request.criterion, labels: files.map((f) => f.name) },
+        ),
+      config,
     )
     if (output.format === 'html') {
       return c.html(

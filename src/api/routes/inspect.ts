@@ -6,31 +6,33 @@ import { Hono } from 'hono'
 import { inspectJson } from '../../report/inspect-json.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import type { ApiConfig } from '../config.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
-import { decodeUploadText, readUpload } from '../upload.ts'
+import { checkedUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { validWeatherOptions, weatherOptionsFromQuery, weatherQuerySchema } from '../weather-options.ts'
 
-export const inspectRouter = new Hono().post('/', async (c) => {
-  const upload = await readUpload(c, { defaultName: 'weather file' })
-  const options =
-    upload.options !== undefined
-      ? validWeatherOptions(upload.options, 'options')
-      : weatherOptionsFromQuery(parseOrProblem(weatherQuerySchema, upload.query))
-  if (upload.files.length !== 1) {
-    throw new ApiProblem(400, `send exactly one weather file, got ${upload.files.length}`, [
-      { path: 'file', message: 'one file part expected' },
-    ])
-  }
-  const text = decodeUploadText(upload.files[0].bytes)
-  try {
-    return c.json(inspectJson(readWeather(text, options)))
-  } catch (e) {
-    if (e instanceof WeatherInputError) throw new ApiProblem(422, e.message)
-    throw e
-  }
-})
+export const inspectRouter = (config: ApiConfig) =>
+  new Hono().post('/', async (c) => {
+    const upload = await readUpload(c, { defaultName: 'weather file' })
+    const options =
+      upload.options !== undefined
+        ? validWeatherOptions(upload.options, 'options')
+        : weatherOptionsFromQuery(parseOrProblem(weatherQuerySchema, upload.query))
+    if (upload.files.length !== 1) {
+      throw new ApiProblem(400, `send exactly one weather file, got ${upload.files.length}`, [
+        { path: 'file', message: 'one file part expected' },
+      ])
+    }
+    const text = checkedUploadText(upload.files[0], config)
+    try {
+      return c.json(inspectJson(readWeather(text, options)))
+    } catch (e) {
+      if (e instanceof WeatherInputError) throw new ApiProblem(422, e.message)
+      throw e
+    }
+  })
 
 registerOperation({
   method: 'post',
