@@ -6,9 +6,11 @@
  * at or above the boiling point at that pressure) gives NaN in every output for that hour.
  *
  * Speed: pws at the dry bulb comes from the interpolated table of eq 6 (src/physics/saturation-table.ts,
- * within 1e-9 relative, so W, h and density agree with airState to about 1e-9 relative), one logarithm
- * per hour starts the dew point, and Ws at the dry bulb sharpens the wet-bulb start value; see
- * bench/sections/moist-air.ts.
+ * within 1e-9 relative, so W, h and density agree with airState to about 1e-9 relative), the dew point
+ * comes from the inverse table after one logarithm (within 1e-9 °C), Ws at the dry bulb sharpens the
+ * wet-bulb start value, and the wet-wick wet bulb (dew point at or above 0.01 °C, most hours) is
+ * iterated inline in the hour loop; other hours go through wetBulbWithDewPointC. Measured against
+ * psychrolib in bench/sections/moist-air.ts (`npm run bench`).
  */
 import {
   DRY_BULB_MAX_C,
