@@ -73,20 +73,22 @@ export function deficitToSaturationKgPerKg(dryBulbC: number, w: number, pressure
  * enthalpy) until its RH equals `rhFraction`; Newton on f(T) = pw(W(T)) − φ·pws(T), W(T) = (h − 1.006T)/
  * (2501 + 1.86T). Returns `w` when the air is already at or above that RH. Tolerance
  * {@link ADIABATIC_TOLERANCE_C}, at most {@link ADIABATIC_MAX_ITERATIONS} steps (then the last iterate,
- * which is within the bracket).
+ * which is within the bracket). `startC`, when given inside (T − 80, T), is the first iterate.
  */
 export function adiabaticHumidityRatioAtRh(
   dryBulbC: number,
   w: number,
   pressureKpa: number,
   rhFraction: number,
+  startC?: number,
 ): number {
   const h = 1.006 * dryBulbC + w * (2501 + 1.86 * dryBulbC)
   const pw0 = (pressureKpa * w) / (MOLAR_MASS_RATIO_WATER_AIR + w)
   if (pw0 >= rhFraction * Math.exp(lnSaturationPressureLiquidPa(dryBulbC + KELVIN_OFFSET)) * 1e-3) return w
-  let t = dryBulbC
   let lo = dryBulbC - 80
   let hi = dryBulbC
+  // Start at the dry bulb, or at a caller's guess inside the bracket (e.g. the previous hour's end point).
+  let t = startC !== undefined && startC > lo && startC < hi ? startC : dryBulbC
   for (let i = 0; i < ADIABATIC_MAX_ITERATIONS; i++) {
     const denom = 2501 + 1.86 * t
     const wt = (h - 1.006 * t) / denom

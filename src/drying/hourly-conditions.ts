@@ -69,6 +69,11 @@ export interface HourlyConditionsOptions {
   maxProductTempC: number | null
   /** Sun and radiation columns of the series, when already computed (shared between methods). */
   solar?: SolarColumns
+  /**
+   * false: skip the usable-hour test (status stays 0 and the deficit to target NaN), for conditions used
+   * only as the supplemental-heat backup, whose verdict nobody reads. Default true.
+   */
+  verdict?: boolean
 }
 
 /** Per-hour sun and radiation columns of a series, independent of the method. */
@@ -231,6 +236,9 @@ export function computeHourlyConditions(
   let assumedIrradianceHours = 0
   let assumedWindHours = 0
   let anyRain = false
+  // Previous hour's cooling along the adiabatic path: the start of this hour's solver (hours are alike).
+  let satDepressionK = 0
+  let targetDepressionK = 0
 
   for (let i = 0; i < n; i++) {
     const t = series.dryBulbC[i]
@@ -369,22 +377,31 @@ export function computeHourlyConditions(
     // Deficits are taken for air at the product temperature (it is what touches the product).
     // Deficit to saturation: the forced-air constant-rate limit. Exposed methods use the Penman rate as
     // their limit and skip it (NaN), which saves a solver per hour.
-    const dSat = exposed
-      ? Number.NaN
-      : rhSurface >= 100
-        ? 0
-        : adiabaticHumidityRatioAtRh(tProduct, w, p, 1) - w
+    let dSat = Number.NaN
+    if (!exposed) {
+      dSat =
+        rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1, tProduct - satDepressionK) - w
+      if (dSat > 0) satDepressionK = tProduct - adiabaticEndC(tProduct, w, dSat)
+    }
     deficitToSaturationGPerKg[i] = 1000 * dSat
-    const erhTarget = product.erhPct(tProduct, targetDb)
-    const dTarget =
-      rhSurface >= erhTarget ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, erhTarget / 100) - w
+    const verdict = options.verdict !== false
+    const erhTarget = verdict ? product.erhPct(tProduct, targetDb) : Number.NaN
+    let dTarget = Number.NaN
+    if (verdict) {
+      dTarget =
+        rhSurface >= erhTarget
+          ? 0
+          : adiabaticHumidityRatioAtRh(tProduct, w, p, erhTarget / 100, tProduct - targetDepressionK) - w
+      if (dTarget > 0) targetDepressionK = tProduct - adiabaticEndC(tProduct, w, dTarget)
+    }
     deficitToTargetGPerKg[i] = 1000 * dTarget
     evaporationKgPerM2H[i] = evaporation
     capDbPerH[i] = exposed ? Math.max(0, evaporation) * exposedCapFactor : dSat * forcedCapFactor
 
     // Usable-hour test, reasons in the order of HourStatus.
     let s: number = HourStatus.usable
-    if (pausedByNight) s = HourStatus.nightWithoutDrying
+    if (!verdict) s = HourStatus.usable
+    else if (pausedByNight) s = HourStatus.nightWithoutDrying
     else if (coveredForRain || hourMode === HourMode.rainExposed) s = HourStatus.rain
     else if (tProduct < thresholds.minProductTempC) s = HourStatus.tooCold
     else if (maxT !== null && tProduct > maxT) s = HourStatus.aboveProductTempLimit
@@ -420,6 +437,13 @@ export function computeHourlyConditions(
     assumedWindHours,
     noRainData: !anyRain,
   }
+}
+
+/** Temperature [°C] at the end of the adiabatic (constant-enthalpy) path from (tC, w) after taking up dW. */
+function adiabaticEndC(tC: number, w: number, dW: number): number {
+  const h = 1.006 * tC + w * (2501 + 1.86 * tC)
+  const wEnd = w + dW
+  return (h - 2501 * wEnd) / (1.006 + 1.86 * wEnd)
 }
 
 /**
