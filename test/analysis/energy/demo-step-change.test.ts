@@ -73,7 +73,7 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
     const bad: string[] = []
     const walk = (v: unknown, path: string) => {
       if (typeof v === 'number' && !Number.isFinite(v)) bad.push(path)
-      else if (Array.isArray(v)) v.forEach((x, i) => walk(x, `${path}[${i}]`))
+      else if (Array.isArray(v)) for (const [i, x] of v.entries()) walk(x, `${path}[${i}]`)
       else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) walk(x, `${path}.${k}`)
     }
     walk(assessment, '$')
