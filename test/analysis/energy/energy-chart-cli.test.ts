@@ -52,6 +52,31 @@ describe('dryhours energy-chart', () => {
     expect(t.written['e.html']).toContain('first 25 batches')
     expect(t.err.join('')).toBe('wrote e.html\n')
   })
+  it('--weather joins outside air for a log without ambient columns', async () => {
+    const t0 = Date.UTC(2026, 8, 1)
+    const weather = ['time,temperature_c,relative_humidity_pct']
+    for (let h = 0; h < 24 * 20; h++) {
+      weather.push(
+        `${new Date(t0 + h * 3_600_000).toISOString().slice(0, 16)}Z,${(15 + 5 * Math.sin(h / 3.8)).toFixed(1)},${(60 + 20 * Math.cos(h / 5.1)).toFixed(0)}`,
+      )
+    }
+    const log = ['start,duration_h,fresh_mass_kg,final_mass_kg,energy_kwh']
+    for (let d = 1; d <= 12; d++) {
+      log.push(
+        `2026-09-${String(d).padStart(2, '0')}T08:00Z,3,${9000 + 300 * (d % 4)},${8100 + 250 * (d % 4)},${1100 + 40 * ((d * 3) % 7)}`,
+      )
+    }
+    const t = io({ 'log.csv': log.join('\n'), 'w.csv': weather.join('\n') })
+    expect(
+      await runCli(['energy-chart', 'log.csv', '--weather', 'w.csv', '--baseline', '8', '--json'], t.cli),
+    ).toBe(0)
+    const a = JSON.parse(t.out.join('')) as EnergyChartAssessment
+    expect(a.batches.map((b) => b.ambient?.source)).toEqual(new Array(12).fill('weather'))
+    expect(a.assumptions.some((s) => /mean of the batch's hours/.test(s))).toBe(true)
+    const bad = io({ 'log.csv': log.join('\n'), 'w.csv': 'nothing,here\n1,2\n' })
+    expect(await runCli(['energy-chart', 'log.csv', '--weather', 'w.csv'], bad.cli)).toBe(2)
+    expect(bad.err.join('')).toMatch(/^dryhours energy-chart: w\.csv: /)
+  })
   it('bad input is one line on stderr with exit code 2', async () => {
     const cases: [string[], RegExp][] = [
       [['energy-chart'], /give exactly one batch log file/],
