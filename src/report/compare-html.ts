@@ -125,6 +125,16 @@ export function renderComparisonArticle(sites: ComparedSite[], o: Pick<ReportOpt
         : '.'),
     `Ranking criterion: ${RANKING_CRITERION}.`,
   ]
+  const differs = (key: (a: Assessment) => string) => new Set(sites.map((x) => key(x.assessment))).size > 1
+  if (
+    differs((a) => a.product.id) ||
+    differs((a) => a.method.kind) ||
+    differs((a) => `${a.season.start}/${a.season.end}/${a.deadlineDays}`)
+  ) {
+    sentences.push(
+      'Caution: the sites were assessed for different products, methods, seasons or deadlines, so the ranking is not like for like.',
+    )
+  }
   const usableAlt =
     `Median usable drying hours per month for ${names.length} sites (${names.join(', ')}); whiskers P10 to P90. ` +
     names

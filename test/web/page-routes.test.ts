@@ -236,3 +236,21 @@ describe('demo sites supplied by the entry point', () => {
     expect(await res.text()).toContain('demo: unknown demo file &quot;../package.json&quot;')
   })
 })
+
+describe('several files', () => {
+  it('answer with the sites side by side and each site report', async () => {
+    const f = form({ ...BASE, format: 'bundle' }, [
+      { name: 'first site.csv', bytes: tamarel },
+      { name: 'second site.csv', bytes: tamarel },
+    ])
+    const res = await app.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { article: string; csv: string; json: string }
+    expect(b.article).toContain('data-report="comparison"')
+    expect((b.article.match(/data-report="assessment"/g) ?? []).length).toBe(2)
+    expect(b.article).toContain('first site')
+    expect(b.article).toContain('second site')
+    expect(b.csv.startsWith('Sites ranked\r\n')).toBe(true)
+    expect((JSON.parse(b.json) as unknown[]).length).toBe(2)
+  }, 60_000)
+})
