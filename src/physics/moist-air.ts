@@ -367,7 +367,9 @@ export function wetBulbWithDewPointC(
     return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start), dew)
   }
   const lo = Math.max(dew - 1, SATURATION_MIN_C)
-  const wsIce = saturationHumidityRatio(t, pressureKpa)
+  // Ws over ice at the dry bulb (eq 5 via the table, 1e-9 relative; pws ≪ p below 0 °C).
+  const pwsIce = saturationPressureFromTableKpa(t, true)
+  const wsIce = (MOLAR_MASS_RATIO_WATER_AIR * pwsIce) / (pressureKpa - pwsIce)
   if (w >= wsIce) return t // supersaturated over ice: no iced-wick root at or below the dry bulb
   const start = chordStartC(t, w, false, dew, w, t, wsIce)
   // The root is at or above the dew/frost point (ASHRAE eq 35 at t* = dew gives W* ≤ W), so clamping
