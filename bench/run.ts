@@ -2,12 +2,12 @@
  * Benchmark runner: `npm run bench` (tsx bench/run.ts [section-id …]).
  * Runs every section listed in {@link sections} (or only the ids given on the command line), prints
  * one table per section and writes every figure, with a description of the machine, to
- * bench/latest.json. Timings are not tests: they depend on the machine and its load.
+ * bench/latest.json (with ids given, the other sections' figures of the previous run are kept). Timings are not tests: they depend on the machine and its load.
  *
  * To add a section: write `bench/sections/<id>.ts` exporting `section: BenchSection` (see
  * bench/section.ts) and add one line to the array below.
  */
-import { writeFileSync } from 'node:fs'
+import { existsSync, readFileSync, writeFileSync } from 'node:fs'
 import { cpus, platform, release, totalmem, type } from 'node:os'
 import { dirname, join } from 'node:path'
 import { fileURLToPath } from 'node:url'
@@ -53,8 +53,18 @@ async function main(wanted: string[]): Promise<number> {
   const result: {
     date: string
     machine: ReturnType<typeof machine>
-    sections: Record<string, { title: string; seconds: number; figures: BenchFigure[] }>
+    sections: Record<string, { title: string; date: string; seconds: number; figures: BenchFigure[] }>
   } = { date: new Date().toISOString(), machine: machine(), sections: {} }
+  const out = join(dirname(fileURLToPath(import.meta.url)), 'latest.json')
+  if (wanted.length > 0 && existsSync(out)) {
+    // Running some sections only: keep the other sections' figures from the previous run (each
+    // section carries its own date).
+    try {
+      result.sections = JSON.parse(readFileSync(out, 'utf8')).sections ?? {}
+    } catch {
+      result.sections = {}
+    }
+  }
   const m = result.machine
   console.log(`dryhours benchmark, ${m.os}, ${m.cpuModel} × ${m.cores}, Node ${m.node}`)
   let failures = 0
@@ -66,13 +76,12 @@ async function main(wanted: string[]): Promise<number> {
       const figures = await section.run()
       const seconds = (performance.now() - t0) / 1000
       printTable(section, figures, seconds)
-      result.sections[section.id] = { title: section.title, seconds, figures }
+      result.sections[section.id] = { title: section.title, date: new Date().toISOString(), seconds, figures }
     } catch (e) {
       failures++
       console.error(`\n${section.id}: failed: ${(e as Error).stack ?? String(e)}`)
     }
   }
-  const out = join(dirname(fileURLToPath(import.meta.url)), 'latest.json')
   writeFileSync(out, `${JSON.stringify(result, null, 2)}\n`)
   console.log(`\nwrote ${out}`)
   return failures > 0 ? 1 : 0
