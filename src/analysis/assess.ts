@@ -144,7 +144,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   progress?.({ stage: 'hourly-conditions', done: 0, total: 2 })
   const primary = computeHourlyConditions(series, method, product, conditionOptions)
   const backupMethod: HeatedMethod =
-    method.kind === 'heated' ? method : heatedBackup(options.backupHeater, product.erhPct(25, targetDb))
+    method.kind === 'heated' ? method : heatedBackup(options.backupHeater, product.erhPct(25, targetDb), maxT)
   const backup: HourlyConditions =
     method.kind === 'heated'
       ? primary
@@ -292,15 +292,26 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   }
 }
 
+/** Lowest air temperature of the backup heater when the user gives none [°C] (assumption, from memory:
+ * batch dryers run fruit at 45–65 °C and grain at 45–80 °C; 45 °C is the low end of both). */
+export const BACKUP_MIN_AIR_C = 45
+
 /**
  * The backup heater: the user's values over `heatedSchema` defaults; its target RH is at most 80 % of the
- * product's equilibrium RH at target (at 25 °C), so heated air always dries toward the target.
+ * product's equilibrium RH at target (at 25 °C), so heated air always dries toward the target, and its air
+ * is at least {@link BACKUP_MIN_AIR_C} (or the product's limit when lower) unless the user says otherwise.
  */
-function heatedBackup(given: AssessOptions['backupHeater'], targetErhPct: number): HeatedMethod {
+function heatedBackup(
+  given: AssessOptions['backupHeater'],
+  targetErhPct: number,
+  maxProductTempC: number | null,
+): HeatedMethod {
   const base = heatedSchema.parse({ kind: 'heated', ...(given ?? {}) })
   if (base.setPointC === undefined && given?.targetRhPct === undefined) {
     base.targetRhPct = Math.min(base.targetRhPct, 0.8 * targetErhPct)
   }
+  if (given?.minAirC === undefined)
+    base.minAirC = Math.min(BACKUP_MIN_AIR_C, maxProductTempC ?? BACKUP_MIN_AIR_C)
   return base
 }
 

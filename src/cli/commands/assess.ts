@@ -24,6 +24,9 @@ Season and batches:
   --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every 7 days)
   --step-days <n>  --start-hour <0–23>  --deadline-days <n> (default 14)  --max-days <n> (default 60)
   --batch-kg <kg> (default 1000)
+Usable-hour thresholds (stated in the assumptions):
+  --min-temp <°C> (default 5; use 0 or lower for grain)  --min-deficit <g/kg> (default 0.2)
+  --rain-mm <mm/h> (default 0.2)  --night-cooling <K> (default 2)
 Heat and fuel:
   --fuel <${FUEL_IDS.join('|')}>  --price <fuel>=<price per unit> (repeatable; defaults are examples)
 Weather file:
@@ -70,6 +73,10 @@ export const ENGINE_PARSE_OPTIONS = {
   'deadline-days': { type: 'string' },
   'max-days': { type: 'string' },
   'batch-kg': { type: 'string' },
+  'min-temp': { type: 'string' },
+  'min-deficit': { type: 'string' },
+  'rain-mm': { type: 'string' },
+  'night-cooling': { type: 'string' },
   lat: { type: 'string' },
   lon: { type: 'string' },
   elevation: { type: 'string' },
@@ -163,9 +170,19 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     const price = numberOption('price', m[2]) as number
     fuelPrices[m[1] as FuelId] = price
   }
+  const thresholds: Record<string, number> = {}
+  const setThreshold = (key: string, option: string): void => {
+    const v = num(option)
+    if (v !== undefined) thresholds[key] = v
+  }
+  setThreshold('minProductTempC', 'min-temp')
+  setThreshold('minDeficitGPerKg', 'min-deficit')
+  setThreshold('rainMm', 'rain-mm')
+  setThreshold('nightSurfaceCoolingK', 'night-cooling')
   return {
     product,
     method: method as AssessOptions['method'],
+    thresholds,
     targetWbPct: num('target-wb'),
     initialWbPct: num('initial-wb'),
     thicknessMm: num('thickness'),
