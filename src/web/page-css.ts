@@ -53,6 +53,7 @@ progress{width:14rem;height:.8rem;accent-color:#004488}
 .downloads a{display:inline-block;padding:.35rem .9rem;border:1px solid #004488;border-radius:6px;color:#004488;font-weight:600;text-decoration:none}
 .downloads a:hover{background:#eaf1f8}
 .result .dryhours-report{background:#fff;border-radius:10px;box-shadow:0 1px 3px rgba(0,0,0,.12);margin-bottom:1.2rem;max-width:none;padding:1.2rem 1.5rem 1.5rem}
+.again{margin:-.4rem 0 1.2rem;font-weight:600}.again a{color:#004488}
 .page-foot{color:#555;font-size:.85rem;padding-bottom:2rem}
 @media print{.masthead,#assess-form,.downloads,.page-foot,.skip{display:none}body{background:#fff}.result .dryhours-report{box-shadow:none;padding:0}}
 ${reportCss('auto')}

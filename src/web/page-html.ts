@@ -112,6 +112,7 @@ export function renderPage(state: PageState = {}): string {
 <a class="skip" href="#main">Skip to the form</a>
 <header class="masthead"><div class="wrap"><p class="brand">dryhours</p><p class="tagline">Can this site’s weather dry this crop, when, how fast, and with how much heat?</p><nav><a href="/docs">API</a></nav></div></header>
 <main id="main" class="wrap">
+${state.result ? `<div id="result-first" class="result">${state.result}<p class="again no-print"><a href="#assess-form">Change the inputs and assess again ↓</a></p></div>` : ''}
 <form id="assess-form" class="card" method="post" action="/report" enctype="multipart/form-data" novalidate>
 ${state.error ? `<div class="error" id="form-error" role="alert"><strong>Please check:</strong> ${escapeHtml(state.error.message)}<br><small>Browsers do not keep a chosen file across pages: choose the weather file again before you assess.</small></div>` : '<div class="error" id="form-error" role="alert" hidden></div>'}
 <fieldset class="step"><legend><span class="n">1</span> Weather</legend>
@@ -163,7 +164,7 @@ ${field('heaterEfficiencyPct', 'Heater efficiency [%]', v, { inputmode: 'decimal
 </fieldset>
 </form>
 <div id="downloads" class="downloads" hidden></div>
-<div id="result" class="result">${state.result ?? ''}</div>
+<div id="result" class="result"></div>
 </main>
 <footer class="wrap page-foot">dryhours: open methods, named sources. Results are estimates from the weather file; see the cautions in each report.</footer>
 </body>

@@ -112,7 +112,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     (x, y) => ((y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x),
     a.monthly[0],
   )
-  if (top && finite(top.usableHours.median)) {
+  if (top && finite(top.usableHours.median) && a.method.kind !== 'heated') {
     out.push(
       `The air dries the product most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} usable hours ${median}` +
         (typical || !finite(top.usableHours.p10)
@@ -156,7 +156,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
       )
     } else {
       out.push(
-        `To finish by the deadline, a backup heater adds about ${e(heat.median)} to the air in a median batch (1 in 10 batches: ${e(heat.p90)}), ${e(fuelHeat.median)} of fuel heat${costText}.`,
+        `To finish by the deadline, ${a.method.kind === 'heated' ? "the dryer's heater" : 'a backup heater'} adds about ${e(heat.median)} to the air in a median batch (1 in 10 batches: ${e(heat.p90)}), ${e(fuelHeat.median)} of fuel heat${costText}.`,
       )
     }
   }
