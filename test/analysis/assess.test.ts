@@ -196,3 +196,24 @@ describe('common practice, no source: sun drying of fruit wants roughly ≥ 30 �
     expect(hotDryHoursPerDayInJuly('humidValley')).toBeLessThan(hotDryHoursPerDayInJuly('dryUpland'))
   })
 })
+
+describe('hourly detail', () => {
+  it('lists both deficits, evaporation, EMC and the verdict; deficit to target ≤ deficit to saturation', async () => {
+    const { hourlyDetail } = await import('../../src/analysis/hourly-detail.ts')
+    const s = demoSeries('dryUpland')
+    const rows = hourlyDetail(s, summerFruit, 24 * 200, 48)
+    expect(rows).toHaveLength(48)
+    let usable = 0
+    for (const r of rows) {
+      expect(r.deficitToSaturationGPerKg!).toBeGreaterThanOrEqual(r.deficitToTargetGPerKg! - 1e-9)
+      if (r.usable) {
+        usable++
+        expect(r.reason).toBe('usable')
+        expect(r.deficitToTargetGPerKg!).toBeGreaterThanOrEqual(0.2)
+      }
+    }
+    expect(usable).toBeGreaterThan(10)
+    expect(rows.some((r) => r.reason === 'nightWithoutDrying')).toBe(true)
+    expect(() => hourlyDetail(s, summerFruit, -1, 10)).toThrow(/first hour/)
+  })
+})
