@@ -158,9 +158,10 @@ export function faultyLoggerCsv(site: DemoSite, hours: DemoHours, year: number):
     note: '07:00 row written after 09:00',
   })
 
+  // No comma inside the cell, so the header splits into exactly one cell per column.
   const header = SI_HEADER.replace(
     'time (UTC)',
-    `time (local standard time, UTC${off >= 0 ? '+' : '-'}${pad2(Math.abs(off))}:00)`,
+    `time (local standard time UTC${off >= 0 ? '+' : '-'}${pad2(Math.abs(off))}:00)`,
   )
   const lineOf = new Map<string, number[]>()
   rows.forEach((r, i) => {

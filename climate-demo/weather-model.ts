@@ -14,7 +14,8 @@
  *   from the minimum near sunrise (05:30 solar) to the maximum at 14:30 solar and a half cosine falling
  *   back (a common two-part form, no particular source); the range shrinks under cloud;
  * - dew point = monthly climatology + anomaly (partly tied to the temperature anomaly) + wet-day rise,
- *   close to saturation in rain, eased smoothly below the dry bulb (never above it); RH from the two by the saturation curve
+ *   raised over a few hours of rain toward a varying near-saturation value (at most a few K per hour),
+ *   eased smoothly below the dry bulb (never above it); RH from the two by the saturation curve
  *   over liquid water (ASHRAE HOF 2017 ch. 1 eq 6, `saturationVaporPressureLiquidKpa`);
  * - GHI = hour-mean Haurwitz clear sky × Kasten–Czeplak cloud transmission (see sky.ts);
  * - wind: Weibull by a Gaussian copula on an hourly AR(1), scaled by a diurnal cycle;
@@ -84,13 +85,51 @@ function diurnalShape(h: number): number {
 const SOFT_DEPRESSION_K = 1.5
 
 /**
- * Dew-point depression after a smooth cap: unchanged above {@link SOFT_DEPRESSION_K}, below it
+ * Dew-point depression after a smooth cap of scale `scaleK`: unchanged above it, below it
  * d' = D·exp((d − D)/D), which is continuous with slope 1 at D and stays above 0, so air approaches
  * but rarely reaches saturation (fog and rain hours still reach 99–100 % after rounding).
  */
-export function softDewPointDepressionK(depressionK: number): number {
-  if (depressionK >= SOFT_DEPRESSION_K) return depressionK
-  return SOFT_DEPRESSION_K * Math.exp((depressionK - SOFT_DEPRESSION_K) / SOFT_DEPRESSION_K)
+export function softDewPointDepressionK(depressionK: number, scaleK = SOFT_DEPRESSION_K): number {
+  if (!(scaleK > 0)) throw new RangeError(`scaleK must be above 0 K, got ${scaleK}`)
+  if (depressionK >= scaleK) return depressionK
+  return scaleK * Math.exp((depressionK - scaleK) / scaleK)
+}
+
+/**
+ * Hour-to-hour variation of the cap scale: D·exp(SD·x) for an hourly AR(1) x of unit variance, so
+ * near-saturated hours do not sit at one rounded RH for long (no source; demo choice).
+ */
+const SOFT_SCALE_LOG_SD = 0.35
+const SOFT_SCALE_PHI = 0.6
+
+/** Share of the rain-hour wetting gained per rain hour (no source; demo choice). */
+const RAIN_WETTING_PER_HOUR = 0.35
+/** Share of the wetting kept per dry hour after rain (no source; demo choice). */
+const RAIN_DRYING_KEEP_PER_HOUR = 0.7
+/** Largest change of the rain-driven dew-point excess per hour [K] (no source; demo choice). */
+const RAIN_DEW_POINT_STEP_K = 2.5
+/**
+ * Mean, standard deviation and hourly persistence of the rain-hour dew-point depression [K] before the
+ * smooth cap ({@link softDewPointDepressionK}); below zero the cap brings air close to, never at,
+ * saturation, so rain hours spread over about 93–99 % RH instead of one value (no source; demo choice).
+ */
+const RAIN_DEPRESSION_MEAN_K = -0.6
+const RAIN_DEPRESSION_SD_K = 0.9
+const RAIN_DEPRESSION_PHI = 0.8
+
+/**
+ * Rain wetness per hour in [0, 1]: rises by {@link RAIN_WETTING_PER_HOUR} each rain hour (so a long
+ * event saturates the air over about three hours) and decays by {@link RAIN_DRYING_KEEP_PER_HOUR}
+ * each hour after it.
+ */
+export function rainWetness(rainMm: Float64Array): Float64Array {
+  const out = new Float64Array(rainMm.length)
+  let w = 0
+  for (let k = 0; k < rainMm.length; k++) {
+    w = rainMm[k] > 0 ? Math.min(1, w + RAIN_WETTING_PER_HOUR) : w * RAIN_DRYING_KEEP_PER_HOUR
+    out[k] = w
+  }
+  return out
 }
 
 const logit = (p: number): number => Math.log(p / (1 - p))
@@ -212,7 +251,11 @@ export function generateSiteHours(site: DemoSite, o: GenerateOptions): DemoHours
   const dNoise = hourly('dew-point-hourly', 0.85, 0.5)
   const cNoise = hourly('cloud-hourly', 0.8, 0.12)
   const wNoise = hourly('wind-hourly', 0.85, 1)
+  const rainDepressionNoise = hourly('rain-depression-hourly', RAIN_DEPRESSION_PHI, RAIN_DEPRESSION_SD_K)
+  const softScale = hourly('soft-cap-scale-hourly', SOFT_SCALE_PHI, SOFT_SCALE_LOG_SD)
+  const wetness = rainWetness(rain)
   const p0 = standardPressureKpaAtElevation(site.elevationM)
+  let rainExcessK = 0
   for (let k = 0; k < n; k++) {
     const startMs = o.firstStartUtcMs + k * HOUR_MS
     const midMs = startMs + HOUR_MS / 2
@@ -226,10 +269,20 @@ export function generateSiteHours(site: DemoSite, o: GenerateOptions): DemoHours
     let t =
       atTime(days.meanC, firstDay, solar) +
       0.5 * atTime(days.rangeK, firstDay, solar) * diurnalShape(solarHour)
-    t += tNoise[k] - (raining ? 0.4 * site.rainCoolingK : 0)
-    let td = atTime(days.dewC, firstDay, solar) + dNoise[k]
-    if (raining) td = Math.max(td, t - 0.5)
-    td = t - softDewPointDepressionK(t - td)
+    t += tNoise[k] - wetness[k] * 0.4 * site.rainCoolingK
+    const tdBase = atTime(days.dewC, firstDay, solar) + dNoise[k]
+    // Rain moistens the air over hours: the dew point moves a `wetness` share of the way toward its
+    // rain-hour value (a varying depression, before the smooth cap below), by at most
+    // RAIN_DEW_POINT_STEP_K per hour up or down.
+    const rainTargetC = t - (RAIN_DEPRESSION_MEAN_K + rainDepressionNoise[k])
+    const excessTargetK = wetness[k] * Math.max(0, rainTargetC - tdBase)
+    rainExcessK = clamp(
+      excessTargetK,
+      rainExcessK - RAIN_DEW_POINT_STEP_K,
+      rainExcessK + RAIN_DEW_POINT_STEP_K,
+    )
+    let td =
+      t - softDewPointDepressionK(t - (tdBase + rainExcessK), SOFT_DEPRESSION_K * Math.exp(softScale[k]))
     // Round as the files will carry them, so RH agrees with the written dry bulb and dew point.
     t = Math.round(t * 10) / 10
     td = Math.round(td * 10) / 10

@@ -17,7 +17,12 @@ import {
   TAMAREL_LOWLAND,
 } from '../../climate-demo/sites.ts'
 import { haurwitzClearSkyGhiWm2, monthlyValue } from '../../climate-demo/sky.ts'
-import { type DemoHours, generateSiteHours } from '../../climate-demo/weather-model.ts'
+import {
+  type DemoHours,
+  generateSiteHours,
+  rainWetness,
+  softDewPointDepressionK,
+} from '../../climate-demo/weather-model.ts'
 
 const HOUR_MS = 3_600_000
 
@@ -48,6 +53,20 @@ describe('building blocks', () => {
     expect(monthlyValue(table, 15.5)).toBeCloseTo(0, 9) // mid-January
     expect(monthlyValue(table, 0)).toBeGreaterThan(0) // between mid-December (110) and mid-January (0)
     expect(monthlyValue(table, 0)).toBeCloseTo(110 * (15.5 / 31), 6)
+  })
+})
+
+describe('rain wetting and the near-saturation cap', () => {
+  it('wetness ramps over rain hours (0.35, 0.7, 1) and decays after (×0.7 per hour)', () => {
+    const w = rainWetness(Float64Array.from([0, 1, 1, 1, 1, 0, 0]))
+    const expected = [0, 0.35, 0.7, 1, 1, 0.7, 0.49]
+    for (const [i, x] of expected.entries()) expect(w[i]).toBeCloseTo(x, 12)
+  })
+  it('the cap is continuous at its scale, positive below it and rejects a scale ≤ 0', () => {
+    expect(softDewPointDepressionK(1.5 - 1e-9)).toBeCloseTo(1.5, 6)
+    expect(softDewPointDepressionK(-3)).toBeGreaterThan(0)
+    expect(softDewPointDepressionK(-3, 2)).toBeCloseTo(2 * Math.exp(-2.5), 12)
+    expect(() => softDewPointDepressionK(1, 0)).toThrow(/scaleK must be above 0/)
   })
 })
 
@@ -139,6 +158,44 @@ describe('plausibility of the invented climates (invented data, plausibility onl
   })
 })
 
+describe('hour-to-hour humidity (common practice, no source: what a reader QC calls a spike or a stuck sensor)', () => {
+  const sites = [ARDENTINE_UPLAND, QUILLOW_VALLEY, GULLHAVEN_COAST, TAMAREL_LOWLAND]
+  it('every site: the dew point changes by at most 4 K from one hour to the next, rain hours included', () => {
+    for (const site of sites) {
+      const h = hoursOf(site)
+      let maxStepK = 0
+      for (let k = 1; k < h.hours; k++) {
+        maxStepK = Math.max(maxStepK, Math.abs(h.dewPointC[k] - h.dewPointC[k - 1]))
+      }
+      expect(maxStepK, site.id).toBeLessThanOrEqual(4)
+    }
+  })
+  it('every site: whole-percent RH below 99 % never repeats for 10 hours or more', () => {
+    for (const site of sites) {
+      const h = hoursOf(site)
+      let longest = 0
+      let run = 1
+      for (let k = 1; k < h.hours; k++) {
+        const rh = Math.round(h.relativeHumidityPct[k])
+        run = rh === Math.round(h.relativeHumidityPct[k - 1]) ? run + 1 : 1
+        if (rh < 99) longest = Math.max(longest, run)
+      }
+      expect(longest, site.id).toBeLessThan(10)
+    }
+  })
+  it('coast: RH in long rain events spreads over several percent (no single capped value)', () => {
+    const h = hoursOf(GULLHAVEN_COAST)
+    const wet = rainWetness(h.rainMm)
+    const rh: number[] = []
+    for (let k = 0; k < h.hours; k++) if (wet[k] === 1) rh.push(Math.round(h.relativeHumidityPct[k]))
+    rh.sort((a, b) => a - b)
+    expect(rh.length).toBeGreaterThan(100)
+    expect(
+      rh[Math.floor(0.9 * (rh.length - 1))] - rh[Math.floor(0.1 * (rh.length - 1))],
+    ).toBeGreaterThanOrEqual(3)
+  })
+})
+
 describe('file formats', () => {
   it('EPW: 8 header lines, 35 fields, hour 1–24 ending, leap day kept, 8784 rows in 2024', () => {
     const h = siteHoursForYears(GULLHAVEN_COAST, 2024, 2024, DEMO_SEED)
@@ -165,6 +222,9 @@ describe('file formats', () => {
     const h = siteHoursForYears(TAMAREL_LOWLAND, 2023, 2023, DEMO_SEED)
     const f = faultyLoggerCsv(TAMAREL_LOWLAND, h, 2023)
     const lines = f.text.trimEnd().split('\n')
+    // RFC 4180: an unquoted header cell holds no comma, so the header has one cell per column.
+    expect(lines[0].split(',').length).toBe(8)
+    expect(lines[0].split(',')[0]).toBe('time (local standard time UTC+07:00)')
     expect(lines.length - 1).toBe(f.rows)
     expect(f.rows).toBe(8760 - 2 - 3 - 60 + 2) // gaps removed, two doubled hours added
     for (const fault of f.faults) {
