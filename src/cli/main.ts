@@ -16,8 +16,26 @@ ${commands.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`).join('\n')}
 `
 }
 
+/**
+ * `--tdb -5` → `--tdb=-5`: node:util parseArgs reads a value starting with '-' as an option, but negative
+ * temperatures, offsets and longitudes are everyday input.
+ */
+export function joinNegativeNumberValues(args: string[]): string[] {
+  const out: string[] = []
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i]
+    const next = args[i + 1]
+    if (/^--[a-z][a-z0-9-]*$/.test(a) && next !== undefined && /^-(\d|\.\d)/.test(next)) {
+      out.push(`${a}=${next}`)
+      i++
+    } else out.push(a)
+  }
+  return out
+}
+
 export async function runCli(argv: string[], io: CliIo): Promise<number> {
-  const [name, ...rest] = argv
+  const [name, ...rawRest] = argv
+  const rest = joinNegativeNumberValues(rawRest)
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
     io.stdout(usage())
     return name === undefined ? 2 : 0
@@ -35,7 +53,8 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
     return await command.run(rest, io)
   } catch (e) {
     if (e instanceof UsageError) {
-      io.stderr(`dryhours ${name}: ${e.message}\n`)
+      // One line: parseArgs messages carry a second line of advice that names its own syntax.
+      io.stderr(`dryhours ${name}: ${e.message.split('\n')[0].trim()}\n`)
       return 2
     }
     io.stderr(`dryhours ${name}: internal error: ${(e as Error).message ?? String(e)}\n`)

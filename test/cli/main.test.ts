@@ -37,3 +37,17 @@ describe('dryhours dispatch', () => {
     expect(f.out()).toContain(`dryhours ${name}`)
   })
 })
+
+describe('negative numbers and one-line errors', () => {
+  it('--tdb -5 is read as a value, not an option (dew points and winter air are negative)', async () => {
+    const f = fakeIo()
+    expect(await runCli(['air', '--tdb', '-5', '--rh', '80', '--json'], f.io)).toBe(0)
+    expect(JSON.parse(f.out()).dryBulbC).toBe(-5)
+  })
+  it('a parse error is one line on stderr with exit 2', async () => {
+    const f = fakeIo()
+    expect(await runCli(['air', '--tdb', '20', '--rh'], f.io)).toBe(2)
+    expect(f.err().trim().split('\n')).toHaveLength(1)
+    expect(f.err()).toContain('--rh')
+  })
+})
