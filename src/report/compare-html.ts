@@ -4,6 +4,7 @@
  * (usable hours, days to target, supplemental heat by month) with their tables, then each site's own
  * report. Ranking uses only figures already in each assessment; nothing is recomputed here.
  */
+import type { Comparison } from '../analysis/compare.ts'
 import type { Assessment } from './assessment-view.ts'
 import { siteDisplayName } from './assessment-view.ts'
 import { groupedBarsChart } from './charts/grouped-bars.ts'
@@ -66,8 +67,57 @@ export function rankSites(sites: ComparedSite[]): SiteRank[] {
   )
 }
 
-export function comparisonTable(sites: ComparedSite[], units: 'si' | 'us' = 'si'): ReportTable {
+/** The analysis ranking (`compare()` of analysis/), when the sites were compared there. */
+export type Ranking = Pick<Comparison, 'criterionDescription' | 'sites'>
+
+export interface RankRow {
+  name: string
+  meanProbabilityWithinDeadline: number | null
+  bestWindow: string | null
+  usableHoursSeasonP10: number | null
+  medianHeatKwhPerTonne: number | null
+}
+
+/** Rows in rank order: the analysis ranking when given, else {@link rankSites}. */
+export function rankRows(
+  sites: ComparedSite[],
+  ranking?: Ranking,
+): { criterion: string; rows: RankRow[]; usableTitle: string } {
+  if (ranking) {
+    return {
+      criterion: ranking.criterionDescription,
+      usableTitle: 'usable hours in the season, P10 across years [h]',
+      rows: [...ranking.sites]
+        .sort((x, y) => x.rank - y.rank)
+        .map((r) => ({
+          name: r.site,
+          meanProbabilityWithinDeadline: r.meanProbabilityWithinDeadline,
+          bestWindow: r.bestStartWindow,
+          usableHoursSeasonP10: r.usableHoursInSeasonP10,
+          medianHeatKwhPerTonne: r.medianHeatKwhPerTonne,
+        })),
+    }
+  }
+  return {
+    criterion: RANKING_CRITERION,
+    usableTitle: 'usable hours in the season months, sum of monthly P10 [h]',
+    rows: rankSites(sites).map((r) => ({
+      name: r.name,
+      meanProbabilityWithinDeadline: r.meanProbabilityWithinDeadline,
+      bestWindow: r.bestWindow,
+      usableHoursSeasonP10: r.usableHoursSeasonP10,
+      medianHeatKwhPerTonne: r.medianHeatKwhPerTonne,
+    })),
+  }
+}
+
+export function comparisonTable(
+  sites: ComparedSite[],
+  units: 'si' | 'us' = 'si',
+  ranking?: Ranking,
+): ReportTable {
   const u = unitFormatter(units)
+  const { rows, usableTitle } = rankRows(sites, ranking)
   return {
     id: 'site-comparison',
     title: 'Sites ranked',
@@ -76,11 +126,11 @@ export function comparisonTable(sites: ComparedSite[], units: 'si' | 'us' = 'si'
       'site',
       'finishing within the deadline, mean over start days [%]',
       'best start window',
-      'usable hours in the season months, sum of monthly P10 [h]',
+      usableTitle,
       `supplemental heat, median [${u.energyPerMassUnit}]`,
     ],
     digits: [0, 0, 0, 0, 0, 0],
-    rows: rankSites(sites).map((r, i) => [
+    rows: rows.map((r, i) => [
       String(i + 1),
       r.name,
       finite(r.meanProbabilityWithinDeadline) ? round(r.meanProbabilityWithinDeadline * 100, 1) : null,
@@ -107,7 +157,12 @@ function monthlyCompareTable(
   }
 }
 
-export function renderComparisonArticle(sites: ComparedSite[], o: Pick<ReportOptions, 'units'> = {}): string {
+export interface ComparisonOptions extends Pick<ReportOptions, 'units' | 'paper'> {
+  /** The analysis ranking; without it the report ranks by {@link RANKING_CRITERION}. */
+  ranking?: Ranking
+}
+
+export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOptions = {}): string {
   if (sites.length === 0) throw new RangeError('a comparison needs at least one site')
   const units = o.units ?? 'si'
   const u = unitFormatter(units)
@@ -116,14 +171,15 @@ export function renderComparisonArticle(sites: ComparedSite[], o: Pick<ReportOpt
   const categories = MONTH_SHORT.map((label, i) => ({ key: String(i + 1), label }))
   const month = (a: Assessment, m: number) => a.monthly.find((r) => r.month === m)
   let fig = 0
-  const ranks = rankSites(sites)
+  const ranked = rankRows(sites, o.ranking)
+  const ranks = ranked.rows
   const best = ranks[0]
   const sentences = [
     `${best.name} ranks first for ${first.product.name} by ${methodName(first.method.kind)}` +
       (finite(best.meanProbabilityWithinDeadline)
         ? `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years finish a batch within ${first.deadlineDays} days across the season's start days.`
         : '.'),
-    `Ranking criterion: ${RANKING_CRITERION}.`,
+    `Ranking criterion: ${ranked.criterion}.`,
   ]
   const differs = (key: (a: Assessment) => string) => new Set(sites.map((x) => key(x.assessment))).size > 1
   if (
@@ -217,16 +273,13 @@ export function renderComparisonArticle(sites: ComparedSite[], o: Pick<ReportOpt
   return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
 <dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first.method.kind))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
-<section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(sites, units))}</section>
+<section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(sites, units, o.ranking))}</section>
 <section class="report-section" data-section="compare-monthly"><h2>Sites side by side</h2>${usable}${heat}</section>
 </article>
 ${perSite}`
 }
 
-export function renderComparisonHtml(
-  sites: ComparedSite[],
-  o: Pick<ReportOptions, 'units' | 'paper'> = {},
-): string {
+export function renderComparisonHtml(sites: ComparedSite[], o: ComparisonOptions = {}): string {
   const names = sites.map((s) => siteDisplayName(s.assessment, s.options?.info))
   return htmlDocument(`Drying comparison: ${names.join(', ')}`, renderComparisonArticle(sites, o), o.paper)
 }

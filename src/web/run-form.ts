@@ -5,9 +5,11 @@
  */
 import { assess } from '../analysis/assess.ts'
 import type { Assessment } from '../analysis/assessment.ts'
+import { compare } from '../analysis/compare.ts'
 import {
   type ComparedSite,
   comparisonTable,
+  type Ranking,
   renderComparisonArticle,
   renderComparisonHtml,
 } from '../report/compare-html.ts'
@@ -15,6 +17,7 @@ import { renderReportCsv } from '../report/report-csv.ts'
 import { renderReportArticle, renderReportHtml } from '../report/report-html.ts'
 import { tablesCsv } from '../report/tables.ts'
 import { readWeatherBytes } from '../weather/read-weather.ts'
+import type { WeatherReadResult } from '../weather/result.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { WeatherInputError } from '../weather/weather-input-error.ts'
 import type { DemoProvider } from './demo-files.ts'
@@ -74,11 +77,12 @@ async function inputs(
 export async function runForm(input: FormInput, demo?: DemoProvider): Promise<FormResult> {
   const sites: AssessedSite[] = []
   const files = await inputs(input, demo)
+  const reads: { name: string; read: WeatherReadResult }[] = []
   for (const f of files) {
     // A site name typed in the form names a single file; with several files, each keeps its own name.
     const options = files.length > 1 ? { ...f.options, siteName: undefined } : f.options
     if (options.siteName === undefined) delete options.siteName
-    let read: ReturnType<typeof readWeatherBytes>
+    let read: WeatherReadResult
     try {
       read = readWeatherBytes(f.bytes, options)
     } catch (e) {
@@ -94,22 +98,40 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
       throw e
     }
     if (!read.series.site.name && files.length > 1) read.series.site.name = f.name.replace(/\.[^.]+$/, '')
-    let assessment: Assessment
-    try {
-      assessment = assess(read.series, { ...input.assess, product: input.product })
-    } catch (e) {
-      if (e instanceof RangeError) throw new RangeError(`${f.name}: ${e.message}`)
-      throw e
+    reads.push({ name: f.name, read })
+  }
+  let assessments: Assessment[]
+  let ranking: Ranking | undefined
+  try {
+    if (reads.length === 1) {
+      assessments = [assess(reads[0].read.series, { ...input.assess, product: input.product })]
+    } else {
+      const c = compare(
+        reads.map((r) => r.read.series),
+        {
+          ...input.assess,
+          product: input.product,
+          labels: reads.map((r) => r.read.series.site.name || r.name),
+        },
+      )
+      assessments = c.assessments
+      ranking = c
     }
-    const r = read
+  } catch (e) {
+    if (e instanceof RangeError)
+      throw new RangeError(`${reads.length === 1 ? `${reads[0].name}: ` : ''}${e.message}`)
+    throw e
+  }
+  reads.forEach(({ name, read }, i) => {
+    const assessment = assessments[i]
     sites.push({
-      fileName: f.name,
+      fileName: name,
       series: read.series,
       assessment,
-      readWarnings: r.warnings,
-      dataSource: `${r.format.toUpperCase()}, ${r.rows.read} rows read, ${r.rows.used} used, ${r.rows.repaired} repaired, ${r.rows.rejected} rejected`,
+      readWarnings: read.warnings,
+      dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
     })
-  }
+  })
   const units = input.units
   if (sites.length === 1) {
     const s = sites[0]
@@ -138,10 +160,10 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
   }))
   return {
     sites,
-    article: renderComparisonArticle(compared, { units }),
-    document: renderComparisonHtml(compared, { units }),
+    article: renderComparisonArticle(compared, { units, ranking }),
+    document: renderComparisonHtml(compared, { units, ranking }),
     csv:
-      tablesCsv([comparisonTable(compared, units)]) +
+      tablesCsv([comparisonTable(compared, units, ranking)]) +
       '\r\n' +
       sites
         .map((s) =>
