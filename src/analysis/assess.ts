@@ -148,7 +148,11 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   const backup: HourlyConditions =
     method.kind === 'heated'
       ? primary
-      : computeHourlyConditions(series, backupMethod, product, { ...conditionOptions, verdict: false })
+      : computeHourlyConditions(series, backupMethod, product, {
+          ...conditionOptions,
+          verdict: false,
+          lazy: true,
+        })
   progress?.({ stage: 'hourly-conditions', done: 2, total: 2 })
 
   const time = localTimeColumns(series)

@@ -48,7 +48,7 @@ export interface MonthlyRow {
   medianHoursByReason: Record<HourStatusName, number>
   /** Mean humidity-ratio deficit to the product's equilibrium RH at target, over daylight hours [g/kg]. */
   meanDaytimeDeficitToTargetGPerKg: number | null
-  /** Mean wet-surface evaporation for exposed methods [kg m⁻² d⁻¹], null for forced air. */
+  /** Wet-surface evaporation per day for exposed methods, summed over the hours the product is exposed [kg m⁻² d⁻¹]; null for forced air. */
   meanEvaporationKgPerM2Day: number | null
   /** Heat to reach the target by the deadline for batches starting on the 1st and 16th [kWh per tonne fresh]. */
   supplementalHeatKwhPerTonne: Spread

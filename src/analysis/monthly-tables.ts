@@ -69,8 +69,9 @@ export function countMonthly(c: HourlyConditions, t: LocalTimeColumns): MonthlyC
       out.usable[cell]++
       out.hourUsable[hourCell]++
     }
-    if (c.night[i] === 0) {
-      out.deficitSum[cell] += c.deficitToTargetGPerKg[i]
+    const d = c.deficitToTargetGPerKg[i]
+    if (c.night[i] === 0 && Number.isFinite(d)) {
+      out.deficitSum[cell] += d
       out.deficitHours[cell]++
     }
     const e = c.evaporationKgPerM2H[i]
@@ -134,7 +135,8 @@ export function monthlyRows(counts: MonthlyCounts): MonthlyRow[] {
       usableFraction: dataAll > 0 ? roundOrNull(usableAll / dataAll, 3) : null,
       medianHoursByReason,
       meanDaytimeDeficitToTargetGPerKg: defHours > 0 ? roundOrNull(defSum / defHours, 2) : null,
-      meanEvaporationKgPerM2Day: evHours > 0 ? roundOrNull((evSum / evHours) * 24, 2) : null,
+      // per day with data, counting only the hours the product is exposed (covered hours add nothing)
+      meanEvaporationKgPerM2Day: evHours > 0 ? roundOrNull(evSum / (dataAll / 24), 2) : null,
       supplementalHeatKwhPerTonne: { median: null, p10: null, p90: null },
       medianDaysToTarget: null,
       yearsWithData: byYear.length,

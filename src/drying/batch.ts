@@ -83,6 +83,8 @@ export function simulateBatch(
     )
   }
   const wrap = options.wrap === true
+  primary.ensure(startIndex, maxHours, wrap)
+  backup?.ensure(startIndex, maxHours, wrap)
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const ts = product.thompsonTimeScale

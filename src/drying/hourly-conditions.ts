@@ -74,6 +74,8 @@ export interface HourlyConditionsOptions {
    * only as the supplemental-heat backup, whose verdict nobody reads. Default true.
    */
   verdict?: boolean
+  /** true: compute hours only when a batch asks for them ({@link HourlyConditions.ensure}). Default false. */
+  lazy?: boolean
 }
 
 /** Per-hour sun and radiation columns of a series, independent of the method. */
@@ -122,6 +124,8 @@ export function computeSolarColumns(series: HourlySeries): SolarColumns {
 
 export interface HourlyConditions {
   hours: number
+  /** Make sure hours from..from+count−1 (wrapping past the end when `wrap`) are computed (lazy conditions). */
+  ensure: (from: number, count: number, wrap: boolean) => void
   method: DryingMethod
   /** Air temperature at the product [°C] (after collector or heater). */
   airC: Float64Array
@@ -137,7 +141,7 @@ export interface HourlyConditions {
   deficitToSaturationGPerKg: Float64Array
   /** Deficit to the product's equilibrium RH at its target moisture [g/kg]. */
   deficitToTargetGPerKg: Float64Array
-  /** Wet-surface (Penman) evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN for forced-air methods. */
+  /** Wet-surface (Penman) evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN for forced-air methods and covered hours. */
   evaporationKgPerM2H: Float64Array
   /** Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit. */
   capDbPerH: Float64Array
@@ -161,7 +165,7 @@ export interface HourlyConditions {
   status: Uint8Array
   /** 1 at night (sun below the threshold altitude). */
   night: Uint8Array
-  /** Hours whose irradiance or wind was missing and was taken as 0 W/m² / {@link DEFAULT_WIND_MS}. */
+  /** Hours whose irradiance or wind was missing and was taken as 0 W/m² / {@link DEFAULT_WIND_MS} (hours computed when the object was returned). */
   assumedIrradianceHours: number
   assumedWindHours: number
   /** True when the series had no rain column values at all. */
@@ -216,6 +220,11 @@ export function computeHourlyConditions(
   const status = new Uint8Array(n)
   const night = new Uint8Array(n)
   const step = new Float64Array(2)
+  if (options.lazy === true) {
+    // hours not yet computed read as missing temperatures, never as 0 °C
+    airC.fill(Number.NaN)
+    productC.fill(Number.NaN)
+  }
 
   const dmPerKgFresh = 1 - options.initialWbPct / 100
   const sameIsotherm = product.profile.isotherm.adsorption === undefined
@@ -236,11 +245,12 @@ export function computeHourlyConditions(
   let assumedIrradianceHours = 0
   let assumedWindHours = 0
   let anyRain = false
+  for (let i = 0; i < n && !anyRain; i++) if (Number.isFinite(series.rainMm[i])) anyRain = true
   // Previous hour's cooling along the adiabatic path: the start of this hour's solver (hours are alike).
   let satDepressionK = 0
   let targetDepressionK = 0
 
-  for (let i = 0; i < n; i++) {
+  const computeHour = (i: number): void => {
     const t = series.dryBulbC[i]
     const rh = series.relativeHumidityPct[i]
     const p = series.pressureKpa[i]
@@ -252,7 +262,7 @@ export function computeHourlyConditions(
       airC[i] = airRhPct[i] = productC[i] = surfaceRhPct[i] = humidityRatio[i] = Number.NaN
       deficitToSaturationGPerKg[i] = deficitToTargetGPerKg[i] = evaporationKgPerM2H[i] = Number.NaN
       emcDesorptionDb[i] = emcAdsorptionDb[i] = Number.NaN
-      continue
+      return
     }
     let ghi = series.ghiWm2[i]
     if (!Number.isFinite(ghi)) {
@@ -265,7 +275,6 @@ export function computeHourlyConditions(
       wind = DEFAULT_WIND_MS
     }
     const rain = series.rainMm[i]
-    if (Number.isFinite(rain)) anyRain = true
     const raining = rain >= thresholds.rainMm
     const u2 = windSpeedAt2mMs(wind, Math.max(series.site.windHeightM, 0.5))
     const pws = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)) * 1e-3
@@ -301,8 +310,10 @@ export function computeHourlyConditions(
             t +
             absorbed / ((flatPlateHeatTransferCoefficientWm2K(uProduct) + hr) * method.surfaceAreaPerTrayArea)
         }
-        const rnl = (netLongwaveHourlyMjM2(t, pw, rsOverRso[i]) * 1e6) / 3600
-        evaporation = wetSurfaceEvaporation(absorbed - rnl, t, pw, p, w, u2)
+        if (hourMode !== HourMode.paused) {
+          const rnl = (netLongwaveHourlyMjM2(t, pw, rsOverRso[i]) * 1e6) / 3600
+          evaporation = wetSurfaceEvaporation(absorbed - rnl, t, pw, p, w, u2)
+        }
         break
       }
       case 'shade': {
@@ -363,6 +374,21 @@ export function computeHourlyConditions(
     let rhSurface = (100 * pw) / pwsSurface
     if (rhSurface > 100) rhSurface = 100
     surfaceRhPct[i] = rhSurface
+    if (hourMode === HourMode.paused) {
+      // covered product or fans off: no exchange with the air, so nothing else is needed for this hour
+      emcDesorptionDb[i] = emcAdsorptionDb[i] = Number.NaN
+      rateK[i] = rateN[i] = decayPerHour[i] = rewetDecayPerHour[i] = Number.NaN
+      deficitToSaturationGPerKg[i] = deficitToTargetGPerKg[i] = Number.NaN
+      evaporationKgPerM2H[i] = evaporation
+      capDbPerH[i] = 0
+      status[i] =
+        options.verdict === false
+          ? HourStatus.usable
+          : pausedByNight
+            ? HourStatus.nightWithoutDrying
+            : HourStatus.rain
+      return
+    }
     const rhForEmc = Math.min(rhSurface, EMC_RH_CAP_PCT)
     const meDes = product.emcDesorptionDb(tProduct, rhForEmc)
     emcDesorptionDb[i] = meDes
@@ -409,8 +435,24 @@ export function computeHourlyConditions(
     else if (rhSurface >= erhTarget || 1000 * dTarget < thresholds.minDeficitGPerKg) s = HourStatus.tooHumid
     status[i] = s
   }
+  const computed = new Uint8Array(n)
+  const ensure = (from: number, count: number, wrap: boolean): void => {
+    for (let k = 0; k < count; k++) {
+      let i = from + k
+      if (i >= n) {
+        if (!wrap) return
+        i %= n
+      }
+      if (computed[i] === 0) {
+        computeHour(i)
+        computed[i] = 1
+      }
+    }
+  }
+  if (options.lazy !== true) ensure(0, n, false)
   return {
     hours: n,
+    ensure,
     method,
     airC,
     airRhPct,
