@@ -79,6 +79,7 @@ export const assessOptionsJsonSchema = z.strictObject({
   backupHeater: heatedSchema
     .omit({ kind: true })
     .partial()
+    .strict()
     .optional()
     .describe('heater for the supplemental heat figures'),
   fuel: z.enum(FUEL_IDS).optional().describe('fuel for the heat and cost figures'),
@@ -137,12 +138,20 @@ function resolveProduct(value: string | Record<string, unknown>, path: string): 
 }
 
 function resolveMethod(value: string | Record<string, unknown>, path: string): AssessOptions['method'] {
-  const r = dryingMethodSchema.safeParse(typeof value === 'string' ? { kind: value } : value)
-  if (!r.success) {
-    const errors = r.error.issues.map((i) => ({
-      path: [path, ...i.path.map(String)].join('.'),
-      message: i.message,
-    }))
+  const input = typeof value === 'string' ? { kind: value } : value
+  const r = dryingMethodSchema.safeParse(input)
+  const errors = r.success
+    ? []
+    : r.error.issues.map((i) => ({ path: [path, ...i.path.map(String)].join('.'), message: i.message }))
+  // A misspelt parameter must not fall back silently to its default: unknown keys are refused.
+  const option = dryingMethodSchema.options.find((o) => o.shape.kind.value === input.kind)
+  if (option) {
+    for (const key of Object.keys(input)) {
+      if (!(key in option.shape))
+        errors.push({ path: `${path}.${key}`, message: `unrecognized key for ${input.kind}` })
+    }
+  }
+  if (!r.success || errors.length > 0) {
     throw new ApiProblem(400, errors.map((e) => `${e.path}: ${e.message}`).join('; '), errors)
   }
   return r.data

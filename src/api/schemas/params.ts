@@ -1,6 +1,9 @@
 import { z } from 'zod'
 
-/** A query-string number: trimmed, finite, with its unit in the description (for OpenAPI). */
+/**
+ * A query-string number: trimmed, finite, decimal (hex/binary/octal literals such as `0x10`, which
+ * `Number()` would silently read as 16, are refused), with its unit in the description (for OpenAPI).
+ */
 export function numberParam(description: string) {
   return z
     .string()
@@ -8,7 +11,7 @@ export function numberParam(description: string) {
     .min(1, 'must not be empty')
     .transform((s, ctx) => {
       const n = Number(s)
-      if (!Number.isFinite(n)) {
+      if (!Number.isFinite(n) || /^[-+]?0[xob]/i.test(s)) {
         ctx.addIssue({ code: 'custom', message: `must be a number, got '${s}'` })
         return z.NEVER
       }
