@@ -48,6 +48,45 @@ describe('comparison of two demo sites', () => {
   })
 })
 
+describe('comparison with the analysis ranking', () => {
+  it('lists the sites in the given rank order with the given criterion', () => {
+    const sites = cases.map((c) => ({ assessment: c.assessment }))
+    const ranking = {
+      criterionDescription: 'the criterion named by the caller',
+      sites: [
+        {
+          rank: 2,
+          site: 'Alpha',
+          usableHoursInSeasonP10: 10,
+          usableHoursInSeasonMedian: 12,
+          meanProbabilityWithinDeadline: 0.5,
+          medianHeatKwhPerTonne: 100,
+          bestStartWindow: null,
+          warnings: [],
+        },
+        {
+          rank: 1,
+          site: 'Beta',
+          usableHoursInSeasonP10: 20,
+          usableHoursInSeasonMedian: 22,
+          meanProbabilityWithinDeadline: 0.9,
+          medianHeatKwhPerTonne: 0,
+          bestStartWindow: '07-01 to 07-31',
+          warnings: [],
+        },
+      ],
+    }
+    const h = renderComparisonHtml(sites, { ranking })
+    expect(h).toContain('Ranking criterion: the criterion named by the caller.')
+    expect(h).toContain('Beta ranks first')
+    const table = h.slice(h.indexOf('data-table="site-comparison"'))
+    expect(table.indexOf('>Beta<')).toBeLessThan(table.indexOf('>Alpha<'))
+    expect(table).toContain(
+      '<th scope="row">1</th><td>Beta</td><td class="num">90</td><td>07-01 to 07-31</td>',
+    )
+  })
+})
+
 describe('US customary report', () => {
   it('labels and converts: °F axis, kWh per short ton bars, US units in the header', () => {
     const c = cases[0]
