@@ -172,7 +172,11 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     startHourLocal,
     wrap: series.typicalYear,
   }
-  const years = counts.years
+  // Years with at least one month of enough data (a UTC file shifted to local time touches one hour of
+  // the next year: that is not a year of data).
+  const years = counts.years.filter((y) =>
+    monthly.some((m) => m.usableHours.byYear.some((v) => v.year === y)),
+  )
 
   // Monthly heat: batches from the 1st and 16th of every month.
   for (let month = 1; month <= 12; month++) {

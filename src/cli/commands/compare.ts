@@ -21,7 +21,9 @@ Criteria (default probability-within-deadline):
   probability-within-deadline  mean share of years finishing within the deadline, season start dates
   usable-hours-p10             usable hours in the season, exceeded in 9 of 10 years
   heat-per-tonne               median supplemental heat to finish by the deadline (lower is better)
-Ties are broken by the other criteria in this order. Weather options apply to every file.
+Ties are broken by the other criteria in this order.
+Weather options (--lat, --lon, --elevation, --utc-offset, --tz, --wind-height) apply to EVERY file:
+give them only when all files are from one place, or use files that carry their own site (EPW).
 
 ${ENGINE_OPTIONS_HELP}`
 
