@@ -363,7 +363,9 @@ function heatSummary(
   })
   // Cross-check: water to remove × (λ + net sorption heat at the target) ÷ efficiency.
   const water = waterToRemoveKg(1000, h.initialWbPct, h.targetWbPct)
-  const meanHeatedC = meanOf(backup.airC)
+  const meanComputedC = meanOf(backup.airC)
+  // no batch needed the backup heater: take its lowest air temperature for the latent heat
+  const meanHeatedC = Number.isFinite(meanComputedC) ? meanComputedC : heater.minAirC
   const sorption = heatOfSorption(h.profile, Math.min(Math.max(meanHeatedC, 0), 90), h.targetDb)
   const evaporationFuelKwh = (water * sorption.totalKjPerKg) / 3600 / eff
   const heatedOnly = heatedEveryHourSample(h.ctx, 30)

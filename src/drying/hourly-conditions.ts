@@ -346,7 +346,13 @@ export function computeHourlyConditions(
         if (fansOn && gain > 0) {
           const cp = (CP_DRY_AIR_KJ_PER_KG_K + 1.86 * w) * 1000
           tAir = t + gain / (method.airFlowKgPerSPerM2 * cp)
-          solarKwhPerTonne[i] = (gain * method.collectorAreaM2PerTonne) / 1000
+          let used = 1
+          if (maxT !== null && tAir > maxT && t < maxT) {
+            // a damper mixes in ambient air to hold the product limit (common practice, no source)
+            used = (maxT - t) / (tAir - t)
+            tAir = maxT
+          }
+          solarKwhPerTonne[i] = (used * gain * method.collectorAreaM2PerTonne) / 1000
         }
         tProduct = tAir
         break
