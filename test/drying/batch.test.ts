@@ -12,7 +12,7 @@ import { productById } from '../../src/product/catalogue.ts'
 import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
 import { initialMoistureState, prepareProduct, stepMoisture } from '../../src/product/stepping.ts'
 import { demoSeries, sliceSeries } from './demo-weather.ts'
-import { constantSeries } from './synthetic-weather.ts'
+import { constantSeries, diurnalSeries } from './synthetic-weather.ts'
 
 const apricot = productById('apricot-halves')
 const raisin = productById('grapes-to-raisins')
@@ -231,5 +231,46 @@ describe('energy: heat added equals the enthalpy rise of the air', () => {
       checked++
     }
     expect(checked).toBeGreaterThan(200)
+  })
+})
+
+describe('conditions details', () => {
+  const chili = productById('chili-peppers') // limit 65 °C
+  const hot = diurnalSeries({
+    latitudeDeg: 25,
+    longitudeDeg: 70,
+    utcOffsetHours: 5,
+    firstDayUtcMs: Date.UTC(2022, 4, 1),
+    days: 3,
+    tMinC: 28,
+    tMaxC: 44,
+    dewPointC: 10,
+    windMs: 2,
+  })
+  it('a solar cabinet never blows air above the product limit (damper mixes in ambient air)', () => {
+    const r = productResponse(chili)
+    const c = computeHourlyConditions(
+      hot,
+      parseDryingMethod({ kind: 'solar-cabinet', airFlowKgPerSPerM2: 0.005 }),
+      r,
+      options(chili),
+    )
+    let hottest = 0
+    for (let i = 0; i < c.hours; i++) if (c.mode[i] === 0) hottest = Math.max(hottest, c.airC[i])
+    expect(hottest).toBeLessThanOrEqual(65 + 1e-9)
+    expect(hottest).toBeGreaterThan(60) // the collector alone would go far above the limit at this low flow
+  })
+  it('lazy conditions computed on demand equal the eager ones', () => {
+    const r = productResponse(chili)
+    const method = parseDryingMethod({ kind: 'heated' })
+    const eager = computeHourlyConditions(hot, method, r, options(chili))
+    const lazy = computeHourlyConditions(hot, method, r, { ...options(chili), lazy: true })
+    expect(Number.isNaN(lazy.airC[30])).toBe(true)
+    lazy.ensure(24, 24, false)
+    for (let i = 24; i < 48; i++) {
+      expect(lazy.airC[i]).toBe(eager.airC[i])
+      expect(lazy.emcDesorptionDb[i]).toBe(eager.emcDesorptionDb[i])
+      expect(lazy.heaterKwhPerTonne[i]).toBe(eager.heaterKwhPerTonne[i])
+    }
   })
 })
