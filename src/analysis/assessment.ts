@@ -71,8 +71,9 @@ export interface StartDateRow {
   start: string
   /** Years with a complete batch from this start. */
   years: number
+  /** Days to target by the method alone; null when that percentile does not finish within `maxDays`. */
   daysToTarget: { median: number | null; p90: number | null }
-  /** Share of years finishing within the deadline [0–1]. */
+  /** Share of years finishing within the deadline by the method alone, without supplemental heat [0–1]. */
   probabilityWithinDeadline: number
   /** Share of years finishing within the maximum duration [0–1]. */
   probabilityWithinMaxDuration: number
@@ -91,6 +92,7 @@ export interface StartDateRow {
 export interface StartWindow {
   from: string
   to: string
+  /** Start dates in the window (rows of the start-date table, `season.stepDays` apart). */
   days: number
   minProbabilityWithinDeadline: number
   medianDaysToTarget: number | null
