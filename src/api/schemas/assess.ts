@@ -74,6 +74,7 @@ export const assessOptionsJsonSchema = z.strictObject({
     .describe('batch size [kg fresh product]; default 1000'),
   thresholds: dryingThresholdsSchema
     .partial()
+    .strict()
     .optional()
     .describe('usable-hour thresholds (see assumptions in the answer)'),
   backupHeater: heatedSchema
