@@ -229,10 +229,12 @@ export function computeHourlyConditions(
   const dmPerKgFresh = 1 - options.initialWbPct / 100
   const sameIsotherm = product.profile.isotherm.adsorption === undefined
   const exposed = method.kind === 'open-air' || method.kind === 'shade'
-  let airFlowKgPerSPerTonne = 0
-  if (method.kind === 'solar-cabinet')
-    airFlowKgPerSPerTonne = method.collectorAreaM2PerTonne * method.airFlowKgPerSPerM2
-  if (method.kind === 'heated') airFlowKgPerSPerTonne = method.airFlowKgPerSPerTonne
+  const airFlowKgPerSPerTonne =
+    method.kind === 'solar-cabinet'
+      ? method.collectorAreaM2PerTonne * method.airFlowKgPerSPerM2
+      : method.kind === 'heated'
+        ? method.airFlowKgPerSPerTonne
+        : 0
   const forcedCapFactor = (airFlowKgPerSPerTonne * 3600) / (1000 * dmPerKgFresh) // × deficit [kg/kg]
   const exposedCapFactor = 1 / (options.loadingKgPerM2 * dmPerKgFresh) // × E [kg/m²/h]
   const maxT = options.maxProductTempC
@@ -247,8 +249,9 @@ export function computeHourlyConditions(
   let anyRain = false
   for (let i = 0; i < n && !anyRain; i++) if (Number.isFinite(series.rainMm[i])) anyRain = true
   // Previous hour's cooling along the adiabatic path: the start of this hour's solver (hours are alike).
-  let satDepressionK = 0
-  let targetDepressionK = 0
+  // [0] to saturation, [1] to the target ERH. Kept in a typed array, not in captured `let` doubles, which
+  // V8 would box (one heap allocation per hour).
+  const depressionK = new Float64Array(2)
 
   const computeHour = (i: number): void => {
     const t = series.dryBulbC[i]
@@ -412,8 +415,8 @@ export function computeHourlyConditions(
     let dSat = Number.NaN
     if (!exposed) {
       dSat =
-        rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1, tProduct - satDepressionK) - w
-      if (dSat > 0) satDepressionK = tProduct - adiabaticEndC(tProduct, w, dSat)
+        rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1, tProduct - depressionK[0]) - w
+      if (dSat > 0) depressionK[0] = tProduct - adiabaticEndC(tProduct, w, dSat)
     }
     deficitToSaturationGPerKg[i] = 1000 * dSat
     const verdict = options.verdict !== false
@@ -423,8 +426,8 @@ export function computeHourlyConditions(
       dTarget =
         rhSurface >= erhTarget
           ? 0
-          : adiabaticHumidityRatioAtRh(tProduct, w, p, erhTarget / 100, tProduct - targetDepressionK) - w
-      if (dTarget > 0) targetDepressionK = tProduct - adiabaticEndC(tProduct, w, dTarget)
+          : adiabaticHumidityRatioAtRh(tProduct, w, p, erhTarget / 100, tProduct - depressionK[1]) - w
+      if (dTarget > 0) depressionK[1] = tProduct - adiabaticEndC(tProduct, w, dTarget)
     }
     deficitToTargetGPerKg[i] = 1000 * dTarget
     evaporationKgPerM2H[i] = evaporation
