@@ -20,32 +20,28 @@
 
 import { collectorUsefulGainWm2 } from '../physics/collector.ts'
 import {
-  aerodynamicResistanceFromWindFunctionSPerM,
   CP_DRY_AIR_KJ_PER_KG_K,
-  evaporationKgPerM2HFromLatentFlux,
   flatPlateHeatTransferCoefficientWm2K,
-  latentHeatVaporizationMjPerKg,
-  psychrometricConstantKpaPerC,
-  wetSurfaceLatentFluxWm2,
-  windFunctionPenman1948MmPerDayKpa,
   windSpeedAt2mMs,
 } from '../physics/evaporation.ts'
-import { fillNightShortwaveRatioColumn, netLongwaveHourlyMjM2 } from '../physics/fao56-reference-et.ts'
-import { dayOfYearAt, SOLAR_CONSTANT_WM2 } from '../physics/fao56-solar.ts'
+import { netLongwaveHourlyMjM2 } from '../physics/fao56-reference-et.ts'
 import {
-  clearSkyRadiationFao56,
   cosIncidenceAngle,
   diffuseHorizontalErbsWm2,
   tiltedIrradianceIsotropicWm2,
 } from '../physics/irradiance.ts'
-import { moistAirDensityKgPerM3, moistAirEnthalpyKjPerKg } from '../physics/moist-air.ts'
+import { moistAirEnthalpyKjPerKg } from '../physics/moist-air.ts'
 import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from '../physics/saturation.ts'
-import { sunPositionColumns } from '../physics/sun.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { adiabaticHumidityRatioAtRh, heatedDryBulbForTargetRhC } from './air-processes.ts'
 import type { DryingMethod } from './method.ts'
 import { EMC_RH_CAP_PCT, firstOrderRateConstant, type ProductResponse } from './product-response.ts'
+import { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
 import { type DryingThresholds, HourStatus } from './thresholds.ts'
+import { wetSurfaceEvaporation } from './wet-surface.ts'
+
+export { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
+export { wetSurfaceEvaporation } from './wet-surface.ts'
 
 /** Emissivity of a moist product surface for the radiative coefficient hr (assumption, 0.9; from memory). */
 export const PRODUCT_EMISSIVITY = 0.9
@@ -76,50 +72,6 @@ export interface HourlyConditionsOptions {
   verdict?: boolean
   /** true: compute hours only when a batch asks for them ({@link HourlyConditions.ensure}). Default false. */
   lazy?: boolean
-}
-
-/** Per-hour sun and radiation columns of a series, independent of the method. */
-export interface SolarColumns {
-  /** Apparent sun altitude at mid-hour [°] (0 when the site has no coordinates). */
-  altitudeDeg: Float64Array
-  azimuthDeg: Float64Array
-  /** Extraterrestrial horizontal irradiance, hour mean [W/m²]. */
-  raWm2: Float64Array
-  /** Rs/Rso for FAO-56 eq 39, the evening value carried through the night. */
-  rsOverRso: Float64Array
-}
-
-/** Sun position (physics/sun.ts) and FAO-56 extraterrestrial and clear-sky radiation for every hour. */
-export function computeSolarColumns(series: HourlySeries): SolarColumns {
-  const n = series.hours
-  const lat = series.site.latitudeDeg
-  const lon = series.site.longitudeDeg
-  const elevation = series.site.elevationM ?? 0
-  const altitudeDeg = alloc(n)
-  const azimuthDeg = alloc(n)
-  const raWm2 = alloc(n)
-  const rsOverRso = alloc(n)
-  if (lat === null || lon === null) {
-    rsOverRso.fill(0.8)
-    return { altitudeDeg, azimuthDeg, raWm2, rsOverRso }
-  }
-  sunPositionColumns(series.startUtcMs, lat, lon, altitudeDeg, azimuthDeg)
-  const rso = alloc(n)
-  const rs = alloc(n)
-  for (let i = 0; i < n; i++) {
-    // Hour-mean extraterrestrial horizontal irradiance by the midpoint rule: Gsc·dr·sin(altitude at
-    // mid-hour) (FAO-56 eqs 21–23 integrated over the hour ≈ value at its middle; off by up to one
-    // sunrise/sunset hour, which the Rs/Rso carry rule of FAO-56 ch. 4 does not use).
-    const sinAlt = Math.sin((altitudeDeg[i] * Math.PI) / 180)
-    const dr = 1 + 0.033 * Math.cos((2 * Math.PI * dayOfYearAt(series.startUtcMs[i], lon / 15)) / 365)
-    const raW = sinAlt > 0 ? SOLAR_CONSTANT_WM2 * dr * sinAlt : 0
-    raWm2[i] = raW
-    rso[i] = clearSkyRadiationFao56((raW * 3600) / 1e6, elevation)
-    const g = series.ghiWm2[i]
-    rs[i] = Number.isFinite(g) ? (g * 3600) / 1e6 : Number.NaN
-  }
-  fillNightShortwaveRatioColumn(rs, rso, altitudeDeg, rsOverRso)
-  return { altitudeDeg, azimuthDeg, raWm2, rsOverRso }
 }
 
 export interface HourlyConditions {
@@ -495,32 +447,4 @@ function adiabaticEndC(tC: number, w: number, dW: number): number {
   const h = 1.006 * tC + w * (2501 + 1.86 * tC)
   const wEnd = w + dW
   return (h - 2501 * wEnd) / (1.006 + 1.86 * wEnd)
-}
-
-/**
- * Penman wet-surface evaporation [kg m⁻² h⁻¹] with available energy `rnWm2` and the Penman (1948) wind
- * function at wind `uMs` (McMahon et al. 2013, Supplement S4.11) converted to an aerodynamic resistance
- * (S11.23), via physics/evaporation.ts. Negative: condensation.
- */
-export function wetSurfaceEvaporation(
-  rnWm2: number,
-  airC: number,
-  vaporPressureKpa: number,
-  pressureKpa: number,
-  w: number,
-  uMs: number,
-): number {
-  const lambda = latentHeatVaporizationMjPerKg(airC)
-  const cp = (CP_DRY_AIR_KJ_PER_KG_K + 1.86 * w) / (1 + w)
-  const gamma = psychrometricConstantKpaPerC(pressureKpa, lambda, cp / 1000)
-  const density = moistAirDensityKgPerM3(airC, w, pressureKpa)
-  const ra = aerodynamicResistanceFromWindFunctionSPerM(
-    windFunctionPenman1948MmPerDayKpa(uMs),
-    density,
-    cp,
-    gamma,
-    lambda,
-  )
-  const latent = wetSurfaceLatentFluxWm2(rnWm2, 0, airC, vaporPressureKpa, pressureKpa, ra)
-  return evaporationKgPerM2HFromLatentFlux(latent, airC)
 }
