@@ -52,7 +52,8 @@ export function reportCss(paper: Paper = 'auto'): string {
   .dryhours-report h1{font-size:16pt}
   .dryhours-report h2{font-size:12pt;margin-top:10pt;break-after:avoid}
   .dryhours-report figure,.dryhours-report table.data,.dryhours-report .kv,.dryhours-report .cautions{break-inside:avoid}
-  .dryhours-report svg.chart{max-height:95mm}
+  .dryhours-report svg.chart{max-height:105mm}
+  .dryhours-report svg.chart[data-chart=heat-map]{max-height:135mm}
   .dryhours-report details.table-view:not([open]){display:none}
   .dryhours-report .no-print{display:none}
   .dryhours-report .facts{background:none;border:1px solid var(--rule)}

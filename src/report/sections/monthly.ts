@@ -19,7 +19,9 @@ export function monthlyTable(a: Assessment): ReportTable {
       'median [h]',
       'P10, exceeded in 9 of 10 years [h]',
       'P90, exceeded in 1 of 10 years [h]',
-      'years',
+      'years with data',
+      'usable share of hours [%]',
+      'median days to target, batches started in the month',
     ],
     rows: a.monthly.map((m) => [
       MONTH_LONG[m.month - 1] ?? String(m.month),
