@@ -87,6 +87,8 @@ export interface StartDateRow {
   }
   /** Years in which even heating every hour could not reach the target by the deadline. */
   yearsNotReachable: number
+  /** Solar collector heat used by the method alone over the batch [kWh per tonne fresh] (0 unless solar cabinet). */
+  solarHeatKwhPerTonne: { median: number | null; p90: number | null }
 }
 
 export interface StartWindow {

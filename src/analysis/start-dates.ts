@@ -38,6 +38,8 @@ export interface StartOutcome {
   rainExposureHours: number
   /** Heat into the air to finish by the deadline [kWh/t]; NaN when not reachable. */
   heatKwhPerTonne: number
+  /** Solar collector heat into the air during the batch by the method alone [kWh/t] (solar cabinet). */
+  solarKwhPerTonne: number
   strategy: HeatStrategy
 }
 
@@ -98,6 +100,7 @@ export function runStart(ctx: StartContext, index: number): StartOutcome {
     rewettingHours: r.natural.rewettingHours,
     rainExposureHours: r.natural.rainExposureHours,
     heatKwhPerTonne: r.heatKwhPerTonne,
+    solarKwhPerTonne: r.natural.solarKwhPerTonne,
     strategy: r.strategy,
   }
 }
@@ -141,6 +144,10 @@ export function startDateRow(start: MonthDay, outcomes: StartOutcome[]): StartDa
       yearsNeedingHeat: outcomes.filter((o) => o.strategy !== 'none-needed').length,
     },
     yearsNotReachable: outcomes.filter((o) => o.strategy === 'not-reachable').length,
+    solarHeatKwhPerTonne: medianP90(
+      outcomes.map((o) => o.solarKwhPerTonne),
+      1,
+    ),
   }
 }
 
