@@ -205,6 +205,11 @@ export function computeHourlyConditions(
   // V8 would box (one heap allocation per hour).
   const depressionK = new Float64Array(2)
 
+  // FAO-56 eq 47 is linear in the wind: its height factors are computed once.
+  const windTo2m = windSpeedAt2mMs(1, Math.max(series.site.windHeightM, 0.5))
+  // wind at the product height from the 2 m wind, eq 47 inverted (log profile over short grass)
+  const windAtProductPer2m =
+    method.kind === 'open-air' ? Math.log(67.8 * method.productHeightM - 5.42) / 4.87 : 1
   const computeHour = (i: number): void => {
     const t = series.dryBulbC[i]
     const rh = series.relativeHumidityPct[i]
@@ -231,7 +236,7 @@ export function computeHourlyConditions(
     }
     const rain = series.rainMm[i]
     const raining = rain >= thresholds.rainMm
-    const u2 = windSpeedAt2mMs(wind, Math.max(series.site.windHeightM, 0.5))
+    const u2 = wind * windTo2m
     const pws = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)) * 1e-3
     const pw = (rh / 100) * pws
     const w = (0.621945 * pw) / (p - pw)
@@ -253,7 +258,7 @@ export function computeHourlyConditions(
           hourMode = HourMode.paused
           coveredForRain = true
         } else if (raining) hourMode = HourMode.rainExposed
-        const uProduct = u2 * (Math.log(67.8 * method.productHeightM - 5.42) / 4.87) // FAO-56 eq 47 inverted
+        const uProduct = u2 * windAtProductPer2m
         const tK = t + KELVIN_OFFSET
         const hr = 4 * PRODUCT_EMISSIVITY * STEFAN_BOLTZMANN_W * tK * tK * tK
         const absorbed = method.absorptivity * ghi
@@ -329,7 +334,7 @@ export function computeHourlyConditions(
     mode[i] = hourMode
     airC[i] = tAir
     productC[i] = tProduct
-    const pwsAir = Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET)) * 1e-3
+    const pwsAir = tAir === t ? pws : Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET)) * 1e-3
     airRhPct[i] = (100 * pw) / pwsAir
     const pwsSurface = Math.exp(lnSaturationPressureLiquidPa(tProduct + KELVIN_OFFSET)) * 1e-3
     let rhSurface = (100 * pw) / pwsSurface
