@@ -3,6 +3,8 @@
  * Limits of the API. Defaults are documented in the README; entry points may override them
  * (Node: environment variables read in src/node/server.ts; Workers: wrangler.toml vars).
  */
+import type { DemoProvider } from '../web/demo-files.ts'
+
 export interface ApiConfig {
   /** Largest request body accepted [bytes]; above it the answer is 413. Default 32 MiB. */
   maxBodyBytes: number
@@ -25,6 +27,8 @@ export interface ApiConfig {
   now?: () => number
   /** Allowed CORS origins; empty = CORS off (the default). */
   corsOrigins: string[]
+  /** Demo weather files for the page, from an entry point that can read them (Node); none on Workers. */
+  demo?: DemoProvider
 }
 
 export const DEFAULT_API_CONFIG: ApiConfig = {

@@ -8,10 +8,16 @@ import { pathToFileURL } from 'node:url'
 import { type ServerType, serve } from '@hono/node-server'
 import { createApp } from '../api/app.ts'
 import { type ApiConfig, configFromVariables } from '../api/config.ts'
+import { climateDemoProvider } from './demo-provider.ts'
 
 /** Node settings: the environment, plus a 60 s wall-clock budget per assessment unless set otherwise. */
 export function configFromEnv(env: NodeJS.ProcessEnv): Partial<ApiConfig> {
-  return { timeBudgetMs: 60_000, now: () => performance.now(), ...configFromVariables(env) }
+  return {
+    timeBudgetMs: 60_000,
+    now: () => performance.now(),
+    demo: climateDemoProvider(),
+    ...configFromVariables(env),
+  }
 }
 
 export interface RunningServer {

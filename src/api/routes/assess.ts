@@ -207,7 +207,7 @@ export function compareRouter(config: ApiConfig): Hono {
               info: { fileName: files[i].name },
             },
           })),
-          { units: output.units },
+          { units: output.units, ranking: comparison },
         ),
       )
     }
