@@ -87,7 +87,7 @@ describe('hostile timestamps', () => {
  * 100 years (1901–2000) from the 2021–2024 demo file: each 4-year block has its leap year last, like
  * 2021–2024, and 1900 (not leap) is outside the range, so relabelling the years keeps every date valid.
  */
-function centuryFile(slim: boolean): Uint8Array {
+function centuryFile(slim: boolean): Uint8Array<ArrayBuffer> {
   const lines = readFileSync('climate-demo/ardentine-upland-2021-2024-utc.csv', 'utf8').trimEnd().split('\n')
   // slim: time, dry bulb and relative humidity only (columns 1, 2 and 4), about 23 MB in all.
   const keep = (line: string) => {

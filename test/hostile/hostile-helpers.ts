@@ -129,7 +129,7 @@ export function multipart(
 }
 
 /** Encode text as UTF-16 with a byte-order mark. */
-export function utf16(text: string, bigEndian: boolean): Uint8Array {
+export function utf16(text: string, bigEndian: boolean): Uint8Array<ArrayBuffer> {
   const out = new Uint8Array(2 + text.length * 2)
   out[0] = bigEndian ? 0xfe : 0xff
   out[1] = bigEndian ? 0xff : 0xfe
@@ -142,7 +142,7 @@ export function utf16(text: string, bigEndian: boolean): Uint8Array {
 }
 
 /** Deterministic pseudo-random bytes (a 32-bit linear congruential generator, Numerical Recipes constants). */
-export function garbageBytes(n: number, seed = 12345): Uint8Array {
+export function garbageBytes(n: number, seed = 12345): Uint8Array<ArrayBuffer> {
   const out = new Uint8Array(n)
   let s = seed >>> 0
   for (let i = 0; i < n; i++) {
