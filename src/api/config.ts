@@ -10,6 +10,12 @@ export interface ApiConfig {
   maxBodyBytes: number
   /** Most data rows in one weather file; above it 413. Default 400,000 (45 years of hourly rows). */
   maxRows: number
+  /**
+   * Most fields on one line of a weather file (counted by the commonest delimiter: comma, semicolon or
+   * tab); above it 413. Default 1,000 (EPW has 35 fields; station exports a few dozen). Reading cost grows
+   * with the number of fields: 10 MB of commas on one line took over 20 s of one core to refuse.
+   */
+  maxColumns: number
   /** Most sites (files) in one comparison; above it 413. Default 8. */
   maxSites: number
   /**
@@ -34,6 +40,7 @@ export interface ApiConfig {
 export const DEFAULT_API_CONFIG: ApiConfig = {
   maxBodyBytes: 32 * 1024 * 1024,
   maxRows: 400_000,
+  maxColumns: 1_000,
   maxSites: 8,
   maxBatchHours: 6_000_000,
   timeBudgetMs: 0,
@@ -44,6 +51,7 @@ export const DEFAULT_API_CONFIG: ApiConfig = {
 export const CONFIG_VARIABLES = {
   maxBodyBytes: 'DRYHOURS_MAX_BODY_BYTES',
   maxRows: 'DRYHOURS_MAX_ROWS',
+  maxColumns: 'DRYHOURS_MAX_COLUMNS',
   maxSites: 'DRYHOURS_MAX_SITES',
   maxBatchHours: 'DRYHOURS_MAX_BATCH_HOURS',
   timeBudgetMs: 'DRYHOURS_TIME_BUDGET_MS',
@@ -56,7 +64,14 @@ export const CONFIG_VARIABLES = {
  */
 export function configFromVariables(vars: Record<string, string | undefined>): Partial<ApiConfig> {
   const out: Partial<ApiConfig> = {}
-  for (const key of ['maxBodyBytes', 'maxRows', 'maxSites', 'maxBatchHours', 'timeBudgetMs'] as const) {
+  for (const key of [
+    'maxBodyBytes',
+    'maxRows',
+    'maxColumns',
+    'maxSites',
+    'maxBatchHours',
+    'timeBudgetMs',
+  ] as const) {
     const name = CONFIG_VARIABLES[key]
     const raw = vars[name]
     if (raw === undefined || raw.trim() === '') continue

@@ -96,9 +96,44 @@ function roughRowCount(text: string): number {
   return n
 }
 
-/** The file's text, refused with a 413 when it has more rows than the configured limit. */
+/**
+ * Most fields on any line: per line, the count of the commonest of comma, semicolon and tab, plus one
+ * (quoted delimiters count too: an upper bound). Stops at the first line wider than `limit`.
+ */
+export function widestLineFields(text: string, limit = Number.POSITIVE_INFINITY): number {
+  let widest = 0
+  let commas = 0
+  let semicolons = 0
+  let tabs = 0
+  for (let i = 0; i <= text.length; i++) {
+    const ch = i < text.length ? text.charCodeAt(i) : 10
+    if (ch === 44) commas++
+    else if (ch === 59) semicolons++
+    else if (ch === 9) tabs++
+    else if (ch === 10 || ch === 13) {
+      const fields = Math.max(commas, semicolons, tabs) + 1
+      if (fields > widest) {
+        widest = fields
+        if (widest > limit) return widest
+      }
+      commas = 0
+      semicolons = 0
+      tabs = 0
+    }
+  }
+  return widest
+}
+
+/** The file's text, refused with a 413 when it has more rows or wider lines than the configured limits. */
 export function checkedUploadText(file: UploadedFile, config: ApiConfig): string {
   const text = decodeUploadText(file.bytes)
+  const fields = widestLineFields(text, config.maxColumns)
+  if (fields > config.maxColumns) {
+    throw new ApiProblem(
+      413,
+      `${file.name} has a line with ${fields} fields, more than the limit of ${config.maxColumns} columns; remove the columns you do not need (keep time, dry bulb, humidity and any of pressure, wind, irradiance, rain)`,
+    )
+  }
   const rows = roughRowCount(text)
   if (rows > config.maxRows + 10) {
     throw new ApiProblem(

@@ -3,6 +3,8 @@
  * unbalanced quotes and a file that claims to be EPW. Each answer is a 4xx problem or a correct result.
  */
 import { describe, expect, it } from 'vitest'
+import { createApp } from '../../src/api/app.ts'
+import { configFromVariables } from '../../src/api/config.ts'
 import {
   COARSE_QUERY,
   csvOf,
@@ -92,17 +94,41 @@ describe('hostile bytes', () => {
     expect(p.detail.length).toBeLessThan(1000)
   })
 
-  it('100,000 columns: read correctly (the known columns found, the rest ignored)', {
-    timeout: 60_000,
-  }, async () => {
+  const hundredThousandColumns = () => {
     const extra = Array.from({ length: 100_000 - 3 }, (_, i) => `c${i}`).join(',')
     const filler = ',1'.repeat(100_000 - 3)
-    const text = `time,temp_c,rh_pct,${extra}\n${THREE_HOURS.map((r) => r + filler).join('\n')}\n`
-    const body = await expectInspect(await post('/v1/inspect', text, 'text/csv'))
+    return `time,temp_c,rh_pct,${extra}\n${THREE_HOURS.map((r) => r + filler).join('\n')}\n`
+  }
+
+  it('100,000 columns: 413 over the 1,000-column limit, saying which columns to keep', async () => {
+    const p = await expectProblem(await post('/v1/inspect', hundredThousandColumns(), 'text/csv'), [413])
+    expect(p.detail).toMatch(/100000 fields/)
+    expect(p.detail).toMatch(/limit of 1000 columns/)
+    await expectProblem(await post(COARSE_QUERY, hundredThousandColumns(), 'text/csv'), [413])
+  })
+
+  it('100,000 columns with the column limit raised: read correctly (the known columns found, the rest ignored)', {
+    timeout: 60_000,
+  }, async () => {
+    const wide = createApp({ maxColumns: 200_000 })
+    const body = await expectInspect(await post('/v1/inspect', hundredThousandColumns(), 'text/csv', wide))
     expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0 })
     // The same columns as the three-column file: none of the 99,997 unknown columns is taken as a variable.
     const plain = await expectInspect(await post('/v1/inspect', GOOD, 'text/csv'))
     expect(body.columns).toEqual(plain.columns)
+  })
+
+  it('10 MB of commas on one line (5 million fields): 413 before the reader runs', async () => {
+    const p = await expectProblem(
+      await post('/v1/inspect', `time,temp_c,rh_pct\n${'1,'.repeat(5 * 1024 * 1024)}`, 'text/csv'),
+      [413],
+    )
+    expect(p.detail).toMatch(/columns/)
+  })
+
+  it('the column limit is read from DRYHOURS_MAX_COLUMNS, nonsense refused naming it', () => {
+    expect(configFromVariables({ DRYHOURS_MAX_COLUMNS: '5000' })).toEqual({ maxColumns: 5000 })
+    expect(() => configFromVariables({ DRYHOURS_MAX_COLUMNS: 'wide' })).toThrow(/DRYHOURS_MAX_COLUMNS/)
   })
 
   it('an unbalanced quote in the data: 4xx or rows rejected, never invented', async () => {
@@ -159,7 +185,6 @@ describe('hostile bytes', () => {
   })
 
   it('a body over the size limit is a 413 before it is read', async () => {
-    const { createApp } = await import('../../src/api/app.ts')
     const small = createApp({ maxBodyBytes: 1000 })
     const p = await expectProblem(await post('/v1/inspect', inventedDays(3), 'text/csv', small), [413])
     expect(p.detail).toMatch(/1000 bytes/)
