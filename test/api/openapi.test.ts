@@ -1,3 +1,4 @@
+import { Validator } from '@seriousme/openapi-schema-validator'
 import { describe, expect, it } from 'vitest'
 import { createApp } from '../../src/api/app.ts'
 import { listOperations } from '../../src/api/operations.ts'
@@ -24,6 +25,15 @@ describe('GET /openapi.json', () => {
       expect(ids.has(item.operationId)).toBe(false)
       ids.add(item.operationId)
     }
+  })
+
+  it('validates against the official OpenAPI 3.1 JSON schema (@seriousme/openapi-schema-validator)', async () => {
+    const doc = await (await app.request('/openapi.json')).json()
+    const validator = new Validator()
+    const result = await validator.validate(doc)
+    expect(result.errors).toBeUndefined()
+    expect(result.valid).toBe(true)
+    expect(validator.version).toBe('3.1')
   })
 
   it('documents every query parameter with its unit', async () => {
