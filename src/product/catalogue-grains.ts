@@ -35,7 +35,7 @@ export const shelledCorn: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 374.34, b: 0.18662, c: 31.696 },
-      'Modified Chung–Pfost, Chen & Morey 1989 as listed in ASAE D245.6 (constants as transcribed in public code); 15.6 °C/80 % → 16.1 % wb (extension value, drying-science.md §1.2)',
+      'Modified Chung–Pfost, Chen & Morey 1989 as listed in ASAE D245.6 (constants as copied in public code); 15.6 °C/80 % → 16.1 % wb (extension value, drying-science.md §1.2)',
       'published',
       [0, 50],
       [20, 90],

@@ -8,7 +8,7 @@
  * (2021): the *high-contrast* scheme (designed to stay distinct in greyscale and for colour-blind
  * readers) for the main series, the *muted* scheme for sites side by side, and the sequential
  * *YlOrBr* scheme (monotonic lightness, so it reads as a grey ramp when printed) for fractions and
- * densities. Hex values checked against the khroma and ggmnmlab R packages' transcriptions of the note.
+ * densities. Hex values checked against the khroma and ggmnmlab R packages' copies of the note.
  */
 
 /** Tol high-contrast scheme (Tol 2021, fig. 2): blue, yellow, red, plus black and white. */
