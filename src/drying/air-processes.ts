@@ -74,6 +74,7 @@ export function deficitToSaturationKgPerKg(dryBulbC: number, w: number, pressure
  * (2501 + 1.86T). Returns `w` when the air is already at or above that RH. Tolerance
  * {@link ADIABATIC_TOLERANCE_C}, at most {@link ADIABATIC_MAX_ITERATIONS} steps (then the last iterate,
  * which is within the bracket). `startC`, when given inside (T − 80, T), is the first iterate.
+ * `saturationPa`, when given, is exp(ln pws(dryBulbC)) in Pa (eq 6) already computed by the caller.
  */
 export function adiabaticHumidityRatioAtRh(
   dryBulbC: number,
@@ -81,10 +82,12 @@ export function adiabaticHumidityRatioAtRh(
   pressureKpa: number,
   rhFraction: number,
   startC?: number,
+  saturationPa?: number,
 ): number {
   const h = 1.006 * dryBulbC + w * (2501 + 1.86 * dryBulbC)
   const pw0 = (pressureKpa * w) / (MOLAR_MASS_RATIO_WATER_AIR + w)
-  if (pw0 >= rhFraction * Math.exp(lnSaturationPressureLiquidPa(dryBulbC + KELVIN_OFFSET)) * 1e-3) return w
+  const pwsPa = saturationPa ?? Math.exp(lnSaturationPressureLiquidPa(dryBulbC + KELVIN_OFFSET))
+  if (pw0 >= rhFraction * pwsPa * 1e-3) return w
   let lo = dryBulbC - 80
   let hi = dryBulbC
   // Start at the dry bulb, or at a caller's guess inside the bracket (e.g. the previous hour's end point).

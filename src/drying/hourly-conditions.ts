@@ -38,7 +38,7 @@ import type { DryingMethod } from './method.ts'
 import { EMC_RH_CAP_PCT, firstOrderRateConstant, type ProductResponse } from './product-response.ts'
 import { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
 import { type DryingThresholds, HourStatus } from './thresholds.ts'
-import { wetSurfaceEvaporation } from './wet-surface.ts'
+import { wetSurfaceEvaporationAtSaturation } from './wet-surface.ts'
 
 export { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
 export { wetSurfaceEvaporation } from './wet-surface.ts'
@@ -237,7 +237,8 @@ export function computeHourlyConditions(
     const rain = series.rainMm[i]
     const raining = rain >= thresholds.rainMm
     const u2 = wind * windTo2m
-    const pws = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET)) * 1e-3
+    const pwsPa = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET))
+    const pws = pwsPa * 1e-3
     const pw = (rh / 100) * pws
     const w = (0.621945 * pw) / (p - pw)
     humidityRatio[i] = w
@@ -272,13 +273,13 @@ export function computeHourlyConditions(
         }
         if (hourMode !== HourMode.paused) {
           const rnl = (netLongwaveHourlyMjM2(t, pw, rsOverRso[i]) * 1e6) / 3600
-          evaporation = wetSurfaceEvaporation(absorbed - rnl, t, pw, p, w, u2)
+          evaporation = wetSurfaceEvaporationAtSaturation(absorbed - rnl, t, pw, p, w, u2, pwsPa)
         }
         break
       }
       case 'shade': {
         const u = Math.max(method.minimumAirSpeedMs, method.windFraction * u2)
-        evaporation = wetSurfaceEvaporation(0, t, pw, p, w, u)
+        evaporation = wetSurfaceEvaporationAtSaturation(0, t, pw, p, w, u, pwsPa)
         break
       }
       case 'solar-cabinet': {
@@ -334,9 +335,16 @@ export function computeHourlyConditions(
     mode[i] = hourMode
     airC[i] = tAir
     productC[i] = tProduct
-    const pwsAir = tAir === t ? pws : Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET)) * 1e-3
-    airRhPct[i] = (100 * pw) / pwsAir
-    const pwsSurface = Math.exp(lnSaturationPressureLiquidPa(tProduct + KELVIN_OFFSET)) * 1e-3
+    // saturation at the air and at the product surface: one exp/log per distinct temperature
+    const pwsAirPa = tAir === t ? pwsPa : Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET))
+    airRhPct[i] = (100 * pw) / (pwsAirPa * 1e-3)
+    const pwsSurfacePa =
+      tProduct === tAir
+        ? pwsAirPa
+        : tProduct === t
+          ? pwsPa
+          : Math.exp(lnSaturationPressureLiquidPa(tProduct + KELVIN_OFFSET))
+    const pwsSurface = pwsSurfacePa * 1e-3
     let rhSurface = (100 * pw) / pwsSurface
     if (rhSurface > 100) rhSurface = 100
     surfaceRhPct[i] = rhSurface
@@ -372,7 +380,9 @@ export function computeHourlyConditions(
     let dSat = Number.NaN
     if (!exposed) {
       dSat =
-        rhSurface >= 100 ? 0 : adiabaticHumidityRatioAtRh(tProduct, w, p, 1, tProduct - depressionK[0]) - w
+        rhSurface >= 100
+          ? 0
+          : adiabaticHumidityRatioAtRh(tProduct, w, p, 1, tProduct - depressionK[0], pwsSurfacePa) - w
       if (dSat > 0) depressionK[0] = tProduct - adiabaticEndC(tProduct, w, dSat)
     }
     deficitToSaturationGPerKg[i] = 1000 * dSat
@@ -383,7 +393,14 @@ export function computeHourlyConditions(
       dTarget =
         rhSurface >= erhTarget
           ? 0
-          : adiabaticHumidityRatioAtRh(tProduct, w, p, erhTarget / 100, tProduct - depressionK[1]) - w
+          : adiabaticHumidityRatioAtRh(
+              tProduct,
+              w,
+              p,
+              erhTarget / 100,
+              tProduct - depressionK[1],
+              pwsSurfacePa,
+            ) - w
       if (dTarget > 0) depressionK[1] = tProduct - adiabaticEndC(tProduct, w, dTarget)
     }
     deficitToTargetGPerKg[i] = 1000 * dTarget

@@ -6,13 +6,21 @@
 import {
   aerodynamicResistanceFromWindFunctionSPerM,
   CP_DRY_AIR_KJ_PER_KG_K,
+  CP_WATER_VAPOR_KJ_PER_KG_K,
   evaporationKgPerM2HFromLatentFlux,
   latentHeatVaporizationMjPerKg,
+  penmanMonteithLatentFlux,
   psychrometricConstantKpaPerC,
   wetSurfaceLatentFluxWm2,
   windFunctionPenman1948MmPerDayKpa,
 } from '../physics/evaporation.ts'
-import { moistAirDensityKgPerM3 } from '../physics/moist-air.ts'
+import { humidityRatioFromVaporPressure, moistAirDensityKgPerM3 } from '../physics/moist-air.ts'
+import {
+  dLnSaturationPressureLiquidDT,
+  KELVIN_OFFSET,
+  SATURATION_MAX_C,
+  SATURATION_MIN_C,
+} from '../physics/saturation.ts'
 
 /**
  * Penman wet-surface evaporation [kg m⁻² h⁻¹] with available energy `rnWm2` and the Penman (1948) wind
@@ -39,5 +47,62 @@ export function wetSurfaceEvaporation(
     lambda,
   )
   const latent = wetSurfaceLatentFluxWm2(rnWm2, 0, airC, vaporPressureKpa, pressureKpa, ra)
+  return evaporationKgPerM2HFromLatentFlux(latent, airC)
+}
+
+/**
+ * {@link wetSurfaceEvaporation} with the saturation pressure of the air given: `saturationPa` =
+ * exp(ln pws(airC)) in Pa (ASHRAE HOF 2017 ch. 1 eq 6, as physics/saturation.ts computes it), which the
+ * hourly engine has already evaluated for the hour. The same operations in the same order as
+ * physics/evaporation.ts `wetSurfaceLatentFluxWm2` (es and its slope both from that one exp), so the
+ * result is bit for bit that of {@link wetSurfaceEvaporation} (checked in the tests); it saves two
+ * exp/log pairs per hour.
+ */
+export function wetSurfaceEvaporationAtSaturation(
+  rnWm2: number,
+  airC: number,
+  vaporPressureKpa: number,
+  pressureKpa: number,
+  w: number,
+  uMs: number,
+  saturationPa: number,
+): number {
+  const lambda = latentHeatVaporizationMjPerKg(airC)
+  const cp = (CP_DRY_AIR_KJ_PER_KG_K + 1.86 * w) / (1 + w)
+  const gamma = psychrometricConstantKpaPerC(pressureKpa, lambda, cp / 1000)
+  const density = moistAirDensityKgPerM3(airC, w, pressureKpa)
+  const ra = aerodynamicResistanceFromWindFunctionSPerM(
+    windFunctionPenman1948MmPerDayKpa(uMs),
+    density,
+    cp,
+    gamma,
+    lambda,
+  )
+  // physics/evaporation.ts wetSurfaceLatentFluxWm2 from here, with es = saturationVaporPressureLiquidKpa
+  if (!(airC >= SATURATION_MIN_C && airC <= SATURATION_MAX_C)) {
+    throw new RangeError(
+      `temperature must be between ${SATURATION_MIN_C} and ${SATURATION_MAX_C} °C, got ${airC}`,
+    )
+  }
+  const es = saturationPa / 1000
+  if (!(vaporPressureKpa >= 0 && vaporPressureKpa <= es * 1.0001)) {
+    throw new RangeError(
+      `vapour pressure must be between 0 and the saturation pressure ${es.toFixed(4)} kPa at ${airC} °C, got ${vaporPressureKpa}`,
+    )
+  }
+  const w2 = humidityRatioFromVaporPressure(vaporPressureKpa, pressureKpa)
+  // the caller's w is normally this same value: reuse what depends on it only when it is bit-equal
+  const density2 = w2 === w ? density : moistAirDensityKgPerM3(airC, w2, pressureKpa)
+  const cp2 = w2 === w ? cp : (CP_DRY_AIR_KJ_PER_KG_K + w2 * CP_WATER_VAPOR_KJ_PER_KG_K) / (1 + w2)
+  const gamma2 = w2 === w ? gamma : psychrometricConstantKpaPerC(pressureKpa, lambda, cp2 / 1000)
+  const slope = es * dLnSaturationPressureLiquidDT(airC + KELVIN_OFFSET)
+  const latent = penmanMonteithLatentFlux(
+    slope,
+    gamma2,
+    rnWm2 - 0,
+    density2 * cp2 * 1000,
+    es - vaporPressureKpa,
+    ra,
+  )
   return evaporationKgPerM2HFromLatentFlux(latent, airC)
 }
