@@ -36,6 +36,14 @@ describe('hostile batch logs and weighings', () => {
     await expectProblem(await post('/v1/energy-chart', garbageBytes(8192), 'application/octet-stream'), [422])
   })
 
+  it('energy-chart: a weather part with 10 MB of commas on one line is a 413 (the column limit of weather files)', async () => {
+    const form = new FormData()
+    form.append('log', new Blob([batchLog(10)]), 'log.csv')
+    form.append('weather', new Blob([`time,temp_c,rh_pct\n${'1,'.repeat(5 * 1024 * 1024)}`]), 'weather.csv')
+    const p = await expectProblem(await post('/v1/energy-chart', form), [413])
+    expect(p.detail).toMatch(/columns/)
+  })
+
   it('energy-chart: a 400-batch log is answered with one point per batch', async () => {
     const res = await post('/v1/energy-chart', batchLog(400), 'text/csv')
     expect(res.status).toBe(200)

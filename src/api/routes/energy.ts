@@ -16,10 +16,11 @@ import { ENERGY_TABLE_IDS, renderEnergyCsv } from '../../report/energy/energy-cs
 import { renderEnergyHtml } from '../../report/energy/energy-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import type { ApiConfig } from '../config.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem, type ProblemField } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
-import { decodeUploadText, readUpload } from '../upload.ts'
+import { checkedUploadText, decodeUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 
 /** Options of the request (query string, or the `options` part with the same keys as strings or numbers). */
@@ -108,61 +109,64 @@ async function readEnergyUpload(c: Parameters<typeof readUpload>[0]): Promise<En
 /** Cap on the rejected rows listed in a 422 answer (all are counted in the detail). */
 const MAX_LISTED_ROWS = 50
 
-export const energyRouter = new Hono().post('/', async (c) => {
-  const upload = await readEnergyUpload(c)
-  const q = parseOrProblem(energyChartQuerySchema, upload.options)
-  const options: EnergyChartOptions = {
-    baselineCount: q.baseline,
-    fuel: q.fuel,
-    dryingTempC: q.dryingTempC,
-    utcOffsetHours: q.utcOffsetHours,
-    elevationM: q.elevationM,
-  }
-  if (q.product !== undefined) {
-    try {
-      options.profile = productById(q.product)
-    } catch (e) {
-      throw new ApiProblem(400, (e as Error).message, [{ path: 'product', message: (e as Error).message }])
+export const energyRouter = (config: ApiConfig) =>
+  new Hono().post('/', async (c) => {
+    const upload = await readEnergyUpload(c)
+    const q = parseOrProblem(energyChartQuerySchema, upload.options)
+    const options: EnergyChartOptions = {
+      baselineCount: q.baseline,
+      fuel: q.fuel,
+      dryingTempC: q.dryingTempC,
+      utcOffsetHours: q.utcOffsetHours,
+      elevationM: q.elevationM,
     }
-  }
-  if (upload.weather) {
-    const w: Record<string, unknown> = {}
-    if (q.utcOffsetHours !== undefined) w.utcOffsetHours = q.utcOffsetHours
-    if (q.timeZone !== undefined) w.timeZone = q.timeZone
-    if (q.elevationM !== undefined) w.elevationM = q.elevationM
-    try {
-      options.weather = readWeatherBytes(upload.weather, w).series
-    } catch (e) {
-      if (e instanceof WeatherInputError || e instanceof RangeError) {
-        throw new ApiProblem(422, `weather: ${e.message}`, [{ path: 'weather', message: e.message }])
+    if (q.product !== undefined) {
+      try {
+        options.profile = productById(q.product)
+      } catch (e) {
+        throw new ApiProblem(400, (e as Error).message, [{ path: 'product', message: (e as Error).message }])
       }
+    }
+    if (upload.weather) {
+      const w: Record<string, unknown> = {}
+      if (q.utcOffsetHours !== undefined) w.utcOffsetHours = q.utcOffsetHours
+      if (q.timeZone !== undefined) w.timeZone = q.timeZone
+      if (q.elevationM !== undefined) w.elevationM = q.elevationM
+      // Same row and column limits as the weather files of /v1/assess (the text is only checked here).
+      checkedUploadText({ name: 'weather', field: 'weather', bytes: upload.weather }, config)
+      try {
+        options.weather = readWeatherBytes(upload.weather, w).series
+      } catch (e) {
+        if (e instanceof WeatherInputError || e instanceof RangeError) {
+          throw new ApiProblem(422, `weather: ${e.message}`, [{ path: 'weather', message: e.message }])
+        }
+        throw e
+      }
+    }
+    let assessment: ReturnType<typeof analyzeEnergyLog>
+    try {
+      assessment = analyzeEnergyLog(decodeUploadText(upload.log), options)
+    } catch (e) {
+      if (e instanceof BatchLogError) {
+        const errors: ProblemField[] = e.rejections
+          .slice(0, MAX_LISTED_ROWS)
+          .map((r) => ({ path: `line ${r.line}`, message: r.message }))
+        throw new ApiProblem(
+          422,
+          `log: ${e.message}`,
+          errors.length > 0 ? errors : [{ path: 'log', message: e.message }],
+        )
+      }
+      if (e instanceof RangeError)
+        throw new ApiProblem(400, e.message, [{ path: 'options', message: e.message }])
       throw e
     }
-  }
-  let assessment: ReturnType<typeof analyzeEnergyLog>
-  try {
-    assessment = analyzeEnergyLog(decodeUploadText(upload.log), options)
-  } catch (e) {
-    if (e instanceof BatchLogError) {
-      const errors: ProblemField[] = e.rejections
-        .slice(0, MAX_LISTED_ROWS)
-        .map((r) => ({ path: `line ${r.line}`, message: r.message }))
-      throw new ApiProblem(
-        422,
-        `log: ${e.message}`,
-        errors.length > 0 ? errors : [{ path: 'log', message: e.message }],
-      )
+    if (q.format === 'html') return c.html(renderEnergyHtml(assessment, { logName: upload.logName }))
+    if (q.format === 'csv') {
+      return c.body(renderEnergyCsv(assessment, q.table), 200, { 'content-type': 'text/csv; charset=utf-8' })
     }
-    if (e instanceof RangeError)
-      throw new ApiProblem(400, e.message, [{ path: 'options', message: e.message }])
-    throw e
-  }
-  if (q.format === 'html') return c.html(renderEnergyHtml(assessment, { logName: upload.logName }))
-  if (q.format === 'csv') {
-    return c.body(renderEnergyCsv(assessment, q.table), 200, { 'content-type': 'text/csv; charset=utf-8' })
-  }
-  return c.json(assessment)
-})
+    return c.json(assessment)
+  })
 
 registerOperation({
   method: 'post',

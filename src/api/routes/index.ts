@@ -24,7 +24,7 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
   return [
     { path: '/healthz', router: healthRouter },
     { path: '/v1/air', router: airRouter },
-    { path: '/v1/energy-chart', router: energyRouter },
+    { path: '/v1/energy-chart', router: energyRouter(_config) },
     { path: '/v1/inspect', router: inspectRouter(_config) },
     { path: '/v1/products', router: productsRouter },
     { path: '/v1/assess', router: assessRouter(_config) },
