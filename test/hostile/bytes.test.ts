@@ -126,6 +126,31 @@ describe('hostile bytes', () => {
     expect(p.detail).toMatch(/columns/)
   })
 
+  it.each([
+    ['json', 'application/problem+json'],
+    ['page', 'text/html; charset=UTF-8'],
+  ])(
+    'the page form (POST /report, format=%s) refuses 10 MB of commas with a 413 too',
+    async (format, type) => {
+      const form = new FormData()
+      for (const [k, v] of Object.entries({
+        product: 'figs',
+        method: 'open-air',
+        utcOffsetHours: '0',
+        format,
+      }))
+        form.set(k, v)
+      form.append(
+        'file',
+        new File([`time,temp_c,rh_pct\n${'1,'.repeat(5 * 1024 * 1024)}`], 'w.csv', { type: 'text/csv' }),
+      )
+      const res = await post('/report', form)
+      expect(res.status).toBe(413)
+      expect(res.headers.get('content-type')).toBe(type)
+      expect(await res.text()).toMatch(/limit of 1000 columns/)
+    },
+  )
+
   it('the column limit is read from DRYHOURS_MAX_COLUMNS, nonsense refused naming it', () => {
     expect(configFromVariables({ DRYHOURS_MAX_COLUMNS: '5000' })).toEqual({ maxColumns: 5000 })
     expect(() => configFromVariables({ DRYHOURS_MAX_COLUMNS: 'wide' })).toThrow(/DRYHOURS_MAX_COLUMNS/)

@@ -14,7 +14,8 @@ import { pageCss } from '../../web/page-css.ts'
 import { renderPage } from '../../web/page-html.ts'
 import { FormQuestion, runForm } from '../../web/run-form.ts'
 import type { ApiConfig } from '../config.ts'
-import { problemBody } from '../problem.ts'
+import { ApiProblem, problemBody } from '../problem.ts'
+import { checkedUploadText } from '../upload.ts'
 
 /** The page's configuration: the API config, plus demo files when the entry point can read them. */
 export type PageConfig = ApiConfig & { demo?: DemoProvider }
@@ -87,7 +88,7 @@ export function pageRouter(config: PageConfig): Hono {
     const formatRaw = form.get('format')
     const format = typeof formatRaw === 'string' ? formatRaw : 'page'
     const values = echoValues(form)
-    const fail = (status: 400 | 422 | 500, message: string, ask: boolean) => {
+    const fail = (status: 400 | 413 | 422 | 500, message: string, ask: boolean) => {
       if (wantsJson(format)) {
         return c.body(JSON.stringify({ ...problemBody(status, message), askFileQuestions: ask }), status, {
           'content-type': 'application/problem+json',
@@ -108,6 +109,15 @@ export function pageRouter(config: PageConfig): Hono {
     } catch (e) {
       if (e instanceof RangeError) return fail(400, e.message, e.message.startsWith('file:'))
       throw e
+    }
+    // The same row and column limits as the API's weather files, before the reader runs.
+    for (const f of input.files) {
+      try {
+        checkedUploadText({ name: f.name, field: 'file', bytes: f.bytes }, config)
+      } catch (e) {
+        if (e instanceof ApiProblem && e.status === 413) return fail(413, e.message, false)
+        throw e
+      }
     }
     let out: Awaited<ReturnType<typeof runForm>>
     try {
