@@ -98,7 +98,9 @@ export function adiabaticHumidityRatioAtRh(
     // dW/dT along constant h
     const dw = (-1.006 * denom - (h - 1.006 * t) * 1.86) / (denom * denom)
     const pw = (pressureKpa * wt) / (MOLAR_MASS_RATIO_WATER_AIR + wt)
-    const dpw = (pressureKpa * MOLAR_MASS_RATIO_WATER_AIR * dw) / (MOLAR_MASS_RATIO_WATER_AIR + wt) ** 2
+    // x·x is x ** 2 bit for bit (IEEE pow returns x·x for y = 2) without the pow call
+    const dpwDenom = MOLAR_MASS_RATIO_WATER_AIR + wt
+    const dpw = (pressureKpa * MOLAR_MASS_RATIO_WATER_AIR * dw) / (dpwDenom * dpwDenom)
     const tK = t + KELVIN_OFFSET
     const pws = Math.exp(lnSaturationPressureLiquidPa(tK)) * 1e-3
     const f = pw - rhFraction * pws

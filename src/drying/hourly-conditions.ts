@@ -172,6 +172,9 @@ export function computeHourlyConditions(
   const status = new Uint8Array(n)
   const night = new Uint8Array(n)
   const step = new Float64Array(2)
+  // [EMC desorption, EMC adsorption, k, n] of the hour
+  const response = new Float64Array(4)
+  const hourResponse = product.hourResponse
   if (options.lazy === true) {
     // hours not yet computed read as missing temperatures, never as 0 °C
     airC.fill(Number.NaN)
@@ -364,15 +367,23 @@ export function computeHourlyConditions(
       return
     }
     const rhForEmc = Math.min(rhSurface, EMC_RH_CAP_PCT)
-    const meDes = product.emcDesorptionDb(tProduct, rhForEmc)
-    emcDesorptionDb[i] = meDes
-    emcAdsorptionDb[i] = sameIsotherm ? meDes : product.emcAdsorptionDb(tProduct, rhForEmc)
-    product.stepParameters(tProduct, rhForEmc, step)
-    rateK[i] = step[0]
-    rateN[i] = step[1]
-    decayPerHour[i] = step[1] === 1 ? Math.exp(-step[0]) : Number.NaN
+    if (hourResponse !== undefined) hourResponse(tProduct, rhForEmc, response)
+    else {
+      response[0] = product.emcDesorptionDb(tProduct, rhForEmc)
+      response[1] = sameIsotherm ? response[0] : product.emcAdsorptionDb(tProduct, rhForEmc)
+      product.stepParameters(tProduct, rhForEmc, step)
+      response[2] = step[0]
+      response[3] = step[1]
+    }
+    const k = response[2]
+    const nExp = response[3]
+    emcDesorptionDb[i] = response[0]
+    emcAdsorptionDb[i] = sameIsotherm ? response[0] : response[1]
+    rateK[i] = k
+    rateN[i] = nExp
+    decayPerHour[i] = nExp === 1 ? Math.exp(-k) : Number.NaN
     rewetDecayPerHour[i] = Math.exp(
-      -product.rewettingRateFactor * firstOrderRateConstant(step[0], step[1], product.thompsonTimeScale),
+      -product.rewettingRateFactor * firstOrderRateConstant(k, nExp, product.thompsonTimeScale),
     )
     // Deficits are taken for air at the product temperature (it is what touches the product).
     // Deficit to saturation: the forced-air constant-rate limit. Exposed methods use the Penman rate as
@@ -419,7 +430,11 @@ export function computeHourlyConditions(
     status[i] = s
   }
   const computed = new Uint8Array(n)
+  // hours still to compute, in a typed array (a captured, reassigned `let` would be boxed)
+  const remaining = new Int32Array(1)
+  remaining[0] = n
   const ensure = (from: number, count: number, wrap: boolean): void => {
+    if (remaining[0] === 0) return
     for (let k = 0; k < count; k++) {
       let i = from + k
       if (i >= n) {
@@ -429,6 +444,7 @@ export function computeHourlyConditions(
       if (computed[i] === 0) {
         computeHour(i)
         computed[i] = 1
+        remaining[0]--
       }
     }
   }

@@ -34,6 +34,11 @@ export interface ProductResponse {
   erhPct(tC: number, moistureDb: number): number
   /** Page step parameters at (tC, rhPct) into out[0] = k [h⁻ⁿ], out[1] = n. n = 0 marks Thompson (k = tC). */
   stepParameters(tC: number, rhPct: number, out: Float64Array): void
+  /**
+   * Optional: the four per-hour values at once, out = [EMC desorption, EMC adsorption, k, n], equal to
+   * the separate calls (a tabulated response shares one grid-cell location between them).
+   */
+  hourResponse?(tC: number, rhPct: number, out: Float64Array): void
   /** Rewetting rate constant as a fraction of the drying one (profile value and its source). */
   rewettingRateFactor: number
   /** Time-scale factor s of Thompson's equation at this thickness (drying-rate.ts); 1 for other models. */

@@ -35,6 +35,34 @@ function node(g: Grid, it: number, ir: number): number {
   return v
 }
 
+/** Cell of the last {@link locate} call: [x index, RH index, x fraction, RH fraction]. */
+const cell = new Float64Array(4)
+
+/** Grid cell and fractions of (tC, rhPct), the same arithmetic as {@link lookup}, into {@link cell}. */
+function locate(tC: number, rhPct: number): void {
+  let x = (tC - T_MIN) / GRID_T_STEP_C
+  let y = rhPct / GRID_RH_STEP_PCT
+  if (x < 0) x = 0
+  else if (x > NT - 1.000001) x = NT - 1.000001
+  if (y < 0) y = 0
+  else if (y > NRH - 1.000001) y = NRH - 1.000001
+  const it = Math.floor(x)
+  const ir = Math.floor(y)
+  cell[0] = it
+  cell[1] = ir
+  cell[2] = x - it
+  cell[3] = y - ir
+}
+
+/** Bilinear value of `g` in the cell of the last {@link locate}: bit for bit what {@link lookup} returns. */
+function interpolate(g: Grid, it: number, ir: number, fx: number, fy: number): number {
+  const a = node(g, it, ir)
+  const b = node(g, it + 1, ir)
+  const c = node(g, it, ir + 1)
+  const d = node(g, it + 1, ir + 1)
+  return (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
+}
+
 function lookup(g: Grid, tC: number, rhPct: number): number {
   let x = (tC - T_MIN) / GRID_T_STEP_C
   let y = rhPct / GRID_RH_STEP_PCT
@@ -63,6 +91,7 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
   const sameIsotherm = direct.profile.isotherm.adsorption === undefined
   const ads = sameIsotherm ? des : makeGrid((t, rh) => direct.emcAdsorptionDb(t, rh))
   const scratch = new Float64Array(2)
+  const scratchStep = new Float64Array(2)
   // k varies over orders of magnitude with T: the grid holds ln k.
   const lnKGrid = makeGrid((t, rh) => {
     direct.stepParameters(t, rh, scratch)
@@ -97,6 +126,25 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
         erhCache[slot] = v
       }
       return v
+    },
+    hourResponse: (t, rh, out) => {
+      // one cell location for all grids of the hour (same values as the separate lookups)
+      locate(t, rh)
+      const it = cell[0]
+      const ir = cell[1]
+      const fx = cell[2]
+      const fy = cell[3]
+      const meDes = interpolate(des, it, ir, fx, fy)
+      out[0] = meDes
+      out[1] = sameIsotherm ? meDes : interpolate(ads, it, ir, fx, fy)
+      if (thompson) {
+        direct.stepParameters(t, rh, scratchStep)
+        out[2] = scratchStep[0]
+        out[3] = scratchStep[1]
+        return
+      }
+      out[2] = Math.exp(interpolate(lnKGrid, it, ir, fx, fy))
+      out[3] = constantN ? node(nGrid, 0, 0) : interpolate(nGrid, it, ir, fx, fy)
     },
     stepParameters: (t, rh, out) => {
       if (thompson) {

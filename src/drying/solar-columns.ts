@@ -43,12 +43,20 @@ export function computeSolarColumns(series: HourlySeries): SolarColumns {
   sunPositionColumns(series.startUtcMs, lat, lon, altitudeDeg, azimuthDeg)
   const rso = alloc(n)
   const rs = alloc(n)
+  // dr changes once per local day: computed when the day changes (same value as per hour)
+  let lastDay = Number.NaN
+  let dr = 0
+  const offsetMs = (lon / 15) * 3_600_000
   for (let i = 0; i < n; i++) {
     // Hour-mean extraterrestrial horizontal irradiance by the midpoint rule: Gsc·dr·sin(altitude at
     // mid-hour) (FAO-56 eqs 21–23 integrated over the hour ≈ value at its middle; off by up to one
     // sunrise/sunset hour, which the Rs/Rso carry rule of FAO-56 ch. 4 does not use).
     const sinAlt = Math.sin((altitudeDeg[i] * Math.PI) / 180)
-    const dr = 1 + 0.033 * Math.cos((2 * Math.PI * dayOfYearAt(series.startUtcMs[i], lon / 15)) / 365)
+    const day = Math.floor((series.startUtcMs[i] + offsetMs) / 86_400_000)
+    if (day !== lastDay) {
+      lastDay = day
+      dr = 1 + 0.033 * Math.cos((2 * Math.PI * dayOfYearAt(series.startUtcMs[i], lon / 15)) / 365)
+    }
     const raW = sinAlt > 0 ? SOLAR_CONSTANT_WM2 * dr * sinAlt : 0
     raWm2[i] = raW
     rso[i] = clearSkyRadiationFao56((raW * 3600) / 1e6, elevation)
