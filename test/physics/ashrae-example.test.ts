@@ -9,5 +9,6 @@ describe('ASHRAE Handbook — Fundamentals 2017 ch. 1, Example 1 (40 °C db, 20 
   it('humidity ratio ≈ 0.0065 kg/kg', () => expect(s.humidityRatioGPerKg / 1000).toBeCloseTo(0.0065, 3))
   it('relative humidity ≈ 14 %', () => expect(Math.abs(s.relativeHumidityPct - 14)).toBeLessThan(0.5))
   it('enthalpy ≈ 56.7 kJ/kg', () => expect(Math.abs(s.enthalpyKjPerKg - 56.7)).toBeLessThan(0.05))
-  it('specific volume ≈ 0.896 m³/kg', () => expect(Math.abs(s.specificVolumeM3PerKg - 0.896)).toBeLessThan(0.0005))
+  it('specific volume ≈ 0.896 m³/kg', () =>
+    expect(Math.abs(s.specificVolumeM3PerKg - 0.896)).toBeLessThan(0.0005))
 })
