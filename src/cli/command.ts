@@ -32,7 +32,8 @@ export function numberOption(name: string, value: string | undefined): number | 
   if (value === undefined) return undefined
   const trimmed = value.trim()
   const n = Number(trimmed)
-  if (trimmed === '' || !Number.isFinite(n)) {
+  // Decimal notation only: Number() would also read 0x10, 0b11 and 0o17.
+  if (trimmed === '' || !Number.isFinite(n) || /^[+-]?0[xbo]/i.test(trimmed)) {
     throw new UsageError(`--${name} must be a number, got '${value}'`)
   }
   return n

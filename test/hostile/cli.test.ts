@@ -98,9 +98,8 @@ describe('CLI with hostile numbers and options', () => {
     expect((JSON.parse(r.out) as { site: { latitudeDeg: number } }).site.latitudeDeg).toBe(0)
   })
 
-  // Bug (src/cli/command.ts numberOption): Number('0x10') is 16, so --lat 0x10 is taken as 16° N and
-  // --max-days 0x10 as 16 days. The API refuses hex literals (src/api/schemas/params.ts). Expected: exit 2.
-  it.fails('--lat 0x10: exit 2 (documents a CLI bug)', async () => {
+  // Number('0x10') is 16: numberOption refuses hex, binary and octal literals as the API does.
+  it('--lat 0x10: exit 2', async () => {
     expectUsageError(await run(['inspect', 'f.csv', '--lat', '0x10'], GOOD), /--lat/)
   })
 
