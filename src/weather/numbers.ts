@@ -48,7 +48,7 @@ export function parseField(
       out[i] = Number.NaN
       return FIELD_MISSING
     }
-    if (x === Number.POSITIVE_INFINITY || x === Number.NEGATIVE_INFINITY) {
+    if (x === Number.POSITIVE_INFINITY || x === Number.NEGATIVE_INFINITY || hasRadixPrefix(s, x)) {
       out[i] = Number.NaN
       return FIELD_UNREADABLE
     }
@@ -58,10 +58,26 @@ export function parseField(
   out[i] = Number.NaN
   const t = s.trim().toLowerCase()
   if (MISSING_WORDS.has(t)) return FIELD_MISSING
-  if (/^[-+]?\d+(\.\d+)?\s*[a-z%°]+$/i.test(t)) {
+  if (/^[-+]?\d+(\.\d+)?\s*[a-z%°]+$/i.test(t) && !/^[-+]?0[xbo]/.test(t)) {
     const v = Number.parseFloat(t)
     out[i] = v
     return FIELD_OK
   }
   return FIELD_UNREADABLE
+}
+
+/**
+ * True when `s` is a hex, binary or octal literal ('0x10', '0b11', '0o17'), which `+s` reads as an
+ * integer but no weather export writes: such a field is a code, not a measurement. Only integers can
+ * come from these literals, so the scan is skipped for every other value (the fast path).
+ */
+function hasRadixPrefix(s: string, x: number): boolean {
+  if (x !== Math.floor(x) || s.length < 3) return false
+  const first = s.charCodeAt(0)
+  // A leading digit 1-9, sign or point cannot start a radix literal; '0' or white space (which `+s`
+  // skips, including no-break spaces) needs a closer look.
+  const t = first === 48 ? s : first > 32 && first < 128 ? '' : s.trim()
+  if (t.length < 3 || t.charCodeAt(0) !== 48) return false
+  const c = t.charCodeAt(1) | 32 // lower case
+  return c === 120 || c === 98 || c === 111 // 'x', 'b', 'o'
 }
