@@ -80,7 +80,14 @@ export async function readUpload(c: Context, opts: { defaultName: string }): Pro
     return { files, options, query }
   }
   if (RAW_TYPES.includes(type)) {
-    const bytes = new Uint8Array(await c.req.arrayBuffer())
+    let bytes: Uint8Array
+    try {
+      bytes = new Uint8Array(await c.req.arrayBuffer())
+    } catch (e) {
+      if (e instanceof ApiProblem) throw e
+      // The client went away or the body stream broke: the request, not the server, is at fault.
+      throw new ApiProblem(400, 'the request body could not be read completely (connection closed?)')
+    }
     return { files: [{ name: query.name ?? opts.defaultName, field: '', bytes }], options: undefined, query }
   }
   throw new ApiProblem(
