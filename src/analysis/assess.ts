@@ -24,7 +24,7 @@ import { type DryingThresholds, parseDryingThresholds } from '../drying/threshol
 import { heatOfSorption } from '../product/equilibrium.ts'
 import { moistureDbFromWbPct, waterToRemoveKg } from '../product/moisture-basis.ts'
 import type { ProductProfile } from '../product/profile.ts'
-import type { HourlySeries } from '../weather/series.ts'
+import { type HourlySeries, QualityFlag } from '../weather/series.ts'
 import { ASSESSMENT_SCHEMA, type Assessment, type FuelFigure, type HeatSummary } from './assessment.ts'
 import { assessmentAssumptions } from './assumptions.ts'
 import { localTimeColumns, parseMonthDay } from './local-time.ts'
@@ -83,6 +83,9 @@ export interface AssessOptions {
   fuelPrices?: Partial<Record<FuelId, number>>
   onProgress?: (p: AssessProgress) => void
 }
+
+/** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */
+const MIN_HOURS_FOR_A_YEAR = 168
 
 function checkRange(name: string, value: number, lo: number, hi: number, unit: string): void {
   if (!(value >= lo && value <= hi))
@@ -174,8 +177,17 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   }
   // Years with at least one month of enough data (a UTC file shifted to local time touches one hour of
   // the next year: that is not a year of data).
-  const years = counts.years.filter((y) =>
-    monthly.some((m) => m.usableHours.byYear.some((v) => v.year === y)),
+  // A short file (a logger export of a few weeks) still counts its year when it holds at least a week.
+  const hoursInYear = new Map<number, number>()
+  for (let i = 0; i < series.hours; i++) {
+    if ((series.quality[i] & QualityFlag.missingCore) === 0) {
+      hoursInYear.set(time.year[i], (hoursInYear.get(time.year[i]) ?? 0) + 1)
+    }
+  }
+  const years = counts.years.filter(
+    (y) =>
+      monthly.some((m) => m.usableHours.byYear.some((v) => v.year === y)) ||
+      (hoursInYear.get(y) ?? 0) >= MIN_HOURS_FOR_A_YEAR,
   )
 
   // Monthly heat: batches from the 1st and 16th of every month.
