@@ -59,27 +59,83 @@ export interface ResolvedTimes {
   zoneStandardOffsetHours: number | null
 }
 
+/** Years a timestamp may carry; the same range as {@link wallClockMs} (common practice, no source). */
+const FIRST_YEAR = 1800
+const LAST_YEAR = 2200
+
+/**
+ * Hours a typical year must hold to be taken as one: 90 % of 8760. Typical-year files (e.g. TMY3,
+ * Wilcox & Marion 2008, NREL/TP-581-43156, from memory) are one complete year of 8760 hours with each
+ * calendar month taken whole from one source year; the 10 % margin for missing rows is common
+ * practice, no source.
+ */
+const TYPICAL_YEAR_MIN_HOURS = 7884
+/** At most a leap year plus two days of rows (sub-hourly files are never typical years). */
+const TYPICAL_YEAR_MAX_HOURS = 8784 + 48
+
+/**
+ * A typical (synthetic) year: rows in calendar order, all twelve months present, each month from a
+ * single year, at least two source years, and about one year of hours. Rows flagged in `skip` (years
+ * outside the accepted range) are left out.
+ */
 function detectTypicalYear(
   ts: TimestampColumns,
   order: 'mdy' | 'dmy',
+  skip: Uint8Array,
 ): { typical: boolean; years: number[]; leap: boolean } {
   const years = new Set<number>()
+  const yearOfMonth = new Float64Array(13).fill(Number.NaN)
   let previousKey = -1
   let monotonic = true
+  let monthsFromOneYear = true
   let leap = false
   let valid = 0
   for (let i = 0; i < ts.year.length; i++) {
-    if (Number.isNaN(ts.year[i]) || Number.isNaN(ts.minuteOfDay[i])) continue
+    if (skip[i] === 1 || Number.isNaN(ts.year[i]) || Number.isNaN(ts.minuteOfDay[i])) continue
     valid++
-    years.add(ts.year[i])
+    const year = ts.year[i]
+    years.add(year)
     const [month, day] = monthDayOf(ts, i, order)
+    if (month >= 1 && month <= 12) {
+      if (Number.isNaN(yearOfMonth[month])) yearOfMonth[month] = year
+      else if (yearOfMonth[month] !== year) monthsFromOneYear = false
+    }
     if (month === 2 && day === 29) leap = true
     const key = (month * 32 + day) * 1441 + ts.minuteOfDay[i]
     if (key < previousKey) monotonic = false
     previousKey = key
   }
-  const typical = years.size > 1 && monotonic && valid <= 8784 + 48
+  let months = 0
+  for (let m = 1; m <= 12; m++) if (!Number.isNaN(yearOfMonth[m])) months++
+  const typical =
+    years.size > 1 &&
+    monotonic &&
+    monthsFromOneYear &&
+    months === 12 &&
+    valid >= TYPICAL_YEAR_MIN_HOURS &&
+    valid <= TYPICAL_YEAR_MAX_HOURS
   return { typical, years: [...years].sort((a, b) => a - b), leap }
+}
+
+/**
+ * Flag rows whose year lies outside {@link FIRST_YEAR}–{@link LAST_YEAR} and report each with its
+ * line, so that one stray row cannot change how the others are read.
+ */
+function rejectOutOfRangeYears(ts: TimestampColumns, lines: Int32Array, log: ProblemLog): Uint8Array {
+  const skip = new Uint8Array(ts.year.length)
+  for (let i = 0; i < ts.year.length; i++) {
+    const year = ts.year[i]
+    if (Number.isNaN(year) || Number.isNaN(ts.minuteOfDay[i])) continue
+    if (year >= FIRST_YEAR && year <= LAST_YEAR) continue
+    skip[i] = 1
+    log.add(
+      lines[i],
+      null,
+      'bad-timestamp',
+      `year ${year} is outside the accepted ${FIRST_YEAR}–${LAST_YEAR}: row rejected`,
+    )
+  }
+  return skip
 }
 
 export function resolveRowTimes(
@@ -119,7 +175,8 @@ export function resolveRowTimes(
     )
   }
 
-  const { typical, years, leap } = detectTypicalYear(ts, order)
+  const skip = rejectOutOfRangeYears(ts, lines, log)
+  const { typical, years, leap } = detectTypicalYear(ts, order, skip)
   const nominal = leap ? NOMINAL_LEAP_YEAR : NOMINAL_COMMON_YEAR
   if (typical) {
     warnings.push(
@@ -151,7 +208,7 @@ export function resolveRowTimes(
   let maxWall = Number.NEGATIVE_INFINITY
   for (let i = 0; i < n; i++) {
     const year = typical ? nominal : ts.year[i]
-    const w = Number.isNaN(ts.minuteOfDay[i]) ? Number.NaN : wallClockMs(ts, i, order, year)
+    const w = skip[i] === 1 || Number.isNaN(ts.minuteOfDay[i]) ? Number.NaN : wallClockMs(ts, i, order, year)
     wall[i] = w
     if (Number.isNaN(w)) continue
     if (w < minWall) minWall = w
@@ -197,7 +254,7 @@ export function resolveRowTimes(
   for (let i = 0; i < n; i++) {
     const w = wall[i]
     if (Number.isNaN(w)) {
-      if (!Number.isNaN(ts.minuteOfDay[i]))
+      if (skip[i] === 0 && !Number.isNaN(ts.minuteOfDay[i]))
         log.add(
           lines[i],
           null,

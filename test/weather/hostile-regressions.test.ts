@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest'
 import { FIELD_OK, FIELD_UNREADABLE, parseField } from '../../src/weather/numbers.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
+import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 import { csv } from './csv-builder.ts'
 
 const STAMPS = ['2024-07-01T10:00Z', '2024-07-01T11:00Z', '2024-07-01T12:00Z']
@@ -65,3 +66,64 @@ describe('number literals in weather fields', () => {
     expect(p?.message).toMatch(/0x10/)
   })
 })
+
+describe('years outside 1800–2200 and typical-year detection', () => {
+  const july = (extra: string): string =>
+    csv(['time', 'temp_c', 'rh_pct'], [...STAMPS.map((t, i) => [t, 30 + i, 25 - i]), [extra, 33, 19]])
+
+  it.each(['2999-07-01T13:00Z', '2201-07-01T13:00Z', '1799-07-01T13:00Z'])(
+    'one row dated %s among July 2024 rows is rejected with its line; no typical year',
+    (stamp) => {
+      const r = readWeather(july(stamp), {})
+      expect(r.series.typicalYear).toBe(false)
+      expect(r.sourceYears).toEqual([])
+      expect(r.years).toEqual([2024])
+      expect(r.rows.rejected).toBe(1)
+      expect(r.rows.used).toBe(3)
+      const p = r.problems.find((q) => q.kind === 'bad-timestamp')
+      expect(p?.line).toBe(5)
+      expect(p?.message).toMatch(/outside the accepted 1800–2200/)
+      expect(iso(r.series.startUtcMs[0])).toBe('2024-07-01T10:00')
+    },
+  )
+
+  it('every row outside the range: refused naming the accepted years', () => {
+    const all = csv(
+      ['time', 'temp_c', 'rh_pct'],
+      STAMPS.map((t) => [t.replace('2024', '2999'), 30, 25]),
+    )
+    expect(() => readWeather(all, {})).toThrow(WeatherInputError)
+    expect(() => readWeather(all, {})).toThrow(/1800–2200/)
+  })
+
+  // A year of hours in calendar order, each month from one year, except that `split` month's last
+  // day comes from another year.
+  function typicalRows(split: number | null): (string | number)[][] {
+    const rows: (string | number)[][] = []
+    for (let m = 1; m <= 12; m++) {
+      const y = 1990 + m
+      const days = new Date(Date.UTC(y, m, 0)).getUTCDate()
+      for (let d = 1; d <= days; d++) {
+        const year = m === split && d === days ? y + 20 : y
+        for (let h = 0; h < 24; h++) rows.push([year, m, d, h, 10, 50])
+      }
+    }
+    return rows
+  }
+  const header = ['year', 'month', 'day', 'hour', 'temp', 'rh']
+
+  it('twelve whole months from twelve years are a typical year', () => {
+    const r = readWeather(csv(header, typicalRows(null)), { utcOffsetHours: 0 })
+    expect(r.series.typicalYear).toBe(true)
+    expect(r.years).toEqual([2000]) // February from 1992 has 29 days: the nominal leap year
+  })
+
+  it('a month whose rows come from two years is no typical year', () => {
+    const r = readWeather(csv(header, typicalRows(7)), { utcOffsetHours: 0 })
+    expect(r.series.typicalYear).toBe(false)
+  })
+})
+
+function iso(ms: number): string {
+  return new Date(ms).toISOString().slice(0, 16)
+}

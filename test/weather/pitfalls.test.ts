@@ -119,24 +119,39 @@ describe('clock and calendar (pitfalls 3, 4, 5)', () => {
   })
 
   it('a typical year whose months come from different years is one continuous year, leap day included', () => {
-    // Jan from 1995, Feb from 2004 (with 29 Feb), Mar from 1999: first day of each month only, 24 h each
+    // Twelve whole months, each from one year (the structure of TMY3 files, Wilcox & Marion 2008,
+    // NREL/TP-581-43156, from memory): Jan 1995, Feb 2004 (with 29 Feb), Mar 1999, Apr–Dec 2001–2009.
+    const sourceYear = [1995, 2004, 1999, 2001, 2002, 2003, 2005, 2006, 2007, 2008, 2009, 2001]
     const rows: (string | number)[][] = []
-    const months: [number, number, number[]][] = [
-      [1995, 1, [1]],
-      [2004, 2, [28, 29]],
-      [1999, 3, [1]],
-    ]
-    for (const [y, m, days] of months)
-      for (const d of days) for (let h = 0; h < 24; h++) rows.push([y, m, d, h, 10 + (h % 3), 50 + (h % 4)])
+    for (let m = 1; m <= 12; m++) {
+      const y = sourceYear[m - 1]
+      const days = new Date(Date.UTC(y, m, 0)).getUTCDate()
+      for (let d = 1; d <= days; d++)
+        for (let h = 0; h < 24; h++) rows.push([y, m, d, h, 10 + (h % 3), 50 + (h % 4)])
+    }
+    expect(rows.length).toBe(8784)
     const r = readWeather(csv(['year', 'month', 'day', 'hour', 'temp', 'rh'], rows), { utcOffsetHours: 0 })
     expect(r.series.typicalYear).toBe(true)
-    expect(r.sourceYears).toEqual([1995, 1999, 2004])
+    expect(r.sourceYears).toEqual([1995, 1999, 2001, 2002, 2003, 2004, 2005, 2006, 2007, 2008, 2009])
     expect(iso(r.series.startUtcMs[0])).toBe('2000-01-01T00:00') // nominal leap year, 29 Feb kept
     expect(r.years).toEqual([2000])
+    expect(r.series.hours).toBe(8784)
     expect(r.rows.rejected).toBe(0)
     const feb29 = Date.parse('2000-02-29T00:00Z')
     const s = (feb29 - r.series.startUtcMs[0]) / 3_600_000
     expect(r.series.dryBulbC[s]).toBe(10) // hour 0 of 29 Feb 2004
+  })
+
+  it('two days from different years are no typical year (too few hours)', () => {
+    const rows: (string | number)[][] = []
+    for (const [y, m] of [
+      [1995, 1],
+      [1999, 3],
+    ])
+      for (let h = 0; h < 24; h++) rows.push([y, m, 1, h, 10, 50])
+    const r = readWeather(csv(['year', 'month', 'day', 'hour', 'temp', 'rh'], rows), { utcOffsetHours: 0 })
+    expect(r.series.typicalYear).toBe(false)
+    expect(r.years).toEqual([1995, 1996, 1997, 1998, 1999])
   })
 
   it('a multi-year file in order is not a typical year', () => {
