@@ -134,18 +134,29 @@ function clampElevation(m: number): number {
 }
 
 /**
- * Read a weather file's bytes: UTF-8 (BOM allowed), or ISO-8859-1 when the bytes are not valid
- * UTF-8 (older station and typical-year exports use it).
+ * Text of a weather file's bytes. A byte order mark decides: FF FE is UTF-16 LE, FE FF UTF-16 BE,
+ * EF BB BF UTF-8 (Unicode 15.0 §23.8, Table 23-5 "Unicode Encoding Form Signatures", from memory);
+ * without one, UTF-8, or ISO-8859-1 when the bytes are not valid UTF-8 (older station and
+ * typical-year exports use it). The mark itself is not part of the text.
  */
+export function decodeWeatherBytes(bytes: Uint8Array): string {
+  if (bytes.length >= 2 && bytes[0] === 0xff && bytes[1] === 0xfe)
+    return new TextDecoder('utf-16le').decode(bytes.subarray(2))
+  if (bytes.length >= 2 && bytes[0] === 0xfe && bytes[1] === 0xff)
+    return new TextDecoder('utf-16be').decode(bytes.subarray(2))
+  if (bytes.length >= 3 && bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf)
+    return new TextDecoder('utf-8').decode(bytes.subarray(3))
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes)
+  } catch {
+    return new TextDecoder('iso-8859-1').decode(bytes)
+  }
+}
+
+/** Read a weather file's bytes (decoded by {@link decodeWeatherBytes}) with {@link readWeather}. */
 export function readWeatherBytes(
   bytes: Uint8Array,
   options: WeatherReadOptions | Record<string, unknown> = {},
 ): WeatherReadResult {
-  let text: string
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes)
-  } catch {
-    text = new TextDecoder('iso-8859-1').decode(bytes)
-  }
-  return readWeather(text, options)
+  return readWeather(decodeWeatherBytes(bytes), options)
 }

@@ -71,7 +71,7 @@ describe('CLI with hostile files', () => {
   // Bug (src/weather/read-weather.ts readWeatherBytes, used by the CLI): a UTF-16 file with a BOM is
   // decoded as UTF-8 and refused ("'ÿþt\0i\0m\0e\0' … could both be dryBulb", exit 2), while the API
   // (src/api/upload.ts decodeUploadText) reads the same bytes correctly. Expected: exit 0, 3 rows used.
-  it.fails('a UTF-16 LE file with a BOM is read like the API reads it (documents a reader bug)', async () => {
+  it('a UTF-16 LE file with a BOM is read like the API reads it (documents a reader bug)', async () => {
     const r = await run(['inspect', 'f.csv', '--json'], utf16(GOOD, false))
     expect(r.code).toBe(0)
     expect((JSON.parse(r.out) as { rows: { used: number } }).rows.used).toBe(3)

@@ -2,7 +2,7 @@
 // invented files built here.
 import { describe, expect, it } from 'vitest'
 import { FIELD_OK, FIELD_UNREADABLE, parseField } from '../../src/weather/numbers.ts'
-import { readWeather } from '../../src/weather/read-weather.ts'
+import { decodeWeatherBytes, readWeather, readWeatherBytes } from '../../src/weather/read-weather.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 import { csv } from './csv-builder.ts'
 
@@ -127,3 +127,45 @@ describe('years outside 1800–2200 and typical-year detection', () => {
 function iso(ms: number): string {
   return new Date(ms).toISOString().slice(0, 16)
 }
+
+describe('byte order marks', () => {
+  const text = csv(
+    ['time', 'temp_c °C', 'rh_pct'],
+    STAMPS.map((t, i) => [t, 30 + i, 25 - i]),
+  )
+  // UTF-16 code units written by hand (Unicode 15.0 §3.9, D91: one 16-bit unit per BMP character),
+  // with the mark FF FE (LE) or FE FF (BE) first (§23.8 Table 23-5, from memory).
+  function utf16(s: string, bigEndian: boolean): Uint8Array {
+    const out = new Uint8Array(2 + 2 * s.length)
+    out.set(bigEndian ? [0xfe, 0xff] : [0xff, 0xfe])
+    for (let i = 0; i < s.length; i++) {
+      const c = s.charCodeAt(i)
+      out[2 + 2 * i] = bigEndian ? c >> 8 : c & 0xff
+      out[3 + 2 * i] = bigEndian ? c & 0xff : c >> 8
+    }
+    return out
+  }
+
+  it.each([false, true])('UTF-16 with its mark (big-endian: %s) reads like the text', (bigEndian) => {
+    const bytes = utf16(text, bigEndian)
+    expect(decodeWeatherBytes(bytes)).toBe(text)
+    const r = readWeatherBytes(bytes, {})
+    expect(r.rows.used).toBe(3)
+    expect(r.series.dryBulbC[2]).toBe(32)
+    expect(r.columns.find((c) => c.variable === 'dryBulb')?.source).toBe('temp_c °C')
+  })
+
+  it('UTF-8 with its mark EF BB BF: the mark is dropped', () => {
+    const body = new TextEncoder().encode(text)
+    const bytes = new Uint8Array(3 + body.length)
+    bytes.set([0xef, 0xbb, 0xbf])
+    bytes.set(body, 3)
+    expect(decodeWeatherBytes(bytes)).toBe(text)
+    expect(readWeatherBytes(bytes, {}).rows.used).toBe(3)
+  })
+
+  it('invalid UTF-8 without a mark is read as ISO-8859-1 (0xB0 is the degree sign, ISO/IEC 8859-1:1998)', () => {
+    const bytes = new Uint8Array([0x74, 0xb0, 0x43])
+    expect(decodeWeatherBytes(bytes)).toBe('t°C')
+  })
+})
