@@ -145,7 +145,11 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   }
   const progress = options.onProgress
   progress?.({ stage: 'hourly-conditions', done: 0, total: 2 })
-  const primary = computeHourlyConditions(series, method, product, conditionOptions)
+  // the primary's report-only columns are not read by an assessment (monthly tables use the verdict ones)
+  const primary = computeHourlyConditions(series, method, product, {
+    ...conditionOptions,
+    diagnostics: false,
+  })
   const backupMethod: HeatedMethod =
     method.kind === 'heated' ? method : heatedBackup(options.backupHeater, product.erhPct(25, targetDb), maxT)
   const backup: HourlyConditions =
@@ -155,6 +159,8 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
           ...conditionOptions,
           verdict: false,
           lazy: true,
+          diagnostics: false,
+          ambientSaturationPa: primary.ambientSaturationPa,
         })
   progress?.({ stage: 'hourly-conditions', done: 2, total: 2 })
 

@@ -72,6 +72,17 @@ export interface HourlyConditionsOptions {
   verdict?: boolean
   /** true: compute hours only when a batch asks for them ({@link HourlyConditions.ensure}). Default false. */
   lazy?: boolean
+  /**
+   * false: leave the columns only reports read empty (length 0): airRhPct, surfaceRhPct, humidityRatio and
+   * deficitToSaturationGPerKg, and also deficitToTargetGPerKg and evaporationKgPerM2H when `verdict` is
+   * false. Batches do not read them; an assessment saves their memory. Default true.
+   */
+  diagnostics?: boolean
+  /**
+   * {@link HourlyConditions.ambientSaturationPa} of conditions already computed for every hour of the same
+   * series (another method): read instead of evaluated again. The values are the same.
+   */
+  ambientSaturationPa?: Float64Array
 }
 
 export interface HourlyConditions {
@@ -87,6 +98,8 @@ export interface HourlyConditions {
   productC: Float64Array
   /** RH at the product surface [%]: ambient vapour pressure over saturation at the product temperature. */
   surfaceRhPct: Float64Array
+  /** Saturation pressure of the ambient air, exp(ln pws) [Pa] (ASHRAE HOF 2017 ch. 1 eq 6); NaN for missing and not yet computed hours. */
+  ambientSaturationPa: Float64Array
   /** Ambient (and product-air) humidity ratio [kg/kg]; heating does not change it. */
   humidityRatio: Float64Array
   /** Deficit to free-water saturation along the constant-enthalpy line [g/kg]; NaN for exposed methods. */
@@ -151,14 +164,25 @@ export function computeHourlyConditions(
   const solar = options.solar ?? computeSolarColumns(series)
   const { altitudeDeg: altitude, azimuthDeg: azimuth, raWm2, rsOverRso } = solar
 
+  const verdict = options.verdict !== false
+  const diagnostics = options.diagnostics !== false
+  // Columns not kept are empty: stores past the end of a typed array are ignored, so the hour code
+  // below is the same either way.
+  const nDiagnostic = diagnostics ? n : 0
+  const nMonthly = diagnostics || verdict ? n : 0
+  const sharedSaturation = options.ambientSaturationPa
+  if (sharedSaturation !== undefined && sharedSaturation.length !== n) {
+    throw new RangeError(`ambient saturation column must hold ${n} values, got ${sharedSaturation.length}`)
+  }
+  const ambientSaturationPa = sharedSaturation ?? alloc(n)
   const airC = alloc(n)
-  const airRhPct = alloc(n)
+  const airRhPct = alloc(nDiagnostic)
   const productC = alloc(n)
-  const surfaceRhPct = alloc(n)
-  const humidityRatio = alloc(n)
-  const deficitToSaturationGPerKg = alloc(n)
-  const deficitToTargetGPerKg = alloc(n)
-  const evaporationKgPerM2H = alloc(n)
+  const surfaceRhPct = alloc(nDiagnostic)
+  const humidityRatio = alloc(nDiagnostic)
+  const deficitToSaturationGPerKg = alloc(nDiagnostic)
+  const deficitToTargetGPerKg = alloc(nMonthly)
+  const evaporationKgPerM2H = alloc(nMonthly)
   const capDbPerH = alloc(n)
   const emcDesorptionDb = alloc(n)
   const emcAdsorptionDb = alloc(n)
@@ -179,6 +203,7 @@ export function computeHourlyConditions(
     // hours not yet computed read as missing temperatures, never as 0 °C
     airC.fill(Number.NaN)
     productC.fill(Number.NaN)
+    if (sharedSaturation === undefined) ambientSaturationPa.fill(Number.NaN)
   }
 
   const dmPerKgFresh = 1 - options.initialWbPct / 100
@@ -220,6 +245,7 @@ export function computeHourlyConditions(
     const isNight = hasCoords ? altitude[i] < thresholds.nightSunAltitudeDeg : !(series.ghiWm2[i] > 0)
     night[i] = isNight ? 1 : 0
     if (!(t >= -60 && t <= 70) || !(rh > 0 && rh <= 100) || !(p >= 30 && p <= 110)) {
+      if (sharedSaturation === undefined) ambientSaturationPa[i] = Number.NaN
       mode[i] = HourMode.missing
       status[i] = HourStatus.missingData
       airC[i] = airRhPct[i] = productC[i] = surfaceRhPct[i] = humidityRatio[i] = Number.NaN
@@ -240,7 +266,12 @@ export function computeHourlyConditions(
     const rain = series.rainMm[i]
     const raining = rain >= thresholds.rainMm
     const u2 = wind * windTo2m
-    const pwsPa = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET))
+    let pwsPa: number
+    if (sharedSaturation !== undefined) pwsPa = sharedSaturation[i]
+    else {
+      pwsPa = Math.exp(lnSaturationPressureLiquidPa(t + KELVIN_OFFSET))
+      ambientSaturationPa[i] = pwsPa
+    }
     const pws = pwsPa * 1e-3
     const pw = (rh / 100) * pws
     const w = (0.621945 * pw) / (p - pw)
@@ -358,12 +389,11 @@ export function computeHourlyConditions(
       deficitToSaturationGPerKg[i] = deficitToTargetGPerKg[i] = Number.NaN
       evaporationKgPerM2H[i] = evaporation
       capDbPerH[i] = 0
-      status[i] =
-        options.verdict === false
-          ? HourStatus.usable
-          : pausedByNight
-            ? HourStatus.nightWithoutDrying
-            : HourStatus.rain
+      status[i] = !verdict
+        ? HourStatus.usable
+        : pausedByNight
+          ? HourStatus.nightWithoutDrying
+          : HourStatus.rain
       return
     }
     const rhForEmc = Math.min(rhSurface, EMC_RH_CAP_PCT)
@@ -397,7 +427,6 @@ export function computeHourlyConditions(
       if (dSat > 0) depressionK[0] = tProduct - adiabaticEndC(tProduct, w, dSat)
     }
     deficitToSaturationGPerKg[i] = 1000 * dSat
-    const verdict = options.verdict !== false
     const erhTarget = verdict ? product.erhPct(tProduct, targetDb) : Number.NaN
     let dTarget = Number.NaN
     if (verdict) {
@@ -453,6 +482,7 @@ export function computeHourlyConditions(
     hours: n,
     ensure,
     method,
+    ambientSaturationPa,
     airC,
     airRhPct,
     productC,
