@@ -4,6 +4,7 @@
  * checked), units converted once, quality control, short gaps filled, humidity and pressure
  * completed, row accounting and coverage. Format readers only produce a {@link RawTable}.
  */
+
 import { standardPressureKpaAtElevation } from '../physics/moist-air.ts'
 import { summarizeCoverage } from './coverage.ts'
 import { fillDaytimeIrradiance, fixNightIrradiance, hourSun, interpolateShortGaps } from './gap-fill.ts'
@@ -20,6 +21,7 @@ import {
 import type { RawColumn, RawTable } from './raw-table.ts'
 import type { ColumnReport, WeatherReadResult } from './result.ts'
 import { createEmptySeries, QualityFlag, type SiteInfo, type ValueTiming } from './series.ts'
+import { snippet } from './snippet.ts'
 import { resolveRowTimes, type TimeBasisInput } from './time-basis.ts'
 import {
   guessUnitFromValues,
@@ -171,7 +173,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     }
     if (codes > col.missingCodeCount && checkCodes) {
       warnings.push(
-        `column '${col.source}': ${codes - col.missingCodeCount} missing codes (such as -9999 or 999) read as missing`,
+        `column '${snippet(col.source)}': ${codes - col.missingCodeCount} missing codes (such as -9999 or 999) read as missing`,
       )
     }
     const implausible = implausibleUnitWarning(variable, col.source, conversion, out)
@@ -369,8 +371,8 @@ function missingCoreHours(series: { quality: Uint8Array }): Uint8Array {
 }
 
 function allColumnsText(raw: RawTable): string {
-  const used = Object.values(raw.columns).map((c) => `'${c!.source}'`)
-  return [...used, ...raw.unusedColumns.map((c) => `'${c}'`)].join(', ') || 'none'
+  const used = Object.values(raw.columns).map((c) => `'${snippet(c!.source)}'`)
+  return [...used, ...raw.unusedColumns.map((c) => `'${snippet(c)}'`)].join(', ') || 'none'
 }
 
 function sameValues(raw: RawTable, a: number, b: number): boolean {
@@ -393,13 +395,13 @@ function decideConversion(
   const guessed = guessUnitFromValues(variable, col.values)
   if (guessed !== null) {
     warnings.push(
-      `column '${col.source}' has no unit: its values look like ${guessed.unit}, read as ${guessed.unit} (override with --map ${variable}=${col.source}:<unit>)`,
+      `column '${snippet(col.source)}' has no unit: its values look like ${guessed.unit}, read as ${guessed.unit} (override with --map ${variable}=${snippet(col.source)}:<unit>)`,
     )
     return { conversion: guessed, unitFrom: 'detected' }
   }
   const si = siUnit(variable)
   warnings.push(
-    `column '${col.source}' has no unit: assumed ${si.unit} (override with --map ${variable}=${col.source}:<unit>)`,
+    `column '${snippet(col.source)}' has no unit: assumed ${si.unit} (override with --map ${variable}=${snippet(col.source)}:<unit>)`,
   )
   return { conversion: si, unitFrom: 'assumed' }
 }

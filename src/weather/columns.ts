@@ -4,7 +4,9 @@
  * recognised, an explicit mapping overrides them, and two equally good candidates for one variable
  * are an error naming the mapping to give.
  */
+
 import type { ColumnMapping, MappingKey, TimeField } from './options.ts'
+import { snippet } from './snippet.ts'
 import { type UnitConversion, unitConversion, type WeatherVariable } from './units.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
@@ -151,7 +153,7 @@ function findColumn(headers: string[], column: string, key: string): number {
     if (folded >= 0) return folded
   }
   throw new WeatherInputError(
-    `mapping ${key}=${column}: no such column; the columns are ${headers.map((h, i) => `#${i + 1} '${h}'`).join(', ')}`,
+    `mapping ${key}=${snippet(column)}: no such column; the columns are ${headers.map((h, i) => `#${i + 1} '${snippet(h)}'`).join(', ')}`,
     ['mapped column'],
   )
 }
@@ -192,7 +194,7 @@ export function planColumns(
       conversion = unitConversion(key, unitText)
       if (conversion === null && m.unit !== undefined) {
         throw new WeatherInputError(
-          `mapping ${key}=${m.column}:${m.unit}: '${m.unit}' is not a unit of ${key}`,
+          `mapping ${key}=${snippet(m.column)}:${snippet(m.unit)}: '${snippet(m.unit)}' is not a unit of ${key}`,
           ['unit'],
         )
       }
@@ -231,10 +233,10 @@ export function planColumns(
   })
   for (const [key, list] of candidates) {
     if (list.length > 1) {
-      const names = list.map((i) => `'${headers[i]}'`).join(' and ')
+      const names = list.map((i) => `'${snippet(headers[i])}'`).join(' and ')
       throw new WeatherInputError(
         `${names} could both be ${key}: say which with --map ${key}=<column>[:unit] ` +
-          `(e.g. --map ${key}=${headers[list[0]]}), and the other with --map <variable>=<column> if it is something else`,
+          `(e.g. --map ${key}=${snippet(headers[list[0]])}), and the other with --map <variable>=<column> if it is something else`,
         ['mapping'],
       )
     }

@@ -10,6 +10,7 @@ import { FIELD_MISSING, FIELD_UNREADABLE, parseField } from './numbers.ts'
 import type { ColumnMapping, MappingKey } from './options.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { RawColumn, RawTable } from './raw-table.ts'
+import { escapeControlCharacters, snippet } from './snippet.ts'
 import { createTimestampColumns, type DateOrder, parseTimeOfDay, parseTimestampInto } from './timestamps.ts'
 import type { WeatherVariable } from './units.ts'
 import { WeatherInputError } from './weather-input-error.ts'
@@ -77,12 +78,13 @@ export function readDelimited(
     }
   }
   if (headerIndex < 0) throw new WeatherInputError('the file has no rows with content', ['rows'])
+  // Header names are shown in messages and reports: control characters escaped once, here.
   const headers = mergeUnbalancedHeaders(head[headerIndex], delimiter, warnings).map((h) =>
-    h.replace(/^\uFEFF/, '').trim(),
+    escapeControlCharacters(h.replace(/^\uFEFF/, '').trim()),
   )
   if (bestScore <= 0 && Object.keys(mapping).length === 0) {
     throw new WeatherInputError(
-      `no header row with known column names in the first lines (first line: ${JSON.stringify(headers.slice(0, 8).join(delimiter)).slice(0, 120)}); ` +
+      `no header row with known column names in the first lines (first line: '${snippet(headers.slice(0, 8).join(delimiter), 120)}'); ` +
         'add a header row or map columns with --map dryBulb=#2 --map timestamp=#1 …',
       ['header'],
     )
@@ -113,7 +115,7 @@ export function readDelimited(
     (t.year === undefined || t.month === undefined || t.day === undefined)
   ) {
     throw new WeatherInputError(
-      `no timestamp column found (columns: ${headers.map((h) => `'${h}'`).join(', ')}); map it with --map timestamp=<column>, ` +
+      `no timestamp column found (columns: ${headers.map((h) => `'${snippet(h)}'`).join(', ')}); map it with --map timestamp=<column>, ` +
         'or --map date=<column> --map time=<column>, or --map year=… --map month=… --map day=… --map hour=…',
       ['timestamps'],
     )
@@ -133,7 +135,7 @@ export function readDelimited(
         ok = parseTimestampInto(time, i, dateText, cell(i, t.time) ?? '')
       if (!ok)
         timeErrors[i] =
-          `cannot read the timestamp '${truncate(timeText === undefined ? dateText : `${dateText} ${timeText}`)}'`
+          `cannot read the timestamp '${snippet(timeText === undefined ? dateText : `${dateText} ${timeText}`)}'`
       continue
     }
     const part = (index: number | undefined, fallback: number): number => {
@@ -151,7 +153,7 @@ export function readDelimited(
       Number.isInteger(year) && Number.isInteger(month) && Number.isInteger(day) && Number.isInteger(minutes)
     if (!integral || minutes < 0 || minutes > 1440) {
       timeErrors[i] =
-        `cannot read the date and hour from the year/month/day/hour columns (${[t.year, t.month, t.day, t.hour].map((k) => (k === undefined ? '' : (cell(i, k) ?? ''))).join(' ')})`
+        `cannot read the date and hour from the year/month/day/hour columns (${snippet([t.year, t.month, t.day, t.hour].map((k) => (k === undefined ? '' : (cell(i, k) ?? ''))).join(' '))})`
       continue
     }
     time.year[i] = year
@@ -175,7 +177,7 @@ export function readDelimited(
         lines[i],
         variable,
         'unparseable-number',
-        `'${truncate(text ?? '')}' in column '${chosen.header}' is not a number: read as missing`,
+        `'${snippet(text ?? '')}' in column '${snippet(chosen.header)}' is not a number: read as missing`,
       )
     }
     if (scanned) {
@@ -247,7 +249,7 @@ export function mergeUnbalancedHeaders(cells: string[], delimiter: string, warni
     }
     if (open !== '')
       warnings.push(
-        `header '${text}' contains the delimiter inside brackets without quotes: read as one column`,
+        `header '${snippet(text)}' contains the delimiter inside brackets without quotes: read as one column`,
       )
     out.push(text)
     open = ''
@@ -406,8 +408,4 @@ function parseDecimal(text: string, from: number, to: number, _delim: number, co
   if (digits === 0 || digits > 15) return Number.NaN
   const value = fraction > 0 ? mantissa / POW10[fraction] : mantissa
   return negative ? -value : value
-}
-
-function truncate(s: string): string {
-  return s.length > 40 ? `${s.slice(0, 40)}…` : s
 }

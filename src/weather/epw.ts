@@ -7,8 +7,10 @@
  * equal in number to the mean irradiance over it [W/m²]; a value at or above its field's missing
  * code is missing.
  */
+
 import type { ProblemLog } from './problem-log.ts'
 import type { RawColumn, RawTable } from './raw-table.ts'
+import { snippet } from './snippet.ts'
 import { createTimestampColumns } from './timestamps.ts'
 import { siUnit, type UnitConversion, type WeatherVariable } from './units.ts'
 import { WeatherInputError } from './weather-input-error.ts'
@@ -87,7 +89,7 @@ function headerNumber(fields: string[], index: number, name: string, lo: number,
   const v = Number((fields[index] ?? '').trim())
   if (fields[index] === undefined || fields[index].trim() === '' || !(v >= lo && v <= hi)) {
     throw new WeatherInputError(
-      `EPW line 1 (LOCATION): ${name} '${fields[index] ?? ''}' is not a number in ${lo}…${hi}`,
+      `EPW line 1 (LOCATION): ${name} '${snippet(fields[index] ?? '')}' is not a number in ${lo}…${hi}`,
       [name],
     )
   }
@@ -176,7 +178,8 @@ export function readEpw(
       hour < 1 ||
       hour > 24
     ) {
-      timeErrors[i] = `EPW year/month/day/hour '${f.slice(0, 4).join(',')}' not readable (hour must be 1–24)`
+      timeErrors[i] =
+        `EPW year/month/day/hour '${snippet(f.slice(0, 4).join(','))}' not readable (hour must be 1–24)`
       continue
     }
     time.year[i] = year

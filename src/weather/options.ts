@@ -3,7 +3,9 @@
  * The options of every weather reader, as one zod schema shared by the CLI and the HTTP API: the
  * site, the time basis of local timestamps, an explicit column mapping and the date order.
  */
+
 import { z } from 'zod'
+import { snippet } from './snippet.ts'
 import { WEATHER_VARIABLES, type WeatherVariable } from './units.ts'
 
 /** Columns that carry time rather than a weather variable; mapping keys like the variables. */
@@ -80,11 +82,13 @@ export type WeatherReadOptions = z.infer<typeof weatherReadOptionsSchema>
 export function parseMappingArgument(arg: string): [MappingKey, ColumnMapping] {
   const eq = arg.indexOf('=')
   if (eq <= 0 || eq === arg.length - 1) {
-    throw new RangeError(`mapping '${arg}' must look like variable=column or variable=column:unit`)
+    throw new RangeError(`mapping '${snippet(arg)}' must look like variable=column or variable=column:unit`)
   }
   const key = arg.slice(0, eq).trim() as MappingKey
   if (!MAPPING_KEYS.includes(key)) {
-    throw new RangeError(`mapping '${arg}': unknown variable '${key}'; accepted: ${MAPPING_KEYS.join(', ')}`)
+    throw new RangeError(
+      `mapping '${snippet(arg)}': unknown variable '${snippet(key)}'; accepted: ${MAPPING_KEYS.join(', ')}`,
+    )
   }
   const rest = arg.slice(eq + 1)
   const colon = rest.lastIndexOf(':')

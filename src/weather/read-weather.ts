@@ -11,6 +11,7 @@ import { type WeatherReadOptions, weatherReadOptionsSchema } from './options.ts'
 import { ProblemLog } from './problem-log.ts'
 import type { WeatherReadResult } from './result.ts'
 import type { SiteInfo } from './series.ts'
+import { escapeControlCharacters } from './snippet.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
 /** Default wind measurement height [m]: WMO standard 10 m (WMO-No. 8, 2018, Vol. I ch. 5). */
@@ -59,7 +60,9 @@ export function readWeather(
     const site: SiteInfo = {
       name:
         opts.siteName ??
-        [header.city, header.region, header.country].filter((s) => s !== '' && s !== '-').join(', '),
+        escapeControlCharacters(
+          [header.city, header.region, header.country].filter((s) => s !== '' && s !== '-').join(', '),
+        ),
       latitudeDeg: opts.latitudeDeg ?? header.latitudeDeg,
       longitudeDeg: opts.longitudeDeg ?? header.longitudeDeg,
       elevationM: opts.elevationM ?? clampElevation(header.elevationM),

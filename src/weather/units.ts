@@ -4,6 +4,8 @@
  * and a plausibility check of a column's values against its unit. Conversion happens once, here.
  */
 
+import { snippet } from './snippet.ts'
+
 /** The variables a reader can take from a file. */
 export type WeatherVariable =
   | 'dryBulb'
@@ -225,9 +227,9 @@ export function implausibleUnitWarning(
   if (median >= lo && median <= hi) return null
   const raw = (median - conversion.offset) / conversion.scale
   return (
-    `column '${column}' read as ${variable} in ${conversion.unit} has a median of ${round3(raw)} ${conversion.unit} ` +
+    `column '${snippet(column)}' read as ${variable} in ${conversion.unit} has a median of ${round3(raw)} ${conversion.unit} ` +
     `(${round3(median)} ${SERIES_UNIT[variable]}), outside the plausible ${lo}–${hi} ${SERIES_UNIT[variable]}: ` +
-    `check the unit and give it with --map ${variable}=${column}:<unit> (units: ${acceptedUnits(variable).join(', ')})`
+    `check the unit and give it with --map ${variable}=${snippet(column)}:<unit> (units: ${acceptedUnits(variable).join(', ')})`
   )
 }
 

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest'
 import { FIELD_OK, FIELD_UNREADABLE, parseField } from '../../src/weather/numbers.ts'
 import { decodeWeatherBytes, readWeather, readWeatherBytes } from '../../src/weather/read-weather.ts'
+import { escapeControlCharacters, SNIPPET_MAX_CHARS, snippet } from '../../src/weather/snippet.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 import { csv } from './csv-builder.ts'
 
@@ -167,5 +168,50 @@ describe('byte order marks', () => {
   it('invalid UTF-8 without a mark is read as ISO-8859-1 (0xB0 is the degree sign, ISO/IEC 8859-1:1998)', () => {
     const bytes = new Uint8Array([0x74, 0xb0, 0x43])
     expect(decodeWeatherBytes(bytes)).toBe('t°C')
+  })
+})
+
+describe('file text in messages', () => {
+  // C0 and C1 control characters (Unicode 15.0 §23.1, from memory); ESC [ 31 m is ECMA-48 SGR "red".
+  const CONTROL = /[\u0000-\u001f\u007f-\u009f]/
+
+  it('control characters are written as \\uXXXX and long text is cut', () => {
+    expect(escapeControlCharacters('t\u001b[31mRED\tx\u009b\u202e')).toBe(
+      't\\u001b[31mRED\\u0009x\\u009b\\u202e',
+    )
+    expect(escapeControlCharacters('plain °C')).toBe('plain °C')
+    const long = 'x'.repeat(500)
+    expect(snippet(long)).toBe(`${'x'.repeat(SNIPPET_MAX_CHARS)}…`)
+    const pair = `${'x'.repeat(SNIPPET_MAX_CHARS - 1)}😀tail` // the emoji is a surrogate pair
+    expect(snippet(pair)).toBe(`${'x'.repeat(SNIPPET_MAX_CHARS - 1)}…`)
+  })
+
+  it('an escape sequence in the only header is refused with the sequence escaped', () => {
+    let message = ''
+    try {
+      readWeather('t\u001b[31mRED\r\n1,2\n', {})
+    } catch (e) {
+      message = (e as Error).message
+    }
+    expect(message).toMatch(/\\u001b\[31mRED/)
+    expect(CONTROL.test(message)).toBe(false)
+  })
+
+  it('control characters in column names and cells never reach problems or warnings raw', () => {
+    const bad = `\u001b]0;owned\u0007${'9'.repeat(300)}`
+    const text = csv(
+      ['time', 'temp_c', 'rh_pct', 'note\u001b[2J'],
+      [
+        [STAMPS[0], 30, 25, 'a'],
+        [STAMPS[1], bad, 22, 'b'],
+        [STAMPS[2], 32, 20, 'c'],
+      ],
+    )
+    const r = readWeather(text, {})
+    const p = r.problems.find((q) => q.kind === 'unparseable-number')
+    expect(p?.line).toBe(3)
+    expect(p?.message).toMatch(/^'\\u001b\]0;owned\\u00079+…' in column 'temp_c'/)
+    expect(p!.message.length).toBeLessThan(200)
+    for (const m of [...r.problems.map((q) => q.message), ...r.warnings]) expect(CONTROL.test(m)).toBe(false)
   })
 })
