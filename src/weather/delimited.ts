@@ -125,7 +125,19 @@ export function readDelimited(
     t.time = undefined
   }
   const scratch = new Float64Array(1)
+  const quoteBroken = body_.unbalancedQuote
+  if (quoteBroken && quoteBroken.size > 0) {
+    const first = lines[quoteBroken.keys().next().value ?? 0] // keys in row order
+    warnings.push(
+      `${quoteBroken.size} line${quoteBroken.size === 1 ? ' has' : 's have'} an unbalanced double quote (first: line ${first}): ` +
+        'rejected, the other lines read one by one',
+    )
+  }
   for (let i = 0; i < n; i++) {
+    if (quoteBroken?.has(i)) {
+      log.add(lines[i], null, 'unbalanced-quote', quoteBroken.get(i)!)
+      continue
+    }
     if (t.timestamp !== undefined || (t.date !== undefined && t.year === undefined)) {
       const dateText = cell(i, t.timestamp ?? t.date!) ?? ''
       const timeText =
@@ -277,11 +289,20 @@ interface BodyCells {
   cells: (string | undefined)[][]
   /** Numeric columns parsed by the scanner (sparse by column index), when it ran. */
   numbers?: ScannedNumbers[]
+  /** Rows rejected for an unbalanced double quote, with the problem message (row index → message). */
+  unbalancedQuote?: Map<number, string>
 }
 
-/** The body through papaparse (quoted text): rows after the header, blank rows skipped. */
+/**
+ * The body through papaparse (quoted text): rows after the header, blank rows skipped. When a quote
+ * is left open (papaparse reports a quote error, or a time or value field holds a line break, which
+ * no weather export writes), the body is read line by line instead ({@link lineByLineBody}).
+ */
 function papaparseBody(body: string, delimiter: string, headerIndex: number, needed: number[]): BodyCells {
-  const data = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false }).data
+  const parsed = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false })
+  const data = parsed.data
+  if (parsed.errors.some((e) => e.type === 'Quotes') || fieldHoldsLineBreak(data, headerIndex, needed))
+    return lineByLineBody(body, delimiter, headerIndex, needed)
   const rows: number[] = []
   for (let r = headerIndex + 1; r < data.length; r++) if (!isBlank(data[r])) rows.push(r)
   const lines = new Int32Array(rows.length)
@@ -293,6 +314,52 @@ function papaparseBody(body: string, delimiter: string, headerIndex: number, nee
     for (const col of needed) cells[col][i] = row[col]
   }
   return { lines, cells }
+}
+
+function fieldHoldsLineBreak(data: string[][], headerIndex: number, needed: number[]): boolean {
+  for (let r = headerIndex + 1; r < data.length; r++) {
+    const row = data[r]
+    for (const col of needed) {
+      const f = row[col]
+      if (f !== undefined && (f.includes('\n') || f.includes('\r'))) return true
+    }
+  }
+  return false
+}
+
+/**
+ * The body read one physical line at a time (line ends as papaparse guesses them): a line with an
+ * odd number of double quotes (RFC 4180 §2 rules 5–7: quotes come in pairs) is rejected with an
+ * 'unbalanced-quote' problem, every other line is parsed on its own, so one stray quote costs one
+ * row, not the rest of the file. Quoted fields spanning lines are not rejoined here.
+ */
+function lineByLineBody(body: string, delimiter: string, headerIndex: number, needed: number[]): BodyCells {
+  const newline = body.includes('\r\n') ? '\r\n' : body.includes('\n') ? '\n' : '\r'
+  const physical = body.split(newline)
+  const lineList: number[] = []
+  const cells: (string | undefined)[][] = []
+  for (const col of needed) cells[col] = []
+  const unbalancedQuote = new Map<number, string>()
+  for (let k = headerIndex + 1; k < physical.length; k++) {
+    const text = physical[k]
+    if (text.trim() === '') continue
+    const i = lineList.length
+    lineList.push(k + 1)
+    let quotes = 0
+    for (let p = text.indexOf('"'); p >= 0; p = text.indexOf('"', p + 1)) quotes++
+    if (quotes % 2 === 1) {
+      unbalancedQuote.set(
+        i,
+        `unbalanced double quote in '${snippet(text)}': row rejected (quotes must come in pairs)`,
+      )
+      for (const col of needed) cells[col][i] = undefined
+      continue
+    }
+    const row =
+      quotes === 0 ? text.split(delimiter) : (Papa.parse<string[]>(text, { delimiter }).data[0] ?? [])
+    for (const col of needed) cells[col][i] = row[col]
+  }
+  return { lines: Int32Array.from(lineList), cells, unbalancedQuote }
 }
 
 /**

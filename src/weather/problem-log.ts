@@ -25,6 +25,7 @@ export type ProblemKind =
   | 'gap-filled'
   | 'core-missing'
   | 'short-row'
+  | 'unbalanced-quote'
 
 export interface WeatherProblem {
   /** 1-based line of the file, or null for an hour with no row. */

@@ -215,3 +215,41 @@ describe('file text in messages', () => {
     for (const m of [...r.problems.map((q) => q.message), ...r.warnings]) expect(CONTROL.test(m)).toBe(false)
   })
 })
+
+describe('an unbalanced double quote (RFC 4180 §2: quotes come in pairs)', () => {
+  const header = 'time,temp_c,rh_pct\n'
+  const good = (i: number): string => `2024-07-01T${10 + i}:00Z,${30 + i},${25 - i}`
+
+  it('costs only its own line, which is rejected and named', () => {
+    const text = `${header}${good(0)}\n2024-07-01T11:00Z,"31.5,22\n${good(2)}\n${good(3)}\n`
+    const r = readWeather(text, {})
+    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1 })
+    const p = r.problems.find((q) => q.kind === 'unbalanced-quote')
+    expect(p?.line).toBe(3)
+    expect(p?.message).toMatch(/unbalanced double quote/)
+    expect(r.warnings.join(' ')).toMatch(/1 line has an unbalanced double quote \(first: line 3\)/)
+    expect(r.series.dryBulbC[2]).toBe(32)
+    expect(r.series.dryBulbC[3]).toBe(33)
+  })
+
+  it('two stray quotes that papaparse would pair across lines: both lines rejected, the lines between kept', () => {
+    const text = `${header}2024-07-01T10:00Z,"30,25\n${good(1)}\n${good(2)}\n2024-07-01T13:00Z,33",19\n${good(4)}\n`
+    const r = readWeather(text, {})
+    expect(r.rows).toEqual({ read: 5, used: 3, repaired: 0, rejected: 2 })
+    expect(r.problems.filter((q) => q.kind === 'unbalanced-quote').map((q) => q.line)).toEqual([2, 5])
+  })
+
+  it('a stray quote in the first data row no longer sinks the file', () => {
+    const text = `${header}"${good(0)}\n${good(1)}\n${good(2)}\n`
+    const r = readWeather(text, {})
+    expect(r.rows.used).toBe(2)
+    expect(r.problems.find((q) => q.kind === 'unbalanced-quote')?.line).toBe(2)
+  })
+
+  it('balanced quotes, including a quoted note over two lines, are read as before', () => {
+    const text = `${header.trim()},note\n"2024-07-01T10:00Z","30.5",25,"two\nlines"\n${good(1)},x\n`
+    const r = readWeather(text, {})
+    expect(r.rows).toEqual({ read: 2, used: 2, repaired: 0, rejected: 0 })
+    expect(r.problems.some((q) => q.kind === 'unbalanced-quote')).toBe(false)
+  })
+})
