@@ -304,16 +304,36 @@ function papaparseBody(body: string, delimiter: string, headerIndex: number, nee
   if (parsed.errors.some((e) => e.type === 'Quotes') || fieldHoldsLineBreak(data, headerIndex, needed))
     return lineByLineBody(body, delimiter, headerIndex, needed)
   const rows: number[] = []
-  for (let r = headerIndex + 1; r < data.length; r++) if (!isBlank(data[r])) rows.push(r)
+  // Physical line of each record: a quoted field holding line breaks spans several lines.
+  const startLine: number[] = new Array(data.length)
+  let line = 1
+  for (let r = 0; r < data.length; r++) {
+    startLine[r] = line
+    line += 1 + lineBreaksIn(data[r])
+    if (r > headerIndex && !isBlank(data[r])) rows.push(r)
+  }
   const lines = new Int32Array(rows.length)
   const cells: (string | undefined)[][] = []
   for (const col of needed) cells[col] = new Array(rows.length)
   for (let i = 0; i < rows.length; i++) {
     const row = data[rows[i]]
-    lines[i] = rows[i] + 1
+    lines[i] = startLine[rows[i]]
     for (const col of needed) cells[col][i] = row[col]
   }
   return { lines, cells }
+}
+
+/** Line breaks (CRLF, LF or CR, each counted once) inside the fields of one record. */
+function lineBreaksIn(record: string[]): number {
+  let count = 0
+  for (const f of record) {
+    if (f.indexOf('\n') < 0 && f.indexOf('\r') < 0) continue
+    for (let k = 0; k < f.length; k++) {
+      const ch = f.charCodeAt(k)
+      if (ch === 10 || (ch === 13 && f.charCodeAt(k + 1) !== 10)) count++
+    }
+  }
+  return count
 }
 
 function fieldHoldsLineBreak(data: string[][], headerIndex: number, needed: number[]): boolean {

@@ -253,3 +253,17 @@ describe('an unbalanced double quote (RFC 4180 §2: quotes come in pairs)', () =
     expect(r.problems.some((q) => q.kind === 'unbalanced-quote')).toBe(false)
   })
 })
+
+describe('line numbers after a quoted field over several lines', () => {
+  it('a bad value after a two-line note is reported on its physical line', () => {
+    const text =
+      'time,temp_c,rh_pct,note\n' +
+      '2024-07-01T10:00Z,30,25,"two\r\nlines"\n' + // lines 2–3
+      '2024-07-01T11:00Z,x1,22,"three\nmore\nlines"\n' + // lines 4–6
+      '2024-07-01T12:00Z,zz,20,c\n' // line 7
+    const r = readWeather(text, {})
+    expect(r.rows.read).toBe(3)
+    const lines = r.problems.filter((q) => q.kind === 'unparseable-number').map((q) => q.line)
+    expect(lines).toEqual([4, 7])
+  })
+})
