@@ -184,12 +184,22 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   // Years with at least one month of enough data (a UTC file shifted to local time touches one hour of
   // the next year: that is not a year of data).
   // A short file (a logger export of a few weeks) still counts its year when it holds at least a week.
-  const hoursInYear = new Map<number, number>()
+  // hours with data per local year, counted in a typed array (a Map update per hour costs ~10 ms on 30 years)
+  let firstYear = Number.POSITIVE_INFINITY
+  let lastYear = Number.NEGATIVE_INFINITY
   for (let i = 0; i < series.hours; i++) {
-    if ((series.quality[i] & QualityFlag.missingCore) === 0) {
-      hoursInYear.set(time.year[i], (hoursInYear.get(time.year[i]) ?? 0) + 1)
-    }
+    const y = time.year[i]
+    if (y < firstYear) firstYear = y
+    if (y > lastYear) lastYear = y
   }
+  const yearHours = new Int32Array(series.hours > 0 ? lastYear - firstYear + 1 : 0)
+  for (let i = 0; i < series.hours; i++) {
+    if ((series.quality[i] & QualityFlag.missingCore) === 0) yearHours[time.year[i] - firstYear]++
+  }
+  const hoursInYear = new Map<number, number>()
+  yearHours.forEach((h, k) => {
+    if (h > 0) hoursInYear.set(firstYear + k, h)
+  })
   const years = counts.years.filter(
     (y) =>
       monthly.some((m) => m.usableHours.byYear.some((v) => v.year === y)) ||
