@@ -57,27 +57,32 @@ export function countMonthly(c: HourlyConditions, t: LocalTimeColumns): MonthlyC
     hourUsable: new Int32Array(12 * 24),
     hourWithData: new Int32Array(12 * 24),
   }
+  // columns and counters in locals: one property load per column, not per hour
+  const { year, month, hour } = t
+  const { status, night, deficitToTargetGPerKg, evaporationKgPerM2H } = c
+  const { reasons, withData, hourWithData, usable, hourUsable } = out
+  const { deficitSum, deficitHours, evaporationSum, evaporationHours } = out
   for (let i = 0; i < n; i++) {
-    const cell = (t.year[i] - minYear) * 12 + t.month[i] - 1
-    const s = c.status[i]
-    out.reasons[cell * REASONS + s]++
+    const cell = (year[i] - minYear) * 12 + month[i] - 1
+    const s = status[i]
+    reasons[cell * REASONS + s]++
     if (s === HourStatus.missingData) continue
-    out.withData[cell]++
-    const hourCell = (t.month[i] - 1) * 24 + t.hour[i]
-    out.hourWithData[hourCell]++
+    withData[cell]++
+    const hourCell = (month[i] - 1) * 24 + hour[i]
+    hourWithData[hourCell]++
     if (s === HourStatus.usable) {
-      out.usable[cell]++
-      out.hourUsable[hourCell]++
+      usable[cell]++
+      hourUsable[hourCell]++
     }
-    const d = c.deficitToTargetGPerKg[i]
-    if (c.night[i] === 0 && Number.isFinite(d)) {
-      out.deficitSum[cell] += d
-      out.deficitHours[cell]++
+    const d = deficitToTargetGPerKg[i]
+    if (night[i] === 0 && Number.isFinite(d)) {
+      deficitSum[cell] += d
+      deficitHours[cell]++
     }
-    const e = c.evaporationKgPerM2H[i]
+    const e = evaporationKgPerM2H[i]
     if (Number.isFinite(e)) {
-      out.evaporationSum[cell] += Math.max(e, 0)
-      out.evaporationHours[cell]++
+      evaporationSum[cell] += Math.max(e, 0)
+      evaporationHours[cell]++
     }
   }
   return out
