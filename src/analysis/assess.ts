@@ -134,7 +134,8 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     (method.kind === 'open-air' || method.kind === 'shade' ? method.loadingKgPerM2 : undefined) ??
     profile.defaultLoadingKgPerM2.value
   const maxT = profile.maxProductTempC?.value ?? null
-  const solar = computeSolarColumns(series)
+  // the azimuth is read only by the solar cabinet's collector (the backup heater needs none)
+  const solar = computeSolarColumns(series, { azimuth: method.kind === 'solar-cabinet' })
   const conditionOptions = {
     targetDb,
     initialWbPct,

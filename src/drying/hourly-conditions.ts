@@ -161,7 +161,11 @@ export function computeHourlyConditions(
   if (method.kind === 'solar-cabinet' && !hasCoords) {
     throw new RangeError('method solar-cabinet needs the site latitude and longitude (the file has none)')
   }
-  const solar = options.solar ?? computeSolarColumns(series)
+  // shared columns without the azimuth do not serve a solar cabinet
+  const solar =
+    options.solar !== undefined && (method.kind !== 'solar-cabinet' || options.solar.azimuthDeg.length === n)
+      ? options.solar
+      : computeSolarColumns(series)
   const { altitudeDeg: altitude, azimuthDeg: azimuth, raWm2, rsOverRso } = solar
 
   const verdict = options.verdict !== false

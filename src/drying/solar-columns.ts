@@ -19,6 +19,7 @@ function alloc(n: number): Float64Array {
 export interface SolarColumns {
   /** Apparent sun altitude at mid-hour [°] (0 when the site has no coordinates). */
   altitudeDeg: Float64Array
+  /** Sun azimuth at mid-hour [°] clockwise from north; empty when computed with `azimuth: false`. */
   azimuthDeg: Float64Array
   /** Extraterrestrial horizontal irradiance, hour mean [W/m²]. */
   raWm2: Float64Array
@@ -26,21 +27,31 @@ export interface SolarColumns {
   rsOverRso: Float64Array
 }
 
-/** Sun position (physics/sun.ts) and FAO-56 extraterrestrial and clear-sky radiation for every hour. */
-export function computeSolarColumns(series: HourlySeries): SolarColumns {
+/**
+ * Sun position (physics/sun.ts) and FAO-56 extraterrestrial and clear-sky radiation for every hour.
+ * `azimuth: false` skips the azimuth (only the solar cabinet's collector needs it); the other columns are
+ * the same either way.
+ */
+export function computeSolarColumns(series: HourlySeries, options: { azimuth?: boolean } = {}): SolarColumns {
   const n = series.hours
   const lat = series.site.latitudeDeg
   const lon = series.site.longitudeDeg
   const elevation = series.site.elevationM ?? 0
   const altitudeDeg = alloc(n)
-  const azimuthDeg = alloc(n)
+  const azimuthDeg = alloc(options.azimuth === false ? 0 : n)
   const raWm2 = alloc(n)
   const rsOverRso = alloc(n)
   if (lat === null || lon === null) {
     rsOverRso.fill(0.8)
     return { altitudeDeg, azimuthDeg, raWm2, rsOverRso }
   }
-  sunPositionColumns(series.startUtcMs, lat, lon, altitudeDeg, azimuthDeg)
+  sunPositionColumns(
+    series.startUtcMs,
+    lat,
+    lon,
+    altitudeDeg,
+    options.azimuth === false ? undefined : azimuthDeg,
+  )
   const rso = alloc(n)
   const rs = alloc(n)
   // dr changes once per local day: computed when the day changes (same value as per hour)
