@@ -111,6 +111,7 @@ export interface HourlyConditions {
   /** Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit. */
   capDbPerH: Float64Array
   emcDesorptionDb: Float64Array
+  /** The same array as {@link emcDesorptionDb} when the profile has one isotherm for both directions. */
   emcAdsorptionDb: Float64Array
   rateK: Float64Array
   rateN: Float64Array
@@ -189,7 +190,8 @@ export function computeHourlyConditions(
   const evaporationKgPerM2H = alloc(nMonthly)
   const capDbPerH = alloc(n)
   const emcDesorptionDb = alloc(n)
-  const emcAdsorptionDb = alloc(n)
+  // one isotherm for both directions: the two columns are one array (same values, half the memory)
+  const emcAdsorptionDb = product.profile.isotherm.adsorption === undefined ? emcDesorptionDb : alloc(n)
   const rateK = alloc(n)
   const rateN = alloc(n)
   const decayPerHour = alloc(n)
@@ -236,6 +238,9 @@ export function computeHourlyConditions(
   // [0] to saturation, [1] to the target ERH. Kept in a typed array, not in captured `let` doubles, which
   // V8 would box (one heap allocation per hour).
   const depressionK = new Float64Array(2)
+  // [temperature °C, exp(ln pws) Pa] of the last heated or damped air temperature evaluated
+  const heldSaturation = new Float64Array(2)
+  heldSaturation[0] = Number.NaN
 
   // FAO-56 eq 47 is linear in the wind: its height factors are computed once.
   const windTo2m = windSpeedAt2mMs(1, Math.max(series.site.windHeightM, 0.5))
@@ -374,7 +379,16 @@ export function computeHourlyConditions(
     airC[i] = tAir
     productC[i] = tProduct
     // saturation at the air and at the product surface: one exp/log per distinct temperature
-    const pwsAirPa = tAir === t ? pwsPa : Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET))
+    // A heater or damper often holds the same air temperature hour after hour (the backup's lowest air
+    // temperature, a set point, the product limit): its saturation is kept from the last such hour.
+    let pwsAirPa: number
+    if (tAir === t) pwsAirPa = pwsPa
+    else if (tAir === heldSaturation[0]) pwsAirPa = heldSaturation[1]
+    else {
+      pwsAirPa = Math.exp(lnSaturationPressureLiquidPa(tAir + KELVIN_OFFSET))
+      heldSaturation[0] = tAir
+      heldSaturation[1] = pwsAirPa
+    }
     airRhPct[i] = (100 * pw) / (pwsAirPa * 1e-3)
     const pwsSurfacePa =
       tProduct === tAir
