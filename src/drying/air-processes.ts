@@ -84,14 +84,41 @@ export function adiabaticHumidityRatioAtRh(
   startC?: number,
   saturationPa?: number,
 ): number {
+  const io = adiabaticScratch
+  io[0] = dryBulbC
+  io[1] = w
+  io[2] = pressureKpa
+  io[3] = rhFraction
+  io[4] = startC ?? Number.NaN
+  io[5] = saturationPa ?? Number.NaN
+  adiabaticHumidityRatioAtRhInto(io)
+  return io[6]
+}
+
+const adiabaticScratch = new Float64Array(7)
+
+/**
+ * {@link adiabaticHumidityRatioAtRh} on an array, for hot loops: io = [dry bulb °C, W kg/kg, pressure kPa,
+ * RH fraction, start °C or NaN, exp(ln pws(dry bulb)) Pa or NaN]; the humidity ratio is written to io[6].
+ * No double crosses the call, so V8 allocates nothing for it when it does not inline the solver.
+ */
+export function adiabaticHumidityRatioAtRhInto(io: Float64Array): void {
+  const dryBulbC = io[0]
+  const w = io[1]
+  const pressureKpa = io[2]
+  const rhFraction = io[3]
+  const startC = io[4]
   const h = 1.006 * dryBulbC + w * (2501 + 1.86 * dryBulbC)
   const pw0 = (pressureKpa * w) / (MOLAR_MASS_RATIO_WATER_AIR + w)
-  const pwsPa = saturationPa ?? Math.exp(lnSaturationPressureLiquidPa(dryBulbC + KELVIN_OFFSET))
-  if (pw0 >= rhFraction * pwsPa * 1e-3) return w
+  const pwsPa = Number.isNaN(io[5]) ? Math.exp(lnSaturationPressureLiquidPa(dryBulbC + KELVIN_OFFSET)) : io[5]
+  if (pw0 >= rhFraction * pwsPa * 1e-3) {
+    io[6] = w
+    return
+  }
   let lo = dryBulbC - 80
   let hi = dryBulbC
   // Start at the dry bulb, or at a caller's guess inside the bracket (e.g. the previous hour's end point).
-  let t = startC !== undefined && startC > lo && startC < hi ? startC : dryBulbC
+  let t = startC > lo && startC < hi ? startC : dryBulbC
   for (let i = 0; i < ADIABATIC_MAX_ITERATIONS; i++) {
     const denom = 2501 + 1.86 * t
     const wt = (h - 1.006 * t) / denom
@@ -115,7 +142,7 @@ export function adiabaticHumidityRatioAtRh(
     }
     t = next
   }
-  return (h - 1.006 * t) / (2501 + 1.86 * t)
+  io[6] = (h - 1.006 * t) / (2501 + 1.86 * t)
 }
 
 /**

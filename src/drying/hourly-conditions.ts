@@ -33,7 +33,7 @@ import {
 import { moistAirEnthalpyKjPerKg } from '../physics/moist-air.ts'
 import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from '../physics/saturation.ts'
 import type { HourlySeries } from '../weather/series.ts'
-import { adiabaticHumidityRatioAtRh, heatedDryBulbForTargetRhC } from './air-processes.ts'
+import { adiabaticHumidityRatioAtRhInto, heatedDryBulbForTargetRhC } from './air-processes.ts'
 import type { DryingMethod } from './method.ts'
 import { EMC_RH_CAP_PCT, firstOrderRateConstant, type ProductResponse } from './product-response.ts'
 import { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
@@ -240,6 +240,8 @@ export function computeHourlyConditions(
   const depressionK = new Float64Array(2)
   // [temperature °C, exp(ln pws) Pa] of the last heated or damped air temperature evaluated
   const heldSaturation = new Float64Array(2)
+  // in/out of the adiabatic solver (air-processes.ts adiabaticHumidityRatioAtRhInto)
+  const solverIo = new Float64Array(7)
   heldSaturation[0] = Number.NaN
 
   // FAO-56 eq 47 is linear in the wind: its height factors are computed once.
@@ -438,27 +440,34 @@ export function computeHourlyConditions(
     // their limit and skip it (NaN), which saves a solver per hour.
     let dSat = Number.NaN
     if (!exposed) {
-      dSat =
-        rhSurface >= 100
-          ? 0
-          : adiabaticHumidityRatioAtRh(tProduct, w, p, 1, tProduct - depressionK[0], pwsSurfacePa) - w
+      if (rhSurface >= 100) dSat = 0
+      else {
+        solverIo[0] = tProduct
+        solverIo[1] = w
+        solverIo[2] = p
+        solverIo[3] = 1
+        solverIo[4] = tProduct - depressionK[0]
+        solverIo[5] = pwsSurfacePa
+        adiabaticHumidityRatioAtRhInto(solverIo)
+        dSat = solverIo[6] - w
+      }
       if (dSat > 0) depressionK[0] = tProduct - adiabaticEndC(tProduct, w, dSat)
     }
     deficitToSaturationGPerKg[i] = 1000 * dSat
     const erhTarget = verdict ? product.erhPct(tProduct, targetDb) : Number.NaN
     let dTarget = Number.NaN
     if (verdict) {
-      dTarget =
-        rhSurface >= erhTarget
-          ? 0
-          : adiabaticHumidityRatioAtRh(
-              tProduct,
-              w,
-              p,
-              erhTarget / 100,
-              tProduct - depressionK[1],
-              pwsSurfacePa,
-            ) - w
+      if (rhSurface >= erhTarget) dTarget = 0
+      else {
+        solverIo[0] = tProduct
+        solverIo[1] = w
+        solverIo[2] = p
+        solverIo[3] = erhTarget / 100
+        solverIo[4] = tProduct - depressionK[1]
+        solverIo[5] = pwsSurfacePa
+        adiabaticHumidityRatioAtRhInto(solverIo)
+        dTarget = solverIo[6] - w
+      }
       if (dTarget > 0) depressionK[1] = tProduct - adiabaticEndC(tProduct, w, dTarget)
     }
     deficitToTargetGPerKg[i] = 1000 * dTarget

@@ -54,13 +54,21 @@ function locate(tC: number, rhPct: number): void {
   cell[3] = y - ir
 }
 
-/** Bilinear value of `g` in the cell of the last {@link locate}: bit for bit what {@link lookup} returns. */
-function interpolate(g: Grid, it: number, ir: number, fx: number, fy: number): number {
+/**
+ * Bilinear value of `g` in the cell of the last {@link locate}, written to out[slot]: bit for bit what
+ * {@link lookup} returns. Reads the cell from {@link cell} and writes to an array, so no double crosses
+ * the call (V8 boxes doubles passed to or returned from a call it does not inline).
+ */
+function interpolateInto(g: Grid, out: Float64Array, slot: number): void {
+  const it = cell[0]
+  const ir = cell[1]
+  const fx = cell[2]
+  const fy = cell[3]
   const a = node(g, it, ir)
   const b = node(g, it + 1, ir)
   const c = node(g, it, ir + 1)
   const d = node(g, it + 1, ir + 1)
-  return (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
+  out[slot] = (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
 }
 
 function lookup(g: Grid, tC: number, rhPct: number): number {
@@ -130,21 +138,19 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
     hourResponse: (t, rh, out) => {
       // one cell location for all grids of the hour (same values as the separate lookups)
       locate(t, rh)
-      const it = cell[0]
-      const ir = cell[1]
-      const fx = cell[2]
-      const fy = cell[3]
-      const meDes = interpolate(des, it, ir, fx, fy)
-      out[0] = meDes
-      out[1] = sameIsotherm ? meDes : interpolate(ads, it, ir, fx, fy)
+      interpolateInto(des, out, 0)
+      if (sameIsotherm) out[1] = out[0]
+      else interpolateInto(ads, out, 1)
       if (thompson) {
         direct.stepParameters(t, rh, scratchStep)
         out[2] = scratchStep[0]
         out[3] = scratchStep[1]
         return
       }
-      out[2] = Math.exp(interpolate(lnKGrid, it, ir, fx, fy))
-      out[3] = constantN ? node(nGrid, 0, 0) : interpolate(nGrid, it, ir, fx, fy)
+      interpolateInto(lnKGrid, out, 2)
+      out[2] = Math.exp(out[2])
+      if (constantN) out[3] = node(nGrid, 0, 0)
+      else interpolateInto(nGrid, out, 3)
     },
     stepParameters: (t, rh, out) => {
       if (thompson) {
