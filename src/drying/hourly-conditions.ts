@@ -38,7 +38,7 @@ import type { DryingMethod } from './method.ts'
 import { EMC_RH_CAP_PCT, firstOrderRateConstant, type ProductResponse } from './product-response.ts'
 import { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
 import { type DryingThresholds, HourStatus } from './thresholds.ts'
-import { wetSurfaceEvaporationAtSaturation } from './wet-surface.ts'
+import { wetSurfaceEvaporationInto } from './wet-surface.ts'
 
 export { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
 export { wetSurfaceEvaporation } from './wet-surface.ts'
@@ -242,6 +242,28 @@ export function computeHourlyConditions(
   const heldSaturation = new Float64Array(2)
   // in/out of the adiabatic solver (air-processes.ts adiabaticHumidityRatioAtRhInto)
   const solverIo = new Float64Array(7)
+  // in/out of the wet-surface evaporation (wet-surface.ts wetSurfaceEvaporationInto)
+  const evaporationIo = new Float64Array(8)
+  // small enough for V8 to inline into the hour: the doubles go through the array
+  const wetSurfaceAt = (
+    rn: number,
+    airC: number,
+    pw: number,
+    p: number,
+    w: number,
+    u: number,
+    saturationPa: number,
+  ): number => {
+    evaporationIo[0] = rn
+    evaporationIo[1] = airC
+    evaporationIo[2] = pw
+    evaporationIo[3] = p
+    evaporationIo[4] = w
+    evaporationIo[5] = u
+    evaporationIo[6] = saturationPa
+    wetSurfaceEvaporationInto(evaporationIo)
+    return evaporationIo[7]
+  }
   heldSaturation[0] = Number.NaN
 
   // FAO-56 eq 47 is linear in the wind: its height factors are computed once.
@@ -318,13 +340,13 @@ export function computeHourlyConditions(
         }
         if (hourMode !== HourMode.paused) {
           const rnl = (netLongwaveHourlyMjM2(t, pw, rsOverRso[i]) * 1e6) / 3600
-          evaporation = wetSurfaceEvaporationAtSaturation(absorbed - rnl, t, pw, p, w, u2, pwsPa)
+          evaporation = wetSurfaceAt(absorbed - rnl, t, pw, p, w, u2, pwsPa)
         }
         break
       }
       case 'shade': {
         const u = Math.max(method.minimumAirSpeedMs, method.windFraction * u2)
-        evaporation = wetSurfaceEvaporationAtSaturation(0, t, pw, p, w, u, pwsPa)
+        evaporation = wetSurfaceAt(0, t, pw, p, w, u, pwsPa)
         break
       }
       case 'solar-cabinet': {

@@ -67,6 +67,33 @@ export function wetSurfaceEvaporationAtSaturation(
   uMs: number,
   saturationPa: number,
 ): number {
+  const io = wetSurfaceScratch
+  io[0] = rnWm2
+  io[1] = airC
+  io[2] = vaporPressureKpa
+  io[3] = pressureKpa
+  io[4] = w
+  io[5] = uMs
+  io[6] = saturationPa
+  wetSurfaceEvaporationInto(io)
+  return io[7]
+}
+
+const wetSurfaceScratch = new Float64Array(8)
+
+/**
+ * {@link wetSurfaceEvaporationAtSaturation} on an array, for hot loops: io = [Rn W/m², air °C, vapour
+ * pressure kPa, pressure kPa, W kg/kg, wind m/s, exp(ln pws(air)) Pa]; the evaporation [kg m⁻² h⁻¹] is
+ * written to io[7]. No double crosses the call (V8 boxes those of calls it does not inline).
+ */
+export function wetSurfaceEvaporationInto(io: Float64Array): void {
+  const rnWm2 = io[0]
+  const airC = io[1]
+  const vaporPressureKpa = io[2]
+  const pressureKpa = io[3]
+  const w = io[4]
+  const uMs = io[5]
+  const saturationPa = io[6]
   const lambda = latentHeatVaporizationMjPerKg(airC)
   const cp = (CP_DRY_AIR_KJ_PER_KG_K + 1.86 * w) / (1 + w)
   const gamma = psychrometricConstantKpaPerC(pressureKpa, lambda, cp / 1000)
@@ -104,5 +131,5 @@ export function wetSurfaceEvaporationAtSaturation(
     es - vaporPressureKpa,
     ra,
   )
-  return evaporationKgPerM2HFromLatentFlux(latent, airC)
+  io[7] = evaporationKgPerM2HFromLatentFlux(latent, airC)
 }
