@@ -35,11 +35,16 @@ function node(g: Grid, it: number, ir: number): number {
   return v
 }
 
-/** Cell of the last {@link locate} call: [x index, RH index, x fraction, RH fraction]. */
-const cell = new Float64Array(4)
+/**
+ * Cell of the last {@link locate} call: [x index, RH index, x fraction, RH fraction], then its inputs
+ * [tC, rhPct] in slots 4 and 5.
+ */
+const cell = new Float64Array(6)
 
-/** Grid cell and fractions of (tC, rhPct), the same arithmetic as {@link lookup}, into {@link cell}. */
-function locate(tC: number, rhPct: number): void {
+/** Grid cell and fractions of (cell[4] °C, cell[5] % RH), the same arithmetic as {@link lookup}, into {@link cell}. */
+function locate(): void {
+  const tC = cell[4]
+  const rhPct = cell[5]
   let x = (tC - T_MIN) / GRID_T_STEP_C
   let y = rhPct / GRID_RH_STEP_PCT
   if (x < 0) x = 0
@@ -137,7 +142,9 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
     },
     hourResponse: (t, rh, out) => {
       // one cell location for all grids of the hour (same values as the separate lookups)
-      locate(t, rh)
+      cell[4] = t
+      cell[5] = rh
+      locate()
       interpolateInto(des, out, 0)
       if (sameIsotherm) out[1] = out[0]
       else interpolateInto(ads, out, 1)

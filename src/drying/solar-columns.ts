@@ -62,7 +62,9 @@ export function computeSolarColumns(series: HourlySeries, options: { azimuth?: b
     // Hour-mean extraterrestrial horizontal irradiance by the midpoint rule: Gsc·dr·sin(altitude at
     // mid-hour) (FAO-56 eqs 21–23 integrated over the hour ≈ value at its middle; off by up to one
     // sunrise/sunset hour, which the Rs/Rso carry rule of FAO-56 ch. 4 does not use).
-    const sinAlt = Math.sin((altitudeDeg[i] * Math.PI) / 180)
+    // sin(altitude) > 0 exactly when the altitude is above 0° (it lies within ±90°): no sine at night
+    const alt = altitudeDeg[i]
+    const sinAlt = alt > 0 ? Math.sin((alt * Math.PI) / 180) : 0
     const day = Math.floor((series.startUtcMs[i] + offsetMs) / 86_400_000)
     if (day !== lastDay) {
       lastDay = day
