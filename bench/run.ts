@@ -49,6 +49,71 @@ function machine() {
   }
 }
 
+/** The headline figures of every section, gathered into one table at the end (name prefixes as printed). */
+const HEADLINES: { section: string; figure: string; label: string; target: string }[] = [
+  {
+    section: 'moist-air',
+    figure: 'ratio by CPU time',
+    label: 'moist-air column form / psychrolib (CPU time)',
+    target: '≥ 20 x',
+  },
+  {
+    section: 'moist-air',
+    figure: 'ratio column / psychrolib',
+    label: 'moist-air column form / psychrolib (wall clock)',
+    target: '≥ 20 x',
+  },
+  {
+    section: 'ingest',
+    figure: 'end-to-end / bare parse throughput',
+    label: '30-year CSV ingest / bare papaparse',
+    target: '≥ 0.7 x',
+  },
+  {
+    section: 'ingest',
+    figure: 'peak RSS after all runs',
+    label: 'peak memory of the ingest runs',
+    target: 'reported',
+  },
+  {
+    section: 'engine',
+    figure: '30-year assessment (',
+    label: '30-year assessment with a 90-day start-date table',
+    target: '< 1000 ms',
+  },
+  {
+    section: 'engine',
+    figure: '30-year assessment, CPU time',
+    label: '30-year assessment, CPU time',
+    target: '< 1000 ms',
+  },
+  {
+    section: 'engine',
+    figure: 'engine / moist-air throughput',
+    label: 'per-hour engine / moist-air columns',
+    target: 'reported',
+  },
+  { section: 'engine', figure: 'per-hour engine', label: 'per-hour engine throughput', target: 'reported' },
+  {
+    section: 'engine',
+    figure: 'resident set size after',
+    label: 'memory after the assessments',
+    target: 'reported',
+  },
+]
+
+function printSummary(sections: Record<string, { figures: BenchFigure[] }>): void {
+  const rows: string[][] = []
+  for (const h of HEADLINES) {
+    const f = sections[h.section]?.figures.find((x) => x.name.startsWith(h.figure))
+    if (f) rows.push([h.label, `${formatValue(f)} ${f.unit}`.trim(), h.target])
+  }
+  if (rows.length === 0) return
+  const w = [0, 1].map((c) => Math.max(...rows.map((r) => r[c].length)))
+  console.log('\nsummary (each ratio against its reference measured in the same run)')
+  for (const r of rows) console.log(`  ${r[0].padEnd(w[0])}  ${r[1].padStart(w[1])}   target ${r[2]}`)
+}
+
 async function main(wanted: string[]): Promise<number> {
   const result: {
     date: string
@@ -82,6 +147,7 @@ async function main(wanted: string[]): Promise<number> {
       console.error(`\n${section.id}: failed: ${(e as Error).stack ?? String(e)}`)
     }
   }
+  printSummary(result.sections)
   writeFileSync(out, `${JSON.stringify(result, null, 2)}\n`)
   console.log(`\nwrote ${out}`)
   return failures > 0 ? 1 : 0
