@@ -89,20 +89,6 @@ export const ENGINE_PARSE_OPTIONS = {
 
 export type EngineValues = Record<string, string | string[] | boolean | undefined>
 
-/** Join "-5" style values to their option so parseArgs does not read them as flags. */
-export function joinNegativeValues(args: string[]): string[] {
-  const out: string[] = []
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i]
-    const next = args[i + 1]
-    if (a.startsWith('--') && !a.includes('=') && next !== undefined && /^-\d/.test(next)) {
-      out.push(`${a}=${next}`)
-      i++
-    } else out.push(a)
-  }
-  return out
-}
-
 async function loadProduct(value: string | undefined, io: CliIo): Promise<ProductProfile> {
   if (value === undefined)
     throw new UsageError('--product <id|profile.json> is required (list: dryhours products)')
@@ -321,7 +307,7 @@ export const assessCommand: CliCommand = {
     let parsed: { values: EngineValues; positionals: string[] }
     try {
       parsed = parseArgs({
-        args: joinNegativeValues(args),
+        args,
         options: ENGINE_PARSE_OPTIONS,
         allowPositionals: true,
       })

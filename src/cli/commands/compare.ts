@@ -6,7 +6,6 @@ import {
   ENGINE_PARSE_OPTIONS,
   type EngineValues,
   engineOptions,
-  joinNegativeValues,
   progressPrinter,
   readSeries,
 } from './assess.ts'
@@ -61,7 +60,7 @@ export const compareCommand: CliCommand = {
     let parsed: { values: EngineValues; positionals: string[] }
     try {
       parsed = parseArgs({
-        args: joinNegativeValues(args),
+        args,
         options: { ...ENGINE_PARSE_OPTIONS, criterion: { type: 'string' } },
         allowPositionals: true,
       })

@@ -92,20 +92,6 @@ function text(r: WeatherReadResult, file: string): string {
   return `${out.join('\n')}\n`
 }
 
-/** `--lon -122.3` → `--lon=-122.3`, so negative numbers are taken as option values. */
-function joinNegativeNumbers(args: string[]): string[] {
-  const out: string[] = []
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i]
-    const next = args[i + 1]
-    if (a.startsWith('--') && !a.includes('=') && next !== undefined && /^-\d/.test(next)) {
-      out.push(`${a}=${next}`)
-      i++
-    } else out.push(a)
-  }
-  return out
-}
-
 export const inspectCommand: CliCommand = {
   name: 'inspect',
   summary: 'what a weather file holds: format, site, period, time basis, columns, coverage, problems',
@@ -114,7 +100,7 @@ export const inspectCommand: CliCommand = {
     let parsed: ReturnType<typeof parseArgs>
     try {
       parsed = parseArgs({
-        args: joinNegativeNumbers(args),
+        args,
         options: {
           lat: { type: 'string' },
           lon: { type: 'string' },
