@@ -1,7 +1,7 @@
 /**
  * ASHRAE Handbook — Fundamentals 2017 (SI) ch. 1 tables. The values were read second-hand, in
  * psychrolib's test file tests/test_psychrolib_si.py, which attributes them to the 2017 Handbook
- * (see /work/shared/references/psychrometrics.md §3). Tolerances are those the tables justify.
+ * (see the project's psychrometrics reference notes (psychrometrics.md) §3). Tolerances are those the tables justify.
  */
 import { describe, expect, it } from 'vitest'
 import { airState } from '../../src/physics/air-state.ts'

@@ -1,7 +1,7 @@
 /**
  * Against psychrolib 1.1.1 (npm; a copy of PsychroLib 2.5.0, MIT, an implementation of the ASHRAE HOF
  * 2017 ch. 1 formulas) over a grid of 37 dry bulbs (−20…70 °C) × 11 RH (1…100 %) × 4 pressures
- * (70…101.325 kPa) = 1628 states. Tolerances from /work/shared/references/psychrometrics.md §2:
+ * (70…101.325 kPa) = 1628 states. Tolerances from the project's psychrometrics reference notes (psychrometrics.md) §2:
  * W, h, v to 1e-6 relative; dew/frost point and wet bulb to 0.005 °C (psychrolib's own solvers stop
  * at 0.001 °C), the wet bulb outside the two-root band near 0 °C.
  *

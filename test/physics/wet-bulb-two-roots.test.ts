@@ -2,7 +2,7 @@
  * The two-root band of the psychrometer balance near 0 °C (ASHRAE HOF 2017 ch. 1 eq 33 for t* ≥ 0,
  * eq 35 for t* < 0): eq 35 just below 0 °C gives a higher W than eq 33 at 0 °C, so a band of W has one
  * root on each side. Width at 5 °C, 101.325 kPa: RH 32.7–37.0 % (reference file
- * /work/shared/references/psychrometrics.md §5, computed with psychrolib). wetBulbWithDewPointC
+ * the project's psychrometrics reference notes (psychrometrics.md) §5, computed with psychrolib). wetBulbWithDewPointC
  * documents the choice: the liquid-wick root, whatever the start value.
  */
 import { describe, expect, it } from 'vitest'

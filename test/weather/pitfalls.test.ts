@@ -1,5 +1,5 @@
-// One test per reader pitfall in the project's weather-file reference (/work/shared/references/
-// weather-files-and-users.md §1; issue numbers there). Inputs are small invented files built here.
+// One test per reader pitfall in the project's weather-file reference notes
+// (weather-files-and-users.md §1; issue numbers there). Inputs are small invented files built here.
 import { describe, expect, it } from 'vitest'
 import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
