@@ -11,7 +11,7 @@ interface DemoSpec {
   options: Record<string, unknown>
 }
 
-export const DEMO: Record<string, DemoSpec> = {
+export const DEMO = {
   dryUpland: {
     file: 'climate-demo/ardentine-upland-2021-2024-utc.csv',
     options: { latitudeDeg: 38.3, longitudeDeg: -2.6, elevationM: 1050, utcOffsetHours: 1 },
@@ -26,14 +26,20 @@ export const DEMO: Record<string, DemoSpec> = {
     options: { latitudeDeg: 11.9, longitudeDeg: 104.6, elevationM: 95, utcOffsetHours: 7 },
   },
   typicalUpland: { file: 'climate-demo/ardentine-upland-typical-year.epw', options: {} },
-}
+  faultyLogger: {
+    file: 'climate-demo/tamarel-lowland-2023-logger-faulty.csv',
+    options: { latitudeDeg: 11.9, longitudeDeg: 104.6, elevationM: 95 },
+  },
+} satisfies Record<string, DemoSpec>
+
+export type DemoKey = keyof typeof DEMO
 
 const cache = new Map<string, HourlySeries>()
 
-export function demoSeries(key: keyof typeof DEMO): HourlySeries {
+export function demoSeries(key: DemoKey): HourlySeries {
   const hit = cache.get(key)
   if (hit) return hit
-  const spec = DEMO[key]
+  const spec: DemoSpec = DEMO[key]
   const series = readWeather(readFileSync(spec.file, 'utf8'), spec.options).series
   if (series.site.name === '') series.site.name = key
   cache.set(key, series)
