@@ -6,6 +6,8 @@
  * constant enthalpy is the usual approximation of the wet-bulb line, ASHRAE HOF 2017 ch. 1 §"Adiabatic
  * saturation"). Units: °C, kPa, kg water / kg dry air, kJ/kg dry air.
  */
+
+import { KELVIN_OFFSET } from '../physics/constants.ts'
 import {
   dewPointFromVaporPressureC,
   humidityRatioFromVaporPressure,
@@ -17,7 +19,6 @@ import {
 } from '../physics/moist-air.ts'
 import {
   dLnSaturationPressureLiquidDT,
-  KELVIN_OFFSET,
   lnSaturationPressureLiquidPa,
   saturationVaporPressureLiquidKpa,
 } from '../physics/saturation.ts'

@@ -31,7 +31,7 @@ import {
   tiltedIrradianceIsotropicWm2,
 } from '../physics/irradiance.ts'
 import { moistAirEnthalpyKjPerKg } from '../physics/moist-air.ts'
-import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from '../physics/saturation.ts'
+import { lnSaturationPressureLiquidPa } from '../physics/saturation.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { adiabaticHumidityRatioAtRhInto, heatedDryBulbForTargetRhC } from './air-processes.ts'
 import type { DryingMethod } from './method.ts'
@@ -41,6 +41,9 @@ import { type DryingThresholds, HourStatus } from './thresholds.ts'
 import { wetSurfaceEvaporationInto } from './wet-surface.ts'
 
 export { computeSolarColumns, type SolarColumns } from './solar-columns.ts'
+
+import { KELVIN_OFFSET } from '../physics/constants.ts'
+
 export { wetSurfaceEvaporation } from './wet-surface.ts'
 
 /** Emissivity of a moist product surface for the radiative coefficient hr (assumption, 0.9; from memory). */

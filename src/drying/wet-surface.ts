@@ -3,6 +3,8 @@
  * Wet-surface evaporation of an exposed product by the Penman combination equation, with the
  * Penman (1948) wind function as its aerodynamic resistance (physics/evaporation.ts).
  */
+
+import { KELVIN_OFFSET } from '../physics/constants.ts'
 import {
   aerodynamicResistanceFromWindFunctionSPerM,
   CP_DRY_AIR_KJ_PER_KG_K,
@@ -15,12 +17,7 @@ import {
   windFunctionPenman1948MmPerDayKpa,
 } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure, moistAirDensityKgPerM3 } from '../physics/moist-air.ts'
-import {
-  dLnSaturationPressureLiquidDT,
-  KELVIN_OFFSET,
-  SATURATION_MAX_C,
-  SATURATION_MIN_C,
-} from '../physics/saturation.ts'
+import { dLnSaturationPressureLiquidDT, SATURATION_MAX_C, SATURATION_MIN_C } from '../physics/saturation.ts'
 
 /**
  * Penman wet-surface evaporation [kg m⁻² h⁻¹] with available energy `rnWm2` and the Penman (1948) wind

@@ -12,6 +12,8 @@
  * iterated inline in the hour loop; other hours go through wetBulbWithDewPointC. Measured against
  * psychrolib in bench/sections/moist-air.ts (`npm run bench`).
  */
+
+import { KELVIN_OFFSET } from './constants.ts'
 import {
   DRY_BULB_MAX_C,
   DRY_BULB_MIN_C,
@@ -25,7 +27,7 @@ import {
   VAPOR_PRESSURE_MIN_KPA,
   wetBulbWithDewPointC,
 } from './moist-air.ts'
-import { KELVIN_OFFSET, SATURATION_MIN_C, TRIPLE_POINT_C } from './saturation.ts'
+import { SATURATION_MIN_C, TRIPLE_POINT_C } from './saturation.ts'
 import {
   LIQUID_SATURATION_TABLE,
   SATURATION_TABLE_NODES_PER_K,

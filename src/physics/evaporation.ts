@@ -9,12 +9,10 @@
  * ./saturation.ts (ASHRAE HOF 2017 ch. 1 eq 6) and air density from ./moist-air.ts; the FAO-56 Tetens
  * forms used by the reference-ET check are in ./fao56-reference-et.ts.
  */
+
+import { KELVIN_OFFSET } from './constants.ts'
 import { checkPressure, humidityRatioFromVaporPressure, moistAirDensityKgPerM3 } from './moist-air.ts'
-import {
-  dLnSaturationPressureLiquidDT,
-  KELVIN_OFFSET,
-  saturationVaporPressureLiquidKpa,
-} from './saturation.ts'
+import { dLnSaturationPressureLiquidDT, saturationVaporPressureLiquidKpa } from './saturation.ts'
 
 /** Seconds per hour. Definition. */
 const S_PER_HOUR = 3600

@@ -5,8 +5,9 @@
  * specific volume [m³/kg dry air]. Equation numbers are those of the 2017 SI edition (they change between
  * editions).
  */
+
+import { KELVIN_OFFSET } from './constants.ts'
 import {
-  KELVIN_OFFSET,
   lnSaturationPressureIcePa,
   lnSaturationPressureLiquidPa,
   SATURATION_MAX_C,

@@ -13,10 +13,10 @@
  * water and over ice, largest at −100 °C (checked against eqs 5–6 in
  * test/physics/saturation-table.test.ts), i.e. under 1e-8 °C in a dew point or wet bulb.
  */
+import { KELVIN_OFFSET } from './constants.ts'
 import {
   dLnSaturationPressureIceDT,
   dLnSaturationPressureLiquidDT,
-  KELVIN_OFFSET,
   lnSaturationPressureIcePa,
   lnSaturationPressureLiquidPa,
   SATURATION_MAX_C,

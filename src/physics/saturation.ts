@@ -9,9 +9,7 @@
  * also below 0 °C. {@link saturationVaporPressureKpa} switches to ice below the triple point, which is
  * the ASHRAE convention for saturated moist air and for the frost point and ice-bulb temperature.
  */
-
-/** Offset between °C and K [K]. Definition of the Celsius scale. */
-export const KELVIN_OFFSET = 273.15
+import { KELVIN_OFFSET } from './constants.ts'
 
 /** Triple point of water [°C]. ITS-90 definition (273.16 K). Below it, saturation is over ice. */
 export const TRIPLE_POINT_C = 0.01

@@ -1,18 +1,16 @@
 /**
  * @module product/equilibrium
  * Per-hour equilibrium functions of a profile: equilibrium moisture content (EMC) and equilibrium RH (ERH),
- * and the heat of sorption derived from the same isotherm by the Clausius–Clapeyron equation, so that
- * energy and equilibrium stay consistent (Iglesias & Chirife 1976; method as in Kaymak-Ertekin & Gedik 2004,
- * *LWT* 37:429): q_net = −R·∂ln aw/∂(1/T) at constant moisture.
+ * and the heat of sorption of the same isotherm (product/sorption-heat.ts, Clausius–Clapeyron).
  */
-import { emcDb, erhPct, GAS_CONSTANT_J_PER_MOL_K } from './isotherm-models.ts'
+import { MOLAR_MASS_WATER_KG_PER_MOL } from '../physics/constants.ts'
+import { latentHeatVaporizationMjPerKg } from '../physics/evaporation.ts'
+import { emcDb, erhPct, ISOTHERM_T_MAX_C, ISOTHERM_T_MIN_C } from './isotherm-models.ts'
 import { moistureWbPctFromDb } from './moisture-basis.ts'
 import { isothermFor, type ProductProfile } from './profile.ts'
+import { ISOSTERIC_DT_K, netIsostericHeatMjPerKg } from './sorption-heat.ts'
 
 export type SorptionDirection = 'desorption' | 'adsorption'
-
-/** Molar mass of water [kg/mol] (IAPWS: 18.015268 g/mol). */
-export const MOLAR_MASS_WATER_KG_PER_MOL = 0.018015268
 
 /**
  * Equilibrium moisture content [kg water/kg dry matter] of `profile` in air at tC [°C], rhPct [%].
@@ -39,11 +37,6 @@ export function equilibriumRelativeHumidityPct(
   return erhPct(isothermFor(profile, direction).equation, tC, moistureDb)
 }
 
-/** Latent heat of vaporisation of free water [kJ/kg], λ = 2501 − 2.361·T (FAO-56 form; from memory, reference §4.1). */
-export function latentHeatFreeWaterKjPerKg(tC: number): number {
-  return 2501 - 2.361 * tC
-}
-
 export interface HeatOfSorption {
   /** Net isosteric heat q_net [kJ/mol], the heat above that of free water. */
   netKjPerMol: number
@@ -60,9 +53,11 @@ export interface HeatOfSorption {
 }
 
 /**
- * Heat of sorption of `profile` at tC [°C] and moisture [kg/kg db], from its isotherm by Clausius–Clapeyron,
- * q_net = −R·Δln aw/Δ(1/T) at constant M, central difference over tC ± 1 K. Zero where the isotherm has no
- * temperature dependence (some GAB fits at one temperature) or where aw = 1 (free water).
+ * Heat of sorption of `profile` at tC [°C] and moisture [kg/kg db]: the net isosteric heat of its isotherm
+ * (product/sorption-heat.ts, Clausius–Clapeyron) and the total with the latent heat of free water
+ * (physics/evaporation.ts, FAO-56 Annex 3 eq 3-1). Zero where the isotherm has no temperature dependence
+ * (some GAB fits at one temperature) or where aw = 1 (free water). tC is kept 0.5 K inside the isotherm's
+ * accepted range.
  */
 export function heatOfSorption(
   profile: ProductProfile,
@@ -70,25 +65,17 @@ export function heatOfSorption(
   moistureDb: number,
   direction: SorptionDirection = 'desorption',
 ): HeatOfSorption {
-  const dT = 1
-  const awHi = equilibriumRelativeHumidityPct(profile, tC + dT, moistureDb, direction) / 100
-  const awLo = equilibriumRelativeHumidityPct(profile, tC - dT, moistureDb, direction) / 100
-  let net = 0
-  if (awHi < 1 && awLo < 1) {
-    const invHi = 1 / (tC + dT + 273.15)
-    const invLo = 1 / (tC - dT + 273.15)
-    net = (-GAS_CONSTANT_J_PER_MOL_K * (Math.log(awHi) - Math.log(awLo))) / (invHi - invLo) / 1000
-  }
-  const netKjPerKg = net / MOLAR_MASS_WATER_KG_PER_MOL
   const eq = isothermFor(profile, direction).equation
+  const t = Math.min(Math.max(tC, ISOTHERM_T_MIN_C + ISOSTERIC_DT_K), ISOTHERM_T_MAX_C - ISOSTERIC_DT_K)
+  const netKjPerKg = 1000 * netIsostericHeatMjPerKg(eq, t, moistureDb)
   const temperatureDependent =
     eq.model !== 'gab' || eq.hxJPerMol !== 0 || eq.hcJPerMol !== 0 || eq.hkJPerMol !== 0
   return {
     temperatureDependent,
-    netKjPerMol: net,
+    netKjPerMol: netKjPerKg * MOLAR_MASS_WATER_KG_PER_MOL,
     netKjPerKg,
-    totalKjPerKg: latentHeatFreeWaterKjPerKg(tC) + netKjPerKg,
-    method: `Clausius–Clapeyron on the ${isothermFor(profile, direction).equation.model} ${direction} isotherm, ±1 K`,
+    totalKjPerKg: 1000 * latentHeatVaporizationMjPerKg(tC) + netKjPerKg,
+    method: `Clausius–Clapeyron on the ${eq.model} ${direction} isotherm, central difference ±${ISOSTERIC_DT_K} K`,
   }
 }
 

@@ -16,9 +16,7 @@
  * Outside a model's domain the functions throw RangeError; they never return NaN.
  */
 
-/** Molar gas constant [J/(mol·K)] (CODATA 2018, 8.314462618). */
-export const GAS_CONSTANT_J_PER_MOL_K = 8.314462618
-const KELVIN = 273.15
+import { GAS_CONSTANT_J_PER_MOL_K, KELVIN_OFFSET } from '../physics/constants.ts'
 
 export type IsothermEquation =
   | { model: 'modified-henderson'; a: number; b: number; c: number }
@@ -72,7 +70,7 @@ export function gabConstantsAt(
   eq: Extract<IsothermEquation, { model: 'gab' }>,
   tC: number,
 ): { xm: number; c: number; k: number } {
-  const rt = GAS_CONSTANT_J_PER_MOL_K * (tC + KELVIN)
+  const rt = GAS_CONSTANT_J_PER_MOL_K * (tC + KELVIN_OFFSET)
   return {
     xm: eq.xm0 * Math.exp(eq.hxJPerMol / rt),
     c: eq.c0 * Math.exp(eq.hcJPerMol / rt),

@@ -13,9 +13,7 @@
  * Rate constants depend on temperature by Arrhenius, k = kRef·exp[−Ea/R·(1/T − 1/Tref)] (T in K), or, for
  * Wang & Singh 1978 (rough rice), linearly on T and RH.
  */
-import { GAS_CONSTANT_J_PER_MOL_K } from './isotherm-models.ts'
-
-const KELVIN = 273.15
+import { GAS_CONSTANT_J_PER_MOL_K, KELVIN_OFFSET } from '../physics/constants.ts'
 
 /** A rate constant that depends on the drying conditions. */
 export type RateLaw =
@@ -63,7 +61,8 @@ function checkConditions(tC: number, rhPct: number): void {
 /** Arrhenius factor exp[−Ea/R·(1/T − 1/Tref)]. */
 export function arrheniusFactor(tC: number, tRefC: number, activationEnergyJPerMol: number): number {
   return Math.exp(
-    (-activationEnergyJPerMol / GAS_CONSTANT_J_PER_MOL_K) * (1 / (tC + KELVIN) - 1 / (tRefC + KELVIN)),
+    (-activationEnergyJPerMol / GAS_CONSTANT_J_PER_MOL_K) *
+      (1 / (tC + KELVIN_OFFSET) - 1 / (tRefC + KELVIN_OFFSET)),
   )
 }
 

@@ -6,7 +6,8 @@ import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { adiabaticHumidityRatioAtRh } from '../../src/drying/air-processes.ts'
 import { wetSurfaceEvaporation, wetSurfaceEvaporationAtSaturation } from '../../src/drying/wet-surface.ts'
-import { KELVIN_OFFSET, lnSaturationPressureLiquidPa } from '../../src/physics/saturation.ts'
+import { KELVIN_OFFSET } from '../../src/physics/constants.ts'
+import { lnSaturationPressureLiquidPa } from '../../src/physics/saturation.ts'
 
 const air = fc.record({
   t: fc.double({ min: -40, max: 60, noNaN: true }),

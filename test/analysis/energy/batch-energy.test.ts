@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest'
 import { batchEnergy } from '../../../src/analysis/energy/batch-energy.ts'
 import { readBatchLog } from '../../../src/analysis/energy/batch-log.ts'
-import { batchSorptionHeatMj, netIsostericHeatMjPerKg } from '../../../src/analysis/energy/sorption-heat.ts'
+import { batchSorptionHeatMj } from '../../../src/analysis/energy/sorption-heat.ts'
 import { latentHeatVaporizationMjPerKg } from '../../../src/physics/evaporation.ts'
 import { productById } from '../../../src/product/catalogue.ts'
+import { netIsostericHeatMjPerKg } from '../../../src/product/sorption-heat.ts'
 
 describe('per-batch energy', () => {
   it('worked example: 10 t to 9 t with 4,000 MJ at 60 °C', () => {
