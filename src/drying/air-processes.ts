@@ -15,13 +15,13 @@ import {
   moistAirEnthalpyKjPerKg,
   saturationHumidityRatio,
   vaporPressureFromHumidityRatio,
-  wetBulbFromHumidityRatioC,
 } from '../physics/moist-air.ts'
 import {
   dLnSaturationPressureLiquidDT,
   lnSaturationPressureLiquidPa,
   saturationVaporPressureLiquidKpa,
 } from '../physics/saturation.ts'
+import { wetBulbFromHumidityRatioC } from '../physics/wet-bulb.ts'
 
 /** Newton tolerance of {@link adiabaticHumidityRatioAtRh} [°C] and its iteration cap. */
 export const ADIABATIC_TOLERANCE_C = 1e-4

@@ -8,24 +8,29 @@
  * Speed: pws at the dry bulb comes from the interpolated table of eq 6 (src/physics/saturation-table.ts,
  * within 1e-9 relative, so W, h and density agree with airState to about 1e-9 relative), the dew point
  * comes from the inverse table after one logarithm (within 1e-9 °C), Ws at the dry bulb sharpens the
- * wet-bulb start value, and the wet-wick wet bulb (dew point at or above 0.01 °C, most hours) is
- * iterated inline in the hour loop; other hours go through wetBulbWithDewPointC. Measured against
+ * wet-bulb start value, and the wet-wick wet bulb (dew point at or above 0.01 °C, most hours) comes from
+ * an iteration written out in the hour loop; other hours go through wetBulbWithDewPointC (physics/wet-bulb.ts). Measured against
  * psychrolib in bench/sections/moist-air.ts (`npm run bench`).
  */
 
-import { KELVIN_OFFSET } from './constants.ts'
 import {
+  CP_DRY_AIR_KJ_PER_KG_K,
+  CP_LIQUID_WATER_KJ_PER_KG_K,
+  CP_WATER_VAPOR_KJ_PER_KG_K,
   DRY_BULB_MAX_C,
   DRY_BULB_MIN_C,
-  GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K,
+  humidityRatioFromVaporPressure,
   MOLAR_MASS_RATIO_WATER_AIR,
+  moistAirDensityKgPerM3,
+  moistAirEnthalpyKjPerKg,
   PRESSURE_MAX_KPA,
   PRESSURE_MIN_KPA,
   SOLVER_MAX_ITERATIONS,
   SOLVER_STOP_STEP_C,
   SOLVER_TOLERANCE_C,
+  VAPOR_ENTHALPY_0C_KJ_PER_KG,
   VAPOR_PRESSURE_MIN_KPA,
-  wetBulbWithDewPointC,
+  WET_WICK_NUMERATOR_SLOPE,
 } from './moist-air.ts'
 import { SATURATION_MIN_C, TRIPLE_POINT_C } from './saturation.ts'
 import {
@@ -34,6 +39,7 @@ import {
   saturationPressureFromTableKpa,
   saturationTemperatureFromTableC,
 } from './saturation-table.ts'
+import { wetBulbWithDewPointC } from './wet-bulb.ts'
 
 export interface AirColumnsInput {
   dryBulbC: Float64Array
@@ -50,6 +56,16 @@ export interface AirColumnsOutput {
   wetBulbC?: Float64Array
   enthalpyKjPerKg?: Float64Array
   densityKgPerM3?: Float64Array
+}
+
+/** NaN in every output column for hour i (missing or out-of-domain input). */
+function markInvalid(out: AirColumnsOutput, i: number): void {
+  if (out.humidityRatioKgPerKg) out.humidityRatioKgPerKg[i] = Number.NaN
+  if (out.vaporPressureKpa) out.vaporPressureKpa[i] = Number.NaN
+  if (out.dewPointC) out.dewPointC[i] = Number.NaN
+  if (out.wetBulbC) out.wetBulbC[i] = Number.NaN
+  if (out.enthalpyKjPerKg) out.enthalpyKjPerKg[i] = Number.NaN
+  if (out.densityKgPerM3) out.densityKgPerM3[i] = Number.NaN
 }
 
 /**
@@ -76,12 +92,7 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
       !(p >= PRESSURE_MIN_KPA && p <= PRESSURE_MAX_KPA)
     ) {
       invalid++
-      if (wOut) wOut[i] = Number.NaN
-      if (pwOut) pwOut[i] = Number.NaN
-      if (tdOut) tdOut[i] = Number.NaN
-      if (twbOut) twbOut[i] = Number.NaN
-      if (hOut) hOut[i] = Number.NaN
-      if (rhoOut) rhoOut[i] = Number.NaN
+      markInvalid(out, i)
       continue
     }
     // pws over liquid water from the interpolated eq 6 table: within 1e-9 relative of the formula.
@@ -89,15 +100,10 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
     const pw = (rh / 100) * pws
     if (!(pws < p) || !(pw >= VAPOR_PRESSURE_MIN_KPA)) {
       invalid++
-      if (wOut) wOut[i] = Number.NaN
-      if (pwOut) pwOut[i] = Number.NaN
-      if (tdOut) tdOut[i] = Number.NaN
-      if (twbOut) twbOut[i] = Number.NaN
-      if (hOut) hOut[i] = Number.NaN
-      if (rhoOut) rhoOut[i] = Number.NaN
+      markInvalid(out, i)
       continue
     }
-    const w = (MOLAR_MASS_RATIO_WATER_AIR * pw) / (p - pw)
+    const w = humidityRatioFromVaporPressure(pw, p)
     if (wOut) wOut[i] = w
     if (pwOut) pwOut[i] = pw
     if (tdOut || twbOut) {
@@ -107,20 +113,23 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
       if (td > t) td = t
       if (tdOut) tdOut[i] = td
       if (twbOut) {
-        const wst = (MOLAR_MASS_RATIO_WATER_AIR * pws) / (p - pws)
+        const wst = humidityRatioFromVaporPressure(pws, p)
         if (td >= TRIPLE_POINT_C) {
-          // Wet-wick branch (eq 33), the common case, written out: the same chord start and safeguarded
-          // Halley iteration as wetBulbWithDewPointC (bracket [dew point, dry bulb], restart at the upper
-          // end on overshoot, bisection otherwise, stop on a step below SOLVER_STOP_STEP_C).
+          // Wet-wick branch (eq 33), the common case, written out for speed (V8 does not inline a solver
+          // call here): the same chord start and safeguarded Halley iteration as wetBulbWithDewPointC in
+          // physics/wet-bulb.ts (bracket [dew point, dry bulb], restart at the upper end on overshoot,
+          // bisection otherwise, stop on a step below SOLVER_STOP_STEP_C), pws read from the table inline.
           let twb = t
           if (t - td > 1e-9) {
             let lo = td
             let hi = t
-            const b0 = 2501 + 1.86 * t
+            const b0 = VAPOR_ENTHALPY_0C_KJ_PER_KG + CP_WATER_VAPOR_KJ_PER_KG_K * t
             const mid = 0.5 * (lo + hi)
-            const am = 2501 - 2.326 * mid
+            const am = VAPOR_ENTHALPY_0C_KJ_PER_KG - WET_WICK_NUMERATOR_SLOPE * mid
             let x =
-              lo + (w * (b0 - 4.186 * mid - am) + 1.006 * (t - lo)) / ((am * (wst - w)) / (hi - lo) + 1.006)
+              lo +
+              (w * (b0 - CP_LIQUID_WATER_KJ_PER_KG_K * mid - am) + CP_DRY_AIR_KJ_PER_KG_K * (t - lo)) /
+                ((am * (wst - w)) / (hi - lo) + CP_DRY_AIR_KJ_PER_KG_K)
             if (!(x > lo && x < hi)) x = mid
             for (let k = 0; k < SOLVER_MAX_ITERATIONS; k++) {
               // saturationPressureFromTableKpa(x, false) written out (x is within 0…100 °C here).
@@ -141,11 +150,18 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
               const e = MOLAR_MASS_RATIO_WATER_AIR * p * inv * inv
               const ws1 = e * pv1
               const ws2 = e * (pv2 + 2 * pv1 * pv1 * inv)
-              const a = 2501 - 2.326 * x
-              const invB = 1 / (b0 - 4.186 * x)
-              const q = (a * ws - 1.006 * (t - x)) * invB
-              const q1 = (-2.326 * ws + a * ws1 + 1.006 + 4.186 * q) * invB
-              const q2 = (-4.652 * ws1 + a * ws2 + 8.372 * q1) * invB
+              const a = VAPOR_ENTHALPY_0C_KJ_PER_KG - WET_WICK_NUMERATOR_SLOPE * x
+              const invB = 1 / (b0 - CP_LIQUID_WATER_KJ_PER_KG_K * x)
+              const q = (a * ws - CP_DRY_AIR_KJ_PER_KG_K * (t - x)) * invB
+              const q1 =
+                (-WET_WICK_NUMERATOR_SLOPE * ws +
+                  a * ws1 +
+                  CP_DRY_AIR_KJ_PER_KG_K +
+                  CP_LIQUID_WATER_KJ_PER_KG_K * q) *
+                invB
+              // 2·slope and 2·c_w are exact doublings of the constants
+              const q2 =
+                (-2 * WET_WICK_NUMERATOR_SLOPE * ws1 + a * ws2 + 2 * CP_LIQUID_WATER_KJ_PER_KG_K * q1) * invB
               const g = q - w
               twb = x
               if (g === 0) break
@@ -169,11 +185,8 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
         }
       }
     }
-    if (hOut) hOut[i] = 1.006 * t + w * (2501 + 1.86 * t)
-    if (rhoOut) {
-      rhoOut[i] =
-        ((1 + w) * p) / (GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K * (t + KELVIN_OFFSET) * (1 + 1.607858 * w))
-    }
+    if (hOut) hOut[i] = moistAirEnthalpyKjPerKg(t, w)
+    if (rhoOut) rhoOut[i] = moistAirDensityKgPerM3(t, w, p)
   }
   return invalid
 }

@@ -19,9 +19,9 @@ import {
   standardPressureKpaAtElevation,
   VAPOR_PRESSURE_MIN_KPA,
   vaporPressureFromHumidityRatio,
-  wetBulbFromHumidityRatioC,
 } from './moist-air.ts'
 import { saturationVaporPressureLiquidKpa, TRIPLE_POINT_C } from './saturation.ts'
+import { wetBulbFromHumidityRatioC } from './wet-bulb.ts'
 
 /** One humidity variable with the dry bulb, and pressure or elevation (sea level when neither). */
 export interface AirStateInput {

@@ -13,7 +13,6 @@ import {
   SATURATION_MAX_C,
   SATURATION_MIN_C,
   saturationVaporPressureKpa,
-  saturationVaporPressureLiquidKpa,
   TRIPLE_POINT_C,
 } from './saturation.ts'
 import {
@@ -24,6 +23,24 @@ import {
 
 /** Ratio of molar masses of water and dry air, 18.015268/28.966 (ASHRAE HOF 2017 ch. 1 eq 20). */
 export const MOLAR_MASS_RATIO_WATER_AIR = 0.621945
+/** Specific heat of dry air [kJ kg⁻¹ K⁻¹] in the moist-air enthalpy, ASHRAE HOF 2017 ch. 1 eq 30. */
+export const CP_DRY_AIR_KJ_PER_KG_K = 1.006
+/** Specific heat of water vapour [kJ kg⁻¹ K⁻¹] in the moist-air enthalpy, eq 30. */
+export const CP_WATER_VAPOR_KJ_PER_KG_K = 1.86
+/** Specific enthalpy of saturated water vapour at 0 °C [kJ/kg], eq 30 (and the wet-wick balance, eq 33). */
+export const VAPOR_ENTHALPY_0C_KJ_PER_KG = 2501
+/** Specific heat of liquid water [kJ kg⁻¹ K⁻¹] in the wet-wick psychrometer balance, eq 33. */
+export const CP_LIQUID_WATER_KJ_PER_KG_K = 4.186
+/** Coefficient of t* in the numerator of eq 33 [kJ kg⁻¹ K⁻¹], 2.326 as printed (c_w − c_pw). */
+export const WET_WICK_NUMERATOR_SLOPE = 2.326
+/** Enthalpy of sublimation at 0 °C [kJ/kg] in the iced-wick balance, eq 35. */
+export const SUBLIMATION_ENTHALPY_0C_KJ_PER_KG = 2830
+/** Coefficient of t* in the numerator of eq 35 [kJ kg⁻¹ K⁻¹], 0.24 as printed. */
+export const ICED_WICK_NUMERATOR_SLOPE = 0.24
+/** Specific heat of ice [kJ kg⁻¹ K⁻¹] in the iced-wick balance, eq 35 (2.1 as printed). */
+export const CP_ICE_KJ_PER_KG_K = 2.1
+/** 1 + 1.607858 W: the factor of W in the specific volume, M_da/M_w = 1/0.621945, ASHRAE HOF 2017 ch. 1 eq 26. */
+export const SPECIFIC_VOLUME_W_FACTOR = 1.607858
 /** Gas constant of dry air [kJ/(kg·K)], 8.314472/28.966 (ASHRAE HOF 2017 ch. 1 eq 1). */
 export const GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K = 0.287042
 /** Standard sea-level pressure [kPa] (ASHRAE HOF 2017 ch. 1 Table 1). */
@@ -98,12 +115,34 @@ export function saturationHumidityRatio(tC: number, pressureKpa: number): number
 
 /** Moist-air enthalpy [kJ/kg dry air]: h = 1.006 t + W (2501 + 1.86 t); ASHRAE HOF 2017 ch. 1 eq 30. */
 export function moistAirEnthalpyKjPerKg(dryBulbC: number, humidityRatioKgPerKg: number): number {
-  return 1.006 * dryBulbC + humidityRatioKgPerKg * (2501 + 1.86 * dryBulbC)
+  return (
+    CP_DRY_AIR_KJ_PER_KG_K * dryBulbC +
+    humidityRatioKgPerKg * (VAPOR_ENTHALPY_0C_KJ_PER_KG + CP_WATER_VAPOR_KJ_PER_KG_K * dryBulbC)
+  )
 }
 
 /** Dry bulb [°C] from enthalpy [kJ/kg] and humidity ratio [kg/kg]; eq 30 inverted. */
 export function dryBulbFromEnthalpyC(enthalpyKjPerKg: number, humidityRatioKgPerKg: number): number {
-  return (enthalpyKjPerKg - 2501 * humidityRatioKgPerKg) / (1.006 + 1.86 * humidityRatioKgPerKg)
+  return (
+    (enthalpyKjPerKg - VAPOR_ENTHALPY_0C_KJ_PER_KG * humidityRatioKgPerKg) /
+    (CP_DRY_AIR_KJ_PER_KG_K + CP_WATER_VAPOR_KJ_PER_KG_K * humidityRatioKgPerKg)
+  )
+}
+
+/**
+ * Humidity ratio [kg/kg] of air at `dryBulbC` on the line of constant enthalpy `enthalpyKjPerKg`: eq 30
+ * solved for W, W = (h − 1.006 t)/(2501 + 1.86 t).
+ */
+export function humidityRatioFromEnthalpy(enthalpyKjPerKg: number, dryBulbC: number): number {
+  return (
+    (enthalpyKjPerKg - CP_DRY_AIR_KJ_PER_KG_K * dryBulbC) /
+    (VAPOR_ENTHALPY_0C_KJ_PER_KG + CP_WATER_VAPOR_KJ_PER_KG_K * dryBulbC)
+  )
+}
+
+/** Heat capacity of moist air per kg of dry air [kJ K⁻¹ per kg dry air], ∂h/∂t of eq 30: 1.006 + 1.86 W. */
+export function moistAirHeatCapacityKjPerKgK(humidityRatioKgPerKg: number): number {
+  return CP_DRY_AIR_KJ_PER_KG_K + CP_WATER_VAPOR_KJ_PER_KG_K * humidityRatioKgPerKg
 }
 
 /** Specific volume [m³/kg dry air]: v = Rda T (1 + 1.607858 W)/p; ASHRAE HOF 2017 ch. 1 eq 26. */
@@ -113,7 +152,9 @@ export function moistAirSpecificVolumeM3PerKg(
   pressureKpa: number,
 ): number {
   return (
-    (GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K * (dryBulbC + KELVIN_OFFSET) * (1 + 1.607858 * humidityRatioKgPerKg)) /
+    (GAS_CONSTANT_DRY_AIR_KJ_PER_KG_K *
+      (dryBulbC + KELVIN_OFFSET) *
+      (1 + SPECIFIC_VOLUME_W_FACTOR * humidityRatioKgPerKg)) /
     pressureKpa
   )
 }
@@ -209,171 +250,18 @@ export function humidityRatioFromWetBulb(dryBulbC: number, wetBulbC: number, pre
   const wsStar = saturationHumidityRatio(wetBulbC, pressureKpa)
   if (wetBulbC >= 0) {
     return (
-      ((2501 - 2.326 * wetBulbC) * wsStar - 1.006 * (dryBulbC - wetBulbC)) /
-      (2501 + 1.86 * dryBulbC - 4.186 * wetBulbC)
+      ((VAPOR_ENTHALPY_0C_KJ_PER_KG - WET_WICK_NUMERATOR_SLOPE * wetBulbC) * wsStar -
+        CP_DRY_AIR_KJ_PER_KG_K * (dryBulbC - wetBulbC)) /
+      (VAPOR_ENTHALPY_0C_KJ_PER_KG +
+        CP_WATER_VAPOR_KJ_PER_KG_K * dryBulbC -
+        CP_LIQUID_WATER_KJ_PER_KG_K * wetBulbC)
     )
   }
   return (
-    ((2830 - 0.24 * wetBulbC) * wsStar - 1.006 * (dryBulbC - wetBulbC)) /
-    (2830 + 1.86 * dryBulbC - 2.1 * wetBulbC)
+    ((SUBLIMATION_ENTHALPY_0C_KJ_PER_KG - ICED_WICK_NUMERATOR_SLOPE * wetBulbC) * wsStar -
+      CP_DRY_AIR_KJ_PER_KG_K * (dryBulbC - wetBulbC)) /
+    (SUBLIMATION_ENTHALPY_0C_KJ_PER_KG +
+      CP_WATER_VAPOR_KJ_PER_KG_K * dryBulbC -
+      CP_ICE_KJ_PER_KG_K * wetBulbC)
   )
-}
-
-/** Saturation pressure over ice at 0 °C [kPa] (eq 5): Ws* at t* = 0, where eq 33 meets eq 35. */
-const SATURATION_PRESSURE_AT_ZERO_KPA = Math.exp(lnSaturationPressureIcePa(KELVIN_OFFSET)) / 1000
-
-/**
- * Root of the psychrometer balance W(t*) = `targetW` on one branch, t* in [lo, hi]: eq 33 (wet wick,
- * liquid = true) or eq 35 (iced wick). Halley's method with the first and second derivatives (pws and
- * its derivatives from {@link saturationPressureFromTableKpa}),
- * started at `start`, falling back to bisection whenever a step leaves the bracket; W(t*) increases
- * with t*, so the sign of W(t*) − targetW keeps the bracket. Returns hi if W(hi) is still below the
- * target (no root at or below the dry bulb), lo if W(lo) is above it.
- */
-function solveWetBulbBranch(
-  dryBulbC: number,
-  targetW: number,
-  pressureKpa: number,
-  liquid: boolean,
-  lo: number,
-  hi: number,
-  start: number,
-): number {
-  const a0 = liquid ? 2501 : 2830 // eq 33 / eq 35 numerator constant [kJ/kg]
-  const ka = liquid ? 2.326 : 0.24
-  const b0 = (liquid ? 2501 : 2830) + 1.86 * dryBulbC
-  const kb = liquid ? 4.186 : 2.1
-  const p = pressureKpa
-  let x = start > lo && start < hi ? start : 0.5 * (lo + hi)
-  for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
-    // Ws* over ice below the triple point, also on the wet-wick branch for 0 ≤ t* < 0.01 (psychrolib 2.5.0).
-    const ice = x < TRIPLE_POINT_C
-    const pv = saturationPressureFromTableKpa(x, ice)
-    const pv1 = saturationTableSlopes[0]
-    const pv2 = saturationTableSlopes[1]
-    // Ws* = ε pv/(p − pv) (eq 20) and its derivatives; one division each for 1/(p − pv) and 1/b.
-    const inv = 1 / (p - pv)
-    const ws = MOLAR_MASS_RATIO_WATER_AIR * pv * inv
-    const e = MOLAR_MASS_RATIO_WATER_AIR * p * inv * inv
-    const ws1 = e * pv1
-    const ws2 = e * (pv2 + 2 * pv1 * pv1 * inv)
-    const a = a0 - ka * x
-    const invB = 1 / (b0 - kb * x)
-    const q = (a * ws - 1.006 * (dryBulbC - x)) * invB
-    const q1 = (-ka * ws + a * ws1 + 1.006 + kb * q) * invB
-    const q2 = (-2 * ka * ws1 + a * ws2 + 2 * kb * q1) * invB
-    const f = q - targetW
-    if (f === 0) return x
-    if (f > 0) hi = x
-    else lo = x
-    const step = (2 * f * q1) / (2 * q1 * q1 - f * q2)
-    const next = x - step
-    if (next > lo && next < hi) {
-      // Stop on a small step, but not across the kink of Ws* at the triple point (ice → liquid pws).
-      if (Math.abs(step) < SOLVER_STOP_STEP_C && next < TRIPLE_POINT_C === ice) return next
-      x = next
-    } else if (next >= hi && x < hi) {
-      // Overshoot past the upper end (a root close to it, as in air near saturation): restart there;
-      // W(t*) is convex, so from above the steps approach the root without leaving the bracket.
-      x = hi
-    } else {
-      x = 0.5 * (lo + hi)
-    }
-    if (hi - lo < SOLVER_TOLERANCE_C) return x
-  }
-  throw new RangeError(`wet bulb did not converge for dry bulb ${dryBulbC} °C, W ${targetW}`)
-}
-
-/**
- * Start value for {@link solveWetBulbBranch}: the balance solved with Ws* replaced by its chord between
- * (xa, wa) and (xb, wb) and the t*-dependent terms taken at the midpoint. Ws* is convex, so this lands
- * at or below the root, usually within a few tenths of a degree.
- */
-function chordStartC(
-  dryBulbC: number,
-  targetW: number,
-  liquid: boolean,
-  xa: number,
-  wa: number,
-  xb: number,
-  wb: number,
-): number {
-  if (!(xb - xa > 1e-9)) return xb
-  const m = 0.5 * (xa + xb)
-  const a = liquid ? 2501 - 2.326 * m : 2830 - 0.24 * m
-  const b = liquid ? 2501 + 1.86 * dryBulbC - 4.186 * m : 2830 + 1.86 * dryBulbC - 2.1 * m
-  const s = (wb - wa) / (xb - xa)
-  return xa + (targetW * b - a * wa + 1.006 * (dryBulbC - xa)) / (a * s + 1.006)
-}
-
-/**
- * Thermodynamic wet-bulb temperature [°C] from dry bulb [°C], humidity ratio [kg/kg] and pressure [kPa]:
- * the root of the psychrometer balance (ASHRAE HOF 2017 ch. 1 eqs 33/35) between the frost/dew point and
- * the dry bulb, accuracy {@link SOLVER_TOLERANCE_C}.
- *
- * Two roots near 0 °C: eq 35 just below 0 °C gives a higher W than eq 33 just above it, so for dry bulbs
- * of roughly 0–10 °C a narrow band of W has a root on each side of 0 °C. We then always return the
- * liquid-wick root (t* ≥ 0 °C): deterministic, and the state a wet wick reaches when it is not frozen.
- */
-export function wetBulbFromHumidityRatioC(
-  dryBulbC: number,
-  humidityRatioKgPerKg: number,
-  pressureKpa: number,
-): number {
-  const pw = Math.max(vaporPressureFromHumidityRatio(humidityRatioKgPerKg, pressureKpa), 1e-9)
-  const ice = pw < saturationVaporPressureLiquidKpa(TRIPLE_POINT_C)
-  const dewC = saturationTemperatureC(pw, Math.log(pw * 1000), ice)
-  return wetBulbWithDewPointC(dryBulbC, humidityRatioKgPerKg, pressureKpa, dewC)
-}
-
-/**
- * As {@link wetBulbFromHumidityRatioC} when the dew (or frost) point `dewC` [°C] is already known; it is
- * the lower end of the bracket and the chord start, so either the dew or the frost point will do.
- * `saturationHumidityRatioAtDryBulb` (Ws at the dry bulb, over liquid water or ice) only sharpens the
- * start value; it is computed when omitted. The choice between the two roots near 0 °C (see
- * {@link wetBulbFromHumidityRatioC}) is made here: the liquid-wick root whenever W ≥ W(t* = 0) by eq 33.
- *
- * Where W exceeds saturation over ice at a dry bulb at or below 0 °C (station RH over water above
- * pws,ice/pws,liquid, e.g. above 82 % at −20 °C) the iced-wick balance has no root at or below the dry
- * bulb; the dry bulb is returned.
- */
-export function wetBulbWithDewPointC(
-  dryBulbC: number,
-  humidityRatioKgPerKg: number,
-  pressureKpa: number,
-  dewC: number,
-  saturationHumidityRatioAtDryBulb?: number,
-): number {
-  const t = dryBulbC
-  const w = humidityRatioKgPerKg
-  const dew = Math.min(dewC, t)
-  if (dew >= TRIPLE_POINT_C) {
-    // Root at or above the dew point, so on the wet-wick branch (eq 33 at t* = dew gives W* ≤ W).
-    const wst = saturationHumidityRatioAtDryBulb ?? saturationHumidityRatio(t, pressureKpa)
-    return solveWetBulbBranch(t, w, pressureKpa, true, dew, t, chordStartC(t, w, true, dew, w, t, wst))
-  }
-  if (t > 0) {
-    const ws0 =
-      (MOLAR_MASS_RATIO_WATER_AIR * SATURATION_PRESSURE_AT_ZERO_KPA) /
-      (pressureKpa - SATURATION_PRESSURE_AT_ZERO_KPA)
-    const wAtZeroLiquid = (2501 * ws0 - 1.006 * t) / (2501 + 1.86 * t) // eq 33 at t* = 0
-    if (w >= wAtZeroLiquid) {
-      const wst = saturationHumidityRatioAtDryBulb ?? saturationHumidityRatio(t, pressureKpa)
-      const lo = Math.max(dew, 0)
-      const start = chordStartC(t, w, true, lo, dew >= 0 ? w : ws0, t, wst)
-      return solveWetBulbBranch(t, w, pressureKpa, true, lo, t, start)
-    }
-    const lo = Math.max(dew - 1, SATURATION_MIN_C)
-    const start = chordStartC(t, w, false, dew, w, 0, ws0)
-    return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start), dew)
-  }
-  const lo = Math.max(dew - 1, SATURATION_MIN_C)
-  // Ws over ice at the dry bulb (eq 5 via the table, 1e-9 relative; pws ≪ p below 0 °C).
-  const pwsIce = saturationPressureFromTableKpa(t, true)
-  const wsIce = (MOLAR_MASS_RATIO_WATER_AIR * pwsIce) / (pressureKpa - pwsIce)
-  if (w >= wsIce) return t // supersaturated over ice: no iced-wick root at or below the dry bulb
-  const start = chordStartC(t, w, false, dew, w, t, wsIce)
-  // The root is at or above the dew/frost point (ASHRAE eq 35 at t* = dew gives W* ≤ W), so clamping
-  // there only removes the bisection's last 1e-5 °C.
-  return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, t, start), dew)
 }

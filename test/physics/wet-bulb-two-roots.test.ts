@@ -13,9 +13,8 @@ import {
   frostPointFromVaporPressureC,
   humidityRatioFromWetBulb,
   vaporPressureFromHumidityRatio,
-  wetBulbFromHumidityRatioC,
-  wetBulbWithDewPointC,
 } from '../../src/physics/moist-air.ts'
+import { wetBulbFromHumidityRatioC, wetBulbWithDewPointC } from '../../src/physics/wet-bulb.ts'
 
 const T = 5
 const P = 101.325
