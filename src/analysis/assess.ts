@@ -18,6 +18,7 @@ import {
   heatedSchema,
   parseDryingMethod,
 } from '../drying/method.ts'
+import { methodLoadingKgPerM2, methodModel } from '../drying/methods/index.ts'
 import { productResponse } from '../drying/product-response.ts'
 import { tabulatedResponse } from '../drying/product-tables.ts'
 import { type DryingThresholds, parseDryingThresholds } from '../drying/thresholds.ts'
@@ -130,12 +131,11 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   const product = tabulatedResponse(productResponse(profile, options.thicknessMm))
   const initialDb = moistureDbFromWbPct(initialWbPct)
   const targetDb = moistureDbFromWbPct(targetWbPct)
-  const loadingKgPerM2 =
-    (method.kind === 'open-air' || method.kind === 'shade' ? method.loadingKgPerM2 : undefined) ??
-    profile.defaultLoadingKgPerM2.value
+  const model = methodModel(method.kind)
+  const loadingKgPerM2 = methodLoadingKgPerM2(method) ?? profile.defaultLoadingKgPerM2.value
   const maxT = profile.maxProductTempC?.value ?? null
-  // the azimuth is read only by the solar cabinet's collector (the backup heater needs none)
-  const solar = computeSolarColumns(series, { azimuth: method.kind === 'solar-cabinet' })
+  // the azimuth is read only by tilted collectors (the backup heater needs none)
+  const solar = computeSolarColumns(series, { azimuth: model.needs.sunAzimuth })
   const conditionOptions = {
     targetDb,
     initialWbPct,
@@ -154,7 +154,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   const backupMethod: HeatedMethod =
     method.kind === 'heated' ? method : heatedBackup(options.backupHeater, product.erhPct(25, targetDb), maxT)
   const backup: HourlyConditions =
-    method.kind === 'heated'
+    method === backupMethod
       ? primary
       : computeHourlyConditions(series, backupMethod, product, {
           ...conditionOptions,
@@ -249,7 +249,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   } else if (years.length < 10) {
     warnings.push(`only ${years.length} years of data: P10 and P90 across so few years are rough`)
   }
-  if (primary.noRainData && method.kind === 'open-air') {
+  if (primary.noRainData && model.rainMatters(method)) {
     warnings.push(
       'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
     )

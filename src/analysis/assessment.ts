@@ -4,7 +4,7 @@
  * no typed arrays, no NaN or Infinity: a figure that cannot be computed is null and a warning says why).
  */
 import type { DryingMethod, FuelId } from '../drying/method.ts'
-import type { HourStatusName } from '../drying/thresholds.ts'
+import type { HourStatusName } from '../drying/usable-hour.ts'
 import type { Spread } from './statistics.ts'
 
 export const ASSESSMENT_SCHEMA = 'dryhours.assessment/1'

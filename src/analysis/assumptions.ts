@@ -4,75 +4,14 @@
  * reader can see (and change) what the figures rest on.
  */
 import type { DryingMethod, HeatedMethod } from '../drying/method.ts'
-import { type DryingThresholds, HOUR_STATUS_MEANINGS } from '../drying/thresholds.ts'
+import { methodModel } from '../drying/methods/index.ts'
+import type { DryingThresholds } from '../drying/thresholds.ts'
+import { HOUR_STATUS_MEANINGS } from '../drying/usable-hour.ts'
 import type { ProductProfile } from '../product/profile.ts'
 import type { Assumption } from './assessment.ts'
 import { MONTH_COVERAGE_REQUIRED } from './monthly-tables.ts'
 import { GOOD_START_PROBABILITY } from './start-dates.ts'
 import { PERCENTILE_CONVENTION } from './statistics.ts'
-
-function methodAssumptions(method: DryingMethod): Assumption[] {
-  switch (method.kind) {
-    case 'open-air':
-      return [
-        {
-          name: 'absorptivity',
-          value: String(method.absorptivity),
-          source: 'assumption for dark moist fruit (from memory)',
-        },
-        {
-          name: 'product surface per tray area',
-          value: String(method.surfaceAreaPerTrayArea),
-          source: 'own estimate for a single layer of 17 mm berries at 10 kg/m²',
-        },
-        {
-          name: 'covered at night / in rain',
-          value: `${method.coveredAtNight} / ${method.coveredInRain}`,
-          source: 'common practice for fruit and grain, no source',
-        },
-        {
-          name: 'product temperature in sun',
-          value: 'T_air + α·G/((hc + hr)·surface ratio), hc = 2.8 + 3.0·u, hr = 4·0.9·σ·T³',
-          source: 'Watmuff et al. 1977 via Duffie & Beckman 2013 §3.15 (from memory); emissivity 0.9 assumed',
-        },
-        {
-          name: 'wet-surface evaporation',
-          value: 'Penman combination equation, Rn = α·G − Rnl (FAO-56 eq 39), Penman 1948 wind function',
-          source: 'Penman 1948; McMahon et al. 2013 HESS 17:1331 Suppl. S4.11, S11.23',
-        },
-      ]
-    case 'shade':
-      return [
-        {
-          name: 'air speed at the product',
-          value: `max(${method.minimumAirSpeedMs} m/s, ${method.windFraction} × u2)`,
-          source: 'assumption, no source',
-        },
-        { name: 'wet-surface evaporation', value: 'Penman with Rn = 0 (no sun)', source: 'Penman 1948' },
-      ]
-    case 'solar-cabinet':
-      return [
-        {
-          name: 'collector',
-          value: `${method.collectorAreaM2PerTonne} m²/t, tilt ${method.tiltDeg}°, FR(τα) ${method.frTauAlpha}, FR·UL ${method.frUlWm2K} W m⁻² K⁻¹, ${method.airFlowKgPerSPerM2} kg s⁻¹ m⁻²`,
-          source:
-            'Hottel–Whillier–Bliss (Duffie & Beckman 2013 ch. 6) with inlet = ambient; single-glazed air-heater mid-range (from memory)',
-        },
-        {
-          name: 'irradiance on the collector',
-          value: 'Erbs diffuse split, Liu–Jordan isotropic sky',
-          source: 'Erbs, Klein & Duffie 1982; Liu & Jordan 1963',
-        },
-        {
-          name: 'fans',
-          value: method.fansOnlyInSun ? 'run only while the collector gains heat' : 'run every hour',
-          source: 'method setting',
-        },
-      ]
-    case 'heated':
-      return []
-  }
-}
 
 export function assessmentAssumptions(
   method: DryingMethod,
@@ -156,5 +95,5 @@ export function assessmentAssumptions(
       source: 'user input',
     },
   ]
-  return [...list, ...methodAssumptions(method)]
+  return [...list, ...methodModel(method.kind).assumptions(method)]
 }

@@ -5,11 +5,14 @@
  * evaporation, equilibrium moisture and the usable-hour verdict with its reason. For reports and the
  * API; an assessment keeps these as columns and does not list them.
  */
-import { adiabaticHumidityRatioAtRh } from '../drying/air-processes.ts'
+
 import { computeHourlyConditions } from '../drying/hourly-conditions.ts'
 import { parseDryingMethod } from '../drying/method.ts'
+import { methodLoadingKgPerM2 } from '../drying/methods/index.ts'
 import { productResponse } from '../drying/product-response.ts'
-import { HOUR_STATUS_NAMES, type HourStatusName, parseDryingThresholds } from '../drying/thresholds.ts'
+import { parseDryingThresholds } from '../drying/thresholds.ts'
+import { HOUR_STATUS_NAMES, type HourStatusName } from '../drying/usable-hour.ts'
+import { adiabaticHumidityRatioAtRh } from '../physics/air-processes.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import type { AssessOptions } from './assess.ts'
@@ -67,9 +70,7 @@ export function hourlyDetail(
   const c = computeHourlyConditions(slice, method, response, {
     targetDb,
     initialWbPct,
-    loadingKgPerM2:
-      (method.kind === 'open-air' || method.kind === 'shade' ? method.loadingKgPerM2 : undefined) ??
-      profile.defaultLoadingKgPerM2.value,
+    loadingKgPerM2: methodLoadingKgPerM2(method) ?? profile.defaultLoadingKgPerM2.value,
     thresholds: parseDryingThresholds(options.thresholds ?? {}),
     maxProductTempC: profile.maxProductTempC?.value ?? null,
   })

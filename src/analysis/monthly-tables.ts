@@ -4,7 +4,7 @@
  * from the hourly verdicts of drying/hourly-conditions.ts.
  */
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
-import { HOUR_STATUS_NAMES, HourStatus, type HourStatusName } from '../drying/thresholds.ts'
+import { HOUR_STATUS_NAMES, HourStatus, type HourStatusName } from '../drying/usable-hour.ts'
 import type { HourOfDayTable, MonthlyRow, YearValue } from './assessment.ts'
 import type { LocalTimeColumns } from './local-time.ts'
 import { quantileSorted, roundOrNull, spread } from './statistics.ts'

@@ -12,14 +12,15 @@
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of model.md §6.
  */
-import { type HourlyConditions, HourMode } from './hourly-conditions.ts'
+import type { HourlyConditions } from './hourly-conditions.ts'
+import { HourMode } from './methods/method-model.ts'
 import {
   EMC_RH_CAP_PCT,
   firstOrderRateConstant,
   type ProductResponse,
   stepMoistureRatio,
 } from './product-response.ts'
-import { HourStatus } from './thresholds.ts'
+import { HourStatus } from './usable-hour.ts'
 
 export interface BatchOptions {
   /** Index of the first hour. */
@@ -62,6 +63,17 @@ export interface BatchResult {
   usedBackup?: Uint8Array
 }
 
+function checkBatchOptions(options: BatchOptions, hours: number): void {
+  if (!(options.startIndex >= 0 && options.startIndex < hours)) {
+    throw new RangeError(`batch start index must be between 0 and ${hours - 1}, got ${options.startIndex}`)
+  }
+  if (!(options.initialDb > options.targetDb)) {
+    throw new RangeError(
+      `initial moisture ${options.initialDb} kg/kg db must be above the target ${options.targetDb} kg/kg db`,
+    )
+  }
+}
+
 /**
  * Simulate one batch. `primary` is the method's own hourly conditions; `backup`, when given, is used in
  * every hour whose primary status is not usable (and not missing).
@@ -74,14 +86,7 @@ export function simulateBatch(
 ): BatchResult {
   const { startIndex, maxHours, initialDb, targetDb } = options
   const n = primary.hours
-  if (!(startIndex >= 0 && startIndex < n)) {
-    throw new RangeError(`batch start index must be between 0 and ${n - 1}, got ${startIndex}`)
-  }
-  if (!(initialDb > targetDb)) {
-    throw new RangeError(
-      `initial moisture ${initialDb} kg/kg db must be above the target ${targetDb} kg/kg db`,
-    )
-  }
+  checkBatchOptions(options, n)
   const wrap = options.wrap === true
   primary.ensure(startIndex, maxHours, wrap)
   backup?.ensure(startIndex, maxHours, wrap)

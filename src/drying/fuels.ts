@@ -4,7 +4,10 @@
  * prices. Heating values are higher (gross) heating values, so the heater efficiency must be stated on
  * the same (HHV) basis. Prices are **examples only** in an unnamed currency unit: give your own.
  */
-import type { FuelId } from './method.ts'
+
+/** Fuel ids of {@link FUELS}. */
+export const FUEL_IDS = ['propane', 'natural-gas', 'heating-oil', 'wood-pellets', 'electricity'] as const
+export type FuelId = (typeof FUEL_IDS)[number]
 
 export interface Fuel {
   id: FuelId

@@ -6,12 +6,8 @@
  * relations. The sum over the batch must equal the water the product lost, and no outlet may exceed
  * saturation (evaporation ≤ deficit × air mass).
  */
-import {
-  dryBulbFromEnthalpyC,
-  humidityRatioFromVaporPressure,
-  moistAirEnthalpyKjPerKg,
-} from '../physics/moist-air.ts'
-import { saturationVaporPressureLiquidKpa } from '../physics/saturation.ts'
+import { adiabaticEndDryBulbC, humidityRatioFromRh, relativeHumidityPctAt } from '../physics/air-processes.ts'
+import { S_PER_HOUR } from '../physics/constants.ts'
 import type { BatchResult } from './batch.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 
@@ -37,7 +33,7 @@ export function forcedAirLedger(
   dryMatterKgPerTonne: number,
 ): AirLedger {
   if (!batch.trace) throw new RangeError('the batch must be simulated with recordTrace: true')
-  const airKgPerH = conditions.airFlowKgPerSPerTonne * 3600
+  const airKgPerH = conditions.airFlowKgPerSPerTonne * S_PER_HOUR
   if (!(airKgPerH > 0)) throw new RangeError('the air ledger needs a forced-air method (air flow > 0)')
   let fromProduct = 0
   let carried = 0
@@ -54,14 +50,10 @@ export function forcedAirLedger(
     const tIn = conditions.airC[i]
     const p = pressureKpa[i]
     const wOut = wIn + lost / airKgPerH
-    const tOut = dryBulbFromEnthalpyC(moistAirEnthalpyKjPerKg(tIn, wIn), wOut)
-    const pw = (p * wOut) / (0.621945 + wOut)
-    const rhOut = (100 * pw) / saturationVaporPressureLiquidKpa(tOut)
+    const tOut = adiabaticEndDryBulbC(tIn, wIn, lost / airKgPerH)
+    const rhOut = relativeHumidityPctAt(tOut, wOut, p)
     if (rhOut > maxRh) maxRh = rhOut
-    const wFromState = humidityRatioFromVaporPressure(
-      (rhOut / 100) * saturationVaporPressureLiquidKpa(tOut),
-      p,
-    )
+    const wFromState = humidityRatioFromRh(tOut, rhOut, p)
     carried += (wFromState - wIn) * airKgPerH
   }
   return {

@@ -20,6 +20,12 @@ export const EMC_RH_CAP_PCT = 99.5
 /** Lowest RH [%] passed to an isotherm (very hot heated air); below it the EMC is taken at this RH. */
 export const EMC_RH_FLOOR_PCT = 1
 
+/** Slots of the per-hour response array of {@link ProductResponse.hourResponse}. */
+export const HOUR_EMC_DESORPTION = 0
+export const HOUR_EMC_ADSORPTION = 1
+export const HOUR_RATE_K = 2
+export const HOUR_RATE_N = 3
+
 /** Marker value of the Page exponent for Thompson's corn equation (k then holds the air temperature). */
 export const THOMPSON_EXPONENT = 0
 
@@ -35,8 +41,9 @@ export interface ProductResponse {
   /** Page step parameters at (tC, rhPct) into out[0] = k [h⁻ⁿ], out[1] = n. n = 0 marks Thompson (k = tC). */
   stepParameters(tC: number, rhPct: number, out: Float64Array): void
   /**
-   * Optional: the four per-hour values at once, out = [EMC desorption, EMC adsorption, k, n], equal to
-   * the separate calls (a tabulated response shares one grid-cell location between them).
+   * Optional: the four per-hour values at once into `out` at the slots {@link HOUR_EMC_DESORPTION},
+   * {@link HOUR_EMC_ADSORPTION} [kg/kg db], {@link HOUR_RATE_K} [h⁻ⁿ] and {@link HOUR_RATE_N}, equal to the
+   * separate calls (a tabulated response shares one grid-cell location between them).
    */
   hourResponse?(tC: number, rhPct: number, out: Float64Array): void
   /** Rewetting rate constant as a fraction of the drying one (profile value and its source). */

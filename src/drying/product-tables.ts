@@ -7,7 +7,14 @@
  * {@link GRID_RH_STEP_PCT} % RH; the interpolation error is checked against direct evaluation in the
  * tests (within 0.5 % of the value over the weather range).
  */
-import { EMC_RH_CAP_PCT, type ProductResponse } from './product-response.ts'
+import {
+  EMC_RH_CAP_PCT,
+  HOUR_EMC_ADSORPTION,
+  HOUR_EMC_DESORPTION,
+  HOUR_RATE_K,
+  HOUR_RATE_N,
+  type ProductResponse,
+} from './product-response.ts'
 
 export const GRID_T_STEP_C = 0.5
 export const GRID_RH_STEP_PCT = 0.5
@@ -41,7 +48,7 @@ function node(g: Grid, it: number, ir: number): number {
  */
 const cell = new Float64Array(6)
 
-/** Grid cell and fractions of (cell[4] °C, cell[5] % RH), the same arithmetic as {@link lookup}, into {@link cell}. */
+/** Grid cell and fractions of (cell[4] °C, cell[5] % RH) into {@link cell}. */
 function locate(): void {
   const tC = cell[4]
   const rhPct = cell[5]
@@ -60,8 +67,7 @@ function locate(): void {
 }
 
 /**
- * Bilinear value of `g` in the cell of the last {@link locate}, written to out[slot]: bit for bit what
- * {@link lookup} returns. Reads the cell from {@link cell} and writes to an array, so no double crosses
+ * Bilinear value of `g` in the cell of the last {@link locate}, written to out[slot]. Reads the cell from {@link cell} and writes to an array, so no double crosses
  * the call (V8 boxes doubles passed to or returned from a call it does not inline).
  */
 function interpolateInto(g: Grid, out: Float64Array, slot: number): void {
@@ -76,22 +82,15 @@ function interpolateInto(g: Grid, out: Float64Array, slot: number): void {
   out[slot] = (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
 }
 
+/** One value of the separate calls (not the engine's hour): same cell and interpolation as the hour response. */
+const lookupOut = new Float64Array(1)
+
 function lookup(g: Grid, tC: number, rhPct: number): number {
-  let x = (tC - T_MIN) / GRID_T_STEP_C
-  let y = rhPct / GRID_RH_STEP_PCT
-  if (x < 0) x = 0
-  else if (x > NT - 1.000001) x = NT - 1.000001
-  if (y < 0) y = 0
-  else if (y > NRH - 1.000001) y = NRH - 1.000001
-  const it = Math.floor(x)
-  const ir = Math.floor(y)
-  const fx = x - it
-  const fy = y - ir
-  const a = node(g, it, ir)
-  const b = node(g, it + 1, ir)
-  const c = node(g, it, ir + 1)
-  const d = node(g, it + 1, ir + 1)
-  return (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
+  cell[4] = tC
+  cell[5] = rhPct
+  locate()
+  interpolateInto(g, lookupOut, 0)
+  return lookupOut[0]
 }
 
 /**
@@ -145,19 +144,19 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
       cell[4] = t
       cell[5] = rh
       locate()
-      interpolateInto(des, out, 0)
-      if (sameIsotherm) out[1] = out[0]
-      else interpolateInto(ads, out, 1)
+      interpolateInto(des, out, HOUR_EMC_DESORPTION)
+      if (sameIsotherm) out[HOUR_EMC_ADSORPTION] = out[HOUR_EMC_DESORPTION]
+      else interpolateInto(ads, out, HOUR_EMC_ADSORPTION)
       if (thompson) {
         direct.stepParameters(t, rh, scratchStep)
-        out[2] = scratchStep[0]
-        out[3] = scratchStep[1]
+        out[HOUR_RATE_K] = scratchStep[0]
+        out[HOUR_RATE_N] = scratchStep[1]
         return
       }
-      interpolateInto(lnKGrid, out, 2)
-      out[2] = Math.exp(out[2])
-      if (constantN) out[3] = node(nGrid, 0, 0)
-      else interpolateInto(nGrid, out, 3)
+      interpolateInto(lnKGrid, out, HOUR_RATE_K)
+      out[HOUR_RATE_K] = Math.exp(out[HOUR_RATE_K])
+      if (constantN) out[HOUR_RATE_N] = node(nGrid, 0, 0)
+      else interpolateInto(nGrid, out, HOUR_RATE_N)
     },
     stepParameters: (t, rh, out) => {
       if (thompson) {

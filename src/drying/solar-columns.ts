@@ -5,8 +5,15 @@
  * extraterrestrial horizontal irradiance, and the Rs/Rso ratio of FAO-56 eq 39 with the evening value
  * carried through the night (physics/fao56-reference-et.ts).
  */
+
+import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import { fillNightShortwaveRatioColumn } from '../physics/fao56-reference-et.ts'
-import { dayOfYearAt, SOLAR_CONSTANT_WM2 } from '../physics/fao56-solar.ts'
+import {
+  dayOfYearAt,
+  inverseRelativeDistanceEarthSun,
+  mjPerM2HourFromWm2,
+  SOLAR_CONSTANT_WM2,
+} from '../physics/fao56-solar.ts'
 import { clearSkyRadiationFao56 } from '../physics/irradiance.ts'
 import { sunPositionColumns } from '../physics/sun.ts'
 import type { HourlySeries } from '../weather/series.ts'
@@ -57,7 +64,7 @@ export function computeSolarColumns(series: HourlySeries, options: { azimuth?: b
   // dr changes once per local day: computed when the day changes (same value as per hour)
   let lastDay = Number.NaN
   let dr = 0
-  const offsetMs = (lon / 15) * 3_600_000
+  const offsetMs = (lon / 15) * MS_PER_HOUR
   for (let i = 0; i < n; i++) {
     // Hour-mean extraterrestrial horizontal irradiance by the midpoint rule: Gsc·dr·sin(altitude at
     // mid-hour) (FAO-56 eqs 21–23 integrated over the hour ≈ value at its middle; off by up to one
@@ -65,16 +72,16 @@ export function computeSolarColumns(series: HourlySeries, options: { azimuth?: b
     // sin(altitude) > 0 exactly when the altitude is above 0° (it lies within ±90°): no sine at night
     const alt = altitudeDeg[i]
     const sinAlt = alt > 0 ? Math.sin((alt * Math.PI) / 180) : 0
-    const day = Math.floor((series.startUtcMs[i] + offsetMs) / 86_400_000)
+    const day = Math.floor((series.startUtcMs[i] + offsetMs) / MS_PER_DAY)
     if (day !== lastDay) {
       lastDay = day
-      dr = 1 + 0.033 * Math.cos((2 * Math.PI * dayOfYearAt(series.startUtcMs[i], lon / 15)) / 365)
+      dr = inverseRelativeDistanceEarthSun(dayOfYearAt(series.startUtcMs[i], lon / 15))
     }
     const raW = sinAlt > 0 ? SOLAR_CONSTANT_WM2 * dr * sinAlt : 0
     raWm2[i] = raW
-    rso[i] = clearSkyRadiationFao56((raW * 3600) / 1e6, elevation)
+    rso[i] = clearSkyRadiationFao56(mjPerM2HourFromWm2(raW), elevation)
     const g = series.ghiWm2[i]
-    rs[i] = Number.isFinite(g) ? (g * 3600) / 1e6 : Number.NaN
+    rs[i] = Number.isFinite(g) ? mjPerM2HourFromWm2(g) : Number.NaN
   }
   fillNightShortwaveRatioColumn(rs, rso, altitudeDeg, rsOverRso)
   return { altitudeDeg, azimuthDeg, raWm2, rsOverRso }

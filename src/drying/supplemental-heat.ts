@@ -8,6 +8,7 @@
  */
 import { type BatchOptions, type BatchResult, simulateBatch } from './batch.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
+import { methodModel } from './methods/index.ts'
 import type { ProductResponse } from './product-response.ts'
 
 export type HeatStrategy = 'none-needed' | 'heat-when-ambient-fails' | 'heat-every-hour' | 'not-reachable'
@@ -35,7 +36,7 @@ export function supplementalHeat(
   deadlineHours: number,
 ): SupplementalHeatResult {
   const natural = simulateBatch(primary, product, options)
-  const primaryHeats = primary.method.kind === 'heated'
+  const primaryHeats = methodModel(primary.method.kind).heatsWithFuel
   if (natural.reached && natural.hoursToTarget <= deadlineHours) {
     return {
       natural,

@@ -1,7 +1,7 @@
 /**
  * @module drying/thresholds
- * The stated, adjustable thresholds of the usable-hour test and of the batch model, with their origin.
- * Every assessment lists them in its assumptions.
+ * The stated, adjustable thresholds of the usable-hour test (drying/usable-hour.ts) and of the batch
+ * model, with their origin. Every assessment lists them in its assumptions.
  */
 import { z } from 'zod'
 
@@ -39,43 +39,4 @@ export function parseDryingThresholds(input: unknown = {}): DryingThresholds {
   if (r.success) return r.data
   const issue = r.error.issues[0]
   throw new RangeError(`thresholds.${issue.path.join('.')}: ${issue.message}`)
-}
-
-/** Why an hour is not a usable drying hour (0 = usable). The order is the order in which they are tested. */
-export const HourStatus = {
-  usable: 0,
-  missingData: 1,
-  nightWithoutDrying: 2,
-  rain: 3,
-  tooCold: 4,
-  aboveProductTempLimit: 5,
-  dewRisk: 6,
-  tooHumid: 7,
-} as const
-export type HourStatusCode = (typeof HourStatus)[keyof typeof HourStatus]
-
-/** JSON names of the status codes, index = code. */
-export const HOUR_STATUS_NAMES = [
-  'usable',
-  'missingData',
-  'nightWithoutDrying',
-  'rain',
-  'tooCold',
-  'aboveProductTempLimit',
-  'dewRisk',
-  'tooHumid',
-] as const
-export type HourStatusName = (typeof HOUR_STATUS_NAMES)[number]
-
-/** Plain-language description of each reason, for the assumptions and the readable summary. */
-export const HOUR_STATUS_MEANINGS: Record<HourStatusName, string> = {
-  usable: 'the air at the product moves it toward its target moisture',
-  missingData: 'dry bulb, humidity or pressure missing in the weather file',
-  nightWithoutDrying: 'night (or no collector heat) and the method stops drying: product covered or fans off',
-  rain: 'rain on an exposed product, or product covered because of rain',
-  tooCold: 'product temperature below the minimum drying temperature',
-  aboveProductTempLimit: "product temperature above the product's quality limit",
-  dewRisk: 'exposed product at night with its radiatively cooled surface at or below the dew point',
-  tooHumid:
-    'equilibrium moisture at the air state is at or above the target, or the deficit is below the stated threshold',
 }

@@ -6,7 +6,7 @@
  * Units: W/m², °C, m², kg/s, kJ kg⁻¹ K⁻¹. FR is defined on the inlet temperature, so use Tin − Ta.
  * The air is heated at constant humidity ratio.
  */
-import { CP_DRY_AIR_KJ_PER_KG_K, CP_WATER_VAPOR_KJ_PER_KG_K } from './evaporation.ts'
+import { moistAirHeatCapacityKjPerKgK } from './moist-air.ts'
 
 /** Linear collector parameters: intercept FR(τα) [–] and slope FR·UL [W m⁻² K⁻¹]. */
 export interface CollectorParameters {
@@ -81,17 +81,6 @@ export function collectorEfficiency(
 }
 
 /**
- * Specific heat of moist air per kg dry air [kJ kg⁻¹ K⁻¹] = 1.006 + 1.86 W, the temperature derivative
- * of the ASHRAE enthalpy relation (ASHRAE HOF 2017 ch. 1 eq 30), W [kg/kg].
- */
-export function moistAirCpKjPerKgDryAirK(humidityRatioKgPerKg: number): number {
-  if (!(humidityRatioKgPerKg >= 0 && humidityRatioKgPerKg < 1)) {
-    throw new RangeError(`humidity ratio must be between 0 and 1 kg/kg, got ${humidityRatioKgPerKg}`)
-  }
-  return CP_DRY_AIR_KJ_PER_KG_K + CP_WATER_VAPOR_KJ_PER_KG_K * humidityRatioKgPerKg
-}
-
-/**
  * Outlet air temperature [°C] = Tin + Qu Ac / (ṁ cp), with useful gain `usefulGainWm2` [W/m²], collector
  * area `areaM2` [m²], dry-air mass flow `dryAirFlowKgPerS` [kg/s] and humidity ratio [kg/kg] for cp.
  */
@@ -105,6 +94,9 @@ export function collectorOutletC(
   if (!(areaM2 > 0)) throw new RangeError(`collector area must be > 0 m2, got ${areaM2}`)
   if (!(dryAirFlowKgPerS > 0)) throw new RangeError(`air mass flow must be > 0 kg/s, got ${dryAirFlowKgPerS}`)
   if (!(usefulGainWm2 >= 0)) throw new RangeError(`useful gain must be >= 0 W/m2, got ${usefulGainWm2}`)
-  const cpJPerKgK = moistAirCpKjPerKgDryAirK(humidityRatioKgPerKg) * 1000
+  if (!(humidityRatioKgPerKg >= 0 && humidityRatioKgPerKg < 1)) {
+    throw new RangeError(`humidity ratio must be between 0 and 1 kg/kg, got ${humidityRatioKgPerKg}`)
+  }
+  const cpJPerKgK = moistAirHeatCapacityKjPerKgK(humidityRatioKgPerKg) * 1000
   return inletC + (usefulGainWm2 * areaM2) / (dryAirFlowKgPerS * cpJPerKgK)
 }

@@ -5,11 +5,8 @@
  * aerodynamic resistance → Penman combination equation in resistance form with Hyland–Wexler properties
  * (./evaporation.ts). Missing inputs (NaN) give NaN for that hour; out-of-range values throw with the hour index.
  */
-import {
-  aerodynamicResistanceFromPenmanWindSPerM,
-  wetSurfaceEvaporationKgPerM2H,
-  windFunctionPenman1948MmPerDayKpa,
-} from './evaporation.ts'
+import { aerodynamicResistanceFromPenmanWindSPerM, windFunctionPenman1948MmPerDayKpa } from './evaporation.ts'
+import { wetSurfaceEvaporationKgPerM2H } from './wet-surface.ts'
 
 /** Hourly inputs, all of one length. */
 export interface WetSurfaceColumnsInput {

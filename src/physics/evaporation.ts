@@ -5,25 +5,17 @@
  * wet surface (Penman 1948; Monteith 1965 resistance form; FAO-56 eq 3, Allen et al. 1998), with its
  * building blocks. Units: °C, kPa, W/m² (mean over the hour), s/m, m/s, kg m⁻² h⁻¹ (= mm/h of water).
  *
- * Saturation pressure and its slope come from the Hyland–Wexler curve over liquid water in
- * ./saturation.ts (ASHRAE HOF 2017 ch. 1 eq 6) and air density from ./moist-air.ts; the FAO-56 Tetens
- * forms used by the reference-ET check are in ./fao56-reference-et.ts.
+ * The wet-surface flux itself, with Hyland–Wexler saturation (ASHRAE HOF 2017 ch. 1 eq 6) and the moist-air
+ * density of ./moist-air.ts, is in ./wet-surface.ts; the FAO-56 Tetens forms used by the reference-ET check
+ * are in ./fao56-reference-et.ts.
  */
 
-import { KELVIN_OFFSET } from './constants.ts'
-import { checkPressure, humidityRatioFromVaporPressure, moistAirDensityKgPerM3 } from './moist-air.ts'
+import { KELVIN_OFFSET, S_PER_DAY, S_PER_HOUR, STEFAN_BOLTZMANN_WM2K4 } from './constants.ts'
+import { checkPressure } from './moist-air.ts'
 import { dLnSaturationPressureLiquidDT, saturationVaporPressureLiquidKpa } from './saturation.ts'
 
-/** Seconds per hour. Definition. */
-const S_PER_HOUR = 3600
-/** Seconds per day. Definition. */
-const S_PER_DAY = 86400
 /** Ratio of molar masses water/dry air used by FAO-56 eq 8 (ε = 0.622). */
 export const EPSILON_FAO56 = 0.622
-/** Specific heat of dry air [kJ kg⁻¹ K⁻¹] of the ASHRAE enthalpy relation (ASHRAE HOF 2017 ch. 1 eq 30). */
-export const CP_DRY_AIR_KJ_PER_KG_K = 1.006
-/** Specific heat of water vapour [kJ kg⁻¹ K⁻¹] of the same relation (ASHRAE HOF 2017 ch. 1 eq 30). */
-export const CP_WATER_VAPOR_KJ_PER_KG_K = 1.86
 
 /**
  * Latent heat of vaporization of water [MJ/kg] at surface temperature `tC` [°C]: λ = 2.501 − 2.361×10⁻³ T,
@@ -63,9 +55,24 @@ export function psychrometricConstantKpaPerC(
 export function windSpeedAt2mMs(windMs: number, heightM: number): number {
   if (!(windMs >= 0 && windMs < 100))
     throw new RangeError(`wind speed must be between 0 and 100 m/s, got ${windMs}`)
+  checkFao56WindHeight(heightM)
+  return (windMs * 4.87) / Math.log(67.8 * heightM - 5.42)
+}
+
+function checkFao56WindHeight(heightM: number): void {
   if (!(heightM >= 0.5 && heightM <= 200))
     throw new RangeError(`wind height must be between 0.5 and 200 m, got ${heightM}`)
-  return (windMs * 4.87) / Math.log(67.8 * heightM - 5.42)
+}
+
+/**
+ * Ratio of the wind at height `heightM` [m] to the wind at 2 m over short grass [–]: FAO-56 eq 47 inverted,
+ * u(z)/u2 = ln(67.8 z − 5.42)/4.87 (e.g. the wind at a drying rack 0.5 m high). Accepted from 0.1 m (where
+ * the profile is still positive; eq 47 itself is stated for measurement heights) to 200 m.
+ */
+export function windRatioFrom2mToHeight(heightM: number): number {
+  if (!(heightM >= 0.1 && heightM <= 200))
+    throw new RangeError(`height must be between 0.1 and 200 m, got ${heightM}`)
+  return Math.log(67.8 * heightM - 5.42) / 4.87
 }
 
 /**
@@ -177,6 +184,16 @@ export function flatPlateHeatTransferCoefficientWm2K(windMs: number): number {
   return 2.8 + 3.0 * windMs
 }
 
+/**
+ * Linearised radiative heat-transfer coefficient of a surface of emissivity `emissivity` at `tC` [°C] to
+ * surroundings at about the same temperature [W m⁻² K⁻¹]: hr = 4 ε σ T³ (Duffie & Beckman 2013 §3.10,
+ * from memory for the section), σ of physics/constants.ts.
+ */
+export function radiativeHeatTransferCoefficientWm2K(emissivity: number, tC: number): number {
+  const tK = tC + KELVIN_OFFSET
+  return 4 * emissivity * STEFAN_BOLTZMANN_WM2K4 * tK * tK * tK
+}
+
 /** ra = ρa cp / hc [s/m] for a flat wet plate (Lewis analogy) with hc of {@link flatPlateHeatTransferCoefficientWm2K}. */
 export function aerodynamicResistanceFlatPlateSPerM(
   windMs: number,
@@ -215,68 +232,7 @@ export function penmanMonteithLatentFlux(
   return (slopeKpaPerC * availableEnergyWm2 + aero) / (slopeKpaPerC + psychrometricKpaPerC * (1 + rsOverRa))
 }
 
-/**
- * Latent heat flux [W/m²] from a wet surface at air temperature (Penman 1948 in resistance form, rs = 0):
- * Δ at `airTempC` from Hyland–Wexler, λ(T) FAO-56 Annex 3, γ = cp P/(ε λ) with cp of the moist air,
- * ρa from the ASHRAE perfect-gas relations, es − ea from `airTempC` and `vaporPressureKpa`.
- * Inputs: net radiation and ground/product heat flux [W/m²], air temperature [°C], actual vapour
- * pressure [kPa], total pressure [kPa], aerodynamic resistance [s/m]. No allocation.
- * Negative values mean condensation (dew) on the surface.
- */
-export function wetSurfaceLatentFluxWm2(
-  netRadiationWm2: number,
-  heatFluxIntoSurfaceWm2: number,
-  airTempC: number,
-  vaporPressureKpa: number,
-  pressureKpa: number,
-  aerodynamicResistanceSPerM: number,
-): number {
-  checkPressure(pressureKpa)
-  const es = saturationVaporPressureLiquidKpa(airTempC)
-  if (!(vaporPressureKpa >= 0 && vaporPressureKpa <= es * 1.0001)) {
-    throw new RangeError(
-      `vapour pressure must be between 0 and the saturation pressure ${es.toFixed(4)} kPa at ${airTempC} °C, got ${vaporPressureKpa}`,
-    )
-  }
-  const w = humidityRatioFromVaporPressure(vaporPressureKpa, pressureKpa)
-  const density = moistAirDensityKgPerM3(airTempC, w, pressureKpa)
-  const cpKjPerKgK = (CP_DRY_AIR_KJ_PER_KG_K + w * CP_WATER_VAPOR_KJ_PER_KG_K) / (1 + w) // per kg moist air
-  const lambda = latentHeatVaporizationMjPerKg(airTempC)
-  const gamma = psychrometricConstantKpaPerC(pressureKpa, lambda, cpKjPerKgK / 1000)
-  return penmanMonteithLatentFlux(
-    saturationSlopeLiquidKpaPerC(airTempC),
-    gamma,
-    netRadiationWm2 - heatFluxIntoSurfaceWm2,
-    density * cpKjPerKgK * 1000,
-    es - vaporPressureKpa,
-    aerodynamicResistanceSPerM,
-  )
-}
-
 /** Evaporation [kg m⁻² h⁻¹ = mm/h] from latent heat flux [W/m²] at surface temperature `tC` (λ of FAO-56 Annex 3). */
 export function evaporationKgPerM2HFromLatentFlux(latentFluxWm2: number, tC: number): number {
   return (latentFluxWm2 * S_PER_HOUR) / (latentHeatVaporizationMjPerKg(tC) * 1e6)
-}
-
-/**
- * Evaporation from a wet surface [kg m⁻² h⁻¹ = mm/h]: {@link wetSurfaceLatentFluxWm2} divided by λ at the
- * air temperature. Same inputs; negative means condensation.
- */
-export function wetSurfaceEvaporationKgPerM2H(
-  netRadiationWm2: number,
-  heatFluxIntoSurfaceWm2: number,
-  airTempC: number,
-  vaporPressureKpa: number,
-  pressureKpa: number,
-  aerodynamicResistanceSPerM: number,
-): number {
-  const flux = wetSurfaceLatentFluxWm2(
-    netRadiationWm2,
-    heatFluxIntoSurfaceWm2,
-    airTempC,
-    vaporPressureKpa,
-    pressureKpa,
-    aerodynamicResistanceSPerM,
-  )
-  return evaporationKgPerM2HFromLatentFlux(flux, airTempC)
 }

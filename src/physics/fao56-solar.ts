@@ -9,13 +9,22 @@
  * t = UTC − Lz/15, the eq 31 term t + (Lz − Lm)/15 equals UTC + lonEast/15, which is what
  * {@link hourAngleFromUtcRad} uses (same result, no time-zone needed; FAO writes 1/15 as 0.06667).
  */
+import { MS_PER_DAY, MS_PER_HOUR, S_PER_HOUR } from './constants.ts'
 
 /** Solar constant [MJ m⁻² min⁻¹]; FAO-56 eq 21 (= 1366.7 W/m²). */
 export const SOLAR_CONSTANT_MJ_M2_MIN = 0.082
 /** Solar constant [W/m²], the same value as {@link SOLAR_CONSTANT_MJ_M2_MIN} (0.0820e6/60). */
 export const SOLAR_CONSTANT_WM2 = (SOLAR_CONSTANT_MJ_M2_MIN * 1e6) / 60
-/** Converts MJ m⁻² h⁻¹ to a mean irradiance in W/m² over the hour (1e6 J / 3600 s). */
-export const MJ_PER_M2_HOUR_TO_WM2 = 1e6 / 3600
+
+/** Mean irradiance over the hour [W/m²] of an hourly amount [MJ m⁻² h⁻¹]: × 1e6 J/MJ ÷ 3600 s/h. */
+export function wm2FromMjPerM2Hour(mjPerM2Hour: number): number {
+  return (mjPerM2Hour * 1e6) / S_PER_HOUR
+}
+
+/** Hourly amount [MJ m⁻² h⁻¹] of a mean irradiance over the hour [W/m²]: × 3600 s/h ÷ 1e6 J/MJ. */
+export function mjPerM2HourFromWm2(wm2: number): number {
+  return (wm2 * S_PER_HOUR) / 1e6
+}
 
 function checkDayOfYear(j: number): void {
   if (!(j >= 1 && j <= 366)) throw new RangeError(`day of year must be between 1 and 366, got ${j}`)
@@ -147,7 +156,7 @@ export function extraterrestrialRadiationDailyMjM2(latRad: number, dayOfYear: nu
  * allocation (days-from-civil arithmetic, H. Hinnant, "chrono-compatible low-level date algorithms").
  */
 export function dayOfYearAt(utcMs: number, offsetHours = 0): number {
-  const days = Math.floor((utcMs + offsetHours * 3_600_000) / 86_400_000)
+  const days = Math.floor((utcMs + offsetHours * MS_PER_HOUR) / MS_PER_DAY)
   const z = days + 719468
   const era = Math.floor(z / 146097)
   const doe = z - era * 146097
@@ -178,7 +187,7 @@ export function extraterrestrialRadiationForPeriodUtcMjM2(
   }
   const midMs = startUtcMs + periodHours * 1_800_000
   const j = dayOfYearAt(midMs, lonEastDeg / 15)
-  const utcHour = (((midMs % 86_400_000) + 86_400_000) % 86_400_000) / 3_600_000
+  const utcHour = (((midMs % MS_PER_DAY) + MS_PER_DAY) % MS_PER_DAY) / MS_PER_HOUR
   const w = hourAngleFromUtcRad(utcHour, lonEastDeg, j)
   return extraterrestrialRadiationPeriodMjM2((latDeg * Math.PI) / 180, j, w, periodHours)
 }

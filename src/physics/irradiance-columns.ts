@@ -8,7 +8,7 @@
  * → Erbs et al. (1982) diffuse fraction → beam horizontal = GHI − diffuse → isotropic-sky transposition
  * (Liu & Jordan 1963) with the mid-hour sun position of ./sun.ts.
  */
-import { extraterrestrialRadiationForPeriodUtcMjM2, MJ_PER_M2_HOUR_TO_WM2 } from './fao56-solar.ts'
+import { extraterrestrialRadiationForPeriodUtcMjM2, wm2FromMjPerM2Hour } from './fao56-solar.ts'
 import { cosIncidenceAngle, diffuseHorizontalErbsWm2, tiltedIrradianceIsotropicWm2 } from './irradiance.ts'
 
 const RAD = Math.PI / 180
@@ -44,7 +44,7 @@ export function extraterrestrialHorizontalColumnWm2(
   for (let i = 0; i < n; i++) {
     const t = startUtcMs[i]
     outWm2[i] = Number.isFinite(t)
-      ? extraterrestrialRadiationForPeriodUtcMjM2(t, latDeg, lonDeg, 1) * MJ_PER_M2_HOUR_TO_WM2
+      ? wm2FromMjPerM2Hour(extraterrestrialRadiationForPeriodUtcMjM2(t, latDeg, lonDeg, 1))
       : Number.NaN
   }
   return n

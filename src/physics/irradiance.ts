@@ -143,3 +143,27 @@ export function tiltedIrradianceIsotropicWm2(
   else if (cosIncidence > 0) beam = (beamHorizontalWm2 * cosIncidence) / Math.max(cosZenith, MIN_COS_ZENITH)
   return beam + (diffuse * (1 + cosB)) / 2 + (global * groundAlbedo * (1 - cosB)) / 2
 }
+
+/**
+ * Global irradiance on a tilted plane [W/m²] for one hour from the measured global horizontal irradiance
+ * `ghiWm2`: the Erbs et al. (1982) diffuse split with the hour's extraterrestrial horizontal irradiance
+ * `extraterrestrialHorizontalWm2`, then isotropic-sky transposition ({@link tiltedIrradianceIsotropicWm2})
+ * for the sun at `sunAltitudeDeg`, `sunAzimuthDeg` (clockwise from north) and a plane of tilt `tiltDeg`
+ * facing `surfaceAzimuthDeg` with ground albedo `groundAlbedo`. 0 when the GHI is not positive.
+ */
+export function tiltedIrradianceFromGhiWm2(
+  ghiWm2: number,
+  extraterrestrialHorizontalWm2: number,
+  sunAltitudeDeg: number,
+  sunAzimuthDeg: number,
+  tiltDeg: number,
+  surfaceAzimuthDeg: number,
+  groundAlbedo: number,
+): number {
+  if (!(ghiWm2 > 0)) return 0
+  const diffuse = diffuseHorizontalErbsWm2(ghiWm2, extraterrestrialHorizontalWm2)
+  const zenith = 90 - sunAltitudeDeg
+  const cosZ = Math.cos((zenith * Math.PI) / 180)
+  const cosInc = cosIncidenceAngle(zenith, sunAzimuthDeg, tiltDeg, surfaceAzimuthDeg)
+  return tiltedIrradianceIsotropicWm2(ghiWm2 - diffuse, diffuse, cosZ, cosInc, tiltDeg, groundAlbedo)
+}

@@ -72,6 +72,14 @@ function checkTemperature(name: string, tC: number): void {
 }
 
 /**
+ * Saturation vapour pressure over liquid water [Pa] at `tC` [°C], exp of eq 6, without a range check: for
+ * hot loops whose input is already checked ({@link saturationVaporPressureLiquidKpa} is this divided by 1000).
+ */
+export function saturationPressureLiquidPa(tC: number): number {
+  return Math.exp(lnSaturationPressureLiquidPa(tC + KELVIN_OFFSET))
+}
+
+/**
  * Saturation vapour pressure over liquid water [kPa] at `tC` [°C], also for supercooled water below 0 °C.
  * ASHRAE HOF 2017 ch. 1 eq 6. Example: 20 °C → 2.3388 kPa.
  */

@@ -18,11 +18,8 @@
  * in suncalc 2.0.2) written out without allocation, and checked against suncalc in the tests.
  */
 import * as SunCalc from 'suncalc'
+import { MS_PER_DAY, S_PER_DAY } from './constants.ts'
 
-/** Milliseconds per hour. Definition. */
-export const MS_PER_HOUR = 3_600_000
-/** Milliseconds per day. Definition. */
-const MS_PER_DAY = 86_400_000
 /** Julian day of the Unix epoch 1970-01-01 00:00 UT minus 0.5 (Meeus 1998 ch. 7), as used by suncalc. */
 const JULIAN_DAY_1970 = 2440588
 /** Julian day of the J2000.0 epoch (2000-01-01 12:00 TT); Meeus 1998 ch. 21. */
@@ -119,7 +116,7 @@ const scratch = new Float64Array(3)
  */
 function solarTerms(utcMs: number, lonDeg: number): void {
   const d = utcMs / MS_PER_DAY - 0.5 + JULIAN_DAY_1970 - JULIAN_DAY_2000 // days since J2000, UT
-  const t = (d + deltaTSeconds(d) / 86400) / 36525 // Julian centuries, TT
+  const t = (d + deltaTSeconds(d) / S_PER_DAY) / 36525 // Julian centuries, TT
   const l0 = RAD * (280.46646 + t * (36000.76983 + t * 0.0003032)) // eq 25.2 geometric mean longitude
   const m = RAD * (357.52911 + t * (35999.05029 - t * 0.0001537)) // eq 25.3 mean anomaly
   const sinM = Math.sin(m)

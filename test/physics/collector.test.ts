@@ -4,10 +4,10 @@ import {
   collectorEfficiency,
   collectorOutletC,
   collectorUsefulGainWm2,
-  moistAirCpKjPerKgDryAirK,
   SINGLE_GLAZED_AIR_HEATER,
   UNGLAZED_AIR_HEATER,
 } from '../../src/physics/collector.ts'
+import { moistAirHeatCapacityKjPerKgK } from '../../src/physics/moist-air.ts'
 
 describe('Hottel–Whillier–Bliss collector (Duffie & Beckman 2013 ch. 6)', () => {
   // Reference-file recomputation: G = 800 W/m², ΔT = Tin − Ta = 10 K → η 0.6375 for (0.70, 5), 0.600 for (0.85, 20).
@@ -34,7 +34,7 @@ describe('Hottel–Whillier–Bliss collector (Duffie & Beckman 2013 ch. 6)', ()
   })
   it('outlet temperature: 2 m² at 360 W/m², 0.05 kg/s dry air, W 0.01 → ΔT = 720/(0.05·1024.6) = 14.05 K', () => {
     // cp = 1.006 + 1.86 × 0.01 = 1.0246 kJ/kg/K (ASHRAE HOF 2017 ch. 1 eq 30 derivative).
-    expect(moistAirCpKjPerKgDryAirK(0.01)).toBeCloseTo(1.0246, 12)
+    expect(moistAirHeatCapacityKjPerKgK(0.01)).toBeCloseTo(1.0246, 12)
     expect(collectorOutletC(25, 360, 2, 0.05, 0.01)).toBeCloseTo(39.0543, 4) // 25 + 720/51.23 by hand
   })
   it('gain is never negative and never above FR(τα)·G (property)', () => {
@@ -60,6 +60,6 @@ describe('Hottel–Whillier–Bliss collector (Duffie & Beckman 2013 ch. 6)', ()
     expect(() => collectorUsefulGainWm2(SINGLE_GLAZED_AIR_HEATER, -5, 20, 20)).toThrow(/irradiance/)
     expect(() => collectorOutletC(20, 100, 2, 0, 0.01)).toThrow(/mass flow/)
     expect(() => collectorOutletC(20, 100, 0, 0.1, 0.01)).toThrow(/area/)
-    expect(() => moistAirCpKjPerKgDryAirK(-0.1)).toThrow(/humidity ratio/)
+    expect(() => collectorOutletC(20, 400, 2, 0.05, -0.1)).toThrow(/humidity ratio/)
   })
 })

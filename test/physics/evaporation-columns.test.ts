@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest'
 import {
   aerodynamicResistanceFromPenmanWindSPerM,
-  wetSurfaceEvaporationKgPerM2H,
   windFunctionPenman1948MmPerDayKpa,
 } from '../../src/physics/evaporation.ts'
 import { wetSurfaceEvaporationColumnKgPerM2H } from '../../src/physics/evaporation-columns.ts'
+import { wetSurfaceEvaporationKgPerM2H } from '../../src/physics/wet-surface.ts'
 
 describe('wet-surface evaporation column', () => {
   const input = {

@@ -10,8 +10,6 @@ import {
   penmanMonteithLatentFlux,
   psychrometricConstantKpaPerC,
   saturationSlopeLiquidKpaPerC,
-  wetSurfaceEvaporationKgPerM2H,
-  wetSurfaceLatentFluxWm2,
   windFunctionPenman1948MmPerDayKpa,
   windFunctionPenman1956MmPerDayKpa,
   windSpeedAt2mMs,
@@ -24,6 +22,7 @@ import {
   saturationVaporPressureFao56Kpa,
 } from '../../src/physics/fao56-reference-et.ts'
 import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.ts'
+import { wetSurfaceEvaporationKgPerM2H, wetSurfaceLatentFluxWm2 } from '../../src/physics/wet-surface.ts'
 
 // Small FAO-56 examples (Allen et al. 1998), as quoted with page numbers in PyETo tests/test_fao.py.
 describe('FAO-56 small examples', () => {

@@ -1,9 +1,9 @@
 import fc from 'fast-check'
 import * as SunCalc from 'suncalc'
 import { describe, expect, it } from 'vitest'
+import { MS_PER_HOUR } from '../../src/physics/constants.ts'
 import {
   intervalMidpointUtcMs,
-  MS_PER_HOUR,
   sinGeometricSunAltitude,
   sunAltitudeColumn,
   sunPosition,

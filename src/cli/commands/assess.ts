@@ -3,7 +3,7 @@ import { type AssessOptions, type AssessProgress, assess } from '../../analysis/
 import type { Assessment } from '../../analysis/assessment.ts'
 import { FUELS } from '../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
-import { HOUR_STATUS_NAMES } from '../../drying/thresholds.ts'
+import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
 import { productById } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'

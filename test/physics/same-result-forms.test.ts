@@ -1,13 +1,14 @@
 /**
- * The engine's faster forms give bit for bit the results of the plain functions they replace (the
- * reference here is the project's own plain form; the physics of those is checked elsewhere).
+ * The hot-loop forms (saturation pressure passed in, as the hourly driver does) give bit for bit the
+ * results of the plain functions (the reference here is the project's own plain form; the physics of
+ * those is checked elsewhere).
  */
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { adiabaticHumidityRatioAtRh } from '../../src/drying/air-processes.ts'
-import { wetSurfaceEvaporation, wetSurfaceEvaporationAtSaturation } from '../../src/drying/wet-surface.ts'
+import { adiabaticHumidityRatioAtRh } from '../../src/physics/air-processes.ts'
 import { KELVIN_OFFSET } from '../../src/physics/constants.ts'
 import { lnSaturationPressureLiquidPa } from '../../src/physics/saturation.ts'
+import { wetSurfaceEvaporationPenman1948KgPerM2H } from '../../src/physics/wet-surface.ts'
 
 const air = fc.record({
   t: fc.double({ min: -40, max: 60, noNaN: true }),
@@ -31,8 +32,8 @@ describe('faster forms are bit-identical', () => {
         const { satPa, pw, w } = state(t, rh, p)
         expect(
           Object.is(
-            wetSurfaceEvaporationAtSaturation(rn, t, pw, p, w, u, satPa),
-            wetSurfaceEvaporation(rn, t, pw, p, w, u),
+            wetSurfaceEvaporationPenman1948KgPerM2H(rn, t, pw, p, w, u, satPa),
+            wetSurfaceEvaporationPenman1948KgPerM2H(rn, t, pw, p, w, u),
           ),
         ).toBe(true)
       }),

@@ -7,7 +7,7 @@ import {
   humidityRatioFromRh,
   relativeHumidityPctAt,
   sensibleHeatingKw,
-} from '../../src/drying/air-processes.ts'
+} from '../../src/physics/air-processes.ts'
 import { moistAirEnthalpyKjPerKg } from '../../src/physics/moist-air.ts'
 
 psychrolib.SetUnitSystem(psychrolib.SI)

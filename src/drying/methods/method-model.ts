@@ -1,0 +1,141 @@
+/**
+ * @module drying/methods/method-model
+ * What a drying method is to the engine. Each method is one module in this folder exporting a
+ * {@link MethodModel}: its parameters (a zod object with stated defaults), what it assumes (listed in every
+ * assessment), and for every hour the air at the product, the product temperature and the energy put in.
+ * The registry (./index.ts) lists them; the hourly driver (drying/hourly-conditions.ts) does everything
+ * that is the same for all methods: the ambient air, saturation at the product, equilibrium moisture,
+ * drying rate, the humidity-ratio deficits and the usable-hour verdict (drying/usable-hour.ts).
+ *
+ * Speed: `prepare` runs once per series and returns the function called for every hour. It reads and
+ * writes one {@link MethodHour} object that lives as long as the series (no allocation per hour; keep
+ * per-hour numbers out of captured `let` variables, which V8 would box).
+ */
+import type { z } from 'zod'
+import { solveWetSurface, type WetSurface } from '../../physics/wet-surface.ts'
+import type { HourlySeries } from '../../weather/series.ts'
+import type { SolarColumns } from '../solar-columns.ts'
+import type { DryingThresholds } from '../thresholds.ts'
+
+/** What an hour does to the product in a batch. */
+export const HourMode = { active: 0, paused: 1, rainExposed: 2, missing: 3 } as const
+export type HourModeCode = (typeof HourMode)[keyof typeof HourMode]
+
+/** A stated assumption with its source, as the assessment lists it. */
+export interface MethodAssumption {
+  name: string
+  value: string
+  source: string
+}
+
+/**
+ * One hour as the driver hands it to a method (ambient air, set before the call) and what the method
+ * gives back (set by the call). The driver resets the outputs to their defaults before each hour.
+ */
+export class MethodHour {
+  /** Index of the hour in the series (for the solar columns). */
+  index = 0
+  /** Ambient dry bulb [°C]. */
+  dryBulbC = Number.NaN
+  /** Ambient vapour pressure [kPa]. */
+  vaporPressureKpa = Number.NaN
+  /** Ambient humidity ratio [kg/kg] (heating does not change it). */
+  humidityRatio = Number.NaN
+  /** Station pressure [kPa]. */
+  pressureKpa = Number.NaN
+  /** Saturation pressure over liquid water at the ambient dry bulb, exp(ln pws) [Pa]. */
+  saturationPa = Number.NaN
+  /** Wind at 2 m over short grass [m/s] (FAO-56 eq 47 from the file's wind height). */
+  windAt2mMs = Number.NaN
+  /** Global horizontal irradiance [W/m²], 0 when missing or negative. */
+  ghiWm2 = Number.NaN
+  /** Sun below the night threshold (or, without coordinates, no irradiance). */
+  night = false
+  /** Rain in the hour at or above the threshold. */
+  raining = false
+
+  /** Out: air temperature at the product [°C] (ambient unless the method heats it). */
+  airC = Number.NaN
+  /** Out: product (surface) temperature [°C]. */
+  productC = Number.NaN
+  /** Out: {@link HourMode}. */
+  mode: HourModeCode = HourMode.active
+  /** Out: no drying because of night or no collector heat (covered product, fans off). */
+  pausedByNight = false
+  /** Out: product covered because of rain. */
+  coveredForRain = false
+  /** Out: exposed product uncovered at night (dew possible). */
+  uncoveredNight = false
+  /** Out: wet-surface evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN when not an exposed method or covered. */
+  evaporationKgPerM2H = Number.NaN
+  /** Out: heat from a heater into the air [kWh per tonne fresh product in this hour]. */
+  heaterKwhPerTonne = 0
+  /** Out: heat from a solar collector into the air [kWh per tonne fresh product in this hour]. */
+  solarKwhPerTonne = 0
+}
+
+/** What a method may read when it prepares for a series. */
+export interface MethodSetup {
+  series: HourlySeries
+  /** Sun position and radiation columns of the series. */
+  solar: SolarColumns
+  thresholds: DryingThresholds
+  /** Highest product temperature for quality [°C], or null. */
+  maxProductTempC: number | null
+}
+
+/** The per-hour function a method returns from `prepare`. */
+export type MethodHourFunction = (hour: MethodHour) => void
+
+// biome-ignore lint/suspicious/noExplicitAny: the registry holds models of different parameter shapes
+export type AnyMethodSchema = z.ZodObject<any>
+
+export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
+  /** The `kind` of the method (kebab-case), also its zod literal. */
+  kind: string
+  /** Plain words for reports and the page, e.g. "open air (racks or mats in the sun)". */
+  label: string
+  /** Parameters with their defaults and sources; `kind` is a literal. */
+  schema: S
+  /**
+   * 'exposed': the product lies on a surface open to the air (a loading in kg/m² applies and its
+   * constant-rate limit is the wet-surface evaporation); 'forced-air': air is blown through the product at
+   * a known flow (the limit is the deficit to saturation × air mass).
+   */
+  exposure: 'exposed' | 'forced-air'
+  /** Dry-air flow per tonne of fresh product [kg/s] (0 for exposed methods). */
+  airFlowKgPerSPerTonne(method: z.output<S>): number
+  /** True when the method heats its air with fuel: its own heater energy is the heat, and no backup heater is added. */
+  heatsWithFuel: boolean
+  /** True when rain decides hours of this method (it wets or covers the product): a file without rain then gets a warning. */
+  rainMatters(method: z.output<S>): boolean
+  /** What the hour function needs: sun azimuth (tilted collectors), site coordinates. */
+  needs: { sunAzimuth: boolean; coordinates: boolean }
+  /** The method's own assumptions, with their sources, for the assessment. */
+  assumptions(method: z.output<S>): MethodAssumption[]
+  /** Prepare for one series; the returned function sets the outputs of each hour. */
+  prepare(method: z.output<S>, setup: MethodSetup): MethodHourFunction
+}
+
+/**
+ * Penman wet-surface evaporation of the hour (physics/wet-surface.ts) with available energy
+ * `availableEnergyWm2` and wind at 2 m `windMs`, the ambient air of `hour`, written to
+ * `hour.evaporationKgPerM2H`. `scratch` is the method's own {@link WetSurface}, reused every hour.
+ */
+export function wetSurfaceEvaporationOfHour(
+  hour: MethodHour,
+  scratch: WetSurface,
+  availableEnergyWm2: number,
+  windMs: number,
+): void {
+  scratch.availableEnergyWm2 = availableEnergyWm2
+  scratch.airC = hour.dryBulbC
+  scratch.vaporPressureKpa = hour.vaporPressureKpa
+  scratch.pressureKpa = hour.pressureKpa
+  scratch.humidityRatio = hour.humidityRatio
+  scratch.windAt2mMs = windMs
+  scratch.saturationPa = hour.saturationPa
+  scratch.aerodynamicResistanceSPerM = Number.NaN
+  solveWetSurface(scratch)
+  hour.evaporationKgPerM2H = scratch.evaporationKgPerM2H
+}

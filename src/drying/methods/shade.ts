@@ -1,0 +1,55 @@
+/**
+ * @module drying/methods/shade
+ * Ventilated shade or shed. What it assumes:
+ * - the product sees the ambient air, out of the sun and the rain, and is never covered;
+ * - the air moves past it at a fraction of the 2 m wind outside, never below a minimum air speed
+ *   (free convection and draughts; assumptions, no source);
+ * - its constant-rate limit is the Penman wet-surface evaporation with no radiation (Rn = 0) and the
+ *   Penman 1948 wind function at that air speed; its temperature is the air's.
+ * No energy input.
+ */
+import { z } from 'zod'
+import { WetSurface } from '../../physics/wet-surface.ts'
+import { type MethodHour, type MethodModel, wetSurfaceEvaporationOfHour } from './method-model.ts'
+import { fraction, loadingSchema } from './parameters.ts'
+
+export const shadeSchema = z.object({
+  kind: z.literal('shade'),
+  /** Product on the drying surface [kg fresh per m²]; when absent, the product profile's default loading. */
+  loadingKgPerM2: loadingSchema,
+  /**
+   * Air speed at the product as a fraction of the 2 m wind outside. 0.3 for an open-sided shed is an
+   * assumption (from memory, no source).
+   */
+  windFraction: fraction('windFraction').default(0.3),
+  /** Lowest air speed at the product [m/s] (free convection and draughts); assumption, no source. */
+  minimumAirSpeedMs: z.number().min(0).max(5).default(0.2),
+})
+
+export type ShadeMethod = z.output<typeof shadeSchema>
+
+export const shade: MethodModel<typeof shadeSchema> = {
+  kind: 'shade',
+  label: 'shade or ventilated shed',
+  schema: shadeSchema,
+  exposure: 'exposed',
+  airFlowKgPerSPerTonne: () => 0,
+  heatsWithFuel: false,
+  rainMatters: () => false,
+  needs: { sunAzimuth: false, coordinates: false },
+  assumptions: (m) => [
+    {
+      name: 'air speed at the product',
+      value: `max(${m.minimumAirSpeedMs} m/s, ${m.windFraction} × u2)`,
+      source: 'assumption, no source',
+    },
+    { name: 'wet-surface evaporation', value: 'Penman with Rn = 0 (no sun)', source: 'Penman 1948' },
+  ],
+  prepare(m) {
+    const surface = new WetSurface()
+    return (hour: MethodHour): void => {
+      const u = Math.max(m.minimumAirSpeedMs, m.windFraction * hour.windAt2mMs)
+      wetSurfaceEvaporationOfHour(hour, surface, 0, u)
+    }
+  },
+}
