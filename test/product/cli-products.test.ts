@@ -34,7 +34,13 @@ describe('dryhours products', () => {
   })
   it('shows one product with its sources; unknown id → exit 2', async () => {
     const t = await cli(['products', 'hops'])
-    expect(t.out).toMatch(/maximum product temperature: 60 °C {2}\[published\] MSU Extension/)
+    expect(t.out).toMatch(
+      /maximum product temperature: 60 °C {2}\[memory\] keep drying air below about 60 °C/,
+    )
+    expect(t.out).toMatch(
+      /target moisture: 9 % wb {2}\[fitted\] the middle of the 8–10 % given by Brown D\. 2013/,
+    )
+    expect(t.out).toMatch(/numbers resting on memory: \d+ of \d+/)
     expect(JSON.parse((await cli(['products', 'figs', '--json'])).out).id).toBe('figs')
     const bad = await cli(['products', 'kiwi'])
     expect(bad.code).toBe(2)
