@@ -31,6 +31,7 @@ import {
   MEGHWAR_PJAR,
   OKSAR_2017,
   PAVKOV_2021,
+  REJABOV_2024,
   USDA_RAISIN_GRADES,
 } from './citations.ts'
 import type { ProductProfile } from './profile.ts'
@@ -117,7 +118,11 @@ export const apricotHalves: ProductProfile = {
   id: 'apricot-halves',
   name: 'Apricot halves',
   category: 'fruit',
-  initialMoistureWbPct: sourced(86, '85–90 % wb fresh: from memory, not re-read', 'memory'),
+  initialMoistureWbPct: sourced(
+    87.5,
+    `the middle of the 85–90 % wb of fresh apricots in ${REJABOV_2024}`,
+    'fitted',
+  ),
   targetMoistureWbPct: sourced(25, `the upper end of 20–25 %, ${CODEX_APRICOTS_VIA_SUMMARY}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(65, 'browning and case hardening above about 65 °C; from memory', 'memory'),

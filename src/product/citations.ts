@@ -25,6 +25,8 @@ export const PAVKOV_2021 =
   'Pavkov I., Radojčin M., Stamenković Z., Kešelj K., Tylewicz U., Sipos P., Ponjičan O., Sedlar A. 2021, Effects of osmotic dehydration on the hot air drying of apricot halves, Processes 9(2):202, doi:10.3390/pr9020202 (abstract)'
 export const CODEX_APRICOTS_VIA_SUMMARY =
   'Codex Alimentarius, CODEX STAN 130-1981 Standard for dried apricots, as given in the summary on a document-sharing copy of the standard ("moisture content no more than 20–25 %"; the standard text was not read)'
+export const REJABOV_2024 =
+  'Rejabov S., Usmonov B., Usmanov K., Artikov A. 2024, Experimental comparison of open sun and indirect convection solar drying methods for apricots in Uzbekistan, Eng. Proc. 67(1):26 (abstract as given on the INC study page)'
 export const OKSAR_2017 =
   'Oksar R.E., Şen F., Aksoy U. 2017, Effect of drying under plastic tunnels on drying rate and quality of fig (Ficus carica L. "Sarılop"), Acta Hortic. 1173:297–302 (abstract)'
 
