@@ -29,9 +29,11 @@ import {
   ESMAIILI_2014,
   HOSSAIN_BALA_2007,
   MEGHWAR_PJAR,
+  NEWMAN_1996,
   OKSAR_2017,
   PAVKOV_2021,
   REJABOV_2024,
+  SIMAL_2005,
   USDA_RAISIN_GRADES,
 } from './citations.ts'
 import type { ProductProfile } from './profile.ts'
@@ -228,11 +230,17 @@ export const plumsToPrunes: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.08, 70, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(0.08, 70, 80000) },
     35,
     'sphere',
-    `Lewis k = 0.08 h⁻¹ at 70 °C for 35 mm whole plums: from memory (prune dehydration takes about a day); ${ASSUMED_EA_SOURCE.source}`,
+    'Lewis k = 0.08 h⁻¹ at 70 °C for 35 mm whole plums: from memory (prune dehydration takes about a day)',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${NEWMAN_1996}: D'Agen plums dried at 70–100 °C and 70–80 % RH followed first-order kinetics; the activation energy was about 80 kJ/mol at the lower-temperature end (non-linear Arrhenius plot)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(35, 'whole plum diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(15, 'single layer on trays; from memory', 'memory'),
@@ -351,14 +359,18 @@ export const chiliPeppers: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.257, 50, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(0.257, 50, 27000) },
     10,
     'cylinder',
-    `pod diameter 10 mm at which k holds: from memory; ${ASSUMED_EA_SOURCE.source}`,
+    'pod diameter 10 mm at which k holds: from memory',
     'memory',
     {
       'k.kRefPerH': param(CHILLI_LEWIS_FIT, 'fitted'),
       'k.tRefC': param(`${CHILLI_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      'k.activationEnergyJPerMol': param(
+        `${SIMAL_2005}: red pepper air-dried at 30–90 °C, the Page k followed Arrhenius with an activation energy of about 27 kJ/mol`,
+        'published',
+      ),
     },
   ),
   defaultThicknessMm: sourced(10, 'pod diameter; from memory', 'memory'),

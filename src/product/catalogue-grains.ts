@@ -1,13 +1,14 @@
 /**
  * @module product/catalogue-grains
  * Grain and oilseed profiles. Isotherm constants are ASAE D245 forms. The standard's tables could not be read,
- * so its constants are graded `memory` and checked in the tests against the grain EMC table of the Wikipedia
- * article "Equilibrium moisture content" and the University of Kentucky chart; soybean and sorghum constants
- * were fitted by dryhours to those tables.
+ * so the constants recalled for corn and wheat are graded `memory` and checked in the tests against the grain EMC
+ * table of the Wikipedia article "Equilibrium moisture content" and the University of Kentucky chart; rough rice
+ * uses constants read in an abstract (Muñoz & Rebufel); soybean and sorghum constants were fitted by dryhours to
+ * those tables.
  */
 
-import { isotherm, kinetics, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
-import { IRRI_DRYING, MUNOZ_REBUFEL_RICE, UKY_EMC_2012, WIKIPEDIA_EMC } from './citations.ts'
+import { isotherm, kinetics, param, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
+import { GELY_GINER_2007, IRRI_DRYING, MUNOZ_REBUFEL_RICE, UKY_EMC_2012, WIKIPEDIA_EMC } from './citations.ts'
 import type { ProductProfile } from './profile.ts'
 
 const GRAIN_CAUTIONS = [
@@ -185,11 +186,17 @@ export const soybean: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.2, tRefC: 40, activationEnergyJPerMol: 30000 } },
+    { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.2, tRefC: 40, activationEnergyJPerMol: 16600 } },
     6.5,
     'sphere',
-    'Lewis k = 0.2 h⁻¹ at 40 °C, Ea 30 kJ/mol, bean 6.5 mm: from memory, not verified',
+    'Lewis k = 0.2 h⁻¹ at 40 °C, bean 6.5 mm: from memory, not verified',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${GELY_GINER_2007}: thin-layer drying of cv. Nidera A6381 at 19–75 °C, diffusivity 1.78e-11 m²/s at 19 °C to 7.28e-11 at 75 °C, activation energy 16.6 kJ/mol below 50 °C and 28.8 kJ/mol above (printed without decimal points as "166" and "288" in the copy read; the readings with decimals agree with the two diffusivities, R·ln(7.28/1.78)/(1/292.15 − 1/348.15) = 21.3 kJ/mol over the whole range)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(6.5, 'bean diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(30, 'about a 4 cm layer; from memory', 'memory'),

@@ -23,6 +23,7 @@ import {
   ICO_2004,
   JAIN_PATHARE_2007,
   NDUKWU_2010,
+  RYBKA_2021,
   SANDOVAL_2020,
   WEXLER_HASEGAWA_1954,
 } from './citations.ts'
@@ -250,8 +251,8 @@ export const hops: ProductProfile = {
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(
     60,
-    'keep drying air below about 60 °C (140 °F): from memory (extension advice, not re-read)',
-    'memory',
+    `${RYBKA_2021}: hop cones in belt and chamber dryers are exposed to drying air of 55–60 °C for 6–8 h; drying at 40 °C kept more essential oil`,
+    'published',
   ),
   isotherm: {
     desorption: isotherm(

@@ -42,6 +42,11 @@ export const BHONG_KALE_2020 =
 export const COSTA_FUJI_APPLE =
   'Costa B.R., da Silva R.S.G., Machado Júnior F.R.A., Coelho K., Pinto L.A.A. n.d., Characterization of the Fuji apple drying in thin layer (introduction of the copy read; the year is not shown on it)'
 
+export const NEWMAN_1996 =
+  'Newman G.M., Price W.E., Woolf L.A. 1996, Factors influencing the drying of prunes. 1. Effects of temperature upon the kinetics of moisture loss during drying, Food Chem. 57(2):241–244 (abstract)'
+export const SIMAL_2005 =
+  'Simal S., Garau C., Femenia A., Rosselló C. 2005, Drying of red pepper (Capsicum annuum): water desorption and quality, Int. J. Food Eng. 1(4), article 1, doi:10.2202/1556-3758.1022 (abstract)'
+
 // Herbs, fish, coffee, cocoa, hops
 export const DOYMAZ_2006 =
   'Doymaz I. 2006, Thin-layer drying behaviour of mint leaves, J. Food Eng. 74:370–375 (abstract)'
@@ -60,7 +65,12 @@ export const ADEYEMI_2020 =
 export const BROWN_2013 =
   'Brown D. 2013 (Sept. 16), Drying hops on a small scale, Michigan State University Extension (page read)'
 
+export const RYBKA_2021 =
+  'Rybka A., Heřmánek P., Honzík I. 2021, Effect of drying temperature in hop dryer on hop quality, Res. Agr. Eng. 67:1–7 (abstract)'
+
 // Grain
+export const GELY_GINER_2007 =
+  'Gely M.C., Giner S.A. 2007, Diffusion coefficient relationships during drying of soya bean cultivars, Biosyst. Eng. 96(2):213–222 (abstract; the decimal points of its numbers were lost in the copy read)'
 export const IRRI_DRYING =
   'IRRI Rice Knowledge Bank n.d., "Drying" (step-by-step production, postharvest; page read)'
 export const WIKIPEDIA_EMC =
