@@ -35,9 +35,7 @@ describe('dryhours products', () => {
   it('shows one product with its sources; unknown id → exit 2', async () => {
     const t = await cli(['products', 'hops'])
     expect(t.out).toMatch(
-      expect(t.out).toMatch(
-        /maximum product temperature: 60 °C {2}\[published\] Rybka A\., Heřmánek P\., Honzík I\. 2021/,
-      ),
+      /maximum product temperature: 60 °C {2}\[published\] Rybka A\., Heřmánek P\., Honzík I\. 2021/,
     )
     expect(t.out).toMatch(
       /target moisture: 9 % wb {2}\[fitted\] the middle of the 8–10 % given by Brown D\. 2013/,
