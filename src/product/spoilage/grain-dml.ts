@@ -87,7 +87,7 @@ export function equivalentHoursForDml(dmlPct: number): number {
 }
 
 function clamp(x: number, range: readonly [number, number]): number {
-  return x < range[0] ? range[0] : x > range[1] ? range[1] : x
+  return Math.min(Math.max(x, range[0]), range[1])
 }
 
 /** Product of the three multipliers at clamped conditions; whether any input was clamped. */
