@@ -71,6 +71,9 @@ const NOT_READ_PUBLICATIONS = [
   'Corrêa P.C., Goneli A.L.D., Júnior P.C.A., de Oliveira G.H.H., Valente D.S.M. 2010, Int. J. Food Sci. Technol.: coffee fruit, pulped and green coffee modified Henderson and GAB constants (abstract read).',
   'Hadrich B., Boudhrioua N., Kechaou N. 2008, Food Bioprod. Process. 86:242–247: sardine desorption Oswin constants at 25, 35 and 50 °C (abstract read).',
   'Viswanathan R., Jayas D.S., Hulasare R.B. 2003, Biosyst. Eng. 86:465: tomato (modified Henderson) and onion (modified Halsey) constants.',
+  'Liquid diffusion during drying of sorghum grains under different conditions, Eng. Agríc. 39(6):737 (2019): activation energies 20.94–27.32 kJ/mol by initial moisture, 40–100 °C (abstract read; authors not shown on the copy read, so not used).',
+  'Drying of ground and half-cut figs (var. Mission), J. Eng. (Hindawi) 2013:710830: Deff at 45, 55 and 65 °C and activation energy 56.86 kJ/mol for half-cut figs, 28.21 for ground figs (abstract read; authors not shown on the copy read, so not used).',
+  'Hssaini L., Ouaabou R., Hanine H., Razouk R., Idlimam A. 2021, Sci. Rep. 11:21266: fig slices in a convective solar dryer at 60–80 °C, activation energy 4699–7502 kJ/kg (about 85–135 kJ/mol): slices, not whole figs, so not used for the whole-fig profile.',
   "Doymaz I. 2012 (grapes), Doymaz 2005 (figs, J. Food Eng. 71:403–407), Xanthopoulos et al. 2010 (figs): the thin-layer model constants and the experiments' weather (abstracts read; tables not).",
 ]
 
