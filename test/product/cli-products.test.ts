@@ -123,3 +123,46 @@ describe('dryhours fit', () => {
     )
   })
 })
+
+describe('the README product commands run (README "Products")', () => {
+  it('products figs lists the memory numbers; products --sources counts every level; --json gives the same counts', async () => {
+    const figs = await cli(['products', 'figs'])
+    expect(figs.code).toBe(0)
+    expect(figs.out).toMatch(/every number, its level and its source:/)
+    expect(figs.out).toMatch(/numbers resting on memory: \d+ of \d+ \(/)
+    const s = await cli(['products', '--sources'])
+    expect(s.code).toBe(0)
+    for (const kind of [
+      'moisture targets and limits',
+      'isotherm constants',
+      'kinetics constants',
+      'all numbers',
+    ]) {
+      expect(s.out).toContain(kind)
+    }
+    const j = JSON.parse((await cli(['products', '--sources', '--json'])).out)
+    const all = j.groups.find((g: { group: string }) => g.group === 'all')
+    expect(all.published + all.transcribed + all.fitted + all.memory + all.user).toBe(all.total)
+    expect(all.memoryShare).toBeCloseTo(all.memory / all.total, 12)
+  })
+  it('products <id> --sources --json lists every number with path, level and source', async () => {
+    const j = JSON.parse((await cli(['products', 'cocoa-beans', '--sources', '--json'])).out)
+    const xm0 = j.numbers.find((n: { path: string }) => n.path === 'isotherm.desorption.equation.xm0')
+    expect(xm0.confidence).toBe('published')
+    expect(xm0.source).toMatch(/Sandoval/)
+  })
+  it('fit reads a weighing log with Spanish headers and a decimal comma, and says which columns it read', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'dryhours-fit-es-'))
+    const file = join(dir, 'bandeja.csv')
+    const rows = [0, 1, 2, 3, 4.5, 6, 8, 10, 12].map(
+      (t) =>
+        `${String(t).replace('.', ',')};${(150 + 850 * Math.exp(-0.25 * t)).toFixed(1).replace('.', ',')}`,
+    )
+    await writeFs(file, `tiempo (h);peso (g)\n${rows.join('\n')}\n`)
+    const r = await cli(['fit', file, '--dry-mass', '140'])
+    expect(r.code).toBe(0)
+    expect(r.out).toMatch(
+      /columns read: time from column 1 'tiempo \(h\)' in h; mass from column 2 'peso \(g\)' in g/,
+    )
+  })
+})
