@@ -165,6 +165,7 @@ describe('which figures rest on memory', () => {
     expect(none).toEqual([
       'shelled-corn',
       'wheat',
+      'apricot-halves',
       'apple-slices',
       'fish-fillets',
       'fish-fillets-salted',
