@@ -7,6 +7,7 @@
  * year) and p90 the figure exceeded in 1 of 10 years (a good year). For days to target, p90 is the
  * time within which 9 of 10 years finish.
  */
+import { integerPower } from '../physics/power.ts'
 
 /** The convention, in words, for the assumptions list of an assessment. */
 export const PERCENTILE_CONVENTION =
@@ -42,7 +43,7 @@ export interface Spread {
 /** Round to `digits` decimals, mapping non-finite to null (JSON-safe). */
 export function roundOrNull(x: number, digits = 1): number | null {
   if (!Number.isFinite(x)) return null
-  const f = 10 ** digits
+  const f = integerPower(10, digits)
   return Math.round(x * f) / f
 }
 

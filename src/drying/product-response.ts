@@ -8,6 +8,7 @@
  * t_eq = (−ln MR / k)^(1/n), MR' = exp(−k·(t_eq + Δt)ⁿ) (drying-science.md §2.1); Thompson's corn
  * equation is stepped in its own equivalent time.
  */
+import { power } from '../physics/power.ts'
 
 import { rateParametersAt, timeScaleFactor } from '../product/drying-rate.ts'
 import { equilibriumMoistureDb, equilibriumRelativeHumidityPct } from '../product/equilibrium.ts'
@@ -127,14 +128,14 @@ export function stepMoistureRatio(
     const tEq = mr >= 1 ? 0 : Math.max(0, thompsonTimeH(k, mr))
     return thompsonMoistureRatio(k, tEq + hours / thompsonTimeScale)
   }
-  if (mr >= 1) return Math.exp(-k * hours ** n)
+  if (mr >= 1) return Math.exp(-k * power(hours, n))
   if (n === 1) return mr * Math.exp(-k * hours)
-  const tEq = (-Math.log(mr) / k) ** (1 / n)
-  return Math.exp(-k * (tEq + hours) ** n)
+  const tEq = power(-Math.log(mr) / k, 1 / n)
+  return Math.exp(-k * power(tEq + hours, n))
 }
 
 /** First-order rate constant [h⁻¹] for rewetting from step parameters: k^(1/n), or 1/(s·t(MR = 1/e)) for Thompson. */
 export function firstOrderRateConstant(k: number, n: number, thompsonTimeScale = 1): number {
   if (n === THOMPSON_EXPONENT) return 1 / (thompsonTimeScale * thompsonTimeH(k, Math.exp(-1)))
-  return n === 1 ? k : k ** (1 / n)
+  return n === 1 ? k : power(k, 1 / n)
 }

@@ -12,6 +12,7 @@
 
 import { dayOfYearAt, extraterrestrialRadiationPeriodMjM2, fao56HourAngleRad } from './fao56-solar.ts'
 import { clearSkyRadiationFao56 } from './irradiance.ts'
+import { power } from './power.ts'
 
 /** Stefan–Boltzmann constant per hour [MJ K⁻⁴ m⁻² h⁻¹] = 4.903×10⁻⁹/24; FAO-56 eq 39 hourly form. */
 export const STEFAN_BOLTZMANN_MJ_PER_HOUR = 2.043e-10
@@ -30,7 +31,7 @@ export function atmosphericPressureFao56Kpa(elevationM: number): number {
   if (!(elevationM >= -500 && elevationM <= 9000)) {
     throw new RangeError(`elevation must be between -500 and 9000 m, got ${elevationM}`)
   }
-  return 101.3 * ((293 - 0.0065 * elevationM) / 293) ** 5.26
+  return 101.3 * power((293 - 0.0065 * elevationM) / 293, 5.26)
 }
 
 /** Saturation vapour pressure [kPa], FAO-56 eq 11 (Tetens form): 0.6108 exp(17.27 T/(T + 237.3)). */

@@ -5,6 +5,7 @@
  * k ∝ Deff/L² rule of `diffusion.ts`), i.e. MR_d(t) = MR_dRef(t/s) with s = (d/dRef)². Air velocity: time
  * scales with (vRef/v)^e when the profile gives an exponent, otherwise velocity is ignored.
  */
+import { power } from '../physics/power.ts'
 import { diffusionRateConstantPerH } from './diffusion.ts'
 import { diffusivityAt, pageExponentAt, rateConstantAt, thompsonTimeH } from './kinetics-models.ts'
 import type { ProductProfile } from './profile.ts'
@@ -27,7 +28,7 @@ export function timeScaleFactor(
     if (!(airVelocityMs > 0 && airVelocityMs <= 30)) {
       throw new RangeError(`air velocity must be above 0 and at most 30 m/s, got ${airVelocityMs}`)
     }
-    s *= (k.airVelocity.referenceMs / airVelocityMs) ** k.airVelocity.exponent
+    s *= power(k.airVelocity.referenceMs / airVelocityMs, k.airVelocity.exponent)
   }
   return s
 }
@@ -59,7 +60,7 @@ export function rateParametersAt(
   }
   const n = eq.model === 'page' ? pageExponentAt(eq.n, tC, rhPct) : 1
   const s = timeScaleFactor(profile, d, airVelocityMs)
-  return { kPerHn: rateConstantAt(eq.k, tC, rhPct, n) / s ** n, n }
+  return { kPerHn: rateConstantAt(eq.k, tC, rhPct, n) / power(s, n), n }
 }
 
 /**
@@ -75,7 +76,7 @@ export function dryingRateConstantPerH(
   thicknessMm?: number,
 ): number {
   const p = rateParametersAt(profile, tC, rhPct, airVelocityMs, thicknessMm)
-  if (p) return p.kPerHn ** (1 / p.n)
+  if (p) return power(p.kPerHn, 1 / p.n)
   const s = timeScaleFactor(profile, thicknessMm ?? profile.defaultThicknessMm.value, airVelocityMs)
   return 1 / (s * thompsonTimeH(tC, Math.exp(-1)))
 }

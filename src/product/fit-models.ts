@@ -8,6 +8,7 @@
  * AICc = n·ln(SSE/n) + 2p + 2p(p+1)/(n − p − 1) (Akaike 1974; Hurvich & Tsai 1989; Burnham & Anderson 2002,
  * *Model Selection and Multimodel Inference*, eq 2.14).
  */
+import { power } from '../physics/power.ts'
 import { diffusionMoistureRatio } from './diffusion.ts'
 import { levenbergMarquardt } from './least-squares.ts'
 import type { Shape } from './profile.ts'
@@ -39,7 +40,7 @@ interface ModelDef {
   grid: number[][]
 }
 
-const LOG_GRID = Array.from({ length: 61 }, (_, i) => 10 ** (-3 + (i * 5) / 60))
+const LOG_GRID = Array.from({ length: 61 }, (_, i) => power(10, -3 + (i * 5) / 60))
 
 function defs(shape: Shape): ModelDef[] {
   return [
@@ -58,7 +59,7 @@ function defs(shape: Shape): ModelDef[] {
       mr: (p, t) => {
         if (!(p[0] > 0)) throw new RangeError('rate must be positive')
         if (!(p[1] > 0.1 && p[1] < 5)) throw new RangeError('n out of range')
-        return Math.exp(-p[0] * t ** p[1])
+        return Math.exp(-p[0] * power(t, p[1]))
       },
       grid: LOG_GRID.filter((_, i) => i % 2 === 0).flatMap((k) =>
         [0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.1, 1.2, 1.35, 1.5, 1.75, 2, 2.5].map((n) => [k, n]),

@@ -17,6 +17,7 @@
  */
 
 import { GAS_CONSTANT_J_PER_MOL_K, KELVIN_OFFSET } from '../physics/constants.ts'
+import { power } from '../physics/power.ts'
 
 export type IsothermEquation =
   | { model: 'modified-henderson'; a: number; b: number; c: number }
@@ -88,7 +89,7 @@ export function emcDb(eq: IsothermEquation, tC: number, rhPct: number): number {
       const tc = eq.a * (tC + eq.c)
       if (!(tc > 0))
         throw new RangeError(`modified Henderson: T + C must be > 0, got T = ${tC} °C, C = ${eq.c}`)
-      mePct = (-Math.log(1 - rh) / tc) ** (1 / eq.b)
+      mePct = power(-Math.log(1 - rh) / tc, 1 / eq.b)
       break
     }
     case 'modified-chung-pfost': {
@@ -106,12 +107,12 @@ export function emcDb(eq: IsothermEquation, tC: number, rhPct: number): number {
       break
     }
     case 'modified-halsey':
-      mePct = (-Math.exp(eq.a + eq.b * tC) / Math.log(rh)) ** (1 / eq.c)
+      mePct = power(-Math.exp(eq.a + eq.b * tC) / Math.log(rh), 1 / eq.c)
       break
     case 'modified-oswin': {
       const ab = eq.a + eq.b * tC
       if (!(ab > 0)) throw new RangeError(`modified Oswin: A + B·T must be > 0, got ${ab} at ${tC} °C`)
-      mePct = ab * (rh / (1 - rh)) ** (1 / eq.c)
+      mePct = ab * power(rh / (1 - rh), 1 / eq.c)
       break
     }
     case 'gab': {
@@ -146,7 +147,7 @@ export function erhPct(eq: IsothermEquation, tC: number, moistureDb: number): nu
       const tc = eq.a * (tC + eq.c)
       if (!(tc > 0))
         throw new RangeError(`modified Henderson: T + C must be > 0, got T = ${tC} °C, C = ${eq.c}`)
-      rh = 1 - Math.exp(-tc * mPct ** eq.b)
+      rh = 1 - Math.exp(-tc * power(mPct, eq.b))
       break
     }
     case 'modified-chung-pfost': {
@@ -157,12 +158,12 @@ export function erhPct(eq: IsothermEquation, tC: number, moistureDb: number): nu
       break
     }
     case 'modified-halsey':
-      rh = Math.exp(-Math.exp(eq.a + eq.b * tC) / mPct ** eq.c)
+      rh = Math.exp(-Math.exp(eq.a + eq.b * tC) / power(mPct, eq.c))
       break
     case 'modified-oswin': {
       const ab = eq.a + eq.b * tC
       if (!(ab > 0)) throw new RangeError(`modified Oswin: A + B·T must be > 0, got ${ab} at ${tC} °C`)
-      const r = (mPct / ab) ** eq.c
+      const r = power(mPct / ab, eq.c)
       rh = r / (1 + r)
       break
     }

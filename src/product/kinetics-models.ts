@@ -12,7 +12,9 @@
  * Rate constants depend on temperature by Arrhenius, k = kRef·exp[−Ea/R·(1/T − 1/Tref)] (T in K), or, for
  * Wang & Singh 1978 (rough rice), linearly on T and RH.
  */
+
 import { GAS_CONSTANT_J_PER_MOL_K, KELVIN_OFFSET } from '../physics/constants.ts'
+import { power } from '../physics/power.ts'
 
 /** A rate constant that depends on the drying conditions. */
 export type RateLaw =
@@ -82,7 +84,7 @@ export function rateConstantAt(k: RateLaw, tC: number, rhPct: number, n = 1): nu
   } else {
     const perUnit = k.k0 + k.kPerC * tC + k.kPerRh * (rhPct / 100)
     // MR = exp(−k_min·t_min^n) = exp(−k_min·60^n·t_h^n)
-    value = k.timeUnit === 'min' ? perUnit * 60 ** n : perUnit
+    value = k.timeUnit === 'min' ? perUnit * power(60, n) : perUnit
   }
   if (!(value > 0))
     throw new RangeError(`drying rate constant is not positive (${value}) at ${tC} °C and ${rhPct} % RH`)

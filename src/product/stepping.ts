@@ -12,6 +12,7 @@
  * Air above 99.5 % RH (fog, saturation) is treated as 99.5 % with `saturatedAir` set, because no
  * equilibrium moisture exists at 100 %; air below 0.5 % RH as 0.5 %.
  */
+import { power } from '../physics/power.ts'
 
 import { dryingRateConstantPerH, rateParametersAt, timeScaleFactor } from './drying-rate.ts'
 import { equilibriumMoistureDb } from './equilibrium.ts'
@@ -105,8 +106,8 @@ export function stepMoisture(state: MoistureState, conditions: HourConditions, d
     let mrNext: number
     const p = rateParametersAt(profile, tC, rh, airVelocityMs, thicknessMm)
     if (p) {
-      const tEq = mr >= 1 ? 0 : (-Math.log(mr) / p.kPerHn) ** (1 / p.n)
-      mrNext = Math.exp(-p.kPerHn * (tEq + dtH) ** p.n)
+      const tEq = mr >= 1 ? 0 : power(-Math.log(mr) / p.kPerHn, 1 / p.n)
+      mrNext = Math.exp(-p.kPerHn * power(tEq + dtH, p.n))
     } else {
       const s = timeScaleFactor(profile, thicknessMm, airVelocityMs)
       const tEq = mr >= 1 ? 0 : thompsonTimeH(tC, mr)

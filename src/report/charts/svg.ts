@@ -4,6 +4,7 @@
  * `<svg>` wrapper (role, title, description) and coordinate formatting. Output is plain strings; every
  * text that may come from a user goes through `escapeHtml`.
  */
+import { integerPower } from '../../physics/power.ts'
 import { escapeHtml } from '../escape.ts'
 import { INK } from '../palette.ts'
 
@@ -52,7 +53,7 @@ export function niceTicks(min: number, max: number, count = 5): number[] {
   if (max < min) [min, max] = [max, min]
   if (max === min) return [min]
   const raw = (max - min) / Math.max(1, count)
-  const mag = 10 ** Math.floor(Math.log10(raw))
+  const mag = integerPower(10, Math.floor(Math.log10(raw)))
   const norm = raw / mag
   const step = (norm < 1.5 ? 1 : norm < 3 ? 2 : norm < 7 ? 5 : 10) * mag
   const start = Math.ceil(min / step - 1e-9) * step

@@ -3,7 +3,9 @@
  * What every report section needs: the display units, optional extras (the weather series for the
  * psychrometric chart, the product profile for its drying region), input info and a figure counter.
  */
+
 import type { Spread } from '../../analysis/statistics.ts'
+import { integerPower } from '../../physics/power.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import type { ReportInputInfo } from '../assessment-view.ts'
@@ -33,7 +35,7 @@ export function convertSpread(s: Spread | null | undefined, f: (v: number) => nu
 /** Round for display in data attributes and tables (kept as numbers). */
 export function round(v: number | null | undefined, digits = 1): number | null {
   if (!finite(v)) return null
-  const k = 10 ** digits
+  const k = integerPower(10, digits)
   return Math.round(v * k) / k
 }
 

@@ -1,0 +1,77 @@
+/**
+ * Rules of the core (src/ except the Node entry points in src/node/ and the CLI in src/cli/), checked on
+ * the source text so that DEVELOPERS.md stays true:
+ * - no `**` with an exponent other than a whole-number literal, and no Math.pow: real powers go through
+ *   physics/power.ts (exp/log), so Node and Workers give the same bits;
+ * - no `node:` imports.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs'
+import { join } from 'node:path'
+import { describe, expect, it } from 'vitest'
+
+function coreFiles(dir = 'src'): string[] {
+  const out: string[] = []
+  for (const name of readdirSync(dir)) {
+    const path = join(dir, name)
+    if (statSync(path).isDirectory()) {
+      if (path !== join('src', 'node') && path !== join('src', 'cli')) out.push(...coreFiles(path))
+    } else if (name.endsWith('.ts')) out.push(path)
+  }
+  return out
+}
+
+/** The code of a TypeScript file with comments, strings and template literals blanked (line breaks kept). */
+export function codeOnly(text: string): string {
+  let out = ''
+  let i = 0
+  const blank = (s: string) => s.replace(/[^\n]/g, ' ')
+  while (i < text.length) {
+    const c = text[i]
+    const next = text[i + 1]
+    let end = -1
+    if (c === '/' && next === '/') end = text.indexOf('\n', i) === -1 ? text.length : text.indexOf('\n', i)
+    else if (c === '/' && next === '*') end = text.indexOf('*/', i + 2) + 2
+    else if (c === "'" || c === '"' || c === '`') {
+      let j = i + 1
+      while (j < text.length && text[j] !== c) j += text[j] === '\\' ? 2 : 1
+      end = j + 1
+    }
+    if (end > i) {
+      out += blank(text.slice(i, end))
+      i = end
+    } else {
+      out += c
+      i++
+    }
+  }
+  return out
+}
+
+describe('core rules (DEVELOPERS.md)', () => {
+  const files = coreFiles()
+  it('finds the core files', () => {
+    expect(files.length).toBeGreaterThan(100)
+    expect(files).toContain(join('src', 'physics', 'power.ts'))
+  })
+  it('no non-integer ** and no Math.pow in the core (use physics/power.ts)', () => {
+    const found: string[] = []
+    for (const f of files) {
+      const lines = codeOnly(readFileSync(f, 'utf8')).split('\n')
+      lines.forEach((line, k) => {
+        if (/\bMath\s*\.\s*pow\b/.test(line)) found.push(`${f}:${k + 1}: Math.pow`)
+        for (const m of line.matchAll(/\*\*=?\s*(\S+)/g)) {
+          if (!/^\d+\b(?![.eE])/.test(m[1])) found.push(`${f}:${k + 1}: ${line.trim()}`)
+        }
+      })
+    }
+    expect(found).toEqual([])
+  })
+  it('the check sees through comments and strings, and catches a real power', () => {
+    expect(codeOnly("const a = 2 ** 0.5 // x ** y\nconst s = 'b ** c'")).toMatch(/\*\* 0\.5/)
+    expect(codeOnly("const s = 'b ** c' /* d ** e */")).not.toMatch(/\*\*/)
+  })
+  it('no node: imports in the core', () => {
+    const found = files.filter((f) => /from\s+['"]node:/.test(readFileSync(f, 'utf8')))
+    expect(found).toEqual([])
+  })
+})
