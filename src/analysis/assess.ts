@@ -1,162 +1,108 @@
 /**
  * @module analysis/assess
  * `assess(series, options)`: can this site's weather dry this product by this method, when, how fast,
- * and with how much supplemental heat. Hourly conditions are computed once per method (and once for the
- * backup heater) and reused by every batch. Returns a JSON-safe {@link Assessment}.
+ * and with how much supplemental heat. A short pipeline of named stages:
+ * 1. {@link resolveAssessOptions}: the options checked and completed with the engine's defaults;
+ * 2. {@link hourlyConditionsStage}: the hourly conditions of the method and of the backup heater, once,
+ *    reused by every batch;
+ * 3. {@link calendarStage}: local time, usable hours per month and year, the years with data;
+ * 4. {@link monthlyHeatStage}: batches from the 1st and 16th of every month (heat and days per month);
+ * 5. {@link startDatesStage}: the start-date table and the best start windows;
+ * 6. {@link heatSummary} (analysis/heat-summary.ts): heat and fuel, with a cross-check;
+ * 7. {@link psychrometricSummary} (analysis/psychrometric.ts): the hours on a psychrometric chart;
+ * 8. {@link assembleAssessment}: the JSON-safe {@link Assessment} with its assumptions and warnings.
  */
-import { FUELS, fuelForHeat } from '../drying/fuels.ts'
 import {
   computeHourlyConditions,
   computeSolarColumns,
   type HourlyConditions,
 } from '../drying/hourly-conditions.ts'
-import {
-  type DryingMethod,
-  type DryingMethodInput,
-  type FuelId,
-  type HeatedMethod,
-  heatedSchema,
-  parseDryingMethod,
-} from '../drying/method.ts'
-import { methodLoadingKgPerM2, methodModel } from '../drying/methods/index.ts'
-import { productResponse } from '../drying/product-response.ts'
-import { tabulatedResponse } from '../drying/product-tables.ts'
-import { type DryingThresholds, parseDryingThresholds } from '../drying/thresholds.ts'
-import { heatOfSorption } from '../product/equilibrium.ts'
-import { moistureDbFromWbPct, waterToRemoveKg } from '../product/moisture-basis.ts'
-import type { ProductProfile } from '../product/profile.ts'
 import { type HourlySeries, QualityFlag } from '../weather/series.ts'
-import { ASSESSMENT_SCHEMA, type Assessment, type FuelFigure, type HeatSummary } from './assessment.ts'
+import type { AssessOptions } from './assess-options.ts'
+import {
+  MONTHLY_HEAT_START_DAYS,
+  type ResolvedAssessOptions,
+  resolveAssessOptions,
+} from './assess-options.ts'
+import { ASSESSMENT_SCHEMA, type Assessment, type MonthlyRow } from './assessment.ts'
 import { assessmentAssumptions } from './assumptions.ts'
-import { localTimeColumns, parseMonthDay } from './local-time.ts'
+import { heatSummary } from './heat-summary.ts'
+import { type LocalTimeColumns, localTimeColumns } from './local-time.ts'
 import {
   countMonthly,
   hourOfDayTable,
   MONTH_COVERAGE_REQUIRED,
+  type MonthlyCounts,
   monthlyRows,
   totalReasons,
 } from './monthly-tables.ts'
+import { type PsychrometricSummary, psychrometricSummary } from './psychrometric.ts'
 import {
   bestStartWindows,
-  type MonthDay,
   runStart,
   type StartContext,
   type StartOutcome,
-  seasonDays,
+  type StartTableResult,
   startDateTable,
   startIndexFor,
 } from './start-dates.ts'
 import { quantileSorted, roundOrNull, spread } from './statistics.ts'
 
-export interface AssessProgress {
-  stage: 'hourly-conditions' | 'monthly-heat' | 'start-dates' | 'done'
-  done: number
-  total: number
-}
-
-export interface AssessOptions {
-  product: ProductProfile
-  method: DryingMethodInput | DryingMethod
-  /** Target moisture [% wb]; default the profile's. */
-  targetWbPct?: number
-  /** Initial moisture [% wb]; default the profile's. */
-  initialWbPct?: number
-  thicknessMm?: number
-  /** Season of start dates, 'MM-DD'; default the whole year. */
-  seasonStart?: string
-  seasonEnd?: string
-  /** Days between start dates; default 1 when a season is given, else 7. */
-  startStepDays?: number
-  /** Local standard hour at which batches start; default 8. */
-  startHourLocal?: number
-  /** The user's window to finish [days]; default 14. */
-  deadlineDays?: number
-  /** Maximum duration of a batch before it counts as failed [days]; default 60. */
-  maxDays?: number
-  /** Batch size [kg fresh]; default 1000. */
-  batchKgFresh?: number
-  thresholds?: Partial<DryingThresholds>
-  /** Backup heater for supplemental heat (ignored when the method is heated). Defaults of `heatedSchema`. */
-  backupHeater?: Partial<Omit<HeatedMethod, 'kind'>>
-  /** Fuel for the heat figures; default the heater's fuel. */
-  fuel?: FuelId
-  /** Prices per fuel unit; missing prices use the marked examples. */
-  fuelPrices?: Partial<Record<FuelId, number>>
-  onProgress?: (p: AssessProgress) => void
-}
+export {
+  type AssessOptions,
+  type AssessProgress,
+  BACKUP_MIN_AIR_C,
+  resolveAssessOptions,
+  resolveSchedule,
+} from './assess-options.ts'
 
 /** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */
 const MIN_HOURS_FOR_A_YEAR = 168
-
-function checkRange(name: string, value: number, lo: number, hi: number, unit: string): void {
-  if (!(value >= lo && value <= hi))
-    throw new RangeError(`${name} must be between ${lo} and ${hi} ${unit}, got ${value}`)
-}
-
-function isoHour(ms: number): string {
-  return new Date(ms).toISOString().slice(0, 13) + ':00Z'
-}
 
 /** Assess one site (one series) for one product and method. Throws RangeError for bad options. */
 export function assess(series: HourlySeries, options: AssessOptions): Assessment {
   if (series.hours < 24)
     throw new RangeError(`the weather series must hold at least 24 hours, got ${series.hours}`)
-  const profile = options.product
-  const method = parseDryingMethod(options.method)
-  const thresholds = parseDryingThresholds(options.thresholds ?? {})
-  const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
-  const targetWbPct = options.targetWbPct ?? profile.targetMoistureWbPct.value
-  checkRange('initial moisture', initialWbPct, 1, 95, '% wb')
-  checkRange('target moisture', targetWbPct, 0.5, 90, '% wb')
-  if (!(targetWbPct < initialWbPct)) {
-    throw new RangeError(
-      `target moisture ${targetWbPct} % wb must be below the initial moisture ${initialWbPct} % wb`,
-    )
-  }
-  const deadlineDays = options.deadlineDays ?? 14
-  const maxDays = options.maxDays ?? Math.max(60, deadlineDays)
-  checkRange('deadline', deadlineDays, 0.25, 365, 'days')
-  checkRange('maximum duration', maxDays, deadlineDays, 366, 'days (and at least the deadline)')
-  const batchKgFresh = options.batchKgFresh ?? 1000
-  checkRange('batch size', batchKgFresh, 1, 1e7, 'kg')
-  const startHourLocal = options.startHourLocal ?? 8
-  if (!(Number.isInteger(startHourLocal) && startHourLocal >= 0 && startHourLocal <= 23)) {
-    throw new RangeError(`start hour must be a whole hour from 0 to 23, got ${startHourLocal}`)
-  }
-  const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
-  const seasonStart = parseMonthDay(options.seasonStart ?? '01-01', 'season start')
-  const seasonEnd = parseMonthDay(options.seasonEnd ?? '12-31', 'season end')
-  const stepDays = options.startStepDays ?? (seasonGiven ? 1 : 7)
+  const run = resolveAssessOptions(options)
+  const { primary, backup } = hourlyConditionsStage(series, run)
+  const calendar = calendarStage(series, primary)
+  const ctx = startContext(series, run, calendar.time, primary, backup)
+  monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
+  const starts = startDatesStage(ctx, calendar.years, run)
+  const heat = heatSummary(starts.table.outcomes, backup, run, ctx)
+  const psychrometric = psychrometricSummary(series, run.profile, run.targetWbPct, {
+    utcOffsetHours: calendar.time.utcOffsetHours,
+    saturationPa: primary.ambientSaturationPa,
+  })
+  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric })
+}
 
-  const product = tabulatedResponse(productResponse(profile, options.thicknessMm))
-  const initialDb = moistureDbFromWbPct(initialWbPct)
-  const targetDb = moistureDbFromWbPct(targetWbPct)
-  const model = methodModel(method.kind)
-  const loadingKgPerM2 = methodLoadingKgPerM2(method) ?? profile.defaultLoadingKgPerM2.value
-  const maxT = profile.maxProductTempC?.value ?? null
+/** Stage 2: the method's hourly conditions for every hour and the backup heater's, lazily. */
+export function hourlyConditionsStage(
+  series: HourlySeries,
+  run: ResolvedAssessOptions,
+): { primary: HourlyConditions; backup: HourlyConditions } {
+  const progress = run.onProgress
   // the azimuth is read only by tilted collectors (the backup heater needs none)
-  const solar = computeSolarColumns(series, { azimuth: model.needs.sunAzimuth })
+  const solar = computeSolarColumns(series, { azimuth: run.model.needs.sunAzimuth })
   const conditionOptions = {
-    targetDb,
-    initialWbPct,
-    loadingKgPerM2,
-    thresholds,
-    maxProductTempC: maxT,
+    targetDb: run.targetDb,
+    initialWbPct: run.initialWbPct,
+    loadingKgPerM2: run.loadingKgPerM2,
+    thresholds: run.thresholds,
+    maxProductTempC: run.maxProductTempC,
     solar,
   }
-  const progress = options.onProgress
   progress?.({ stage: 'hourly-conditions', done: 0, total: 2 })
   // the primary's report-only columns are not read by an assessment (monthly tables use the verdict ones)
-  const primary = computeHourlyConditions(series, method, product, {
+  const primary = computeHourlyConditions(series, run.method, run.product, {
     ...conditionOptions,
     diagnostics: false,
   })
-  const backupMethod: HeatedMethod =
-    method.kind === 'heated' ? method : heatedBackup(options.backupHeater, product.erhPct(25, targetDb), maxT)
-  const backup: HourlyConditions =
-    method === backupMethod
+  const backup =
+    run.method === run.backupMethod
       ? primary
-      : computeHourlyConditions(series, backupMethod, product, {
+      : computeHourlyConditions(series, run.backupMethod, run.product, {
           ...conditionOptions,
           verdict: false,
           lazy: true,
@@ -164,28 +110,27 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
           ambientSaturationPa: primary.ambientSaturationPa,
         })
   progress?.({ stage: 'hourly-conditions', done: 2, total: 2 })
+  return { primary, backup }
+}
 
+export interface Calendar {
+  time: LocalTimeColumns
+  counts: MonthlyCounts
+  /** Monthly rows without the heat columns (filled by {@link monthlyHeatStage}). */
+  monthly: MonthlyRow[]
+  /** Years with at least one month of enough data, or at least a week of hours. */
+  years: number[]
+}
+
+/** Stage 3: local time, usable hours per month and year, and the years with data. */
+export function calendarStage(series: HourlySeries, primary: HourlyConditions): Calendar {
   const time = localTimeColumns(series)
   const counts = countMonthly(primary, time)
   const monthly = monthlyRows(counts)
-  const warnings: string[] = []
-  const ctx: StartContext = {
-    series,
-    utcOffsetHours: time.utcOffsetHours,
-    primary,
-    backup,
-    product,
-    initialDb,
-    targetDb,
-    deadlineHours: Math.round(deadlineDays * 24),
-    maxHours: Math.round(maxDays * 24),
-    startHourLocal,
-    wrap: series.typicalYear,
-  }
   // Years with at least one month of enough data (a UTC file shifted to local time touches one hour of
-  // the next year: that is not a year of data).
-  // A short file (a logger export of a few weeks) still counts its year when it holds at least a week.
-  // hours with data per local year, counted in a typed array (a Map update per hour costs ~10 ms on 30 years)
+  // the next year: that is not a year of data). A short file (a logger export of a few weeks) still
+  // counts its year when it holds at least a week. Hours per year in a typed array (a Map update per
+  // hour costs ~10 ms on 30 years).
   let firstYear = Number.POSITIVE_INFINITY
   let lastYear = Number.NEGATIVE_INFINITY
   for (let i = 0; i < series.hours; i++) {
@@ -197,20 +142,46 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   for (let i = 0; i < series.hours; i++) {
     if ((series.quality[i] & QualityFlag.missingCore) === 0) yearHours[time.year[i] - firstYear]++
   }
-  const hoursInYear = new Map<number, number>()
-  yearHours.forEach((h, k) => {
-    if (h > 0) hoursInYear.set(firstYear + k, h)
-  })
   const years = counts.years.filter(
     (y) =>
       monthly.some((m) => m.usableHours.byYear.some((v) => v.year === y)) ||
-      (hoursInYear.get(y) ?? 0) >= MIN_HOURS_FOR_A_YEAR,
+      (yearHours[y - firstYear] ?? 0) >= MIN_HOURS_FOR_A_YEAR,
   )
+  return { time, counts, monthly, years }
+}
 
-  // Monthly heat: batches from the 1st and 16th of every month.
+function startContext(
+  series: HourlySeries,
+  run: ResolvedAssessOptions,
+  time: LocalTimeColumns,
+  primary: HourlyConditions,
+  backup: HourlyConditions,
+): StartContext {
+  return {
+    series,
+    utcOffsetHours: time.utcOffsetHours,
+    primary,
+    backup,
+    product: run.product,
+    initialDb: run.initialDb,
+    targetDb: run.targetDb,
+    deadlineHours: Math.round(run.deadlineDays * 24),
+    maxHours: Math.round(run.maxDays * 24),
+    startHourLocal: run.season.startHourLocal,
+    wrap: series.typicalYear,
+  }
+}
+
+/** Stage 4: batches from the 1st and 16th of every month; their heat and median days fill `monthly`. */
+export function monthlyHeatStage(
+  ctx: StartContext,
+  monthly: MonthlyRow[],
+  years: number[],
+  run: ResolvedAssessOptions,
+): void {
   for (let month = 1; month <= 12; month++) {
     const outcomes: StartOutcome[] = []
-    for (const day of [1, 16]) {
+    for (const day of MONTHLY_HEAT_START_DAYS) {
       for (const year of years) {
         const index = startIndexFor(ctx, year, { month, day })
         if (index !== null) outcomes.push(runStart(ctx, index))
@@ -224,22 +195,34 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     if (outcomes.length < 5) row.supplementalHeatKwhPerTonne.p10 = row.supplementalHeatKwhPerTonne.p90 = null
     const days = outcomes.map((o) => o.hoursToTarget / 24).sort((a, b) => a - b)
     row.medianDaysToTarget = roundOrNull(quantileSorted(days, 0.5), 1)
-    progress?.({ stage: 'monthly-heat', done: month, total: 12 })
+    run.onProgress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
+}
 
-  const days: MonthDay[] = seasonDays(seasonStart, seasonEnd, stepDays)
+export interface StartDates {
+  table: StartTableResult
+  best: ReturnType<typeof bestStartWindows>
+}
+
+/** Stage 5: one batch per start day of the season and year, and the best start windows. */
+export function startDatesStage(ctx: StartContext, years: number[], run: ResolvedAssessOptions): StartDates {
+  const days = run.startDays
   const table = startDateTable(ctx, days, years, (di) =>
-    progress?.({ stage: 'start-dates', done: di + 1, total: days.length }),
+    run.onProgress?.({ stage: 'start-dates', done: di + 1, total: days.length }),
   )
-  const best = bestStartWindows(table.rows)
-  const heat = heatSummary(table.outcomes, backupMethod, backup, options, batchKgFresh, {
-    profile,
-    initialWbPct,
-    targetWbPct,
-    targetDb,
-    ctx,
-  })
+  return { table, best: bestStartWindows(table.rows) }
+}
 
+/** What the file and the options leave uncertain, in sentences for the user. */
+export function assessmentWarnings(
+  series: HourlySeries,
+  run: ResolvedAssessOptions,
+  primary: HourlyConditions,
+  calendar: Calendar,
+  starts: StartDates,
+): string[] {
+  const warnings: string[] = []
+  const { years, time } = calendar
   if (series.typicalYear || years.length < 2) {
     warnings.push(
       series.typicalYear
@@ -249,7 +232,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   } else if (years.length < 10) {
     warnings.push(`only ${years.length} years of data: P10 and P90 across so few years are rough`)
   }
-  if (primary.noRainData && model.rainMatters(method)) {
+  if (primary.noRainData && run.model.rainMatters(run.method)) {
     warnings.push(
       'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
     )
@@ -264,8 +247,30 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       `${primary.assumedIrradianceHours} daylight hours had no irradiance and were taken as 0 W/m²`,
     )
   }
-  if (table.batches === 0) warnings.push('no start date in the season had a complete batch in the data')
-  const reasons = totalReasons(counts)
+  if (starts.table.batches === 0)
+    warnings.push('no start date in the season had a complete batch in the data')
+  return warnings
+}
+
+function isoHour(ms: number): string {
+  return new Date(ms).toISOString().slice(0, 13) + ':00Z'
+}
+
+/** Stage 8: the JSON-safe assessment. */
+export function assembleAssessment(
+  series: HourlySeries,
+  run: ResolvedAssessOptions,
+  parts: {
+    primary: HourlyConditions
+    calendar: Calendar
+    starts: StartDates
+    heat: Assessment['heat']
+    psychrometric: PsychrometricSummary
+  },
+): Assessment {
+  const { primary, calendar, starts } = parts
+  const { profile, product } = run
+  const reasons = totalReasons(calendar.counts)
   return {
     schema: ASSESSMENT_SCHEMA,
     site: {
@@ -273,193 +278,48 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       latitudeDeg: series.site.latitudeDeg,
       longitudeDeg: series.site.longitudeDeg,
       elevationM: series.site.elevationM,
-      utcOffsetHours: time.utcOffsetHours,
-      utcOffsetSource: time.offsetSource,
+      utcOffsetHours: calendar.time.utcOffsetHours,
+      utcOffsetSource: calendar.time.offsetSource,
       typicalYear: series.typicalYear,
     },
     product: {
       id: profile.id,
       name: profile.name,
-      initialMoistureWbPct: initialWbPct,
-      targetMoistureWbPct: targetWbPct,
-      targetErhPctAt25C: roundOrNull(product.erhPct(25, targetDb), 1) ?? 0,
-      maxProductTempC: maxT,
+      initialMoistureWbPct: run.initialWbPct,
+      targetMoistureWbPct: run.targetWbPct,
+      targetErhPctAt25C: roundOrNull(product.erhPct(25, run.targetDb), 1) ?? 0,
+      maxProductTempC: run.maxProductTempC,
       thicknessMm: product.thicknessMm,
-      loadingKgPerM2,
+      loadingKgPerM2: run.loadingKgPerM2,
       cautions: [...profile.cautions],
     },
-    method,
-    season: {
-      start: options.seasonStart ?? '01-01',
-      end: options.seasonEnd ?? '12-31',
-      stepDays,
-      startHourLocal,
-    },
-    deadlineDays,
-    maxDays,
-    monthly,
-    hourOfDay: hourOfDayTable(counts),
+    method: run.method,
+    methodLabel: run.model.label,
+    season: run.season,
+    deadlineDays: run.deadlineDays,
+    maxDays: run.maxDays,
+    monthly: calendar.monthly,
+    hourOfDay: hourOfDayTable(calendar.counts),
     hoursByReason: reasons,
-    startDates: table.rows,
-    bestStartWindows: best.windows,
-    bestStartWindowCriterion: best.criterion,
-    heat,
-    assumptions: assessmentAssumptions(
-      method,
-      backupMethod,
-      thresholds,
-      profile,
-      product.thicknessMm,
-      loadingKgPerM2,
-    ),
-    warnings,
+    startDates: starts.table.rows,
+    bestStartWindows: starts.best.windows,
+    bestStartWindowCriterion: starts.best.criterion,
+    heat: parts.heat,
+    psychrometric: parts.psychrometric,
+    assumptions: assessmentAssumptions(run),
+    warnings: assessmentWarnings(series, run, primary, calendar, starts),
     coverage: {
       firstHourUtc: isoHour(series.startUtcMs[0]),
       lastHourUtc: isoHour(series.startUtcMs[series.hours - 1]),
       hours: series.hours,
       missingHours: reasons.missingData,
-      years,
+      years: calendar.years,
       monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
       assumedIrradianceHours: primary.assumedIrradianceHours,
       assumedWindHours: primary.assumedWindHours,
       hasRainData: !primary.noRainData,
-      startDateBatchesRun: table.batches,
-      startDateBatchesSkippedForData: table.skipped,
+      startDateBatchesRun: starts.table.batches,
+      startDateBatchesSkippedForData: starts.table.skipped,
     },
   }
-}
-
-/** Lowest air temperature of the backup heater when the user gives none [°C] (assumption, from memory:
- * batch dryers run fruit at 45–65 °C and grain at 45–80 °C; 45 °C is the low end of both). */
-export const BACKUP_MIN_AIR_C = 45
-
-/**
- * The backup heater: the user's values over `heatedSchema` defaults; its target RH is at most 80 % of the
- * product's equilibrium RH at target (at 25 °C), so heated air always dries toward the target, and its air
- * is at least {@link BACKUP_MIN_AIR_C} (or the product's limit when lower) unless the user says otherwise.
- */
-function heatedBackup(
-  given: AssessOptions['backupHeater'],
-  targetErhPct: number,
-  maxProductTempC: number | null,
-): HeatedMethod {
-  const base = heatedSchema.parse({ kind: 'heated', ...(given ?? {}) })
-  if (base.setPointC === undefined && given?.targetRhPct === undefined) {
-    base.targetRhPct = Math.min(base.targetRhPct, 0.8 * targetErhPct)
-  }
-  if (given?.minAirC === undefined)
-    base.minAirC = Math.min(BACKUP_MIN_AIR_C, maxProductTempC ?? BACKUP_MIN_AIR_C)
-  return base
-}
-
-interface HeatContext {
-  profile: ProductProfile
-  initialWbPct: number
-  targetWbPct: number
-  targetDb: number
-  ctx: StartContext
-}
-
-function heatSummary(
-  outcomes: StartOutcome[],
-  heater: HeatedMethod,
-  backup: HourlyConditions,
-  options: AssessOptions,
-  batchKgFresh: number,
-  h: HeatContext,
-): HeatSummary {
-  const perTonne = outcomes.map((o) => o.heatKwhPerTonne)
-  const tonnes = batchKgFresh / 1000
-  const eff = heater.heaterEfficiency
-  const s = spread(perTonne, 1)
-  const scale = (x: number | null, f: number): number | null => (x === null ? null : roundOrNull(x * f, 1))
-  const selectedFuel = options.fuel ?? heater.fuel
-  const fuels: FuelFigure[] = (Object.keys(FUELS) as FuelId[]).map((id) => {
-    const price = options.fuelPrices?.[id]
-    const use = s.median === null ? null : fuelForHeat(s.median, eff, id, price)
-    return {
-      fuel: id,
-      unit: FUELS[id].unit,
-      quantityPerTonne: use ? roundOrNull(use.quantity, 2) : null,
-      quantityPerBatch: use ? roundOrNull(use.quantity * tonnes, 2) : null,
-      costPerTonne: use ? roundOrNull(use.cost, 2) : null,
-      costPerBatch: use ? roundOrNull(use.cost * tonnes, 2) : null,
-      pricePerUnit: price ?? FUELS[id].examplePricePerUnit,
-      priceIsExample: price === undefined,
-      heatingValueMjPerUnit: roundOrNull(FUELS[id].heatingValueMjPerUnit, 3) ?? 0,
-      heatingValueSource: FUELS[id].source,
-    }
-  })
-  // Cross-check: water to remove × (λ + net sorption heat at the target) ÷ efficiency.
-  const water = waterToRemoveKg(1000, h.initialWbPct, h.targetWbPct)
-  const meanComputedC = meanOf(backup.airC)
-  // no batch needed the backup heater: take its lowest air temperature for the latent heat
-  const meanHeatedC = Number.isFinite(meanComputedC) ? meanComputedC : heater.minAirC
-  const sorption = heatOfSorption(h.profile, Math.min(Math.max(meanHeatedC, 0), 90), h.targetDb)
-  const evaporationFuelKwh = (water * sorption.totalKjPerKg) / 3600 / eff
-  const heatedOnly = heatedEveryHourSample(h.ctx, 30)
-  const ratio =
-    heatedOnly.length > 0
-      ? quantileSorted(
-          heatedOnly.sort((a, b) => a - b),
-          0.5,
-        ) /
-        eff /
-        evaporationFuelKwh
-      : Number.NaN
-  return {
-    heaterEfficiency: eff,
-    airFlowKgPerSPerTonne: heater.airFlowKgPerSPerTonne,
-    targetRhPct: heater.setPointC === undefined ? roundOrNull(heater.targetRhPct, 1) : null,
-    setPointC: heater.setPointC ?? null,
-    batchKgFresh,
-    heatToAirKwhPerTonne: s,
-    heatToAirKwhPerBatch: {
-      median: scale(s.median, tonnes),
-      p10: scale(s.p10, tonnes),
-      p90: scale(s.p90, tonnes),
-    },
-    fuelHeatKwhPerTonne: {
-      median: scale(s.median, 1 / eff),
-      p10: scale(s.p10, 1 / eff),
-      p90: scale(s.p90, 1 / eff),
-    },
-    fuels,
-    selectedFuel,
-    crossCheck: {
-      waterToRemoveKgPerTonne: roundOrNull(water, 1) ?? 0,
-      heatOfEvaporationKjPerKg: roundOrNull(sorption.totalKjPerKg, 0) ?? 0,
-      heatOfEvaporationMethod: `latent heat of free water 2501 − 2.361·T (FAO-56 form) at the mean heated-air temperature ${meanHeatedC.toFixed(1)} °C, plus ${sorption.method}`,
-      evaporationHeatFuelKwhPerTonne: roundOrNull(evaporationFuelKwh, 1) ?? 0,
-      ratioHeatedEveryHour: roundOrNull(ratio, 2),
-      note: 'A dryer heated every hour spends more than the evaporation heat because its exhaust leaves warm and unsaturated (ratio > 1); supplemental heat can be below it because ambient air does part of the drying.',
-    },
-  }
-}
-
-function meanOf(column: Float64Array): number {
-  let sum = 0
-  let count = 0
-  for (let i = 0; i < column.length; i++) {
-    const v = column[i]
-    if (Number.isFinite(v)) {
-      sum += v
-      count++
-    }
-  }
-  return count > 0 ? sum / count : Number.NaN
-}
-
-/** Heater heat [kWh/t] of up to `count` batches heated every hour, started evenly through the file. */
-function heatedEveryHourSample(ctx: StartContext, count: number): number[] {
-  const out: number[] = []
-  const last = ctx.series.hours - (ctx.wrap ? 1 : ctx.maxHours)
-  if (last <= 0) return out
-  const heated: StartContext = { ...ctx, primary: ctx.backup }
-  for (let k = 0; k < count; k++) {
-    const index = Math.floor((k * last) / count)
-    const o = runStart(heated, index)
-    if (Number.isFinite(o.heatKwhPerTonne)) out.push(o.heatKwhPerTonne)
-  }
-  return out
 }

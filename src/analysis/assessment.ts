@@ -5,6 +5,7 @@
  */
 import type { DryingMethod, FuelId } from '../drying/method.ts'
 import type { HourStatusName } from '../drying/usable-hour.ts'
+import type { PsychrometricSummary } from './psychrometric.ts'
 import type { Spread } from './statistics.ts'
 
 export const ASSESSMENT_SCHEMA = 'dryhours.assessment/1'
@@ -102,6 +103,8 @@ export interface StartWindow {
 
 export interface FuelFigure {
   fuel: FuelId
+  /** The fuel in words, e.g. "propane (LPG)". */
+  name: string
   unit: string
   quantityPerTonne: number | null
   quantityPerBatch: number | null
@@ -166,6 +169,8 @@ export interface Assessment {
   site: AssessmentSite
   product: AssessmentProduct
   method: DryingMethod
+  /** The method in plain words (drying/methods/<kind>.ts label). */
+  methodLabel: string
   season: { start: string; end: string; stepDays: number; startHourLocal: number }
   deadlineDays: number
   maxDays: number
@@ -177,6 +182,8 @@ export interface Assessment {
   bestStartWindows: StartWindow[]
   bestStartWindowCriterion: string
   heat: HeatSummary
+  /** The site's hours on a psychrometric chart, with the air that dries the product to its target. */
+  psychrometric: PsychrometricSummary
   assumptions: Assumption[]
   warnings: string[]
   coverage: Coverage

@@ -3,24 +3,18 @@
  * Every threshold, default and model choice behind an assessment, stated with its source, so that a
  * reader can see (and change) what the figures rest on.
  */
-import type { DryingMethod, HeatedMethod } from '../drying/method.ts'
+
 import { methodModel } from '../drying/methods/index.ts'
-import type { DryingThresholds } from '../drying/thresholds.ts'
 import { HOUR_STATUS_MEANINGS } from '../drying/usable-hour.ts'
-import type { ProductProfile } from '../product/profile.ts'
+import type { ResolvedAssessOptions } from './assess-options.ts'
 import type { Assumption } from './assessment.ts'
 import { MONTH_COVERAGE_REQUIRED } from './monthly-tables.ts'
 import { GOOD_START_PROBABILITY } from './start-dates.ts'
 import { PERCENTILE_CONVENTION } from './statistics.ts'
 
-export function assessmentAssumptions(
-  method: DryingMethod,
-  heater: HeatedMethod,
-  t: DryingThresholds,
-  profile: ProductProfile,
-  thicknessMm: number,
-  loadingKgPerM2: number,
-): Assumption[] {
+export function assessmentAssumptions(run: ResolvedAssessOptions): Assumption[] {
+  const { method, backupMethod: heater, thresholds: t, profile, loadingKgPerM2 } = run
+  const thicknessMm = run.product.thicknessMm
   const list: Assumption[] = [
     { name: 'percentiles', value: PERCENTILE_CONVENTION, source: 'Hyndman & Fan 1996, Am. Stat. 50:361' },
     {

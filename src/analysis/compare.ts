@@ -115,22 +115,20 @@ function keyOf(s: Omit<SiteScore, 'rank'>, c: CompareCriterion): number {
 }
 
 /**
- * Assess every series with the same options and rank them. `labels` name the sites when given (e.g. file
- * names), otherwise the site names from the files.
+ * Rank assessments of several sites by `criterion` (ties broken by the other criteria in the order of
+ * {@link COMPARE_CRITERIA}); `labels` name the sites, otherwise their site names.
  */
-export function compare(
-  seriesList: Parameters<typeof assess>[0][],
-  options: AssessOptions & { criterion?: CompareCriterion; labels?: string[] },
+export function rankAssessments(
+  assessments: Assessment[],
+  criterion: CompareCriterion = 'probability-within-deadline',
+  labels?: string[],
 ): Comparison {
-  if (seriesList.length < 2)
-    throw new RangeError(`compare needs at least 2 weather series, got ${seriesList.length}`)
-  const criterion = options.criterion ?? 'probability-within-deadline'
   if (!COMPARE_CRITERIA.includes(criterion)) {
     throw new RangeError(`criterion must be one of ${COMPARE_CRITERIA.join(', ')}, got '${criterion}'`)
   }
-  const assessments = seriesList.map((s) => assess(s, options))
+  if (assessments.length === 0) throw new RangeError('a comparison needs at least one assessment')
   const order: CompareCriterion[] = [criterion, ...COMPARE_CRITERIA.filter((c) => c !== criterion)]
-  const scored = assessments.map((a, i) => ({ ...score(a), site: options.labels?.[i] ?? a.site.name }))
+  const scored = assessments.map((a, i) => ({ ...score(a), site: labels?.[i] ?? a.site.name }))
   const ranked = scored
     .map((s, i) => ({ s, i }))
     .sort((x, y) => {
@@ -154,4 +152,25 @@ export function compare(
     sites: ranked,
     assessments,
   }
+}
+
+/**
+ * Assess every series with the same options and rank them. `labels` name the sites when given (e.g. file
+ * names), otherwise the site names from the files.
+ */
+export function compare(
+  seriesList: Parameters<typeof assess>[0][],
+  options: AssessOptions & { criterion?: CompareCriterion; labels?: string[] },
+): Comparison {
+  if (seriesList.length < 2)
+    throw new RangeError(`compare needs at least 2 weather series, got ${seriesList.length}`)
+  const criterion = options.criterion ?? 'probability-within-deadline'
+  if (!COMPARE_CRITERIA.includes(criterion)) {
+    throw new RangeError(`criterion must be one of ${COMPARE_CRITERIA.join(', ')}, got '${criterion}'`)
+  }
+  return rankAssessments(
+    seriesList.map((s) => assess(s, options)),
+    criterion,
+    options.labels,
+  )
 }

@@ -2,7 +2,7 @@
  * @module report/compare-html
  * Several sites side by side for one product and method: a ranking by a stated criterion, grouped bars
  * (usable hours, days to target, supplemental heat by month) with their tables, then each site's own
- * report. Ranking uses only figures already in each assessment; nothing is recomputed here.
+ * report. The ranking is the analysis one (analysis/compare.ts); nothing is computed here.
  */
 import type { Comparison } from '../analysis/compare.ts'
 import type { Assessment } from './assessment-view.ts'
@@ -20,51 +20,8 @@ import { tableHtml } from './tables.ts'
 
 export interface ComparedSite {
   assessment: Assessment
-  /** Per-site report options (series, file name, profile). */
+  /** Per-site report options (file name, data source). */
   options?: Omit<ReportOptions, 'units' | 'paper' | 'idPrefix'>
-}
-
-export const RANKING_CRITERION =
-  'mean share of the season’s start days’ years that finish within the deadline (higher first); ties broken by the lower median supplemental heat per tonne'
-
-export interface SiteRank {
-  index: number
-  name: string
-  meanProbabilityWithinDeadline: number | null
-  medianHeatKwhPerTonne: number | null
-  bestWindow: string | null
-  usableHoursSeasonP10: number | null
-}
-
-function seasonMonths(a: Assessment): Set<number> {
-  const months = new Set<number>()
-  for (const s of a.startDates) months.add(Number(s.start.slice(0, 2)))
-  return months
-}
-
-export function rankSites(sites: ComparedSite[]): SiteRank[] {
-  const ranks = sites.map((s, index) => {
-    const a = s.assessment
-    const probs = a.startDates.map((r) => r.probabilityWithinDeadline).filter(finite)
-    const months = seasonMonths(a)
-    const p10s = a.monthly.filter((m) => months.has(m.month)).map((m) => m.usableHours.p10)
-    const w = a.bestStartWindows[0]
-    return {
-      index,
-      name: siteDisplayName(a, s.options?.info),
-      meanProbabilityWithinDeadline: probs.length ? probs.reduce((x, y) => x + y, 0) / probs.length : null,
-      medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
-      bestWindow: w ? `${w.from} to ${w.to}` : null,
-      usableHoursSeasonP10:
-        p10s.length && p10s.every(finite) ? (p10s as number[]).reduce((x, y) => x + y, 0) : null,
-    }
-  })
-  return ranks.sort(
-    (x, y) =>
-      (y.meanProbabilityWithinDeadline ?? -1) - (x.meanProbabilityWithinDeadline ?? -1) ||
-      (x.medianHeatKwhPerTonne ?? Number.POSITIVE_INFINITY) -
-        (y.medianHeatKwhPerTonne ?? Number.POSITIVE_INFINITY),
-  )
 }
 
 /** The analysis ranking (`compare()` of analysis/), when the sites were compared there. */
@@ -78,46 +35,26 @@ export interface RankRow {
   medianHeatKwhPerTonne: number | null
 }
 
-/** Rows in rank order: the analysis ranking when given, else {@link rankSites}. */
-export function rankRows(
-  sites: ComparedSite[],
-  ranking?: Ranking,
-): { criterion: string; rows: RankRow[]; usableTitle: string } {
-  if (ranking) {
-    return {
-      criterion: ranking.criterionDescription,
-      usableTitle: 'usable hours in the season, P10 across years [h]',
-      rows: [...ranking.sites]
-        .sort((x, y) => x.rank - y.rank)
-        .map((r) => ({
-          name: r.site,
-          meanProbabilityWithinDeadline: r.meanProbabilityWithinDeadline,
-          bestWindow: r.bestStartWindow,
-          usableHoursSeasonP10: r.usableHoursInSeasonP10,
-          medianHeatKwhPerTonne: r.medianHeatKwhPerTonne,
-        })),
-    }
-  }
+/** Rows in the rank order of the analysis ranking (analysis/compare.ts). */
+export function rankRows(ranking: Ranking): { criterion: string; rows: RankRow[]; usableTitle: string } {
   return {
-    criterion: RANKING_CRITERION,
-    usableTitle: 'usable hours in the season months, sum of monthly P10 [h]',
-    rows: rankSites(sites).map((r) => ({
-      name: r.name,
-      meanProbabilityWithinDeadline: r.meanProbabilityWithinDeadline,
-      bestWindow: r.bestWindow,
-      usableHoursSeasonP10: r.usableHoursSeasonP10,
-      medianHeatKwhPerTonne: r.medianHeatKwhPerTonne,
-    })),
+    criterion: ranking.criterionDescription,
+    usableTitle: 'usable hours in the season, P10 across years [h]',
+    rows: [...ranking.sites]
+      .sort((x, y) => x.rank - y.rank)
+      .map((r) => ({
+        name: r.site,
+        meanProbabilityWithinDeadline: r.meanProbabilityWithinDeadline,
+        bestWindow: r.bestStartWindow,
+        usableHoursSeasonP10: r.usableHoursInSeasonP10,
+        medianHeatKwhPerTonne: r.medianHeatKwhPerTonne,
+      })),
   }
 }
 
-export function comparisonTable(
-  sites: ComparedSite[],
-  units: 'si' | 'us' = 'si',
-  ranking?: Ranking,
-): ReportTable {
+export function comparisonTable(ranking: Ranking, units: 'si' | 'us' = 'si'): ReportTable {
   const u = unitFormatter(units)
-  const { rows, usableTitle } = rankRows(sites, ranking)
+  const { rows, usableTitle } = rankRows(ranking)
   return {
     id: 'site-comparison',
     title: 'Sites ranked',
@@ -158,11 +95,11 @@ function monthlyCompareTable(
 }
 
 export interface ComparisonOptions extends Pick<ReportOptions, 'units' | 'paper'> {
-  /** The analysis ranking; without it the report ranks by {@link RANKING_CRITERION}. */
-  ranking?: Ranking
+  /** The analysis ranking (analysis/compare.ts `compare` or `rankAssessments`). */
+  ranking: Ranking
 }
 
-export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOptions = {}): string {
+export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOptions): string {
   if (sites.length === 0) throw new RangeError('a comparison needs at least one site')
   const units = o.units ?? 'si'
   const u = unitFormatter(units)
@@ -171,11 +108,11 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
   const categories = MONTH_SHORT.map((label, i) => ({ key: String(i + 1), label }))
   const month = (a: Assessment, m: number) => a.monthly.find((r) => r.month === m)
   let fig = 0
-  const ranked = rankRows(sites, o.ranking)
+  const ranked = rankRows(o.ranking)
   const ranks = ranked.rows
   const best = ranks[0]
   const sentences = [
-    `${best.name} ranks first for ${first.product.name} by ${methodName(first.method.kind)}` +
+    `${best.name} ranks first for ${first.product.name} by ${methodName(first)}` +
       (finite(best.meanProbabilityWithinDeadline)
         ? `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years finish a batch within ${first.deadlineDays} days across the season's start days.`
         : '.'),
@@ -272,14 +209,14 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
     .join('\n')
   return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
-<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first.method.kind))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
-<section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(sites, units, o.ranking))}</section>
+<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
+<section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(o.ranking, units))}</section>
 <section class="report-section" data-section="compare-monthly"><h2>Sites side by side</h2>${usable}${heat}</section>
 </article>
 ${perSite}`
 }
 
-export function renderComparisonHtml(sites: ComparedSite[], o: ComparisonOptions = {}): string {
+export function renderComparisonHtml(sites: ComparedSite[], o: ComparisonOptions): string {
   const names = sites.map((s) => siteDisplayName(s.assessment, s.options?.info))
   return htmlDocument(`Drying comparison: ${names.join(', ')}`, renderComparisonArticle(sites, o), o.paper)
 }

@@ -1,16 +1,9 @@
 /**
  * @module report/product-json
- * JSON shapes of the product answers, shared by the CLI (`products`, `equilibrium`) and the API
- * (GET /v1/products, /v1/products/{id}, /v1/equilibrium).
+ * JSON shape of the catalogue listing, shared by the CLI (`products --json`) and the API
+ * (GET /v1/products). The equilibrium answers are computed in analysis/equilibrium-answers.ts.
  */
-import {
-  equilibriumMoistureDb,
-  equilibriumRelativeHumidityPct,
-  heatOfSorption,
-  type SorptionDirection,
-} from '../product/equilibrium.ts'
-import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
-import { isothermFor, type ProductProfile } from '../product/profile.ts'
+import type { ProductProfile } from '../product/profile.ts'
 
 /** One line of the catalogue listing. */
 export function productSummaryJson(p: ProductProfile) {
@@ -27,72 +20,5 @@ export function productSummaryJson(p: ProductProfile) {
     isothermConfidence: p.isotherm.desorption.confidence,
     kineticsModel: p.kinetics.equation.model,
     kineticsConfidence: p.kinetics.confidence,
-  }
-}
-
-function isothermBase(profile: ProductProfile, dryBulbC: number, direction: SorptionDirection) {
-  const iso = isothermFor(profile, direction)
-  return {
-    iso,
-    base: {
-      productId: profile.id,
-      dryBulbC,
-      direction,
-      model: iso.equation.model,
-      source: iso.source,
-      confidence: iso.confidence,
-      calibratedTempC: iso.validTempC,
-      calibratedRhPct: iso.validRhPct,
-    },
-  }
-}
-
-function outsideCalibration(iso: ReturnType<typeof isothermFor>, tC: number, rhPct: number): boolean {
-  return (
-    tC < iso.validTempC[0] || tC > iso.validTempC[1] || rhPct < iso.validRhPct[0] || rhPct > iso.validRhPct[1]
-  )
-}
-
-/**
- * Equilibrium moisture at (T, RH) with the model, its source and whether the point lies outside the
- * isotherm's calibrated range. Throws RangeError outside the model's domain.
- */
-export function equilibriumMoistureJson(
-  profile: ProductProfile,
-  dryBulbC: number,
-  relativeHumidityPct: number,
-  direction: SorptionDirection,
-) {
-  const { iso, base } = isothermBase(profile, dryBulbC, direction)
-  const db = equilibriumMoistureDb(profile, dryBulbC, relativeHumidityPct, direction)
-  const heat = heatOfSorption(profile, dryBulbC, db, direction)
-  return {
-    ...base,
-    relativeHumidityPct,
-    equilibriumMoistureWbPct: moistureWbPctFromDb(db),
-    equilibriumMoistureDbPct: 100 * db,
-    netIsostericHeatKjPerMol: heat.netKjPerMol,
-    heatOfSorptionMethod: heat.method,
-    extrapolated: outsideCalibration(iso, dryBulbC, relativeHumidityPct),
-  }
-}
-
-/** Equilibrium RH (water activity × 100) at (T, M wet basis). Throws RangeError outside the model's domain. */
-export function equilibriumHumidityJson(
-  profile: ProductProfile,
-  dryBulbC: number,
-  moistureWbPct: number,
-  direction: SorptionDirection,
-) {
-  const { iso, base } = isothermBase(profile, dryBulbC, direction)
-  const db = moistureDbFromWbPct(moistureWbPct)
-  const erh = equilibriumRelativeHumidityPct(profile, dryBulbC, db, direction)
-  return {
-    ...base,
-    moistureWbPct,
-    moistureDbPct: 100 * db,
-    equilibriumRelativeHumidityPct: erh,
-    waterActivity: erh / 100,
-    extrapolated: outsideCalibration(iso, dryBulbC, erh),
   }
 }

@@ -4,10 +4,8 @@
  * the page agree. Text cells are neutralised against spreadsheet formula injection (`csvCell`).
  */
 
-import type { HourlySeries } from '../weather/series.ts'
 import type { Assessment, ReportInputInfo } from './assessment-view.ts'
 import type { UnitSystem } from './display-units.ts'
-import { psychroDensity } from './psychro-data.ts'
 import { sectionContext } from './report-html.ts'
 import { fuelTable, heatTable } from './sections/heat.ts'
 import { hourOfDayFractions, hourOfDayTable } from './sections/hour-of-day.ts'
@@ -19,7 +17,6 @@ import { type ReportTable, tableCsv, tablesCsv } from './tables.ts'
 
 export interface CsvOptions {
   units?: UnitSystem
-  series?: HourlySeries
   info?: ReportInputInfo
 }
 
@@ -34,7 +31,7 @@ export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
   if (byYear) out.push(byYear)
   const fr = hourOfDayFractions(a)
   if (fr) out.push(hourOfDayTable(fr))
-  if (o.series) out.push(psychroTable(psychroDensity(o.series, { utcOffsetHours: a.site.utcOffsetHours })))
+  if (a.psychrometric) out.push(psychroTable(a.psychrometric))
   if (a.startDates.length) out.push(startDatesTable(a, ctx))
   out.push(heatTable(a, ctx), fuelTable(a, ctx))
   if (a.assumptions.length) {

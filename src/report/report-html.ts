@@ -1,13 +1,11 @@
 /**
  * @module report/report-html
  * The seasonal summary: one self-contained HTML document (inline CSS and SVG, no scripts, no external
- * assets) from an assessment. The same function serves `dryhours assess --format html`,
+ * assets) from an assessment, and from nothing else: the JSON of an assessment renders the same report.
+ * The same function serves `dryhours assess --format html`,
  * `POST /v1/assess?format=html` and the web page (which embeds the `<article>` fragment).
  */
 
-import { productById } from '../product/catalogue.ts'
-import type { ProductProfile } from '../product/profile.ts'
-import type { HourlySeries } from '../weather/series.ts'
 import { type Assessment, type ReportInputInfo, siteDisplayName } from './assessment-view.ts'
 import { type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
@@ -26,27 +24,12 @@ export interface ReportOptions {
   units?: UnitSystem
   /** Paper for print (`@page size`); 'auto' lets the printer dialogue choose. */
   paper?: Paper
-  /** The weather series the assessment was made from: enables the psychrometric chart. */
-  series?: HourlySeries
-  /**
-   * The product profile (for the drying region on the psychrometric chart); the catalogue profile of the
-   * assessment's product id is used when absent.
-   */
-  profile?: ProductProfile
   /** Uploaded file name and a line on the data source, shown in the header. */
   info?: ReportInputInfo
   /** Prefix for element ids (several reports on one page). */
   idPrefix?: string
   /** Text for the footer, e.g. the program version and when the report was made (the core reads no clock). */
   footer?: string
-}
-
-function catalogueProfile(id: string): ProductProfile | undefined {
-  try {
-    return productById(id)
-  } catch {
-    return undefined
-  }
 }
 
 export function sectionContext(a: Assessment, o: ReportOptions): SectionContext {
@@ -56,8 +39,6 @@ export function sectionContext(a: Assessment, o: ReportOptions): SectionContext 
     info,
     siteName: siteDisplayName(a, info),
     units: unitFormatter(o.units ?? 'si'),
-    series: o.series,
-    profile: o.profile ?? catalogueProfile(a.product.id),
     idPrefix: o.idPrefix ?? '',
     nextFigure: () => ++n,
   }

@@ -5,7 +5,7 @@
  */
 import { assess } from '../analysis/assess.ts'
 import type { Assessment } from '../analysis/assessment.ts'
-import { compare } from '../analysis/compare.ts'
+import { compare, rankAssessments } from '../analysis/compare.ts'
 import {
   type ComparedSite,
   comparisonTable,
@@ -137,8 +137,6 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
     const s = sites[0]
     const opts = {
       units,
-      series: s.series,
-      profile: input.product,
       info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
     }
     return {
@@ -150,26 +148,22 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
       title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
     }
   }
+  // several sites are always compared (and ranked) by analysis/compare.ts above
+  const rank = ranking ?? rankAssessments(sites.map((s) => s.assessment))
   const compared: ComparedSite[] = sites.map((s) => ({
     assessment: s.assessment,
     options: {
-      series: s.series,
-      profile: input.product,
       info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
     },
   }))
   return {
     sites,
-    article: renderComparisonArticle(compared, { units, ranking }),
-    document: renderComparisonHtml(compared, { units, ranking }),
+    article: renderComparisonArticle(compared, { units, ranking: rank }),
+    document: renderComparisonHtml(compared, { units, ranking: rank }),
     csv:
-      tablesCsv([comparisonTable(compared, units, ranking)]) +
+      tablesCsv([comparisonTable(rank, units)]) +
       '\r\n' +
-      sites
-        .map((s) =>
-          renderReportCsv(s.assessment, { units, series: s.series, info: { fileName: s.fileName } }),
-        )
-        .join('\r\n'),
+      sites.map((s) => renderReportCsv(s.assessment, { units, info: { fileName: s.fileName } })).join('\r\n'),
     json: JSON.stringify(
       sites.map((s) => s.assessment),
       null,

@@ -6,8 +6,16 @@
 import { readdirSync, readFileSync } from 'node:fs'
 import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
+import type { Assessment } from '../../src/analysis/assessment.ts'
+import { renderReportCsv } from '../../src/report/report-csv.ts'
+import { renderReportHtml } from '../../src/report/report-html.ts'
 import { GOLDEN_CASES, GOLDEN_COMPARISON, GOLDEN_DIR } from './cases.ts'
-import { goldenComparisonFile, goldenFilesOf, hourlyColumnDigests } from './golden-files.ts'
+import {
+  GOLDEN_REPORT_FOOTER,
+  goldenComparisonFile,
+  goldenFilesOf,
+  hourlyColumnDigests,
+} from './golden-files.ts'
 
 const committed = (name: string): string => readFileSync(join(GOLDEN_DIR, name), 'utf8')
 
@@ -24,6 +32,15 @@ describe('golden assessments (test/fixtures/golden/)', () => {
   it('hourly columns of every method, bit for bit (SHA-256 per column)', () => {
     const f = hourlyColumnDigests()
     expect(JSON.parse(f.text)).toEqual(JSON.parse(committed(f.name)))
+  })
+  it('the HTML and CSV reports are rebuilt from the committed JSON alone (no weather, no profile)', () => {
+    const rendered = GOLDEN_CASES.filter((c) => c.rendered)
+    expect(rendered.length).toBeGreaterThanOrEqual(3)
+    for (const c of rendered) {
+      const a = JSON.parse(committed(`${c.id}.json`)) as Assessment
+      expect(renderReportCsv(a), c.id).toBe(committed(`${c.id}.csv`))
+      expect(renderReportHtml(a, { footer: GOLDEN_REPORT_FOOTER }), c.id).toBe(committed(`${c.id}.html`))
+    }
   })
   it('every committed golden file belongs to a case', () => {
     const ids = [...GOLDEN_CASES.map((c) => c.id), GOLDEN_COMPARISON.id, 'hourly-column-digests']

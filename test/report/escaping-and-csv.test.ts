@@ -25,7 +25,6 @@ beforeAll(() => {
 describe('malicious names in the HTML report', () => {
   it('escape every character that could open markup or an attribute', () => {
     const h = renderReportHtml(evil, {
-      series: c.series,
       info: { fileName: FILE, readerWarnings: ['<b>bold</b>'] },
     })
     expect(h).not.toContain('<script>alert')

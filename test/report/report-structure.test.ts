@@ -14,11 +14,7 @@ const html = new Map<string, string>()
 
 beforeAll(() => {
   cases = loadDemoCases()
-  for (const c of cases)
-    html.set(
-      c.file,
-      renderReportHtml(c.assessment, { series: c.series, profile: c.product, info: { fileName: c.file } }),
-    )
+  for (const c of cases) html.set(c.file, renderReportHtml(c.assessment, { info: { fileName: c.file } }))
 }, 120_000)
 
 const SECTIONS = [
@@ -210,7 +206,7 @@ describe('report of each demo site', () => {
 
   it('exports every table as CSV with the same numbers as the JSON', () => {
     for (const c of cases) {
-      const tables = reportTables(c.assessment, { series: c.series })
+      const tables = reportTables(c.assessment, {})
       const ids = tables.map((t) => t.id)
       expect(ids.slice(0, 2)).toEqual(['summary', 'monthly-usable-hours'])
       for (const id of [
@@ -223,9 +219,7 @@ describe('report of each demo site', () => {
       ]) {
         expect(ids, c.file).toContain(id)
       }
-      const rows = parseCsv(
-        renderReportCsv(c.assessment, { series: c.series, table: 'monthly-usable-hours' }),
-      )
+      const rows = parseCsv(renderReportCsv(c.assessment, { table: 'monthly-usable-hours' }))
       expect(rows[0][0]).toBe('month')
       c.assessment.monthly.forEach((m, i) => {
         expect(rows[i + 1][1] === '' ? null : Number(rows[i + 1][1])).toBe(m.usableHours.median)
@@ -233,7 +227,7 @@ describe('report of each demo site', () => {
       })
       const starts = parseCsv(renderReportCsv(c.assessment, { table: 'start-dates' }))
       expect(starts.slice(1).map((r) => r[0])).toEqual(c.assessment.startDates.map((s) => s.start))
-      const all = renderReportCsv(c.assessment, { series: c.series })
+      const all = renderReportCsv(c.assessment, {})
       for (const t of tables) expect(all).toContain(t.title.split(',')[0])
     }
   })

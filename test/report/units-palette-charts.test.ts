@@ -1,19 +1,11 @@
 /**
  * Display units (NIST SP 811 exact factors), the palette's greyscale and colour-blind properties, tick
- * choice, and the psychrometric chart's curves against psychrolib (ASHRAE HOF 2017 ch. 1 in code form).
+ * choice.
  */
-import psychrolib from 'psychrolib'
 import { describe, expect, it } from 'vitest'
-import { productById } from '../../src/product/catalogue.ts'
-import { equilibriumRelativeHumidityPct } from '../../src/product/equilibrium.ts'
-import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
-import { humidityRatioAtRhGPerKg } from '../../src/report/charts/psychrometric.ts'
 import { niceTicks } from '../../src/report/charts/svg.ts'
 import { formatNumber, unitFormatter } from '../../src/report/display-units.ts'
 import { HIGH_CONTRAST, patternDef, siteStyle, YL_OR_BR } from '../../src/report/palette.ts'
-import { dryingRegionBoundary } from '../../src/report/psychro-data.ts'
-
-psychrolib.SetUnitSystem(psychrolib.SI)
 
 /** WCAG 2.1 relative luminance of an sRGB hex colour (W3C, "relative luminance" definition). */
 function luminance(hex: string): number {
@@ -78,43 +70,5 @@ describe('axis ticks (Heckbert 1990 nice numbers)', () => {
     expect(niceTicks(0, 448)).toEqual([0, 100, 200, 300, 400])
     expect(niceTicks(-10, 35, 8)).toEqual([-10, -5, 0, 5, 10, 15, 20, 25, 30, 35])
     expect(niceTicks(0, 1, 5)).toEqual([0, 0.2, 0.4, 0.6, 0.8, 1])
-  })
-})
-
-describe('psychrometric chart curves against psychrolib 1.1 (ASHRAE HOF 2017 ch. 1)', () => {
-  it('saturation and RH curves give the same humidity ratio as psychrolib within 0.1 %', () => {
-    for (const [t, rh, pKpa] of [
-      [20, 100, 101.325],
-      [30, 40, 89.9],
-      [5, 70, 101.325],
-      [45, 10, 95],
-    ]) {
-      const ours = humidityRatioAtRhGPerKg(t, rh, pKpa)
-      const ref = 1000 * psychrolib.GetHumRatioFromRelHum(t, rh / 100, pKpa * 1000)
-      expect(Math.abs(ours / ref - 1), `${t} °C ${rh} %`).toBeLessThan(1e-3)
-    }
-  })
-
-  it("draws the drying region's edge at the product's equilibrium RH at target (shelled corn, 15.5 % wb)", () => {
-    const corn = productById('shelled-corn')
-    const edge = dryingRegionBoundary(corn, 15.5, 101.325, [0, 40])
-    const at25 = edge.find((p) => p.dryBulbC === 25)
-    const erh = equilibriumRelativeHumidityPct(corn, 25, moistureDbFromWbPct(15.5))
-    const ref = 1000 * psychrolib.GetHumRatioFromRelHum(25, erh / 100, 101325)
-    expect(at25?.humidityRatioGPerKg).toBeCloseTo(ref, 2)
-    // Natural-air grain drying guidance: corn near 15–16 % wb is in equilibrium with air of roughly 70–80 % RH
-    // at 25 °C (ASABE D245.6 modified Henderson/Chung–Pfost for corn; from memory).
-    expect(erh).toBeGreaterThan(65)
-    expect(erh).toBeLessThan(85)
-    // Warmer air holds more water at the same RH: the edge rises with dry bulb.
-    for (let i = 1; i < edge.length; i++)
-      expect(edge[i].humidityRatioGPerKg).toBeGreaterThan(edge[i - 1].humidityRatioGPerKg)
-  })
-
-  it("stops the region at the product's temperature limit", () => {
-    const raisins = productById('grapes-to-raisins')
-    const limit = raisins.maxProductTempC?.value as number
-    const edge = dryingRegionBoundary(raisins, 18, 101.325, [0, 90])
-    expect(edge[edge.length - 1].dryBulbC).toBeLessThanOrEqual(limit)
   })
 })

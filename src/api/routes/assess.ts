@@ -140,26 +140,12 @@ export function assessRouter(config: ApiConfig): Hono {
     )
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (output.format === 'html') {
-      return c.html(
-        renderReportHtml(assessment, {
-          units: output.units,
-          series: read.series,
-          profile: request.options.product,
-          info,
-        }),
-      )
+      return c.html(renderReportHtml(assessment, { units: output.units, info }))
     }
     if (output.format === 'csv') {
       return csvResponse(
         c,
-        runEngine(() =>
-          renderReportCsv(assessment, {
-            units: output.units,
-            series: read.series,
-            info,
-            table: output.table,
-          }),
-        ),
+        runEngine(() => renderReportCsv(assessment, { units: output.units, info, table: output.table })),
       )
     }
     return c.json(assessment)
@@ -201,11 +187,7 @@ export function compareRouter(config: ApiConfig): Hono {
         renderComparisonHtml(
           comparison.assessments.map((a, i) => ({
             assessment: a,
-            options: {
-              series: reads[i].series,
-              profile: request.options.product,
-              info: { fileName: files[i].name },
-            },
+            options: { info: { fileName: files[i].name } },
           })),
           { units: output.units, ranking: comparison },
         ),

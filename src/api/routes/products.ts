@@ -5,16 +5,13 @@
  */
 import { Hono } from 'hono'
 import { z } from 'zod'
+import { equilibriumHumidityAnswer, equilibriumMoistureAnswer } from '../../analysis/equilibrium-answers.ts'
 import { PRODUCT_CATALOGUE, productById, productIds } from '../../product/catalogue.ts'
 import { fitWeighings, profileFromFit } from '../../product/fit-weighings.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { type MoistureReference, parseWeighingsCsv } from '../../product/weighings.ts'
 import { fitJson } from '../../report/fit-json.ts'
-import {
-  equilibriumHumidityJson,
-  equilibriumMoistureJson,
-  productSummaryJson,
-} from '../../report/product-json.ts'
+import { productSummaryJson } from '../../report/product-json.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
@@ -89,8 +86,8 @@ export const equilibriumRouter = new Hono().get('/', (c) => {
   try {
     return c.json(
       q.rh !== undefined
-        ? equilibriumMoistureJson(profile, q.tdb, q.rh, direction)
-        : equilibriumHumidityJson(profile, q.tdb, q.moistureWb as number, direction),
+        ? equilibriumMoistureAnswer(profile, q.tdb, q.rh, direction)
+        : equilibriumHumidityAnswer(profile, q.tdb, q.moistureWb as number, direction),
     )
   } catch (e) {
     if (e instanceof RangeError) throw new ApiProblem(400, e.message, [{ path: 'query', message: e.message }])

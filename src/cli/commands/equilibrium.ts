@@ -1,9 +1,9 @@
 import { parseArgs } from 'node:util'
+import { equilibriumHumidityAnswer, equilibriumMoistureAnswer } from '../../analysis/equilibrium-answers.ts'
 import { productById } from '../../product/catalogue.ts'
 import type { SorptionDirection } from '../../product/equilibrium.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
-import { equilibriumHumidityJson, equilibriumMoistureJson } from '../../report/product-json.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
 
 const help = `dryhours equilibrium: equilibrium moisture of a product in air, or the air it is in equilibrium with
@@ -74,7 +74,7 @@ export const equilibriumCommand: CliCommand = {
     const direction: SorptionDirection = values.adsorption ? 'adsorption' : 'desorption'
     try {
       if (rh !== undefined) {
-        const out = equilibriumMoistureJson(profile, tdb, rh, direction)
+        const out = equilibriumMoistureAnswer(profile, tdb, rh, direction)
         io.stdout(
           values.json
             ? `${JSON.stringify(out)}\n`
@@ -87,7 +87,7 @@ export const equilibriumCommand: CliCommand = {
                   : ''),
         )
       } else {
-        const out = equilibriumHumidityJson(profile, tdb, mwb as number, direction)
+        const out = equilibriumHumidityAnswer(profile, tdb, mwb as number, direction)
         io.stdout(
           values.json
             ? `${JSON.stringify(out)}\n`

@@ -45,7 +45,7 @@ export type HeatedMethod = z.output<typeof heatedSchema>
 
 export const heated: MethodModel<typeof heatedSchema> = {
   kind: 'heated',
-  label: 'heated air (fuel or electric heater)',
+  label: 'heated air',
   schema: heatedSchema,
   exposure: 'forced-air',
   airFlowKgPerSPerTonne: (m) => m.airFlowKgPerSPerTonne,

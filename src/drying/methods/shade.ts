@@ -30,7 +30,7 @@ export type ShadeMethod = z.output<typeof shadeSchema>
 
 export const shade: MethodModel<typeof shadeSchema> = {
   kind: 'shade',
-  label: 'shade or ventilated shed',
+  label: 'shade (ventilated shelter)',
   schema: shadeSchema,
   exposure: 'exposed',
   airFlowKgPerSPerTonne: () => 0,

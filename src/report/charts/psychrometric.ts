@@ -1,26 +1,22 @@
 /**
  * @module report/charts/psychrometric
- * The site's hours on a psychrometric chart: dry bulb (x) against humidity ratio (y), with curves of
- * constant relative humidity computed from the moist-air core (Hyland–Wexler saturation over liquid
- * water, ASHRAE HOF 2017 ch. 1 eqs 6 and 20 — liquid water also below 0 °C, as weather stations report
- * RH), the hours as a density of cells, and the region of air that dries the product to its target
- * shaded and hatched. Cells carry `data-t`, `data-w`, `data-hours`; the region carries its boundary.
+ * The site's hours on a psychrometric chart: dry bulb (x) against humidity ratio (y), with the curves of
+ * constant relative humidity, the hours as a density of cells, and the region of air that dries the
+ * product to its target shaded and hatched, all as the assessment gives them (analysis/psychrometric.ts). Cells carry `data-t`, `data-w`, `data-hours`; the region carries its boundary.
  */
 
-import { humidityRatioFromVaporPressure } from '../../physics/moist-air.ts'
-import { saturationVaporPressureLiquidKpa } from '../../physics/saturation.ts'
+import type { PsychrometricSummary, RegionPoint } from '../../analysis/psychrometric.ts'
 import type { UnitFormatter } from '../display-units.ts'
 import { escapeHtml } from '../escape.ts'
 import { HIGH_CONTRAST, INK, sequentialColour } from '../palette.ts'
-import type { PsychroDensity, RegionPoint } from '../psychro-data.ts'
 import { type Frame, linearScale, niceTicks, px, svgDocument, tickLabel, xAxis, yAxis } from './svg.ts'
 
 export interface PsychrometricOptions {
   id: string
   title: string
   description: string
-  pressureKpa: number
-  density: PsychroDensity
+  /** The hours, the axes and the RH curves (analysis/psychrometric.ts). */
+  summary: PsychrometricSummary
   /** Boundary of the drying region (humidity ratio at the product's equilibrium RH at target, by dry bulb). */
   region: RegionPoint[] | null
   /** Label of the region, e.g. "dries raisins to 15 %". */
@@ -29,18 +25,9 @@ export interface PsychrometricOptions {
 }
 
 const FRAME: Frame = { width: 640, height: 410, left: 56, right: 40, top: 50, bottom: 40 }
-const RH_CURVES = [10, 20, 30, 40, 50, 60, 70, 80, 90, 100]
-
-/** Humidity ratio [g/kg] at dry bulb tC and RH rhPct (over liquid water) at pressureKpa; eq 20. */
-export function humidityRatioAtRhGPerKg(tC: number, rhPct: number, pressureKpa: number): number {
-  return (
-    1000 * humidityRatioFromVaporPressure((rhPct / 100) * saturationVaporPressureLiquidKpa(tC), pressureKpa)
-  )
-}
-
 export function psychrometricChart(o: PsychrometricOptions): string {
   const f = FRAME
-  const d = o.density
+  const d = o.summary
   const [t0, t1] = d.dryBulbRangeC
   const wTop = d.humidityRatioMaxGPerKg
   const x = linearScale([t0, t1], [f.left, f.width - f.right])
@@ -85,20 +72,14 @@ export function psychrometricChart(o: PsychrometricOptions): string {
   // RH curves, labelled where they leave the plot (right edge: beside it; top edge: if there is room).
   const curves: string[] = []
   let lastTopLabelX = Number.NEGATIVE_INFINITY
-  for (const rh of RH_CURVES) {
+  d.rhCurves.forEach(({ rhPct: rh, humidityRatioGPerKg: curve }) => {
     const pts: string[] = []
     let exit: { x: number; y: number; side: 'right' | 'top' } = { x: x(t1), y: y(0), side: 'right' }
-    const steps = 80
-    for (let i = 0; i <= steps; i++) {
-      const t = t0 + ((t1 - t0) * i) / steps
-      const w = humidityRatioAtRhGPerKg(t, rh, o.pressureKpa)
+    curve.forEach((w, i) => {
+      const t = d.rhCurveDryBulbC[i]
       pts.push(`${px(x(t))},${px(y(w))}`)
-      if (w > wTop) {
-        exit = { x: x(t), y: y(wTop), side: 'top' }
-        break
-      }
-      exit = { x: x(t), y: y(w), side: 'right' }
-    }
+      exit = w > wTop ? { x: x(t), y: y(wTop), side: 'top' } : { x: x(t), y: y(w), side: 'right' }
+    })
     const sat = rh === 100
     curves.push(
       `<polyline class="rh" data-rh="${rh}" points="${pts.join(' ')}" fill="none" stroke="${sat ? INK.text : INK.muted}" stroke-width="${sat ? 1.6 : 0.7}"${sat ? '' : ' stroke-dasharray="3 2"'}/>`,
@@ -113,7 +94,7 @@ export function psychrometricChart(o: PsychrometricOptions): string {
       )
       lastTopLabelX = exit.x
     }
-  }
+  })
   const tTicks = niceTicks(t0, t1, 8)
   const wTicks = niceTicks(0, wTop, 6)
   const u = o.units

@@ -1,20 +1,16 @@
 /**
  * @module report/sections/context
- * What every report section needs: the display units, optional extras (the weather series for the
- * psychrometric chart, the product profile for its drying region), input info and a figure counter.
+ * What every report section needs besides the assessment: the display units, input info and a figure
+ * counter.
  */
 
 import type { Spread } from '../../analysis/statistics.ts'
 import { integerPower } from '../../physics/power.ts'
-import type { ProductProfile } from '../../product/profile.ts'
-import type { HourlySeries } from '../../weather/series.ts'
 import type { ReportInputInfo } from '../assessment-view.ts'
 import type { UnitFormatter } from '../display-units.ts'
 
 export interface SectionContext {
   units: UnitFormatter
-  series?: HourlySeries
-  profile?: ProductProfile
   info: ReportInputInfo
   /** Display name of the site (never empty). */
   siteName: string

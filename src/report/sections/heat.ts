@@ -4,7 +4,6 @@
  * monthly heat table, and the fuel table (quantity and cost per tonne, in the display units).
  */
 import type { FuelFigure } from '../../analysis/assessment.ts'
-import { FUELS } from '../../drying/fuels.ts'
 import type { Assessment } from '../assessment-view.ts'
 import { spreadBarsChart } from '../charts/spread-bars.ts'
 import { MONTH_LONG, MONTH_SHORT } from '../charts/svg.ts'
@@ -15,8 +14,9 @@ import { HIGH_CONTRAST } from '../palette.ts'
 import { type ReportTable, tableHtml } from '../tables.ts'
 import { convertSpread, finite, perMassFactor, perMassWords, round, type SectionContext } from './context.ts'
 
-export function fuelName(id: string): string {
-  return (FUELS as Record<string, { name: string } | undefined>)[id]?.name ?? id
+/** The fuel in words (the assessment's own name; the id for assessments without one). */
+export function fuelName(f: FuelFigure): string {
+  return f.name ?? f.fuel
 }
 
 export function heatTable(a: Assessment, ctx: SectionContext): ReportTable {
@@ -59,7 +59,7 @@ export function fuelTable(a: Assessment, ctx: SectionContext): ReportTable {
     columns: ['fuel', 'quantity', 'unit', 'price per unit', 'cost', 'price is', 'heating value source'],
     digits: [0, 1, 0, 2, 1, 0, 0],
     rows: fuelRows(a, ctx).map((r) => [
-      `${fuelName(r.fuel.fuel)}${r.fuel.fuel === a.heat.selectedFuel ? ' (selected)' : ''}`,
+      `${fuelName(r.fuel)}${r.fuel.fuel === a.heat.selectedFuel ? ' (selected)' : ''}`,
       round(r.quantity, 2),
       r.unit,
       round(r.price, 3),

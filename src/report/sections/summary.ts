@@ -11,15 +11,9 @@ import { fuelName } from './heat.ts'
 import { monthList, suitableMonths } from './monthly.ts'
 import { bestStartWindow } from './start-dates.ts'
 
-const METHOD_NAMES: Record<string, string> = {
-  'open-air': 'open air (racks or mats in the sun)',
-  shade: 'shade (ventilated shelter)',
-  'solar-cabinet': 'solar cabinet (air heated by a solar collector)',
-  heated: 'heated air',
-}
-
-export function methodName(kind: string): string {
-  return METHOD_NAMES[kind] ?? kind
+/** The method in words: the assessment's label (its kind for assessments without one). */
+export function methodName(a: Pick<Assessment, 'method' | 'methodLabel'>): string {
+  return a.methodLabel ?? a.method.kind
 }
 
 function coord(v: number | null | undefined, pos: string, neg: string): string {
@@ -72,7 +66,7 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     'Moisture',
     `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
   ])
-  rows.push(['Method', methodName(a.method.kind)])
+  rows.push(['Method', methodName(a)])
   rows.push([
     'Season',
     `start days ${a.season.start} to ${a.season.end}, every ${a.season.stepDays} day${a.season.stepDays === 1 ? '' : 's'} at ${String(a.season.startHourLocal).padStart(2, '0')}:00`,
@@ -93,7 +87,7 @@ export function headerHtml(a: Assessment, ctx: SectionContext): string {
 export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
   const out: string[] = []
   const u = ctx.units
-  const method = methodName(a.method.kind)
+  const method = methodName(a)
   const suit = suitableMonths(a)
   const typical = a.site.typicalYear
   const target = `${formatNumber(a.product.targetMoistureWbPct, 1)} %`
@@ -142,7 +136,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     const cost = fuel && finite(fuel.costPerTonne) ? fuel.costPerTonne * perMassFactor(ctx) : null
     const costText =
       fuel && finite(cost)
-        ? `, costing about ${formatNumber(cost, 0)} ${perMassWords(ctx)} in ${fuelName(fuel.fuel)}${fuel.priceIsExample ? ' at the example price' : ''}`
+        ? `, costing about ${formatNumber(cost, 0)} ${perMassWords(ctx)} in ${fuelName(fuel)}${fuel.priceIsExample ? ' at the example price' : ''}`
         : ''
     const e = (v: number | null) =>
       `${formatNumber(finite(v) ? u.energyPerMass(v).value : null)} ${u.energyPerMassUnit}`
