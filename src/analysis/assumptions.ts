@@ -21,7 +21,7 @@ export function assessmentAssumptions(run: ResolvedAssessOptions): Assumption[] 
       name: 'usable drying hour',
       value:
         'the air at the product (at the product temperature) has an equilibrium moisture below the target, a humidity-ratio deficit to the equilibrium RH at target of at least the threshold, no rain on an exposed product, and the product temperature within its limits',
-      source: 'dryhours model, model.md §4',
+      source: 'dryhours model, docs/model.md §6',
     },
     ...Object.entries(HOUR_STATUS_MEANINGS).map(([name, meaning]) => ({
       name: `reason ${name}`,
@@ -65,18 +65,18 @@ export function assessmentAssumptions(run: ResolvedAssessOptions): Assumption[] 
       name: 'constant-rate limit',
       value:
         'water removed per hour ≤ wet-surface evaporation per m² ÷ dry matter per m² (exposed) or ≤ deficit to saturation × air mass (forced air)',
-      source: 'model.md §5',
+      source: 'docs/model.md §5, §7',
     },
     { name: 'loading', value: `${loadingKgPerM2} kg fresh per m²`, source: 'method or product default' },
     {
       name: 'supplemental heat',
       value: `a forced-air dryer at ${heater.airFlowKgPerSPerTonne} kg dry air s⁻¹ t⁻¹ heated ${heater.setPointC !== undefined ? `to ${heater.setPointC} °C` : `to ${heater.targetRhPct.toFixed(0)} % RH, never below ${heater.minAirC} °C`} (capped at the product limit), used in every hour the method's own air does not dry; if that misses the deadline, heated every hour`,
-      source: 'model.md §6; defaults of the heated method (assumptions)',
+      source: 'docs/model.md §8; defaults of the heated method (assumptions)',
     },
     {
       name: 'heater efficiency',
       value: `${heater.heaterEfficiency} of the fuel's higher heating value reaches the air`,
-      source: 'indirect-fired mid-range (drying-science.md §4.2, from memory)',
+      source: 'indirect-fired heater mid-range (from memory)',
     },
     {
       name: 'best start windows',

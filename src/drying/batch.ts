@@ -1,6 +1,6 @@
 /**
  * @module drying/batch
- * One batch, hour by hour, over precomputed {@link HourlyConditions} (model.md §5):
+ * One batch, hour by hour, over precomputed {@link HourlyConditions} (docs/model.md §7):
  * - drying (M above the desorption equilibrium): thin-layer step by equivalent time
  *   (drying/product-response.ts), never removing more than the hour's constant-rate limit (wet-surface
  *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air);
@@ -10,7 +10,7 @@
  *   that water comes from rain, not from the air;
  * - paused (covered, fans off) and missing hours: no change.
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
- * dry: the supplemental-heat strategy of model.md §6.
+ * dry: the supplemental-heat strategy of docs/model.md §8.
  */
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'

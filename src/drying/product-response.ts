@@ -5,7 +5,7 @@
  * science is the product room's (isotherm-models.ts, kinetics-models.ts, diffusion.ts); this file only
  * adapts it to per-hour columns: Page-form parameters MR(t) = exp(−k·tⁿ) from product/drying-rate.ts
  * (Lewis, Henderson–Pabis and first-term diffusion have n = 1), stepped by equivalent time,
- * t_eq = (−ln MR / k)^(1/n), MR' = exp(−k·(t_eq + Δt)ⁿ) (drying-science.md §2.1); Thompson's corn
+ * t_eq = (−ln MR / k)^(1/n), MR' = exp(−k·(t_eq + Δt)ⁿ) (docs/model.md §7); Thompson's corn
  * equation is stepped in its own equivalent time.
  */
 import { power } from '../physics/power.ts'

@@ -1,6 +1,6 @@
 /**
  * @module drying/supplemental-heat
- * Heat needed to reach the target moisture by a deadline (model.md §6): use the method's own (ambient or
+ * Heat needed to reach the target moisture by a deadline (docs/model.md §8): use the method's own (ambient or
  * solar) air in every hour it dries, and a backup forced-air dryer with heated intake air in every other
  * hour. If that still misses the deadline, heat every hour. The heater raises the intake air at constant
  * humidity ratio to the temperature at which it dries (target RH), so Q = ṁ·(h_heated − h_ambient),

@@ -38,7 +38,7 @@ const MS_PER_HOUR = 3_600_000
 /** Longest series accepted [h]: 100 years. Guards against one stray year turning into a huge grid. */
 export const MAX_SERIES_HOURS = 100 * 8784
 
-/** Raw numbers that data sources use for "missing" (reference §1 pitfall 8: −99, −999, −9999 and the EPW codes). */
+/** Raw numbers that data sources use for "missing": −99, −999, −9999 and their variants (common practice in station exports, no source) and the EPW field codes (EPW data dictionary); see docs/weather.md. */
 export const MISSING_CODES = new Set([
   -99999, -9999.9, -9999, -999.9, -999, -99.9, -99, 99.9, 999, 999.9, 9999, 9999.9, 99999, 999999,
 ])

@@ -23,8 +23,8 @@ export interface HourGrid {
 
 /**
  * Valid ranges in series units. Dry bulb, dew point, RH, pressure and wind: EPW data dictionary
- * field ranges (EnergyPlus Auxiliary Programs, "Data Field Descriptions"), as summarised in the
- * project's weather-file reference §3. Irradiance: 1500 W/m² as an hourly mean is above the solar
+ * field ranges (EnergyPlus Auxiliary Programs, "Data Field Descriptions"); see docs/weather.md.
+ * Irradiance: 1500 W/m² as an hourly mean is above the solar
  * constant (1361 W/m², Kopp & Lean 2011) with margin. Rain: 305 mm in one hour exceeds the world
  * record (WMO archive, about 305 mm in 42 min, Holt, Missouri 1947; from memory). Cloud: 0–100 %.
  */

@@ -5,7 +5,7 @@
  *   physics/power.ts (exp/log), so Node and Workers give the same bits;
  * - no `node:` imports.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs'
+import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs'
 import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 
@@ -72,6 +72,27 @@ describe('core rules (DEVELOPERS.md)', () => {
   })
   it('no node: imports in the core', () => {
     const found = files.filter((f) => /from\s+['"]node:/.test(readFileSync(f, 'utf8')))
+    expect(found).toEqual([])
+  })
+})
+
+describe('sources cited in src/ can be followed', () => {
+  it('every .md file that a source file names is in this repository; no notes outside it are cited', () => {
+    const found: string[] = []
+    const all = (dir: string): string[] =>
+      readdirSync(dir).flatMap((name) => {
+        const path = join(dir, name)
+        return statSync(path).isDirectory() ? all(path) : name.endsWith('.ts') ? [path] : []
+      })
+    for (const f of all('src')) {
+      const text = readFileSync(f, 'utf8')
+      for (const m of text.matchAll(/[\w./-]*\b[\w-]+\.md\b/g)) {
+        const path = m[0].replace(/^\.\.?\//, '')
+        if (!existsSync(path)) found.push(`${f}: ${m[0]}`)
+      }
+      for (const m of text.matchAll(/shared\/references|reference §\d|references\/[\w-]+/g))
+        found.push(`${f}: ${m[0]}`)
+    }
     expect(found).toEqual([])
   })
 })
