@@ -76,7 +76,7 @@ export function orderStatistic(values: Float64Array, k: number): number {
     const a = values[lo]
     const b = values[mid]
     const c = values[hi]
-    const pivot = a < b ? (b < c ? b : a < c ? c : a) : a < c ? a : b < c ? c : b
+    const pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c))
     let i = lo
     let j = hi
     while (i <= j) {

@@ -21,7 +21,7 @@ function coreFiles(dir = 'src'): string[] {
 }
 
 /** The code of a TypeScript file with comments, strings and template literals blanked (line breaks kept). */
-export function codeOnly(text: string): string {
+function codeOnly(text: string): string {
   let out = ''
   let i = 0
   const blank = (s: string) => s.replace(/[^\n]/g, ' ')
