@@ -57,8 +57,8 @@ export interface IdealDryerHeat {
 
 /**
  * Ideal heat per kg of water for one batch's air. Example (checked in test/analysis/energy/dryer-physics.test.ts):
- * outside 15 °C with W = 9 g/kg, drying at 60 °C, 101.325 kPa, free water → q = 46.0 kJ/kg, t* ≈ 27.6 °C,
- * φ ≈ 3.2 MJ per kg water. Throws RangeError when the drying air is not warmer than the outside air or the
+ * outside 15 °C with W = 9 g/kg, drying at 60 °C, 101.325 kPa, free water → q = 46.0 kJ/kg, t* ≈ 27.1 °C,
+ * ΔW* ≈ 13.8 g/kg, φ ≈ 3.33 MJ per kg water. Throws RangeError when the drying air is not warmer than the outside air or the
  * state is outside the moist-air relations' range.
  */
 export function idealDryerHeat(s: DryerAirState): IdealDryerHeat {

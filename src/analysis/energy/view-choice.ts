@@ -42,7 +42,7 @@ export function chooseAnswerView(
   const cvR = regression?.crossValidatedError ?? null
   const outsideText =
     monitored > 0 && outsideMonitored > 0
-      ? `; ${outsideMonitored} of ${monitored} monitored batches lie outside the baseline's weather, where the regression extrapolates`
+      ? `; ${outsideMonitored} of ${monitored} monitored batches ${outsideMonitored === 1 ? 'lies' : 'lie'} outside the baseline's weather, where the regression extrapolates`
       : ''
   if (cvP !== null && cvR !== null) {
     if (cvP <= PHYSICS_ERROR_TOLERANCE * cvR) {
