@@ -9,7 +9,10 @@
  * first faulty batch signals); "within 3" means a delay of at most 3. A false alarm is any signal, of more or
  * of less energy, on a monitored batch before the first faulty one (a log counts once).
  */
-import { buildDriftingSeasonLog, HARROWGATE_ELEVATION_M } from '../climate-demo/energy/drifting-season-model.ts'
+import {
+  buildDriftingSeasonLog,
+  HARROWGATE_ELEVATION_M,
+} from '../climate-demo/energy/drifting-season-model.ts'
 import type { ChartSet } from '../src/analysis/energy/chart-set.ts'
 import { analyzeEnergyLog, type EnergyChartAssessment } from '../src/analysis/energy/energy-chart.ts'
 
@@ -108,8 +111,7 @@ export function runScenario(o: ScenarioOptions): LogOutcome[] {
       falseAlarm,
       view: a.answer.view,
       namedBatch: cp ? cp.batchIndex + 1 : null,
-      intervalCovers:
-        cp !== null && step >= cp.intervalFrom.batchIndex && step <= cp.intervalTo.batchIndex,
+      intervalCovers: cp !== null && step >= cp.intervalFrom.batchIndex && step <= cp.intervalTo.batchIndex,
       firstLineNamesStep: stepId !== null && a.summary[0].includes(`from batch ${stepId} `),
     }
   })

@@ -75,7 +75,8 @@ const PROPANE_MJ_PER_L = (91_333 * 1055.056) / 1e6 / 3.785411784
  */
 function exhaustHumidityRatio(h: number, rhPct: number, wLow: number, wHigh: number, p: number): number {
   const rhAt = (w: number) =>
-    (100 * vaporPressureFromHumidityRatio(w, p)) / saturationVaporPressureLiquidKpa(dryBulbFromEnthalpyC(h, w))
+    (100 * vaporPressureFromHumidityRatio(w, p)) /
+    saturationVaporPressureLiquidKpa(dryBulbFromEnthalpyC(h, w))
   let lo = wLow
   let hi = wHigh
   for (let i = 0; i < 60; i++) {

@@ -108,7 +108,10 @@ function signalOf(
 }
 
 /** First monitored point with a signal of the given rules on `side` ('any' for both sides). */
-function firstPoint(set: Charts, side: 'above' | 'below' | 'any'): { point: number; side: 'above' | 'below' } | null {
+function firstPoint(
+  set: Charts,
+  side: 'above' | 'below' | 'any',
+): { point: number; side: 'above' | 'below' } | null {
   const start = set.individuals.baselineCount
   const all = [
     ...set.individuals.signals.map((s) => ({ point: s.index, side: s.side })),

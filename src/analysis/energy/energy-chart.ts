@@ -214,7 +214,9 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
   if (reg.view && reg.extrapolation) warnings.push(reg.extrapolation)
   const complete = batches.filter((b) => b.ambient !== null).length
   if (complete < n && complete >= baselineCount)
-    assumptions.push(`${n - complete} monitored batches lack outside air and are left off the normalised views`)
+    assumptions.push(
+      `${n - complete} monitored batches lack outside air and are left off the normalised views`,
+    )
   const baselineWeather = baselineWeatherRange(batches, baselineCount)
   const outside = outsideBaselineWeather(batches, baselineCount, baselineWeather)
   const monitoredWithAir = batches.filter((b) => b.index >= baselineCount && b.ambient !== null).length
@@ -224,7 +226,8 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     outside.filter(Boolean).length,
     monitoredWithAir,
   )
-  const chosen: ChartSet = choice.view === 'physics' ? physics! : choice.view === 'regression' ? adjusted! : raw
+  const chosen: ChartSet =
+    choice.view === 'physics' ? physics! : choice.view === 'regression' ? adjusted! : raw
   const answer = { ...choice, robustness: signalWithoutOutside(chosen, batches, outside) }
   const cusumDesign: CusumDesign = {
     k: CUSUM_K,

@@ -41,13 +41,19 @@ function describe(name: string, set: ChartSet): string {
     parts.push(`${name}: no signal of more energy use after the baseline.`)
     return parts.join(' ')
   }
-  const cusum = f.cusumRise ? ` The CUSUM signals the rise at batch ${f.cusumRise.batchId}.` : ' The CUSUM does not.'
+  const cusum = f.cusumRise
+    ? ` The CUSUM signals the rise at batch ${f.cusumRise.batchId}.`
+    : ' The CUSUM does not.'
   parts.push(`${name}: first signal of MORE energy per kg water at ${text(f.firstRiseSignal)}.${cusum}`)
   return parts.join(' ')
 }
 
 /** Size of the rise from the estimated change to the end: relative and in MJ per kg of water. */
-function riseSize(a: Partial, set: ChartSet, view: 'physics' | 'regression' | 'raw'): { rel: number; mj: number } {
+function riseSize(
+  a: Partial,
+  set: ChartSet,
+  view: 'physics' | 'regression' | 'raw',
+): { rel: number; mj: number } {
   const change = set.finding.estimatedChangeStart!
   const from = set.batchIndices.indexOf(change.batchIndex)
   const points = set.batchIndices.slice(from)
@@ -55,7 +61,11 @@ function riseSize(a: Partial, set: ChartSet, view: 'physics' | 'regression' | 'r
   if (view === 'physics') {
     const p = a.physics!
     const c = p.individuals.centerLine / 100
-    const mj = mean(points.map((b, j) => a.batches[b].specificEnergyMjPerKg - c * p.expectedSpecificEnergyMjPerKg[from + j]))
+    const mj = mean(
+      points.map(
+        (b, j) => a.batches[b].specificEnergyMjPerKg - c * p.expectedSpecificEnergyMjPerKg[from + j],
+      ),
+    )
     return { rel: (set.finding.shiftAfterChange as number) / p.individuals.centerLine, mj }
   }
   if (view === 'regression') {

@@ -36,7 +36,10 @@ export function outsideBaselineWeather(
     const t = b.ambient.dryBulbC
     const w = b.ambient.humidityRatioGPerKg
     return (
-      t < range.tempC[0] || t > range.tempC[1] || w < range.humidityRatioGPerKg[0] || w > range.humidityRatioGPerKg[1]
+      t < range.tempC[0] ||
+      t > range.tempC[1] ||
+      w < range.humidityRatioGPerKg[0] ||
+      w > range.humidityRatioGPerKg[1]
     )
   })
 }
@@ -76,7 +79,14 @@ export function signalWithoutOutside(
   if (insideFromChange === 0) return { ...common, verdict: 'cannot-check', firstSignalBatchId: null }
   const values = set.individuals.values.filter((_, i) => keep[i])
   const indices = set.batchIndices.filter((_, i) => keep[i])
-  const c = cusumChart(values, set.individuals.centerLine, set.individuals.sigma, base, set.cusum.k, set.cusum.h)
+  const c = cusumChart(
+    values,
+    set.individuals.centerLine,
+    set.individuals.sigma,
+    base,
+    set.cusum.k,
+    set.cusum.h,
+  )
   if (c.firstUpperSignal === null) return { ...common, verdict: 'does-not-stand', firstSignalBatchId: null }
   return { ...common, verdict: 'stands', firstSignalBatchId: batches[indices[c.firstUpperSignal]].batchId }
 }

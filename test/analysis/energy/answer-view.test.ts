@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest'
-import { buildDriftingSeasonLog, HARROWGATE_ELEVATION_M } from '../../../climate-demo/energy/drifting-season-model.ts'
+import {
+  buildDriftingSeasonLog,
+  HARROWGATE_ELEVATION_M,
+} from '../../../climate-demo/energy/drifting-season-model.ts'
 import { analyzeEnergyLog } from '../../../src/analysis/energy/energy-chart.ts'
 import { chooseAnswerView, PHYSICS_ERROR_TOLERANCE } from '../../../src/analysis/energy/view-choice.ts'
 import { signalWithoutOutside } from '../../../src/analysis/energy/weather-range.ts'
@@ -12,7 +15,9 @@ describe('which view the answer uses', () => {
     expect(chooseAnswerView(p(0.149), p(0.1), 0, 20).view).toBe('physics')
     const reg = chooseAnswerView(p(0.16), p(0.1), 12, 20)
     expect(reg.view).toBe('regression')
-    expect(reg.reason).toMatch(/markedly worse .*0\.160 against 0\.100 MJ\/kg water.*12 of 20 monitored batches lie outside/)
+    expect(reg.reason).toMatch(
+      /markedly worse .*0\.160 against 0\.100 MJ\/kg water.*12 of 20 monitored batches lie outside/,
+    )
     expect(chooseAnswerView(null, p(0.1), 0, 20).view).toBe('regression')
     expect(chooseAnswerView(p(0.1), null, 0, 20).view).toBe('physics')
     expect(chooseAnswerView(null, null, 0, 20).view).toBe('raw')
@@ -32,7 +37,10 @@ describe('a season that moves past the baseline’s weather (invented log, clima
       const t = b.ambient!.dryBulbC
       const w = b.ambient!.humidityRatioGPerKg
       const beyond =
-        t < range.tempC[0] || t > range.tempC[1] || w < range.humidityRatioGPerKg[0] || w > range.humidityRatioGPerKg[1]
+        t < range.tempC[0] ||
+        t > range.tempC[1] ||
+        w < range.humidityRatioGPerKg[0] ||
+        w > range.humidityRatioGPerKg[1]
       expect(outside[i]).toBe(beyond)
     })
     // Measured on this log: 17 of the 20 monitored batches (23, 24 and every one from 26 on).
@@ -42,7 +50,9 @@ describe('a season that moves past the baseline’s weather (invented log, clima
   })
   it('the answer uses the physics view and its first line names the first faulty batch', () => {
     expect(a.answer.view).toBe('physics')
-    expect(a.summary[0]).toMatch(/^Answer: the dryer uses more energy per kg of water than expected from batch W26-029 /)
+    expect(a.summary[0]).toMatch(
+      /^Answer: the dryer uses more energy per kg of water than expected from batch W26-029 /,
+    )
     expect(a.summary[0]).toMatch(/\d+ % likely the first such batch|over 99 % likely the first such batch/)
     expect(a.physics!.finding.changePoint!.batchId).toBe('W26-029')
   })
@@ -57,7 +67,13 @@ describe('a season that moves past the baseline’s weather (invented log, clima
     const cool = buildDriftingSeasonLog({ seed: 1, coolBatches: 40, batches: 40 })
     const b = analyzeEnergyLog(cool.csv, { elevationM: HARROWGATE_ELEVATION_M, baselineCount: 20 })
     // Measured: 1 monitored batch lies outside; without it the CUSUM still signals, one batch later.
-    expect(b.answer.robustness).toMatchObject({ outside: 1, verdict: 'stands', firstSignalBatchId: 'W26-031' })
-    expect(b.summary[1]).toMatch(/^1 of 20 monitored batches ran in weather .*the rise signal stands without them/)
+    expect(b.answer.robustness).toMatchObject({
+      outside: 1,
+      verdict: 'stands',
+      firstSignalBatchId: 'W26-031',
+    })
+    expect(b.summary[1]).toMatch(
+      /^1 of 20 monitored batches ran in weather .*the rise signal stands without them/,
+    )
   })
 })

@@ -17,7 +17,7 @@ function bruteForce(values: number[], mu: number, sigma: number, from: number, l
     const steps = 20000
     const span = 20 * sigma
     for (let j = 0; j <= steps; j++) {
-      const delta = (up ? 1 : -1) * (span * j) / steps
+      const delta = ((up ? 1 : -1) * (span * j)) / steps
       sum += (j === 0 || j === steps ? 0.5 : 1) * Math.exp(logLik(tau, delta) - logLik(0, 0))
     }
     post.push(sum)

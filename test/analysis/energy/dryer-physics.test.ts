@@ -2,7 +2,11 @@ import fc from 'fast-check'
 import psychrolib from 'psychrolib'
 import { describe, expect, it } from 'vitest'
 import { idealDryerHeat } from '../../../src/analysis/energy/dryer-physics.ts'
-import { expectedSpecificEnergy, fitPhysics, physicsLeverage } from '../../../src/analysis/energy/physics-fit.ts'
+import {
+  expectedSpecificEnergy,
+  fitPhysics,
+  physicsLeverage,
+} from '../../../src/analysis/energy/physics-fit.ts'
 import { latentHeatVaporizationMjPerKg } from '../../../src/physics/evaporation.ts'
 import { moistAirEnthalpyKjPerKg } from '../../../src/physics/moist-air.ts'
 
@@ -18,7 +22,8 @@ describe('ideal heat per kg of water of a convective dryer', () => {
     expect(r.heatedWetBulbC).toBeCloseTo(wetBulb, 2)
     const capacity = psychrolib.GetSatHumRatio(wetBulb, 101325) - 0.009
     expect(r.pickupCapacityKgPerKgAir).toBeCloseTo(capacity, 5)
-    const phi = (psychrolib.GetMoistAirEnthalpy(60, 0.009) - psychrolib.GetMoistAirEnthalpy(15, 0.009)) / capacity
+    const phi =
+      (psychrolib.GetMoistAirEnthalpy(60, 0.009) - psychrolib.GetMoistAirEnthalpy(15, 0.009)) / capacity
     expect(r.idealHeatMjPerKgWater).toBeCloseTo(phi / 1e6, 3)
     // t* ≈ 27.1 °C, ΔW* ≈ 13.8 g/kg: φ ≈ 3.33 MJ per kg of water, 1.36 times the latent heat at t*.
     expect(r.idealHeatMjPerKgWater).toBeCloseTo(3.333, 2)
@@ -37,7 +42,8 @@ describe('ideal heat per kg of water of a convective dryer', () => {
         fc.double({ min: 0.002, max: 0.015, noNaN: true }),
         (t, w) => {
           const at = (tC: number, wa: number) =>
-            idealDryerHeat({ ...base, outsideTempC: tC, outsideHumidityRatioKgPerKg: wa }).idealHeatMjPerKgWater
+            idealDryerHeat({ ...base, outsideTempC: tC, outsideHumidityRatioKgPerKg: wa })
+              .idealHeatMjPerKgWater
           expect(at(t, w)).toBeGreaterThan(at(t + 2, w))
           expect(at(t, w + 0.001)).toBeGreaterThan(at(t, w))
         },
