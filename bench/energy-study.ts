@@ -9,10 +9,7 @@
  * first faulty batch signals); "within 3" means a delay of at most 3. A false alarm is any signal, of more or
  * of less energy, on a monitored batch before the first faulty one (a log counts once).
  */
-import {
-  buildDriftingSeasonLog,
-  HARROWGATE_ELEVATION_M,
-} from '../climate-demo/energy/drifting-season-model.ts'
+import { buildDriftingSeasonLog, TESSABY_ELEVATION_M } from '../climate-demo/energy/drifting-season-model.ts'
 import type { ChartSet } from '../src/analysis/energy/chart-set.ts'
 import { analyzeEnergyLog, type EnergyChartAssessment } from '../src/analysis/energy/energy-chart.ts'
 
@@ -92,7 +89,7 @@ export function runScenario(o: ScenarioOptions): LogOutcome[] {
       stepFraction: o.stepFraction,
       noiseScale: o.noiseScale,
     })
-    const a = analyzeEnergyLog(csv, { baselineCount: STUDY_BASELINE, elevationM: HARROWGATE_ELEVATION_M })
+    const a = analyzeEnergyLog(csv, { baselineCount: STUDY_BASELINE, elevationM: TESSABY_ELEVATION_M })
     const step = o.stepBatch === null ? Number.POSITIVE_INFINITY : o.stepBatch - 1
     const delay = {} as Record<MethodId, number | null>
     const falseAlarm = {} as Record<MethodId, boolean>

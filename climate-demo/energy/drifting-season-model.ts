@@ -1,6 +1,6 @@
 /**
  * @module climate-demo/energy/drifting-season-model
- * INVENTED batch logs of a propane-fired batch grain dryer drying wheat at an invented farm, Harrowgate
+ * INVENTED batch logs of a propane-fired batch grain dryer drying wheat at an invented farm, Tessaby
  * Flats, over one early summer: a baseline in cool, humid weather, then warmer and drier weather that
  * drifts beyond anything the baseline saw, and (optionally) a step rise in fuel per kg of water from a
  * known batch (an invented fault: a fouled heat exchanger). Used by the detection study
@@ -55,8 +55,10 @@ export interface DriftingSeasonBatch {
   loggedSpecificEnergyMjPerKg: number
 }
 
+/** Seed of the committed demo log tessaby-wheat-2026.csv (the first of the detection study's ten seeds). */
+export const TESSABY_DEMO_SEED = 1
 /** Site elevation [m] of the invented farm (sets the air pressure). */
-export const HARROWGATE_ELEVATION_M = 350
+export const TESSABY_ELEVATION_M = 350
 const DRYING_TEMP_C = 60
 const FAN_FLOW_M3_PER_S = 6
 const EXHAUST_RH_PCT = 70
@@ -105,9 +107,9 @@ export function buildDriftingSeasonLog(options: DriftingSeasonOptions): {
   const rX = randomStream(seed, 'drift/exhaust')
   const rM = randomStream(seed, 'drift/meter')
   const rS = randomStream(seed, 'drift/schedule')
-  const p = standardPressureKpaAtElevation(HARROWGATE_ELEVATION_M)
+  const p = standardPressureKpaAtElevation(TESSABY_ELEVATION_M)
   const lines = [
-    '# INVENTED data (dryhours climate-demo/energy/drifting-season-model.ts): propane batch grain dryer, wheat, Harrowgate Flats.',
+    '# INVENTED data (dryhours climate-demo/energy/drifting-season-model.ts): propane batch grain dryer, wheat, Tessaby Flats.',
     `# seed ${seed}; cool humid batches 1-${cool}, then warmer and drier; ${stepBatch === null ? 'no fault' : `fault (+${(100 * step).toFixed(1)} % fuel per kg water) from batch ${stepBatch}`}.`,
     'batch_id,start,duration_h,fresh_mass_kg,final_mass_kg,fuel_amount,fuel_unit,fuel,drying_temp_c,ambient_temp_c,ambient_rh_pct',
   ]

@@ -1,7 +1,9 @@
+import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import {
   buildDriftingSeasonLog,
-  HARROWGATE_ELEVATION_M,
+  TESSABY_DEMO_SEED,
+  TESSABY_ELEVATION_M,
 } from '../../../climate-demo/energy/drifting-season-model.ts'
 import { analyzeEnergyLog } from '../../../src/analysis/energy/energy-chart.ts'
 import { chooseAnswerView, PHYSICS_ERROR_TOLERANCE } from '../../../src/analysis/energy/view-choice.ts'
@@ -26,8 +28,15 @@ describe('which view the answer uses', () => {
 
 describe('a season that moves past the baseline’s weather (invented log, climate-demo/energy/drifting-season-model.ts)', () => {
   // Seed 1 of the study's layout: 20 cool, humid baseline batches, then warmer and drier, +7 % from batch 29.
-  const { csv, truth } = buildDriftingSeasonLog({ seed: 1 })
-  const a = analyzeEnergyLog(csv, { elevationM: HARROWGATE_ELEVATION_M })
+  const { csv, truth } = buildDriftingSeasonLog({ seed: TESSABY_DEMO_SEED })
+  const a = analyzeEnergyLog(csv, { elevationM: TESSABY_ELEVATION_M })
+  it('is the committed demo log climate-demo/energy/tessaby-wheat-2026.csv, byte for byte', () => {
+    const committed = readFileSync(
+      new URL('../../../climate-demo/energy/tessaby-wheat-2026.csv', import.meta.url),
+      'utf8',
+    )
+    expect(committed).toBe(csv)
+  })
   it('marks the monitored batches whose weather the baseline never saw', () => {
     const outside = a.outsideBaselineWeather
     expect(outside.slice(0, 20).every((o) => !o)).toBe(true)
@@ -65,7 +74,7 @@ describe('a season that moves past the baseline’s weather (invented log, clima
   it('re-checks the signal without those batches: in a season that stays cool the signal stands', () => {
     // The same seed without the warm drift (every batch cool and humid).
     const cool = buildDriftingSeasonLog({ seed: 1, coolBatches: 40, batches: 40 })
-    const b = analyzeEnergyLog(cool.csv, { elevationM: HARROWGATE_ELEVATION_M, baselineCount: 20 })
+    const b = analyzeEnergyLog(cool.csv, { elevationM: TESSABY_ELEVATION_M, baselineCount: 20 })
     // Measured: 1 monitored batch lies outside; without it the CUSUM still signals, one batch later.
     expect(b.answer.robustness).toMatchObject({
       outside: 1,
