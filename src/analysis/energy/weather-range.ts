@@ -17,11 +17,13 @@ export interface WeatherRange {
 export function baselineWeatherRange(batches: BatchEnergy[], baselineCount: number): WeatherRange | null {
   const base = batches.filter((b) => b.index < baselineCount && b.ambient !== null)
   if (base.length === 0) return null
-  const t = base.map((b) => b.ambient!.dryBulbC)
-  const w = base.map((b) => b.ambient!.humidityRatioGPerKg)
+  const range = (xs: number[]): [number, number] => [
+    xs.reduce((m, x) => Math.min(m, x), Number.POSITIVE_INFINITY),
+    xs.reduce((m, x) => Math.max(m, x), Number.NEGATIVE_INFINITY),
+  ]
   return {
-    tempC: [Math.min(...t), Math.max(...t)],
-    humidityRatioGPerKg: [Math.min(...w), Math.max(...w)],
+    tempC: range(base.map((b) => b.ambient!.dryBulbC)),
+    humidityRatioGPerKg: range(base.map((b) => b.ambient!.humidityRatioGPerKg)),
   }
 }
 

@@ -121,6 +121,7 @@ function chartFigures(
     }),
   )
   const mrValues = ind.movingRanges.slice(1) as number[]
+  const mrSignals = new Set(ind.movingRangeSignals)
   figures.push(
     figureHtml({
       id: `${prefix}${what.key}-moving-range`,
@@ -133,7 +134,7 @@ function chartFigures(
         points: mrValues.map((v, i) => ({
           label: labels[i + 1],
           value: v,
-          rules: ind.movingRangeSignals.includes(i + 1) ? ['MR above D4·MR̄'] : [],
+          rules: mrSignals.has(i + 1) ? ['MR above D4·MR̄'] : [],
         })),
         baselineCount: baseline - 1,
         centerLine: ind.meanMovingRange,
@@ -155,6 +156,9 @@ function chartFigures(
   )
   const e = set.ewma
   const ewmaFirst = e.firstMonitoringSignal
+  const ewmaRules = new Map<number, string[]>()
+  for (const sig of e.signals)
+    ewmaRules.set(sig.index, [...(ewmaRules.get(sig.index) ?? []), signalLabel('EWMA', sig.side)])
   figures.push(
     figureHtml({
       id: `${prefix}${what.key}-ewma`,
@@ -167,7 +171,7 @@ function chartFigures(
         points: e.ewma.map((v, i) => ({
           label: labels[i],
           value: v,
-          rules: e.signals.filter((s) => s.index === i).map((s) => signalLabel('EWMA', s.side)),
+          rules: ewmaRules.get(i) ?? [],
           outside: outside[i],
         })),
         baselineCount: baseline,
@@ -190,6 +194,8 @@ function chartFigures(
   )
   const c = set.cusum
   const f = set.finding
+  const cusumUp = new Set(c.signals.filter((s) => s.side === 'above').map((s) => s.index))
+  const cusumDown = new Set(c.signals.filter((s) => s.side === 'below').map((s) => s.index))
   const cusumText = `${f.cusumRise ? `the upper sum first crosses h at batch ${f.cusumRise.batchId} (more energy)` : 'the upper sum stays below h after the baseline'}; ${f.cusumFall ? `the lower sum first crosses h at batch ${f.cusumFall.batchId} (less energy)` : 'the lower sum stays below h'}.`
   figures.push(
     figureHtml({
@@ -212,9 +218,7 @@ function chartFigures(
         second: {
           values: c.lower.map((v) => (v === 0 ? 0 : -v)),
           label: '−C⁻ (less energy)',
-          rules: c.lower.map((_, i) =>
-            c.signals.some((s) => s.index === i && s.side === 'below') ? [signalLabel('CUSUM', 'below')] : [],
-          ),
+          rules: c.lower.map((_, i) => (cusumDown.has(i) ? [signalLabel('CUSUM', 'below')] : [])),
         },
         baselineCount: baseline,
         centerLine: 0,
