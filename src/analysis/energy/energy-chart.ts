@@ -210,6 +210,12 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
         `the physics fit gives an overall efficiency of ${(100 * phys.view.fit.efficiency).toFixed(0)} %, above what a dryer can reach: check drying_temp_c (or --drying-temp) and the energy figures`,
       )
     }
+    const assumed = log.batches.filter((b) => b.dryingTempC === null).length
+    if (assumed > 0 && options.dryingTempC === undefined) {
+      warnings.push(
+        `the physics view takes the drying-air temperature as ${dryingTempC} °C (the default) for ${assumed} batches: the expected heat depends on it, so give drying_temp_c in the log or --drying-temp`,
+      )
+    }
   }
   if (reg.view && reg.extrapolation) warnings.push(reg.extrapolation)
   const complete = batches.filter((b) => b.ambient !== null).length

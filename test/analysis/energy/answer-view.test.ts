@@ -85,4 +85,22 @@ describe('a season that moves past the baseline’s weather (invented log, clima
       /^1 of 20 monitored batches ran in weather .*the rise signal stands without them/,
     )
   })
+  it('warns when the physics view has to assume the drying-air temperature', () => {
+    expect(a.warnings.some((w) => /takes the drying-air temperature/.test(w))).toBe(false)
+    const withoutTemp = csv
+      .split('\n')
+      .map((l) =>
+        l.startsWith('#') || l === ''
+          ? l
+          : l
+              .split(',')
+              .filter((_, j) => j !== 8)
+              .join(','),
+      )
+      .join('\n')
+    const b = analyzeEnergyLog(withoutTemp, { elevationM: TESSABY_ELEVATION_M })
+    expect(b.warnings).toContain(
+      'the physics view takes the drying-air temperature as 60 °C (the default) for 40 batches: the expected heat depends on it, so give drying_temp_c in the log or --drying-temp',
+    )
+  })
 })
