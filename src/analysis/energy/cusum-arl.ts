@@ -6,9 +6,10 @@
  *   L(z) = 1 + L(0)·Φ(k − z − μ) + ∫₀ʰ L(y)·φ(y − z + k − μ) dy, solved by the Nyström method on
  *   Gauss–Legendre nodes (Goel & Wu 1971, Technometrics 13:221; Vance 1986, J. Quality Technology 18:189);
  * - two-sided ARL from the one-sided ones, 1/ARL = 1/ARL⁺ + 1/ARL⁻ (Lucas & Crosier 1982,
- *   Technometrics 24:199; Montgomery, *Introduction to Statistical Quality Control*, CUSUM chapter);
+ *   Technometrics 24:199);
  * - Siegmund's approximation ARL ≈ (e^(−2Δb) + 2Δb − 1)/(2Δ²), Δ = μ − k, b = h + 1.166 (Siegmund 1985,
- *   *Sequential Analysis*, Springer; as given by Montgomery, read in a secondary copy).
+ *   *Sequential Analysis*, Springer; read in a secondary copy, an R implementation that cites Montgomery's
+ *   pages 416–417 for it; neither book read here).
  * μ is the shift of the mean in σ units. Checked against Lucas & Crosier (1982) Table 1 (two-sided, k = 0.5,
  * h = 4) in test/analysis/energy/cusum.test.ts.
  */

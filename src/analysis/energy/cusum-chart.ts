@@ -3,22 +3,24 @@
  * Tabular (Page) cumulative-sum chart for individual values, standardized: zᵢ = (xᵢ − μ₀)/σ,
  * C⁺ᵢ = max(0, zᵢ − k + C⁺ᵢ₋₁), C⁻ᵢ = max(0, −zᵢ − k + C⁻ᵢ₋₁), a signal when either exceeds h (Page 1954,
  * "Continuous inspection schemes", Biometrika 41:100; the tabular form and the standardized version as in
- * Montgomery, *Introduction to Statistical Quality Control*, CUSUM chapter). μ₀ and σ come from the
+ * Montgomery & Runger, *Applied Statistics and Probability for Engineers*, section 16-10). μ₀ and σ come from the
  * baseline (the individuals chart's x̄ and MR̄/d2). The sums run over the baseline (a phase I check) and
  * start again from zero at the first monitored batch, so the monitoring chart does not inherit the
  * baseline's wander.
  *
- * Design: k = 0.5 and h = 5, the usual choice for shifts of about one σ (Montgomery recommends h = 4 or 5
- * with k = 1/2). Its two-sided in-control average run length is about 465 batches and a 3σ step is found
+ * Design: k = 0.5 and h = 5, the usual choice for shifts of about one σ ("h = 4 or h = 5 and k = 1/2 will
+ * generally provide a CUSUM that has good ARL properties against a shift of about 1σ": Montgomery & Runger,
+ * *Applied Statistics and Probability for Engineers*, section 16-10, read in an online copy whose edition is
+ * not stated). Its two-sided in-control average run length is about 465 batches and a 3σ step is found
  * in about 2.6 batches on average, as computed by ./cusum-arl.ts, whose integral-equation values agree with
  * Lucas & Crosier (1982) Table 1 at h = 4 (test/analysis/energy/cusum.test.ts, docs/energy-charts.md).
  * h = 5 rather than 4 because μ₀ and σ are estimated from a short baseline (20 batches by default), which
  * shortens the real in-control run length below the table's.
  */
 
-/** Reference value k in σ units (Montgomery: k = 1/2 for a one-σ shift). */
+/** Reference value k in σ units (Montgomery & Runger, section 16-10: k = 1/2 for a one-σ shift). */
 export const CUSUM_K = 0.5
-/** Decision interval h in σ units (Montgomery: h = 4 or 5 with k = 1/2). */
+/** Decision interval h in σ units (Montgomery & Runger, section 16-10: h = 4 or 5 with k = 1/2). */
 export const CUSUM_H = 5
 
 export interface CusumChart {

@@ -261,7 +261,7 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     sources: [
       CONTROL_CHART_SOURCE,
       `CUSUM: tabular (Page 1954, Biometrika 41:100), standardized by the baseline's x̄ and MR̄/d2, k = ${CUSUM_K}, h = ${CUSUM_H} ` +
-        '(Montgomery, Introduction to Statistical Quality Control, CUSUM chapter); average run lengths by the integral equation ' +
+        '(Montgomery & Runger, Applied Statistics and Probability for Engineers, section 16-10); average run lengths by the integral equation ' +
         '(Goel & Wu 1971; Vance 1986), checked against Lucas & Crosier (1982, Technometrics 24:199) Table 1.',
       'Change point: posterior over the first shifted batch for one sustained step, flat prior on its size (Smith 1975, ' +
         'Biometrika 62:407); its mode is close to the maximum-likelihood estimate (Hinkley 1970, Biometrika 57:1).',

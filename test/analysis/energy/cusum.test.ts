@@ -31,7 +31,7 @@ describe('tabular CUSUM', () => {
     expect(c.signals.map((s) => s.index)).toEqual([2])
     expect(c.firstUpperSignal).toBeNull()
   })
-  it('uses k = 1/2 and h = 5 (Montgomery: h = 4 or 5 with k = 1/2)', () => {
+  it('uses k = 1/2 and h = 5 (Montgomery & Runger, section 16-10: h = 4 or 5 with k = 1/2)', () => {
     expect(CUSUM_K).toBe(0.5)
     expect(CUSUM_H).toBe(5)
   })
