@@ -12,9 +12,11 @@
  *    the air cools by the same sensible heat per kg of water taken up, so it can carry λ/(λ + q_s) of ΔW*.
  * 4. The air flow that carries the water removed is then m_w·(1 + q_s/λ)/ΔW* kg, and the ideal heat per
  *    kg of water φ = q·(1 + q_s/λ)/ΔW*: the latent and sorption heat of the water plus the sensible heat
- *    the saturated exhaust carries away (its temperature above outside) — the textbook energy balance of
- *    an adiabatic convective dryer (e.g. Brooker, Bakker-Arkema & Hall 1992, *Drying and Storage of
- *    Grains and Oilseeds*, ch. 3 psychrometrics of drying; from memory).
+ *    the saturated exhaust carries away (its temperature above outside) — the energy balance of an
+ *    adiabatic convective dryer. The same construction (heat the outside air, follow its adiabatic cooling
+ *    line to saturation for the air's potential pick-up, then allow a pick-up factor below 1) is the one of
+ *    Practical Action's technical brief "How to use the DRYIT semi-continuous tray dryer", p. 21 (read in
+ *    the online copy); here the pick-up factor is part of the fitted efficiency.
  *
  * A real dryer needs more: the exhaust leaves short of saturation, the heater loses flue heat, the casing
  * loses heat, the dryer mass warms up. ./physics-fit.ts fits one overall efficiency and one fixed loss per
