@@ -11,7 +11,7 @@
  *   correction as used by Thompson, T.L. (1972), "Temporary storage of high-moisture shelled corn using
  *   continuous aeration", *Trans. ASAE* 15(2):333–337. Constants as transcribed, with their Fahrenheit origin,
  *   in public research code that states it checked them against Steele's dissertation
- *   (confidence `published`, via that code).
+ *   (confidence `transcribed`: Steele's and Thompson's texts were not read for them).
  * - Reference curve: DML(θ) = 0.0883·[exp(0.006·θ) − 1] + 0.00102·θ [%], θ in hours (Thompson 1972, as rendered
  *   in the review literature and in the same code; Thompson's paper itself not read). Corroboration: it reaches
  *   0.5 % at θ = 230.9 h, and Steele (1967, p. 108) independently gives 230 h as the reference time for 0.5 %
@@ -149,7 +149,7 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         'Steele, J.L. 1967, Deterioration of damaged shelled corn as measured by carbon dioxide production, PhD dissertation, Iowa State University (multipliers, App. D; reference time 230 h for 0.5 % DML, p. 108); Thompson, T.L. 1972, Temporary storage of high-moisture shelled corn using continuous aeration, Trans. ASAE 15(2):333–337 (DML curve and warm-wet temperature correction; constants as transcribed in public research code that cites both)',
       equation:
         'DML = 0.0883·[exp(0.006·θ) − 1] + 0.00102·θ; θ = Σ Δt/(M_T·M_M·M_D); M_M = 0.103·[exp(455/M_db^1.53) − 0.00845·M_db + 1.558]; M_T = 32.3·exp(−3.48·T_F/60) [+ min(0.01(M_wb − 19), 0.09)·exp(0.61(T_F − 60)/60) above 60 °F and 19 % wb]; M_D = 2.08·exp(−0.0239·D)',
-      confidence: 'published',
+      confidence: 'transcribed',
     },
     measureName: 'dry-matter loss',
     measureUnit: '%',

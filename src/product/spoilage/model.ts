@@ -9,14 +9,18 @@
  * (for example to try another airflow) without copying.
  */
 
+import type { Confidence } from '../profile.ts'
+
 /**
- * How the model's numbers were obtained:
- * - `published`: read in the cited original (or in code that transcribes it and says where, said so);
- * - `secondary`: read only where a secondary text quotes the original (named); the original was not read;
- * - `memory`: recalled, not verified in a document;
- * - `common-practice`: a rule of thumb of the trade with no source: "common practice, no source".
+ * How the model's numbers were obtained, in the catalogue's levels (`src/product/profile.ts`):
+ * - `published`: read in the cited original;
+ * - `transcribed`: read in a secondary text (or public code) that quotes or transcribes the original; the
+ *   citation names both ("as quoted in …", "as transcribed in …"); the original was not read;
+ * - `fitted`: derived by dryhours from named published data;
+ * - `memory`: recalled or assumed, not verified in a document. A rule of thumb of the trade is `memory` and its
+ *   citation says "common practice, no source".
  */
-export type SpoilageConfidence = 'published' | 'secondary' | 'memory' | 'common-practice'
+export type SpoilageConfidence = Exclude<Confidence, 'user'>
 
 export interface SpoilageSource {
   /** Authors, year, title, journal or standard. */
