@@ -29,6 +29,7 @@ import {
   ESMAIILI_2014,
   HOSSAIN_BALA_2007,
   MEGHWAR_PJAR,
+  MORAES_2008_APPLE,
   NEWMAN_1996,
   OKSAR_2017,
   PAVKOV_2021,
@@ -256,7 +257,7 @@ export const appleSlices: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.12, 3, 0.97),
-      'GAB Xm0 0.12 chosen within the 0.107–0.168 recalled for Fuji apple at 50–70 °C (Moraes, Rosa & Pinto, not re-read); C = 3, K = 0.97 and no temperature term from memory; Kaymak-Ertekin & Gedik 2004 (LWT 37:429) give apple constants at 30–60 °C, not read',
+      `GAB Xm0 0.12 chosen from memory inside the 0.107–0.168 kg/kg db read for Fuji apple desorption at 50–70 °C in ${MORAES_2008_APPLE}; C = 3, K = 0.97 and no temperature term: from memory. The middle of the read range (0.1375) with these C and K would put dried apple at 21.0–23.7 % wb over aw 0.60–0.65, above the dried-fruit band of Beuchat 1981 (15–20 %, checked in the tests): C and K must be read before Xm0 is. Kaymak-Ertekin & Gedik 2004 (LWT 37:429) give apple constants at 30–60 °C, not read`,
       'memory',
       [30, 70],
       [10, 90],

@@ -89,3 +89,9 @@ export const SIMULADOR_SECAGEM =
 // Wheat
 export const GONELI_WHEAT =
   'Goneli A.L.D., Corrêa P.C., Resende O., Reis Neto S.A. n.d., Estudo da difusão de umidade em grãos de trigo durante a secagem (Study of moisture diffusion in wheat grain drying), Ciênc. Tecnol. Aliment. (SciELO Brazil; abstract read, authors on a document-sharing copy of the first page; the year is not shown on the copies read)'
+
+// Apple, fish
+export const MORAES_2008_APPLE =
+  'Moraes M.A., Rosa G.S., Pinto L.A.A. n.d., Moisture sorption isotherms and thermodynamic properties of apple Fuji and garlic (abstract in the FURG institutional repository, handle 1/6695; the year is not shown on the page read)'
+export const SABLANI_2001 =
+  'Sablani S.S., Myhara R.M., Al-Attabi Z.H., Al-Mugheiry M.M. 2001, Water sorption isotherms of freeze dried fish sardines, Drying Technol. 19(3-4):673–680 (abstract on the Sultan Qaboos University research portal)'
