@@ -21,6 +21,7 @@ import {
   sourced,
 } from './catalogue-helpers.ts'
 import {
+  ALAM_ISLAM_2015,
   BHONG_KALE_2020,
   CODEX_APRICOTS_VIA_SUMMARY,
   COSTA_FUJI_APPLE,
@@ -386,11 +387,17 @@ export const onionSlices: ProductProfile = {
   maxProductTempC: sourced(60, 'browning and pungency loss above about 60 °C; from memory', 'memory'),
   isotherm: {
     desorption: isotherm(
-      gab(0.07, 4, 0.95),
-      'GAB Xm0 0.07, C 4, K 0.95 and no temperature term: from memory (modified Halsey fits onion best at 30–50 °C, Viswanathan, Jayas & Hulasare 2003, Biosyst. Eng. 86:465, not re-read)',
+      gab(0.11, 4, 0.95),
+      'GAB C 4, K 0.95 and no temperature term: from memory (modified Halsey fits onion shreds best at 30–50 °C and 15–85 % RH, Viswanathan, Jayas & Hulasare 2003, Biosyst. Eng. 86:465, abstract read; its constants are not in the abstract)',
       'memory',
       [30, 50],
       [15, 85],
+      {
+        xm0: param(
+          `${ALAM_ISLAM_2015}: air-dried, untreated onion at room temperature (saturated salts, aw 0.11–0.93), GAB monolayer moisture 11.0 g/100 g dry matter (BET 9.8; vacuum-dried: GAB 8.2, BET 9.7)`,
+          'published',
+        ),
+      },
     ),
   },
   kinetics: kinetics(

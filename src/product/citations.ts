@@ -95,3 +95,5 @@ export const MORAES_2008_APPLE =
   'Moraes M.A., Rosa G.S., Pinto L.A.A. n.d., Moisture sorption isotherms and thermodynamic properties of apple Fuji and garlic (abstract in the FURG institutional repository, handle 1/6695; the year is not shown on the page read)'
 export const SABLANI_2001 =
   'Sablani S.S., Myhara R.M., Al-Attabi Z.H., Al-Mugheiry M.M. 2001, Water sorption isotherms of freeze dried fish sardines, Drying Technol. 19(3-4):673–680 (abstract on the Sultan Qaboos University research portal)'
+export const ALAM_ISLAM_2015 =
+  'Alam Md.M., Islam Md.N. 2015, Study on water sorption isotherm of summer onion, Bangladesh J. Agril. Res. 40(1):35–51 (abstract, on a document-sharing copy of the first page)'

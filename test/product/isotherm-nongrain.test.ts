@@ -62,6 +62,9 @@ describe('monolayer moistures read in abstracts (the GAB constant the abstract g
     // measured: 23.7 % wb at aw 0.65, 25 °C (the band allows 22 with its ±2 pt)
     expect(moistureWbPctFromDb(emcDb(mid, 25, 65))).toBeGreaterThan(22)
   })
+  it('onion: Xm 11.0 g/100 g dry matter for air-dried untreated onion (GAB; BET 9.8), Alam & Islam 2015, Bangladesh J. Agril. Res. 40:35', () => {
+    expect(xm0('onion-slices')).toBe(0.11)
+  })
   it('fish: Xm 4.94 % db (freeze-dried sardines, 25–50 °C, Sablani et al. 2001, Drying Technol. 19:673)', () => {
     expect(xm0('fish-fillets')).toBe(0.0494)
   })
