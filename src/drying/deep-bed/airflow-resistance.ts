@@ -64,6 +64,12 @@ export function bedPressureDropPa(
   return factor * pressureGradientPaPerM(constants, qM3PerSM2) * depthM
 }
 
+/**
+ * Default total efficiency of fan and motor (air power Q·ΔP over electrical power): 0.5.
+ * SOURCE PENDING
+ */
+export const DEFAULT_FAN_EFFICIENCY = 0.5
+
 /** Electrical power [W] a fan draws to move flow [m³/s] against static pressure [Pa] at total efficiency η. */
 export function fanPowerW(flowM3PerS: number, staticPressurePa: number, efficiency: number): number {
   if (!(efficiency > 0 && efficiency <= 1))
