@@ -321,6 +321,27 @@ function solveLayer(
   out[2] = balance.w1
 }
 
+/** Grain mass, airflow, static pressure and fan power of a bin (no weather needed). */
+export function binFan(
+  grain: DeepBedGrain,
+  setup: BinSetup,
+): { grainTonnes: number; airflowM3PerS: number; staticPressurePa: number; fanPowerW: number } {
+  const grainTonnes = (setup.floorAreaM2 * setup.depthM * grain.bulkDensityKgPerM3) / 1000
+  const airflowM3PerS = (setup.airflowM3PerMinPerT * grainTonnes) / 60
+  const staticPressurePa = bedPressureDropPa(
+    grain.airflowResistance,
+    airflowM3PerS / setup.floorAreaM2,
+    setup.depthM,
+    setup.resistanceFactor ?? BIN_PACKING_FACTOR,
+  )
+  const fanPowerWatts = fanPowerW(
+    airflowM3PerS,
+    staticPressurePa,
+    setup.fanEfficiency ?? DEFAULT_FAN_EFFICIENCY,
+  )
+  return { grainTonnes, airflowM3PerS, staticPressurePa, fanPowerW: fanPowerWatts }
+}
+
 function columnValue(col: ArrayLike<number> | number, i: number): number {
   return typeof col === 'number' ? col : col[i]
 }
@@ -364,16 +385,12 @@ export function simulateDeepBed(
   const efficiency = setup.fanEfficiency ?? DEFAULT_FAN_EFFICIENCY
   const heatRise = setup.heatRiseK ?? 0
   const fanHeatToAir = setup.fanHeatToAir !== false
-  const grainKg = setup.floorAreaM2 * setup.depthM * grain.bulkDensityKgPerM3
-  const tonnes = grainKg / 1000
-  const flowM3PerS = (setup.airflowM3PerMinPerT * tonnes) / 60
-  const staticPa = bedPressureDropPa(
-    grain.airflowResistance,
-    flowM3PerS / setup.floorAreaM2,
-    setup.depthM,
-    setup.resistanceFactor ?? BIN_PACKING_FACTOR,
-  )
-  const powerW = fanPowerW(flowM3PerS, staticPa, efficiency)
+  const {
+    grainTonnes: tonnes,
+    airflowM3PerS: flowM3PerS,
+    staticPressurePa: staticPa,
+    fanPowerW: powerW,
+  } = binFan(grain, setup)
   const m0 = setup.initialMoistureWbPct / (100 - setup.initialMoistureWbPct)
   const targetDb = setup.targetMoistureWbPct / (100 - setup.targetMoistureWbPct)
   const emcLimitDb =

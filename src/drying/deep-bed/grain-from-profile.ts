@@ -16,9 +16,32 @@ import type { DeepBedGrain } from './layer-model.ts'
  */
 export const GRAIN_DRY_MATTER_CP_KJ_PER_KG_K = 1.465
 
+const built = new WeakMap<ProductProfile, Map<string, DeepBedGrain>>()
+
+/**
+ * The deep-bed grain of a catalogue or user profile. The same profile and options give the same object, so the
+ * bin model's tables (`grain-tables.ts`) are built once per grain and process.
+ */
 export function deepBedGrainFromProfile(
   profile: ProductProfile,
   options: { bulkDensityKgPerM3?: number; resistanceKey?: string } = {},
+): DeepBedGrain {
+  const key = `${options.bulkDensityKgPerM3 ?? ''}|${options.resistanceKey ?? ''}`
+  let byOptions = built.get(profile)
+  if (!byOptions) {
+    byOptions = new Map()
+    built.set(profile, byOptions)
+  }
+  const cached = byOptions.get(key)
+  if (cached) return cached
+  const grain = buildGrain(profile, options)
+  byOptions.set(key, grain)
+  return grain
+}
+
+function buildGrain(
+  profile: ProductProfile,
+  options: { bulkDensityKgPerM3?: number; resistanceKey?: string },
 ): DeepBedGrain {
   const key = options.resistanceKey ?? profile.variantOf ?? profile.id
   const resistance = AIRFLOW_RESISTANCE[key]

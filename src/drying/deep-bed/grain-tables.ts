@@ -33,10 +33,10 @@ export const ERH_TABLE_GRID = {
 export const SORPTION_HEAT_TABLE_GRID = {
   tMinC: -20,
   tMaxC: 60,
-  tStepC: 1,
+  tStepC: 0.5,
   mMinDb: 0.02,
   mMaxDb: 0.6,
-  mStepDb: 0.002,
+  mStepDb: 0.001,
 } as const
 
 interface Grid {

@@ -21,7 +21,17 @@ const cornAirflow = (cfmPerBu: number) =>
   m3PerMinPerTonneFromCfmPerBu(cfmPerBu, BUSHEL_WEIGHT_KG['shelled-corn'])
 
 function steadyWeather(days: number, dryBulbC: number, rhPct: number) {
-  return Array.from({ length: days * 24 }, () => ({ dryBulbC, rhPct, pressureKpa: 101.325 }))
+  return {
+    dryBulbC: new Float64Array(days * 24).fill(dryBulbC),
+    relativeHumidityPct: new Float64Array(days * 24).fill(rhPct),
+    pressureKpa: 101.325,
+  }
+}
+
+function joinWeather(...parts: ReturnType<typeof steadyWeather>[]) {
+  const cat = (k: 'dryBulbC' | 'relativeHumidityPct') =>
+    Float64Array.from(parts.flatMap((p) => Array.from(p[k])))
+  return { dryBulbC: cat('dryBulbC'), relativeHumidityPct: cat('relativeHumidityPct'), pressureKpa: 101.325 }
 }
 
 function humidityRatio(tC: number, rhPct: number, p = 101.325) {
@@ -80,9 +90,10 @@ describe('natural-air bin drying, equilibrium layer model', () => {
       },
       steadyWeather(3, fToC(47), 70),
       grainDryMatterLossModel(),
+      { recordHourly: true },
     )
-    const h = r.hours[48]
-    const pickupGPerKg = 1000 * (humidityRatio(h.exitAirC, h.exitRhPct) - humidityRatio(fToC(47), 70))
+    const h = r.hourly!
+    const pickupGPerKg = 1000 * (humidityRatio(h.exitAirC[48], h.exitRhPct[48]) - humidityRatio(fToC(47), 70))
     expect(Math.abs(pickupGPerKg - 0.7) / 0.7).toBeLessThan(0.15)
   })
 
@@ -110,6 +121,8 @@ describe('natural-air bin drying, equilibrium layer model', () => {
     )
     const daysA = a.hoursUntilDry! / 24
     const daysB = b.hoursUntilDry! / 24
+    // the front reaches the top last: top dry and every layer dry coincide within an hour here
+    expect(Math.abs(a.hoursUntilTopDry! - a.hoursUntilDry!)).toBeLessThanOrEqual(1)
     expect(Math.abs(daysA - 50) / 50).toBeLessThan(0.2)
     expect(daysB).toBeGreaterThan(0.8 * 35)
     expect(daysB).toBeLessThan(1.2 * 40)
@@ -144,7 +157,7 @@ describe('natural-air bin drying, equilibrium layer model', () => {
   })
 
   it('conserves water: what the grain lost left with the air', () => {
-    const weather = [...steadyWeather(2, 18, 55), ...steadyWeather(1, 12, 92), ...steadyWeather(2, 22, 40)]
+    const weather = joinWeather(steadyWeather(2, 18, 55), steadyWeather(1, 12, 92), steadyWeather(2, 22, 40))
     const setup = {
       floorAreaM2: 20,
       depthM: 3,
@@ -154,14 +167,15 @@ describe('natural-air bin drying, equilibrium layer model', () => {
       targetMoistureWbPct: 15,
       fanHeatToAir: false,
     }
-    const r = simulateDeepBed(corn, setup, weather, grainDryMatterLossModel())
+    const r = simulateDeepBed(corn, setup, weather, grainDryMatterLossModel(), { recordHourly: true })
+    const hourly = r.hourly!
     let airWaterKg = 0
-    for (let h = 0; h < weather.length; h++) {
-      const w = weather[h]
-      const win = humidityRatio(w.dryBulbC, w.rhPct)
-      const v = (0.287042 * (w.dryBulbC + 273.15) * (1 + 1.607858 * win)) / 101.325
+    for (let h = 0; h < weather.dryBulbC.length; h++) {
+      const t = weather.dryBulbC[h]
+      const win = humidityRatio(t, weather.relativeHumidityPct[h])
+      const v = (0.287042 * (t + 273.15) * (1 + 1.607858 * win)) / 101.325
       const airKg = (r.airflowM3PerS * 3600) / v
-      airWaterKg += airKg * (humidityRatio(r.hours[h].exitAirC, r.hours[h].exitRhPct) - win)
+      airWaterKg += airKg * (humidityRatio(hourly.exitAirC[h], hourly.exitRhPct[h]) - win)
     }
     expect(airWaterKg / r.grainTonnes).toBeCloseTo(r.waterRemovedKgPerT, 0)
   })
@@ -188,8 +202,9 @@ describe('natural-air bin drying, equilibrium layer model', () => {
     )
     expect(never.heaterEnergyKwhPerT).toBe(0)
     expect(plain.fanHeatRiseK).toBeGreaterThan(0)
+    expect(plain.fanHours).toBe(weather.dryBulbC.length)
     expect(plain.fanEnergyKwhPerT).toBeCloseTo(
-      (plain.fanPowerW * weather.length) / 1000 / plain.grainTonnes,
+      (plain.fanPowerW * weather.dryBulbC.length) / 1000 / plain.grainTonnes,
       9,
     )
   })
@@ -208,8 +223,9 @@ describe('natural-air bin drying, equilibrium layer model', () => {
       },
       steadyWeather(20, 15, 50),
       grainDryMatterLossModel(),
+      { recordHourly: true, profileEveryHours: 24 },
     )
-    const fronts = r.hours.map((h) => h.dryingFrontM)
+    const fronts = Array.from(r.hourly!.dryingFrontM)
     for (let i = 1; i < fronts.length; i++) expect(fronts[i]).toBeGreaterThanOrEqual(fronts[i - 1])
     expect(fronts[24 * 3]).toBeGreaterThan(0)
     expect(fronts[24 * 3]).toBeLessThan(4)
