@@ -12,6 +12,7 @@ import {
 import { saturationVaporPressureKpa } from '../../../src/physics/saturation.ts'
 import { productById } from '../../../src/product/catalogue.ts'
 import { grainDryMatterLossModel } from '../../../src/product/spoilage/index.ts'
+import { steadyWeather } from './bin-weather.ts'
 
 const FT = 0.3048
 const IN_WATER_PA = 249.0889 // 1 inch of water column at 4 °C (conventional, 249.0889 Pa)
@@ -19,14 +20,6 @@ const fToC = (f: number) => ((f - 32) * 5) / 9
 const corn = deepBedGrainFromProfile(productById('shelled-corn'))
 const cornAirflow = (cfmPerBu: number) =>
   m3PerMinPerTonneFromCfmPerBu(cfmPerBu, BUSHEL_WEIGHT_KG['shelled-corn'])
-
-function steadyWeather(days: number, dryBulbC: number, rhPct: number) {
-  return {
-    dryBulbC: new Float64Array(days * 24).fill(dryBulbC),
-    relativeHumidityPct: new Float64Array(days * 24).fill(rhPct),
-    pressureKpa: 101.325,
-  }
-}
 
 function joinWeather(...parts: ReturnType<typeof steadyWeather>[]) {
   const cat = (k: 'dryBulbC' | 'relativeHumidityPct') =>
