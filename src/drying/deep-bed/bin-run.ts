@@ -148,177 +148,213 @@ function rhPct(tC: number, w: number, p: number, scratch: Float64Array): number 
   return (100 * ((p * w) / (EPS + w))) / pwsKpa(tC, scratch)
 }
 
-/**
- * One layer's balance for one sub-step, as a function of the layer's new moisture m1: the air (dry mass ma,
- * entering at airT, airW) leaves in equilibrium with the grain (dry mass md, at m0, tg). Water and enthalpy
- * are conserved (see `layer-model.ts`); the exit state is linear (humidity) and linear-fractional (temperature)
- * in m1, and the imbalance g(m1) = exit RH − grain ERH at the exit temperature [% RH] falls with m1.
- */
-class LayerBalance {
-  private readonly s = new Float64Array(2)
-  private readonly e = new Float64Array(2)
-  // per-solve constants
-  private m0 = 0
-  private airW = 0
-  private r = 0
-  private eIn = 0
-  private mdq = 0
-  private ma = 0
-  private md = 0
-  private mdCd = 0
-  private mdCw = 0
-  private p = 0
-  /** Result of the last `evaluate`: exit humidity ratio, exit temperature, dg/dm1. */
-  w1 = 0
-  t1 = 0
-  slope = 0
-
-  constructor(private readonly tables: GrainTables) {}
-
-  set(
-    cd: number,
-    airT: number,
-    airW: number,
-    p: number,
-    m0: number,
-    tg: number,
-    ma: number,
-    md: number,
-  ): void {
-    const q = this.tables.netSorptionHeatKjPerKg(tg, m0)
-    this.m0 = m0
-    this.airW = airW
-    this.r = md / ma
-    this.eIn =
-      ma * (CP_DRY_AIR * airT + airW * (H_FG0 + CP_VAPOUR * airT)) +
-      md * (cd + WATER_CP_KJ_PER_KG_K * m0) * tg
-    this.mdq = md * q
-    this.ma = ma
-    this.md = md
-    this.mdCd = md * cd
-    this.mdCw = md * WATER_CP_KJ_PER_KG_K
-    this.p = p
-  }
-
-  /** g(m1) [% RH]; sets w1, t1 and slope = dg/dm1. */
-  evaluate(m1: number): number {
-    const dm = this.m0 - m1
-    const w1 = this.airW + this.r * dm
-    const num = this.eIn - this.mdq * dm - this.ma * w1 * H_FG0
-    const den = this.ma * (CP_DRY_AIR + CP_VAPOUR * w1) + this.mdCd + this.mdCw * m1
-    const t1 = num / den
-    const dNum = this.mdq + this.md * H_FG0
-    const dDen = this.md * (WATER_CP_KJ_PER_KG_K - CP_VAPOUR)
-    const dT = (dNum - t1 * dDen) / den
-    const pws = pwsKpa(t1, this.s)
-    const p = this.p
-    const pv = (p * w1) / (EPS + w1)
-    const rh = (100 * pv) / pws
-    const dPvDw = (p * EPS) / ((EPS + w1) * (EPS + w1))
-    const dRh = ((100 * dPvDw) / pws) * -this.r - ((rh * this.s[0]) / pws) * dT
-    const erh = this.tables.erhPctWithSlopes(t1, m1, this.e)
-    this.w1 = w1
-    this.t1 = t1
-    this.slope = dRh - (this.e[0] * dT + this.e[1])
-    return rh - erh
-  }
-}
-
 /** Smallest moisture a layer is taken to [kg/kg db] (as in the reference). */
 const M_FLOOR_DB = 0.005
 /**
- * The solver stops after a Newton step shorter than {@link NEWTON_STEP_TOL} [kg/kg db] (Newton's error after a
- * step δ is about (g''/2g')·δ², here below 1e-11), when the imbalance is below {@link SOLVER_F_TOL} [% RH], or
- * when the bracket is narrower than {@link SOLVER_X_TOL}: all below the reference's bisection tolerance (1e-7).
+ * The solver stops when Newton's next step is shorter than {@link NEWTON_STEP_TOL} [kg/kg db] (it takes that
+ * step; the error left is about (g''/2g')·δ², below 1e-10 here), when the imbalance is below
+ * {@link SOLVER_F_TOL} [% RH], or when the bracket is narrower than {@link SOLVER_X_TOL}: all below the
+ * reference's bisection tolerance (1e-7).
  */
 const NEWTON_STEP_TOL = 1e-6
 const SOLVER_X_TOL = 1e-10
 const SOLVER_F_TOL = 1e-9
 
 /**
- * Solves one layer for one sub-step by Newton's method from the layer's moisture, kept inside the bracket the
- * signs of g give (bisection when a step leaves it); writes the new moisture, temperature (= exit air) and exit
- * humidity ratio into `out[0..2]`.
+ * One layer's balance for one sub-step, as a function of the layer's new moisture m1: the air (dry mass ma,
+ * entering at airT, airW) leaves in equilibrium with the grain (dry mass md, at m0, tg). Water and enthalpy
+ * are conserved (see `layer-model.ts`); the exit state is linear (humidity) and linear-fractional (temperature)
+ * in m1, and the imbalance g(m1) = exit RH − grain ERH at the exit temperature [% RH] falls with m1.
+ *
+ * For speed the per-hour constants are fields and the layer state is read from and written to typed arrays, so
+ * no number crosses a call boundary boxed in the loop over layers.
  */
-function solveLayer(
-  balance: LayerBalance,
-  grain: DeepBedGrain,
-  cd: number,
-  airT: number,
-  airW: number,
-  p: number,
-  m0: number,
-  tg: number,
-  ma: number,
-  md: number,
-  dtH: number,
-  scratch: Float64Array,
-  out: Float64Array,
-): void {
-  balance.set(cd, airT, airW, p, m0, tg, ma, md)
-  const g0 = balance.evaluate(m0)
-  let m1 = m0
-  if (Math.abs(g0) > SOLVER_F_TOL) {
-    // bracket [a, b] with g(a) > 0 > g(b); an end not yet evaluated is marked by its g = NaN
-    let a: number
-    let b: number
-    let ga: number
-    let gb: number
-    if (g0 < 0) {
-      // drying; the air can take up at most what saturation at the warmer of air and grain allows
-      const pws = pwsKpa(Math.max(airT, tg), scratch)
-      const wSat = pws < p ? (EPS * pws) / (p - pws) : airW + 1
-      a = Math.max(M_FLOOR_DB, m0 - (Math.max(1e-6, wSat - airW) * ma) / md)
-      ga = Number.NaN
-      b = m0
-      gb = g0
-    } else {
-      // wetting: the air cannot give more water than it carries
-      a = m0
-      ga = g0
-      b = m0 + ((airW * ma) / md) * 0.999999
-      gb = Number.NaN
-    }
-    let g = g0
+class LayerSolver {
+  private readonly s = new Float64Array(1)
+  private readonly e = new Float64Array(2)
+  private readonly md: number
+  private readonly mdCd: number
+  private readonly mdCw: number
+  private readonly cd: number
+  // the ERH table, for reading it inline
+  private readonly erhValues: Float64Array
+  private readonly nM: number
+  private readonly tMin: number
+  private readonly mMin: number
+  private readonly invDt: number
+  private readonly invDm: number
+  private readonly tSpan: number
+  private readonly mSpan: number
+  // per hour
+  private p = 0
+  private ma = 0
+  private r = 0
+  private dtH = 0
+
+  constructor(
+    private readonly tables: GrainTables,
+    private readonly grain: DeepBedGrain,
+    dryMatterPerLayerKgPerM2: number,
+  ) {
+    this.cd = grain.dryMatterCpKjPerKgK
+    this.md = dryMatterPerLayerKgPerM2
+    this.mdCd = this.md * this.cd
+    this.mdCw = this.md * WATER_CP_KJ_PER_KG_K
+    const t = tables.erh
+    this.erhValues = t.values
+    this.nM = t.nM
+    this.tMin = t.tMin
+    this.mMin = t.mMin
+    this.invDt = t.invDt
+    this.invDm = t.invDm
+    this.tSpan = t.tSpan
+    this.mSpan = t.mSpan
+  }
+
+  /** Sets the hour's pressure [kPa], dry air per sub-step [kg/m²] and sub-step [h]. */
+  startHour(p: number, maPerSubstep: number, dtH: number): void {
+    this.p = p
+    this.ma = maPerSubstep
+    this.r = this.md / maPerSubstep
+    this.dtH = dtH
+  }
+
+  /**
+   * Solves layer `i` for one sub-step with the air in `air` ([°C, kg/kg] entering): updates moisture[i] and
+   * temp[i] and leaves the exit air in `air`. Newton's method on g(m1) from the layer's moisture, kept inside
+   * the bracket the signs of g give (bisection when a step leaves it).
+   *
+   * Written as one function, the evaluation of g and its slope and the table reads inline: numbers passed to or
+   * returned from a call the compiler does not inline are boxed, and this runs some ten million times per
+   * assessment.
+   */
+  solve(i: number, moisture: Float64Array, temp: Float64Array, air: Float64Array): void {
+    const airT = air[0]
+    const airW = air[1]
+    const m0 = moisture[i]
+    const tg = temp[i]
+    const md = this.md
+    const ma = this.ma
+    const r = this.r
+    const p = this.p
+    const mdCd = this.mdCd
+    const mdCw = this.mdCw
+    const eIn =
+      ma * (CP_DRY_AIR * airT + airW * (H_FG0 + CP_VAPOUR * airT)) +
+      md * (this.cd + WATER_CP_KJ_PER_KG_K * m0) * tg
+    const mdq = md * this.tables.netSorptionHeatKjPerKg(tg, m0)
+    // d(numerator)/dm1 and d(denominator)/dm1 of the exit temperature t1 = num/den
+    const dNum = mdq + md * H_FG0
+    const dDen = md * (WATER_CP_KJ_PER_KG_K - CP_VAPOUR)
+    const values = this.erhValues
+    const nM = this.nM
+    // bracket [a, b] with g(a) > 0 > g(b), set after the first evaluation; an end not yet evaluated has g = NaN
+    let a = m0
+    let b = m0
+    let ga = Number.NaN
+    let gb = Number.NaN
+    let g0 = 0
     let x = m0
+    let next = m0
+    let w1 = airW
+    let t1 = tg
+    let taken = false
     for (let it = 0; it < 100; it++) {
-      const slope = balance.slope
-      let next = slope < 0 ? x - g / slope : Number.NaN
-      if (!(next > a && next < b)) {
+      // g(next) = exit RH − grain ERH at the exit temperature, and dg/dm1
+      const dm = m0 - next
+      w1 = airW + r * dm
+      const den = ma * (CP_DRY_AIR + CP_VAPOUR * w1) + mdCd + mdCw * next
+      t1 = (eIn - mdq * dm - ma * w1 * H_FG0) / den
+      const dT = (dNum - t1 * dDen) / den
+      const pws = pwsKpa(t1, this.s)
+      const pv = (p * w1) / (EPS + w1)
+      const rh = (100 * pv) / pws
+      const dRh = ((100 * p * EPS) / ((EPS + w1) * (EPS + w1) * pws)) * -r - ((rh * this.s[0]) / pws) * dT
+      let erh: number
+      let erhDt: number
+      let erhDm: number
+      const sT = (t1 - this.tMin) * this.invDt
+      const sM = (next - this.mMin) * this.invDm
+      if (sT >= 0 && sT < this.tSpan && sM >= 0 && sM < this.mSpan) {
+        const ci = sT | 0
+        const cj = sM | 0
+        const u = sT - ci
+        const v = sM - cj
+        const k = ci * nM + cj
+        const k2 = k + nM
+        const dLo = values[k + 1] - values[k]
+        const dHi = values[k2 + 1] - values[k2]
+        const lo = values[k] + v * dLo
+        const hi = values[k2] + v * dHi
+        erh = lo + u * (hi - lo)
+        erhDt = (hi - lo) * this.invDt
+        erhDm = (dLo + u * (dHi - dLo)) * this.invDm
+      } else {
+        erh = this.tables.erhPctWithSlopes(t1, next, this.e)
+        erhDt = this.e[0]
+        erhDm = this.e[1]
+      }
+      const g = rh - erh
+      const slope = dRh - (erhDt * dT + erhDm)
+      x = next
+      if (it === 0) {
+        g0 = g
+        if (Math.abs(g) <= SOLVER_F_TOL) break
+        if (g < 0) {
+          // drying; the air can take up at most what saturation at the warmer of air and grain allows
+          const pwsMax = pwsKpa(Math.max(airT, tg), this.s)
+          const wSat = pwsMax < p ? (EPS * pwsMax) / (p - pwsMax) : airW + 1
+          a = Math.max(M_FLOOR_DB, m0 - Math.max(1e-6, wSat - airW) / r)
+          gb = g
+        } else {
+          // wetting: the air cannot give more water than it carries
+          b = m0 + (airW / r) * 0.999999
+          ga = g
+        }
+      } else {
+        if (g > 0) {
+          a = x
+          ga = g
+        } else {
+          b = x
+          gb = g
+        }
+        // converged, or pinned at an end of the bracket (the air's capacity: a = b)
+        if (Math.abs(g) < SOLVER_F_TOL || b - a < SOLVER_X_TOL) break
+      }
+      next = slope < 0 ? x - g / slope : Number.NaN
+      const inside = next > a && next < b
+      if (inside && Math.abs(next - x) < NEWTON_STEP_TOL) {
+        // Newton's next step is tiny: take it without reading the isotherm there
+        x = next
+        taken = true
+        break
+      }
+      if (!inside) {
         // the Newton step leaves the bracket: try an unevaluated end first, else bisect
         if (Number.isNaN(ga)) next = a
         else if (Number.isNaN(gb)) next = b
         else next = 0.5 * (a + b)
       }
-      const newton = next !== a && next !== b && next !== 0.5 * (a + b)
-      const gn = balance.evaluate(next)
-      const step = Math.abs(next - x)
-      x = next
-      g = gn
-      if (gn > 0) {
-        a = next
-        ga = gn
-      } else {
-        b = next
-        gb = gn
-      }
-      // converged, or pinned at an end of the bracket (the air's capacity: a = b)
-      if (Math.abs(gn) < SOLVER_F_TOL || (newton && step < NEWTON_STEP_TOL) || b - a < SOLVER_X_TOL) break
     }
-    m1 = x
-    if (g0 < 0 && grain.thinLayerStep) {
-      const rhIn = rhPct(airT, airW, p, scratch)
-      const mRate = grain.thinLayerStep(m0, airT, Math.min(rhIn, 99.5), dtH)
-      if (mRate > m1) {
-        m1 = Math.min(mRate, m0)
-        balance.evaluate(m1)
-      }
+    let m1 = x
+    const thin = this.grain.thinLayerStep
+    if (g0 < 0 && thin) {
+      const rhIn = rhPct(airT, airW, p, this.s)
+      const mRate = thin.call(this.grain, m0, airT, Math.min(rhIn, 99.5), this.dtH)
+      if (mRate > m1) m1 = Math.min(mRate, m0)
     }
-    if (m1 !== x) balance.evaluate(m1)
+    if (taken || m1 !== x) {
+      // exit state at m1 (linear in the humidity, linear-fractional in the temperature)
+      const dm = m0 - m1
+      w1 = airW + r * dm
+      t1 = (eIn - mdq * dm - ma * w1 * H_FG0) / (ma * (CP_DRY_AIR + CP_VAPOUR * w1) + mdCd + mdCw * m1)
+    }
+    moisture[i] = m1
+    temp[i] = t1
+    air[0] = t1
+    air[1] = w1
   }
-  out[0] = m1
-  out[1] = balance.t1
-  out[2] = balance.w1
 }
 
 /** Grain mass, airflow, static pressure and fan power of a bin (no weather needed). */
@@ -381,7 +417,6 @@ export function simulateDeepBed(
   const profileEvery = options.profileEveryHours ?? 0
 
   const tables = grainTables(grain)
-  const cd = grain.dryMatterCpKjPerKgK
   const efficiency = setup.fanEfficiency ?? DEFAULT_FAN_EFFICIENCY
   const heatRise = setup.heatRiseK ?? 0
   const fanHeatToAir = setup.fanHeatToAir !== false
@@ -400,9 +435,9 @@ export function simulateDeepBed(
   const layerHeightM = setup.depthM / nLayers
   const moisture = new Float64Array(nLayers).fill(m0)
   const temp = new Float64Array(nLayers).fill(setup.initialGrainTempC)
-  const out = new Float64Array(3)
+  const air = new Float64Array(2)
   const scratch = new Float64Array(1)
-  const balance = new LayerBalance(tables)
+  const solver = new LayerSolver(tables, grain, dryMatterPerLayer)
   const acc = spoilageAccumulator(spoilage)
   const top = nLayers - 1
 
@@ -479,37 +514,14 @@ export function simulateDeepBed(
       plenumRh = heaterOn ? rhPct(plenumC, wIn, p, scratch) : rhAfterFan
       const airKgPerM2H = (airKgPerS * 3600) / setup.floorAreaM2
       const substeps = setup.substepsPerHour ?? defaultSubsteps(airKgPerM2H, dryMatterPerLayer)
-      const dt = 1 / substeps
-      const ma = airKgPerM2H * dt
-      let airT = plenumC
-      let airW = wIn
+      solver.startHour(p, airKgPerM2H / substeps, 1 / substeps)
       for (let s = 0; s < substeps; s++) {
-        airT = plenumC
-        airW = wIn
-        for (let i = 0; i < nLayers; i++) {
-          solveLayer(
-            balance,
-            grain,
-            cd,
-            airT,
-            airW,
-            p,
-            moisture[i],
-            temp[i],
-            ma,
-            dryMatterPerLayer,
-            dt,
-            scratch,
-            out,
-          )
-          moisture[i] = out[0]
-          temp[i] = out[1]
-          airT = out[1]
-          airW = out[2]
-        }
+        air[0] = plenumC
+        air[1] = wIn
+        for (let i = 0; i < nLayers; i++) solver.solve(i, moisture, temp, air)
       }
-      exitC = airT
-      exitRh = Math.min(100, rhPct(airT, airW, p, scratch))
+      exitC = air[0]
+      exitRh = Math.min(100, rhPct(air[0], air[1], p, scratch))
     }
     const topWb = wbPct(moisture[top])
     const aw = Math.min(1, tables.erhPct(temp[top], moisture[top]) / 100)

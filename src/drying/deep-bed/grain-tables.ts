@@ -50,15 +50,17 @@ interface Grid {
 
 /** A 2-D table over (T, M) with bilinear interpolation; values node-major in M (row = one temperature). */
 export class BilinearTable {
+  /** Node values, row by row (one row per temperature, nM values each); read only. */
   readonly values: Float64Array
   readonly nT: number
   readonly nM: number
-  private readonly tMin: number
-  private readonly mMin: number
-  private readonly invDt: number
-  private readonly invDm: number
-  private readonly tSpan: number
-  private readonly mSpan: number
+  /** Grid origin and inverse spacings, and the last cell index + 1 in each direction (for inline reads). */
+  readonly tMin: number
+  readonly mMin: number
+  readonly invDt: number
+  readonly invDm: number
+  readonly tSpan: number
+  readonly mSpan: number
 
   constructor(grid: Grid, f: (tC: number, mDb: number) => number) {
     this.nT = Math.round((grid.tMaxC - grid.tMinC) / grid.tStepC) + 1
