@@ -79,21 +79,11 @@ export class BilinearTable {
     }
   }
 
+  private readonly scratch = new Float64Array(2)
+
   /** Interpolated value, or NaN outside the grid (the caller then uses the exact function). */
   at(tC: number, mDb: number): number {
-    const s = (tC - this.tMin) * this.invDt
-    const r = (mDb - this.mMin) * this.invDm
-    if (!(s >= 0 && s < this.tSpan && r >= 0 && r < this.mSpan)) return Number.NaN
-    const i = s | 0
-    const j = r | 0
-    const u = s - i
-    const v = r - j
-    const k = i * this.nM + j
-    const a = this.values
-    const lo = a[k] + v * (a[k + 1] - a[k])
-    const k2 = k + this.nM
-    const hi = a[k2] + v * (a[k2 + 1] - a[k2])
-    return lo + u * (hi - lo)
+    return this.atWithSlopes(tC, mDb, this.scratch)
   }
 
   /**
