@@ -27,7 +27,14 @@
  * The model is for shelled corn; applied to other grains it is an approximation (said so in `cautions`).
  */
 import { moistureDbFromWbPct } from '../moisture-basis.ts'
-import { checkStepInput, type SpoilageModel, type SpoilageState, type SpoilageStepInput } from './model.ts'
+import {
+  checkStepInput,
+  checkStepValues,
+  type SpoilageAccumulator,
+  type SpoilageModel,
+  type SpoilageState,
+  type SpoilageStepInput,
+} from './model.ts'
 
 /** Reference-curve coefficients (Thompson 1972 form): DML = A·(exp(B·θ) − 1) + C·θ, DML in %, θ in h. */
 export const DML_CURVE = { a: 0.0883, b: 0.006, c: 0.00102 } as const
@@ -174,6 +181,29 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         hoursAtRisk: state.hoursAtRisk + (input.waterActivity >= atRiskAw ? input.hours : 0),
         hoursOutsideRange: state.hoursOutsideRange + (clamped ? input.hours : 0),
         hours: state.hours + input.hours,
+      }
+    },
+    accumulator(): SpoilageAccumulator {
+      // θ is kept as such (no inversion of the curve per step); same arithmetic as `step` otherwise.
+      let theta = 0
+      let hoursAtRisk = 0
+      let hoursOutsideRange = 0
+      let hours = 0
+      const d = clamp(damagePct, DML_VALID_DAMAGE_PCT)
+      const damage = damageMultiplier(d)
+      const damageClamped = d !== damagePct
+      return {
+        add(productTempC, moistureWbPct, waterActivity, stepHours) {
+          checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
+          const t = clamp(productTempC, DML_VALID_TEMP_C)
+          const m = clamp(moistureWbPct, DML_VALID_MOISTURE_WB_PCT)
+          theta += stepHours / (temperatureMultiplier(t, m) * moistureMultiplier(m) * damage)
+          if (waterActivity >= atRiskAw) hoursAtRisk += stepHours
+          if (damageClamped || t !== productTempC || m !== moistureWbPct) hoursOutsideRange += stepHours
+          hours += stepHours
+        },
+        measure: () => dmlFromEquivalentHours(theta),
+        state: () => ({ measure: dmlFromEquivalentHours(theta), hoursAtRisk, hoursOutsideRange, hours }),
       }
     },
   }
