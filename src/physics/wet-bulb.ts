@@ -36,27 +36,48 @@ import { saturationPressureFromTableKpa, saturationTableSlopes } from './saturat
 const SATURATION_PRESSURE_AT_ZERO_KPA = Math.exp(lnSaturationPressureIcePa(KELVIN_OFFSET)) / 1000
 
 /**
- * Root of the psychrometer balance W(t*) = `targetW` on one branch, t* in [lo, hi]: eq 33 (wet wick,
- * liquid = true) or eq 35 (iced wick). Halley's method with the first and second derivatives (pws and
- * its derivatives from {@link saturationPressureFromTableKpa}),
- * started at `start`, falling back to bisection whenever a step leaves the bracket; W(t*) increases
- * with t*, so the sign of W(t*) − targetW keeps the bracket. Returns hi if W(hi) is still below the
- * target (no root at or below the dry bulb), lo if W(lo) is above it.
+ * In and out of {@link solveWetBulb}: one object reused for every hour of a loop (no number is boxed on the
+ * call). The branch fields are set by {@link solveWetBulb} itself.
  */
-function solveWetBulbBranch(
-  dryBulbC: number,
-  targetW: number,
-  pressureKpa: number,
-  liquid: boolean,
-  lo: number,
-  hi: number,
-  start: number,
-): number {
+export class WetBulbSearch {
+  /** Dry bulb [°C]. */
+  dryBulbC = Number.NaN
+  /** Humidity ratio [kg/kg]. */
+  humidityRatio = Number.NaN
+  pressureKpa = Number.NaN
+  /** Dew or frost point [°C] (the lower end of the bracket). */
+  dewPointC = Number.NaN
+  /** Ws at the dry bulb [kg/kg] (over liquid water or ice), or NaN: computed. Only sharpens the start. */
+  saturationHumidityRatio = Number.NaN
+  /** Branch searched: eq 33 (wet wick) or eq 35 (iced wick), and its bracket and first iterate [°C]. */
+  liquid = true
+  lo = Number.NaN
+  hi = Number.NaN
+  start = Number.NaN
+  /** Out: thermodynamic wet bulb [°C]. */
+  wetBulbC = Number.NaN
+}
+
+/**
+ * Root of the psychrometer balance W(t*) = W on one branch, t* in [lo, hi] of `s`: eq 33 (wet wick,
+ * liquid) or eq 35 (iced wick). Halley's method with the first and second derivatives (pws and its
+ * derivatives from {@link saturationPressureFromTableKpa}), started at `s.start`, falling back to
+ * bisection whenever a step leaves the bracket; W(t*) increases with t*, so the sign of W(t*) − W keeps
+ * the bracket. Gives hi if W(hi) is still below W (no root at or below the dry bulb), lo if W(lo) is
+ * above it. Result in `s.wetBulbC`.
+ */
+function solveWetBulbBranch(s: WetBulbSearch): void {
+  const dryBulbC = s.dryBulbC
+  const targetW = s.humidityRatio
+  const liquid = s.liquid
+  let lo = s.lo
+  let hi = s.hi
+  const start = s.start
   const a0 = liquid ? VAPOR_ENTHALPY_0C_KJ_PER_KG : SUBLIMATION_ENTHALPY_0C_KJ_PER_KG // eq 33 / eq 35
   const ka = liquid ? WET_WICK_NUMERATOR_SLOPE : ICED_WICK_NUMERATOR_SLOPE
   const b0 = a0 + CP_WATER_VAPOR_KJ_PER_KG_K * dryBulbC
   const kb = liquid ? CP_LIQUID_WATER_KJ_PER_KG_K : CP_ICE_KJ_PER_KG_K
-  const p = pressureKpa
+  const p = s.pressureKpa
   let x = start > lo && start < hi ? start : 0.5 * (lo + hi)
   for (let i = 0; i < SOLVER_MAX_ITERATIONS; i++) {
     // Ws* over ice below the triple point, also on the wet-wick branch for 0 ≤ t* < 0.01 (psychrolib 2.5.0).
@@ -76,14 +97,20 @@ function solveWetBulbBranch(
     const q1 = (-ka * ws + a * ws1 + CP_DRY_AIR_KJ_PER_KG_K + kb * q) * invB
     const q2 = (-2 * ka * ws1 + a * ws2 + 2 * kb * q1) * invB
     const f = q - targetW
-    if (f === 0) return x
+    if (f === 0) {
+      s.wetBulbC = x
+      return
+    }
     if (f > 0) hi = x
     else lo = x
     const step = (2 * f * q1) / (2 * q1 * q1 - f * q2)
     const next = x - step
     if (next > lo && next < hi) {
       // Stop on a small step, but not across the kink of Ws* at the triple point (ice → liquid pws).
-      if (Math.abs(step) < SOLVER_STOP_STEP_C && next < TRIPLE_POINT_C === ice) return next
+      if (Math.abs(step) < SOLVER_STOP_STEP_C && next < TRIPLE_POINT_C === ice) {
+        s.wetBulbC = next
+        return
+      }
       x = next
     } else if (next >= hi && x < hi) {
       // Overshoot past the upper end (a root close to it, as in air near saturation): restart there;
@@ -92,7 +119,10 @@ function solveWetBulbBranch(
     } else {
       x = 0.5 * (lo + hi)
     }
-    if (hi - lo < SOLVER_TOLERANCE_C) return x
+    if (hi - lo < SOLVER_TOLERANCE_C) {
+      s.wetBulbC = x
+      return
+    }
   }
   throw new RangeError(`wet bulb did not converge for dry bulb ${dryBulbC} °C, W ${targetW}`)
 }
@@ -163,13 +193,30 @@ export function wetBulbWithDewPointC(
   dewC: number,
   saturationHumidityRatioAtDryBulb?: number,
 ): number {
-  const t = dryBulbC
-  const w = humidityRatioKgPerKg
-  const dew = Math.min(dewC, t)
+  const s = scratch
+  s.dryBulbC = dryBulbC
+  s.humidityRatio = humidityRatioKgPerKg
+  s.pressureKpa = pressureKpa
+  s.dewPointC = dewC
+  s.saturationHumidityRatio = saturationHumidityRatioAtDryBulb ?? Number.NaN
+  solveWetBulb(s)
+  return s.wetBulbC
+}
+
+const scratch = new WetBulbSearch()
+
+/** {@link wetBulbWithDewPointC} on a {@link WetBulbSearch}, for hot loops: the wet bulb into `s.wetBulbC`. */
+export function solveWetBulb(s: WetBulbSearch): void {
+  const t = s.dryBulbC
+  const w = s.humidityRatio
+  const pressureKpa = s.pressureKpa
+  const dew = Math.min(s.dewPointC, t)
+  const wsGiven = s.saturationHumidityRatio
   if (dew >= TRIPLE_POINT_C) {
     // Root at or above the dew point, so on the wet-wick branch (eq 33 at t* = dew gives W* ≤ W).
-    const wst = saturationHumidityRatioAtDryBulb ?? saturationHumidityRatio(t, pressureKpa)
-    return solveWetBulbBranch(t, w, pressureKpa, true, dew, t, chordStartC(t, w, true, dew, w, t, wst))
+    const wst = Number.isNaN(wsGiven) ? saturationHumidityRatio(t, pressureKpa) : wsGiven
+    searchBranch(s, true, dew, t, chordStartC(t, w, true, dew, w, t, wst))
+    return
   }
   if (t > 0) {
     const ws0 =
@@ -180,22 +227,32 @@ export function wetBulbWithDewPointC(
       (VAPOR_ENTHALPY_0C_KJ_PER_KG * ws0 - CP_DRY_AIR_KJ_PER_KG_K * t) /
       (VAPOR_ENTHALPY_0C_KJ_PER_KG + CP_WATER_VAPOR_KJ_PER_KG_K * t)
     if (w >= wAtZeroLiquid) {
-      const wst = saturationHumidityRatioAtDryBulb ?? saturationHumidityRatio(t, pressureKpa)
+      const wst = Number.isNaN(wsGiven) ? saturationHumidityRatio(t, pressureKpa) : wsGiven
       const lo = Math.max(dew, 0)
-      const start = chordStartC(t, w, true, lo, dew >= 0 ? w : ws0, t, wst)
-      return solveWetBulbBranch(t, w, pressureKpa, true, lo, t, start)
+      searchBranch(s, true, lo, t, chordStartC(t, w, true, lo, dew >= 0 ? w : ws0, t, wst))
+      return
     }
-    const lo = Math.max(dew - 1, SATURATION_MIN_C)
-    const start = chordStartC(t, w, false, dew, w, 0, ws0)
-    return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, 0, start), dew)
+    searchBranch(s, false, Math.max(dew - 1, SATURATION_MIN_C), 0, chordStartC(t, w, false, dew, w, 0, ws0))
+    s.wetBulbC = Math.max(s.wetBulbC, dew)
+    return
   }
-  const lo = Math.max(dew - 1, SATURATION_MIN_C)
   // Ws over ice at the dry bulb (eq 5 via the table, 1e-9 relative; pws ≪ p below 0 °C).
   const pwsIce = saturationPressureFromTableKpa(t, true)
   const wsIce = (MOLAR_MASS_RATIO_WATER_AIR * pwsIce) / (pressureKpa - pwsIce)
-  if (w >= wsIce) return t // supersaturated over ice: no iced-wick root at or below the dry bulb
-  const start = chordStartC(t, w, false, dew, w, t, wsIce)
+  if (w >= wsIce) {
+    s.wetBulbC = t // supersaturated over ice: no iced-wick root at or below the dry bulb
+    return
+  }
   // The root is at or above the dew/frost point (ASHRAE eq 35 at t* = dew gives W* ≤ W), so clamping
   // there only removes the bisection's last 1e-5 °C.
-  return Math.max(solveWetBulbBranch(t, w, pressureKpa, false, lo, t, start), dew)
+  searchBranch(s, false, Math.max(dew - 1, SATURATION_MIN_C), t, chordStartC(t, w, false, dew, w, t, wsIce))
+  s.wetBulbC = Math.max(s.wetBulbC, dew)
+}
+
+function searchBranch(s: WetBulbSearch, liquid: boolean, lo: number, hi: number, start: number): void {
+  s.liquid = liquid
+  s.lo = lo
+  s.hi = hi
+  s.start = start
+  solveWetBulbBranch(s)
 }
