@@ -18,6 +18,7 @@ import type { WeatherReadResult } from '../../weather/result.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
+import { exampleWeatherCsv } from '../example-weather.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import {
@@ -227,16 +228,7 @@ registerOperation({
       name: 'raisins in the open air, four days of hourly weather (invented)',
       url: '/v1/assess?product=grapes-to-raisins&method=open-air&lat=38.3&lon=-2.6&elevation=1050&deadlineDays=3&maxDays=3',
       contentType: 'text/csv',
-      body: Array.from({ length: 96 }, (_, h) => {
-        const hour = h % 24
-        const t = 24 + 10 * Math.sin(((hour - 9) / 24) * 2 * Math.PI)
-        const rh = 45 - 20 * Math.sin(((hour - 9) / 24) * 2 * Math.PI)
-        const ghi = hour >= 6 && hour <= 18 ? Math.round(900 * Math.sin(((hour - 6) / 12) * Math.PI)) : 0
-        const stamp = new Date(Date.UTC(2024, 6, 1, h)).toISOString().slice(0, 16)
-        return `${stamp}Z,${t.toFixed(1)},${rh.toFixed(0)},${ghi},2.5`
-      })
-        .join('\n')
-        .replace(/^/, 'time,temp_c,rh_pct,ghi_wm2,wind_ms\n'),
+      body: exampleWeatherCsv(4),
     },
   ],
 })
