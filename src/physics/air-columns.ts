@@ -23,8 +23,9 @@ import {
   PRESSURE_MIN_KPA,
   VAPOR_PRESSURE_MIN_KPA,
 } from './moist-air.ts'
+import { TRIPLE_POINT_C } from './saturation.ts'
 import { saturationPressureFromTableKpa, saturationTemperatureFromTableC } from './saturation-table.ts'
-import { solveWetBulb, WetBulbSearch } from './wet-bulb.ts'
+import { chordStartC, solveWetBulb, solveWetBulbBranch, WetBulbSearch } from './wet-bulb.ts'
 
 export interface AirColumnsInput {
   dryBulbC: Float64Array
@@ -103,9 +104,18 @@ export function fillAirStateColumns(input: AirColumnsInput, out: AirColumnsOutpu
         search.dryBulbC = t
         search.humidityRatio = w
         search.pressureKpa = p
-        search.dewPointC = td
-        search.saturationHumidityRatio = wst
-        solveWetBulb(search)
+        if (td >= TRIPLE_POINT_C) {
+          // the common case, wet wick (eq 33) between dew point and dry bulb, as solveWetBulb does it
+          search.liquid = true
+          search.lo = td
+          search.hi = t
+          search.start = chordStartC(t, w, true, td, w, t, wst)
+          solveWetBulbBranch(search)
+        } else {
+          search.dewPointC = td
+          search.saturationHumidityRatio = wst
+          solveWetBulb(search)
+        }
         twbOut[i] = search.wetBulbC
       }
     }

@@ -66,7 +66,7 @@ export class WetBulbSearch {
  * the bracket. Gives hi if W(hi) is still below W (no root at or below the dry bulb), lo if W(lo) is
  * above it. Result in `s.wetBulbC`.
  */
-function solveWetBulbBranch(s: WetBulbSearch): void {
+export function solveWetBulbBranch(s: WetBulbSearch): void {
   const dryBulbC = s.dryBulbC
   const targetW = s.humidityRatio
   const liquid = s.liquid
@@ -132,7 +132,7 @@ function solveWetBulbBranch(s: WetBulbSearch): void {
  * (xa, wa) and (xb, wb) and the t*-dependent terms taken at the midpoint. Ws* is convex, so this lands
  * at or below the root, usually within a few tenths of a degree.
  */
-function chordStartC(
+export function chordStartC(
   dryBulbC: number,
   targetW: number,
   liquid: boolean,
