@@ -1,11 +1,15 @@
 import { readFile } from 'node:fs/promises'
 import { describe, expect, it } from 'vitest'
+import type { Assessment } from '../../src/analysis/assessment.ts'
 import { type CliIo, UsageError } from '../../src/cli/command.ts'
 import { runCli } from '../../src/cli/main.ts'
+import { renderReportCsv } from '../../src/report/report-csv.ts'
+import { renderReportHtml } from '../../src/report/report-html.ts'
 
 function fakeIo() {
   const out: string[] = []
   const err: string[] = []
+  const written = new Map<string, string>()
   const io: CliIo = {
     stdout: (t) => out.push(t),
     stderr: (t) => err.push(t),
@@ -17,9 +21,11 @@ function fakeIo() {
         throw new UsageError(`cannot read '${p}': ${(e as NodeJS.ErrnoException).code}`)
       }
     },
-    writeFile: async () => {},
+    writeFile: async (p, data) => {
+      written.set(p, typeof data === 'string' ? data : new TextDecoder().decode(data))
+    },
   }
-  return { io, out, err }
+  return { io, out, err, written }
 }
 
 const typical = 'climate-demo/ardentine-upland-typical-year.epw'
@@ -150,5 +156,40 @@ describe('dryhours compare', () => {
     const { io, err } = fakeIo()
     expect(await runCli(['compare', typical, '--product', 'figs', '--method', 'shade'], io)).toBe(2)
     expect(err.join('')).toMatch(/at least two weather files/)
+  })
+})
+
+describe('dryhours assess --format html|csv: the report of the same assessment as --json', () => {
+  const args = ['assess', typical, '--product', 'apricot-halves', '--method', 'shade', '--start', '07-01']
+  const more = ['--end', '07-21', '--step-days', '10', '--quiet']
+  it('--format html --out writes the summary that renders from the --json output (README command)', async () => {
+    const json = fakeIo()
+    expect(await runCli([...args, ...more, '--json'], json.io)).toBe(0)
+    const a = JSON.parse(json.out.join('')) as Assessment
+    const html = fakeIo()
+    expect(await runCli([...args, ...more, '--format', 'html', '--out', 'summary.html'], html.io)).toBe(0)
+    expect(html.out.join('')).toBe('')
+    expect(html.err.join('')).toMatch(/wrote summary\.html/)
+    const info = { fileName: 'ardentine-upland-typical-year.epw' }
+    expect(html.written.get('summary.html')).toBe(renderReportHtml(a, { info }))
+    const csv = fakeIo()
+    expect(
+      await runCli(
+        [...args, ...more, '--format', 'csv', '--table', 'monthly-usable-hours', '--units', 'us'],
+        csv.io,
+      ),
+    ).toBe(0)
+    expect(csv.out.join('')).toBe(renderReportCsv(a, { units: 'us', info, table: 'monthly-usable-hours' }))
+  })
+  it('refuses an unknown format, units or table with exit 2 and a line naming what is accepted', async () => {
+    for (const [extra, message] of [
+      [['--format', 'pdf'], /--format must be one of text, json, html, csv/],
+      [['--units', 'imperial'], /--units must be si or us/],
+      [['--format', 'csv', '--table', 'nope'], /--table: table must be one of all, summary/],
+    ] as const) {
+      const f = fakeIo()
+      expect(await runCli([...args, ...more, ...extra], f.io)).toBe(2)
+      expect(f.err.join('')).toMatch(message)
+    }
   })
 })

@@ -7,10 +7,19 @@ import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
 import { productById } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
+import { renderReportCsv } from '../../report/report-csv.ts'
+import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
+import {
+  REPORT_OUTPUT_HELP,
+  REPORT_OUTPUT_OPTIONS,
+  type ReportOutputChoice,
+  reportOutputChoice,
+  writeReportOutput,
+} from '../report-output.ts'
 
 export const ENGINE_OPTIONS_HELP = `Product and method:
   --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
@@ -36,13 +45,16 @@ Weather file:
 const help = `dryhours assess: can this site's weather dry this product, when, how fast, with how much heat
 
 Usage:
-  dryhours assess <file> --product <id|profile.json> --method <kind> [options] [--json]
+  dryhours assess <file> --product <id|profile.json> --method <kind> [options]
+                  [--json | --format text|json|html|csv] [--units si|us] [--out <file>]
 
 Prints the usable drying hours per month (median and the P10–P90 range across years), the best
 start windows, a start-date table and the supplemental heat and fuel; --json prints the full
 assessment (monthly, hourOfDay, startDates, heat, assumptions, warnings, coverage).
 
 ${ENGINE_OPTIONS_HELP}
+
+${REPORT_OUTPUT_HELP}
 
 Safety: dried food must reach a safe water activity; combustion heaters put CO and combustion
 products in the air (prefer indirect heaters for food); gas and electrical work by licensed trades.`
@@ -299,6 +311,22 @@ export function assessmentText(a: Assessment): string {
   return `${out.join('\n')}\n`
 }
 
+/** The assessment in the chosen format (html and csv: the report's renderings). */
+function renderAssessment(a: Assessment, o: ReportOutputChoice, file: string): string {
+  const info = { fileName: file.split(/[\\/]/).pop() }
+  if (o.format === 'json') return `${JSON.stringify(a)}\n`
+  if (o.format === 'html') return renderReportHtml(a, { units: o.units, info })
+  if (o.format === 'csv') {
+    try {
+      return renderReportCsv(a, { units: o.units, info, table: o.table })
+    } catch (e) {
+      if (e instanceof RangeError) throw new UsageError(`--table: ${e.message}`)
+      throw e
+    }
+  }
+  return assessmentText(a)
+}
+
 export const assessCommand: CliCommand = {
   name: 'assess',
   summary: 'usable drying hours, start-date table, batch times and supplemental heat for one site',
@@ -308,7 +336,7 @@ export const assessCommand: CliCommand = {
     try {
       parsed = parseArgs({
         args,
-        options: ENGINE_PARSE_OPTIONS,
+        options: { ...ENGINE_PARSE_OPTIONS, ...REPORT_OUTPUT_OPTIONS },
         allowPositionals: true,
       })
     } catch (e) {
@@ -318,6 +346,7 @@ export const assessCommand: CliCommand = {
       throw new UsageError('give exactly one weather file: dryhours assess <file>')
     const file = parsed.positionals[0]
     const values = parsed.values
+    const output = reportOutputChoice(values, ['text', 'json', 'html', 'csv'])
     let assessment: Assessment
     try {
       const options = await engineOptions(values, io)
@@ -328,7 +357,7 @@ export const assessCommand: CliCommand = {
       if (e instanceof RangeError) throw new UsageError(e.message)
       throw e
     }
-    io.stdout(values.json ? `${JSON.stringify(assessment)}\n` : assessmentText(assessment))
+    await writeReportOutput(io, output, renderAssessment(assessment, output, file))
     return 0
   },
 }

@@ -1,6 +1,13 @@
 import { parseArgs } from 'node:util'
 import { COMPARE_CRITERIA, type CompareCriterion, type Comparison, compare } from '../../analysis/compare.ts'
+import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { type CliCommand, UsageError } from '../command.ts'
+import {
+  REPORT_OUTPUT_HELP,
+  REPORT_OUTPUT_OPTIONS,
+  reportOutputChoice,
+  writeReportOutput,
+} from '../report-output.ts'
 import {
   ENGINE_OPTIONS_HELP,
   ENGINE_PARSE_OPTIONS,
@@ -14,7 +21,8 @@ const help = `dryhours compare: several sites, one product and method, ranked si
 
 Usage:
   dryhours compare <file> <file> [<file> …] --product <id|profile.json> --method <kind>
-                   [--criterion ${COMPARE_CRITERIA.join('|')}] [options] [--json]
+                   [--criterion ${COMPARE_CRITERIA.join('|')}] [options]
+                   [--json | --format text|json|html] [--units si|us] [--out <file>]
 
 Criteria (default probability-within-deadline):
   probability-within-deadline  mean share of years finishing within the deadline, season start dates
@@ -24,7 +32,9 @@ Ties are broken by the other criteria in this order.
 Weather options (--lat, --lon, --elevation, --utc-offset, --tz, --wind-height) apply to EVERY file:
 give them only when all files are from one place, or use files that carry their own site (EPW).
 
-${ENGINE_OPTIONS_HELP}`
+${ENGINE_OPTIONS_HELP}
+
+${REPORT_OUTPUT_HELP}`
 
 const f = (x: number | null, d = 0): string => (x === null ? '–' : x.toFixed(d))
 
@@ -61,7 +71,7 @@ export const compareCommand: CliCommand = {
     try {
       parsed = parseArgs({
         args,
-        options: { ...ENGINE_PARSE_OPTIONS, criterion: { type: 'string' } },
+        options: { ...ENGINE_PARSE_OPTIONS, ...REPORT_OUTPUT_OPTIONS, criterion: { type: 'string' } },
         allowPositionals: true,
       })
     } catch (e) {
@@ -71,6 +81,7 @@ export const compareCommand: CliCommand = {
     if (files.length < 2)
       throw new UsageError('give at least two weather files: dryhours compare <file> <file> …')
     const values = parsed.values
+    const output = reportOutputChoice(values, ['text', 'json', 'html'])
     const criterion = values.criterion as string | undefined
     if (criterion !== undefined && !(COMPARE_CRITERIA as readonly string[]).includes(criterion)) {
       throw new UsageError(`--criterion must be one of ${COMPARE_CRITERIA.join(', ')}, got '${criterion}'`)
@@ -86,7 +97,19 @@ export const compareCommand: CliCommand = {
       if (e instanceof RangeError) throw new UsageError(e.message)
       throw e
     }
-    io.stdout(values.json ? `${JSON.stringify(result)}\n` : comparisonText(result))
+    const text =
+      output.format === 'json'
+        ? `${JSON.stringify(result)}\n`
+        : output.format === 'html'
+          ? renderComparisonHtml(
+              result.assessments.map((assessment, i) => ({
+                assessment,
+                options: { info: { fileName: files[i].split(/[\\/]/).pop() } },
+              })),
+              { units: output.units, ranking: result },
+            )
+          : comparisonText(result)
+    await writeReportOutput(io, output, text)
     return 0
   },
 }
