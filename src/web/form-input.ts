@@ -5,7 +5,7 @@
  * a RangeError naming the form field, the value and what is accepted.
  */
 import type { AssessOptions } from '../analysis/assess.ts'
-import { FUEL_IDS, type FuelId } from '../drying/method.ts'
+import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../drying/method.ts'
 import { productById } from '../product/catalogue.ts'
 import type { ProductProfile } from '../product/profile.ts'
 import { parseUserProfile } from '../product/profile-schema.ts'
@@ -15,7 +15,8 @@ import { parseMappingArgument } from '../weather/options.ts'
 /** Most weather files one comparison takes. */
 export const MAX_SITES = 6
 
-export const METHOD_KINDS = ['open-air', 'shade', 'solar-cabinet', 'heated'] as const
+/** The drying methods the form offers: every method of the registry (drying/methods/). */
+export const METHOD_KINDS = DRYING_METHOD_KINDS
 export const RESULT_FORMATS = ['page', 'html', 'csv', 'json', 'bundle'] as const
 export type ResultFormat = (typeof RESULT_FORMATS)[number]
 

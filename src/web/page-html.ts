@@ -7,6 +7,7 @@
  */
 import { FUELS } from '../drying/fuels.ts'
 import { FUEL_IDS } from '../drying/method.ts'
+import { METHOD_MODELS } from '../drying/methods/index.ts'
 import { PRODUCT_CATALOGUE } from '../product/catalogue.ts'
 import type { ProductCategory } from '../product/profile.ts'
 import { escapeHtml } from '../report/escape.ts'
@@ -33,12 +34,8 @@ const CATEGORY_NAMES: Record<ProductCategory, string> = {
   'beverage-crop': 'Coffee, cocoa and tea',
 }
 
-const METHODS: [string, string, string][] = [
-  ['open-air', 'Open air', 'racks, trays or mats in the sun; covered at night and in rain'],
-  ['shade', 'Shade', 'a ventilated shelter: no sun, no rain'],
-  ['solar-cabinet', 'Solar cabinet', 'air warmed by a solar collector before it reaches the product'],
-  ['heated', 'Heated air', 'a fan and a heater (fuel or electricity)'],
-]
+/** The drying methods of the registry (drying/methods/), in its order: kind, name, one line. */
+const METHODS: [string, string, string][] = METHOD_MODELS.map((m) => [m.kind, m.title, m.hint])
 
 function attr(v: string | undefined): string {
   return escapeHtml(v ?? '')

@@ -46,6 +46,8 @@ export type HeatedMethod = z.output<typeof heatedSchema>
 export const heated: MethodModel<typeof heatedSchema> = {
   kind: 'heated',
   label: 'heated air',
+  title: 'Heated air',
+  hint: 'a fan and a heater (fuel or electricity)',
   schema: heatedSchema,
   exposure: 'forced-air',
   airFlowKgPerSPerTonne: (m) => m.airFlowKgPerSPerTonne,

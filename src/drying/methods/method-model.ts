@@ -93,8 +93,12 @@ export type AnyMethodSchema = z.ZodObject<any>
 export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
   /** The `kind` of the method (kebab-case), also its zod literal. */
   kind: string
-  /** Plain words for reports and the page, e.g. "open air (racks or mats in the sun)". */
+  /** Plain words for reports, e.g. "open air (racks or mats in the sun)". */
   label: string
+  /** Short name for a choice on the page, e.g. "Open air". */
+  title: string
+  /** One line under that name on the page, e.g. "racks, trays or mats in the sun; covered at night and in rain". */
+  hint: string
   /** Parameters with their defaults and sources; `kind` is a literal. */
   schema: S
   /**

@@ -56,6 +56,8 @@ export type OpenAirMethod = z.output<typeof openAirSchema>
 export const openAir: MethodModel<typeof openAirSchema> = {
   kind: 'open-air',
   label: 'open air (racks or mats in the sun)',
+  title: 'Open air',
+  hint: 'racks, trays or mats in the sun; covered at night and in rain',
   schema: openAirSchema,
   exposure: 'exposed',
   airFlowKgPerSPerTonne: () => 0,

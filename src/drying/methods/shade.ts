@@ -31,6 +31,8 @@ export type ShadeMethod = z.output<typeof shadeSchema>
 export const shade: MethodModel<typeof shadeSchema> = {
   kind: 'shade',
   label: 'shade (ventilated shelter)',
+  title: 'Shade',
+  hint: 'a ventilated shelter: no sun, no rain',
   schema: shadeSchema,
   exposure: 'exposed',
   airFlowKgPerSPerTonne: () => 0,

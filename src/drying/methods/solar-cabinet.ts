@@ -52,6 +52,8 @@ function equatorFacingAzimuthDeg(latDeg: number): number {
 export const solarCabinet: MethodModel<typeof solarCabinetSchema> = {
   kind: 'solar-cabinet',
   label: 'solar cabinet (air heated by a solar collector)',
+  title: 'Solar cabinet',
+  hint: 'air warmed by a solar collector before it reaches the product',
   schema: solarCabinetSchema,
   exposure: 'forced-air',
   airFlowKgPerSPerTonne: (m) => m.collectorAreaM2PerTonne * m.airFlowKgPerSPerM2,
