@@ -3,6 +3,7 @@ import { type AssessOptions, type AssessProgress, assess } from '../../analysis/
 import type { Assessment } from '../../analysis/assessment.ts'
 import { FUELS } from '../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
+import { methodModel } from '../../drying/methods/index.ts'
 import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
 import { productById } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
@@ -23,12 +24,14 @@ import {
 
 export const ENGINE_OPTIONS_HELP = `Product and method:
   --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
-  --method <kind>           open-air | shade | solar-cabinet | heated
+  --method <kind>           ${DRYING_METHOD_KINDS.join(' | ')}
   --target-wb <%>  --initial-wb <%>  --thickness <mm>
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
+  any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
+                  API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
 Season and batches:
   --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every 7 days)
   --step-days <n>  --start-hour <0–23>  --deadline-days <n> (default 14)  --max-days <n> (default 60)
@@ -78,6 +81,7 @@ export const ENGINE_PARSE_OPTIONS = {
   efficiency: { type: 'string' },
   fuel: { type: 'string' },
   price: { type: 'string', multiple: true },
+  param: { type: 'string', multiple: true },
   start: { type: 'string' },
   end: { type: 'string' },
   'step-days': { type: 'string' },
@@ -113,6 +117,33 @@ async function loadProduct(value: string | undefined, io: CliIo): Promise<Produc
     throw new UsageError(`${value}: not valid JSON (${(e as Error).message})`)
   }
   return parseUserProfile(json)
+}
+
+/**
+ * `--param name=value` into `method`: any parameter of the method's schema (drying/methods/<kind>.ts), so a
+ * method needs no flags of its own here. Values: true/false, a number, or text. Unknown names are refused.
+ */
+function setMethodParams(method: Record<string, unknown>, params: string[]): void {
+  const shape = methodModel(String(method.kind)).schema.shape as Record<string, unknown>
+  const names = Object.keys(shape).filter((k) => k !== 'kind')
+  for (const p of params) {
+    const m = /^([A-Za-z][A-Za-z0-9]*)=(.*)$/.exec(p)
+    if (!m) throw new UsageError(`--param must be <name>=<value>, got '${p}'`)
+    if (!names.includes(m[1])) {
+      throw new UsageError(
+        `--param ${m[1]}: not a parameter of ${method.kind}; its parameters are ${names.join(', ')}`,
+      )
+    }
+    const text = m[2]
+    method[m[1]] =
+      text === 'true'
+        ? true
+        : text === 'false'
+          ? false
+          : /^[-+0-9.]/.test(text)
+            ? numberOption(`param ${m[1]}`, text)
+            : text
+  }
 }
 
 /** Build the assess options from parsed CLI values (method options, season, heat, prices). */
@@ -159,6 +190,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     if (num('target-rh') !== undefined) backupHeater.targetRhPct = num('target-rh')
     if (num('set-point') !== undefined) backupHeater.setPointC = num('set-point')
   }
+  setMethodParams(method, (values.param as string[] | undefined) ?? [])
   const fuelPrices: Partial<Record<FuelId, number>> = {}
   for (const p of (values.price as string[] | undefined) ?? []) {
     const m = /^([a-z-]+)=(.+)$/.exec(p)
