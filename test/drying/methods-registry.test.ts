@@ -1,0 +1,73 @@
+/**
+ * Every method of the registry (src/drying/methods/index.ts) is complete: a new method module added to the
+ * list is checked here without editing this file (its defaults parse, its hours are computed with physical
+ * values, it lists its assumptions, and the CLI, API and page offer it).
+ */
+import { describe, expect, it } from 'vitest'
+import { assess } from '../../src/analysis/assess.ts'
+import { computeHourlyConditions } from '../../src/drying/hourly-conditions.ts'
+import { DRYING_METHOD_KINDS, dryingMethodSchema, parseDryingMethod } from '../../src/drying/method.ts'
+import { METHOD_MODELS, methodModel } from '../../src/drying/methods/index.ts'
+import { HourMode } from '../../src/drying/methods/method-model.ts'
+import { productResponse } from '../../src/drying/product-response.ts'
+import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
+import { productById } from '../../src/product/catalogue.ts'
+import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
+import { renderPage } from '../../src/web/page-html.ts'
+import { demoSeries, sliceSeries } from './demo-weather.ts'
+
+const week = sliceSeries(demoSeries('dryUpland'), 24 * 190, 24 * 7)
+const apricots = productById('apricot-halves')
+
+describe('the method registry', () => {
+  it('kinds are unique, in registry order, and the union schema accepts each with its defaults', () => {
+    const kinds = METHOD_MODELS.map((m) => m.kind)
+    expect(new Set(kinds).size).toBe(kinds.length)
+    expect([...DRYING_METHOD_KINDS]).toEqual(kinds)
+    for (const kind of kinds) {
+      expect(dryingMethodSchema.safeParse({ kind }).success, kind).toBe(true)
+      expect(methodModel(kind).kind).toBe(kind)
+    }
+    expect(() => methodModel('no-such-method')).toThrow(/kinds: open-air/)
+  })
+  for (const model of METHOD_MODELS) {
+    it(`${model.kind}: hours with physical values, its assumptions listed, offered on the page`, () => {
+      const method = parseDryingMethod({ kind: model.kind })
+      const c = computeHourlyConditions(week, method, productResponse(apricots), {
+        targetDb: moistureDbFromWbPct(apricots.targetMoistureWbPct.value),
+        initialWbPct: apricots.initialMoistureWbPct.value,
+        loadingKgPerM2: apricots.defaultLoadingKgPerM2.value,
+        thresholds: parseDryingThresholds({}),
+        maxProductTempC: apricots.maxProductTempC?.value ?? null,
+      })
+      expect(c.airFlowKgPerSPerTonne > 0).toBe(model.exposure === 'forced-air')
+      let active = 0
+      for (let i = 0; i < c.hours; i++) {
+        if (c.mode[i] === HourMode.missing) continue
+        expect(c.airC[i]).toBeGreaterThanOrEqual(week.dryBulbC[i] - 1e-9) // heating only, never cooling the air
+        expect(c.productC[i]).toBeGreaterThan(-60)
+        expect(c.productC[i]).toBeLessThanOrEqual(100)
+        expect(c.heaterKwhPerTonne[i]).toBeGreaterThanOrEqual(0)
+        expect(c.solarKwhPerTonne[i]).toBeGreaterThanOrEqual(0)
+        if (c.mode[i] === HourMode.paused) continue
+        active++
+        expect(c.capDbPerH[i]).toBeGreaterThanOrEqual(0)
+        if (model.exposure === 'exposed') expect(Number.isFinite(c.evaporationKgPerM2H[i])).toBe(true)
+        else expect(c.deficitToSaturationGPerKg[i]).toBeGreaterThanOrEqual(0)
+      }
+      expect(active).toBeGreaterThan(0)
+      if (model.heatsWithFuel) expect(c.heaterKwhPerTonne.some((v) => v > 0)).toBe(true)
+      const a = assess(week, {
+        product: apricots,
+        method,
+        seasonStart: '07-10',
+        seasonEnd: '07-11',
+        maxDays: 3,
+        deadlineDays: 2,
+      })
+      expect(a.methodLabel).toBe(model.label)
+      for (const x of methodModel(model.kind).assumptions(method)) expect(a.assumptions).toContainEqual(x)
+      expect(renderPage({})).toContain(`value="${model.kind}"`)
+    })
+  }
+})
