@@ -4,12 +4,27 @@
  * through `io`, call the core and print. They hold no science.
  */
 
-/** What a command may touch: output streams and file reading, so tests can run commands in-process. */
+/** A server the entry point started (`dryhours serve`). */
+export interface ServingServer {
+  url: string
+  close: () => Promise<void>
+}
+
+/**
+ * What a command may touch: output streams, file reading and writing, and (from the Node entry point)
+ * starting the HTTP server, so tests can run commands in-process and the CLI imports no entry point.
+ */
 export interface CliIo {
   stdout: (text: string) => void
   stderr: (text: string) => void
   readFile: (path: string) => Promise<Uint8Array>
   writeFile: (path: string, data: string | Uint8Array) => Promise<void>
+  /** Start the API and the page on host:port, logging each request; absent where no server can run. */
+  startServer?: (options: {
+    host?: string
+    port?: number
+    log?: (line: string) => void
+  }) => Promise<ServingServer>
 }
 
 export interface CliCommand {

@@ -23,6 +23,7 @@ export const nodeIo: CliIo = {
   writeFile: async (path, data) => {
     await writeFile(path, data)
   },
+  startServer: async (options) => (await import('./server.ts')).startServer(options),
 }
 
 export async function main(argv: string[]): Promise<number> {

@@ -1,5 +1,4 @@
 import { parseArgs } from 'node:util'
-import { startServer } from '../../node/server.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
 
 const help = `dryhours serve: the HTTP API and the web page
@@ -24,7 +23,10 @@ export const serveCommand: CliCommand = {
     if (port !== undefined && !(Number.isInteger(port) && port >= 0 && port <= 65535)) {
       throw new UsageError(`--port must be an integer from 0 to 65535, got ${values.port}`)
     }
-    const running = await startServer({ host: values.host, port, log: (line) => io.stdout(`${line}\n`) })
+    if (io.startServer === undefined) {
+      throw new UsageError('serve runs from the Node command (npx dryhours serve, or npm start)')
+    }
+    const running = await io.startServer({ host: values.host, port, log: (line) => io.stdout(`${line}\n`) })
     io.stdout(`dryhours listening on ${running.url} (API docs at ${running.url}/docs)\n`)
     await new Promise<void>((resolve) => {
       const stop = (signal: string) => {
