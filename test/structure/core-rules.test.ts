@@ -70,6 +70,14 @@ describe('core rules (DEVELOPERS.md)', () => {
     expect(codeOnly("const a = 2 ** 0.5 // x ** y\nconst s = 'b ** c'")).toMatch(/\*\* 0\.5/)
     expect(codeOnly("const s = 'b ** c' /* d ** e */")).not.toMatch(/\*\*/)
   })
+  it('the CLI imports no entry point (src/node/): it gets the server through CliIo', () => {
+    const cli = readdirSync(join('src', 'cli'), { recursive: true })
+      .map(String)
+      .filter((f) => f.endsWith('.ts'))
+      .map((f) => join('src', 'cli', f))
+    expect(cli.length).toBeGreaterThan(5)
+    expect(cli.filter((f) => /from\s+['"][./]*\/node\//.test(readFileSync(f, 'utf8')))).toEqual([])
+  })
   it('no node: imports in the core', () => {
     const found = files.filter((f) => /from\s+['"]node:/.test(readFileSync(f, 'utf8')))
     expect(found).toEqual([])
