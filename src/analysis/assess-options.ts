@@ -1,9 +1,9 @@
 /**
  * @module analysis/assess-options
  * The first stage of an assessment: the user's options checked and completed with the engine's defaults.
- * Everything that decides how much work an assessment is (season, start-date step, maximum batch length)
- * is resolved by {@link resolveSchedule} from the options alone, so that a planner that estimates the cost
- * before any weather is read uses the very numbers the engine will use.
+ * The defaults and ranges that decide how much work an assessment is (season, start-date step, deadline,
+ * maximum batch length, batch size, moistures) come from the planner (analysis/plan.ts), which the API,
+ * the page and the CLI ask before any weather is read: they and the engine use the very same numbers.
  */
 import {
   type DryingMethod,
@@ -20,8 +20,8 @@ import { tabulatedResponse } from '../drying/product-tables.ts'
 import { type DryingThresholds, parseDryingThresholds } from '../drying/thresholds.ts'
 import { moistureDbFromWbPct } from '../product/moisture-basis.ts'
 import type { ProductProfile } from '../product/profile.ts'
-import { parseMonthDay } from './local-time.ts'
-import { type MonthDay, seasonDays } from './start-dates.ts'
+import { planAssessment } from './plan.ts'
+import type { MonthDay } from './start-dates.ts'
 
 export interface AssessProgress {
   stage: 'hourly-conditions' | 'monthly-heat' | 'start-dates' | 'done'
@@ -60,21 +60,7 @@ export interface AssessOptions {
   onProgress?: (p: AssessProgress) => void
 }
 
-/** Defaults of the options (our choices, stated in every assessment through its figures). */
-export const ASSESS_DEFAULTS = {
-  seasonStart: '01-01',
-  seasonEnd: '12-31',
-  /** Start-date step [days] with a season given, and without one (the whole year). */
-  stepDaysWithSeason: 1,
-  stepDaysWholeYear: 7,
-  startHourLocal: 8,
-  deadlineDays: 14,
-  /** Maximum batch length [days] when not given: this, or the deadline when that is longer. */
-  maxDays: 60,
-  batchKgFresh: 1000,
-} as const
-
-/** Batches run for the monthly heat column: from these days of every month, in every year. */
+/** Batches run for the monthly heat column: from these days of every month, in every year (plan.ts counts 24 a year). */
 export const MONTHLY_HEAT_START_DAYS = [1, 16] as const
 
 /**
@@ -83,53 +69,13 @@ export const MONTHLY_HEAT_START_DAYS = [1, 16] as const
  */
 export const BACKUP_MIN_AIR_C = 45
 
-/** How much work an assessment is, from its options alone. */
-export interface AssessSchedule {
+/** Everything the later stages need, checked and with every default filled. */
+export interface ResolvedAssessOptions {
   season: { start: string; end: string; stepDays: number; startHourLocal: number }
   /** The start days of the start-date table. */
   startDays: MonthDay[]
   deadlineDays: number
   maxDays: number
-  /** Batches per year of data: start days plus the monthly heat batches (12 × {@link MONTHLY_HEAT_START_DAYS}). */
-  batchesPerYear: number
-}
-
-function checkRange(name: string, value: number, lo: number, hi: number, unit: string): void {
-  if (!(value >= lo && value <= hi))
-    throw new RangeError(`${name} must be between ${lo} and ${hi} ${unit}, got ${value}`)
-}
-
-/** The season, start days and batch lengths of `options`. Throws RangeError for bad values. */
-export function resolveSchedule(options: Omit<AssessOptions, 'product' | 'method'>): AssessSchedule {
-  const d = ASSESS_DEFAULTS
-  const deadlineDays = options.deadlineDays ?? d.deadlineDays
-  const maxDays = options.maxDays ?? Math.max(d.maxDays, deadlineDays)
-  checkRange('deadline', deadlineDays, 0.25, 365, 'days')
-  checkRange('maximum duration', maxDays, deadlineDays, 366, 'days (and at least the deadline)')
-  const startHourLocal = options.startHourLocal ?? d.startHourLocal
-  if (!(Number.isInteger(startHourLocal) && startHourLocal >= 0 && startHourLocal <= 23)) {
-    throw new RangeError(`start hour must be a whole hour from 0 to 23, got ${startHourLocal}`)
-  }
-  const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
-  const start = options.seasonStart ?? d.seasonStart
-  const end = options.seasonEnd ?? d.seasonEnd
-  const stepDays = options.startStepDays ?? (seasonGiven ? d.stepDaysWithSeason : d.stepDaysWholeYear)
-  const startDays = seasonDays(
-    parseMonthDay(start, 'season start'),
-    parseMonthDay(end, 'season end'),
-    stepDays,
-  )
-  return {
-    season: { start, end, stepDays, startHourLocal },
-    startDays,
-    deadlineDays,
-    maxDays,
-    batchesPerYear: startDays.length + 12 * MONTHLY_HEAT_START_DAYS.length,
-  }
-}
-
-/** Everything the later stages need, checked and with every default filled. */
-export interface ResolvedAssessOptions extends AssessSchedule {
   profile: ProductProfile
   method: DryingMethod
   model: MethodModel
@@ -152,26 +98,25 @@ export interface ResolvedAssessOptions extends AssessSchedule {
 
 /** Check the options and fill their defaults. Throws RangeError for bad options. */
 export function resolveAssessOptions(options: AssessOptions): ResolvedAssessOptions {
+  // defaults and ranges of the planner, which entry points also ask before any weather is read
+  const plan = planAssessment(options)
   const profile = options.product
   const method = parseDryingMethod(options.method)
   const thresholds = parseDryingThresholds(options.thresholds ?? {})
-  const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
-  const targetWbPct = options.targetWbPct ?? profile.targetMoistureWbPct.value
-  checkRange('initial moisture', initialWbPct, 1, 95, '% wb')
-  checkRange('target moisture', targetWbPct, 0.5, 90, '% wb')
-  if (!(targetWbPct < initialWbPct)) {
-    throw new RangeError(
-      `target moisture ${targetWbPct} % wb must be below the initial moisture ${initialWbPct} % wb`,
-    )
-  }
-  const schedule = resolveSchedule(options)
-  const batchKgFresh = options.batchKgFresh ?? ASSESS_DEFAULTS.batchKgFresh
-  checkRange('batch size', batchKgFresh, 1, 1e7, 'kg')
+  const { initialWbPct, targetWbPct, batchKgFresh } = plan
   const product = tabulatedResponse(productResponse(profile, options.thicknessMm))
   const targetDb = moistureDbFromWbPct(targetWbPct)
   const maxProductTempC = profile.maxProductTempC?.value ?? null
   return {
-    ...schedule,
+    season: {
+      start: plan.seasonStart,
+      end: plan.seasonEnd,
+      stepDays: plan.stepDays,
+      startHourLocal: plan.startHourLocal,
+    },
+    startDays: plan.startDays,
+    deadlineDays: plan.deadlineDays,
+    maxDays: plan.maxDays,
     profile,
     method,
     model: methodModel(method.kind),

@@ -53,7 +53,6 @@ export {
   type AssessProgress,
   BACKUP_MIN_AIR_C,
   resolveAssessOptions,
-  resolveSchedule,
 } from './assess-options.ts'
 
 /** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */

@@ -13,11 +13,9 @@ import { heatOfSorption } from '../product/equilibrium.ts'
 import { waterToRemoveKg } from '../product/moisture-basis.ts'
 import type { ResolvedAssessOptions } from './assess-options.ts'
 import type { FuelFigure, HeatSummary } from './assessment.ts'
+import { HEATED_SAMPLE_BATCHES } from './plan.ts'
 import { runStart, type StartContext, type StartOutcome } from './start-dates.ts'
 import { quantileSorted, roundOrNull, spread } from './statistics.ts'
-
-/** Batches heated every hour, started evenly through the file, for the cross-check (our choice). */
-const HEATED_EVERY_HOUR_SAMPLE = 30
 
 function meanOf(column: Float64Array): number {
   let sum = 0
@@ -90,7 +88,7 @@ export function heatSummary(
   const meanHeatedC = Number.isFinite(meanComputedC) ? meanComputedC : heater.minAirC
   const sorption = heatOfSorption(run.profile, Math.min(Math.max(meanHeatedC, 0), 90), run.targetDb)
   const evaporationFuelKwh = (water * sorption.totalKjPerKg) / S_PER_HOUR / eff
-  const heatedOnly = heatedEveryHourSample(ctx, HEATED_EVERY_HOUR_SAMPLE)
+  const heatedOnly = heatedEveryHourSample(ctx, HEATED_SAMPLE_BATCHES)
   const ratio =
     heatedOnly.length > 0
       ? quantileSorted(
