@@ -8,8 +8,7 @@ import { z } from 'zod'
 import { type AssessOptions, assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
 import { compare } from '../../analysis/compare.ts'
-import { parseMonthDay } from '../../analysis/local-time.ts'
-import { seasonDays } from '../../analysis/start-dates.ts'
+import { estimateBatchHours } from '../../analysis/plan.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
@@ -67,21 +66,16 @@ export function readSite(file: UploadedFile, request: AssessRequest, config: Api
 
 class TimeBudgetExceeded extends Error {}
 
-/**
- * Simulated batch-hours of a request: (season start dates + the 24 monthly heat batches) × years ×
- * maximum batch length [h], summed over the sites. Refused above `config.maxBatchHours` before any work.
- */
-export function estimatedBatchHours(options: AssessOptions, seriesList: HourlySeries[]): number {
-  const start = parseMonthDay(options.seasonStart ?? '01-01', 'season start')
-  const end = parseMonthDay(options.seasonEnd ?? '12-31', 'season end')
-  const step = options.startStepDays ?? (options.seasonStart || options.seasonEnd ? 1 : 7)
-  const starts = seasonDays(start, end, step).length + 24
-  const maxHours = (options.maxDays ?? 60) * 24
-  return seriesList.reduce((sum, s) => sum + starts * Math.max(1, Math.ceil(s.hours / 8766)) * maxHours, 0)
-}
-
 function checkWork(options: AssessOptions, seriesList: HourlySeries[], config: ApiConfig): void {
-  const work = runEngine(() => estimatedBatchHours(options, seriesList), config)
+  // the engine's own planner (analysis/plan.ts): the same defaults the assessment will use
+  const work = runEngine(
+    () =>
+      estimateBatchHours(
+        options,
+        seriesList.map((s) => s.hours),
+      ),
+    config,
+  )
   if (work > config.maxBatchHours) {
     throw new ApiProblem(
       422,
