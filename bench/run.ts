@@ -81,13 +81,13 @@ const HEADLINES: { section: string; figure: string; label: string; target: strin
     section: 'engine',
     figure: '30-year assessment (',
     label: '30-year assessment with a 90-day start-date table',
-    target: '< 1000 ms',
+    target: '< 500 ms',
   },
   {
     section: 'engine',
     figure: '30-year assessment, CPU time',
     label: '30-year assessment, CPU time',
-    target: '< 1000 ms',
+    target: '< 500 ms',
   },
   {
     section: 'engine',
