@@ -8,6 +8,7 @@
  * - `heat-per-tonne`: median supplemental heat over the season's batches [kWh/t]; lower is better.
  * Ties are broken by the next criterion in that order.
  */
+import { MS_PER_DAY } from '../physics/constants.ts'
 import { type AssessOptions, assess } from './assess.ts'
 import type { Assessment } from './assessment.ts'
 import { parseMonthDay } from './local-time.ts'
@@ -57,7 +58,7 @@ export function seasonMonthWeights(start: string, end: string): number[] {
   const startMs = Date.UTC(ref, s.month - 1, s.day)
   let endMs = Date.UTC(ref, e.month - 1, e.day)
   if (endMs < startMs) endMs = Date.UTC(ref + 1, e.month - 1, e.day)
-  for (let t = startMs; t <= endMs; t += 86_400_000) {
+  for (let t = startMs; t <= endMs; t += MS_PER_DAY) {
     const d = new Date(t)
     const month = d.getUTCMonth()
     const days = new Date(Date.UTC(d.getUTCFullYear(), month + 1, 0)).getUTCDate()

@@ -4,6 +4,7 @@
  * The offset is the site's `utcOffsetHours` when known; otherwise longitude/15 rounded to the hour
  * (mean solar time to the nearest hour), which the assessment states as an assumption.
  */
+import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import type { HourlySeries } from '../weather/series.ts'
 
 export interface LocalTimeColumns {
@@ -43,7 +44,7 @@ export function localTimeColumns(series: HourlySeries): LocalTimeColumns {
   const month = new Uint8Array(n)
   const day = new Uint8Array(n)
   const hour = new Uint8Array(n)
-  const offsetMs = utcOffsetHours * 3_600_000
+  const offsetMs = utcOffsetHours * MS_PER_HOUR
   let dayStartMs = Number.NaN
   let dayEndMs = Number.NaN
   let y = 0
@@ -57,12 +58,12 @@ export function localTimeColumns(series: HourlySeries): LocalTimeColumns {
       m = date.getUTCMonth() + 1
       d = date.getUTCDate()
       dayStartMs = Date.UTC(y, m - 1, d)
-      dayEndMs = dayStartMs + 86_400_000
+      dayEndMs = dayStartMs + MS_PER_DAY
     }
     year[i] = y
     month[i] = m
     day[i] = d
-    hour[i] = Math.floor((localMs - dayStartMs) / 3_600_000)
+    hour[i] = Math.floor((localMs - dayStartMs) / MS_PER_HOUR)
   }
   return { utcOffsetHours, offsetSource, year, month, day, hour }
 }

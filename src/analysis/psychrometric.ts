@@ -7,6 +7,7 @@
  * over liquid water (eq 6); the boundary is the product isotherm's equilibrium RH at the target moisture
  * (product/equilibrium.ts) as a humidity ratio at that pressure.
  */
+import { MS_PER_HOUR } from '../physics/constants.ts'
 import { humidityRatioFromVaporPressure, STANDARD_PRESSURE_KPA } from '../physics/moist-air.ts'
 import { saturationVaporPressureLiquidKpa } from '../physics/saturation.ts'
 import { equilibriumRelativeHumidityPct } from '../product/equilibrium.ts'
@@ -126,7 +127,7 @@ export function psychroDensity(series: HourlySeries, o: DensityOptions = {}): Ps
   const bw = o.binHumidityRatioGPerKg ?? 1
   if (!(bt > 0 && bw > 0)) throw new RangeError(`bin sizes must be > 0, got ${bt} °C and ${bw} g/kg`)
   const monthSet = o.months ? new Set(o.months) : null
-  const offsetMs = (o.utcOffsetHours ?? series.site.utcOffsetHours ?? 0) * 3_600_000
+  const offsetMs = (o.utcOffsetHours ?? series.site.utcOffsetHours ?? 0) * MS_PER_HOUR
   const counter = new CellCounter(bt, bw)
   const temps = new Float64Array(series.hours)
   const ws = new Float64Array(series.hours)

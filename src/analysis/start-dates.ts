@@ -5,9 +5,11 @@
  * from the 1st and 16th of every month for the monthly heat column. Every batch reuses the hourly
  * conditions computed once per method.
  */
+
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
 import type { ProductResponse } from '../drying/product-response.ts'
 import { type HeatStrategy, supplementalHeat } from '../drying/supplemental-heat.ts'
+import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import type { StartDateRow, StartWindow } from './assessment.ts'
 import { quantileSorted, roundOrNull } from './statistics.ts'
@@ -61,7 +63,7 @@ export function seasonDays(start: MonthDay, end: MonthDay, stepDays: number): Mo
   let endMs = Date.UTC(ref, end.month - 1, end.day)
   if (endMs < startMs) endMs = Date.UTC(ref + 1, end.month - 1, end.day)
   const days: MonthDay[] = []
-  for (let t = startMs; t <= endMs; t += stepDays * 86_400_000) {
+  for (let t = startMs; t <= endMs; t += stepDays * MS_PER_DAY) {
     const d = new Date(t)
     days.push({ month: d.getUTCMonth() + 1, day: d.getUTCDate() })
   }
@@ -71,8 +73,8 @@ export function seasonDays(start: MonthDay, end: MonthDay, stepDays: number): Mo
 /** Index of the hour starting at local standard `hour` on year-month-day, or null when outside the series. */
 export function startIndexFor(ctx: StartContext, year: number, d: MonthDay): number | null {
   if (d.month === 2 && d.day === 29) return null
-  const utcMs = Date.UTC(year, d.month - 1, d.day, ctx.startHourLocal) - ctx.utcOffsetHours * 3_600_000
-  const index = Math.round((utcMs - ctx.series.startUtcMs[0]) / 3_600_000)
+  const utcMs = Date.UTC(year, d.month - 1, d.day, ctx.startHourLocal) - ctx.utcOffsetHours * MS_PER_HOUR
+  const index = Math.round((utcMs - ctx.series.startUtcMs[0]) / MS_PER_HOUR)
   if (index < 0 || index >= ctx.series.hours) return null
   if (!ctx.wrap && index + ctx.maxHours > ctx.series.hours) return null
   return index

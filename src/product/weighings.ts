@@ -11,6 +11,7 @@
  * gap) and optionally the air temperature (`air_c`, `temp (°F)` …) and relative humidity (`rh_pct`, `HR (%)` …).
  * With `;` or tab separators a decimal comma (`1234,5`) is read as a decimal point.
  */
+import { MS_PER_HOUR } from '../physics/constants.ts'
 import { moistureDbFromWbPct } from './moisture-basis.ts'
 import { GRAMS_PER, HOURS_PER, recogniseColumns, type WeighingColumns } from './weighing-columns.ts'
 
@@ -37,7 +38,7 @@ function parseIsoLocalH(s: string, line: number): number {
   const [, y, mo, d, h, mi, se] = m
   const ms = Date.UTC(+y, +mo - 1, +d, +h, +mi, se ? +se : 0)
   if (!Number.isFinite(ms)) throw new RangeError(`line ${line}: time '${s}' is not a valid date`)
-  return ms / 3_600_000
+  return ms / MS_PER_HOUR
 }
 
 function num(
