@@ -7,6 +7,7 @@
 import { assemble } from './assemble.ts'
 import { type DelimitedInfo, readDelimited } from './delimited.ts'
 import { looksLikeEpw, readEpw } from './epw.ts'
+import { looksLikeHourlyExport, readHourlyExportTable } from './export-read.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from './options.ts'
 import { ProblemLog } from './problem-log.ts'
 import type { WeatherReadResult } from './result.ts'
@@ -43,6 +44,7 @@ export function readWeather(
   const warnings: string[] = []
   const format =
     opts.format === undefined || opts.format === 'auto' ? (looksLikeEpw(text) ? 'epw' : 'csv') : opts.format
+  if (looksLikeHourlyExport(text) && format === 'csv') return readOwnExport(text, opts, log, warnings)
   if (format === 'epw') {
     const { table, header } = readEpw(text, log, warnings)
     if (opts.mapping !== undefined)
@@ -50,6 +52,10 @@ export function readWeather(
     if (opts.timeZone !== undefined)
       warnings.push(
         `EPW files are in local standard time (header: UTC${header.utcOffsetHours >= 0 ? '+' : ''}${header.utcOffsetHours}); --tz ${opts.timeZone} is ignored`,
+      )
+    if (opts.labels === 'start')
+      warnings.push(
+        'EPW timestamps label the end of each hour (EPW data dictionary); --labels start is ignored',
       )
     const offset = opts.utcOffsetHours ?? header.utcOffsetHours
     if (opts.utcOffsetHours !== undefined && opts.utcOffsetHours !== header.utcOffsetHours) {
@@ -67,14 +73,13 @@ export function readWeather(
       longitudeDeg: opts.longitudeDeg ?? header.longitudeDeg,
       elevationM: opts.elevationM ?? clampElevation(header.elevationM),
       timeZone: null,
-      utcOffsetHours: offset,
+      utcOffsetHours: null,
       windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
     }
     return assemble(table, {
       site,
       time: {
-        labels: 'hour-end',
-        alwaysHourEnd: true,
+        labels: 'end',
         fixedOffsetHours: offset,
         zone: null,
         headerSaysUtc: false,
@@ -82,6 +87,9 @@ export function readWeather(
       log,
       warnings,
       elevationKnown: true,
+      variableTiming: opts.variableLabels,
+      sampling: opts.sampling,
+      siteClock: { optionZone: opts.siteTimeZone, fileOffsetHours: offset },
     })
   }
   const { table, info } = readDelimited(text, opts.mapping ?? {}, log, warnings)
@@ -97,20 +105,20 @@ export function readWeather(
     latitudeDeg: opts.latitudeDeg ?? null,
     longitudeDeg: opts.longitudeDeg ?? null,
     elevationM: opts.elevationM ?? null,
-    timeZone: opts.timeZone ?? null,
-    utcOffsetHours: fixedOffset,
+    timeZone: null,
+    utcOffsetHours: null,
     windHeightM: opts.windHeightM ?? info.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
   }
   if (opts.windHeightM === undefined && info.windHeightM === null && table.columns.wind) {
     warnings.push(
-      `wind height not given: assumed ${DEFAULT_WIND_HEIGHT_M} m (WMO standard); give windHeightM if it differs`,
+      `wind height not given: assumed ${DEFAULT_WIND_HEIGHT_M} m (WMO standard); give --wind-height <m> if it differs`,
     )
   }
   const result = assemble(table, {
     site,
     time: {
       declaredOrder: opts.dateOrder ?? info.headerDateOrder ?? undefined,
-      labels: opts.timestampLabels ?? null,
+      labels: opts.labels ?? null,
       fixedOffsetHours: fixedOffset,
       zone: opts.timeZone ?? null,
       headerSaysUtc: info.plan.headerSaysUtc,
@@ -118,10 +126,40 @@ export function readWeather(
     log,
     warnings,
     elevationKnown: opts.elevationM !== undefined,
+    variableTiming: opts.variableLabels,
+    sampling: opts.sampling,
+    siteClock: { optionZone: opts.siteTimeZone },
   })
-  if (site.utcOffsetHours === null && site.timeZone === null && result.timeBasis.startsWith('UTC'))
-    site.utcOffsetHours = 0
   describeCsv(result, info)
+  return result
+}
+
+/** dryhours' own hourly export: UTC hour starts, SI, flags carried over. */
+function readOwnExport(
+  text: string,
+  opts: WeatherReadOptions,
+  log: ProblemLog,
+  warnings: string[],
+): WeatherReadResult {
+  const table = readHourlyExportTable(text, log)
+  const site: SiteInfo = {
+    name: opts.siteName ?? '',
+    latitudeDeg: opts.latitudeDeg ?? null,
+    longitudeDeg: opts.longitudeDeg ?? null,
+    elevationM: opts.elevationM ?? null,
+    timeZone: null,
+    utcOffsetHours: null,
+    windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+  }
+  const result = assemble(table, {
+    site,
+    time: { labels: 'start', fixedOffsetHours: null, zone: null, headerSaysUtc: true },
+    log,
+    warnings,
+    elevationKnown: opts.elevationM !== undefined,
+    siteClock: { optionZone: opts.siteTimeZone },
+  })
+  result.warnings.unshift("dryhours' own hourly export: UTC hour starts, values and flags read as written")
   return result
 }
 
