@@ -416,6 +416,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       missingCore++
     }
   }
+  if (missingCore === hours) throw noUsableHour(series, columns, log, aggregation)
   const rows = countRows(raw, plan, series, grid, rowChanged, rowPlaced, log)
   aggregation.supersededRows = rows.superseded
   series.timing = Object.fromEntries(columns.map((c) => [c.variable, c.timing]))
@@ -707,6 +708,46 @@ function countHoursWithoutRow(plan: RowPlan): number {
   let count = 0
   for (let h = 0; h < plan.hours; h++) if (!has[h]) count++
   return count
+}
+
+/**
+ * The error for a file with rows but not one hour that has both dry bulb and humidity: which of the
+ * two is missing, how the values were lost (counts of problems by kind) and what to check.
+ */
+function noUsableHour(
+  series: { hours: number; dryBulbC: Float64Array; relativeHumidityPct: Float64Array },
+  columns: ColumnReport[],
+  log: ProblemLog,
+  aggregation: HourlyAggregation,
+): WeatherInputError {
+  let withDry = 0
+  let withHumidity = 0
+  for (let s = 0; s < series.hours; s++) {
+    if (!Number.isNaN(series.dryBulbC[s])) withDry++
+    if (!Number.isNaN(series.relativeHumidityPct[s])) withHumidity++
+  }
+  const lacking: string[] = []
+  const humiditySources = columns
+    .filter((c) => c.variable === 'relativeHumidity' || c.variable === 'dewPoint' || c.variable === 'wetBulb')
+    .map((c) => `'${snippet(c.source)}'`)
+  const drySource = columns.find((c) => c.variable === 'dryBulb')?.source ?? ''
+  if (withDry === 0) lacking.push(`no hour has a dry bulb (column '${snippet(drySource)}')`)
+  if (withHumidity === 0) lacking.push(`no hour has a humidity (column ${humiditySources.join(', ')})`)
+  if (lacking.length === 0)
+    lacking.push(`${withDry} hours have a dry bulb and ${withHumidity} a humidity, but never the same hour`)
+  const counts = Object.entries(log.counts)
+    .sort((a, b) => (b[1] ?? 0) - (a[1] ?? 0))
+    .slice(0, 4)
+    .map(([k, v]) => `${k} ${v}`)
+  const below = Object.entries(aggregation.hoursBelowCoverage).map(
+    ([v, k]) => `${v} ${k} hours with too few readings`,
+  )
+  const why = [...counts, ...below]
+  return new WeatherInputError(
+    `no usable hour in the file: ${lacking.join('; ')}${why.length > 0 ? ` (problems: ${why.join(', ')})` : ''}; ` +
+      'check that the columns hold numbers in the stated units, or map the right ones with --map',
+    ['usable hours'],
+  )
 }
 
 /** Errors for absent dry bulb or humidity columns (checked before anything else is computed). */

@@ -267,12 +267,16 @@ function minuteOf(t: number): number {
 
 /**
  * The span each row represents: the smaller positive spacing to its previous and next placed rows
- * (file order), at most one hour; a row with no neighbour spacing takes the file's step.
+ * (file order), at most one hour. A spacing below an hour that is a whole multiple of the file's step
+ * means readings are missing in between, so the row spans one step; a spacing of an hour or more is
+ * another regime (an hourly part of a file that later logs every 10 minutes) and is kept. A row with
+ * no neighbour takes the file's step.
  */
 function rowSpans(timeMs: Float64Array, duplicateOf: Int32Array, stepMinutes: number): Float64Array {
   const n = timeMs.length
   const span = new Float64Array(n)
-  const fallback = Math.min(stepMinutes * MS_PER_MINUTE, MS_PER_HOUR)
+  const stepMs = stepMinutes * MS_PER_MINUTE
+  const fallback = Math.min(stepMs, MS_PER_HOUR)
   let previous = -1
   const gapBefore = new Float64Array(n).fill(Number.POSITIVE_INFINITY)
   const gapAfter = new Float64Array(n).fill(Number.POSITIVE_INFINITY)
@@ -288,8 +292,14 @@ function rowSpans(timeMs: Float64Array, duplicateOf: Int32Array, stepMinutes: nu
     previous = i
   }
   for (let i = 0; i < n; i++) {
-    const d = Math.min(gapBefore[i], gapAfter[i])
-    span[i] = Number.isFinite(d) ? Math.min(d, MS_PER_HOUR) : fallback
+    let d = Math.min(gapBefore[i], gapAfter[i])
+    if (!Number.isFinite(d)) {
+      span[i] = fallback
+      continue
+    }
+    const k = d / stepMs
+    if (d < MS_PER_HOUR && k > 1 && Math.abs(k - Math.round(k)) < 1e-9) d = stepMs
+    span[i] = Math.min(d, MS_PER_HOUR)
   }
   return span
 }

@@ -28,7 +28,9 @@ describe('POST /v1/inspect', () => {
     expect(res.status).toBe(200)
     const body = (await res.json()) as { format: string; rows: Record<string, number>; hours: number }
     expect(body.format).toBe('epw')
-    expect(body.rows.used + body.rows.repaired + body.rows.rejected).toBe(body.rows.read)
+    expect(body.rows.used + body.rows.repaired + body.rows.rejected + body.rows.superseded).toBe(
+      body.rows.read,
+    )
     // 2022–2024 with the 2024 leap day: 365 + 365 + 366 days.
     expect(body.hours).toBe((365 + 365 + 366) * 24)
   })
