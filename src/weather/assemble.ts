@@ -18,7 +18,7 @@ import {
   stuckCheck,
   VALID_RANGE,
 } from './quality.ts'
-import type { RawColumn, RawTable } from './raw-table.ts'
+import { columnTiming, type RawColumn, type RawTable, type ValueKind } from './raw-table.ts'
 import type { ColumnReport, WeatherReadResult } from './result.ts'
 import { createEmptySeries, QualityFlag, type SiteInfo, type ValueTiming } from './series.ts'
 import { snippet } from './snippet.ts'
@@ -184,7 +184,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       source: col.source,
       unit: conversion.unit,
       unitFrom,
-      timing: raw.timing[variable] ?? DEFAULT_TIMING[variable],
+      timing: reportedKind(columnTiming(raw, variable, DEFAULT_TIMING[variable]).kind),
       missing: col.missingCount + (codes - col.missingCodeCount),
     })
   }
@@ -404,4 +404,9 @@ function decideConversion(
     `column '${snippet(col.source)}' has no unit: assumed ${si.unit} (override with --map ${variable}=${snippet(col.source)}:<unit>)`,
   )
   return { conversion: si, unitFrom: 'assumed' }
+}
+
+/** A running total is reported as the interval totals it is turned into. */
+function reportedKind(kind: ValueKind): ValueTiming {
+  return kind === 'running-total' ? 'interval-total' : kind
 }
