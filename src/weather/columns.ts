@@ -233,8 +233,8 @@ export interface ChosenColumn {
   header: string
   /** Conversion from the file's unit; null = no unit given, decide from the values. */
   conversion: UnitConversion | null
-  /** Whether the unit came from the header (or a units row), the mapping, or neither. */
-  unitSource: 'header' | 'mapping' | 'none'
+  /** Whether the unit came from the header (or a units row), the mapping, the format's layout, or neither. */
+  unitSource: 'header' | 'mapping' | 'format' | 'none'
   heightM: number | null
 }
 
@@ -319,6 +319,43 @@ function chooseUnit(
   return { conversion: null, unitText: units[0] ?? null }
 }
 
+/** A format's own choice of column for a variable or time field: header names to look for, and the unit. */
+export interface ColumnSpec {
+  /** Header names (case-insensitive, compared without a bracketed unit), first found wins. */
+  names: readonly string[]
+  /** The unit the format documents for the column (over anything the header says). */
+  unit?: string
+}
+
+/** Header text without a bracketed unit, lower case: `temperature_2m (°C)` → `temperature_2m`. */
+function bareHeader(header: string): string {
+  let end = header.length
+  for (let k = 0; k < header.length; k++) {
+    const c = header.charCodeAt(k)
+    if (c === 40 || c === 91) {
+      end = k
+      break
+    }
+  }
+  return header.slice(0, end).trim().toLowerCase()
+}
+
+/** Index of the first header named by `names` (see {@link ColumnSpec}); −1 when none. */
+export function findNamedColumn(headers: readonly string[], names: readonly string[]): number {
+  for (const name of names) {
+    const wanted = name.toLowerCase()
+    const i = headers.findIndex((h) => bareHeader(h) === wanted || h.trim().toLowerCase() === wanted)
+    if (i >= 0) return i
+  }
+  return -1
+}
+
+/** A format's column choices: `columns` per variable or time field; `only` = use no other column. */
+export interface ColumnPreset {
+  columns: Partial<Record<MappingKey | 'windU' | 'windV', ColumnSpec>>
+  only?: boolean
+}
+
 /**
  * Decide the column of every variable and time field from the header row (and a units row, when
  * the file has one) and the mapping. Throws {@link WeatherInputError} naming every ambiguity at once
@@ -329,6 +366,7 @@ export function planColumns(
   headers: string[],
   mapping: Partial<Record<MappingKey, ColumnMapping>> = {},
   unitsRow?: string[],
+  preset?: ColumnPreset,
 ): ColumnPlan {
   const plan: ColumnPlan = {
     variables: {},
@@ -372,6 +410,62 @@ export function planColumns(
       conversion,
       unitSource: m.unit !== undefined ? 'mapping' : conversion ? 'header' : 'none',
       heightM: analysis.parts.heightM,
+    }
+  }
+  if (preset !== undefined) {
+    for (const [key, spec] of Object.entries(preset.columns) as [
+      MappingKey | 'windU' | 'windV',
+      ColumnSpec,
+    ][]) {
+      if (key === 'windU' || key === 'windV') continue
+      if (key in mapping || ignored.has(key)) continue
+      const index = findNamedColumn(headers, spec.names)
+      if (index < 0 || taken.has(index)) continue
+      taken.add(index)
+      if (isTimeField(key)) {
+        plan.time[key] = index
+        readTimeHeader(headers[index], plan)
+        continue
+      }
+      const analysis = analyseHeader(headers[index], unitsRow?.[index])
+      const conversion =
+        spec.unit !== undefined ? unitConversion(key, spec.unit) : chooseUnit(key, analysis.units).conversion
+      plan.variables[key] = {
+        variable: key,
+        index,
+        header: headers[index],
+        conversion,
+        unitSource: spec.unit !== undefined ? 'format' : conversion ? 'header' : 'none',
+        heightM: analysis.parts.heightM,
+      }
+    }
+    const u = preset.columns.windU
+    const v = preset.columns.windV
+    if (u && v && !plan.variables.wind && !('wind' in mapping)) {
+      const ui = findNamedColumn(headers, u.names)
+      const vi = findNamedColumn(headers, v.names)
+      if (ui >= 0 && vi >= 0) {
+        const component = (index: number, spec: ColumnSpec): ChosenColumn => ({
+          variable: 'wind',
+          index,
+          header: headers[index],
+          conversion: spec.unit !== undefined ? unitConversion('wind', spec.unit) : null,
+          unitSource: spec.unit !== undefined ? 'format' : 'none',
+          heightM: componentHeight(bareHeader(headers[index])),
+        })
+        plan.windComponents = { u: component(ui, u), v: component(vi, v) }
+        taken.add(ui)
+        taken.add(vi)
+        plan.notes.push(
+          `wind speed from the components '${snippet(headers[ui])}' and '${snippet(headers[vi])}' as √(u² + v²)`,
+        )
+      }
+    }
+    if (preset.only) {
+      headers.forEach((h, index) => {
+        if (!taken.has(index)) plan.unused.push(h)
+      })
+      return plan
     }
   }
   const candidates = new Map<

@@ -5,7 +5,15 @@
  * (files may start with a site line), columns are planned by {@link planColumns}.
  */
 import Papa from 'papaparse'
-import { analyseHeader, type ChosenColumn, type ColumnPlan, planColumns, splitHeader } from './columns.ts'
+import {
+  analyseHeader,
+  type ChosenColumn,
+  type ColumnPlan,
+  type ColumnPreset,
+  findNamedColumn,
+  planColumns,
+  splitHeader,
+} from './columns.ts'
 import { FIELD_MISSING, FIELD_UNREADABLE, parseField } from './numbers.ts'
 import type { ColumnMapping, MappingKey } from './options.ts'
 import type { ProblemLog } from './problem-log.ts'
@@ -52,12 +60,22 @@ export interface DelimitedLayout {
   unitsRow?: string[]
   /** Rows after the header (and units row) that are not data. */
   skipAfterHeader?: number
-  /** Cell decoders per column index: cell text → value in the column's unit, NaN = missing. */
-  decoders?: Map<number, (text: string) => number>
+  /** The format's own column choices (under the user's mapping). */
+  columns?: ColumnPreset
+  /** Cell decoders per variable: cell text → value in the column's unit, NaN = missing. */
+  decoders?: Partial<Record<WeatherVariable, (text: string) => number>>
   /** Extra numbers that mean "missing" in every value column (e.g. −999 of NASA POWER). */
   missingCodes?: readonly number[]
-  /** Rows to leave out (e.g. daily summary rows): column index and a test on its text. */
-  dropRows?: { column: number; drop: (text: string) => boolean; reason: string }
+  /** Rows to leave out (e.g. daily summary rows): the column (by header names) and a test on its text. */
+  dropRows?: { names: readonly string[]; drop: (text: string) => boolean; reason: string }
+  /** Report kind per row (routine or special) from a column (by header names). */
+  reportKind?: { names: readonly string[]; kind: (text: string) => number }
+}
+
+/** Options of {@link readDelimited}: the format's layout and the user's header line. */
+export interface ReadDelimitedOptions extends DelimitedLayout {
+  /** 1-based line of the header row, as the user gives it (`--header-line`). */
+  headerLine?: number
 }
 
 /** The delimiter of the first non-blank line: the most frequent of comma, semicolon and tab outside quotes. */
@@ -250,9 +268,9 @@ export function readDelimited(
   mapping: Partial<Record<MappingKey, ColumnMapping>>,
   log: ProblemLog,
   warnings: string[],
-  layout: DelimitedLayout = {},
-  headerLine?: number,
+  layout: ReadDelimitedOptions = {},
 ): { table: RawTable; info: DelimitedInfo } {
+  const headerLine = layout.headerLine
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text
   const firstContent = firstNonSpace(body)
   if (firstContent < 0) throw new WeatherInputError('the file is empty', ['rows'])
@@ -299,7 +317,7 @@ export function readDelimited(
     warnings.push(
       `${found.skipped} line${found.skipped === 1 ? '' : 's'} under the header without numbers ${found.skipped === 1 ? 'was' : 'were'} skipped`,
     )
-  const plan = planColumns(headers, mapping, found.unitsRow)
+  const plan = planColumns(headers, mapping, found.unitsRow, layout.columns)
   warnings.push(...plan.notes)
   let decimalComma = false
   if (delimiter !== ',') {
@@ -307,18 +325,37 @@ export function readDelimited(
       for (const f of head[r]) if (isDecimalCommaNumber(f)) decimalComma = true
     }
   }
-  const decoders = layout.decoders ?? new Map<number, (text: string) => number>()
+  const decoders = new Map<number, (text: string) => number>()
+  for (const [variable, decode] of Object.entries(layout.decoders ?? {}) as [
+    WeatherVariable,
+    (text: string) => number,
+  ][]) {
+    const chosen = plan.variables[variable]
+    if (chosen && !(variable in mapping)) decoders.set(chosen.index, decode)
+  }
   const valueColumns = Object.values(plan.variables).map((c) => c!.index)
   if (plan.windComponents) valueColumns.push(plan.windComponents.u.index, plan.windComponents.v.index)
   const textColumns = [...Object.values(plan.time)]
-  if (layout.dropRows) textColumns.push(layout.dropRows.column)
+  const dropColumn = layout.dropRows ? findNamedColumn(headers, layout.dropRows.names) : -1
+  const kindColumn = layout.reportKind ? findNamedColumn(headers, layout.reportKind.names) : -1
+  for (const c of [dropColumn, kindColumn]) if (c >= 0 && !textColumns.includes(c)) textColumns.push(c)
   const numericColumns: number[] = []
-  for (const c of valueColumns) (decoders.has(c) ? textColumns : numericColumns).push(c)
+  for (const c of valueColumns) {
+    if (decoders.has(c)) {
+      if (!textColumns.includes(c)) textColumns.push(c)
+    } else if (!numericColumns.includes(c)) numericColumns.push(c)
+  }
   const needed = [...textColumns, ...numericColumns]
   const skipThrough = found.firstDataRow - 1
-  const body_ = body.includes('"')
+  let body_ = body.includes('"')
     ? papaparseBody(body, delimiter, skipThrough, needed)
     : scanBody(body, delimiter, skipThrough, textColumns, numericColumns, decimalComma)
+  if (dropColumn >= 0 && layout.dropRows) {
+    const before = body_.lines.length
+    body_ = dropBodyRows(body_, (i) => layout.dropRows!.drop(body_.cells[dropColumn]?.[i] ?? ''))
+    const dropped = before - body_.lines.length
+    if (dropped > 0) warnings.push(`${dropped} ${layout.dropRows.reason}: left out`)
+  }
   const { lines, cells } = body_
   const n = lines.length
   const cell = (i: number, col: number): string | undefined => cells[col]?.[i]
@@ -350,18 +387,6 @@ export function readDelimited(
         'rejected, the other lines read one by one',
     )
   }
-  const dropped = new Uint8Array(n)
-  let droppedCount = 0
-  if (layout.dropRows) {
-    const { column, drop } = layout.dropRows
-    for (let i = 0; i < n; i++) {
-      if (drop(cell(i, column) ?? '')) {
-        dropped[i] = 1
-        droppedCount++
-      }
-    }
-    if (droppedCount > 0) warnings.push(`${droppedCount} ${layout.dropRows.reason}: left out`)
-  }
   // Clock text of the row from a time, or an hour (and minute) column.
   const clockText = (i: number): string | undefined => {
     if (t.time !== undefined) return cell(i, t.time) ?? ''
@@ -380,7 +405,6 @@ export function readDelimited(
       log.add(lines[i], null, 'unbalanced-quote', quoteBroken.get(i)!)
       continue
     }
-    if (dropped[i] === 1) continue
     if (useDateColumn) {
       const dateText = cell(i, t.timestamp ?? t.date!) ?? ''
       const clock = clockText(i)
@@ -471,7 +495,6 @@ export function readDelimited(
         }
       }
     }
-    for (let i = 0; i < n; i++) if (dropped[i] === 1) values[i] = Number.NaN
     return {
       values,
       source: chosen.header,
@@ -515,6 +538,11 @@ export function readDelimited(
     else if (unit.startsWith('dd') && unit.slice(3, 5) === 'mm') headerDateOrder = 'dmy'
   }
   if (plan.headerTimeNote !== null) warnings.push(plan.headerTimeNote)
+  let reportKind: Uint8Array | undefined
+  if (kindColumn >= 0 && layout.reportKind) {
+    reportKind = new Uint8Array(n)
+    for (let i = 0; i < n; i++) reportKind[i] = layout.reportKind.kind(cell(i, kindColumn) ?? '')
+  }
   return {
     table: {
       format: 'csv',
@@ -524,6 +552,7 @@ export function readDelimited(
       timeErrors,
       columns,
       timing: {},
+      reportKind,
       unusedColumns: plan.unused,
       plan,
     },
@@ -539,6 +568,43 @@ export function readDelimited(
       plan,
     },
   }
+}
+
+/** The body without the rows for which `drop(row)` is true (summary rows of some exports). */
+function dropBodyRows(body: BodyCells, drop: (row: number) => boolean): BodyCells {
+  const n = body.lines.length
+  const keep: number[] = []
+  for (let i = 0; i < n; i++) if (!drop(i)) keep.push(i)
+  if (keep.length === n) return body
+  const newIndex = new Int32Array(n).fill(-1)
+  keep.forEach((old, i) => {
+    newIndex[old] = i
+  })
+  const cells: (string | undefined)[][] = []
+  body.cells.forEach((column, c) => {
+    if (column !== undefined) cells[c] = keep.map((old) => column[old])
+  })
+  let numbers: ScannedNumbers[] | undefined
+  if (body.numbers) {
+    numbers = []
+    body.numbers.forEach((scanned, c) => {
+      if (scanned === undefined) return
+      const values = new Float64Array(keep.length)
+      for (let i = 0; i < keep.length; i++) values[i] = scanned.values[keep[i]]
+      const other: [number, string][] = []
+      for (const [row, text] of scanned.other) if (newIndex[row] >= 0) other.push([newIndex[row], text])
+      let blank = 0
+      for (let i = 0; i < keep.length; i++) if (Number.isNaN(values[i])) blank++
+      numbers![c] = { values, blank: blank - other.length, other }
+    })
+  }
+  let unbalancedQuote: Map<number, string> | undefined
+  if (body.unbalancedQuote) {
+    unbalancedQuote = new Map()
+    for (const [row, message] of body.unbalancedQuote)
+      if (newIndex[row] >= 0) unbalancedQuote.set(newIndex[row], message)
+  }
+  return { lines: Int32Array.from(keep.map((old) => body.lines[old])), cells, numbers, unbalancedQuote }
 }
 
 /** Month and day of day-of-year `doy` (1 = 1 January) in `year`; NaN when out of range. */

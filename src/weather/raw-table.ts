@@ -126,6 +126,8 @@ export interface RawTable {
   reportKind?: Uint8Array
   /** What the file says about its site and clock. */
   statements?: FileStatements
+  /** The known layout (format dialect) the file was read as, when one recognised it. */
+  dialect?: { id: string; title: string }
   /** Columns seen but not used (header text). */
   unusedColumns: string[]
   plan?: ColumnPlan

@@ -49,6 +49,11 @@ export interface UnitConversion {
   unit: string
   scale: number
   offset: number
+  /**
+   * An amount over the row's interval (energy per m²: Wh/m², J/m², MJ/m², langley): `scale` turns an
+   * hour's amount into the hour's mean irradiance; other intervals rescale by 60/interval minutes.
+   */
+  amount?: true
 }
 
 type Family = 'temperature' | 'humidity' | 'pressure' | 'speed' | 'irradiance' | 'depth' | 'cover'
@@ -66,6 +71,8 @@ const FAMILY: Record<WeatherVariable, Family> = {
 }
 
 const u = (unit: string, scale: number, offset = 0): UnitConversion => ({ unit, scale, offset })
+/** An amount per hour (see {@link UnitConversion.amount}). */
+const perHour = (unit: string, scale: number): UnitConversion => ({ unit, scale, offset: 0, amount: true })
 
 /**
  * Unit tokens (lower case, brackets, spaces, '°', '^' and '*' removed, '²' → 2, `m-2` → m2, `s-1` → /s,
@@ -145,21 +152,21 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     'w/m2': u('W/m²', 1),
     kwm2: u('kW/m²', 1000),
     'kw/m2': u('kW/m²', 1000),
-    whm2: u('Wh/m² per hour', 1),
-    'wh/m2': u('Wh/m² per hour', 1),
-    kwhm2: u('kWh/m² per hour', 1000),
-    'kwh/m2': u('kWh/m² per hour', 1000),
-    jm2: u('J/m² per hour', 1 / 3600),
-    'j/m2': u('J/m² per hour', 1 / 3600),
-    kjm2: u('kJ/m² per hour', 1000 / 3600),
-    'kj/m2': u('kJ/m² per hour', 1000 / 3600),
-    mjm2: u('MJ/m² per hour', 1e6 / 3600),
-    'mj/m2': u('MJ/m² per hour', 1e6 / 3600),
-    jcm2: u('J/cm² per hour', 1e4 / 3600),
-    'j/cm2': u('J/cm² per hour', 1e4 / 3600),
-    ly: u('langley per hour', 41840 / 3600),
-    langley: u('langley per hour', 41840 / 3600),
-    langleys: u('langley per hour', 41840 / 3600),
+    whm2: perHour('Wh/m² per hour', 1),
+    'wh/m2': perHour('Wh/m² per hour', 1),
+    kwhm2: perHour('kWh/m² per hour', 1000),
+    'kwh/m2': perHour('kWh/m² per hour', 1000),
+    jm2: perHour('J/m² per hour', 1 / 3600),
+    'j/m2': perHour('J/m² per hour', 1 / 3600),
+    kjm2: perHour('kJ/m² per hour', 1000 / 3600),
+    'kj/m2': perHour('kJ/m² per hour', 1000 / 3600),
+    mjm2: perHour('MJ/m² per hour', 1e6 / 3600),
+    'mj/m2': perHour('MJ/m² per hour', 1e6 / 3600),
+    jcm2: perHour('J/cm² per hour', 1e4 / 3600),
+    'j/cm2': perHour('J/cm² per hour', 1e4 / 3600),
+    ly: perHour('langley per hour', 41840 / 3600),
+    langley: perHour('langley per hour', 41840 / 3600),
+    langleys: perHour('langley per hour', 41840 / 3600),
   },
   depth: {
     mm: u('mm', 1),
