@@ -4,11 +4,12 @@
  */
 import type { WeatherReadResult } from '../weather/result.ts'
 
-/** The JSON of `dryhours inspect --json`: format, rows, period, hours, years, typicalYear, columns, site, coverage, problems, plus time basis and warnings. */
+/** The JSON of `dryhours inspect --json`: format, dialect (the known layout recognised, or null), rows, period, hours, years, typicalYear, columns, site, coverage, problems, plus time basis and warnings. */
 export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
   const s = r.series
   return {
     format: r.format,
+    dialect: r.dialect ?? null,
     rows: r.rows,
     period: r.period,
     hours: s.hours,

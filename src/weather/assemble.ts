@@ -13,6 +13,7 @@ import { fillDaytimeIrradiance, fixNightIrradiance, hourSun, interpolateShortGap
 import {
   aggregateVariable,
   deaccumulate,
+  intervalReach,
   MIN_MEAN_COVERAGE,
   MIN_TOTAL_COVERAGE,
   planRows,
@@ -129,12 +130,17 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   }
   if (missingColumns.length > 0) throw mergeErrors(missingColumns)
   warnings.push(...times.warnings)
-  const plan = planRows({
+  const rowTimes = {
     utcMs: times.rowUtcMs,
     labels: times.labels,
     sampling: ctx.sampling ?? raw.sampling,
     reportKind: raw.reportKind,
-  })
+  }
+  let plan = planRows(rowTimes)
+  // Interval values labelled apart from the rows' instants (rain over the hour before the stamp) may
+  // reach an hour beyond the rows' own: the grid holds it, so nothing the file says is dropped.
+  const reach = gridReach(raw, plan, times.labels, ctx.variableTiming)
+  if (reach !== null) plan = planRows({ ...rowTimes, extendToHoursMs: reach })
   if (plan.hours === 0) {
     throw new WeatherInputError(
       `none of the ${n} rows has a usable timestamp (first problem: ${log.problems[0]?.message ?? 'none'}); ` +
@@ -336,9 +342,11 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   if (si.pressure) {
     series.pressureKpa.set(si.pressure)
   }
+  // Only hours with a dry bulb need it (humidity from a wet bulb uses it); an hour without one is
+  // excluded anyway, and its export row stays empty rather than show a pressure nobody measured.
   let pressureSupplied = 0
   for (let s = 0; s < hours; s++) {
-    if (Number.isNaN(series.pressureKpa[s])) {
+    if (Number.isNaN(series.pressureKpa[s]) && !Number.isNaN(dry[s])) {
       series.pressureKpa[s] = standardKpa
       series.quality[s] |= QualityFlag.pressureFromElevation
       pressureSupplied++
@@ -446,6 +454,29 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     sourceYears: times.sourceYears,
     hourly: aggregation,
   }
+}
+
+/** The hours interval variables reach beyond the rows' own hours, or null when none. */
+function gridReach(
+  raw: RawTable,
+  plan: RowPlan,
+  fileLabels: IntervalLabel,
+  overrides: AssembleContext['variableTiming'],
+): [number, number] | null {
+  if (plan.hours === 0) return null
+  const last = plan.firstHourMs + (plan.hours - 1) * MS_PER_HOUR
+  let lo = plan.firstHourMs
+  let hi = last
+  for (const variable of WEATHER_VARIABLES) {
+    if (raw.columns[variable] === undefined) continue
+    const rule = variableRule(raw, variable, plan, fileLabels, overrides?.[variable])
+    if (rule.kind === 'instant' || rule.intervalMinutes > 60) continue
+    const r = intervalReach(plan, rule.label, rule.intervalMinutes)
+    if (r === null) continue
+    lo = Math.min(lo, r[0])
+    hi = Math.max(hi, r[1])
+  }
+  return lo < plan.firstHourMs || hi > last ? [lo, hi] : null
 }
 
 /** Convert a column's readings to the series unit in place; returns the count of missing codes found here. */

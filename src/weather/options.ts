@@ -9,7 +9,17 @@ import { snippet } from './snippet.ts'
 import { WEATHER_VARIABLES, type WeatherVariable } from './units.ts'
 
 /** Columns that carry time rather than a weather variable; mapping keys like the variables. */
-export const TIME_FIELDS = ['timestamp', 'date', 'time', 'year', 'month', 'day', 'hour', 'minute'] as const
+export const TIME_FIELDS = [
+  'timestamp',
+  'date',
+  'time',
+  'year',
+  'month',
+  'day',
+  'hour',
+  'minute',
+  'dayOfYear',
+] as const
 export type TimeField = (typeof TIME_FIELDS)[number]
 export type MappingKey = WeatherVariable | TimeField
 

@@ -143,6 +143,8 @@ export interface RawTable {
    * not repeated, so reading the export back changes nothing.
    */
   checked?: boolean
+  /** The known layout (format dialect) the file was read as, when one recognised it. */
+  dialect?: { id: string; title: string }
   /** Columns seen but not used (header text). */
   unusedColumns: string[]
   plan?: ColumnPlan

@@ -6,6 +6,7 @@
 
 import { assemble } from './assemble.ts'
 import { type DelimitedInfo, readDelimited } from './delimited.ts'
+import { detectDialect, dialectHead } from './dialects/index.ts'
 import { looksLikeEpw, readEpw } from './epw.ts'
 import { looksLikeHourlyExport, readHourlyExportTable } from './export-read.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from './options.ts'
@@ -92,24 +93,43 @@ export function readWeather(
       siteClock: { optionZone: opts.siteTimeZone, fileOffsetHours: offset },
     })
   }
-  const { table, info } = readDelimited(text, opts.mapping ?? {}, log, warnings)
-  const headerOffset = info.plan.headerUtcOffsetHours
-  if (headerOffset !== null && opts.utcOffsetHours === undefined && opts.timeZone === undefined) {
+  const clockGiven = opts.utcOffsetHours !== undefined || opts.timeZone !== undefined
+  const head = dialectHead(text)
+  const dialect = opts.format === undefined || opts.format === 'auto' ? detectDialect(head) : null
+  const reading = dialect
+    ? dialect.read(text, head, { mapping: opts.mapping ?? {}, log, warnings, clockGiven })
+    : readDelimited(text, opts.mapping ?? {}, log, warnings)
+  const table = reading.table
+  const info = reading.info
+  if (dialect) table.dialect = { id: dialect.id, title: dialect.title }
+  // What the file states about its clock and site; the user's options win.
+  const said = table.statements ?? {}
+  const headerOffset = said.timestampUtcOffsetHours ?? info?.plan.headerUtcOffsetHours ?? null
+  if (
+    headerOffset !== null &&
+    said.timestampUtcOffsetHours === undefined &&
+    opts.utcOffsetHours === undefined &&
+    opts.timeZone === undefined
+  ) {
     warnings.push(
       `the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`,
     )
   }
-  const fixedOffset = opts.utcOffsetHours ?? (opts.timeZone === undefined ? headerOffset : null)
+  const fileZone = clockGiven ? undefined : said.timestampTimeZone
+  const fixedOffset =
+    opts.utcOffsetHours ?? (opts.timeZone === undefined && fileZone === undefined ? headerOffset : null)
+  const zone = opts.timeZone ?? fileZone ?? null
+  const windHeightM = info?.windHeightM ?? said.windHeightM ?? null
   const site: SiteInfo = {
-    name: opts.siteName ?? '',
-    latitudeDeg: opts.latitudeDeg ?? null,
-    longitudeDeg: opts.longitudeDeg ?? null,
-    elevationM: opts.elevationM ?? null,
+    name: opts.siteName ?? said.siteName ?? '',
+    latitudeDeg: opts.latitudeDeg ?? said.latitudeDeg ?? null,
+    longitudeDeg: opts.longitudeDeg ?? said.longitudeDeg ?? null,
+    elevationM: opts.elevationM ?? said.elevationM ?? null,
     timeZone: null,
     utcOffsetHours: null,
-    windHeightM: opts.windHeightM ?? info.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+    windHeightM: opts.windHeightM ?? windHeightM ?? DEFAULT_WIND_HEIGHT_M,
   }
-  if (opts.windHeightM === undefined && info.windHeightM === null && table.columns.wind) {
+  if (opts.windHeightM === undefined && windHeightM === null && table.columns.wind) {
     warnings.push(
       `wind height not given: assumed ${DEFAULT_WIND_HEIGHT_M} m (WMO standard); give --wind-height <m> if it differs`,
     )
@@ -117,20 +137,25 @@ export function readWeather(
   const result = assemble(table, {
     site,
     time: {
-      declaredOrder: opts.dateOrder ?? info.headerDateOrder ?? undefined,
+      declaredOrder: opts.dateOrder ?? info?.headerDateOrder ?? undefined,
       labels: opts.labels ?? null,
       fixedOffsetHours: fixedOffset,
-      zone: opts.timeZone ?? null,
-      headerSaysUtc: info.plan.headerSaysUtc,
+      zone,
+      headerSaysUtc: info?.plan.headerSaysUtc ?? false,
     },
     log,
     warnings,
-    elevationKnown: opts.elevationM !== undefined,
+    elevationKnown: site.elevationM !== null,
     variableTiming: opts.variableLabels,
     sampling: opts.sampling,
-    siteClock: { optionZone: opts.siteTimeZone },
+    siteClock: {
+      optionZone: opts.siteTimeZone,
+      fileZone: said.siteTimeZone ?? null,
+      fileOffsetHours: said.siteUtcOffsetHours ?? null,
+    },
   })
-  describeCsv(result, info)
+  if (table.dialect) result.dialect = table.dialect
+  if (info) describeCsv(result, info, table.dialect?.title)
   return result
 }
 
@@ -163,10 +188,10 @@ function readOwnExport(
   return result
 }
 
-function describeCsv(result: WeatherReadResult, info: DelimitedInfo): void {
+function describeCsv(result: WeatherReadResult, info: DelimitedInfo, dialect?: string): void {
   const name = info.delimiter === '\t' ? 'tab' : info.delimiter === ';' ? 'semicolon' : 'comma'
   result.warnings.unshift(
-    `${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,
+    `${dialect ? `${dialect}: ` : ''}${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,
   )
 }
 

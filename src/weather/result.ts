@@ -66,6 +66,8 @@ export interface MonthCoverage {
 export interface WeatherReadResult {
   series: HourlySeries
   format: 'csv' | 'epw'
+  /** The known layout the file was read as (e.g. `{ id: 'open-meteo', title: 'Open-Meteo hourly CSV' }`), when one recognised it. */
+  dialect?: { id: string; title: string }
   rows: RowCounts
   columns: ColumnReport[]
   /** First problems (capped), each with its line; `problemCounts` counts all. */

@@ -16,7 +16,7 @@ function readOrInputError(run: () => ReturnType<typeof readWeather>): void {
   }
 }
 
-/** A random walk of `n` integer steps in ±1…±max (never 0, so no stuck runs), as tenths. */
+/** A random walk of `n` integer steps in ±1…±max (never 0, so no stuck runs), as tenths; reflected at its bounds. */
 const walk = (n: number, start: fc.Arbitrary<number>, max: number) =>
   fc.tuple(
     start,
@@ -88,10 +88,13 @@ describe('reader properties', () => {
           }),
         ),
         ({ n, start, t, rh, p, w }) => {
+          // Reflect a step that would leave [lo, hi] instead of clamping it: a clamp repeats the
+          // bound (a plateau of 12 equal readings is, rightly, a stuck sensor), a reflection never
+          // repeats a value, as the walk's steps are never 0.
           const series = (s: [number, number[]], lo: number, hi: number) => {
             let x = s[0]
             return s[1].map((d) => {
-              x = Math.min(hi, Math.max(lo, x + d))
+              x = x + d > hi || x + d < lo ? x - d : x + d
               return x
             })
           }

@@ -120,10 +120,14 @@ describe('values over the preceding hour and running totals', () => {
         ghi: { label: 'end', intervalMinutes: 60 },
       },
     })
-    expect(r.series.dryBulbC[2]).toBe(12) // the 02:00 instant stands for 02:00–03:00
-    expect(r.series.rainMm[1]).toBe(1.5) // the rain stamped 02:00 fell in 01:00–02:00
-    expect(r.series.ghiWm2[1]).toBe(300)
-    expect(Number.isNaN(r.series.rainMm[3])).toBe(true) // the last hour's rain would be in the next row
+    // the first row's rain covers the hour before it: the series starts there (23:00), without a dry bulb
+    expect(iso(r.series.startUtcMs[0])).toBe('2021-05-31T23:00')
+    expect(r.series.quality[0] & QualityFlag.missingCore).toBeTruthy()
+    expect(r.series.rainMm[0]).toBe(0)
+    expect(r.series.dryBulbC[3]).toBe(12) // the 02:00 instant stands for 02:00–03:00
+    expect(r.series.rainMm[2]).toBe(1.5) // the rain stamped 02:00 fell in 01:00–02:00
+    expect(r.series.ghiWm2[2]).toBe(300)
+    expect(Number.isNaN(r.series.rainMm[4])).toBe(true) // the last hour's rain would be in the next row
     const plain = readWeather(text, { utcOffsetHours: 0 })
     expect(plain.series.rainMm[2]).toBe(1.5) // without the statement it is read one hour late
   })

@@ -37,6 +37,12 @@ function text(r: WeatherReadResult, file: string): string {
   const site = s.site
   const out: string[] = []
   out.push(`${file}: ${r.format.toUpperCase()}${s.typicalYear ? ', typical year' : ''}`)
+  const layout = r.dialect
+    ? `${r.dialect.title} (${r.dialect.id})`
+    : r.format === 'epw'
+      ? 'EPW (fixed fields)'
+      : 'no known layout recognised: read as generic delimited text'
+  out.push(`dialect     ${layout}`)
   const where = [
     site.name && JSON.stringify(site.name),
     site.latitudeDeg !== null ? `${site.latitudeDeg}°N ${site.longitudeDeg}°E` : 'latitude/longitude unknown',
