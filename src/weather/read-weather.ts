@@ -97,8 +97,14 @@ export function readWeather(
   const head = dialectHead(text)
   const dialect = opts.format === undefined || opts.format === 'auto' ? detectDialect(head) : null
   const reading = dialect
-    ? dialect.read(text, head, { mapping: opts.mapping ?? {}, log, warnings, clockGiven })
-    : readDelimited(text, opts.mapping ?? {}, log, warnings)
+    ? dialect.read(text, head, {
+        mapping: opts.mapping ?? {},
+        log,
+        warnings,
+        clockGiven,
+        headerLine: opts.headerLine,
+      })
+    : readDelimited(text, opts.mapping ?? {}, log, warnings, { headerLine: opts.headerLine })
   const table = reading.table
   const info = reading.info
   if (dialect) table.dialect = { id: dialect.id, title: dialect.title }
