@@ -254,9 +254,13 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
     )
   }
-  if (time.offsetSource !== 'file') {
+  if (time.offsetSource === 'longitude' || time.offsetSource === 'assumed-utc') {
     warnings.push(
-      `the file gives no UTC offset: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'})`,
+      `the site's clock is not known: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'}); give --site-tz <zone> for the site's own`,
+    )
+  } else if (time.offsetSource === 'timestamps') {
+    warnings.push(
+      `the site's clock is taken from the file's local timestamps (UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}); give --site-tz <zone> if the site keeps another`,
     )
   }
   if (primary.assumedIrradianceHours > 0) {

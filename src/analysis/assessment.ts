@@ -16,7 +16,7 @@ export interface AssessmentSite {
   elevationM: number | null
   /** Offset of the local standard time used for months, hours and start dates [h]. */
   utcOffsetHours: number
-  utcOffsetSource: 'file' | 'longitude' | 'assumed-utc'
+  utcOffsetSource: 'option' | 'file' | 'timestamps' | 'longitude' | 'assumed-utc'
   typicalYear: boolean
 }
 

@@ -57,8 +57,8 @@ export const SPIKE_LIMIT: Partial<Record<WeatherVariable, number>> = {
 
 /**
  * Number of consecutive identical readings after which a sensor is called stuck; the whole run is
- * rejected. Calm wind (0), saturated air (RH ≥ 90 %) and zero rain or irradiance are ordinary and
- * never count; nor does RH at or above {@link WET_RH_PLATEAU_PCT}. Common practice, no source.
+ * rejected. Calm wind (0), RH at or above {@link WET_RH_PLATEAU_PCT} (fog, drizzle, rain) and zero
+ * rain or irradiance are ordinary and never count. Common practice, no source.
  */
 export const STUCK_RUN_HOURS: Partial<Record<WeatherVariable, number>> = {
   dryBulb: 12,
@@ -154,6 +154,66 @@ export function rangeCheck(
   }
 }
 
+/**
+ * The range check of {@link rangeCheck} on readings before they are combined into hours: each value
+ * outside its range is set to NaN (RH up to {@link RH_CLAMP_MAX_PCT} clamped to 100 %, irradiance
+ * down to −15 W/m² set to 0) and logged with its own line. `rowChanged[i]` is set to 1 for a changed
+ * reading and 2 for a rejected one.
+ */
+export function rangeCheckReadings(
+  lines: Int32Array,
+  log: ProblemLog,
+  variable: WeatherVariable,
+  values: Float64Array,
+  unit: string,
+  rowChanged: Uint8Array,
+): number {
+  const [lo, hi] = VALID_RANGE[variable]
+  let rejected = 0
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i]
+    const rhHigh = variable === 'relativeHumidity' && v > 100
+    if (!(v < lo || v > hi) && !rhHigh) continue
+    if (rhHigh && v <= RH_CLAMP_MAX_PCT) {
+      values[i] = 100
+      if (rowChanged[i] === 0) rowChanged[i] = 1
+      log.add(lines[i], variable, 'rh-above-100', `relative humidity ${v} % set to 100 %`)
+      continue
+    }
+    if (rhHigh) {
+      values[i] = Number.NaN
+      rowChanged[i] = 2
+      rejected++
+      log.add(
+        lines[i],
+        variable,
+        'rh-above-100',
+        `relative humidity ${v} % is above 100 % (accepted up to ${RH_CLAMP_MAX_PCT} %, clamped): rejected`,
+      )
+      continue
+    }
+    values[i] = Number.NaN
+    rowChanged[i] = 2
+    rejected++
+    log.add(
+      lines[i],
+      variable,
+      'out-of-range',
+      `${variable} ${round(v)} ${unit} is outside ${lo}…${hi} ${unit}: rejected`,
+    )
+  }
+  if (variable === 'ghi') {
+    for (let i = 0; i < values.length; i++) {
+      const v = values[i]
+      if (!(v < 0)) continue
+      values[i] = 0
+      if (rowChanged[i] === 0) rowChanged[i] = 1
+      log.add(lines[i], variable, 'negative-irradiance', `irradiance ${round(v)} W/m² set to 0`)
+    }
+  }
+  return rejected
+}
+
 function lineOf(grid: HourGrid, s: number): number | null {
   const row = grid.slotRow[s]
   return row >= 0 ? grid.lines[row] : null
@@ -197,23 +257,30 @@ export function spikeCheck(
   }
 }
 
-/** Reject runs of identical readings at least {@link STUCK_RUN_HOURS} long. */
+/**
+ * Reject runs of identical readings at least {@link STUCK_RUN_HOURS} long. Hours marked in `exempt`
+ * (values the file itself says were supplied, not measured) end a run and are never judged.
+ */
 export function stuckCheck(
   grid: HourGrid,
   log: ProblemLog,
   variable: WeatherVariable,
   values: Float64Array,
   unit: string,
+  exempt?: Uint8Array,
 ): void {
   const minRun = STUCK_RUN_HOURS[variable]
   if (minRun === undefined) return
   let start = 0
   for (let s = 1; s <= values.length; s++) {
-    if (s < values.length && values[s] === values[start]) continue
+    if (s < values.length && values[s] === values[start] && !exempt?.[s] && !exempt?.[start]) continue
     const v = values[start]
     const length = s - start
     const ordinary =
-      Number.isNaN(v) || (variable === 'wind' && v === 0) || (variable === 'relativeHumidity' && v >= 99)
+      Number.isNaN(v) ||
+      exempt?.[start] === 1 ||
+      (variable === 'wind' && v === 0) ||
+      (variable === 'relativeHumidity' && v >= WET_RH_PLATEAU_PCT)
     if (length >= minRun && !ordinary) {
       for (let k = start; k < s; k++) {
         values[k] = Number.NaN

@@ -82,7 +82,13 @@ export interface RawColumn {
 export type RowSampling = 'readings' | 'reports'
 
 /** Per-row report kind in {@link RawTable.reportKind}. */
-export const ReportKind = { unknown: 0, routine: 1, special: 2 } as const
+export const ReportKind = {
+  unknown: 0,
+  routine: 1,
+  special: 2,
+  /** A summary row (daily or monthly summary in an hourly export): not an observation, dropped. */
+  summary: 3,
+} as const
 
 /** What the file itself states about its site and its clock (dialect metadata, header blocks). */
 export interface FileStatements {
@@ -128,6 +134,17 @@ export interface RawTable {
   statements?: FileStatements
   /** The known layout (format dialect) the file was read as, when one recognised it. */
   dialect?: { id: string; title: string }
+  /**
+   * Quality flags the file itself declares per row (`QualityFlag` bits; dryhours' own hourly export
+   * carries them in its `flags` column), merged into the hours' flags. A value marked as supplied
+   * (standard-atmosphere pressure, estimated irradiance) is not judged as a sensor reading.
+   */
+  rowFlags?: Uint8Array
+  /**
+   * The values already passed dryhours' checks (its own export): spike and stuck-sensor checks are
+   * not repeated, so reading the export back changes nothing.
+   */
+  checked?: boolean
   /** Columns seen but not used (header text). */
   unusedColumns: string[]
   plan?: ColumnPlan

@@ -16,10 +16,18 @@ export interface SiteInfo {
   longitudeDeg: number | null
   /** Elevation above sea level [m], null when unknown. */
   elevationM: number | null
-  /** IANA time-zone name of local timestamps, when known. */
+  /** IANA zone of the SITE's clock, when known (`--site-tz`, the file, or the timestamps' zone). */
   timeZone: string | null
-  /** Fixed offset of local standard time from UTC [h], when known (EPW header, or the user). */
+  /**
+   * Offset of the SITE's local standard time from UTC [h], when known: local hours, months and batch
+   * start times use it. Not the basis of the file's timestamps (a UTC file says nothing about it).
+   */
   utcOffsetHours: number | null
+  /**
+   * Where the site's clock came from: the user (`--site-tz`), the file's own statement (EPW header,
+   * a service's metadata), the timestamps' local clock, or the longitude (mean solar time to the hour).
+   */
+  utcOffsetSource?: 'option' | 'file' | 'timestamps' | 'longitude' | null
   /** Height of the wind measurement above ground [m]; 10 m (WMO standard) unless the file or user says otherwise. */
   windHeightM: number
 }
@@ -38,6 +46,16 @@ export const QualityFlag = {
   pressureFromElevation: 16,
   /** The hour's timestamp was duplicated in the input (first occurrence kept). */
   duplicateTimestamp: 32,
+  /**
+   * Irradiance estimated from what the file has (cloud cover, or the day's temperature range) because
+   * it has no irradiance column: see `weather/sun-estimate.ts` for the methods and their uncertainty.
+   */
+  irradianceEstimated: 64,
+  /**
+   * The hour was built from sub-hourly readings and some were missing (enough remained under the
+   * coverage rule of `weather/hourly-aggregate.ts`).
+   */
+  partialHour: 128,
 } as const
 
 /** How a variable's value relates to its timestamp. */

@@ -18,7 +18,7 @@ describe('POST /v1/inspect', () => {
     const body = await res.json()
     const direct = inspectJson(readWeather(csv, { latitudeDeg: 38.3, longitudeDeg: -2.6, elevationM: 1050 }))
     expect(body).toEqual(JSON.parse(JSON.stringify(direct)))
-    expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0 })
+    expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0, superseded: 0 })
   })
 
   it('reads an EPW demo file sent as multipart, with the row counts adding up', async () => {

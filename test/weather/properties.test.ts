@@ -107,7 +107,7 @@ describe('reader properties', () => {
           for (let i = 0; i < n; i++)
             lines.push(`${new Date(t0 + i * 3_600_000).toISOString()},${tt[i]},${rr[i]},${pp[i]},${ww[i]}`)
           const r = readWeather(lines.join('\n'))
-          expect(r.rows).toEqual({ read: n, used: n, repaired: 0, rejected: 0 })
+          expect(r.rows).toEqual({ read: n, used: n, repaired: 0, rejected: 0, superseded: 0 })
           expect(r.series.startUtcMs[0]).toBe(t0)
           expect(Array.from(r.series.dryBulbC)).toEqual(tt)
           expect(Array.from(r.series.relativeHumidityPct)).toEqual(rr)

@@ -81,7 +81,7 @@ describe('quality control', () => {
       expect(Number.isNaN(r.series.dryBulbC[s])).toBe(true)
       expect(r.series.quality[s] & QualityFlag.missingCore).toBeTruthy()
     }
-    expect(r.rows).toEqual({ read: n, used: n - 7, repaired: 3, rejected: 4 })
+    expect(r.rows).toEqual({ read: n, used: n - 7, repaired: 3, rejected: 4, superseded: 0 })
     expect(r.hoursMissingCore).toBe(4)
   })
 
