@@ -100,6 +100,11 @@ export interface FileStatements {
   timestampUtcOffsetHours?: number
   /** IANA zone of the timestamps (daylight saving applied). */
   timestampTimeZone?: string
+  /**
+   * The timestamps are in the site's local civil time (a home station's console or app, a hand-kept
+   * sheet) but the file does not name the zone: the user's `--site-tz` then also reads the timestamps.
+   */
+  timestampsInSiteClock?: boolean
   /** The site's own IANA zone, when the file names it (it may differ from the timestamps' basis). */
   siteTimeZone?: string
   /** The site's standard-time offset from UTC [h] (EPW header, `utc_offset_seconds`). */

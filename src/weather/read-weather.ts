@@ -107,7 +107,7 @@ export function readWeather(
     : readDelimited(text, opts.mapping ?? {}, log, warnings, { headerLine: opts.headerLine })
   const table = reading.table
   const info = reading.info
-  if (dialect) table.dialect = { id: dialect.id, title: dialect.title }
+  if (dialect) table.dialect ??= { id: dialect.id, title: dialect.title }
   // What the file states about its clock and site; the user's options win.
   const said = table.statements ?? {}
   const headerOffset = said.timestampUtcOffsetHours ?? info?.plan.headerUtcOffsetHours ?? null
@@ -121,7 +121,19 @@ export function readWeather(
       `the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`,
     )
   }
-  const fileZone = clockGiven ? undefined : said.timestampTimeZone
+  let fileZone = clockGiven ? undefined : said.timestampTimeZone
+  if (
+    fileZone === undefined &&
+    !clockGiven &&
+    headerOffset === null &&
+    said.timestampsInSiteClock &&
+    opts.siteTimeZone !== undefined
+  ) {
+    fileZone = opts.siteTimeZone
+    warnings.push(
+      `the file does not say which clock its times keep; read in the site's zone ${opts.siteTimeZone} (--site-tz), daylight saving applied: give --utc-offset or --tz if it keeps another`,
+    )
+  }
   const fixedOffset =
     opts.utcOffsetHours ?? (opts.timeZone === undefined && fileZone === undefined ? headerOffset : null)
   const windHeightM = info?.windHeightM ?? said.windHeightM ?? null
