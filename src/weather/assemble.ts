@@ -520,7 +520,8 @@ function variableRule(
   override: VariableTimingOverride | undefined,
 ): { kind: ValueKind; label: IntervalLabel; intervalMinutes: number } {
   const read = columnTiming(raw, variable, DEFAULT_TIMING[variable])
-  const label = override?.label ?? read.label ?? fileLabels
+  // a running total's increment covers the time since the previous row: it always ends at its stamp
+  const label = read.kind === 'running-total' ? 'end' : (override?.label ?? read.label ?? fileLabels)
   const intervalMinutes =
     override?.intervalMinutes ?? read.intervalMinutes ?? (plan.sampling === 'reports' ? 60 : plan.stepMinutes)
   return { kind: read.kind, label, intervalMinutes }

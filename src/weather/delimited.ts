@@ -70,6 +70,11 @@ export interface DelimitedLayout {
   dropRows?: { names: readonly string[]; drop: (text: string) => boolean; reason: string }
   /** Report kind per row (routine or special) from a column (by header names). */
   reportKind?: { names: readonly string[]; kind: (text: string) => number }
+  /**
+   * Quality-flag columns: the column `offset` places after each value column holds its flag, and
+   * `reject(flag)` says when the value is not to be used (it is then missing, counted in a warning).
+   */
+  qualityFlags?: { offset: number; reject: (flag: string) => boolean; describe: string }
 }
 
 /** Options of {@link readDelimited}: the format's layout and the user's header line. */
@@ -336,6 +341,16 @@ export function readDelimited(
   const valueColumns = Object.values(plan.variables).map((c) => c!.index)
   if (plan.windComponents) valueColumns.push(plan.windComponents.u.index, plan.windComponents.v.index)
   const textColumns = [...Object.values(plan.time)]
+  const flagOf = new Map<number, number>()
+  if (layout.qualityFlags) {
+    for (const c of valueColumns) {
+      const f = c + layout.qualityFlags.offset
+      if (f >= 0 && f < headers.length) {
+        flagOf.set(c, f)
+        if (!textColumns.includes(f)) textColumns.push(f)
+      }
+    }
+  }
   const dropColumn = layout.dropRows ? findNamedColumn(headers, layout.dropRows.names) : -1
   const kindColumn = layout.reportKind ? findNamedColumn(headers, layout.reportKind.names) : -1
   for (const c of [dropColumn, kindColumn]) if (c >= 0 && !textColumns.includes(c)) textColumns.push(c)
@@ -486,6 +501,22 @@ export function readDelimited(
         if (code === FIELD_MISSING) missing++
         else if (code === FIELD_UNREADABLE) unreadable(i, column?.[i])
       }
+    }
+    const flagColumn = flagOf.get(chosen.index)
+    if (flagColumn !== undefined && layout.qualityFlags) {
+      let flagged = 0
+      for (let i = 0; i < n; i++) {
+        if (Number.isNaN(values[i])) continue
+        if (layout.qualityFlags.reject(cells[flagColumn]?.[i] ?? '')) {
+          values[i] = Number.NaN
+          flagged++
+        }
+      }
+      missing += flagged
+      if (flagged > 0)
+        warnings.push(
+          `column '${snippet(chosen.header)}': ${flagged} values flagged ${layout.qualityFlags.describe} in '${snippet(headers[flagColumn])}': read as missing`,
+        )
     }
     if (missingCodes.length > 0) {
       for (let i = 0; i < n; i++) {

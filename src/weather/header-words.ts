@@ -126,6 +126,9 @@ const NOT_A_VALUE = set(
     'daily monthly yearly weekly normal normals departure duration short equipment mid',
 )
 
+/** Parts of compound words that make a column a direction (`Windrichtung`, `WindDirection`). */
+const DIRECTION_PARTS = ['richtung', 'direction', 'direccion', 'direcao', 'direzione']
+
 /** Words of indoor readings (a station's console or base unit). */
 const INDOOR = set(
   'indoor inside innen innentemperatur interior interieur interno inner tempin humidityin intemp inhumi',
@@ -157,6 +160,8 @@ const RH = set('rh relh rhum hum humidity hr rh2m ur rf rlf luftfeuchte')
 const RH_PARTS = ['humid', 'feuchte', 'humedad', 'umidade', 'humidade', 'umidita', 'feuchtigkeit']
 const NOT_RH = set('abs absolute specific ratio mixing spezifische absolut especifica specifique qv2m')
 const SEA_LEVEL = set('slp msl mslp pmsl qnh qff sealevel meeresspiegel nn reduced reduziert baromrel')
+/** With a pressure word: relative (reduced) pressure, or "sea" in French, Spanish, Portuguese, Italian. */
+const SEA_WORDS = set('rel relative relativ relativa mer mar mare')
 const ALTIMETER = set('altimeter alti altimetro altimetre altim')
 const VAPOUR = set('vapor vapour dampf dampfdruck vapeur vapore vp vpd deficit ea')
 const PRESSURE_OTHER = set('tendency change tend trend')
@@ -179,6 +184,7 @@ const GHI = set(
     'globalstrahlung radiacion rayonnement radiacao radiazione irradiancia irradiation solarradiation gs slr',
 )
 const GHI_WEAK = set('energy insolation sun')
+const SUN_GEOMETRY = set('zenith azimuth angle altitude height elevation h hsun')
 const RAIN = set(
   'rain precip precipitation prcp pcp rainfall lprecip p01i p01m ppt prectotcorr prectot tp niederschlag ' +
     'precipitacion lluvia pluie precipitations chuva precipitacao pioggia precipitazione rr regen',
@@ -224,7 +230,7 @@ export function classifyWords(words: string[], unitIsPercent = false): HeaderMea
     return { kind: 'wind-component', component: 'v' }
   if (anyWord(words, INDOOR) || (first === 'in' && words.length > 1) || name.endsWith(' in'))
     return { kind: 'excluded', reason: 'an indoor reading' }
-  if (anyWord(words, NOT_A_VALUE)) return null
+  if (anyWord(words, NOT_A_VALUE) || anyPart(words, DIRECTION_PARTS)) return null
   if (anyWord(words, DEW) || phrase(words, 'dew', 'point') || anyPart(words, DEW_PARTS))
     return variable('dewPoint')
   if (
@@ -251,7 +257,7 @@ export function classifyWords(words: string[], unitIsPercent = false): HeaderMea
     phrase(words, 'niveau', 'mer') ||
     phrase(words, 'nivel', 'do', 'mar') ||
     phrase(words, 'livello', 'del', 'mare') ||
-    (pressureLike && anyWord(words, set('rel relative relativ relativa')))
+    (pressureLike && anyWord(words, SEA_WORDS))
   )
     return { kind: 'excluded', reason: 'sea-level (reduced) pressure, not station pressure' }
   if (anyWord(words, ALTIMETER) || anyPart(words, ['altimeter']) || phrase(words, 'alt', 'setting'))
@@ -270,8 +276,10 @@ export function classifyWords(words: string[], unitIsPercent = false): HeaderMea
   if (pressureLike) return variable('pressure')
   if (anyWord(words, WIND) || anyPart(words, WIND_PARTS)) return variable('wind')
   if (anyWord(words, DIRECT)) return null
+  // Sun position (`Solar Zenith Angle`, `H_sun` sun height) is geometry, not irradiance.
+  if (anyWord(words, SUN_GEOMETRY)) return null
   if (anyWord(words, GHI) || anyPart(words, ['strahlung', 'radiat', 'irradi']))
-    return variable('ghi', words.includes('instant') ? 1 : 2)
+    return variable('ghi', words.includes('instant') || words.includes('energy') ? 1 : 2)
   if (anyWord(words, GHI_WEAK) && words.length > 1) return variable('ghi', 1)
   if (anyWord(words, RAIN) || anyPart(words, RAIN_PARTS)) {
     if (anyWord(words, NOT_RAIN)) return null

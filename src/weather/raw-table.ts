@@ -100,6 +100,11 @@ export interface FileStatements {
   timestampUtcOffsetHours?: number
   /** IANA zone of the timestamps (daylight saving applied). */
   timestampTimeZone?: string
+  /**
+   * The timestamps are in the site's local civil time (a home station's console or app, a hand-kept
+   * sheet) but the file does not name the zone: the user's `--site-tz` then also reads the timestamps.
+   */
+  timestampsInSiteClock?: boolean
   /** The site's own IANA zone, when the file names it (it may differ from the timestamps' basis). */
   siteTimeZone?: string
   /** The site's standard-time offset from UTC [h] (EPW header, `utc_offset_seconds`). */
@@ -132,6 +137,8 @@ export interface RawTable {
   reportKind?: Uint8Array
   /** What the file says about its site and clock. */
   statements?: FileStatements
+  /** The known layout (format dialect) the file was read as, when one recognised it. */
+  dialect?: { id: string; title: string }
   /**
    * Quality flags the file itself declares per row (`QualityFlag` bits; dryhours' own hourly export
    * carries them in its `flags` column), merged into the hours' flags. A value marked as supplied
@@ -143,8 +150,6 @@ export interface RawTable {
    * not repeated, so reading the export back changes nothing.
    */
   checked?: boolean
-  /** The known layout (format dialect) the file was read as, when one recognised it. */
-  dialect?: { id: string; title: string }
   /** Columns seen but not used (header text). */
   unusedColumns: string[]
   plan?: ColumnPlan

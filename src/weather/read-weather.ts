@@ -101,13 +101,13 @@ export function readWeather(
         mapping: opts.mapping ?? {},
         log,
         warnings,
-        clockGiven,
         headerLine: opts.headerLine,
+        clockGiven,
       })
     : readDelimited(text, opts.mapping ?? {}, log, warnings, { headerLine: opts.headerLine })
   const table = reading.table
   const info = reading.info
-  if (dialect) table.dialect = { id: dialect.id, title: dialect.title }
+  if (dialect) table.dialect ??= { id: dialect.id, title: dialect.title }
   // What the file states about its clock and site; the user's options win.
   const said = table.statements ?? {}
   const headerOffset = said.timestampUtcOffsetHours ?? info?.plan.headerUtcOffsetHours ?? null
@@ -121,10 +121,21 @@ export function readWeather(
       `the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`,
     )
   }
-  const fileZone = clockGiven ? undefined : said.timestampTimeZone
+  let fileZone = clockGiven ? undefined : said.timestampTimeZone
+  if (
+    fileZone === undefined &&
+    !clockGiven &&
+    headerOffset === null &&
+    said.timestampsInSiteClock &&
+    opts.siteTimeZone !== undefined
+  ) {
+    fileZone = opts.siteTimeZone
+    warnings.push(
+      `the file does not say which clock its times keep; read in the site's zone ${opts.siteTimeZone} (--site-tz), daylight saving applied: give --utc-offset or --tz if it keeps another`,
+    )
+  }
   const fixedOffset =
     opts.utcOffsetHours ?? (opts.timeZone === undefined && fileZone === undefined ? headerOffset : null)
-  const zone = opts.timeZone ?? fileZone ?? null
   const windHeightM = info?.windHeightM ?? said.windHeightM ?? null
   const site: SiteInfo = {
     name: opts.siteName ?? said.siteName ?? '',
@@ -146,7 +157,7 @@ export function readWeather(
       declaredOrder: opts.dateOrder ?? info?.headerDateOrder ?? undefined,
       labels: opts.labels ?? null,
       fixedOffsetHours: fixedOffset,
-      zone,
+      zone: opts.timeZone ?? fileZone ?? null,
       headerSaysUtc: info?.plan.headerSaysUtc ?? false,
     },
     log,
@@ -194,7 +205,7 @@ function readOwnExport(
   return result
 }
 
-function describeCsv(result: WeatherReadResult, info: DelimitedInfo, dialect?: string): void {
+function describeCsv(result: WeatherReadResult, info: DelimitedInfo, dialect: string | undefined): void {
   const name = info.delimiter === '\t' ? 'tab' : info.delimiter === ';' ? 'semicolon' : 'comma'
   result.warnings.unshift(
     `${dialect ? `${dialect}: ` : ''}${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,

@@ -5,7 +5,7 @@
  * `YYYY-MM-DD HH:MM`, `YYYY/MM/DD HH:MM`, `MM/DD/YYYY HH:MM` and `DD/MM/YYYY HH:MM` (order declared or
  * detected), `DD.MM.YYYY` (always day first), two-digit years (`1/2/21`), month words (`01-Jan-2021`,
  * `3 mars 2021` in six languages), compact dates (`20210101`, `2021010113`, `202101011330`,
- * `20090101:0010`), a separate time or hour column (`HH:MM`, `H:MM`, `HHMM`, `HH`, `0100`–`2400`),
+ * `20090101:0010`, `2021010113:26`), a separate time or hour column (`HH:MM`, `H:MM`, `HHMM`, `HH`, `0100`–`2400`),
  * 12-hour clocks (`1:00 PM`, `1:00a`, `12:30p`, `p.m.`), and 24:00 for midnight at the end of a day.
  * Components go into columns so the date order can be decided after every row has been seen.
  */
@@ -236,6 +236,19 @@ function readDate(c: Cursor): DatePart | null {
         minutes += s / 60
       }
       if (!Number.isFinite(minutes)) return null
+      // `2023070923:26`: an hour then `:MM` (the German weather service's solar product).
+      if (
+        a.length === 10 &&
+        c.peek() === COLON &&
+        isDigit(t.charCodeAt(c.k + 1)) &&
+        isDigit(t.charCodeAt(c.k + 2))
+      ) {
+        const m = digitsAt(t, c.k + 1, 2)
+        if (!isDigit(t.charCodeAt(c.k + 3)) && m < 60) {
+          minutes += m
+          c.k += 3
+        }
+      }
     }
     return {
       year: digitsAt(t, at, 4),

@@ -80,7 +80,8 @@ const perHour = (unit: string, scale: number): UnitConversion => ({ unit, scale,
  * the Use of the International System of Units", App. B.8 and B.9; from memory): °F → °C (t − 32)/1.8
  * and K → °C t − 273.15 (definitions); 1 inHg (conventional) = 3.386 389 kPa; 1 mmHg = 0.133 322 kPa;
  * 1 mph = 0.447 04 m/s, 1 knot = 1852/3600 m/s, 1 km/h = 1/3.6 m/s, 1 in = 25.4 mm (exact); 1 langley =
- * 41 840 J/m² (1 cal_th/cm², exact); 1 kWh = 3.6 MJ (exact). An amount of energy per m² over an hour
+ * 41 840 J/m² (1 cal_th/cm², exact), so 1 langley per day = 41 840 / 86 400 = 0.4843 W/m² as a day's mean
+ * rate; 1 kWh = 3.6 MJ (exact). An amount of energy per m² over an hour
  * divided by 3600 s is the mean irradiance over that hour; a precipitation amount of 1 kg/m² is 1 mm of
  * water (density 1000 kg/m³) and 1 m of ERA5-style total precipitation is 1000 mm. 1 okta = 1/8 of the
  * sky (WMO-No. 8), 1 tenth = 10 %.
@@ -117,6 +118,7 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     pa: u('Pa', 0.001),
     hpa: u('hPa', 0.1),
     mbar: u('mbar', 0.1),
+    mbars: u('mbar', 0.1),
     mb: u('mbar', 0.1),
     millibar: u('mbar', 0.1),
     millibars: u('mbar', 0.1),
@@ -164,6 +166,12 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     'mj/m2': perHour('MJ/m² per hour', 1e6 / 3600),
     jcm2: perHour('J/cm² per hour', 1e4 / 3600),
     'j/cm2': perHour('J/cm² per hour', 1e4 / 3600),
+    'ly/day': u('langley/day', 41840 / 86400),
+    'ly/d': u('langley/day', 41840 / 86400),
+    'langley/day': u('langley/day', 41840 / 86400),
+    'langleys/day': u('langley/day', 41840 / 86400),
+    'w/sqm': u('W/m²', 1),
+    'w/sq.m': u('W/m²', 1),
     ly: perHour('langley per hour', 41840 / 3600),
     langley: perHour('langley per hour', 41840 / 3600),
     langleys: perHour('langley per hour', 41840 / 3600),

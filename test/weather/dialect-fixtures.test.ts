@@ -58,8 +58,8 @@ describe('dialect fixtures: committed files', () => {
 
   it('every fixture states its variables with an expectation, and what a user must give', () => {
     for (const f of manifest.fixtures) {
-      expect(f.variables.length, f.file).toBeGreaterThan(0)
-      for (const v of f.variables) {
+      expect(f.variables.length + f.extraVariables.length, f.file).toBeGreaterThan(0)
+      for (const v of [...f.variables, ...f.extraVariables]) {
         const e = f.expect[v as keyof typeof f.expect]!
         expect(e.hours, `${f.file} ${v}`).toBeGreaterThanOrEqual(24)
         expect(e.maxRmse, `${f.file} ${v}`).toBeGreaterThanOrEqual(e.measured.rmse)

@@ -8,8 +8,10 @@ import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 import { dewPointFromVaporPressureC } from '../../src/physics/moist-air.ts'
 import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.ts'
-import { readWeatherBytes } from '../../src/weather/read-weather.ts'
+import { detectDialect, dialectHead } from '../../src/weather/dialects/index.ts'
+import { decodeWeatherBytes, readWeatherBytes } from '../../src/weather/read-weather.ts'
 import type { WeatherReadResult } from '../../src/weather/result.ts'
+import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 
 const DIR = join(import.meta.dirname, '../fixtures/weather/dialects')
 
@@ -42,15 +44,33 @@ interface Manifest {
 /**
  * Checks that fail today because of work in another area, as `it.fails` (flip to `it` once fixed):
  * - iem-asos-hourly.csv: the fixture's data rows put lon/lat/elevation before `valid`, against its
- *   own header (test/fixtures/weather/dialects/gen: asos.py writes them after `valid`).
+ *   own header (test/fixtures/weather/dialects/gen: asos.py writes them after `valid`);
+ * - wifi-station-export.csv rain: the last hour's last 5 minutes come after the last reading, and an
+ *   hourly total needs the whole hour (src/weather/hourly-aggregate.ts), so 71 hours, not the manifest's 72;
+ * - spreadsheet-es.csv and excel-units-row.csv label the END of each hour, which the files cannot say,
+ *   and the manifest's `needs` do not give (test/fixtures/weather/dialects/gen).
  */
 const AWAITING: Record<string, string> = {
   'iem-asos-hourly.csv': 'fixture column order',
+  'wifi-station-export.csv:rain_mm': 'the last hour of a running total is incomplete (71 hours)',
 }
+for (const file of ['spreadsheet-es.csv', 'excel-units-row.csv'])
+  for (const column of [
+    'dry_bulb_c',
+    'relative_humidity_pct',
+    'dew_point_c',
+    'pressure_kpa',
+    'wind_speed_ms',
+    'ghi_wm2',
+    'rain_mm',
+  ])
+    AWAITING[`${file}:${column}`] = 'labels are interval ends, not in the manifest needs'
 const check = (file: string, column?: string): typeof it =>
   AWAITING[file] !== undefined || (column !== undefined && AWAITING[`${file}:${column}`] !== undefined)
     ? (it.fails as unknown as typeof it)
     : it
+
+const DWD_TU = 'dwd-produkt-tu-stunde.txt'
 
 const manifest = JSON.parse(readFileSync(join(DIR, 'manifest.json'), 'utf8')) as Manifest
 
@@ -180,8 +200,15 @@ function circularDistance(a: number, b: number): number {
 describe('every dialect fixture reads back as the weather it was made from', () => {
   for (const f of manifest.fixtures) {
     const site = manifest.sites.find((s) => s.id === f.site)!
+    // A DWD product without temperature and humidity is read together with the station's 'tu' product.
+    const companion = f.dialect.startsWith('dwd-hourly-') && f.dialect !== 'dwd-hourly-tu' ? DWD_TU : null
+    const dialect = companion ? `dwd-hourly-tu+${f.dialect.slice('dwd-hourly-'.length)}` : f.dialect
+    const hasHumidity = f.variables.includes('relative_humidity_pct') || f.variables.includes('dew_point_c')
     describe(`${f.file} (${f.dialect})`, () => {
-      const bytes = new Uint8Array(readFileSync(join(DIR, f.file)))
+      const own = readFileSync(join(DIR, f.file))
+      const bytes = companion
+        ? new Uint8Array(Buffer.concat([readFileSync(join(DIR, companion)), own]))
+        : new Uint8Array(own)
       const truth = readTruth(f.truth)
       const extra = f.truthExtra ? readTruth(f.truthExtra) : new Map<number, Record<string, number>>()
       for (const [ms, values] of extra) truth.set(ms, { ...truth.get(ms), ...values })
@@ -191,9 +218,28 @@ describe('every dialect fixture reads back as the weather it was made from', () 
         return result
       }
 
-      check(f.file)(`is recognised as ${f.dialect} and read with only ${JSON.stringify(f.needs)}`, () => {
-        expect(read().dialect?.id).toBe(f.dialect)
-      })
+      if (!hasHumidity && companion === null) {
+        it(`is recognised as ${f.dialect}, and refused for want of humidity rather than read with an invented one`, () => {
+          expect(detectDialect(dialectHead(decodeWeatherBytes(bytes)))?.id).toBe(
+            f.dialect.replace(/-(tu|ff|p0|rr|st|n)$/, ''),
+          )
+          expect(read).toThrow(WeatherInputError)
+          expect(read).toThrow(/humidity/)
+        })
+        return
+      }
+
+      check(f.file)(
+        `is recognised as ${dialect} and read with only ${JSON.stringify(f.needs)}${companion ? ` (after ${companion})` : ''}`,
+        () => {
+          expect(read().dialect?.id).toBe(dialect)
+        },
+      )
+      if (companion !== null) {
+        it(`alone, is refused with the advice to add the station's 'tu' product`, () => {
+          expect(() => readWeatherBytes(new Uint8Array(own), optionsOf(f.needs))).toThrow(/"tu" product/)
+        })
+      }
 
       for (const column of [...f.variables, ...(f.extraVariables ?? [])]) {
         const e = f.expect[column]
