@@ -260,8 +260,9 @@ export function weatherOptionsFromTexts(
   for (const s of WEATHER_OPTION_SPECS) {
     const given = texts(s)
     if (given === undefined || given.length === 0) continue
+    // an empty value given on purpose (`--lat ''`, `lat=`) is an error, not an absent option
     const items = s.multiple ? given.flatMap(splitMultiple) : [given[given.length - 1]]
-    if (items.length === 0 || (items.length === 1 && items[0].trim() === '')) continue
+    if (items.length === 0) continue
     try {
       readInto(out, s, items)
     } catch (e) {
@@ -317,6 +318,7 @@ function readInto(out: Record<string, unknown>, s: WeatherOptionSpec, items: str
       return
     }
     default:
+      if (text.trim() === '') throw new RangeError('must not be empty')
       out[s.key] = text.trim()
   }
 }
