@@ -155,6 +155,8 @@ export interface Coverage {
   /** Minimum share of a month's hours with data for that month-year to enter the statistics. */
   monthCoverageRequired: number
   assumedIrradianceHours: number
+  /** Daylight hours whose irradiance the weather reader estimated (cloud cover or daily temperature range; see the assumptions). */
+  estimatedIrradianceHours: number
   assumedWindHours: number
   hasRainData: boolean
   startDateBatchesRun: number

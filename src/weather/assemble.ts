@@ -321,7 +321,17 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     const v = si[variable]
     if (v === undefined) continue
     if (!raw.checked) spikeCheck(grid, log, variable, v, SERIES_UNIT[variable])
-    if (variable === 'pressure' && constantPressure(v, ctx, warnings, notes)) continue
+    if (variable === 'pressure' && constantPressure(v, ctx, warnings, notes)) {
+      series.supplied = [
+        ...(series.supplied ?? []),
+        {
+          name: 'station pressure',
+          value: notes[notes.length - 1] ?? warnings[warnings.length - 1],
+          source: 'the file',
+        },
+      ]
+      continue
+    }
     if (!raw.checked)
       stuckCheck(
         grid,
@@ -406,6 +416,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   if (estimate !== null) {
     warnings.push(...estimate.warnings)
     notes.push(...estimate.notes)
+    if (estimate.supplied.length > 0) series.supplied = [...(series.supplied ?? []), ...estimate.supplied]
     if (estimate.hours > 0)
       columns.push({
         variable: 'ghi',

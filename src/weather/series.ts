@@ -94,6 +94,12 @@ export interface HourlySeries {
    * at the hour's labelled time (EPW: its end), interval values cover the hour. Set by the readers.
    */
   timing?: Partial<Record<string, ValueTiming>>
+  /**
+   * What the reader supplied rather than read (irradiance estimated from cloud cover or the daily
+   * temperature range, a constant pressure), with method, source and uncertainty: the assessment lists
+   * these among its assumptions.
+   */
+  supplied?: { name: string; value: string; source: string }[]
 }
 
 /** Allocate an empty series of `hours` hours starting at `firstStartUtcMs`, every value missing. */

@@ -60,6 +60,8 @@ export interface IrradianceEstimate {
   warnings: string[]
   /** Sentences for the assumptions (method, source, uncertainty). */
   notes: string[]
+  /** The same as assumption entries (name, value, source) for the assessment. */
+  supplied: { name: string; value: string; source: string }[]
 }
 
 /** Global irradiance of Kasten & Czeplak (1980) for N oktas at a sun altitude with sine `sinH` [W/m²]. */
@@ -122,6 +124,7 @@ export function estimateMissingIrradiance(
         `${what}: the sun cannot be estimated without the site's latitude and longitude (give --lat and --lon)`,
       ],
       notes: [],
+      supplied: [],
     }
   }
   const kRs = context.kRs ?? KRS_INTERIOR
@@ -198,8 +201,15 @@ export function estimateMissingIrradiance(
   const warnings: string[] = []
   const notes: string[] = []
   const parts: string[] = []
+  const supplied: IrradianceEstimate['supplied'] = []
   if (fromCloud > 0) {
     parts.push(`${fromCloud} from cloud cover`)
+    supplied.push({
+      name: 'irradiance estimated from cloud cover',
+      value: `${fromCloud} daylight hours (flag irradianceEstimated): G = (910·sin h − 30)·(1 − 0.75·(N/8)^3.4) W/m²; uncertainty: the mean for a cloud amount, single hours scatter widely; acceptable for monthly sums, not hour by hour`,
+      source:
+        'Kasten & Czeplak 1980, Solar Energy 24:177 (constants as quoted by implementations of the paper); Hay 1993, Renewable Energy 3:357',
+    })
     notes.push(
       `irradiance estimated from cloud cover in ${fromCloud} daylight hours: Kasten & Czeplak (1980, Solar Energy 24:177), ` +
         'G = (910·sin h − 30)·(1 − 0.75·(N/8)^3.4) W/m², fitted to ten years of hourly Hamburg data. ' +
@@ -210,6 +220,12 @@ export function estimateMissingIrradiance(
   }
   if (fromRange > 0) {
     parts.push(`${fromRange} from the daily temperature range`)
+    supplied.push({
+      name: 'irradiance estimated from the daily temperature range',
+      value: `${fromRange} daylight hours (flag irradianceEstimated): Rs = ${kRs}·√(Tmax − Tmin)·Ra per day (kRs ${kRs} interior, ${KRS_COASTAL} coastal), at most Rso, spread in the clear-sky shape; uncertainty: FAO-56 advises sums over 7–10 days, not single days; clouds within a day are not represented`,
+      source:
+        'Hargreaves & Samani 1982; Allen et al. 1998, FAO-56 eqs 21, 37, 50; Haurwitz 1945 (clear-sky shape)',
+    })
     notes.push(
       `irradiance estimated from the daily temperature range in ${fromRange} daylight hours: Hargreaves & Samani (1982), ` +
         `FAO-56 eq 50 (Allen et al. 1998), Rs = ${kRs}·√(Tmax − Tmin)·Ra (kRs ${kRs} for an interior site; ${KRS_COASTAL} near a coast), ` +
@@ -240,5 +256,6 @@ export function estimateMissingIrradiance(
           : 'estimated: daily temperature range (Hargreaves & Samani 1982, FAO-56 eq 50)',
     warnings,
     notes,
+    supplied,
   }
 }

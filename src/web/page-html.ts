@@ -71,7 +71,11 @@ const WEATHER_FIELD_HINTS: Record<
   lat: { inputmode: 'decimal' },
   lon: { inputmode: 'decimal' },
   elevation: { inputmode: 'decimal' },
-  utcOffset: { inputmode: 'decimal', placeholder: 'e.g. -6', hint: '0 for UTC; or give the time zone below' },
+  utcOffset: {
+    inputmode: 'decimal',
+    placeholder: 'e.g. -6',
+    hint: '0 for UTC; or give the time zone instead',
+  },
   tz: { placeholder: 'e.g. America/Chicago', hint: 'IANA name, when the time stamps follow daylight saving' },
   siteTz: { placeholder: 'e.g. Europe/Madrid', hint: 'when the file is in UTC and does not say where' },
   map: {

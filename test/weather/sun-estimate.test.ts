@@ -3,9 +3,12 @@
 // Samani) and Example 8 for the daily Ra of eq 21; Kasten & Czeplak (1980, Solar Energy 24:177) for the
 // cloud factor 1 − 0.75 (N/8)^3.4 and clear sky 910 sin h − 30 W/m² (constants as quoted by
 // implementations of the paper). Weather values are invented.
+import { readFileSync } from 'node:fs'
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
+import { assess } from '../../src/analysis/assess.ts'
 import { extraterrestrialRadiationDailyMjM2 } from '../../src/physics/fao56-solar.ts'
+import { productById } from '../../src/product/catalogue.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
 import { QualityFlag } from '../../src/weather/series.ts'
 import {
@@ -131,5 +134,42 @@ describe('estimates in a read file', () => {
     expect(r.series.quality[28] & QualityFlag.irradianceEstimated).toBeFalsy()
     expect(r.series.quality[35] & QualityFlag.irradianceEstimated).toBeTruthy()
     expect(r.series.ghiWm2[35]).toBeGreaterThan(0)
+  })
+})
+
+describe('through the engine', () => {
+  // A consistency check on invented demo weather (its irradiance comes from the demo generator's sky
+  // model, not from a measurement): ignoring the file's column, the estimate should give about the same
+  // usable hours for open-air drying, and a method that needs the sun is refused when nothing allows one.
+  const text = readFileSync(
+    new URL('../../climate-demo/ardentine-upland-2021-2024-utc.csv', import.meta.url),
+    'utf8',
+  )
+  const site = { latitudeDeg: 38.3, longitudeDeg: -2.6, elevationM: 1050 }
+  const options = {
+    product: productById('apricot-halves'),
+    method: { kind: 'open-air' as const },
+    seasonStart: '07-01',
+    seasonEnd: '07-31',
+    startStepDays: 15,
+  }
+
+  it('usable open-air hours from the estimated sun are within 5 % of those from the file’s irradiance, month by month', () => {
+    const measured = assess(readWeather(text, site).series, options)
+    const estimated = assess(
+      readWeather(text, { ...site, mapping: { ghi: { column: 'none' } } }).series,
+      options,
+    )
+    for (let m = 0; m < 12; m++) {
+      const a = measured.monthly[m].usableHours.median!
+      const b = estimated.monthly[m].usableHours.median!
+      expect(Math.abs(b - a) / a, `month ${m + 1}`).toBeLessThan(0.05)
+    }
+  })
+
+  it('without the site position nothing allows an estimate: open air is refused, shade is assessed', () => {
+    const series = readWeather(text, { mapping: { ghi: { column: 'none' } } }).series
+    expect(() => assess(series, options)).toThrow(/the open-air method needs the sun.*--lat and --lon/)
+    expect(() => assess(series, { ...options, method: { kind: 'shade' as const } })).not.toThrow()
   })
 })

@@ -93,7 +93,7 @@ function checkWork(options: AssessOptions, seriesList: HourlySeries[], config: A
 }
 
 /** Run the engine; RangeError → 422; the wall-clock budget (when the entry point gives a clock) → 422. */
-function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig): T {
+function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig, surface?: OptionSurface): T {
   const now = config?.now
   const budget = config?.timeBudgetMs ?? 0
   const started = now ? now() : 0
@@ -106,7 +106,8 @@ function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig): T
   try {
     return fn(onProgress)
   } catch (e) {
-    if (e instanceof RangeError) throw new ApiProblem(422, e.message)
+    if (e instanceof RangeError)
+      throw new ApiProblem(422, surface ? renderOptionNames(e.message, surface) : e.message)
     if (e instanceof TimeBudgetExceeded) {
       throw new ApiProblem(
         422,
@@ -139,6 +140,7 @@ export function assessRouter(config: ApiConfig): Hono {
     const assessment: Assessment = runEngine(
       (onProgress) => assess(read.series, { ...request.options, onProgress }),
       config,
+      request.surface,
     )
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (output.format === 'html') {
