@@ -13,6 +13,7 @@ import { fillDaytimeIrradiance, fixNightIrradiance, hourSun, interpolateShortGap
 import {
   aggregateVariable,
   deaccumulate,
+  intervalReach,
   MIN_MEAN_COVERAGE,
   MIN_TOTAL_COVERAGE,
   planRows,
@@ -129,12 +130,17 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   }
   if (missingColumns.length > 0) throw mergeErrors(missingColumns)
   warnings.push(...times.warnings)
-  const plan = planRows({
+  const rowTimes = {
     utcMs: times.rowUtcMs,
     labels: times.labels,
     sampling: ctx.sampling ?? raw.sampling,
     reportKind: raw.reportKind,
-  })
+  }
+  let plan = planRows(rowTimes)
+  // Interval values labelled apart from the rows' instants (rain over the hour before the stamp) may
+  // reach an hour beyond the rows' own: the grid holds it, so nothing the file says is dropped.
+  const reach = gridReach(raw, plan, times.labels, ctx.variableTiming)
+  if (reach !== null) plan = planRows({ ...rowTimes, extendToHoursMs: reach })
   if (plan.hours === 0) {
     throw new WeatherInputError(
       `none of the ${n} rows has a usable timestamp (first problem: ${log.problems[0]?.message ?? 'none'}); ` +
@@ -336,9 +342,11 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   if (si.pressure) {
     series.pressureKpa.set(si.pressure)
   }
+  // Only hours with a dry bulb need it (humidity from a wet bulb uses it); an hour without one is
+  // excluded anyway, and its export row stays empty rather than show a pressure nobody measured.
   let pressureSupplied = 0
   for (let s = 0; s < hours; s++) {
-    if (Number.isNaN(series.pressureKpa[s])) {
+    if (Number.isNaN(series.pressureKpa[s]) && !Number.isNaN(dry[s])) {
       series.pressureKpa[s] = standardKpa
       series.quality[s] |= QualityFlag.pressureFromElevation
       pressureSupplied++
@@ -416,6 +424,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       missingCore++
     }
   }
+  if (missingCore === hours) throw noUsableHour(series, columns, log, aggregation)
   const rows = countRows(raw, plan, series, grid, rowChanged, rowPlaced, log)
   aggregation.supersededRows = rows.superseded
   series.timing = Object.fromEntries(columns.map((c) => [c.variable, c.timing]))
@@ -445,6 +454,29 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     sourceYears: times.sourceYears,
     hourly: aggregation,
   }
+}
+
+/** The hours interval variables reach beyond the rows' own hours, or null when none. */
+function gridReach(
+  raw: RawTable,
+  plan: RowPlan,
+  fileLabels: IntervalLabel,
+  overrides: AssembleContext['variableTiming'],
+): [number, number] | null {
+  if (plan.hours === 0) return null
+  const last = plan.firstHourMs + (plan.hours - 1) * MS_PER_HOUR
+  let lo = plan.firstHourMs
+  let hi = last
+  for (const variable of WEATHER_VARIABLES) {
+    if (raw.columns[variable] === undefined) continue
+    const rule = variableRule(raw, variable, plan, fileLabels, overrides?.[variable])
+    if (rule.kind === 'instant' || rule.intervalMinutes > 60) continue
+    const r = intervalReach(plan, rule.label, rule.intervalMinutes)
+    if (r === null) continue
+    lo = Math.min(lo, r[0])
+    hi = Math.max(hi, r[1])
+  }
+  return lo < plan.firstHourMs || hi > last ? [lo, hi] : null
 }
 
 /** Convert a column's readings to the series unit in place; returns the count of missing codes found here. */
@@ -488,7 +520,8 @@ function variableRule(
   override: VariableTimingOverride | undefined,
 ): { kind: ValueKind; label: IntervalLabel; intervalMinutes: number } {
   const read = columnTiming(raw, variable, DEFAULT_TIMING[variable])
-  const label = override?.label ?? read.label ?? fileLabels
+  // a running total's increment covers the time since the previous row: it always ends at its stamp
+  const label = read.kind === 'running-total' ? 'end' : (override?.label ?? read.label ?? fileLabels)
   const intervalMinutes =
     override?.intervalMinutes ?? read.intervalMinutes ?? (plan.sampling === 'reports' ? 60 : plan.stepMinutes)
   return { kind: read.kind, label, intervalMinutes }
@@ -707,6 +740,46 @@ function countHoursWithoutRow(plan: RowPlan): number {
   let count = 0
   for (let h = 0; h < plan.hours; h++) if (!has[h]) count++
   return count
+}
+
+/**
+ * The error for a file with rows but not one hour that has both dry bulb and humidity: which of the
+ * two is missing, how the values were lost (counts of problems by kind) and what to check.
+ */
+function noUsableHour(
+  series: { hours: number; dryBulbC: Float64Array; relativeHumidityPct: Float64Array },
+  columns: ColumnReport[],
+  log: ProblemLog,
+  aggregation: HourlyAggregation,
+): WeatherInputError {
+  let withDry = 0
+  let withHumidity = 0
+  for (let s = 0; s < series.hours; s++) {
+    if (!Number.isNaN(series.dryBulbC[s])) withDry++
+    if (!Number.isNaN(series.relativeHumidityPct[s])) withHumidity++
+  }
+  const lacking: string[] = []
+  const humiditySources = columns
+    .filter((c) => c.variable === 'relativeHumidity' || c.variable === 'dewPoint' || c.variable === 'wetBulb')
+    .map((c) => `'${snippet(c.source)}'`)
+  const drySource = columns.find((c) => c.variable === 'dryBulb')?.source ?? ''
+  if (withDry === 0) lacking.push(`no hour has a dry bulb (column '${snippet(drySource)}')`)
+  if (withHumidity === 0) lacking.push(`no hour has a humidity (column ${humiditySources.join(', ')})`)
+  if (lacking.length === 0)
+    lacking.push(`${withDry} hours have a dry bulb and ${withHumidity} a humidity, but never the same hour`)
+  const counts = Object.entries(log.counts)
+    .sort((a, b) => (b[1] ?? 0) - (a[1] ?? 0))
+    .slice(0, 4)
+    .map(([k, v]) => `${k} ${v}`)
+  const below = Object.entries(aggregation.hoursBelowCoverage).map(
+    ([v, k]) => `${v} ${k} hours with too few readings`,
+  )
+  const why = [...counts, ...below]
+  return new WeatherInputError(
+    `no usable hour in the file: ${lacking.join('; ')}${why.length > 0 ? ` (problems: ${why.join(', ')})` : ''}; ` +
+      'check that the columns hold numbers in the stated units, or map the right ones with --map',
+    ['usable hours'],
+  )
 }
 
 /** Errors for absent dry bulb or humidity columns (checked before anything else is computed). */

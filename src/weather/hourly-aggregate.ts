@@ -53,6 +53,11 @@ export interface RowTimes {
   sampling?: RowSampling
   /** Per-row report kind (routine, special), when the reader knows it. */
   reportKind?: Uint8Array
+  /**
+   * Hours [UTC ms of their starts] the grid must also hold: those that interval values reach beyond
+   * the rows' own hours (rain over the hour before the first row's time).
+   */
+  extendToHoursMs?: [number, number]
 }
 
 /** How the rows were turned into hours, shared by every variable. */
@@ -208,6 +213,10 @@ export function planRows(times: RowTimes): RowPlan {
     if (h < firstHour) firstHour = h
     if (h > lastHour) lastHour = h
   }
+  if (times.extendToHoursMs !== undefined && Number.isFinite(firstHour)) {
+    firstHour = Math.min(firstHour, Math.floor(times.extendToHoursMs[0] / MS_PER_HOUR))
+    lastHour = Math.max(lastHour, Math.floor(times.extendToHoursMs[1] / MS_PER_HOUR))
+  }
   const firstHourMs = Number.isFinite(firstHour) ? firstHour * MS_PER_HOUR : Number.NaN
   const hours = Number.isFinite(firstHour) ? lastHour - firstHour + 1 : 0
   const rowHour = new Int32Array(n).fill(-1)
@@ -267,12 +276,16 @@ function minuteOf(t: number): number {
 
 /**
  * The span each row represents: the smaller positive spacing to its previous and next placed rows
- * (file order), at most one hour; a row with no neighbour spacing takes the file's step.
+ * (file order), at most one hour. A spacing below an hour that is a whole multiple of the file's step
+ * means readings are missing in between, so the row spans one step; a spacing of an hour or more is
+ * another regime (an hourly part of a file that later logs every 10 minutes) and is kept. A row with
+ * no neighbour takes the file's step.
  */
 function rowSpans(timeMs: Float64Array, duplicateOf: Int32Array, stepMinutes: number): Float64Array {
   const n = timeMs.length
   const span = new Float64Array(n)
-  const fallback = Math.min(stepMinutes * MS_PER_MINUTE, MS_PER_HOUR)
+  const stepMs = stepMinutes * MS_PER_MINUTE
+  const fallback = Math.min(stepMs, MS_PER_HOUR)
   let previous = -1
   const gapBefore = new Float64Array(n).fill(Number.POSITIVE_INFINITY)
   const gapAfter = new Float64Array(n).fill(Number.POSITIVE_INFINITY)
@@ -288,10 +301,40 @@ function rowSpans(timeMs: Float64Array, duplicateOf: Int32Array, stepMinutes: nu
     previous = i
   }
   for (let i = 0; i < n; i++) {
-    const d = Math.min(gapBefore[i], gapAfter[i])
-    span[i] = Number.isFinite(d) ? Math.min(d, MS_PER_HOUR) : fallback
+    let d = Math.min(gapBefore[i], gapAfter[i])
+    if (!Number.isFinite(d)) {
+      span[i] = fallback
+      continue
+    }
+    const k = d / stepMs
+    if (d < MS_PER_HOUR && k > 1 && Math.abs(k - Math.round(k)) < 1e-9) d = stepMs
+    span[i] = Math.min(d, MS_PER_HOUR)
   }
   return span
+}
+
+/**
+ * The first and last hour starts [ms] an interval value reaches, over rows with a time: for a label
+ * at the end, the interval before the time; at the start, the interval after it. Null when none.
+ */
+export function intervalReach(
+  plan: RowPlan,
+  label: IntervalLabel,
+  intervalMinutes: number,
+): [number, number] | null {
+  let lo = Number.POSITIVE_INFINITY
+  let hi = Number.NEGATIVE_INFINITY
+  for (let i = 0; i < plan.timeMs.length; i++) {
+    const t = plan.timeMs[i]
+    if (Number.isNaN(t)) continue
+    if (t < lo) lo = t
+    if (t > hi) hi = t
+  }
+  if (!Number.isFinite(lo)) return null
+  const length = Math.min(intervalMinutes, 60) * MS_PER_MINUTE
+  const a = label === 'end' ? lo - length : lo
+  const b = label === 'end' ? hi - 1 : hi + length - 1
+  return [Math.floor(a / MS_PER_HOUR) * MS_PER_HOUR, Math.floor(b / MS_PER_HOUR) * MS_PER_HOUR]
 }
 
 /** One variable's hourly values and how they came about. */

@@ -106,7 +106,7 @@ describe('years outside 1800–2200 and typical-year detection', () => {
       const days = new Date(Date.UTC(y, m, 0)).getUTCDate()
       for (let d = 1; d <= days; d++) {
         const year = m === split && d === days ? y + 20 : y
-        for (let h = 0; h < 24; h++) rows.push([year, m, d, h, 10, 50])
+        for (let h = 0; h < 24; h++) rows.push([year, m, d, h, 10 + (h % 4), 50 + (h % 3)])
       }
     }
     return rows

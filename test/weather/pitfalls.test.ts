@@ -79,7 +79,7 @@ describe('daylight saving (pitfall 7)', () => {
 
 describe('clock and calendar (pitfalls 3, 4, 5)', () => {
   it('24:00 is midnight at the end of the day, and 01:00–24:00 files are read as hour-ending', () => {
-    const rows = Array.from({ length: 24 }, (_, h) => [`1/1/2021`, `${h + 1}:00`, 3 + h, 60])
+    const rows = Array.from({ length: 24 }, (_, h) => [`1/1/2021`, `${h + 1}:00`, 3 + h, 60 + (h % 5)])
     const r = readWeather(csv(['Date (MM/DD/YYYY)', 'Time (HH:MM)', 'Dry-bulb (C)', 'RHum (%)'], rows), {
       utcOffsetHours: 0,
     })
@@ -148,7 +148,7 @@ describe('clock and calendar (pitfalls 3, 4, 5)', () => {
       [1995, 1],
       [1999, 3],
     ])
-      for (let h = 0; h < 24; h++) rows.push([y, m, 1, h, 10, 50])
+      for (let h = 0; h < 24; h++) rows.push([y, m, 1, h, 10 + (h % 4), 50 + (h % 3)])
     const r = readWeather(csv(['year', 'month', 'day', 'hour', 'temp', 'rh'], rows), { utcOffsetHours: 0 })
     expect(r.series.typicalYear).toBe(false)
     expect(r.years).toEqual([1995, 1996, 1997, 1998, 1999])

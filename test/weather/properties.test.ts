@@ -8,7 +8,7 @@ import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 function readOrInputError(run: () => ReturnType<typeof readWeather>): void {
   try {
     const r = run()
-    expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(r.rows.read)
+    expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(r.rows.read)
     expect(r.series.startUtcMs.length).toBe(r.series.hours)
   } catch (e) {
     if (!(e instanceof WeatherInputError)) throw e
@@ -152,7 +152,7 @@ describe('reader properties', () => {
           try {
             const r = readWeather(lines.join('\n'), { utcOffsetHours: 0 })
             expect(r.rows.read).toBe(count)
-            expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(count)
+            expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(count)
           } catch (e) {
             expect(e).toBeInstanceOf(WeatherInputError)
           }

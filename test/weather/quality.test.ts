@@ -29,7 +29,7 @@ describe('quality control', () => {
     expect(r.problemCounts['stuck-sensor']).toBe(12)
     for (let s = 5; s < 17; s++) expect(Number.isNaN(r.series.dryBulbC[s])).toBe(true)
     expect(r.rows.rejected).toBe(12)
-    expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(n)
+    expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(n)
   })
 
   it('11 equal hours are not a stuck sensor', () => {

@@ -13,6 +13,7 @@ import { seasonDays } from '../../analysis/start-dates.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
+import { type OptionSurface, renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import type { HourlySeries } from '../../weather/series.ts'
@@ -29,6 +30,7 @@ import {
 } from '../schemas/assess.ts'
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
+import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
 
 const outputQuerySchema = z.object({
   format: z.enum(['json', 'csv', 'html']).optional(),
@@ -55,11 +57,11 @@ async function parseRequest(c: Context): Promise<Parsed> {
 export function readSite(file: UploadedFile, request: AssessRequest, config: ApiConfig): WeatherReadResult {
   const text = checkedUploadText(file, config)
   try {
-    const result = readWeather(text, request.weather)
+    const result = renderReadingMessages(readWeather(text, request.weather), request.surface)
     if (result.series.site.name.trim() === '') result.series.site.name = file.name
     return result
   } catch (e) {
-    if (e instanceof WeatherInputError) throw new ApiProblem(422, `${file.name}: ${e.message}`)
+    if (e instanceof WeatherInputError) throw weatherInputProblem(e, request.surface, file.name)
     throw e
   }
 }
@@ -162,8 +164,13 @@ export function assessRouter(config: ApiConfig): Hono {
         ),
       )
     }
-    return c.json(assessment)
+    return c.json(renderAssessmentWarnings(assessment, request.surface))
   })
+}
+
+/** The assessment's warnings with option names as the request gave them. */
+function renderAssessmentWarnings(a: Assessment, surface: OptionSurface): Assessment {
+  return { ...a, warnings: a.warnings.map((w) => renderOptionNames(w, surface)) }
 }
 
 export function compareRouter(config: ApiConfig): Hono {
