@@ -63,10 +63,9 @@ describe('the two inputs of the issue', () => {
 describe('more hostile shapes, each read in one pass', () => {
   it('a body whose lines hold no delimiter (each line searched to the end of the file before)', () => {
     const lines = Array.from({ length: 20_000 }, (_, h) => new Date(Date.UTC(2021, 0, 1, h)).toISOString())
-    const r = readWeather(`timestamp,temp_c,rh_pct\n${lines.join('\n')}\n`, { utcOffsetHours: 0 })
-    expect(r.rows.read).toBe(20_000)
-    expect(r.rows.used).toBe(0)
-    expect(r.hoursMissingCore).toBe(r.series.hours)
+    const text = `timestamp,temp_c,rh_pct\n${lines.join('\n')}\n`
+    expect(() => readWeather(text, { utcOffsetHours: 0 })).toThrow(WeatherInputError)
+    expect(() => readWeather(text, { utcOffsetHours: 0 })).toThrow(/no usable hour/)
   })
 
   it('a number cell of one digit, 100,000 spaces and a letter is unreadable, not a unit', () => {

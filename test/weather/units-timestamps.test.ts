@@ -240,11 +240,7 @@ describe('header words in six languages, and the columns that are not what they 
     const a = analyseHeader(header)
     expect(a.meaning).toMatchObject({ kind: 'variable', variable })
     const conversion =
-      a.meaning?.kind === 'variable'
-        ? (a.units
-            .map((u) => unitConversion(a.meaning!.kind === 'variable' ? variable : 'dryBulb', u))
-            .find(Boolean) ?? null)
-        : null
+      a.units.map((u) => unitConversion(variable as WeatherVariable, u)).find(Boolean) ?? null
     expect(conversion?.unit ?? null).toBe(unit)
   })
 
