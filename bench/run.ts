@@ -18,6 +18,7 @@ const sections: Array<() => Promise<{ section: BenchSection }>> = [
   () => import('./sections/moist-air.ts'),
   () => import('./sections/ingest.ts'),
   () => import('./sections/engine.ts'),
+  () => import('./sections/hostile.ts'),
   () => import('./sections/energy-detection.ts'),
 ]
 

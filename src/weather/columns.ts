@@ -201,17 +201,18 @@ export function analyseHeader(header: string, unitsRowCell?: string): HeaderAnal
     }
   }
   let meaning = classifyWords(words, percent)
-  if (words.length === 1) {
+  if (words.length === 1 && meaning?.kind !== 'excluded' && meaning?.kind !== 'time') {
     const w = words[0]
     const named = NAME_UNITS[w]
     if (named !== undefined && meaning !== null) units.push(named)
-    else if (meaning === null) {
+    else {
+      // A unit word at the end of a one-word name (`tempf`, `windspeedmph`, `baromabsin`).
       for (const suffix of NAME_SUFFIXES) {
         if (w.length <= suffix.length + 2 || !w.endsWith(suffix)) continue
         const stem = classifyWords([w.slice(0, -suffix.length)], percent)
         if (stem === null) continue
         if (stem.kind !== 'variable') {
-          meaning = stem
+          if (meaning === null) meaning = stem
           break
         }
         // Station exports write inches of mercury as a bare 'in' after a pressure name (`baromabsin`).

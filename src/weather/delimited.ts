@@ -847,6 +847,10 @@ function scanBody(
     numbers[c] = { values: new Float64Array(capacity).fill(Number.NaN), blank: 0, other: [] }
   const lineList = new Int32Array(capacity)
   const delim = delimiter.charCodeAt(0)
+  // The next delimiter at or after the scan position: searched again only once passed, so the
+  // searches together read the text once (a line without delimiters cannot send each search to the
+  // end of the file).
+  let nextDelimiter = body.indexOf(delimiter)
   const comma = decimalComma ? 44 : -1
   let rows = 0
   let pos = 0
@@ -860,8 +864,8 @@ function scanBody(
       let start = pos
       let col = 0
       for (; col <= maxCol; col++) {
-        let stop = body.indexOf(delimiter, start)
-        if (stop < 0 || stop > end) stop = end
+        if (nextDelimiter >= 0 && nextDelimiter < start) nextDelimiter = body.indexOf(delimiter, start)
+        const stop = nextDelimiter < 0 || nextDelimiter > end ? end : nextDelimiter
         const k = kind[col]
         if (k === 1) cells[col][rows] = body.slice(start, stop)
         else if (k === 2) {

@@ -163,7 +163,7 @@ const SEA_LEVEL = set('slp msl mslp pmsl qnh qff sealevel meeresspiegel nn reduc
 /** With a pressure word: relative (reduced) pressure, or "sea" in French, Spanish, Portuguese, Italian. */
 const SEA_WORDS = set('rel relative relativ relativa mer mar mare')
 const ALTIMETER = set('altimeter alti altimetro altimetre altim')
-const VAPOUR = set('vapor vapour dampf dampfdruck vapeur vapore vp vpd deficit ea')
+const VAPOUR = set('vapor vapour vap dampf dampfdruck vapeur vapore vp vpd deficit ea')
 const PRESSURE_OTHER = set('tendency change tend trend')
 const TEMP = set(
   'temp temperature tdb t2m tair airt airtc dry drybulb t ta tmp tmpf tmpc tt temperatura lufttemperatur',

@@ -454,38 +454,56 @@ export function parseTimestampInto(
   return true
 }
 
-function digit(text: string, k: number): number {
-  const c = text.charCodeAt(k) - 48
-  return c >= 0 && c <= 9 ? c : Number.NaN
-}
-
 /**
  * The common shapes `YYYY-MM-DDTHH:MM`, `YYYY-MM-DD HH:MM`, optionally `:SS`, then nothing or `Z`,
  * read by fixed character positions (a 30-year file has 263,000 of them). Returns false for anything
  * else, which the scanner then reads.
  */
 function parseIsoFast(out: TimestampColumns, i: number, text: string): boolean {
-  const n = text.length
-  if (n < 16 || text.charCodeAt(4) !== 45 || text.charCodeAt(7) !== 45 || text.charCodeAt(13) !== 58)
+  return parseIsoFastAt(out, i, text, 0, text.length)
+}
+
+/**
+ * {@link parseIsoFast} on `text[from, to)`, so a reader can parse a cell in place without cutting it
+ * out of the file's text.
+ */
+export function parseIsoFastAt(
+  out: TimestampColumns,
+  i: number,
+  text: string,
+  from: number,
+  to: number,
+): boolean {
+  const n = to - from
+  if (
+    n < 16 ||
+    text.charCodeAt(from + 4) !== 45 ||
+    text.charCodeAt(from + 7) !== 45 ||
+    text.charCodeAt(from + 13) !== 58
+  )
     return false
-  const sep = text.charCodeAt(10)
+  const sep = text.charCodeAt(from + 10)
   if (sep !== 84 && sep !== 32) return false
   let k = 16
   let seconds = 0
-  if (n >= 19 && text.charCodeAt(16) === 58) {
-    seconds = digit(text, 17) * 10 + digit(text, 18)
+  if (n >= 19 && text.charCodeAt(from + 16) === 58) {
+    seconds = digitAt(text, from + 17) * 10 + digitAt(text, from + 18)
     if (!(seconds < 60)) return false
     k = 19
   }
   let offset = Number.NaN
   if (k === n) offset = Number.NaN
-  else if (k === n - 1 && text.charCodeAt(k) === 90) offset = 0
+  else if (k === n - 1 && text.charCodeAt(from + k) === 90) offset = 0
   else return false
-  const year = digit(text, 0) * 1000 + digit(text, 1) * 100 + digit(text, 2) * 10 + digit(text, 3)
-  const month = digit(text, 5) * 10 + digit(text, 6)
-  const day = digit(text, 8) * 10 + digit(text, 9)
-  const hour = digit(text, 11) * 10 + digit(text, 12)
-  const minute = digit(text, 14) * 10 + digit(text, 15)
+  const year =
+    digitAt(text, from) * 1000 +
+    digitAt(text, from + 1) * 100 +
+    digitAt(text, from + 2) * 10 +
+    digitAt(text, from + 3)
+  const month = digitAt(text, from + 5) * 10 + digitAt(text, from + 6)
+  const day = digitAt(text, from + 8) * 10 + digitAt(text, from + 9)
+  const hour = digitAt(text, from + 11) * 10 + digitAt(text, from + 12)
+  const minute = digitAt(text, from + 14) * 10 + digitAt(text, from + 15)
   const minutes = minutesOf(hour, minute, undefined)
   if (Number.isNaN(year + month + day) || Number.isNaN(minutes)) return false
   out.year[i] = year
@@ -495,6 +513,11 @@ function parseIsoFast(out: TimestampColumns, i: number, text: string): boolean {
   out.minuteOfDay[i] = seconds === 0 ? minutes : minutes + seconds / 60
   out.offsetMin[i] = offset
   return true
+}
+
+function digitAt(text: string, k: number): number {
+  const c = text.charCodeAt(k) - 48
+  return c >= 0 && c <= 9 ? c : Number.NaN
 }
 
 /**
