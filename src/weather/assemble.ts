@@ -198,9 +198,12 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     if (col === undefined) continue
     const { conversion, unitFrom } = decideConversion(variable, col, warnings)
     const codes = convertReadings(raw, col, variable, conversion, warnings)
-    const implausible = implausibleUnitWarning(variable, col.source, conversion, col.values)
-    if (implausible) warnings.push(implausible)
-    rangeCheckReadings(raw.lines, log, variable, col.values, SERIES_UNIT[variable], rowChanged)
+    // a running total is judged once turned into increments (its day's sum may exceed an hour's range)
+    if (columnTiming(raw, variable, DEFAULT_TIMING[variable]).kind !== 'running-total') {
+      const implausible = implausibleUnitWarning(variable, col.source, conversion, col.values)
+      if (implausible) warnings.push(implausible)
+      rangeCheckReadings(raw.lines, log, variable, col.values, SERIES_UNIT[variable], rowChanged)
+    }
     converted[variable] = { col, conversion }
     columns.push({
       variable,
@@ -265,6 +268,8 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     if (variable === 'ghi' && isEnergyAmount(entry.conversion)) {
       values = rescaleAmountToMean(values, rule.intervalMinutes, intervals)
     }
+    if (rule.kind === 'running-total')
+      rangeCheckReadings(raw.lines, log, variable, values, SERIES_UNIT[variable], rowChanged)
     const aggregated = aggregateVariable(
       values,
       plan,

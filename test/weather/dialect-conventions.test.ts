@@ -48,10 +48,7 @@ describe('LCD values', () => {
 })
 
 describe('ERA5-Land accumulations since 00 UTC', () => {
-  // it.fails: src/weather/assemble.ts range-checks each reading before a running total is
-  // differenced, so the day's accumulation (above 1500 W/m² as an hourly amount) is rejected as out of
-  // range instead of being turned into hourly increments. Flip to `it` once fixed there.
-  it.fails('are recognised (an hour above what the sun can give) and differenced back to hourly means', () => {
+  it('are recognised (an hour above what the sun can give) and differenced back to hourly means', () => {
     // Invented: 400 W/m² in each of the 6 hours 14–20 UTC (around local noon at 68° W), accumulated from 00 UTC.
     const lines = ['valid_time,t2m,d2m,sp,u10,v10,ssrd,tp,latitude,longitude']
     let acc = 0
