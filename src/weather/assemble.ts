@@ -39,7 +39,7 @@ import {
   type ValueKind,
 } from './raw-table.ts'
 import type { ColumnReport, HourlyAggregation, WeatherReadResult } from './result.ts'
-import { createEmptySeries, QualityFlag, type SiteInfo, type ValueTiming } from './series.ts'
+import { createEmptySeries, missingColumn, QualityFlag, type SiteInfo, type ValueTiming } from './series.ts'
 import { resolveSiteClock } from './site-clock.ts'
 import { snippet } from './snippet.ts'
 import { estimateMissingIrradiance } from './sun-estimate.ts'
@@ -168,7 +168,8 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       ['timestamps'],
     )
   }
-  const series = createEmptySeries(ctx.site, first, hours)
+  // value columns are assigned below from the hourly columns (no copies)
+  const series = createEmptySeries(ctx.site, first, hours, false)
   series.typicalYear = times.typicalYear
   const grid: HourGrid = {
     hours,
@@ -281,12 +282,13 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       intervals,
     )
     si[variable] = aggregated.values
-    for (let i = 0; i < n; i++) if (aggregated.rowPlaced[i]) rowPlaced[i] = 1
-    for (let h = 0; h < hours; h++) {
-      if (aggregated.partial[h]) partial[h] = 1
-      if (plan.sampling === 'reports' && variable === 'dryBulb' && aggregated.row[h] >= 0)
-        grid.slotRow[h] = aggregated.row[h]
+    if (plan.sampling === 'reports') {
+      for (let i = 0; i < n; i++) if (aggregated.rowPlaced[i]) rowPlaced[i] = 1
+      if (variable === 'dryBulb')
+        for (let h = 0; h < hours; h++) if (aggregated.row[h] >= 0) grid.slotRow[h] = aggregated.row[h]
     }
+    if (aggregated.partial.length > 0)
+      for (let h = 0; h < hours; h++) if (aggregated.partial[h]) partial[h] = 1
     if (aggregated.fromSeveralRows > aggregation.hoursFromSeveralRows)
       aggregation.hoursFromSeveralRows = aggregated.fromSeveralRows
     if (aggregated.belowCoverage > 0) aggregation.hoursBelowCoverage[variable] = aggregated.belowCoverage
@@ -354,9 +356,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   // Pressure: the file's, else (and in its long gaps) the standard atmosphere at the site elevation.
   const elevation = ctx.site.elevationM ?? 0
   const standardKpa = standardPressureKpaAtElevation(elevation)
-  if (si.pressure) {
-    series.pressureKpa.set(si.pressure)
-  }
+  series.pressureKpa = si.pressure ?? missingColumn(hours)
   // Only hours with a dry bulb need it (humidity from a wet bulb uses it); an hour without one is
   // excluded anyway, and its export row stays empty rather than show a pressure nobody measured.
   let pressureSupplied = 0
@@ -386,7 +386,9 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   }
 
   const humidity = { relativeHumidityPct: si.relativeHumidity, dewPointC: si.dewPoint, wetBulbC: si.wetBulb }
-  series.dryBulbC.set(dry)
+  series.dryBulbC = dry
+  // measured RH stays in its own column; the gaps are derived into it
+  series.relativeHumidityPct = si.relativeHumidity ?? missingColumn(hours)
   const derived = deriveRelativeHumidity(
     series.dryBulbC,
     series.pressureKpa,
@@ -395,13 +397,13 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   )
   if (derived.fromDewPoint > 0 && si.relativeHumidity)
     warnings.push(`${derived.fromDewPoint} hours without RH take it from the dew point`)
-  if (si.wind) series.windMs.set(si.wind)
-  if (si.rain) series.rainMm.set(si.rain)
+  series.windMs = si.wind ?? missingColumn(hours)
+  series.rainMm = si.rain ?? missingColumn(hours)
   if (si.cloudCover) series.cloudCoverPct = si.cloudCover
   const lat = ctx.site.latitudeDeg
   const lon = ctx.site.longitudeDeg
+  series.ghiWm2 = si.ghi ?? missingColumn(hours)
   if (si.ghi) {
-    series.ghiWm2.set(si.ghi)
     if (lat !== null && lon !== null) {
       const sun = hourSun(series.startUtcMs, lat, lon, series.ghiWm2)
       const night = fixNightIrradiance(grid, log, series.ghiWm2, sun)

@@ -63,6 +63,15 @@ export interface RowTimes {
 /** How the rows were turned into hours, shared by every variable. */
 export interface RowPlan {
   sampling: RowSampling
+  /**
+   * Readings exactly on the hour, in increasing time: one row per hour, nothing to combine. Variables
+   * whose values are instants or cover one hour are then placed directly (the common hourly file).
+   */
+  hourly: boolean
+  /** `hourly`, and row i is hour i for every row: a column of the rows is a column of the hours. */
+  contiguous: boolean
+  /** The file-wide label convention the rows' hours were found with. */
+  labels: IntervalLabel
   /** Most common positive spacing of consecutive rows [min] (60 for hourly files). */
   stepMinutes: number
   /** Minute after the hour most reports carry (reports only), else null. */
@@ -74,7 +83,7 @@ export interface RowPlan {
   timeMs: Float64Array
   /** Per row: the hour index its time stands for (instant rule with the file's labels), −1 when not placed. */
   rowHour: Int32Array
-  /** Per row: the span of time it represents [ms] (the smaller spacing to its neighbours, at most 1 h). */
+  /** Per row: the span of time it represents [ms] (the smaller spacing to its neighbours, at most 1 h); empty for `hourly` plans. */
   spanMs: Float64Array
   /** Per row: report rank, lower is better (routine 0, unknown 1, special 2), reports only. */
   rank?: Uint8Array
@@ -92,6 +101,48 @@ export interface RowPlan {
 export function instantHour(timeMs: number, firstHourMs: number, label: IntervalLabel): number {
   const h = label === 'end' ? Math.ceil(timeMs / MS_PER_HOUR) - 1 : Math.floor(timeMs / MS_PER_HOUR)
   return h - firstHourMs / MS_PER_HOUR
+}
+
+/** Most common spacing [min] (as {@link modeStepMinutes}), and whether the times increase and are all on the hour. */
+function scanTimes(utcMs: Float64Array): { stepMinutes: number; increasing: boolean; onHour: boolean } {
+  const small = new Int32Array(1441)
+  let large: Map<number, number> | null = null
+  let previous = Number.NaN
+  let increasing = true
+  let onHour = true
+  for (let i = 0; i < utcMs.length; i++) {
+    const t = utcMs[i]
+    if (Number.isNaN(t)) continue
+    if (t % MS_PER_HOUR !== 0) onHour = false
+    if (!Number.isNaN(previous)) {
+      if (t <= previous) increasing = false
+      const d = Math.round((t - previous) / MS_PER_MINUTE)
+      if (d > 0) {
+        if (d <= 1440) small[d]++
+        else {
+          large ??= new Map()
+          large.set(d, (large.get(d) ?? 0) + 1)
+        }
+      }
+    }
+    previous = t
+  }
+  let best = 60
+  let count = 0
+  for (let d = 1; d <= 1440; d++) {
+    if (small[d] > count) {
+      count = small[d]
+      best = d
+    }
+  }
+  if (large !== null)
+    for (const [d, c] of large) {
+      if (c > count) {
+        count = c
+        best = d
+      }
+    }
+  return { stepMinutes: best, increasing, onHour }
 }
 
 /** Most common positive spacing between consecutive rows (file order) [min]; 60 when none. */
@@ -171,18 +222,20 @@ export function planRows(times: RowTimes): RowPlan {
       }
     }
   }
-  const stepMinutes = modeStepMinutes(utcMs)
+  // One pass: the spacing of the rows, whether they are in increasing time and all on the hour.
+  const scan = scanTimes(utcMs)
+  const stepMinutes = scan.stepMinutes
   let reportMinute: number | null = null
   let sampling: RowSampling
   if (times.sampling === 'reports') {
     sampling = 'reports'
     reportMinute = detectReportMinute(utcMs, 60)
-  } else if (times.sampling === 'readings') sampling = 'readings'
+  } else if (times.sampling === 'readings' || scan.onHour) sampling = 'readings'
   else {
     reportMinute = detectReportMinute(utcMs, stepMinutes)
     sampling = reportMinute === null ? 'readings' : 'reports'
   }
-  const timeMs = new Float64Array(n)
+  const timeMs = sampling === 'reports' ? new Float64Array(n) : utcMs
   let alignedReports = 0
   let rank: Uint8Array | undefined
   let offsetMs: Float64Array | undefined
@@ -202,8 +255,10 @@ export function planRows(times: RowTimes): RowPlan {
         rank[i] = minuteOf(t) === reportMinute ? 0 : 2
       else rank[i] = 1
     }
-  } else timeMs.set(utcMs)
-
+  }
+  // Rows in strictly increasing time cannot repeat a time; rows also all on the hour are one per hour.
+  const increasing = sampling === 'reports' ? false : scan.increasing
+  const onHour = scan.onHour
   let firstHour = Number.POSITIVE_INFINITY
   let lastHour = Number.NEGATIVE_INFINITY
   for (let i = 0; i < n; i++) {
@@ -228,7 +283,7 @@ export function planRows(times: RowTimes): RowPlan {
   // Exact duplicates (readings): rows with the same instant as an earlier row, found through a
   // per-hour chain of rows (a handful per hour even for minute data).
   const duplicateOf = new Int32Array(n).fill(-1)
-  if (sampling === 'readings' && hours > 0 && hours <= MAX_CHAIN_HOURS) {
+  if (sampling === 'readings' && !increasing && hours > 0 && hours <= MAX_CHAIN_HOURS) {
     const head = new Int32Array(hours).fill(-1)
     const next = new Int32Array(n).fill(-1)
     for (let i = 0; i < n; i++) {
@@ -249,9 +304,16 @@ export function planRows(times: RowTimes): RowPlan {
     }
   }
 
-  const spanMs = rowSpans(timeMs, duplicateOf, stepMinutes)
+  const hourly = sampling === 'readings' && increasing && onHour
+  // every row a reading of the next hour, none missing: a column of the rows is a column of the hours
+  let contiguous = hourly && hours === n
+  for (let i = 0; contiguous && i < n; i++) if (rowHour[i] !== i) contiguous = false
+  const spanMs = hourly ? new Float64Array(0) : rowSpans(timeMs, duplicateOf, stepMinutes)
   return {
     sampling,
+    hourly,
+    contiguous,
+    labels,
     stepMinutes,
     reportMinute,
     firstHourMs,
@@ -340,15 +402,15 @@ export function intervalReach(
 /** One variable's hourly values and how they came about. */
 export interface HourlyVariable {
   values: Float64Array
-  /** Representative row of each hour (first contributing or chosen row), −1 when none. */
+  /** Representative row of each hour (first contributing or chosen row), −1 when none; empty when not kept. */
   row: Int32Array
   /** Hours with readings too few to keep (coverage rule). */
   belowCoverage: number
-  /** Hours kept although some readings were missing. */
+  /** Hours kept although some readings were missing (empty: none). */
   partial: Uint8Array
   /** Hours built from more than one row. */
   fromSeveralRows: number
-  /** Rows whose value was placed (1) in some hour. */
+  /** Rows whose value was placed (1) in some hour (empty: not tracked, readings of an hourly file). */
   rowPlaced: Uint8Array
 }
 
@@ -391,7 +453,8 @@ export function deaccumulate(
 
 /**
  * Aggregate one variable's per-row values (series unit, NaN = missing) onto the hour grid.
- * `intervalMs` gives per-row interval lengths (de-accumulated running totals), else the rule's.
+ * `intervalMs` gives per-row interval lengths (de-accumulated running totals), else the rule's. For a
+ * contiguous hourly file the returned column may be `values` itself.
  */
 export function aggregateVariable(
   values: Float64Array,
@@ -400,7 +463,20 @@ export function aggregateVariable(
   intervalMs?: Float64Array,
 ): HourlyVariable {
   const { hours } = plan
+  const direct =
+    plan.hourly && intervalMs === undefined && (rule.kind === 'instant' || rule.intervalMinutes === 60)
+  // the common hourly file: the rows' column (converted in place, owned by the caller) is the hours' column
+  if (direct && plan.contiguous && rule.label === plan.labels)
+    return {
+      values,
+      row: NO_ROWS,
+      belowCoverage: 0,
+      partial: NO_FLAGS,
+      fromSeveralRows: 0,
+      rowPlaced: NO_FLAGS,
+    }
   const out = new Float64Array(hours).fill(Number.NaN)
+  if (direct) return placeHourly(values, plan, rule, out)
   const row = new Int32Array(hours).fill(-1)
   const partial = new Uint8Array(hours)
   const rowPlaced = new Uint8Array(values.length)
@@ -463,6 +539,41 @@ export function aggregateVariable(
     else out[h] = sum[h]
   }
   return { values: out, row, belowCoverage, partial, fromSeveralRows, rowPlaced }
+}
+
+const NO_ROWS = new Int32Array(0)
+const NO_FLAGS = new Uint8Array(0)
+
+/**
+ * One row per hour, on the hour: each value goes to its hour directly (an instant to the hour its
+ * label stands for, a one-hour interval to the hour it covers). Same result as the general path,
+ * without its per-hour sums; `row`, `partial` and `rowPlaced` are left empty.
+ */
+function placeHourly(
+  values: Float64Array,
+  plan: RowPlan,
+  rule: VariableRule,
+  out: Float64Array,
+): HourlyVariable {
+  const shift = (plan.labels === 'end' ? 1 : 0) - (rule.label === 'end' ? 1 : 0)
+  const hours = plan.hours
+  const rowHour = plan.rowHour
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i]
+    if (Number.isNaN(v)) continue
+    const r = rowHour[i]
+    if (r < 0) continue
+    const h = r + shift
+    if (h >= 0 && h < hours) out[h] = v
+  }
+  return {
+    values: out,
+    row: NO_ROWS,
+    belowCoverage: 0,
+    partial: NO_FLAGS,
+    fromSeveralRows: 0,
+    rowPlaced: NO_FLAGS,
+  }
 }
 
 /** Reports: per hour, the best report with a value (routine before special, nearest the hour first). */

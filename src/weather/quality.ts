@@ -169,49 +169,64 @@ export function rangeCheckReadings(
   rowChanged: Uint8Array,
 ): number {
   const [lo, hi] = VALID_RANGE[variable]
+  // RH is judged against 100 % (clamped up to RH_CLAMP_MAX_PCT), irradiance below 0 is set to 0
+  const top = variable === 'relativeHumidity' ? 100 : hi
+  const bottom = variable === 'ghi' ? 0 : lo
   let rejected = 0
   for (let i = 0; i < values.length; i++) {
     const v = values[i]
-    const rhHigh = variable === 'relativeHumidity' && v > 100
-    if (!(v < lo || v > hi) && !rhHigh) continue
-    if (rhHigh && v <= RH_CLAMP_MAX_PCT) {
+    if (!(v < bottom || v > top)) continue // in range, or NaN
+    rejected += judgeReading(lines, log, variable, values, unit, rowChanged, i, lo, hi)
+  }
+  return rejected
+}
+
+/** One reading outside its range: clamped, set to 0, or rejected (logged with its line). Returns 1 when rejected. */
+function judgeReading(
+  lines: Int32Array,
+  log: ProblemLog,
+  variable: WeatherVariable,
+  values: Float64Array,
+  unit: string,
+  rowChanged: Uint8Array,
+  i: number,
+  lo: number,
+  hi: number,
+): number {
+  const v = values[i]
+  if (variable === 'relativeHumidity' && v > 100) {
+    if (v <= RH_CLAMP_MAX_PCT) {
       values[i] = 100
       if (rowChanged[i] === 0) rowChanged[i] = 1
       log.add(lines[i], variable, 'rh-above-100', `relative humidity ${v} % set to 100 %`)
-      continue
-    }
-    if (rhHigh) {
-      values[i] = Number.NaN
-      rowChanged[i] = 2
-      rejected++
-      log.add(
-        lines[i],
-        variable,
-        'rh-above-100',
-        `relative humidity ${v} % is above 100 % (accepted up to ${RH_CLAMP_MAX_PCT} %, clamped): rejected`,
-      )
-      continue
+      return 0
     }
     values[i] = Number.NaN
     rowChanged[i] = 2
-    rejected++
     log.add(
       lines[i],
       variable,
-      'out-of-range',
-      `${variable} ${round(v)} ${unit} is outside ${lo}…${hi} ${unit}: rejected`,
+      'rh-above-100',
+      `relative humidity ${v} % is above 100 % (accepted up to ${RH_CLAMP_MAX_PCT} %, clamped): rejected`,
     )
+    return 1
   }
-  if (variable === 'ghi') {
-    for (let i = 0; i < values.length; i++) {
-      const v = values[i]
-      if (!(v < 0)) continue
-      values[i] = 0
-      if (rowChanged[i] === 0) rowChanged[i] = 1
-      log.add(lines[i], variable, 'negative-irradiance', `irradiance ${round(v)} W/m² set to 0`)
-    }
+  if (variable === 'ghi' && v < 0 && v >= lo) {
+    values[i] = 0
+    if (rowChanged[i] === 0) rowChanged[i] = 1
+    log.add(lines[i], variable, 'negative-irradiance', `irradiance ${round(v)} W/m² set to 0`)
+    return 0
   }
-  return rejected
+  if (!(v < lo || v > hi)) return 0
+  values[i] = Number.NaN
+  rowChanged[i] = 2
+  log.add(
+    lines[i],
+    variable,
+    'out-of-range',
+    `${variable} ${round(v)} ${unit} is outside ${lo}…${hi} ${unit}: rejected`,
+  )
+  return 1
 }
 
 function lineOf(grid: HourGrid, s: number): number | null {
@@ -271,32 +286,42 @@ export function stuckCheck(
 ): void {
   const minRun = STUCK_RUN_HOURS[variable]
   if (minRun === undefined) return
+  const isWind = variable === 'wind'
+  const isRh = variable === 'relativeHumidity'
+  const free = exempt ?? NO_EXEMPTIONS
+  const checkExempt = exempt !== undefined
   let start = 0
-  for (let s = 1; s <= values.length; s++) {
-    if (s < values.length && values[s] === values[start] && !exempt?.[s] && !exempt?.[start]) continue
-    const v = values[start]
+  const n = values.length
+  for (let s = 1; s <= n; s++) {
+    if (s < n && values[s] === values[start] && !(checkExempt && (free[s] === 1 || free[start] === 1)))
+      continue
     const length = s - start
-    const ordinary =
-      Number.isNaN(v) ||
-      exempt?.[start] === 1 ||
-      (variable === 'wind' && v === 0) ||
-      (variable === 'relativeHumidity' && v >= WET_RH_PLATEAU_PCT)
-    if (length >= minRun && !ordinary) {
-      for (let k = start; k < s; k++) {
-        values[k] = Number.NaN
-        reject(
-          grid,
-          log,
-          k,
-          variable,
-          'stuck-sensor',
-          `${variable} reads ${round(v)} ${unit} for ${length} hours in a row: stuck sensor, rejected`,
-        )
+    if (length >= minRun) {
+      const v = values[start]
+      const ordinary =
+        Number.isNaN(v) ||
+        (checkExempt && free[start] === 1) ||
+        (isWind && v === 0) ||
+        (isRh && v >= WET_RH_PLATEAU_PCT)
+      if (!ordinary) {
+        for (let k = start; k < s; k++) {
+          values[k] = Number.NaN
+          reject(
+            grid,
+            log,
+            k,
+            variable,
+            'stuck-sensor',
+            `${variable} reads ${round(v)} ${unit} for ${length} hours in a row: stuck sensor, rejected`,
+          )
+        }
       }
     }
     start = s
   }
 }
+
+const NO_EXEMPTIONS = new Uint8Array(0)
 
 /** Dew point or wet bulb above the dry bulb: small excess set to the dry bulb, larger rejected. */
 export function humidityBelowDryBulbCheck(

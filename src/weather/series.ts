@@ -102,9 +102,18 @@ export interface HourlySeries {
   supplied?: { name: string; value: string; source: string }[]
 }
 
-/** Allocate an empty series of `hours` hours starting at `firstStartUtcMs`, every value missing. */
-export function createEmptySeries(site: SiteInfo, firstStartUtcMs: number, hours: number): HourlySeries {
-  const nanColumn = (): Float64Array => new Float64Array(hours).fill(Number.NaN)
+/**
+ * Allocate an empty series of `hours` hours starting at `firstStartUtcMs`, every value missing. With
+ * `columns` false the value columns are left empty (length 0) for the caller to assign its own.
+ */
+export function createEmptySeries(
+  site: SiteInfo,
+  firstStartUtcMs: number,
+  hours: number,
+  columns = true,
+): HourlySeries {
+  const nanColumn = (): Float64Array =>
+    columns ? new Float64Array(hours).fill(Number.NaN) : new Float64Array(0)
   const startUtcMs = new Float64Array(hours)
   for (let i = 0; i < hours; i++) startUtcMs[i] = firstStartUtcMs + i * 3_600_000
   return {
@@ -120,4 +129,9 @@ export function createEmptySeries(site: SiteInfo, firstStartUtcMs: number, hours
     quality: new Uint8Array(hours),
     typicalYear: false,
   }
+}
+
+/** A column of `hours` missing values. */
+export function missingColumn(hours: number): Float64Array {
+  return new Float64Array(hours).fill(Number.NaN)
 }
