@@ -641,7 +641,7 @@ function describeAggregation(a: HourlyAggregation, plan: RowPlan, warnings: stri
       .join(', ')
     warnings.push(
       `readings every ${plan.stepMinutes} minutes: instants averaged and totals summed into hours; ` +
-        `${a.partialHours} hours kept with some readings missing${below ? `, hours with too few readings left missing: ${below}` : ''}`,
+        `${a.partialHours} hour${a.partialHours === 1 ? '' : 's'} kept with some readings missing${below ? `, hours with too few readings left missing: ${below}` : ''}`,
     )
   } else if (plan.stepMinutes > 60) {
     warnings.push(

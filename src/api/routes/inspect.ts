@@ -66,7 +66,7 @@ registerOperation({
   path: '/v1/inspect',
   summary: 'Inspect a weather file',
   description:
-    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected) and the first problems with line numbers. ' +
+    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected + superseded), how rows became hours and the first problems with line numbers. ' +
     'Send the file as the body (text/csv, text/plain) with options in the query (the same options as the CLI flags: lat, lon, elevation, utcOffset | tz for the file, siteTz for the site, map, labels, dateOrder, headerLine, sampling, windHeight, siteName), or as multipart/form-data with a `file` part and an optional `options` JSON part (the reader keys: latitudeDeg, longitudeDeg, elevationM, utcOffsetHours | timeZone, siteTimeZone, mapping, labels, variableLabels, dateOrder, headerLine, sampling, windHeightM, siteName). Same object as `dryhours inspect --json`, with per variable the hours, mean, min and max in SI; `format=csv` answers with the hourly series the engine uses (as `dryhours inspect --export`).',
   query: inspectQuerySchema,
   requestBody: [
