@@ -222,7 +222,7 @@ export function estimateMissingIrradiance(
     parts.push(`${fromRange} from the daily temperature range`)
     supplied.push({
       name: 'irradiance estimated from the daily temperature range',
-      value: `${fromRange} daylight hours (flag irradianceEstimated): Rs = ${kRs}·√(Tmax − Tmin)·Ra per day (kRs ${kRs} interior, ${KRS_COASTAL} coastal), at most Rso, spread in the clear-sky shape; uncertainty: FAO-56 advises sums over 7–10 days, not single days; clouds within a day are not represented`,
+      value: `${fromRange} daylight hours (flag irradianceEstimated): Rs = ${kRs}·√(Tmax − Tmin)·Ra per day (kRs ${kRs} interior, ${KRS_COASTAL} coastal), at most Rso, spread in the clear-sky shape; uncertainty: the method is meant for sums over 7–10 days, not single days (a handbook chapter built on FAO-56, read in an online copy); clouds within a day are not represented`,
       source:
         'Hargreaves & Samani 1982; Allen et al. 1998, FAO-56 eqs 21, 37, 50; Haurwitz 1945 (clear-sky shape)',
     })
@@ -230,7 +230,8 @@ export function estimateMissingIrradiance(
       `irradiance estimated from the daily temperature range in ${fromRange} daylight hours: Hargreaves & Samani (1982), ` +
         `FAO-56 eq 50 (Allen et al. 1998), Rs = ${kRs}·√(Tmax − Tmin)·Ra (kRs ${kRs} for an interior site; ${KRS_COASTAL} near a coast), ` +
         'at most the clear-sky Rso (FAO-56 eq 37), spread over the day in the shape of clear-sky irradiance (Haurwitz 1945). ' +
-        'Uncertainty: FAO-56 advises using such estimates summed over 7–10 days, not day by day; within a day every hour ' +
+        'Uncertainty: the temperature method is meant for sums over 7–10 days, not day by day (caution with daily ' +
+        'computations, in a handbook chapter built on FAO-56, read in an online copy; its attribution from memory); within a day every hour ' +
         'follows the clear-sky shape, so passing clouds and showers are not represented; a range taken from hourly readings ' +
         'is slightly smaller than the thermometer range, so the estimate leans low.',
     )

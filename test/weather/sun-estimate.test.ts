@@ -92,7 +92,7 @@ describe('estimates in a read file', () => {
     }
     const ra = extraterrestrialRadiationDailyMjM2((40 * Math.PI) / 180, 183)
     expect(sumMj).toBeCloseTo(hargreavesSamaniDailyMjM2(tMax, tMin, ra), 6)
-    expect(r.notes.join(' ')).toMatch(/Hargreaves & Samani \(1982\).*FAO-56 eq 50.*7–10 days/)
+    expect(r.notes.join(' ')).toMatch(/Hargreaves & Samani \(1982\).*FAO-56 eq 50.*7–10 days/s)
     expect(r.warnings.join(' ')).toMatch(/irradiance estimated for \d+ daylight hours/)
     expect(r.columns.find((c) => c.variable === 'ghi')?.source).toMatch(/estimated: daily temperature range/)
   })
