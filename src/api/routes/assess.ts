@@ -137,9 +137,13 @@ export function assessRouter(config: ApiConfig): Hono {
     }
     const read = readSite(files[0], request, config)
     checkWork(request.options, [read.series], config)
-    const assessment: Assessment = runEngine(
-      (onProgress) => assess(read.series, { ...request.options, onProgress }),
-      config,
+    // the engine's messages name options as CLI flags: renamed for this request's surface
+    const assessment: Assessment = renderAssessmentWarnings(
+      runEngine(
+        (onProgress) => assess(read.series, { ...request.options, onProgress }),
+        config,
+        request.surface,
+      ),
       request.surface,
     )
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
@@ -166,7 +170,7 @@ export function assessRouter(config: ApiConfig): Hono {
         ),
       )
     }
-    return c.json(renderAssessmentWarnings(assessment, request.surface))
+    return c.json(assessment)
   })
 }
 
@@ -225,7 +229,10 @@ export function compareRouter(config: ApiConfig): Hono {
         { path: 'format', message: 'csv not offered for comparisons' },
       ])
     }
-    return c.json(comparison)
+    return c.json({
+      ...comparison,
+      assessments: comparison.assessments.map((a) => renderAssessmentWarnings(a, request.surface)),
+    })
   })
 }
 
