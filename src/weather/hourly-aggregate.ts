@@ -487,13 +487,15 @@ export function aggregateVariable(
   const n = values.length
   const first = plan.firstHourMs
   const hourMs = MS_PER_HOUR
+  const ownLabel = rule.label !== plan.labels
   for (let i = 0; i < n; i++) {
     const t = plan.timeMs[i]
     if (Number.isNaN(t) || plan.duplicateOf[i] >= 0) continue
     const v = values[i]
     if (Number.isNaN(v)) continue
     if (rule.kind === 'instant') {
-      const h = plan.rowHour[i]
+      // the variable's own label may differ from the file's
+      const h = ownLabel ? instantHour(t, first, rule.label) : plan.rowHour[i]
       if (h < 0 || h >= hours) continue
       sum[h] += v
       covered[h] += plan.spanMs[i]
@@ -596,7 +598,8 @@ function chooseReports(
     if (Number.isNaN(t) || Number.isNaN(v)) continue
     // an interval value (rain over the past hour) ends at its report: the hour before an end label
     let h: number
-    if (rule.kind === 'instant') h = plan.rowHour[i]
+    if (rule.kind === 'instant')
+      h = rule.label === plan.labels ? plan.rowHour[i] : instantHour(t, plan.firstHourMs, rule.label)
     else {
       const length = rule.intervalMinutes * MS_PER_MINUTE
       const mid = rule.label === 'end' ? t - length / 2 : t + length / 2

@@ -303,3 +303,20 @@ describe('properties', () => {
     )
   })
 })
+
+describe('a variable labelled apart from the file', () => {
+  it('10-minute instants with their own end label, in a file labelled at the start: 00:10 … 01:00 make hour 0', () => {
+    const rows: (string | number)[][] = []
+    for (let k = 1; k <= 12; k++) rows.push([stamp(k * 10), k, 50 + (k % 3), 0])
+    const file = readWeather(csv(HEADER, rows), { utcOffsetHours: 0, labels: 'end' })
+    const own = readWeather(csv(HEADER, rows), {
+      utcOffsetHours: 0,
+      labels: 'start',
+      variableLabels: { dryBulb: { label: 'end' } },
+    })
+    // the file-wide end label and the variable's own end label put the same readings in hour 00:00
+    expect(file.series.dryBulbC[0]).toBeCloseTo(3.5, 12)
+    const h0 = Array.from(own.series.startUtcMs).indexOf(T0)
+    expect(own.series.dryBulbC[h0]).toBeCloseTo(3.5, 12)
+  })
+})
