@@ -58,11 +58,49 @@ export {
 /** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */
 const MIN_HOURS_FOR_A_YEAR = 168
 
+/**
+ * Share of the usable hours that may lack irradiance before a method that needs the sun is refused:
+ * one half (common practice, no source). Below it the engine takes the missing hours as 0 W/m² and
+ * says how many; above it the figures would describe a sunless site.
+ */
+export const MAX_SUNLESS_SHARE = 0.5
+
+/**
+ * Refuse a method that needs the sun (open air, solar cabinet) when the series has no irradiance
+ * for most of its usable hours: no irradiance column and nothing to estimate it from
+ * (`weather/sun-estimate.ts` needs the site's position and cloud cover or whole days of temperatures).
+ */
+export function requireSun(series: HourlySeries, kind: string): void {
+  let usable = 0
+  let sunless = 0
+  for (let i = 0; i < series.hours; i++) {
+    if (series.quality[i] & QualityFlag.missingCore) continue
+    usable++
+    if (Number.isNaN(series.ghiWm2[i])) sunless++
+  }
+  if (usable > 0 && sunless > MAX_SUNLESS_SHARE * usable) {
+    throw new RangeError(
+      `the ${kind} method needs the sun, and ${sunless} of the ${usable} usable hours have no irradiance: the file has none ` +
+        "and it could not be estimated (that needs the site's position, --lat and --lon, and cloud cover or whole days " +
+        'of temperatures); give the position, use a file with irradiance, or assess the shade or heated method',
+    )
+  }
+}
+
+/** Daylight hours (irradiance above 0) whose irradiance the reader estimated. */
+function countEstimatedSun(series: HourlySeries): number {
+  let n = 0
+  for (let i = 0; i < series.hours; i++)
+    if (series.quality[i] & QualityFlag.irradianceEstimated && series.ghiWm2[i] > 0) n++
+  return n
+}
+
 /** Assess one site (one series) for one product and method. Throws RangeError for bad options. */
 export function assess(series: HourlySeries, options: AssessOptions): Assessment {
   if (series.hours < 24)
     throw new RangeError(`the weather series must hold at least 24 hours, got ${series.hours}`)
   const run = resolveAssessOptions(options)
+  if (run.model.needs.sun) requireSun(series, run.method.kind)
   const { primary, backup } = hourlyConditionsStage(series, run)
   const calendar = calendarStage(series, primary)
   const ctx = startContext(series, run, calendar.time, primary, backup)
@@ -236,9 +274,13 @@ export function assessmentWarnings(
       'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
     )
   }
-  if (time.offsetSource !== 'file') {
+  if (time.offsetSource === 'longitude' || time.offsetSource === 'assumed-utc') {
     warnings.push(
-      `the file gives no UTC offset: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'})`,
+      `the site's clock is not known: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'}); give --site-tz <zone> for the site's own`,
+    )
+  } else if (time.offsetSource === 'timestamps') {
+    warnings.push(
+      `the site's clock is taken from the file's local timestamps (UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}); give --site-tz <zone> if the site keeps another`,
     )
   }
   if (primary.assumedIrradianceHours > 0) {
@@ -305,7 +347,11 @@ export function assembleAssessment(
     bestStartWindowCriterion: starts.best.criterion,
     heat: parts.heat,
     psychrometric: parts.psychrometric,
-    assumptions: assessmentAssumptions(run),
+    assumptions: [
+      ...assessmentAssumptions(run),
+      // what the weather reader supplied rather than read (estimated irradiance, a constant pressure)
+      ...(series.supplied ?? []),
+    ],
     warnings: assessmentWarnings(series, run, primary, calendar, starts),
     coverage: {
       firstHourUtc: isoHour(series.startUtcMs[0]),
@@ -315,6 +361,7 @@ export function assembleAssessment(
       years: calendar.years,
       monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
       assumedIrradianceHours: primary.assumedIrradianceHours,
+      estimatedIrradianceHours: countEstimatedSun(series),
       assumedWindHours: primary.assumedWindHours,
       hasRainData: !primary.noRainData,
       startDateBatchesRun: starts.table.batches,

@@ -2,13 +2,20 @@
  * @module report/inspect-json
  * The JSON of `dryhours inspect --json` and POST /v1/inspect: what was understood of a weather file.
  */
+import { summarizeSeries } from '../weather/export.ts'
 import type { WeatherReadResult } from '../weather/result.ts'
 
-/** The JSON of `dryhours inspect --json`: format, rows, period, hours, years, typicalYear, columns, site, coverage, problems, plus time basis and warnings. */
+/**
+ * The JSON of `dryhours inspect --json`: format, dialect (the known layout recognised, or null), rows,
+ * period, hours, years, typicalYear, columns, site (with its clock and where that came from), how rows
+ * became hours (`hourly`), per variable the hours, mean, min and max in SI (`variables`), coverage,
+ * problems, time basis, warnings and the assumption notes.
+ */
 export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
   const s = r.series
   return {
     format: r.format,
+    dialect: r.dialect ?? null,
     rows: r.rows,
     period: r.period,
     hours: s.hours,
@@ -26,6 +33,8 @@ export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
       missing: c.missing,
     })),
     site: s.site,
+    hourly: r.hourly,
+    variables: summarizeSeries(s),
     coverage: r.coverage,
     hoursWithoutRow: r.hoursWithoutRow,
     hoursMissingCore: r.hoursMissingCore,
@@ -34,5 +43,6 @@ export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
     problemsListed: Math.min(100, r.problems.length),
     problemsTotal: Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0),
     warnings: r.warnings,
+    notes: r.notes,
   }
 }

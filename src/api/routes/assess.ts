@@ -12,6 +12,7 @@ import { estimateBatchHours } from '../../analysis/plan.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
+import { type OptionSurface, renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import type { HourlySeries } from '../../weather/series.ts'
@@ -29,6 +30,7 @@ import {
 } from '../schemas/assess.ts'
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
+import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
 
 const outputQuerySchema = z.object({
   format: z.enum(['json', 'csv', 'html']).optional(),
@@ -55,11 +57,11 @@ async function parseRequest(c: Context): Promise<Parsed> {
 export function readSite(file: UploadedFile, request: AssessRequest, config: ApiConfig): WeatherReadResult {
   const text = checkedUploadText(file, config)
   try {
-    const result = readWeather(text, request.weather)
+    const result = renderReadingMessages(readWeather(text, request.weather), request.surface)
     if (result.series.site.name.trim() === '') result.series.site.name = file.name
     return result
   } catch (e) {
-    if (e instanceof WeatherInputError) throw new ApiProblem(422, `${file.name}: ${e.message}`)
+    if (e instanceof WeatherInputError) throw weatherInputProblem(e, request.surface, file.name)
     throw e
   }
 }
@@ -86,7 +88,7 @@ function checkWork(options: AssessOptions, seriesList: HourlySeries[], config: A
 }
 
 /** Run the engine; RangeError → 422; the wall-clock budget (when the entry point gives a clock) → 422. */
-function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig): T {
+function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig, surface?: OptionSurface): T {
   const now = config?.now
   const budget = config?.timeBudgetMs ?? 0
   const started = now ? now() : 0
@@ -99,7 +101,8 @@ function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig): T
   try {
     return fn(onProgress)
   } catch (e) {
-    if (e instanceof RangeError) throw new ApiProblem(422, e.message)
+    if (e instanceof RangeError)
+      throw new ApiProblem(422, surface ? renderOptionNames(e.message, surface) : e.message)
     if (e instanceof TimeBudgetExceeded) {
       throw new ApiProblem(
         422,
@@ -129,9 +132,14 @@ export function assessRouter(config: ApiConfig): Hono {
     }
     const read = readSite(files[0], request, config)
     checkWork(request.options, [read.series], config)
-    const assessment: Assessment = runEngine(
-      (onProgress) => assess(read.series, { ...request.options, onProgress }),
-      config,
+    // the engine's messages name options as CLI flags: renamed for this request's surface
+    const assessment: Assessment = renderAssessmentWarnings(
+      runEngine(
+        (onProgress) => assess(read.series, { ...request.options, onProgress }),
+        config,
+        request.surface,
+      ),
+      request.surface,
     )
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (output.format === 'html') {
@@ -145,6 +153,11 @@ export function assessRouter(config: ApiConfig): Hono {
     }
     return c.json(assessment)
   })
+}
+
+/** The assessment's warnings with option names as the request gave them. */
+function renderAssessmentWarnings(a: Assessment, surface: OptionSurface): Assessment {
+  return { ...a, warnings: a.warnings.map((w) => renderOptionNames(w, surface)) }
 }
 
 export function compareRouter(config: ApiConfig): Hono {
@@ -193,7 +206,10 @@ export function compareRouter(config: ApiConfig): Hono {
         { path: 'format', message: 'csv not offered for comparisons' },
       ])
     }
-    return c.json(comparison)
+    return c.json({
+      ...comparison,
+      assessments: comparison.assessments.map((a) => renderAssessmentWarnings(a, request.surface)),
+    })
   })
 }
 

@@ -14,6 +14,7 @@ import { FUEL_IDS } from '../../drying/method.ts'
 import { productById } from '../../product/catalogue.ts'
 import { ENERGY_TABLE_IDS, renderEnergyCsv } from '../../report/energy/energy-csv.ts'
 import { renderEnergyHtml } from '../../report/energy/energy-html.ts'
+import { renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
@@ -22,6 +23,7 @@ import { ApiProblem, type ProblemField } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
 import { checkedUploadText, decodeUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
+import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
 
 /** Options of the request (query string, or the `options` part with the same keys as strings or numbers). */
 export const energyChartQuerySchema = z.strictObject({
@@ -30,9 +32,16 @@ export const energyChartQuerySchema = z.strictObject({
   ).optional(),
   fuel: z.enum(FUEL_IDS).describe('fuel of rows with fuel_amount but no fuel column').optional(),
   dryingTempC: numberParam('drying-air temperature [°C] for the latent heat, default 60').optional(),
-  utcOffsetHours: numberParam("offset of the log's (and weather file's) local times from UTC [h]").optional(),
-  timeZone: z.string().min(1).describe("IANA time zone of the weather file's local timestamps").optional(),
+  utcOffsetHours: numberParam(
+    "offset of the log's local times from UTC [h]; also the weather file's when utcOffset and tz are not given",
+  ).optional(),
+  timeZone: z
+    .string()
+    .min(1)
+    .describe("IANA time zone of the weather file's time stamps (older name of tz)")
+    .optional(),
   elevationM: numberParam('site elevation [m] for the air pressure').optional(),
+  ...weatherQueryFields,
   product: z
     .string()
     .min(1)
@@ -128,17 +137,22 @@ export const energyRouter = (config: ApiConfig) =>
       }
     }
     if (upload.weather) {
-      const w: Record<string, unknown> = {}
-      if (q.utcOffsetHours !== undefined) w.utcOffsetHours = q.utcOffsetHours
-      if (q.timeZone !== undefined) w.timeZone = q.timeZone
-      if (q.elevationM !== undefined) w.elevationM = q.elevationM
+      // the weather options of every route (utcOffset, tz, siteTz, map, labels …); the log's offset and
+      // the older names apply to the weather file when the new ones are not given
+      const w: Record<string, unknown> = { ...weatherOptionsFromQuery(q) }
+      if (w.utcOffsetHours === undefined && w.timeZone === undefined) {
+        if (q.utcOffsetHours !== undefined) w.utcOffsetHours = q.utcOffsetHours
+        else if (q.timeZone !== undefined) w.timeZone = q.timeZone
+      }
+      if (w.elevationM === undefined && q.elevationM !== undefined) w.elevationM = q.elevationM
       // Same row and column limits as the weather files of /v1/assess (the text is only checked here).
       checkedUploadText({ name: 'weather', field: 'weather', bytes: upload.weather }, config)
       try {
         options.weather = readWeatherBytes(upload.weather, w).series
       } catch (e) {
         if (e instanceof WeatherInputError || e instanceof RangeError) {
-          throw new ApiProblem(422, `weather: ${e.message}`, [{ path: 'weather', message: e.message }])
+          const message = renderOptionNames(e.message, 'query')
+          throw new ApiProblem(422, `weather: ${message}`, [{ path: 'weather', message }])
         }
         throw e
       }

@@ -18,6 +18,7 @@ import { dryingThresholdsSchema } from '../../drying/thresholds.ts'
 import { productById, productIds } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
+import type { OptionSurface } from '../../weather/option-spec.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from '../../weather/options.ts'
 import { ApiProblem } from '../problem.ts'
 import { parseOrProblem } from '../validate.ts'
@@ -119,6 +120,8 @@ export interface AssessRequest {
   options: AssessOptions
   weather: WeatherReadOptions
   criterion?: CompareCriterion
+  /** Where the weather options came from, so that messages name them as the request did. */
+  surface: OptionSurface
 }
 
 function resolveProduct(value: string | Record<string, unknown>, path: string): ProductProfile {
@@ -170,6 +173,7 @@ export function assessRequestFromJson(value: unknown, prefix = 'options'): Asses
     },
     weather: weather ?? {},
     criterion,
+    surface: 'json',
   }
 }
 
@@ -194,6 +198,7 @@ export function assessRequestFromQuery(
   const weather = weatherOptionsFromQuery(q)
   return {
     query: q,
+    surface: 'query',
     weather,
     options: {
       product: resolveProduct(q.product, 'product'),

@@ -53,7 +53,7 @@ export const heated: MethodModel<typeof heatedSchema> = {
   airFlowKgPerSPerTonne: (m) => m.airFlowKgPerSPerTonne,
   heatsWithFuel: true,
   rainMatters: () => false,
-  needs: { sunAzimuth: false, coordinates: false },
+  needs: { sun: false, sunAzimuth: false, coordinates: false },
   assumptions: () => [],
   prepare(m, { maxProductTempC }) {
     const maxT = maxProductTempC

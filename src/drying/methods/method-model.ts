@@ -113,8 +113,11 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
   heatsWithFuel: boolean
   /** True when rain decides hours of this method (it wets or covers the product): a file without rain then gets a warning. */
   rainMatters(method: z.output<S>): boolean
-  /** What the hour function needs: sun azimuth (tilted collectors), site coordinates. */
-  needs: { sunAzimuth: boolean; coordinates: boolean }
+  /**
+   * What the method needs: the sun (irradiance in most hours; a file without is refused), the sun
+   * azimuth (tilted collectors), the site coordinates.
+   */
+  needs: { sun: boolean; sunAzimuth: boolean; coordinates: boolean }
   /** The method's own assumptions, with their sources, for the assessment. */
   assumptions(method: z.output<S>): MethodAssumption[]
   /** Prepare for one series; the returned function sets the outputs of each hour. */

@@ -63,7 +63,7 @@ export const openAir: MethodModel<typeof openAirSchema> = {
   airFlowKgPerSPerTonne: () => 0,
   heatsWithFuel: false,
   rainMatters: () => true,
-  needs: { sunAzimuth: false, coordinates: false },
+  needs: { sun: true, sunAzimuth: false, coordinates: false },
   assumptions: (m) => [
     {
       name: 'absorptivity',

@@ -38,7 +38,7 @@ export const shade: MethodModel<typeof shadeSchema> = {
   airFlowKgPerSPerTonne: () => 0,
   heatsWithFuel: false,
   rainMatters: () => false,
-  needs: { sunAzimuth: false, coordinates: false },
+  needs: { sun: false, sunAzimuth: false, coordinates: false },
   assumptions: (m) => [
     {
       name: 'air speed at the product',

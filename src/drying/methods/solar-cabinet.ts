@@ -59,7 +59,7 @@ export const solarCabinet: MethodModel<typeof solarCabinetSchema> = {
   airFlowKgPerSPerTonne: (m) => m.collectorAreaM2PerTonne * m.airFlowKgPerSPerM2,
   heatsWithFuel: false,
   rainMatters: () => false,
-  needs: { sunAzimuth: true, coordinates: true },
+  needs: { sun: true, sunAzimuth: true, coordinates: true },
   assumptions: (m) => [
     {
       name: 'collector',
