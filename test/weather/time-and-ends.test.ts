@@ -25,6 +25,8 @@ describe("the site's clock is not the timestamps' basis", () => {
     expect(r.series.site.utcOffsetHours).toBe(-8)
     expect(r.series.site.utcOffsetSource).toBe('longitude')
     expect(r.warnings.join(' ')).toMatch(/from the longitude -120°.*--site-tz/)
+    // the stamps are UTC, not "local standard time, UTC+00:00"
+    expect(r.timeBasis).toMatch(/^UTC; timestamps label the start/)
     // batches start at 08:00 site time = 16:00 UTC, not at 08:00 UTC (midnight at the site)
     const a = assess(r.series, {
       product: productById('grapes-to-raisins'),
