@@ -680,22 +680,24 @@ function constantPressure(
     count++
   }
   if (count < 24) return false
+  // the value as a reader would write it (896 hPa is 89.6 kPa, not 89.60000000000001)
+  const kpa = Number(value.toFixed(4))
   const elevation = ctx.site.elevationM
   if (elevation !== null) {
     const standard = standardPressureKpaAtElevation(elevation)
     if (Math.abs(standard - value) > CONSTANT_PRESSURE_TOLERANCE_KPA) {
       values.fill(Number.NaN)
       warnings.push(
-        `pressure is ${value} kPa in every hour, far from the standard atmosphere at the site's ${elevation} m (${standard.toFixed(2)} kPa): the standard atmosphere is used instead`,
+        `pressure is ${kpa} kPa in every hour, far from the standard atmosphere at the site's ${elevation} m (${standard.toFixed(2)} kPa): the standard atmosphere is used instead`,
       )
       return true
     }
   }
   notes.push(
-    `pressure is ${value} kPa in every hour: a constant the file was made with (the standard atmosphere of typical-year files), used as given, not judged as a sensor`,
+    `pressure is ${kpa} kPa in every hour: a constant the file was made with (the standard atmosphere of typical-year files), used as given, not judged as a sensor`,
   )
   warnings.push(
-    `pressure is the same ${value} kPa in every hour: taken as a supplied constant, not a stuck sensor`,
+    `pressure is the same ${kpa} kPa in every hour: taken as a supplied constant, not a stuck sensor`,
   )
   return true
 }

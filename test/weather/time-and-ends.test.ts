@@ -156,6 +156,19 @@ describe('honest ends', () => {
     expect(r.warnings.join(' ')).toMatch(/far from the standard atmosphere/)
   })
 
+  it('the constant is written as the file gives it (896 hPa is 89.6 kPa)', () => {
+    const stamps = hourStamps('2021-07-01T00:00Z', 48)
+    const r = readWeather(
+      csv(
+        ['time', 'temp_c', 'rh_pct', 'pressure (hPa)'],
+        stamps.map((t, i) => [t, wavy(i), 40 + (i % 9), 896]),
+      ),
+      { utcOffsetHours: 0 },
+    )
+    expect(r.notes.join(' ')).toMatch(/pressure is 89\.6 kPa in every hour/)
+    expect(r.warnings.join(' ')).toMatch(/the same 89\.6 kPa in every hour/)
+  })
+
   it('RH at 96 % for 20 hours of rain is not a stuck sensor; 60 % for 20 hours is', () => {
     const stamps = hourStamps('2021-07-01T00:00Z', 40)
     const read = (plateau: number) =>
