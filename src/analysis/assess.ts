@@ -278,7 +278,11 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     ctx,
   })
 
-  if (series.typicalYear || years.length < 2) {
+  if (years.length === 0) {
+    warnings.push(
+      `no year holds ${MIN_HOURS_FOR_A_YEAR} hours (a week) with dry bulb and humidity: the monthly and start-date tables are empty`,
+    )
+  } else if (series.typicalYear || years.length < 2) {
     warnings.push(
       series.typicalYear
         ? 'typical-year file: one synthetic year, so spread across years (P10/P90) cannot be computed; the figures describe that one year only'
