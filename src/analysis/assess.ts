@@ -117,10 +117,14 @@ export function requireSun(series: HourlySeries, kind: string): void {
     if (Number.isNaN(series.ghiWm2[i])) sunless++
   }
   if (usable > 0 && sunless > MAX_SUNLESS_SHARE * usable) {
+    const placed = series.site.latitudeDeg !== null && series.site.longitudeDeg !== null
     throw new RangeError(
-      `the ${kind} method needs the sun, and ${sunless} of the ${usable} usable hours have no irradiance: the file has none ` +
-        "and it could not be estimated (that needs the site's position, --lat and --lon, and cloud cover or whole days " +
-        'of temperatures); give the position, use a file with irradiance, or assess the shade or heated method',
+      `the ${kind} method needs the sun, and ${sunless} of the ${usable} hours with dry bulb and humidity have no irradiance: ` +
+        (placed
+          ? 'the file has none, and neither cloud cover nor whole days of temperatures to estimate it from; ' +
+            'use a file with irradiance or cloud cover, or assess the shade or heated method'
+          : "the file has none, and an estimate needs the site's position (--lat and --lon) besides cloud cover or whole " +
+            'days of temperatures; give the position, use a file with irradiance, or assess the shade or heated method'),
     )
   }
 }

@@ -172,4 +172,18 @@ describe('through the engine', () => {
     expect(() => assess(series, options)).toThrow(/the open-air method needs the sun.*--lat and --lon/)
     expect(() => assess(series, { ...options, method: { kind: 'shade' as const } })).not.toThrow()
   })
+
+  it('with the position but no cloud cover and no whole day of temperatures, the refusal names what is missing', () => {
+    // daytime rows only (06–19 UTC): no day has the 24 hours the temperature range needs
+    const lines = text.split('\n')
+    const daytime = lines.filter((l, i) => i === 0 || (l.slice(11, 13) >= '06' && l.slice(11, 13) < '20'))
+    const series = readWeather(daytime.slice(0, 1 + 14 * 60).join('\n'), {
+      ...site,
+      mapping: { ghi: { column: 'none' } },
+    }).series
+    const refusal = () => assess(series, { ...options, seasonStart: '01-01', seasonEnd: '01-31' })
+    expect(refusal).toThrow(/the open-air method needs the sun/)
+    expect(refusal).toThrow(/neither cloud cover nor whole days of temperatures/)
+    expect(refusal).not.toThrow(/--lat and --lon/)
+  })
 })
