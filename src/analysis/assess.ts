@@ -295,6 +295,17 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   } else if (years.length < 10) {
     warnings.push(`only ${years.length} years of data: P10 and P90 across so few years are rough`)
   }
+  const estimatedSunHours = countEstimatedSun(series)
+  if (estimatedSunHours > 0 && (method.kind === 'open-air' || method.kind === 'solar-cabinet')) {
+    const from = (series.supplied ?? [])
+      .filter((s) => s.name.startsWith('irradiance estimated from '))
+      .map((s) => s.name.slice('irradiance estimated from '.length))
+    warnings.push(
+      `the sun in ${estimatedSunHours} daylight hours is estimated${from.length > 0 ? ` from ${from.join(' and ')}` : ''}, ` +
+        'not measured: usable hours and drying times rest on that estimate, which is meant for sums over many days ' +
+        'and is rough hour by hour (see the assumptions)',
+    )
+  }
   if (primary.noRainData && method.kind === 'open-air') {
     warnings.push(
       'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
@@ -375,7 +386,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       years,
       monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
       assumedIrradianceHours: primary.assumedIrradianceHours,
-      estimatedIrradianceHours: countEstimatedSun(series),
+      estimatedIrradianceHours: estimatedSunHours,
       assumedWindHours: primary.assumedWindHours,
       hasRainData: !primary.noRainData,
       startDateBatchesRun: table.batches,

@@ -165,6 +165,12 @@ describe('through the engine', () => {
       const b = estimated.monthly[m].usableHours.median!
       expect(Math.abs(b - a) / a, `month ${m + 1}`).toBeLessThan(0.05)
     }
+    // the estimate is said among the warnings (CLI text, report, API), not only in the assumptions
+    expect(estimated.warnings.join(' ')).toMatch(
+      /the sun in \d+ daylight hours is estimated from the daily temperature range, not measured/,
+    )
+    expect(estimated.coverage.estimatedIrradianceHours).toBeGreaterThan(0)
+    expect(measured.warnings.join(' ')).not.toMatch(/is estimated/)
   })
 
   it('without the site position nothing allows an estimate: open air is refused, shade is assessed', () => {
