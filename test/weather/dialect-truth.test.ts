@@ -236,3 +236,40 @@ describe('every dialect fixture reads back as the weather it was made from', () 
     })
   }
 })
+
+describe('all DWD products of a station in one file', () => {
+  // The solar product is stamped off the hour (the UTC instant of a true-solar-time hour, e.g. 23:26);
+  // merged with the others it must not break their hours.
+  const products = ['tu', 'ff', 'p0', 'rr', 'st', 'n'].map((p) => `dwd-produkt-${p}-stunde.txt`)
+  const needs = optionsOf(manifest.fixtures.find((f) => f.file === DWD_TU)!.needs)
+  const read = (files: string[]) =>
+    readWeatherBytes(new Uint8Array(Buffer.concat(files.map((f) => readFileSync(join(DIR, f))))), needs)
+
+  it('give every variable as the tu file read with that product alone', () => {
+    const all = read(products)
+    expect(all.dialect?.id).toBe('dwd-hourly-tu+ff+p0+rr+st+n')
+    const pairs: [string, (r: WeatherReadResult) => Float64Array][] = [
+      ['ff', (r) => r.series.windMs],
+      ['p0', (r) => r.series.pressureKpa],
+      ['rr', (r) => r.series.rainMm],
+      ['st', (r) => r.series.ghiWm2],
+      ['tu', (r) => r.series.dryBulbC],
+      ['tu', (r) => r.series.relativeHumidityPct],
+    ]
+    for (const [product, column] of pairs) {
+      const pair = read(product === 'tu' ? [DWD_TU] : [DWD_TU, `dwd-produkt-${product}-stunde.txt`])
+      let compared = 0
+      for (let s = 0; s < pair.series.hours; s++) {
+        const k = all.series.startUtcMs.indexOf(pair.series.startUtcMs[s])
+        const a = column(pair)[s]
+        if (k < 0 || Number.isNaN(a)) continue
+        expect(
+          column(all)[k],
+          `${product} at ${new Date(pair.series.startUtcMs[s]).toISOString()}`,
+        ).toBeCloseTo(a, 9)
+        compared++
+      }
+      expect(compared, product).toBeGreaterThanOrEqual(160)
+    }
+  })
+})
