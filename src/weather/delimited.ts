@@ -317,8 +317,10 @@ export function readDelimited(
     // shed 2" above a semicolon table): when the header is searched, the delimiter whose header row
     // names the most variables wins (the first line's on a tie).
     if (layout.delimiter === undefined && headerLine === undefined && layout.headerRow === undefined) {
+      const headEnd = lineStart(body, HEAD_ROWS)
       for (const other of [',', ';', '\t']) {
-        if (other === delimiter) continue
+        // a delimiter that never occurs in the head cannot split its header
+        if (other === delimiter || body.lastIndexOf(other, headEnd) < 0) continue
         const otherHead = Papa.parse<string[]>(body, {
           delimiter: other,
           skipEmptyLines: false,

@@ -61,6 +61,14 @@ describe('the two inputs of the issue', () => {
 })
 
 describe('more hostile shapes, each read in one pass', () => {
+  it('a title with commas above 100 lines of 1,000 semicolon cells of "(": every delimiter tried, no header, said so', () => {
+    const lines = Array.from({ length: 100 }, () =>
+      Array.from({ length: 1000 }, () => '('.repeat(100)).join(';'),
+    )
+    const text = `Title, a, b\n${lines.join('\n')}\n1;2;3\n`
+    expect(() => readWeather(text, { utcOffsetHours: 0 })).toThrow(/no header row with known column names/)
+  })
+
   it('a body whose lines hold no delimiter (each line searched to the end of the file before)', () => {
     const lines = Array.from({ length: 20_000 }, (_, h) => new Date(Date.UTC(2021, 0, 1, h)).toISOString())
     const text = `timestamp,temp_c,rh_pct\n${lines.join('\n')}\n`
