@@ -10,7 +10,7 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import { createTimestampColumns, parseTimeOfDay, parseTimestampInto } from '../../src/weather/timestamps.ts'
 import { normalizeUnitToken } from '../../src/weather/units.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
-import { expectInspect, expectProblem, post } from './hostile-helpers.ts'
+import { COARSE_QUERY, expectInspect, expectProblem, post } from './hostile-helpers.ts'
 
 const PADDED_STAMP = `2021-07-01 00:00${' '.repeat(4000)}x`
 const PAREN_HEADER = Array.from({ length: 1000 }, () => '('.repeat(100)).join(',')
@@ -57,6 +57,25 @@ describe('the two inputs of the issue', () => {
       ),
     )
     expect(ok.rows.rejected).toBe(1)
+  })
+})
+
+describe('the two inputs of the issue through POST /v1/assess', () => {
+  it('the header of "(" is refused with why; the padded stamp is one rejected row in a file too short to assess', async () => {
+    const p = await expectProblem(
+      await post(`${COARSE_QUERY}&utcOffset=0`, `${PAREN_HEADER}\n1,2,3\n`, 'text/csv'),
+      [400, 422],
+    )
+    expect(p.detail).toMatch(/no header row/)
+    const q = await expectProblem(
+      await post(
+        `${COARSE_QUERY}&utcOffset=0`,
+        `timestamp,temp_c,rh_pct\n${PADDED_STAMP},20,50\n${GOOD_ROWS.join('\n')}\n`,
+        'text/csv',
+      ),
+      [400, 422],
+    )
+    expect(q.detail).toMatch(/at least 24 hours, got 3/)
   })
 })
 
