@@ -9,7 +9,8 @@ import { describe, expect, it } from 'vitest'
 import { dewPointFromVaporPressureC } from '../../src/physics/moist-air.ts'
 import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.ts'
 import { detectDialect, dialectHead } from '../../src/weather/dialects/index.ts'
-import { decodeWeatherBytes, readWeatherBytes } from '../../src/weather/read-weather.ts'
+import { hourlyExportCsv } from '../../src/weather/export.ts'
+import { decodeWeatherBytes, readWeather, readWeatherBytes } from '../../src/weather/read-weather.ts'
 import type { WeatherReadResult } from '../../src/weather/result.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 
@@ -220,6 +221,11 @@ describe('every dialect fixture reads back as the weather it was made from', () 
           expect(c.rmse).toBeLessThanOrEqual(e.maxRmse)
         })
       }
+
+      it('its hourly export reads back unchanged', () => {
+        const exported = hourlyExportCsv(read().series)
+        expect(hourlyExportCsv(readWeather(exported).series)).toBe(exported)
+      })
 
       for (const column of ['dry_bulb_c', 'ghi_wm2'].filter((c) => f.variables.includes(c))) {
         it(`${column}: the hour of the mean daily peak is within 1 h of the truth's`, () => {
