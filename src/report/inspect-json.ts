@@ -3,8 +3,13 @@
  * The JSON of `dryhours inspect --json` and POST /v1/inspect: what was understood of a weather file.
  */
 import type { WeatherReadResult } from '../weather/result.ts'
+import { csvTable } from './escape.ts'
 
-/** The JSON of `dryhours inspect --json`: format, rows, period, hours, years, typicalYear, columns, site, coverage, problems, plus time basis and warnings. */
+/**
+ * The JSON of `dryhours inspect --json`: format, rows, period, hours, years, typicalYear, columns, site,
+ * coverage, every rejected row with its line (`rejectedRows`, uncapped), the first 100 problems with their
+ * counts, plus time basis and warnings.
+ */
 export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
   const s = r.series
   return {
@@ -30,9 +35,26 @@ export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
     hoursWithoutRow: r.hoursWithoutRow,
     hoursMissingCore: r.hoursMissingCore,
     problemCounts: r.problemCounts,
+    rejectedRows: r.rejectedRows,
     problems: r.problems.slice(0, 100),
     problemsListed: Math.min(100, r.problems.length),
     problemsTotal: Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0),
     warnings: r.warnings,
   }
+}
+
+/**
+ * Every rejected row as CSV (line, kind, and the problem's message where it is among the listed problems):
+ * the download of `POST /v1/inspect?format=csv`.
+ */
+export function rejectedRowsCsv(r: WeatherReadResult): string {
+  const messages = new Map<string, string>()
+  for (const p of r.problems) {
+    const key = `${p.line}:${p.kind}`
+    if (p.line !== null && !messages.has(key)) messages.set(key, p.message)
+  }
+  return csvTable(
+    ['line', 'kind', 'message'],
+    r.rejectedRows.map((row) => [row.line, row.kind, messages.get(`${row.line}:${row.kind}`) ?? '']),
+  )
 }

@@ -19,7 +19,7 @@ import {
   VALID_RANGE,
 } from './quality.ts'
 import type { RawColumn, RawTable } from './raw-table.ts'
-import type { ColumnReport, WeatherReadResult } from './result.ts'
+import type { ColumnReport, RejectedRow, WeatherReadResult } from './result.ts'
 import { createEmptySeries, QualityFlag, type SiteInfo, type ValueTiming } from './series.ts'
 import { snippet } from './snippet.ts'
 import { resolveRowTimes, type TimeBasisInput } from './time-basis.ts'
@@ -116,7 +116,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     quality: series.quality,
     changed: new Uint8Array(hours),
   }
-  const rowStatus = new Uint8Array(n) // 0 pending, 2 rejected
+  const rowStatus = new Uint8Array(n) // 0 pending; rejected: 2 no time, 3 duplicate, 4 no dry bulb or humidity
   let maxSeen = Number.NEGATIVE_INFINITY
   for (let i = 0; i < n; i++) {
     const t = starts[i]
@@ -127,7 +127,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     const s = (t - first) / MS_PER_HOUR
     const other = grid.slotRow[s]
     if (other >= 0) {
-      rowStatus[i] = 2
+      rowStatus[i] = 3
       series.quality[s] |= QualityFlag.duplicateTimestamp
       const same = sameValues(raw, other, i)
       log.add(
@@ -298,7 +298,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       continue
     }
     if (series.quality[s] & QualityFlag.missingCore) {
-      rowStatus[row] = 2
+      rowStatus[row] = 4
       const what = Number.isNaN(series.dryBulbC[s]) ? 'dry bulb' : 'humidity'
       log.add(
         raw.lines[row],
@@ -309,7 +309,19 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     } else if (grid.changed[s]) repaired++
     else used++
   }
-  for (let i = 0; i < n; i++) if (rowStatus[i] === 2) rejected++
+  const rejectedRows: RejectedRow[] = []
+  for (let i = 0; i < n; i++) {
+    if (rowStatus[i] < 2) continue
+    rejected++
+    const line = raw.lines[i]
+    const kind =
+      rowStatus[i] === 3
+        ? 'duplicate-timestamp'
+        : rowStatus[i] === 4
+          ? 'core-missing'
+          : (log.rowKinds.get(line) ?? 'bad-timestamp')
+    rejectedRows.push({ line, kind })
+  }
   series.timing = Object.fromEntries(columns.map((c) => [c.variable, c.timing]))
   const coverage = summarizeCoverage(series, missingCoreHours(series))
   log.problems.sort((a, b) => (a.line ?? Number.MAX_SAFE_INTEGER) - (b.line ?? Number.MAX_SAFE_INTEGER))
@@ -317,6 +329,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     series,
     format: raw.format,
     rows: { read: n, used, repaired, rejected },
+    rejectedRows,
     columns,
     problems: log.problems,
     problemCounts: log.counts,

@@ -32,6 +32,12 @@ export interface RowCounts {
   rejected: number
 }
 
+/** A row of the file that was not used, with its line and the kind of problem that rejected it. */
+export interface RejectedRow {
+  line: number
+  kind: ProblemKind
+}
+
 export interface MonthCoverage {
   year: number
   month: number
@@ -43,6 +49,8 @@ export interface WeatherReadResult {
   series: HourlySeries
   format: 'csv' | 'epw'
   rows: RowCounts
+  /** Every rejected row (uncapped, in file order), so each can be found in the file. */
+  rejectedRows: RejectedRow[]
   columns: ColumnReport[]
   /** First problems (capped), each with its line; `problemCounts` counts all. */
   problems: WeatherProblem[]

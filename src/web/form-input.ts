@@ -12,8 +12,8 @@ import { parseUserProfile } from '../product/profile-schema.ts'
 import type { UnitSystem } from '../report/display-units.ts'
 import { parseMappingArgument } from '../weather/options.ts'
 
-/** Most weather files one comparison takes. */
-export const MAX_SITES = 6
+/** Most weather files one comparison takes, unless the server says otherwise (the API's `maxSites`). */
+export const MAX_SITES = 8
 
 export const METHOD_KINDS = ['open-air', 'shade', 'solar-cabinet', 'heated'] as const
 export const RESULT_FORMATS = ['page', 'html', 'csv', 'json', 'bundle'] as const
@@ -82,8 +82,15 @@ async function fileParts(form: FormData, name: string): Promise<WeatherFile[]> {
   return out
 }
 
-/** Parse the page form. `demoIds` are the demo file names the server can supply (none on a bare app). */
-export async function parseForm(form: FormData, demoIds: readonly string[] = []): Promise<FormInput> {
+/**
+ * Parse the page form. `demoIds` are the demo file names the server can supply (none on a bare app);
+ * `maxSites` is the server's limit of files per comparison.
+ */
+export async function parseForm(
+  form: FormData,
+  demoIds: readonly string[] = [],
+  maxSites = MAX_SITES,
+): Promise<FormInput> {
   const files = await fileParts(form, 'file')
   const demoRaw = text(form, 'demo')
   const demo = demoRaw && demoIds.includes(demoRaw) ? demoRaw : null
@@ -94,9 +101,9 @@ export async function parseForm(form: FormData, demoIds: readonly string[] = [])
   }
   if (files.length === 0 && !demo)
     throw new RangeError('file: choose a weather file (CSV or EPW) to upload, or a demo site')
-  if (files.length + (demo ? 1 : 0) > MAX_SITES) {
+  if (files.length + (demo ? 1 : 0) > maxSites) {
     throw new RangeError(
-      `file: at most ${MAX_SITES} weather files can be compared at once, got ${files.length + (demo ? 1 : 0)}`,
+      `file: at most ${maxSites} weather files can be compared at once, got ${files.length + (demo ? 1 : 0)}`,
     )
   }
 

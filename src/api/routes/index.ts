@@ -20,9 +20,27 @@ export interface MountedRoute {
   router: Hono<any, any, any>
 }
 
+/**
+ * Requests that take a file and run the engine: on Node they run on the worker pool (node/pool.ts), the rest
+ * (health, air, products, docs, the page itself) on the event-loop thread.
+ */
+export const FILE_ROUTES: readonly string[] = [
+  '/v1/assess',
+  '/v1/compare',
+  '/v1/inspect',
+  '/v1/fit',
+  '/v1/energy-chart',
+  '/report',
+]
+
+/** Whether a request is one of the {@link FILE_ROUTES} (a POST to one of their paths). */
+export function takesFile(method: string, pathname: string): boolean {
+  return method === 'POST' && FILE_ROUTES.includes(pathname)
+}
+
 export function apiRoutes(_config: ApiConfig): MountedRoute[] {
   return [
-    { path: '/healthz', router: healthRouter },
+    { path: '/healthz', router: healthRouter(_config) },
     { path: '/v1/air', router: airRouter },
     { path: '/v1/energy-chart', router: energyRouter(_config) },
     { path: '/v1/inspect', router: inspectRouter(_config) },
@@ -30,7 +48,7 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
     { path: '/v1/assess', router: assessRouter(_config) },
     { path: '/v1/compare', router: compareRouter(_config) },
     { path: '/v1/equilibrium', router: equilibriumRouter },
-    { path: '/v1/fit', router: fitRouter },
+    { path: '/v1/fit', router: fitRouter(_config) },
     { path: '/openapi.json', router: openApiRouter },
     { path: '/docs', router: docsRouter },
     { path: '/', router: pageRouter(_config) },

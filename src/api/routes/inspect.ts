@@ -3,35 +3,64 @@
  * POST /v1/inspect: what dryhours understood of a weather file (same object as `dryhours inspect --json`).
  */
 import { Hono } from 'hono'
-import { inspectJson } from '../../report/inspect-json.ts'
+import { z } from 'zod'
+import { inspectJson, rejectedRowsCsv } from '../../report/inspect-json.ts'
+import type { WeatherReadOptions } from '../../weather/options.ts'
 import { readWeather } from '../../weather/read-weather.ts'
-import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import type { WeatherReadResult } from '../../weather/result.ts'
 import type { ApiConfig } from '../config.ts'
+import { rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { checkedUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { validWeatherOptions, weatherOptionsFromQuery, weatherQuerySchema } from '../weather-options.ts'
+import { workControl } from '../work.ts'
+
+/** The inspect query: the weather options, and `format=csv` for every rejected row as a download. */
+export const inspectQuerySchema = weatherQuerySchema.extend({
+  format: z
+    .enum(['json', 'csv'])
+    .optional()
+    .describe('json (default), or csv: every rejected row (line, kind, message) as a download'),
+})
 
 export const inspectRouter = (config: ApiConfig) =>
   new Hono().post('/', async (c) => {
+    const work = workControl(c, config)
     const upload = await readUpload(c, { defaultName: 'weather file' })
-    const options =
-      upload.options !== undefined
-        ? validWeatherOptions(upload.options, 'options')
-        : weatherOptionsFromQuery(parseOrProblem(weatherQuerySchema, upload.query))
+    let format: 'json' | 'csv' | undefined
+    let options: WeatherReadOptions
+    if (upload.options !== undefined) {
+      format = parseOrProblem(inspectQuerySchema.pick({ format: true }).strict(), upload.query).format
+      options = validWeatherOptions(upload.options, 'options')
+    } else {
+      const q = parseOrProblem(inspectQuerySchema, upload.query)
+      format = q.format
+      const { format: _f, ...weatherQuery } = q
+      options = weatherOptionsFromQuery(weatherQuery)
+    }
     if (upload.files.length !== 1) {
       throw new ApiProblem(400, `send exactly one weather file, got ${upload.files.length}`, [
         { path: 'file', message: 'one file part expected' },
       ])
     }
     const text = checkedUploadText(upload.files[0], config)
+    work.checkpoint()
+    let read: WeatherReadResult
     try {
-      return c.json(inspectJson(readWeather(text, options)))
+      read = readWeather(text, options)
     } catch (e) {
-      if (e instanceof WeatherInputError) throw new ApiProblem(422, e.message)
-      throw e
+      rethrowAsProblem(e)
     }
+    work.checkpoint()
+    if (format === 'csv') {
+      return c.body(rejectedRowsCsv(read), 200, {
+        'content-type': 'text/csv; charset=utf-8',
+        'content-disposition': 'attachment; filename="dryhours-rejected-rows.csv"',
+      })
+    }
+    return c.json(inspectJson(read))
   })
 
 registerOperation({
@@ -39,9 +68,9 @@ registerOperation({
   path: '/v1/inspect',
   summary: 'Inspect a weather file',
   description:
-    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected) and the first problems with line numbers. ' +
+    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected), every rejected row with its line (`rejectedRows`; `format=csv` downloads them) and the first 100 problems with line numbers and the count of each kind. ' +
     'Send the file as the body (text/csv, text/plain) with options in the query, or as multipart/form-data with a `file` part and an optional `options` JSON part (latitudeDeg, longitudeDeg, elevationM, utcOffsetHours | timeZone, mapping, dateOrder, timestampLabels, windHeightM, siteName). Same object as `dryhours inspect --json`.',
-  query: weatherQuerySchema,
+  query: inspectQuerySchema,
   requestBody: [
     { contentType: 'text/csv', description: 'the weather file' },
     { contentType: 'multipart/form-data', description: 'file part + optional options JSON part' },

@@ -7,6 +7,7 @@
 import { z } from 'zod'
 import type { AssessOptions, assess } from '../../analysis/assess.ts'
 import { COMPARE_CRITERIA, type CompareCriterion } from '../../analysis/compare.ts'
+import { planAssessment } from '../../analysis/plan.ts'
 import {
   DRYING_METHOD_KINDS,
   dryingMethodSchema,
@@ -19,6 +20,7 @@ import { productById, productIds } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from '../../weather/options.ts'
+import { rethrowAsProblem } from '../errors.ts'
 import { ApiProblem } from '../problem.ts'
 import { parseOrProblem } from '../validate.ts'
 import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
@@ -119,6 +121,29 @@ export interface AssessRequest {
   options: AssessOptions
   weather: WeatherReadOptions
   criterion?: CompareCriterion
+  /** Field path of an engine option in this request (`options.maxDays`, or the query name `maxDays`). */
+  optionPath: (option: string) => string
+}
+
+/** Query names of the engine's options (the rest keep their names). */
+const QUERY_NAMES: Record<string, string> = {
+  targetWbPct: 'targetWb',
+  initialWbPct: 'initialWb',
+  thicknessMm: 'thickness',
+  seasonStart: 'start',
+  seasonEnd: 'end',
+  startStepDays: 'stepDays',
+  batchKgFresh: 'batchKg',
+}
+
+/** Check the options with the engine's planner now, before any file is read: 400 naming the field. */
+function planned(request: AssessRequest): AssessRequest {
+  try {
+    planAssessment(request.options)
+  } catch (e) {
+    rethrowAsProblem(e, { optionPath: request.optionPath, rangeStatus: 400 })
+  }
+  return request
 }
 
 function resolveProduct(value: string | Record<string, unknown>, path: string): ProductProfile {
@@ -162,7 +187,7 @@ function resolveMethod(value: string | Record<string, unknown>, path: string): A
 export function assessRequestFromJson(value: unknown, prefix = 'options'): AssessRequest {
   const o = parseOrProblem(assessOptionsJsonSchema, value, prefix)
   const { product, method, weather, criterion, ...rest } = o
-  return {
+  return planned({
     options: {
       ...rest,
       product: resolveProduct(product, `${prefix}.product`),
@@ -170,7 +195,8 @@ export function assessRequestFromJson(value: unknown, prefix = 'options'): Asses
     },
     weather: weather ?? {},
     criterion,
-  }
+    optionPath: (option) => `${prefix}.${option}`,
+  })
 }
 
 /** From the query form. */
@@ -192,9 +218,9 @@ export function assessRequestFromQuery(
     fuelPrices[m[1] as FuelId] = price
   }
   const weather = weatherOptionsFromQuery(q)
-  return {
-    query: q,
+  const request = planned({
     weather,
+    optionPath: (option) => QUERY_NAMES[option] ?? option,
     options: {
       product: resolveProduct(q.product, 'product'),
       method: resolveMethod(q.method, 'method'),
@@ -210,7 +236,8 @@ export function assessRequestFromQuery(
       fuel: q.fuel,
       fuelPrices,
     },
-  }
+  })
+  return { ...request, query: q }
 }
 
 /** Type of the engine entry, for the routes. */
