@@ -1,0 +1,121 @@
+/**
+ * @module product/spoilage/model
+ * The shape every spoilage-during-drying model shares. A model steps hour by hour along a batch, given the
+ * product's temperature, its moisture and its water activity (from the product's isotherm, computed by the
+ * caller), and accumulates one risk measure (dry-matter loss, hours in a window, fraction of mould-free time).
+ * The batch has spoiled once that measure reaches the model's threshold.
+ *
+ * Models are pure: `step` returns a new state and never mutates its argument, so a caller can branch a state
+ * (for example to try another airflow) without copying.
+ */
+
+/**
+ * How the model's numbers were obtained:
+ * - `published`: read in the cited original (or in code that transcribes it and says where, said so);
+ * - `secondary`: read only where a secondary text quotes the original (named); the original was not read;
+ * - `memory`: recalled, not verified in a document;
+ * - `common-practice`: a rule of thumb of the trade with no source: "common practice, no source".
+ */
+export type SpoilageConfidence = 'published' | 'secondary' | 'memory' | 'common-practice'
+
+export interface SpoilageSource {
+  /** Authors, year, title, journal or standard. */
+  citation: string
+  /** The equation, table or clause used, with its number where the source numbers it. */
+  equation: string
+  confidence: SpoilageConfidence
+}
+
+/** Conditions of the product during one step. */
+export interface SpoilageStepInput {
+  /** Product temperature [°C] (not the air's, where they differ). */
+  productTempC: number
+  /** Product moisture [% wet basis]. */
+  moistureWbPct: number
+  /** Product water activity (0–1), from the product's isotherm at its moisture and temperature. */
+  waterActivity: number
+  /** Length of the step [h] (> 0). */
+  hours: number
+}
+
+export interface SpoilageState {
+  /** The accumulated risk measure, in `SpoilageModel.measureUnit`. */
+  measure: number
+  /** Hours the product spent in conditions the model counts as at risk (see `SpoilageModel.atRiskWhen`). */
+  hoursAtRisk: number
+  /** Hours whose conditions lay outside the range the model's source covers (the model then clamps). */
+  hoursOutsideRange: number
+  /** Hours stepped in all. */
+  hours: number
+}
+
+export interface SpoilageModel {
+  /** kebab-case id, e.g. `grain-dry-matter-loss`. */
+  id: string
+  name: string
+  /** The product families (profile categories or ids) it is meant for. */
+  appliesTo: string[]
+  source: SpoilageSource
+  /** What `measure` is, in words, e.g. "dry-matter loss". */
+  measureName: string
+  measureUnit: string
+  /** The measure at which the batch counts as spoiled. */
+  spoiledAt: number
+  /** Where the threshold comes from. */
+  spoiledAtSource: string
+  /** Plain words: which hours count as "at risk". */
+  atRiskWhen: string
+  /** The conditions the source covers; outside them the model clamps (and counts `hoursOutsideRange`). */
+  validity: string
+  /** Cautions the report must show with this model's result. */
+  cautions: string[]
+  step(state: SpoilageState, input: SpoilageStepInput): SpoilageState
+}
+
+export function initialSpoilageState(): SpoilageState {
+  return { measure: 0, hoursAtRisk: 0, hoursOutsideRange: 0, hours: 0 }
+}
+
+/** True once the state's measure has reached the model's threshold. */
+export function isSpoiled(model: SpoilageModel, state: SpoilageState): boolean {
+  return state.measure >= model.spoiledAt
+}
+
+/** The measure as a fraction of the threshold (1 = spoiled). */
+export function riskFraction(model: SpoilageModel, state: SpoilageState): number {
+  return state.measure / model.spoiledAt
+}
+
+/** Checks one step's input; throws a RangeError naming the field. */
+export function checkStepInput(input: SpoilageStepInput): void {
+  const { productTempC, moistureWbPct, waterActivity, hours } = input
+  if (!(hours > 0 && Number.isFinite(hours))) {
+    throw new RangeError(`spoilage step: hours must be a finite number > 0, got ${hours}`)
+  }
+  if (!(productTempC >= -40 && productTempC <= 120)) {
+    throw new RangeError(`spoilage step: productTempC must be between -40 and 120 °C, got ${productTempC}`)
+  }
+  if (!(moistureWbPct >= 0 && moistureWbPct < 100)) {
+    throw new RangeError(`spoilage step: moistureWbPct must be in [0, 100) % wet basis, got ${moistureWbPct}`)
+  }
+  if (!(waterActivity >= 0 && waterActivity <= 1)) {
+    throw new RangeError(`spoilage step: waterActivity must be between 0 and 1, got ${waterActivity}`)
+  }
+}
+
+/**
+ * Runs a model over a series of equal steps and reports the first hour at which it spoiled (or null).
+ * A convenience for tests and for callers that have whole columns.
+ */
+export function runSpoilage(
+  model: SpoilageModel,
+  inputs: Iterable<SpoilageStepInput>,
+): { state: SpoilageState; spoiledAfterHours: number | null } {
+  let state = initialSpoilageState()
+  let spoiledAfterHours: number | null = null
+  for (const input of inputs) {
+    state = model.step(state, input)
+    if (spoiledAfterHours === null && isSpoiled(model, state)) spoiledAfterHours = state.hours
+  }
+  return { state, spoiledAfterHours }
+}

@@ -1,0 +1,86 @@
+/**
+ * @module product/spoilage/mould-free-time
+ * Mould-free time of intermediate-moisture foods as a function of water activity and temperature: the
+ * mould-free shelf-life (MFSL) equations of the UK Flour Milling and Baking Research Association (Seiler;
+ * Cauvain & Seiler), log-linear in the equilibrium relative humidity ERH = 100·aw:
+ *   27 °C: log10 MFSL[days] = 6.42 − 0.0647·ERH
+ *     (read as eq. 3.34 in Adams, M.R. & Moss, M.O., *Food Microbiology*, Royal Society of Chemistry, ch. 3,
+ *     "Factors affecting the growth and survival of micro-organisms in foods": `published`);
+ *   21 °C: log10 MFSL[days] = 7.91 − 0.081·ERH, validated for aw 0.74–0.90
+ *     (as reproduced, with its validity range, from Cauvain & Seiler's cake work in a practitioners' forum:
+ *     `secondary`).
+ * Under varying conditions the fraction of mould-free time used adds up, Σ Δt/MFSL(T, aw) (the same additive
+ * use of a constant-condition time as the grain allowable-storage-time rule); mould is expected once it reaches 1.
+ *
+ * An isopleth-type model in (T, aw) for fruit, vegetables and herbs, measured on cakes: an approximation for
+ * other sugar-rich intermediate-moisture foods, and the limits below are dryhours' choices:
+ * - aw above 0.90 is held at 0.90 (no extrapolation beyond the data; for cut fruit at aw > 0.9 likely
+ *   optimistic: wet surfaces also spoil by yeasts and bacteria);
+ * - aw below 0.60 adds nothing (no microbial proliferation below aw 0.60: Beuchat, L.R. 1981, *Cereal Foods
+ *   World* 26:345; from memory of that table, not re-read); between 0.60 and 0.74 the line is extrapolated;
+ * - T is interpolated log-linearly between 21 and 27 °C, extrapolated on the same line up to 35 °C and held
+ *   there above; below 21 °C the 21 °C value is used (overstates the risk of cool hours: safe side).
+ */
+import { checkStepInput, type SpoilageModel, type SpoilageState, type SpoilageStepInput } from './model.ts'
+
+/** log10 MFSL [days] = intercept − slope·ERH at the two measured temperatures. */
+export const MFSL_LINES = [
+  { tempC: 21, intercept: 7.91, slopePerErhPct: 0.081 },
+  { tempC: 27, intercept: 6.42, slopePerErhPct: 0.0647 },
+] as const
+export const MFSL_VALID_AW: readonly [number, number] = [0.74, 0.9]
+export const MFSL_NO_GROWTH_BELOW_AW = 0.6
+export const MFSL_TEMP_RANGE_C: readonly [number, number] = [21, 35]
+
+/**
+ * Mould-free time [days] at constant aw and product temperature; Infinity below aw 0.60. `clamped` says
+ * whether aw or T lay outside the equations' measured range (0.74–0.90, 21–27 °C).
+ */
+export function mouldFreeDays(tempC: number, waterActivity: number): { days: number; clamped: boolean } {
+  if (waterActivity < MFSL_NO_GROWTH_BELOW_AW) return { days: Number.POSITIVE_INFINITY, clamped: false }
+  const aw = Math.min(waterActivity, MFSL_VALID_AW[1])
+  const t = Math.min(Math.max(tempC, MFSL_TEMP_RANGE_C[0]), MFSL_TEMP_RANGE_C[1])
+  const erh = 100 * aw
+  const [l21, l27] = MFSL_LINES
+  const log21 = l21.intercept - l21.slopePerErhPct * erh
+  const log27 = l27.intercept - l27.slopePerErhPct * erh
+  const log = log21 + ((log27 - log21) * (t - l21.tempC)) / (l27.tempC - l21.tempC)
+  const clamped =
+    waterActivity < MFSL_VALID_AW[0] || waterActivity > MFSL_VALID_AW[1] || tempC < 21 || tempC > 27
+  return { days: Math.exp(log * Math.LN10), clamped }
+}
+
+export function mouldFreeTimeModel(appliesTo: string[] = ['fruit', 'vegetable', 'herb']): SpoilageModel {
+  return {
+    id: 'mould-free-time',
+    name: 'Mould-free time of intermediate-moisture foods (Seiler; Cauvain & Seiler)',
+    appliesTo,
+    source: {
+      citation:
+        'Flour Milling and Baking Research Association (Seiler; Cauvain & Seiler) mould-free shelf-life equations for cakes: 27 °C form as eq. 3.34 in Adams & Moss, Food Microbiology (RSC), ch. 3; 21 °C form and validity aw 0.74–0.90 as reproduced from Cauvain & Seiler (secondary)',
+      equation:
+        'log10 MFSL[d] = 6.42 − 0.0647·ERH (27 °C); 7.91 − 0.081·ERH (21 °C); fraction used = Σ Δt/MFSL(T, aw)',
+      confidence: 'secondary',
+    },
+    measureName: 'fraction of mould-free time used',
+    measureUnit: '',
+    spoiledAt: 1,
+    spoiledAtSource: 'visible mould expected when the whole mould-free time is used (fraction 1)',
+    atRiskWhen: `product water activity ≥ ${MFSL_VALID_AW[0]}`,
+    validity: 'cakes at aw 0.74–0.90, 21–27 °C (measured); other foods, aw and temperatures by extrapolation',
+    cautions: [
+      'Measured on bakery products: for fruit, vegetables and herbs an approximation. Dew, rain and insects add risks it does not model.',
+      'Mouldy dried fruit can carry mycotoxins (aflatoxins, ochratoxin A in raisins and figs): discard visibly mouldy lots; test where risk was high.',
+    ],
+    step(state: SpoilageState, input: SpoilageStepInput): SpoilageState {
+      checkStepInput(input)
+      const { days, clamped } = mouldFreeDays(input.productTempC, input.waterActivity)
+      return {
+        measure: state.measure + input.hours / 24 / days,
+        hoursAtRisk: state.hoursAtRisk + (input.waterActivity >= MFSL_VALID_AW[0] ? input.hours : 0),
+        hoursOutsideRange: state.hoursOutsideRange + (clamped && Number.isFinite(days) ? input.hours : 0),
+        hours: state.hours + input.hours,
+      }
+    },
+  }
+}

@@ -1,0 +1,154 @@
+import { describe, expect, it } from 'vitest'
+import { productById } from '../../../src/product/catalogue.ts'
+import {
+  COCOA_OTA_WINDOW,
+  COFFEE_OTA_WINDOW,
+  FISH_WET_WARM_RULE,
+  initialSpoilageState,
+  isSpoiled,
+  mouldFreeDays,
+  mouldFreeTimeModel,
+  runSpoilage,
+  type SpoilageStepInput,
+  spoilageModelFor,
+  spoilageModels,
+} from '../../../src/product/spoilage/index.ts'
+
+const hours = (n: number, input: Omit<SpoilageStepInput, 'hours'>): SpoilageStepInput[] =>
+  Array.from({ length: n }, () => ({ ...input, hours: 1 }))
+
+describe('coffee mould and ochratoxin window', () => {
+  // FAO 2006 guidelines as quoted (Kornman 2016): at most four days between aw 0.95 and 0.80.
+  it('spoils after 96 hours between aw 0.95 and 0.80, not at 95', () => {
+    const inWindow = { productTempC: 28, moistureWbPct: 35, waterActivity: 0.9 }
+    expect(runSpoilage(COFFEE_OTA_WINDOW, hours(95, inWindow)).spoiledAfterHours).toBeNull()
+    expect(runSpoilage(COFFEE_OTA_WINDOW, hours(96, inWindow)).spoiledAfterHours).toBe(96)
+  })
+
+  it('does not count hours above 0.95 or below 0.80', () => {
+    const wet = hours(200, { productTempC: 28, moistureWbPct: 55, waterActivity: 0.97 })
+    const dry = hours(200, { productTempC: 28, moistureWbPct: 11, waterActivity: 0.6 })
+    const { state } = runSpoilage(COFFEE_OTA_WINDOW, [...wet, ...dry])
+    expect(state.measure).toBe(0)
+    expect(state.hours).toBe(400)
+  })
+
+  it('counts the window edges (0.80 and 0.95) in', () => {
+    const s1 = COFFEE_OTA_WINDOW.step(initialSpoilageState(), {
+      productTempC: 25,
+      moistureWbPct: 20,
+      waterActivity: 0.8,
+      hours: 2,
+    })
+    const s2 = COFFEE_OTA_WINDOW.step(s1, {
+      productTempC: 25,
+      moistureWbPct: 40,
+      waterActivity: 0.95,
+      hours: 3,
+    })
+    expect(s2.measure).toBe(5)
+  })
+
+  it('marks the cocoa window as an analogy, not a published cocoa limit', () => {
+    expect(COCOA_OTA_WINDOW.source.confidence).toBe('memory')
+    expect(COCOA_OTA_WINDOW.spoiledAtSource).toMatch(/analogy/)
+  })
+})
+
+describe('mould-free time (Seiler; Cauvain & Seiler)', () => {
+  it('gives the 27 °C equation of Adams & Moss eq. 3.34: log10 MFSL = 6.42 − 0.0647·ERH', () => {
+    for (const erh of [74, 80, 85, 90]) {
+      expect(mouldFreeDays(27, erh / 100).days).toBeCloseTo(10 ** (6.42 - 0.0647 * erh), 6)
+    }
+  })
+
+  it('gives the 21 °C line as reproduced with its table (74 % → 82 d, 80 % → 27 d, 81 % → 22 d)', () => {
+    expect(Math.round(mouldFreeDays(21, 0.74).days)).toBe(82)
+    expect(Math.round(mouldFreeDays(21, 0.8).days)).toBe(27)
+    expect(Math.round(mouldFreeDays(21, 0.81).days)).toBe(22)
+  })
+
+  it('agrees within 15 % with quoted madeira-cake mould-free times (aw 0.81: 14 d at 27 °C, 24 d at 21 °C; aw 0.85: 8 d and 12 d)', () => {
+    // Dr. Wernecke Feuchtemesstechnik, application note "Water activity of food" (quoted values).
+    const cases: [number, number, number][] = [
+      [27, 0.81, 14],
+      [21, 0.81, 24],
+      [27, 0.85, 8],
+      [21, 0.85, 12],
+    ]
+    for (const [t, aw, days] of cases) {
+      expect(Math.abs(mouldFreeDays(t, aw).days - days) / days).toBeLessThan(0.15)
+    }
+  })
+
+  it('interpolates between 21 and 27 °C, holds the 21 °C value below and stops at aw 0.90', () => {
+    const d21 = mouldFreeDays(21, 0.85).days
+    const d27 = mouldFreeDays(27, 0.85).days
+    const d24 = mouldFreeDays(24, 0.85).days
+    expect(d24).toBeLessThan(d21)
+    expect(d24).toBeGreaterThan(d27)
+    expect(mouldFreeDays(10, 0.85).days).toBe(d21)
+    expect(mouldFreeDays(27, 0.99).days).toBe(mouldFreeDays(27, 0.9).days)
+    expect(mouldFreeDays(27, 0.99).clamped).toBe(true)
+    expect(mouldFreeDays(27, 0.55).days).toBe(Number.POSITIVE_INFINITY)
+  })
+
+  it('spoils fruit held at aw 0.90 and 27 °C after about four days, hour by hour', () => {
+    const model = mouldFreeTimeModel()
+    const expectedH = 24 * 10 ** (6.42 - 0.0647 * 90)
+    const { spoiledAfterHours } = runSpoilage(
+      model,
+      hours(200, { productTempC: 27, moistureWbPct: 60, waterActivity: 0.9 }),
+    )
+    expect(spoiledAfterHours).toBe(Math.ceil(expectedH))
+  })
+
+  it('adds fractions: half the mould-free time wet then half at a drier state spoils', () => {
+    const model = mouldFreeTimeModel()
+    const a = 24 * mouldFreeDays(27, 0.88).days
+    const b = 24 * mouldFreeDays(27, 0.78).days
+    let s = model.step(initialSpoilageState(), {
+      productTempC: 27,
+      moistureWbPct: 50,
+      waterActivity: 0.88,
+      hours: a / 2,
+    })
+    expect(isSpoiled(model, s)).toBe(false)
+    s = model.step(s, { productTempC: 27, moistureWbPct: 30, waterActivity: 0.78, hours: b / 2 })
+    expect(s.measure).toBeCloseTo(1, 9)
+  })
+})
+
+describe('fish rule (common practice, no source)', () => {
+  it('is labelled as common practice and counts only wet, warm hours', () => {
+    expect(FISH_WET_WARM_RULE.source.citation).toBe('common practice, no source')
+    const cold = hours(48, { productTempC: 5, moistureWbPct: 75, waterActivity: 0.98 })
+    const warm = hours(24, { productTempC: 25, moistureWbPct: 75, waterActivity: 0.98 })
+    const dryish = hours(48, { productTempC: 25, moistureWbPct: 40, waterActivity: 0.85 })
+    const r = runSpoilage(FISH_WET_WARM_RULE, [...cold, ...dryish, ...warm])
+    expect(r.state.measure).toBe(24)
+    expect(r.spoiledAfterHours).toBe(120)
+  })
+})
+
+describe('model choice per product', () => {
+  it('gives each catalogue family its model', () => {
+    expect(spoilageModelFor(productById('shelled-corn')).id).toBe('grain-dry-matter-loss')
+    expect(spoilageModelFor(productById('rough-rice')).id).toBe('grain-dry-matter-loss')
+    expect(spoilageModelFor(productById('soybean')).id).toBe('grain-dry-matter-loss')
+    expect(spoilageModelFor(productById('coffee-parchment')).id).toBe('coffee-ota-window')
+    expect(spoilageModelFor(productById('cocoa-beans')).id).toBe('cocoa-ota-window')
+    expect(spoilageModelFor(productById('apricot-halves')).id).toBe('mould-free-time')
+    expect(spoilageModelFor(productById('mint-leaves')).id).toBe('mould-free-time')
+    expect(spoilageModelFor(productById('fish-fillets')).id).toBe('fish-wet-warm-hours')
+    expect(spoilageModelFor(productById('fish-fillets-salted')).id).toBe('mould-free-time')
+  })
+
+  it('lists every model with a source, a threshold and cautions', () => {
+    for (const m of spoilageModels()) {
+      expect(m.source.citation.length).toBeGreaterThan(10)
+      expect(m.spoiledAt).toBeGreaterThan(0)
+      expect(m.cautions.length).toBeGreaterThan(0)
+    }
+  })
+})
