@@ -5,6 +5,7 @@
  * a RangeError naming the form field, the value and what is accepted.
  */
 import type { AssessOptions } from '../analysis/assess.ts'
+import { ASSESS_RANGES } from '../analysis/plan.ts'
 import { FUEL_IDS, type FuelId } from '../drying/method.ts'
 import { productById } from '../product/catalogue.ts'
 import type { ProductProfile } from '../product/profile.ts'
@@ -188,15 +189,15 @@ export async function parseForm(
     if (fuel !== undefined) method.fuel = fuel
   }
   const assess: FormInput['assess'] = { method: method as AssessOptions['method'] }
-  const target = numberField(form, 'targetWbPct', 0.5, 90, '% wet basis')
+  const target = numberField(form, 'targetWbPct', ...ASSESS_RANGES.targetWbPct, '% wet basis')
   if (target !== undefined) assess.targetWbPct = target
-  const initial = numberField(form, 'initialWbPct', 1, 95, '% wet basis')
+  const initial = numberField(form, 'initialWbPct', ...ASSESS_RANGES.initialWbPct, '% wet basis')
   if (initial !== undefined) assess.initialWbPct = initial
   const seasonStart = monthDay(form, 'seasonStart')
   const seasonEnd = monthDay(form, 'seasonEnd')
   if (seasonStart !== undefined) assess.seasonStart = seasonStart
   if (seasonEnd !== undefined) assess.seasonEnd = seasonEnd
-  const deadline = numberField(form, 'deadlineDays', 0.25, 365, 'days')
+  const deadline = numberField(form, 'deadlineDays', ...ASSESS_RANGES.deadlineDays, 'days')
   if (deadline !== undefined) assess.deadlineDays = deadline
   if (fuel !== undefined) assess.fuel = fuel
   if (kind !== 'heated' && efficiency !== undefined)

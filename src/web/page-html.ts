@@ -5,6 +5,8 @@
  * downloads). Questions about the file (time zone, site, column mapping) sit in a section that opens
  * when the reader needs them. Every value echoed back into the form is escaped.
  */
+
+import { ASSESS_DEFAULTS } from '../analysis/plan.ts'
 import { FUELS } from '../drying/fuels.ts'
 import { FUEL_IDS } from '../drying/method.ts'
 import { PRODUCT_CATALOGUE } from '../product/catalogue.ts'
@@ -145,7 +147,7 @@ ${field('initialWbPct', 'Initial moisture [% wet basis]', v, { inputmode: 'decim
 <div class="grid">
 ${field('seasonStart', 'First start day (MM-DD)', v, { placeholder: '06-15', pattern: '\\d{2}-\\d{2}' })}
 ${field('seasonEnd', 'Last start day (MM-DD)', v, { placeholder: '09-15', pattern: '\\d{2}-\\d{2}' })}
-${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', placeholder: '14' })}
+${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', placeholder: String(ASSESS_DEFAULTS.deadlineDays) })}
 ${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade)', v, { inputmode: 'decimal', methods: 'open-air shade' })}
 ${field('collectorAreaM2PerTonne', 'Collector area [m² per tonne] (solar cabinet)', v, { inputmode: 'decimal', placeholder: '100', methods: 'solar-cabinet' })}
 ${field('setPointC', 'Air set point [°C] (heated; empty = just enough)', v, { inputmode: 'decimal', methods: 'heated' })}

@@ -20,24 +20,6 @@ export interface MountedRoute {
   router: Hono<any, any, any>
 }
 
-/**
- * Requests that take a file and run the engine: on Node they run on the worker pool (node/pool.ts), the rest
- * (health, air, products, docs, the page itself) on the event-loop thread.
- */
-export const FILE_ROUTES: readonly string[] = [
-  '/v1/assess',
-  '/v1/compare',
-  '/v1/inspect',
-  '/v1/fit',
-  '/v1/energy-chart',
-  '/report',
-]
-
-/** Whether a request is one of the {@link FILE_ROUTES} (a POST to one of their paths). */
-export function takesFile(method: string, pathname: string): boolean {
-  return method === 'POST' && FILE_ROUTES.includes(pathname)
-}
-
 export function apiRoutes(_config: ApiConfig): MountedRoute[] {
   return [
     { path: '/healthz', router: healthRouter(_config) },
@@ -49,8 +31,8 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
     { path: '/v1/compare', router: compareRouter(_config) },
     { path: '/v1/equilibrium', router: equilibriumRouter },
     { path: '/v1/fit', router: fitRouter(_config) },
-    { path: '/openapi.json', router: openApiRouter },
-    { path: '/docs', router: docsRouter },
+    { path: '/openapi.json', router: openApiRouter(_config) },
+    { path: '/docs', router: docsRouter(_config) },
     { path: '/', router: pageRouter(_config) },
   ]
 }

@@ -7,7 +7,7 @@
 import { z } from 'zod'
 import type { AssessOptions, assess } from '../../analysis/assess.ts'
 import { COMPARE_CRITERIA, type CompareCriterion } from '../../analysis/compare.ts'
-import { planAssessment } from '../../analysis/plan.ts'
+import { ASSESS_DEFAULTS, ASSESS_RANGES as R, planAssessment } from '../../analysis/plan.ts'
 import {
   DRYING_METHOD_KINDS,
   dryingMethodSchema,
@@ -42,38 +42,60 @@ export const assessOptionsJsonSchema = z.strictObject({
     ),
   targetWbPct: z
     .number()
+    .min(R.targetWbPct[0])
+    .max(R.targetWbPct[1])
     .optional()
     .describe('target moisture, wet basis [%]; default the product profile’s'),
-  initialWbPct: z.number().optional().describe('initial moisture, wet basis [%]; default the profile’s'),
-  thicknessMm: z.number().positive().max(500).optional().describe('product thickness [mm]'),
+  initialWbPct: z
+    .number()
+    .min(R.initialWbPct[0])
+    .max(R.initialWbPct[1])
+    .optional()
+    .describe('initial moisture, wet basis [%]; default the profile’s'),
+  thicknessMm: z
+    .number()
+    .gt(R.thicknessMm[0])
+    .lt(R.thicknessMm[1])
+    .optional()
+    .describe('product thickness [mm]; default the profile’s'),
   seasonStart: monthDay.optional().describe('first start date of the season [MM-DD]'),
   seasonEnd: monthDay.optional().describe('last start date of the season [MM-DD]'),
-  startStepDays: z.number().int().min(1).max(60).optional().describe('days between start dates'),
+  startStepDays: z
+    .number()
+    .int()
+    .min(R.startStepDays[0])
+    .max(R.startStepDays[1])
+    .optional()
+    .describe(
+      `days between start dates [days]; default ${ASSESS_DEFAULTS.stepDaysWithSeason} with a season, else ${ASSESS_DEFAULTS.stepDaysWholeYear}`,
+    ),
   startHourLocal: z
     .number()
     .int()
-    .min(0)
-    .max(23)
+    .min(R.startHourLocal[0])
+    .max(R.startHourLocal[1])
     .optional()
-    .describe('local standard hour at which batches start'),
+    .describe(`local standard hour at which batches start; default ${ASSESS_DEFAULTS.startHourLocal}`),
   deadlineDays: z
     .number()
-    .positive()
-    .max(365)
+    .min(R.deadlineDays[0])
+    .max(R.deadlineDays[1])
     .optional()
-    .describe('window to reach the target [days]; default 14'),
+    .describe(`window to reach the target [days]; default ${ASSESS_DEFAULTS.deadlineDays}`),
   maxDays: z
     .number()
     .positive()
-    .max(365)
+    .max(R.maxDays[1])
     .optional()
-    .describe('a batch fails after this many days [days]; default 60'),
+    .describe(
+      `a batch fails after this many days [days], at least the deadline; default ${ASSESS_DEFAULTS.maxDays}, or the deadline when longer`,
+    ),
   batchKgFresh: z
     .number()
-    .positive()
-    .max(1e7)
+    .min(R.batchKgFresh[0])
+    .max(R.batchKgFresh[1])
     .optional()
-    .describe('batch size [kg fresh product]; default 1000'),
+    .describe(`batch size [kg fresh product]; default ${ASSESS_DEFAULTS.batchKgFresh}`),
   thresholds: dryingThresholdsSchema
     .partial()
     .strict()
