@@ -47,8 +47,11 @@ export const ASSESS_RANGES = {
  */
 const MONTHLY_HEAT_STARTS = 24
 export const HEATED_SAMPLE_BATCHES = 30
-/** Hours of an average Gregorian year (365.2425 × 24), to count years in a series. */
-const HOURS_PER_YEAR = 8765.82
+/**
+ * Hours of a leap year (366 × 24): a series counts ceil(hours / 8784) years, so whole years are never
+ * counted twice (4 years with a leap day are 35,064 hours: 4 years, not 5).
+ */
+const HOURS_PER_LEAP_YEAR = 8784
 
 /** An option outside its accepted range: names the option (the engine's name) for a field path. */
 export class AssessOptionError extends RangeError {
@@ -182,7 +185,7 @@ export interface AssessCost {
 
 /** Cost of assessing a series of `seriesHours` hours with this plan. */
 export function assessmentCost(plan: AssessPlan, seriesHours: number): AssessCost {
-  const years = Math.max(1, Math.ceil(seriesHours / HOURS_PER_YEAR))
+  const years = Math.max(1, Math.ceil(seriesHours / HOURS_PER_LEAP_YEAR))
   const batches = (plan.startDays.length + MONTHLY_HEAT_STARTS) * years + HEATED_SAMPLE_BATCHES
   return { years, batches, batchHours: batches * Math.round(plan.maxDays * 24) }
 }

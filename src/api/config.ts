@@ -29,7 +29,7 @@ export interface ApiConfig {
   /**
    * Most simulated batch-hours per request (the engine's estimate, analysis/plan.ts, summed over sites);
    * above it 422 with how to split. Default 6,000,000: a 30-year file with a daily 90-day season and the
-   * default 60-day batch limit needs 4.2 million.
+   * default 60-day batch limit needs about 5.0 million ((90 + 24) × 30 + 30 batches × 1,440 h).
    */
   maxBatchHours: number
   /**
