@@ -48,6 +48,7 @@ const operations: Operation[] = [
         work: z
           .object({
             threads: z.number().describe('worker threads [count]'),
+            starting: z.number().describe('worker threads still loading [count]'),
             running: z.number().describe('requests computing now [count]'),
             queued: z.number().describe('requests waiting for a thread [count]'),
             queueLimit: z.number().describe('waiting requests beyond which the answer is 503 [count]'),

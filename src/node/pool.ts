@@ -67,6 +67,8 @@ export interface PoolOptions {
 
 export type PoolStats = {
   threads: number
+  /** Threads still loading the app. */
+  starting: number
   running: number
   queued: number
   queueLimit: number
@@ -117,6 +119,7 @@ export class WorkerPool {
   stats(): PoolStats {
     return {
       threads: this.slots.length,
+      starting: this.slots.filter((s) => !s.ready).length,
       running: this.slots.filter((s) => s.job !== null).length,
       queued: this.waiting.length,
       queueLimit: this.options.queue,
@@ -128,7 +131,9 @@ export class WorkerPool {
   run(request: WireRequest, signal?: AbortSignal): Promise<WireResponse> {
     if (signal?.aborted) return Promise.reject(new JobCancelled('client closed the request'))
     const idle = this.slots.find((s) => s.ready && s.job === null)
-    if (!idle && this.waiting.length >= this.options.queue) {
+    // a thread still loading takes the first waiting request as soon as it is ready
+    const starting = this.slots.filter((s) => !s.ready).length
+    if (!idle && this.waiting.length >= this.options.queue + starting) {
       this.counts.refused++
       return Promise.reject(new PoolBusy(this.retryAfterS()))
     }

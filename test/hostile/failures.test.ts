@@ -11,7 +11,7 @@ import { mkdtempSync, readFileSync } from 'node:fs'
 import { createServer, type Server } from 'node:net'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { gzipSync, deflateSync } from 'node:zlib'
+import { deflateSync, gzipSync } from 'node:zlib'
 import { describe, expect, it } from 'vitest'
 import { createApp } from '../../src/api/app.ts'
 import { problemFor } from '../../src/api/errors.ts'
@@ -45,7 +45,11 @@ describe('stable problem types', () => {
     ['a wrong method', () => app.request('/v1/assess'), 'method-not-allowed'],
     ['a JSON body', () => post('/v1/inspect', '{}', 'application/json'), 'unsupported-media-type'],
     ['an empty file', () => post('/v1/inspect', '', 'text/csv'), 'unusable-input'],
-    ['a broken multipart body', () => post('/v1/inspect', '--x\r\n', 'multipart/form-data'), 'unreadable-body'],
+    [
+      'a broken multipart body',
+      () => post('/v1/inspect', '--x\r\n', 'multipart/form-data'),
+      'unreadable-body',
+    ],
     [
       'too much work',
       () =>
@@ -123,7 +127,10 @@ describe('no engine text reaches a user', () => {
   })
 
   it('a JSON options part that does not parse: 400 without the parser message', async () => {
-    const p = await expectProblem(await post('/v1/assess', multipart(JULY, 'a.csv', undefined, '{"a":')), [400])
+    const p = await expectProblem(
+      await post('/v1/assess', multipart(JULY, 'a.csv', undefined, '{"a":')),
+      [400],
+    )
     expect(p.type).toMatch(/unreadable-body$/)
     expect(p.detail).not.toMatch(/Unexpected|position|JSON at/)
   })
@@ -154,7 +161,7 @@ describe('405 with Allow for a known path and the wrong method', () => {
 describe('compressed bodies', () => {
   const upland = readFileSync('climate-demo/ardentine-upland-2021-2024-utc.csv')
 
-  function encoded(body: Uint8Array, encoding: string, type = 'text/csv') {
+  function encoded(body: BodyInit, encoding: string, type = 'text/csv') {
     return { method: 'POST', body, headers: { 'content-type': type, 'content-encoding': encoding } }
   }
 
@@ -270,7 +277,10 @@ describe('unknown keys, __proto__ among them, are refused with their path', () =
   })
 
   it('an unknown query key next to an options part: 400', async () => {
-    const p = await expectProblem(await post('/v1/assess?colour=red', multipart(JULY, 'a.csv', COARSE)), [400])
+    const p = await expectProblem(
+      await post('/v1/assess?colour=red', multipart(JULY, 'a.csv', COARSE)),
+      [400],
+    )
     expect(p.errors?.map((e) => e.path)).toContain('colour')
   })
 })
@@ -365,7 +375,12 @@ describe('CLI: input faults exit 2 with one line', () => {
   })
 
   it('an output path that is a folder, and a profile saved into a missing folder', async () => {
-    const r = await runBin(['energy-chart', 'climate-demo/energy/quillow-dryer-batches-2026.csv', '--out', dir])
+    const r = await runBin([
+      'energy-chart',
+      'climate-demo/energy/quillow-dryer-batches-2026.csv',
+      '--out',
+      dir,
+    ])
     expectOneLine(r, /cannot write .*: it is a folder/)
     const s = await runBin([
       'fit',

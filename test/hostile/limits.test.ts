@@ -6,7 +6,12 @@
  */
 import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
-import { ASSESS_DEFAULTS, assessmentCost, estimateBatchHours, planAssessment } from '../../src/analysis/plan.ts'
+import {
+  ASSESS_DEFAULTS,
+  assessmentCost,
+  estimateBatchHours,
+  planAssessment,
+} from '../../src/analysis/plan.ts'
 import { createApp } from '../../src/api/app.ts'
 import { DEFAULT_API_CONFIG, limitsTable } from '../../src/api/config.ts'
 import type { CliIo } from '../../src/cli/command.ts'
@@ -17,6 +22,7 @@ import { app, expectProblem, inventedDays, post } from './hostile-helpers.ts'
 const upland = readFileSync('climate-demo/ardentine-upland-2021-2024-utc.csv')
 const JULY = inventedDays(3)
 const figs = productById('figs')
+const OPEN_AIR = { kind: 'open-air' as const }
 
 async function timed<T>(fn: () => Promise<T>): Promise<{ value: T; ms: number }> {
   const t0 = performance.now()
@@ -26,13 +32,13 @@ async function timed<T>(fn: () => Promise<T>): Promise<{ value: T; ms: number }>
 
 describe('the planner', () => {
   it('resolves maxDays from the deadline when the deadline is longer than the default (60 days)', () => {
-    const plan = planAssessment({ product: figs, method: 'open-air', deadlineDays: 90 })
+    const plan = planAssessment({ product: figs, method: OPEN_AIR, deadlineDays: 90 })
     expect(plan.maxDays).toBe(90)
-    expect(planAssessment({ product: figs, method: 'open-air' }).maxDays).toBe(ASSESS_DEFAULTS.maxDays)
+    expect(planAssessment({ product: figs, method: OPEN_AIR }).maxDays).toBe(ASSESS_DEFAULTS.maxDays)
   })
 
   it('counts the cost with the resolved maximum batch length (the route used to assume 60 days)', () => {
-    const options = { product: figs, method: 'open-air' as const, seasonStart: '07-01', seasonEnd: '07-30' }
+    const options = { product: figs, method: OPEN_AIR, seasonStart: '07-01', seasonEnd: '07-30' }
     const hours = 3 * 8760 + 8784 // 2021–2024 hourly
     const at60 = estimateBatchHours(options, [hours])
     const at365 = estimateBatchHours({ ...options, deadlineDays: 365 }, [hours])
@@ -108,7 +114,7 @@ describe('every route that takes a file has a row, column and byte limit', () =>
   const wide = `time,${Array.from({ length: 1000 }, (_, i) => `c${i}`).join(',')}\n`
 
   /** A request of each file route with `file` as its file. */
-  const routes: [string, (file: string | Uint8Array) => Promise<Response>, ReturnType<typeof createApp>?][] = [
+  const routes: [string, (file: string) => Promise<Response>][] = [
     ['POST /v1/inspect', (f) => post('/v1/inspect', f, 'text/csv')],
     ['POST /v1/assess', (f) => post('/v1/assess?product=figs&method=open-air', f, 'text/csv')],
     ['POST /v1/fit', (f) => post('/v1/fit?dryMass=150', f, 'text/csv')],
@@ -201,14 +207,19 @@ describe('the time budget covers reading', () => {
     const slow = createApp({ timeBudgetMs: 1000, now: () => (t += 600) })
     const p = await expectProblem(await post('/v1/inspect', new Uint8Array(upland), 'text/csv', slow), [422])
     expect(p.type).toMatch(/time-budget$/)
-    expect(p.detail).toMatch(/reading and computing this request took longer than this server's budget of 1 s/)
+    expect(p.detail).toMatch(
+      /reading and computing this request took longer than this server's budget of 1 s/,
+    )
   })
 
   it('energy charts and fits have it too', async () => {
     let t = 0
     const slow = createApp({ timeBudgetMs: 1000, now: () => (t += 600) })
     const log = readFileSync('climate-demo/energy/quillow-dryer-batches-2026.csv')
-    const e = await expectProblem(await post('/v1/energy-chart', new Uint8Array(log), 'text/csv', slow), [422])
+    const e = await expectProblem(
+      await post('/v1/energy-chart', new Uint8Array(log), 'text/csv', slow),
+      [422],
+    )
     expect(e.type).toMatch(/time-budget$/)
     const weighings = readFileSync('test/fixtures/product/demo-weighings.csv')
     const f = await expectProblem(

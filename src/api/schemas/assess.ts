@@ -7,7 +7,7 @@
 import { z } from 'zod'
 import type { AssessOptions, assess } from '../../analysis/assess.ts'
 import { COMPARE_CRITERIA, type CompareCriterion } from '../../analysis/compare.ts'
-import { ASSESS_DEFAULTS, ASSESS_RANGES as R, planAssessment } from '../../analysis/plan.ts'
+import { ASSESS_DEFAULTS, planAssessment, ASSESS_RANGES as R } from '../../analysis/plan.ts'
 import {
   DRYING_METHOD_KINDS,
   dryingMethodSchema,
