@@ -45,7 +45,7 @@ export interface ApiConfig {
   /** Demo weather files for the page, from an entry point that can read them (Node); none on Workers. */
   demo?: DemoProvider
   /** The entry point's worker pool, for the documentation of the limits (Node only). */
-  pool?: { threads: number; queue: number }
+  pool?: { threads: number; queue: number; heapMb: number }
   /** The worker pool's state for GET /healthz (Node only). */
   workStats?: () => Record<string, number>
 }
@@ -223,6 +223,14 @@ export function limitsTable(config: ApiConfig): LimitEntry[] {
         unit: 'requests waiting for a thread (Node)',
         answer: '503 busy, with Retry-After',
         applies: 'requests that take a file',
+      },
+      {
+        setting: 'heapMb',
+        variable: 'DRYHOURS_WORKER_HEAP_MB',
+        value: config.pool.heapMb,
+        unit: 'MiB of heap per worker thread (Node)',
+        answer: '422 resource-limit',
+        applies: 'requests that take a file; a request that needs more stops only its own thread',
       },
     )
   }

@@ -53,6 +53,11 @@ export class WorkerDied extends Error {
   override name = 'WorkerDied'
 }
 
+/** A worker ran out of its heap on the request (the request needed more memory than a thread may have). */
+export class JobOutOfMemory extends Error {
+  override name = 'JobOutOfMemory'
+}
+
 export interface PoolOptions {
   threads: number
   queue: number
@@ -62,6 +67,8 @@ export interface PoolOptions {
   graceMs: number
   /** The worker script (a module URL). */
   script: URL
+  /** Old-generation heap of each worker thread [MiB]: a request that needs more stops only its thread. */
+  heapMb: number
   log?: (line: string) => void
 }
 
@@ -92,6 +99,8 @@ interface Job {
 
 interface Slot {
   worker: Worker
+  /** The error the thread died of, when it died of one. */
+  error?: Error
   /** Int32 flag in shared memory: 1 = stop the current request (read by the worker's checkpoints). */
   flag: Int32Array
   ready: boolean
@@ -109,6 +118,10 @@ export class WorkerPool {
 
   constructor(private readonly options: PoolOptions) {
     for (let i = 0; i < options.threads; i++) this.slots.push(this.spawn())
+  }
+
+  get heapMb(): number {
+    return this.options.heapMb
   }
 
   /** Resolves once every worker has loaded the app. */
@@ -162,7 +175,10 @@ export class WorkerPool {
 
   private spawn(): Slot {
     const flag = new Int32Array(new SharedArrayBuffer(4))
-    const worker = new Worker(this.options.script, { workerData: { flag: flag.buffer } })
+    const worker = new Worker(this.options.script, {
+      workerData: { flag: flag.buffer },
+      resourceLimits: { maxOldGenerationSizeMb: this.options.heapMb },
+    })
     const slot: Slot = { worker, flag, ready: false, job: null }
     worker.on('message', (m: WorkerMessage) => {
       if ('ready' in m) {
@@ -176,8 +192,12 @@ export class WorkerPool {
       this.finish(job, { status: m.status, headers: m.headers, body: m.body })
       this.next(slot)
     })
-    worker.on('error', (e) => this.options.log?.(`dryhours: worker thread error: ${e.message}`))
-    worker.on('exit', () => this.replace(slot))
+    worker.on('error', (e) => {
+      slot.error = e
+      this.options.log?.(`dryhours: a worker thread stopped: ${e.message}`)
+    })
+    // 'error' may follow 'exit' (a thread stopped at its heap limit): replace it once both have been seen
+    worker.on('exit', () => setImmediate(() => this.replace(slot)))
     return slot
   }
 
@@ -187,10 +207,27 @@ export class WorkerPool {
     if (i < 0 || this.closing) return
     const job = slot.job
     slot.job = null
-    if (job)
-      this.finish(job, job.cancelled ? new JobCancelled('client closed the request') : new WorkerDied())
+    const oom =
+      (slot.error as NodeJS.ErrnoException | undefined)?.code === 'ERR_WORKER_OUT_OF_MEMORY' ||
+      /memory limit/.test(slot.error?.message ?? '')
+    if (job) {
+      const why = job.cancelled
+        ? new JobCancelled('client closed the request')
+        : oom
+          ? new JobOutOfMemory()
+          : new WorkerDied()
+      this.finish(job, why)
+    }
     this.counts.restarted++
-    this.slots[i] = this.spawn()
+    if (slot.ready) {
+      this.slots[i] = this.spawn()
+      return
+    }
+    // died while loading (a heap too small for the app?): try again after a second, not in a hot loop
+    this.options.log?.('dryhours: a worker thread died while loading; starting another in 1 s')
+    setTimeout(() => {
+      if (!this.closing && this.slots[i] === slot) this.slots[i] = this.spawn()
+    }, 1000)
   }
 
   private start(slot: Slot, job: Job): void {

@@ -15,7 +15,7 @@ import { type ApiConfig, ConfigError, DEFAULT_API_CONFIG } from '../api/config.t
 import { takesFile } from '../api/file-routes.ts'
 import { ApiProblem, problemAnswer } from '../api/problem.ts'
 import { timeBudgetProblem } from '../api/work.ts'
-import { JobCancelled, JobOverran, PoolBusy, type WireRequest, WorkerPool } from './pool.ts'
+import { JobCancelled, JobOutOfMemory, JobOverran, PoolBusy, type WireRequest, WorkerPool } from './pool.ts'
 import { configFromEnv, poolFromEnv } from './settings.ts'
 
 export { configFromEnv } from './settings.ts'
@@ -85,6 +85,13 @@ async function onPool(pool: WorkerPool, req: Request, config: ApiConfig): Promis
         type: 'client-closed',
       })
     }
+    if (e instanceof JobOutOfMemory) {
+      return problemAnswer(
+        422,
+        `the request needed more memory than a worker thread may use (${pool.heapMb} MiB); send a smaller file or fewer sites`,
+        { type: 'resource-limit' },
+      )
+    }
     if (e instanceof JobOverran) {
       const p = timeBudgetProblem(config.timeBudgetMs)
       return problemAnswer(p.status, p.message, { type: p.type })
@@ -113,6 +120,7 @@ export async function startServer(
           queue: settings.queue,
           budgetMs: config.timeBudgetMs,
           graceMs: BUDGET_GRACE_MS,
+          heapMb: settings.heapMb,
           script: new URL('./pool-worker.mjs', import.meta.url),
           log,
         })

@@ -11,7 +11,7 @@ import { readFileSync } from 'node:fs'
 import { availableParallelism } from 'node:os'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { createApp } from '../../src/api/app.ts'
-import { poolFromEnv, QUEUE_PER_THREAD } from '../../src/node/settings.ts'
+import { poolFromEnv, QUEUE_PER_THREAD, WORKER_HEAP_MB } from '../../src/node/settings.ts'
 
 const tamarel = readFileSync('climate-demo/tamarel-lowland-2021-2023-utc.csv')
 
@@ -207,14 +207,47 @@ describe('the time budget on the pool', () => {
   })
 })
 
+describe('the heap of a worker thread', () => {
+  it('a request that needs more than DRYHOURS_WORKER_HEAP_MB is a 422 resource-limit; the thread is replaced', async () => {
+    const server = await startServer({ DRYHOURS_WORKERS: '1', DRYHOURS_WORKER_HEAP_MB: '16' })
+    try {
+      await until(server.url, (w) => w.threads === 1 && w.starting === 0, 20_000)
+      // four years of hourly weather need more than 16 MiB of heap to read and assess
+      const res = await fetch(`${server.url}/v1/assess?product=figs&method=open-air&start=07-01&end=07-31`, {
+        method: 'POST',
+        body: new Uint8Array(readFileSync('climate-demo/ardentine-upland-2021-2024-utc.csv')),
+        headers: { 'content-type': 'text/csv' },
+      })
+      expect(res.status).toBe(422)
+      const p = (await res.json()) as { type: string; detail: string }
+      expect(p.type).toMatch(/resource-limit$/)
+      expect(p.detail).toMatch(/more memory than a worker thread may use \(16 MiB\)/)
+      const after = await until(server.url, (w) => w.starting === 0, 20_000)
+      expect(after).toMatchObject({ threads: 1, running: 0 })
+      const small = await fetch(`${server.url}/v1/inspect`, {
+        method: 'POST',
+        body: 'time,temp_c,rh_pct\n2024-07-01T10:00Z,30.1,25\n',
+        headers: { 'content-type': 'text/csv' },
+      })
+      expect(small.status).toBe(200)
+    } finally {
+      await stop(server)
+    }
+  })
+})
+
 describe('the pool size', () => {
   it('is the machine’s available parallelism unless set, with 8 waiting requests per thread', () => {
     expect(poolFromEnv({})).toEqual({
       threads: availableParallelism(),
       queue: QUEUE_PER_THREAD * availableParallelism(),
+      heapMb: WORKER_HEAP_MB,
     })
-    expect(poolFromEnv({ DRYHOURS_WORKERS: '3' })).toEqual({ threads: 3, queue: 24 })
-    expect(poolFromEnv({ DRYHOURS_WORKERS: '0', DRYHOURS_QUEUE: '5' })).toEqual({ threads: 0, queue: 5 })
+    expect(poolFromEnv({ DRYHOURS_WORKERS: '3' })).toMatchObject({ threads: 3, queue: 24 })
+    expect(poolFromEnv({ DRYHOURS_WORKERS: '0', DRYHOURS_QUEUE: '5' })).toMatchObject({
+      threads: 0,
+      queue: 5,
+    })
     expect(() => poolFromEnv({ DRYHOURS_WORKERS: '1.5' })).toThrow(/DRYHOURS_WORKERS must be a whole number/)
   })
 })

@@ -7,7 +7,7 @@ import { mkdtempSync, readFileSync, symlinkSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { describe, expect, it } from 'vitest'
 import { CONFIG_VARIABLES, DEFAULT_API_CONFIG, limitsTable } from '../../src/api/config.ts'
-import { NODE_TIME_BUDGET_MS, QUEUE_PER_THREAD } from '../../src/node/settings.ts'
+import { NODE_TIME_BUDGET_MS, QUEUE_PER_THREAD, WORKER_HEAP_MB } from '../../src/node/settings.ts'
 
 const readme = readFileSync('README.md', 'utf8')
 
@@ -37,7 +37,9 @@ describe('README limits table', () => {
   it('lists every setting of the server, and no other', () => {
     const variables = [
       ...Object.values(CONFIG_VARIABLES),
-      ...limitsTable({ ...DEFAULT_API_CONFIG, pool: { threads: 1, queue: 1 } }).map((l) => l.variable),
+      ...limitsTable({ ...DEFAULT_API_CONFIG, pool: { threads: 1, queue: 1, heapMb: 1 } }).map(
+        (l) => l.variable,
+      ),
     ]
     expect([...byVariable.keys()].sort()).toEqual([...new Set(variables)].sort())
   })
@@ -55,10 +57,11 @@ describe('README limits table', () => {
     expect(byVariable.get('DRYHOURS_TIME_BUDGET_MS')?.[1]).toBe(n(NODE_TIME_BUDGET_MS))
     expect(byVariable.get('DRYHOURS_WORKERS')?.[1]).toBe('one per core')
     expect(byVariable.get('DRYHOURS_QUEUE')?.[1]).toBe(`${QUEUE_PER_THREAD} per thread`)
+    expect(byVariable.get('DRYHOURS_WORKER_HEAP_MB')?.[1]).toBe(n(WORKER_HEAP_MB))
   })
 
   it('gives the status the server answers above each limit', () => {
-    for (const l of limitsTable({ ...DEFAULT_API_CONFIG, pool: { threads: 1, queue: 1 } })) {
+    for (const l of limitsTable({ ...DEFAULT_API_CONFIG, pool: { threads: 1, queue: 1, heapMb: 1 } })) {
       const status = /^\d{3}/.exec(l.answer)?.[0]
       if (status) expect(byVariable.get(l.variable)?.[2]).toMatch(new RegExp(`^${status}`))
     }
