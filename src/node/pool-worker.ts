@@ -4,6 +4,8 @@
  * settings, answering one request at a time. The stop flag in shared memory (set by the pool when the
  * client goes away) is read by the app's checkpoints through `env.dryhoursWork.cancelled()`.
  */
+import { readlinkSync } from 'node:fs'
+import { getPriority, setPriority } from 'node:os'
 import { parentPort, workerData } from 'node:worker_threads'
 import { createApp } from '../api/app.ts'
 import { problemAnswer } from '../api/problem.ts'
@@ -12,6 +14,23 @@ import type { WireRequest, WorkerMessage } from './pool.ts'
 import { configFromEnv } from './settings.ts'
 
 if (!parentPort) throw new Error('node/pool-worker runs as a worker thread of node/pool.ts')
+
+/**
+ * Nice value added to a worker thread (our choice): the event-loop thread, which answers /healthz and
+ * moves every request's bytes, then wins the CPU over the computing threads when both want it.
+ */
+const WORKER_NICE = 5
+
+/** On Linux the nice value is a per-thread attribute (setpriority(2), NOTES): lower this thread's only. */
+function lowerOwnPriority(): void {
+  try {
+    const tid = Number(readlinkSync('/proc/thread-self').split('/').pop())
+    if (Number.isInteger(tid) && tid > 0) setPriority(tid, Math.min(19, getPriority(tid) + WORKER_NICE))
+  } catch {
+    // not Linux, or not allowed: the thread keeps the process's priority
+  }
+}
+lowerOwnPriority()
 const port = parentPort
 const flag = new Int32Array((workerData as { flag: SharedArrayBuffer }).flag)
 const app = createApp(configFromEnv(process.env, false))
