@@ -14,37 +14,51 @@ const CODINGS: Record<string, 'gzip' | 'deflate'> = { gzip: 'gzip', 'x-gzip': 'g
 
 export const ACCEPTED_ENCODINGS = 'gzip, deflate'
 
-/** Read a stream to bytes, refusing with 413 past `limit` bytes (reading stops there). */
+/**
+ * Read a stream to bytes, refusing with 413 past `limit` bytes (reading stops there). With the expected
+ * length (a Content-Length) the bytes go straight into one buffer of that size, without a second copy.
+ */
 export async function readLimited(
   stream: ReadableStream<Uint8Array>,
   limit: number,
   what: string,
+  expected?: number,
 ): Promise<Uint8Array<ArrayBuffer>> {
   const reader = stream.getReader()
+  const tooLarge = async () => {
+    await reader.cancel().catch(() => {})
+    return new ApiProblem(
+      413,
+      `the ${what} is larger than the limit of ${limit} bytes; split the file by years or sites`,
+      undefined,
+      'too-large',
+    )
+  }
+  const known = expected !== undefined && Number.isInteger(expected) && expected >= 0 && expected <= limit
+  const out = new Uint8Array(known ? expected : 0)
+  /** Bytes in `out`; the rest (no length given, or more than it said) in `chunks`. */
+  let inOut = 0
   const chunks: Uint8Array[] = []
   let total = 0
   for (;;) {
     const { done, value } = await reader.read()
     if (done) break
+    if (total + value.byteLength > limit) throw await tooLarge()
+    if (chunks.length === 0 && inOut + value.byteLength <= out.length) {
+      out.set(value, inOut)
+      inOut += value.byteLength
+    } else chunks.push(value)
     total += value.byteLength
-    if (total > limit) {
-      await reader.cancel().catch(() => {})
-      throw new ApiProblem(
-        413,
-        `the ${what} is larger than the limit of ${limit} bytes; split the file by years or sites`,
-        undefined,
-        'too-large',
-      )
-    }
-    chunks.push(value)
   }
-  const out = new Uint8Array(total)
-  let offset = 0
+  if (chunks.length === 0 && inOut === out.length) return out
+  const joined = new Uint8Array(total)
+  joined.set(out.subarray(0, inOut))
+  let offset = inOut
   for (const c of chunks) {
-    out.set(c, offset)
+    joined.set(c, offset)
     offset += c.byteLength
   }
-  return out
+  return joined
 }
 
 /**

@@ -54,7 +54,12 @@ async function wireRequest(req: Request, config: ApiConfig): Promise<WireRequest
   let body: ArrayBuffer | null = null
   if (req.body) {
     try {
-      const bytes = await readLimited(req.body, config.maxBodyBytes, 'request body')
+      const bytes = await readLimited(
+        req.body,
+        config.maxBodyBytes,
+        'request body',
+        Number.isFinite(declared) ? declared : undefined,
+      )
       body = bytes.buffer
     } catch (e) {
       if (e instanceof ApiProblem) return problemAnswer(e.status, e.message, { type: e.type })
