@@ -1,20 +1,41 @@
 /**
  * @module product/catalogue-fruit
- * Fruit and vegetable profiles. Full GAB triplets for sugar-rich fruit were not read (reference §7 gap 2):
- * where only the monolayer value was read it is kept and C, K are from memory (type III isotherm, C ≈ 1–6,
- * K ≈ 0.9–1.0; Maroulis et al. 1988, Tsami et al. 1990), flagged `memory`. Kinetics marked `fitted` were
+ * Fruit and vegetable profiles. Only monolayer values were read for the sugar-rich fruit isotherms: their C and
+ * K and any temperature term are from memory (type III sugar isotherms, C ≈ 1–6, K ≈ 0.9–1.0). Publications with
+ * full temperature-dependent constants exist (Kaymak-Ertekin & Gedik 2004, LWT 37:429: grapes, apricots, apples
+ * and potatoes at 30/45/60 °C, Halsey best; Tsami, Marinos-Kouris & Maroulis 1990 for raisins, figs, prunes and
+ * apricots) but their tables could not be read here; see docs/product-sources.md. Kinetics marked `fitted` were
  * fitted by dryhours to one published drying time under stated assumed mean conditions.
  */
+
 import {
   ASSUMED_EA_J_PER_MOL,
+  ASSUMED_EA_SOURCE,
   arrhenius,
   gab,
   isotherm,
   kinetics,
+  param,
   SAFE_AW_DRIED_FRUIT,
   SAFE_AW_MOULD,
   sourced,
 } from './catalogue-helpers.ts'
+import {
+  BHONG_KALE_2020,
+  CODEX_APRICOTS_VIA_SUMMARY,
+  COSTA_FUJI_APPLE,
+  DOYMAZ_2007,
+  DOYMAZ_2012,
+  ESMAIILI_2014,
+  HOSSAIN_BALA_2007,
+  MEGHWAR_PJAR,
+  NEWMAN_1996,
+  OKSAR_2017,
+  PAVKOV_2021,
+  REJABOV_2024,
+  SIMAL_2005,
+  USDA_RAISIN_GRADES,
+} from './citations.ts'
 import type { ProductProfile } from './profile.ts'
 
 const FRUIT_CAUTIONS = [
@@ -22,20 +43,18 @@ const FRUIT_CAUTIONS = [
   'Protect from dust, insects, birds, rain and dew; cover or bring in at night.',
 ]
 const SUGAR_GAB_MEMORY =
-  'C = 3, K = 1.0 from memory (type III sugar-fruit isotherm, Maroulis et al. 1988 J. Food Eng. 7:63; Tsami et al. 1990 J. Food Sci. 55:1594)'
+  'C = 3, K = 1.0 and no temperature term: from memory (type III sugar-fruit isotherm; Maroulis et al. 1988, J. Food Eng. 7:63, and Tsami et al. 1990, J. Food Sci. 55:1594, not read)'
+
+const GRAPE_LEWIS_FIT = `Lewis k fitted by dryhours to ${DOYMAZ_2012}: seedless grapes 17.2 mm, open sun, 78.2 → 22 % wb in 176 h, assuming a constant mean 35 °C and 35 % RH at the fruit (Me from the isotherm) around the clock`
 
 export const grapesToRaisins: ProductProfile = {
   id: 'grapes-to-raisins',
   name: 'Grapes to raisins (untreated, open sun)',
   category: 'fruit',
-  initialMoistureWbPct: sourced(
-    78.2,
-    'Doymaz 2012, J. Food Sci. Technol. 49:214: seedless grapes 78.2 % wb (drying-science.md §6)',
-    'published',
-  ),
+  initialMoistureWbPct: sourced(78.2, `${DOYMAZ_2012}: seedless grapes 78.2 % wb`, 'published'),
   targetMoistureWbPct: sourced(
     18,
-    'US grades of processed raisins, 7 CFR 52.1858: at most 18 % (drying-science.md §3)',
+    `${USDA_RAISIN_GRADES}: U.S. Grades A, B and C contain not more than 18 % moisture by weight`,
     'published',
   ),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
@@ -47,20 +66,31 @@ export const grapesToRaisins: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.082, 3, 1.0),
-      `GAB Xm 0.082 kg/kg db at 25 °C, Esmaiili Bazardeh & Esmaiili 2014, J. Stored Prod. Res. 59:140 (sultana raisins); ${SUGAR_GAB_MEMORY}`,
+      `${SUGAR_GAB_MEMORY}; temperature-dependent constants for grapes exist (Kaymak-Ertekin & Gedik 2004, LWT 37:429) but were not read`,
       'memory',
       [15, 35],
       [10, 90],
+      {
+        xm0: param(
+          `${ESMAIILI_2014}: GAB monolayer 0.082 g water/g dry product at 25 °C (adsorption isotherms at 15, 25, 35 °C, used here for drying)`,
+          'published',
+        ),
+      },
     ),
   },
   kinetics: kinetics(
     { model: 'lewis', k: arrhenius(0.01616, 35, ASSUMED_EA_J_PER_MOL) },
     17.2,
     'sphere',
-    'Lewis k fitted by dryhours to Doymaz 2012: seedless grapes 17.2 mm, open sun, 78.2 → 22 % wb in 176 h, assuming a mean 35 °C and 35 % RH at the fruit (Me from the isotherm); Ea assumed 30 kJ/mol',
-    'fitted',
+    ASSUMED_EA_SOURCE.source,
+    'memory',
+    {
+      'k.kRefPerH': param(GRAPE_LEWIS_FIT, 'fitted'),
+      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
+    },
   ),
-  defaultThicknessMm: sourced(17.2, 'Doymaz 2012 seedless berries (drying-science.md §2.3)', 'published'),
+  defaultThicknessMm: sourced(17.2, `${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
   defaultLoadingKgPerM2: sourced(12, 'single layer of bunches on racks or mats; from memory', 'memory'),
   cautions: [...FRUIT_CAUTIONS, 'Ochratoxin A risk in grapes dried slowly in humid weather.'],
 }
@@ -73,9 +103,12 @@ export const grapesToRaisinsDipped: ProductProfile = {
   kinetics: {
     ...grapesToRaisins.kinetics,
     equation: { model: 'lewis', k: arrhenius(0.03232, 35, ASSUMED_EA_J_PER_MOL) },
-    source:
-      'untreated grapes k × 2: dipping in ethyl-oleate/K2CO3 emulsion roughly halves sun-drying time (from memory); the same dip raised tomato Deff by 13–45 % (Doymaz 2007)',
+    source: `untreated grapes k × 2 and Ea: from memory (dipping roughly halves sun-drying time; dipped grapes dried faster than untreated in Doymaz & Pala 2002, J. Food Eng. 52:413, and Mahmutoglu, Emir & Saygi 1996, J. Food Eng. 29:289, but their abstracts give no factor). Whether the untreated calibration run (Doymaz 2012) was dipped is not stated in its abstract. ${ASSUMED_EA_SOURCE.source}`,
     confidence: 'memory',
+    parameters: {
+      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
+    },
   },
   cautions: [
     ...grapesToRaisins.cautions,
@@ -89,20 +122,16 @@ export const apricotHalves: ProductProfile = {
   category: 'fruit',
   initialMoistureWbPct: sourced(
     86,
-    'Rejabov et al. 2024, Eng. Proc. 67:26: 85–90 % wb (drying-science.md §6)',
-    'published',
+    `86 % wb fresh: from memory, inside the 85–90 % of ${REJABOV_2024} (87.5, the middle, is not used yet: test/drying/batch.test.ts hard-codes 86 % for this profile)`,
+    'memory',
   ),
-  targetMoistureWbPct: sourced(
-    25,
-    'Codex Stan 130-1981 dried apricots: at most 25 % (via summary; drying-science.md §3)',
-    'published',
-  ),
+  targetMoistureWbPct: sourced(25, `the upper end of 20–25 %, ${CODEX_APRICOTS_VIA_SUMMARY}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(65, 'browning and case hardening above about 65 °C; from memory', 'memory'),
   isotherm: {
     desorption: isotherm(
       gab(0.1, 3, 1.0),
-      `GAB Xm 0.10 from memory (range 0.08–0.17, drying-science.md §1.3); ${SUGAR_GAB_MEMORY}`,
+      `GAB Xm0 0.10 kg/kg db from memory (range 0.08–0.17 for sugar-rich fruit); ${SUGAR_GAB_MEMORY}; Kaymak-Ertekin & Gedik 2004 (LWT 37:429) give apricot constants at 30–60 °C, not read`,
       'memory',
       [25, 45],
       [10, 90],
@@ -112,7 +141,7 @@ export const apricotHalves: ProductProfile = {
     { model: 'lewis', k: arrhenius(0.05, 45, ASSUMED_EA_J_PER_MOL) },
     15,
     'slab',
-    'Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots take about 10 days, indirect solar 6 days: E3S Web Conf. 661:02003, drying-science.md §6)',
+    `Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots took 10 days, an indirect natural-convection solar dryer 6 days: E3S Web Conf. 661:02003, 2025, abstract; authors not shown); ${ASSUMED_EA_SOURCE.source}. The published activation energy of untreated apricot halves, 46.379–51.514 kJ/mol (${PAVKOV_2021}), is not applied yet: with it the heated-air mass-balance test (test/drying/batch.test.ts) shows an outlet above saturation, an engine issue to fix first`,
     'memory',
   ),
   defaultThicknessMm: sourced(15, 'halved fruit; from memory', 'memory'),
@@ -129,34 +158,40 @@ export const figs: ProductProfile = {
   category: 'fruit',
   initialMoistureWbPct: sourced(
     82,
-    'about 82 % fresh (drying-science.md §3); often part-dried on the tree',
+    'about 82 % wb fresh: from memory (figs for drying are often part-dried on the tree first)',
     'memory',
   ),
   targetMoistureWbPct: sourced(
     22,
-    'Oksar, Şen & Aksoy 2017, Acta Hortic. 1173:297: stop drying at ≤ 22 % and/or aw ≤ 0.65 (drying-science.md §5.2)',
+    `${OKSAR_2017}: drying was ended at ≤ 22 % moisture and/or aw ≤ 0.65`,
     'published',
   ),
-  waterActivityTarget: sourced(0.65, 'Oksar, Şen & Aksoy 2017 (drying-science.md §5.2)', 'published'),
+  waterActivityTarget: sourced(0.65, `${OKSAR_2017}: drying ended at aw ≤ 0.65`, 'published'),
   maxProductTempC: sourced(
     65,
-    'fig dryer studies at 45–65 °C (Xanthopoulos et al. 2010); limit from memory',
+    'fig air-drying studies use 45–65 °C (Xanthopoulos, Yanniotis & Lambrinos 2010, J. Food Eng. 97:419, abstract); the limit itself is from memory',
     'memory',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.1164, 3, 1.0),
-      `GAB with ${SUGAR_GAB_MEMORY}; Xm 0.1164 fitted by dryhours so that aw 0.65 ↔ 22 % wb (the Oksar et al. 2017 end point)`,
+      `${SUGAR_GAB_MEMORY}; fig isotherms at 5, 25 and 40 °C exist (Farahnaky, Ansari & Majzoobi 2009, J. Food Eng. 93:468), constants not read`,
       'memory',
       [25, 45],
       [10, 90],
+      {
+        xm0: param(
+          `Xm0 set by dryhours so that the isotherm gives aw 0.65 at 22 % wb and 25 °C, the end point of ${OKSAR_2017}, with C and K as given`,
+          'fitted',
+        ),
+      },
     ),
   },
   kinetics: kinetics(
     { model: 'lewis', k: arrhenius(0.03, 40, ASSUMED_EA_J_PER_MOL) },
     40,
     'sphere',
-    'Lewis k = 0.03 h⁻¹ at 40 °C for whole figs: from memory (figs under a plastic tunnel reached the end point in 72–96 h; Oksar et al. 2017, drying-science.md §6)',
+    `Lewis k = 0.03 h⁻¹ at 40 °C for 40 mm whole figs: from memory (figs part-dried on the tree reached the end point in 72–96 h under a plastic tunnel and 96–120 h in open air, ${OKSAR_2017}); ${ASSUMED_EA_SOURCE.source}`,
     'memory',
   ),
   defaultThicknessMm: sourced(40, 'whole fig diameter; from memory', 'memory'),
@@ -171,29 +206,35 @@ export const plumsToPrunes: ProductProfile = {
   id: 'plums-to-prunes',
   name: 'Plums to prunes',
   category: 'fruit',
-  initialMoistureWbPct: sourced(80, 'typical 75–85 %; from memory (drying-science.md §3)', 'memory'),
+  initialMoistureWbPct: sourced(80, 'typical 75–85 %; from memory', 'memory'),
   targetMoistureWbPct: sourced(
     18,
-    'prune trade information: about 18 % "natural condition" (drying-science.md §3)',
-    'published',
+    'about 18 % "natural condition" prunes (rehydrated for sale): from memory, not re-read',
+    'memory',
   ),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(75, 'prune dehydrators run at about 75–85 °C; limit from memory', 'memory'),
   isotherm: {
     desorption: isotherm(
       gab(0.1, 3, 1.0),
-      `GAB Xm 0.10 from memory; ${SUGAR_GAB_MEMORY}`,
+      `GAB Xm0 0.10 from memory; ${SUGAR_GAB_MEMORY}`,
       'memory',
       [25, 45],
       [10, 90],
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.08, 70, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(0.08, 70, 80000) },
     35,
     'sphere',
-    'Lewis k = 0.08 h⁻¹ at 70 °C for whole plums: from memory (prune dehydration takes about a day)',
+    'Lewis k = 0.08 h⁻¹ at 70 °C for 35 mm whole plums: from memory (prune dehydration takes about a day)',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${NEWMAN_1996}: D'Agen plums dried at 70–100 °C and 70–80 % RH followed first-order kinetics; the activation energy was about 80 kJ/mol at the lower-temperature end (non-linear Arrhenius plot)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(35, 'whole plum diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(15, 'single layer on trays; from memory', 'memory'),
@@ -204,10 +245,10 @@ export const appleSlices: ProductProfile = {
   id: 'apple-slices',
   name: 'Apple slices',
   category: 'fruit',
-  initialMoistureWbPct: sourced(85, 'Costa et al.: about 85 % (drying-science.md §3)', 'published'),
+  initialMoistureWbPct: sourced(85, `${COSTA_FUJI_APPLE}: Fuji apple about 85 % moisture`, 'published'),
   targetMoistureWbPct: sourced(
     20,
-    'UNECE DDP-16 dried apples about 20–24 %; from memory (drying-science.md §3)',
+    'dried apples about 20–24 % (UNECE DDP-16): from memory, not read',
     'memory',
   ),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
@@ -215,7 +256,7 @@ export const appleSlices: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.12, 3, 0.97),
-      'GAB Xm 0.12 within the 0.107–0.168 read for Fuji apple (Moraes, Rosa & Pinto, FURG); C = 3, K = 0.97 from memory',
+      'GAB Xm0 0.12 chosen within the 0.107–0.168 recalled for Fuji apple at 50–70 °C (Moraes, Rosa & Pinto, not re-read); C = 3, K = 0.97 and no temperature term from memory; Kaymak-Ertekin & Gedik 2004 (LWT 37:429) give apple constants at 30–60 °C, not read',
       'memory',
       [30, 70],
       [10, 90],
@@ -225,10 +266,14 @@ export const appleSlices: ProductProfile = {
     { model: 'diffusion', dRefM2PerS: 4.97e-10, tRefC: 60, activationEnergyJPerMol: 34000 },
     5,
     'slab',
-    'Fick diffusion, Deff 2.27e-10 (40 °C) – 4.97e-10 (60 °C) m²/s for 5–9 mm organic apple slices (drying-science.md §2.3); Ea 34 kJ/mol computed by dryhours from those two values',
-    'published',
+    'the abstract of "The thin layer drying characteristics of organic apple slices" (authors and year not shown on the copy read) gives Deff 2.27–4.97e-10 m²/s for 5 and 9 mm slices at 40–60 °C, dried in 240–460 min; pairing 4.97e-10 with 60 °C and 5 mm, and Ea 34 kJ/mol from that pairing, are from memory',
+    'memory',
   ),
-  defaultThicknessMm: sourced(5, 'slices of 5 mm (drying-science.md §2.3)', 'published'),
+  defaultThicknessMm: sourced(
+    5,
+    'slices of 5 mm (the thinner of the two in the organic-apple study); from memory',
+    'memory',
+  ),
   defaultLoadingKgPerM2: sourced(8, 'single layer on mesh trays; from memory', 'memory'),
   cautions: FRUIT_CAUTIONS,
 }
@@ -237,22 +282,22 @@ export const tomatoHalves: ProductProfile = {
   id: 'tomato-halves',
   name: 'Tomato halves',
   category: 'vegetable',
-  initialMoistureWbPct: sourced(
-    94.5,
-    'Doymaz 2007, J. Food Eng. 78:1291 (drying-science.md §6)',
+  initialMoistureWbPct: sourced(94.5, `${DOYMAZ_2007}: dried from 94.5 % wb`, 'published'),
+  targetMoistureWbPct: sourced(
+    11,
+    `${DOYMAZ_2007}: dried to 11 % wb (the study's end point, not a storage standard)`,
     'published',
   ),
-  targetMoistureWbPct: sourced(11, 'Doymaz 2007 end point 11 % wb (drying-science.md §6)', 'published'),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(
     70,
-    'Doymaz 2007 tested 55–70 °C; limit from memory (lycopene loss, browning)',
+    'Doymaz 2007 dried at 55–70 °C; the limit itself is from memory (lycopene loss, browning)',
     'memory',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.1, 5, 0.95),
-      'GAB best for tomato (Ben Mariem & Ben Mabrouk 2015); Xm 0.10, C 5, K 0.95 from memory',
+      'GAB Xm0 0.10, C 5, K 0.95 and no temperature term: from memory (GAB and Peleg fit tomato best at 30–60 °C, Ben Mariem & Ben Mabrouk 2015, not re-read)',
       'memory',
       [30, 60],
       [10, 90],
@@ -262,8 +307,19 @@ export const tomatoHalves: ProductProfile = {
     { model: 'diffusion', dRefM2PerS: 3.91e-10, tRefC: 55, activationEnergyJPerMol: 32940 },
     20,
     'slab',
-    'Fick diffusion, untreated tomato: Deff 3.91e-10 m²/s at 55 °C (6.65e-10 at 70 °C), Ea 32.94 kJ/mol, Doymaz 2007, J. Food Eng. 78:1291; half thickness 20 mm from memory',
-    'published',
+    'half-tomato thickness 20 mm at which the diffusivity is applied: from memory (the abstract gives no size)',
+    'memory',
+    {
+      dRefM2PerS: param(
+        `${DOYMAZ_2007}: untreated tomatoes, Deff 3.91–6.65e-10 m²/s over 55–70 °C at 1.5 m/s; the lowest value goes with the lowest temperature`,
+        'published',
+      ),
+      tRefC: param(`${DOYMAZ_2007}: lowest drying temperature, 55 °C`, 'published'),
+      activationEnergyJPerMol: param(
+        `${DOYMAZ_2007}: activation energy 17.40–32.94 kJ/mol; 32.94 matches the untreated Deff pair (R·ln(6.65/3.91)/(1/328.15 − 1/343.15) = 33.1 kJ/mol), 17.40 the dipped one`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(20, 'half-tomato thickness; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(10, 'single layer, cut face up; from memory', 'memory'),
@@ -273,33 +329,43 @@ export const tomatoHalves: ProductProfile = {
   ],
 }
 
+const CHILLI_LEWIS_FIT = `Lewis k fitted by dryhours to ${HOSSAIN_BALA_2007}: red chilli 2.85 → 0.05 kg/kg db in 20 h in a solar tunnel drier, assuming a constant mean 50 °C and 15 % RH in the tunnel (the abstract credits blanching of the samples with part of the shorter drying: the fitted k may include it)`
+
 export const chiliPeppers: ProductProfile = {
   id: 'chili-peppers',
   name: 'Chili peppers (red, whole pods)',
   category: 'vegetable',
-  initialMoistureWbPct: sourced(
-    80,
-    'Meghwar et al., Pak. J. Agric. Res. 36(1):63: 80 % wb (drying-science.md §6)',
-    'published',
+  initialMoistureWbPct: sourced(80, `${MEGHWAR_PJAR}: initial moisture taken as 80 % wb`, 'published'),
+  targetMoistureWbPct: sourced(
+    11,
+    `the middle of the 10–12 % wb the chillies were dried to in ${MEGHWAR_PJAR}`,
+    'fitted',
   ),
-  targetMoistureWbPct: sourced(11, 'Meghwar et al.: dried to 10–12 % wb (drying-science.md §6)', 'published'),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(65, 'colour (capsanthin) loss above about 65 °C; from memory', 'memory'),
   isotherm: {
     desorption: isotherm(
       gab(0.06, 6, 0.9),
-      'GAB best for green chilli (Getahun et al. 2020, Heliyon 6:e04608); Xm 0.06, C 6, K 0.9 from memory',
+      'GAB Xm0 0.06, C 6, K 0.9 and no temperature term: from memory (at three temperatures GAB fits green and Oswin fits red Mareko Fana chilli best, Getahun, Gabbiye, Delele, Fanta, Gebrehiwot & Vanierschot 2020, Heliyon 6:e04608, abstract; constants not read)',
       'memory',
       [30, 60],
       [10, 90],
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.257, 50, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(0.257, 50, 27000) },
     10,
     'cylinder',
-    'Lewis k fitted by dryhours to Hossain & Bala 2007, Solar Energy 81:85: red chilli 2.85 → 0.05 kg/kg db in 20 h in a solar tunnel dryer, assuming a mean 50 °C and 15 % RH in the tunnel; Ea assumed 30 kJ/mol',
-    'fitted',
+    'pod diameter 10 mm at which k holds: from memory',
+    'memory',
+    {
+      'k.kRefPerH': param(CHILLI_LEWIS_FIT, 'fitted'),
+      'k.tRefC': param(`${CHILLI_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      'k.activationEnergyJPerMol': param(
+        `${SIMAL_2005}: red pepper air-dried at 30–90 °C, the Page k followed Arrhenius with an activation energy of about 27 kJ/mol`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(10, 'pod diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(8, 'single layer; from memory', 'memory'),
@@ -313,31 +379,33 @@ export const onionSlices: ProductProfile = {
   id: 'onion-slices',
   name: 'Onion slices',
   category: 'vegetable',
-  initialMoistureWbPct: sourced(88, 'typical 86–90 %; from memory (drying-science.md §3)', 'memory'),
-  targetMoistureWbPct: sourced(
-    5,
-    'dehydrated onion at most 4–5 %; from memory (drying-science.md §3)',
-    'memory',
-  ),
+  initialMoistureWbPct: sourced(88, 'typical 86–90 %; from memory', 'memory'),
+  targetMoistureWbPct: sourced(5, 'dehydrated onion at most 4–5 %; from memory', 'memory'),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(60, 'browning and pungency loss above about 60 °C; from memory', 'memory'),
   isotherm: {
     desorption: isotherm(
       gab(0.07, 4, 0.95),
-      'modified Halsey best for onion (Viswanathan, Jayas & Hulasare 2003), constants not read; GAB Xm 0.07, C 4, K 0.95 from memory',
+      'GAB Xm0 0.07, C 4, K 0.95 and no temperature term: from memory (modified Halsey fits onion best at 30–50 °C, Viswanathan, Jayas & Hulasare 2003, Biosyst. Eng. 86:465, not re-read)',
       'memory',
       [30, 50],
       [15, 85],
     ),
   },
   kinetics: kinetics(
-    { model: 'page', k: arrhenius(0.3, 60, ASSUMED_EA_J_PER_MOL), n: 1.1 },
+    { model: 'page', k: arrhenius(0.3, 60, 11821), n: 1.1 },
     5,
     'slab',
-    'Page k = 0.3 h⁻ⁿ, n = 1.1 at 60 °C for 5 mm slices: from memory (Page best for onion slices, Górnicki et al.)',
+    'Page k = 0.3 h⁻ⁿ, n = 1.1 at 60 °C for 5 mm slices: from memory (Page fits onion slices best at 50–70 °C and 0.5–2 m/s, El-Mesery & Mwithiga 2012, Afr. J. Agric. Res. 7(30):4284, abstract; constants not read)',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `the middle of the 10.87–12.77 kJ/mol activation energy of onion slices at 50–70 °C and 2–7.7 m/s in ${BHONG_KALE_2020}`,
+        'fitted',
+      ),
+    },
   ),
-  defaultThicknessMm: sourced(5, 'slice thickness (Górnicki et al. tested 5 and 10 mm)', 'published'),
+  defaultThicknessMm: sourced(5, 'slice thickness; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(6, 'single layer; from memory', 'memory'),
   cautions: FRUIT_CAUTIONS,
 }

@@ -1,10 +1,14 @@
 /**
  * @module product/catalogue-grains
- * Grain and oilseed profiles. Isotherm constants are ASAE D245 forms; where the standard's table was not
- * read, the constants are either from code citing it (said so), from memory (checked against published
- * EMC tables in the tests), or fitted by dryhours to the published EMC table named.
+ * Grain and oilseed profiles. Isotherm constants are ASAE D245 forms. The standard's tables could not be read,
+ * so the constants recalled for corn and wheat are graded `memory` and checked in the tests against the grain EMC
+ * table of the Wikipedia article "Equilibrium moisture content" and the University of Kentucky chart; rough rice
+ * uses constants read in an abstract (Muñoz & Rebufel); soybean and sorghum constants were fitted by dryhours to
+ * those tables.
  */
-import { isotherm, kinetics, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
+
+import { isotherm, kinetics, param, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
+import { GELY_GINER_2007, IRRI_DRYING, MUNOZ_REBUFEL_RICE, UKY_EMC_2012, WIKIPEDIA_EMC } from './citations.ts'
 import type { ProductProfile } from './profile.ts'
 
 const GRAIN_CAUTIONS = [
@@ -13,8 +17,8 @@ const GRAIN_CAUTIONS = [
   'Grain dust is explosive and a breathing hazard; heater and fan installation by licensed trades.',
 ]
 
-const WIKI_EMC =
-  'Wikipedia, "Equilibrium moisture content", grain EMC table at 1.7/10/21.1/37.8 °C and RH 25–40 % (drying-science.md §1.2)'
+const WIKI_TABLE = `EMC table at 1.7/10/21.1/37.8 °C and RH 25–40 % (% wb) ${WIKIPEDIA_EMC}`
+const D245_NOT_READ = 'the ASAE D245.5/D245.6 tables were not read'
 
 export const shelledCorn: ProductProfile = {
   id: 'shelled-corn',
@@ -22,21 +26,21 @@ export const shelledCorn: ProductProfile = {
   category: 'grain',
   initialMoistureWbPct: sourced(
     25,
-    'NDSU maturity table; harvested at 20–30 % wb (drying-science.md §3)',
-    'published',
+    'harvest moisture about 25 % wb (harvested at 20–30 %): from memory, not re-read',
+    'memory',
   ),
   targetMoistureWbPct: sourced(
     13,
-    'Arkansas grain drying handbook: 15.5 % to market, 12–13 % for storage over months (drying-science.md §3)',
-    'published',
+    `13 % wb for storage over months: from memory (12 % for long-term storage, ${WIKIPEDIA_EMC})`,
+    'memory',
   ),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: null,
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 374.34, b: 0.18662, c: 31.696 },
-      'Modified Chung–Pfost, Chen & Morey 1989 as listed in ASAE D245.6 (constants as copied in public code); 15.6 °C/80 % → 16.1 % wb (extension value, drying-science.md §1.2)',
-      'published',
+      `modified Chung–Pfost constants as commonly given for ASAE D245.6 (after Chen & Morey 1989): from memory, ${D245_NOT_READ}; checked in the tests within 0.8 pt of the Wikipedia corn EMC table`,
+      'memory',
       [0, 50],
       [20, 90],
     ),
@@ -45,7 +49,7 @@ export const shelledCorn: ProductProfile = {
     { model: 'thompson-corn' },
     8,
     'sphere',
-    'Thompson, Peart & Foster 1968, Trans. ASAE 11:582: t = A·ln MR + B·(ln MR)², A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T) (drying-science.md §2.2)',
+    'Thompson, Peart & Foster 1968, Mathematical simulation of corn drying — a new model (title and authors read; the equation constants A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T) are from memory); kernel size 8 mm from memory',
     'memory',
   ),
   defaultThicknessMm: sourced(
@@ -61,23 +65,19 @@ export const wheat: ProductProfile = {
   id: 'wheat',
   name: 'Wheat',
   category: 'grain',
-  initialMoistureWbPct: sourced(
-    18,
-    'typical 14–20 % at harvest; from memory (drying-science.md §3)',
-    'memory',
-  ),
-  targetMoistureWbPct: sourced(12, `${WIKI_EMC}: about 12 % for long-term storage`, 'published'),
+  initialMoistureWbPct: sourced(18, 'typical 14–20 % at harvest; from memory', 'memory'),
+  targetMoistureWbPct: sourced(12, `about 12 % for long-term storage, ${WIKIPEDIA_EMC}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(
     60,
-    'common practice for milling wheat (gluten damage above about 60 °C); from memory',
+    'milling wheat: gluten damage above about 60 °C; from memory (common practice, no source)',
     'memory',
   ),
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 610.34, b: 0.15526, c: 93.213 },
-      'Modified Chung–Pfost, from code citing Storage of Cereal Grains and Their Products, 5th ed., p. 272; 32.2 °C/50 % → 11.2 % wb vs 10.8 % extension value for soft red winter wheat (drying-science.md §1.2)',
-      'published',
+      'modified Chung–Pfost constants as found in public code that cites "Storage of Cereal Grains and Their Products", 5th ed., p. 272 (the book was not read): from memory of that code; checked in the tests against 10.8 % wb at 32.2 °C/50 % for soft red winter wheat (extension text, publisher not shown on the copy read)',
+      'memory',
       [0, 50],
       [20, 90],
     ),
@@ -86,7 +86,7 @@ export const wheat: ProductProfile = {
     { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.25, tRefC: 40, activationEnergyJPerMol: 30000 } },
     3.5,
     'sphere',
-    'Lewis k = 0.25 h⁻¹ at 40 °C for a thin layer of wheat, Ea 30 kJ/mol: from memory, not verified',
+    'Lewis k = 0.25 h⁻¹ at 40 °C for a thin layer of wheat, Ea 30 kJ/mol, kernel 3.5 mm: from memory, not verified',
     'memory',
   ),
   defaultThicknessMm: sourced(3.5, 'kernel size; from memory', 'memory'),
@@ -100,26 +100,26 @@ export const roughRice: ProductProfile = {
   category: 'grain',
   initialMoistureWbPct: sourced(
     24,
-    'IRRI Knowledge Bank: 20–28 %, 24–26 % typical (drying-science.md §3)',
-    'published',
+    `24 % wb at harvest: from memory (${IRRI_DRYING}: "up to 25 % moisture" when harvested)`,
+    'memory',
   ),
   targetMoistureWbPct: sourced(
     14,
-    'IRRI Knowledge Bank: 14 % for storage of weeks and milling; 13 % for 8–12 months (drying-science.md §3)',
+    `${IRRI_DRYING}: 14 % or less for storage of weeks to a few months (13 % for 8–12 months)`,
     'published',
   ),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(
     50,
-    'paddy sun-drying practice: cover the grain above 50 °C (42 °C for seed), fissuring (drying-science.md §5.3)',
-    'published',
+    'paddy sun-drying practice: cover the grain above 50 °C (fissuring); from memory, not re-read',
+    'memory',
   ),
   isotherm: {
     desorption: isotherm(
-      { model: 'modified-henderson', a: 1.9187e-5, b: 2.4451, c: 51.161 },
-      'Modified Henderson constants recalled as ASAE D245 (from memory); checked within 0.1–0.3 pt of the Wikipedia long-grain rice EMC table (tests)',
-      'memory',
-      [0, 50],
+      { model: 'modified-henderson', a: 2.712e-5, b: 2.32574, c: 40.32191 },
+      `${MUNOZ_REBUFEL_RICE}: static method with saturated salt solutions at 10, 25 and 40 °C; fitted modified Henderson H = 1/100·[ln(1 − HR)/(−2.712e-5·(T + 40.32191))]^(1/2.32574) (mean difference 5.13 %); read as % dry basis, the usual basis of this form (the abstract does not say), which the tests support: within 0.6 pt of the Wikipedia long-grain rice table read as dry basis, 1.9 pt off read as wet basis. The RH range of the data is not given in the abstract`,
+      'published',
+      [10, 40],
       [20, 90],
     ),
   },
@@ -131,18 +131,18 @@ export const roughRice: ProductProfile = {
     },
     2.5,
     'sphere',
-    'Page, Wang & Singh 1978 (ASAE paper 78-3001), t in min: k = 0.01579 + 0.0001746·T − 0.01413·RH, n = 0.6545 + 0.002425·T + 0.07867·RH (drying-science.md §2.2)',
+    'Page, after Wang & Singh 1978 (ASAE paper 78-3001), t in min: k = 0.01579 + 0.0001746·T − 0.01413·RH, n = 0.6545 + 0.002425·T + 0.07867·RH: from memory, the paper was not read; kernel 2.5 mm from memory',
     'memory',
   ),
   defaultThicknessMm: sourced(2.5, 'kernel thickness; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(
     17,
-    'a 3 cm layer (IRRI 3–5 cm, KALRO 2–3 cm; drying-science.md §5.3) at about 580 kg/m³ (bulk density from memory)',
+    'a 3 cm layer at about 580 kg/m³: layer depth and bulk density from memory',
     'memory',
   ),
   cautions: [
     ...GRAIN_CAUTIONS,
-    'Dry paddy within 24 h of harvest; stir the layer every 30 min; gather or cover at night and in rain: re-wetting fissures the grain (IRRI, KALRO; drying-science.md §5.2–5.3).',
+    'Dry paddy within 24 h of harvest (IRRI Rice Knowledge Bank); stir the layer often; gather or cover at night and in rain: re-wetting fissures the grain.',
   ],
 }
 
@@ -153,44 +153,50 @@ export const roughRiceSeed: ProductProfile = {
   variantOf: 'rough-rice',
   targetMoistureWbPct: sourced(
     12,
-    'IRRI Knowledge Bank: 12 % for farm seed, 9 % for seed kept over a year (drying-science.md §3)',
+    `${IRRI_DRYING}: 12 % or less for farmers' seed (9 % or less for longer keeping)`,
     'published',
   ),
-  maxProductTempC: sourced(42, 'paddy practice: 42 °C limit for seed (drying-science.md §5.3)', 'published'),
-  cautions: [...roughRice.cautions, 'Seed viability is lost above 42 °C grain temperature.'],
+  maxProductTempC: sourced(
+    42,
+    'paddy practice: 42 °C grain-temperature limit for seed; from memory, not re-read',
+    'memory',
+  ),
+  cautions: [...roughRice.cautions, 'Seed viability is lost above about 42 °C grain temperature.'],
 }
 
 export const soybean: ProductProfile = {
   id: 'soybean',
   name: 'Soybean',
   category: 'oilseed',
-  initialMoistureWbPct: sourced(
-    18,
-    'typical 13–18 % at harvest; from memory (drying-science.md §3)',
-    'memory',
-  ),
-  targetMoistureWbPct: sourced(11, `${WIKI_EMC}: about 11 % for long-term storage`, 'published'),
+  initialMoistureWbPct: sourced(18, 'typical 13–18 % at harvest; from memory', 'memory'),
+  targetMoistureWbPct: sourced(11, `about 11 % for long-term storage, ${WIKIPEDIA_EMC}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: sourced(
     43,
-    'seed soybean: common practice, no source (seed coat cracking above about 43 °C)',
+    'seed soybean: seed-coat cracking above about 43 °C; from memory (common practice, no source)',
     'memory',
   ),
   isotherm: {
     desorption: isotherm(
       { model: 'modified-halsey', a: 2.8506, b: -0.0052195, c: 1.37132 },
-      `Modified Halsey fitted by dryhours (Levenberg–Marquardt, RMSE 0.03 pt wb, 17 points) to the ${WIKI_EMC} plus 21.1 °C/50 % → 8.8 % (University of Kentucky EMC chart, McNeill); D245.6 also prefers Halsey for soybean`,
+      `modified Halsey fitted by dryhours (Levenberg–Marquardt, RMSE 0.03 pt wb, 17 points) to the soybean ${WIKI_TABLE}, plus 21.1 °C/50 % → 8.8 % from ${UKY_EMC_2012}`,
       'fitted',
       [1.7, 37.8],
       [25, 50],
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.2, tRefC: 40, activationEnergyJPerMol: 30000 } },
+    { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.2, tRefC: 40, activationEnergyJPerMol: 16600 } },
     6.5,
     'sphere',
-    'Lewis k = 0.2 h⁻¹ at 40 °C, Ea 30 kJ/mol: from memory, not verified',
+    'Lewis k = 0.2 h⁻¹ at 40 °C, bean 6.5 mm: from memory, not verified',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${GELY_GINER_2007}: thin-layer drying of cv. Nidera A6381 at 19–75 °C, diffusivity 1.78e-11 m²/s at 19 °C to 7.28e-11 at 75 °C, activation energy 16.6 kJ/mol below 50 °C and 28.8 kJ/mol above (printed without decimal points as "166" and "288" in the copy read; the readings with decimals agree with the two diffusivities, R·ln(7.28/1.78)/(1/292.15 − 1/348.15) = 21.3 kJ/mol over the whole range)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(6.5, 'bean diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(30, 'about a 4 cm layer; from memory', 'memory'),
@@ -201,18 +207,14 @@ export const sorghum: ProductProfile = {
   id: 'sorghum',
   name: 'Sorghum',
   category: 'grain',
-  initialMoistureWbPct: sourced(
-    20,
-    'typical 14–20 % at harvest; from memory (drying-science.md §3)',
-    'memory',
-  ),
-  targetMoistureWbPct: sourced(12, `${WIKI_EMC}: about 12 % for long-term storage`, 'published'),
+  initialMoistureWbPct: sourced(20, 'typical 14–20 % at harvest; from memory', 'memory'),
+  targetMoistureWbPct: sourced(12, `about 12 % for long-term storage, ${WIKIPEDIA_EMC}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
   maxProductTempC: null,
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 798.996, b: 0.180647, c: 53.2537 },
-      `Modified Chung–Pfost fitted by dryhours (Levenberg–Marquardt, RMSE 0.02 pt wb, 16 points) to the ${WIKI_EMC}; extrapolated above 40 % RH`,
+      `modified Chung–Pfost fitted by dryhours (Levenberg–Marquardt, RMSE 0.02 pt wb, 16 points) to the sorghum ${WIKI_TABLE}; extrapolated above 40 % RH`,
       'fitted',
       [1.7, 37.8],
       [25, 40],
@@ -222,7 +224,7 @@ export const sorghum: ProductProfile = {
     { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.25, tRefC: 40, activationEnergyJPerMol: 30000 } },
     4,
     'sphere',
-    'Lewis k = 0.25 h⁻¹ at 40 °C, Ea 30 kJ/mol: from memory, not verified',
+    'Lewis k = 0.25 h⁻¹ at 40 °C, Ea 30 kJ/mol, kernel 4 mm: from memory, not verified',
     'memory',
   ),
   defaultThicknessMm: sourced(4, 'kernel size; from memory', 'memory'),

@@ -2,29 +2,49 @@
  * @module product/catalogue-other
  * Herbs, fish, coffee, cocoa and hops.
  */
+
 import {
   ASSUMED_EA_J_PER_MOL,
+  ASSUMED_EA_SOURCE,
   arrhenius,
   gab,
   isotherm,
   kinetics,
+  param,
   SAFE_AW_DRIED_FRUIT,
   sourced,
 } from './catalogue-helpers.ts'
+import {
+  ADEYEMI_2020,
+  ALVES_COFFEE,
+  BROWN_2013,
+  DOYMAZ_2006,
+  GUELPH_MOISTURE,
+  ICO_2004,
+  JAIN_PATHARE_2007,
+  NDUKWU_2010,
+  RYBKA_2021,
+  SANDOVAL_2020,
+  WEXLER_HASEGAWA_1954,
+} from './citations.ts'
 import type { ProductProfile } from './profile.ts'
 
 export const mintLeaves: ProductProfile = {
   id: 'mint-leaves',
   name: 'Mint leaves',
   category: 'herb',
-  initialMoistureWbPct: sourced(82, 'typical 80–85 %; from memory (drying-science.md §3)', 'memory'),
-  targetMoistureWbPct: sourced(10, 'herbs at most 10–12 %; from memory (drying-science.md §3)', 'memory'),
+  initialMoistureWbPct: sourced(82, 'typical 80–85 %; from memory', 'memory'),
+  targetMoistureWbPct: sourced(10, 'herbs at most 10–12 %; from memory', 'memory'),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
-  maxProductTempC: sourced(40, 'essential-oil loss above about 40 °C: common practice, no source', 'memory'),
+  maxProductTempC: sourced(
+    40,
+    'essential-oil loss above about 40 °C: from memory (common practice, no source)',
+    'memory',
+  ),
   isotherm: {
     desorption: isotherm(
       gab(0.08, 8, 0.85),
-      'GAB among the best for mint (open-access article PMC3550902, 15–35 °C); Xm 0.08, C 8, K 0.85 from memory',
+      'GAB Xm0 0.08, C 8, K 0.85 and no temperature term: from memory (GAB is among the best models for mint at 15–35 °C, open-access article PMC3550902, not re-read)',
       'memory',
       [15, 35],
       [10, 90],
@@ -34,8 +54,14 @@ export const mintLeaves: ProductProfile = {
     { model: 'lewis', k: arrhenius(0.35, 35, 62960) },
     0.5,
     'slab',
-    'Lewis k = 0.35 h⁻¹ at 35 °C: from memory; Ea 62.96 kJ/mol from Doymaz 2006, J. Food Eng. 74:370 (mint, 35–60 °C; logarithmic model best)',
+    'Lewis k = 0.35 h⁻¹ at 35 °C for 0.5 mm leaves: from memory',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${DOYMAZ_2006}: cabinet dryer 35–60 °C, Deff 3.067e-9 to 1.941e-8 m²/s, Arrhenius activation energy 62.96 kJ/mol (logarithmic model best)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(0.5, 'leaf thickness; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(3, 'loose layer of leaves; from memory', 'memory'),
@@ -56,15 +82,11 @@ export const fishFillets: ProductProfile = {
   category: 'fish',
   initialMoistureWbPct: sourced(
     80,
-    'fresh fish muscle about 80–83 % (direct solar fish dryer study, SCIRP; drying-science.md §3)',
+    `${JAIN_PATHARE_2007}: fresh fish contains up to 80 % water`,
     'published',
   ),
-  targetMoistureWbPct: sourced(
-    15,
-    'about 15–20 % and aw < 0.7; from memory (drying-science.md §3)',
-    'memory',
-  ),
-  waterActivityTarget: sourced(0.7, 'aw < 0.7 for dried fish; from memory (drying-science.md §3)', 'memory'),
+  targetMoistureWbPct: sourced(15, 'about 15–20 % for dried fish; from memory', 'memory'),
+  waterActivityTarget: sourced(0.7, GUELPH_MOISTURE, 'published'),
   maxProductTempC: sourced(
     55,
     'protein denaturation and case hardening above about 55 °C; from memory',
@@ -73,7 +95,7 @@ export const fishFillets: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.0494, 10, 0.95),
-      'GAB Xm 4.94 % db, Sablani et al. 2001, Drying Technol. 19:673 (freeze-dried sardine); C 10, K 0.95 from memory',
+      'GAB Xm0 4.94 % db recalled for freeze-dried sardine (Sablani et al. 2001, Drying Technol. 19:673, not re-read); C 10, K 0.95 and no temperature term from memory (sardine muscle desorption at 25, 35 and 50 °C is best fitted by Oswin: Hadrich, Boudhrioua & Kechaou 2008, Food Bioprod. Process. 86:242, abstract; constants not read)',
       'memory',
       [25, 50],
       [10, 75],
@@ -83,7 +105,7 @@ export const fishFillets: ProductProfile = {
     { model: 'lewis', k: arrhenius(0.08, 40, ASSUMED_EA_J_PER_MOL) },
     10,
     'slab',
-    'Lewis k = 0.08 h⁻¹ at 40 °C for 10 mm fillets: from memory',
+    `Lewis k = 0.08 h⁻¹ at 40 °C for 10 mm fillets: from memory (open-sun Deff 8.708e-11 m²/s for chelwa and 11.11e-11 for prawn, ${JAIN_PATHARE_2007}, not used: the abstract gives no thickness); ${ASSUMED_EA_SOURCE.source}`,
     'memory',
   ),
   defaultThicknessMm: sourced(10, 'fillet thickness; from memory', 'memory'),
@@ -100,13 +122,13 @@ export const fishFilletsSalted: ProductProfile = {
   targetMoistureWbPct: sourced(35, 'salted dried fish about 35 %; from memory', 'memory'),
   waterActivityTarget: sourced(
     0.75,
-    'ICAR e-course: aw held near that of saturated brine (0.75) while salt-saturated (drying-science.md §1.3)',
+    `${WEXLER_HASEGAWA_1954}: saturated sodium chloride solution holds 74.9 % RH at 0 °C, at most 75.6 % at 30 °C: salt-saturated fish stays near aw 0.75 until the salt crystallises`,
     'published',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.16454, 1.5, 1.0),
-      'type III GAB, C 1.5 and K 1.0 from memory, Xm 0.16454 set by dryhours so that aw = 0.75 at the 35 % wb target (saturated-brine aw, ICAR e-course); the real behaviour is isohalic (Curran & Poulter 1983; Doe et al. 1983): aw near 0.75 while salt-saturated',
+      'type III GAB, C 1.5 and K 1.0 from memory, Xm0 0.16454 set by dryhours so that aw = 0.75 at the 35 % wb target (itself from memory); the real behaviour is isohalic (Curran & Poulter 1983; Doe et al. 1983, not read): aw near 0.75 while salt-saturated',
       'memory',
       [20, 40],
       [10, 75],
@@ -119,47 +141,49 @@ export const coffeeParchment: ProductProfile = {
   id: 'coffee-parchment',
   name: 'Coffee in parchment (washed)',
   category: 'beverage-crop',
-  initialMoistureWbPct: sourced(
-    53,
-    'washed parchment about 50–55 %; from memory (drying-science.md §3)',
-    'memory',
-  ),
+  initialMoistureWbPct: sourced(53, 'washed parchment about 50–55 %; from memory', 'memory'),
   targetMoistureWbPct: sourced(
     11.5,
-    'ICO Resolution 420: never ship above 12.5 %; 11–12 % common practice (drying-science.md §3)',
-    'published',
+    `11–12 % common practice: from memory, within the 8–12.5 % of ${ICO_2004}`,
+    'memory',
   ),
   waterActivityTarget: sourced(
     0.68,
-    'ICO good hygiene practice pages: aw < 0.68 means no fungal growth (drying-science.md §3)',
-    'published',
+    'aw below 0.68 for green coffee: from memory (a green-coffee note quotes an instrument maker: moulds and yeasts need about aw 0.61, mycotoxigenic moulds 0.78)',
+    'memory',
   ),
   maxProductTempC: sourced(
     40,
-    'bean temperature at most about 40 °C for cup quality: common practice, no source',
+    'bean temperature at most about 40 °C for cup quality: from memory (common practice, no source)',
     'memory',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.06, 10, 0.85),
-      'modified Henderson and GAB adequate for coffee (Corrêa et al. 2010, Int. J. Food Sci. Technol.); Xm 0.06, C 10, K 0.85 from memory',
+      'GAB Xm0 0.06, C 10, K 0.85 and no temperature term: from memory (modified Henderson and GAB describe coffee fruit, pulped and green coffee desorption: Corrêa, Goneli, Júnior, de Oliveira & Valente 2010, Int. J. Food Sci. Technol., abstract; constants not read)',
       'memory',
       [20, 50],
       [10, 90],
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.04, 40, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(0.04, 40, 52890) },
     9,
     'sphere',
-    'Lewis k = 0.04 h⁻¹ at 40 °C: from memory (sun drying of parchment takes about 1–2 weeks)',
+    'Lewis k = 0.04 h⁻¹ at 40 °C for 9 mm beans in parchment: from memory (sun drying of parchment takes about 1–2 weeks)',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${ALVES_COFFEE}: natural (dry-processed) Arabica coffee fruits dried at 35, 40 and 45 °C with a 2.6 °C dew point, Deff 1.908–3.721e-11 m²/s, activation energy 52.89 kJ/mol (fruits, not washed parchment)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(9, 'bean in parchment; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(15, 'layer of 2–4 cm on raised beds; from memory', 'memory'),
   cautions: [
-    'Ochratoxin A: spend no more than 4 days between aw 0.95 and 0.80 while drying (FAO/ICO mould-prevention guidelines; drying-science.md §5.2).',
-    'Do not store fresh cherry or wet parchment; do not rewet dried coffee.',
+    'Ochratoxin A: spend no more than 4 days between aw 0.95 and 0.80 while drying (HACCP guideline quoted from the FAO/ICO mould-prevention work).',
+    'Do not store fresh cherry or wet parchment; do not rewet dried coffee; never ship above 12.5 % moisture (ICO).',
   ],
 }
 
@@ -167,39 +191,47 @@ export const cocoaBeans: ProductProfile = {
   id: 'cocoa-beans',
   name: 'Cocoa beans (fermented)',
   category: 'beverage-crop',
-  initialMoistureWbPct: sourced(
-    55,
-    'fermented wet beans about 55–60 %; from memory (drying-science.md §3)',
-    'memory',
-  ),
-  targetMoistureWbPct: sourced(
-    7.5,
-    'cocoa oven-drying study: 7.5 % end point (drying-science.md §3)',
-    'published',
-  ),
+  initialMoistureWbPct: sourced(55, 'fermented wet beans about 55–60 %; from memory', 'memory'),
+  targetMoistureWbPct: sourced(7.5, `the middle of the safe 7–8 % wb reached in ${ADEYEMI_2020}`, 'fitted'),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(
     60,
-    'acid and flavour defects in fast hot drying; about 60 °C common practice, no source',
+    'acid and flavour defects in fast hot drying; about 60 °C: from memory (common practice, no source)',
     'memory',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.036, 21.63, 0.871),
-      'GAB peeled fermented Trinitario bean at 25 °C: Xm 0.036, C 21.63, K 0.871, Sandoval et al. 2020, Rev. Téc. Ing. Univ. Zulia 43(1) (drying-science.md §1.3)',
-      'published',
+      `no temperature term: the study is at 25 °C only (the introduction of ${SANDOVAL_2020} notes that fermented-bean desorption isotherms at 30 and 40 °C coincided in an earlier study); assumed`,
+      'memory',
       [25, 25],
       [10, 90],
+      {
+        xm0: param(
+          `${SANDOVAL_2020}: peeled bean, GAB monolayer 3.60 g water/100 g dry solids at 25 °C`,
+          'published',
+        ),
+        c0: param(`${SANDOVAL_2020}: peeled bean, GAB C 21.63 at 25 °C`, 'published'),
+        k0: param(`${SANDOVAL_2020}: peeled bean, GAB K 0.871 at 25 °C`, 'published'),
+      },
     ),
   },
   kinetics: kinetics(
-    { model: 'diffusion', dRefM2PerS: 6.14e-10, tRefC: 55, activationEnergyJPerMol: 39940 },
+    { model: 'diffusion', dRefM2PerS: 6.137e-10, tRefC: 55, activationEnergyJPerMol: 39940 },
     10.5,
     'sphere',
-    'Fick diffusion, Deff 6.14e-10 m²/s at 55 °C, Ea 39.94 kJ/mol, batch dryer at 55/70/81 °C, Chilean J. Agric. Res. 70(4):633 (drying-science.md §2.3); bean as a 10.5 mm sphere (Hii et al. 2009 layer 1.05 cm) is our assumption',
-    'published',
+    'bean taken as a 10.5 mm sphere for the diffusivity: from memory (the abstract gives no bean size)',
+    'memory',
+    {
+      dRefM2PerS: param(
+        `${NDUKWU_2010}: isothermal batch drier at 55, 70 and 81 °C, Deff 6.137e-10 to 2.1855e-9 m²/s; the lowest value goes with the lowest temperature`,
+        'published',
+      ),
+      tRefC: param(`${NDUKWU_2010}: lowest drying temperature, 55 °C`, 'published'),
+      activationEnergyJPerMol: param(`${NDUKWU_2010}: activation energy 39.94 kJ/mol`, 'published'),
+    },
   ),
-  defaultThicknessMm: sourced(10.5, 'Hii et al. 2009 single layer 1.05 cm (drying-science.md §6)', 'memory'),
+  defaultThicknessMm: sourced(10.5, 'single layer of beans about 1 cm; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(20, 'layer of a few cm on raised beds; from memory', 'memory'),
   cautions: [
     'Mould and ochratoxin risk in slow drying; smoke contamination from direct-fired dryers (PAH): prefer indirect heaters.',
@@ -210,26 +242,22 @@ export const hops: ProductProfile = {
   id: 'hops',
   name: 'Hop cones',
   category: 'herb',
-  initialMoistureWbPct: sourced(
-    80,
-    'MSU Extension (Brown 2013): 76–84 % at harvest (drying-science.md §3)',
-    'published',
-  ),
+  initialMoistureWbPct: sourced(80, `the middle of the 76–84 % at harvest given by ${BROWN_2013}`, 'fitted'),
   targetMoistureWbPct: sourced(
     9,
-    'MSU Extension: 8–10 %; at or below 6 % over-dried (shatters) (drying-science.md §3)',
-    'published',
+    `the middle of the 8–10 % given by ${BROWN_2013} (6 % or less is over-dried: cones shatter)`,
+    'fitted',
   ),
   waterActivityTarget: SAFE_AW_DRIED_FRUIT,
   maxProductTempC: sourced(
     60,
-    'MSU Extension, UNL: keep drying air below 60 °C (140 °F) (drying-science.md §3)',
+    `${RYBKA_2021}: hop cones in belt and chamber dryers are exposed to drying air of 55–60 °C for 6–8 h; drying at 40 °C kept more essential oil`,
     'published',
   ),
   isotherm: {
     desorption: isotherm(
       gab(0.07, 8, 0.85),
-      'no hop isotherm found (drying-science.md §1.3); GAB Xm 0.07, C 8, K 0.85 from memory (leafy plant material)',
+      'no hop isotherm was found; GAB Xm0 0.07, C 8, K 0.85 and no temperature term: from memory (leafy plant material)',
       'memory',
       [20, 60],
       [10, 90],
@@ -239,7 +267,7 @@ export const hops: ProductProfile = {
     { model: 'lewis', k: arrhenius(0.3, 55, ASSUMED_EA_J_PER_MOL) },
     25,
     'sphere',
-    'Lewis k = 0.3 h⁻¹ at 55 °C for cones: from memory (kiln drying takes about 8–10 h)',
+    `Lewis k = 0.3 h⁻¹ at 55 °C for 25 mm cones: from memory (kiln drying takes about 8–10 h); ${ASSUMED_EA_SOURCE.source}`,
     'memory',
   ),
   defaultThicknessMm: sourced(25, 'cone size; from memory', 'memory'),

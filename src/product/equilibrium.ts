@@ -39,7 +39,7 @@ export function equilibriumRelativeHumidityPct(
   return erhPct(isothermFor(profile, direction).equation, tC, moistureDb)
 }
 
-/** Latent heat of vaporisation of free water [kJ/kg], λ = 2501 − 2.361·T (FAO-56 form; from memory, reference §4.1). */
+/** Latent heat of vaporisation of free water [kJ/kg], λ = 2501 − 2.361·T (FAO-56 form; from memory). */
 export function latentHeatFreeWaterKjPerKg(tC: number): number {
   return 2501 - 2.361 * tC
 }

@@ -14,12 +14,14 @@ import { type FittedModel, type FittedModelName, fitDryingModels } from './fit-m
 import { dryingRatePeriods, type RatePeriods } from './fit-rate-curve.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from './moisture-basis.ts'
 import type { KineticsSpec, ProductProfile, Shape } from './profile.ts'
+import { describeColumns, type WeighingColumns } from './weighing-columns.ts'
 import {
   dryMassG,
   type MoisturePoint,
   type MoistureReference,
   moisturePoints,
   type Weighing,
+  type WeighingsTable,
 } from './weighings.ts'
 
 export const OUTLIER_ROBUST_SIGMAS = 5
@@ -61,6 +63,10 @@ export interface WeighingsFit {
   target: { moistureWbPct: number; timeH: number | null; note: string } | null
   meanAirTempC: number | null
   meanRhPct: number | null
+  /** The columns the weighings were read from (null when the weighings were not read from a file). */
+  columns: WeighingColumns | null
+  /** The same, as one sentence for the user. */
+  columnsRead: string | null
   warnings: string[]
   /** Best model's prediction [kg/kg db] at tH. */
   predictMoistureDb: (tH: number) => number
@@ -103,7 +109,10 @@ function timeToMoistureH(
   return hi
 }
 
-export function fitWeighings(weighings: Weighing[], options: FitOptions): WeighingsFit {
+/** Fit the weighings (as parsed from a file, with their columns, or as plain rows). */
+export function fitWeighings(input: WeighingsTable | Weighing[], options: FitOptions): WeighingsFit {
+  const weighings = Array.isArray(input) ? input : input.rows
+  const columns = Array.isArray(input) ? null : input.columns
   const shape = options.shape ?? 'slab'
   const dry = dryMassG(weighings, options.reference)
   let pts: MoisturePoint[] = moisturePoints(weighings, dry)
@@ -177,6 +186,8 @@ export function fitWeighings(weighings: Weighing[], options: FitOptions): Weighi
     target,
     meanAirTempC: mean(temps),
     meanRhPct: mean(rhs),
+    columns,
+    columnsRead: columns ? describeColumns(columns) : null,
     warnings,
     predictMoistureDb: best.predict,
   }

@@ -5,7 +5,7 @@
  * at this interface; the ASABE D245 forms are written, as in the standard, with Me in % dry basis.
  *
  * Forms (ASAE D245.5 (1995), *Moisture relationships of plant-based agricultural products*, and
- * D245.6 (2007), as copied in `../shared/references/drying-science.md` §1.1; T in °C, RH a fraction):
+ * D245.6 (2007); the forms are from memory, the standard's text was not read; T in °C, RH a fraction):
  * - modified Henderson:     RH = 1 − exp[−A(T + C)·Me^B]
  * - modified Chung–Pfost:   RH = exp[−A/(T + C)·exp(−B·Me)]
  * - modified Halsey:        RH = exp[−exp(A + B·T)/Me^C]

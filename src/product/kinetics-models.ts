@@ -1,8 +1,7 @@
 /**
  * @module product/kinetics-models
  * Thin-layer drying kinetics under constant conditions: moisture ratio MR = (M − Me)/(M0 − Me) as a
- * function of time t [h]. Forms (as listed in the R package `seedwater`, `dryingmodels`, and in
- * `../shared/references/drying-science.md` §2.1):
+ * function of time t [h]. Forms (as listed in the R package `seedwater`, `dryingmodels`):
  * - Lewis (Newton):   MR = exp(−k·t)
  * - Page (1949):      MR = exp(−k·tⁿ)
  * - Henderson–Pabis:  MR = a·exp(−k·t)
@@ -97,11 +96,23 @@ export function diffusivityAt(eq: Extract<KineticsEquation, { model: 'diffusion'
   return eq.dRefM2PerS * arrheniusFactor(tC, eq.tRefC, eq.activationEnergyJPerMol)
 }
 
+/**
+ * Constants of the Thompson, Peart & Foster (1968) thin-layer equation for shelled corn in the °C form
+ * A = a0 + a1·T, B = b0·exp(b1·T): from memory (the paper's title and authors were read, its constants were not);
+ * the °C form agrees with the °F form A = −1.862 + 0.00488·T_F, B = 427.4·exp(−0.033·T_F), also from memory.
+ */
+export const THOMPSON_CORN = {
+  a0: { value: -1.706, unit: 'h', label: 'A = a0 + a1·T: a0' },
+  a1: { value: 0.0088, unit: 'h/°C', label: 'A = a0 + a1·T: a1' },
+  b0: { value: 148.7, unit: 'h', label: 'B = b0·exp(b1·T): b0' },
+  b1: { value: -0.059, unit: '1/°C', label: 'B = b0·exp(b1·T): b1' },
+} as const
+
 /** Thompson et al. 1968 coefficients for shelled corn, T = drying-air temperature [°C], t in h [from memory]. */
 export function thompsonCornCoefficients(tC: number): { a: number; b: number } {
   checkConditions(tC, 50)
-  // A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T) (°C form; agrees with the °F form, reference §2.2) [from memory]
-  return { a: -1.706 + 0.0088 * tC, b: 148.7 * Math.exp(-0.059 * tC) }
+  const c = THOMPSON_CORN
+  return { a: c.a0.value + c.a1.value * tC, b: c.b0.value * Math.exp(c.b1.value * tC) }
 }
 
 /** Thompson: time [h] to reach MR (0 < MR ≤ 1). */

@@ -9,7 +9,11 @@ import { productById } from './catalogue.ts'
 import { ISOTHERM_MODEL_NAMES } from './isotherm-models.ts'
 import type { ProductProfile, Sourced } from './profile.ts'
 
-const confidence = z.enum(['published', 'fitted', 'memory', 'user'])
+const confidence = z.enum(['published', 'transcribed', 'fitted', 'memory', 'user'])
+const parameterSources = z
+  .record(z.string().max(64), z.object({ source: z.string().min(1).max(1000), confidence }))
+  .refine((r) => Object.keys(r).length <= 32, 'at most 32 parameter sources')
+  .optional()
 const text = z.string().min(1, 'must not be empty').max(1000)
 const sourcedNumber = (min: number, max: number, unit: string) =>
   z.object({
@@ -50,6 +54,7 @@ export const isothermSpecSchema = z.object({
   confidence,
   validTempC: range(-20, 100),
   validRhPct: range(0, 100),
+  parameters: parameterSources,
 })
 
 const rateLaw = z.discriminatedUnion('form', [
@@ -91,6 +96,7 @@ export const kineticsSpecSchema = z.object({
   shape: z.enum(['slab', 'cylinder', 'sphere']),
   source: text,
   confidence,
+  parameters: parameterSources,
   rewettingRateFactor: sourcedNumber(0, 10, ''),
   airVelocity: z
     .object({ referenceMs: positive.max(30), exponent: z.number().min(0).max(3), source: text, confidence })

@@ -8,13 +8,35 @@ import type { IsothermEquation } from './isotherm-models.ts'
 import type { KineticsEquation } from './kinetics-models.ts'
 
 /**
- * How a number was obtained:
- * - `published`: read in the cited paper, standard or extension publication (or code citing it, said so);
- * - `fitted`: fitted by dryhours to published data named in the source;
- * - `memory`: recalled, not verified in a document: treat as approximate;
+ * How a number was obtained (ordered from strongest to weakest for the catalogue's own numbers):
+ * - `published`: read in the original publication, standard or official page (its abstract, table or text),
+ *   cited with authors (or issuing body) and year (`n.d.` when the page carries none);
+ * - `transcribed`: copied from a secondary source that cites the original (both named in the source text,
+ *   "X, as given in Y"): the original was not read;
+ * - `fitted`: derived by dryhours from named published data (a least-squares fit, or a representative value
+ *   inside a published range), with the data named in the source text;
+ * - `memory`: recalled or assumed, not verified in a document: treat as approximate;
  * - `user`: given by the user (own weighings or own values).
  */
-export type Confidence = 'published' | 'fitted' | 'memory' | 'user'
+export type Confidence = 'published' | 'transcribed' | 'fitted' | 'memory' | 'user'
+
+/** Every confidence level, strongest first. */
+export const CONFIDENCE_LEVELS: readonly Confidence[] = [
+  'published',
+  'transcribed',
+  'fitted',
+  'memory',
+  'user',
+]
+
+/** Rank for "weakest of": published 4 … memory 1; user values are the user's responsibility (rank 2). */
+export const CONFIDENCE_RANK: Record<Confidence, number> = {
+  published: 4,
+  transcribed: 3,
+  fitted: 2,
+  user: 2,
+  memory: 1,
+}
 
 export interface Sourced<T> {
   value: T
@@ -22,10 +44,20 @@ export interface Sourced<T> {
   confidence: Confidence
 }
 
-export interface IsothermSpec {
-  equation: IsothermEquation
+/** Source and confidence of one constant inside an equation, where it differs from the equation's own. */
+export interface ParameterSource {
   source: string
   confidence: Confidence
+}
+
+export interface IsothermSpec {
+  equation: IsothermEquation
+  /** Source of the equation's constants (those without an entry in `parameters`). */
+  source: string
+  /** The weakest confidence among the equation's constants. */
+  confidence: Confidence
+  /** Per-constant sources, keyed by the constant's name in `equation` (e.g. `xm0`, `c0`, `hxJPerMol`). */
+  parameters?: Record<string, ParameterSource>
   /** Range of the data behind the constants: the model extrapolates outside it. */
   validTempC: [number, number]
   validRhPct: [number, number]
@@ -38,8 +70,15 @@ export interface KineticsSpec {
   /** Thickness (slab) or diameter (cylinder, sphere) [mm] at which `equation` was measured or fitted. */
   referenceThicknessMm: number
   shape: Shape
+  /** Source of the constants (those without an entry in `parameters`). */
   source: string
+  /** The weakest confidence among the constants (equation and reference thickness). */
   confidence: Confidence
+  /**
+   * Per-constant sources, keyed by the constant's path in `equation` (`k.kRefPerH`, `k.activationEnergyJPerMol`,
+   * `n`, `dRefM2PerS` …) or `referenceThicknessMm`.
+   */
+  parameters?: Record<string, ParameterSource>
   /**
    * Rewetting rate constant as a fraction of the drying rate constant at the same conditions.
    * Always an assumption unless a source is given (adsorption is slower than desorption).

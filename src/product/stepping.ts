@@ -3,7 +3,7 @@
  * The product through changing hours: one step of the falling-rate period under the hour's air, with
  * - Page (and Thompson) stepped by equivalent time: the time the product would have needed under this
  *   hour's conditions to reach its present moisture ratio, plus the step (e.g. Brooker, Bakker-Arkema &
- *   Hall 1992, ch. 9; reference §2.1); for first-order models this reduces to MR·exp(−k·Δt), and
+ *   Hall 1992, ch. 9; from memory); for first-order models this reduces to MR·exp(−k·Δt), and
  *   Henderson–Pabis (MR = a·exp(−k·t)) steps exactly like Lewis with its k: `a` only shifts the time origin;
  * - a constant-rate cap: the loss in a step cannot exceed the wet-surface evaporation the caller computed
  *   (Penman, or humidity-ratio deficit × air flow), per kg of dry matter on the tray;

@@ -3,12 +3,16 @@
  * A grower's tray weighings: parse the CSV text (the CLI reads the file) and turn masses into dry-basis
  * moisture from the dry mass, the initial moisture or the final moisture.
  *
- * CSV (comma or semicolon, `#` comment lines, header required, column order free):
- *   elapsed_h | time   — hours since the first weighing, or ISO 8601 local date-times (`2026-07-01T08:00`)
- *   mass_g             — tray contents [g]; empty = weighing missing (the row is kept as a gap)
- *   air_c, rh_pct      — optional air temperature [°C] and RH [%] at the weighing
+ * CSV: comma, semicolon or tab separated, `#` comment lines, a header row, columns in any order. The header words
+ * may be written as people write them, in English, Spanish, French, German, Portuguese or Italian
+ * (`weighing-columns.ts`): a time column (`elapsed_h`, `time (min)`, `Hours`, `t (h)`, `tiempo (h)`, `Zeit [min]`,
+ * or ISO 8601 local date-times such as `2026-07-01T08:00` in a `time`/`date` column), a mass column (`mass_g`,
+ * `Weight (kg)`, `lb`, `peso (g)`, `poids (kg)`, `Gewicht (g)` …; an empty cell is a missed weighing, kept as a
+ * gap) and optionally the air temperature (`air_c`, `temp (°F)` …) and relative humidity (`rh_pct`, `HR (%)` …).
+ * With `;` or tab separators a decimal comma (`1234,5`) is read as a decimal point.
  */
 import { moistureDbFromWbPct } from './moisture-basis.ts'
+import { GRAMS_PER, HOURS_PER, recogniseColumns, type WeighingColumns } from './weighing-columns.ts'
 
 export interface Weighing {
   /** 1-based line in the file. */
@@ -19,8 +23,16 @@ export interface Weighing {
   rhPct: number | null
 }
 
+/** Parsed weighings with the columns they were read from. */
+export interface WeighingsTable {
+  rows: Weighing[]
+  columns: WeighingColumns
+}
+
+const ISO_LOCAL = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{2}):(\d{2})(?::(\d{2}))?$/
+
 function parseIsoLocalH(s: string, line: number): number {
-  const m = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{2}):(\d{2})(?::(\d{2}))?$/.exec(s.trim())
+  const m = ISO_LOCAL.exec(s.trim())
   if (!m) throw new RangeError(`line ${line}: time '${s}' is not an ISO 8601 date-time like 2026-07-01T08:00`)
   const [, y, mo, d, h, mi, se] = m
   const ms = Date.UTC(+y, +mo - 1, +d, +h, +mi, se ? +se : 0)
@@ -28,55 +40,84 @@ function parseIsoLocalH(s: string, line: number): number {
   return ms / 3_600_000
 }
 
-function num(field: string, s: string | undefined, line: number, min: number, max: number): number | null {
+function num(
+  field: string,
+  s: string | undefined,
+  line: number,
+  min: number,
+  max: number,
+  decimalComma: boolean,
+): number | null {
   if (s === undefined || s.trim() === '') return null
-  const v = Number(s.trim())
-  if (!Number.isFinite(v)) throw new RangeError(`line ${line}: ${field} '${s}' is not a number`)
+  const text = decimalComma ? s.trim().replace(',', '.') : s.trim()
+  const v = Number(text)
+  if (!Number.isFinite(v)) throw new RangeError(`line ${line}: ${field} '${s.trim()}' is not a number`)
   if (!(v >= min && v <= max)) throw new RangeError(`line ${line}: ${field} ${v} is outside ${min}–${max}`)
   return v
 }
 
-/** Parse weighings CSV text. RangeError with the line number for any bad row. */
-export function parseWeighingsCsv(text: string): Weighing[] {
+function separatorOf(headerLine: string): string {
+  const count = (c: string) => headerLine.split(c).length - 1
+  const tabs = count('\t')
+  const semis = count(';')
+  const commas = count(',')
+  if (tabs > 0 && tabs >= semis && tabs >= commas) return '\t'
+  if (semis > 0 && semis >= commas) return ';'
+  return ','
+}
+
+/** Parse weighings CSV text. RangeError with the line number for any bad row or an unrecognised header. */
+export function parseWeighingsCsv(text: string): WeighingsTable {
   const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/)
-  let header: string[] | null = null
+  let columns: WeighingColumns | null = null
   let sep = ','
+  let decimalComma = false
+  let dateTime = false
   const rows: Weighing[] = []
   lines.forEach((raw, i) => {
     const line = i + 1
     const s = raw.trim()
     if (s === '' || s.startsWith('#')) return
-    if (!header) {
-      sep = s.includes(';') && !s.includes(',') ? ';' : ','
-      header = s.split(sep).map((h) => h.trim().toLowerCase())
-      if (!header.includes('mass_g'))
-        throw new RangeError(`line ${line}: header needs a mass_g column, got '${s}'`)
-      if (!header.includes('elapsed_h') && !header.includes('time')) {
-        throw new RangeError(`line ${line}: header needs an elapsed_h or a time column, got '${s}'`)
-      }
+    if (!columns) {
+      sep = separatorOf(s)
+      decimalComma = sep !== ','
+      columns = recogniseColumns(s.split(sep), line)
+      dateTime = columns.time.dateTime
       return
     }
+    const c = columns as WeighingColumns
     const cells = s.split(sep)
-    const get = (name: string): string | undefined => {
-      const j = (header as string[]).indexOf(name)
-      return j >= 0 ? cells[j] : undefined
+    const cell = (index: number): string | undefined => cells[index]
+    const timeText = (cell(c.time.index) ?? '').trim()
+    if (timeText === '') throw new RangeError(`line ${line}: time is empty`)
+    // a `time` column without a unit may hold date-times: decided on its first data row
+    if (rows.length === 0 && !dateTime && c.time.unitFrom === 'default' && ISO_LOCAL.test(timeText)) {
+      dateTime = true
+      c.time.dateTime = true
     }
-    const h = header as string[]
-    const timeH = h.includes('elapsed_h')
-      ? num('elapsed_h', get('elapsed_h'), line, 0, 24 * 366)
-      : parseIsoLocalH(get('time') ?? '', line)
-    if (timeH === null) throw new RangeError(`line ${line}: time is empty`)
-    const massG = num('mass_g', get('mass_g'), line, 0, 1e7)
-    if (massG !== null && !(massG > 0)) throw new RangeError(`line ${line}: mass_g must be > 0, got ${massG}`)
-    rows.push({
-      line,
-      timeH,
-      massG,
-      airTempC: num('air_c', get('air_c'), line, -40, 150),
-      rhPct: num('rh_pct', get('rh_pct'), line, 0, 100),
-    })
+    let timeH: number
+    if (dateTime) {
+      timeH = parseIsoLocalH(timeText, line)
+    } else {
+      const t = num(c.time.header, timeText, line, 0, (24 * 366) / HOURS_PER[c.time.unit], decimalComma)
+      timeH = (t as number) * HOURS_PER[c.time.unit]
+    }
+    const mass = num(c.mass.header, cell(c.mass.index), line, 0, 1e7, decimalComma)
+    const massG = mass === null ? null : mass * GRAMS_PER[c.mass.unit]
+    if (massG !== null && !(massG > 0))
+      throw new RangeError(`line ${line}: ${c.mass.header} must be > 0, got ${mass}`)
+    let airTempC: number | null = null
+    if (c.airTemp) {
+      const v = num(c.airTemp.header, cell(c.airTemp.index), line, -40, 300, decimalComma)
+      airTempC = v === null ? null : c.airTemp.unit === 'F' ? ((v - 32) * 5) / 9 : v
+      if (airTempC !== null && !(airTempC >= -40 && airTempC <= 150)) {
+        throw new RangeError(`line ${line}: ${c.airTemp.header} ${v} is outside −40–150 °C`)
+      }
+    }
+    const rhPct = c.rh ? num(c.rh.header, cell(c.rh.index), line, 0, 100, decimalComma) : null
+    rows.push({ line, timeH, massG, airTempC, rhPct })
   })
-  if (rows.length === 0) throw new RangeError('no weighings found (the file has no data rows)')
+  if (!columns || rows.length === 0) throw new RangeError('no weighings found (the file has no data rows)')
   const t0 = rows[0].timeH
   for (let i = 0; i < rows.length; i++) {
     rows[i].timeH -= t0
@@ -84,7 +125,7 @@ export function parseWeighingsCsv(text: string): Weighing[] {
       throw new RangeError(`line ${rows[i].line}: time must increase from one weighing to the next`)
     }
   }
-  return rows
+  return { rows, columns }
 }
 
 /** How the dry matter is known: exactly one of these. */

@@ -34,7 +34,13 @@ describe('dryhours products', () => {
   })
   it('shows one product with its sources; unknown id → exit 2', async () => {
     const t = await cli(['products', 'hops'])
-    expect(t.out).toMatch(/maximum product temperature: 60 °C {2}\[published\] MSU Extension/)
+    expect(t.out).toMatch(
+      /maximum product temperature: 60 °C {2}\[published\] Rybka A\., Heřmánek P\., Honzík I\. 2021/,
+    )
+    expect(t.out).toMatch(
+      /target moisture: 9 % wb {2}\[fitted\] the middle of the 8–10 % given by Brown D\. 2013/,
+    )
+    expect(t.out).toMatch(/numbers resting on memory: \d+ of \d+/)
     expect(JSON.parse((await cli(['products', 'figs', '--json'])).out).id).toBe('figs')
     const bad = await cli(['products', 'kiwi'])
     expect(bad.code).toBe(2)
@@ -114,6 +120,49 @@ describe('dryhours fit', () => {
     expect((await cli(['fit', DEMO, '--dry-mass', '150', '--initial-wb', '85'])).code).toBe(2)
     expect((await cli(['fit', DEMO, '--dry-mass', '150', '--save', '/tmp/x.json'])).err).toMatch(
       /--save needs --product/,
+    )
+  })
+})
+
+describe('the README product commands run (README "Products")', () => {
+  it('products figs lists the memory numbers; products --sources counts every level; --json gives the same counts', async () => {
+    const figs = await cli(['products', 'figs'])
+    expect(figs.code).toBe(0)
+    expect(figs.out).toMatch(/every number, its level and its source:/)
+    expect(figs.out).toMatch(/numbers resting on memory: \d+ of \d+ \(/)
+    const s = await cli(['products', '--sources'])
+    expect(s.code).toBe(0)
+    for (const kind of [
+      'moisture targets and limits',
+      'isotherm constants',
+      'kinetics constants',
+      'all numbers',
+    ]) {
+      expect(s.out).toContain(kind)
+    }
+    const j = JSON.parse((await cli(['products', '--sources', '--json'])).out)
+    const all = j.groups.find((g: { group: string }) => g.group === 'all')
+    expect(all.published + all.transcribed + all.fitted + all.memory + all.user).toBe(all.total)
+    expect(all.memoryShare).toBeCloseTo(all.memory / all.total, 12)
+  })
+  it('products <id> --sources --json lists every number with path, level and source', async () => {
+    const j = JSON.parse((await cli(['products', 'cocoa-beans', '--sources', '--json'])).out)
+    const xm0 = j.numbers.find((n: { path: string }) => n.path === 'isotherm.desorption.equation.xm0')
+    expect(xm0.confidence).toBe('published')
+    expect(xm0.source).toMatch(/Sandoval/)
+  })
+  it('fit reads a weighing log with Spanish headers and a decimal comma, and says which columns it read', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'dryhours-fit-es-'))
+    const file = join(dir, 'bandeja.csv')
+    const rows = [0, 1, 2, 3, 4.5, 6, 8, 10, 12].map(
+      (t) =>
+        `${String(t).replace('.', ',')};${(150 + 850 * Math.exp(-0.25 * t)).toFixed(1).replace('.', ',')}`,
+    )
+    await writeFs(file, `tiempo (h);peso (g)\n${rows.join('\n')}\n`)
+    const r = await cli(['fit', file, '--dry-mass', '140'])
+    expect(r.code).toBe(0)
+    expect(r.out).toMatch(
+      /columns read: time from column 1 'tiempo \(h\)' in h; mass from column 2 'peso \(g\)' in g/,
     )
   })
 })

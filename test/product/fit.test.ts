@@ -120,7 +120,7 @@ describe('messy weighings', () => {
   it('CSV: uneven ISO times, semicolons, comments; bad rows rejected with their line number', () => {
     const w = parseWeighingsCsv(
       '# tray 1\ntime;mass_g;air_c\n2026-07-01T08:00;1000;30\n2026-07-01T08:40;950;31\n2026-07-01T10:00;;32\n',
-    )
+    ).rows
     expect(w).toHaveLength(3)
     ;[0, 40 / 60, 2].forEach((t, i) => {
       expect(w[i].timeH).toBeCloseTo(t, 9)
@@ -128,7 +128,9 @@ describe('messy weighings', () => {
     expect(w[2].massG).toBeNull()
     expect(() => parseWeighingsCsv('elapsed_h,mass_g\n0,100\n1,abc\n')).toThrow(/line 3: mass_g 'abc'/)
     expect(() => parseWeighingsCsv('elapsed_h,mass_g\n0,100\n0,90\n')).toThrow(/line 3: time must increase/)
-    expect(() => parseWeighingsCsv('hours,grams\n0,100\n')).toThrow(/line 1: header needs a mass_g/)
+    expect(() => parseWeighingsCsv('label,notes\n0,100\n')).toThrow(
+      /line 1: no mass column found among 'label', 'notes'/,
+    )
     expect(() => parseWeighingsCsv('elapsed_h,mass_g,rh_pct\n0,100,140\n')).toThrow(/line 2: rh_pct 140/)
   })
   it('the demo fixture fits (Page, the 6.5 h off-rack reading removed) and its profile validates', async () => {

@@ -19,8 +19,8 @@ const WIKI: Record<string, Record<number, number[]>> = {
   rice: { 25: [9.2, 8.6, 8.0, 7.3], 30: [10.1, 9.5, 8.8, 8.0], 35: [10.9, 10.3, 9.5, 8.7] },
 }
 
-describe('shelled corn, modified Chung–Pfost (Chen & Morey 1989, ASAE D245.6 constants)', () => {
-  it('15.6 °C, 80 % RH → 16.1 % wb (extension value quoted in the reference, ±0.1 pt)', () => {
+describe('shelled corn, modified Chung–Pfost (constants recalled as ASAE D245.6 after Chen & Morey 1989; from memory)', () => {
+  it('15.6 °C, 80 % RH → 16.1 % wb (an extension value from memory, ±0.1 pt: a consistency check only)', () => {
     expect(Math.abs(wb('shelled-corn', 15.6, 80) - 16.1)).toBeLessThan(0.1)
   })
   it('21.1 °C, 50 % RH → 11.3 % wb (University of Kentucky EMC chart, McNeill) within 0.4 pt', () => {
@@ -36,25 +36,54 @@ describe('shelled corn, modified Chung–Pfost (Chen & Morey 1989, ASAE D245.6 c
   })
 })
 
-describe('shelled corn, modified Henderson (constants 8.6541e-5, 1.8634, 49.81, reference §1.2)', () => {
-  it('15.6 °C, 80 % → 17.2 % wb, the published Henderson–Thompson EMC grid value (±0.1 pt)', () => {
+describe('shelled corn, modified Henderson (constants 8.6541e-5, 1.8634, 49.81, recalled as ASAE D245; from memory)', () => {
+  it('15.6 °C, 80 % → 17.2 % wb, a Henderson–Thompson EMC grid value recalled (±0.1 pt: a consistency check only)', () => {
     const db = emcDb({ model: 'modified-henderson', a: 8.6541e-5, b: 1.8634, c: 49.81 }, 15.6, 80)
     expect(Math.abs(moistureWbPctFromDb(db) - 17.2)).toBeLessThan(0.1)
   })
 })
 
-describe('rough rice, modified Henderson (1.9187e-5, 2.4451, 51.161; constants from memory)', () => {
-  it('Wikipedia long-grain rice table at RH 25–35 %, 1.7–37.8 °C, within 0.3 pt (measured max 0.28)', () => {
+describe('rough rice, modified Henderson (Muñoz & Rebufel, variety Oro, 10–40 °C; constants read in the abstract)', () => {
+  // The abstract does not say the basis; read as % dry basis the isotherm is within 0.54 pt (measured) of the
+  // Wikipedia long-grain rice table; read as % wet basis it would be 1.9 pt off. Another variety: a check of
+  // magnitude, not of the variety.
+  it('Wikipedia long-grain rice table at RH 25–35 %, 1.7–37.8 °C, within 0.6 pt when read as dry basis', () => {
     for (const [rh, row] of Object.entries(WIKI.rice)) {
       T.forEach((t, i) => {
-        expect(Math.abs(wb('rough-rice', t, Number(rh)) - row[i])).toBeLessThan(0.3)
+        expect(Math.abs(wb('rough-rice', t, Number(rh)) - row[i])).toBeLessThan(0.6)
       })
+    }
+  })
+  it('the same table is matched worse when the equation is read as wet basis (so dry basis is the reading kept)', () => {
+    const eq = productById('rough-rice').isotherm.desorption.equation
+    let maxDb = 0
+    let maxWb = 0
+    for (const [rh, row] of Object.entries(WIKI.rice)) {
+      T.forEach((t, i) => {
+        const pct = 100 * emcDb(eq, t, Number(rh))
+        maxDb = Math.max(maxDb, Math.abs((100 * pct) / (100 + pct) - row[i]))
+        maxWb = Math.max(maxWb, Math.abs(pct - row[i]))
+      })
+    }
+    expect(maxDb).toBeLessThan(0.6)
+    expect(maxWb).toBeGreaterThan(1.5)
+  })
+})
+
+describe('rough rice, the modified Henderson constants recalled as ASAE D245 (1.9187e-5, 2.4451, 51.161; from memory)', () => {
+  it('agree with the read Muñoz & Rebufel constants within 0.9 pt wb at 20–30 °C and RH 60–80 % (two sources, one magnitude)', () => {
+    const recalled = { model: 'modified-henderson' as const, a: 1.9187e-5, b: 2.4451, c: 51.161 }
+    for (const t of [20, 30]) {
+      for (const rh of [60, 80]) {
+        const d = 100 * emcDb(recalled, t, rh)
+        expect(Math.abs((100 * d) / (100 + d) - wb('rough-rice', t, rh))).toBeLessThan(0.95)
+      }
     }
   })
 })
 
-describe('wheat, modified Chung–Pfost (Storage of Cereal Grains, 5th ed., p. 272)', () => {
-  it('32.2 °C (90 °F), 50 % RH → 10.8 % wb for soft red winter wheat (extension table), within 0.5 pt', () => {
+describe('wheat, modified Chung–Pfost (constants as found in public code citing Storage of Cereal Grains, 5th ed., p. 272; from memory)', () => {
+  it('32.2 °C (90 °F), 50 % RH → 10.8 % wb for soft red winter wheat (extension text on natural-air drying, publisher not shown on the copy read), within 0.5 pt', () => {
     expect(Math.abs(wb('wheat', 32.2, 50) - 10.8)).toBeLessThan(0.5)
   })
 })

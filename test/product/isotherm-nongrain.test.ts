@@ -75,7 +75,7 @@ describe('GAB free-water limit', () => {
   })
 })
 
-describe('GAB with temperature dependence (Kiranoudis et al. 1993, potato, as quoted in reference §1.3)', () => {
+describe('GAB with temperature dependence (Kiranoudis et al. 1993 potato constants, as given via Singh 1996 in public code: mirrorscotty/material-data isotherms/gab-potato.c)', () => {
   // Xm0 0.056, Hx 1.39 kJ/mol; C0 0.017, Hc 20 kJ/mol; K0 0.94, Hk −0.92 kJ/mol
   const eq = {
     model: 'gab',

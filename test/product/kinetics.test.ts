@@ -140,7 +140,7 @@ describe('heat of sorption from the isotherm (Clausius–Clapeyron)', () => {
       expect(Math.abs(ratio - (1 + 1.2925 * Math.exp(-16.961 * m)))).toBeLessThan(0.04)
     }
   })
-  it('net heat falls as moisture rises (Kaymak-Ertekin & Gedik 2004 and every source in reference §4.1)', () => {
+  it('net heat falls as moisture rises (as read for chilli, Getahun et al. 2020, Heliyon 6:e04608, and sardine, Hadrich et al. 2008, Food Bioprod. Process. 86:242)', () => {
     const rice = productById('rough-rice')
     expect(heatOfSorption(rice, 30, 0.1).netKjPerMol).toBeGreaterThan(
       heatOfSorption(rice, 30, 0.2).netKjPerMol,

@@ -42,7 +42,7 @@ describe('catalogue', () => {
         p.defaultLoadingKgPerM2,
       ]) {
         expect(s.source.length).toBeGreaterThan(5)
-        expect(['published', 'fitted', 'memory']).toContain(s.confidence)
+        expect(['published', 'transcribed', 'fitted', 'memory']).toContain(s.confidence)
       }
       expect(p.isotherm.desorption.source.length).toBeGreaterThan(10)
       expect(p.kinetics.source.length).toBeGreaterThan(10)

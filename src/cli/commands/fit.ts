@@ -13,8 +13,12 @@ Usage:
                [--thickness <mm>] [--shape slab|cylinder|sphere] [--target-wb <%>]
                [--product <id>] [--save <profile.json> [--id <new-id>]] [--json]
 
-The CSV needs a header with mass_g and elapsed_h (hours) or time (ISO 8601 date-time), and may
-have air_c and rh_pct. Lines starting with # are comments. An empty mass_g is a missed weighing.
+The CSV (comma, semicolon or tab separated) needs a header naming a time column and a mass column
+as people write them, with the unit if any: elapsed_h, time (min), t (h), Hours, or ISO 8601
+date-times in a time/date column; mass_g, Weight (kg), lb; also Spanish, French, German, Portuguese
+and Italian words (tiempo, temps, Zeit, tempo; peso, poids, masse, Gewicht, massa). Air temperature
+(air_c, temp (°F)) and relative humidity (rh_pct, HR (%)) are optional. The output says which
+columns it read. Lines starting with # are comments. An empty mass cell is a missed weighing.
 Fits Lewis, Page and Fick diffusion by Levenberg–Marquardt and picks the best by AICc. A weighing
 far off the curve (tray off the rack) is left out and reported. --save writes a product profile
 based on --product (required with --save) with the fitted kinetics.`
@@ -25,6 +29,7 @@ function fmt(x: number, d = 4): string {
 
 function report(f: WeighingsFit): string {
   const lines: string[] = []
+  if (f.columnsRead) lines.push(f.columnsRead)
   lines.push(
     `dry mass ${f.dryMassG.toFixed(1)} g; moisture ${f.initialMoistureWbPct.toFixed(1)} → ${f.lastMoistureWbPct.toFixed(1)} % wb over ${f.readingsUsed} weighings used`,
   )
