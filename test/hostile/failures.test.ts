@@ -314,6 +314,20 @@ describe('every bad option is a 400 naming its field, before any work', () => {
     expect(p.errors?.map((e) => e.path)).toContain(path)
   })
 
+  it.each([
+    ['baseline=3', 'baseline'],
+    ['dryingTempC=150', 'dryingTempC'],
+    ['elevationM=100000', 'elevationM'],
+    ['utcOffsetHours=30', 'utcOffsetHours'],
+  ])('energy chart %s: 400 naming %s', async (param, path) => {
+    const log = readFileSync('climate-demo/energy/quillow-dryer-batches-2026.csv')
+    const p = await expectProblem(
+      await post(`/v1/energy-chart?${param}`, new Uint8Array(log), 'text/csv'),
+      [400],
+    )
+    expect(p.errors?.map((e) => e.path)).toContain(path)
+  })
+
   it('the page form: 400 naming the form field (JSON answer) or the page with the message', async () => {
     const form = new FormData()
     form.append('file', new Blob([JULY]), 'july.csv')

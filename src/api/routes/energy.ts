@@ -32,9 +32,13 @@ export const energyChartQuerySchema = z.strictObject({
   ).optional(),
   fuel: z.enum(FUEL_IDS).describe('fuel of rows with fuel_amount but no fuel column').optional(),
   dryingTempC: numberParam('drying-air temperature [°C] for the latent heat, default 60').optional(),
-  utcOffsetHours: numberParam("offset of the log's (and weather file's) local times from UTC [h]").optional(),
+  utcOffsetHours: numberParam("offset of the log's (and weather file's) local times from UTC [h], -12 to 14")
+    .pipe(z.number().min(-12).max(14))
+    .optional(),
   timeZone: z.string().min(1).describe("IANA time zone of the weather file's local timestamps").optional(),
-  elevationM: numberParam('site elevation [m] for the air pressure').optional(),
+  elevationM: numberParam('site elevation [m] for the air pressure, -500 to 9000')
+    .pipe(z.number().min(-500).max(9000))
+    .optional(),
   product: z
     .string()
     .min(1)
@@ -179,8 +183,15 @@ export const energyRouter = (config: ApiConfig) =>
           errors.length > 0 ? errors : [{ path: 'log', message: e.message }],
         )
       }
-      if (e instanceof RangeError && !isRuntimeFault(e))
-        throw new ApiProblem(400, e.message, [{ path: 'options', message: e.message }])
+      if (e instanceof RangeError && !isRuntimeFault(e)) {
+        // the option the engine names in its message, else the options as a whole
+        const path = /^baseline/.test(e.message)
+          ? 'baseline'
+          : /^drying temperature/.test(e.message)
+            ? 'dryingTempC'
+            : 'options'
+        throw new ApiProblem(400, `${path}: ${e.message}`, [{ path, message: e.message }])
+      }
       rethrowAsProblem(e)
     }
     work.checkpoint()
