@@ -9,9 +9,10 @@
 import { type ChildProcess, spawn } from 'node:child_process'
 import { readFileSync } from 'node:fs'
 import { availableParallelism } from 'node:os'
+import { getHeapStatistics } from 'node:v8'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { createApp } from '../../src/api/app.ts'
-import { poolFromEnv, QUEUE_PER_THREAD, WORKER_HEAP_MB } from '../../src/node/settings.ts'
+import { poolFromEnv, QUEUE_PER_THREAD } from '../../src/node/settings.ts'
 
 const tamarel = readFileSync('climate-demo/tamarel-lowland-2021-2023-utc.csv')
 
@@ -237,11 +238,11 @@ describe('the heap of a worker thread', () => {
 })
 
 describe('the pool size', () => {
-  it('is the machine’s available parallelism unless set, with 8 waiting requests per thread', () => {
+  it('is the machine’s available parallelism unless set, with 8 waiting requests per thread and the engine’s heap', () => {
     expect(poolFromEnv({})).toEqual({
       threads: availableParallelism(),
       queue: QUEUE_PER_THREAD * availableParallelism(),
-      heapMb: WORKER_HEAP_MB,
+      heapMb: Math.round(getHeapStatistics().heap_size_limit / 1024 / 1024),
     })
     expect(poolFromEnv({ DRYHOURS_WORKERS: '3' })).toMatchObject({ threads: 3, queue: 24 })
     expect(poolFromEnv({ DRYHOURS_WORKERS: '0', DRYHOURS_QUEUE: '5' })).toMatchObject({
