@@ -42,6 +42,8 @@ const LISTEN_ERRORS: Record<string, string> = {
   ENOTFOUND: 'is not a known host name',
 }
 
+const HOP_BY_HOP = new Set(['connection', 'keep-alive', 'transfer-encoding', 'content-length', 'upgrade'])
+
 /** The request as it crosses to a worker: its body read here, within the byte limit. */
 async function wireRequest(req: Request, config: ApiConfig): Promise<WireRequest | Response> {
   const declared = Number(req.headers.get('content-length') ?? Number.NaN)
@@ -68,7 +70,10 @@ async function wireRequest(req: Request, config: ApiConfig): Promise<WireRequest
       })
     }
   }
-  return { method: req.method, url: req.url, headers: [...req.headers], body }
+  // hop-by-hop headers stay here; the worker gets the body whole, with its length
+  const headers = [...req.headers].filter(([k]) => !HOP_BY_HOP.has(k))
+  if (body) headers.push(['content-length', String(body.byteLength)])
+  return { method: req.method, url: req.url, headers, body }
 }
 
 async function onPool(pool: WorkerPool, req: Request, config: ApiConfig): Promise<Response> {

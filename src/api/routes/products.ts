@@ -106,6 +106,8 @@ export const fitRouter = (config: ApiConfig) =>
     const work = workControl(c, config)
     const upload = await readUpload(c, { defaultName: 'weighings.csv' })
     const q = parseOrProblem(fitQuerySchema, upload.options ?? upload.query, upload.options ? 'options' : '')
+    // with an options part, the query string must be empty: nothing given is silently ignored
+    if (upload.options !== undefined) parseOrProblem(z.strictObject({}), upload.query)
     if (upload.files.length !== 1) {
       throw new ApiProblem(400, `send exactly one weighings file, got ${upload.files.length}`, [
         { path: 'file', message: 'one file part expected' },
