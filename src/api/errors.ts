@@ -40,6 +40,14 @@ const RUNTIME_FAULT = [
   /^Incorrect locale information/,
 ]
 
+/**
+ * Whether a message carries the engine's own text anywhere (an error's message wrapped in ours, such as
+ * `file.csv: Maximum call stack size exceeded`): such a message is never shown.
+ */
+export function mentionsRuntimeText(message: string): boolean {
+  return [...RUNTIME_LIMIT, ...RUNTIME_FAULT].some((r) => new RegExp(r.source.replace(/^\^/, '')).test(message))
+}
+
 /** The engine ran out of stack or memory for this input. */
 export function isRuntimeLimit(e: unknown): boolean {
   return e instanceof RangeError && RUNTIME_LIMIT.some((r) => r.test(e.message))
@@ -48,6 +56,15 @@ export function isRuntimeLimit(e: unknown): boolean {
 /** A RangeError thrown by the engine's built-ins rather than by dryhours' own checks. */
 export function isRuntimeFault(e: unknown): boolean {
   return e instanceof RangeError && (isRuntimeLimit(e) || RUNTIME_FAULT.some((r) => r.test(e.message)))
+}
+
+function resourceLimit(): ApiProblem {
+  return new ApiProblem(
+    422,
+    'the input is too large for the engine to process (it ran out of memory or nesting depth); send fewer rows or a shorter period',
+    undefined,
+    'resource-limit',
+  )
 }
 
 export interface ErrorMapping {
@@ -64,21 +81,15 @@ export interface ErrorMapping {
  * generic detail): no engine text is ever put in a problem.
  */
 export function problemFor(e: unknown, mapping: ErrorMapping = {}): ApiProblem | null {
-  if (e instanceof ApiProblem) return e
+  if (e instanceof ApiProblem) return mentionsRuntimeText(e.message) ? resourceLimit() : e
   if (e instanceof WorkStopped) return e.problem()
   if (e instanceof HTTPException) {
     const status = e.status as ApiProblem['status']
     return new ApiProblem(status, e.message || 'request rejected')
   }
-  if (isRuntimeLimit(e)) {
-    return new ApiProblem(
-      422,
-      'the input is too large for the engine to process (it ran out of memory or nesting depth); send fewer rows or a shorter period',
-      undefined,
-      'resource-limit',
-    )
-  }
+  if (isRuntimeLimit(e)) return resourceLimit()
   if (isRuntimeFault(e)) return null
+  if (e instanceof Error && mentionsRuntimeText(e.message)) return resourceLimit()
   const prefix = mapping.filePrefix ? `${mapping.filePrefix}: ` : ''
   if (e instanceof WeatherInputError) return new ApiProblem(422, `${prefix}${e.message}`)
   if (e instanceof AssessOptionError) {

@@ -3,7 +3,7 @@
  * Dispatch `dryhours <command> …`. Exit codes: 0 success, 2 bad input (one line on stderr), 1 internal error.
  */
 import { ConfigError } from '../api/config.ts'
-import { isRuntimeLimit } from '../api/errors.ts'
+import { isRuntimeLimit, mentionsRuntimeText } from '../api/errors.ts'
 import { type CliIo, UsageError } from './command.ts'
 import { commands } from './registry.ts'
 
@@ -40,9 +40,12 @@ export function joinNegativeNumberValues(args: string[]): string[] {
  * (exit 1): usage errors, bad settings, and inputs the engine ran out of memory or stack for.
  */
 function inputFault(e: unknown): string | null {
-  if (e instanceof UsageError || e instanceof ConfigError) return e.message
-  if (isRuntimeLimit(e)) {
-    return 'the input is too large for the engine to process (it ran out of memory or nesting depth); use a smaller file'
+  const tooLarge =
+    'the input is too large for the engine to process (it ran out of memory or nesting depth); use a smaller file'
+  if (isRuntimeLimit(e)) return tooLarge
+  if (e instanceof UsageError || e instanceof ConfigError) {
+    // a command that wrapped an engine error in a usage error: the engine's words stay out of the line
+    return mentionsRuntimeText(e.message) ? tooLarge : e.message
   }
   return null
 }

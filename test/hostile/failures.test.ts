@@ -16,6 +16,8 @@ import { describe, expect, it } from 'vitest'
 import { createApp } from '../../src/api/app.ts'
 import { problemFor } from '../../src/api/errors.ts'
 import { PROBLEM_TYPE_BASE, PROBLEM_TYPES } from '../../src/api/problem.ts'
+import { type CliIo, UsageError } from '../../src/cli/command.ts'
+import { runCli } from '../../src/cli/main.ts'
 import {
   app,
   COARSE,
@@ -124,6 +126,43 @@ describe('no engine text reaches a user', () => {
       expect(body.type).toMatch(/internal$/)
       expect(body.detail).toBe('internal error; the request was not processed (the server logged it)')
     }
+  })
+
+  it('the CLI: an engine error, even wrapped in a usage error, prints one line of our own words (exit 2)', async () => {
+    for (const thrown of [
+      new RangeError('Maximum call stack size exceeded'),
+      new UsageError('f.csv: Invalid string length'),
+    ]) {
+      const err: string[] = []
+      const io: CliIo = {
+        stdout: () => {},
+        stderr: (t) => err.push(t),
+        readFile: async () => {
+          throw thrown
+        },
+        writeFile: async () => {},
+      }
+      expect(await runCli(['inspect', 'f.csv'], io)).toBe(2)
+      expect(err.join('')).toBe(
+        'dryhours inspect: the input is too large for the engine to process (it ran out of memory or nesting depth); use a smaller file\n',
+      )
+    }
+  })
+
+  it('the CLI: an internal fault exits 1 with one line naming its kind, not its text', async () => {
+    const err: string[] = []
+    const io: CliIo = {
+      stdout: () => {},
+      stderr: (t) => err.push(t),
+      readFile: async () => {
+        throw new TypeError("Cannot read properties of undefined (reading 'x')")
+      },
+      writeFile: async () => {},
+    }
+    expect(await runCli(['inspect', 'f.csv'], io)).toBe(1)
+    expect(err.join('')).toBe(
+      'dryhours inspect: internal error (TypeError); please report it with the command you ran\n',
+    )
   })
 
   it('a JSON options part that does not parse: 400 without the parser message', async () => {
