@@ -39,6 +39,10 @@ describe('POST /v1/energy-chart', () => {
     expect(a.kind).toBe('energy-chart')
     expect(a.accounting.rowsUsed).toBe(64)
     expect(a.adjusted?.finding.estimatedChangeStart?.batchId).toBe('Q26-041')
+    // The answer's view and the physics view travel in the JSON (the same keys as the CLI's --json).
+    expect(a.answer.view).toBe('regression')
+    expect(a.physics?.fit.efficiency).toBeGreaterThan(0)
+    expect(a.summary[0]).toMatch(/^Answer: .* from batch Q26-041 /)
   })
   it('accepts multipart with log, weather-free options part, and answers HTML or CSV on request', async () => {
     const form = new FormData()

@@ -14,6 +14,8 @@ export interface BatchAmbientValues {
   dryBulbC: number
   relativeHumidityPct: number
   humidityRatioGPerKg: number
+  /** Air pressure the humidity ratio was computed at [kPa] (log, weather file, elevation or sea level). */
+  pressureKpa: number
   source: 'log' | 'weather'
 }
 

@@ -1,9 +1,12 @@
 /**
  * @module analysis/energy/energy-chart
- * The energy control-chart assessment of a dryer batch log: per-batch specific energy and efficiency,
- * individuals/moving-range and EWMA charts with a phase I baseline, and the same charts on the residuals
- * of a regression of specific energy on outside humidity ratio, outside temperature and load fitted over
- * the baseline (what the weather and the load do not explain). Plain JSON-safe data for report/.
+ * The energy control-chart assessment of a dryer batch log: per-batch specific energy and efficiency, and
+ * three views of it, each with individuals/moving-range, EWMA and CUSUM charts and limits from a phase I
+ * baseline: the raw specific energy; the ratio of measured to expected energy from the dryer's own physics
+ * (./physics-view.ts); and the residual of a regression on outside humidity ratio, temperature and load
+ * (./regression-view.ts). The answer uses one of the two normalised views (./view-choice.ts), acts on its
+ * CUSUM, locates the change (./change-point.ts) and says whether the signal stands without the batches whose
+ * weather the baseline never saw (./weather-range.ts). Plain JSON-safe data for report/.
  */
 import type { FuelId } from '../../drying/method.ts'
 import { STANDARD_PRESSURE_KPA, standardPressureKpaAtElevation } from '../../physics/moist-air.ts'
@@ -11,14 +14,26 @@ import type { ProductProfile } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { type BatchAmbientValues, type BatchEnergy, batchEnergy } from './batch-energy.ts'
 import { type BatchLogAccounting, type BatchRowRejection, readBatchLog } from './batch-log.ts'
-import { estimateChangeStart } from './change-start.ts'
+import { type ChartSet, chartSet } from './chart-set.ts'
 import { CONTROL_CHART_SOURCE } from './control-constants.ts'
+import { twoSidedCusumArl } from './cusum-arl.ts'
+import { CUSUM_H, CUSUM_K } from './cusum-chart.ts'
 import { summaryLines } from './energy-summary.ts'
-import { type EwmaChart, ewmaChart } from './ewma-chart.ts'
-import { type IndividualsChart, individualsChart, MIN_BASELINE_POINTS } from './individuals-chart.ts'
-import { type LinearRegression, leverage, ordinaryLeastSquares, predict } from './linear-regression.ts'
-import type { RunRuleId } from './run-rules.ts'
+import { MIN_BASELINE_POINTS } from './individuals-chart.ts'
+import { type PhysicsView, physicsView } from './physics-view.ts'
+import { type RegressionView, regressionView } from './regression-view.ts'
+import { type AnswerView, chooseAnswerView } from './view-choice.ts'
 import { batchAmbientFromSeries, humidityRatioGPerKgFromRh, MIN_WEATHER_COVERAGE } from './weather-join.ts'
+import {
+  baselineWeatherRange,
+  outsideBaselineWeather,
+  type SignalWithoutOutside,
+  signalWithoutOutside,
+  type WeatherRange,
+} from './weather-range.ts'
+
+export type { ChartFinding, ChartSet, ChartSignal } from './chart-set.ts'
+export { ADJUSTMENT_REGRESSORS, extrapolationWarning } from './regression-view.ts'
 
 export interface EnergyChartOptions {
   /** Batches in the baseline (phase I); default min(20, half the batches), at least 5. */
@@ -39,40 +54,15 @@ export interface EnergyChartOptions {
 
 /** Default drying-air temperature [°C]: mid-range of heated grain and fruit dryers (assumption, no source). */
 export const DEFAULT_DRYING_TEMP_C = 60
-/** Regressors of the adjusted chart, in order. */
-export const ADJUSTMENT_REGRESSORS = ['ambientHumidityRatioGPerKg', 'ambientTempC', 'freshMassT'] as const
 
-export interface ChartSignal {
-  batchIndex: number
-  batchId: string
-  startText: string
-  /** Rules that fired on this batch (on this side). */
-  rules: (RunRuleId | 'EWMA')[]
-  /** `above`: more energy per kg water than the baseline (worse); `below`: less (better). */
-  side: 'above' | 'below'
-  /** 1 for the first batch after the baseline. */
-  batchesAfterBaseline: number
-}
-
-export interface ChartFinding {
-  /** First monitored batch with any signal, or null when the chart stays in control after the baseline. */
-  firstSignal: ChartSignal | null
-  /** First monitored batch signalling a rise in energy use (the dryer doing worse), or null. */
-  firstRiseSignal: ChartSignal | null
-  /** Most likely first batch of the rise (change-point estimate), when a rise signal fired. */
-  estimatedChangeStart: { batchIndex: number; batchId: string; startText: string } | null
-  /** Mean of the charted value from the estimated change to the end, minus the centre line. */
-  shiftAfterChange: number | null
-  /** Signals inside the baseline itself: a baseline that is not in control gives limits to distrust. */
-  baselineSignals: number
-}
-
-export interface ChartSet {
-  /** Batch index (into `batches`) of each charted point. */
-  batchIndices: number[]
-  individuals: IndividualsChart
-  ewma: EwmaChart
-  finding: ChartFinding
+/** What the CUSUM's k and h mean in batches: average run lengths from ./cusum-arl.ts. */
+export interface CusumDesign {
+  k: number
+  h: number
+  /** Two-sided in-control ARL [batches] with a known baseline mean and σ. */
+  inControlArl: number
+  /** ARL for sustained shifts of 1, 2 and 3 σ [batches]. */
+  arlAtShiftSigma: { shiftSigma: number; arl: number }[]
 }
 
 export interface EnergyChartAssessment {
@@ -83,107 +73,25 @@ export interface EnergyChartAssessment {
   baselineCount: number
   /** Specific energy [MJ/kg water] chart. */
   raw: ChartSet
+  /** Measured over expected energy [%] from the dryer's own physics, or null (see reason). */
+  physics: PhysicsView | null
+  physicsUnavailableReason: string | null
   /** Residual [MJ/kg water] chart after the weather-and-load regression, or null (see reason). */
-  adjusted:
-    | (ChartSet & {
-        regression: Omit<LinearRegression, 'residuals' | 'leverages' | 'regressorMeans' | 'centredInverse'>
-        fitted: number[]
-        /** y − ŷ [MJ/kg water] of each charted batch. */
-        residuals: number[]
-        /** Leverage h of each charted batch (baseline: in the fit; monitored: of a new observation). */
-        leverages: number[]
-        /** What is charted: baseline e/√(1 − h), monitored e/√(1 + h); each has variance σ² when in control. */
-        standardizedResiduals: number[]
-      })
-    | null
+  adjusted: RegressionView | null
   adjustedUnavailableReason: string | null
+  /** The view the answer uses, why, and whether its signal stands without the out-of-range batches. */
+  answer: AnswerView & { robustness: SignalWithoutOutside }
+  /** The baseline's range of outside air, or null when it has none. */
+  baselineWeather: WeatherRange | null
+  /** Per batch: a monitored batch whose outside air lies outside the baseline's range. */
+  outsideBaselineWeather: boolean[]
+  cusumDesign: CusumDesign
   assumptions: string[]
-  /** Implausible batches kept in the charts (e.g. efficiency above 100 %): check their numbers. */
+  /** Implausible batches kept in the charts (e.g. efficiency above 100 %) and other cautions. */
   warnings: string[]
   sources: string[]
-  /** Plain-language findings, one sentence each. */
+  /** Plain-language findings, one sentence each; the first is the answer. */
   summary: string[]
-}
-
-function signalAt(
-  set: Omit<ChartSet, 'finding'>,
-  batches: BatchEnergy[],
-  baselineCount: number,
-  side: 'above' | 'below' | 'any',
-): ChartSignal | null {
-  const { individuals, ewma, batchIndices } = set
-  const first = <T extends { index: number; side: 'above' | 'below' }>(list: T[]) =>
-    list.find((s) => s.index >= individuals.baselineCount && (side === 'any' || s.side === side))
-  const a = first(individuals.signals)
-  const b = first(ewma.signals)
-  const pick = a && b ? (a.index <= b.index ? a : b) : (a ?? b)
-  if (!pick) return null
-  const point = pick.index
-  const pointSide = pick.side
-  const rules: (RunRuleId | 'EWMA')[] = individuals.signals
-    .filter((s) => s.index === point && s.side === pointSide)
-    .map((s) => s.rule)
-  if (ewma.signals.some((s) => s.index === point && s.side === pointSide)) rules.push('EWMA')
-  const batch = batches[batchIndices[point]]
-  return {
-    batchIndex: batch.index,
-    batchId: batch.batchId,
-    startText: batch.startText,
-    rules: [...new Set(rules)],
-    side: pointSide,
-    batchesAfterBaseline: batch.index - baselineCount + 1,
-  }
-}
-
-function finding(
-  set: Omit<ChartSet, 'finding'>,
-  batches: BatchEnergy[],
-  baselineCount: number,
-): ChartFinding {
-  const { individuals, batchIndices } = set
-  const baselineSignals = new Set(
-    individuals.signals.filter((s) => s.index < individuals.baselineCount).map((s) => s.index),
-  ).size
-  const firstSignal = signalAt(set, batches, baselineCount, 'any')
-  const firstRiseSignal = signalAt(set, batches, baselineCount, 'above')
-  if (!firstRiseSignal)
-    return {
-      firstSignal,
-      firstRiseSignal,
-      estimatedChangeStart: null,
-      shiftAfterChange: null,
-      baselineSignals,
-    }
-  const point = batchIndices.indexOf(firstRiseSignal.batchIndex)
-  const changePoint = estimateChangeStart(
-    individuals.values,
-    individuals.centerLine,
-    individuals.baselineCount,
-    point,
-    'up',
-  )
-  const c = batches[batchIndices[changePoint]]
-  const after = individuals.values.slice(changePoint)
-  return {
-    firstSignal,
-    firstRiseSignal,
-    estimatedChangeStart: { batchIndex: c.index, batchId: c.batchId, startText: c.startText },
-    shiftAfterChange: after.reduce((s, v) => s + v, 0) / after.length - individuals.centerLine,
-    baselineSignals,
-  }
-}
-
-function chartSet(
-  values: number[],
-  batchIndices: number[],
-  baseline: number,
-  batches: BatchEnergy[],
-  batchBaseline: number,
-): ChartSet {
-  const individuals = individualsChart(values, baseline)
-  const ewma = ewmaChart(values, individuals.centerLine, individuals.sigma, baseline)
-  const set = { batchIndices, individuals, ewma }
-  return { ...set, finding: finding(set, batches, batchBaseline) }
 }
 
 /** Resolve the ambient air of one batch: the log's own values, else the weather file, else null. */
@@ -204,6 +112,7 @@ function ambientOf(
       dryBulbC: row.ambientTempC,
       relativeHumidityPct: row.ambientRhPct,
       humidityRatioGPerKg: humidityRatioGPerKgFromRh(row.ambientTempC, row.ambientRhPct, p),
+      pressureKpa: p,
       source: 'log',
     }
   }
@@ -214,6 +123,7 @@ function ambientOf(
         dryBulbC: a.dryBulbC,
         relativeHumidityPct: a.relativeHumidityPct,
         humidityRatioGPerKg: a.humidityRatioGPerKg,
+        pressureKpa: a.pressureKpa,
         source: 'weather',
       }
     : null
@@ -280,127 +190,91 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     baselineCount,
     batches,
     baselineCount,
+    'MJ/kg water',
   )
-
-  let adjusted: EnergyChartAssessment['adjusted'] = null
-  let adjustedUnavailableReason: string | null = null
-  let extrapolation: string | null = null
-  const complete = batches.filter((b) => b.ambient !== null)
-  const completeBaseline = complete.filter((b) => b.index < baselineCount)
-  const regressorsOf = (b: BatchEnergy): number[] => [
-    b.ambient!.humidityRatioGPerKg,
-    b.ambient!.dryBulbC,
-    b.freshMassKg / 1000,
-  ]
-  if (completeBaseline.length < baselineCount) {
-    adjustedUnavailableReason = `${baselineCount - completeBaseline.length} baseline batches have no outside temperature and RH (add ambient_temp_c and ambient_rh_pct, or a weather file covering them)`
-  } else if (completeBaseline.length < ADJUSTMENT_REGRESSORS.length + 3) {
-    adjustedUnavailableReason = `the regression needs at least ${ADJUSTMENT_REGRESSORS.length + 3} baseline batches, got ${completeBaseline.length}`
-  } else {
-    try {
-      const model = ordinaryLeastSquares(
-        completeBaseline.map(regressorsOf),
-        completeBaseline.map((b) => b.specificEnergyMjPerKg),
-        ADJUSTMENT_REGRESSORS,
+  const warnings: string[] = batches
+    .filter((b) => b.thermalEfficiencyPct > 100)
+    .map(
+      (b) =>
+        `batch ${b.batchId} (line ${b.line}): ${b.specificEnergyMjPerKg.toFixed(2)} MJ/kg water is below the ideal ` +
+        `${(b.idealHeatMj / b.waterRemovedKg).toFixed(2)} MJ/kg (efficiency ${b.thermalEfficiencyPct.toFixed(0)} %): check its energy and masses`,
+    )
+  const phys = physicsView(batches, baselineCount)
+  const reg = regressionView(batches, baselineCount)
+  const physics = phys.view
+  const adjusted = reg.view
+  if (phys.view) {
+    warnings.push(...phys.leftOff.map((t) => `left off the physics view: ${t}`))
+    if (phys.view.fit.efficiency > 1) {
+      warnings.push(
+        `the physics fit gives an overall efficiency of ${(100 * phys.view.fit.efficiency).toFixed(0)} %, above what a dryer can reach: check drying_temp_c (or --drying-temp) and the energy figures`,
       )
-      const {
-        residuals: _fitResiduals,
-        leverages: _fitLeverages,
-        regressorMeans: _means,
-        centredInverse: _inverse,
-        ...regression
-      } = model
-      const fitted = complete.map((b) => predict(model, regressorsOf(b)))
-      const residuals = complete.map((b, i) => b.specificEnergyMjPerKg - fitted[i])
-      const leverages = complete.map((b) => leverage(model, regressorsOf(b)))
-      // Internally studentized in the baseline, prediction-standardized after it (Montgomery, Peck & Vining
-      // ch. 4 and 3): the chart then weighs a monitored batch by how far the regression had to reach for it.
-      const standardizedResiduals = residuals.map((e, i) =>
-        complete[i].index < baselineCount
-          ? e / Math.sqrt(Math.max(1e-9, 1 - leverages[i]))
-          : e / Math.sqrt(1 + leverages[i]),
+    }
+    const assumed = log.batches.filter((b) => b.dryingTempC === null).length
+    if (assumed > 0 && options.dryingTempC === undefined) {
+      warnings.push(
+        `the physics view takes the drying-air temperature as ${dryingTempC} °C (the default) for ${assumed} batches: the expected heat depends on it, so give drying_temp_c in the log or --drying-temp`,
       )
-      const set = chartSet(
-        standardizedResiduals,
-        complete.map((b) => b.index),
-        completeBaseline.length,
-        batches,
-        baselineCount,
-      )
-      // The size of a shift is reported in MJ/kg of plain residual (the standardized one is shrunk by √(1 + h)).
-      const change = set.finding.estimatedChangeStart
-      if (change) {
-        const from = set.batchIndices.indexOf(change.batchIndex)
-        const after = residuals.slice(from)
-        set.finding.shiftAfterChange = after.reduce((sum, v) => sum + v, 0) / after.length
-      }
-      adjusted = { ...set, regression, fitted, residuals, leverages, standardizedResiduals }
-      extrapolation = extrapolationWarning(
-        completeBaseline.map(regressorsOf),
-        complete.filter((b) => b.index >= baselineCount).map(regressorsOf),
-      )
-      if (complete.length < n)
-        assumptions.push(
-          `${n - complete.length} monitored batches lack outside air and are left off the adjusted chart`,
-        )
-    } catch (e) {
-      if (!(e instanceof RangeError)) throw e
-      adjustedUnavailableReason = e.message
     }
   }
-  return {
-    kind: 'energy-chart',
+  if (reg.view && reg.extrapolation) warnings.push(reg.extrapolation)
+  const complete = batches.filter((b) => b.ambient !== null).length
+  if (complete < n && complete >= baselineCount)
+    assumptions.push(
+      `${n - complete} monitored batches lack outside air and are left off the normalised views`,
+    )
+  const baselineWeather = baselineWeatherRange(batches, baselineCount)
+  const outside = outsideBaselineWeather(batches, baselineCount, baselineWeather)
+  const monitoredWithAir = batches.filter((b) => b.index >= baselineCount && b.ambient !== null).length
+  const choice = chooseAnswerView(
+    physics ? physics.fit : null,
+    adjusted,
+    outside.filter(Boolean).length,
+    monitoredWithAir,
+  )
+  const chosen: ChartSet =
+    choice.view === 'physics' ? physics! : choice.view === 'regression' ? adjusted! : raw
+  const answer = { ...choice, robustness: signalWithoutOutside(chosen, batches, outside) }
+  const cusumDesign: CusumDesign = {
+    k: CUSUM_K,
+    h: CUSUM_H,
+    inControlArl: twoSidedCusumArl(CUSUM_K, CUSUM_H, 0),
+    arlAtShiftSigma: [1, 2, 3].map((s) => ({ shiftSigma: s, arl: twoSidedCusumArl(CUSUM_K, CUSUM_H, s) })),
+  }
+  const partial = {
+    kind: 'energy-chart' as const,
     accounting: log.accounting,
     rejections: log.rejections,
     batches,
     baselineCount,
     raw,
+    physics,
+    physicsUnavailableReason: phys.view ? null : phys.reason,
     adjusted,
-    adjustedUnavailableReason,
+    adjustedUnavailableReason: reg.view ? null : reg.reason,
+    answer,
+    baselineWeather,
+    outsideBaselineWeather: outside,
+    cusumDesign,
     assumptions,
-    warnings: [
-      ...batches
-        .filter((b) => b.thermalEfficiencyPct > 100)
-        .map(
-          (b) =>
-            `batch ${b.batchId} (line ${b.line}): ${b.specificEnergyMjPerKg.toFixed(2)} MJ/kg water is below the ideal ` +
-            `${(b.idealHeatMj / b.waterRemovedKg).toFixed(2)} MJ/kg (efficiency ${b.thermalEfficiencyPct.toFixed(0)} %): check its energy and masses`,
-        ),
-      ...(extrapolation ? [extrapolation] : []),
-    ],
+    warnings,
     sources: [
       CONTROL_CHART_SOURCE,
+      `CUSUM: tabular (Page 1954, Biometrika 41:100), standardized by the baseline's x̄ and MR̄/d2, k = ${CUSUM_K}, h = ${CUSUM_H} ` +
+        '(Montgomery & Runger, Applied Statistics and Probability for Engineers, section 16-10); average run lengths by the integral equation ' +
+        '(Goel & Wu 1971; Vance 1986), checked against Lucas & Crosier (1982, Technometrics 24:199) Table 1.',
+      'Change point: posterior over the first shifted batch for one sustained step, flat prior on its size (Smith 1975, ' +
+        'Biometrika 62:407); its mode is close to the maximum-likelihood estimate (Hinkley 1970, Biometrika 57:1).',
+      'Physics view: heat to warm the outside air to the drying temperature at constant humidity ratio, for the air that ' +
+        "carries the water removed up to saturation at the heated air's wet bulb, plus the sorption heat (moist-air relations " +
+        'of ASHRAE Handbook — Fundamentals 2017 ch. 1 eqs 20, 30, 33); overall efficiency and fixed loss per batch fitted over ' +
+        'the baseline by least squares; views compared by leave-one-out (PRESS) error.',
       'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',
       'Heating values: higher heating values of src/drying/fuels.ts (US EIA Btu conversion factors).',
       'Regression: ordinary least squares over the baseline batches (specific energy on outside humidity ratio, outside temperature, load); ' +
-        'the adjusted chart plots residuals standardized by their leverage h, e/√(1 − h) in the baseline and e/√(1 + h) after it ' +
+        'the regression view plots residuals standardized by their leverage h, e/√(1 − h) in the baseline and e/√(1 + h) after it ' +
         '(Montgomery, Peck & Vining, Introduction to Linear Regression Analysis, ch. 3–4).',
     ],
-    summary: summaryLines(batches, baselineCount, raw, adjusted, adjustedUnavailableReason),
   }
-}
-
-const REGRESSOR_WORDS = ['outside humidity ratio', 'outside temperature', 'load']
-
-/**
- * A warning when monitored batches lie outside the baseline's range of a regressor: there the regression
- * extrapolates, and an error in a coefficient becomes a steady offset of the residuals that the run rules
- * and the EWMA read as a shift. Null when every monitored batch is inside the baseline's ranges.
- */
-export function extrapolationWarning(baseline: number[][], monitored: number[][]): string | null {
-  if (monitored.length === 0) return null
-  const parts: string[] = []
-  REGRESSOR_WORDS.forEach((word, j) => {
-    const lo = baseline.reduce((m, r) => (r[j] < m ? r[j] : m), Number.POSITIVE_INFINITY)
-    const hi = baseline.reduce((m, r) => (r[j] > m ? r[j] : m), Number.NEGATIVE_INFINITY)
-    const outside = monitored.filter((r) => r[j] < lo || r[j] > hi).length
-    if (outside > 0)
-      parts.push(`${outside} ${parts.length === 0 ? "lie outside the baseline's range of " : 'of '}${word}`)
-  })
-  if (parts.length === 0) return null
-  return (
-    `Of ${monitored.length} monitored batches, ${parts.length > 1 ? `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}` : parts[0]}: the adjusted chart ` +
-    'extrapolates the regression there, so a run of signals on those batches may come from an error in a coefficient ' +
-    'rather than the dryer. A baseline that spans the season (or a later re-fit) makes the adjusted chart safer.'
-  )
+  return { ...partial, summary: summaryLines(partial) }
 }

@@ -209,8 +209,10 @@ registerOperation({
   description:
     'A batch log (CSV, one row per batch: start, duration_h, fresh_mass_kg, final_mass_kg or initial/final_moisture_wb_pct, ' +
     'energy_kwh or fuel_amount + fuel_unit + fuel; optional ambient_temp_c, ambient_rh_pct, drying_temp_c) → specific energy ' +
-    '[MJ per kg water] and thermal efficiency per batch, individuals/moving-range charts with Western Electric rules and an EWMA chart ' +
-    'with limits from a baseline, and the same charts on the residual of a regression on outside humidity ratio, temperature and load. ' +
+    '[MJ per kg water] and thermal efficiency per batch, and three views (measured over expected energy from the dryer physics, ' +
+    'the residual of a regression on outside humidity ratio, temperature and load, the raw specific energy), each with ' +
+    'individuals/moving-range charts with Western Electric rules, an EWMA and a CUSUM chart with limits from a baseline; the answer ' +
+    '(summary[0]) names the batch where the rise most likely began and how likely. ' +
     'Send the log as a text/csv body (options in the query) or as multipart/form-data with parts `log`, optional `weather` ' +
     '(hourly weather for batches without ambient columns) and optional `options` (JSON, same keys). Same keys as ' +
     '`dryhours energy-chart --json`.',

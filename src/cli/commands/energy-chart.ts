@@ -20,10 +20,15 @@ Usage:
   dryhours energy-chart <log.csv> [--weather <file>] [--baseline <n>] [--json | --format text|json|html|csv]
                         [--out <file>] [options]
 
-Reads a batch log (one row per batch) and charts the fuel heat per kg of water removed: individuals and
-moving-range charts with limits from the first <n> batches (phase I) and the Western Electric run rules,
-an EWMA chart, and the same charts on what is left after a regression on outside humidity ratio,
-outside temperature and load. Prints the findings; --format html writes a page with the charts.
+Reads a batch log (one row per batch) and charts the fuel heat per kg of water removed in three views:
+measured against expected energy from the dryer's own physics (outside air heated to the drying
+temperature, efficiency and fixed loss fitted on the first <n> batches), the residual of a regression on
+outside humidity ratio, temperature and load, and the raw specific energy. Each view has individuals and
+moving-range charts with the Western Electric run rules, an EWMA and a CUSUM chart, limits from the
+baseline (phase I). The first line is the answer: from which batch the energy use rose, how likely that
+batch is the start, by how much, on which view (chosen by cross-validated error on the baseline); the
+next says whether the signal stands without the batches in weather the baseline never saw.
+--format html writes a page with the charts.
 
 Log columns (header row; units in the names):
   start (ISO 8601 date-time), duration_h, fresh_mass_kg, and final_mass_kg or both
@@ -43,7 +48,7 @@ Options:
   --elevation <m>      site elevation for the air pressure (default: the weather file's, else sea level)
   --json               the full assessment as JSON (same as --format json)
   --format <f>         text (default), json, html or csv; --table <id> picks one CSV table
-                       (batches, limits, regression, rejected-rows)
+                       (batches, limits, physics, regression, rejected-rows)
   --out <file>         write to a file instead of standard output
 
 Example (invented demo data):
@@ -63,16 +68,28 @@ export function energyChartText(a: EnergyChartAssessment): string {
   out.push(`Rows: ${acc.rowsRead} read, ${acc.rowsUsed} used, ${acc.rowsRejected} rejected`)
   for (const r of a.rejections) out.push(`  ${r.message}`)
   out.push('')
-  const lim = (name: string, s: EnergyChartAssessment['raw']) =>
-    `${name.padEnd(34)} centre ${f2(s.individuals.centerLine)}  σ̂ ${s.individuals.sigma.toFixed(3)}  limits ${f2(s.individuals.lowerControlLimit)} … ${f2(s.individuals.upperControlLimit)}  MR̄ ${s.individuals.meanMovingRange.toFixed(3)}  MR UCL ${s.individuals.movingRangeUpperLimit.toFixed(3)}`
-  out.push('Control limits from the baseline [MJ/kg water]:')
-  out.push(`  ${lim('specific energy', a.raw)}`)
-  if (a.adjusted) out.push(`  ${lim('residual after weather and load', a.adjusted)}`)
+  const lim = (name: string, set: EnergyChartAssessment['raw'], unit: string) => {
+    const i = set.individuals
+    const cp = set.finding.changePoint
+    return `${name.padEnd(34)} centre ${f2(i.centerLine)}  σ̂ ${i.sigma.toFixed(3)}  limits ${f2(i.lowerControlLimit)} … ${f2(i.upperControlLimit)} ${unit}  CUSUM rise ${set.finding.cusumRise?.batchId ?? '–'}  change ${cp ? `${cp.batchId} (${Math.round(100 * cp.probability)} %)` : '–'}`
+  }
+  out.push('Control limits from the baseline:')
+  if (a.physics) out.push(`  ${lim('measured / expected energy', a.physics, '%')}`)
+  if (a.adjusted) out.push(`  ${lim('residual after weather and load', a.adjusted, 'MJ/kg')}`)
+  out.push(`  ${lim('specific energy', a.raw, 'MJ/kg')}`)
+  if (a.physics) {
+    const f = a.physics.fit
+    out.push(
+      '',
+      `Physics fit over the baseline: overall efficiency ${(100 * f.efficiency).toFixed(1)} ± ${(100 * f.efficiencyStandardError).toFixed(1)} %, ` +
+        `fixed loss ${f.fixedLossMj.toFixed(0)} MJ per batch${f.fixedLossHeldAtZero ? ' (held at 0)' : ''}, cross-validated error ${f.crossValidatedError.toFixed(3)} MJ/kg`,
+    )
+  }
   if (a.adjusted) {
     const r = a.adjusted.regression
     out.push(
       '',
-      `Regression over the baseline (R² ${r.rSquared.toFixed(3)}, s ${r.residualStandardError.toFixed(3)} MJ/kg, ${r.observations} batches):`,
+      `Regression over the baseline (R² ${r.rSquared.toFixed(3)}, s ${r.residualStandardError.toFixed(3)} MJ/kg, cross-validated error ${a.adjusted.crossValidatedError.toFixed(3)} MJ/kg, ${r.observations} batches):`,
     )
     for (const c of r.coefficients) {
       out.push(
@@ -82,20 +99,26 @@ export function energyChartText(a: EnergyChartAssessment): string {
   }
   out.push(
     '',
-    'batch          start                  phase   MJ/kg  eff %  T °C  RH %  W g/kg  signals (raw | adjusted; ↑ more energy, ↓ less)',
+    'batch          start                  phase   MJ/kg  exp.  meas/exp %  T °C  RH %  W g/kg  out  signals (physics | regression | raw; ↑ more energy, ↓ less)',
   )
-  const raw = rulesByPoint(a.raw)
-  const adj = a.adjusted ? rulesByPoint(a.adjusted) : []
-  const adjByBatch = new Map<number, number>()
-  a.adjusted?.batchIndices.forEach((b, i) => {
-    adjByBatch.set(b, i)
-  })
+  const byBatch = (set: EnergyChartAssessment['raw'] | null) => {
+    const m = new Map<number, { point: number; rules: string }>()
+    if (!set) return m
+    const rules = rulesByPoint(set)
+    set.batchIndices.forEach((b, i) => {
+      m.set(b, { point: i, rules: rules[i].join(' ') || '–' })
+    })
+    return m
+  }
+  const phys = byBatch(a.physics)
+  const adj = byBatch(a.adjusted)
+  const raw = byBatch(a.raw)
   for (const b of a.batches) {
-    const ai = adjByBatch.get(b.index)
-    const signals = `${raw[b.index].join(' ') || '–'} | ${ai === undefined ? '–' : adj[ai].join(' ') || '–'}`
+    const p = phys.get(b.index)
     const amb = b.ambient
+    const signals = `${p?.rules ?? '–'} | ${adj.get(b.index)?.rules ?? '–'} | ${raw.get(b.index)?.rules ?? '–'}`
     out.push(
-      `${b.batchId.slice(0, 14).padEnd(14)} ${b.startText.slice(0, 22).padEnd(22)} ${(b.index < a.baselineCount ? 'base' : 'mon').padEnd(6)} ${f2(b.specificEnergyMjPerKg).padStart(6)} ${b.thermalEfficiencyPct.toFixed(1).padStart(6)} ${amb ? amb.dryBulbC.toFixed(1).padStart(5) : '    –'} ${amb ? amb.relativeHumidityPct.toFixed(0).padStart(5) : '    –'} ${amb ? amb.humidityRatioGPerKg.toFixed(2).padStart(7) : '      –'}  ${signals}`,
+      `${b.batchId.slice(0, 14).padEnd(14)} ${b.startText.slice(0, 22).padEnd(22)} ${(b.index < a.baselineCount ? 'base' : 'mon').padEnd(6)} ${f2(b.specificEnergyMjPerKg).padStart(6)} ${p ? f2(a.physics!.expectedSpecificEnergyMjPerKg[p.point]).padStart(5) : '    –'} ${p ? a.physics!.ratioPct[p.point].toFixed(1).padStart(10) : '         –'} ${amb ? amb.dryBulbC.toFixed(1).padStart(5) : '    –'} ${amb ? amb.relativeHumidityPct.toFixed(0).padStart(5) : '    –'} ${amb ? amb.humidityRatioGPerKg.toFixed(2).padStart(7) : '      –'}  ${a.outsideBaselineWeather[b.index] ? ' x ' : '   '}  ${signals}`,
     )
   }
   if (a.assumptions.length > 0) out.push('', 'Assumptions:', ...a.assumptions.map((s) => `  - ${s}`))

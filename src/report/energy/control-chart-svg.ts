@@ -3,8 +3,11 @@
  * One control chart as inline SVG in the report's visual language (palette, axes and accessible wrapper
  * of src/report/charts/svg.ts): points joined in batch order, the centre line, control limits (dashed),
  * optional 1σ/2σ zone lines (dotted, faint), a shaded phase I (baseline) area, and signal points drawn
- * as red diamonds (shape + colour, never colour alone) with the rule in their tooltip. Every point is a
- * `<g class="point">` with `data-batch`, `data-value` and `data-rules`.
+ * as red diamonds (shape + colour, never colour alone) with the rule in their tooltip. Batches whose
+ * weather lies outside the baseline's range get an open square around their mark (shape, not colour).
+ * Every point is a `<g class="point">` with `data-batch`, `data-value`, `data-rules` and, for those
+ * batches, `data-outside="true"`. An optional second series (the lower CUSUM, drawn below zero) is a dashed
+ * line with open circles.
  */
 import {
   type Frame,
@@ -26,6 +29,8 @@ export interface ControlChartPoint {
   value: number
   /** Rules that fired on this point, e.g. ['WE1', 'WE4']; empty when in control. */
   rules: string[]
+  /** The batch ran in weather outside the baseline's range. */
+  outside?: boolean
 }
 
 export interface ControlChartSvgOptions {
@@ -45,6 +50,8 @@ export interface ControlChartSvgOptions {
   unit: string
   /** Optional vertical marker (e.g. the estimated start of a change), by point index. */
   marker?: { index: number; label: string }
+  /** Optional second series (same x), e.g. the lower CUSUM drawn as −C⁻. */
+  second?: { values: number[]; label: string; rules: string[][] }
 }
 
 const FRAME: Frame = { width: 680, height: 260, left: 58, right: 14, top: 30, bottom: 40 }
@@ -55,6 +62,7 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
   const values = o.points.map((p) => p.value)
   const limitValues = [
     ...values,
+    ...(o.second?.values ?? []),
     o.centerLine,
     ...(Array.isArray(o.upper) ? o.upper : [o.upper]),
     ...(o.lower === null ? [] : Array.isArray(o.lower) ? o.lower : [o.lower]),
@@ -98,6 +106,23 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
       `<polyline class="series" points="${values.map((v, i) => `${px(x(i))},${px(y(v))}`).join(' ')}" fill="none" stroke="${HIGH_CONTRAST.blue}" stroke-width="1.2"/>`,
     )
   }
+  if (o.second && n > 1) {
+    const sv = o.second.values
+    parts.push(
+      `<polyline class="series series-second" points="${sv.map((v, i) => `${px(x(i))},${px(y(v))}`).join(' ')}" fill="none" stroke="${HIGH_CONTRAST.blue}" stroke-width="1" stroke-dasharray="3 2"/>`,
+    )
+    sv.forEach((v, i) => {
+      const rules = o.second!.rules[i] ?? []
+      const tip = `batch ${o.points[i].label}: ${o.second!.label} ${v.toFixed(3)}${rules.length ? `; signal ${rules.join(', ')}` : ''}`
+      const mark =
+        rules.length > 0
+          ? `<path d="M${px(x(i))},${px(y(v) - 4.5)}l4.5,4.5l-4.5,4.5l-4.5,-4.5z" fill="${HIGH_CONTRAST.red}" stroke="${INK.text}" stroke-width="0.6"/>`
+          : `<circle cx="${px(x(i))}" cy="${px(y(v))}" r="2" fill="${HIGH_CONTRAST.white}" stroke="${HIGH_CONTRAST.blue}" stroke-width="0.9"/>`
+      parts.push(
+        `<g class="point point-second" data-batch="${escapeHtml(o.points[i].label)}" data-value="${v}" data-rules="${escapeHtml(rules.join(' '))}"><title>${escapeHtml(tip)}</title>${mark}</g>`,
+      )
+    })
+  }
   if (o.marker && o.marker.index >= 0 && o.marker.index < n) {
     const mx = px(x(o.marker.index))
     parts.push(
@@ -112,8 +137,11 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
       p.rules.length > 0
         ? `<path d="M${cx},${px(y(p.value) - 4.5)}l4.5,4.5l-4.5,4.5l-4.5,-4.5z" fill="${HIGH_CONTRAST.red}" stroke="${INK.text}" stroke-width="0.6"/>`
         : `<circle cx="${cx}" cy="${cy}" r="2.2" fill="${HIGH_CONTRAST.blue}"/>`
+    const ring = p.outside
+      ? `<rect x="${px(Number(cx) - 5.5)}" y="${px(Number(cy) - 5.5)}" width="11" height="11" fill="none" stroke="${INK.text}" stroke-width="0.8"/>`
+      : ''
     parts.push(
-      `<g class="point" data-batch="${escapeHtml(p.label)}" data-value="${p.value}" data-rules="${escapeHtml(p.rules.join(' '))}"><title>${escapeHtml(tip)}</title>${mark}</g>`,
+      `<g class="point" data-batch="${escapeHtml(p.label)}" data-value="${p.value}" data-rules="${escapeHtml(p.rules.join(' '))}"${p.outside ? ' data-outside="true"' : ''}><title>${escapeHtml(p.outside ? `${tip}; weather outside the baseline's range` : tip)}</title>${mark}${ring}</g>`,
     )
   })
   const every = Math.max(1, Math.ceil(n / 8))
@@ -132,6 +160,22 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
       swatch: `<line x1="0" x2="14" y1="4" y2="4" stroke="${HIGH_CONTRAST.red}" stroke-width="1.3" stroke-dasharray="6 3"/>`,
       label: 'control limit',
     },
+    ...(o.second
+      ? [
+          {
+            swatch: `<line x1="0" x2="14" y1="4" y2="4" stroke="${HIGH_CONTRAST.blue}" stroke-width="1" stroke-dasharray="3 2"/><circle cx="7" cy="4" r="2" fill="${HIGH_CONTRAST.white}" stroke="${HIGH_CONTRAST.blue}" stroke-width="0.9"/>`,
+            label: o.second.label,
+          },
+        ]
+      : []),
+    ...(o.points.some((p) => p.outside)
+      ? [
+          {
+            swatch: `<rect x="1.5" y="-1.5" width="11" height="11" fill="none" stroke="${INK.text}" stroke-width="0.8"/>`,
+            label: 'outside baseline weather',
+          },
+        ]
+      : []),
   ]
   const body =
     parts[0] +

@@ -1,9 +1,11 @@
 /**
  * @module report/energy/energy-html
  * The energy control-chart page: one self-contained HTML document (inline CSS and SVG, no scripts) with
- * the findings in sentences, the individuals, moving-range and EWMA charts of specific energy and of the
- * weather-and-load residual, the regression, the limits and every batch. Same stylesheet and figure
- * format as the seasonal summary (src/report/report-html.ts). All user text is escaped.
+ * the findings in sentences (the answer first), then for each view (measured over expected energy from the
+ * dryer's physics, the weather-and-load residual, the raw specific energy) its individuals, moving-range,
+ * EWMA and CUSUM charts, with the batches in weather outside the baseline's range marked, the fits, the
+ * limits and every batch. Same stylesheet and figure format as the seasonal summary
+ * (src/report/report-html.ts). All user text is escaped.
  */
 import type { ChartSet, EnergyChartAssessment } from '../../analysis/energy/energy-chart.ts'
 import { escapeHtml } from '../escape.ts'
@@ -14,6 +16,7 @@ import { controlChartSvg } from './control-chart-svg.ts'
 import {
   batchTable,
   limitsTable,
+  physicsTable,
   regressionTable,
   rejectionsTable,
   rulesByPoint,
@@ -34,16 +37,29 @@ const CAUTIONS = [
   'Slow or stalled drying of grain raises mould and mycotoxin risk: check the moisture of every batch, not only its fuel.',
 ]
 
+interface ViewWords {
+  key: string
+  name: string
+  yLabel: string
+  /** Unit of the charted values, as printed. */
+  unit: string
+  /** Decimals of the charted values in the text. */
+  digits: number
+}
+
 function chartFigures(
   set: ChartSet,
   a: EnergyChartAssessment,
-  what: { key: string; name: string; yLabel: string },
+  what: ViewWords,
   prefix: string,
   next: () => number,
 ): string {
   const labels = set.batchIndices.map((b) => a.batches[b].batchId)
+  const outside = set.batchIndices.map((b) => a.outsideBaselineWeather[b])
+  const outsideCount = outside.filter(Boolean).length
   const rules = rulesByPoint(set)
   const ind = set.individuals
+  const d = what.digits
   const change = set.finding.estimatedChangeStart
   const markerIndex = change ? set.batchIndices.indexOf(change.batchIndex) : -1
   const marker = markerIndex >= 0 ? { index: markerIndex, label: `change ≈ ${change!.batchId}` } : undefined
@@ -51,22 +67,26 @@ function chartFigures(
   const signalText = rise
     ? `The first signal of more energy after the baseline is batch ${rise.batchId} (${rise.rules.join(', ')}), ${rise.batchesAfterBaseline} batches after the baseline.`
     : 'No signal of more energy after the baseline.'
+  const outsideText =
+    outsideCount > 0
+      ? ` ${outsideCount} batches (open squares) ran in weather outside the baseline's range.`
+      : ''
   const baseline = ind.baselineCount
   const figures: string[] = []
-  const nInd = next()
   figures.push(
     figureHtml({
       id: `${prefix}${what.key}-individuals`,
-      number: nInd,
+      number: next(),
       caption: `${what.name}: individuals chart, limits from the first ${baseline} batches`,
       svg: controlChartSvg({
         id: `${prefix}${what.key}-individuals-svg`,
         title: `${what.name}, individuals chart`,
-        description: `Centre ${fixed(ind.centerLine, 3)}, limits ${fixed(ind.lowerControlLimit, 3)} to ${fixed(ind.upperControlLimit, 3)} MJ/kg. ${signalText}`,
+        description: `Centre ${fixed(ind.centerLine, d + 1)}, limits ${fixed(ind.lowerControlLimit, d + 1)} to ${fixed(ind.upperControlLimit, d + 1)} ${what.unit}. ${signalText}${outsideText}`,
         points: ind.values.map((v, i) => ({
           label: labels[i],
           value: v,
-          rules: rules[i].filter((r) => r !== 'EWMA'),
+          rules: rules[i].filter((r) => !r.startsWith('EWMA') && !r.startsWith('CUSUM')),
+          outside: outside[i],
         })),
         baselineCount: baseline,
         centerLine: ind.centerLine,
@@ -74,21 +94,34 @@ function chartFigures(
         lower: ind.lowerControlLimit,
         zoneSigma: ind.sigma,
         yLabel: what.yLabel,
-        unit: 'MJ/kg',
+        unit: what.unit,
         marker,
       }),
-      alt: `${what.name} for ${ind.values.length} batches against a centre of ${fixed(ind.centerLine, 2)} MJ/kg and 3σ limits ${fixed(ind.lowerControlLimit, 2)} to ${fixed(ind.upperControlLimit, 2)} MJ/kg (σ̂ = MR̄/1.128 = ${fixed(ind.sigma, 3)}). ${signalText}`,
+      alt: `${what.name} for ${ind.values.length} batches against a centre of ${fixed(ind.centerLine, d)} ${what.unit} and 3σ limits ${fixed(ind.lowerControlLimit, d)} to ${fixed(ind.upperControlLimit, d)} ${what.unit} (σ̂ = MR̄/1.128 = ${fixed(ind.sigma, d + 1)}). ${signalText}${outsideText}`,
       table: {
         id: `${what.key}-individuals`,
         title: `${what.name} by batch`,
-        columns: ['batch', 'value [MJ/kg]', 'moving range [MJ/kg]', 'signals'],
-        rows: ind.values.map((v, i) => [labels[i], v, ind.movingRanges[i], rules[i].join(' ')]),
-        digits: [0, 3, 3, 0],
+        columns: [
+          'batch',
+          `value [${what.unit}]`,
+          `moving range [${what.unit}]`,
+          'outside baseline weather',
+          'signals',
+        ],
+        rows: ind.values.map((v, i) => [
+          labels[i],
+          v,
+          ind.movingRanges[i],
+          outside[i] ? 'yes' : '',
+          rules[i].join(' '),
+        ]),
+        digits: [0, d + 1, d + 1, 0, 0],
       },
-      note: 'Dotted lines: 1σ and 2σ zones of the Western Electric rules (WE1 one point beyond 3σ; WE2 two of three beyond 2σ; WE3 four of five beyond 1σ; WE4 eight in a row on one side). ↑ more energy than the baseline, ↓ less. Grey area: the baseline (phase I) the limits come from.',
+      note: 'Dotted lines: 1σ and 2σ zones of the Western Electric rules (WE1 one point beyond 3σ; WE2 two of three beyond 2σ; WE3 four of five beyond 1σ; WE4 eight in a row on one side). ↑ more energy than the baseline, ↓ less. Grey area: the baseline (phase I) the limits come from. Open squares: batches in weather outside the baseline’s range.',
     }),
   )
   const mrValues = ind.movingRanges.slice(1) as number[]
+  const mrSignals = new Set(ind.movingRangeSignals)
   figures.push(
     figureHtml({
       id: `${prefix}${what.key}-moving-range`,
@@ -97,32 +130,35 @@ function chartFigures(
       svg: controlChartSvg({
         id: `${prefix}${what.key}-moving-range-svg`,
         title: `${what.name}, moving-range chart`,
-        description: `Mean moving range ${fixed(ind.meanMovingRange, 3)}, upper limit D4·MR̄ = ${fixed(ind.movingRangeUpperLimit, 3)} MJ/kg; ${ind.movingRangeSignals.length} moving ranges above it.`,
+        description: `Mean moving range ${fixed(ind.meanMovingRange, d + 1)}, upper limit D4·MR̄ = ${fixed(ind.movingRangeUpperLimit, d + 1)} ${what.unit}; ${ind.movingRangeSignals.length} moving ranges above it.`,
         points: mrValues.map((v, i) => ({
           label: labels[i + 1],
           value: v,
-          rules: ind.movingRangeSignals.includes(i + 1) ? ['MR above D4·MR̄'] : [],
+          rules: mrSignals.has(i + 1) ? ['MR above D4·MR̄'] : [],
         })),
         baselineCount: baseline - 1,
         centerLine: ind.meanMovingRange,
         upper: ind.movingRangeUpperLimit,
         lower: null,
         zoneSigma: null,
-        yLabel: 'moving range [MJ/kg water]',
-        unit: 'MJ/kg',
+        yLabel: `moving range [${what.unit}]`,
+        unit: what.unit,
       }),
-      alt: `Moving ranges of ${what.name.toLowerCase()}: mean ${fixed(ind.meanMovingRange, 3)} MJ/kg over the baseline, upper limit ${fixed(ind.movingRangeUpperLimit, 3)} (D4 = 3.267, D3 = 0); ${ind.movingRangeSignals.length} points above it.`,
+      alt: `Moving ranges of ${what.name.toLowerCase()}: mean ${fixed(ind.meanMovingRange, d + 1)} ${what.unit} over the baseline, upper limit ${fixed(ind.movingRangeUpperLimit, d + 1)} (D4 = 3.267, D3 = 0); ${ind.movingRangeSignals.length} points above it.`,
       table: {
         id: `${what.key}-moving-range`,
         title: `Moving ranges of ${what.name.toLowerCase()}`,
-        columns: ['batch', 'moving range [MJ/kg]'],
+        columns: ['batch', `moving range [${what.unit}]`],
         rows: mrValues.map((v, i) => [labels[i + 1], v]),
-        digits: [0, 3],
+        digits: [0, d + 1],
       },
     }),
   )
   const e = set.ewma
   const ewmaFirst = e.firstMonitoringSignal
+  const ewmaRules = new Map<number, string[]>()
+  for (const sig of e.signals)
+    ewmaRules.set(sig.index, [...(ewmaRules.get(sig.index) ?? []), signalLabel('EWMA', sig.side)])
   figures.push(
     figureHtml({
       id: `${prefix}${what.key}-ewma`,
@@ -131,11 +167,12 @@ function chartFigures(
       svg: controlChartSvg({
         id: `${prefix}${what.key}-ewma-svg`,
         title: `${what.name}, EWMA chart`,
-        description: `EWMA with target ${fixed(e.centerLine, 3)} MJ/kg; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]}`}.`,
+        description: `EWMA with target ${fixed(e.centerLine, d + 1)} ${what.unit}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]}`}.`,
         points: e.ewma.map((v, i) => ({
           label: labels[i],
           value: v,
-          rules: e.signals.filter((s) => s.index === i).map((s) => signalLabel('EWMA', s.side)),
+          rules: ewmaRules.get(i) ?? [],
+          outside: outside[i],
         })),
         baselineCount: baseline,
         centerLine: e.centerLine,
@@ -143,16 +180,64 @@ function chartFigures(
         lower: e.lowerLimits,
         zoneSigma: null,
         yLabel: `EWMA of ${what.yLabel}`,
-        unit: 'MJ/kg',
+        unit: what.unit,
       }),
-      alt: `Exponentially weighted moving average of ${what.name.toLowerCase()} against ${fixed(e.centerLine, 2)} MJ/kg with limits that widen to ±${(e.limitWidthL * e.sigma * Math.sqrt(e.lambda / (2 - e.lambda))).toFixed(3)}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]} (${e.signals.find((s) => s.index === ewmaFirst)?.side === 'above' ? 'more' : 'less'} energy)`}.`,
+      alt: `Exponentially weighted moving average of ${what.name.toLowerCase()} against ${fixed(e.centerLine, d)} ${what.unit} with limits that widen to ±${fixed(e.limitWidthL * e.sigma * Math.sqrt(e.lambda / (2 - e.lambda)), d + 1)}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]} (${e.signals.find((s) => s.index === ewmaFirst)?.side === 'above' ? 'more' : 'less'} energy)`}.`,
       table: {
         id: `${what.key}-ewma`,
         title: `EWMA of ${what.name.toLowerCase()}`,
-        columns: ['batch', 'EWMA [MJ/kg]', 'lower limit', 'upper limit'],
+        columns: ['batch', `EWMA [${what.unit}]`, 'lower limit', 'upper limit'],
         rows: e.ewma.map((v, i) => [labels[i], v, e.lowerLimits[i], e.upperLimits[i]]),
-        digits: [0, 3, 3, 3],
+        digits: [0, d + 1, d + 1, d + 1],
       },
+    }),
+  )
+  const c = set.cusum
+  const f = set.finding
+  const cusumUp = new Set(c.signals.filter((s) => s.side === 'above').map((s) => s.index))
+  const cusumDown = new Set(c.signals.filter((s) => s.side === 'below').map((s) => s.index))
+  const cusumText = `${f.cusumRise ? `the upper sum first crosses h at batch ${f.cusumRise.batchId} (more energy)` : 'the upper sum stays below h after the baseline'}; ${f.cusumFall ? `the lower sum first crosses h at batch ${f.cusumFall.batchId} (less energy)` : 'the lower sum stays below h'}.`
+  figures.push(
+    figureHtml({
+      id: `${prefix}${what.key}-cusum`,
+      number: next(),
+      caption: `${what.name}: CUSUM (k = ${c.k}, h = ${c.h}, in σ units), restarted at the first monitored batch`,
+      svg: controlChartSvg({
+        id: `${prefix}${what.key}-cusum-svg`,
+        title: `${what.name}, CUSUM chart`,
+        description: `Upper sum C⁺ above zero and lower sum C⁻ drawn below zero, decision interval ±${c.h} σ; ${cusumText}`,
+        points: c.upper.map((v, i) => ({
+          // C⁺ (more energy) is the main series.
+          label: labels[i],
+          value: v,
+          rules: c.signals.some((s) => s.index === i && s.side === 'above')
+            ? [signalLabel('CUSUM', 'above')]
+            : [],
+          outside: outside[i],
+        })),
+        second: {
+          values: c.lower.map((v) => (v === 0 ? 0 : -v)),
+          label: '−C⁻ (less energy)',
+          rules: c.lower.map((_, i) => (cusumDown.has(i) ? [signalLabel('CUSUM', 'below')] : [])),
+        },
+        baselineCount: baseline,
+        centerLine: 0,
+        upper: c.h,
+        lower: -c.h,
+        zoneSigma: null,
+        yLabel: 'CUSUM [σ]',
+        unit: 'σ',
+        marker,
+      }),
+      alt: `Tabular CUSUM of ${what.name.toLowerCase()} standardized by the baseline's centre ${fixed(ind.centerLine, d)} ${what.unit} and σ̂ ${fixed(ind.sigma, d + 1)} ${what.unit}, k = ${c.k}, h = ${c.h}: ${cusumText}`,
+      table: {
+        id: `${what.key}-cusum`,
+        title: `CUSUM of ${what.name.toLowerCase()}`,
+        columns: ['batch', 'C⁺ [σ]', 'C⁻ [σ]', 'outside baseline weather'],
+        rows: c.upper.map((v, i) => [labels[i], v, c.lower[i], outside[i] ? 'yes' : '']),
+        digits: [0, 2, 2, 0],
+      },
+      note: 'C⁺ adds up how far each batch lies above the baseline centre, less k = 0.5 σ, and never drops below zero; it signals when it passes h = 5 σ. C⁻ does the same for batches below. On a steady dryer with a known baseline this gives a false signal about once in 465 batches; a step of 3σ is found after about 2.6 batches on average.',
     }),
   )
   return figures.join('\n')
@@ -187,20 +272,36 @@ export function renderEnergyArticle(a: EnergyChartAssessment, o: EnergyReportOpt
     ],
   ]
   const regression = regressionTable(a)
+  const physicsFit = physicsTable(a)
+  const used = (view: 'physics' | 'regression' | 'raw') =>
+    a.answer.view === view ? '<p class="used"><strong>The answer uses this view.</strong></p>' : ''
+  const physicsSection = a.physics
+    ? `<section class="physics"><h2>Against the dryer's own physics</h2>${used('physics')}
+<p>For every batch the heat an ideal dryer needs to warm this batch's outside air to the drying temperature and carry its water away, from the moist-air relations; the dryer's overall efficiency and a fixed loss per batch are fitted over the baseline. The charts show the measured energy as a percentage of that expectation (100 % = as in the baseline); its deviation from 100 % is standardized by the batch's leverage, so that a batch far from the baseline's weather counts for a little less.</p>
+${physicsFit ? `<div class="table-scroll">${tableHtml(physicsFit)}</div>` : ''}
+${chartFigures(a.physics, a, { key: 'physics', name: 'Energy against expected', yLabel: 'measured / expected [%]', unit: '%', digits: 1 }, prefix, next)}
+</section>`
+    : `<section class="physics"><h2>Against the dryer's own physics</h2><p class="missing">Not drawn: ${escapeHtml(a.physicsUnavailableReason ?? 'no outside air for the batches')}.</p></section>`
+  const adjusted = a.adjusted
+    ? `<section class="adjusted"><h2>After taking out weather and load by regression</h2>${used('regression')}
+<p>Specific energy regressed on outside humidity ratio, outside temperature and load over the baseline; the charts below show the residual, what the weather and the load do not explain, standardized by its leverage h (baseline e/√(1 − h), later batches e/√(1 + h)) so that a batch far from the baseline's weather counts for less. A straight line through the baseline's weather: trust it less where the batches are marked as outside that weather.</p>
+${regression ? `<div class="table-scroll">${tableHtml(regression)}</div>` : ''}
+${chartFigures(a.adjusted, a, { key: 'residual', name: 'Standardized residual', yLabel: 'standardized residual [MJ/kg water]', unit: 'MJ/kg', digits: 2 }, prefix, next)}
+</section>`
+    : `<section class="adjusted"><h2>After taking out weather and load by regression</h2><p class="missing">Not drawn: ${escapeHtml(a.adjustedUnavailableReason ?? 'no outside air for the batches')}.</p></section>`
   const rawFigures = chartFigures(
     a.raw,
     a,
-    { key: 'specific-energy', name: 'Specific energy', yLabel: 'specific energy [MJ/kg water]' },
+    {
+      key: 'specific-energy',
+      name: 'Specific energy',
+      yLabel: 'specific energy [MJ/kg water]',
+      unit: 'MJ/kg',
+      digits: 2,
+    },
     prefix,
     next,
   )
-  const adjusted = a.adjusted
-    ? `<section class="adjusted"><h2>After taking out weather and load</h2>
-<p>Specific energy regressed on outside humidity ratio, outside temperature and load over the baseline; the charts below show the residual, what the weather and the load do not explain, standardized by its leverage h (baseline e/√(1 − h), later batches e/√(1 + h)) so that a batch far from the baseline's weather counts for less.</p>
-${regression ? `<div class="table-scroll">${tableHtml(regression)}</div>` : ''}
-${chartFigures(a.adjusted, a, { key: 'residual', name: 'Standardized residual', yLabel: 'standardized residual [MJ/kg water]' }, prefix, next)}
-</section>`
-    : `<section class="adjusted"><h2>After taking out weather and load</h2><p class="missing">Not drawn: ${escapeHtml(a.adjustedUnavailableReason ?? 'no outside air for the batches')}.</p></section>`
   return `<article class="dryhours-report" data-report="energy-chart">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · heated-dryer energy</p><h1>Is the dryer using more energy than it should?</h1>
 <dl class="facts">${facts.map(([k, v]) => `<div class="kv"><dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd></div>`).join('')}</dl></header>
@@ -209,11 +310,12 @@ ${chartFigures(a.adjusted, a, { key: 'residual', name: 'Standardized residual', 
       ? `<div class="warnings"><h3>Check these batches</h3><ul>${a.warnings.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`
       : ''
   }</section>
-<section class="raw"><h2>Specific energy, batch by batch</h2>
-<p>Fuel heat (higher heating value) per kg of water removed. Outside air and load move this number from batch to batch, so the limits are wide.</p>
+${physicsSection}
+${adjusted}
+<section class="raw"><h2>Specific energy, batch by batch</h2>${used('raw')}
+<p>Fuel heat (higher heating value) per kg of water removed. Outside air and load move this number from batch to batch, so the limits are wide and a change in the weather looks like a change in the dryer.</p>
 ${rawFigures}
 </section>
-${adjusted}
 <section class="tables"><h2>Numbers</h2>
 ${tableSection(limitsTable(a), true)}
 ${tableSection(batchTable(a))}

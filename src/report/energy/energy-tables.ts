@@ -1,7 +1,8 @@
 /**
  * @module report/energy/energy-tables
  * The tables of the energy control-chart report, built once for the HTML table views and the CSV
- * download: batches, control limits, regression coefficients and rejected rows.
+ * download: batches, control limits, the physics fit and the views compared, regression coefficients and
+ * rejected rows.
  */
 import type { ChartSet, EnergyChartAssessment } from '../../analysis/energy/energy-chart.ts'
 import type { Cell, ReportTable } from '../tables.ts'
@@ -19,6 +20,7 @@ export function rulesByPoint(set: ChartSet): string[][] {
   }
   for (const s of set.individuals.signals) add(s.index, signalLabel(s.rule, s.side))
   for (const s of set.ewma.signals) add(s.index, signalLabel('EWMA', s.side))
+  for (const s of set.cusum.signals) add(s.index, signalLabel('CUSUM', s.side))
   return out
 }
 
@@ -35,13 +37,23 @@ function rulesByBatch(set: ChartSet | null, batches: number): (string | null)[] 
 export function batchTable(a: EnergyChartAssessment): ReportTable {
   const raw = rulesByBatch(a.raw, a.batches.length)
   const adj = rulesByBatch(a.adjusted, a.batches.length)
-  const residual: (number | null)[] = new Array(a.batches.length).fill(null)
-  const standardized: (number | null)[] = new Array(a.batches.length).fill(null)
-  const leverage: (number | null)[] = new Array(a.batches.length).fill(null)
+  const phys = rulesByBatch(a.physics, a.batches.length)
+  const nulls = () => new Array<number | null>(a.batches.length).fill(null)
+  const residual = nulls()
+  const standardized = nulls()
+  const leverage = nulls()
+  const ideal = nulls()
+  const expected = nulls()
+  const ratio = nulls()
   a.adjusted?.batchIndices.forEach((b, i) => {
     residual[b] = a.adjusted!.residuals[i]
     standardized[b] = a.adjusted!.standardizedResiduals[i]
     leverage[b] = a.adjusted!.leverages[i]
+  })
+  a.physics?.batchIndices.forEach((b, i) => {
+    ideal[b] = a.physics!.idealHeatMjPerKg[i]
+    expected[b] = a.physics!.expectedSpecificEnergyMjPerKg[i]
+    ratio[b] = a.physics!.ratioPct[i]
   })
   const rows: Cell[][] = a.batches.map((b) => [
     b.batchId,
@@ -57,11 +69,16 @@ export function batchTable(a: EnergyChartAssessment): ReportTable {
     b.ambient?.relativeHumidityPct ?? null,
     b.ambient?.humidityRatioGPerKg ?? null,
     b.ambient?.source ?? null,
-    raw[b.index],
+    a.outsideBaselineWeather[b.index] ? 'yes' : '',
+    ideal[b.index],
+    expected[b.index],
+    ratio[b.index],
+    phys[b.index],
     residual[b.index],
     leverage[b.index],
     standardized[b.index],
     adj[b.index],
+    raw[b.index],
   ])
   return {
     id: 'batches',
@@ -80,14 +97,19 @@ export function batchTable(a: EnergyChartAssessment): ReportTable {
       'outside RH [%]',
       'outside humidity ratio [g/kg]',
       'outside air from',
-      'signals, specific energy chart',
+      'outside baseline weather',
+      'ideal heat [MJ/kg water]',
+      'expected energy [MJ/kg water]',
+      'measured / expected [%]',
+      'signals, physics chart',
       'residual [MJ/kg water]',
       'leverage h',
       'standardized residual [MJ/kg water]',
-      'signals, adjusted chart',
+      'signals, regression chart',
+      'signals, specific energy chart',
     ],
     rows,
-    digits: [0, 0, 0, 0, 0, 0, 2, 1, 0, 1, 0, 2, 0, 0, 3, 3, 3, 0],
+    digits: [0, 0, 0, 0, 0, 0, 2, 1, 0, 1, 0, 2, 0, 0, 3, 3, 1, 0, 3, 3, 3, 0, 0],
   }
 }
 
@@ -101,10 +123,17 @@ export function limitsTable(a: EnergyChartAssessment): ReportTable {
     set.individuals.meanMovingRange,
     set.individuals.movingRangeUpperLimit,
     set.finding.firstRiseSignal?.batchId ?? null,
-    set.finding.estimatedChangeStart?.batchId ?? null,
+    set.finding.cusumRise?.batchId ?? null,
+    set.finding.changePoint?.batchId ?? null,
+    set.finding.changePoint ? 100 * set.finding.changePoint.probability : null,
+    set.finding.changePoint
+      ? `${set.finding.changePoint.intervalFrom.batchId} – ${set.finding.changePoint.intervalTo.batchId}`
+      : null,
   ]
-  const rows = [row('specific energy [MJ/kg water]', a.raw)]
+  const rows: Cell[][] = []
+  if (a.physics) rows.push(row('measured / expected energy [%]', a.physics))
   if (a.adjusted) rows.push(row('residual after weather and load [MJ/kg water]', a.adjusted))
+  rows.push(row('specific energy [MJ/kg water]', a.raw))
   return {
     id: 'limits',
     title: 'Control limits from the baseline',
@@ -116,11 +145,38 @@ export function limitsTable(a: EnergyChartAssessment): ReportTable {
       'UCL',
       'MR̄',
       'MR UCL = D4·MR̄',
-      'first signal of more energy',
-      'estimated start of the change',
+      'first signal of more energy (any rule)',
+      'first CUSUM signal of more energy',
+      'most likely start of the change',
+      'probability of that start [%]',
+      'batches holding ≥ 90 % of the probability',
     ],
     rows,
-    digits: [0, 3, 3, 3, 3, 3, 3, 0, 0],
+    digits: [0, 3, 3, 3, 3, 3, 3, 0, 0, 0, 0, 0],
+  }
+}
+
+/** The physics fit and the two views compared by cross-validated error, or null without the physics view. */
+export function physicsTable(a: EnergyChartAssessment): ReportTable | null {
+  const p = a.physics
+  if (!p) return null
+  const f = p.fit
+  const rows: Cell[][] = [
+    ['overall efficiency [%]', 100 * f.efficiency, 100 * f.efficiencyStandardError],
+    [
+      `fixed loss per batch [MJ]${f.fixedLossHeldAtZero ? ' (held at 0)' : ''}`,
+      f.fixedLossMj,
+      f.fixedLossStandardError,
+    ],
+    ['cross-validated error, physics view [MJ/kg water]', f.crossValidatedError, null],
+    ['cross-validated error, regression view [MJ/kg water]', a.adjusted?.crossValidatedError ?? null, null],
+  ]
+  return {
+    id: 'physics',
+    title: `Physics fit over the ${f.observations} baseline batches; the answer uses the ${a.answer.view} view`,
+    columns: ['quantity', 'estimate', 'standard error'],
+    rows,
+    digits: [0, 3, 3],
   }
 }
 
@@ -160,5 +216,12 @@ export function rejectionsTable(a: EnergyChartAssessment): ReportTable {
 /** Every table of the report, in page order. */
 export function energyTables(a: EnergyChartAssessment): ReportTable[] {
   const regression = regressionTable(a)
-  return [batchTable(a), limitsTable(a), ...(regression ? [regression] : []), rejectionsTable(a)]
+  const physics = physicsTable(a)
+  return [
+    batchTable(a),
+    limitsTable(a),
+    ...(physics ? [physics] : []),
+    ...(regression ? [regression] : []),
+    rejectionsTable(a),
+  ]
 }

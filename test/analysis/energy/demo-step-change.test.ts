@@ -81,14 +81,17 @@ describe('demo batch log (invented, climate-demo/energy)', () => {
     expect(JSON.parse(JSON.stringify(assessment))).toEqual(assessment)
   })
   it('the text names the batch where the change began', () => {
-    const line = assessment.summary.find((s) => s.startsWith('Weather- and load-adjusted chart'))
+    const line = assessment.summary.find((s) => s.startsWith('Regression (weather- and load-adjusted) chart'))
     expect(line).toMatch(/MORE energy per kg water at batch Q26-042/)
     expect(assessment.adjusted!.finding.estimatedChangeStart?.batchId).toBe('Q26-041')
+    // The demo's invented energy model is a straight line in the weather (batch-log-model.ts), which the
+    // regression matches and the physics form does not: the answer uses the regression view (measured: the
+    // physics view's cross-validated error is 4.4 times the regression's).
+    expect(assessment.answer.view).toBe('regression')
     // The answer line: the invented step is +7 % (batch-log-model.ts STEP_FRACTION); measured shift about 8 %.
     expect(assessment.summary[0]).toMatch(
-      /^Answer: the dryer's energy use per kg of water rose by about 0\.3\d MJ\/kg \([78] % /,
+      /^Answer: the dryer uses more energy per kg of water than expected from batch Q26-041 \(2026-10-24T07:00-06:00\) on \(\d+ % likely the first such batch; \d+ % sure it began between batches Q26-04\d and Q26-04\d\), about \+[78] % \(\+0\.3\d MJ\/kg\), on the regression/,
     )
-    expect(assessment.summary[0]).toMatch(/from batch Q26-041/)
   })
 })
 

@@ -17,11 +17,42 @@ describe('energy report page', () => {
     expect(html).not.toMatch(/(src|href)="https?:/i)
     expect(html.startsWith('<!doctype html>')).toBe(true)
   })
-  it('draws six charts (I, MR, EWMA for raw and adjusted), each an accessible image with a text alternative', () => {
+  it('draws twelve charts (I, MR, EWMA, CUSUM for the physics, regression and raw views), each accessible', () => {
     const svgs = html.match(/<svg [^>]*data-chart="control"[^>]*>/g) ?? []
-    expect(svgs).toHaveLength(6)
+    expect(svgs).toHaveLength(12)
     for (const s of svgs) expect(s).toMatch(/role="img" aria-labelledby="[^"]+-title [^"]+-desc"/)
-    expect((html.match(/<p class="alt"/g) ?? []).length).toBe(6)
+    expect((html.match(/<p class="alt"/g) ?? []).length).toBe(12)
+    for (const key of ['physics', 'residual', 'specific-energy'])
+      expect(html).toContain(`id="${key}-cusum-svg"`)
+  })
+  it('says which view the answer uses, on that view', () => {
+    expect(a.answer.view).toBe('regression')
+    const adjusted = html.slice(html.indexOf('<section class="adjusted">'))
+    expect(adjusted.slice(0, 200)).toContain('The answer uses this view.')
+    expect((html.match(/The answer uses this view\./g) ?? []).length).toBe(1)
+  })
+  it('marks the batches in weather outside the baseline’s range, the same ones as the assessment', () => {
+    const physics = html.slice(html.indexOf('id="physics-individuals-svg"'))
+    const svg = physics.slice(0, physics.indexOf('</svg>'))
+    const marked = [...svg.matchAll(/data-batch="([^"]+)"[^>]*data-outside="true"/g)].map((m) => m[1])
+    const expected = a.batches.filter((b) => a.outsideBaselineWeather[b.index]).map((b) => b.batchId)
+    expect(marked).toEqual(expected)
+    expect(marked.length).toBeGreaterThan(0)
+    expect(svg).toContain('outside baseline weather')
+  })
+  it('the CUSUM chart carries its sums and the signals of both sides', () => {
+    const part = html.slice(html.indexOf('id="residual-cusum-svg"'))
+    const svg = part.slice(0, part.indexOf('</svg>'))
+    const c = a.adjusted!.cusum
+    const upper = [...svg.matchAll(/<g class="point" data-batch="[^"]+" data-value="([^"]+)"/g)].map((m) =>
+      Number(m[1]),
+    )
+    expect(upper).toEqual(c.upper)
+    const lower = [
+      ...svg.matchAll(/<g class="point point-second" data-batch="[^"]+" data-value="([^"]+)"/g),
+    ].map((m) => Number(m[1]))
+    expect(lower).toEqual(c.lower.map((v) => (v === 0 ? 0 : -v)))
+    expect(svg).toMatch(/data-batch="Q26-042" data-value="[^"]+" data-rules="CUSUM↑"/)
   })
   it('marks every signalled batch on the charts with its rules and side', () => {
     // Residual individuals chart: the first signal after the change (Q26-042) carries a rule above.
@@ -60,7 +91,7 @@ describe('energy CSV', () => {
     )
     expect(lines[41]).toMatch(/^Q26-041,/)
     expect(() => renderEnergyCsv(a, 'nope')).toThrow(
-      /table must be one of batches, limits, regression, rejected-rows/,
+      /table must be one of batches, limits, physics, regression, rejected-rows/,
     )
   })
   it('neutralises spreadsheet formulas in user text (OWASP CSV injection)', () => {
