@@ -45,7 +45,9 @@ const RUNTIME_FAULT = [
  * `file.csv: Maximum call stack size exceeded`): such a message is never shown.
  */
 export function mentionsRuntimeText(message: string): boolean {
-  return [...RUNTIME_LIMIT, ...RUNTIME_FAULT].some((r) => new RegExp(r.source.replace(/^\^/, '')).test(message))
+  return [...RUNTIME_LIMIT, ...RUNTIME_FAULT].some((r) =>
+    new RegExp(r.source.replace(/^\^/, '')).test(message),
+  )
 }
 
 /** The engine ran out of stack or memory for this input. */
