@@ -18,6 +18,7 @@ const sections: Array<() => Promise<{ section: BenchSection }>> = [
   () => import('./sections/moist-air.ts'),
   () => import('./sections/ingest.ts'),
   () => import('./sections/engine.ts'),
+  () => import('./sections/bins.ts'),
   () => import('./sections/energy-detection.ts'),
 ]
 
@@ -95,6 +96,24 @@ const HEADLINES: { section: string; figure: string; label: string; target: strin
     target: 'reported',
   },
   { section: 'engine', figure: 'per-hour engine', label: 'per-hour engine throughput', target: 'reported' },
+  {
+    section: 'bins',
+    figure: 'ratio fast / reference by CPU time',
+    label: 'bin model fast form / reference implementation (CPU time)',
+    target: '≥ 20 x',
+  },
+  {
+    section: 'bins',
+    figure: 'fast model runs per second',
+    label: 'bin runs per second (40 days, 20 layers, CPU time)',
+    target: 'reported',
+  },
+  {
+    section: 'bins',
+    figure: 'assessment runs per second',
+    label: 'bin assessment runs per second (CPU time)',
+    target: 'reported',
+  },
   {
     section: 'energy-detection',
     figure: '7 % step, 10 logs: answer found within 3 batches',

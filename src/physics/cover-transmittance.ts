@@ -12,10 +12,30 @@
  * Diffuse sky and ground radiation are handled by the equivalent beam angles of Brandemuehl & Beckman (1980),
  * as given by Duffie & Beckman: θ_sky = 59.7 − 0.1388·β + 0.001497·β², θ_ground = 90 − 0.5788·β + 0.002693·β²
  * (degrees; β the cover slope) — the coefficients are from memory, not re-read.
+ *
+ * Cover materials (sources graded as in the product catalogue):
+ * - glass: refractive index 1.526 (Duffie & Beckman's value for glass in the solar range; from memory);
+ *   corroborated by a published ray-trace study that takes n = 1.52 and an extinction coefficient K = 4 m⁻¹ for
+ *   low-iron glass (International Journal of Photoenergy 2015, article 693463, "Theoretical and experimental
+ *   optical evaluation and comparison of symmetric 2D CPC and V-trough collector for photovoltaic applications",
+ *   Table 2, read). K of ordinary (greenish) float glass is several times higher (about 32 m⁻¹; from memory).
+ * - polyethylene film: no default is set. The one published pair found, n = 1.58 and σ = 3.86 mm⁻¹ for new
+ *   low-density polyethylene sheets before a year of arid-climate exposure (abstract of "Degradation
+ *   characteristics of the optical constants of PE-LD sheets", read in a university repository; authors and
+ *   journal not read), comes with a solar transmittance of only 0.42, far below that of clear greenhouse film, and
+ *   is not used. Callers give n and K·L of their film; the Fresnel and Bouguer relations here then apply.
  */
 
+/** Refractive index of glass in the solar range: 1.526 (Duffie & Beckman; from memory; 1.52 in a published ray-trace study, see above). */
+export const GLASS_REFRACTIVE_INDEX = 1.526
+/**
+ * Extinction coefficient of low-iron (water-white) glass [1/m]: 4, as taken in the published ray-trace study above
+ * (Int. J. Photoenergy 2015, 693463, Table 2). Multiply by the thickness [m] for `extinctionThickness`.
+ */
+export const LOW_IRON_GLASS_EXTINCTION_PER_M = 4
+
 export interface CoverSpec {
-  /** Refractive index of the cover material (glass about 1.526; from memory of Duffie & Beckman's examples). */
+  /** Refractive index of the cover material (glass: {@link GLASS_REFRACTIVE_INDEX}). */
   refractiveIndex: number
   /** Extinction coefficient × thickness of one cover, K·L (dimensionless); 0 for a non-absorbing cover. */
   extinctionThickness: number

@@ -21,6 +21,7 @@ import {
   sourced,
 } from './catalogue-helpers.ts'
 import {
+  ALAM_ISLAM_2015,
   BHONG_KALE_2020,
   CODEX_APRICOTS_VIA_SUMMARY,
   COSTA_FUJI_APPLE,
@@ -29,6 +30,7 @@ import {
   ESMAIILI_2014,
   HOSSAIN_BALA_2007,
   MEGHWAR_PJAR,
+  MORAES_2008_APPLE,
   NEWMAN_1996,
   OKSAR_2017,
   PAVKOV_2021,
@@ -256,7 +258,7 @@ export const appleSlices: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.12, 3, 0.97),
-      'GAB Xm0 0.12 chosen within the 0.107–0.168 recalled for Fuji apple at 50–70 °C (Moraes, Rosa & Pinto, not re-read); C = 3, K = 0.97 and no temperature term from memory; Kaymak-Ertekin & Gedik 2004 (LWT 37:429) give apple constants at 30–60 °C, not read',
+      `GAB Xm0 0.12 chosen from memory inside the 0.107–0.168 kg/kg db read for Fuji apple desorption at 50–70 °C in ${MORAES_2008_APPLE}; C = 3, K = 0.97 and no temperature term: from memory. The middle of the read range (0.1375) with these C and K would put dried apple at 21.0–23.7 % wb over aw 0.60–0.65, above the dried-fruit band of Beuchat 1981 (15–20 %, checked in the tests): C and K must be read before Xm0 is. Kaymak-Ertekin & Gedik 2004 (LWT 37:429) give apple constants at 30–60 °C, not read`,
       'memory',
       [30, 70],
       [10, 90],
@@ -385,11 +387,17 @@ export const onionSlices: ProductProfile = {
   maxProductTempC: sourced(60, 'browning and pungency loss above about 60 °C; from memory', 'memory'),
   isotherm: {
     desorption: isotherm(
-      gab(0.07, 4, 0.95),
-      'GAB Xm0 0.07, C 4, K 0.95 and no temperature term: from memory (modified Halsey fits onion best at 30–50 °C, Viswanathan, Jayas & Hulasare 2003, Biosyst. Eng. 86:465, not re-read)',
+      gab(0.11, 4, 0.95),
+      'GAB C 4, K 0.95 and no temperature term: from memory (modified Halsey fits onion shreds best at 30–50 °C and 15–85 % RH, Viswanathan, Jayas & Hulasare 2003, Biosyst. Eng. 86:465, abstract read; its constants are not in the abstract)',
       'memory',
       [30, 50],
       [15, 85],
+      {
+        xm0: param(
+          `${ALAM_ISLAM_2015}: air-dried, untreated onion at room temperature (saturated salts, aw 0.11–0.93), GAB monolayer moisture 11.0 g/100 g dry matter (BET 9.8; vacuum-dried: GAB 8.2, BET 9.7)`,
+          'published',
+        ),
+      },
     ),
   },
   kinetics: kinetics(

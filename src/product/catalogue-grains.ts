@@ -4,11 +4,19 @@
  * so the constants recalled for corn and wheat are graded `memory` and checked in the tests against the grain EMC
  * table of the Wikipedia article "Equilibrium moisture content" and the University of Kentucky chart; rough rice
  * uses constants read in an abstract (Muñoz & Rebufel); soybean and sorghum constants were fitted by dryhours to
- * those tables.
+ * those tables. The corn thin-layer (Thompson) constants are as transcribed in public code (`transcribed`).
  */
 
 import { isotherm, kinetics, param, SAFE_AW_MOULD, sourced } from './catalogue-helpers.ts'
-import { GELY_GINER_2007, IRRI_DRYING, MUNOZ_REBUFEL_RICE, UKY_EMC_2012, WIKIPEDIA_EMC } from './citations.ts'
+import {
+  GELY_GINER_2007,
+  GONELI_WHEAT,
+  IRRI_DRYING,
+  MUNOZ_REBUFEL_RICE,
+  SIMULADOR_SECAGEM,
+  UKY_EMC_2012,
+  WIKIPEDIA_EMC,
+} from './citations.ts'
 import type { ProductProfile } from './profile.ts'
 
 const GRAIN_CAUTIONS = [
@@ -39,7 +47,7 @@ export const shelledCorn: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       { model: 'modified-chung-pfost', a: 374.34, b: 0.18662, c: 31.696 },
-      `modified Chung–Pfost constants as commonly given for ASAE D245.6 (after Chen & Morey 1989): from memory, ${D245_NOT_READ}; checked in the tests within 0.8 pt of the Wikipedia corn EMC table`,
+      `modified Chung–Pfost constants as commonly given for ASAE D245.6 (after Chen & Morey 1989): from memory, ${D245_NOT_READ}; checked in the tests within 0.8 pt of the Wikipedia corn EMC table. The standard's modified Henderson constants for corn were found transcribed in public code (K 8.6541e-5, N 1.8634, C 49.81) but not adopted: with them the natural-air bin test misses the published drying time (see docs/product-sources.md)`,
       'memory',
       [0, 50],
       [20, 90],
@@ -49,8 +57,14 @@ export const shelledCorn: ProductProfile = {
     { model: 'thompson-corn' },
     8,
     'sphere',
-    'Thompson, Peart & Foster 1968, Mathematical simulation of corn drying — a new model (title and authors read; the equation constants A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T) are from memory); kernel size 8 mm from memory',
+    'kernel size 8 mm: from memory (the Thompson equation is a thin-layer equation for the kernel bed; the size is not used to scale it)',
     'memory',
+    {
+      thompson: param(
+        `Thompson, Peart & Foster 1968, Mathematical simulation of corn drying — a new model, Trans. ASAE 11 (title and authors read; constants not): t = A·ln MR + B·(ln MR)², A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T), T in °C, t in h, as given in ${SIMULADOR_SECAGEM}; the same four constants are in a second public Thompson-model code (core.py, thompson_AB, "milho", whose repository the search index does not name) and with the values dryhours used before this was read`,
+        'transcribed',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(
     8,
@@ -83,11 +97,17 @@ export const wheat: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.25, tRefC: 40, activationEnergyJPerMol: 30000 } },
+    { model: 'lewis', k: { form: 'arrhenius', kRefPerH: 0.25, tRefC: 40, activationEnergyJPerMol: 42000 } },
     3.5,
     'sphere',
-    'Lewis k = 0.25 h⁻¹ at 40 °C for a thin layer of wheat, Ea 30 kJ/mol, kernel 3.5 mm: from memory, not verified',
+    'Lewis k = 0.25 h⁻¹ at 40 °C for a thin layer of wheat, kernel 3.5 mm: from memory, not verified',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${GONELI_WHEAT}: wheat from 0.32 db dried at 25–55 °C and 55 % RH, liquid-diffusion coefficient 8.6775e-11 to 42.8743e-11 m²/s (41.0977e-11 in the English abstract), Arrhenius activation energy 42.00 kJ/mol (the English abstract says "rough rice" where the Portuguese says wheat)`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(3.5, 'kernel size; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(30, 'about a 4 cm layer at 770 kg/m³; from memory', 'memory'),

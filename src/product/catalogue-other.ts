@@ -24,6 +24,7 @@ import {
   JAIN_PATHARE_2007,
   NDUKWU_2010,
   RYBKA_2021,
+  SABLANI_2001,
   SANDOVAL_2020,
   WEXLER_HASEGAWA_1954,
 } from './citations.ts'
@@ -95,10 +96,16 @@ export const fishFillets: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.0494, 10, 0.95),
-      'GAB Xm0 4.94 % db recalled for freeze-dried sardine (Sablani et al. 2001, Drying Technol. 19:673, not re-read); C 10, K 0.95 and no temperature term from memory (sardine muscle desorption at 25, 35 and 50 °C is best fitted by Oswin: Hadrich, Boudhrioua & Kechaou 2008, Food Bioprod. Process. 86:242, abstract; constants not read)',
+      'GAB C 10, K 0.95 and no temperature term: from memory (sardine muscle desorption at 25, 35 and 50 °C is best fitted by Oswin: Hadrich, Boudhrioua & Kechaou 2008, Food Bioprod. Process. 86:242, abstract; constants not read)',
       'memory',
       [25, 50],
       [10, 75],
+      {
+        xm0: param(
+          `${SABLANI_2001}: freeze-dried sardines at 25, 40 and 50 °C (isopiestic method), GAB monolayer moisture Xm 4.94 % db; net isosteric heat 12.07 to 0.86 kJ/mol from 2.76 to 37.5 % db (here without a temperature term)`,
+          'published',
+        ),
+      },
     ),
   },
   kinetics: kinetics(

@@ -81,3 +81,19 @@ export const ALVES_COFFEE =
   'Alves G.E., Isquierdo E.P., Borém F.M., Siqueira V.C., Oliveira P.D., Andrade E.T. n.d., Drying kinetics of natural coffee for different temperatures and low relative humidity, Coffee Science (UFLA), article 422 (abstract; the year is not shown on the page read)'
 export const UKY_EMC_2012 =
   'Lee C. 2012 (Sept. 25), Moisture content charts, University of Kentucky Grain Crops blog, quoting the EMC chart by S. McNeill (page read)'
+
+// Transcriptions in public code (read in the stored copy of the repository named; the originals were not read)
+export const SIMULADOR_SECAGEM =
+  'the public code jaugustodantas/projetoSimuladorDeSecagem (GitHub), calculoSecagem.py: a Thompson-model corn drying simulator whose calculoVariavelA/B give A = -1.706 + 0.0088·T and B = 148.7·exp(-0.059·T) with T the equilibrium temperature in °C and t in h; its companion calculoSecagemM.py says it follows the equations of "the book by Juarez" (J. S. Silva\'s Brazilian drying and storage textbook, eqs. 24-39; the book was not read)'
+
+// Wheat
+export const GONELI_WHEAT =
+  'Goneli A.L.D., Corrêa P.C., Resende O., Reis Neto S.A. n.d., Estudo da difusão de umidade em grãos de trigo durante a secagem (Study of moisture diffusion in wheat grain drying), Ciênc. Tecnol. Aliment. (SciELO Brazil; abstract read, authors on a document-sharing copy of the first page; the year is not shown on the copies read)'
+
+// Apple, fish
+export const MORAES_2008_APPLE =
+  'Moraes M.A., Rosa G.S., Pinto L.A.A. n.d., Moisture sorption isotherms and thermodynamic properties of apple Fuji and garlic (abstract in the FURG institutional repository, handle 1/6695; the year is not shown on the page read)'
+export const SABLANI_2001 =
+  'Sablani S.S., Myhara R.M., Al-Attabi Z.H., Al-Mugheiry M.M. 2001, Water sorption isotherms of freeze dried fish sardines, Drying Technol. 19(3-4):673–680 (abstract on the Sultan Qaboos University research portal)'
+export const ALAM_ISLAM_2015 =
+  'Alam Md.M., Islam Md.N. 2015, Study on water sorption isotherm of summer onion, Bangladesh J. Agril. Res. 40(1):35–51 (abstract, on a document-sharing copy of the first page)'

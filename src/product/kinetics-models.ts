@@ -8,7 +8,7 @@
  * - Fick diffusion (Crank 1975, *The Mathematics of Diffusion*, eqs 4.18, 5.23, 6.20; constant Deff,
  *   uniform initial moisture, surface at equilibrium): slab of thickness 2L drying from both faces,
  *   infinite cylinder and sphere of radius r (see `diffusion.ts`).
- * - Thompson et al. 1968 (shelled corn, *Trans. ASAE* 11:582): t = A·ln MR + B·(ln MR)² [from memory].
+ * - Thompson et al. 1968 (shelled corn, *Trans. ASAE* 11:582): t = A·ln MR + B·(ln MR)² [constants as transcribed in public code].
  * Rate constants depend on temperature by Arrhenius, k = kRef·exp[−Ea/R·(1/T − 1/Tref)] (T in K), or, for
  * Wang & Singh 1978 (rough rice), linearly on T and RH.
  */
@@ -98,8 +98,10 @@ export function diffusivityAt(eq: Extract<KineticsEquation, { model: 'diffusion'
 
 /**
  * Constants of the Thompson, Peart & Foster (1968) thin-layer equation for shelled corn in the °C form
- * A = a0 + a1·T, B = b0·exp(b1·T): from memory (the paper's title and authors were read, its constants were not);
- * the °C form agrees with the °F form A = −1.862 + 0.00488·T_F, B = 427.4·exp(−0.033·T_F), also from memory.
+ * A = a0 + a1·T, B = b0·exp(b1·T), t in h: the paper's constants were not read; these four are as transcribed in
+ * public Thompson-model drying code (cited with the corn profile in `catalogue-grains.ts`), and agree with the
+ * values dryhours had from memory; the °C form agrees with the °F form A = −1.862 + 0.00488·T_F,
+ * B = 427.4·exp(−0.033·T_F) (from memory).
  */
 export const THOMPSON_CORN = {
   a0: { value: -1.706, unit: 'h', label: 'A = a0 + a1·T: a0' },
@@ -108,7 +110,7 @@ export const THOMPSON_CORN = {
   b1: { value: -0.059, unit: '1/°C', label: 'B = b0·exp(b1·T): b1' },
 } as const
 
-/** Thompson et al. 1968 coefficients for shelled corn, T = drying-air temperature [°C], t in h [from memory]. */
+/** Thompson et al. 1968 coefficients for shelled corn, T = drying-air temperature [°C], t in h (see THOMPSON_CORN). */
 export function thompsonCornCoefficients(tC: number): { a: number; b: number } {
   checkConditions(tC, 50)
   const c = THOMPSON_CORN

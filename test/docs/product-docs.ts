@@ -61,7 +61,7 @@ const BEFORE = { total: 345, published: 78, transcribed: 0, fitted: 14, memory: 
 const NOT_READ_PUBLICATIONS = [
   'ASAE D245.5 (1995) / ASABE D245.6 (2007), Moisture relationships of plant-based agricultural products: the constant tables for corn, wheat, rough rice, soybean, sorghum and others (only the cover page of a copy was reachable).',
   'Chen C.C., Morey R.V. 1989, Comparison of four EMC/ERH equations, Trans. ASAE 32(3): the corn modified Chung–Pfost constants.',
-  'Thompson T.L., Peart R.M., Foster G.H. 1968, Mathematical simulation of corn drying — a new model, Trans. ASAE 11: the thin-layer constants (title and authors read, constants not).',
+  'Thompson T.L., Peart R.M., Foster G.H. 1968, Mathematical simulation of corn drying — a new model, Trans. ASAE 11: the thin-layer constants (title and authors read, constants not; the four constants used are now `transcribed` from public code, see below).',
   'Wang C.Y., Singh R.P. 1978, ASAE paper 78-3001: the rough-rice Page equation.',
   'Basunia M.A., Abe T. 2001, Moisture desorption isotherms of medium-grain rough rice, J. Stored Prod. Res. 37:205–219: modified Chung–Pfost coefficients (abstract read; table not).',
   'Kaymak-Ertekin F., Gedik A. 2004, Sorption isotherms and isosteric heat of sorption for grapes, apricots, apples and potatoes, LWT 37(4):429–438: Halsey and GAB constants at 30, 45 and 60 °C (abstract read; tables not). The temperature terms the fruit isotherms lack are in this paper.',
@@ -75,6 +75,26 @@ const NOT_READ_PUBLICATIONS = [
   'Drying of ground and half-cut figs (var. Mission), J. Eng. (Hindawi) 2013:710830: Deff at 45, 55 and 65 °C and activation energy 56.86 kJ/mol for half-cut figs, 28.21 for ground figs (abstract read; authors not shown on the copy read, so not used).',
   'Hssaini L., Ouaabou R., Hanine H., Razouk R., Idlimam A. 2021, Sci. Rep. 11:21266: fig slices in a convective solar dryer at 60–80 °C, activation energy 4699–7502 kJ/kg (about 85–135 kJ/mol): slices, not whole figs, so not used for the whole-fig profile.',
   "Doymaz I. 2012 (grapes), Doymaz 2005 (figs, J. Food Eng. 71:403–407), Xanthopoulos et al. 2010 (figs): the thin-layer model constants and the experiments' weather (abstracts read; tables not).",
+]
+
+/** Counts at the start of the second pass (same counting, catalogue of commit 6e9459f). */
+const BEFORE_SECOND_PASS = {
+  isotherm: { total: 108, published: 11, transcribed: 0, fitted: 7, memory: 90 },
+  kinetics: { total: 113, published: 13, transcribed: 0, fitted: 6, memory: 94 },
+}
+
+/** The second pass: other routes to the numbers, what they gave and what they did not. */
+const SECOND_PASS = [
+  'Routes tried (about 85 look-ups): the code corpus of public repositories (search by meaning, exact strings of authors and constants such as "Chung-Pfost", "modified Henderson", "D245", "Kaymak-Ertekin", "Tsami", "Maroulis", "VB-PHAST", repositories by name); stored web pages, aiming at full-text copies and at the table pages some publishers serve separately (Springer Open, Nature, a Korean journal); the documentation corpus (R sorption packages). Journal papers on document-sharing sites, SciELO and MDPI are stored from their beginning only (title, authors, abstract, first lines), so a table deep in a paper could not be reached this way either.',
+  "Adopted, `transcribed`: the Thompson, Peart & Foster (1968) corn thin-layer constants A = −1.706 + 0.0088·T, B = 148.7·exp(−0.059·T), as given in the public code jaugustodantas/projetoSimuladorDeSecagem (calculoSecagem.py; it follows the equations of J. S. Silva's Brazilian drying textbook, not read). A second public Thompson-model code (core.py, whose repository the index does not name) has the same four constants; they also agree with the values used before.",
+  'Adopted, `published`: wheat activation energy 42.00 kJ/mol (Goneli, Corrêa, Resende & Reis Neto, Ciênc. Tecnol. Aliment., abstract on SciELO; authors read on a copy of the first page; year not shown). Check in test/product/kinetics.test.ts: the two diffusivities the abstract gives (25 and 55 °C) are 1 % apart from what 42.00 kJ/mol predicts.',
+  'Adopted, `published`: fish GAB monolayer Xm 4.94 % db (Sablani, Myhara, Al-Attabi & Al-Mugheiry 2001, Drying Technol. 19:673, freeze-dried sardines at 25–50 °C; abstract on the university research portal). It had been recalled with the right value; now read.',
+  'Adopted, `published`: onion GAB monolayer 11.0 g/100 g dry matter for air-dried untreated onion (Alam & Islam 2015, Bangladesh J. Agril. Res. 40:35, abstract; BET 9.8, vacuum-dried GAB 8.2). It replaces a recalled 0.07; C and K stay recalled. No test outside the source could be run on it: the abstract gives no equilibrium point. Effect: the recalled 5 % wb target now sits at aw 0.16 at 30 °C (0.26 before), so onion needs drier air to finish; the target itself is from memory and should follow the water activity (issue item 6).',
+  'Read, not adopted: Fuji apple GAB monolayer 0.107–0.168 kg/kg db at 50–70 °C (Moraes, Rosa & Pinto, abstract in the FURG repository). The 0.12 in use lies inside it and stays `memory` (it was chosen, not derived): the middle of the range with the recalled C and K puts dried apple at 21.0–23.7 % wb over aw 0.60–0.65, outside the Beuchat dried-fruit band the tests check, so C and K must be read first.',
+  "Found, not adopted: the ASABE D245.6 modified Henderson constants for shelled corn (K 8.6541e-5, N 1.8634, C 49.81), as given in the public codes BoujeeEnjinia1701/grainguard (docs/04-calcs/sizing.py, naming the standard) and farmlab/agronopy (agronopy/crop/maize/grain.py), and in a third public file the index does not name. They agree with the University of Kentucky chart at 21.1 °C/50 % (11.2 vs 11.3 % wb) and lie 0.45–0.80 pt below the Wikipedia table at RH 25–40 %, but with them the natural-air bin test (test/drying/deep-bed, UNL estimate 20–27 days) takes 33.8 days and their Clausius–Clapeyron heat of sorption is 29 % below Thompson's bound-water relation at M = 0.10 (from memory): the recalled Chung–Pfost constants, which pass both, stay (as `memory`) until the standard itself is read.",
+  'Found, not adopted: modified Chung–Pfost constants for wheat (610.34, 0.15526, 93.213, the values in use) in a public Python file that cites "Storage of Cereal Grains and Their Products, 5th ed., p. 272", and ASAE modified Henderson constants for soybean (30.5327e-5, 134.136, 1.2164) and rough rice (1.9187e-5, 51.161, 2.4451) in two other public files: the search index does not name their repositories, so a user could not follow the citation.',
+  'Found, not adopted: sorghum activation energies 20.94–27.32 kJ/mol by initial moisture (Eng. Agríc. 39(6):737, 2019) and half-cut fig 56.86 kJ/mol (J. Eng. 2013:710830): the copies read show no authors. Seedless-grape effective diffusivity 1.66e-11 m²/s in open sun (Doymaz 2012, first page of a copy): with the 8.6 mm radius it is a first-order rate of about 0.008 h⁻¹ over elapsed time, half the 0.0162 h⁻¹ fitted at an assumed constant 35 °C; left to the calibration through the engine. An apple GAB set with temperature terms in a public project is its own pooled fit, not a transcription; an onion Oswin set in public code says "unknown source".',
+  'Looked for and not reached (first page or abstract only): Kaymak-Ertekin & Gedik 2004 (grapes, apricots, apples); Tsami et al. 1990, Ayranci et al. 1990, Saravacos et al. 1986 (raisins, figs, prunes, apricots); Esmaiili 2014 beyond the abstract (raisin C and K); PMC3550902 (mint GAB); Getahun et al. 2020 (chilli); Corrêa et al. 2010 (coffee); Hadrich et al. 2008 and Djendoubi et al. 2009 (sardine); Ben Mariem & Ben Mabrouk 2015 (tomato); ASAE D245.5 copies on document-sharing sites (cover page only); Wang & Singh 1978 (rough rice Page); hop and parchment-coffee kinetics (abstracts without constants).',
 ]
 
 export function renderProductSourcesDoc(): string {
@@ -119,6 +139,18 @@ export function renderProductSourcesDoc(): string {
     '"our assumption" or "from memory" in their own text; most of the others cited only the project\'s gathering notes,',
     'not a document a user can open. They were re-read where a copy could be found and re-graded where not: the',
     'share of memory rose because nothing is called published any more that was not read.',
+    '',
+    '## Second pass: code, repositories and full-text pages',
+    '',
+    '| kind | numbers | level counts before (published / transcribed / fitted / memory) | after | memory share before → after |',
+    '|---|---:|---|---|---|',
+    ...(['isotherm', 'kinetics'] as const).map((g) => {
+      const b = BEFORE_SECOND_PASS[g]
+      const c = counts[g]
+      return `| ${GROUP_NAMES[g]} | ${c.total} | ${b.published} / ${b.transcribed} / ${b.fitted} / ${b.memory} | ${c.published} / ${c.transcribed} / ${c.fitted} / ${c.memory} | ${((100 * b.memory) / b.total).toFixed(0)} % → ${((100 * c.memory) / c.total).toFixed(0)} % |`
+    }),
+    '',
+    ...SECOND_PASS.map((p) => `- ${p}`),
     '',
     '## Publications that exist but could not be read here',
     '',

@@ -3,10 +3,11 @@ import {
   coverTransmittance,
   diffuseEquivalentAnglesDeg,
   fresnelReflectance,
+  GLASS_REFRACTIVE_INDEX,
   transmittedIrradianceWm2,
 } from '../../src/physics/cover-transmittance.ts'
 
-const GLASS = { refractiveIndex: 1.526, extinctionThickness: 0 }
+const GLASS = { refractiveIndex: GLASS_REFRACTIVE_INDEX, extinctionThickness: 0 }
 
 describe('cover transmittance (Duffie & Beckman ch. 5 method)', () => {
   it('reflects 27.1 % of natural light at 75° on n = 1.61 (worked problem, PCSCC 1993 optics equation file)', () => {

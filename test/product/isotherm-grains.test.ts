@@ -36,10 +36,25 @@ describe('shelled corn, modified Chung–Pfost (constants recalled as ASAE D245.
   })
 })
 
-describe('shelled corn, modified Henderson (constants 8.6541e-5, 1.8634, 49.81, recalled as ASAE D245; from memory)', () => {
+// ASABE D245.6 modified Henderson constants for shelled corn as transcribed in public code: "ASABE D245.6 modified
+// Henderson constants for shelled corn" (BoujeeEnjinia1701/grainguard, docs/04-calcs/sizing.py) and the same three
+// numbers for "corn yellow dent" (farmlab/agronopy, agronopy/crop/maize/grain.py). Not adopted for the profile:
+// with them the natural-air bin test (test/drying/deep-bed, UNL estimate of 20–27 days) takes 33.8 days, and their
+// heat of sorption is 29 % below Thompson's bound-water relation at M = 0.10 (docs/product-sources.md).
+describe('shelled corn, modified Henderson (ASABE D245.6 constants 8.6541e-5, 1.8634, 49.81 as transcribed in public code; not adopted)', () => {
+  const mhe = { model: 'modified-henderson' as const, a: 8.6541e-5, b: 1.8634, c: 49.81 }
+  const mheWb = (t: number, rh: number) => moistureWbPctFromDb(emcDb(mhe, t, rh))
   it('15.6 °C, 80 % → 17.2 % wb, a Henderson–Thompson EMC grid value recalled (±0.1 pt: a consistency check only)', () => {
-    const db = emcDb({ model: 'modified-henderson', a: 8.6541e-5, b: 1.8634, c: 49.81 }, 15.6, 80)
-    expect(Math.abs(moistureWbPctFromDb(db) - 17.2)).toBeLessThan(0.1)
+    expect(Math.abs(mheWb(15.6, 80) - 17.2)).toBeLessThan(0.1)
+  })
+  // measured: 11.22 % wb (the Chung–Pfost profile: 11.08)
+  it('21.1 °C, 50 % RH → 11.3 % wb (University of Kentucky EMC chart, McNeill) within 0.15 pt', () => {
+    expect(Math.abs(mheWb(21.1, 50) - 11.3)).toBeLessThan(0.15)
+  })
+  it('parts from the Chung–Pfost profile by 1.0–1.2 pt at 15.6 °C/80 % (the forms differ most in humid air)', () => {
+    const d = mheWb(15.6, 80) - wb('shelled-corn', 15.6, 80)
+    expect(d).toBeGreaterThan(1.0)
+    expect(d).toBeLessThan(1.2)
   })
 })
 

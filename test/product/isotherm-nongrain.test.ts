@@ -41,6 +41,35 @@ describe('figs: Oksar, Şen & Aksoy 2017 end point 22 % wb ↔ aw 0.65, and sun-
   })
 })
 
+describe('monolayer moistures read in abstracts (the GAB constant the abstract gives; C, K from memory)', () => {
+  const xm0 = (id: string) => {
+    const eq = productById(id).isotherm.desorption.equation
+    if (eq.model !== 'gab') throw new Error(`${id} is not GAB`)
+    return eq.xm0
+  }
+  it('apple (memory): the Xm0 in use lies inside 0.107–0.168 kg/kg db (Fuji apple at 50–70 °C, Moraes, Rosa & Pinto, FURG abstract); the middle of that range with the recalled C and K leaves the Beuchat band', () => {
+    expect(xm0('apple-slices')).toBeGreaterThanOrEqual(0.107)
+    expect(xm0('apple-slices')).toBeLessThanOrEqual(0.168)
+    const mid = {
+      model: 'gab' as const,
+      xm0: 0.1375,
+      c0: 3,
+      k0: 0.97,
+      hxJPerMol: 0,
+      hcJPerMol: 0,
+      hkJPerMol: 0,
+    }
+    // measured: 23.7 % wb at aw 0.65, 25 °C (the band allows 22 with its ±2 pt)
+    expect(moistureWbPctFromDb(emcDb(mid, 25, 65))).toBeGreaterThan(22)
+  })
+  it('onion: Xm 11.0 g/100 g dry matter for air-dried untreated onion (GAB; BET 9.8), Alam & Islam 2015, Bangladesh J. Agril. Res. 40:35', () => {
+    expect(xm0('onion-slices')).toBe(0.11)
+  })
+  it('fish: Xm 4.94 % db (freeze-dried sardines, 25–50 °C, Sablani et al. 2001, Drying Technol. 19:673)', () => {
+    expect(xm0('fish-fillets')).toBe(0.0494)
+  })
+})
+
 describe('water-activity limits used for targets (Beuchat 1981; ICO; Oksar et al. 2017)', () => {
   it('no profile targets an aw at which mycotoxigenic aspergilli grow (≥ 0.80, Beuchat 1981)', () => {
     for (const p of PRODUCT_CATALOGUE) expect(p.waterActivityTarget.value).toBeLessThan(0.8)

@@ -4,5 +4,9 @@
  * equilibrium layer model, and the adapter from a product profile.
  */
 export * from './airflow-resistance.ts'
+export * from './bin-assessment.ts'
+export * from './bin-run.ts'
+export * from './fan-control.ts'
 export * from './grain-from-profile.ts'
+export * from './grain-tables.ts'
 export * from './layer-model.ts'

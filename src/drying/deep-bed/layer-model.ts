@@ -20,22 +20,32 @@
  *
  * Grain-specific inputs (isotherm, thin-layer rate, specific heat, bulk density, airflow resistance) are passed
  * in: this module holds no product constants.
+ *
+ * This file holds the model's types, the checks of a bin setup, and the reference implementation
+ * (`layerExchange`, `simulateDeepBedReference`: the exact isotherm at every evaluation and bisection, simple and
+ * slow). Runs use the fast form in `bin-run.ts` (`simulateDeepBed`), which the tests hold to this one.
+ *
+ * Humidity: the outside RH is over liquid water at every temperature (weather-station practice), and so is the
+ * grain's water activity (relative to pure liquid water at the same temperature); below 0 °C both stay over
+ * liquid water.
  */
 import {
+  humidityRatioFromVaporPressure,
   moistAirEnthalpyKjPerKg,
   moistAirSpecificVolumeM3PerKg,
-  saturationHumidityRatio,
   vaporPressureFromHumidityRatio,
 } from '../../physics/moist-air.ts'
-import { saturationVaporPressureKpa } from '../../physics/saturation.ts'
+import { saturationVaporPressureLiquidKpa } from '../../physics/saturation.ts'
 import { initialSpoilageState, type SpoilageModel, type SpoilageState } from '../../product/spoilage/model.ts'
 import {
   type AirflowResistanceConstants,
   BIN_PACKING_FACTOR,
   bedPressureDropPa,
+  DEFAULT_FAN_EFFICIENCY,
   fanHeatRiseK,
   fanPowerW,
 } from './airflow-resistance.ts'
+import type { FanControl } from './fan-control.ts'
 
 /** Specific heat of liquid water [kJ/(kg·K)] (about 4.18 at 20–40 °C; rounded). */
 export const WATER_CP_KJ_PER_KG_K = 4.186
@@ -69,7 +79,7 @@ export interface BinSetup {
   initialGrainTempC: number
   /** Airflow [m³/min per tonne of grain as loaded]. */
   airflowM3PerMinPerT: number
-  /** Fan and motor total efficiency (0–1]; default 0.5 (an assumption, not a measured fan). */
+  /** Fan and motor total efficiency (0–1]; default {@link DEFAULT_FAN_EFFICIENCY} (see its source). */
   fanEfficiency?: number
   /** Whether the fan and motor heat ends up in the air (fan ahead of the plenum, motor in the airstream); default true. */
   fanHeatToAir?: boolean
@@ -81,10 +91,61 @@ export interface BinSetup {
   heaterOnAboveRhPct?: number
   /** Target moisture [% wb]: a layer at or below it counts as dry. */
   targetMoistureWbPct: number
-  /** Sub-steps per hour (default: enough that each layer sees at most half its own dry mass of air per sub-step). */
+  /** Sub-steps per hour (default {@link defaultSubsteps}). */
   substepsPerHour?: number
-  /** Record the moisture profile every this many hours (default 24; 0 = only the end). */
-  profileEveryHours?: number
+  /** When the fan runs (default continuous); see `fan-control.ts`. */
+  fanControl?: FanControl
+}
+
+/**
+ * Default sub-steps per hour: enough that each layer meets at most its own dry mass of air per sub-step
+ * (a numerical choice of dryhours). Measured against half that air per sub-step over 2–8 m beds, 0.5–4 cfm/bu
+ * and 0 or 5 K of heat under a varying invented weather: hours until the top layer is dry within 0.3 %, top-layer
+ * dry-matter loss within 0.6 % (checked in `test/drying/deep-bed/bin-run.test.ts`).
+ */
+export function defaultSubsteps(airKgPerM2H: number, dryMatterPerLayerKgPerM2: number): number {
+  return Math.max(1, Math.ceil(airKgPerM2H / dryMatterPerLayerKgPerM2))
+}
+
+/** Checks a bin setup; throws a RangeError naming the field. Returns the number of layers. */
+export function checkBinSetup(setup: BinSetup): number {
+  const nLayers = setup.layers ?? 20
+  if (!(Number.isInteger(nLayers) && nLayers >= 1 && nLayers <= 200)) {
+    throw new RangeError(`layers must be an integer from 1 to 200, got ${nLayers}`)
+  }
+  if (!(setup.floorAreaM2 > 0 && setup.floorAreaM2 < 5000)) {
+    throw new RangeError(`floorAreaM2 must be between 0 and 5000 m², got ${setup.floorAreaM2}`)
+  }
+  if (!(setup.depthM > 0 && setup.depthM <= 60)) {
+    throw new RangeError(`depthM must be between 0 and 60 m, got ${setup.depthM}`)
+  }
+  if (!(setup.airflowM3PerMinPerT > 0 && setup.airflowM3PerMinPerT <= 50)) {
+    throw new RangeError(`airflow must be between 0 and 50 m³/min per t, got ${setup.airflowM3PerMinPerT}`)
+  }
+  if (!(setup.initialMoistureWbPct > 5 && setup.initialMoistureWbPct < 50)) {
+    throw new RangeError(`initial moisture must be between 5 and 50 % wb, got ${setup.initialMoistureWbPct}`)
+  }
+  if (!(setup.targetMoistureWbPct > 5 && setup.targetMoistureWbPct < setup.initialMoistureWbPct)) {
+    throw new RangeError(
+      `target moisture must be above 5 % wb and below the initial ${setup.initialMoistureWbPct} %, got ${setup.targetMoistureWbPct}`,
+    )
+  }
+  if (!(setup.initialGrainTempC >= -30 && setup.initialGrainTempC <= 50)) {
+    throw new RangeError(`initialGrainTempC must be between -30 and 50 °C, got ${setup.initialGrainTempC}`)
+  }
+  const heatRise = setup.heatRiseK ?? 0
+  if (!(heatRise >= 0 && heatRise <= 30)) {
+    throw new RangeError(`heatRiseK must be between 0 and 30 K, got ${heatRise}`)
+  }
+  if (
+    setup.substepsPerHour !== undefined &&
+    !(Number.isInteger(setup.substepsPerHour) && setup.substepsPerHour >= 1 && setup.substepsPerHour <= 1000)
+  ) {
+    throw new RangeError(
+      `substepsPerHour must be a whole number from 1 to 1000, got ${setup.substepsPerHour}`,
+    )
+  }
+  return nLayers
 }
 
 export interface InletAir {
@@ -108,39 +169,17 @@ export interface DeepBedHour {
   heaterOn: boolean
 }
 
-export interface DeepBedResult {
-  hours: DeepBedHour[]
-  /** Moisture per layer [% wb], bottom first, every `profileEveryHours` and at the end. */
-  profiles: { hour: number; moistureWbPct: number[] }[]
-  finalMoistureWbPct: number[]
-  /** First hour (1-based count) at which every layer was at or below the target; null if never. */
-  hoursUntilDry: number | null
-  topDryMatterLossPct: number
-  topSpoiled: boolean
-  topSpoilage: SpoilageState
-  grainTonnes: number
-  airflowM3PerS: number
-  staticPressurePa: number
-  fanPowerW: number
-  fanHeatRiseK: number
-  fanEnergyKwhPerT: number
-  heaterEnergyKwhPerT: number
-  /** Water removed [kg per tonne as loaded]. */
-  waterRemovedKgPerT: number
-}
-
 function wbPct(mDb: number): number {
   return (100 * mDb) / (1 + mDb)
 }
 
 function rhFromW(tC: number, w: number, pressureKpa: number): number {
   if (tC < -60) return w > 0 ? 1e6 : 0 // far below any drying state: saturated (keeps the bisection bracketed)
-  return (100 * vaporPressureFromHumidityRatio(w, pressureKpa)) / saturationVaporPressureKpa(tC)
+  return (100 * vaporPressureFromHumidityRatio(w, pressureKpa)) / saturationVaporPressureLiquidKpa(tC)
 }
 
 function humidityRatio(tC: number, rhPct: number, pressureKpa: number): number {
-  const pv = (saturationVaporPressureKpa(tC) * rhPct) / 100
-  return (0.621945 * pv) / (pressureKpa - pv)
+  return humidityRatioFromVaporPressure((saturationVaporPressureLiquidKpa(tC) * rhPct) / 100, pressureKpa)
 }
 
 /** Exchange in one layer for one sub-step. Returns the layer's new moisture and temperature and the exit air. */
@@ -178,10 +217,10 @@ export function layerExchange(
     let hi: number
     if (g0 < 0) {
       // the air cannot take up more than saturation at the warmer of air and grain allows
-      const pickup = Math.max(
-        1e-6,
-        saturationHumidityRatio(Math.max(air.tC, layer.tempC), air.pressureKpa) - air.w,
-      )
+      const pwsMax = saturationVaporPressureLiquidKpa(Math.max(air.tC, layer.tempC))
+      const wSat =
+        pwsMax < air.pressureKpa ? humidityRatioFromVaporPressure(pwsMax, air.pressureKpa) : air.w + 1
+      const pickup = Math.max(1e-6, wSat - air.w)
       lo = Math.max(0.005, m0 - (ma / md) * pickup)
       hi = m0
     } else {
@@ -205,38 +244,44 @@ export function layerExchange(
   return { moistureDb: m1, tempC: t1, exitC: t1, exitW: w1 }
 }
 
+/** What the reference implementation returns. */
+export interface DeepBedReferenceResult {
+  hours: DeepBedHour[]
+  finalMoistureWbPct: number[]
+  /** First hour (1-based count) at which the top layer (every layer) was at or below the target; null if never. */
+  hoursUntilTopDry: number | null
+  hoursUntilDry: number | null
+  topDryMatterLossPct: number
+  topSpoiled: boolean
+  topSpoilage: SpoilageState
+  grainTonnes: number
+  airflowM3PerS: number
+  staticPressurePa: number
+  fanPowerW: number
+  fanEnergyKwhPerT: number
+  heaterEnergyKwhPerT: number
+  /** Water removed [kg per tonne as loaded]. */
+  waterRemovedKgPerT: number
+}
+
 /**
- * Simulates the bin hour by hour under `weather` (one inlet air state per hour). The fan runs every hour.
- * `spoilage` is the grain spoilage model stepped on the top layer (water activity = its ERH/100).
+ * Reference implementation: simulates the bin hour by hour under `weather` (one inlet air state per hour), the
+ * fan running every hour, with the grain's exact functions and bisection in every layer. For tests and the
+ * benchmark; runs use `simulateDeepBed` (`bin-run.ts`). `spoilage` is stepped on the top layer (water activity =
+ * its ERH/100).
  */
-export function simulateDeepBed(
+export function simulateDeepBedReference(
   grain: DeepBedGrain,
   setup: BinSetup,
   weather: readonly InletAir[],
   spoilage: SpoilageModel,
-): DeepBedResult {
-  const nLayers = setup.layers ?? 20
-  if (!(Number.isInteger(nLayers) && nLayers >= 1 && nLayers <= 200)) {
-    throw new RangeError(`layers must be an integer from 1 to 200, got ${nLayers}`)
+): DeepBedReferenceResult {
+  const nLayers = checkBinSetup(setup)
+  if (setup.fanControl && setup.fanControl.mode !== 'continuous') {
+    throw new RangeError('the reference implementation runs the fan continuously only')
   }
-  if (!(setup.floorAreaM2 > 0 && setup.floorAreaM2 < 5000)) {
-    throw new RangeError(`floorAreaM2 must be between 0 and 5000 m², got ${setup.floorAreaM2}`)
-  }
-  if (!(setup.airflowM3PerMinPerT > 0 && setup.airflowM3PerMinPerT <= 50)) {
-    throw new RangeError(`airflow must be between 0 and 50 m³/min per t, got ${setup.airflowM3PerMinPerT}`)
-  }
-  if (!(setup.initialMoistureWbPct > 5 && setup.initialMoistureWbPct < 50)) {
-    throw new RangeError(`initial moisture must be between 5 and 50 % wb, got ${setup.initialMoistureWbPct}`)
-  }
-  if (!(setup.targetMoistureWbPct > 5 && setup.targetMoistureWbPct < setup.initialMoistureWbPct)) {
-    throw new RangeError(
-      `target moisture must be above 5 % wb and below the initial ${setup.initialMoistureWbPct} %, got ${setup.targetMoistureWbPct}`,
-    )
-  }
-  const efficiency = setup.fanEfficiency ?? 0.5
+  const efficiency = setup.fanEfficiency ?? DEFAULT_FAN_EFFICIENCY
   const heatRise = setup.heatRiseK ?? 0
-  if (!(heatRise >= 0 && heatRise <= 30))
-    throw new RangeError(`heatRiseK must be between 0 and 30 K, got ${heatRise}`)
   const grainKg = setup.floorAreaM2 * setup.depthM * grain.bulkDensityKgPerM3
   const tonnes = grainKg / 1000
   const flowM3PerS = (setup.airflowM3PerMinPerT * tonnes) / 60
@@ -257,28 +302,26 @@ export function simulateDeepBed(
   const layerHeightM = setup.depthM / nLayers
   let topSpoilage = initialSpoilageState()
   const hours: DeepBedHour[] = []
-  const profiles: DeepBedResult['profiles'] = []
-  const profileEvery = setup.profileEveryHours ?? 24
   let hoursUntilDry: number | null = null
+  let hoursUntilTopDry: number | null = null
   let heaterKwh = 0
-  let fanRise = 0
   for (let h = 0; h < weather.length; h++) {
     const w = weather[h]
     const wIn = humidityRatio(w.dryBulbC, w.rhPct, w.pressureKpa)
     const vIn = moistAirSpecificVolumeM3PerKg(w.dryBulbC, wIn, w.pressureKpa)
     const airKgPerS = flowM3PerS / vIn // dry air
     const rhoCp = ((1 + wIn) / vIn) * (1006 + 1860 * wIn)
-    fanRise = setup.fanHeatToAir === false ? 0 : fanHeatRiseK(staticPa, efficiency, rhoCp)
+    const fanRise = setup.fanHeatToAir === false ? 0 : fanHeatRiseK(staticPa, efficiency, rhoCp)
     let tPlenum = w.dryBulbC + fanRise
     const rhAfterFan = rhFromW(tPlenum, wIn, w.pressureKpa)
     const heaterOn =
       heatRise > 0 && (setup.heaterOnAboveRhPct === undefined || rhAfterFan > setup.heaterOnAboveRhPct)
     if (heaterOn) {
       tPlenum += heatRise
-      heaterKwh += (airKgPerS * (1.006 + 1.86 * wIn) * heatRise * 3600) / 3600
+      heaterKwh += airKgPerS * (1.006 + 1.86 * wIn) * heatRise // kJ/s over one hour = kWh
     }
     const airKgPerM2H = (airKgPerS * 3600) / setup.floorAreaM2
-    const substeps = setup.substepsPerHour ?? Math.max(1, Math.ceil(airKgPerM2H / (0.5 * dryMatterPerLayer)))
+    const substeps = setup.substepsPerHour ?? defaultSubsteps(airKgPerM2H, dryMatterPerLayer)
     const dt = 1 / substeps
     let exitC = tPlenum
     let exitW = wIn
@@ -314,6 +357,7 @@ export function simulateDeepBed(
     let sum = 0
     for (let i = 0; i < nLayers; i++) sum += moisture[i]
     if (hoursUntilDry === null && front === nLayers) hoursUntilDry = h + 1
+    if (hoursUntilTopDry === null && moisture[top] <= targetDb) hoursUntilTopDry = h + 1
     hours.push({
       hour: h,
       plenumC: tPlenum,
@@ -326,20 +370,13 @@ export function simulateDeepBed(
       topDryMatterLossPct: topSpoilage.measure,
       heaterOn,
     })
-    if (profileEvery > 0 && (h + 1) % profileEvery === 0) {
-      profiles.push({ hour: h + 1, moistureWbPct: Array.from(moisture, wbPct) })
-    }
-  }
-  const finalMoistureWbPct = Array.from(moisture, wbPct)
-  if (profiles.length === 0 || profiles[profiles.length - 1].hour !== weather.length) {
-    profiles.push({ hour: weather.length, moistureWbPct: finalMoistureWbPct })
   }
   let waterKg = 0
   for (let i = 0; i < nLayers; i++) waterKg += (m0 - moisture[i]) * dryMatterPerLayer * setup.floorAreaM2
   return {
     hours,
-    profiles,
-    finalMoistureWbPct,
+    finalMoistureWbPct: Array.from(moisture, wbPct),
+    hoursUntilTopDry,
     hoursUntilDry,
     topDryMatterLossPct: topSpoilage.measure,
     topSpoiled: topSpoilage.measure >= spoilage.spoiledAt,
@@ -348,7 +385,6 @@ export function simulateDeepBed(
     airflowM3PerS: flowM3PerS,
     staticPressurePa: staticPa,
     fanPowerW: powerW,
-    fanHeatRiseK: fanRise,
     fanEnergyKwhPerT: (powerW * weather.length) / 1000 / tonnes,
     heaterEnergyKwhPerT: heaterKwh / tonnes,
     waterRemovedKgPerT: waterKg / tonnes,

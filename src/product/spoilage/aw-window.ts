@@ -6,7 +6,7 @@
  * Coffee: "all coffee, cherry or parchment, must spend no more than four days between [water activity of]
  * 0.95 … and … 0.80" — the HACCP guidance of the FAO *Guidelines for the Prevention of Mould Formation in
  * Coffee* (FAO 2006), as quoted by Kornman, C. (2016), *Green Coffee Analytics, Part I: Total moisture content
- * and water activity* (confidence `secondary`: the FAO text itself was not read). Codex CAC/RCP 69-2009 (Code of
+ * and water activity* (confidence `transcribed`: the FAO text itself was not read). Codex CAC/RCP 69-2009 (Code of
  * practice for the prevention and reduction of ochratoxin A contamination in coffee, §1) names FAO 2006 as its
  * basis and the OTA producers in coffee (A. ochraceus group, A. niger group, A. carbonarius).
  *
@@ -79,7 +79,7 @@ export const COFFEE_OTA_WINDOW: SpoilageModel = awWindowModel({
     citation:
       'FAO 2006, Guidelines for the Prevention of Mould Formation in Coffee (HACCP guidance), as quoted in Kornman, C. 2016, Green Coffee Analytics Part I: Total Moisture Content and Water Activity; basis of Codex CAC/RCP 69-2009',
     equation: '"all coffee, cherry or parchment, must spend no more than four days between 0.95 and 0.80" aw',
-    confidence: 'secondary',
+    confidence: 'transcribed',
   },
   spoiledAtSource: 'four days (96 h) between aw 0.95 and 0.80 (FAO 2006 as quoted)',
   cautions: OTA_CAUTIONS,

@@ -19,7 +19,7 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
   source: {
     citation: 'common practice, no source',
     equation: `hours with aw ≥ ${FISH_BACTERIAL_AW} and product ≥ ${FISH_WARM_C} °C ≤ ${FISH_LIMIT_HOURS} h`,
-    confidence: 'common-practice',
+    confidence: 'memory',
   },
   measureName: `hours at aw ≥ ${FISH_BACTERIAL_AW} and ≥ ${FISH_WARM_C} °C`,
   measureUnit: 'h',

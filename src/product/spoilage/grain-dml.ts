@@ -11,7 +11,7 @@
  *   correction as used by Thompson, T.L. (1972), "Temporary storage of high-moisture shelled corn using
  *   continuous aeration", *Trans. ASAE* 15(2):333–337. Constants as transcribed, with their Fahrenheit origin,
  *   in public research code that states it checked them against Steele's dissertation
- *   (confidence `published`, via that code).
+ *   (confidence `transcribed`: Steele's and Thompson's texts were not read for them).
  * - Reference curve: DML(θ) = 0.0883·[exp(0.006·θ) − 1] + 0.00102·θ [%], θ in hours (Thompson 1972, as rendered
  *   in the review literature and in the same code; Thompson's paper itself not read). Corroboration: it reaches
  *   0.5 % at θ = 230.9 h, and Steele (1967, p. 108) independently gives 230 h as the reference time for 0.5 %
@@ -27,7 +27,14 @@
  * The model is for shelled corn; applied to other grains it is an approximation (said so in `cautions`).
  */
 import { moistureDbFromWbPct } from '../moisture-basis.ts'
-import { checkStepInput, type SpoilageModel, type SpoilageState, type SpoilageStepInput } from './model.ts'
+import {
+  checkStepInput,
+  checkStepValues,
+  type SpoilageAccumulator,
+  type SpoilageModel,
+  type SpoilageState,
+  type SpoilageStepInput,
+} from './model.ts'
 
 /** Reference-curve coefficients (Thompson 1972 form): DML = A·(exp(B·θ) − 1) + C·θ, DML in %, θ in h. */
 export const DML_CURVE = { a: 0.0883, b: 0.006, c: 0.00102 } as const
@@ -149,7 +156,7 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         'Steele, J.L. 1967, Deterioration of damaged shelled corn as measured by carbon dioxide production, PhD dissertation, Iowa State University (multipliers, App. D; reference time 230 h for 0.5 % DML, p. 108); Thompson, T.L. 1972, Temporary storage of high-moisture shelled corn using continuous aeration, Trans. ASAE 15(2):333–337 (DML curve and warm-wet temperature correction; constants as transcribed in public research code that cites both)',
       equation:
         'DML = 0.0883·[exp(0.006·θ) − 1] + 0.00102·θ; θ = Σ Δt/(M_T·M_M·M_D); M_M = 0.103·[exp(455/M_db^1.53) − 0.00845·M_db + 1.558]; M_T = 32.3·exp(−3.48·T_F/60) [+ min(0.01(M_wb − 19), 0.09)·exp(0.61(T_F − 60)/60) above 60 °F and 19 % wb]; M_D = 2.08·exp(−0.0239·D)',
-      confidence: 'published',
+      confidence: 'transcribed',
     },
     measureName: 'dry-matter loss',
     measureUnit: '%',
@@ -174,6 +181,29 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         hoursAtRisk: state.hoursAtRisk + (input.waterActivity >= atRiskAw ? input.hours : 0),
         hoursOutsideRange: state.hoursOutsideRange + (clamped ? input.hours : 0),
         hours: state.hours + input.hours,
+      }
+    },
+    accumulator(): SpoilageAccumulator {
+      // θ is kept as such (no inversion of the curve per step); same arithmetic as `step` otherwise.
+      let theta = 0
+      let hoursAtRisk = 0
+      let hoursOutsideRange = 0
+      let hours = 0
+      const d = clamp(damagePct, DML_VALID_DAMAGE_PCT)
+      const damage = damageMultiplier(d)
+      const damageClamped = d !== damagePct
+      return {
+        add(productTempC, moistureWbPct, waterActivity, stepHours) {
+          checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
+          const t = clamp(productTempC, DML_VALID_TEMP_C)
+          const m = clamp(moistureWbPct, DML_VALID_MOISTURE_WB_PCT)
+          theta += stepHours / (temperatureMultiplier(t, m) * moistureMultiplier(m) * damage)
+          if (waterActivity >= atRiskAw) hoursAtRisk += stepHours
+          if (damageClamped || t !== productTempC || m !== moistureWbPct) hoursOutsideRange += stepHours
+          hours += stepHours
+        },
+        measure: () => dmlFromEquivalentHours(theta),
+        state: () => ({ measure: dmlFromEquivalentHours(theta), hoursAtRisk, hoursOutsideRange, hours }),
       }
     },
   }

@@ -9,14 +9,18 @@
  * (for example to try another airflow) without copying.
  */
 
+import type { Confidence } from '../profile.ts'
+
 /**
- * How the model's numbers were obtained:
- * - `published`: read in the cited original (or in code that transcribes it and says where, said so);
- * - `secondary`: read only where a secondary text quotes the original (named); the original was not read;
- * - `memory`: recalled, not verified in a document;
- * - `common-practice`: a rule of thumb of the trade with no source: "common practice, no source".
+ * How the model's numbers were obtained, in the catalogue's levels (`src/product/profile.ts`):
+ * - `published`: read in the cited original;
+ * - `transcribed`: read in a secondary text (or public code) that quotes or transcribes the original; the
+ *   citation names both ("as quoted in …", "as transcribed in …"); the original was not read;
+ * - `fitted`: derived by dryhours from named published data;
+ * - `memory`: recalled or assumed, not verified in a document. A rule of thumb of the trade is `memory` and its
+ *   citation says "common practice, no source".
  */
-export type SpoilageConfidence = 'published' | 'secondary' | 'memory' | 'common-practice'
+export type SpoilageConfidence = Exclude<Confidence, 'user'>
 
 export interface SpoilageSource {
   /** Authors, year, title, journal or standard. */
@@ -70,6 +74,35 @@ export interface SpoilageModel {
   /** Cautions the report must show with this model's result. */
   cautions: string[]
   step(state: SpoilageState, input: SpoilageStepInput): SpoilageState
+  /**
+   * Optional mutable fast path for long hour loops (the bin model steps the top layer every hour of many
+   * runs): same result as `step`, without a new state object per hour. {@link spoilageAccumulator} falls back
+   * to `step` when a model has none.
+   */
+  accumulator?(): SpoilageAccumulator
+}
+
+/** A mutable running state of one model: `add` one step at a time, read `measure()` or `state()` at any point. */
+export interface SpoilageAccumulator {
+  /** Adds one step; the inputs are those of {@link SpoilageStepInput}, checked the same way. */
+  add(productTempC: number, moistureWbPct: number, waterActivity: number, hours: number): void
+  /** The accumulated measure so far (as `SpoilageState.measure`). */
+  measure(): number
+  /** A snapshot of the state so far. */
+  state(): SpoilageState
+}
+
+/** A running accumulator for `model`: its own fast path, or `step` wrapped. */
+export function spoilageAccumulator(model: SpoilageModel): SpoilageAccumulator {
+  if (model.accumulator) return model.accumulator()
+  let current = initialSpoilageState()
+  return {
+    add(productTempC, moistureWbPct, waterActivity, hours) {
+      current = model.step(current, { productTempC, moistureWbPct, waterActivity, hours })
+    },
+    measure: () => current.measure,
+    state: () => ({ ...current }),
+  }
 }
 
 export function initialSpoilageState(): SpoilageState {
@@ -88,7 +121,16 @@ export function riskFraction(model: SpoilageModel, state: SpoilageState): number
 
 /** Checks one step's input; throws a RangeError naming the field. */
 export function checkStepInput(input: SpoilageStepInput): void {
-  const { productTempC, moistureWbPct, waterActivity, hours } = input
+  checkStepValues(input.productTempC, input.moistureWbPct, input.waterActivity, input.hours)
+}
+
+/** {@link checkStepInput} on the four values. */
+export function checkStepValues(
+  productTempC: number,
+  moistureWbPct: number,
+  waterActivity: number,
+  hours: number,
+): void {
   if (!(hours > 0 && Number.isFinite(hours))) {
     throw new RangeError(`spoilage step: hours must be a finite number > 0, got ${hours}`)
   }

@@ -5,10 +5,11 @@
  * Cauvain & Seiler), log-linear in the equilibrium relative humidity ERH = 100·aw:
  *   27 °C: log10 MFSL[days] = 6.42 − 0.0647·ERH
  *     (read as eq. 3.34 in Adams, M.R. & Moss, M.O., *Food Microbiology*, Royal Society of Chemistry, ch. 3,
- *     "Factors affecting the growth and survival of micro-organisms in foods": `published`);
+ *     "Factors affecting the growth and survival of micro-organisms in foods", a textbook that quotes it:
+ *     `transcribed`);
  *   21 °C: log10 MFSL[days] = 7.91 − 0.081·ERH, validated for aw 0.74–0.90
  *     (as reproduced, with its validity range, from Cauvain & Seiler's cake work in a practitioners' forum:
- *     `secondary`).
+ *     `transcribed`, from a weaker copy).
  * Under varying conditions the fraction of mould-free time used adds up, Σ Δt/MFSL(T, aw) (the same additive
  * use of a constant-condition time as the grain allowable-storage-time rule); mould is expected once it reaches 1.
  *
@@ -57,10 +58,10 @@ export function mouldFreeTimeModel(appliesTo: string[] = ['fruit', 'vegetable', 
     appliesTo,
     source: {
       citation:
-        'Flour Milling and Baking Research Association (Seiler; Cauvain & Seiler) mould-free shelf-life equations for cakes: 27 °C form as eq. 3.34 in Adams & Moss, Food Microbiology (RSC), ch. 3; 21 °C form and validity aw 0.74–0.90 as reproduced from Cauvain & Seiler (secondary)',
+        'Flour Milling and Baking Research Association (Seiler; Cauvain & Seiler) mould-free shelf-life equations for cakes: 27 °C form as given in Adams & Moss, Food Microbiology (RSC), ch. 3, eq. 3.34; 21 °C form and validity aw 0.74–0.90 as quoted from Cauvain & Seiler in a practitioners’ forum (the originals were not read)',
       equation:
         'log10 MFSL[d] = 6.42 − 0.0647·ERH (27 °C); 7.91 − 0.081·ERH (21 °C); fraction used = Σ Δt/MFSL(T, aw)',
-      confidence: 'secondary',
+      confidence: 'transcribed',
     },
     measureName: 'fraction of mould-free time used',
     measureUnit: '',
