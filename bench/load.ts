@@ -14,6 +14,15 @@ import autocannon from 'autocannon'
 import { type HostileRequest, hostileRequests } from './load-hostile.ts'
 import { loadTargets } from './load-targets.ts'
 
+/** Seconds the server is left idle before its memory is read after a pass (V8 collects when allocation stops). */
+const IDLE_BEFORE_RSS_S = 5
+
+/** Resident memory after the server has been idle for {@link IDLE_BEFORE_RSS_S} seconds. */
+async function idleRss(pid: number): Promise<number> {
+  await new Promise((r) => setTimeout(r, IDLE_BEFORE_RSS_S * 1000))
+  return rssMiB(pid)
+}
+
 function rssMiB(pid: number): number {
   const status = readFileSync(`/proc/${pid}/status`, 'utf8')
   const m = status.match(/VmRSS:\s+(\d+) kB/)
@@ -194,14 +203,14 @@ async function main(): Promise<void> {
     for (const connections of [1, 4, 16]) await round(0, connections, false)
     await round(0, 4, true)
     await settle(url)
-    rssWarm = rssMiB(pid)
+    rssWarm = await idleRss(pid)
     rounds.length = 0
     hostileResults.length = 0
     for (let pass = 1; pass <= passes; pass++) {
       for (const connections of [1, 4, 16]) await round(pass, connections, false)
       await round(pass, 4, true)
       pool = await settle(url)
-      rssAfterPass.push(rssMiB(pid))
+      rssAfterPass.push(await idleRss(pid))
     }
   } finally {
     child.kill('SIGTERM')
@@ -270,7 +279,7 @@ async function main(): Promise<void> {
       errors === 0,
     ],
     [
-      'server resident memory after each pass',
+      `server resident memory after each pass (idle ${IDLE_BEFORE_RSS_S} s)`,
       `${rssAfterPass.map((m) => m.toFixed(0)).join(', ')} MiB (start ${rssStart.toFixed(0)} MiB, after the warm-up pass ${rssWarm.toFixed(0)} MiB); last / first ${growth.toFixed(2)} (target ≤ 1.10)`,
       growth <= 1.1,
     ],
