@@ -289,7 +289,18 @@ async function main(): Promise<void> {
       hostileRatio >= 0.8,
     ],
   ]
-  console.log('figures of this run:')
+  for (let pass = 1; pass <= passes; pass++) {
+    const at = (c: number) =>
+      rounds.find((r) => r.pass === pass && r.name === 'assess' && r.connections === c)
+    const one = at(1)
+    const four = at(4)
+    if (one && four) {
+      console.log(
+        `pass ${pass}: 4 clients / 1 client = ${(four.reqPerS / one.reqPerS).toFixed(2)}× with ${four.cores.toFixed(2)} / ${one.cores.toFixed(2)} server cores (the machine is shared: fewer than 2 cores means other work took them)`,
+      )
+    }
+  }
+  console.log('figures of this run (throughput ratios from the last pass):')
   for (const [what, value, ok] of verdicts) console.log(`  ${ok ? 'met    ' : 'NOT MET'}  ${what}: ${value}`)
   if (errors > 0) process.exitCode = 1
 }
