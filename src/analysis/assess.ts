@@ -91,12 +91,50 @@ function isoHour(ms: number): string {
   return new Date(ms).toISOString().slice(0, 13) + ':00Z'
 }
 
+/**
+ * Share of the usable hours that may lack irradiance before a method that needs the sun is refused:
+ * one half (common practice, no source). Below it the engine takes the missing hours as 0 W/m² and
+ * says how many; above it the figures would describe a sunless site.
+ */
+export const MAX_SUNLESS_SHARE = 0.5
+
+/**
+ * Refuse a method that needs the sun (open air, solar cabinet) when the series has no irradiance
+ * for most of its usable hours: no irradiance column and nothing to estimate it from
+ * (`weather/sun-estimate.ts` needs the site's position and cloud cover or whole days of temperatures).
+ */
+export function requireSun(series: HourlySeries, kind: string): void {
+  let usable = 0
+  let sunless = 0
+  for (let i = 0; i < series.hours; i++) {
+    if (series.quality[i] & QualityFlag.missingCore) continue
+    usable++
+    if (Number.isNaN(series.ghiWm2[i])) sunless++
+  }
+  if (usable > 0 && sunless > MAX_SUNLESS_SHARE * usable) {
+    throw new RangeError(
+      `the ${kind} method needs the sun, and ${sunless} of the ${usable} usable hours have no irradiance: the file has none ` +
+        "and it could not be estimated (that needs the site's position, --lat and --lon, and cloud cover or whole days " +
+        'of temperatures); give the position, use a file with irradiance, or assess the shade or heated method',
+    )
+  }
+}
+
+/** Daylight hours (irradiance above 0) whose irradiance the reader estimated. */
+function countEstimatedSun(series: HourlySeries): number {
+  let n = 0
+  for (let i = 0; i < series.hours; i++)
+    if (series.quality[i] & QualityFlag.irradianceEstimated && series.ghiWm2[i] > 0) n++
+  return n
+}
+
 /** Assess one site (one series) for one product and method. Throws RangeError for bad options. */
 export function assess(series: HourlySeries, options: AssessOptions): Assessment {
   if (series.hours < 24)
     throw new RangeError(`the weather series must hold at least 24 hours, got ${series.hours}`)
   const profile = options.product
   const method = parseDryingMethod(options.method)
+  if (method.kind === 'open-air' || method.kind === 'solar-cabinet') requireSun(series, method.kind)
   const thresholds = parseDryingThresholds(options.thresholds ?? {})
   const plan = planAssessment(options)
   const { initialWbPct, targetWbPct, deadlineDays, maxDays, batchKgFresh, startHourLocal, stepDays } = plan
@@ -228,9 +266,13 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
     )
   }
-  if (time.offsetSource !== 'file') {
+  if (time.offsetSource === 'longitude' || time.offsetSource === 'assumed-utc') {
     warnings.push(
-      `the file gives no UTC offset: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'})`,
+      `the site's clock is not known: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'}); give --site-tz <zone> for the site's own`,
+    )
+  } else if (time.offsetSource === 'timestamps') {
+    warnings.push(
+      `the site's clock is taken from the file's local timestamps (UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}); give --site-tz <zone> if the site keeps another`,
     )
   }
   if (primary.assumedIrradianceHours > 0) {
@@ -278,14 +320,18 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     bestStartWindows: best.windows,
     bestStartWindowCriterion: best.criterion,
     heat,
-    assumptions: assessmentAssumptions(
-      method,
-      backupMethod,
-      thresholds,
-      profile,
-      product.thicknessMm,
-      loadingKgPerM2,
-    ),
+    assumptions: [
+      ...assessmentAssumptions(
+        method,
+        backupMethod,
+        thresholds,
+        profile,
+        product.thicknessMm,
+        loadingKgPerM2,
+      ),
+      // what the weather reader supplied rather than read (estimated irradiance, a constant pressure)
+      ...(series.supplied ?? []),
+    ],
     warnings,
     coverage: {
       firstHourUtc: isoHour(series.startUtcMs[0]),
@@ -295,6 +341,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       years,
       monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
       assumedIrradianceHours: primary.assumedIrradianceHours,
+      estimatedIrradianceHours: countEstimatedSun(series),
       assumedWindHours: primary.assumedWindHours,
       hasRainData: !primary.noRainData,
       startDateBatchesRun: table.batches,

@@ -16,7 +16,7 @@ export interface AssessmentSite {
   elevationM: number | null
   /** Offset of the local standard time used for months, hours and start dates [h]. */
   utcOffsetHours: number
-  utcOffsetSource: 'file' | 'longitude' | 'assumed-utc'
+  utcOffsetSource: 'option' | 'file' | 'timestamps' | 'longitude' | 'assumed-utc'
   typicalYear: boolean
 }
 
@@ -155,6 +155,8 @@ export interface Coverage {
   /** Minimum share of a month's hours with data for that month-year to enter the statistics. */
   monthCoverageRequired: number
   assumedIrradianceHours: number
+  /** Daylight hours whose irradiance the weather reader estimated (cloud cover or daily temperature range; see the assumptions). */
+  estimatedIrradianceHours: number
   assumedWindHours: number
   hasRainData: boolean
   startDateBatchesRun: number

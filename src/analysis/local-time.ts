@@ -1,16 +1,21 @@
 /**
  * @module analysis/local-time
  * Local standard time (no daylight saving) of each hour, for months, hour-of-day tables and start dates.
- * The offset is the site's `utcOffsetHours` when known; otherwise longitude/15 rounded to the hour
- * (mean solar time to the nearest hour), which the assessment states as an assumption.
+ * The offset is the site's `utcOffsetHours` when known (the weather reader resolves it: `--site-tz`,
+ * the file's statement, the clock of local timestamps, or the longitude); otherwise longitude/15
+ * rounded to the hour (mean solar time to the nearest hour), which the assessment states.
  */
 import type { HourlySeries } from '../weather/series.ts'
 
 export interface LocalTimeColumns {
   /** Offset of local standard time from UTC [h]. */
   utcOffsetHours: number
-  /** How the offset was chosen, for the assumptions. */
-  offsetSource: 'file' | 'longitude' | 'assumed-utc'
+  /**
+   * How the site's offset was chosen, for the assumptions: given by the user (`option`), stated by
+   * the file (`file`), taken from the clock of its local timestamps (`timestamps`), from the longitude,
+   * or nothing known (`assumed-utc`).
+   */
+  offsetSource: 'option' | 'file' | 'timestamps' | 'longitude' | 'assumed-utc'
   /** Calendar year of each hour (local standard time). */
   year: Int16Array
   /** Month 1–12. */
@@ -27,10 +32,10 @@ export function resolveUtcOffsetHours(series: HourlySeries): {
   offsetSource: LocalTimeColumns['offsetSource']
 } {
   if (series.site.utcOffsetHours !== null) {
-    return { utcOffsetHours: series.site.utcOffsetHours, offsetSource: 'file' }
+    return { utcOffsetHours: series.site.utcOffsetHours, offsetSource: series.site.utcOffsetSource ?? 'file' }
   }
   if (series.site.longitudeDeg !== null) {
-    return { utcOffsetHours: Math.round(series.site.longitudeDeg / 15), offsetSource: 'longitude' }
+    return { utcOffsetHours: Math.round(series.site.longitudeDeg / 15) || 0, offsetSource: 'longitude' }
   }
   return { utcOffsetHours: 0, offsetSource: 'assumed-utc' }
 }

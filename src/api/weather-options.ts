@@ -1,78 +1,98 @@
 /**
  * @module api/weather-options
- * Weather-reader options from a request: the query string (short names, like the CLI flags) or an
- * `options` JSON object (the reader's own option names, `weatherReadOptionsSchema`). Both end in the
- * same validated `WeatherReadOptions`.
+ * Weather-reader options from a request: the query string (the parameters of `weather/option-spec.ts`,
+ * one per CLI flag) or an `options` JSON object (the reader's own option names,
+ * `weatherReadOptionsSchema`). Both end in the same validated `WeatherReadOptions`, and every message
+ * names the option as the request gave it (query parameter or JSON key).
  */
 import { z } from 'zod'
 import {
-  type MappingKey,
-  parseMappingArgument,
-  type WeatherReadOptions,
-  weatherReadOptionsSchema,
-} from '../weather/options.ts'
-import { ApiProblem, zodIssuesToFields } from './problem.ts'
-import { numberParam } from './schemas/params.ts'
+  checkWeatherOptions,
+  type OptionSurface,
+  renderOptionNames,
+  WEATHER_OPTION_SPECS,
+  WeatherOptionError,
+  WeatherOptionsInvalid,
+  weatherOptionsFromTexts,
+} from '../weather/option-spec.ts'
+import type { WeatherReadOptions } from '../weather/options.ts'
+import type { WeatherReadResult } from '../weather/result.ts'
+import type { WeatherInputError } from '../weather/weather-input-error.ts'
+import { ApiProblem } from './problem.ts'
 
-/** Query-string form of the weather options (documented in OpenAPI with units). */
-export const weatherQueryFields = {
-  lat: numberParam('site latitude [° north]; overrides the file header').optional(),
-  lon: numberParam('site longitude [° east]; overrides the file header').optional(),
-  elevation: numberParam('site elevation [m]').optional(),
-  utcOffset: numberParam('offset of local timestamps from UTC [h], e.g. -5').optional(),
-  tz: z.string().min(1).optional().describe('IANA time zone of local timestamps, e.g. America/Chicago'),
-  map: z
-    .string()
-    .optional()
-    .describe(
-      'column mapping variable=column[:unit]; several separated by ";" (e.g. dryBulbC=Temp:F;relativeHumidityPct=RH)',
-    ),
-  dateOrder: z.enum(['ymd', 'mdy', 'dmy']).optional().describe('day/month order of slash dates'),
-  labels: z
-    .enum(['hour-start', 'hour-end'])
-    .optional()
-    .describe('whether CSV timestamps label the start or the end of each hour'),
-  windHeight: numberParam('height of the wind measurement [m]; default 10').optional(),
-  siteName: z.string().max(200).optional().describe('site name for reports'),
-}
+/** Query-string form of the weather options, one field per option of the shared table (documented in OpenAPI). */
+export const weatherQueryFields = Object.fromEntries(
+  WEATHER_OPTION_SPECS.map((s) => [
+    s.param,
+    z
+      .string()
+      .optional()
+      .describe(
+        `${s.description}${s.multiple ? '; several separated by ";"' : ''} (CLI --${s.flag} ${s.value})`,
+      ),
+  ]),
+) as Record<string, z.ZodOptional<z.ZodString>>
 
 export const weatherQuerySchema = z.strictObject(weatherQueryFields)
 
-/** Weather options from query fields already validated by {@link weatherQuerySchema} (or a superset). */
-export function weatherOptionsFromQuery(q: z.output<typeof weatherQuerySchema>): WeatherReadOptions {
-  const mapping: Partial<Record<MappingKey, { column: string; unit?: string }>> = {}
-  if (q.map) {
-    for (const part of q.map.split(';').filter((p) => p.trim() !== '')) {
-      try {
-        const [key, m] = parseMappingArgument(part)
-        mapping[key] = m
-      } catch (e) {
-        throw new ApiProblem(400, (e as Error).message, [{ path: 'map', message: (e as Error).message }])
-      }
-    }
+/** Weather options from query fields (already checked to be strings by {@link weatherQuerySchema} or a superset). */
+export function weatherOptionsFromQuery(q: Record<string, unknown>): WeatherReadOptions {
+  try {
+    const raw = weatherOptionsFromTexts((s) => {
+      const v = q[s.param]
+      return typeof v === 'string' ? [v] : undefined
+    }, 'query')
+    return checkWeatherOptions(raw, 'query')
+  } catch (e) {
+    throw optionsProblem(e, 'query', '')
   }
-  const raw: Record<string, unknown> = {
-    latitudeDeg: q.lat,
-    longitudeDeg: q.lon,
-    elevationM: q.elevation,
-    utcOffsetHours: q.utcOffset,
-    timeZone: q.tz,
-    mapping: Object.keys(mapping).length > 0 ? mapping : undefined,
-    dateOrder: q.dateOrder,
-    timestampLabels: q.labels,
-    windHeightM: q.windHeight,
-    siteName: q.siteName,
-  }
-  for (const k of Object.keys(raw)) if (raw[k] === undefined) delete raw[k]
-  return validWeatherOptions(raw, '')
 }
 
 /** Validate a weather-options object (JSON form); a 400 problem naming each bad field otherwise. */
 export function validWeatherOptions(value: unknown, prefix: string): WeatherReadOptions {
-  const r = weatherReadOptionsSchema.safeParse(value ?? {})
-  if (!r.success) {
-    const errors = zodIssuesToFields(r.error.issues, prefix)
-    throw new ApiProblem(400, errors.map((e) => `${e.path}: ${e.message}`).join('; '), errors)
+  try {
+    return checkWeatherOptions(value, 'json')
+  } catch (e) {
+    throw optionsProblem(e, 'json', prefix)
   }
-  return r.data
+}
+
+function optionsProblem(e: unknown, surface: OptionSurface, prefix: string): unknown {
+  const at = (name: string) => (prefix ? `${prefix}.${name}` : name)
+  if (e instanceof WeatherOptionError) {
+    const name = surface === 'json' ? e.spec.key : e.spec.param
+    return new ApiProblem(400, prefix ? `${prefix}.${e.message}` : e.message, [
+      { path: at(name), message: e.message },
+    ])
+  }
+  if (e instanceof WeatherOptionsInvalid) {
+    const fields = e.issues.map((i) => ({
+      path: at(i.option),
+      message: prefix ? `${prefix}.${i.message}` : i.message,
+    }))
+    return new ApiProblem(400, fields.map((f) => f.message).join('; '), fields)
+  }
+  return e
+}
+
+/** The surface a request's weather options came from: the JSON `options` part, or the query string. */
+export function surfaceOf(jsonOptions: boolean): OptionSurface {
+  return jsonOptions ? 'json' : 'query'
+}
+
+/** A weather file that cannot be used: 422, its message naming options as the request gives them. */
+export function weatherInputProblem(e: WeatherInputError, surface: OptionSurface, file?: string): ApiProblem {
+  const message = renderOptionNames(e.message, surface)
+  return new ApiProblem(422, file ? `${file}: ${message}` : message)
+}
+
+/** A reading's messages (warnings, notes, problems) with option names as the request gives them. */
+export function renderReadingMessages(r: WeatherReadResult, surface: OptionSurface): WeatherReadResult {
+  if (surface === 'cli') return r
+  return {
+    ...r,
+    warnings: r.warnings.map((w) => renderOptionNames(w, surface)),
+    notes: r.notes.map((n) => renderOptionNames(n, surface)),
+    problems: r.problems.map((p) => ({ ...p, message: renderOptionNames(p.message, surface) })),
+  }
 }

@@ -5,20 +5,40 @@
  * (files may start with a site line), columns are planned by {@link planColumns}.
  */
 import Papa from 'papaparse'
-import { type ColumnPlan, classifyHeader, planColumns, splitHeader } from './columns.ts'
+import {
+  analyseHeader,
+  type ChosenColumn,
+  type ColumnPlan,
+  type ColumnPreset,
+  findNamedColumn,
+  planColumns,
+  splitHeader,
+} from './columns.ts'
 import { FIELD_MISSING, FIELD_UNREADABLE, parseField } from './numbers.ts'
 import type { ColumnMapping, MappingKey } from './options.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { RawColumn, RawTable } from './raw-table.ts'
 import { escapeControlCharacters, snippet } from './snippet.ts'
-import { createTimestampColumns, type DateOrder, parseTimeOfDay, parseTimestampInto } from './timestamps.ts'
-import type { WeatherVariable } from './units.ts'
+import {
+  createTimestampColumns,
+  type DateOrder,
+  daysInMonth,
+  parseTimeOfDay,
+  parseTimestampInto,
+} from './timestamps.ts'
+import { isUnitToken, type WeatherVariable } from './units.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
 export interface DelimitedInfo {
   delimiter: string
   decimalComma: boolean
   headerLine: number
+  /** Line of a units row under the header (1-based), or null. */
+  unitsLine: number | null
+  /** Lines under the header that are neither units nor data (e.g. a logger's processing row), skipped. */
+  skippedAfterHeader: number
+  /** The header was two rows joined cell by cell (first line of the two, 1-based), or null. */
+  twoRowHeaderLine: number | null
   /** Date order declared by a header such as `Date (MM/DD/YYYY)`. */
   headerDateOrder: DateOrder | null
   /** Wind measurement height written in the wind header [m]. */
@@ -26,9 +46,48 @@ export interface DelimitedInfo {
   plan: ColumnPlan
 }
 
+/**
+ * How a format dialect lays its delimited text out, when it knows better than detection. Every
+ * field is optional; what is not given is detected as for any delimited file.
+ */
+export interface DelimitedLayout {
+  delimiter?: string
+  /** 0-based row of the header; −1 = no header row (then `columnNames` names the columns). */
+  headerRow?: number
+  /** Column names of a file without a header row. */
+  columnNames?: string[]
+  /** Units per column (replacing a units row), e.g. from a metadata block. */
+  unitsRow?: string[]
+  /** Rows after the header (and units row) that are not data. */
+  skipAfterHeader?: number
+  /** The format's own column choices (under the user's mapping). */
+  columns?: ColumnPreset
+  /** Cell decoders per variable: cell text → value in the column's unit, NaN = missing. */
+  decoders?: Partial<Record<WeatherVariable, (text: string) => number>>
+  /** Extra numbers that mean "missing" in every value column (e.g. −999 of NASA POWER). */
+  missingCodes?: readonly number[]
+  /** Rows to leave out (e.g. daily summary rows): the column (by header names) and a test on its text. */
+  dropRows?: { names: readonly string[]; drop: (text: string) => boolean; reason: string }
+  /** Report kind per row (routine or special) from a column (by header names). */
+  reportKind?: { names: readonly string[]; kind: (text: string) => number }
+  /**
+   * Quality-flag columns: the column `offset` places after each value column holds its flag, and
+   * `reject(flag)` says when the value is not to be used (it is then missing, counted in a warning).
+   */
+  qualityFlags?: { offset: number; reject: (flag: string) => boolean; describe: string }
+}
+
+/** Options of {@link readDelimited}: the format's layout and the user's header line. */
+export interface ReadDelimitedOptions extends DelimitedLayout {
+  /** 1-based line of the header row, as the user gives it (`--header-line`). */
+  headerLine?: number
+}
+
 /** The delimiter of the first non-blank line: the most frequent of comma, semicolon and tab outside quotes. */
 export function detectDelimiter(text: string): string {
-  const end = text.search(/\r|\n/)
+  let end = text.indexOf('\n')
+  const cr = text.indexOf('\r')
+  if (end < 0 || (cr >= 0 && cr < end)) end = cr
   const line = end < 0 ? text : text.slice(0, end)
   let inQuotes = false
   const counts: Record<string, number> = { ',': 0, ';': 0, '\t': 0 }
@@ -45,10 +104,168 @@ function isBlank(row: string[]): boolean {
   return row.length === 0 || (row.length === 1 && row[0].trim() === '')
 }
 
-function recognised(row: string[]): number {
-  let k = 0
-  for (const h of row) if (classifyHeader(splitHeader(h).name) !== null) k++
-  return k
+/** Rows of the head searched for the header (the first 100 lines, blank ones included). */
+export const HEADER_SEARCH_ROWS = 100
+
+/** Distinct variables and time fields a row of headers names (its merit as the header row). */
+function headerScore(row: string[], unitsRow?: string[]): number {
+  const keys = new Set<string>()
+  const limit = Math.min(row.length, 1000)
+  for (let j = 0; j < limit; j++) {
+    const cell = row[j]
+    if (cell === undefined || cell.trim() === '') continue
+    const m = analyseHeader(cell, unitsRow?.[j]).meaning
+    if (m === null || m.kind === 'excluded') continue
+    keys.add(m.kind === 'variable' ? m.variable : m.kind === 'time' ? m.field : `wind-${m.component}`)
+  }
+  return keys.size
+}
+
+/** A row with no number and no timestamp in it: a header, units or label row, not data. */
+function isTextRow(row: string[]): boolean {
+  if (isBlank(row)) return false
+  const scratch = createTimestampColumns(1)
+  const limit = Math.min(row.length, 1000)
+  for (let j = 0; j < limit; j++) {
+    const cell = row[j]
+    if (cell === undefined) continue
+    const t = cell.trim()
+    if (t === '') continue
+    // A cell holding a line break or a quote comes from broken quoting: a data row, not a label row.
+    if (t.includes('\n') || t.includes('\r') || t.includes('"')) return false
+    if (!Number.isNaN(parseDecimal(t, 0, t.length, 0, 44))) return false
+    if (t.length <= 40 && parseTimestampInto(scratch, 0, t)) return false
+  }
+  return true
+}
+
+/** A row whose non-empty cells are mostly unit tokens (at least two). */
+function isUnitsRow(row: string[]): boolean {
+  let units = 0
+  let other = 0
+  const limit = Math.min(row.length, 1000)
+  for (let j = 0; j < limit; j++) {
+    const t = row[j]?.trim() ?? ''
+    if (t === '') continue
+    if (isUnitToken(t)) units++
+    else other++
+  }
+  return units >= 2 && units >= other
+}
+
+function joinRows(a: string[], b: string[]): string[] {
+  const n = Math.max(a.length, b.length)
+  const out: string[] = new Array(n)
+  for (let j = 0; j < n; j++) out[j] = `${a[j] ?? ''} ${b[j] ?? ''}`.trim()
+  return out
+}
+
+interface HeaderLayout {
+  /** 0-based row of the (last) header row; data follow after `firstDataRow`. */
+  headerIndex: number
+  headers: string[]
+  unitsRow?: string[]
+  unitsIndex: number | null
+  twoRowIndex: number | null
+  /** 0-based first row that may hold data. */
+  firstDataRow: number
+  skipped: number
+  score: number
+}
+
+/**
+ * Find the header: the row among the first {@link HEADER_SEARCH_ROWS} that names the most distinct
+ * variables and time fields (or the row given); then a units row under it, a second header row above
+ * or below it (two-row headers are joined cell by cell when that names more), and label rows before
+ * the data.
+ */
+function locateHeader(
+  head: string[][],
+  headerRow: number | undefined,
+  layout: DelimitedLayout,
+): HeaderLayout {
+  let headerIndex = -1
+  let bestScore = -1
+  if (headerRow !== undefined) {
+    if (headerRow >= head.length || isBlank(head[headerRow] ?? [])) {
+      throw new WeatherInputError(
+        `the header line ${headerRow + 1} given is ${headerRow >= head.length ? 'beyond the first lines read' : 'blank'}`,
+        ['header'],
+      )
+    }
+    headerIndex = headerRow
+    bestScore = headerScore(head[headerRow])
+  } else {
+    const limit = Math.min(head.length, HEADER_SEARCH_ROWS)
+    for (let r = 0; r < limit; r++) {
+      if (isBlank(head[r])) continue
+      const score = headerScore(head[r])
+      if (score > bestScore) {
+        bestScore = score
+        headerIndex = r
+      }
+    }
+  }
+  if (headerIndex < 0) throw new WeatherInputError('the file has no rows with content', ['rows'])
+  let headers = head[headerIndex]
+  let twoRowIndex: number | null = null
+  let unitsRow = layout.unitsRow
+  let unitsIndex: number | null = null
+  let next = headerIndex + 1
+  const below = head[next]
+  if (unitsRow === undefined && below !== undefined && isTextRow(below) && isUnitsRow(below)) {
+    unitsRow = below
+    unitsIndex = next
+    next++
+  } else if (headerRow === undefined) {
+    // A header in two rows: join with the row above or below when that names more.
+    const above = headerIndex > 0 ? head[headerIndex - 1] : undefined
+    let best = bestScore
+    if (above !== undefined && isTextRow(above)) {
+      const joined = joinRows(above, headers)
+      const score = headerScore(joined)
+      if (score > best) {
+        best = score
+        twoRowIndex = headerIndex - 1
+      }
+    }
+    if (below !== undefined && isTextRow(below)) {
+      const joined = joinRows(headers, below)
+      if (headerScore(joined) > best) twoRowIndex = headerIndex
+    }
+    if (twoRowIndex !== null) {
+      headers = joinRows(head[twoRowIndex], head[twoRowIndex + 1])
+      headerIndex = twoRowIndex + 1
+      next = headerIndex + 1
+      bestScore = Math.max(bestScore, best)
+      const u = head[next]
+      if (u !== undefined && isTextRow(u) && isUnitsRow(u)) {
+        unitsRow = u
+        unitsIndex = next
+        next++
+      }
+    }
+  }
+  let skipped = 0
+  if (layout.skipAfterHeader !== undefined) {
+    next += layout.skipAfterHeader
+    skipped = layout.skipAfterHeader
+  } else {
+    while (skipped < 3 && head[next] !== undefined && isTextRow(head[next])) {
+      next++
+      skipped++
+    }
+  }
+  return {
+    headerIndex,
+    headers,
+    unitsRow,
+    unitsIndex,
+    twoRowIndex,
+    firstDataRow: next,
+    skipped,
+    score: bestScore,
+  }
 }
 
 export function readDelimited(
@@ -56,52 +273,104 @@ export function readDelimited(
   mapping: Partial<Record<MappingKey, ColumnMapping>>,
   log: ProblemLog,
   warnings: string[],
+  layout: ReadDelimitedOptions = {},
 ): { table: RawTable; info: DelimitedInfo } {
+  const headerLine = layout.headerLine
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text
-  const firstContent = body.search(/\S/)
+  const firstContent = firstNonSpace(body)
   if (firstContent < 0) throw new WeatherInputError('the file is empty', ['rows'])
-  const delimiter = detectDelimiter(body.slice(body.lastIndexOf('\n', firstContent) + 1))
+  const delimiter = layout.delimiter ?? detectDelimiter(body.slice(body.lastIndexOf('\n', firstContent) + 1))
   // The head (header search, decimal-comma test) always goes through papaparse; the body too when it
   // holds quotes. Quote-free bodies are split by a scanner that keeps only the needed columns
   // (papaparse's own fastMode also splits quote-free text without quote handling).
   const head = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false, preview: HEAD_ROWS }).data
-  let headerIndex = -1
-  let bestScore = -1
-  let seen = 0
-  for (let r = 0; r < head.length && seen < 10; r++) {
-    if (isBlank(head[r])) continue
-    seen++
-    const score = recognised(head[r])
-    if (score > bestScore) {
-      bestScore = score
-      headerIndex = r
+  let found: HeaderLayout
+  if (layout.headerRow === -1) {
+    const names = layout.columnNames ?? []
+    found = {
+      headerIndex: -1,
+      headers: names,
+      unitsRow: layout.unitsRow,
+      unitsIndex: null,
+      twoRowIndex: null,
+      firstDataRow: 0,
+      skipped: 0,
+      score: 1,
     }
-  }
-  if (headerIndex < 0) throw new WeatherInputError('the file has no rows with content', ['rows'])
+  } else found = locateHeader(head, headerLine !== undefined ? headerLine - 1 : layout.headerRow, layout)
+  const headerIndex = found.headerIndex
   // Header names are shown in messages and reports: control characters escaped once, here.
-  const headers = mergeUnbalancedHeaders(head[headerIndex], delimiter, warnings).map((h) =>
-    escapeControlCharacters(h.replace(/^\uFEFF/, '').trim()),
+  const headers = mergeUnbalancedHeaders(found.headers, delimiter, warnings).map((h) =>
+    escapeControlCharacters(h.charCodeAt(0) === 0xfeff ? h.slice(1).trim() : h.trim()),
   )
-  if (bestScore <= 0 && Object.keys(mapping).length === 0) {
+  if (found.score <= 0 && Object.keys(mapping).length === 0) {
     throw new WeatherInputError(
-      `no header row with known column names in the first lines (first line: '${snippet(headers.slice(0, 8).join(delimiter), 120)}'); ` +
-        'add a header row or map columns with --map dryBulb=#2 --map timestamp=#1 …',
+      `no header row with known column names in the first ${HEADER_SEARCH_ROWS} lines (first line: '${snippet(headers.slice(0, 8).join(delimiter), 120)}'); ` +
+        'add a header row, name its line with --header-line <n>, or map columns with --map dryBulb=#2 --map timestamp=#1 …',
       ['header'],
     )
   }
-  if (headerIndex > 0) warnings.push(`lines 1–${headerIndex} before the header row were skipped`)
-  const plan = planColumns(headers, mapping)
+  const before = found.twoRowIndex ?? headerIndex
+  if (before > 0 && layout.headerRow === undefined)
+    warnings.push(`lines 1–${before} before the header row were skipped`)
+  if (found.twoRowIndex !== null)
+    warnings.push(
+      `the header spans lines ${found.twoRowIndex + 1}–${found.twoRowIndex + 2}: their cells were joined`,
+    )
+  if (found.unitsIndex !== null) warnings.push(`line ${found.unitsIndex + 1} gives the units of the columns`)
+  if (found.skipped > 0 && layout.skipAfterHeader === undefined)
+    warnings.push(
+      `${found.skipped} line${found.skipped === 1 ? '' : 's'} under the header without numbers ${found.skipped === 1 ? 'was' : 'were'} skipped`,
+    )
+  const plan = planColumns(headers, mapping, found.unitsRow, layout.columns)
+  warnings.push(...plan.notes)
   let decimalComma = false
   if (delimiter !== ',') {
-    for (let r = headerIndex + 1; r < head.length && !decimalComma; r++) {
-      for (const f of head[r]) if (/^\s*[-+]?\d+,\d+\s*$/.test(f)) decimalComma = true
+    for (let r = found.firstDataRow; r < head.length && !decimalComma; r++) {
+      for (const f of head[r]) if (isDecimalCommaNumber(f)) decimalComma = true
     }
   }
-  const needed = [...Object.values(plan.time), ...Object.values(plan.variables).map((c) => c!.index)]
-  const numericColumns = Object.values(plan.variables).map((c) => c!.index)
-  const body_ = body.includes('"')
-    ? papaparseBody(body, delimiter, headerIndex, needed)
-    : scanBody(body, delimiter, headerIndex, Object.values(plan.time), numericColumns, decimalComma)
+  const decoders = new Map<number, (text: string) => number>()
+  for (const [variable, decode] of Object.entries(layout.decoders ?? {}) as [
+    WeatherVariable,
+    (text: string) => number,
+  ][]) {
+    const chosen = plan.variables[variable]
+    if (chosen && !(variable in mapping)) decoders.set(chosen.index, decode)
+  }
+  const valueColumns = Object.values(plan.variables).map((c) => c!.index)
+  if (plan.windComponents) valueColumns.push(plan.windComponents.u.index, plan.windComponents.v.index)
+  const textColumns = [...Object.values(plan.time)]
+  const flagOf = new Map<number, number>()
+  if (layout.qualityFlags) {
+    for (const c of valueColumns) {
+      const f = c + layout.qualityFlags.offset
+      if (f >= 0 && f < headers.length) {
+        flagOf.set(c, f)
+        if (!textColumns.includes(f)) textColumns.push(f)
+      }
+    }
+  }
+  const dropColumn = layout.dropRows ? findNamedColumn(headers, layout.dropRows.names) : -1
+  const kindColumn = layout.reportKind ? findNamedColumn(headers, layout.reportKind.names) : -1
+  for (const c of [dropColumn, kindColumn]) if (c >= 0 && !textColumns.includes(c)) textColumns.push(c)
+  const numericColumns: number[] = []
+  for (const c of valueColumns) {
+    if (decoders.has(c)) {
+      if (!textColumns.includes(c)) textColumns.push(c)
+    } else if (!numericColumns.includes(c)) numericColumns.push(c)
+  }
+  const needed = [...textColumns, ...numericColumns]
+  const skipThrough = found.firstDataRow - 1
+  let body_ = body.includes('"')
+    ? papaparseBody(body, delimiter, skipThrough, needed)
+    : scanBody(body, delimiter, skipThrough, textColumns, numericColumns, decimalComma)
+  if (dropColumn >= 0 && layout.dropRows) {
+    const before = body_.lines.length
+    body_ = dropBodyRows(body_, (i) => layout.dropRows!.drop(body_.cells[dropColumn]?.[i] ?? ''))
+    const dropped = before - body_.lines.length
+    if (dropped > 0) warnings.push(`${dropped} ${layout.dropRows.reason}: left out`)
+  }
   const { lines, cells } = body_
   const n = lines.length
   const cell = (i: number, col: number): string | undefined => cells[col]?.[i]
@@ -112,11 +381,11 @@ export function readDelimited(
     t.timestamp === undefined &&
     t.date === undefined &&
     t.time === undefined &&
-    (t.year === undefined || t.month === undefined || t.day === undefined)
+    (t.year === undefined || ((t.month === undefined || t.day === undefined) && t.dayOfYear === undefined))
   ) {
     throw new WeatherInputError(
       `no timestamp column found (columns: ${headers.map((h) => `'${snippet(h)}'`).join(', ')}); map it with --map timestamp=<column>, ` +
-        'or --map date=<column> --map time=<column>, or --map year=… --map month=… --map day=… --map hour=…',
+        'or --map date=<column> --map time=<column> (or hour=<column>), or --map year=… --map month=… --map day=… --map hour=…',
       ['timestamps'],
     )
   }
@@ -133,21 +402,33 @@ export function readDelimited(
         'rejected, the other lines read one by one',
     )
   }
+  // Clock text of the row from a time, or an hour (and minute) column.
+  const clockText = (i: number): string | undefined => {
+    if (t.time !== undefined) return cell(i, t.time) ?? ''
+    if (t.hour !== undefined) {
+      const hour = cell(i, t.hour) ?? ''
+      if (t.minute === undefined) return hour
+      const minute = (cell(i, t.minute) ?? '').trim()
+      return `${hour.trim()}:${minute.length === 1 ? `0${minute}` : minute}`
+    }
+    return undefined
+  }
+  const useDateColumn =
+    t.timestamp !== undefined || (t.date !== undefined && (t.year === undefined || t.month === undefined))
   for (let i = 0; i < n; i++) {
     if (quoteBroken?.has(i)) {
       log.add(lines[i], null, 'unbalanced-quote', quoteBroken.get(i)!)
       continue
     }
-    if (t.timestamp !== undefined || (t.date !== undefined && t.year === undefined)) {
+    if (useDateColumn) {
       const dateText = cell(i, t.timestamp ?? t.date!) ?? ''
-      const timeText =
-        t.timestamp === undefined ? (t.time !== undefined ? (cell(i, t.time) ?? '') : undefined) : undefined
-      let ok = parseTimestampInto(time, i, dateText, timeText)
-      if (!ok && t.timestamp !== undefined && t.time !== undefined)
-        ok = parseTimestampInto(time, i, dateText, cell(i, t.time) ?? '')
+      const clock = clockText(i)
+      let ok = parseTimestampInto(time, i, dateText, t.timestamp === undefined ? clock : undefined)
+      if (!ok && t.timestamp !== undefined && clock !== undefined)
+        ok = parseTimestampInto(time, i, dateText, clock)
       if (!ok)
         timeErrors[i] =
-          `cannot read the timestamp '${snippet(timeText === undefined ? dateText : `${dateText} ${timeText}`)}'`
+          `cannot read the timestamp '${snippet(clock === undefined ? dateText : `${dateText} ${clock}`)}'`
       continue
     }
     const part = (index: number | undefined, fallback: number): number => {
@@ -156,16 +437,20 @@ export function readDelimited(
       return scratch[0]
     }
     const year = part(t.year, Number.NaN)
-    const month = part(t.month, Number.NaN)
-    const day = part(t.day, Number.NaN)
-    let minutes = Number.NaN
-    if (t.hour !== undefined) minutes = part(t.hour, Number.NaN) * 60 + part(t.minute, 0)
-    else if (t.time !== undefined) minutes = parseTimeOfDay(cell(i, t.time) ?? '')
-    const integral =
-      Number.isInteger(year) && Number.isInteger(month) && Number.isInteger(day) && Number.isInteger(minutes)
-    if (!integral || minutes < 0 || minutes > 1440) {
+    let month = part(t.month, Number.NaN)
+    let day = part(t.day, Number.NaN)
+    if ((t.month === undefined || t.day === undefined) && t.dayOfYear !== undefined) {
+      const doy = part(t.dayOfYear, Number.NaN)
+      const md = monthDayOfYear(year, doy)
+      month = md[0]
+      day = md[1]
+    }
+    const clock = clockText(i)
+    const minutes = clock === undefined ? Number.NaN : parseTimeOfDay(clock)
+    const integral = Number.isInteger(year) && Number.isInteger(month) && Number.isInteger(day)
+    if (!integral || !(minutes >= 0 && minutes <= 1440)) {
       timeErrors[i] =
-        `cannot read the date and hour from the year/month/day/hour columns (${snippet([t.year, t.month, t.day, t.hour].map((k) => (k === undefined ? '' : (cell(i, k) ?? ''))).join(' '))})`
+        `cannot read the date and hour from the year/month/day/hour columns (${snippet([t.year, t.month ?? t.dayOfYear, t.day, t.hour].map((k) => (k === undefined ? '' : (cell(i, k) ?? ''))).join(' '))})`
       continue
     }
     time.year[i] = year
@@ -174,25 +459,36 @@ export function readDelimited(
     time.yearFirst[i] = 1
     time.minuteOfDay[i] = minutes
   }
+  if (time.twoDigitYears > 0)
+    warnings.push(
+      `${time.twoDigitYears} dates have two-digit years: 69–99 read as 1969–1999, 00–68 as 2000–2068`,
+    )
 
-  const columns: Partial<Record<WeatherVariable, RawColumn>> = {}
-  for (const [variable, chosen] of Object.entries(plan.variables) as [
-    WeatherVariable,
-    NonNullable<ColumnPlan['variables'][WeatherVariable]>,
-  ][]) {
+  const missingCodes = layout.missingCodes ?? []
+  const readColumn = (chosen: ChosenColumn): RawColumn => {
     const scanned = body_.numbers?.[chosen.index]
     const values = scanned?.values ?? new Float64Array(n)
     let missing = scanned?.blank ?? 0
+    let codes = 0
     const unreadable = (i: number, text: string | undefined): void => {
       missing++
       log.add(
         lines[i],
-        variable,
+        chosen.variable,
         'unparseable-number',
         `'${snippet(text ?? '')}' in column '${snippet(chosen.header)}' is not a number: read as missing`,
       )
     }
-    if (scanned) {
+    const decode = decoders.get(chosen.index)
+    if (decode !== undefined) {
+      const column = cells[chosen.index]
+      for (let i = 0; i < n; i++) {
+        const text = column?.[i]
+        const v = text === undefined ? Number.NaN : decode(text)
+        values[i] = v
+        if (Number.isNaN(v)) missing++
+      }
+    } else if (scanned) {
       for (const [i, text] of scanned.other) {
         const code = parseField(text, decimalComma, values, i)
         if (code === FIELD_MISSING) missing++
@@ -206,21 +502,77 @@ export function readDelimited(
         else if (code === FIELD_UNREADABLE) unreadable(i, column?.[i])
       }
     }
-    columns[variable] = {
+    const flagColumn = flagOf.get(chosen.index)
+    if (flagColumn !== undefined && layout.qualityFlags) {
+      let flagged = 0
+      for (let i = 0; i < n; i++) {
+        if (Number.isNaN(values[i])) continue
+        if (layout.qualityFlags.reject(cells[flagColumn]?.[i] ?? '')) {
+          values[i] = Number.NaN
+          flagged++
+        }
+      }
+      missing += flagged
+      if (flagged > 0)
+        warnings.push(
+          `column '${snippet(chosen.header)}': ${flagged} values flagged ${layout.qualityFlags.describe} in '${snippet(headers[flagColumn])}': read as missing`,
+        )
+    }
+    if (missingCodes.length > 0) {
+      for (let i = 0; i < n; i++) {
+        if (missingCodes.includes(values[i])) {
+          values[i] = Number.NaN
+          codes++
+        }
+      }
+    }
+    return {
       values,
       source: chosen.header,
       conversion: chosen.conversion,
       unitSource: chosen.unitSource,
+      missingCount: missing + codes,
+      missingCodeCount: codes,
+    }
+  }
+  const columns: Partial<Record<WeatherVariable, RawColumn>> = {}
+  for (const chosen of Object.values(plan.variables)) columns[chosen!.variable] = readColumn(chosen!)
+  if (plan.windComponents && !columns.wind) {
+    const u = readColumn(plan.windComponents.u)
+    const v = readColumn(plan.windComponents.v)
+    const uScale = u.conversion?.scale ?? 1
+    const vScale = v.conversion?.scale ?? 1
+    const speed = new Float64Array(n)
+    let missing = 0
+    for (let i = 0; i < n; i++) {
+      const x = u.values[i] * uScale
+      const y = v.values[i] * vScale
+      speed[i] = Math.sqrt(x * x + y * y)
+      if (Number.isNaN(speed[i])) missing++
+    }
+    columns.wind = {
+      values: speed,
+      source: `√(${plan.windComponents.u.header}² + ${plan.windComponents.v.header}²)`,
+      conversion: { unit: 'm/s', scale: 1, offset: 0 },
+      unitSource: u.conversion !== null || v.conversion !== null ? 'header' : 'none',
       missingCount: missing,
       missingCodeCount: 0,
     }
+    if (u.conversion === null && v.conversion === null)
+      warnings.push('the wind components have no unit: read as m/s')
   }
   let headerDateOrder: DateOrder | null = null
   const dateHeader = t.timestamp ?? t.date
   if (dateHeader !== undefined) {
-    const unit = splitHeader(headers[dateHeader]).unitText?.toLowerCase() ?? ''
-    if (/^mm.dd.yy/.test(unit)) headerDateOrder = 'mdy'
-    else if (/^dd.mm.yy/.test(unit)) headerDateOrder = 'dmy'
+    const unit = (splitHeader(headers[dateHeader]).unitText ?? '').toLowerCase()
+    if (unit.startsWith('mm') && unit.slice(3, 5) === 'dd') headerDateOrder = 'mdy'
+    else if (unit.startsWith('dd') && unit.slice(3, 5) === 'mm') headerDateOrder = 'dmy'
+  }
+  if (plan.headerTimeNote !== null) warnings.push(plan.headerTimeNote)
+  let reportKind: Uint8Array | undefined
+  if (kindColumn >= 0 && layout.reportKind) {
+    reportKind = new Uint8Array(n)
+    for (let i = 0; i < n; i++) reportKind[i] = layout.reportKind.kind(cell(i, kindColumn) ?? '')
   }
   return {
     table: {
@@ -231,6 +583,7 @@ export function readDelimited(
       timeErrors,
       columns,
       timing: {},
+      reportKind,
       unusedColumns: plan.unused,
       plan,
     },
@@ -238,35 +591,116 @@ export function readDelimited(
       delimiter,
       decimalComma,
       headerLine: headerIndex + 1,
+      unitsLine: found.unitsIndex === null ? null : found.unitsIndex + 1,
+      skippedAfterHeader: found.skipped,
+      twoRowHeaderLine: found.twoRowIndex === null ? null : found.twoRowIndex + 1,
       headerDateOrder,
-      windHeightM: plan.variables.wind?.heightM ?? null,
+      windHeightM: plan.variables.wind?.heightM ?? plan.windComponents?.u.heightM ?? null,
       plan,
     },
   }
 }
 
+/** The body without the rows for which `drop(row)` is true (summary rows of some exports). */
+function dropBodyRows(body: BodyCells, drop: (row: number) => boolean): BodyCells {
+  const n = body.lines.length
+  const keep: number[] = []
+  for (let i = 0; i < n; i++) if (!drop(i)) keep.push(i)
+  if (keep.length === n) return body
+  const newIndex = new Int32Array(n).fill(-1)
+  keep.forEach((old, i) => {
+    newIndex[old] = i
+  })
+  const cells: (string | undefined)[][] = []
+  body.cells.forEach((column, c) => {
+    if (column !== undefined) cells[c] = keep.map((old) => column[old])
+  })
+  let numbers: ScannedNumbers[] | undefined
+  if (body.numbers) {
+    numbers = []
+    body.numbers.forEach((scanned, c) => {
+      if (scanned === undefined) return
+      const values = new Float64Array(keep.length)
+      for (let i = 0; i < keep.length; i++) values[i] = scanned.values[keep[i]]
+      const other: [number, string][] = []
+      for (const [row, text] of scanned.other) if (newIndex[row] >= 0) other.push([newIndex[row], text])
+      let blank = 0
+      for (let i = 0; i < keep.length; i++) if (Number.isNaN(values[i])) blank++
+      numbers![c] = { values, blank: blank - other.length, other }
+    })
+  }
+  let unbalancedQuote: Map<number, string> | undefined
+  if (body.unbalancedQuote) {
+    unbalancedQuote = new Map()
+    for (const [row, message] of body.unbalancedQuote)
+      if (newIndex[row] >= 0) unbalancedQuote.set(newIndex[row], message)
+  }
+  return { lines: Int32Array.from(keep.map((old) => body.lines[old])), cells, numbers, unbalancedQuote }
+}
+
+/** Month and day of day-of-year `doy` (1 = 1 January) in `year`; NaN when out of range. */
+function monthDayOfYear(year: number, doy: number): [number, number] {
+  if (!Number.isInteger(doy) || !Number.isInteger(year) || doy < 1) return [Number.NaN, Number.NaN]
+  let left = doy
+  for (let m = 1; m <= 12; m++) {
+    const days = daysInMonth(year, m)
+    if (left <= days) return [m, left]
+    left -= days
+  }
+  return [Number.NaN, Number.NaN]
+}
+
+function firstNonSpace(text: string): number {
+  for (let k = 0; k < text.length; k++) {
+    const c = text.charCodeAt(k)
+    if (c !== 32 && c !== 9 && c !== 10 && c !== 13 && c !== 0xa0 && c !== 0xfeff) return k
+  }
+  return -1
+}
+
+/** `12,5`, ` -3,25 `: a number with a decimal comma (and nothing else). */
+function isDecimalCommaNumber(text: string): boolean {
+  let k = 0
+  while (k < text.length && text.charCodeAt(k) === 32) k++
+  if (text[k] === '-' || text[k] === '+') k++
+  const intStart = k
+  while (k < text.length && text.charCodeAt(k) >= 48 && text.charCodeAt(k) <= 57) k++
+  if (k === intStart || text[k] !== ',') return false
+  k++
+  const fracStart = k
+  while (k < text.length && text.charCodeAt(k) >= 48 && text.charCodeAt(k) <= 57) k++
+  if (k === fracStart) return false
+  while (k < text.length && text.charCodeAt(k) === 32) k++
+  return k === text.length
+}
+
 /**
  * Rejoin header cells split by an unquoted delimiter inside brackets, e.g.
- * `time (local standard time, UTC+07:00)` written without quotes in a comma-separated file.
+ * `time (local standard time, UTC+07:00)` written without quotes in a comma-separated file. One pass:
+ * the bracket depth is carried from cell to cell, never recounted.
  */
 export function mergeUnbalancedHeaders(cells: string[], delimiter: string, warnings: string[]): string[] {
   const out: string[] = []
-  let open = ''
+  let open: string[] = []
+  let depth = 0
   for (const cell of cells) {
-    const text = open === '' ? cell : `${open}${delimiter}${cell}`
-    const depth = (text.match(/[([]/g)?.length ?? 0) - (text.match(/[)\]]/g)?.length ?? 0)
-    if (depth > 0) {
-      open = text
-      continue
+    for (let k = 0; k < cell.length; k++) {
+      const c = cell.charCodeAt(k)
+      if (c === 40 || c === 91) depth++
+      else if ((c === 41 || c === 93) && depth > 0) depth--
     }
-    if (open !== '')
+    open.push(cell)
+    if (depth > 0) continue
+    if (open.length > 1) {
+      const text = open.join(delimiter)
       warnings.push(
         `header '${snippet(text)}' contains the delimiter inside brackets without quotes: read as one column`,
       )
-    out.push(text)
-    open = ''
+      out.push(text)
+    } else out.push(cell)
+    open = []
   }
-  if (open !== '') out.push(...open.split(delimiter))
+  out.push(...open) // brackets never closed: the cells stay as they are
   return out
 }
 
@@ -413,6 +847,10 @@ function scanBody(
     numbers[c] = { values: new Float64Array(capacity).fill(Number.NaN), blank: 0, other: [] }
   const lineList = new Int32Array(capacity)
   const delim = delimiter.charCodeAt(0)
+  // The next delimiter at or after the scan position: searched again only once passed, so the
+  // searches together read the text once (a line without delimiters cannot send each search to the
+  // end of the file).
+  let nextDelimiter = body.indexOf(delimiter)
   const comma = decimalComma ? 44 : -1
   let rows = 0
   let pos = 0
@@ -426,8 +864,8 @@ function scanBody(
       let start = pos
       let col = 0
       for (; col <= maxCol; col++) {
-        let stop = body.indexOf(delimiter, start)
-        if (stop < 0 || stop > end) stop = end
+        if (nextDelimiter >= 0 && nextDelimiter < start) nextDelimiter = body.indexOf(delimiter, start)
+        const stop = nextDelimiter < 0 || nextDelimiter > end ? end : nextDelimiter
         const k = kind[col]
         if (k === 1) cells[col][rows] = body.slice(start, stop)
         else if (k === 2) {

@@ -78,8 +78,8 @@ export interface HourSun {
 /**
  * Sun geometry per hour for hour-long interval values (hour starts in `startUtcMs`). With `ghiWm2`,
  * only hours whose irradiance needs a decision (missing, or above the night limit) are computed:
- * a reading between 0 and the limit is acceptable by night and by day. Skipped hours get
- * clearSky NaN and night 0.
+ * a reading between 0 and the limit is acceptable by night and by day, and one above it with the sun
+ * up at mid-hour is day. Skipped hours get clearSky NaN (computed on demand) and night 0.
  */
 export function hourSun(
   startUtcMs: Float64Array,
@@ -94,6 +94,14 @@ export function hourSun(
     if (ghiWm2 !== undefined) {
       const g = ghiWm2[s]
       if (g >= 0 && g <= NIGHT_IRRADIANCE_LIMIT_WM2) {
+        clearSkyWm2[s] = Number.NaN
+        continue
+      }
+      // a reading above the limit only needs the night test: the sun up at mid-hour settles it
+      if (
+        g > NIGHT_IRRADIANCE_LIMIT_WM2 &&
+        sinGeometricSunAltitude(startUtcMs[s] + 1_800_000, latDeg, lonDeg) > 0
+      ) {
         clearSkyWm2[s] = Number.NaN
         continue
       }

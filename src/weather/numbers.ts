@@ -58,12 +58,39 @@ export function parseField(
   out[i] = Number.NaN
   const t = s.trim().toLowerCase()
   if (MISSING_WORDS.has(t)) return FIELD_MISSING
-  if (/^[-+]?\d+(\.\d+)?\s*[a-z%°]+$/i.test(t) && !/^[-+]?0[xbo]/.test(t)) {
-    const v = Number.parseFloat(t)
+  const v = numberBeforeUnit(t)
+  if (!Number.isNaN(v)) {
     out[i] = v
     return FIELD_OK
   }
   return FIELD_UNREADABLE
+}
+
+/**
+ * `12.5 °c`, `25%`, `3mm` (lower case, trimmed): the number before a unit word of letters, `%` or `°`;
+ * NaN for anything else, including radix literals (`0x1f`). One pass over the text.
+ */
+export function numberBeforeUnit(t: string): number {
+  let k = 0
+  if (t[k] === '-' || t[k] === '+') k++
+  const digitsFrom = k
+  while (k < t.length && t.charCodeAt(k) >= 48 && t.charCodeAt(k) <= 57) k++
+  if (k === digitsFrom) return Number.NaN
+  if (t[digitsFrom] === '0' && k === digitsFrom + 1 && (t[k] === 'x' || t[k] === 'b' || t[k] === 'o'))
+    return Number.NaN
+  if (t[k] === '.') {
+    const fractionFrom = ++k
+    while (k < t.length && t.charCodeAt(k) >= 48 && t.charCodeAt(k) <= 57) k++
+    if (k === fractionFrom) return Number.NaN
+  }
+  const numberEnd = k
+  while (k < t.length && t.charCodeAt(k) === 32) k++
+  const unitFrom = k
+  for (; k < t.length; k++) {
+    const c = t.charCodeAt(k)
+    if (!((c >= 97 && c <= 122) || c === 37 || c === 0xb0)) return Number.NaN
+  }
+  return k > unitFrom ? Number.parseFloat(t.slice(0, numberEnd)) : Number.NaN
 }
 
 /**

@@ -9,7 +9,17 @@ import { snippet } from './snippet.ts'
 import { WEATHER_VARIABLES, type WeatherVariable } from './units.ts'
 
 /** Columns that carry time rather than a weather variable; mapping keys like the variables. */
-export const TIME_FIELDS = ['timestamp', 'date', 'time', 'year', 'month', 'day', 'hour', 'minute'] as const
+export const TIME_FIELDS = [
+  'timestamp',
+  'date',
+  'time',
+  'year',
+  'month',
+  'day',
+  'hour',
+  'minute',
+  'dayOfYear',
+] as const
 export type TimeField = (typeof TIME_FIELDS)[number]
 export type MappingKey = WeatherVariable | TimeField
 
@@ -41,9 +51,9 @@ export const weatherReadOptionsSchema = z
     longitudeDeg: z.number().min(-180).max(180).optional(),
     /** Site elevation [m], −500…9000 (range of the standard-atmosphere formula used). */
     elevationM: z.number().min(-500).max(9000).optional(),
-    /** Fixed offset of the file's local timestamps from UTC [h], −12…14 (e.g. −5 for US Eastern standard time). */
+    /** Fixed offset of the file's timestamps from UTC [h], −12…14 (e.g. −5 for US Eastern standard time; 0 for UTC). Describes the file, not the site. */
     utcOffsetHours: z.number().min(-12).max(14).optional(),
-    /** IANA zone of the file's local timestamps (daylight saving applied), e.g. `America/Chicago`. */
+    /** IANA zone of the file's timestamps (daylight saving applied), e.g. `America/Chicago`. Describes the file, not the site. */
     timeZone: z
       .string()
       .refine(isIanaZone, { message: 'not an IANA time-zone name known to Intl' })
@@ -55,10 +65,37 @@ export const weatherReadOptionsSchema = z
     /** Order of day and month in slash or dot dates like 03/04/2020; detected when unambiguous. */
     dateOrder: z.enum(['ymd', 'mdy', 'dmy']).optional(),
     /**
-     * Whether a CSV timestamp labels the start (default) or the end of its hour; EPW is always
-     * hour-ending (EPW data dictionary).
+     * Where a delimited file's timestamps sit in the interval each row describes: `start` (10:00 =
+     * 10:00–11:00) or `end` (10:00 = 09:00–10:00); detected when absent (hours 01–24 → end). EPW is
+     * always `end` (EPW data dictionary).
      */
-    timestampLabels: z.enum(['hour-start', 'hour-end']).optional(),
+    labels: z.enum(['start', 'end']).optional(),
+    /**
+     * Per variable: its own label and interval, e.g. irradiance and rain over the preceding hour
+     * (`{ ghi: { label: 'end', intervalMinutes: 60 } }`) in a file whose other values are instants.
+     */
+    variableLabels: z
+      .partialRecord(
+        z.enum(WEATHER_VARIABLES as [WeatherVariable, ...WeatherVariable[]]),
+        z.strictObject({
+          label: z.enum(['start', 'end']),
+          /** Interval length [min], 1…1440; omitted = the spacing of the rows. */
+          intervalMinutes: z.number().int().min(1).max(1440).optional(),
+        }),
+      )
+      .optional(),
+    /** How rows become hours: `readings` (averaged/summed) or `reports` (one per hour, routine first); detected when absent. */
+    sampling: z.enum(['readings', 'reports']).optional(),
+    /** 1-based line of the header row of a delimited file, when the search would not find it. */
+    headerLine: z.number().int().min(1).max(100_000).optional(),
+    /**
+     * IANA zone of the SITE's clock (for local hours, months and start times), when the file does not
+     * say it: independent of the timestamps' basis (`utcOffsetHours`/`timeZone` describe the file).
+     */
+    siteTimeZone: z
+      .string()
+      .refine(isIanaZone, { message: 'not an IANA time-zone name known to Intl' })
+      .optional(),
     /** Height of the wind measurement above ground [m], 0.5…200; default 10 m (WMO standard) or the header. */
     windHeightM: z.number().min(0.5).max(200).optional(),
     /** Site name for reports (else from the header or empty). */

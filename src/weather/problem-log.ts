@@ -24,6 +24,8 @@ export type ProblemKind =
   | 'irradiance-at-night'
   | 'gap-filled'
   | 'core-missing'
+  | 'too-few-readings'
+  | 'interval-too-long'
   | 'short-row'
   | 'unbalanced-quote'
 

@@ -57,8 +57,8 @@ export const SPIKE_LIMIT: Partial<Record<WeatherVariable, number>> = {
 
 /**
  * Number of consecutive identical readings after which a sensor is called stuck; the whole run is
- * rejected. Calm wind (0), saturated air (RH ≥ 90 %) and zero rain or irradiance are ordinary and
- * never count; nor does RH at or above {@link WET_RH_PLATEAU_PCT}. Common practice, no source.
+ * rejected. Calm wind (0), RH at or above {@link WET_RH_PLATEAU_PCT} (fog, drizzle, rain) and zero
+ * rain or irradiance are ordinary and never count. Common practice, no source.
  */
 export const STUCK_RUN_HOURS: Partial<Record<WeatherVariable, number>> = {
   dryBulb: 12,
@@ -154,6 +154,81 @@ export function rangeCheck(
   }
 }
 
+/**
+ * The range check of {@link rangeCheck} on readings before they are combined into hours: each value
+ * outside its range is set to NaN (RH up to {@link RH_CLAMP_MAX_PCT} clamped to 100 %, irradiance
+ * down to −15 W/m² set to 0) and logged with its own line. `rowChanged[i]` is set to 1 for a changed
+ * reading and 2 for a rejected one.
+ */
+export function rangeCheckReadings(
+  lines: Int32Array,
+  log: ProblemLog,
+  variable: WeatherVariable,
+  values: Float64Array,
+  unit: string,
+  rowChanged: Uint8Array,
+): number {
+  const [lo, hi] = VALID_RANGE[variable]
+  // RH is judged against 100 % (clamped up to RH_CLAMP_MAX_PCT), irradiance below 0 is set to 0
+  const top = variable === 'relativeHumidity' ? 100 : hi
+  const bottom = variable === 'ghi' ? 0 : lo
+  let rejected = 0
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i]
+    if (!(v < bottom || v > top)) continue // in range, or NaN
+    rejected += judgeReading(lines, log, variable, values, unit, rowChanged, i, lo, hi)
+  }
+  return rejected
+}
+
+/** One reading outside its range: clamped, set to 0, or rejected (logged with its line). Returns 1 when rejected. */
+function judgeReading(
+  lines: Int32Array,
+  log: ProblemLog,
+  variable: WeatherVariable,
+  values: Float64Array,
+  unit: string,
+  rowChanged: Uint8Array,
+  i: number,
+  lo: number,
+  hi: number,
+): number {
+  const v = values[i]
+  if (variable === 'relativeHumidity' && v > 100) {
+    if (v <= RH_CLAMP_MAX_PCT) {
+      values[i] = 100
+      if (rowChanged[i] === 0) rowChanged[i] = 1
+      log.add(lines[i], variable, 'rh-above-100', `relative humidity ${v} % set to 100 %`)
+      return 0
+    }
+    values[i] = Number.NaN
+    rowChanged[i] = 2
+    log.add(
+      lines[i],
+      variable,
+      'rh-above-100',
+      `relative humidity ${v} % is above 100 % (accepted up to ${RH_CLAMP_MAX_PCT} %, clamped): rejected`,
+    )
+    return 1
+  }
+  if (variable === 'ghi' && v < 0 && v >= lo) {
+    values[i] = 0
+    if (rowChanged[i] === 0) rowChanged[i] = 1
+    log.add(lines[i], variable, 'negative-irradiance', `irradiance ${round(v)} W/m² set to 0`)
+    return 0
+  }
+  if (!(v < lo || v > hi)) return 0
+  values[i] = Number.NaN
+  rowChanged[i] = 2
+  log.add(
+    lines[i],
+    variable,
+    'out-of-range',
+    `${variable} ${round(v)} ${unit} is outside ${lo}…${hi} ${unit}: rejected`,
+  )
+  return 1
+}
+
 function lineOf(grid: HourGrid, s: number): number | null {
   const row = grid.slotRow[s]
   return row >= 0 ? grid.lines[row] : null
@@ -197,39 +272,56 @@ export function spikeCheck(
   }
 }
 
-/** Reject runs of identical readings at least {@link STUCK_RUN_HOURS} long. */
+/**
+ * Reject runs of identical readings at least {@link STUCK_RUN_HOURS} long. Hours marked in `exempt`
+ * (values the file itself says were supplied, not measured) end a run and are never judged.
+ */
 export function stuckCheck(
   grid: HourGrid,
   log: ProblemLog,
   variable: WeatherVariable,
   values: Float64Array,
   unit: string,
+  exempt?: Uint8Array,
 ): void {
   const minRun = STUCK_RUN_HOURS[variable]
   if (minRun === undefined) return
+  const isWind = variable === 'wind'
+  const isRh = variable === 'relativeHumidity'
+  const free = exempt ?? NO_EXEMPTIONS
+  const checkExempt = exempt !== undefined
   let start = 0
-  for (let s = 1; s <= values.length; s++) {
-    if (s < values.length && values[s] === values[start]) continue
-    const v = values[start]
+  const n = values.length
+  for (let s = 1; s <= n; s++) {
+    if (s < n && values[s] === values[start] && !(checkExempt && (free[s] === 1 || free[start] === 1)))
+      continue
     const length = s - start
-    const ordinary =
-      Number.isNaN(v) || (variable === 'wind' && v === 0) || (variable === 'relativeHumidity' && v >= 99)
-    if (length >= minRun && !ordinary) {
-      for (let k = start; k < s; k++) {
-        values[k] = Number.NaN
-        reject(
-          grid,
-          log,
-          k,
-          variable,
-          'stuck-sensor',
-          `${variable} reads ${round(v)} ${unit} for ${length} hours in a row: stuck sensor, rejected`,
-        )
+    if (length >= minRun) {
+      const v = values[start]
+      const ordinary =
+        Number.isNaN(v) ||
+        (checkExempt && free[start] === 1) ||
+        (isWind && v === 0) ||
+        (isRh && v >= WET_RH_PLATEAU_PCT)
+      if (!ordinary) {
+        for (let k = start; k < s; k++) {
+          values[k] = Number.NaN
+          reject(
+            grid,
+            log,
+            k,
+            variable,
+            'stuck-sensor',
+            `${variable} reads ${round(v)} ${unit} for ${length} hours in a row: stuck sensor, rejected`,
+          )
+        }
       }
     }
     start = s
   }
 }
+
+const NO_EXEMPTIONS = new Uint8Array(0)
 
 /** Dew point or wet bulb above the dry bulb: small excess set to the dry bulb, larger rejected. */
 export function humidityBelowDryBulbCheck(

@@ -6,7 +6,9 @@
 
 import { assemble } from './assemble.ts'
 import { type DelimitedInfo, readDelimited } from './delimited.ts'
+import { detectDialect, dialectHead } from './dialects/index.ts'
 import { looksLikeEpw, readEpw } from './epw.ts'
+import { looksLikeHourlyExport, readHourlyExportTable } from './export-read.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from './options.ts'
 import { ProblemLog } from './problem-log.ts'
 import type { WeatherReadResult } from './result.ts'
@@ -43,6 +45,7 @@ export function readWeather(
   const warnings: string[] = []
   const format =
     opts.format === undefined || opts.format === 'auto' ? (looksLikeEpw(text) ? 'epw' : 'csv') : opts.format
+  if (looksLikeHourlyExport(text) && format === 'csv') return readOwnExport(text, opts, log, warnings)
   if (format === 'epw') {
     const { table, header } = readEpw(text, log, warnings)
     if (opts.mapping !== undefined)
@@ -50,6 +53,10 @@ export function readWeather(
     if (opts.timeZone !== undefined)
       warnings.push(
         `EPW files are in local standard time (header: UTC${header.utcOffsetHours >= 0 ? '+' : ''}${header.utcOffsetHours}); --tz ${opts.timeZone} is ignored`,
+      )
+    if (opts.labels === 'start')
+      warnings.push(
+        'EPW timestamps label the end of each hour (EPW data dictionary); --labels start is ignored',
       )
     const offset = opts.utcOffsetHours ?? header.utcOffsetHours
     if (opts.utcOffsetHours !== undefined && opts.utcOffsetHours !== header.utcOffsetHours) {
@@ -67,14 +74,13 @@ export function readWeather(
       longitudeDeg: opts.longitudeDeg ?? header.longitudeDeg,
       elevationM: opts.elevationM ?? clampElevation(header.elevationM),
       timeZone: null,
-      utcOffsetHours: offset,
+      utcOffsetHours: null,
       windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
     }
     return assemble(table, {
       site,
       time: {
-        labels: 'hour-end',
-        alwaysHourEnd: true,
+        labels: 'end',
         fixedOffsetHours: offset,
         zone: null,
         headerSaysUtc: false,
@@ -82,53 +88,127 @@ export function readWeather(
       log,
       warnings,
       elevationKnown: true,
+      variableTiming: opts.variableLabels,
+      sampling: opts.sampling,
+      siteClock: { optionZone: opts.siteTimeZone, fileOffsetHours: offset },
     })
   }
-  const { table, info } = readDelimited(text, opts.mapping ?? {}, log, warnings)
-  const headerOffset = info.plan.headerUtcOffsetHours
-  if (headerOffset !== null && opts.utcOffsetHours === undefined && opts.timeZone === undefined) {
+  const clockGiven = opts.utcOffsetHours !== undefined || opts.timeZone !== undefined
+  const head = dialectHead(text)
+  const dialect = opts.format === undefined || opts.format === 'auto' ? detectDialect(head) : null
+  const reading = dialect
+    ? dialect.read(text, head, {
+        mapping: opts.mapping ?? {},
+        log,
+        warnings,
+        headerLine: opts.headerLine,
+        clockGiven,
+      })
+    : readDelimited(text, opts.mapping ?? {}, log, warnings, { headerLine: opts.headerLine })
+  const table = reading.table
+  const info = reading.info
+  if (dialect) table.dialect ??= { id: dialect.id, title: dialect.title }
+  // What the file states about its clock and site; the user's options win.
+  const said = table.statements ?? {}
+  const headerOffset = said.timestampUtcOffsetHours ?? info?.plan.headerUtcOffsetHours ?? null
+  if (
+    headerOffset !== null &&
+    said.timestampUtcOffsetHours === undefined &&
+    opts.utcOffsetHours === undefined &&
+    opts.timeZone === undefined
+  ) {
     warnings.push(
       `the time header gives the offset UTC${headerOffset >= 0 ? '+' : ''}${headerOffset} h: used for the timestamps`,
     )
   }
-  const fixedOffset = opts.utcOffsetHours ?? (opts.timeZone === undefined ? headerOffset : null)
-  const site: SiteInfo = {
-    name: opts.siteName ?? '',
-    latitudeDeg: opts.latitudeDeg ?? null,
-    longitudeDeg: opts.longitudeDeg ?? null,
-    elevationM: opts.elevationM ?? null,
-    timeZone: opts.timeZone ?? null,
-    utcOffsetHours: fixedOffset,
-    windHeightM: opts.windHeightM ?? info.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
-  }
-  if (opts.windHeightM === undefined && info.windHeightM === null && table.columns.wind) {
+  let fileZone = clockGiven ? undefined : said.timestampTimeZone
+  if (
+    fileZone === undefined &&
+    !clockGiven &&
+    headerOffset === null &&
+    said.timestampsInSiteClock &&
+    opts.siteTimeZone !== undefined
+  ) {
+    fileZone = opts.siteTimeZone
     warnings.push(
-      `wind height not given: assumed ${DEFAULT_WIND_HEIGHT_M} m (WMO standard); give windHeightM if it differs`,
+      `the file does not say which clock its times keep; read in the site's zone ${opts.siteTimeZone} (--site-tz), daylight saving applied: give --utc-offset or --tz if it keeps another`,
+    )
+  }
+  const fixedOffset =
+    opts.utcOffsetHours ?? (opts.timeZone === undefined && fileZone === undefined ? headerOffset : null)
+  const windHeightM = info?.windHeightM ?? said.windHeightM ?? null
+  const site: SiteInfo = {
+    name: opts.siteName ?? said.siteName ?? '',
+    latitudeDeg: opts.latitudeDeg ?? said.latitudeDeg ?? null,
+    longitudeDeg: opts.longitudeDeg ?? said.longitudeDeg ?? null,
+    elevationM: opts.elevationM ?? said.elevationM ?? null,
+    timeZone: null,
+    utcOffsetHours: null,
+    windHeightM: opts.windHeightM ?? windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+  }
+  if (opts.windHeightM === undefined && windHeightM === null && table.columns.wind) {
+    warnings.push(
+      `wind height not given: assumed ${DEFAULT_WIND_HEIGHT_M} m (WMO standard); give --wind-height <m> if it differs`,
     )
   }
   const result = assemble(table, {
     site,
     time: {
-      declaredOrder: opts.dateOrder ?? info.headerDateOrder ?? undefined,
-      labels: opts.timestampLabels ?? null,
+      declaredOrder: opts.dateOrder ?? info?.headerDateOrder ?? undefined,
+      labels: opts.labels ?? null,
       fixedOffsetHours: fixedOffset,
-      zone: opts.timeZone ?? null,
-      headerSaysUtc: info.plan.headerSaysUtc,
+      zone: opts.timeZone ?? fileZone ?? null,
+      headerSaysUtc: info?.plan.headerSaysUtc ?? false,
     },
     log,
     warnings,
-    elevationKnown: opts.elevationM !== undefined,
+    elevationKnown: site.elevationM !== null,
+    variableTiming: opts.variableLabels,
+    sampling: opts.sampling,
+    siteClock: {
+      optionZone: opts.siteTimeZone,
+      fileZone: said.siteTimeZone ?? null,
+      fileOffsetHours: said.siteUtcOffsetHours ?? null,
+    },
   })
-  if (site.utcOffsetHours === null && site.timeZone === null && result.timeBasis.startsWith('UTC'))
-    site.utcOffsetHours = 0
-  describeCsv(result, info)
+  if (table.dialect) result.dialect = table.dialect
+  if (info) describeCsv(result, info, table.dialect?.title)
   return result
 }
 
-function describeCsv(result: WeatherReadResult, info: DelimitedInfo): void {
+/** dryhours' own hourly export: UTC hour starts, SI, flags carried over. */
+function readOwnExport(
+  text: string,
+  opts: WeatherReadOptions,
+  log: ProblemLog,
+  warnings: string[],
+): WeatherReadResult {
+  const table = readHourlyExportTable(text, log)
+  const site: SiteInfo = {
+    name: opts.siteName ?? '',
+    latitudeDeg: opts.latitudeDeg ?? null,
+    longitudeDeg: opts.longitudeDeg ?? null,
+    elevationM: opts.elevationM ?? null,
+    timeZone: null,
+    utcOffsetHours: null,
+    windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+  }
+  const result = assemble(table, {
+    site,
+    time: { labels: 'start', fixedOffsetHours: null, zone: null, headerSaysUtc: true },
+    log,
+    warnings,
+    elevationKnown: opts.elevationM !== undefined,
+    siteClock: { optionZone: opts.siteTimeZone },
+  })
+  result.warnings.unshift("dryhours' own hourly export: UTC hour starts, values and flags read as written")
+  return result
+}
+
+function describeCsv(result: WeatherReadResult, info: DelimitedInfo, dialect: string | undefined): void {
   const name = info.delimiter === '\t' ? 'tab' : info.delimiter === ';' ? 'semicolon' : 'comma'
   result.warnings.unshift(
-    `${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,
+    `${dialect ? `${dialect}: ` : ''}${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,
   )
 }
 

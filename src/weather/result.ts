@@ -30,6 +30,30 @@ export interface RowCounts {
   repaired: number
   /** Rows not usable: bad or duplicate timestamp, or no dry bulb / humidity after filling. */
   rejected: number
+  /** Weather reports not used because a better report stood for the same hour (routine before special, nearest the hour). */
+  superseded: number
+}
+
+/** How rows became hours (`weather/hourly-aggregate.ts`). */
+export interface HourlyAggregation {
+  /** `readings`: averaged and summed into hours; `reports`: one report per hour. */
+  sampling: 'readings' | 'reports'
+  /** Most common spacing of the rows [min]. */
+  stepMinutes: number
+  /** Minute after the hour most reports carry (reports only). */
+  reportMinute: number | null
+  /** Reports moved to the nearest hour. */
+  alignedReports: number
+  /** Hours built from more than one row (the largest count over the variables). */
+  hoursFromSeveralRows: number
+  /** Hours kept although some of their readings were missing (flag partialHour). */
+  partialHours: number
+  /** Per variable, hours whose readings covered too little of the hour: left missing. */
+  hoursBelowCoverage: Partial<Record<string, number>>
+  /** Reports not used (a better one stood for the hour). */
+  supersededRows: number
+  /** The rule applied, in words, with its source. */
+  rule: string
 }
 
 /** A row of the file that was not used, with its line and the kind of problem that rejected it. */
@@ -48,6 +72,8 @@ export interface MonthCoverage {
 export interface WeatherReadResult {
   series: HourlySeries
   format: 'csv' | 'epw'
+  /** The known layout the file was read as (e.g. `{ id: 'open-meteo', title: 'Open-Meteo hourly CSV' }`), when one recognised it. */
+  dialect?: { id: string; title: string }
   rows: RowCounts
   /** Every rejected row (uncapped, in file order), so each can be found in the file. */
   rejectedRows: RejectedRow[]
@@ -58,6 +84,8 @@ export interface WeatherReadResult {
   /** Problems beyond the cap that are counted but not listed. */
   problemsOmitted: number
   warnings: string[]
+  /** Statements for the assumptions: what was supplied rather than read (estimated irradiance, constant pressure). */
+  notes: string[]
   period: { start: string; end: string }
   /** How the timestamps became UTC. */
   timeBasis: string
@@ -71,4 +99,6 @@ export interface WeatherReadResult {
   years: number[]
   /** Source years of a typical-year file. */
   sourceYears: number[]
+  /** How rows became hours. */
+  hourly: HourlyAggregation
 }

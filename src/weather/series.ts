@@ -16,10 +16,18 @@ export interface SiteInfo {
   longitudeDeg: number | null
   /** Elevation above sea level [m], null when unknown. */
   elevationM: number | null
-  /** IANA time-zone name of local timestamps, when known. */
+  /** IANA zone of the SITE's clock, when known (`--site-tz`, the file, or the timestamps' zone). */
   timeZone: string | null
-  /** Fixed offset of local standard time from UTC [h], when known (EPW header, or the user). */
+  /**
+   * Offset of the SITE's local standard time from UTC [h], when known: local hours, months and batch
+   * start times use it. Not the basis of the file's timestamps (a UTC file says nothing about it).
+   */
   utcOffsetHours: number | null
+  /**
+   * Where the site's clock came from: the user (`--site-tz`), the file's own statement (EPW header,
+   * a service's metadata), the timestamps' local clock, or the longitude (mean solar time to the hour).
+   */
+  utcOffsetSource?: 'option' | 'file' | 'timestamps' | 'longitude' | null
   /** Height of the wind measurement above ground [m]; 10 m (WMO standard) unless the file or user says otherwise. */
   windHeightM: number
 }
@@ -38,6 +46,16 @@ export const QualityFlag = {
   pressureFromElevation: 16,
   /** The hour's timestamp was duplicated in the input (first occurrence kept). */
   duplicateTimestamp: 32,
+  /**
+   * Irradiance estimated from what the file has (cloud cover, or the day's temperature range) because
+   * it has no irradiance column: see `weather/sun-estimate.ts` for the methods and their uncertainty.
+   */
+  irradianceEstimated: 64,
+  /**
+   * The hour was built from sub-hourly readings and some were missing (enough remained under the
+   * coverage rule of `weather/hourly-aggregate.ts`).
+   */
+  partialHour: 128,
 } as const
 
 /** How a variable's value relates to its timestamp. */
@@ -76,11 +94,26 @@ export interface HourlySeries {
    * at the hour's labelled time (EPW: its end), interval values cover the hour. Set by the readers.
    */
   timing?: Partial<Record<string, ValueTiming>>
+  /**
+   * What the reader supplied rather than read (irradiance estimated from cloud cover or the daily
+   * temperature range, a constant pressure), with method, source and uncertainty: the assessment lists
+   * these among its assumptions.
+   */
+  supplied?: { name: string; value: string; source: string }[]
 }
 
-/** Allocate an empty series of `hours` hours starting at `firstStartUtcMs`, every value missing. */
-export function createEmptySeries(site: SiteInfo, firstStartUtcMs: number, hours: number): HourlySeries {
-  const nanColumn = (): Float64Array => new Float64Array(hours).fill(Number.NaN)
+/**
+ * Allocate an empty series of `hours` hours starting at `firstStartUtcMs`, every value missing. With
+ * `columns` false the value columns are left empty (length 0) for the caller to assign its own.
+ */
+export function createEmptySeries(
+  site: SiteInfo,
+  firstStartUtcMs: number,
+  hours: number,
+  columns = true,
+): HourlySeries {
+  const nanColumn = (): Float64Array =>
+    columns ? new Float64Array(hours).fill(Number.NaN) : new Float64Array(0)
   const startUtcMs = new Float64Array(hours)
   for (let i = 0; i < hours; i++) startUtcMs[i] = firstStartUtcMs + i * 3_600_000
   return {
@@ -96,4 +129,9 @@ export function createEmptySeries(site: SiteInfo, firstStartUtcMs: number, hours
     quality: new Uint8Array(hours),
     typicalYear: false,
   }
+}
+
+/** A column of `hours` missing values. */
+export function missingColumn(hours: number): Float64Array {
+  return new Float64Array(hours).fill(Number.NaN)
 }

@@ -1,10 +1,13 @@
 /**
  * @module weather/timestamps
- * Timestamp text to wall-clock components: ISO 8601 with or without an offset, `YYYY-MM-DD HH:MM`,
- * `YYYY/MM/DD HH:MM`, `MM/DD/YYYY HH:MM` and `DD/MM/YYYY HH:MM` (order declared or detected), a
- * separate time column (`HH:MM`, `H:MM`, `HHMM`, `HH`), 12-hour clocks with AM/PM, and 24:00 for
- * midnight at the end of a day. Components go into columns so the date order can be decided after
- * every row has been seen.
+ * Timestamp text to wall-clock components, read by a hand-written scanner in time linear in the
+ * text (no regular expression): ISO 8601 with or without an offset (`Z`, `+01:00`, `-0500`, `UTC`),
+ * `YYYY-MM-DD HH:MM`, `YYYY/MM/DD HH:MM`, `MM/DD/YYYY HH:MM` and `DD/MM/YYYY HH:MM` (order declared or
+ * detected), `DD.MM.YYYY` (always day first), two-digit years (`1/2/21`), month words (`01-Jan-2021`,
+ * `3 mars 2021` in six languages), compact dates (`20210101`, `2021010113`, `202101011330`,
+ * `20090101:0010`, `2021010113:26`), a separate time or hour column (`HH:MM`, `H:MM`, `HHMM`, `HH`, `0100`–`2400`),
+ * 12-hour clocks (`1:00 PM`, `1:00a`, `12:30p`, `p.m.`), and 24:00 for midnight at the end of a day.
+ * Components go into columns so the date order can be decided after every row has been seen.
  */
 
 /** Parsed components of all rows; NaN where a row's timestamp could not be read. */
@@ -14,12 +17,17 @@ export interface TimestampColumns {
   first: Float64Array
   /** Second date number. */
   second: Float64Array
-  /** Minutes after the day's midnight, 0…1440 (1440 = 24:00). */
+  /** Minutes after the day's midnight, 0…1440 (1440 = 24:00); seconds as a fraction. */
   minuteOfDay: Float64Array
   /** Offset written in the text [min east of UTC], NaN when none. */
   offsetMin: Float64Array
-  /** 1 when the row's date was year-first (first = month, second = day regardless of order). */
+  /**
+   * 1 when month and day are known regardless of the date order (first = month, second = day): a
+   * year-first, dotted, compact or month-word date.
+   */
   yearFirst: Uint8Array
+  /** Rows whose year was written with two digits (read with {@link TWO_DIGIT_YEAR_PIVOT}). */
+  twoDigitYears: number
 }
 
 export function createTimestampColumns(n: number): TimestampColumns {
@@ -30,13 +38,350 @@ export function createTimestampColumns(n: number): TimestampColumns {
     minuteOfDay: new Float64Array(n).fill(Number.NaN),
     offsetMin: new Float64Array(n).fill(Number.NaN),
     yearFirst: new Uint8Array(n),
+    twoDigitYears: 0,
   }
 }
 
-const DATE_TIME =
-  /^\s*(\d{1,4})[-/.](\d{1,2})[-/.](\d{1,4})(?:[T\s]\s*(\d{1,2})(?::?(\d{2}))?(?::(\d{2})(?:[.,]\d+)?)?\s*([aApP][mM])?)?\s*(Z|UTC|GMT|[+-]\d{2}(?::?\d{2})?)?\s*$/
+/**
+ * Two-digit years: 69–99 are 1969–1999, 00–68 are 2000–2068 (The Open Group, Single UNIX
+ * Specification v2 (1997), strptime() `%y`).
+ */
+export const TWO_DIGIT_YEAR_PIVOT = 69
 
-const TIME_ONLY = /^\s*(\d{1,2})(?::?(\d{2}))?(?::(\d{2}))?\s*([aApP][mM])?\s*$/
+/**
+ * Month-word prefixes (lower case, accents removed) in English, German, Spanish, French, Portuguese
+ * and Italian; from memory. The longest prefix wins (`juil` July before `jul`, `juin` June).
+ */
+const MONTH_WORDS: readonly [string, number][] = [
+  ['jan', 1],
+  ['ene', 1],
+  ['gen', 1],
+  ['feb', 2],
+  ['fev', 2],
+  ['mar', 3],
+  ['mrz', 3],
+  ['apr', 4],
+  ['abr', 4],
+  ['avr', 4],
+  ['may', 5],
+  ['mai', 5],
+  ['mag', 5],
+  ['jun', 6],
+  ['juin', 6],
+  ['giu', 6],
+  ['jul', 7],
+  ['juil', 7],
+  ['lug', 7],
+  ['aug', 8],
+  ['ago', 8],
+  ['aou', 8],
+  ['sep', 9],
+  ['set', 9],
+  ['oct', 10],
+  ['okt', 10],
+  ['out', 10],
+  ['ott', 10],
+  ['nov', 11],
+  ['dec', 12],
+  ['dez', 12],
+  ['dic', 12],
+]
+
+/** Month 1–12 of a month word (`Jan`, `janvier`, `März`, `dic`), 0 when it is none. */
+export function monthOfWord(word: string): number {
+  if (word.length < 3 || word.length > 10) return 0
+  let w = ''
+  for (const ch of word.normalize('NFD').toLowerCase()) {
+    const c = ch.charCodeAt(0)
+    if (c >= 97 && c <= 122) w += ch
+    else if (c < 0x300 || c > 0x36f) return 0 // combining accents dropped, anything else is not a month word
+  }
+  let best = 0
+  let bestLength = 0
+  for (const [prefix, month] of MONTH_WORDS) {
+    if (prefix.length > bestLength && w.startsWith(prefix)) {
+      best = month
+      bestLength = prefix.length
+    }
+  }
+  return best
+}
+
+const TAB = 9
+const SPACE = 32
+const PLUS = 43
+const COMMA = 44
+const DASH = 45
+const DOT = 46
+const SLASH = 47
+const COLON = 58
+const MINUS_SIGN = 0x2212
+
+function isSpace(c: number): boolean {
+  return c === SPACE || c === TAB || c === 0xa0
+}
+function isDigit(c: number): boolean {
+  return c >= 48 && c <= 57
+}
+function isLetter(c: number): boolean {
+  return (
+    (c >= 65 && c <= 90) || (c >= 97 && c <= 122) || (c >= 0xc0 && c <= 0x24f && c !== 0xd7 && c !== 0xf7)
+  )
+}
+
+/**
+ * A left-to-right reader over one cell. Each step looks at each character at most once and never
+ * goes back further than the start of the step, so any text is read in time linear in its length.
+ */
+class Cursor {
+  k = 0
+  constructor(readonly text: string) {}
+  get atEnd(): boolean {
+    return this.k >= this.text.length
+  }
+  peek(): number {
+    return this.k < this.text.length ? this.text.charCodeAt(this.k) : -1
+  }
+  skipSpaces(): number {
+    const from = this.k
+    while (this.k < this.text.length && isSpace(this.text.charCodeAt(this.k))) this.k++
+    return this.k - from
+  }
+  /** A run of digits: its value (first 15 digits) and its length (0 when none). */
+  digits(): { value: number; length: number } {
+    let value = 0
+    const from = this.k
+    while (this.k < this.text.length && isDigit(this.text.charCodeAt(this.k))) {
+      if (this.k - from < 15) value = value * 10 + (this.text.charCodeAt(this.k) - 48)
+      this.k++
+    }
+    return { value, length: this.k - from }
+  }
+  /** A run of letters (ASCII and Latin-1/Extended-A) and combining accents. */
+  word(): string {
+    const from = this.k
+    for (; this.k < this.text.length; this.k++) {
+      const c = this.text.charCodeAt(this.k)
+      if (!isLetter(c) && !(c >= 0x300 && c <= 0x36f)) break
+    }
+    return this.text.slice(from, this.k)
+  }
+  eat(c: number): boolean {
+    if (this.peek() !== c) return false
+    this.k++
+    return true
+  }
+}
+
+/** Calendar part of a timestamp. */
+interface DatePart {
+  year: number
+  first: number
+  second: number
+  /** first = month and second = day whatever the date order. */
+  ordered: boolean
+  twoDigitYear: boolean
+  /** Minutes of day carried by a compact date (`2021010113`), else NaN. */
+  minutes: number
+}
+
+function fullYear(value: number, length: number): number {
+  if (length === 4) return value
+  return value >= TWO_DIGIT_YEAR_PIVOT ? 1900 + value : 2000 + value
+}
+
+/** Value of `n` digits of `text` from `at` (known to be digits). */
+function digitsAt(text: string, at: number, n: number): number {
+  let v = 0
+  for (let j = 0; j < n; j++) v = v * 10 + (text.charCodeAt(at + j) - 48)
+  return v
+}
+
+/**
+ * `YYYY-MM-DD`, `YYYY/M/D`, `M/D/YYYY`, `D.M.YY`, `1-Jan-2021`, `3 mars 2021`, `Jan 3 2021`,
+ * `20210101`, `2021010113`, `202101011330`, `20210101133000`; null when none of these.
+ */
+function readDate(c: Cursor): DatePart | null {
+  if (isLetter(c.peek())) {
+    // `Jan 3 2021`, `Jan 3, 2021`
+    const month = monthOfWord(c.word())
+    if (month === 0) return null
+    c.eat(DOT)
+    if (c.skipSpaces() === 0 && !c.eat(DASH)) return null
+    const d = c.digits()
+    if (d.length < 1 || d.length > 2) return null
+    c.eat(COMMA)
+    if (c.skipSpaces() === 0 && !c.eat(DASH)) return null
+    const y = c.digits()
+    if (y.length !== 4) return null
+    return {
+      year: y.value,
+      first: month,
+      second: d.value,
+      ordered: true,
+      twoDigitYear: false,
+      minutes: Number.NaN,
+    }
+  }
+  const at = c.k
+  const a = c.digits()
+  if (a.length === 8 || a.length === 10 || a.length === 12 || a.length === 14) {
+    const t = c.text
+    let minutes = Number.NaN
+    if (a.length >= 10) {
+      minutes = minutesOf(digitsAt(t, at + 8, 2), a.length >= 12 ? digitsAt(t, at + 10, 2) : 0, undefined)
+      if (a.length === 14) {
+        const s = digitsAt(t, at + 12, 2)
+        if (s >= 60) return null
+        minutes += s / 60
+      }
+      if (!Number.isFinite(minutes)) return null
+      // `2023070923:26`: an hour then `:MM` (the German weather service's solar product).
+      if (
+        a.length === 10 &&
+        c.peek() === COLON &&
+        isDigit(t.charCodeAt(c.k + 1)) &&
+        isDigit(t.charCodeAt(c.k + 2))
+      ) {
+        const m = digitsAt(t, c.k + 1, 2)
+        if (!isDigit(t.charCodeAt(c.k + 3)) && m < 60) {
+          minutes += m
+          c.k += 3
+        }
+      }
+    }
+    return {
+      year: digitsAt(t, at, 4),
+      first: digitsAt(t, at + 4, 2),
+      second: digitsAt(t, at + 6, 2),
+      ordered: true,
+      twoDigitYear: false,
+      minutes,
+    }
+  }
+  if (a.length === 0 || a.length === 3 || a.length > 4) return null
+  const sep = c.peek()
+  if (sep !== DASH && sep !== SLASH && sep !== DOT && sep !== SPACE) return null
+  c.k++
+  if (a.length === 4) {
+    if (sep === SPACE) return null
+    const b = c.digits()
+    if (b.length < 1 || b.length > 2 || !c.eat(sep)) return null
+    const d = c.digits()
+    if (d.length < 1 || d.length > 2) return null
+    return {
+      year: a.value,
+      first: b.value,
+      second: d.value,
+      ordered: true,
+      twoDigitYear: false,
+      minutes: Number.NaN,
+    }
+  }
+  // Day or month first, year last.
+  let month = 0
+  const b = c.digits()
+  if (b.length === 0) {
+    month = monthOfWord(c.word())
+    if (month === 0) return null
+    c.eat(DOT)
+  } else if (b.length > 2 || sep === SPACE) return null
+  if (!c.eat(sep)) return null
+  const y = c.digits()
+  if (y.length !== 2 && y.length !== 4) return null
+  const year = fullYear(y.value, y.length)
+  const twoDigitYear = y.length === 2
+  if (month > 0)
+    return { year, first: month, second: a.value, ordered: true, twoDigitYear, minutes: Number.NaN }
+  // Dotted dates are day.month.year wherever they are written (common practice, no source).
+  if (sep === DOT)
+    return { year, first: b.value, second: a.value, ordered: true, twoDigitYear, minutes: Number.NaN }
+  return { year, first: a.value, second: b.value, ordered: false, twoDigitYear, minutes: Number.NaN }
+}
+
+/**
+ * A clock time: `HH:MM`, `HH:MM:SS(.fff)`, `HHMM`, `HMM`, and a bare hour `H` when `bareHour`; each
+ * optionally followed by `a`/`p`, `am`/`pm` or `a.m.`/`p.m.`. Minutes after midnight (seconds as a
+ * fraction), NaN when not a clock time.
+ */
+function readClock(c: Cursor, bareHour: boolean): number {
+  const h = c.digits()
+  if (h.length === 0 || h.length > 4) return Number.NaN
+  let hour = h.value
+  let minute = 0
+  let second = 0
+  if (h.length >= 3) {
+    hour = Math.floor(h.value / 100)
+    minute = h.value % 100
+  } else if (c.eat(COLON)) {
+    const m = c.digits()
+    if (m.length !== 2) return Number.NaN
+    minute = m.value
+    if (c.eat(COLON)) {
+      const s = c.digits()
+      if (s.length !== 2) return Number.NaN
+      second = s.value
+      if (c.peek() === DOT || c.peek() === COMMA) {
+        c.k++
+        if (c.digits().length === 0) return Number.NaN
+      }
+    }
+  } else if (!bareHour) return Number.NaN
+  const beforeMarker = c.k
+  c.skipSpaces()
+  let ampm: 'am' | 'pm' | undefined
+  const letter = c.peek() | 32
+  if (letter === 97 || letter === 112) {
+    c.k++
+    if (c.eat(DOT)) {
+      if ((c.peek() | 32) === 109) {
+        c.k++
+        c.eat(DOT)
+      }
+    } else if ((c.peek() | 32) === 109) c.k++
+    if (!isLetter(c.peek())) ampm = letter === 97 ? 'am' : 'pm'
+  }
+  if (ampm === undefined) c.k = beforeMarker
+  if (second >= 60) return Number.NaN
+  const minutes = minutesOf(hour, minute, ampm)
+  return minutes + second / 60
+}
+
+/**
+ * `Z`, `UTC`, `GMT`, `UTC+2`, `+01:00`, `-0500`, `+01`, `−03:30` after the clock: minutes east of
+ * UTC; NaN when there is none; null when the text is something else.
+ */
+function readZone(c: Cursor): number | null {
+  c.skipSpaces()
+  if (c.atEnd) return Number.NaN
+  let named = false
+  if (isLetter(c.peek())) {
+    const w = c.word().toUpperCase()
+    if (w !== 'Z' && w !== 'UTC' && w !== 'GMT') return null
+    named = true
+    c.skipSpaces()
+    if (c.atEnd) return 0
+  }
+  const sign = c.peek()
+  if (sign !== PLUS && sign !== DASH && sign !== MINUS_SIGN) return null
+  c.k++
+  const h = c.digits()
+  let hours: number
+  let minutes = 0
+  if (h.length === 4 && !named) {
+    hours = Math.floor(h.value / 100)
+    minutes = h.value % 100
+  } else if (h.length === 1 || h.length === 2) {
+    hours = h.value
+    if (c.eat(COLON)) {
+      const m = c.digits()
+      if (m.length !== 2) return null
+      minutes = m.value
+    }
+  } else return null
+  if (hours > 14 || minutes >= 60) return null
+  return (sign === PLUS ? 1 : -1) * (hours * 60 + minutes)
+}
 
 /** Minutes after midnight for hour, minute and an optional am/pm marker; NaN when out of range. */
 function minutesOf(h: number, m: number, ampm: string | undefined): number {
@@ -50,20 +395,9 @@ function minutesOf(h: number, m: number, ampm: string | undefined): number {
   return hour * 60 + m
 }
 
-function offsetMinutes(text: string | undefined): number {
-  if (text === undefined) return Number.NaN
-  if (text === 'Z' || text === 'UTC' || text === 'GMT') return 0
-  const sign = text[0] === '-' ? -1 : 1
-  const digits = text.slice(1).replace(':', '')
-  const h = Number(digits.slice(0, 2))
-  const m = digits.length > 2 ? Number(digits.slice(2, 4)) : 0
-  if (h > 14 || m >= 60) return Number.NaN
-  return sign * (h * 60 + m)
-}
-
 /**
  * Parse a date-time (or date-only, when `timeText` is given) into row `i` of `out`. `timeText`
- * comes from a separate time column. Returns false when the text is not a timestamp.
+ * comes from a separate time or hour column. Returns false when the text is not a timestamp.
  */
 export function parseTimestampInto(
   out: TimestampColumns,
@@ -72,89 +406,131 @@ export function parseTimestampInto(
   timeText?: string,
 ): boolean {
   if (timeText === undefined && parseIsoFast(out, i, text)) return true
-  const m = DATE_TIME.exec(text)
-  if (m === null) return false
-  const a = Number(m[1])
-  const b = Number(m[2])
-  const c = Number(m[3])
-  if (m[1].length === 4) {
-    out.year[i] = a
-    out.first[i] = b
-    out.second[i] = c
-    out.yearFirst[i] = 1
-  } else if (m[3].length === 4) {
-    out.year[i] = c
-    out.first[i] = a
-    out.second[i] = b
-  } else {
-    return false
-  }
-  let minutes: number
+  const c = new Cursor(text)
+  c.skipSpaces()
+  const date = readDate(c)
+  if (date === null) return false
+  let minutes = date.minutes
+  let offset = Number.NaN
   if (timeText !== undefined) {
-    if (m[4] !== undefined) return false
+    c.skipSpaces()
+    if (!c.atEnd || !Number.isNaN(minutes)) return false
     minutes = parseTimeOfDay(timeText)
-  } else if (m[4] === undefined) {
-    minutes = Number.NaN
   } else {
-    minutes = minutesOf(Number(m[4]), m[5] === undefined ? 0 : Number(m[5]), m[7])
+    // Between date and clock: 'T', spaces, ':' (`20090101:0010`), or a comma and spaces.
+    const spaces = c.skipSpaces()
+    const next = c.peek()
+    let clock = false
+    if (next === 84 || next === 116) {
+      c.k++
+      clock = true
+    } else if (next === COLON && spaces === 0) {
+      c.k++
+      clock = true
+    } else if (next === COMMA) {
+      c.k++
+      c.skipSpaces()
+      clock = true
+    } else if (spaces > 0 && isDigit(next)) clock = true
+    if (clock) {
+      if (!Number.isNaN(minutes)) return false
+      minutes = readClock(c, false)
+      if (Number.isNaN(minutes)) return false
+    }
+    const zone = readZone(c)
+    if (zone === null) return false
+    offset = zone
+    c.skipSpaces()
+    if (!c.atEnd) return false
   }
   if (!Number.isFinite(minutes)) return false
+  out.year[i] = date.year
+  out.first[i] = date.first
+  out.second[i] = date.second
+  out.yearFirst[i] = date.ordered ? 1 : 0
   out.minuteOfDay[i] = minutes
-  out.offsetMin[i] = offsetMinutes(m[8])
+  out.offsetMin[i] = offset
+  if (date.twoDigitYear) out.twoDigitYears++
   return true
-}
-
-function digit(text: string, k: number): number {
-  const c = text.charCodeAt(k) - 48
-  return c >= 0 && c <= 9 ? c : Number.NaN
 }
 
 /**
  * The common shapes `YYYY-MM-DDTHH:MM`, `YYYY-MM-DD HH:MM`, optionally `:SS`, then nothing or `Z`,
- * read by character codes (a 30-year file has 263,000 of them). Returns false for anything else,
- * which the general pattern then reads.
+ * read by fixed character positions (a 30-year file has 263,000 of them). Returns false for anything
+ * else, which the scanner then reads.
  */
 function parseIsoFast(out: TimestampColumns, i: number, text: string): boolean {
-  const n = text.length
-  if (n < 16 || text.charCodeAt(4) !== 45 || text.charCodeAt(7) !== 45 || text.charCodeAt(13) !== 58)
+  return parseIsoFastAt(out, i, text, 0, text.length)
+}
+
+/**
+ * {@link parseIsoFast} on `text[from, to)`, so a reader can parse a cell in place without cutting it
+ * out of the file's text.
+ */
+export function parseIsoFastAt(
+  out: TimestampColumns,
+  i: number,
+  text: string,
+  from: number,
+  to: number,
+): boolean {
+  const n = to - from
+  if (
+    n < 16 ||
+    text.charCodeAt(from + 4) !== 45 ||
+    text.charCodeAt(from + 7) !== 45 ||
+    text.charCodeAt(from + 13) !== 58
+  )
     return false
-  const sep = text.charCodeAt(10)
+  const sep = text.charCodeAt(from + 10)
   if (sep !== 84 && sep !== 32) return false
   let k = 16
-  if (n >= 19 && text.charCodeAt(16) === 58) {
-    if (Number.isNaN(digit(text, 17) + digit(text, 18))) return false
+  let seconds = 0
+  if (n >= 19 && text.charCodeAt(from + 16) === 58) {
+    seconds = digitAt(text, from + 17) * 10 + digitAt(text, from + 18)
+    if (!(seconds < 60)) return false
     k = 19
   }
   let offset = Number.NaN
   if (k === n) offset = Number.NaN
-  else if (k === n - 1 && text.charCodeAt(k) === 90) offset = 0
+  else if (k === n - 1 && text.charCodeAt(from + k) === 90) offset = 0
   else return false
-  const year = digit(text, 0) * 1000 + digit(text, 1) * 100 + digit(text, 2) * 10 + digit(text, 3)
-  const month = digit(text, 5) * 10 + digit(text, 6)
-  const day = digit(text, 8) * 10 + digit(text, 9)
-  const hour = digit(text, 11) * 10 + digit(text, 12)
-  const minute = digit(text, 14) * 10 + digit(text, 15)
+  const year =
+    digitAt(text, from) * 1000 +
+    digitAt(text, from + 1) * 100 +
+    digitAt(text, from + 2) * 10 +
+    digitAt(text, from + 3)
+  const month = digitAt(text, from + 5) * 10 + digitAt(text, from + 6)
+  const day = digitAt(text, from + 8) * 10 + digitAt(text, from + 9)
+  const hour = digitAt(text, from + 11) * 10 + digitAt(text, from + 12)
+  const minute = digitAt(text, from + 14) * 10 + digitAt(text, from + 15)
   const minutes = minutesOf(hour, minute, undefined)
   if (Number.isNaN(year + month + day) || Number.isNaN(minutes)) return false
   out.year[i] = year
   out.first[i] = month
   out.second[i] = day
   out.yearFirst[i] = 1
-  out.minuteOfDay[i] = minutes
+  out.minuteOfDay[i] = seconds === 0 ? minutes : minutes + seconds / 60
   out.offsetMin[i] = offset
   return true
 }
 
-/** Minutes after midnight from `HH:MM`, `H:MM`, `HHMM` (4 digits) or `HH`; NaN when not a time. */
+function digitAt(text: string, k: number): number {
+  const c = text.charCodeAt(k) - 48
+  return c >= 0 && c <= 9 ? c : Number.NaN
+}
+
+/**
+ * Minutes after midnight of a time or hour cell: `HH:MM(:SS)`, `H:MM`, `HHMM` and `HMM` (`0100`–`2400`),
+ * a bare hour `HH` (0–24), each with an optional am/pm marker (`1:00a`, `12:30p`, `1 PM`); NaN when
+ * the cell is not a time.
+ */
 export function parseTimeOfDay(text: string): number {
-  const t = TIME_ONLY.exec(text)
-  if (t === null) return Number.NaN
-  if (t[2] === undefined && t[1].length > 2) return Number.NaN
-  if (t[2] === undefined && /^\s*\d{3,4}\s*$/.test(text)) {
-    const v = Number(text)
-    return minutesOf(Math.floor(v / 100), v % 100, undefined)
-  }
-  return minutesOf(Number(t[1]), t[2] === undefined ? 0 : Number(t[2]), t[4])
+  const c = new Cursor(text)
+  c.skipSpaces()
+  const minutes = readClock(c, true)
+  c.skipSpaces()
+  return c.atEnd ? minutes : Number.NaN
 }
 
 export type DateOrder = 'ymd' | 'mdy' | 'dmy'

@@ -49,6 +49,11 @@ export interface UnitConversion {
   unit: string
   scale: number
   offset: number
+  /**
+   * An amount over the row's interval (energy per m²: Wh/m², J/m², MJ/m², langley): `scale` turns an
+   * hour's amount into the hour's mean irradiance; other intervals rescale by 60/interval minutes.
+   */
+  amount?: true
 }
 
 type Family = 'temperature' | 'humidity' | 'pressure' | 'speed' | 'irradiance' | 'depth' | 'cover'
@@ -66,28 +71,43 @@ const FAMILY: Record<WeatherVariable, Family> = {
 }
 
 const u = (unit: string, scale: number, offset = 0): UnitConversion => ({ unit, scale, offset })
+/** An amount per hour (see {@link UnitConversion.amount}). */
+const perHour = (unit: string, scale: number): UnitConversion => ({ unit, scale, offset: 0, amount: true })
 
 /**
- * Unit tokens (lower case, spaces, '°', '²', '^' and '/' variants removed by {@link normalizeUnitToken}).
- * Factors: °F → °C (t − 32)/1.8 and K → °C t − 273.15 (definitions, NIST SP 811 (2008) App. B);
- * 1 inHg = 3.38639 kPa (NIST SP 811 App. B.8, at 0 °C); 1 mmHg = 0.133322 kPa (NIST SP 811);
- * 1 mph = 0.44704 m/s, 1 knot = 1852/3600 m/s, 1 in = 25.4 mm (exact definitions, NIST SP 811);
- * 1 langley = 41,840 J/m² (NIST SP 811 App. B.8: 1 cal_th/cm²); hourly amounts divided by 3600 s give
- * the mean irradiance over the hour; 1 okta = 1/8 of the sky (WMO-No. 8), 1 tenth = 10 %.
+ * Unit tokens (lower case, brackets, spaces, '°', '^' and '*' removed, '²' → 2, `m-2` → m2, `s-1` → /s,
+ * by {@link normalizeUnitToken}). Factors, all from NIST SP 811 (Thompson & Taylor 2008, "Guide for
+ * the Use of the International System of Units", App. B.8 and B.9; from memory): °F → °C (t − 32)/1.8
+ * and K → °C t − 273.15 (definitions); 1 inHg (conventional) = 3.386 389 kPa; 1 mmHg = 0.133 322 kPa;
+ * 1 mph = 0.447 04 m/s, 1 knot = 1852/3600 m/s, 1 km/h = 1/3.6 m/s, 1 in = 25.4 mm (exact); 1 langley =
+ * 41 840 J/m² (1 cal_th/cm², exact), so 1 langley per day = 41 840 / 86 400 = 0.4843 W/m² as a day's mean
+ * rate; 1 kWh = 3.6 MJ (exact). An amount of energy per m² over an hour
+ * divided by 3600 s is the mean irradiance over that hour; a precipitation amount of 1 kg/m² is 1 mm of
+ * water (density 1000 kg/m³) and 1 m of ERA5-style total precipitation is 1000 mm. 1 okta = 1/8 of the
+ * sky (WMO-No. 8), 1 tenth = 10 %.
  */
 const TOKENS: Record<Family, Record<string, UnitConversion>> = {
   temperature: {
     c: u('°C', 1),
     degc: u('°C', 1),
+    degreec: u('°C', 1),
+    degreesc: u('°C', 1),
     celsius: u('°C', 1),
+    degreescelsius: u('°C', 1),
+    gradc: u('°C', 1),
     f: u('°F', 1 / 1.8, -32 / 1.8),
     degf: u('°F', 1 / 1.8, -32 / 1.8),
+    degreef: u('°F', 1 / 1.8, -32 / 1.8),
+    degreesf: u('°F', 1 / 1.8, -32 / 1.8),
     fahrenheit: u('°F', 1 / 1.8, -32 / 1.8),
+    degreesfahrenheit: u('°F', 1 / 1.8, -32 / 1.8),
     k: u('K', 1, -273.15),
     kelvin: u('K', 1, -273.15),
   },
   humidity: {
     '%': u('%', 1),
+    '%rh': u('%', 1),
+    rh: u('%', 1),
     pct: u('%', 1),
     percent: u('%', 1),
     fraction: u('fraction', 100),
@@ -98,42 +118,75 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     pa: u('Pa', 0.001),
     hpa: u('hPa', 0.1),
     mbar: u('mbar', 0.1),
+    mbars: u('mbar', 0.1),
     mb: u('mbar', 0.1),
+    millibar: u('mbar', 0.1),
+    millibars: u('mbar', 0.1),
     kpa: u('kPa', 1),
-    inhg: u('inHg', 3.38639),
+    inhg: u('inHg', 3.386389),
+    inchhg: u('inHg', 3.386389),
+    inchesofmercury: u('inHg', 3.386389),
     mmhg: u('mmHg', 0.133322),
   },
   speed: {
     ms: u('m/s', 1),
     mps: u('m/s', 1),
     'm/s': u('m/s', 1),
+    'meters/second': u('m/s', 1),
+    'metres/second': u('m/s', 1),
+    meterspersecond: u('m/s', 1),
+    metrespersecond: u('m/s', 1),
     kmh: u('km/h', 1 / 3.6),
     kph: u('km/h', 1 / 3.6),
     'km/h': u('km/h', 1 / 3.6),
+    'km/hr': u('km/h', 1 / 3.6),
     mph: u('mph', 0.44704),
+    'mi/h': u('mph', 0.44704),
+    'mi/hr': u('mph', 0.44704),
     kn: u('knots', 1852 / 3600),
     kt: u('knots', 1852 / 3600),
     kts: u('knots', 1852 / 3600),
+    knot: u('knots', 1852 / 3600),
     knots: u('knots', 1852 / 3600),
   },
   irradiance: {
     wm2: u('W/m²', 1),
     'w/m2': u('W/m²', 1),
-    whm2: u('Wh/m² per hour', 1),
-    'wh/m2': u('Wh/m² per hour', 1),
-    kjm2: u('kJ/m² per hour', 1000 / 3600),
-    'kj/m2': u('kJ/m² per hour', 1000 / 3600),
-    mjm2: u('MJ/m² per hour', 1e6 / 3600),
-    'mj/m2': u('MJ/m² per hour', 1e6 / 3600),
-    jcm2: u('J/cm² per hour', 1e4 / 3600),
-    'j/cm2': u('J/cm² per hour', 1e4 / 3600),
-    ly: u('langley per hour', 41840 / 3600),
-    langley: u('langley per hour', 41840 / 3600),
+    kwm2: u('kW/m²', 1000),
+    'kw/m2': u('kW/m²', 1000),
+    whm2: perHour('Wh/m² per hour', 1),
+    'wh/m2': perHour('Wh/m² per hour', 1),
+    kwhm2: perHour('kWh/m² per hour', 1000),
+    'kwh/m2': perHour('kWh/m² per hour', 1000),
+    jm2: perHour('J/m² per hour', 1 / 3600),
+    'j/m2': perHour('J/m² per hour', 1 / 3600),
+    kjm2: perHour('kJ/m² per hour', 1000 / 3600),
+    'kj/m2': perHour('kJ/m² per hour', 1000 / 3600),
+    mjm2: perHour('MJ/m² per hour', 1e6 / 3600),
+    'mj/m2': perHour('MJ/m² per hour', 1e6 / 3600),
+    jcm2: perHour('J/cm² per hour', 1e4 / 3600),
+    'j/cm2': perHour('J/cm² per hour', 1e4 / 3600),
+    'ly/day': u('langley/day', 41840 / 86400),
+    'ly/d': u('langley/day', 41840 / 86400),
+    'langley/day': u('langley/day', 41840 / 86400),
+    'langleys/day': u('langley/day', 41840 / 86400),
+    'w/sqm': u('W/m²', 1),
+    'w/sq.m': u('W/m²', 1),
+    ly: perHour('langley per hour', 41840 / 3600),
+    langley: perHour('langley per hour', 41840 / 3600),
+    langleys: perHour('langley per hour', 41840 / 3600),
   },
   depth: {
     mm: u('mm', 1),
+    'mm/h': u('mm', 1),
+    'mm/hr': u('mm', 1),
+    kgm2: u('kg/m² (mm)', 1),
+    'kg/m2': u('kg/m² (mm)', 1),
     cm: u('cm', 10),
+    m: u('m', 1000),
     in: u('in', 25.4),
+    'in/h': u('in', 25.4),
+    'in/hr': u('in', 25.4),
     inch: u('in', 25.4),
     inches: u('in', 25.4),
   },
@@ -144,30 +197,82 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     tenths: u('tenths', 10),
     oktas: u('oktas', 100 / 8),
     okta: u('oktas', 100 / 8),
+    eighths: u('oktas', 100 / 8),
+    '1/8': u('oktas', 100 / 8),
     fraction: u('fraction', 100),
+    '01': u('fraction', 100),
   },
 }
 
-/** Lower-case a unit token and strip decoration: `"(°F)"` → `f`, `"W m-2"` → `wm2`, `"m s^-1"` → `ms`. */
+/** Longest unit token considered [characters]; anything longer is not a unit (keeps every call short). */
+const MAX_UNIT_CHARS = 40
+
+/**
+ * Lower-case a unit token and strip decoration, by one pass over its characters: `"(°F)"` → `f`,
+ * `"℉"` → `f`, `"W m-2"` → `wm2`, `"m s^-1"` → `m/s`, `"J m**-2"` → `jm2`; '' for text longer than
+ * {@link MAX_UNIT_CHARS}.
+ */
 export function normalizeUnitToken(raw: string): string {
-  let t = raw.trim().toLowerCase()
-  t = t.replace(/^[([{]+|[)\]}]+$/g, '')
-  t = t.replace(/°|º|deg\s+/g, (m) => (m.startsWith('deg') ? 'deg' : ''))
-  t = t.replace(/²/g, '2').replace(/\^/g, '').replace(/\*\*/g, '')
-  t = t.replace(/m-2/g, 'm2').replace(/s-1/g, '/s').replace(/h-1/g, '/h')
-  t = t.replace(/\s+/g, '')
-  if (t === 'degc' || t === 'degreesc' || t === 'degreec') return 'c'
-  if (t === 'degf' || t === 'degreesf' || t === 'degreef') return 'f'
-  if (t === 'm/s' || t === 'm//s') return 'ms'
-  if (t === 'km/h' || t === 'km//h') return 'kmh'
-  return t.replace(/\/+$/, '')
+  if (raw.length > MAX_UNIT_CHARS) return ''
+  let t = ''
+  for (const ch of raw.toLowerCase()) {
+    switch (ch) {
+      case '(':
+      case ')':
+      case '[':
+      case ']':
+      case '{':
+      case '}':
+      case ' ':
+      case '\t':
+      case '\u00a0':
+      case '°':
+      case 'º':
+      case '^':
+      case '*':
+      case '_':
+        break
+      case '℉':
+        t += 'f'
+        break
+      case '℃':
+        t += 'c'
+        break
+      case '²':
+        t += '2'
+        break
+      case '·':
+      case '⋅':
+        break
+      default:
+        t += ch
+    }
+  }
+  t = t.replaceAll('m-2', 'm2').replaceAll('s-1', '/s').replaceAll('h-1', '/h').replaceAll('//', '/')
+  if (t.startsWith('deg') && (t === 'degc' || t === 'degf' || t.startsWith('degree'))) {
+    if (t.endsWith('c') || t.endsWith('celsius')) return 'c'
+    if (t.endsWith('f') || t.endsWith('fahrenheit')) return 'f'
+  }
+  if (t === 'm/s') return 'ms'
+  if (t === 'km/h') return 'kmh'
+  while (t.endsWith('/')) t = t.slice(0, -1)
+  return t
 }
 
 /** The conversion of `token` for `variable`, or null when the token is not a unit of that variable. */
 export function unitConversion(variable: WeatherVariable, token: string): UnitConversion | null {
   const table = TOKENS[FAMILY[variable]]
   const t = normalizeUnitToken(token)
-  return table[t] ?? table[t.replace(/\//g, '')] ?? null
+  if (t === '') return null
+  return table[t] ?? table[t.replaceAll('/', '')] ?? null
+}
+
+/** Whether `token` is a unit of any variable (for units rows and trailing tokens). */
+export function isUnitToken(token: string): boolean {
+  const t = normalizeUnitToken(token)
+  if (t === '') return false
+  for (const family of Object.values(TOKENS)) if (family[t] ?? family[t.replaceAll('/', '')]) return true
+  return false
 }
 
 /** Every accepted unit token for `variable`, for error messages. */

@@ -48,7 +48,7 @@ export const APP_JS = `(function () {
     if (askQuestions) {
       var q = document.getElementById('file-questions');
       if (q) q.open = true;
-      var tz = document.getElementById('f-timeZone');
+      var tz = document.getElementById('f-utcOffset');
       if (tz) tz.focus();
     }
     errorBox.scrollIntoView({ block: 'center' });

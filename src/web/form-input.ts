@@ -11,7 +11,12 @@ import { productById } from '../product/catalogue.ts'
 import type { ProductProfile } from '../product/profile.ts'
 import { parseUserProfile } from '../product/profile-schema.ts'
 import type { UnitSystem } from '../report/display-units.ts'
-import { parseMappingArgument } from '../weather/options.ts'
+import {
+  checkWeatherOptions,
+  WeatherOptionError,
+  WeatherOptionsInvalid,
+  weatherOptionsFromTexts,
+} from '../weather/option-spec.ts'
 
 /** Most weather files one comparison takes, unless the server says otherwise (the API's `maxSites`). */
 export const MAX_SITES = 8
@@ -108,40 +113,20 @@ export async function parseForm(
     )
   }
 
-  const weatherOptions: Record<string, unknown> = {}
-  const siteName = text(form, 'siteName')
-  if (siteName !== undefined) {
-    if (siteName.length > 200) throw new RangeError('siteName: at most 200 characters')
-    weatherOptions.siteName = siteName
-  }
-  const tz = text(form, 'timeZone')
-  if (tz !== undefined) weatherOptions.timeZone = tz
-  const offset = numberField(form, 'utcOffsetHours', -12, 14, 'h')
-  if (offset !== undefined) weatherOptions.utcOffsetHours = offset
-  const lat = numberField(form, 'latitudeDeg', -90, 90, '° (north positive)')
-  if (lat !== undefined) weatherOptions.latitudeDeg = lat
-  const lon = numberField(form, 'longitudeDeg', -180, 180, '° (east positive)')
-  if (lon !== undefined) weatherOptions.longitudeDeg = lon
-  const elev = numberField(form, 'elevationM', -500, 9000, 'm')
-  if (elev !== undefined) weatherOptions.elevationM = elev
-  const order = text(form, 'dateOrder')
-  if (order !== undefined) weatherOptions.dateOrder = choice(form, 'dateOrder', ['ymd', 'mdy', 'dmy'], 'ymd')
-  const mappingText = text(form, 'mapping')
-  if (mappingText !== undefined) {
-    const mapping: Record<string, unknown> = {}
-    mappingText
-      .split(/\r?\n/)
-      .map((l) => l.trim())
-      .filter((l) => l !== '')
-      .forEach((line, i) => {
-        try {
-          const [k, v] = parseMappingArgument(line)
-          mapping[k] = v
-        } catch (e) {
-          throw new RangeError(`mapping line ${i + 1}: ${(e as Error).message}`)
-        }
-      })
-    weatherOptions.mapping = mapping
+  // The weather options: the same table (and reading) as the CLI flags and the API parameters;
+  // a bad value names the field by its label.
+  let weatherOptions: Record<string, unknown>
+  try {
+    weatherOptions = checkWeatherOptions(
+      weatherOptionsFromTexts((s) => {
+        const t = text(form, s.param)
+        return t === undefined ? undefined : [t]
+      }, 'form'),
+      'form',
+    ) as Record<string, unknown>
+  } catch (e) {
+    if (e instanceof WeatherOptionError || e instanceof WeatherOptionsInvalid) throw new RangeError(e.message)
+    throw e
   }
 
   let product: ProductProfile

@@ -12,6 +12,7 @@ import { FUEL_IDS } from '../drying/method.ts'
 import { PRODUCT_CATALOGUE } from '../product/catalogue.ts'
 import type { ProductCategory } from '../product/profile.ts'
 import { escapeHtml } from '../report/escape.ts'
+import { WEATHER_OPTION_SPECS } from '../weather/option-spec.ts'
 import type { DemoFile } from './demo-files.ts'
 import { MAX_SITES } from './form-input.ts'
 
@@ -63,6 +64,62 @@ function field(
 ): string {
   const id = `f-${name}`
   return `<div class="field${o.methods ? ' method-only' : ''}"${o.methods ? ` data-methods="${o.methods}"` : ''}><label for="${id}">${escapeHtml(label)}</label><input id="${id}" name="${name}" type="${o.type ?? 'text'}"${o.inputmode ? ` inputmode="${o.inputmode}"` : ''}${o.placeholder ? ` placeholder="${attr(o.placeholder)}"` : ''}${o.pattern ? ` pattern="${attr(o.pattern)}"` : ''} value="${attr(values[name])}"${o.hint ? ` aria-describedby="${id}-hint"` : ''}>${o.hint ? `<small id="${id}-hint">${escapeHtml(o.hint)}</small>` : ''}</div>`
+}
+
+/** Page-only presentation of the weather options (placeholders, hints); names and labels come from the shared table. */
+const WEATHER_FIELD_HINTS: Record<
+  string,
+  { placeholder?: string; hint?: string; inputmode?: string; choices?: string[] }
+> = {
+  siteName: { placeholder: 'e.g. north field' },
+  lat: { inputmode: 'decimal' },
+  lon: { inputmode: 'decimal' },
+  elevation: { inputmode: 'decimal' },
+  utcOffset: {
+    inputmode: 'decimal',
+    placeholder: 'e.g. -6',
+    hint: '0 for UTC; or give the time zone instead',
+  },
+  tz: { placeholder: 'e.g. America/Chicago', hint: 'IANA name, when the time stamps follow daylight saving' },
+  siteTz: { placeholder: 'e.g. Europe/Madrid', hint: 'when the file is in UTC and does not say where' },
+  map: {
+    placeholder: 'dryBulb=Temp:F\nrelativeHumidity=RH',
+    hint: 'variable=column or variable=column:unit, only for columns that are not recognised',
+  },
+  labels: {
+    placeholder: 'end\nghi=end:60',
+    hint: 'start or end of the interval a time stamp labels; per variable, e.g. rain=end:60 for rain over the preceding hour',
+  },
+  dateOrder: { choices: ['', 'mdy', 'dmy', 'ymd'] },
+  headerLine: { inputmode: 'numeric' },
+  sampling: { choices: ['', 'readings', 'reports'] },
+  windHeight: { inputmode: 'decimal', placeholder: '10' },
+}
+
+/** The weather option fields of one group, from the shared option table (weather/option-spec.ts). */
+function weatherFields(group: 'site' | 'columns', values: Record<string, string>): string {
+  return WEATHER_OPTION_SPECS.filter((s) => s.group === group)
+    .map((s) => {
+      const h = WEATHER_FIELD_HINTS[s.param] ?? {}
+      const id = `f-${s.param}`
+      const hint = h.hint ? `<small id="${id}-hint">${escapeHtml(h.hint)}</small>` : ''
+      const described = h.hint ? ` aria-describedby="${id}-hint"` : ''
+      if (s.multiple)
+        return `<div class="field"><label for="${id}">${escapeHtml(s.label)}</label><textarea id="${id}" name="${s.param}" rows="2"${h.placeholder ? ` placeholder="${attr(h.placeholder).replaceAll('\n', '&#10;')}"` : ''}${described}>${escapeHtml(values[s.param] ?? '')}</textarea>${hint}</div>`
+      if (h.choices)
+        return `<div class="field"><label for="${id}">${escapeHtml(s.label)}</label><select id="${id}" name="${s.param}">${h.choices
+          .map(
+            (c) =>
+              `<option value="${c}"${(values[s.param] ?? '') === c ? ' selected' : ''}>${c === '' ? '(detect)' : c}</option>`,
+          )
+          .join('')}</select></div>`
+      return field(s.param, s.label, values, {
+        placeholder: h.placeholder,
+        hint: h.hint,
+        inputmode: h.inputmode,
+      })
+    })
+    .join('\n')
 }
 
 function productOptions(selected: string | undefined): string {
@@ -124,14 +181,11 @@ ${state.error ? `<div class="error" id="form-error" role="alert"><strong>Please 
 ${demoBlock}
 <details id="file-questions" class="questions"${ask ? ' open' : ''}><summary>Site, time zone and columns${ask ? ' (needed for this file)' : ' (only if the file does not say)'}</summary>
 <div class="grid">
-${field('siteName', 'Site name', v, { placeholder: 'e.g. north field' })}
-${field('timeZone', 'Time zone of local time stamps', v, { placeholder: 'e.g. America/Chicago', hint: 'IANA name; daylight saving applied' })}
-${field('utcOffsetHours', '…or fixed UTC offset [h]', v, { inputmode: 'decimal', placeholder: 'e.g. -6' })}
-${field('latitudeDeg', 'Latitude [° N]', v, { inputmode: 'decimal' })}
-${field('longitudeDeg', 'Longitude [° E]', v, { inputmode: 'decimal' })}
-${field('elevationM', 'Elevation [m]', v, { inputmode: 'decimal' })}
+${weatherFields('site', v)}
 </div>
-<div class="field"><label for="f-mapping">Column mapping, one per line</label><textarea id="f-mapping" name="mapping" rows="3" placeholder="dryBulb=Temp:F&#10;relativeHumidity=RH">${escapeHtml(v.mapping ?? '')}</textarea><small>variable=column or variable=column:unit, only for columns that are not recognised.</small></div>
+<div class="grid">
+${weatherFields('columns', v)}
+</div>
 </details>
 </fieldset>
 <fieldset class="step"><legend><span class="n">2</span> Product</legend>

@@ -18,6 +18,7 @@ import {
 import { renderReportCsv } from '../report/report-csv.ts'
 import { renderReportArticle, renderReportHtml } from '../report/report-html.ts'
 import { tablesCsv } from '../report/tables.ts'
+import { renderOptionNames } from '../weather/option-spec.ts'
 import { readWeatherBytes } from '../weather/read-weather.ts'
 import type { WeatherReadResult } from '../weather/result.ts'
 import type { HourlySeries } from '../weather/series.ts'
@@ -101,12 +102,12 @@ export async function runForm(
       read = readWeatherBytes(f.bytes, options)
     } catch (e) {
       if (e instanceof WeatherInputError) {
-        const where = e.missing.some((m) => /time|zone|offset/i.test(m))
-          ? ' On this page: fill in “Time zone” or “UTC offset” under “Site, time zone and columns”.'
-          : e.missing.length > 0
-            ? ' On this page: name the columns under “Site, time zone and columns” (column mapping).'
-            : ''
-        throw new FormQuestion(`${f.name}: ${e.message}.${where}`, f.name, e.missing)
+        // the reader names options as CLI flags; on the page they are the fields' labels
+        throw new FormQuestion(
+          `${f.name}: ${renderOptionNames(e.message, 'form')} (under “Site, time zone and columns”)`,
+          f.name,
+          e.missing,
+        )
       }
       if (e instanceof RangeError && !isRuntimeFault(e)) throw new RangeError(`${f.name}: ${e.message}`)
       throw e
@@ -147,11 +148,12 @@ export async function runForm(
   }
   reads.forEach(({ name, read }, i) => {
     const assessment = assessments[i]
+    assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
     sites.push({
       fileName: name,
       series: read.series,
       assessment,
-      readWarnings: read.warnings,
+      readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
       dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
     })
   })

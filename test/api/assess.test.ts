@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
 import { createApp } from '../../src/api/app.ts'
 import { productById } from '../../src/product/catalogue.ts'
+import { renderOptionNames } from '../../src/weather/option-spec.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
 
 const app = createApp()
@@ -40,6 +41,8 @@ describe('POST /v1/assess', () => {
       startStepDays: 5,
       fuelPrices: {},
     })
+    // the same, with option names in the API's words (the engine writes the CLI's)
+    direct.warnings = direct.warnings.map((w) => renderOptionNames(w, 'query'))
     expect(body).toEqual(JSON.parse(JSON.stringify(direct)))
     expect(body.monthly).toHaveLength(12)
   })

@@ -65,9 +65,11 @@ export async function expectSaneAnswer(res: Response, route: string): Promise<nu
   } else if (route === '/v1/inspect') {
     expect(res.status).toBe(200)
     const body = JSON.parse(text) as {
-      rows: { read: number; used: number; repaired: number; rejected: number }
+      rows: { read: number; used: number; repaired: number; rejected: number; superseded: number }
     }
-    expect(body.rows.used + body.rows.repaired + body.rows.rejected).toBe(body.rows.read)
+    expect(body.rows.used + body.rows.repaired + body.rows.rejected + body.rows.superseded).toBe(
+      body.rows.read,
+    )
     for (const v of Object.values(body.rows)) expect(Number.isInteger(v) && v >= 0).toBe(true)
   }
   return res.status

@@ -55,7 +55,7 @@ describe('hostile bytes', () => {
   ])('UTF-16 %s with a BOM is decoded and read like the UTF-8 file', async (_name, bigEndian) => {
     const plain = await expectInspect(await post('/v1/inspect', GOOD, 'text/csv'))
     const wide = await expectInspect(await post('/v1/inspect', utf16(GOOD, bigEndian), 'text/csv'))
-    expect(wide.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0 })
+    expect(wide.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0, superseded: 0 })
     expect(wide.period).toEqual(plain.period)
     expect(wide.columns).toEqual(plain.columns)
     expect(wide.hours).toBe(3)
@@ -82,7 +82,7 @@ describe('hostile bytes', () => {
 
   it('a NUL byte inside a number rejects that row only, with the row counted', async () => {
     const body = await expectInspect(await post('/v1/inspect', GOOD.replace('30.1', '30\u00001'), 'text/csv'))
-    expect(body.rows).toEqual({ read: 3, used: 2, repaired: 0, rejected: 1 })
+    expect(body.rows).toEqual({ read: 3, used: 2, repaired: 0, rejected: 1, superseded: 0 })
   })
 
   it('a body of NUL bytes only: 422', async () => {
@@ -112,7 +112,7 @@ describe('hostile bytes', () => {
   }, async () => {
     const wide = createApp({ maxColumns: 200_000 })
     const body = await expectInspect(await post('/v1/inspect', hundredThousandColumns(), 'text/csv', wide))
-    expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0 })
+    expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0, superseded: 0 })
     // The same columns as the three-column file: none of the 99,997 unknown columns is taken as a variable.
     const plain = await expectInspect(await post('/v1/inspect', GOOD, 'text/csv'))
     expect(body.columns).toEqual(plain.columns)

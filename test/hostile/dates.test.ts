@@ -21,7 +21,7 @@ describe('hostile timestamps', () => {
 
   it('an hour given twice with the same values: the copy is rejected and counted', async () => {
     const body = await expectInspect(await post('/v1/inspect', csvOf([H10, H10, H11, H11, H12]), 'text/csv'))
-    expect(body.rows).toEqual({ read: 5, used: 3, repaired: 0, rejected: 2 })
+    expect(body.rows).toEqual({ read: 5, used: 3, repaired: 0, rejected: 2, superseded: 0 })
     expect(body.hours).toBe(3)
   })
 
@@ -50,7 +50,7 @@ describe('hostile timestamps', () => {
     const body = await expectInspect(
       await post('/v1/inspect', csvOf(['1799-12-31T23:00Z,5,80', H10, H11]), 'text/csv'),
     )
-    expect(body.rows).toEqual({ read: 3, used: 2, repaired: 0, rejected: 1 })
+    expect(body.rows).toEqual({ read: 3, used: 2, repaired: 0, rejected: 1, superseded: 0 })
     expect(body.period.start).toBe('2024-07-01T10:00:00.000Z')
   })
 

@@ -49,7 +49,7 @@ export async function expectProblem(res: Response, statuses?: number[]): Promise
 
 export interface InspectJson {
   format: string
-  rows: { read: number; used: number; repaired: number; rejected: number }
+  rows: { read: number; used: number; repaired: number; rejected: number; superseded: number }
   period: { start: string; end: string }
   hours: number
   years: number[]
@@ -65,7 +65,7 @@ export interface InspectJson {
 export async function expectInspect(res: Response): Promise<InspectJson> {
   expect(res.status).toBe(200)
   const body = (await res.json()) as InspectJson
-  expect(body.rows.used + body.rows.repaired + body.rows.rejected).toBe(body.rows.read)
+  expect(body.rows.used + body.rows.repaired + body.rows.rejected + body.rows.superseded).toBe(body.rows.read)
   return body
 }
 

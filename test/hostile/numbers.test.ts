@@ -39,7 +39,7 @@ describe('hostile numbers in a weather file', () => {
 
   it('-0 is read as 0 °C: all rows used', async () => {
     const body = await expectInspect(await post('/v1/inspect', withValue('-0'), 'text/csv'))
-    expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0 })
+    expect(body.rows).toEqual({ read: 3, used: 3, repaired: 0, rejected: 0, superseded: 0 })
     const direct = readWeather(withValue('-0'), {})
     expect(direct.series.dryBulbC[0]).toBe(0)
   })

@@ -1,7 +1,7 @@
 /**
  * Every rejected row findable (issue "no input may freeze or exhaust the server", item 4): the inspect JSON
  * lists every rejected row with its line (the problem notes stay capped at 100, with their counts), and
- * `format=csv` downloads them; a batch log refused as a whole lists every bad line, not the first 50.
+ * `format=rejected` downloads them as CSV; a batch log refused as a whole lists every bad line, not the first 50.
  * The files are invented here, so the test knows the line of every bad row.
  */
 import { readFileSync } from 'node:fs'
@@ -76,8 +76,8 @@ describe('every rejected weather row is findable', () => {
     expect(body.problemsTotal).toBeGreaterThan(400)
   })
 
-  it('format=csv downloads every rejected row (line, kind, message)', async () => {
-    const res = await post('/v1/inspect?format=csv', text, 'text/csv')
+  it('format=rejected downloads every rejected row as CSV (line, kind, message)', async () => {
+    const res = await post('/v1/inspect?format=rejected', text, 'text/csv')
     expect(res.status).toBe(200)
     expect(res.headers.get('content-type')).toBe('text/csv; charset=utf-8')
     expect(res.headers.get('content-disposition')).toMatch(

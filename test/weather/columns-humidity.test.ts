@@ -2,7 +2,7 @@
 // which implements ASHRAE Handbook — Fundamentals 2017 ch. 1; above 0 °C its RH is over liquid water like ours).
 import psychrolib from 'psychrolib'
 import { describe, expect, it } from 'vitest'
-import { classifyHeader, planColumns, splitHeader } from '../../src/weather/columns.ts'
+import { analyseHeader, classifyHeader, planColumns, splitHeader } from '../../src/weather/columns.ts'
 import { parseMappingArgument } from '../../src/weather/options.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
 import { csv, hourStamps } from './csv-builder.ts'
@@ -16,19 +16,22 @@ const relHumFromWetBulb = (t: number, twb: number, p: number): number =>
 
 describe('headers', () => {
   it('split name, unit and measurement height', () => {
-    expect(splitHeader('Wind Speed at 2 m (km/h)')).toEqual({
+    expect(splitHeader('Wind Speed at 2 m (km/h)')).toMatchObject({
       name: 'wind speed at 2 m',
       unitText: 'km/h',
       heightM: 2,
     })
-    expect(splitHeader('temp_F')).toMatchObject({ name: 'temp', unitText: 'F' })
+    expect(analyseHeader('temp_F')).toMatchObject({
+      meaning: { kind: 'variable', variable: 'dryBulb' },
+      units: ['f'],
+    })
     expect(splitHeader('Pressure [hPa]')).toMatchObject({ name: 'pressure', unitText: 'hPa' })
   })
 
   it('dew point, wet bulb and sea-level pressure are not taken for dry bulb or station pressure', () => {
-    expect(classifyHeader('dew point temperature')).toEqual({ kind: 'variable', variable: 'dewPoint' })
-    expect(classifyHeader('wet bulb temperature')).toEqual({ kind: 'variable', variable: 'wetBulb' })
-    expect(classifyHeader('sea level pressure')).toBeNull()
+    expect(classifyHeader('dew point temperature')).toMatchObject({ kind: 'variable', variable: 'dewPoint' })
+    expect(classifyHeader('wet bulb temperature')).toMatchObject({ kind: 'variable', variable: 'wetBulb' })
+    expect(classifyHeader('sea level pressure')).toMatchObject({ kind: 'excluded' })
     expect(classifyHeader('wind direction')).toBeNull()
     expect(classifyHeader('dry bulb source flag')).toBeNull()
   })

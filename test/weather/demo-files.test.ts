@@ -33,7 +33,7 @@ describe.skipIf(!present)('demo climates', () => {
       (Date.parse(`${local.replace(' ', 'T')}:00+07:00`) - s.startUtcMs[0]) / 3_600_000
     const problemLines = (kind: string): number[] =>
       r.problems.filter((p) => p.kind === kind).map((p) => p.line ?? -1)
-    expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(r.rows.read)
+    expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(r.rows.read)
     expect(r.timeBasis).toMatch(/UTC\+07:00/)
     for (const f of faults) {
       const where = `${f.kind}: ${f.note}`

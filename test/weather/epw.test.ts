@@ -70,7 +70,7 @@ describe('EPW reader', () => {
 
   it('row counts add up', () => {
     expect(r.rows.read).toBe(48)
-    expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(r.rows.read)
+    expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(r.rows.read)
   })
 
   it('hour 0 or 25 is a bad timestamp reported with its line', () => {

@@ -106,7 +106,7 @@ describe('years outside 1800–2200 and typical-year detection', () => {
       const days = new Date(Date.UTC(y, m, 0)).getUTCDate()
       for (let d = 1; d <= days; d++) {
         const year = m === split && d === days ? y + 20 : y
-        for (let h = 0; h < 24; h++) rows.push([year, m, d, h, 10, 50])
+        for (let h = 0; h < 24; h++) rows.push([year, m, d, h, 10 + (h % 4), 50 + (h % 3)])
       }
     }
     return rows
@@ -223,7 +223,7 @@ describe('an unbalanced double quote (RFC 4180 §2: quotes come in pairs)', () =
   it('costs only its own line, which is rejected and named', () => {
     const text = `${header}${good(0)}\n2024-07-01T11:00Z,"31.5,22\n${good(2)}\n${good(3)}\n`
     const r = readWeather(text, {})
-    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1 })
+    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1, superseded: 0 })
     const p = r.problems.find((q) => q.kind === 'unbalanced-quote')
     expect(p?.line).toBe(3)
     expect(p?.message).toMatch(/unbalanced double quote/)
@@ -235,7 +235,7 @@ describe('an unbalanced double quote (RFC 4180 §2: quotes come in pairs)', () =
   it('two stray quotes that papaparse would pair across lines: both lines rejected, the lines between kept', () => {
     const text = `${header}2024-07-01T10:00Z,"30,25\n${good(1)}\n${good(2)}\n2024-07-01T13:00Z,33",19\n${good(4)}\n`
     const r = readWeather(text, {})
-    expect(r.rows).toEqual({ read: 5, used: 3, repaired: 0, rejected: 2 })
+    expect(r.rows).toEqual({ read: 5, used: 3, repaired: 0, rejected: 2, superseded: 0 })
     expect(r.problems.filter((q) => q.kind === 'unbalanced-quote').map((q) => q.line)).toEqual([2, 5])
   })
 
@@ -249,7 +249,7 @@ describe('an unbalanced double quote (RFC 4180 §2: quotes come in pairs)', () =
   it('balanced quotes, including a quoted note over two lines, are read as before', () => {
     const text = `${header.trim()},note\n"2024-07-01T10:00Z","30.5",25,"two\nlines"\n${good(1)},x\n`
     const r = readWeather(text, {})
-    expect(r.rows).toEqual({ read: 2, used: 2, repaired: 0, rejected: 0 })
+    expect(r.rows).toEqual({ read: 2, used: 2, repaired: 0, rejected: 0, superseded: 0 })
     expect(r.problems.some((q) => q.kind === 'unbalanced-quote')).toBe(false)
   })
 })

@@ -46,7 +46,7 @@ describe('dryhours inspect', () => {
       expect(j).toHaveProperty(k)
     }
     expect(j.format).toBe('epw')
-    expect(Object.keys(j.rows)).toEqual(['read', 'used', 'repaired', 'rejected'])
+    expect(Object.keys(j.rows)).toEqual(['read', 'used', 'repaired', 'rejected', 'superseded'])
     expect(j.period).toEqual({ start: '2023-01-01T07:00:00.000Z', end: '2023-01-03T07:00:00.000Z' })
     expect(j.hours).toBe(48)
     expect(j.years).toEqual([2023])

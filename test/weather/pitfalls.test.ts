@@ -38,7 +38,7 @@ describe('daylight saving (pitfall 7)', () => {
       { timeZone: 'America/Chicago' },
     )
     expect(r.problems.find((p) => p.kind === 'dst-gap')?.line).toBe(3)
-    expect(r.rows).toEqual({ read: 3, used: 2, repaired: 0, rejected: 1 })
+    expect(r.rows).toEqual({ read: 3, used: 2, repaired: 0, rejected: 1, superseded: 0 })
   })
 
   it('autumn: the doubled local 01:00 becomes two different UTC hours (CDT then CST)', () => {
@@ -71,7 +71,7 @@ describe('daylight saving (pitfall 7)', () => {
       ),
       { utcOffsetHours: -6 },
     )
-    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1 })
+    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1, superseded: 0 })
     expect(r.problems[0]).toMatchObject({ line: 4, kind: 'duplicate-timestamp' })
     expect(r.series.quality[1] & QualityFlag.duplicateTimestamp).toBeTruthy()
   })
@@ -79,14 +79,14 @@ describe('daylight saving (pitfall 7)', () => {
 
 describe('clock and calendar (pitfalls 3, 4, 5)', () => {
   it('24:00 is midnight at the end of the day, and 01:00–24:00 files are read as hour-ending', () => {
-    const rows = Array.from({ length: 24 }, (_, h) => [`1/1/2021`, `${h + 1}:00`, 3 + h, 60])
+    const rows = Array.from({ length: 24 }, (_, h) => [`1/1/2021`, `${h + 1}:00`, 3 + h, 60 + (h % 5)])
     const r = readWeather(csv(['Date (MM/DD/YYYY)', 'Time (HH:MM)', 'Dry-bulb (C)', 'RHum (%)'], rows), {
       utcOffsetHours: 0,
     })
     expect(r.series.hours).toBe(24)
     expect(iso(r.series.startUtcMs[0])).toBe('2021-01-01T00:00') // 1:00 labels the end of 00:00–01:00
     expect(iso(r.series.startUtcMs[23])).toBe('2021-01-01T23:00') // 24:00 ends the day
-    expect(r.timeBasis).toMatch(/end of each hour/)
+    expect(r.timeBasis).toMatch(/label the end of the interval/)
   })
 
   it('a leap day is kept (2020-02-29 has 24 hours)', () => {
@@ -148,7 +148,7 @@ describe('clock and calendar (pitfalls 3, 4, 5)', () => {
       [1995, 1],
       [1999, 3],
     ])
-      for (let h = 0; h < 24; h++) rows.push([y, m, 1, h, 10, 50])
+      for (let h = 0; h < 24; h++) rows.push([y, m, 1, h, 10 + (h % 4), 50 + (h % 3)])
     const r = readWeather(csv(['year', 'month', 'day', 'hour', 'temp', 'rh'], rows), { utcOffsetHours: 0 })
     expect(r.series.typicalYear).toBe(false)
     expect(r.years).toEqual([1995, 1996, 1997, 1998, 1999])
@@ -230,7 +230,7 @@ describe('missing codes and duplicates (pitfalls 8, 13)', () => {
     expect(Array.from(r.series.dryBulbC)).toEqual([10, 11, 12, 13, 14, 15])
     expect(r.series.relativeHumidityPct[2]).toBe(50)
     expect(r.series.quality[1] & QualityFlag.filled).toBeTruthy()
-    expect(r.rows).toEqual({ read: 6, used: 3, repaired: 3, rejected: 0 })
+    expect(r.rows).toEqual({ read: 6, used: 3, repaired: 3, rejected: 0, superseded: 0 })
     expect(r.warnings.some((w) => /missing codes/.test(w))).toBe(true)
   })
 
@@ -259,7 +259,7 @@ describe('missing codes and duplicates (pitfalls 8, 13)', () => {
       ),
       { utcOffsetHours: 0 },
     )
-    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1 })
+    expect(r.rows).toEqual({ read: 4, used: 3, repaired: 0, rejected: 1, superseded: 0 })
     expect(r.problems[0]).toMatchObject({ line: 4, kind: 'duplicate-timestamp' })
     expect(r.problems[0].message).toMatch(/line 3 with the same values/)
   })

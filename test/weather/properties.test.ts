@@ -8,7 +8,7 @@ import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 function readOrInputError(run: () => ReturnType<typeof readWeather>): void {
   try {
     const r = run()
-    expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(r.rows.read)
+    expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(r.rows.read)
     expect(r.series.startUtcMs.length).toBe(r.series.hours)
   } catch (e) {
     if (!(e instanceof WeatherInputError)) throw e
@@ -16,7 +16,7 @@ function readOrInputError(run: () => ReturnType<typeof readWeather>): void {
   }
 }
 
-/** A random walk of `n` integer steps in ±1…±max (never 0, so no stuck runs), as tenths. */
+/** A random walk of `n` integer steps in ±1…±max (never 0, so no stuck runs), as tenths; reflected at its bounds. */
 const walk = (n: number, start: fc.Arbitrary<number>, max: number) =>
   fc.tuple(
     start,
@@ -88,10 +88,13 @@ describe('reader properties', () => {
           }),
         ),
         ({ n, start, t, rh, p, w }) => {
+          // Reflect a step that would leave [lo, hi] instead of clamping it: a clamp repeats the
+          // bound (a plateau of 12 equal readings is, rightly, a stuck sensor), a reflection never
+          // repeats a value, as the walk's steps are never 0.
           const series = (s: [number, number[]], lo: number, hi: number) => {
             let x = s[0]
             return s[1].map((d) => {
-              x = Math.min(hi, Math.max(lo, x + d))
+              x = x + d > hi || x + d < lo ? x - d : x + d
               return x
             })
           }
@@ -104,7 +107,7 @@ describe('reader properties', () => {
           for (let i = 0; i < n; i++)
             lines.push(`${new Date(t0 + i * 3_600_000).toISOString()},${tt[i]},${rr[i]},${pp[i]},${ww[i]}`)
           const r = readWeather(lines.join('\n'))
-          expect(r.rows).toEqual({ read: n, used: n, repaired: 0, rejected: 0 })
+          expect(r.rows).toEqual({ read: n, used: n, repaired: 0, rejected: 0, superseded: 0 })
           expect(r.series.startUtcMs[0]).toBe(t0)
           expect(Array.from(r.series.dryBulbC)).toEqual(tt)
           expect(Array.from(r.series.relativeHumidityPct)).toEqual(rr)
@@ -149,7 +152,7 @@ describe('reader properties', () => {
           try {
             const r = readWeather(lines.join('\n'), { utcOffsetHours: 0 })
             expect(r.rows.read).toBe(count)
-            expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(count)
+            expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(count)
           } catch (e) {
             expect(e).toBeInstanceOf(WeatherInputError)
           }

@@ -29,7 +29,7 @@ describe('quality control', () => {
     expect(r.problemCounts['stuck-sensor']).toBe(12)
     for (let s = 5; s < 17; s++) expect(Number.isNaN(r.series.dryBulbC[s])).toBe(true)
     expect(r.rows.rejected).toBe(12)
-    expect(r.rows.used + r.rows.repaired + r.rows.rejected).toBe(n)
+    expect(r.rows.used + r.rows.repaired + r.rows.rejected + r.rows.superseded).toBe(n)
   })
 
   it('11 equal hours are not a stuck sensor', () => {
@@ -81,7 +81,7 @@ describe('quality control', () => {
       expect(Number.isNaN(r.series.dryBulbC[s])).toBe(true)
       expect(r.series.quality[s] & QualityFlag.missingCore).toBeTruthy()
     }
-    expect(r.rows).toEqual({ read: n, used: n - 7, repaired: 3, rejected: 4 })
+    expect(r.rows).toEqual({ read: n, used: n - 7, repaired: 3, rejected: 4, superseded: 0 })
     expect(r.hoursMissingCore).toBe(4)
   })
 

@@ -49,7 +49,7 @@ describe('NOAA Seattle hourly normals (vega-datasets)', () => {
       longitudeDeg: -122.31,
       mapping: { relativeHumidity: { column: 'obs_humid', unit: 'fraction' } },
     })
-    expect(r.rows).toEqual({ read: 8759, used: 8759, repaired: 0, rejected: 0 })
+    expect(r.rows).toEqual({ read: 8759, used: 8759, repaired: 0, rejected: 0, superseded: 0 })
     expect(r.series.hours).toBe(8759)
     expect(r.hoursWithoutRow).toBe(0)
     // first row 2010-01-01T01:00 local standard time (UTC−8) = 09:00 UTC

@@ -31,7 +31,7 @@ const BASE = {
   method: 'open-air',
   seasonStart: '12-01',
   seasonEnd: '01-15',
-  utcOffsetHours: '7',
+  utcOffset: '7',
 }
 
 describe('GET /', () => {
@@ -137,7 +137,10 @@ describe('POST /report', () => {
     expect(html).toMatch(
       /role="alert"><strong>Please check:<\/strong> quillow\.csv: the timestamps carry no UTC offset/,
     )
-    expect(html).toContain('fill in “Time zone” or “UTC offset”')
+    // the reader's --utc-offset and --tz are named by the form's labels
+    expect(html).toContain('“UTC offset of the file&#39;s time stamps [h]”')
+    expect(html).toContain('“Time zone of the file&#39;s time stamps”')
+    expect(html).not.toContain('--utc-offset')
   })
 
   it('gives problem details with askFileQuestions for the script', async () => {

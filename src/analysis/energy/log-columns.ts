@@ -28,12 +28,18 @@ export type BatchLogColumn = keyof typeof BATCH_LOG_COLUMNS
 
 /** Normalise a header cell: trim, lower case, runs of spaces/hyphens/dots → `_`, `%` → `pct`. */
 export function normaliseHeader(cell: string): string {
-  return cell
+  const snake = cell
     .trim()
     .toLowerCase()
     .replace(/%/g, 'pct')
     .replace(/[\s\-.]+/g, '_')
-    .replace(/^_+|_+$/g, '')
+  // Leading and trailing underscores trimmed by index: a pattern like /_+$/ would backtrack through
+  // every run of underscores (quadratic time on a hostile header).
+  let from = 0
+  let to = snake.length
+  while (from < to && snake.charCodeAt(from) === 95) from++
+  while (to > from && snake.charCodeAt(to - 1) === 95) to--
+  return snake.slice(from, to)
 }
 
 /** What a fuel quantity unit measures, and its size in the base unit of that dimension (L, kg or MJ). */

@@ -11,8 +11,10 @@ import { compare } from '../../analysis/compare.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
+import { type OptionSurface, renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
+import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
 import { isRuntimeFault, rethrowAsProblem } from '../errors.ts'
 import { checkBatchHours } from '../limits.ts'
@@ -27,6 +29,7 @@ import {
 } from '../schemas/assess.ts'
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
+import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
 import { workControl } from '../work.ts'
 
 const outputQuerySchema = z.strictObject({
@@ -55,19 +58,26 @@ async function parseRequest(c: Context): Promise<Parsed> {
 export function readSite(file: UploadedFile, request: AssessRequest, config: ApiConfig): WeatherReadResult {
   const text = checkedUploadText(file, config)
   try {
-    const result = readWeather(text, request.weather)
+    const result = renderReadingMessages(readWeather(text, request.weather), request.surface)
     if (result.series.site.name.trim() === '') result.series.site.name = file.name
     return result
   } catch (e) {
+    if (e instanceof WeatherInputError) throw weatherInputProblem(e, request.surface, file.name)
     rethrowAsProblem(e, { filePrefix: file.name })
   }
 }
 
-/** Run the engine; its errors become problems (options named by their field path in this request). */
+/**
+ * Run the engine; its errors become problems: options named by their field path in this request, the
+ * engine's option names in messages renamed for the request's surface, engine faults never quoted.
+ */
 function runEngine<T>(fn: () => T, request: AssessRequest): T {
   try {
     return fn()
   } catch (e) {
+    if (e instanceof RangeError && !isRuntimeFault(e)) {
+      e.message = renderOptionNames(e.message, request.surface)
+    }
     rethrowAsProblem(e, { optionPath: request.optionPath })
   }
 }
@@ -104,9 +114,10 @@ export function assessRouter(config: ApiConfig): Hono {
     const read = readSite(files[0], request, config)
     work.checkpoint()
     checkBatchHours(request.options, [read.series.hours], config, request.optionPath)
-    const assessment: Assessment = runEngine(
-      () => assess(read.series, { ...request.options, onProgress: work.checkpoint }),
-      request,
+    // the engine's messages name options as CLI flags: renamed for this request's surface
+    const assessment: Assessment = renderAssessmentWarnings(
+      runEngine(() => assess(read.series, { ...request.options, onProgress: work.checkpoint }), request),
+      request.surface,
     )
     work.checkpoint()
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
@@ -135,6 +146,11 @@ export function assessRouter(config: ApiConfig): Hono {
     }
     return c.json(assessment)
   })
+}
+
+/** The assessment's warnings with option names as the request gave them. */
+function renderAssessmentWarnings(a: Assessment, surface: OptionSurface): Assessment {
+  return { ...a, warnings: a.warnings.map((w) => renderOptionNames(w, surface)) }
 }
 
 export function compareRouter(config: ApiConfig): Hono {
@@ -199,7 +215,10 @@ export function compareRouter(config: ApiConfig): Hono {
         ),
       )
     }
-    return c.json(comparison)
+    return c.json({
+      ...comparison,
+      assessments: comparison.assessments.map((a) => renderAssessmentWarnings(a, request.surface)),
+    })
   })
 }
 

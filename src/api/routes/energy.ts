@@ -14,6 +14,7 @@ import { FUEL_IDS } from '../../drying/method.ts'
 import { productById } from '../../product/catalogue.ts'
 import { ENERGY_TABLE_IDS, renderEnergyCsv } from '../../report/energy/energy-csv.ts'
 import { renderEnergyHtml } from '../../report/energy/energy-html.ts'
+import { renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import { charsetOf, checkedCharset } from '../body.ts'
 import type { ApiConfig } from '../config.ts'
@@ -23,6 +24,7 @@ import { ApiProblem, type ProblemField } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
 import { checkedUploadText, parseOptionsJson, queryParams, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
+import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
 import { workControl } from '../work.ts'
 
 /** Options of the request (query string, or the `options` part with the same keys as strings or numbers). */
@@ -32,13 +34,20 @@ export const energyChartQuerySchema = z.strictObject({
   ).optional(),
   fuel: z.enum(FUEL_IDS).describe('fuel of rows with fuel_amount but no fuel column').optional(),
   dryingTempC: numberParam('drying-air temperature [°C] for the latent heat, default 60').optional(),
-  utcOffsetHours: numberParam("offset of the log's (and weather file's) local times from UTC [h], -12 to 14")
+  utcOffsetHours: numberParam(
+    "offset of the log's local times from UTC [h], -12 to 14; also the weather file's when utcOffset and tz are not given",
+  )
     .pipe(z.number().min(-12).max(14))
     .optional(),
-  timeZone: z.string().min(1).describe("IANA time zone of the weather file's local timestamps").optional(),
+  timeZone: z
+    .string()
+    .min(1)
+    .describe("IANA time zone of the weather file's time stamps (older name of tz)")
+    .optional(),
   elevationM: numberParam('site elevation [m] for the air pressure, -500 to 9000')
     .pipe(z.number().min(-500).max(9000))
     .optional(),
+  ...weatherQueryFields,
   product: z
     .string()
     .min(1)
@@ -146,10 +155,14 @@ export const energyRouter = (config: ApiConfig) =>
     // The log's row and column limits before it is parsed (without them 200,000 batches took 35 s).
     const logText = checkedUploadText(upload.log, config, 'log')
     if (upload.weather) {
-      const w: Record<string, unknown> = {}
-      if (q.utcOffsetHours !== undefined) w.utcOffsetHours = q.utcOffsetHours
-      if (q.timeZone !== undefined) w.timeZone = q.timeZone
-      if (q.elevationM !== undefined) w.elevationM = q.elevationM
+      // the weather options of every route (utcOffset, tz, siteTz, map, labels …); the log's offset and
+      // the older names apply to the weather file when the new ones are not given
+      const w: Record<string, unknown> = { ...weatherOptionsFromQuery(q) }
+      if (w.utcOffsetHours === undefined && w.timeZone === undefined) {
+        if (q.utcOffsetHours !== undefined) w.utcOffsetHours = q.utcOffsetHours
+        else if (q.timeZone !== undefined) w.timeZone = q.timeZone
+      }
+      if (w.elevationM === undefined && q.elevationM !== undefined) w.elevationM = q.elevationM
       // Same row and column limits as the weather files of /v1/assess.
       const weatherText = checkedUploadText(upload.weather, config, 'weather')
       work.checkpoint()
@@ -158,10 +171,12 @@ export const energyRouter = (config: ApiConfig) =>
       } catch (e) {
         const p = problemFor(e, { filePrefix: 'weather' })
         if (p === null) throw e
+        // the reader names options as CLI flags: renamed as this request gives them
+        const message = renderOptionNames(p.message, 'query')
         throw new ApiProblem(
           p.status,
-          p.message,
-          p.errors ?? [{ path: 'weather', message: p.message }],
+          message,
+          p.errors ?? [{ path: 'weather', message: message.replace(/^weather: /, '') }],
           p.type,
         )
       }

@@ -19,6 +19,7 @@ import { dryingThresholdsSchema } from '../../drying/thresholds.ts'
 import { productById, productIds } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
+import type { OptionSurface } from '../../weather/option-spec.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from '../../weather/options.ts'
 import { rethrowAsProblem } from '../errors.ts'
 import { ApiProblem } from '../problem.ts'
@@ -143,6 +144,8 @@ export interface AssessRequest {
   options: AssessOptions
   weather: WeatherReadOptions
   criterion?: CompareCriterion
+  /** Where the weather options came from, so that messages name them as the request did. */
+  surface: OptionSurface
   /** Field path of an engine option in this request (`options.maxDays`, or the query name `maxDays`). */
   optionPath: (option: string) => string
 }
@@ -217,6 +220,7 @@ export function assessRequestFromJson(value: unknown, prefix = 'options'): Asses
     },
     weather: weather ?? {},
     criterion,
+    surface: 'json',
     optionPath: (option) => `${prefix}.${option}`,
   })
 }
@@ -241,6 +245,7 @@ export function assessRequestFromQuery(
   }
   const weather = weatherOptionsFromQuery(q)
   const request = planned({
+    surface: 'query',
     weather,
     optionPath: (option) => QUERY_NAMES[option] ?? option,
     options: {

@@ -12,6 +12,7 @@ import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
+import { WEATHER_FLAGS_HELP, WEATHER_PARSE_OPTIONS, weatherOptionsFromCli } from '../weather-flags.ts'
 
 export const ENGINE_OPTIONS_HELP = `Product and method:
   --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
@@ -33,8 +34,7 @@ Usable-hour thresholds (stated in the assumptions):
   --rain-mm <mm/h> (default 0.2)  --night-cooling <K> (default 2)
 Heat and fuel:
   --fuel <${FUEL_IDS.join('|')}>  --price <fuel>=<price per unit> (repeatable; defaults are examples)
-Weather file:
-  --lat <°N> --lon <°E> --elevation <m> --utc-offset <h> | --tz <zone>  --wind-height <m>
+${WEATHER_FLAGS_HELP}
   --quiet  no progress on stderr`
 
 const help = `dryhours assess: can this site's weather dry this product, when, how fast, with how much heat
@@ -81,12 +81,7 @@ export const ENGINE_PARSE_OPTIONS = {
   'min-deficit': { type: 'string' },
   'rain-mm': { type: 'string' },
   'night-cooling': { type: 'string' },
-  lat: { type: 'string' },
-  lon: { type: 'string' },
-  elevation: { type: 'string' },
-  'utc-offset': { type: 'string' },
-  tz: { type: 'string' },
-  'wind-height': { type: 'string' },
+  ...WEATHER_PARSE_OPTIONS,
   json: { type: 'boolean' },
   quiet: { type: 'boolean' },
 } as const
@@ -191,16 +186,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
 
 /** Read a weather file through io with the CLI's weather options. */
 export async function readSeries(file: string, values: EngineValues, io: CliIo): Promise<HourlySeries> {
-  const str = (k: string): string | undefined => values[k] as string | undefined
-  const options: Record<string, unknown> = {
-    latitudeDeg: numberOption('lat', str('lat')),
-    longitudeDeg: numberOption('lon', str('lon')),
-    elevationM: numberOption('elevation', str('elevation')),
-    utcOffsetHours: numberOption('utc-offset', str('utc-offset')),
-    timeZone: str('tz'),
-    windHeightM: numberOption('wind-height', str('wind-height')),
-  }
-  for (const k of Object.keys(options)) if (options[k] === undefined) delete options[k]
+  const options = weatherOptionsFromCli(values)
   const bytes = await io.readFile(file)
   try {
     const series = readWeatherBytes(bytes, options).series

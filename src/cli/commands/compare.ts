@@ -21,8 +21,8 @@ Criteria (default probability-within-deadline):
   usable-hours-p10             usable hours in the season, exceeded in 9 of 10 years
   heat-per-tonne               median supplemental heat to finish by the deadline (lower is better)
 Ties are broken by the other criteria in this order.
-Weather options (--lat, --lon, --elevation, --utc-offset, --tz, --wind-height) apply to EVERY file:
-give them only when all files are from one place, or use files that carry their own site (EPW).
+Weather options (--lat, --lon, --utc-offset, --tz, --site-tz, --map, --labels …) apply to EVERY file:
+give them only when all files share them, or use files that carry their own site (EPW, dialects).
 
 ${ENGINE_OPTIONS_HELP}`
 

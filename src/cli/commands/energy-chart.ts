@@ -10,9 +10,11 @@ import { productById } from '../../product/catalogue.ts'
 import { renderEnergyCsv } from '../../report/energy/energy-csv.ts'
 import { renderEnergyHtml } from '../../report/energy/energy-html.ts'
 import { rulesByPoint } from '../../report/energy/energy-tables.ts'
+import { WEATHER_OPTION_SPECS } from '../../weather/option-spec.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
+import { WEATHER_FLAGS_HELP, WEATHER_PARSE_OPTIONS, weatherOptionsFromCli } from '../weather-flags.ts'
 
 const help = `dryhours energy-chart: is the heated dryer using more energy than it should?
 
@@ -44,12 +46,14 @@ Options:
   --product <id>       add the product's heat of sorption (from its isotherm) to the ideal heat
   --utc-offset=<h>     offset of the log's (and the weather file's) local times from UTC, e.g. --utc-offset=-6
                        (a start time with its own offset, 2026-09-08T09:00-06:00, needs none)
-  --tz <zone>          IANA time zone of the weather file's local timestamps
   --elevation <m>      site elevation for the air pressure (default: the weather file's, else sea level)
+  With --weather, every weather option below applies to that file.
   --json               the full assessment as JSON (same as --format json)
   --format <f>         text (default), json, html or csv; --table <id> picks one CSV table
                        (batches, limits, physics, regression, rejected-rows)
   --out <file>         write to a file instead of standard output
+
+${WEATHER_FLAGS_HELP}
 
 Example (invented demo data):
   dryhours energy-chart climate-demo/energy/quillow-dryer-batches-2026.csv --format html --out energy.html
@@ -140,9 +144,7 @@ export const energyChartCommand: CliCommand = {
           fuel: { type: 'string' },
           'drying-temp': { type: 'string' },
           product: { type: 'string' },
-          'utc-offset': { type: 'string' },
-          tz: { type: 'string' },
-          elevation: { type: 'string' },
+          ...WEATHER_PARSE_OPTIONS,
           json: { type: 'boolean' },
           format: { type: 'string' },
           table: { type: 'string' },
@@ -153,7 +155,7 @@ export const energyChartCommand: CliCommand = {
     } catch (e) {
       throw new UsageError((e as Error).message)
     }
-    const values = parsed.values as Record<string, string | boolean | undefined>
+    const values = parsed.values as Record<string, string | string[] | boolean | undefined>
     const str = (k: string) => values[k] as string | undefined
     if (parsed.positionals.length !== 1)
       throw new UsageError('give exactly one batch log file (dryhours energy-chart <log.csv>)')
@@ -184,20 +186,23 @@ export const energyChartCommand: CliCommand = {
       throw new UsageError((e as Error).message)
     }
     const weatherFile = str('weather')
+    const weatherOptions = weatherOptionsFromCli(values)
     if (weatherFile !== undefined) {
-      const wOptions: Record<string, unknown> = {}
-      if (utcOffsetHours !== undefined) wOptions.utcOffsetHours = utcOffsetHours
-      if (str('tz') !== undefined) wOptions.timeZone = str('tz')
-      if (options.elevationM !== undefined) wOptions.elevationM = options.elevationM
       try {
-        options.weather = readWeatherBytes(await io.readFile(weatherFile), wOptions).series
+        options.weather = readWeatherBytes(await io.readFile(weatherFile), weatherOptions).series
       } catch (e) {
         if (e instanceof WeatherInputError || e instanceof RangeError)
           throw new UsageError(`${weatherFile}: ${e.message}`)
         throw e
       }
-    } else if (str('tz') !== undefined) {
-      throw new UsageError('--tz applies to the weather file: give --weather, or --utc-offset for the log')
+    } else {
+      const fileOnly = WEATHER_OPTION_SPECS.filter(
+        (s) => values[s.flag] !== undefined && s.flag !== 'utc-offset' && s.flag !== 'elevation',
+      )
+      if (fileOnly.length > 0)
+        throw new UsageError(
+          `${fileOnly.map((s) => `--${s.flag}`).join(', ')} appl${fileOnly.length === 1 ? 'ies' : 'y'} to the weather file: give --weather, or --utc-offset for the log`,
+        )
     }
     const text = new TextDecoder('utf-8').decode(await io.readFile(logFile))
     let a: EnergyChartAssessment

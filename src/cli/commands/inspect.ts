@@ -1,30 +1,34 @@
 import { parseArgs } from 'node:util'
 import { inspectJson } from '../../report/inspect-json.ts'
-import { type ColumnMapping, type MappingKey, parseMappingArgument } from '../../weather/options.ts'
+import { hourlyExportCsv } from '../../weather/export.ts'
+import { TIME_FIELDS } from '../../weather/options.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
+import { formatOffset } from '../../weather/time-basis.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
-import { type CliCommand, numberOption, UsageError } from '../command.ts'
+import { type CliCommand, UsageError } from '../command.ts'
+import { WEATHER_FLAGS_HELP, WEATHER_PARSE_OPTIONS, weatherOptionsFromCli } from '../weather-flags.ts'
 
 const help = `dryhours inspect: what a weather file holds, as this program reads it
 
 Usage:
-  dryhours inspect <file> [--lat <°N> --lon <°E> --elevation <m>]
-                   [--utc-offset <h> | --tz <IANA zone>] [--map variable=column[:unit] …]
-                   [--date-order mdy|dmy] [--labels hour-start|hour-end] [--wind-height <m>] [--json]
+  dryhours inspect <file> [weather options] [--json] [--export <out.csv>]
 
-Reads delimited text (comma, semicolon or tab) or EPW. Prints the format, site, period, time basis,
-the columns with their units, coverage per month, rows read/used/repaired/rejected and the first
-problems with line numbers.
+Reads delimited text (comma, semicolon or tab), the known export layouts (dialects) or EPW. Prints
+the layout, site and its clock, period, time basis, the columns with their units and timing, how rows
+became hours, coverage per month, rows read/used/repaired/rejected/superseded and the first problems
+with line numbers.
 
-  --utc-offset  offset of the file's clock from UTC in hours (standard time, e.g. -5); 0 for UTC
-  --tz          IANA zone when the file's clock follows daylight saving (e.g. Europe/Madrid)
-  --map         take a variable from a column: dryBulb, relativeHumidity, dewPoint, wetBulb,
-                pressure, wind, ghi, rain, cloudCover, or a time field timestamp, date, time,
-                year, month, day, hour, minute. Column by header name or #n (1-based); unit
-                optional (C F K, % fraction, Pa hPa mbar kPa inHg, m/s km/h mph knots,
-                W/m2 Wh/m2 MJ/m2 J/cm2, mm in); column 'none' ignores a detected column.
-  --labels      whether CSV timestamps label the start (default) or the end of each hour
+  --json               the same as JSON, with per variable the hours, mean, min and max in SI
+  --export <out.csv>   write the hourly series the engine will use: UTC hour starts (time_utc, ISO 8601
+                       with Z), SI units, irradiance the mean over the hour, rain its total, empty =
+                       missing, and each hour's flags; dryhours reads this file back unchanged
+
+${WEATHER_FLAGS_HELP}
+
+  --map variables: dryBulb, relativeHumidity, dewPoint, wetBulb, pressure, wind, ghi, rain,
+  cloudCover, or a time field: ${TIME_FIELDS.join(', ')}.
+  Units: C F K, % fraction, Pa hPa mbar kPa inHg, m/s km/h mph knots, W/m2 Wh/m2 MJ/m2 J/cm2, mm in.
 
 Exit status 2 when the file cannot give a usable series; the message says what to supply.`
 
@@ -37,12 +41,19 @@ function text(r: WeatherReadResult, file: string): string {
   const site = s.site
   const out: string[] = []
   out.push(`${file}: ${r.format.toUpperCase()}${s.typicalYear ? ', typical year' : ''}`)
+  const layout = r.dialect
+    ? `${r.dialect.title} (${r.dialect.id})`
+    : r.format === 'epw'
+      ? 'EPW (fixed fields)'
+      : 'no known layout recognised: read as generic delimited text'
+  out.push(`dialect     ${layout}`)
   const where = [
     site.name && JSON.stringify(site.name),
     site.latitudeDeg !== null ? `${site.latitudeDeg}°N ${site.longitudeDeg}°E` : 'latitude/longitude unknown',
     site.elevationM !== null ? `${site.elevationM} m` : 'elevation unknown',
   ].filter(Boolean)
   out.push(`site        ${where.join(', ')}`)
+  out.push(`site clock  ${siteClockText(site)}`)
   out.push(
     `period      ${r.period.start} to ${r.period.end} (UTC), ${s.hours} hours, years ${r.years.join(', ')}`,
   )
@@ -60,8 +71,9 @@ function text(r: WeatherReadResult, file: string): string {
       `  ${c.variable.padEnd(w)}  ${c.source}  [${c.unit}, ${c.unitFrom}; ${c.timing}]${c.missing ? `  ${c.missing} missing` : ''}`,
     )
   }
+  out.push(`hours from  ${hourlyText(r)}`)
   out.push(
-    `rows        read ${r.rows.read}, used ${r.rows.used}, repaired ${r.rows.repaired}, rejected ${r.rows.rejected}`,
+    `rows        read ${r.rows.read}, used ${r.rows.used}, repaired ${r.rows.repaired}, rejected ${r.rows.rejected}${r.rows.superseded ? `, superseded ${r.rows.superseded}` : ''}`,
   )
   if (r.rejectedRows.length > 0) out.push(`rejected    ${lineRanges(r.rejectedRows.map((x) => x.line))}`)
   out.push(
@@ -77,6 +89,7 @@ function text(r: WeatherReadResult, file: string): string {
   out.push(`      ${MONTHS.map((m) => m.padStart(5)).join('')}`)
   for (const [year, row] of byYear) out.push(`  ${year}${row.join('')}`)
   for (const wText of r.warnings) out.push(`note: ${wText}`)
+  for (const n of r.notes) out.push(`assumed: ${n}`)
   const counts = Object.entries(r.problemCounts)
   if (counts.length > 0) {
     out.push(`problems    ${counts.map(([k, v]) => `${k} ${v}`).join(', ')}`)
@@ -108,6 +121,28 @@ export function lineRanges(lines: number[], shown = 30): string {
     : `lines ${head}`
 }
 
+const SOURCE_WORDS: Record<string, string> = {
+  option: 'given with --site-tz',
+  file: 'stated by the file',
+  timestamps: "the clock of the file's local time stamps",
+  longitude: 'from the longitude, mean solar time to the hour',
+}
+
+function siteClockText(site: WeatherReadResult['series']['site']): string {
+  if (site.utcOffsetHours === null) return 'unknown (local hours are UTC; give --site-tz)'
+  const zone = site.timeZone ? `${site.timeZone}, standard time ` : ''
+  return `${zone}UTC${formatOffset(site.utcOffsetHours)} (${SOURCE_WORDS[site.utcOffsetSource ?? 'file']})`
+}
+
+function hourlyText(r: WeatherReadResult): string {
+  const h = r.hourly
+  if (h.sampling === 'reports')
+    return `weather reports, one per hour (${h.alignedReports} aligned to the hour; routine before special)`
+  if (h.stepMinutes < 60)
+    return `readings every ${h.stepMinutes} min averaged/summed; ${h.partialHours} hours with some readings missing`
+  return `one row per hour${h.stepMinutes > 60 ? ` (rows ${h.stepMinutes} min apart)` : ''}`
+}
+
 export const inspectCommand: CliCommand = {
   name: 'inspect',
   summary: 'what a weather file holds: format, site, period, time basis, columns, coverage, problems',
@@ -118,16 +153,9 @@ export const inspectCommand: CliCommand = {
       parsed = parseArgs({
         args,
         options: {
-          lat: { type: 'string' },
-          lon: { type: 'string' },
-          elevation: { type: 'string' },
-          'utc-offset': { type: 'string' },
-          tz: { type: 'string' },
-          map: { type: 'string', multiple: true },
-          'date-order': { type: 'string' },
-          labels: { type: 'string' },
-          'wind-height': { type: 'string' },
+          ...WEATHER_PARSE_OPTIONS,
           json: { type: 'boolean' },
+          export: { type: 'string' },
         },
         allowPositionals: true,
       })
@@ -135,31 +163,10 @@ export const inspectCommand: CliCommand = {
       throw new UsageError((e as Error).message)
     }
     const values = parsed.values as Record<string, string | string[] | boolean | undefined>
-    const str = (k: string): string | undefined => values[k] as string | undefined
     if (parsed.positionals.length !== 1)
       throw new UsageError('give exactly one weather file: dryhours inspect <file>')
     const file = parsed.positionals[0]
-    const mapping: Partial<Record<MappingKey, ColumnMapping>> = {}
-    for (const arg of (values.map as string[] | undefined) ?? []) {
-      try {
-        const [key, m] = parseMappingArgument(arg)
-        mapping[key] = m
-      } catch (e) {
-        throw new UsageError(`--map ${(e as Error).message}`)
-      }
-    }
-    const options: Record<string, unknown> = {
-      latitudeDeg: numberOption('lat', str('lat')),
-      longitudeDeg: numberOption('lon', str('lon')),
-      elevationM: numberOption('elevation', str('elevation')),
-      utcOffsetHours: numberOption('utc-offset', str('utc-offset')),
-      timeZone: str('tz'),
-      mapping: Object.keys(mapping).length > 0 ? mapping : undefined,
-      dateOrder: str('date-order'),
-      timestampLabels: str('labels'),
-      windHeightM: numberOption('wind-height', str('wind-height')),
-    }
-    for (const k of Object.keys(options)) if (options[k] === undefined) delete options[k]
+    const options = weatherOptionsFromCli(values)
     const bytes = await io.readFile(file)
     let result: WeatherReadResult
     try {
@@ -168,7 +175,15 @@ export const inspectCommand: CliCommand = {
       if (e instanceof WeatherInputError) throw new UsageError(`${file}: ${e.message}`)
       throw e
     }
+    const out = values.export as string | undefined
+    if (out !== undefined) {
+      if (out === '' || out === file)
+        throw new UsageError('--export needs an output file other than the input')
+      await io.writeFile(out, hourlyExportCsv(result.series))
+    }
     io.stdout(values.json ? `${JSON.stringify(inspectJson(result))}\n` : text(result, file))
+    if (out !== undefined && !values.json)
+      io.stdout(`hourly series written to ${out} (${result.series.hours} hours, UTC)\n`)
     return 0
   },
 }

@@ -63,10 +63,7 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     'Coverage',
     `${formatNumber(c.hours > 0 ? (100 * withData) / c.hours : null, 1)} % of ${formatNumber(c.hours)} hours with data${c.hasRainData ? '' : '; no rain data'}`,
   ])
-  rows.push([
-    'Local time',
-    `${offsetText(s.utcOffsetHours)} (${s.utcOffsetSource === 'file' ? 'from the file' : s.utcOffsetSource === 'longitude' ? 'from the longitude' : 'assumed'})`,
-  ])
+  rows.push(['Local time', `${offsetText(s.utcOffsetHours)} (${OFFSET_SOURCE_WORDS[s.utcOffsetSource]})`])
   rows.push(['Product', `${a.product.name} (${a.product.id})`])
   rows.push([
     'Moisture',
@@ -177,4 +174,12 @@ export function answerHtml(a: Assessment, ctx: SectionContext): string {
     ? `<div class="warnings" role="note"><h3>Warnings</h3><ul>${all.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`
     : ''
   return `<section class="report-section answer" id="${ctx.idPrefix}sec-answer" data-section="answer"><h2>The answer</h2><ul class="sentences">${items}</ul>${warnings}</section>`
+}
+
+const OFFSET_SOURCE_WORDS: Record<string, string> = {
+  option: 'as given',
+  file: 'from the file',
+  timestamps: "from the file's local timestamps",
+  longitude: 'from the longitude',
+  'assumed-utc': 'assumed',
 }
