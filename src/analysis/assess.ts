@@ -27,7 +27,7 @@ import type { ProductProfile } from '../product/profile.ts'
 import { type HourlySeries, QualityFlag } from '../weather/series.ts'
 import { ASSESSMENT_SCHEMA, type Assessment, type FuelFigure, type HeatSummary } from './assessment.ts'
 import { assessmentAssumptions } from './assumptions.ts'
-import { localTimeColumns, parseMonthDay } from './local-time.ts'
+import { localTimeColumns } from './local-time.ts'
 import {
   countMonthly,
   hourOfDayTable,
@@ -35,13 +35,13 @@ import {
   monthlyRows,
   totalReasons,
 } from './monthly-tables.ts'
+import { HEATED_SAMPLE_BATCHES, planAssessment } from './plan.ts'
 import {
   bestStartWindows,
   type MonthDay,
   runStart,
   type StartContext,
   type StartOutcome,
-  seasonDays,
   startDateTable,
   startIndexFor,
 } from './start-dates.ts'
@@ -86,11 +86,6 @@ export interface AssessOptions {
 
 /** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */
 const MIN_HOURS_FOR_A_YEAR = 168
-
-function checkRange(name: string, value: number, lo: number, hi: number, unit: string): void {
-  if (!(value >= lo && value <= hi))
-    throw new RangeError(`${name} must be between ${lo} and ${hi} ${unit}, got ${value}`)
-}
 
 function isoHour(ms: number): string {
   return new Date(ms).toISOString().slice(0, 13) + ':00Z'
@@ -145,29 +140,8 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   const method = parseDryingMethod(options.method)
   if (method.kind === 'open-air' || method.kind === 'solar-cabinet') requireSun(series, method.kind)
   const thresholds = parseDryingThresholds(options.thresholds ?? {})
-  const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
-  const targetWbPct = options.targetWbPct ?? profile.targetMoistureWbPct.value
-  checkRange('initial moisture', initialWbPct, 1, 95, '% wb')
-  checkRange('target moisture', targetWbPct, 0.5, 90, '% wb')
-  if (!(targetWbPct < initialWbPct)) {
-    throw new RangeError(
-      `target moisture ${targetWbPct} % wb must be below the initial moisture ${initialWbPct} % wb`,
-    )
-  }
-  const deadlineDays = options.deadlineDays ?? 14
-  const maxDays = options.maxDays ?? Math.max(60, deadlineDays)
-  checkRange('deadline', deadlineDays, 0.25, 365, 'days')
-  checkRange('maximum duration', maxDays, deadlineDays, 366, 'days (and at least the deadline)')
-  const batchKgFresh = options.batchKgFresh ?? 1000
-  checkRange('batch size', batchKgFresh, 1, 1e7, 'kg')
-  const startHourLocal = options.startHourLocal ?? 8
-  if (!(Number.isInteger(startHourLocal) && startHourLocal >= 0 && startHourLocal <= 23)) {
-    throw new RangeError(`start hour must be a whole hour from 0 to 23, got ${startHourLocal}`)
-  }
-  const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
-  const seasonStart = parseMonthDay(options.seasonStart ?? '01-01', 'season start')
-  const seasonEnd = parseMonthDay(options.seasonEnd ?? '12-31', 'season end')
-  const stepDays = options.startStepDays ?? (seasonGiven ? 1 : 7)
+  const plan = planAssessment(options)
+  const { initialWbPct, targetWbPct, deadlineDays, maxDays, batchKgFresh, startHourLocal, stepDays } = plan
 
   const product = tabulatedResponse(productResponse(profile, options.thicknessMm))
   const initialDb = moistureDbFromWbPct(initialWbPct)
@@ -269,7 +243,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     progress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
 
-  const days: MonthDay[] = seasonDays(seasonStart, seasonEnd, stepDays)
+  const days: MonthDay[] = plan.startDays
   const table = startDateTable(ctx, days, years, (di) =>
     progress?.({ stage: 'start-dates', done: di + 1, total: days.length }),
   )
@@ -351,8 +325,8 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     },
     method,
     season: {
-      start: options.seasonStart ?? '01-01',
-      end: options.seasonEnd ?? '12-31',
+      start: plan.seasonStart,
+      end: plan.seasonEnd,
       stepDays,
       startHourLocal,
     },
@@ -463,7 +437,7 @@ function heatSummary(
   const meanHeatedC = Number.isFinite(meanComputedC) ? meanComputedC : heater.minAirC
   const sorption = heatOfSorption(h.profile, Math.min(Math.max(meanHeatedC, 0), 90), h.targetDb)
   const evaporationFuelKwh = (water * sorption.totalKjPerKg) / 3600 / eff
-  const heatedOnly = heatedEveryHourSample(h.ctx, 30)
+  const heatedOnly = heatedEveryHourSample(h.ctx, HEATED_SAMPLE_BATCHES)
   const ratio =
     heatedOnly.length > 0
       ? quantileSorted(

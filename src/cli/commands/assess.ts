@@ -1,6 +1,7 @@
 import { parseArgs } from 'node:util'
 import { type AssessOptions, type AssessProgress, assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
+import { ASSESS_DEFAULTS } from '../../analysis/plan.ts'
 import { FUELS } from '../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
 import { HOUR_STATUS_NAMES } from '../../drying/thresholds.ts'
@@ -22,9 +23,12 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
 Season and batches:
-  --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every 7 days)
-  --step-days <n>  --start-hour <0–23>  --deadline-days <n> (default 14)  --max-days <n> (default 60)
-  --batch-kg <kg> (default 1000)
+  --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
+                 every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
+  --step-days <n>  --start-hour <0–23> (default ${ASSESS_DEFAULTS.startHourLocal})
+  --deadline-days <n> (default ${ASSESS_DEFAULTS.deadlineDays})
+  --max-days <n> (default ${ASSESS_DEFAULTS.maxDays}, or the deadline when longer)
+  --batch-kg <kg> (default ${ASSESS_DEFAULTS.batchKgFresh})
 Usable-hour thresholds (stated in the assumptions):
   --min-temp <°C> (default 5; use 0 or lower for grain)  --min-deficit <g/kg> (default 0.2)
   --rain-mm <mm/h> (default 0.2)  --night-cooling <K> (default 2)

@@ -1,5 +1,5 @@
 import { parseArgs } from 'node:util'
-import { startServer } from '../../node/server.ts'
+import { ListenError, type RunningServer, startServer } from '../../node/server.ts'
 import { type CliCommand, numberOption, UsageError } from '../command.ts'
 
 const help = `dryhours serve: the HTTP API and the web page
@@ -7,7 +7,9 @@ const help = `dryhours serve: the HTTP API and the web page
 Usage:
   dryhours serve [--host <address>] [--port <n>]
 
-Defaults: 127.0.0.1:8787 (or HOST and PORT from the environment). Stops cleanly on Ctrl-C (SIGINT) or SIGTERM.`
+Defaults: 127.0.0.1:8787 (or HOST and PORT from the environment). Requests that take a file run on
+DRYHOURS_WORKERS worker threads (default: one per core) with up to DRYHOURS_QUEUE waiting (default 8 per
+thread; beyond it 503 with Retry-After). Stops cleanly on Ctrl-C (SIGINT) or SIGTERM.`
 
 export const serveCommand: CliCommand = {
   name: 'serve',
@@ -24,7 +26,14 @@ export const serveCommand: CliCommand = {
     if (port !== undefined && !(Number.isInteger(port) && port >= 0 && port <= 65535)) {
       throw new UsageError(`--port must be an integer from 0 to 65535, got ${values.port}`)
     }
-    const running = await startServer({ host: values.host, port, log: (line) => io.stdout(`${line}\n`) })
+    let running: RunningServer
+    try {
+      running = await startServer({ host: values.host, port, log: (line) => io.stdout(`${line}\n`) })
+    } catch (e) {
+      // A busy port or an address that is not this machine's: the user's input, one line and exit 2.
+      if (e instanceof ListenError) throw new UsageError(e.message)
+      throw e
+    }
     io.stdout(`dryhours listening on ${running.url} (API docs at ${running.url}/docs)\n`)
     await new Promise<void>((resolve) => {
       const stop = (signal: string) => {

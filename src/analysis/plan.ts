@@ -1,0 +1,197 @@
+/**
+ * @module analysis/plan
+ * The engine's planner: the resolved defaults of an assessment and its cost, before any hour is computed.
+ * `assess()` runs on the plan it returns, and the API, the page and the CLI ask it (instead of repeating
+ * the defaults) for their limits and messages. Runtime-neutral; throws {@link AssessOptionError} naming the
+ * option for any value outside its range.
+ */
+import type { AssessOptions } from './assess.ts'
+import { parseMonthDay } from './local-time.ts'
+import { type MonthDay, seasonDays } from './start-dates.ts'
+
+/** Defaults of an assessment's options (our choices, stated in the README and `--help`). */
+export const ASSESS_DEFAULTS = {
+  /** The user's window to finish [days]. */
+  deadlineDays: 14,
+  /** A batch counts as failed after this many days, or after the deadline when that is longer [days]. */
+  maxDays: 60,
+  /** Batch size [kg fresh]. */
+  batchKgFresh: 1000,
+  /** Local standard hour at which batches start. */
+  startHourLocal: 8,
+  /** Start dates of the whole year when no season is given. */
+  seasonStart: '01-01',
+  seasonEnd: '12-31',
+  /** Days between start dates when a season is given / when it is not. */
+  stepDaysWithSeason: 1,
+  stepDaysWholeYear: 7,
+} as const
+
+/** Accepted ranges of the options, checked by {@link planAssessment} [unit in the name]. */
+export const ASSESS_RANGES = {
+  initialWbPct: [1, 95],
+  targetWbPct: [0.5, 90],
+  deadlineDays: [0.25, 365],
+  /** Lower bound: the deadline. */
+  maxDays: [0.25, 366],
+  batchKgFresh: [1, 1e7],
+  startHourLocal: [0, 23],
+  startStepDays: [1, 365],
+  /** Exclusive bounds, as product/drying-rate.ts and product/diffusion.ts require. */
+  thicknessMm: [0, 1000],
+} as const
+
+/**
+ * Batches run besides the season's start dates: the monthly heat column (1st and 16th of every month, per
+ * year) and the heated-every-hour sample of the heat cross-check (assess.ts `heatedEveryHourSample`).
+ */
+const MONTHLY_HEAT_STARTS = 24
+export const HEATED_SAMPLE_BATCHES = 30
+/**
+ * Hours of a leap year (366 × 24): a series counts ceil(hours / 8784) years, so whole years are never
+ * counted twice (4 years with a leap day are 35,064 hours: 4 years, not 5).
+ */
+const HOURS_PER_LEAP_YEAR = 8784
+
+/** An option outside its accepted range: names the option (the engine's name) for a field path. */
+export class AssessOptionError extends RangeError {
+  override name = 'AssessOptionError'
+  constructor(
+    readonly option: keyof AssessOptions,
+    message: string,
+  ) {
+    super(message)
+  }
+}
+
+/** Every option with its default filled in and its range checked. */
+export interface AssessPlan {
+  initialWbPct: number
+  targetWbPct: number
+  deadlineDays: number
+  maxDays: number
+  batchKgFresh: number
+  startHourLocal: number
+  /** Whether the user gave a season (decides the default step). */
+  seasonGiven: boolean
+  seasonStart: string
+  seasonEnd: string
+  stepDays: number
+  /** The season's start days, in order. */
+  startDays: MonthDay[]
+}
+
+function checkRange(
+  option: keyof AssessOptions,
+  name: string,
+  value: number,
+  lo: number,
+  hi: number,
+  unit: string,
+): void {
+  if (!(value >= lo && value <= hi))
+    throw new AssessOptionError(option, `${name} must be between ${lo} and ${hi} ${unit}, got ${value}`)
+}
+
+/** Resolve the defaults of `options` and check every range; the engine and every entry point use this. */
+export function planAssessment(options: AssessOptions): AssessPlan {
+  const profile = options.product
+  const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
+  const targetWbPct = options.targetWbPct ?? profile.targetMoistureWbPct.value
+  checkRange('initialWbPct', 'initial moisture', initialWbPct, ...ASSESS_RANGES.initialWbPct, '% wb')
+  checkRange('targetWbPct', 'target moisture', targetWbPct, ...ASSESS_RANGES.targetWbPct, '% wb')
+  if (!(targetWbPct < initialWbPct)) {
+    throw new AssessOptionError(
+      'targetWbPct',
+      `target moisture ${targetWbPct} % wb must be below the initial moisture ${initialWbPct} % wb`,
+    )
+  }
+  if (options.thicknessMm !== undefined) {
+    const [lo, hi] = ASSESS_RANGES.thicknessMm
+    if (!(options.thicknessMm > lo && options.thicknessMm < hi)) {
+      throw new AssessOptionError(
+        'thicknessMm',
+        `thickness must be between ${lo} and ${hi} mm, got ${options.thicknessMm}`,
+      )
+    }
+  }
+  const deadlineDays = options.deadlineDays ?? ASSESS_DEFAULTS.deadlineDays
+  checkRange('deadlineDays', 'deadline', deadlineDays, ...ASSESS_RANGES.deadlineDays, 'days')
+  const maxDays = options.maxDays ?? Math.max(ASSESS_DEFAULTS.maxDays, deadlineDays)
+  checkRange(
+    'maxDays',
+    'maximum duration',
+    maxDays,
+    deadlineDays,
+    ASSESS_RANGES.maxDays[1],
+    'days (and at least the deadline)',
+  )
+  const batchKgFresh = options.batchKgFresh ?? ASSESS_DEFAULTS.batchKgFresh
+  checkRange('batchKgFresh', 'batch size', batchKgFresh, ...ASSESS_RANGES.batchKgFresh, 'kg')
+  const startHourLocal = options.startHourLocal ?? ASSESS_DEFAULTS.startHourLocal
+  if (!(Number.isInteger(startHourLocal) && startHourLocal >= 0 && startHourLocal <= 23)) {
+    throw new AssessOptionError(
+      'startHourLocal',
+      `start hour must be a whole hour from 0 to 23, got ${startHourLocal}`,
+    )
+  }
+  const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
+  const seasonStart = options.seasonStart ?? ASSESS_DEFAULTS.seasonStart
+  const seasonEnd = options.seasonEnd ?? ASSESS_DEFAULTS.seasonEnd
+  const start = monthDayOption('seasonStart', seasonStart, 'season start')
+  const end = monthDayOption('seasonEnd', seasonEnd, 'season end')
+  const stepDays =
+    options.startStepDays ??
+    (seasonGiven ? ASSESS_DEFAULTS.stepDaysWithSeason : ASSESS_DEFAULTS.stepDaysWholeYear)
+  const [stepLo, stepHi] = ASSESS_RANGES.startStepDays
+  if (!(Number.isInteger(stepDays) && stepDays >= stepLo && stepDays <= stepHi)) {
+    throw new AssessOptionError(
+      'startStepDays',
+      `start-date step must be a whole number of days from ${stepLo} to ${stepHi}, got ${stepDays}`,
+    )
+  }
+  return {
+    initialWbPct,
+    targetWbPct,
+    deadlineDays,
+    maxDays,
+    batchKgFresh,
+    startHourLocal,
+    seasonGiven,
+    seasonStart,
+    seasonEnd,
+    stepDays,
+    startDays: seasonDays(start, end, stepDays),
+  }
+}
+
+function monthDayOption(option: keyof AssessOptions, text: string, name: string): MonthDay {
+  try {
+    return parseMonthDay(text, name)
+  } catch (e) {
+    throw new AssessOptionError(option, (e as Error).message)
+  }
+}
+
+/** What an assessment of a series will cost, before it runs. */
+export interface AssessCost {
+  /** Years the series spans (at least 1). */
+  years: number
+  /** Batches simulated: (start days + 24 monthly heat starts) × years + the 30 heated-every-hour samples. */
+  batches: number
+  /** Batches × the longest a batch may run [h]: the bound on simulated batch-hours. */
+  batchHours: number
+}
+
+/** Cost of assessing a series of `seriesHours` hours with this plan. */
+export function assessmentCost(plan: AssessPlan, seriesHours: number): AssessCost {
+  const years = Math.max(1, Math.ceil(seriesHours / HOURS_PER_LEAP_YEAR))
+  const batches = (plan.startDays.length + MONTHLY_HEAT_STARTS) * years + HEATED_SAMPLE_BATCHES
+  return { years, batches, batchHours: batches * Math.round(plan.maxDays * 24) }
+}
+
+/** Simulated batch-hours of assessing each of the series (hours per series) with the same options. */
+export function estimateBatchHours(options: AssessOptions, seriesHours: readonly number[]): number {
+  const plan = planAssessment(options)
+  return seriesHours.reduce((sum, hours) => sum + assessmentCost(plan, hours).batchHours, 0)
+}
