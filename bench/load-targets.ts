@@ -1,6 +1,6 @@
 /**
  * Load-test targets that post a one-year demo file: /v1/inspect and a coarse /v1/assess (a 30-day season,
- * a start every 5 days), so each round stays in the seconds.
+ * a start every 5 days), so each request stays in the tens of milliseconds; `npm run load` drives the assess.
  */
 import { readFileSync } from 'node:fs'
 

@@ -1,8 +1,8 @@
 /**
  * @module worker
- * Cloudflare Workers entry: the same app as on Node. Limits come from wrangler.toml `[vars]`
- * (DRYHOURS_MAX_BODY_BYTES, DRYHOURS_MAX_ROWS, DRYHOURS_MAX_SITES, DRYHOURS_MAX_BATCH_HOURS,
- * DRYHOURS_CORS_ORIGINS); the plan's CPU limit bounds the time per request.
+ * Cloudflare Workers entry: the same app as on Node. Limits come from wrangler.toml `[vars]` (the DRYHOURS_*
+ * variables of api/config.ts); the plan's CPU limit bounds the time per request. Each request runs in the
+ * platform's isolate: there is no worker pool here (that is Node's, src/node/pool.ts).
  */
 import { createApp } from './api/app.ts'
 import { configFromVariables } from './api/config.ts'

@@ -2,7 +2,8 @@
  * @module bench/sections/hostile
  * Hostile text that once made patterns backtrack, read end to end, against a 1,000-row ordinary
  * file read in the same run: a timestamp cell padded with 4,000 spaces (once about 13 s), a header
- * of 1,000 cells of 100 '(' (once about 12 s), a 20,000-line body without delimiters, and a
+ * of 1,000 cells of 100 '(' (once about 12 s), 10 such lines under a title whose commas make the
+ * reader try every delimiter, a 20,000-line body without delimiters, and a
  * 100,000-character number cell. Figures are medians of five runs; the tests in
  * test/hostile/linear-time.test.ts assert what these inputs are answered.
  */
@@ -28,6 +29,10 @@ const CASES: [string, string][] = [
   [
     'header of 1,000 cells of 100 "("',
     `${Array.from({ length: 1000 }, () => '('.repeat(100)).join(',')}\n1,2,3\n`,
+  ],
+  [
+    'a title with commas above 10 lines of 1,000 semicolon cells of 100 "(" (every delimiter tried)',
+    `Title, a, b\n${Array.from({ length: 10 }, () => Array.from({ length: 1000 }, () => '('.repeat(100)).join(';')).join('\n')}\n1;2;3\n`,
   ],
   [
     '20,000 lines without a delimiter',

@@ -79,13 +79,20 @@ export function requireSun(series: HourlySeries, kind: string): void {
     if (Number.isNaN(series.ghiWm2[i])) sunless++
   }
   if (usable > 0 && sunless > MAX_SUNLESS_SHARE * usable) {
+    const placed = series.site.latitudeDeg !== null && series.site.longitudeDeg !== null
     throw new RangeError(
-      `the ${kind} method needs the sun, and ${sunless} of the ${usable} usable hours have no irradiance: the file has none ` +
-        "and it could not be estimated (that needs the site's position, --lat and --lon, and cloud cover or whole days " +
-        'of temperatures); give the position, use a file with irradiance, or assess the shade or heated method',
+      `the ${kind} method needs the sun, and ${sunless} of the ${usable} hours with dry bulb and humidity have no irradiance: ` +
+        (placed
+          ? 'the file has none, and neither cloud cover nor whole days of temperatures to estimate it from; ' +
+            'use a file with irradiance or cloud cover, or assess the shade or heated method'
+          : "the file has none, and an estimate needs the site's position (--lat and --lon) besides cloud cover or whole " +
+            'days of temperatures; give the position, use a file with irradiance, or assess the shade or heated method'),
     )
   }
 }
+
+/** How the weather reader names the assumption it adds when it estimates the sun. */
+const ESTIMATED_SUN_PREFIX = 'irradiance estimated from '
 
 /** Daylight hours (irradiance above 0) whose irradiance the reader estimated. */
 function countEstimatedSun(series: HourlySeries): number {
@@ -257,10 +264,15 @@ export function assessmentWarnings(
   primary: HourlyConditions,
   calendar: Calendar,
   starts: StartDates,
+  estimatedSunHours: number,
 ): string[] {
   const warnings: string[] = []
   const { years, time } = calendar
-  if (series.typicalYear || years.length < 2) {
+  if (years.length === 0) {
+    warnings.push(
+      `no year holds ${MIN_HOURS_FOR_A_YEAR} hours (a week) with dry bulb and humidity: the monthly and start-date tables are empty`,
+    )
+  } else if (series.typicalYear || years.length < 2) {
     warnings.push(
       series.typicalYear
         ? 'typical-year file: one synthetic year, so spread across years (P10/P90) cannot be computed; the figures describe that one year only'
@@ -268,6 +280,16 @@ export function assessmentWarnings(
     )
   } else if (years.length < 10) {
     warnings.push(`only ${years.length} years of data: P10 and P90 across so few years are rough`)
+  }
+  if (estimatedSunHours > 0 && run.model.needs.sun) {
+    const from = (series.supplied ?? [])
+      .filter((s) => s.name.startsWith(ESTIMATED_SUN_PREFIX))
+      .map((s) => s.name.slice(ESTIMATED_SUN_PREFIX.length))
+    warnings.push(
+      `the sun in ${estimatedSunHours} daylight hours is estimated${from.length > 0 ? ` from ${from.join(' and ')}` : ''}, ` +
+        'not measured: usable hours and drying times rest on that estimate, which is meant for sums over many days ' +
+        'and is rough hour by hour (see the assumptions)',
+    )
   }
   if (primary.noRainData && run.model.rainMatters(run.method)) {
     warnings.push(
@@ -312,6 +334,7 @@ export function assembleAssessment(
   const { primary, calendar, starts } = parts
   const { profile, product } = run
   const reasons = totalReasons(calendar.counts)
+  const estimatedSunHours = countEstimatedSun(series)
   return {
     schema: ASSESSMENT_SCHEMA,
     site: {
@@ -352,7 +375,7 @@ export function assembleAssessment(
       // what the weather reader supplied rather than read (estimated irradiance, a constant pressure)
       ...(series.supplied ?? []),
     ],
-    warnings: assessmentWarnings(series, run, primary, calendar, starts),
+    warnings: assessmentWarnings(series, run, primary, calendar, starts, estimatedSunHours),
     coverage: {
       firstHourUtc: isoHour(series.startUtcMs[0]),
       lastHourUtc: isoHour(series.startUtcMs[series.hours - 1]),
@@ -361,7 +384,7 @@ export function assembleAssessment(
       years: calendar.years,
       monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
       assumedIrradianceHours: primary.assumedIrradianceHours,
-      estimatedIrradianceHours: countEstimatedSun(series),
+      estimatedIrradianceHours: estimatedSunHours,
       assumedWindHours: primary.assumedWindHours,
       hasRainData: !primary.noRainData,
       startDateBatchesRun: starts.table.batches,

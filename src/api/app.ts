@@ -1,21 +1,30 @@
 /**
  * @module api/app
  * The dryhours HTTP API: one runtime-neutral Hono app for Node and Cloudflare Workers. One small router
- * per resource, mounted with `app.route`; zod at the edge; RFC 9457 problem details for every error.
+ * per resource, mounted with `app.route`; zod at the edge; RFC 9457 problem details with a stable type for
+ * every error (never engine text); 405 with `Allow` for a known path and the wrong method; gzip and deflate
+ * bodies decoded within the byte limit.
  */
 import { Hono } from 'hono'
 import { bodyLimit } from 'hono/body-limit'
 import { cors } from 'hono/cors'
-import { HTTPException } from 'hono/http-exception'
 import { secureHeaders } from 'hono/secure-headers'
+import { decodeContentEncoding } from './body.ts'
 import { type ApiConfig, DEFAULT_API_CONFIG } from './config.ts'
-import { ApiProblem, problemResponse } from './problem.ts'
+import { problemFor } from './errors.ts'
+import { allowedMethods } from './methods.ts'
+import { problemResponse } from './problem.ts'
 import { apiRoutes } from './routes/index.ts'
+import { markWorkStart } from './work.ts'
 
 export function createApp(overrides: Partial<ApiConfig> = {}): Hono {
   const config: ApiConfig = { ...DEFAULT_API_CONFIG, ...overrides }
   const app = new Hono()
 
+  app.use('*', async (c, next) => {
+    markWorkStart(c, config)
+    await next()
+  })
   app.use(
     '*',
     secureHeaders({
@@ -45,21 +54,49 @@ export function createApp(overrides: Partial<ApiConfig> = {}): Hono {
         ),
     }),
   )
+  app.use('*', async (c, next) => {
+    await decodeContentEncoding(c, config.maxBodyBytes)
+    await next()
+  })
 
   for (const { path, router } of apiRoutes(config)) app.route(path, router)
 
-  app.notFound((c) =>
-    problemResponse(c, 404, `no route for ${c.req.method} ${new URL(c.req.url).pathname}; see /docs`),
-  )
-  app.onError((err, c) => {
-    if (err instanceof ApiProblem) return problemResponse(c, err.status, err.message, err.errors)
-    if (err instanceof HTTPException) return problemResponse(c, err.status, err.message || 'request rejected')
-    if (err instanceof RangeError) return problemResponse(c, 400, err.message)
-    // Internal error: no stack trace or internals in the answer.
-    console.error(
-      `dryhours: internal error on ${c.req.method} ${new URL(c.req.url).pathname}: ${err.message}`,
+  app.notFound((c) => {
+    const path = new URL(c.req.url).pathname
+    const allow = allowedMethods(app.routes, path)
+    if (allow.length > 0 && !allow.includes(c.req.method)) {
+      return problemResponse(
+        c,
+        405,
+        `${c.req.method.slice(0, 20)} is not allowed on ${path.slice(0, 100)}; it takes ${allow.join(', ')}`,
+        undefined,
+        'method-not-allowed',
+        { allow: allow.join(', ') },
+      )
+    }
+    return problemResponse(
+      c,
+      404,
+      `no route for ${c.req.method.slice(0, 20)} ${path.slice(0, 200)}; see /docs`,
     )
-    return problemResponse(c, 500, 'internal error; the request was not processed')
+  })
+  app.onError((err, c) => {
+    const problem = problemFor(err, { rangeStatus: 400 })
+    if (problem) {
+      return problemResponse(
+        c,
+        problem.status,
+        problem.message,
+        problem.errors,
+        problem.type,
+        problem.headers,
+      )
+    }
+    // Internal error: no stack trace or engine text in the answer; the message goes to the server log.
+    console.error(
+      `dryhours: internal error on ${c.req.method} ${new URL(c.req.url).pathname}: ${(err as Error).message}`,
+    )
+    return problemResponse(c, 500, 'internal error; the request was not processed (the server logged it)')
   })
   return app
 }

@@ -4,8 +4,10 @@
  * the JSON Schema (2020-12, which OpenAPI 3.1 uses) of the zod schemas that validate the requests.
  */
 import { z } from 'zod'
+import { type ApiConfig, DEFAULT_API_CONFIG, limitsTable } from './config.ts'
+import { FILE_ROUTES } from './file-routes.ts'
 import { listOperations } from './operations.ts'
-import { problemBody } from './problem.ts'
+import { PROBLEM_TYPE_BASE, PROBLEM_TYPES, problemBody } from './problem.ts'
 
 type Json = Record<string, unknown>
 
@@ -19,7 +21,10 @@ const problemSchema: Json = {
   type: 'object',
   description: 'RFC 9457 problem details',
   properties: {
-    type: { type: 'string' },
+    type: {
+      type: 'string',
+      description: `stable identifier of the kind of problem: ${PROBLEM_TYPE_BASE}<kind>, kinds listed in x-problem-types`,
+    },
     title: { type: 'string' },
     status: { type: 'integer' },
     detail: { type: 'string' },
@@ -35,7 +40,11 @@ const problemSchema: Json = {
   required: ['type', 'title', 'status', 'detail'],
 }
 
-export function buildOpenApiDocument(): Json {
+/**
+ * The OpenAPI document, with the limits in force (`x-limits`, from `config`) and every problem type
+ * (`x-problem-types`).
+ */
+export function buildOpenApiDocument(config: ApiConfig = DEFAULT_API_CONFIG): Json {
   const paths: Record<string, Json> = {}
   for (const op of listOperations()) {
     const parameters: Json[] = []
@@ -62,7 +71,9 @@ export function buildOpenApiDocument(): Json {
         },
       },
     }
-    for (const status of op.errors) {
+    // Every route that takes a file can be refused while the server is busy (Node's worker pool).
+    const statuses = FILE_ROUTES.includes(op.path) ? [...new Set([...op.errors, 503])] : op.errors
+    for (const status of statuses) {
       responses[String(status)] = {
         description: problemBody(status, '').title,
         content: { 'application/problem+json': { schema: problemSchema } },
@@ -108,8 +119,15 @@ export function buildOpenApiDocument(): Json {
       title: 'dryhours API',
       version: '0.1.0',
       description:
-        'Drying potential of a site from its hourly weather: moist-air states, weather-file inspection, product equilibrium, seasonal assessments and site comparisons. SI units; each field states its unit.',
+        'Drying potential of a site from its hourly weather: moist-air states, weather-file inspection, product equilibrium, seasonal assessments and site comparisons. SI units; each field states its unit. The limits of this server are in `x-limits`; every error is a problem-details object whose `type` is one of `x-problem-types`.',
     },
+    'x-limits': limitsTable(config),
+    'x-problem-types': Object.entries(PROBLEM_TYPES).map(([kind, t]) => ({
+      type: `${PROBLEM_TYPE_BASE}${kind}`,
+      status: t.status,
+      title: t.title,
+      description: t.description,
+    })),
     paths,
   }
 }

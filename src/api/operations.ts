@@ -37,11 +37,29 @@ const operations: Operation[] = [
     method: 'get',
     path: '/healthz',
     summary: 'Liveness check',
-    description: 'Answers 200 with {"ok":true} when the service is up. Does no work.',
+    description:
+      'Answers 200 with {"ok":true} when the service is up. Does no work, and answers while the worker threads compute. On Node, `work` gives the state of the worker pool.',
     response: {
       contentType: 'application/json',
       description: 'service is up',
-      schema: z.object({ ok: z.boolean(), service: z.string() }),
+      schema: z.object({
+        ok: z.boolean(),
+        service: z.string(),
+        work: z
+          .object({
+            threads: z.number().describe('worker threads [count]'),
+            starting: z.number().describe('worker threads still loading [count]'),
+            running: z.number().describe('requests computing now [count]'),
+            queued: z.number().describe('requests waiting for a thread [count]'),
+            queueLimit: z.number().describe('waiting requests beyond which the answer is 503 [count]'),
+            completed: z.number().describe('requests answered by the threads since start [count]'),
+            cancelled: z.number().describe('requests stopped because the client went away [count]'),
+            refused: z.number().describe('requests refused with 503 since start [count]'),
+            restarted: z.number().describe('worker threads replaced since start [count]'),
+          })
+          .optional()
+          .describe('Node only: the worker pool'),
+      }),
     },
     errors: [],
     examples: [{ name: 'health', url: '/healthz' }],

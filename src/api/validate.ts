@@ -4,6 +4,7 @@
  */
 import type { z } from 'zod'
 import { ApiProblem, zodIssuesToFields } from './problem.ts'
+import { queryParams } from './upload.ts'
 
 export function parseOrProblem<S extends z.ZodType>(schema: S, value: unknown, prefix = ''): z.output<S> {
   const result = schema.safeParse(value)
@@ -14,9 +15,10 @@ export function parseOrProblem<S extends z.ZodType>(schema: S, value: unknown, p
   return result.data
 }
 
-/** Query parameters as a plain object of strings (the last value wins for repeated keys). */
+/**
+ * Query parameters as an object of strings without prototype, so that `__proto__` and `constructor` are
+ * keys like any other and strict schemas refuse them (the last value wins for repeated keys).
+ */
 export function queryObject(url: string): Record<string, string> {
-  const out: Record<string, string> = {}
-  for (const [k, v] of new URL(url).searchParams) out[k] = v
-  return out
+  return queryParams(url)
 }

@@ -2,6 +2,8 @@
  * @module cli/main
  * Dispatch `dryhours <command> …`. Exit codes: 0 success, 2 bad input (one line on stderr), 1 internal error.
  */
+import { ConfigError } from '../api/config.ts'
+import { isRuntimeLimit, mentionsRuntimeText } from '../api/errors.ts'
 import { type CliIo, UsageError } from './command.ts'
 import { commands } from './registry.ts'
 
@@ -33,6 +35,21 @@ export function joinNegativeNumberValues(args: string[]): string[] {
   return out
 }
 
+/**
+ * The one-line message of an error that is the user's input (exit 2), or null for an internal fault
+ * (exit 1): usage errors, bad settings, and inputs the engine ran out of memory or stack for.
+ */
+function inputFault(e: unknown): string | null {
+  const tooLarge =
+    'the input is too large for the engine to process (it ran out of memory or nesting depth); use a smaller file'
+  if (isRuntimeLimit(e)) return tooLarge
+  if (e instanceof UsageError || e instanceof ConfigError) {
+    // a command that wrapped an engine error in a usage error: the engine's words stay out of the line
+    return mentionsRuntimeText(e.message) ? tooLarge : e.message
+  }
+  return null
+}
+
 export async function runCli(argv: string[], io: CliIo): Promise<number> {
   const [name, ...rawRest] = argv
   const rest = joinNegativeNumberValues(rawRest)
@@ -52,12 +69,16 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
   try {
     return await command.run(rest, io)
   } catch (e) {
-    if (e instanceof UsageError) {
+    const line = inputFault(e)
+    if (line !== null) {
       // One line: parseArgs messages carry a second line of advice that names its own syntax.
-      io.stderr(`dryhours ${name}: ${e.message.split('\n')[0].trim()}\n`)
+      io.stderr(`dryhours ${name}: ${line.split('\n')[0].trim()}\n`)
       return 2
     }
-    io.stderr(`dryhours ${name}: internal error: ${(e as Error).message ?? String(e)}\n`)
+    // A fault of dryhours: no engine text for the user, the error's kind for the report.
+    io.stderr(
+      `dryhours ${name}: internal error (${(e as Error)?.name ?? 'error'}); please report it with the command you ran\n`,
+    )
     return 1
   }
 }

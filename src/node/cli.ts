@@ -4,8 +4,26 @@
  */
 import { readFile, writeFile } from 'node:fs/promises'
 import { pathToFileURL } from 'node:url'
-import type { CliIo } from '../cli/command.ts'
+import { type CliIo, UsageError } from '../cli/command.ts'
 import { runCli } from '../cli/main.ts'
+
+/** Plain words for the file-system errors a user can cause with a path. */
+const PATH_ERRORS: Record<string, string> = {
+  ENOENT: 'no such file or folder',
+  ENOTDIR: 'a part of the path is not a folder',
+  EISDIR: 'it is a folder',
+  EACCES: 'permission denied',
+  EPERM: 'permission denied',
+  EROFS: 'the file system is read-only',
+  ENOSPC: 'no space left on the device',
+  ENAMETOOLONG: 'the name is too long',
+  EEXIST: 'it already exists',
+}
+
+function pathError(verb: string, path: string, e: unknown): UsageError {
+  const code = (e as NodeJS.ErrnoException).code ?? ''
+  return new UsageError(`cannot ${verb} '${path}': ${PATH_ERRORS[code] ?? code ?? 'file system error'}`)
+}
 
 export const nodeIo: CliIo = {
   stdout: (text) => process.stdout.write(text),
@@ -14,16 +32,27 @@ export const nodeIo: CliIo = {
     try {
       return new Uint8Array(await readFile(path))
     } catch (e) {
-      const { UsageError } = await import('../cli/command.ts')
-      throw new UsageError(
-        `cannot read '${path}': ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
-      )
+      throw pathError('read', path, e)
     }
   },
   writeFile: async (path, data) => {
-    await writeFile(path, data)
+    try {
+      await writeFile(path, data)
+    } catch (e) {
+      // A missing folder, a read-only place or a folder given as the output: the user's input, exit 2.
+      throw pathError('write', path, e)
+    }
   },
-  startServer: async (options) => (await import('./server.ts')).startServer(options),
+  startServer: async (options) => {
+    const { ListenError, startServer } = await import('./server.ts')
+    try {
+      return await startServer(options)
+    } catch (e) {
+      // A busy port or an address that is not this machine's: the user's input, one line and exit 2.
+      if (e instanceof ListenError) throw new UsageError(e.message)
+      throw e
+    }
+  },
 }
 
 export async function main(argv: string[]): Promise<number> {

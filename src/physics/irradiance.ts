@@ -39,9 +39,18 @@ export function clearSkyRadiationFao56(extraterrestrial: number, elevationM: num
  */
 export function clearSkyGhiHaurwitzWm2(sunAltitudeDeg: number): number {
   checkFinite('sun altitude', sunAltitudeDeg, 'degrees')
-  const cosZ = Math.sin(sunAltitudeDeg * RAD)
-  if (cosZ <= 0) return 0
-  return 1098 * cosZ * Math.exp(-0.059 / cosZ)
+  return clearSkyGhiHaurwitzCosZenithWm2(Math.sin(sunAltitudeDeg * RAD))
+}
+
+/**
+ * The same Haurwitz clear-sky irradiance [W/m²] for the cosine of the zenith angle `cosZenith` [–] (the
+ * sine of the altitude), for loops that have it already; 0 at or below the horizon, no input check.
+ * Constants 1098 W/m² and 0.059 as in pvlib `clearsky.haurwitz`, first implemented by M. Reno for the
+ * report above (read in pvlib-python's source); some later papers print 0.057 for the same formula (from
+ * memory); the 1945 paper itself was not read.
+ */
+export function clearSkyGhiHaurwitzCosZenithWm2(cosZenith: number): number {
+  return cosZenith > 0 ? 1098 * cosZenith * Math.exp(-0.059 / cosZenith) : 0
 }
 
 /**

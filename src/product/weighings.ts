@@ -145,7 +145,9 @@ export function dryMassG(weighings: Weighing[], ref: MoistureReference): number 
   if (weighed.length === 0) throw new RangeError('no weighing has a mass')
   if ('dryMassG' in ref) {
     if (!(ref.dryMassG > 0)) throw new RangeError(`dry mass must be > 0 g, got ${ref.dryMassG}`)
-    const minMass = Math.min(...weighed.map((w) => w.massG as number))
+    // a loop, not Math.min(...array): spreading 130,000 weighings overflows the call stack
+    let minMass = Number.POSITIVE_INFINITY
+    for (const w of weighed) if ((w.massG as number) < minMass) minMass = w.massG as number
     if (!(ref.dryMassG < minMass)) {
       throw new RangeError(`dry mass ${ref.dryMassG} g must be below every weighing (smallest ${minMass} g)`)
     }

@@ -4,12 +4,14 @@
  */
 import { summarizeSeries } from '../weather/export.ts'
 import type { WeatherReadResult } from '../weather/result.ts'
+import { csvTable } from './escape.ts'
 
 /**
  * The JSON of `dryhours inspect --json`: format, dialect (the known layout recognised, or null), rows,
  * period, hours, years, typicalYear, columns, site (with its clock and where that came from), how rows
- * became hours (`hourly`), per variable the hours, mean, min and max in SI (`variables`), coverage,
- * problems, time basis, warnings and the assumption notes.
+ * became hours (`hourly`), per variable the hours, mean, min and max in SI (`variables`), coverage, every
+ * rejected row with its line (`rejectedRows`, uncapped), the first 100 problems with their counts, time
+ * basis, warnings and the assumption notes.
  */
 export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
   const s = r.series
@@ -39,10 +41,27 @@ export function inspectJson(r: WeatherReadResult): Record<string, unknown> {
     hoursWithoutRow: r.hoursWithoutRow,
     hoursMissingCore: r.hoursMissingCore,
     problemCounts: r.problemCounts,
+    rejectedRows: r.rejectedRows,
     problems: r.problems.slice(0, 100),
     problemsListed: Math.min(100, r.problems.length),
     problemsTotal: Object.values(r.problemCounts).reduce((a, b) => a + (b ?? 0), 0),
     warnings: r.warnings,
     notes: r.notes,
   }
+}
+
+/**
+ * Every rejected row as CSV (line, kind, and the problem's message where it is among the listed problems):
+ * the download of `POST /v1/inspect?format=rejected`.
+ */
+export function rejectedRowsCsv(r: WeatherReadResult): string {
+  const messages = new Map<string, string>()
+  for (const p of r.problems) {
+    const key = `${p.line}:${p.kind}`
+    if (p.line !== null && !messages.has(key)) messages.set(key, p.message)
+  }
+  return csvTable(
+    ['line', 'kind', 'message'],
+    r.rejectedRows.map((row) => [row.line, row.kind, messages.get(`${row.line}:${row.kind}`) ?? '']),
+  )
 }

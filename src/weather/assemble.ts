@@ -38,7 +38,7 @@ import {
   ReportKind,
   type ValueKind,
 } from './raw-table.ts'
-import type { ColumnReport, HourlyAggregation, WeatherReadResult } from './result.ts'
+import type { ColumnReport, HourlyAggregation, RejectedRow, WeatherReadResult } from './result.ts'
 import { createEmptySeries, missingColumn, QualityFlag, type SiteInfo, type ValueTiming } from './series.ts'
 import { resolveSiteClock } from './site-clock.ts'
 import { snippet } from './snippet.ts'
@@ -443,7 +443,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     }
   }
   if (missingCore === hours) throw noUsableHour(series, columns, log, aggregation)
-  const rows = countRows(raw, plan, series, grid, rowChanged, rowPlaced, log)
+  const { rows, rejectedRows } = countRows(raw, plan, series, grid, rowChanged, rowPlaced, log)
   aggregation.supersededRows = rows.superseded
   series.timing = Object.fromEntries(columns.map((c) => [c.variable, c.timing]))
   const coverage = summarizeCoverage(series, missingCoreHours(series))
@@ -453,6 +453,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     series,
     format: raw.format,
     rows,
+    rejectedRows,
     columns,
     problems: log.problems,
     problemCounts: log.counts,
@@ -680,22 +681,24 @@ function constantPressure(
     count++
   }
   if (count < 24) return false
+  // the value as a reader would write it (896 hPa is 89.6 kPa, not 89.60000000000001)
+  const kpa = Number(value.toFixed(4))
   const elevation = ctx.site.elevationM
   if (elevation !== null) {
     const standard = standardPressureKpaAtElevation(elevation)
     if (Math.abs(standard - value) > CONSTANT_PRESSURE_TOLERANCE_KPA) {
       values.fill(Number.NaN)
       warnings.push(
-        `pressure is ${value} kPa in every hour, far from the standard atmosphere at the site's ${elevation} m (${standard.toFixed(2)} kPa): the standard atmosphere is used instead`,
+        `pressure is ${kpa} kPa in every hour, far from the standard atmosphere at the site's ${elevation} m (${standard.toFixed(2)} kPa): the standard atmosphere is used instead`,
       )
       return true
     }
   }
   notes.push(
-    `pressure is ${value} kPa in every hour: a constant the file was made with (the standard atmosphere of typical-year files), used as given, not judged as a sensor`,
+    `pressure is ${kpa} kPa in every hour: a constant the file was made with (the standard atmosphere of typical-year files), used as given, not judged as a sensor`,
   )
   warnings.push(
-    `pressure is the same ${value} kPa in every hour: taken as a supplied constant, not a stuck sensor`,
+    `pressure is the same ${kpa} kPa in every hour: taken as a supplied constant, not a stuck sensor`,
   )
   return true
 }
@@ -709,7 +712,9 @@ function countRows(
   rowChanged: Uint8Array,
   rowPlaced: Uint8Array,
   log: ProblemLog,
-): WeatherReadResult['rows'] {
+): { rows: WeatherReadResult['rows']; rejectedRows: RejectedRow[] } {
+  /** Every rejected row with its line and why (uncapped, unlike the problem list). */
+  const rejectedRows: RejectedRow[] = []
   let used = 0
   let repaired = 0
   let rejected = 0
@@ -723,6 +728,11 @@ function countRows(
     }
     if (h < 0 || plan.duplicateOf[i] >= 0) {
       rejected++
+      const line = raw.lines[i]
+      rejectedRows.push({
+        line,
+        kind: h < 0 ? (log.rowKinds.get(line) ?? 'bad-timestamp') : 'duplicate-timestamp',
+      })
       continue
     }
     if (plan.sampling === 'reports' && rowPlaced[i] === 0) {
@@ -731,6 +741,7 @@ function countRows(
     }
     if (series.quality[h] & QualityFlag.missingCore) {
       rejected++
+      rejectedRows.push({ line: raw.lines[i], kind: 'core-missing' })
       if (loggedHour[h] === 0) {
         loggedHour[h] = 1
         const what = Number.isNaN(series.dryBulbC[h]) ? 'dry bulb' : 'humidity'
@@ -746,7 +757,7 @@ function countRows(
     if (rowChanged[i] !== 0 || grid.changed[h]) repaired++
     else used++
   }
-  return { read: raw.rows, used, repaired, rejected, superseded }
+  return { rows: { read: raw.rows, used, repaired, rejected, superseded }, rejectedRows }
 }
 
 function countHoursWithoutRow(plan: RowPlan): number {

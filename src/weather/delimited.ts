@@ -83,7 +83,18 @@ export interface ReadDelimitedOptions extends DelimitedLayout {
   headerLine?: number
 }
 
-/** The delimiter of the first non-blank line: the most frequent of comma, semicolon and tab outside quotes. */
+/** Offset of the start of 0-based line `index` (the end of the text when it has fewer lines). */
+function lineStart(text: string, index: number): number {
+  let at = 0
+  for (let k = 0; k < index; k++) {
+    const next = text.indexOf('\n', at)
+    if (next < 0) return text.length
+    at = next + 1
+  }
+  return at
+}
+
+/** The delimiter of the first line of `text`: the most frequent of comma, semicolon and tab outside quotes. */
 export function detectDelimiter(text: string): string {
   let end = text.indexOf('\n')
   const cr = text.indexOf('\r')
@@ -279,11 +290,14 @@ export function readDelimited(
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text
   const firstContent = firstNonSpace(body)
   if (firstContent < 0) throw new WeatherInputError('the file is empty', ['rows'])
-  const delimiter = layout.delimiter ?? detectDelimiter(body.slice(body.lastIndexOf('\n', firstContent) + 1))
+  // The delimiter of the header line when the user names it, else of the first non-blank line.
+  const delimiterLine =
+    headerLine !== undefined ? lineStart(body, headerLine - 1) : body.lastIndexOf('\n', firstContent) + 1
+  let delimiter = layout.delimiter ?? detectDelimiter(body.slice(delimiterLine))
   // The head (header search, decimal-comma test) always goes through papaparse; the body too when it
   // holds quotes. Quote-free bodies are split by a scanner that keeps only the needed columns
   // (papaparse's own fastMode also splits quote-free text without quote handling).
-  const head = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false, preview: HEAD_ROWS }).data
+  let head = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false, preview: HEAD_ROWS }).data
   let found: HeaderLayout
   if (layout.headerRow === -1) {
     const names = layout.columnNames ?? []
@@ -297,13 +311,42 @@ export function readDelimited(
       skipped: 0,
       score: 1,
     }
-  } else found = locateHeader(head, headerLine !== undefined ? headerLine - 1 : layout.headerRow, layout)
+  } else {
+    found = locateHeader(head, headerLine !== undefined ? headerLine - 1 : layout.headerRow, layout)
+    // A title or metadata line above the header may hold another delimiter than the table ("Site: A,
+    // shed 2" above a semicolon table): when the header is searched, the delimiter whose header row
+    // names the most variables wins (the first line's on a tie).
+    if (layout.delimiter === undefined && headerLine === undefined && layout.headerRow === undefined) {
+      const headEnd = lineStart(body, HEAD_ROWS)
+      for (const other of [',', ';', '\t']) {
+        // a delimiter that never occurs in the head cannot split its header
+        if (other === delimiter || body.lastIndexOf(other, headEnd) < 0) continue
+        const otherHead = Papa.parse<string[]>(body, {
+          delimiter: other,
+          skipEmptyLines: false,
+          preview: HEAD_ROWS,
+        }).data
+        const otherFound = locateHeader(otherHead, undefined, layout)
+        if (otherFound.score > found.score) {
+          delimiter = other
+          head = otherHead
+          found = otherFound
+        }
+      }
+    }
+  }
   const headerIndex = found.headerIndex
   // Header names are shown in messages and reports: control characters escaped once, here.
   const headers = mergeUnbalancedHeaders(found.headers, delimiter, warnings).map((h) =>
     escapeControlCharacters(h.charCodeAt(0) === 0xfeff ? h.slice(1).trim() : h.trim()),
   )
   if (found.score <= 0 && Object.keys(mapping).length === 0) {
+    if (headerLine !== undefined)
+      throw new WeatherInputError(
+        `the header on line ${headerLine} ('${snippet(headers.slice(0, 8).join(delimiter), 120)}') names no column dryhours knows; ` +
+          'map the columns with --map timestamp=<column> --map dryBulb=<column> …',
+        ['header'],
+      )
     throw new WeatherInputError(
       `no header row with known column names in the first ${HEADER_SEARCH_ROWS} lines (first line: '${snippet(headers.slice(0, 8).join(delimiter), 120)}'); ` +
         'add a header row, name its line with --header-line <n>, or map columns with --map dryBulb=#2 --map timestamp=#1 …',

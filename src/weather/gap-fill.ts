@@ -6,6 +6,7 @@
  * clear-sky index of the nearest valid daytime neighbour (within the same limit), times the hour's
  * clear-sky irradiance (Haurwitz 1945). Every filled value is flagged and logged.
  */
+import { clearSkyGhiHaurwitzCosZenithWm2 as haurwitzClearSkyWm2 } from '../physics/irradiance.ts'
 import { sinGeometricSunAltitude } from '../physics/sun.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { HourGrid } from './quality.ts'
@@ -57,11 +58,6 @@ export function interpolateShortGaps(
 function lineOfSlot(grid: HourGrid, s: number): number | null {
   const row = grid.slotRow[s]
   return row >= 0 ? grid.lines[row] : null
-}
-
-/** Clear-sky global horizontal irradiance [W/m²] for cos(zenith) `mu`: Haurwitz (1945), G = 1098·μ·exp(−0.057/μ). */
-export function haurwitzClearSkyWm2(mu: number): number {
-  return mu > 0 ? 1098 * mu * Math.exp(-0.057 / mu) : 0
 }
 
 /** Sine of the sun altitude at the start, middle and end of each hour, as the mean clear-sky irradiance over the hour uses. */

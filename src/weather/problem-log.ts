@@ -44,10 +44,13 @@ export const DEFAULT_PROBLEM_LIMIT = 5000
 export class ProblemLog {
   readonly problems: WeatherProblem[] = []
   readonly counts: Partial<Record<ProblemKind, number>> = {}
+  /** First whole-row problem (variable null) of each line, uncapped: why a rejected row was rejected. */
+  readonly rowKinds = new Map<number, ProblemKind>()
   omitted = 0
   constructor(readonly limit = DEFAULT_PROBLEM_LIMIT) {}
   add(line: number | null, variable: string | null, kind: ProblemKind, message: string): void {
     this.counts[kind] = (this.counts[kind] ?? 0) + 1
+    if (variable === null && line !== null && !this.rowKinds.has(line)) this.rowKinds.set(line, kind)
     if (this.problems.length < this.limit) this.problems.push({ line, variable, kind, message })
     else this.omitted++
   }

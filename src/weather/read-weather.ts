@@ -208,7 +208,7 @@ function readOwnExport(
 function describeCsv(result: WeatherReadResult, info: DelimitedInfo, dialect: string | undefined): void {
   const name = info.delimiter === '\t' ? 'tab' : info.delimiter === ';' ? 'semicolon' : 'comma'
   result.warnings.unshift(
-    `${dialect ? `${dialect}: ` : ''}${name}-separated, header on line ${info.headerLine}${info.decimalComma ? ', decimal commas' : ''}`,
+    `${dialect ? `${dialect}: ` : ''}${name}-separated, ${info.headerLine > 0 ? `header on line ${info.headerLine}` : 'no header row'}${info.decimalComma ? ', decimal commas' : ''}`,
   )
 }
 

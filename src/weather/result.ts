@@ -56,6 +56,12 @@ export interface HourlyAggregation {
   rule: string
 }
 
+/** A row of the file that was not used, with its line and the kind of problem that rejected it. */
+export interface RejectedRow {
+  line: number
+  kind: ProblemKind
+}
+
 export interface MonthCoverage {
   year: number
   month: number
@@ -69,6 +75,8 @@ export interface WeatherReadResult {
   /** The known layout the file was read as (e.g. `{ id: 'open-meteo', title: 'Open-Meteo hourly CSV' }`), when one recognised it. */
   dialect?: { id: string; title: string }
   rows: RowCounts
+  /** Every rejected row (uncapped, in file order), so each can be found in the file. */
+  rejectedRows: RejectedRow[]
   columns: ColumnReport[]
   /** First problems (capped), each with its line; `problemCounts` counts all. */
   problems: WeatherProblem[]

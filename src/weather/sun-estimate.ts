@@ -16,9 +16,11 @@
  * are needed for any of it.
  */
 import { dayOfYearAt, extraterrestrialRadiationDailyMjM2 } from '../physics/fao56-solar.ts'
-import { clearSkyRadiationFao56 } from '../physics/irradiance.ts'
+import {
+  clearSkyRadiationFao56,
+  clearSkyGhiHaurwitzCosZenithWm2 as haurwitzClearSkyWm2,
+} from '../physics/irradiance.ts'
 import { sinGeometricSunAltitude } from '../physics/sun.ts'
-import { haurwitzClearSkyWm2 } from './gap-fill.ts'
 import { type HourlySeries, QualityFlag } from './series.ts'
 
 const MS_PER_HOUR = 3_600_000

@@ -241,7 +241,10 @@ export function resolveRowTimes(
   if (anyOffsetInText && !anyWithoutOffset) {
     // offsets in the text
   } else if (fixedOffsetMs !== null)
-    description = `local standard time, UTC${formatOffset(input.fixedOffsetHours!)} (no daylight saving)`
+    description =
+      input.fixedOffsetHours === 0
+        ? 'UTC'
+        : `local standard time, UTC${formatOffset(input.fixedOffsetHours!)} (no daylight saving)`
   else if (input.zone !== null)
     description = `local time in ${input.zone} (daylight saving applied by the zone's rules)`
   else if (input.headerSaysUtc) {

@@ -5,6 +5,7 @@
  * a RangeError naming the form field, the value and what is accepted.
  */
 import type { AssessOptions } from '../analysis/assess.ts'
+import { ASSESS_RANGES } from '../analysis/plan.ts'
 import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../drying/method.ts'
 import { productById } from '../product/catalogue.ts'
 import type { ProductProfile } from '../product/profile.ts'
@@ -17,8 +18,8 @@ import {
   weatherOptionsFromTexts,
 } from '../weather/option-spec.ts'
 
-/** Most weather files one comparison takes. */
-export const MAX_SITES = 6
+/** Most weather files one comparison takes, unless the server says otherwise (the API's `maxSites`). */
+export const MAX_SITES = 8
 
 /** The drying methods the form offers: every method of the registry (drying/methods/). */
 export const METHOD_KINDS = DRYING_METHOD_KINDS
@@ -88,8 +89,15 @@ async function fileParts(form: FormData, name: string): Promise<WeatherFile[]> {
   return out
 }
 
-/** Parse the page form. `demoIds` are the demo file names the server can supply (none on a bare app). */
-export async function parseForm(form: FormData, demoIds: readonly string[] = []): Promise<FormInput> {
+/**
+ * Parse the page form. `demoIds` are the demo file names the server can supply (none on a bare app);
+ * `maxSites` is the server's limit of files per comparison.
+ */
+export async function parseForm(
+  form: FormData,
+  demoIds: readonly string[] = [],
+  maxSites = MAX_SITES,
+): Promise<FormInput> {
   const files = await fileParts(form, 'file')
   const demoRaw = text(form, 'demo')
   const demo = demoRaw && demoIds.includes(demoRaw) ? demoRaw : null
@@ -100,9 +108,9 @@ export async function parseForm(form: FormData, demoIds: readonly string[] = [])
   }
   if (files.length === 0 && !demo)
     throw new RangeError('file: choose a weather file (CSV or EPW) to upload, or a demo site')
-  if (files.length + (demo ? 1 : 0) > MAX_SITES) {
+  if (files.length + (demo ? 1 : 0) > maxSites) {
     throw new RangeError(
-      `file: at most ${MAX_SITES} weather files can be compared at once, got ${files.length + (demo ? 1 : 0)}`,
+      `file: at most ${maxSites} weather files can be compared at once, got ${files.length + (demo ? 1 : 0)}`,
     )
   }
 
@@ -167,15 +175,15 @@ export async function parseForm(form: FormData, demoIds: readonly string[] = [])
     if (fuel !== undefined) method.fuel = fuel
   }
   const assess: FormInput['assess'] = { method: method as AssessOptions['method'] }
-  const target = numberField(form, 'targetWbPct', 0.5, 90, '% wet basis')
+  const target = numberField(form, 'targetWbPct', ...ASSESS_RANGES.targetWbPct, '% wet basis')
   if (target !== undefined) assess.targetWbPct = target
-  const initial = numberField(form, 'initialWbPct', 1, 95, '% wet basis')
+  const initial = numberField(form, 'initialWbPct', ...ASSESS_RANGES.initialWbPct, '% wet basis')
   if (initial !== undefined) assess.initialWbPct = initial
   const seasonStart = monthDay(form, 'seasonStart')
   const seasonEnd = monthDay(form, 'seasonEnd')
   if (seasonStart !== undefined) assess.seasonStart = seasonStart
   if (seasonEnd !== undefined) assess.seasonEnd = seasonEnd
-  const deadline = numberField(form, 'deadlineDays', 0.25, 365, 'days')
+  const deadline = numberField(form, 'deadlineDays', ...ASSESS_RANGES.deadlineDays, 'days')
   if (deadline !== undefined) assess.deadlineDays = deadline
   if (fuel !== undefined) assess.fuel = fuel
   if (kind !== 'heated' && efficiency !== undefined)

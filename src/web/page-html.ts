@@ -5,6 +5,8 @@
  * downloads). Questions about the file (time zone, site, column mapping) sit in a section that opens
  * when the reader needs them. Every value echoed back into the form is escaped.
  */
+
+import { ASSESS_DEFAULTS } from '../analysis/plan.ts'
 import { FUELS } from '../drying/fuels.ts'
 import { FUEL_IDS } from '../drying/method.ts'
 import { METHOD_MODELS } from '../drying/methods/index.ts'
@@ -17,6 +19,8 @@ import { MAX_SITES } from './form-input.ts'
 
 export interface PageState {
   demo?: readonly DemoFile[]
+  /** The server's limit of files per comparison (default {@link MAX_SITES}). */
+  maxSites?: number
   /** Form values to show again (after an error or with a result). */
   values?: Record<string, string>
   /** A message for the user, and whether the file questions should be open. */
@@ -170,7 +174,7 @@ ${state.result ? `<div id="result-first" class="result">${state.result}<p class=
 <form id="assess-form" class="card" method="post" action="/report" enctype="multipart/form-data" novalidate>
 ${state.error ? `<div class="error" id="form-error" role="alert"><strong>Please check:</strong> ${escapeHtml(state.error.message)}<br><small>Browsers do not keep a chosen file across pages: choose the weather file again before you assess.</small></div>` : '<div class="error" id="form-error" role="alert" hidden></div>'}
 <fieldset class="step"><legend><span class="n">1</span> Weather</legend>
-<div class="field"><label for="f-file">Hourly weather file (CSV or EPW)</label><input id="f-file" name="file" type="file" accept=".csv,.txt,.tsv,.epw,text/csv,text/plain" multiple aria-describedby="f-file-hint"><small id="f-file-hint">One file for a report; up to ${MAX_SITES} files to compare sites. Dry bulb and a humidity column at least; time stamps hourly.</small></div>
+<div class="field"><label for="f-file">Hourly weather file (CSV or EPW)</label><input id="f-file" name="file" type="file" accept=".csv,.txt,.tsv,.epw,text/csv,text/plain" multiple aria-describedby="f-file-hint"><small id="f-file-hint">One file for a report; up to ${state.maxSites ?? MAX_SITES} files to compare sites. Dry bulb and a humidity column at least; time stamps hourly.</small></div>
 ${demoBlock}
 <details id="file-questions" class="questions"${ask ? ' open' : ''}><summary>Site, time zone and columns${ask ? ' (needed for this file)' : ' (only if the file does not say)'}</summary>
 <div class="grid">
@@ -194,7 +198,7 @@ ${field('initialWbPct', 'Initial moisture [% wet basis]', v, { inputmode: 'decim
 <div class="grid">
 ${field('seasonStart', 'First start day (MM-DD)', v, { placeholder: '06-15', pattern: '\\d{2}-\\d{2}' })}
 ${field('seasonEnd', 'Last start day (MM-DD)', v, { placeholder: '09-15', pattern: '\\d{2}-\\d{2}' })}
-${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', placeholder: '14' })}
+${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', placeholder: String(ASSESS_DEFAULTS.deadlineDays) })}
 ${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade)', v, { inputmode: 'decimal', methods: 'open-air shade' })}
 ${field('collectorAreaM2PerTonne', 'Collector area [m² per tonne] (solar cabinet)', v, { inputmode: 'decimal', placeholder: '100', methods: 'solar-cabinet' })}
 ${field('setPointC', 'Air set point [°C] (heated; empty = just enough)', v, { inputmode: 'decimal', methods: 'heated' })}

@@ -6,6 +6,8 @@
 import { assess } from '../analysis/assess.ts'
 import type { Assessment } from '../analysis/assessment.ts'
 import { compare, rankAssessments } from '../analysis/compare.ts'
+import { AssessOptionError } from '../analysis/plan.ts'
+import { isRuntimeFault } from '../api/errors.ts'
 import {
   type ComparedSite,
   comparisonTable,
@@ -75,7 +77,19 @@ async function inputs(
   return out
 }
 
-export async function runForm(input: FormInput, demo?: DemoProvider): Promise<FormResult> {
+/** What the server adds to a form's work: its limits and its time budget. */
+export interface FormWorkHooks {
+  /** Called before the engine runs, with the hours of each series (the batch-hour limit). */
+  beforeAssess?: (seriesHours: number[]) => void
+  /** The engine's progress callback (the time budget and cancellation check). */
+  onProgress?: () => void
+}
+
+export async function runForm(
+  input: FormInput,
+  demo?: DemoProvider,
+  hooks: FormWorkHooks = {},
+): Promise<FormResult> {
   const sites: AssessedSite[] = []
   const files = await inputs(input, demo)
   const reads: { name: string; read: WeatherReadResult }[] = []
@@ -95,23 +109,31 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
           e.missing,
         )
       }
-      if (e instanceof RangeError) throw new RangeError(`${f.name}: ${e.message}`)
+      if (e instanceof RangeError && !isRuntimeFault(e)) throw new RangeError(`${f.name}: ${e.message}`)
       throw e
     }
     if (!read.series.site.name && files.length > 1) read.series.site.name = f.name.replace(/\.[^.]+$/, '')
     reads.push({ name: f.name, read })
   }
+  hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
   let assessments: Assessment[]
   let ranking: Ranking | undefined
   try {
     if (reads.length === 1) {
-      assessments = [assess(reads[0].read.series, { ...input.assess, product: input.product })]
+      assessments = [
+        assess(reads[0].read.series, {
+          ...input.assess,
+          product: input.product,
+          onProgress: hooks.onProgress,
+        }),
+      ]
     } else {
       const c = compare(
         reads.map((r) => r.read.series),
         {
           ...input.assess,
           product: input.product,
+          onProgress: hooks.onProgress,
           labels: reads.map((r) => r.read.series.site.name || r.name),
         },
       )
@@ -119,7 +141,8 @@ export async function runForm(input: FormInput, demo?: DemoProvider): Promise<Fo
       ranking = c
     }
   } catch (e) {
-    if (e instanceof RangeError)
+    // an option the planner refused keeps its class (it names the form field); engine faults pass as they are
+    if (e instanceof RangeError && !(e instanceof AssessOptionError) && !isRuntimeFault(e))
       throw new RangeError(`${reads.length === 1 ? `${reads[0].name}: ` : ''}${e.message}`)
     throw e
   }

@@ -34,3 +34,26 @@ describe('a short weather file', () => {
     expect(a.warnings.join(' ')).toMatch(/one year/)
   })
 })
+
+describe('a file with no week of data in any year', () => {
+  it('says the tables are empty and why, instead of "the file holds one year"', () => {
+    const lines = readFileSync('climate-demo/ardentine-upland-2021-2024-utc.csv', 'utf8').split('\n')
+    const first = lines.findIndex((l) => l.startsWith('2022-07-01T00'))
+    const text = [lines[0], ...lines.slice(first, first + 5 * 24)].join('\n')
+    const series = readWeather(text, {
+      latitudeDeg: 38.3,
+      longitudeDeg: -2.6,
+      elevationM: 1050,
+      utcOffsetHours: 1,
+    }).series
+    const a = assess(series, {
+      product: productById('apricot-halves'),
+      method: { kind: 'shade' },
+      seasonStart: '07-01',
+      seasonEnd: '07-02',
+    })
+    expect(a.coverage.years).toEqual([])
+    expect(a.warnings.join(' ')).toMatch(/no year holds 168 hours \(a week\) with dry bulb and humidity/)
+    expect(a.warnings.join(' ')).not.toMatch(/holds one year/)
+  })
+})

@@ -22,7 +22,7 @@ async function problem(res: Response, status: number) {
     errors?: { path: string; message: string }[]
   }
   expect(body.status).toBe(status)
-  expect(body.type).toMatch(/problems\/\d{3}$/)
+  expect(body.type).toMatch(/problems\/[a-z-]+$/)
   expect(body.title).toBeTruthy()
   return body
 }

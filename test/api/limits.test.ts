@@ -36,7 +36,8 @@ describe('request limits', () => {
       422,
     )
     expect(detail).toMatch(/batch-hours/)
-    expect(detail).toMatch(/startStepDays/)
+    // the levers by their names in this request (query form: stepDays, start, maxDays)
+    expect(detail).toMatch(/\(stepDays\)/)
   })
 
   it('more sites than maxSites is a 413', async () => {

@@ -10,7 +10,7 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import { createTimestampColumns, parseTimeOfDay, parseTimestampInto } from '../../src/weather/timestamps.ts'
 import { normalizeUnitToken } from '../../src/weather/units.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
-import { expectInspect, expectProblem, post } from './hostile-helpers.ts'
+import { COARSE_QUERY, expectInspect, expectProblem, post } from './hostile-helpers.ts'
 
 const PADDED_STAMP = `2021-07-01 00:00${' '.repeat(4000)}x`
 const PAREN_HEADER = Array.from({ length: 1000 }, () => '('.repeat(100)).join(',')
@@ -60,7 +60,34 @@ describe('the two inputs of the issue', () => {
   })
 })
 
+describe('the two inputs of the issue through POST /v1/assess', () => {
+  it('the header of "(" is refused with why; the padded stamp is one rejected row in a file too short to assess', async () => {
+    const p = await expectProblem(
+      await post(`${COARSE_QUERY}&utcOffset=0`, `${PAREN_HEADER}\n1,2,3\n`, 'text/csv'),
+      [400, 422],
+    )
+    expect(p.detail).toMatch(/no header row/)
+    const q = await expectProblem(
+      await post(
+        `${COARSE_QUERY}&utcOffset=0`,
+        `timestamp,temp_c,rh_pct\n${PADDED_STAMP},20,50\n${GOOD_ROWS.join('\n')}\n`,
+        'text/csv',
+      ),
+      [400, 422],
+    )
+    expect(q.detail).toMatch(/at least 24 hours, got 3/)
+  })
+})
+
 describe('more hostile shapes, each read in one pass', () => {
+  it('a title with commas above 100 lines of 1,000 semicolon cells of "(": every delimiter tried, no header, said so', () => {
+    const lines = Array.from({ length: 100 }, () =>
+      Array.from({ length: 1000 }, () => '('.repeat(100)).join(';'),
+    )
+    const text = `Title, a, b\n${lines.join('\n')}\n1;2;3\n`
+    expect(() => readWeather(text, { utcOffsetHours: 0 })).toThrow(/no header row with known column names/)
+  })
+
   it('a body whose lines hold no delimiter (each line searched to the end of the file before)', () => {
     const lines = Array.from({ length: 20_000 }, (_, h) => new Date(Date.UTC(2021, 0, 1, h)).toISOString())
     const text = `timestamp,temp_c,rh_pct\n${lines.join('\n')}\n`

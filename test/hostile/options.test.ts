@@ -28,20 +28,28 @@ describe('options JSON part', () => {
   })
 
   it.each([
-    ['an extra top-level field', { ...COARSE, colour: 'red' }, 'options'],
-    ['an extra weather field', { ...COARSE, weather: { lat: 5 } }, 'options.weather'],
+    ['an extra top-level field', { ...COARSE, colour: 'red' }, 'options.colour'],
+    ['an extra weather field', { ...COARSE, weather: { lat: 5 } }, 'options.weather.lat'],
     [
       'an extra method parameter (misspelt loading)',
       { ...COARSE, method: { kind: 'open-air', loadingKgPerm2: 5 } },
       'options.method.loadingKgPerm2',
     ],
-    ['an extra threshold', { ...COARSE, thresholds: { minProductTemp: 1 } }, 'options.thresholds'],
+    [
+      'an extra threshold',
+      { ...COARSE, thresholds: { minProductTemp: 1 } },
+      'options.thresholds.minProductTemp',
+    ],
     [
       'an extra backup-heater field',
       { ...COARSE, backupHeater: { efficiency: 0.9 } },
-      'options.backupHeater',
+      'options.backupHeater.efficiency',
     ],
-    ['an unknown fuel price', { ...COARSE, fuelPrices: { unobtainium: 1 } }, 'options.fuelPrices'],
+    [
+      'an unknown fuel price',
+      { ...COARSE, fuelPrices: { unobtainium: 1 } },
+      'options.fuelPrices.unobtainium',
+    ],
   ])('%s: 400 naming the field', async (_name, options, path) => {
     const p = await expectProblem(await assess(options), [400])
     expect(p.errors?.map((e) => e.path)).toContain(path)

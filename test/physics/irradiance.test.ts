@@ -11,6 +11,7 @@ import {
 } from '../../src/physics/fao56-solar.ts'
 import {
   clearnessIndex,
+  clearSkyGhiHaurwitzCosZenithWm2,
   clearSkyGhiHaurwitzWm2,
   clearSkyRadiationFao56,
   cosIncidenceAngle,
@@ -76,6 +77,12 @@ describe('Haurwitz clear-sky GHI', () => {
   for (const [alt, ghi] of cases) {
     it(`${alt}° → ${ghi.toFixed(3)} W/m²`, () => expect(clearSkyGhiHaurwitzWm2(alt)).toBeCloseTo(ghi, 6))
   }
+  it("the cosine-of-zenith form (the weather reader's gap filler and sun estimate) gives the same values", () => {
+    for (const [alt, ghi] of cases)
+      expect(clearSkyGhiHaurwitzCosZenithWm2(Math.sin((alt * Math.PI) / 180))).toBeCloseTo(ghi, 6)
+    expect(clearSkyGhiHaurwitzCosZenithWm2(0)).toBe(0)
+    expect(clearSkyGhiHaurwitzCosZenithWm2(-0.2)).toBe(0)
+  })
   it('0 at and below the horizon', () => {
     expect(clearSkyGhiHaurwitzWm2(0)).toBe(0)
     expect(clearSkyGhiHaurwitzWm2(-10)).toBe(0)

@@ -73,3 +73,18 @@ describe('ERA5-Land accumulations since 00 UTC', () => {
     expect(r.series.windMs[noon]).toBeCloseTo(2.5, 12) // √(1.5² + 2²) at an even hour
   })
 })
+
+describe('files without a header row', () => {
+  it("a Meteostat bulk file says it has no header row (not 'header on line 0')", () => {
+    // Meteostat bulk hourly rows: date,hour,temp,dwpt,rhum,prcp,snow,wdir,wspd,wpgt,pres,tsun,coco
+    const rows = Array.from(
+      { length: 24 },
+      (_, h) =>
+        `2023-07-10,${h},${(15 + (h % 12)).toFixed(1)},${(8 + (h % 5) / 2).toFixed(1)},,0.0,,200,${(5 + (h % 7)).toFixed(1)},,1015.0,,2`,
+    )
+    const r = readWeather(rows.join('\n'), { latitudeDeg: 51.8, longitudeDeg: 9.6, elevationM: 310 })
+    expect(r.dialect?.id).toBe('meteostat-bulk')
+    expect(r.warnings[0]).toMatch(/comma-separated, no header row/)
+    expect(r.warnings.join('\n')).not.toMatch(/header on line 0/)
+  })
+})

@@ -66,7 +66,7 @@ describe('dialect fixtures: committed files', () => {
         expect(e.maxAbsBias, `${f.file} ${v}`).toBeGreaterThanOrEqual(Math.abs(e.measured.bias))
       }
       for (const key of Object.keys(f.needs))
-        expect(['lat', 'lon', 'elevationM', 'utcOffsetHours', 'siteTz']).toContain(key)
+        expect(['lat', 'lon', 'elevationM', 'utcOffsetHours', 'siteTz', 'labels']).toContain(key)
       expect(f.exercises.length, f.file).toBeGreaterThan(0)
     }
   })

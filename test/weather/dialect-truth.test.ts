@@ -9,7 +9,8 @@ import { describe, expect, it } from 'vitest'
 import { dewPointFromVaporPressureC } from '../../src/physics/moist-air.ts'
 import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.ts'
 import { detectDialect, dialectHead } from '../../src/weather/dialects/index.ts'
-import { decodeWeatherBytes, readWeatherBytes } from '../../src/weather/read-weather.ts'
+import { hourlyExportCsv } from '../../src/weather/export.ts'
+import { decodeWeatherBytes, readWeather, readWeatherBytes } from '../../src/weather/read-weather.ts'
 import type { WeatherReadResult } from '../../src/weather/result.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 
@@ -40,35 +41,6 @@ interface Manifest {
   sites: Site[]
   fixtures: Fixture[]
 }
-
-/**
- * Checks that fail today because of work in another area, as `it.fails` (flip to `it` once fixed):
- * - iem-asos-hourly.csv: the fixture's data rows put lon/lat/elevation before `valid`, against its
- *   own header (test/fixtures/weather/dialects/gen: asos.py writes them after `valid`);
- * - wifi-station-export.csv rain: the last hour's last 5 minutes come after the last reading, and an
- *   hourly total needs the whole hour (src/weather/hourly-aggregate.ts), so 71 hours, not the manifest's 72;
- * - spreadsheet-es.csv and excel-units-row.csv label the END of each hour, which the files cannot say,
- *   and the manifest's `needs` do not give (test/fixtures/weather/dialects/gen).
- */
-const AWAITING: Record<string, string> = {
-  'iem-asos-hourly.csv': 'fixture column order',
-  'wifi-station-export.csv:rain_mm': 'the last hour of a running total is incomplete (71 hours)',
-}
-for (const file of ['spreadsheet-es.csv', 'excel-units-row.csv'])
-  for (const column of [
-    'dry_bulb_c',
-    'relative_humidity_pct',
-    'dew_point_c',
-    'pressure_kpa',
-    'wind_speed_ms',
-    'ghi_wm2',
-    'rain_mm',
-  ])
-    AWAITING[`${file}:${column}`] = 'labels are interval ends, not in the manifest needs'
-const check = (file: string, column?: string): typeof it =>
-  AWAITING[file] !== undefined || (column !== undefined && AWAITING[`${file}:${column}`] !== undefined)
-    ? (it.fails as unknown as typeof it)
-    : it
 
 const DWD_TU = 'dwd-produkt-tu-stunde.txt'
 
@@ -229,12 +201,9 @@ describe('every dialect fixture reads back as the weather it was made from', () 
         return
       }
 
-      check(f.file)(
-        `is recognised as ${dialect} and read with only ${JSON.stringify(f.needs)}${companion ? ` (after ${companion})` : ''}`,
-        () => {
-          expect(read().dialect?.id).toBe(dialect)
-        },
-      )
+      it(`is recognised as ${dialect} and read with only ${JSON.stringify(f.needs)}${companion ? ` (after ${companion})` : ''}`, () => {
+        expect(read().dialect?.id).toBe(dialect)
+      })
       if (companion !== null) {
         it(`alone, is refused with the advice to add the station's 'tu' product`, () => {
           expect(() => readWeatherBytes(new Uint8Array(own), optionsOf(f.needs))).toThrow(/"tu" product/)
@@ -244,20 +213,22 @@ describe('every dialect fixture reads back as the weather it was made from', () 
       for (const column of [...f.variables, ...(f.extraVariables ?? [])]) {
         const e = f.expect[column]
         if (e === undefined) continue
-        check(f.file, column)(
-          `${column}: bias within ±${e.maxAbsBias}, RMSE within ${e.maxRmse} over at least ${e.hours} hours`,
-          () => {
-            const skip = new Set((f.missingHours?.[column] ?? []).map((t) => Date.parse(t)))
-            const c = compare(read(), truth, column, skip)
-            expect(c.hours).toBeGreaterThanOrEqual(e.hours)
-            expect(Math.abs(c.bias)).toBeLessThanOrEqual(e.maxAbsBias)
-            expect(c.rmse).toBeLessThanOrEqual(e.maxRmse)
-          },
-        )
+        it(`${column}: bias within ±${e.maxAbsBias}, RMSE within ${e.maxRmse} over at least ${e.hours} hours`, () => {
+          const skip = new Set((f.missingHours?.[column] ?? []).map((t) => Date.parse(t)))
+          const c = compare(read(), truth, column, skip)
+          expect(c.hours).toBeGreaterThanOrEqual(e.hours)
+          expect(Math.abs(c.bias)).toBeLessThanOrEqual(e.maxAbsBias)
+          expect(c.rmse).toBeLessThanOrEqual(e.maxRmse)
+        })
       }
 
+      it('its hourly export reads back unchanged', () => {
+        const exported = hourlyExportCsv(read().series)
+        expect(hourlyExportCsv(readWeather(exported).series)).toBe(exported)
+      })
+
       for (const column of ['dry_bulb_c', 'ghi_wm2'].filter((c) => f.variables.includes(c))) {
-        check(f.file)(`${column}: the hour of the mean daily peak is within 1 h of the truth's`, () => {
+        it(`${column}: the hour of the mean daily peak is within 1 h of the truth's`, () => {
           const r = read()
           const starts = Array.from(r.series.startUtcMs)
           const mine = starts.map((_, s) => readValue(r, column, s))
@@ -270,4 +241,41 @@ describe('every dialect fixture reads back as the weather it was made from', () 
       }
     })
   }
+})
+
+describe('all DWD products of a station in one file', () => {
+  // The solar product is stamped off the hour (the UTC instant of a true-solar-time hour, e.g. 23:26);
+  // merged with the others it must not break their hours.
+  const products = ['tu', 'ff', 'p0', 'rr', 'st', 'n'].map((p) => `dwd-produkt-${p}-stunde.txt`)
+  const needs = optionsOf(manifest.fixtures.find((f) => f.file === DWD_TU)!.needs)
+  const read = (files: string[]) =>
+    readWeatherBytes(new Uint8Array(Buffer.concat(files.map((f) => readFileSync(join(DIR, f))))), needs)
+
+  it('give every variable as the tu file read with that product alone', () => {
+    const all = read(products)
+    expect(all.dialect?.id).toBe('dwd-hourly-tu+ff+p0+rr+st+n')
+    const pairs: [string, (r: WeatherReadResult) => Float64Array][] = [
+      ['ff', (r) => r.series.windMs],
+      ['p0', (r) => r.series.pressureKpa],
+      ['rr', (r) => r.series.rainMm],
+      ['st', (r) => r.series.ghiWm2],
+      ['tu', (r) => r.series.dryBulbC],
+      ['tu', (r) => r.series.relativeHumidityPct],
+    ]
+    for (const [product, column] of pairs) {
+      const pair = read(product === 'tu' ? [DWD_TU] : [DWD_TU, `dwd-produkt-${product}-stunde.txt`])
+      let compared = 0
+      for (let s = 0; s < pair.series.hours; s++) {
+        const k = all.series.startUtcMs.indexOf(pair.series.startUtcMs[s])
+        const a = column(pair)[s]
+        if (k < 0 || Number.isNaN(a)) continue
+        expect(
+          column(all)[k],
+          `${product} at ${new Date(pair.series.startUtcMs[s]).toISOString()}`,
+        ).toBeCloseTo(a, 9)
+        compared++
+      }
+      expect(compared, product).toBeGreaterThanOrEqual(160)
+    }
+  })
 })

@@ -37,6 +37,35 @@ describe('header search', () => {
     expect(r.series.dryBulbC[15]).toBe(24)
   })
 
+  it('a title line with commas above a semicolon table does not decide the delimiter', () => {
+    const semicolons = (h: number) => `${T(h).replace('.', ',')};${RH(h)}`
+    const stamp = (h: number) => new Date(Date.UTC(2022, 5, 1, h)).toISOString().slice(0, 16)
+    const table = Array.from({ length: 24 }, (_, h) => `${stamp(h)};${semicolons(h)}`)
+    const text = [
+      'Station export, shed 2, v1.3',
+      'Zeit (UTC);Temperatur (°C);rel. Feuchte (%)',
+      ...table,
+    ].join('\n')
+    const r = readWeather(text)
+    expect(r.warnings.some((w) => w.startsWith('semicolon-separated, header on line 2'))).toBe(true)
+    expect(r.series.dryBulbC[15]).toBe(24)
+    // a header named by its line gives its own delimiter, whatever the names
+    const unknown = ['Station export, shed 2, v1.3', 'stamp;probeA;probeB', ...table].join('\n')
+    expect(() => readWeather(unknown, { headerLine: 2 })).toThrow(
+      /line 2 \('stamp;probeA;probeB'\) names no column/,
+    )
+    const mapped = readWeather(unknown, {
+      headerLine: 2,
+      utcOffsetHours: 0,
+      mapping: {
+        timestamp: { column: 'stamp' },
+        dryBulb: { column: 'probeA', unit: 'C' },
+        relativeHumidity: { column: 'probeB', unit: '%' },
+      },
+    })
+    expect(mapped.series.dryBulbC[15]).toBe(24)
+  })
+
   it('a units row under the header gives the units (km/h read as km/h, not m/s)', () => {
     const text = [
       'Timestamp,Air temperature,Relative humidity,Wind speed',

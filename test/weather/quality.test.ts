@@ -1,8 +1,8 @@
 // Quality control and gap filling. Thresholds are the module's documented rules (most are
 // "common practice, no source"); the clear-sky model is Haurwitz (1945), G = 1098·μ·exp(−0.057/μ).
 import { describe, expect, it } from 'vitest'
+import { clearSkyGhiHaurwitzCosZenithWm2 as haurwitzClearSkyWm2 } from '../../src/physics/irradiance.ts'
 import { sinGeometricSunAltitude } from '../../src/physics/sun.ts'
-import { haurwitzClearSkyWm2 } from '../../src/weather/gap-fill.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
 import { QualityFlag } from '../../src/weather/series.ts'
 import { csv, hourStamps } from './csv-builder.ts'

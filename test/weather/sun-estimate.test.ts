@@ -165,11 +165,31 @@ describe('through the engine', () => {
       const b = estimated.monthly[m].usableHours.median!
       expect(Math.abs(b - a) / a, `month ${m + 1}`).toBeLessThan(0.05)
     }
+    // the estimate is said among the warnings (CLI text, report, API), not only in the assumptions
+    expect(estimated.warnings.join(' ')).toMatch(
+      /the sun in \d+ daylight hours is estimated from the daily temperature range, not measured/,
+    )
+    expect(estimated.coverage.estimatedIrradianceHours).toBeGreaterThan(0)
+    expect(measured.warnings.join(' ')).not.toMatch(/is estimated/)
   })
 
   it('without the site position nothing allows an estimate: open air is refused, shade is assessed', () => {
     const series = readWeather(text, { mapping: { ghi: { column: 'none' } } }).series
     expect(() => assess(series, options)).toThrow(/the open-air method needs the sun.*--lat and --lon/)
     expect(() => assess(series, { ...options, method: { kind: 'shade' as const } })).not.toThrow()
+  })
+
+  it('with the position but no cloud cover and no whole day of temperatures, the refusal names what is missing', () => {
+    // daytime rows only (06–19 UTC): no day has the 24 hours the temperature range needs
+    const lines = text.split('\n')
+    const daytime = lines.filter((l, i) => i === 0 || (l.slice(11, 13) >= '06' && l.slice(11, 13) < '20'))
+    const series = readWeather(daytime.slice(0, 1 + 14 * 60).join('\n'), {
+      ...site,
+      mapping: { ghi: { column: 'none' } },
+    }).series
+    const refusal = () => assess(series, { ...options, seasonStart: '01-01', seasonEnd: '01-31' })
+    expect(refusal).toThrow(/the open-air method needs the sun/)
+    expect(refusal).toThrow(/neither cloud cover nor whole days of temperatures/)
+    expect(refusal).not.toThrow(/--lat and --lon/)
   })
 })

@@ -25,6 +25,8 @@ describe("the site's clock is not the timestamps' basis", () => {
     expect(r.series.site.utcOffsetHours).toBe(-8)
     expect(r.series.site.utcOffsetSource).toBe('longitude')
     expect(r.warnings.join(' ')).toMatch(/from the longitude -120°.*--site-tz/)
+    // the stamps are UTC, not "local standard time, UTC+00:00"
+    expect(r.timeBasis).toMatch(/^UTC; timestamps label the start/)
     // batches start at 08:00 site time = 16:00 UTC, not at 08:00 UTC (midnight at the site)
     const a = assess(r.series, {
       product: productById('grapes-to-raisins'),
@@ -152,6 +154,19 @@ describe('honest ends', () => {
     )
     expect(r.series.pressureKpa[0]).toBeCloseTo(84.556, 2) // standard atmosphere at 1500 m (ASHRAE HOF 2017 ch. 1 eq 3)
     expect(r.warnings.join(' ')).toMatch(/far from the standard atmosphere/)
+  })
+
+  it('the constant is written as the file gives it (896 hPa is 89.6 kPa)', () => {
+    const stamps = hourStamps('2021-07-01T00:00Z', 48)
+    const r = readWeather(
+      csv(
+        ['time', 'temp_c', 'rh_pct', 'pressure (hPa)'],
+        stamps.map((t, i) => [t, wavy(i), 40 + (i % 9), 896]),
+      ),
+      { utcOffsetHours: 0 },
+    )
+    expect(r.notes.join(' ')).toMatch(/pressure is 89\.6 kPa in every hour/)
+    expect(r.warnings.join(' ')).toMatch(/the same 89\.6 kPa in every hour/)
   })
 
   it('RH at 96 % for 20 hours of rain is not a stuck sensor; 60 % for 20 hours is', () => {

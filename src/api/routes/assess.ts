@@ -5,20 +5,20 @@
  */
 import { type Context, Hono } from 'hono'
 import { z } from 'zod'
-import { type AssessOptions, assess } from '../../analysis/assess.ts'
+import { assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
 import { compare } from '../../analysis/compare.ts'
-import { estimateBatchHours } from '../../analysis/plan.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
 import { type OptionSurface, renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
-import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
+import { isRuntimeFault, rethrowAsProblem } from '../errors.ts'
 import { exampleWeatherCsv } from '../example-weather.ts'
+import { checkBatchHours } from '../limits.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import {
@@ -31,8 +31,9 @@ import {
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
+import { workControl } from '../work.ts'
 
-const outputQuerySchema = z.object({
+const outputQuerySchema = z.strictObject({
   format: z.enum(['json', 'csv', 'html']).optional(),
   units: z.enum(['si', 'us']).optional(),
   table: z.string().optional(),
@@ -54,6 +55,7 @@ async function parseRequest(c: Context): Promise<Parsed> {
   return { request: fromQuery, output: fromQuery.query, files: upload.files }
 }
 
+/** Decode one weather file within the row and column limits and read it; problems name the file. */
 export function readSite(file: UploadedFile, request: AssessRequest, config: ApiConfig): WeatherReadResult {
   const text = checkedUploadText(file, config)
   try {
@@ -62,54 +64,22 @@ export function readSite(file: UploadedFile, request: AssessRequest, config: Api
     return result
   } catch (e) {
     if (e instanceof WeatherInputError) throw weatherInputProblem(e, request.surface, file.name)
-    throw e
+    rethrowAsProblem(e, { filePrefix: file.name })
   }
 }
 
-class TimeBudgetExceeded extends Error {}
-
-function checkWork(options: AssessOptions, seriesList: HourlySeries[], config: ApiConfig): void {
-  // the engine's own planner (analysis/plan.ts): the same defaults the assessment will use
-  const work = runEngine(
-    () =>
-      estimateBatchHours(
-        options,
-        seriesList.map((s) => s.hours),
-      ),
-    config,
-  )
-  if (work > config.maxBatchHours) {
-    throw new ApiProblem(
-      422,
-      `this request would simulate about ${(work / 1e6).toFixed(1)} million batch-hours (start dates × years × maximum batch length), more than the limit of ${(config.maxBatchHours / 1e6).toFixed(1)} million: use a larger start-date step (startStepDays), a shorter season or maxDays, fewer years per file, or fewer sites per request`,
-      [{ path: 'options', message: 'too much work for one request' }],
-    )
-  }
-}
-
-/** Run the engine; RangeError → 422; the wall-clock budget (when the entry point gives a clock) → 422. */
-function runEngine<T>(fn: (onProgress?: () => void) => T, config?: ApiConfig, surface?: OptionSurface): T {
-  const now = config?.now
-  const budget = config?.timeBudgetMs ?? 0
-  const started = now ? now() : 0
-  const onProgress =
-    now && budget > 0
-      ? () => {
-          if (now() - started > budget) throw new TimeBudgetExceeded()
-        }
-      : undefined
+/**
+ * Run the engine; its errors become problems: options named by their field path in this request, the
+ * engine's option names in messages renamed for the request's surface, engine faults never quoted.
+ */
+function runEngine<T>(fn: () => T, request: AssessRequest): T {
   try {
-    return fn(onProgress)
+    return fn()
   } catch (e) {
-    if (e instanceof RangeError)
-      throw new ApiProblem(422, surface ? renderOptionNames(e.message, surface) : e.message)
-    if (e instanceof TimeBudgetExceeded) {
-      throw new ApiProblem(
-        422,
-        `the assessment took longer than this server's budget of ${budget / 1000} s; use a larger start-date step, a shorter season or fewer years per file`,
-      )
+    if (e instanceof RangeError && !isRuntimeFault(e)) {
+      e.message = renderOptionNames(e.message, request.surface)
     }
-    throw e
+    rethrowAsProblem(e, { optionPath: request.optionPath })
   }
 }
 
@@ -120,8 +90,19 @@ function csvResponse(c: Context, text: string): Response {
   })
 }
 
+function csvTables(render: () => string): string {
+  try {
+    return render()
+  } catch (e) {
+    if (e instanceof RangeError && !isRuntimeFault(e))
+      throw new ApiProblem(400, e.message, [{ path: 'table', message: e.message }])
+    rethrowAsProblem(e)
+  }
+}
+
 export function assessRouter(config: ApiConfig): Hono {
   return new Hono().post('/', async (c) => {
+    const work = workControl(c, config)
     const { request, output, files } = await parseRequest(c)
     if (files.length !== 1) {
       throw new ApiProblem(
@@ -130,17 +111,16 @@ export function assessRouter(config: ApiConfig): Hono {
         [{ path: 'file', message: 'one file part expected' }],
       )
     }
+    work.checkpoint()
     const read = readSite(files[0], request, config)
-    checkWork(request.options, [read.series], config)
+    work.checkpoint()
+    checkBatchHours(request.options, [read.series.hours], config, request.optionPath)
     // the engine's messages name options as CLI flags: renamed for this request's surface
     const assessment: Assessment = renderAssessmentWarnings(
-      runEngine(
-        (onProgress) => assess(read.series, { ...request.options, onProgress }),
-        config,
-        request.surface,
-      ),
+      runEngine(() => assess(read.series, { ...request.options, onProgress: work.checkpoint }), request),
       request.surface,
     )
+    work.checkpoint()
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (output.format === 'html') {
       return c.html(renderReportHtml(assessment, { units: output.units, info }))
@@ -148,7 +128,13 @@ export function assessRouter(config: ApiConfig): Hono {
     if (output.format === 'csv') {
       return csvResponse(
         c,
-        runEngine(() => renderReportCsv(assessment, { units: output.units, info, table: output.table })),
+        csvTables(() =>
+          renderReportCsv(assessment, {
+            units: output.units,
+            info,
+            table: output.table,
+          }),
+        ),
       )
     }
     return c.json(assessment)
@@ -162,6 +148,7 @@ function renderAssessmentWarnings(a: Assessment, surface: OptionSurface): Assess
 
 export function compareRouter(config: ApiConfig): Hono {
   return new Hono().post('/', async (c) => {
+    const work = workControl(c, config)
     const { request, output, files } = await parseRequest(c)
     if (files.length < 2) {
       throw new ApiProblem(
@@ -174,22 +161,38 @@ export function compareRouter(config: ApiConfig): Hono {
       throw new ApiProblem(
         413,
         `at most ${config.maxSites} sites per comparison, got ${files.length}; compare them in groups`,
+        [{ path: 'site', message: `more than ${config.maxSites} files` }],
       )
     }
-    const reads = files.map((f) => readSite(f, request, config))
-    checkWork(
+    if (output.format === 'csv') {
+      throw new ApiProblem(400, 'format=csv is offered per site: call /v1/assess for each file', [
+        { path: 'format', message: 'csv not offered for comparisons' },
+      ])
+    }
+    const reads = files.map((f) => {
+      work.checkpoint()
+      return readSite(f, request, config)
+    })
+    checkBatchHours(
       request.options,
-      reads.map((r) => r.series),
+      reads.map((r) => r.series.hours),
       config,
+      request.optionPath,
     )
     const comparison = runEngine(
-      (onProgress) =>
+      () =>
         compare(
           reads.map((r) => r.series),
-          { ...request.options, onProgress, criterion: request.criterion, labels: files.map((f) => f.name) },
+          {
+            ...request.options,
+            onProgress: work.checkpoint,
+            criterion: request.criterion,
+            labels: files.map((f) => f.name),
+          },
         ),
-      config,
+      request,
     )
+    work.checkpoint()
     if (output.format === 'html') {
       return c.html(
         renderComparisonHtml(
@@ -200,11 +203,6 @@ export function compareRouter(config: ApiConfig): Hono {
           { units: output.units, ranking: comparison },
         ),
       )
-    }
-    if (output.format === 'csv') {
-      throw new ApiProblem(400, 'format=csv is offered per site: call /v1/assess for each file', [
-        { path: 'format', message: 'csv not offered for comparisons' },
-      ])
     }
     return c.json({
       ...comparison,

@@ -1,10 +1,32 @@
 import { Hono } from 'hono'
 import { escapeHtml } from '../../report/escape.ts'
+import { type ApiConfig, limitsTable } from '../config.ts'
 import { buildOpenApiDocument } from '../openapi.ts'
 import { listOperations } from '../operations.ts'
+import { PROBLEM_TYPE_BASE, PROBLEM_TYPES } from '../problem.ts'
 
-function docsPage(): string {
-  const doc = buildOpenApiDocument() as {
+/** The limits in force and the problem types, as two tables of the docs page. */
+function limitsAndProblems(config: ApiConfig): string {
+  const limits = limitsTable(config)
+    .map(
+      (l) =>
+        `<tr><td><code>${escapeHtml(l.variable)}</code></td><td>${l.value.toLocaleString('en')} ${escapeHtml(l.unit)}</td><td>${escapeHtml(l.answer)}</td><td>${escapeHtml(l.applies)}</td></tr>`,
+    )
+    .join('')
+  const problems = Object.entries(PROBLEM_TYPES)
+    .map(
+      ([kind, t]) =>
+        `<tr id="problem-${kind}"><td><code>${escapeHtml(PROBLEM_TYPE_BASE + kind)}</code></td><td>${t.status}</td><td>${escapeHtml(t.description)}</td></tr>`,
+    )
+    .join('')
+  return `<section id="limits"><h2>Limits of this server</h2>
+<table><thead><tr><th>setting</th><th>value</th><th>answer above it</th><th>applies to</th></tr></thead><tbody>${limits}</tbody></table></section>
+<section id="problems"><h2>Problem types</h2><p>Every error answer is <code>application/problem+json</code> with one of these <code>type</code>s; branch on the type, not on the wording of <code>detail</code>.</p>
+<table><thead><tr><th>type</th><th>status</th><th>meaning</th></tr></thead><tbody>${problems}</tbody></table></section>`
+}
+
+function docsPage(config: ApiConfig): string {
+  const doc = buildOpenApiDocument(config) as {
     paths: Record<
       string,
       Record<string, { parameters?: { name: string; description: string; required: boolean }[] }>
@@ -44,8 +66,9 @@ h2{border-top:2px solid #2b4c7e;padding-top:.6rem;font-size:1.15rem}.m{color:#ff
 table{border-collapse:collapse;margin:.5rem 0}td,th{border-bottom:1px solid #ccc;padding:.2rem .6rem;text-align:left;vertical-align:top}
 </style></head><body><h1>dryhours API</h1>
 <p>Every field states its unit; SI throughout. Errors are <code>application/problem+json</code> (RFC 9457). The machine-readable description is at <a href="/openapi.json">/openapi.json</a>.</p>
-${sections}</body></html>`
+${sections}
+${limitsAndProblems(config)}</body></html>`
 }
 
 /** GET /docs: a readable page of the API, generated from the same operations as /openapi.json. */
-export const docsRouter = new Hono().get('/', (c) => c.html(docsPage()))
+export const docsRouter = (config: ApiConfig) => new Hono().get('/', (c) => c.html(docsPage(config)))

@@ -15,15 +15,17 @@ import { productById } from '../../product/catalogue.ts'
 import { ENERGY_TABLE_IDS, renderEnergyCsv } from '../../report/energy/energy-csv.ts'
 import { renderEnergyHtml } from '../../report/energy/energy-html.ts'
 import { renderOptionNames } from '../../weather/option-spec.ts'
-import { readWeatherBytes } from '../../weather/read-weather.ts'
-import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import { readWeather } from '../../weather/read-weather.ts'
+import { charsetOf, checkedCharset } from '../body.ts'
 import type { ApiConfig } from '../config.ts'
+import { isRuntimeFault, problemFor, rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem, type ProblemField } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
-import { checkedUploadText, decodeUploadText, readUpload } from '../upload.ts'
+import { checkedUploadText, parseOptionsJson, queryParams, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
+import { workControl } from '../work.ts'
 
 /** Options of the request (query string, or the `options` part with the same keys as strings or numbers). */
 export const energyChartQuerySchema = z.strictObject({
@@ -33,14 +35,18 @@ export const energyChartQuerySchema = z.strictObject({
   fuel: z.enum(FUEL_IDS).describe('fuel of rows with fuel_amount but no fuel column').optional(),
   dryingTempC: numberParam('drying-air temperature [°C] for the latent heat, default 60').optional(),
   utcOffsetHours: numberParam(
-    "offset of the log's local times from UTC [h]; also the weather file's when utcOffset and tz are not given",
-  ).optional(),
+    "offset of the log's local times from UTC [h], -12 to 14; also the weather file's when utcOffset and tz are not given",
+  )
+    .pipe(z.number().min(-12).max(14))
+    .optional(),
   timeZone: z
     .string()
     .min(1)
     .describe("IANA time zone of the weather file's time stamps (older name of tz)")
     .optional(),
-  elevationM: numberParam('site elevation [m] for the air pressure').optional(),
+  elevationM: numberParam('site elevation [m] for the air pressure, -500 to 9000')
+    .pipe(z.number().min(-500).max(9000))
+    .optional(),
   ...weatherQueryFields,
   product: z
     .string()
@@ -59,67 +65,77 @@ function asQueryStrings(options: unknown): Record<string, string> {
       { path: 'options', message: 'not an object' },
     ])
   }
-  const out: Record<string, string> = {}
+  const out: Record<string, string> = Object.create(null)
   for (const [k, v] of Object.entries(options)) out[k] = typeof v === 'string' ? v : JSON.stringify(v)
   return out
 }
 
 interface EnergyUpload {
-  log: Uint8Array
-  logName: string
-  weather?: Uint8Array
+  log: UploadedFile
+  weather?: UploadedFile
   options: Record<string, string>
 }
 
 async function readEnergyUpload(c: Parameters<typeof readUpload>[0]): Promise<EnergyUpload> {
   const type = (c.req.header('content-type') ?? '').split(';')[0].trim().toLowerCase()
-  const query: Record<string, string> = {}
-  for (const [k, v] of new URL(c.req.url).searchParams) query[k] = v
+  const query = queryParams(c.req.url)
   if (type !== 'multipart/form-data') {
     const upload = await readUpload(c, { defaultName: 'batch-log.csv' }) // raw body, or 415
-    return { log: upload.files[0].bytes, logName: upload.files[0].name, options: query }
+    return { log: { ...upload.files[0], field: 'log' }, options: query }
   }
   let form: FormData
   try {
     form = await c.req.formData()
   } catch {
-    throw new ApiProblem(400, 'the multipart body could not be parsed (check the boundary and the parts)')
+    throw new ApiProblem(
+      400,
+      'the multipart body could not be parsed (check the boundary and the parts)',
+      undefined,
+      'unreadable-body',
+    )
   }
-  const bytesOf = async (v: FormDataEntryValue) =>
-    typeof v === 'string' ? new TextEncoder().encode(v) : new Uint8Array(await v.arrayBuffer())
+  const fileOf = async (v: FormDataEntryValue, field: string, name: string): Promise<UploadedFile> =>
+    typeof v === 'string'
+      ? { name, field, bytes: new TextEncoder().encode(v), charset: 'utf-8' }
+      : {
+          name: v.name || name,
+          field,
+          bytes: new Uint8Array(await v.arrayBuffer()),
+          charset: checkedCharset(charsetOf(v.type), field),
+        }
   const log = form.get('log')
   if (log === null) {
     throw new ApiProblem(400, 'the multipart body needs a `log` part with the batch log CSV', [
       { path: 'log', message: 'missing' },
     ])
   }
-  const weather = form.get('weather')
-  const optionsPart = form.get('options')
-  let options: Record<string, string> = {}
-  if (optionsPart !== null) {
-    const text = typeof optionsPart === 'string' ? optionsPart : await optionsPart.text()
-    try {
-      options = asQueryStrings(JSON.parse(text))
-    } catch (e) {
-      if (e instanceof ApiProblem) throw e
-      throw new ApiProblem(400, `the options part is not valid JSON: ${(e as Error).message}`, [
-        { path: 'options', message: 'not valid JSON' },
+  for (const field of new Set(form.keys())) {
+    if (!['log', 'weather', 'options'].includes(field)) {
+      throw new ApiProblem(400, `unknown part '${field.slice(0, 40)}': send log, weather and options`, [
+        { path: field.slice(0, 40), message: 'unknown part' },
       ])
     }
   }
+  const weather = form.get('weather')
+  const optionsPart = form.get('options')
+  let options: Record<string, string> = Object.create(null)
+  if (optionsPart !== null) {
+    const text = typeof optionsPart === 'string' ? optionsPart : await optionsPart.text()
+    options = asQueryStrings(parseOptionsJson(text))
+  }
+  const merged: Record<string, string> = Object.create(null)
+  Object.assign(merged, query)
+  for (const [k, v] of Object.entries(options)) merged[k] = v
   return {
-    log: await bytesOf(log),
-    logName: typeof log === 'string' ? 'batch-log.csv' : log.name || 'batch-log.csv',
-    weather: weather === null ? undefined : await bytesOf(weather),
-    options: { ...query, ...options },
+    log: await fileOf(log, 'log', 'batch-log.csv'),
+    weather: weather === null ? undefined : await fileOf(weather, 'weather', 'weather'),
+    options: merged,
   }
 }
 
-/** Cap on the rejected rows listed in a 422 answer (all are counted in the detail). */
-const MAX_LISTED_ROWS = 50
-
 export const energyRouter = (config: ApiConfig) =>
   new Hono().post('/', async (c) => {
+    const work = workControl(c, config)
     const upload = await readEnergyUpload(c)
     const q = parseOrProblem(energyChartQuerySchema, upload.options)
     const options: EnergyChartOptions = {
@@ -133,9 +149,11 @@ export const energyRouter = (config: ApiConfig) =>
       try {
         options.profile = productById(q.product)
       } catch (e) {
-        throw new ApiProblem(400, (e as Error).message, [{ path: 'product', message: (e as Error).message }])
+        throw new ApiProblem(400, (e as Error).message, [{ path: 'product', message: 'unknown product id' }])
       }
     }
+    // The log's row and column limits before it is parsed (without them 200,000 batches took 35 s).
+    const logText = checkedUploadText(upload.log, config, 'log')
     if (upload.weather) {
       // the weather options of every route (utcOffset, tz, siteTz, map, labels …); the log's offset and
       // the older names apply to the weather file when the new ones are not given
@@ -145,37 +163,54 @@ export const energyRouter = (config: ApiConfig) =>
         else if (q.timeZone !== undefined) w.timeZone = q.timeZone
       }
       if (w.elevationM === undefined && q.elevationM !== undefined) w.elevationM = q.elevationM
-      // Same row and column limits as the weather files of /v1/assess (the text is only checked here).
-      checkedUploadText({ name: 'weather', field: 'weather', bytes: upload.weather }, config)
+      // Same row and column limits as the weather files of /v1/assess.
+      const weatherText = checkedUploadText(upload.weather, config, 'weather')
+      work.checkpoint()
       try {
-        options.weather = readWeatherBytes(upload.weather, w).series
+        options.weather = readWeather(weatherText, w).series
       } catch (e) {
-        if (e instanceof WeatherInputError || e instanceof RangeError) {
-          const message = renderOptionNames(e.message, 'query')
-          throw new ApiProblem(422, `weather: ${message}`, [{ path: 'weather', message }])
-        }
-        throw e
+        const p = problemFor(e, { filePrefix: 'weather' })
+        if (p === null) throw e
+        // the reader names options as CLI flags: renamed as this request gives them
+        const message = renderOptionNames(p.message, 'query')
+        throw new ApiProblem(
+          p.status,
+          message,
+          p.errors ?? [{ path: 'weather', message: message.replace(/^weather: /, '') }],
+          p.type,
+        )
       }
     }
+    work.checkpoint()
     let assessment: ReturnType<typeof analyzeEnergyLog>
     try {
-      assessment = analyzeEnergyLog(decodeUploadText(upload.log), options)
+      assessment = analyzeEnergyLog(logText, options)
     } catch (e) {
       if (e instanceof BatchLogError) {
-        const errors: ProblemField[] = e.rejections
-          .slice(0, MAX_LISTED_ROWS)
-          .map((r) => ({ path: `line ${r.line}`, message: r.message }))
+        // Every rejected row with its line (the log is at most maxLogRows rows long).
+        const errors: ProblemField[] = e.rejections.map((r) => ({
+          path: `line ${r.line}`,
+          message: r.message,
+        }))
         throw new ApiProblem(
           422,
           `log: ${e.message}`,
           errors.length > 0 ? errors : [{ path: 'log', message: e.message }],
         )
       }
-      if (e instanceof RangeError)
-        throw new ApiProblem(400, e.message, [{ path: 'options', message: e.message }])
-      throw e
+      if (e instanceof RangeError && !isRuntimeFault(e)) {
+        // the option the engine names in its message, else the options as a whole
+        const path = /^baseline/.test(e.message)
+          ? 'baseline'
+          : /^drying temperature/.test(e.message)
+            ? 'dryingTempC'
+            : 'options'
+        throw new ApiProblem(400, `${path}: ${e.message}`, [{ path, message: e.message }])
+      }
+      rethrowAsProblem(e)
     }
-    if (q.format === 'html') return c.html(renderEnergyHtml(assessment, { logName: upload.logName }))
+    work.checkpoint()
+    if (q.format === 'html') return c.html(renderEnergyHtml(assessment, { logName: upload.log.name }))
     if (q.format === 'csv') {
       return c.body(renderEnergyCsv(assessment, q.table), 200, { 'content-type': 'text/csv; charset=utf-8' })
     }

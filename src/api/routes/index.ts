@@ -22,7 +22,7 @@ export interface MountedRoute {
 
 export function apiRoutes(_config: ApiConfig): MountedRoute[] {
   return [
-    { path: '/healthz', router: healthRouter },
+    { path: '/healthz', router: healthRouter(_config) },
     { path: '/v1/air', router: airRouter },
     { path: '/v1/energy-chart', router: energyRouter(_config) },
     { path: '/v1/inspect', router: inspectRouter(_config) },
@@ -30,9 +30,9 @@ export function apiRoutes(_config: ApiConfig): MountedRoute[] {
     { path: '/v1/assess', router: assessRouter(_config) },
     { path: '/v1/compare', router: compareRouter(_config) },
     { path: '/v1/equilibrium', router: equilibriumRouter },
-    { path: '/v1/fit', router: fitRouter },
-    { path: '/openapi.json', router: openApiRouter },
-    { path: '/docs', router: docsRouter },
+    { path: '/v1/fit', router: fitRouter(_config) },
+    { path: '/openapi.json', router: openApiRouter(_config) },
+    { path: '/docs', router: docsRouter(_config) },
     { path: '/', router: pageRouter(_config) },
   ]
 }

@@ -4,12 +4,13 @@
  */
 import { Hono } from 'hono'
 import { z } from 'zod'
-import { inspectJson } from '../../report/inspect-json.ts'
+import { inspectJson, rejectedRowsCsv } from '../../report/inspect-json.ts'
 import { hourlyExportCsv } from '../../weather/export.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
+import { rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { checkedUploadText, readUpload } from '../upload.ts'
@@ -22,19 +23,21 @@ import {
   weatherOptionsFromQuery,
   weatherQuerySchema,
 } from '../weather-options.ts'
+import { workControl } from '../work.ts'
 
 /** The query of POST /v1/inspect: the weather options and the answer's format. */
 export const inspectQuerySchema = weatherQuerySchema.extend({
   format: z
-    .enum(['json', 'csv'])
+    .enum(['json', 'csv', 'rejected'])
     .optional()
     .describe(
-      'json (default): what was understood of the file; csv: the hourly series the engine uses (UTC hour starts, SI, flags), as `dryhours inspect --export`',
+      'json (default): what was understood of the file; csv: the hourly series the engine uses (UTC hour starts, SI, flags), as `dryhours inspect --export`; rejected: every rejected row (line, kind, message) as a CSV download',
     ),
 })
 
 export const inspectRouter = (config: ApiConfig) =>
   new Hono().post('/', async (c) => {
+    const work = workControl(c, config)
     const upload = await readUpload(c, { defaultName: 'weather file' })
     const surface = surfaceOf(upload.options !== undefined)
     const query = parseOrProblem(inspectQuerySchema, upload.query)
@@ -49,12 +52,20 @@ export const inspectRouter = (config: ApiConfig) =>
       ])
     }
     const text = checkedUploadText(upload.files[0], config)
+    work.checkpoint()
     let result: WeatherReadResult
     try {
       result = readWeather(text, options)
     } catch (e) {
       if (e instanceof WeatherInputError) throw weatherInputProblem(e, surface)
-      throw e
+      rethrowAsProblem(e)
+    }
+    work.checkpoint()
+    if (format === 'rejected') {
+      return c.body(rejectedRowsCsv(renderReadingMessages(result, surface)), 200, {
+        'content-type': 'text/csv; charset=utf-8',
+        'content-disposition': 'attachment; filename="dryhours-rejected-rows.csv"',
+      })
     }
     if (format === 'csv')
       return c.body(hourlyExportCsv(result.series), 200, { 'content-type': 'text/csv; charset=utf-8' })
@@ -66,7 +77,7 @@ registerOperation({
   path: '/v1/inspect',
   summary: 'Inspect a weather file',
   description:
-    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected + superseded), how rows became hours and the first problems with line numbers. ' +
+    'What dryhours understood of a weather file (delimited text or EPW): format, site, period, time basis, columns with units, coverage per month, row counts (read = used + repaired + rejected + superseded), every rejected row with its line (`rejectedRows`; `format=rejected` downloads them as CSV), how rows became hours and the first problems with line numbers. ' +
     'Send the file as the body (text/csv, text/plain) with options in the query (the same options as the CLI flags: lat, lon, elevation, utcOffset | tz for the file, siteTz for the site, map, labels, dateOrder, headerLine, sampling, windHeight, siteName), or as multipart/form-data with a `file` part and an optional `options` JSON part (the reader keys: latitudeDeg, longitudeDeg, elevationM, utcOffsetHours | timeZone, siteTimeZone, mapping, labels, variableLabels, dateOrder, headerLine, sampling, windHeightM, siteName). Same object as `dryhours inspect --json`, with per variable the hours, mean, min and max in SI; `format=csv` answers with the hourly series the engine uses (as `dryhours inspect --export`).',
   query: inspectQuerySchema,
   requestBody: [

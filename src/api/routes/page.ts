@@ -7,6 +7,7 @@
  * as the page with the message (page, html) or as problem details (csv, json, bundle).
  */
 import { type Context, Hono } from 'hono'
+import { AssessOptionError, planAssessment } from '../../analysis/plan.ts'
 import { APP_JS } from '../../web/app-js.ts'
 import type { DemoProvider } from '../../web/demo-files.ts'
 import { type FormInput, parseForm } from '../../web/form-input.ts'
@@ -14,8 +15,11 @@ import { pageCss } from '../../web/page-css.ts'
 import { renderPage } from '../../web/page-html.ts'
 import { FormQuestion, runForm } from '../../web/run-form.ts'
 import type { ApiConfig } from '../config.ts'
+import { isRuntimeFault, problemFor } from '../errors.ts'
+import { checkBatchHours } from '../limits.ts'
 import { ApiProblem, problemBody } from '../problem.ts'
 import { checkedUploadText } from '../upload.ts'
+import { workControl } from '../work.ts'
 
 /** The page's configuration: the API config, plus demo files when the entry point can read them. */
 export type PageConfig = ApiConfig & { demo?: DemoProvider }
@@ -46,12 +50,17 @@ function wantsJson(format: string | null): boolean {
   return format === 'bundle' || format === 'csv' || format === 'json'
 }
 
+/** Page form fields of the engine's options (the form uses the engine's names where it has the field). */
+const formField = (option: string): string => option
+
 export function pageRouter(config: PageConfig): Hono {
   const demo = config.demo
   const demoList = () => demo?.list() ?? []
+  const page = (state: Parameters<typeof renderPage>[0] = {}) =>
+    renderPage({ demo: demoList(), maxSites: config.maxSites, ...state })
   const router = new Hono()
 
-  router.get('/', (c) => c.html(renderPage({ demo: demoList() })))
+  router.get('/', (c) => c.html(page()))
   router.get('/app.js', (c) =>
     c.body(APP_JS, 200, { 'content-type': 'text/javascript; charset=utf-8', 'cache-control': 'no-cache' }),
   )
@@ -60,13 +69,14 @@ export function pageRouter(config: PageConfig): Hono {
   )
 
   router.post('/report', async (c: Context) => {
+    const work = workControl(c, config)
     const type = (c.req.header('content-type') ?? '').split(';')[0].trim().toLowerCase()
     if (type !== 'multipart/form-data' && type !== 'application/x-www-form-urlencoded') {
       return c.body(
         JSON.stringify(
           problemBody(
             415,
-            `POST /report takes the page's form (multipart/form-data); got ${type || 'no content type'}. For the JSON API use POST /v1/assess.`,
+            `POST /report takes the page's form (multipart/form-data); got ${type.slice(0, 60) || 'no content type'}. For the JSON API use POST /v1/assess.`,
           ),
         ),
         415,
@@ -78,55 +88,87 @@ export function pageRouter(config: PageConfig): Hono {
       form = await c.req.formData()
     } catch {
       return c.body(
-        JSON.stringify(problemBody(400, 'the form body could not be read (check the multipart boundary)')),
+        JSON.stringify(
+          problemBody(
+            400,
+            'the form body could not be read (check the multipart boundary)',
+            undefined,
+            'unreadable-body',
+          ),
+        ),
         400,
-        {
-          'content-type': 'application/problem+json',
-        },
+        { 'content-type': 'application/problem+json' },
       )
     }
     const formatRaw = form.get('format')
     const format = typeof formatRaw === 'string' ? formatRaw : 'page'
     const values = echoValues(form)
-    const fail = (status: 400 | 413 | 422 | 500, message: string, ask: boolean) => {
+    const fail = (problem: ApiProblem, ask: boolean) => {
+      const { status, message } = problem
       if (wantsJson(format)) {
-        return c.body(JSON.stringify({ ...problemBody(status, message), askFileQuestions: ask }), status, {
-          'content-type': 'application/problem+json',
-          ...NO_STORE,
-        })
+        return c.body(
+          JSON.stringify({
+            ...problemBody(status, message, problem.errors, problem.type),
+            askFileQuestions: ask,
+          }),
+          status as 400,
+          { 'content-type': 'application/problem+json', ...NO_STORE },
+        )
       }
-      return c.html(
-        renderPage({ demo: demoList(), values, error: { message, askFileQuestions: ask } }),
-        status,
-      )
+      return c.html(page({ values, error: { message, askFileQuestions: ask } }), status as 400)
+    }
+    const failWith = (e: unknown, ask = false) => {
+      const problem = problemFor(e, { optionPath: formField })
+      if (problem === null) {
+        console.error(`dryhours: internal error on POST /report: ${(e as Error).message}`)
+        return fail(
+          new ApiProblem(503, 'internal error; the file was not assessed', undefined, 'internal'),
+          false,
+        )
+      }
+      return fail(problem, ask)
     }
     let input: FormInput
     try {
       input = await parseForm(
         form,
         demoList().map((d) => d.file),
+        config.maxSites,
       )
+      // The engine's planner checks the options before any file is read.
+      planAssessment({ ...input.assess, product: input.product })
     } catch (e) {
-      if (e instanceof RangeError) return fail(400, e.message, e.message.startsWith('file:'))
-      throw e
+      if (e instanceof RangeError && !isRuntimeFault(e) && !(e instanceof AssessOptionError)) {
+        const field = /^([A-Za-z]+):/.exec(e.message)?.[1]
+        return fail(
+          new ApiProblem(400, e.message, field ? [{ path: field, message: e.message }] : undefined),
+          e.message.startsWith('file:'),
+        )
+      }
+      return failWith(e)
     }
     // The same row and column limits as the API's weather files, before the reader runs.
     for (const f of input.files) {
       try {
         checkedUploadText({ name: f.name, field: 'file', bytes: f.bytes }, config)
       } catch (e) {
-        if (e instanceof ApiProblem && e.status === 413) return fail(413, e.message, false)
-        throw e
+        return failWith(e)
       }
     }
     let out: Awaited<ReturnType<typeof runForm>>
     try {
-      out = await runForm(input, demo)
+      out = await runForm(input, demo, {
+        // The same work limit and time budget as the API.
+        beforeAssess: (hours) => {
+          work.checkpoint()
+          checkBatchHours({ ...input.assess, product: input.product }, hours, config, formField)
+        },
+        onProgress: work.checkpoint,
+      })
+      work.checkpoint()
     } catch (e) {
-      if (e instanceof FormQuestion) return fail(422, e.message, true)
-      if (e instanceof RangeError) return fail(422, e.message, false)
-      console.error(`dryhours: internal error on POST /report: ${(e as Error).message}`)
-      return fail(500, 'internal error; the file was not assessed', false)
+      if (e instanceof FormQuestion) return fail(new ApiProblem(422, e.message), true)
+      return failWith(e)
     }
     const stem = downloadStem(out.title)
     switch (input.format) {
@@ -160,8 +202,7 @@ export function pageRouter(config: PageConfig): Hono {
         })
       default:
         return c.html(
-          renderPage({
-            demo: demoList(),
+          page({
             values,
             result: `<p class="hint no-print">To download this report, choose a file under “Answer as” and assess again.</p>${out.article}`,
           }),

@@ -12,11 +12,14 @@ import type { ProductProfile } from '../../product/profile.ts'
 import { type MoistureReference, parseWeighingsCsv } from '../../product/weighings.ts'
 import { fitJson } from '../../report/fit-json.ts'
 import { productSummaryJson } from '../../report/product-json.ts'
+import type { ApiConfig } from '../config.ts'
+import { rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
-import { decodeUploadText, readUpload } from '../upload.ts'
+import { checkedUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem, queryObject } from '../validate.ts'
+import { workControl } from '../work.ts'
 
 const productIdParam = z.string().describe('catalogue product id (kebab-case), see GET /v1/products')
 
@@ -95,32 +98,43 @@ export const equilibriumRouter = new Hono().get('/', (c) => {
   }
 })
 
-export const fitRouter = new Hono().post('/', async (c) => {
-  const upload = await readUpload(c, { defaultName: 'weighings.csv' })
-  const q = parseOrProblem(fitQuerySchema, upload.options ?? upload.query, upload.options ? 'options' : '')
-  if (upload.files.length !== 1) throw new ApiProblem(400, 'send exactly one weighings file')
-  const reference: MoistureReference =
-    q.dryMass !== undefined
-      ? { dryMassG: q.dryMass }
-      : q.initialWb !== undefined
-        ? { initialWbPct: q.initialWb }
-        : { finalWbPct: q.finalWb as number }
-  const base = q.product !== undefined ? productOr404(q.product) : undefined
-  try {
-    const weighings = parseWeighingsCsv(decodeUploadText(upload.files[0].bytes))
-    const fit = fitWeighings(weighings, {
-      reference,
-      thicknessMm: q.thickness,
-      shape: q.shape ?? base?.kinetics.shape ?? 'slab',
-      targetWbPct: q.targetWb,
-    })
-    const profile = base ? profileFromFit(fit, base, q.id ?? `${base.id}-calibrated`, q.targetWb) : null
-    return c.json({ ...fitJson(fit), profile })
-  } catch (e) {
-    if (e instanceof RangeError) throw new ApiProblem(422, e.message)
-    throw e
-  }
-})
+export const fitRouter = (config: ApiConfig) =>
+  new Hono().post('/', async (c) => {
+    const work = workControl(c, config)
+    const upload = await readUpload(c, { defaultName: 'weighings.csv' })
+    const q = parseOrProblem(fitQuerySchema, upload.options ?? upload.query, upload.options ? 'options' : '')
+    // with an options part, the query string must be empty: nothing given is silently ignored
+    if (upload.options !== undefined) parseOrProblem(z.strictObject({}), upload.query)
+    if (upload.files.length !== 1) {
+      throw new ApiProblem(400, `send exactly one weighings file, got ${upload.files.length}`, [
+        { path: 'file', message: 'one file part expected' },
+      ])
+    }
+    const reference: MoistureReference =
+      q.dryMass !== undefined
+        ? { dryMassG: q.dryMass }
+        : q.initialWb !== undefined
+          ? { initialWbPct: q.initialWb }
+          : { finalWbPct: q.finalWb as number }
+    const base = q.product !== undefined ? productOr404(q.product) : undefined
+    // Row and column limits before parsing (without them 130,000 weighings overflowed the stack).
+    const text = checkedUploadText(upload.files[0], config, 'weighings')
+    work.checkpoint()
+    try {
+      const weighings = parseWeighingsCsv(text)
+      work.checkpoint()
+      const fit = fitWeighings(weighings, {
+        reference,
+        thicknessMm: q.thickness,
+        shape: q.shape ?? base?.kinetics.shape ?? 'slab',
+        targetWbPct: q.targetWb,
+      })
+      const profile = base ? profileFromFit(fit, base, q.id ?? `${base.id}-calibrated`, q.targetWb) : null
+      return c.json({ ...fitJson(fit), profile })
+    } catch (e) {
+      rethrowAsProblem(e)
+    }
+  })
 
 registerOperation({
   method: 'get',

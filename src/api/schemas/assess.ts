@@ -7,6 +7,7 @@
 import { z } from 'zod'
 import type { AssessOptions, assess } from '../../analysis/assess.ts'
 import { COMPARE_CRITERIA, type CompareCriterion } from '../../analysis/compare.ts'
+import { ASSESS_DEFAULTS, planAssessment, ASSESS_RANGES as R } from '../../analysis/plan.ts'
 import {
   DRYING_METHOD_KINDS,
   dryingMethodSchema,
@@ -20,6 +21,7 @@ import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
 import type { OptionSurface } from '../../weather/option-spec.ts'
 import { type WeatherReadOptions, weatherReadOptionsSchema } from '../../weather/options.ts'
+import { rethrowAsProblem } from '../errors.ts'
 import { ApiProblem } from '../problem.ts'
 import { parseOrProblem } from '../validate.ts'
 import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
@@ -41,38 +43,60 @@ export const assessOptionsJsonSchema = z.strictObject({
     ),
   targetWbPct: z
     .number()
+    .min(R.targetWbPct[0])
+    .max(R.targetWbPct[1])
     .optional()
     .describe('target moisture, wet basis [%]; default the product profile’s'),
-  initialWbPct: z.number().optional().describe('initial moisture, wet basis [%]; default the profile’s'),
-  thicknessMm: z.number().positive().max(500).optional().describe('product thickness [mm]'),
+  initialWbPct: z
+    .number()
+    .min(R.initialWbPct[0])
+    .max(R.initialWbPct[1])
+    .optional()
+    .describe('initial moisture, wet basis [%]; default the profile’s'),
+  thicknessMm: z
+    .number()
+    .gt(R.thicknessMm[0])
+    .lt(R.thicknessMm[1])
+    .optional()
+    .describe('product thickness [mm]; default the profile’s'),
   seasonStart: monthDay.optional().describe('first start date of the season [MM-DD]'),
   seasonEnd: monthDay.optional().describe('last start date of the season [MM-DD]'),
-  startStepDays: z.number().int().min(1).max(60).optional().describe('days between start dates'),
+  startStepDays: z
+    .number()
+    .int()
+    .min(R.startStepDays[0])
+    .max(R.startStepDays[1])
+    .optional()
+    .describe(
+      `days between start dates [days]; default ${ASSESS_DEFAULTS.stepDaysWithSeason} with a season, else ${ASSESS_DEFAULTS.stepDaysWholeYear}`,
+    ),
   startHourLocal: z
     .number()
     .int()
-    .min(0)
-    .max(23)
+    .min(R.startHourLocal[0])
+    .max(R.startHourLocal[1])
     .optional()
-    .describe('local standard hour at which batches start'),
+    .describe(`local standard hour at which batches start; default ${ASSESS_DEFAULTS.startHourLocal}`),
   deadlineDays: z
     .number()
-    .positive()
-    .max(365)
+    .min(R.deadlineDays[0])
+    .max(R.deadlineDays[1])
     .optional()
-    .describe('window to reach the target [days]; default 14'),
+    .describe(`window to reach the target [days]; default ${ASSESS_DEFAULTS.deadlineDays}`),
   maxDays: z
     .number()
     .positive()
-    .max(365)
+    .max(R.maxDays[1])
     .optional()
-    .describe('a batch fails after this many days [days]; default 60'),
+    .describe(
+      `a batch fails after this many days [days], at least the deadline; default ${ASSESS_DEFAULTS.maxDays}, or the deadline when longer`,
+    ),
   batchKgFresh: z
     .number()
-    .positive()
-    .max(1e7)
+    .min(R.batchKgFresh[0])
+    .max(R.batchKgFresh[1])
     .optional()
-    .describe('batch size [kg fresh product]; default 1000'),
+    .describe(`batch size [kg fresh product]; default ${ASSESS_DEFAULTS.batchKgFresh}`),
   thresholds: dryingThresholdsSchema
     .partial()
     .strict()
@@ -122,6 +146,29 @@ export interface AssessRequest {
   criterion?: CompareCriterion
   /** Where the weather options came from, so that messages name them as the request did. */
   surface: OptionSurface
+  /** Field path of an engine option in this request (`options.maxDays`, or the query name `maxDays`). */
+  optionPath: (option: string) => string
+}
+
+/** Query names of the engine's options (the rest keep their names). */
+const QUERY_NAMES: Record<string, string> = {
+  targetWbPct: 'targetWb',
+  initialWbPct: 'initialWb',
+  thicknessMm: 'thickness',
+  seasonStart: 'start',
+  seasonEnd: 'end',
+  startStepDays: 'stepDays',
+  batchKgFresh: 'batchKg',
+}
+
+/** Check the options with the engine's planner now, before any file is read: 400 naming the field. */
+function planned(request: AssessRequest): AssessRequest {
+  try {
+    planAssessment(request.options)
+  } catch (e) {
+    rethrowAsProblem(e, { optionPath: request.optionPath, rangeStatus: 400 })
+  }
+  return request
 }
 
 function resolveProduct(value: string | Record<string, unknown>, path: string): ProductProfile {
@@ -165,7 +212,7 @@ function resolveMethod(value: string | Record<string, unknown>, path: string): A
 export function assessRequestFromJson(value: unknown, prefix = 'options'): AssessRequest {
   const o = parseOrProblem(assessOptionsJsonSchema, value, prefix)
   const { product, method, weather, criterion, ...rest } = o
-  return {
+  return planned({
     options: {
       ...rest,
       product: resolveProduct(product, `${prefix}.product`),
@@ -174,7 +221,8 @@ export function assessRequestFromJson(value: unknown, prefix = 'options'): Asses
     weather: weather ?? {},
     criterion,
     surface: 'json',
-  }
+    optionPath: (option) => `${prefix}.${option}`,
+  })
 }
 
 /** From the query form. */
@@ -196,10 +244,10 @@ export function assessRequestFromQuery(
     fuelPrices[m[1] as FuelId] = price
   }
   const weather = weatherOptionsFromQuery(q)
-  return {
-    query: q,
+  const request = planned({
     surface: 'query',
     weather,
+    optionPath: (option) => QUERY_NAMES[option] ?? option,
     options: {
       product: resolveProduct(q.product, 'product'),
       method: resolveMethod(q.method, 'method'),
@@ -215,7 +263,8 @@ export function assessRequestFromQuery(
       fuel: q.fuel,
       fuelPrices,
     },
-  }
+  })
+  return { ...request, query: q }
 }
 
 /** Type of the engine entry, for the routes. */

@@ -1,6 +1,7 @@
 import { parseArgs } from 'node:util'
 import { type AssessOptions, type AssessProgress, assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
+import { ASSESS_DEFAULTS } from '../../analysis/plan.ts'
 import { FUELS } from '../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
 import { methodModel } from '../../drying/methods/index.ts'
@@ -34,9 +35,12 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
                   API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
 Season and batches:
-  --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every 7 days)
-  --step-days <n>  --start-hour <0–23>  --deadline-days <n> (default 14)  --max-days <n> (default 60)
-  --batch-kg <kg> (default 1000)
+  --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
+                 every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
+  --step-days <n>  --start-hour <0–23> (default ${ASSESS_DEFAULTS.startHourLocal})
+  --deadline-days <n> (default ${ASSESS_DEFAULTS.deadlineDays})
+  --max-days <n> (default ${ASSESS_DEFAULTS.maxDays}, or the deadline when longer)
+  --batch-kg <kg> (default ${ASSESS_DEFAULTS.batchKgFresh})
 Usable-hour thresholds (stated in the assumptions):
   --min-temp <°C> (default 5; use 0 or lower for grain)  --min-deficit <g/kg> (default 0.2)
   --rain-mm <mm/h> (default 0.2)  --night-cooling <K> (default 2)
@@ -264,7 +268,7 @@ export function assessmentText(a: Assessment): string {
     `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
   )
   out.push(
-    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.join(', ')}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
+    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
   )
   out.push('')
   out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')

@@ -75,6 +75,7 @@ function text(r: WeatherReadResult, file: string): string {
   out.push(
     `rows        read ${r.rows.read}, used ${r.rows.used}, repaired ${r.rows.repaired}, rejected ${r.rows.rejected}${r.rows.superseded ? `, superseded ${r.rows.superseded}` : ''}`,
   )
+  if (r.rejectedRows.length > 0) out.push(`rejected    ${lineRanges(r.rejectedRows.map((x) => x.line))}`)
   out.push(
     `hours       ${r.hoursWithoutRow} without a row, ${r.hoursMissingCore} without dry bulb or humidity (excluded)`,
   )
@@ -103,6 +104,21 @@ function text(r: WeatherReadResult, file: string): string {
       )
   } else out.push('problems    none')
   return `${out.join('\n')}\n`
+}
+
+/** Lines as ranges (`lines 12, 40–52, 90`), the first 30 ranges, then how to get every one. */
+export function lineRanges(lines: number[], shown = 30): string {
+  const ranges: string[] = []
+  for (let i = 0; i < lines.length; ) {
+    let j = i
+    while (j + 1 < lines.length && lines[j + 1] === lines[j] + 1) j++
+    ranges.push(j > i ? `${lines[i]}–${lines[j]}` : String(lines[i]))
+    i = j + 1
+  }
+  const head = ranges.slice(0, shown).join(', ')
+  return ranges.length > shown
+    ? `lines ${head} … (${lines.length} rows; --json lists every one in rejectedRows)`
+    : `lines ${head}`
 }
 
 const SOURCE_WORDS: Record<string, string> = {

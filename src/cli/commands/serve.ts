@@ -6,7 +6,9 @@ const help = `dryhours serve: the HTTP API and the web page
 Usage:
   dryhours serve [--host <address>] [--port <n>]
 
-Defaults: 127.0.0.1:8787 (or HOST and PORT from the environment). Stops cleanly on Ctrl-C (SIGINT) or SIGTERM.`
+Defaults: 127.0.0.1:8787 (or HOST and PORT from the environment). Requests that take a file run on
+DRYHOURS_WORKERS worker threads (default: one per core) with up to DRYHOURS_QUEUE waiting (default 8 per
+thread; beyond it 503 with Retry-After). Stops cleanly on Ctrl-C (SIGINT) or SIGTERM.`
 
 export const serveCommand: CliCommand = {
   name: 'serve',
