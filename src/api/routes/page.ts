@@ -17,7 +17,7 @@ import { FormQuestion, runForm } from '../../web/run-form.ts'
 import type { ApiConfig } from '../config.ts'
 import { isRuntimeFault, problemFor } from '../errors.ts'
 import { checkBatchHours } from '../limits.ts'
-import { ApiProblem, problemBody } from '../problem.ts'
+import { ApiProblem, type ProblemType, problemBody } from '../problem.ts'
 import { checkedUploadText } from '../upload.ts'
 import { workControl } from '../work.ts'
 
@@ -53,6 +53,74 @@ function wantsJson(format: string | null): boolean {
 /** Page form fields of the engine's options (the form uses the engine's names where it has the field). */
 const formField = (option: string): string => option
 
+type FormResult = Awaited<ReturnType<typeof runForm>>
+
+function problemResponse(c: Context, status: 400 | 415, message: string, type?: ProblemType): Response {
+  return c.body(JSON.stringify(problemBody(status, message, undefined, type)), status, {
+    'content-type': 'application/problem+json',
+  })
+}
+
+/** The posted form, or the problem when the body is not the page's form or cannot be read. */
+async function readPageForm(c: Context): Promise<FormData | Response> {
+  const type = (c.req.header('content-type') ?? '').split(';')[0].trim().toLowerCase()
+  if (type !== 'multipart/form-data' && type !== 'application/x-www-form-urlencoded') {
+    return problemResponse(
+      c,
+      415,
+      `POST /report takes the page's form (multipart/form-data); got ${type.slice(0, 60) || 'no content type'}. For the JSON API use POST /v1/assess.`,
+    )
+  }
+  try {
+    return await c.req.formData()
+  } catch {
+    return problemResponse(
+      c,
+      400,
+      'the form body could not be read (check the multipart boundary)',
+      'unreadable-body',
+    )
+  }
+}
+
+/** The assessed form in the format asked for: a download, the bundle for the page script, or the page. */
+function formAnswer(
+  c: Context,
+  format: FormInput['format'],
+  out: FormResult,
+  pageWith: (article: string) => string,
+): Response | Promise<Response> {
+  const stem = downloadStem(out.title)
+  const download = (body: string, type: string, ext: string) =>
+    c.body(body, 200, {
+      'content-type': `${type}; charset=utf-8`,
+      'content-disposition': `attachment; filename="${stem}.${ext}"`,
+    })
+  switch (format) {
+    case 'bundle':
+      return c.body(
+        JSON.stringify({
+          title: out.title,
+          stem,
+          article: out.article,
+          document: out.document,
+          csv: out.csv,
+          json: out.json,
+        }),
+        200,
+        { 'content-type': 'application/json; charset=utf-8', ...NO_STORE },
+      )
+    case 'html':
+      return download(out.document, 'text/html', 'html')
+    case 'csv':
+      return download(out.csv, 'text/csv', 'csv')
+    case 'json':
+      return download(out.json, 'application/json', 'json')
+    default:
+      return c.html(pageWith(out.article))
+  }
+}
+
 export function pageRouter(config: PageConfig): Hono {
   const demo = config.demo
   const demoList = () => demo?.list() ?? []
@@ -70,36 +138,8 @@ export function pageRouter(config: PageConfig): Hono {
 
   router.post('/report', async (c: Context) => {
     const work = workControl(c, config)
-    const type = (c.req.header('content-type') ?? '').split(';')[0].trim().toLowerCase()
-    if (type !== 'multipart/form-data' && type !== 'application/x-www-form-urlencoded') {
-      return c.body(
-        JSON.stringify(
-          problemBody(
-            415,
-            `POST /report takes the page's form (multipart/form-data); got ${type.slice(0, 60) || 'no content type'}. For the JSON API use POST /v1/assess.`,
-          ),
-        ),
-        415,
-        { 'content-type': 'application/problem+json' },
-      )
-    }
-    let form: FormData
-    try {
-      form = await c.req.formData()
-    } catch {
-      return c.body(
-        JSON.stringify(
-          problemBody(
-            400,
-            'the form body could not be read (check the multipart boundary)',
-            undefined,
-            'unreadable-body',
-          ),
-        ),
-        400,
-        { 'content-type': 'application/problem+json' },
-      )
-    }
+    const form = await readPageForm(c)
+    if (!(form instanceof FormData)) return form
     const formatRaw = form.get('format')
     const format = typeof formatRaw === 'string' ? formatRaw : 'page'
     const values = echoValues(form)
@@ -155,7 +195,7 @@ export function pageRouter(config: PageConfig): Hono {
         return failWith(e)
       }
     }
-    let out: Awaited<ReturnType<typeof runForm>>
+    let out: FormResult
     try {
       out = await runForm(input, demo, {
         // The same work limit and time budget as the API.
@@ -170,44 +210,12 @@ export function pageRouter(config: PageConfig): Hono {
       if (e instanceof FormQuestion) return fail(new ApiProblem(422, e.message), true)
       return failWith(e)
     }
-    const stem = downloadStem(out.title)
-    switch (input.format) {
-      case 'bundle':
-        return c.body(
-          JSON.stringify({
-            title: out.title,
-            stem,
-            article: out.article,
-            document: out.document,
-            csv: out.csv,
-            json: out.json,
-          }),
-          200,
-          { 'content-type': 'application/json; charset=utf-8', ...NO_STORE },
-        )
-      case 'html':
-        return c.body(out.document, 200, {
-          'content-type': 'text/html; charset=utf-8',
-          'content-disposition': `attachment; filename="${stem}.html"`,
-        })
-      case 'csv':
-        return c.body(out.csv, 200, {
-          'content-type': 'text/csv; charset=utf-8',
-          'content-disposition': `attachment; filename="${stem}.csv"`,
-        })
-      case 'json':
-        return c.body(out.json, 200, {
-          'content-type': 'application/json; charset=utf-8',
-          'content-disposition': `attachment; filename="${stem}.json"`,
-        })
-      default:
-        return c.html(
-          page({
-            values,
-            result: `<p class="hint no-print">To download this report, choose a file under “Answer as” and assess again.</p>${out.article}`,
-          }),
-        )
-    }
+    return formAnswer(c, input.format, out, (article) =>
+      page({
+        values,
+        result: `<p class="hint no-print">To download this report, choose a file under “Answer as” and assess again.</p>${article}`,
+      }),
+    )
   })
   return router
 }
