@@ -43,7 +43,7 @@ export const ASSESS_RANGES = {
 
 /**
  * Batches run besides the season's start dates: the monthly heat column (1st and 16th of every month, per
- * year) and the heated-every-hour sample of the heat cross-check (assess.ts `heatedEveryHourSample`).
+ * year) and the heated-every-hour sample of the heat cross-check (heat-summary.ts `heatedEveryHourSample`).
  */
 const MONTHLY_HEAT_STARTS = 24
 export const HEATED_SAMPLE_BATCHES = 30
