@@ -20,7 +20,7 @@ import { tabulatedResponse } from '../drying/product-tables.ts'
 import { type DryingThresholds, parseDryingThresholds } from '../drying/thresholds.ts'
 import { moistureDbFromWbPct } from '../product/moisture-basis.ts'
 import type { ProductProfile } from '../product/profile.ts'
-import { planAssessment } from './plan.ts'
+import { checkCurrency, planAssessment } from './plan.ts'
 import type { MonthDay } from './start-dates.ts'
 
 export interface AssessProgress {
@@ -57,6 +57,8 @@ export interface AssessOptions {
   fuel?: FuelId
   /** Prices per fuel unit; missing prices use the marked examples. */
   fuelPrices?: Partial<Record<FuelId, number>>
+  /** The currency of the prices and costs as the user names it (e.g. `EUR`, `US$`); none when absent. */
+  currency?: string
   onProgress?: (p: AssessProgress) => void
 }
 
@@ -93,6 +95,8 @@ export interface ResolvedAssessOptions {
   backupMethod: HeatedMethod
   fuel?: FuelId
   fuelPrices?: Partial<Record<FuelId, number>>
+  /** The currency of prices and costs as given, or null (costs then in the unnamed unit of the example prices). */
+  currency: string | null
   onProgress?: (p: AssessProgress) => void
 }
 
@@ -135,6 +139,7 @@ export function resolveAssessOptions(options: AssessOptions): ResolvedAssessOpti
         : heatedBackup(options.backupHeater, product.erhPct(25, targetDb), maxProductTempC),
     fuel: options.fuel,
     fuelPrices: options.fuelPrices,
+    currency: checkCurrency(options.currency),
     onProgress: options.onProgress,
   }
 }

@@ -65,6 +65,11 @@ const MIN_HOURS_FOR_A_YEAR = 168
  */
 export const MAX_SUNLESS_SHARE = 0.5
 
+/** A method this weather file cannot serve (e.g. one that needs the sun on a sunless file): the reason in words. */
+export class MethodRefused extends RangeError {
+  override name = 'MethodRefused'
+}
+
 /**
  * Refuse a method that needs the sun (open air, solar cabinet) when the series has no irradiance
  * for most of its usable hours: no irradiance column and nothing to estimate it from
@@ -80,7 +85,7 @@ export function requireSun(series: HourlySeries, kind: string): void {
   }
   if (usable > 0 && sunless > MAX_SUNLESS_SHARE * usable) {
     const placed = series.site.latitudeDeg !== null && series.site.longitudeDeg !== null
-    throw new RangeError(
+    throw new MethodRefused(
       `the ${kind} method needs the sun, and ${sunless} of the ${usable} hours with dry bulb and humidity have no irradiance: ` +
         (placed
           ? 'the file has none, and neither cloud cover nor whole days of temperatures to estimate it from; ' +

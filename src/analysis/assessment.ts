@@ -130,6 +130,8 @@ export interface HeatSummary {
   /** Fuel quantity and cost at the median heat, for every fuel. */
   fuels: FuelFigure[]
   selectedFuel: FuelId
+  /** The currency of the prices and costs as the user named it; null when not named (example prices are in no currency). */
+  currency: string | null
   crossCheck: {
     waterToRemoveKgPerTonne: number
     /** λ(T) + net heat of sorption at the target moisture [kJ/kg water], and how it was obtained. */

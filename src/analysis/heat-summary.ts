@@ -117,6 +117,7 @@ export function heatSummary(
     },
     fuels: fuelFigures(run, s.median),
     selectedFuel: run.fuel ?? heater.fuel,
+    currency: run.currency,
     crossCheck: {
       waterToRemoveKgPerTonne: roundOrNull(water, 1) ?? 0,
       heatOfEvaporationKjPerKg: roundOrNull(sorption.totalKjPerKg, 0) ?? 0,

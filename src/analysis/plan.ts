@@ -93,6 +93,27 @@ function checkRange(
     throw new AssessOptionError(option, `${name} must be between ${lo} and ${hi} ${unit}, got ${value}`)
 }
 
+/** Longest currency name accepted [characters]. */
+export const MAX_CURRENCY_CHARS = 12
+
+/** The currency name checked: 1–12 printable characters (a code such as EUR or a sign such as US$). */
+export function checkCurrency(text: string | undefined): string | null {
+  if (text === undefined) return null
+  const t = text.trim()
+  let printable = t.length > 0 && t.length <= MAX_CURRENCY_CHARS
+  for (let i = 0; i < t.length && printable; i++) {
+    const c = t.charCodeAt(i)
+    if (c < 32 || c === 127 || c === 60 || c === 62) printable = false
+  }
+  if (!printable) {
+    throw new AssessOptionError(
+      'currency',
+      `currency must be 1 to ${MAX_CURRENCY_CHARS} printable characters other than < and > (a code such as EUR or a sign), got '${t.slice(0, 20)}'`,
+    )
+  }
+  return t
+}
+
 /** Resolve the defaults of `options` and check every range; the engine and every entry point use this. */
 export function planAssessment(options: AssessOptions): AssessPlan {
   const profile = options.product
@@ -135,6 +156,7 @@ export function planAssessment(options: AssessOptions): AssessPlan {
       `start hour must be a whole hour from 0 to 23, got ${startHourLocal}`,
     )
   }
+  checkCurrency(options.currency)
   const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
   const seasonStart = options.seasonStart ?? ASSESS_DEFAULTS.seasonStart
   const seasonEnd = options.seasonEnd ?? ASSESS_DEFAULTS.seasonEnd

@@ -13,6 +13,7 @@ import { type WeatherReadOptions, weatherReadOptionsSchema } from './options.ts'
 import { ProblemLog } from './problem-log.ts'
 import type { WeatherReadResult } from './result.ts'
 import type { SiteInfo } from './series.ts'
+import { overrideWarning, siteOverrides } from './site-overrides.ts'
 import { escapeControlCharacters } from './snippet.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
@@ -59,11 +60,13 @@ export function readWeather(
         'EPW timestamps label the end of each hour (EPW data dictionary); --labels start is ignored',
       )
     const offset = opts.utcOffsetHours ?? header.utcOffsetHours
-    if (opts.utcOffsetHours !== undefined && opts.utcOffsetHours !== header.utcOffsetHours) {
-      warnings.push(
-        `the given UTC offset ${opts.utcOffsetHours} h overrides the EPW header's ${header.utcOffsetHours} h`,
-      )
-    }
+    const overrides = siteOverrides(opts, {
+      latitudeDeg: header.latitudeDeg,
+      longitudeDeg: header.longitudeDeg,
+      elevationM: header.elevationM,
+      utcOffsetHours: header.utcOffsetHours,
+    })
+    warnings.push(...overrides.map(overrideWarning))
     const site: SiteInfo = {
       name:
         opts.siteName ??
@@ -77,7 +80,7 @@ export function readWeather(
       utcOffsetHours: null,
       windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
     }
-    return assemble(table, {
+    const epwResult = assemble(table, {
       site,
       time: {
         labels: 'end',
@@ -92,6 +95,8 @@ export function readWeather(
       sampling: opts.sampling,
       siteClock: { optionZone: opts.siteTimeZone, fileOffsetHours: offset },
     })
+    epwResult.overrides = overrides
+    return epwResult
   }
   const clockGiven = opts.utcOffsetHours !== undefined || opts.timeZone !== undefined
   const head = dialectHead(text)
@@ -136,6 +141,14 @@ export function readWeather(
   }
   const fixedOffset =
     opts.utcOffsetHours ?? (opts.timeZone === undefined && fileZone === undefined ? headerOffset : null)
+  const overrides = siteOverrides(opts, {
+    latitudeDeg: said.latitudeDeg,
+    longitudeDeg: said.longitudeDeg,
+    elevationM: said.elevationM,
+    utcOffsetHours: said.timestampUtcOffsetHours,
+    siteTimeZone: said.siteTimeZone,
+  })
+  warnings.push(...overrides.map(overrideWarning))
   const windHeightM = info?.windHeightM ?? said.windHeightM ?? null
   const site: SiteInfo = {
     name: opts.siteName ?? said.siteName ?? '',
@@ -171,6 +184,7 @@ export function readWeather(
       fileOffsetHours: said.siteUtcOffsetHours ?? null,
     },
   })
+  result.overrides = overrides
   if (table.dialect) result.dialect = table.dialect
   if (info) describeCsv(result, info, table.dialect?.title)
   return result

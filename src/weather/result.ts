@@ -5,6 +5,7 @@
 
 import type { ProblemKind, WeatherProblem } from './problem-log.ts'
 import type { HourlySeries, ValueTiming } from './series.ts'
+import type { SiteOverride } from './site-overrides.ts'
 import type { DstEvent } from './time-basis.ts'
 
 /** One variable taken from the file (or supplied), with the column and unit it came from. */
@@ -84,6 +85,8 @@ export interface WeatherReadResult {
   /** Problems beyond the cap that are counted but not listed. */
   problemsOmitted: number
   warnings: string[]
+  /** Values the file states about its site that the user's options replaced (each also a warning naming both). */
+  overrides?: SiteOverride[]
   /** Statements for the assumptions: what was supplied rather than read (estimated irradiance, constant pressure). */
   notes: string[]
   period: { start: string; end: string }
