@@ -31,6 +31,8 @@ export const HALF_OF_YEARS = 0.5
 export const SPOILAGE_MARGINAL_SHARE = 0.2
 
 const pct = (x: number): string => `${Math.round(100 * x)} %`
+/** A share of years in words: "every year", "no year" or "N % of years". */
+const ofYears = (x: number): string => (x >= 1 ? 'every year' : x <= 0 ? 'no year' : `${pct(x)} of years`)
 
 /** The rule of each calendar state, in words (also in the JSON, so every reader sees the same rule). */
 export const CALENDAR_RULES: Record<CalendarState, string> = {
@@ -255,7 +257,7 @@ function recommend(
     )[0]
     const bestText =
       best && best.probabilityWithinDeadline !== null
-        ? `; the most reliable is ${best.label} (${pct(best.probabilityWithinDeadline)} of years)`
+        ? `; the most reliable is ${best.label} (${ofYears(best.probabilityWithinDeadline)})`
         : ''
     return {
       kind: null,
@@ -270,7 +272,7 @@ function recommend(
       : `fuel ${chosen.costPerKgDried}${currency ? ` ${currency}` : ''} per kg dried${chosen.fuel.priceIsExample && chosen.costPerKgDried > 0 ? ' at an example price' : ''}`
   return {
     kind: chosen.kind,
-    text: `${chosen.label}: finishes within ${deadlineDays} days in ${pct(chosen.probabilityWithinDeadline ?? 0)} of years, median ${chosen.daysToTarget.median ?? '–'} days, ${money}.`,
+    text: `${chosen.label}: finishes within ${deadlineDays} days in ${ofYears(chosen.probabilityWithinDeadline ?? 0)}, median ${chosen.daysToTarget.median ?? '–'} days, ${money}.`,
     criterion,
   }
 }

@@ -6,7 +6,9 @@
  * - `probability-within-deadline`: mean over the season's start dates of the share of years finishing
  *   within the deadline by the method alone; higher is better (default);
  * - `heat-per-tonne`: median supplemental heat over the season's batches [kWh/t]; lower is better.
- * Ties are broken by the next criterion in that order.
+ * Ties are broken by the other criteria in that order, then by the order the sites were given; each site
+ * says which criterion placed it below the one above it. Typical-year files are marked, with a caveat when
+ * they are ranked against multi-year files. Sites and their assessments are listed in rank order.
  */
 import { MS_PER_DAY } from '../physics/constants.ts'
 import { type AssessOptions, assess } from './assess.ts'
@@ -28,7 +30,18 @@ export const CRITERION_DESCRIPTIONS: Record<CompareCriterion, string> = {
 
 export interface SiteScore {
   rank: number
+  /** The site's label: the name given for it, else its file name, else the site name in the file. */
   site: string
+  /** The weather file of the site, when known. */
+  file: string | null
+  /** Position of the site in the order given (0-based). */
+  given: number
+  /** The file is a typical year (one constructed year): no spread across years. */
+  typicalYear: boolean
+  /** Years with data in the file. */
+  years: number
+  /** Which criterion placed this site below the one ranked just above it; null for the first. */
+  decidedBy: CompareCriterion | 'order-given' | null
   usableHoursInSeasonP10: number | null
   usableHoursInSeasonMedian: number | null
   meanProbabilityWithinDeadline: number | null
@@ -41,11 +54,17 @@ export interface Comparison {
   schema: 'dryhours.comparison/1'
   criterion: CompareCriterion
   criterionDescription: string
+  /** How ties on the criterion are broken, in words. */
+  tieBreak: string
+  /** Cautions on the ranking as a whole (typical years ranked against multi-year files). */
+  caveats: string[]
   product: Assessment['product']
   method: Assessment['method']
   season: Assessment['season']
   deadlineDays: number
+  /** Best first. */
   sites: SiteScore[]
+  /** The sites' assessments, in the order of `sites`. */
   assessments: Assessment[]
 }
 
@@ -84,7 +103,9 @@ export function seasonUsableHoursByYear(a: Assessment): number[] {
   return [...byYear.values()].filter((e) => e.months === needed).map((e) => e.sum)
 }
 
-function score(a: Assessment): Omit<SiteScore, 'rank'> {
+type Scored = Omit<SiteScore, 'rank' | 'decidedBy'>
+
+function score(a: Assessment): Scored {
   const hours = seasonUsableHoursByYear(a).sort((x, y) => x - y)
   const withYears = a.startDates.filter((r) => r.years > 0)
   const meanP =
@@ -100,10 +121,36 @@ function score(a: Assessment): Omit<SiteScore, 'rank'> {
     medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
     bestStartWindow: best ? `${best.from} to ${best.to}` : null,
     warnings: a.warnings,
+    file: null,
+    given: 0,
+    typicalYear: a.site.typicalYear,
+    years: a.coverage.years.length,
   }
 }
 
-function keyOf(s: Omit<SiteScore, 'rank'>, c: CompareCriterion): number {
+/** The tie-break of `criterion` in words. */
+export function tieBreakText(criterion: CompareCriterion): string {
+  const others = COMPARE_CRITERIA.filter((c) => c !== criterion)
+  return `sites equal on ${criterion} are ordered by ${others.join(', then by ')}, then by the order they were given`
+}
+
+/** The caveat of ranking typical-year files, alone or against multi-year files. */
+export function typicalYearCaveats(sites: Pick<SiteScore, 'site' | 'typicalYear' | 'years'>[]): string[] {
+  const typical = sites.filter((s) => s.typicalYear)
+  if (typical.length === 0) return []
+  const names = typical.map((s) => s.site).join(', ')
+  const multi = sites.filter((s) => !s.typicalYear && s.years > 1)
+  if (multi.length === 0) {
+    return [
+      `${names}: ${typical.length === 1 ? 'a typical year' : 'typical years'} (one constructed year each): every share of years is 0 or 100 % per start date and there is no P10 across years, so the ranking compares single years, not reliability`,
+    ]
+  }
+  return [
+    `${names} ${typical.length === 1 ? 'is a typical year' : 'are typical years'} (one constructed year) ranked against multi-year files (${multi.map((s) => `${s.site}: ${s.years} years`).join(', ')}): a typical year shows 0 or 100 % per start date and no bad years, so it tends to rank above a real site with the same climate; compare like with like where you can`,
+  ]
+}
+
+function keyOf(s: Scored, c: CompareCriterion): number {
   const v =
     c === 'usable-hours-p10'
       ? (s.usableHoursInSeasonP10 ?? s.usableHoursInSeasonMedian)
@@ -115,53 +162,74 @@ function keyOf(s: Omit<SiteScore, 'rank'>, c: CompareCriterion): number {
   return v ?? Number.NEGATIVE_INFINITY
 }
 
+/** Labels and files of the sites, in the order of the assessments. */
+export interface SiteLabels {
+  /** Names of the sites (e.g. from a sites file, or the file names). */
+  labels?: string[]
+  /** Weather files of the sites. */
+  files?: string[]
+}
+
 /**
  * Rank assessments of several sites by `criterion` (ties broken by the other criteria in the order of
- * {@link COMPARE_CRITERIA}); `labels` name the sites, otherwise their site names.
+ * {@link COMPARE_CRITERIA}, then by the order given); `labels` name the sites, otherwise their site names.
+ * The sites and the assessments are returned best first.
  */
 export function rankAssessments(
   assessments: Assessment[],
   criterion: CompareCriterion = 'probability-within-deadline',
-  labels?: string[],
+  names: SiteLabels | string[] = {},
 ): Comparison {
   if (!COMPARE_CRITERIA.includes(criterion)) {
     throw new RangeError(`criterion must be one of ${COMPARE_CRITERIA.join(', ')}, got '${criterion}'`)
   }
   if (assessments.length === 0) throw new RangeError('a comparison needs at least one assessment')
+  const { labels, files } = Array.isArray(names) ? { labels: names, files: undefined } : names
   const order: CompareCriterion[] = [criterion, ...COMPARE_CRITERIA.filter((c) => c !== criterion)]
-  const scored = assessments.map((a, i) => ({ ...score(a), site: labels?.[i] ?? a.site.name }))
-  const ranked = scored
-    .map((s, i) => ({ s, i }))
-    .sort((x, y) => {
-      for (const c of order) {
-        const kx = keyOf(x.s, c)
-        const ky = keyOf(y.s, c)
-        if (kx !== ky) return ky > kx ? 1 : -1
-      }
-      return x.i - y.i
-    })
-    .map(({ s }, r) => ({ rank: r + 1, ...s }))
+  const scored = assessments.map((a, i) => ({
+    ...score(a),
+    site: labels?.[i] ?? a.site.name,
+    file: files?.[i] ?? null,
+    given: i,
+  }))
+  /** The first criterion on which x and y differ (negative: x ranks first), or the order given. */
+  const decide = (x: { s: Scored; i: number }, y: { s: Scored; i: number }) => {
+    for (const c of order) {
+      const kx = keyOf(x.s, c)
+      const ky = keyOf(y.s, c)
+      if (kx !== ky) return { by: c, sign: ky > kx ? 1 : -1 }
+    }
+    return { by: 'order-given' as const, sign: x.i - y.i }
+  }
+  const ranked = scored.map((s, i) => ({ s, i })).sort((x, y) => decide(x, y).sign)
+  const sites: SiteScore[] = ranked.map(({ s }, r) => ({
+    rank: r + 1,
+    ...s,
+    decidedBy: r === 0 ? null : decide(ranked[r - 1], ranked[r]).by,
+  }))
   const first = assessments[0]
   return {
     schema: 'dryhours.comparison/1',
     criterion,
     criterionDescription: CRITERION_DESCRIPTIONS[criterion],
+    tieBreak: tieBreakText(criterion),
+    caveats: typicalYearCaveats(sites),
     product: first.product,
     method: first.method,
     season: first.season,
     deadlineDays: first.deadlineDays,
-    sites: ranked,
-    assessments,
+    sites,
+    assessments: ranked.map(({ i }) => assessments[i]),
   }
 }
 
 /**
- * Assess every series with the same options and rank them. `labels` name the sites when given (e.g. file
- * names), otherwise the site names from the files.
+ * Assess every series with the same options and rank them. `labels` name the sites when given (e.g. the
+ * names of a sites file, or file names), otherwise the site names from the files; `files` are kept with them.
  */
 export function compare(
   seriesList: Parameters<typeof assess>[0][],
-  options: AssessOptions & { criterion?: CompareCriterion; labels?: string[] },
+  options: AssessOptions & { criterion?: CompareCriterion } & SiteLabels,
 ): Comparison {
   if (seriesList.length < 2)
     throw new RangeError(`compare needs at least 2 weather series, got ${seriesList.length}`)
@@ -169,9 +237,10 @@ export function compare(
   if (!COMPARE_CRITERIA.includes(criterion)) {
     throw new RangeError(`criterion must be one of ${COMPARE_CRITERIA.join(', ')}, got '${criterion}'`)
   }
+  const { labels, files, criterion: _c, ...assessOptions } = options
   return rankAssessments(
-    seriesList.map((s) => assess(s, options)),
+    seriesList.map((s) => assess(s, assessOptions)),
     criterion,
-    options.labels,
+    { labels, files },
   )
 }

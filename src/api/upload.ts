@@ -25,6 +25,8 @@ export interface Upload {
   files: UploadedFile[]
   /** The `options` part parsed as JSON, or the query-string options; undefined when none were sent. */
   options: unknown
+  /** The `sites` part parsed as JSON (a list of sites with their own settings); undefined when not sent. */
+  sites?: unknown
   /** Query-string parameters (always available; no prototype, so `__proto__` is a key like any other). */
   query: Record<string, string>
 }
@@ -88,10 +90,14 @@ export async function readUpload(c: Context, opts: { defaultName: string }): Pro
     }
     const files: UploadedFile[] = []
     let options: unknown
+    let sites: unknown
     for (const [field, value] of form.entries()) {
       if (field === 'options') {
         const text = typeof value === 'string' ? value : await value.text()
         options = parseOptionsJson(text)
+      } else if (field === 'sites') {
+        const text = typeof value === 'string' ? value : await value.text()
+        sites = parseOptionsJson(text, 'sites')
       } else if (typeof value !== 'string') {
         files.push({
           name: value.name || opts.defaultName,
@@ -109,7 +115,7 @@ export async function readUpload(c: Context, opts: { defaultName: string }): Pro
         })
       }
     }
-    return { files, options, query }
+    return { files, options, sites, query }
   }
   if (RAW_TYPES.includes(type)) {
     const charset = checkedCharset(charsetOf(c.req.header('content-type')), 'content-type')

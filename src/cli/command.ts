@@ -18,7 +18,15 @@ export interface CliIo {
   stdout: (text: string) => void
   stderr: (text: string) => void
   readFile: (path: string) => Promise<Uint8Array>
-  writeFile: (path: string, data: string | Uint8Array) => Promise<void>
+  /**
+   * Write a file. An existing file is replaced only with `overwrite` (the user's `--force`); otherwise the
+   * write is refused with a usage error naming the file, so nothing is overwritten silently.
+   */
+  writeFile: (path: string, data: string | Uint8Array, options?: { overwrite?: boolean }) => Promise<void>
+  /** Whether a file or folder exists at `path` (to refuse before writing any of several files). */
+  exists?: (path: string) => Promise<boolean>
+  /** Create a folder and its parents (nothing when it exists). */
+  makeDir?: (path: string) => Promise<void>
   /** Start the API and the page on host:port, logging each request; absent where no server can run. */
   startServer?: (options: {
     host?: string

@@ -2,7 +2,7 @@
  * @module node/cli
  * Node entry of the `dryhours` command: wires the CLI to the process and the file system.
  */
-import { readFile, writeFile } from 'node:fs/promises'
+import { mkdir, readFile, stat, writeFile } from 'node:fs/promises'
 import { pathToFileURL } from 'node:url'
 import { type CliIo, UsageError } from '../cli/command.ts'
 import { runCli } from '../cli/main.ts'
@@ -35,12 +35,30 @@ export const nodeIo: CliIo = {
       throw pathError('read', path, e)
     }
   },
-  writeFile: async (path, data) => {
+  writeFile: async (path, data, options) => {
     try {
-      await writeFile(path, data)
+      // 'wx' fails when the file exists: nothing is overwritten without --force
+      await writeFile(path, data, { flag: options?.overwrite ? 'w' : 'wx' })
     } catch (e) {
+      if ((e as NodeJS.ErrnoException).code === 'EEXIST')
+        throw new UsageError(`'${path}' already exists: give --force to replace it, or another name`)
       // A missing folder, a read-only place or a folder given as the output: the user's input, exit 2.
       throw pathError('write', path, e)
+    }
+  },
+  exists: async (path) => {
+    try {
+      await stat(path)
+      return true
+    } catch {
+      return false
+    }
+  },
+  makeDir: async (path) => {
+    try {
+      await mkdir(path, { recursive: true })
+    } catch (e) {
+      throw pathError('create the folder', path, e)
     }
   },
   startServer: async (options) => {

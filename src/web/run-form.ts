@@ -137,7 +137,8 @@ export async function runForm(
           labels: reads.map((r) => r.read.series.site.name || r.name),
         },
       )
-      assessments = c.assessments
+      // the comparison lists its sites best first; the reads keep the order given
+      assessments = reads.map((_, i) => c.assessments[c.sites.findIndex((x) => x.given === i)])
       ranking = c
     }
   } catch (e) {

@@ -68,6 +68,11 @@ describe('comparison with the analysis ranking', () => {
           medianHeatKwhPerTonne: 100,
           bestStartWindow: null,
           warnings: [],
+          file: null,
+          given: 0,
+          typicalYear: false,
+          years: 3,
+          decidedBy: 'probability-within-deadline' as const,
         },
         {
           rank: 1,
@@ -78,6 +83,11 @@ describe('comparison with the analysis ranking', () => {
           medianHeatKwhPerTonne: 0,
           bestStartWindow: '07-01 to 07-31',
           warnings: [],
+          file: null,
+          given: 1,
+          typicalYear: false,
+          years: 3,
+          decidedBy: null,
         },
       ],
     }

@@ -8,12 +8,18 @@ import { z } from 'zod'
 import { assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
 import { compare } from '../../analysis/compare.ts'
+import { compareMethods } from '../../analysis/compare-methods.ts'
+import { type SiteSpec, SiteTableError, sitesFromJson } from '../../analysis/compare-sites.ts'
+import { DRYING_METHOD_KINDS } from '../../drying/method.ts'
+import { renderComparisonCsv } from '../../report/compare-csv.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
+import { renderMethodComparisonCsv, renderMethodComparisonHtml } from '../../report/methods-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
 import { type OptionSurface, renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
+import { overrideWarning } from '../../weather/site-overrides.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
 import { isRuntimeFault, rethrowAsProblem } from '../errors.ts'
@@ -43,29 +49,49 @@ interface Parsed {
   request: AssessRequest
   output: z.output<typeof outputQuerySchema>
   files: UploadedFile[]
+  /** The `sites` part (compare): each site with its own settings. */
+  sites?: unknown
 }
 
 async function parseRequest(c: Context): Promise<Parsed> {
   const upload = await readUpload(c, { defaultName: 'weather file' })
   if (upload.options !== undefined) {
     const output = parseOrProblem(outputQuerySchema, upload.query)
-    return { request: assessRequestFromJson(upload.options), output, files: upload.files }
+    return {
+      request: assessRequestFromJson(upload.options),
+      output,
+      files: upload.files,
+      sites: upload.sites,
+    }
   }
   const fromQuery = assessRequestFromQuery(upload.query)
-  return { request: fromQuery, output: fromQuery.query, files: upload.files }
+  return { request: fromQuery, output: fromQuery.query, files: upload.files, sites: upload.sites }
 }
 
-/** Decode one weather file within the row and column limits and read it; problems name the file. */
-export function readSite(file: UploadedFile, request: AssessRequest, config: ApiConfig): WeatherReadResult {
+/**
+ * Decode one weather file within the row and column limits and read it with `weather` (the request's
+ * options, or a site's own); problems name `label` (the file, or the site and its file).
+ */
+export function readSite(
+  file: UploadedFile,
+  request: Pick<AssessRequest, 'weather' | 'surface'>,
+  config: ApiConfig,
+  label = file.name,
+): WeatherReadResult {
   const text = checkedUploadText(file, config)
   try {
     const result = renderReadingMessages(readWeather(text, request.weather), request.surface)
     if (result.series.site.name.trim() === '') result.series.site.name = file.name
     return result
   } catch (e) {
-    if (e instanceof WeatherInputError) throw weatherInputProblem(e, request.surface, file.name)
-    rethrowAsProblem(e, { filePrefix: file.name })
+    if (e instanceof WeatherInputError) throw weatherInputProblem(e, request.surface, label)
+    rethrowAsProblem(e, { filePrefix: label })
   }
+}
+
+/** The options' replacements of what the file states about its site, as warnings for the request's surface. */
+function overrideWarnings(read: WeatherReadResult, surface: OptionSurface): string[] {
+  return (read.overrides ?? []).map((o) => renderOptionNames(overrideWarning(o), surface))
 }
 
 /**
@@ -114,14 +140,51 @@ export function assessRouter(config: ApiConfig): Hono {
     work.checkpoint()
     const read = readSite(files[0], request, config)
     work.checkpoint()
-    checkBatchHours(request.options, [read.series.hours], config, request.optionPath)
+    const methodCount =
+      request.methods === null
+        ? 1
+        : request.methods === 'all'
+          ? DRYING_METHOD_KINDS.length
+          : request.methods.length
+    checkBatchHours(
+      request.options,
+      new Array(methodCount).fill(read.series.hours),
+      config,
+      request.optionPath,
+    )
+    const said = overrideWarnings(read, request.surface)
+    const info = { fileName: files[0].name, readerWarnings: read.warnings }
+    if (request.methods !== null) {
+      const methods = request.methods
+      const comparison = runEngine(
+        () => compareMethods(read.series, { ...request.options, onProgress: work.checkpoint }, methods),
+        request,
+      )
+      comparison.assessments = comparison.assessments.map((a) =>
+        renderAssessmentWarnings(a, request.surface, said),
+      )
+      work.checkpoint()
+      if (output.format === 'html')
+        return c.html(
+          renderMethodComparisonHtml(comparison, { units: output.units, fileName: files[0].name }),
+        )
+      if (output.format === 'csv') {
+        return csvResponse(
+          c,
+          csvTables(() =>
+            renderMethodComparisonCsv(comparison, { units: output.units, table: output.table }),
+          ),
+        )
+      }
+      return c.json(comparison)
+    }
     // the engine's messages name options as CLI flags: renamed for this request's surface
     const assessment: Assessment = renderAssessmentWarnings(
       runEngine(() => assess(read.series, { ...request.options, onProgress: work.checkpoint }), request),
       request.surface,
+      said,
     )
     work.checkpoint()
-    const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (output.format === 'html') {
       return c.html(renderReportHtml(assessment, { units: output.units, info }))
     }
@@ -141,22 +204,90 @@ export function assessRouter(config: ApiConfig): Hono {
   })
 }
 
-/** The assessment's warnings with option names as the request gave them. */
-function renderAssessmentWarnings(a: Assessment, surface: OptionSurface): Assessment {
-  return { ...a, warnings: a.warnings.map((w) => renderOptionNames(w, surface)) }
+/**
+ * The assessment's warnings with option names as the request gave them, after the warnings of the
+ * reading that the answer must carry (`first`: options that replaced what the file states).
+ */
+function renderAssessmentWarnings(a: Assessment, surface: OptionSurface, first: string[] = []): Assessment {
+  return { ...a, warnings: [...first, ...a.warnings.map((w) => renderOptionNames(w, surface))] }
+}
+
+interface ComparedRead {
+  /** The site's name (its own, or the file name). */
+  name: string | undefined
+  file: UploadedFile
+  read: WeatherReadResult
+  /** Warnings of the reading the answer carries (a site's option replacing what its file states). */
+  said: string[]
+}
+
+/** The sites of a `sites` part, each matched to its uploaded file and read with its own settings. */
+function readSitesPart(
+  sitesJson: unknown,
+  request: AssessRequest,
+  files: UploadedFile[],
+  config: ApiConfig,
+  checkpoint: () => void,
+): ComparedRead[] {
+  if (Object.keys(request.weather).length > 0) {
+    const given = Object.keys(request.weather).join(', ')
+    throw new ApiProblem(
+      400,
+      `weather options (${given}) cannot be given for all sites together with a sites part: give them per site`,
+      [{ path: request.surface === 'json' ? 'options.weather' : given, message: 'per site with sites' }],
+    )
+  }
+  let specs: SiteSpec[]
+  try {
+    specs = sitesFromJson(sitesJson)
+  } catch (e) {
+    if (e instanceof SiteTableError)
+      throw new ApiProblem(400, e.message, [{ path: 'sites', message: e.message }])
+    throw e
+  }
+  if (specs.length > config.maxSites) {
+    throw new ApiProblem(
+      413,
+      `at most ${config.maxSites} sites per comparison, got ${specs.length}; compare them in groups`,
+      [{ path: 'sites', message: `more than ${config.maxSites} sites` }],
+    )
+  }
+  const used = new Set<UploadedFile>()
+  const reads = specs.map((spec, i) => {
+    const matches = files.filter((f) => f.name === spec.file)
+    if (matches.length !== 1) {
+      throw new ApiProblem(
+        400,
+        `${spec.where}: ${matches.length === 0 ? 'no uploaded file is named' : 'several uploaded files are named'} '${spec.file}' (uploaded: ${files.map((f) => f.name).join(', ') || 'none'})`,
+        [{ path: `sites.${i}.file`, message: 'one uploaded file of that name expected' }],
+      )
+    }
+    used.add(matches[0])
+    checkpoint()
+    const label = `site '${spec.name}' (${spec.file})`
+    const read = readSite(matches[0], { weather: spec.weather, surface: 'query' }, config, label)
+    return {
+      name: spec.name,
+      file: matches[0],
+      read,
+      said: overrideWarnings(read, 'query').map((w) => `site '${spec.name}': ${w}`),
+    }
+  })
+  const unused = files.filter((f) => !used.has(f))
+  if (unused.length > 0) {
+    throw new ApiProblem(
+      400,
+      `uploaded files no site names: ${unused.map((f) => f.name).join(', ')}; every file part must be a site's file`,
+      [{ path: 'sites', message: 'a file without a site' }],
+    )
+  }
+  return reads
 }
 
 export function compareRouter(config: ApiConfig): Hono {
   return new Hono().post('/', async (c) => {
     const work = workControl(c, config)
-    const { request, output, files } = await parseRequest(c)
-    if (files.length < 2) {
-      throw new ApiProblem(
-        400,
-        `send at least two weather files (one multipart part per site), got ${files.length}`,
-        [{ path: 'file', message: 'two or more file parts expected' }],
-      )
-    }
+    const { request, output, files, sites } = await parseRequest(c)
     if (files.length > config.maxSites) {
       throw new ApiProblem(
         413,
@@ -164,50 +295,85 @@ export function compareRouter(config: ApiConfig): Hono {
         [{ path: 'site', message: `more than ${config.maxSites} files` }],
       )
     }
-    if (output.format === 'csv') {
-      throw new ApiProblem(400, 'format=csv is offered per site: call /v1/assess for each file', [
-        { path: 'format', message: 'csv not offered for comparisons' },
-      ])
+    if (files.length < 2) {
+      throw new ApiProblem(
+        400,
+        `send at least two weather files (one multipart part per site), got ${files.length}`,
+        [{ path: 'file', message: 'two or more file parts expected' }],
+      )
     }
-    const reads = files.map((f) => {
-      work.checkpoint()
-      return readSite(f, request, config)
-    })
+    if (request.methods !== null) {
+      throw new ApiProblem(
+        400,
+        'a comparison of sites takes one method; compare methods on one site with /v1/assess',
+        [{ path: request.surface === 'json' ? 'options.method' : 'method', message: 'one method expected' }],
+      )
+    }
+    let reads: ComparedRead[]
+    if (sites !== undefined) reads = readSitesPart(sites, request, files, config, work.checkpoint)
+    else {
+      reads = files.map((f) => {
+        work.checkpoint()
+        return { name: undefined, file: f, read: readSite(f, request, config), said: [] }
+      })
+      // an option for every file must not move a site that one of the files states
+      for (const r of reads) {
+        const o = r.read.overrides?.[0]
+        if (o) {
+          throw new ApiProblem(
+            422,
+            `${r.file.name}: ${renderOptionNames(overrideWarning(o), request.surface)}; an option applies to every file, so it would move this site: send a sites part with each site's own settings, or leave the option out`,
+            undefined,
+            'unusable-input',
+          )
+        }
+      }
+    }
     checkBatchHours(
       request.options,
-      reads.map((r) => r.series.hours),
+      reads.map((r) => r.read.series.hours),
       config,
       request.optionPath,
     )
     const comparison = runEngine(
       () =>
         compare(
-          reads.map((r) => r.series),
+          reads.map((r) => r.read.series),
           {
             ...request.options,
             onProgress: work.checkpoint,
             criterion: request.criterion,
-            labels: files.map((f) => f.name),
+            labels: reads.map((r) => r.name ?? r.file.name),
+            files: reads.map((r) => r.file.name),
           },
         ),
       request,
     )
     work.checkpoint()
+    const rendered = {
+      ...comparison,
+      assessments: comparison.assessments.map((a, i) =>
+        renderAssessmentWarnings(a, request.surface, reads[comparison.sites[i].given].said),
+      ),
+    }
     if (output.format === 'html') {
       return c.html(
         renderComparisonHtml(
-          comparison.assessments.map((a, i) => ({
+          rendered.assessments.map((a, i) => ({
             assessment: a,
-            options: { info: { fileName: files[i].name } },
+            options: { info: { fileName: comparison.sites[i].file ?? undefined } },
           })),
           { units: output.units, ranking: comparison },
         ),
       )
     }
-    return c.json({
-      ...comparison,
-      assessments: comparison.assessments.map((a) => renderAssessmentWarnings(a, request.surface)),
-    })
+    if (output.format === 'csv') {
+      return csvResponse(
+        c,
+        csvTables(() => renderComparisonCsv(rendered, { units: output.units, table: output.table })),
+      )
+    }
+    return c.json(rendered)
   })
 }
 

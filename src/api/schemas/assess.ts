@@ -7,6 +7,7 @@
 import { z } from 'zod'
 import type { AssessOptions, assess } from '../../analysis/assess.ts'
 import { COMPARE_CRITERIA, type CompareCriterion } from '../../analysis/compare.ts'
+import type { MethodList } from '../../analysis/compare-methods.ts'
 import { ASSESS_DEFAULTS, planAssessment, ASSESS_RANGES as R } from '../../analysis/plan.ts'
 import {
   DRYING_METHOD_KINDS,
@@ -37,9 +38,17 @@ export const assessOptionsJsonSchema = z.strictObject({
     .union([z.string().min(1), z.record(z.string(), z.unknown())])
     .describe('catalogue product id, or an inline profile / profile variant (see GET /v1/products/{id})'),
   method: z
-    .union([z.enum(kinds), z.record(z.string(), z.unknown())])
+    .union([
+      z.enum(kinds),
+      z.literal('all'),
+      z.record(z.string(), z.unknown()),
+      z
+        .array(z.union([z.enum(kinds), z.record(z.string(), z.unknown())]))
+        .min(1)
+        .max(DRYING_METHOD_KINDS.length),
+    ])
     .describe(
-      'drying method kind, or an object {kind, …parameters} (open-air, shade, solar-cabinet, heated)',
+      `drying method kind (${DRYING_METHOD_KINDS.join(', ')}), or an object {kind, …parameters}; /v1/assess also takes a list of them, or "all", to compare methods side by side`,
     ),
   targetWbPct: z
     .number()
@@ -113,6 +122,10 @@ export const assessOptionsJsonSchema = z.strictObject({
     .partialRecord(z.enum(FUEL_IDS), z.number().min(0).max(1e6))
     .optional()
     .describe('price per fuel unit (currency of your choice); missing prices use marked examples'),
+  currency: z
+    .string()
+    .optional()
+    .describe('the currency of your prices (e.g. EUR, US$; 1–12 characters), shown with every cost'),
   weather: weatherReadOptionsSchema.optional().describe('weather-reader options (site, time basis, mapping)'),
   criterion: z.enum(COMPARE_CRITERIA).optional().describe('compare only: ranking criterion'),
 })
@@ -120,7 +133,12 @@ export const assessOptionsJsonSchema = z.strictObject({
 /** Query form (raw file body). */
 export const assessQuerySchema = z.strictObject({
   product: z.string().min(1).describe('catalogue product id (GET /v1/products)'),
-  method: z.enum(kinds).describe('open-air, shade, solar-cabinet or heated (defaults for its parameters)'),
+  method: z
+    .string()
+    .min(1)
+    .describe(
+      `${DRYING_METHOD_KINDS.join(', ')} (defaults for its parameters); /v1/assess also takes several separated by commas, or all, to compare methods side by side`,
+    ),
   targetWb: numberParam('target moisture, wet basis [%]').optional(),
   initialWb: numberParam('initial moisture, wet basis [%]').optional(),
   thickness: numberParam('product thickness [mm]').optional(),
@@ -132,6 +150,7 @@ export const assessQuerySchema = z.strictObject({
   batchKg: numberParam('batch size [kg fresh]').optional(),
   fuel: z.enum(FUEL_IDS).optional().describe('fuel for the heat and cost figures'),
   price: z.string().optional().describe('fuel prices per unit, e.g. propane=0.9;electricity=0.25'),
+  currency: z.string().optional().describe('the currency of your prices (e.g. EUR), shown with every cost'),
   format: z.enum(['json', 'csv', 'html']).optional().describe('answer format; default json'),
   units: z.enum(['si', 'us']).optional().describe('display units of html and csv answers; default si'),
   table: z.string().optional().describe('csv only: one table by id instead of all'),
@@ -141,7 +160,10 @@ export const assessQuerySchema = z.strictObject({
 export type AssessQuery = z.output<typeof assessQuerySchema>
 
 export interface AssessRequest {
+  /** The options, with the first (or only) method. */
   options: AssessOptions
+  /** Several methods to compare side by side (a list or `all`); null for one method. */
+  methods: MethodList | null
   weather: WeatherReadOptions
   criterion?: CompareCriterion
   /** Where the weather options came from, so that messages name them as the request did. */
@@ -208,16 +230,51 @@ function resolveMethod(value: string | Record<string, unknown>, path: string): A
   return r.data
 }
 
+/** The method(s) of a request: one, or a list / `all` to compare side by side. */
+function resolveMethods(
+  value: string | Record<string, unknown> | (string | Record<string, unknown>)[],
+  path: string,
+): { first: AssessOptions['method']; methods: MethodList | null } {
+  if (value === 'all') return { first: resolveMethod(DRYING_METHOD_KINDS[0], path), methods: 'all' }
+  if (!Array.isArray(value)) return { first: resolveMethod(value, path), methods: null }
+  const list = value.map((m, i) => resolveMethod(m, `${path}.${i}`))
+  const kinds = list.map((m) => m.kind)
+  const twice = kinds.findIndex((k, i) => kinds.indexOf(k) !== i)
+  if (twice >= 0)
+    throw new ApiProblem(400, `${path}: ${kinds[twice]} is listed twice`, [
+      { path: `${path}.${twice}`, message: 'method listed twice' },
+    ])
+  return { first: list[0], methods: list.length > 1 ? list : null }
+}
+
+/** The `method` query parameter: one kind, several separated by commas, or `all`. */
+function methodsFromQuery(text: string): string | string[] {
+  if (text.trim() === 'all') return 'all'
+  const kinds = text.split(',').map((k) => k.trim())
+  for (const k of kinds) {
+    if (!(DRYING_METHOD_KINDS as readonly string[]).includes(k)) {
+      throw new ApiProblem(
+        400,
+        `method must be one of ${DRYING_METHOD_KINDS.join(', ')} (several separated by commas, or all); got '${k.slice(0, 40)}'`,
+        [{ path: 'method', message: 'unknown method' }],
+      )
+    }
+  }
+  return kinds.length === 1 ? kinds[0] : kinds
+}
+
 /** From the JSON form (already an object), with field paths prefixed by `prefix`. */
 export function assessRequestFromJson(value: unknown, prefix = 'options'): AssessRequest {
   const o = parseOrProblem(assessOptionsJsonSchema, value, prefix)
   const { product, method, weather, criterion, ...rest } = o
+  const m = resolveMethods(method, `${prefix}.method`)
   return planned({
     options: {
       ...rest,
       product: resolveProduct(product, `${prefix}.product`),
-      method: resolveMethod(method, `${prefix}.method`),
+      method: m.first,
     },
+    methods: m.methods,
     weather: weather ?? {},
     criterion,
     surface: 'json',
@@ -244,13 +301,15 @@ export function assessRequestFromQuery(
     fuelPrices[m[1] as FuelId] = price
   }
   const weather = weatherOptionsFromQuery(q)
+  const m = resolveMethods(methodsFromQuery(q.method), 'method')
   const request = planned({
+    methods: m.methods,
     surface: 'query',
     weather,
     optionPath: (option) => QUERY_NAMES[option] ?? option,
     options: {
       product: resolveProduct(q.product, 'product'),
-      method: resolveMethod(q.method, 'method'),
+      method: m.first,
       targetWbPct: q.targetWb,
       initialWbPct: q.initialWb,
       thicknessMm: q.thickness,
@@ -262,6 +321,7 @@ export function assessRequestFromQuery(
       batchKgFresh: q.batchKg,
       fuel: q.fuel,
       fuelPrices,
+      currency: q.currency,
     },
   })
   return { ...request, query: q }

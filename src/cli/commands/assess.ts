@@ -1,260 +1,80 @@
 import { parseArgs } from 'node:util'
-import { type AssessOptions, type AssessProgress, assess } from '../../analysis/assess.ts'
+import { type AssessOptions, assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
-import { ASSESS_DEFAULTS } from '../../analysis/plan.ts'
+import {
+  compareMethods,
+  METHOD_COMPARISON_SCHEMA,
+  type MethodComparison,
+  type MethodList,
+} from '../../analysis/compare-methods.ts'
 import { FUELS } from '../../drying/fuels.ts'
-import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
-import { methodModel } from '../../drying/methods/index.ts'
 import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
-import { productById } from '../../product/catalogue.ts'
-import type { ProductProfile } from '../../product/profile.ts'
-import { parseUserProfile } from '../../product/profile-schema.ts'
+import { renderMethodComparisonCsv, renderMethodComparisonHtml } from '../../report/methods-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
-import { readWeatherBytes } from '../../weather/read-weather.ts'
-import type { HourlySeries } from '../../weather/series.ts'
-import { WeatherInputError } from '../../weather/weather-input-error.ts'
-import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
 import {
+  type IndexEntry,
+  renderSitesIndexCsv,
+  renderSitesIndexHtml,
+  renderSitesIndexText,
+  sitesIndexJson,
+} from '../../report/sites-index.ts'
+import { renderOptionNames } from '../../weather/option-spec.ts'
+import type { WeatherReadResult } from '../../weather/result.ts'
+import type { HourlySeries } from '../../weather/series.ts'
+import { overrideWarning } from '../../weather/site-overrides.ts'
+import { type CliCommand, type CliIo, UsageError } from '../command.ts'
+import {
+  ENGINE_OPTIONS_HELP,
+  ENGINE_PARSE_OPTIONS,
+  type EngineValues,
+  engineOptions,
+  methodListFromFlags,
+  progressPrinter,
+  readSeries,
+} from '../engine-options.ts'
+import { methodComparisonText } from '../methods-text.ts'
+import {
+  distinctStems,
+  FORMAT_EXTENSION,
   REPORT_OUTPUT_HELP,
   REPORT_OUTPUT_OPTIONS,
   type ReportOutputChoice,
   reportOutputChoice,
+  writeFilesInto,
   writeReportOutput,
 } from '../report-output.ts'
-import { WEATHER_FLAGS_HELP, WEATHER_PARSE_OPTIONS, weatherOptionsFromCli } from '../weather-flags.ts'
-
-export const ENGINE_OPTIONS_HELP = `Product and method:
-  --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
-  --method <kind>           ${DRYING_METHOD_KINDS.join(' | ')}
-  --target-wb <%>  --initial-wb <%>  --thickness <mm>
-  open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
-  shade:          --loading <kg/m²>
-  solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
-  heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
-  any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
-                  API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
-Season and batches:
-  --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
-                 every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
-  --step-days <n>  --start-hour <0–23> (default ${ASSESS_DEFAULTS.startHourLocal})
-  --deadline-days <n> (default ${ASSESS_DEFAULTS.deadlineDays})
-  --max-days <n> (default ${ASSESS_DEFAULTS.maxDays}, or the deadline when longer)
-  --batch-kg <kg> (default ${ASSESS_DEFAULTS.batchKgFresh})
-Usable-hour thresholds (stated in the assumptions):
-  --min-temp <°C> (default 5; use 0 or lower for grain)  --min-deficit <g/kg> (default 0.2)
-  --rain-mm <mm/h> (default 0.2)  --night-cooling <K> (default 2)
-Heat and fuel:
-  --fuel <${FUEL_IDS.join('|')}>  --price <fuel>=<price per unit> (repeatable; defaults are examples)
-${WEATHER_FLAGS_HELP}
-  --quiet  no progress on stderr`
+import { type CliSite, readSite, readSitesFile, refuseWeatherFlags, SITES_HELP } from '../sites.ts'
 
 const help = `dryhours assess: can this site's weather dry this product, when, how fast, with how much heat
 
 Usage:
-  dryhours assess <file> --product <id|profile.json> --method <kind> [options]
-                  [--json | --format text|json|html|csv] [--units si|us] [--out <file>]
+  dryhours assess <file> --product <id|profile.json> --method <kind>[,<kind>…|all] [options]
+                  [--json | --format text|json|html|csv] [--units si|us] [--out <file>] [--force]
+  dryhours assess --sites <sites.csv> … [--format html|csv|json|text --out-dir <folder>] [--force]
 
 Prints the usable drying hours per month (median and the P10–P90 range across years), the best
 start windows, a start-date table and the supplemental heat and fuel; --json prints the full
 assessment (monthly, hourOfDay, startDates, heat, assumptions, warnings, coverage).
 
+With several methods (--method open-air,solar-cabinet,heated or --method all): the methods side by
+side on the same file and season (days to target, the share of years finishing by the deadline,
+spoilage where assessed, heat, fuel and the fuel cost per kg of dried product), a season calendar
+(one row per method, one cell per start week: dries, marginal, needs heat, spoils first, each by a
+stated rule) and a recommendation that states its criterion; --json gives the comparison with every
+method's assessment.
+
+With --sites: every site of the sites file with its own settings; --out-dir writes one summary per
+site (named after the site) and an index page linking them. Nothing is overwritten without --force.
+
 ${ENGINE_OPTIONS_HELP}
+
+${SITES_HELP}
 
 ${REPORT_OUTPUT_HELP}
 
 Safety: dried food must reach a safe water activity; combustion heaters put CO and combustion
 products in the air (prefer indirect heaters for food); gas and electrical work by licensed trades.`
-
-export const ENGINE_PARSE_OPTIONS = {
-  product: { type: 'string' },
-  method: { type: 'string' },
-  'target-wb': { type: 'string' },
-  'initial-wb': { type: 'string' },
-  thickness: { type: 'string' },
-  absorptivity: { type: 'string' },
-  loading: { type: 'string' },
-  'uncovered-night': { type: 'boolean' },
-  'uncovered-rain': { type: 'boolean' },
-  'collector-area': { type: 'string' },
-  tilt: { type: 'string' },
-  azimuth: { type: 'string' },
-  'air-flow': { type: 'string' },
-  'set-point': { type: 'string' },
-  'target-rh': { type: 'string' },
-  efficiency: { type: 'string' },
-  fuel: { type: 'string' },
-  price: { type: 'string', multiple: true },
-  param: { type: 'string', multiple: true },
-  start: { type: 'string' },
-  end: { type: 'string' },
-  'step-days': { type: 'string' },
-  'start-hour': { type: 'string' },
-  'deadline-days': { type: 'string' },
-  'max-days': { type: 'string' },
-  'batch-kg': { type: 'string' },
-  'min-temp': { type: 'string' },
-  'min-deficit': { type: 'string' },
-  'rain-mm': { type: 'string' },
-  'night-cooling': { type: 'string' },
-  ...WEATHER_PARSE_OPTIONS,
-  json: { type: 'boolean' },
-  quiet: { type: 'boolean' },
-} as const
-
-export type EngineValues = Record<string, string | string[] | boolean | undefined>
-
-async function loadProduct(value: string | undefined, io: CliIo): Promise<ProductProfile> {
-  if (value === undefined)
-    throw new UsageError('--product <id|profile.json> is required (list: dryhours products)')
-  if (!value.toLowerCase().endsWith('.json')) return productById(value)
-  const bytes = await io.readFile(value)
-  let json: unknown
-  try {
-    json = JSON.parse(new TextDecoder().decode(bytes))
-  } catch (e) {
-    throw new UsageError(`${value}: not valid JSON (${(e as Error).message})`)
-  }
-  return parseUserProfile(json)
-}
-
-/**
- * `--param name=value` into `method`: any parameter of the method's schema (drying/methods/<kind>.ts), so a
- * method needs no flags of its own here. Values: true/false, a number, or text. Unknown names are refused.
- */
-function setMethodParams(method: Record<string, unknown>, params: string[]): void {
-  const shape = methodModel(String(method.kind)).schema.shape as Record<string, unknown>
-  const names = Object.keys(shape).filter((k) => k !== 'kind')
-  for (const p of params) {
-    const m = /^([A-Za-z][A-Za-z0-9]*)=(.*)$/.exec(p)
-    if (!m) throw new UsageError(`--param must be <name>=<value>, got '${p}'`)
-    if (!names.includes(m[1])) {
-      throw new UsageError(
-        `--param ${m[1]}: not a parameter of ${method.kind}; its parameters are ${names.join(', ')}`,
-      )
-    }
-    const text = m[2]
-    method[m[1]] =
-      text === 'true'
-        ? true
-        : text === 'false'
-          ? false
-          : /^[-+0-9.]/.test(text)
-            ? numberOption(`param ${m[1]}`, text)
-            : text
-  }
-}
-
-/** Build the assess options from parsed CLI values (method options, season, heat, prices). */
-export async function engineOptions(values: EngineValues, io: CliIo): Promise<AssessOptions> {
-  const str = (k: string): string | undefined => values[k] as string | undefined
-  const num = (k: string): number | undefined => numberOption(k, str(k))
-  const kind = str('method')
-  if (kind === undefined) throw new UsageError(`--method is required: ${DRYING_METHOD_KINDS.join(', ')}`)
-  if (!(DRYING_METHOD_KINDS as readonly string[]).includes(kind)) {
-    throw new UsageError(`--method must be one of ${DRYING_METHOD_KINDS.join(', ')}, got '${kind}'`)
-  }
-  const product = await loadProduct(str('product'), io)
-  const method: Record<string, unknown> = { kind }
-  const set = (key: string, v: unknown): void => {
-    if (v !== undefined) method[key] = v
-  }
-  const fuel = str('fuel') as FuelId | undefined
-  if (fuel !== undefined && !(FUEL_IDS as readonly string[]).includes(fuel)) {
-    throw new UsageError(`--fuel must be one of ${FUEL_IDS.join(', ')}, got '${fuel}'`)
-  }
-  const backupHeater: Record<string, unknown> = {}
-  if (kind === 'open-air') {
-    set('absorptivity', num('absorptivity'))
-    set('loadingKgPerM2', num('loading'))
-    if (values['uncovered-night']) method.coveredAtNight = false
-    if (values['uncovered-rain']) method.coveredInRain = false
-  } else if (kind === 'shade') {
-    set('loadingKgPerM2', num('loading'))
-  } else if (kind === 'solar-cabinet') {
-    set('collectorAreaM2PerTonne', num('collector-area'))
-    set('tiltDeg', num('tilt'))
-    set('azimuthDeg', num('azimuth'))
-    set('airFlowKgPerSPerM2', num('air-flow'))
-  } else {
-    set('setPointC', num('set-point'))
-    set('targetRhPct', num('target-rh'))
-    set('airFlowKgPerSPerTonne', num('air-flow'))
-    set('heaterEfficiency', num('efficiency'))
-    set('fuel', fuel)
-  }
-  if (kind !== 'heated') {
-    if (num('efficiency') !== undefined) backupHeater.heaterEfficiency = num('efficiency')
-    if (fuel !== undefined) backupHeater.fuel = fuel
-    if (num('target-rh') !== undefined) backupHeater.targetRhPct = num('target-rh')
-    if (num('set-point') !== undefined) backupHeater.setPointC = num('set-point')
-  }
-  setMethodParams(method, (values.param as string[] | undefined) ?? [])
-  const fuelPrices: Partial<Record<FuelId, number>> = {}
-  for (const p of (values.price as string[] | undefined) ?? []) {
-    const m = /^([a-z-]+)=(.+)$/.exec(p)
-    if (!m || !(FUEL_IDS as readonly string[]).includes(m[1])) {
-      throw new UsageError(`--price must be <fuel>=<price>, fuel one of ${FUEL_IDS.join(', ')}; got '${p}'`)
-    }
-    const price = numberOption('price', m[2]) as number
-    fuelPrices[m[1] as FuelId] = price
-  }
-  const thresholds: Record<string, number> = {}
-  const setThreshold = (key: string, option: string): void => {
-    const v = num(option)
-    if (v !== undefined) thresholds[key] = v
-  }
-  setThreshold('minProductTempC', 'min-temp')
-  setThreshold('minDeficitGPerKg', 'min-deficit')
-  setThreshold('rainMm', 'rain-mm')
-  setThreshold('nightSurfaceCoolingK', 'night-cooling')
-  return {
-    product,
-    method: method as AssessOptions['method'],
-    thresholds,
-    targetWbPct: num('target-wb'),
-    initialWbPct: num('initial-wb'),
-    thicknessMm: num('thickness'),
-    seasonStart: str('start'),
-    seasonEnd: str('end'),
-    startStepDays: num('step-days'),
-    startHourLocal: num('start-hour'),
-    deadlineDays: num('deadline-days'),
-    maxDays: num('max-days'),
-    batchKgFresh: num('batch-kg'),
-    backupHeater,
-    fuel,
-    fuelPrices,
-  }
-}
-
-/** Read a weather file through io with the CLI's weather options. */
-export async function readSeries(file: string, values: EngineValues, io: CliIo): Promise<HourlySeries> {
-  const options = weatherOptionsFromCli(values)
-  const bytes = await io.readFile(file)
-  try {
-    const series = readWeatherBytes(bytes, options).series
-    if (series.site.name.trim() === '') series.site.name = file.split(/[\\/]/).pop() ?? file
-    return series
-  } catch (e) {
-    if (e instanceof WeatherInputError || e instanceof RangeError)
-      throw new UsageError(`${file}: ${e.message}`)
-    throw e
-  }
-}
-
-/** A progress printer for stderr: one line per stage step, at most every 10 %. */
-export function progressPrinter(io: CliIo, label: string): (p: AssessProgress) => void {
-  let lastStage = ''
-  let lastTenth = -1
-  return (p) => {
-    const tenth = Math.floor((10 * p.done) / Math.max(1, p.total))
-    if (p.stage === lastStage && tenth === lastTenth) return
-    lastStage = p.stage
-    lastTenth = tenth
-    io.stderr(`${label}: ${p.stage} ${p.done}/${p.total}\n`)
-  }
-}
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
@@ -308,10 +128,11 @@ export function assessmentText(a: Assessment): string {
   out.push(
     `Supplemental heat to finish within ${a.deadlineDays} days: median ${f0(h.heatToAirKwhPerTonne.median)} kWh/t into the air (P10 ${f0(h.heatToAirKwhPerTonne.p10)}, P90 ${f0(h.heatToAirKwhPerTonne.p90)}), ${f0(h.fuelHeatKwhPerTonne.median)} kWh/t of fuel at efficiency ${h.heaterEfficiency}; batch of ${h.batchKgFresh} kg: ${f0(h.heatToAirKwhPerBatch.median)} kWh`,
   )
+  const cur = h.currency ? ` ${h.currency}` : ''
   for (const fu of h.fuels) {
     const mark = fu.priceIsExample ? ' (example price)' : ''
     out.push(
-      `  ${FUELS[fu.fuel].name.padEnd(36)} ${f1(fu.quantityPerTonne).padStart(8)} ${fu.unit}/t  cost ${f1(fu.costPerTonne)}/t at ${fu.pricePerUnit}/${fu.unit}${mark}`,
+      `  ${FUELS[fu.fuel].name.padEnd(36)} ${f1(fu.quantityPerTonne).padStart(8)} ${fu.unit}/t  cost ${f1(fu.costPerTonne)}${cur}/t at ${fu.pricePerUnit}${cur}/${fu.unit}${mark}`,
     )
   }
   const c = h.crossCheck
@@ -333,53 +154,172 @@ export function assessmentText(a: Assessment): string {
   return `${out.join('\n')}\n`
 }
 
-/** The assessment in the chosen format (html and csv: the report's renderings). */
-function renderAssessment(a: Assessment, o: ReportOutputChoice, file: string): string {
-  const info = { fileName: file.split(/[\\/]/).pop() }
-  if (o.format === 'json') return `${JSON.stringify(a)}\n`
-  if (o.format === 'html') return renderReportHtml(a, { units: o.units, info })
+/** The result of one site: one method's assessment, or several methods side by side. */
+type SiteResult = Assessment | MethodComparison
+
+function isMethods(r: SiteResult): r is MethodComparison {
+  return r.schema === METHOD_COMPARISON_SCHEMA
+}
+
+/** The result in the chosen format (html and csv: the report's renderings, the same as from its JSON). */
+function renderResult(r: SiteResult, o: ReportOutputChoice, file: string): string {
+  const fileName = file.split(/[\\/]/).pop()
+  const info = { fileName }
+  if (o.format === 'json') return `${JSON.stringify(r)}\n`
+  if (o.format === 'html')
+    return isMethods(r)
+      ? renderMethodComparisonHtml(r, { units: o.units, fileName })
+      : renderReportHtml(r, { units: o.units, info })
   if (o.format === 'csv') {
     try {
-      return renderReportCsv(a, { units: o.units, info, table: o.table })
+      return isMethods(r)
+        ? renderMethodComparisonCsv(r, { units: o.units, table: o.table })
+        : renderReportCsv(r, { units: o.units, info, table: o.table })
     } catch (e) {
       if (e instanceof RangeError) throw new UsageError(`--table: ${e.message}`)
       throw e
     }
   }
-  return assessmentText(a)
+  return isMethods(r) ? methodComparisonText(r) : assessmentText(r)
+}
+
+/** Assess one series with one method, or compare the listed methods. */
+function runSite(series: HourlySeries, options: AssessOptions, methods: MethodList): SiteResult {
+  try {
+    if (methods !== 'all' && methods.length === 1) return assess(series, options)
+    return compareMethods(series, options, methods)
+  } catch (e) {
+    if (e instanceof RangeError) throw new UsageError(e.message)
+    throw e
+  }
+}
+
+/**
+ * The reader's warnings that say an option replaced what the file states: on stderr, and first among the
+ * result's warnings (so the JSON, and the HTML made from it, say it too).
+ */
+function sayOverrides(
+  io: CliIo,
+  read: WeatherReadResult,
+  result: SiteResult,
+  label: string,
+  surface: 'cli' | 'query',
+): void {
+  const lines = (read.overrides ?? []).map(
+    (o) => `${label}: ${renderOptionNames(overrideWarning(o), surface)}`,
+  )
+  for (const l of lines) io.stderr(`warning: ${l}\n`)
+  if (lines.length === 0) return
+  for (const x of isMethods(result) ? result.assessments : [result]) x.warnings.unshift(...lines)
+}
+
+/** `assess --sites`: every site with its own settings, one result each; files into --out-dir with an index. */
+async function assessSites(
+  sitesFile: string,
+  values: EngineValues,
+  output: ReportOutputChoice,
+  io: CliIo,
+): Promise<number> {
+  refuseWeatherFlags(values)
+  const sites = await readSitesFile(sitesFile, io)
+  if ((output.format === 'html' || output.format === 'csv') && output.outDir === undefined) {
+    throw new UsageError(
+      `with --sites, --format ${output.format} writes one file per site: give --out-dir <folder>`,
+    )
+  }
+  const options = await engineOptions(values, io)
+  const methods = methodListFromFlags(values)
+  const results: { site: CliSite; result: SiteResult }[] = []
+  for (const site of sites) {
+    const read = await readSite(site, io)
+    if (!values.quiet) options.onProgress = progressPrinter(io, `assess ${site.name}`)
+    let result: SiteResult
+    try {
+      result = runSite(read.series, options, methods)
+    } catch (e) {
+      if (e instanceof UsageError) throw new UsageError(`site '${site.name}' (${site.file}): ${e.message}`)
+      throw e
+    }
+    sayOverrides(io, read, result, `site '${site.name}' (${site.file})`, 'query')
+    results.push({ site, result })
+  }
+  if (output.outDir === undefined) {
+    const text =
+      output.format === 'json'
+        ? `${JSON.stringify({
+            schema: 'dryhours.site-assessments/1',
+            sites: results.map((r) => ({ name: r.site.name, file: r.site.file, result: r.result })),
+          })}\n`
+        : results.map((r) => renderResult(r.result, output, r.site.path)).join('\n')
+    await writeReportOutput(io, output, text)
+    return 0
+  }
+  const ext = FORMAT_EXTENSION[output.format]
+  const stems = distinctStems(results.map((r) => r.site.name))
+  const entries: IndexEntry[] = results.map((r, i) => ({
+    name: r.site.name,
+    file: r.site.file,
+    output: `${stems[i]}.${ext}`,
+    result: r.result,
+  }))
+  const index =
+    output.format === 'html'
+      ? renderSitesIndexHtml(entries, `Drying summaries: ${sites.length} farms`)
+      : output.format === 'csv'
+        ? renderSitesIndexCsv(entries)
+        : output.format === 'json'
+          ? `${JSON.stringify(sitesIndexJson(entries))}\n`
+          : renderSitesIndexText(entries)
+  await writeFilesInto(
+    io,
+    output.outDir,
+    [
+      ...results.map((r, i) => ({
+        name: entries[i].output,
+        text: renderResult(r.result, output, r.site.path),
+      })),
+      { name: `index.${ext}`, text: index },
+    ],
+    output.force,
+  )
+  return 0
 }
 
 export const assessCommand: CliCommand = {
   name: 'assess',
-  summary: 'usable drying hours, start-date table, batch times and supplemental heat for one site',
+  summary:
+    'usable drying hours, start-date table, batch times and heat for one site, several methods or many farms',
   help,
   async run(args, io) {
     let parsed: { values: EngineValues; positionals: string[] }
     try {
       parsed = parseArgs({
         args,
-        options: { ...ENGINE_PARSE_OPTIONS, ...REPORT_OUTPUT_OPTIONS },
+        options: { ...ENGINE_PARSE_OPTIONS, ...REPORT_OUTPUT_OPTIONS, sites: { type: 'string' } },
         allowPositionals: true,
       })
     } catch (e) {
       throw new UsageError((e as Error).message)
     }
-    if (parsed.positionals.length !== 1)
-      throw new UsageError('give exactly one weather file: dryhours assess <file>')
-    const file = parsed.positionals[0]
     const values = parsed.values
     const output = reportOutputChoice(values, ['text', 'json', 'html', 'csv'])
-    let assessment: Assessment
-    try {
-      const options = await engineOptions(values, io)
-      const series = await readSeries(file, values, io)
-      if (!values.quiet) options.onProgress = progressPrinter(io, `assess ${file}`)
-      assessment = assess(series, options)
-    } catch (e) {
-      if (e instanceof RangeError) throw new UsageError(e.message)
-      throw e
+    const sitesFile = values.sites as string | undefined
+    if (sitesFile !== undefined) {
+      if (parsed.positionals.length > 0)
+        throw new UsageError('give a weather file or --sites <sites.csv>, not both')
+      return assessSites(sitesFile, values, output, io)
     }
-    await writeReportOutput(io, output, renderAssessment(assessment, output, file))
+    if (output.outDir !== undefined) throw new UsageError('--out-dir goes with --sites (one file per site)')
+    if (parsed.positionals.length !== 1)
+      throw new UsageError('give exactly one weather file (dryhours assess <file>), or --sites <sites.csv>')
+    const file = parsed.positionals[0]
+    const options = await engineOptions(values, io)
+    const methods = methodListFromFlags(values)
+    const read = await readSeries(file, values, io)
+    if (!values.quiet) options.onProgress = progressPrinter(io, `assess ${file}`)
+    const result = runSite(read.series, options, methods)
+    sayOverrides(io, read, result, file, 'cli')
+    await writeReportOutput(io, output, renderResult(result, output, file))
     return 0
   },
 }

@@ -51,7 +51,7 @@ Options:
   --json               the full assessment as JSON (same as --format json)
   --format <f>         text (default), json, html or csv; --table <id> picks one CSV table
                        (batches, limits, physics, regression, rejected-rows)
-  --out <file>         write to a file instead of standard output
+  --out <file>         write to a file instead of standard output (an existing file only with --force)
 
 ${WEATHER_FLAGS_HELP}
 
@@ -149,6 +149,7 @@ export const energyChartCommand: CliCommand = {
           format: { type: 'string' },
           table: { type: 'string' },
           out: { type: 'string' },
+          force: { type: 'boolean' },
         },
         allowPositionals: true,
       })
@@ -229,7 +230,7 @@ export const energyChartCommand: CliCommand = {
     }
     const outFile = str('out')
     if (outFile !== undefined) {
-      await io.writeFile(outFile, output)
+      await io.writeFile(outFile, output, { overwrite: values.force === true })
       io.stderr(`wrote ${outFile}\n`)
     } else io.stdout(output)
     return 0

@@ -21,7 +21,8 @@ and Italian words (tiempo, temps, Zeit, tempo; peso, poids, masse, Gewicht, mass
 columns it read. Lines starting with # are comments. An empty mass cell is a missed weighing.
 Fits Lewis, Page and Fick diffusion by Levenberg–Marquardt and picks the best by AICc. A weighing
 far off the curve (tray off the rack) is left out and reported. --save writes a product profile
-based on --product (required with --save) with the fitted kinetics.`
+based on --product (required with --save) with the fitted kinetics; an existing file is replaced only
+with --force.`
 
 function fmt(x: number, d = 4): string {
   return Number.isFinite(x) ? x.toPrecision(d) : String(x)
@@ -81,6 +82,7 @@ const fitOptions = {
   save: { type: 'string' },
   id: { type: 'string' },
   json: { type: 'boolean' },
+  force: { type: 'boolean' },
 } as const
 
 export const fitCommand: CliCommand = {
@@ -133,7 +135,9 @@ export const fitCommand: CliCommand = {
       if (values.save !== undefined && base) {
         const id = values.id ?? `${base.id}-calibrated`
         const profile = profileFromFit(fit, base, id, targetWbPct)
-        await io.writeFile(values.save, `${JSON.stringify(profile, null, 2)}\n`)
+        await io.writeFile(values.save, `${JSON.stringify(profile, null, 2)}\n`, {
+          overwrite: values.force === true,
+        })
         saved = values.save
       }
       if (values.json) {

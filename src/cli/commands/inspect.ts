@@ -22,7 +22,8 @@ with line numbers.
   --json               the same as JSON, with per variable the hours, mean, min and max in SI
   --export <out.csv>   write the hourly series the engine will use: UTC hour starts (time_utc, ISO 8601
                        with Z), SI units, irradiance the mean over the hour, rain its total, empty =
-                       missing, and each hour's flags; dryhours reads this file back unchanged
+                       missing, and each hour's flags; dryhours reads this file back unchanged;
+                       an existing file is replaced only with --force
 
 ${WEATHER_FLAGS_HELP}
 
@@ -156,6 +157,7 @@ export const inspectCommand: CliCommand = {
           ...WEATHER_PARSE_OPTIONS,
           json: { type: 'boolean' },
           export: { type: 'string' },
+          force: { type: 'boolean' },
         },
         allowPositionals: true,
       })
@@ -179,7 +181,7 @@ export const inspectCommand: CliCommand = {
     if (out !== undefined) {
       if (out === '' || out === file)
         throw new UsageError('--export needs an output file other than the input')
-      await io.writeFile(out, hourlyExportCsv(result.series))
+      await io.writeFile(out, hourlyExportCsv(result.series), { overwrite: values.force === true })
     }
     io.stdout(values.json ? `${JSON.stringify(inspectJson(result))}\n` : text(result, file))
     if (out !== undefined && !values.json)
