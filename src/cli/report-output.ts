@@ -75,6 +75,12 @@ export function reportOutputChoice(
   }
 }
 
+/** Refuse an existing `--out` file before any work (the write refuses it too; this saves the wait). */
+export async function checkOutFree(io: CliIo, choice: ReportOutputChoice): Promise<void> {
+  if (choice.out !== undefined && !choice.force && (await io.exists?.(choice.out)))
+    throw new UsageError(`'${choice.out}' already exists: give --force to replace it, or another name`)
+}
+
 /** Write `text` to `--out` (saying so on stderr) or to stdout. */
 export async function writeReportOutput(io: CliIo, choice: ReportOutputChoice, text: string): Promise<void> {
   if (choice.out !== undefined) {

@@ -35,6 +35,7 @@ import {
 } from '../engine-options.ts'
 import { methodComparisonText } from '../methods-text.ts'
 import {
+  checkOutFree,
   distinctStems,
   FORMAT_EXTENSION,
   REPORT_OUTPUT_HELP,
@@ -303,6 +304,7 @@ export const assessCommand: CliCommand = {
     }
     const values = parsed.values
     const output = reportOutputChoice(values, ['text', 'json', 'html', 'csv'])
+    await checkOutFree(io, output)
     const sitesFile = values.sites as string | undefined
     if (sitesFile !== undefined) {
       if (parsed.positionals.length > 0)

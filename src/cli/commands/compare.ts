@@ -16,6 +16,7 @@ import {
   readSeries,
 } from '../engine-options.ts'
 import {
+  checkOutFree,
   REPORT_OUTPUT_HELP,
   REPORT_OUTPUT_OPTIONS,
   reportOutputChoice,
@@ -124,6 +125,7 @@ export const compareCommand: CliCommand = {
         'give at least two weather files (dryhours compare <file> <file> …), or --sites <sites.csv>',
       )
     const output = reportOutputChoice(values, ['text', 'json', 'html', 'csv'])
+    await checkOutFree(io, output)
     if (output.outDir !== undefined)
       throw new UsageError('--out-dir goes with assess --sites; compare writes one file (--out)')
     const criterion = values.criterion as string | undefined

@@ -1,0 +1,126 @@
+import { describe, expect, it } from 'vitest'
+import { assess } from '../../src/analysis/assess.ts'
+import {
+  CALENDAR_RULES,
+  CALENDAR_STATES,
+  calendarState,
+  compareMethods,
+  driedKgPerTonne,
+} from '../../src/analysis/compare-methods.ts'
+import { GOOD_START_PROBABILITY } from '../../src/analysis/start-dates.ts'
+import { productById } from '../../src/product/catalogue.ts'
+import { demoSeries, sliceSeries } from '../drying/demo-weather.ts'
+
+const options = {
+  product: productById('grapes-to-raisins'),
+  seasonStart: '08-01',
+  seasonEnd: '09-30',
+  startStepDays: 2,
+  currency: 'EUR',
+  fuelPrices: { propane: 0.8 },
+}
+
+describe('methods side by side (analysis/compare-methods.ts)', () => {
+  const c = compareMethods(demoSeries('dryUpland'), options, [
+    { kind: 'open-air' },
+    { kind: 'solar-cabinet' },
+    { kind: 'heated' },
+  ])
+
+  it('carries each method’s own assessment, equal to assessing it alone', () => {
+    expect(c.methods.map((m) => m.kind)).toEqual(['open-air', 'solar-cabinet', 'heated'])
+    const alone = assess(demoSeries('dryUpland'), { ...options, method: { kind: 'solar-cabinet' } })
+    expect(c.assessments[1]).toEqual(alone)
+  })
+
+  it('figures per method come from its start-date table and heat summary', () => {
+    c.methods.forEach((m, i) => {
+      const a = c.assessments[i]
+      const rows = a.startDates.filter((r) => r.years > 0)
+      const mean = rows.reduce((s, r) => s + r.probabilityWithinDeadline, 0) / rows.length
+      expect(m.probabilityWithinDeadline).toBeCloseTo(mean, 3)
+      expect(m.heatToAirKwhPerTonne).toEqual(a.heat.heatToAirKwhPerTonne)
+      const fuel = a.heat.fuels.find((f) => f.fuel === a.heat.selectedFuel)
+      expect(m.fuel.pricePerUnit).toBe(0.8)
+      expect(m.fuel.priceIsExample).toBe(false)
+      expect(m.costPerTonneFresh).toBe(fuel?.costPerTonne)
+      // cost per kg of DRIED product: per tonne fresh ÷ the dried mass of a tonne fresh
+      if (m.costPerTonneFresh !== null)
+        expect(m.costPerKgDried).toBeCloseTo(m.costPerTonneFresh / c.driedKgPerTonneFresh, 2)
+    })
+    expect(c.currency).toBe('EUR')
+    expect(c.assessments.every((a) => a.heat.currency === 'EUR')).toBe(true)
+  })
+
+  it('dried mass per tonne: the dry matter kept, 1000 × (1 − 0.782) / (1 − 0.18) = 265.9 kg (mass balance)', () => {
+    expect(driedKgPerTonne(78.2, 18)).toBeCloseTo(265.85, 2)
+    expect(c.driedKgPerTonneFresh).toBeCloseTo(265.9, 1)
+  })
+
+  it('the season calendar: one row per method, one cell per week, each cell by its stated rule', () => {
+    expect(c.calendar.weekStarts[0]).toBe('08-01')
+    expect(c.calendar.weekStarts).toHaveLength(9) // 08-01 … 09-26, 61 days
+    expect(c.calendar.rules.map((r) => r.state)).toEqual([...CALENDAR_STATES])
+    c.calendar.rows.forEach((row, i) => {
+      const a = c.assessments[i]
+      expect(row.cells).toHaveLength(9)
+      // recompute each week's mean share from the start-date rows (every 2 days from 08-01)
+      row.cells.forEach((cell, w) => {
+        const rows = a.startDates.filter((r, k) => Math.floor((2 * k) / 7) === w && r.years > 0)
+        const p = rows.reduce((s, r) => s + r.probabilityWithinDeadline, 0) / rows.length
+        expect(Math.abs((row.probabilityWithinDeadline[w] ?? -1) - p)).toBeLessThanOrEqual(0.0005 + 1e-12)
+        expect(cell).toBe(p >= GOOD_START_PROBABILITY ? 'dries' : p >= 0.5 ? 'marginal' : 'needs-heat')
+      })
+    })
+    // the dry upland: open air dries in early August, heated air every week
+    expect(c.calendar.rows[0].cells[0]).toBe('dries')
+    expect(c.calendar.rows[2].cells.every((s) => s === 'dries')).toBe(true)
+  })
+
+  it('calendar states follow their rules, spoilage first', () => {
+    expect(calendarState(null, null)).toBe('no-data')
+    expect(calendarState(1, 0.6)).toBe('spoils-first')
+    expect(calendarState(1, 0.3)).toBe('marginal')
+    expect(calendarState(0.79, null)).toBe('marginal')
+    expect(calendarState(0.49, null)).toBe('needs-heat')
+    expect(calendarState(0.8, 0.1)).toBe('dries')
+    for (const s of CALENDAR_STATES) expect(CALENDAR_RULES[s].length).toBeGreaterThan(20)
+  })
+
+  it('recommends the cheapest method per kg dried among those that finish in 80 % of years, and says so', () => {
+    const ok = c.methods.filter((m) => (m.probabilityWithinDeadline ?? 0) >= GOOD_START_PROBABILITY)
+    const cheapest = [...ok].sort((x, y) => (x.costPerKgDried ?? 1e9) - (y.costPerKgDried ?? 1e9))[0]
+    expect(c.recommendation.kind).toBe(cheapest.kind)
+    expect(c.recommendation.criterion).toContain('lowest fuel cost per kg of dried product')
+    expect(c.recommendation.criterion).toContain('80 %')
+    expect(c.recommendation.text).toContain(cheapest.label)
+    expect(c.recommendation.text).toContain('EUR per kg dried')
+  })
+
+  it('spoilage is reported as not assessed, never invented, while the assessments carry no model', () => {
+    const carries = c.assessments.some((a) => a.startDates.some((r) => 'spoilage' in r))
+    expect(c.spoilageAssessed).toBe(carries)
+    if (!carries) expect(c.methods.every((m) => m.spoilageProbability === null)).toBe(true)
+  })
+
+  it('with all, a method the file cannot serve is listed with its reason; listed by name, it is an error', () => {
+    const s = sliceSeries(demoSeries('dryUpland'), 24 * 200, 24 * 60)
+    s.ghiWm2 = new Float64Array(s.hours).fill(Number.NaN)
+    s.site = { ...s.site, latitudeDeg: null, longitudeDeg: null }
+    const short = { ...options, seasonStart: '07-20', seasonEnd: '07-27', startStepDays: 7, maxDays: 20 }
+    const all = compareMethods(s, short, 'all')
+    expect(all.notAssessed.map((n) => n.kind).sort()).toEqual(['open-air', 'solar-cabinet'])
+    expect(all.notAssessed[0].reason).toMatch(/needs the sun/)
+    expect(all.methods.map((m) => m.kind)).toEqual(['shade', 'heated'])
+    expect(() => compareMethods(s, short, [{ kind: 'open-air' }, { kind: 'heated' }])).toThrow(
+      /open-air method needs the sun/,
+    )
+    expect(() => compareMethods(s, short, [{ kind: 'heated' }, { kind: 'heated' }])).toThrow(/twice/)
+  })
+
+  it('a currency that is not a short printable name is refused before any work', () => {
+    expect(() =>
+      compareMethods(demoSeries('dryUpland'), { ...options, currency: '<b>' }, [{ kind: 'heated' }]),
+    ).toThrow(/currency/)
+  })
+})
