@@ -4,12 +4,13 @@
  */
 import type { AirState } from '../physics/air-state.ts'
 
-/** The keys of `dryhours air --json` and of GET /v1/air, in this order. */
-export function airStateJson(s: AirState): Record<string, number> {
+/** The keys of `dryhours air --json` and of GET /v1/air, in this order: every figure the text shows. */
+export function airStateJson(s: AirState): Record<string, number | null> {
   return {
     dryBulbC: s.dryBulbC,
     wetBulbC: s.wetBulbC,
     dewPointC: s.dewPointC,
+    frostPointC: s.frostPointC,
     relativeHumidityPct: s.relativeHumidityPct,
     humidityRatioGPerKg: s.humidityRatioGPerKg,
     enthalpyKjPerKg: s.enthalpyKjPerKg,

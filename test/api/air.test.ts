@@ -26,6 +26,7 @@ describe('GET /v1/air', () => {
       'dryBulbC',
       'wetBulbC',
       'dewPointC',
+      'frostPointC',
       'relativeHumidityPct',
       'humidityRatioGPerKg',
       'enthalpyKjPerKg',

@@ -7,6 +7,7 @@
 import { execFile } from 'node:child_process'
 import { join } from 'node:path'
 import { promisify } from 'node:util'
+import psychrolib from 'psychrolib'
 import { describe, expect, it } from 'vitest'
 import type { CliIo } from '../../src/cli/command.ts'
 import { runCli } from '../../src/cli/main.ts'
@@ -39,6 +40,7 @@ const KEYS = [
   'dryBulbC',
   'wetBulbC',
   'dewPointC',
+  'frostPointC',
   'relativeHumidityPct',
   'humidityRatioGPerKg',
   'enthalpyKjPerKg',
@@ -148,5 +150,43 @@ describe('dryhours air (as a user runs it: node bin/dryhours.mjs)', () => {
     expect(e?.stdout).toBe('')
     expect(e?.stderr.trimEnd().split('\n')).toHaveLength(1)
     expect(e?.stderr).toMatch(/pressure must be between 30 and 110 kPa, got 101325/)
+  })
+})
+
+describe('every figure the text shows is in the JSON too', () => {
+  it('the frost point below the triple point (text and JSON agree; psychrolib 1.1.1 frost point of the same vapour pressure)', async () => {
+    const text = (await cli(['--tdb', '-5', '--rh', '60'])).out
+    const j = JSON.parse((await cli(['--tdb', '-5', '--rh', '60', '--json'])).out)
+    const line = text.split('\n').find((l) => l.startsWith('frost point'))
+    expect(line).toBeDefined()
+    expect(line).toContain(j.frostPointC.toFixed(2))
+    // psychrolib (ASHRAE HOF ch. 1): below 0 °C its dew point from vapour pressure is over ice, the frost point
+    psychrolib.SetUnitSystem(psychrolib.SI)
+    expect(
+      Math.abs(j.frostPointC - psychrolib.GetTDewPointFromVapPres(-5, j.vaporPressureKpa * 1000)),
+    ).toBeLessThan(0.05)
+    // every number of the text table is a value of the JSON
+    const numbers = text
+      .split('\n')
+      .filter((l) => l.trim() !== '')
+      .map((l) =>
+        Number(
+          l
+            .trim()
+            .split(/\s+/)
+            .find((w) => /^-?\d/.test(w)),
+        ),
+      )
+    const values = Object.values(j).filter((v): v is number => typeof v === 'number')
+    for (const n of numbers)
+      expect(
+        values.some((v) => Math.abs(v - n) < 0.006 * Math.max(1, Math.abs(v))),
+        String(n),
+      ).toBe(true)
+  })
+  it('above the triple point the frost point is null in the JSON and absent from the text', async () => {
+    const j = JSON.parse((await cli(['--tdb', '30', '--rh', '40', '--json'])).out)
+    expect(j.frostPointC).toBeNull()
+    expect((await cli(['--tdb', '30', '--rh', '40'])).out).not.toContain('frost point')
   })
 })

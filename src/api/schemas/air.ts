@@ -30,10 +30,14 @@ export const airQuerySchema = z
   })
 
 /** The response of GET /v1/air (and `dryhours air --json`). */
-export const airStateResponseSchema = z.object({
+export const airStateResponseSchema = z.strictObject({
   dryBulbC: z.number().describe('dry bulb [°C]'),
   wetBulbC: z.number().describe('thermodynamic wet bulb [°C]'),
   dewPointC: z.number().describe('dew point over liquid water [°C]'),
+  frostPointC: z
+    .number()
+    .nullable()
+    .describe('frost point over ice [°C] when the dew point is below the triple point (0.01 °C), else null'),
   relativeHumidityPct: z.number().describe('relative humidity over liquid water [%]'),
   humidityRatioGPerKg: z.number().describe('humidity ratio [g/kg dry air]'),
   enthalpyKjPerKg: z.number().describe('enthalpy [kJ/kg dry air]'),
