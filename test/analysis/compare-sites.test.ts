@@ -122,7 +122,9 @@ describe('the ranking states its tie-break and marks typical years', () => {
       'sites equal on probability-within-deadline are ordered by usable-hours-p10, then by heat-per-tonne, then by the order they were given',
     )
     expect(c.sites.map((s) => s.rank)).toEqual([1, 2, 3])
-    c.sites.forEach((s, i) => expect(c.assessments[i]).toBe([real, typical, real][s.given]))
+    c.sites.forEach((s, i) => {
+      expect(c.assessments[i]).toBe([real, typical, real][s.given])
+    })
     // R1 and R2 are the same assessment: only the order given separates them
     const r2 = c.sites.find((s) => s.site === 'R2')
     const r1 = c.sites.find((s) => s.site === 'R1')

@@ -321,7 +321,9 @@ describe('the co-op: sites with their own settings', () => {
       f.err(),
     ).toBe(0)
     expect(f.out()).toMatch(/^item,value\r\ncriterion,"probability-within-deadline: /)
-    expect(f.out()).toContain('tie-break,"sites equal on probability-within-deadline are ordered by usable-hours-p10')
+    expect(f.out()).toContain(
+      'tie-break,"sites equal on probability-within-deadline are ordered by usable-hours-p10',
+    )
   })
 })
 

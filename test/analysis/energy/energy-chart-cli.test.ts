@@ -24,29 +24,6 @@ function io(files: Record<string, string> = {}) {
   return { cli, out, err, written }
 }
 
-describe('the energy-chart commands of the README', () => {
-  const readme = readFileSync(new URL('../../../README.md', import.meta.url), 'utf8')
-  const lines = readme.split('\n').filter((l) => l.startsWith('npx dryhours energy-chart '))
-  it('are there, and each runs with exit code 0', async () => {
-    expect(lines.length).toBeGreaterThanOrEqual(2)
-    for (const line of lines) {
-      const t = io()
-      expect(await runCli(line.split(/\s+/).slice(2), t.cli), line).toBe(0)
-    }
-  })
-  it('the season that moves past the baseline: the first line names batch W26-029, on the physics view', async () => {
-    const line = lines.find((l) => l.includes('tessaby-wheat-2026.csv'))!
-    const t = io()
-    await runCli(line.split(/\s+/).slice(2), t.cli)
-    const [first, second] = t.out.join('').split('\n')
-    expect(first).toMatch(
-      /^Answer: the dryer uses more energy per kg of water than expected from batch W26-029 /,
-    )
-    expect(first).toMatch(/on the physics-normalised view/)
-    expect(second).toMatch(/monitored batches ran in weather the baseline never saw/)
-  })
-})
-
 describe('dryhours energy-chart', () => {
   it('prints the answer, the limits and every batch for the demo log', async () => {
     const t = io()
