@@ -18,3 +18,21 @@ export function exampleWeatherCsv(days = 4): string {
   })
   return ['time,temp_c,rh_pct,ghi_wm2,wind_ms', ...rows].join('\n')
 }
+
+/** Boundary of the multipart examples. */
+export const EXAMPLE_BOUNDARY = 'dryhours-example-boundary'
+
+/** A multipart/form-data body (RFC 7578) of text parts, file parts with a file name. */
+export function multipartExample(parts: { name: string; value: string; fileName?: string }[]): string {
+  const lines: string[] = []
+  for (const p of parts) {
+    lines.push(`--${EXAMPLE_BOUNDARY}`)
+    lines.push(
+      `Content-Disposition: form-data; name="${p.name}"${p.fileName ? `; filename="${p.fileName}"` : ''}`,
+    )
+    if (p.fileName) lines.push('Content-Type: text/csv')
+    lines.push('', p.value)
+  }
+  lines.push(`--${EXAMPLE_BOUNDARY}--`, '')
+  return lines.join('\r\n')
+}

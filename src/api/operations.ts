@@ -43,8 +43,8 @@ const operations: Operation[] = [
       contentType: 'application/json',
       description: 'service is up',
       schema: z.object({
-        ok: z.boolean(),
-        service: z.string(),
+        ok: z.boolean().describe('true: the service is up'),
+        service: z.string().describe('the name of the service'),
         work: z
           .object({
             threads: z.number().describe('worker threads [count]'),

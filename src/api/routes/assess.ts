@@ -23,7 +23,7 @@ import { overrideWarning } from '../../weather/site-overrides.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
 import type { ApiConfig } from '../config.ts'
 import { isRuntimeFault, rethrowAsProblem } from '../errors.ts'
-import { exampleWeatherCsv } from '../example-weather.ts'
+import { EXAMPLE_BOUNDARY, exampleWeatherCsv, multipartExample } from '../example-weather.ts'
 import { checkBatchHours } from '../limits.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
@@ -34,6 +34,11 @@ import {
   assessRequestFromJson,
   assessRequestFromQuery,
 } from '../schemas/assess.ts'
+import {
+  assessmentResponseSchema,
+  comparisonResponseSchema,
+  methodComparisonResponseSchema,
+} from '../schemas/responses/assessment.ts'
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
@@ -394,10 +399,18 @@ registerOperation({
   ],
   response: {
     contentType: 'application/json',
-    description: 'the assessment (format=csv: tables; format=html: the summary)',
+    description:
+      'the assessment; with several methods, the methods side by side (format=csv: tables; format=html: the summary)',
+    schema: z.union([assessmentResponseSchema, methodComparisonResponseSchema]),
   },
   errors: [400, 404, 413, 415, 422],
   examples: [
+    {
+      name: 'methods side by side: open air, solar cabinet and heated air, prices in EUR (invented weather)',
+      url: '/v1/assess?product=grapes-to-raisins&method=open-air,solar-cabinet,heated&lat=38.3&lon=-2.6&elevation=1050&deadlineDays=3&maxDays=3&currency=EUR&price=propane=0.8',
+      contentType: 'text/csv',
+      body: exampleWeatherCsv(4),
+    },
     {
       name: 'raisins in the open air, four days of hourly weather (invented)',
       url: '/v1/assess?product=grapes-to-raisins&method=open-air&lat=38.3&lon=-2.6&elevation=1050&deadlineDays=3&maxDays=3',
@@ -417,8 +430,36 @@ registerOperation({
   ],
   response: {
     contentType: 'application/json',
-    description: 'the comparison (format=html: the side-by-side summary)',
+    description:
+      'the comparison, sites best first (format=html: the side-by-side summary; format=csv: its tables)',
+    schema: comparisonResponseSchema,
   },
   errors: [400, 413, 415, 422],
-  examples: [],
+  examples: [
+    {
+      name: 'two sites, each with its own location (invented weather)',
+      url: '/v1/compare',
+      contentType: `multipart/form-data; boundary=${EXAMPLE_BOUNDARY}`,
+      body: multipartExample([
+        { name: 'site', fileName: 'north.csv', value: exampleWeatherCsv(4) },
+        { name: 'site', fileName: 'south.csv', value: exampleWeatherCsv(4) },
+        {
+          name: 'sites',
+          value: JSON.stringify([
+            { name: 'North', file: 'north.csv', lat: 41.5, lon: -2.6, elevation: 900 },
+            { name: 'South', file: 'south.csv', lat: 37.2, lon: -3.1, elevation: 300 },
+          ]),
+        },
+        {
+          name: 'options',
+          value: JSON.stringify({
+            product: 'grapes-to-raisins',
+            method: 'open-air',
+            deadlineDays: 3,
+            maxDays: 3,
+          }),
+        },
+      ]),
+    },
+  ],
 })

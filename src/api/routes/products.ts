@@ -17,6 +17,12 @@ import { rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
+import {
+  equilibriumResponseSchema,
+  fitResponseSchema,
+  productProfileResponseSchema,
+  productSummaryResponseSchema,
+} from '../schemas/responses/products.ts'
 import { checkedUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem, queryObject } from '../validate.ts'
 import { workControl } from '../work.ts'
@@ -142,7 +148,11 @@ registerOperation({
   summary: 'Product catalogue',
   description:
     'Every built-in product profile with its initial and target moisture, water-activity target and models.',
-  response: { contentType: 'application/json', description: 'list of product summaries' },
+  response: {
+    contentType: 'application/json',
+    description: 'list of product summaries',
+    schema: productSummaryResponseSchema,
+  },
   errors: [],
   examples: [{ name: 'all products', url: '/v1/products' }],
 })
@@ -152,7 +162,11 @@ registerOperation({
   summary: 'One product profile',
   description:
     'The full profile with the source and a confidence flag (published, fitted, memory, user) for every number.',
-  response: { contentType: 'application/json', description: 'the profile' },
+  response: {
+    contentType: 'application/json',
+    description: 'the profile',
+    schema: productProfileResponseSchema,
+  },
   errors: [404],
   examples: [{ name: 'raisins', url: '/v1/products/grapes-to-raisins' }],
 })
@@ -163,7 +177,11 @@ registerOperation({
   description:
     'With rh: the equilibrium moisture content of the product (wet and dry basis) in air at tdb and rh. With moistureWb: the equilibrium relative humidity (water activity × 100) of the product at that moisture.',
   query: equilibriumQuerySchema,
-  response: { contentType: 'application/json', description: 'the equilibrium point, model and source' },
+  response: {
+    contentType: 'application/json',
+    description: 'the equilibrium point, model and source',
+    schema: equilibriumResponseSchema,
+  },
   errors: [400, 404],
   examples: [
     { name: 'shelled corn, 15.6 °C, 80 %', url: '/v1/equilibrium?product=shelled-corn&tdb=15.6&rh=80' },
@@ -184,6 +202,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'fitted models, the best by AICc, and a profile when product is given',
+    schema: fitResponseSchema,
   },
   errors: [400, 404, 413, 415, 422],
   examples: [
