@@ -66,7 +66,12 @@ export function buildOpenApiDocument(config: ApiConfig = DEFAULT_API_CONFIG): Js
         description: op.response.description,
         content: {
           [op.response.contentType]: {
-            schema: op.response.schema ? jsonSchema(op.response.schema, 'output') : {},
+            schema: op.response.schema
+              ? jsonSchema(
+                  typeof op.response.schema === 'function' ? op.response.schema() : op.response.schema,
+                  'output',
+                )
+              : {},
           },
         },
       },

@@ -25,8 +25,11 @@ export interface Operation {
   query?: z.ZodObject
   /** Request bodies by content type (schema for JSON bodies; a description for file bodies). */
   requestBody?: { contentType: string; description: string; schema?: z.ZodType }[]
-  /** Success response: content type and schema. */
-  response: { contentType: string; description: string; schema?: z.ZodType }
+  /**
+   * Success response: content type and schema. A function builds the schema when the OpenAPI document is
+   * made (large answer schemas are not built in every worker thread that never serves /openapi.json).
+   */
+  response: { contentType: string; description: string; schema?: z.ZodType | (() => z.ZodType) }
   /** Error statuses this operation can answer with (problem details). */
   errors: number[]
   examples: OperationExample[]

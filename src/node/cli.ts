@@ -40,8 +40,12 @@ export const nodeIo: CliIo = {
       // 'wx' fails when the file exists: nothing is overwritten without --force
       await writeFile(path, data, { flag: options?.overwrite ? 'w' : 'wx' })
     } catch (e) {
-      if ((e as NodeJS.ErrnoException).code === 'EEXIST')
+      if ((e as NodeJS.ErrnoException).code === 'EEXIST') {
+        // a folder at that path is not a file to replace, with or without --force
+        const folder = await stat(path).then((s) => s.isDirectory(), () => false)
+        if (folder) throw pathError('write', path, { code: 'EISDIR' })
         throw new UsageError(`'${path}' already exists: give --force to replace it, or another name`)
+      }
       // A missing folder, a read-only place or a folder given as the output: the user's input, exit 2.
       throw pathError('write', path, e)
     }

@@ -34,11 +34,7 @@ import {
   assessRequestFromJson,
   assessRequestFromQuery,
 } from '../schemas/assess.ts'
-import {
-  assessmentResponseSchema,
-  comparisonResponseSchema,
-  methodComparisonResponseSchema,
-} from '../schemas/responses/assessment.ts'
+import { assessmentSchemas } from '../schemas/responses/assessment.ts'
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
@@ -401,7 +397,11 @@ registerOperation({
     contentType: 'application/json',
     description:
       'the assessment; with several methods, the methods side by side (format=csv: tables; format=html: the summary)',
-    schema: z.union([assessmentResponseSchema, methodComparisonResponseSchema]),
+    schema: () =>
+      z.union([
+        assessmentSchemas().assessmentResponseSchema,
+        assessmentSchemas().methodComparisonResponseSchema,
+      ]),
   },
   errors: [400, 404, 413, 415, 422],
   examples: [
@@ -432,7 +432,7 @@ registerOperation({
     contentType: 'application/json',
     description:
       'the comparison, sites best first (format=html: the side-by-side summary; format=csv: its tables)',
-    schema: comparisonResponseSchema,
+    schema: () => assessmentSchemas().comparisonResponseSchema,
   },
   errors: [400, 413, 415, 422],
   examples: [

@@ -17,12 +17,7 @@ import { rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
-import {
-  equilibriumResponseSchema,
-  fitResponseSchema,
-  productProfileResponseSchema,
-  productSummaryResponseSchema,
-} from '../schemas/responses/products.ts'
+import { productSchemas } from '../schemas/responses/products.ts'
 import { checkedUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem, queryObject } from '../validate.ts'
 import { workControl } from '../work.ts'
@@ -151,7 +146,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'list of product summaries',
-    schema: productSummaryResponseSchema,
+    schema: () => productSchemas().productSummaryResponseSchema,
   },
   errors: [],
   examples: [{ name: 'all products', url: '/v1/products' }],
@@ -165,7 +160,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'the profile',
-    schema: productProfileResponseSchema,
+    schema: () => productSchemas().productProfileResponseSchema,
   },
   errors: [404],
   examples: [{ name: 'raisins', url: '/v1/products/grapes-to-raisins' }],
@@ -180,7 +175,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'the equilibrium point, model and source',
-    schema: equilibriumResponseSchema,
+    schema: () => productSchemas().equilibriumResponseSchema,
   },
   errors: [400, 404],
   examples: [
@@ -202,7 +197,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'fitted models, the best by AICc, and a profile when product is given',
-    schema: fitResponseSchema,
+    schema: () => productSchemas().fitResponseSchema,
   },
   errors: [400, 404, 413, 415, 422],
   examples: [

@@ -7,6 +7,19 @@
  */
 import { z } from 'zod'
 
+/** `f` called once, on first use, and its result kept. */
+export function once<T>(f: () => T): () => T {
+  let value: T | undefined
+  let done = false
+  return () => {
+    if (!done) {
+      value = f()
+      done = true
+    }
+    return value as T
+  }
+}
+
 /** A number with its description and unit, e.g. `num('dry bulb [°C]')`. */
 export const num = (description: string) => z.number().describe(description)
 /** A number or null (a figure that could not be computed: the answer's warnings say why). */
