@@ -137,6 +137,8 @@ function spoilageOf(row: StartDateRow): number | null {
   return s !== undefined && s !== null && typeof s.probability === 'number' ? s.probability : null
 }
 
+const capitalised = (t: string): string => t.charAt(0).toUpperCase() + t.slice(1)
+
 function mean(values: number[]): number | null {
   return values.length > 0 ? values.reduce((s, v) => s + v, 0) / values.length : null
 }
@@ -269,10 +271,12 @@ function recommend(
   const money =
     chosen.costPerKgDried === null
       ? 'fuel cost not computed'
-      : `fuel ${chosen.costPerKgDried}${currency ? ` ${currency}` : ''} per kg dried${chosen.fuel.priceIsExample && chosen.costPerKgDried > 0 ? ' at an example price' : ''}`
+      : chosen.costPerKgDried === 0
+        ? 'no fuel at the median batch'
+        : `fuel ${chosen.costPerKgDried}${currency ? ` ${currency}` : ''} per kg dried${chosen.fuel.priceIsExample && chosen.costPerKgDried > 0 ? ' at an example price' : ''}`
   return {
     kind: chosen.kind,
-    text: `${chosen.label}: finishes within ${deadlineDays} days in ${ofYears(chosen.probabilityWithinDeadline ?? 0)}, median ${chosen.daysToTarget.median ?? '–'} days, ${money}.`,
+    text: `${capitalised(chosen.label)}: finishes within ${deadlineDays} days in ${ofYears(chosen.probabilityWithinDeadline ?? 0)}, median ${chosen.daysToTarget.median ?? '–'} days, ${money}.`,
     criterion,
   }
 }

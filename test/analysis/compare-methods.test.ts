@@ -93,7 +93,7 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
     expect(c.recommendation.kind).toBe(cheapest.kind)
     expect(c.recommendation.criterion).toContain('lowest fuel cost per kg of dried product')
     expect(c.recommendation.criterion).toContain('80 %')
-    expect(c.recommendation.text).toContain(cheapest.label)
+    expect(c.recommendation.text.toLowerCase()).toContain(cheapest.label.toLowerCase())
     expect(c.recommendation.text).toContain('EUR per kg dried')
   })
 
