@@ -25,7 +25,8 @@ export interface ComparedSite {
 }
 
 /** The analysis ranking (`compare()` of analysis/), when the sites were compared there. */
-export type Ranking = Pick<Comparison, 'criterionDescription' | 'sites'>
+export type Ranking = Pick<Comparison, 'criterionDescription' | 'sites'> &
+  Partial<Pick<Comparison, 'tieBreak' | 'caveats'>>
 
 export interface RankRow {
   name: string
@@ -43,7 +44,7 @@ export function rankRows(ranking: Ranking): { criterion: string; rows: RankRow[]
     rows: [...ranking.sites]
       .sort((x, y) => x.rank - y.rank)
       .map((r) => ({
-        name: r.site,
+        name: r.typicalYear ? `${r.site} (typical year)` : r.site,
         meanProbabilityWithinDeadline: r.meanProbabilityWithinDeadline,
         bestWindow: r.bestStartWindow,
         usableHoursSeasonP10: r.usableHoursInSeasonP10,
@@ -117,6 +118,8 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
         ? `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years finish a batch within ${first.deadlineDays} days across the season's start days.`
         : '.'),
     `Ranking criterion: ${ranked.criterion}.`,
+    ...(o.ranking.tieBreak ? [`Ties: ${o.ranking.tieBreak}.`] : []),
+    ...(o.ranking.caveats ?? []).map((c) => `Caveat: ${c}.`),
   ]
   const differs = (key: (a: Assessment) => string) => new Set(sites.map((x) => key(x.assessment))).size > 1
   if (

@@ -194,6 +194,21 @@ describe('POST /v1/compare with a sites part', () => {
       /^ardentine-upland-typical-year\.epw: lon=-3 replaces the longitude the file states \(2\.6° W\)/,
     )
   })
+  it('format=html: the criterion, the tie-break and the typical year are stated', async () => {
+    const r = await post(
+      '/v1/compare?format=html',
+      form([
+        ['site', demo(typical), typical],
+        ['site', demo(coast), coast],
+        ['options', options],
+      ]),
+    )
+    expect(r.status).toBe(200)
+    expect(r.text).toContain('Ranking criterion: ')
+    expect(r.text).toContain('Ties: sites equal on probability-within-deadline')
+    expect(r.text).toContain('(typical year)')
+    expect(r.text).toMatch(/Caveat: .* is a typical year/)
+  })
   it('format=csv: the ranking and how it was ranked', async () => {
     const r = await post(
       '/v1/compare?format=csv&table=site-comparison',
