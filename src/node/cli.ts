@@ -42,7 +42,10 @@ export const nodeIo: CliIo = {
     } catch (e) {
       if ((e as NodeJS.ErrnoException).code === 'EEXIST') {
         // a folder at that path is not a file to replace, with or without --force
-        const folder = await stat(path).then((s) => s.isDirectory(), () => false)
+        const folder = await stat(path).then(
+          (s) => s.isDirectory(),
+          () => false,
+        )
         if (folder) throw pathError('write', path, { code: 'EISDIR' })
         throw new UsageError(`'${path}' already exists: give --force to replace it, or another name`)
       }
