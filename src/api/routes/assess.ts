@@ -34,7 +34,8 @@ import {
   assessRequestFromJson,
   assessRequestFromQuery,
 } from '../schemas/assess.ts'
-import { assessmentSchemas } from '../schemas/responses/assessment.ts'
+import { assessmentResponseSchema } from '../schemas/responses/assessment.ts'
+import { comparisonResponseSchema, methodComparisonResponseSchema } from '../schemas/responses/comparison.ts'
 import { checkedUploadText, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { renderReadingMessages, weatherInputProblem } from '../weather-options.ts'
@@ -397,11 +398,7 @@ registerOperation({
     contentType: 'application/json',
     description:
       'the assessment; with several methods, the methods side by side (format=csv: tables; format=html: the summary)',
-    schema: () =>
-      z.union([
-        assessmentSchemas().assessmentResponseSchema,
-        assessmentSchemas().methodComparisonResponseSchema,
-      ]),
+    schema: () => z.union([assessmentResponseSchema(), methodComparisonResponseSchema()]),
   },
   errors: [400, 404, 413, 415, 422],
   examples: [
@@ -432,7 +429,7 @@ registerOperation({
     contentType: 'application/json',
     description:
       'the comparison, sites best first (format=html: the side-by-side summary; format=csv: its tables)',
-    schema: () => assessmentSchemas().comparisonResponseSchema,
+    schema: comparisonResponseSchema,
   },
   errors: [400, 413, 415, 422],
   examples: [

@@ -22,7 +22,7 @@ import { isRuntimeFault, problemFor, rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem, type ProblemField } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
-import { energySchemas } from '../schemas/responses/energy.ts'
+import { energyChartResponseSchema } from '../schemas/responses/energy.ts'
 import { checkedUploadText, parseOptionsJson, queryParams, readUpload, type UploadedFile } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
@@ -244,7 +244,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'the energy-chart assessment (format=html: the page; format=csv: the tables)',
-    schema: () => energySchemas().energyChartResponseSchema,
+    schema: energyChartResponseSchema,
   },
   errors: [400, 413, 415, 422],
   examples: [

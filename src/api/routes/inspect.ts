@@ -13,7 +13,7 @@ import type { ApiConfig } from '../config.ts'
 import { rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
-import { inspectSchemas } from '../schemas/responses/inspect.ts'
+import { inspectResponseSchema } from '../schemas/responses/inspect.ts'
 import { checkedUploadText, readUpload } from '../upload.ts'
 import { parseOrProblem } from '../validate.ts'
 import {
@@ -88,7 +88,7 @@ registerOperation({
   response: {
     contentType: 'application/json',
     description: 'what was understood of the file (format=csv: the hourly series as text/csv)',
-    schema: () => inspectSchemas().inspectResponseSchema,
+    schema: inspectResponseSchema,
   },
   errors: [400, 413, 415, 422],
   examples: [

@@ -1,14 +1,12 @@
 /**
  * @module api/schemas/responses/assessment
- * The answers of POST /v1/assess (one method: the assessment; several: the methods side by side) and
- * POST /v1/compare, with the unit of every field. The same objects as `dryhours assess --json` and
- * `dryhours compare --json` (analysis/assessment.ts, analysis/compare-methods.ts, analysis/compare.ts).
+ * The answer of POST /v1/assess for one method (the assessment), with the unit of every field, and the
+ * parts the comparisons share with it (responses/comparison.ts). The same object as `dryhours assess
+ * --json` (analysis/assessment.ts). Each part is built on first use (GET /openapi.json, GET /docs, tests)
+ * and kept: building them at import cost a worker thread about 2.8 MiB of its heap.
  */
 import { z } from 'zod'
 import type { Assessment } from '../../../analysis/assessment.ts'
-import type { Comparison } from '../../../analysis/compare.ts'
-import { COMPARE_CRITERIA } from '../../../analysis/compare.ts'
-import { CALENDAR_STATES, type MethodComparison } from '../../../analysis/compare-methods.ts'
 import { FUEL_IDS } from '../../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, type DryingMethodKind } from '../../../drying/method.ts'
 import { METHOD_MODELS } from '../../../drying/methods/index.ts'
@@ -21,18 +19,17 @@ import {
   numOrNull,
   once,
   parametersSchema,
+  share,
   spreadSchema,
   text,
   texts,
 } from './common.ts'
 
-function buildAssessmentSchemas() {
+/** What an assessment shares with the comparisons: the method kind, the site, the product, the method, the season. */
+export const assessmentParts = once(() => {
   const kindSchema = z
     .enum(DRYING_METHOD_KINDS as unknown as [DryingMethodKind, ...DryingMethodKind[]])
     .describe('drying method kind')
-
-  const share = (what: string) => numOrNull(`${what} [0–1]`)
-
   const assessmentSiteSchema = z
     .strictObject({
       name: text('site name (from the options, the file, or the file name)'),
@@ -46,7 +43,6 @@ function buildAssessmentSchemas() {
       typicalYear: z.boolean().describe('the file is a typical year (one constructed year)'),
     })
     .describe('the site')
-
   const assessmentProductSchema = z.strictObject({
     id: text('product id'),
     name: text('product name'),
@@ -58,7 +54,6 @@ function buildAssessmentSchemas() {
     loadingKgPerM2: num('product loading [kg fresh per m²]'),
     cautions: texts('food-safety and handling cautions of the product'),
   })
-
   /** The method as applied: its kind and every parameter with the unit its name carries. */
   const methodResponseSchema = z
     .discriminatedUnion(
@@ -69,17 +64,33 @@ function buildAssessmentSchemas() {
       ],
     )
     .describe('the drying method and its parameters as applied (defaults filled in; docs/model.md §4)')
+  const seasonSchema = z.strictObject({
+    start: monthDay('first start date'),
+    end: monthDay('last start date'),
+    stepDays: num('days between start dates [days]'),
+    startHourLocal: num('local hour at which batches start [h, 0–23]'),
+  })
+  return {
+    kindSchema,
+    siteSchema: assessmentSiteSchema,
+    productSchema: assessmentProductSchema,
+    methodResponseSchema,
+    seasonSchema,
+  }
+})
 
-  const reasonsSchema = (unit: string) =>
-    z
-      .strictObject(
-        Object.fromEntries(HOUR_STATUS_NAMES.map((r) => [r, num(`hours ${r} [${unit}]`)])) as Record<
-          HourStatusName,
-          z.ZodNumber
-        >,
-      )
-      .describe(`hours per verdict (usable, or the reason an hour is not usable) [${unit}]`)
+const reasonsSchema = (unit: string) =>
+  z
+    .strictObject(
+      Object.fromEntries(HOUR_STATUS_NAMES.map((r) => [r, num(`hours ${r} [${unit}]`)])) as Record<
+        HourStatusName,
+        z.ZodNumber
+      >,
+    )
+    .describe(`hours per verdict (usable, or the reason an hour is not usable) [${unit}]`)
 
+/** The season's tables: one row per month, one row per start date. */
+const seasonTableSchemas = once(() => {
   const monthlyRowSchema = z.strictObject({
     month: z.number().int().min(1).max(12).describe('month of the year [1–12]'),
     usableHours: z
@@ -129,7 +140,11 @@ function buildAssessmentSchemas() {
       'solar collector heat used by the method alone [kWh per tonne fresh]',
     ),
   })
+  return { monthlyRowSchema, startDateRowSchema }
+})
 
+/** Heat and fuel of the heated-air figures, with the cross-check against the heat of evaporation. */
+const heatSchema = once(() => {
   const fuelFigureSchema = z.strictObject({
     fuel: z.enum(FUEL_IDS).describe('fuel id'),
     name: text('the fuel in words'),
@@ -144,7 +159,7 @@ function buildAssessmentSchemas() {
     heatingValueSource: text('source of the heating value'),
   })
 
-  const heatSummarySchema = z.strictObject({
+  return z.strictObject({
     heaterEfficiency: num('heater efficiency, higher heating value basis [0–1]'),
     airFlowKgPerSPerTonne: num('air flow of the heater [kg of air per second per tonne fresh]'),
     targetRhPct: numOrNull('relative humidity the heater heats the air to [%]; null with a set point'),
@@ -168,8 +183,11 @@ function buildAssessmentSchemas() {
       note: text('what the ratio means'),
     }),
   })
+})
 
-  const psychrometricSchema = z.strictObject({
+/** The site's hours on the psychrometric chart and the region that dries the product. */
+const psychrometricSchema = once(() => {
+  return z.strictObject({
     binDryBulbC: num('width of a dry-bulb bin [K]'),
     binHumidityRatioGPerKg: num('height of a humidity-ratio bin [g/kg dry air]'),
     dryBulbRangeC: z
@@ -204,8 +222,11 @@ function buildAssessmentSchemas() {
       }),
     ),
   })
+})
 
-  const coverageSchema = z.strictObject({
+/** What the series covered and what was estimated or skipped. */
+const coverageSchema = once(() => {
+  return z.strictObject({
     firstHourUtc: text('first hour of the series [ISO 8601, UTC]'),
     lastHourUtc: text('last hour of the series [ISO 8601, UTC]'),
     hours: count('hours in the series'),
@@ -219,20 +240,20 @@ function buildAssessmentSchemas() {
     startDateBatchesRun: count('batches run for the start-date table'),
     startDateBatchesSkippedForData: count('batches skipped for missing data'),
   })
+})
 
-  const assessmentResponseSchema = z
+/** The seasonal assessment of one site, one product and one method. */
+export const assessmentResponseSchema = once(() => {
+  const { siteSchema, productSchema, methodResponseSchema, seasonSchema } = assessmentParts()
+  const { monthlyRowSchema, startDateRowSchema } = seasonTableSchemas()
+  return z
     .strictObject({
       schema: z.literal('dryhours.assessment/1').describe('the shape of this object'),
-      site: assessmentSiteSchema,
-      product: assessmentProductSchema,
+      site: siteSchema,
+      product: productSchema,
       method: methodResponseSchema,
       methodLabel: text('the method in plain words'),
-      season: z.strictObject({
-        start: monthDay('first start date'),
-        end: monthDay('last start date'),
-        stepDays: num('days between start dates [days]'),
-        startHourLocal: num('local hour at which batches start [h, 0–23]'),
-      }),
+      season: seasonSchema,
       deadlineDays: num('the window to reach the target [days]'),
       maxDays: num('a batch counts as failed after this long [days]'),
       monthly: z.array(monthlyRowSchema).describe('one row per month'),
@@ -255,8 +276,8 @@ function buildAssessmentSchemas() {
         }),
       ),
       bestStartWindowCriterion: text('how the windows were chosen'),
-      heat: heatSummarySchema,
-      psychrometric: psychrometricSchema,
+      heat: heatSchema(),
+      psychrometric: psychrometricSchema(),
       assumptions: z.array(
         z.strictObject({
           name: text('what is assumed'),
@@ -265,160 +286,18 @@ function buildAssessmentSchemas() {
         }),
       ),
       warnings: texts('what limits the answer, in words'),
-      coverage: coverageSchema,
+      coverage: coverageSchema(),
     })
     .describe('the seasonal assessment of one site, one product and one method')
-
-  const methodFiguresSchema = z.strictObject({
-    kind: kindSchema,
-    label: text('the method in plain words'),
-    daysToTarget: medianP90('days', "over the season's start dates").describe(
-      "days to target by the method alone: median of the start dates' medians and of their P90s [days]",
-    ),
-    probabilityWithinDeadline: share(
-      "share of years finishing within the deadline, mean over the season's start dates",
-    ),
-    spoilageProbability: share(
-      'share of years spoiling before dry, mean over the start dates; null: not assessed',
-    ),
-    heatToAirKwhPerTonne: spreadSchema('kWh per tonne fresh', "across the season's batches"),
-    fuelHeatKwhPerTonne: numOrNull('fuel heat at the median [kWh per tonne fresh]'),
-    fuel: z.strictObject({
-      id: text('fuel id'),
-      name: text('the fuel in words'),
-      unit: text('the unit the fuel is sold in'),
-      quantityPerTonne: numOrNull('fuel at the median heat [fuel unit per tonne fresh]'),
-      pricePerUnit: num('price [currency per fuel unit]'),
-      priceIsExample: z.boolean().describe('the price is an example'),
-    }),
-    costPerTonneFresh: numOrNull('fuel cost at the median heat [currency per tonne fresh]'),
-    costPerKgDried: numOrNull('fuel cost at the median heat [currency per kg of dried product]'),
-  })
-
-  const methodComparisonResponseSchema = z
-    .strictObject({
-      schema: z.literal('dryhours.method-comparison/1').describe('the shape of this object'),
-      site: assessmentSiteSchema,
-      product: assessmentProductSchema,
-      season: z.strictObject({
-        start: monthDay('first start date'),
-        end: monthDay('last start date'),
-        stepDays: num('days between start dates [days]'),
-        startHourLocal: num('local hour at which batches start [h, 0–23]'),
-      }),
-      deadlineDays: num('the window to reach the target [days]'),
-      maxDays: num('a batch counts as failed after this long [days]'),
-      driedKgPerTonneFresh: num('dried product from one tonne of fresh product [kg]'),
-      currency: z
-        .string()
-        .nullable()
-        .describe('the currency of the costs as named by the user; null: not named'),
-      costNote: text('what the costs include'),
-      spoilageAssessed: z.boolean().describe('whether any method carries a spoilage model'),
-      methods: z.array(methodFiguresSchema).describe('one entry per method, in the order asked'),
-      notAssessed: z
-        .array(z.strictObject({ kind: kindSchema, reason: text('why the file cannot serve it') }))
-        .describe('methods of "all" this file cannot serve'),
-      calendar: z.strictObject({
-        weekStarts: z.array(monthDay('first start date of the week')),
-        rows: z.array(
-          z.strictObject({
-            kind: kindSchema,
-            label: text('the method in plain words'),
-            cells: z.array(z.enum(CALENDAR_STATES)).describe('the state of each week'),
-            probabilityWithinDeadline: z
-              .array(numOrNull('share of years finishing within the deadline, mean over the week [0–1]'))
-              .describe('per week [0–1]'),
-            spoilageProbability: z
-              .array(numOrNull('share of years spoiling first, mean over the week [0–1]'))
-              .describe('per week [0–1]; null: not assessed or no data'),
-          }),
-        ),
-        rules: z.array(
-          z.strictObject({
-            state: z.enum(CALENDAR_STATES).describe('calendar state'),
-            rule: text('the rule of the state'),
-          }),
-        ),
-      }),
-      recommendation: z.strictObject({
-        kind: kindSchema.nullable().describe('the recommended method; null when none meets the criterion'),
-        text: text('the recommendation in one line'),
-        criterion: text('the criterion, in words'),
-      }),
-      assessments: z
-        .array(assessmentResponseSchema)
-        .describe("every method's full assessment, in the order of methods"),
-    })
-    .describe('several methods on one site side by side')
-
-  const comparisonResponseSchema = z
-    .strictObject({
-      schema: z.literal('dryhours.comparison/1').describe('the shape of this object'),
-      criterion: z.enum(COMPARE_CRITERIA).describe('the ranking criterion'),
-      criterionDescription: text('the criterion in words'),
-      tieBreak: text('how ties are broken'),
-      caveats: texts('cautions on the ranking (typical years against multi-year files)'),
-      product: assessmentProductSchema,
-      method: methodResponseSchema,
-      season: z.strictObject({
-        start: monthDay('first start date'),
-        end: monthDay('last start date'),
-        stepDays: num('days between start dates [days]'),
-        startHourLocal: num('local hour at which batches start [h, 0–23]'),
-      }),
-      deadlineDays: num('the window to reach the target [days]'),
-      sites: z
-        .array(
-          z.strictObject({
-            rank: count('rank, 1 = best'),
-            site: text("the site's label (its name, or its file's name)"),
-            file: z.string().nullable().describe('its weather file'),
-            given: count('position in the order given, from 0'),
-            typicalYear: z.boolean().describe('the file is a typical year'),
-            years: count('years with data'),
-            decidedBy: z
-              .enum([...COMPARE_CRITERIA, 'order-given'])
-              .nullable()
-              .describe('the criterion that placed this site below the one above; null for the first'),
-            usableHoursInSeasonP10: numOrNull('usable hours in the season, P10 across years [h]'),
-            usableHoursInSeasonMedian: numOrNull('usable hours in the season, median across years [h]'),
-            meanProbabilityWithinDeadline: share(
-              'share of years finishing within the deadline, mean over start dates',
-            ),
-            medianHeatKwhPerTonne: numOrNull('median supplemental heat [kWh per tonne fresh]'),
-            bestStartWindow: z.string().nullable().describe("the best start window, 'MM-DD to MM-DD'"),
-            warnings: texts("the site's warnings"),
-          }),
-        )
-        .describe('the sites, best first'),
-      assessments: z
-        .array(assessmentResponseSchema)
-        .describe("each site's assessment, in the order of sites"),
-    })
-    .describe('several sites ranked by a stated criterion')
-
-  return { assessmentResponseSchema, methodComparisonResponseSchema, comparisonResponseSchema }
-}
-
-/** The schemas, built on first use (GET /openapi.json, GET /docs, tests) and kept. */
-export const assessmentSchemas = once(buildAssessmentSchemas)
+})
 
 /**
- * Compile-time check that the schemas describe the analysis types: a field added to an analysis type and
- * not documented here fails the type check (a field documented here but absent from the answers fails the
+ * Compile-time check that the schema describes the analysis type: a field added to the type and not
+ * documented here fails the type check (a field documented here but absent from the answers fails the
  * response test). The method is checked per kind by its own schema.
  */
 type Describes<T, S extends T> = S
 export type AssessmentDescribed = Describes<
   Omit<Assessment, 'method'>,
-  z.output<ReturnType<typeof assessmentSchemas>['assessmentResponseSchema']>
->
-export type MethodComparisonDescribed = Describes<
-  Omit<MethodComparison, 'assessments'>,
-  z.output<ReturnType<typeof assessmentSchemas>['methodComparisonResponseSchema']>
->
-export type ComparisonDescribed = Describes<
-  Omit<Comparison, 'assessments' | 'method'>,
-  z.output<ReturnType<typeof assessmentSchemas>['comparisonResponseSchema']>
+  z.output<ReturnType<typeof assessmentResponseSchema>>
 >

@@ -109,3 +109,6 @@ export function parametersSchema(shape: Record<string, z.ZodType>, what: string)
   }
   return z.strictObject(out)
 }
+
+/** A share [0–1], null where not computable. */
+export const share = (what: string) => numOrNull(`${what} [0–1]`)

@@ -9,26 +9,14 @@ import type { EnergyChartAssessment } from '../../../analysis/energy/energy-char
 import type { RunRuleId } from '../../../analysis/energy/run-rules.ts'
 import { count, num, numOrNull, once, text, texts } from './common.ts'
 
-function buildEnergySchemas() {
-  const RUN_RULES = ['WE1', 'WE2', 'WE3', 'WE4'] as const satisfies readonly RunRuleId[]
+const RUN_RULES = ['WE1', 'WE2', 'WE3', 'WE4'] as const satisfies readonly RunRuleId[]
 
-  const inUnit = (what: string) => num(`${what} [the chart set's unit]`)
-  const side = z.enum(['above', 'below']).describe('side of the centre line')
+const inUnit = (what: string) => num(`${what} [the chart set's unit]`)
+const sideSchema = once(() => z.enum(['above', 'below']).describe('side of the centre line'))
 
-  const batchRef = z.strictObject({
-    batchIndex: count('index of the batch in the log, from 0'),
-    batchId: text('batch id from the log'),
-    startText: text('start time as written in the log'),
-  })
-
-  const chartSignal = batchRef.extend({
-    rules: z
-      .array(z.enum([...RUN_RULES, 'EWMA', 'CUSUM']))
-      .describe('the rules that signalled (Western Electric run rules, EWMA, CUSUM)'),
-    side,
-    batchesAfterBaseline: count('batches after the baseline when it signalled'),
-  })
-
+/** The three control charts of a chart set: individuals and moving range, EWMA, CUSUM. */
+const controlChartSchemas = once(() => {
+  const side = sideSchema()
   const individuals = z.strictObject({
     values: z.array(inUnit('charted value')),
     baselineCount: count('baseline batches'),
@@ -86,6 +74,26 @@ function buildEnergySchemas() {
     firstUpperSignal: z.number().int().nullable().describe('first rise signal [index]; null: none'),
     firstLowerSignal: z.number().int().nullable().describe('first fall signal [index]; null: none'),
   })
+  return { individuals, ewma, cusum }
+})
+
+/** A chart set: its charts and what they found. */
+const chartSetSchema = once(() => {
+  const side = sideSchema()
+  const { individuals, ewma, cusum } = controlChartSchemas()
+  const batchRef = z.strictObject({
+    batchIndex: count('index of the batch in the log, from 0'),
+    batchId: text('batch id from the log'),
+    startText: text('start time as written in the log'),
+  })
+
+  const chartSignal = batchRef.extend({
+    rules: z
+      .array(z.enum([...RUN_RULES, 'EWMA', 'CUSUM']))
+      .describe('the rules that signalled (Western Electric run rules, EWMA, CUSUM)'),
+    side,
+    batchesAfterBaseline: count('batches after the baseline when it signalled'),
+  })
 
   const finding = z.strictObject({
     firstSignal: chartSignal.nullable().describe('the first signal after the baseline'),
@@ -107,7 +115,7 @@ function buildEnergySchemas() {
     baselineSignals: count('signals among the baseline batches'),
   })
 
-  const chartSet = z.strictObject({
+  return z.strictObject({
     batchIndices: z.array(count('batch index of each charted point')),
     unit: z.enum(['MJ/kg water', '% of expected']).describe('the unit of the charted values'),
     individuals,
@@ -115,7 +123,11 @@ function buildEnergySchemas() {
     cusum,
     finding,
   })
+})
 
+/** The physics view (against the dryer's own fitted efficiency) and the regression view. */
+const viewSchemas = once(() => {
+  const chartSet = chartSetSchema()
   const physicsView = chartSet.extend({
     fit: z.strictObject({
       efficiency: num('overall efficiency fitted on the baseline [0–1]'),
@@ -159,8 +171,44 @@ function buildEnergySchemas() {
     standardizedResiduals: z.array(num('residual ÷ its standard error [ratio]')),
     crossValidatedError: num('leave-one-out prediction error [MJ per kg water]'),
   })
+  return { physicsView, regressionView }
+})
 
-  const energyChartResponseSchema = z
+/** One batch of the log with the figures derived from it. */
+const batchSchema = once(() =>
+  z.strictObject({
+    index: count('index in the log, from 0'),
+    line: count('line of the log'),
+    batchId: text('batch id'),
+    startText: text('start as written'),
+    startUtcMs: num('start [ms since 1970-01-01 UTC]'),
+    durationH: num('duration [h]'),
+    freshMassKg: num('fresh mass [kg]'),
+    waterRemovedKg: num('water removed [kg]'),
+    energyMj: num('energy used [MJ]'),
+    specificEnergyMjPerKg: num('energy per kg of water removed [MJ/kg]'),
+    dryingTempC: num('drying air temperature [°C]'),
+    latentHeatMjPerKg: num('latent heat of the water [MJ/kg]'),
+    sorptionHeatMj: numOrNull('heat of sorption of the batch [MJ]; null without a product'),
+    idealHeatMj: num('heat an ideal dryer needs [MJ]'),
+    thermalEfficiencyPct: num('ideal heat ÷ energy used [%]'),
+    ambient: z
+      .strictObject({
+        dryBulbC: num('outside dry bulb [°C]'),
+        relativeHumidityPct: num('outside relative humidity [%]'),
+        humidityRatioGPerKg: num('outside humidity ratio [g/kg dry air]'),
+        pressureKpa: num('pressure [kPa]'),
+        source: z.enum(['log', 'weather']).describe('from the log, or from the weather file'),
+      })
+      .nullable(),
+  }),
+)
+
+/** Control charts of a heated dryer's energy use. */
+export const energyChartResponseSchema = once(() => {
+  const chartSet = chartSetSchema()
+  const { physicsView, regressionView } = viewSchemas()
+  return z
     .strictObject({
       kind: z.literal('energy-chart').describe('the shape of this object'),
       accounting: z.strictObject({
@@ -178,34 +226,7 @@ function buildEnergySchemas() {
           message: text('why it was rejected'),
         }),
       ),
-      batches: z.array(
-        z.strictObject({
-          index: count('index in the log, from 0'),
-          line: count('line of the log'),
-          batchId: text('batch id'),
-          startText: text('start as written'),
-          startUtcMs: num('start [ms since 1970-01-01 UTC]'),
-          durationH: num('duration [h]'),
-          freshMassKg: num('fresh mass [kg]'),
-          waterRemovedKg: num('water removed [kg]'),
-          energyMj: num('energy used [MJ]'),
-          specificEnergyMjPerKg: num('energy per kg of water removed [MJ/kg]'),
-          dryingTempC: num('drying air temperature [°C]'),
-          latentHeatMjPerKg: num('latent heat of the water [MJ/kg]'),
-          sorptionHeatMj: numOrNull('heat of sorption of the batch [MJ]; null without a product'),
-          idealHeatMj: num('heat an ideal dryer needs [MJ]'),
-          thermalEfficiencyPct: num('ideal heat ÷ energy used [%]'),
-          ambient: z
-            .strictObject({
-              dryBulbC: num('outside dry bulb [°C]'),
-              relativeHumidityPct: num('outside relative humidity [%]'),
-              humidityRatioGPerKg: num('outside humidity ratio [g/kg dry air]'),
-              pressureKpa: num('pressure [kPa]'),
-              source: z.enum(['log', 'weather']).describe('from the log, or from the weather file'),
-            })
-            .nullable(),
-        }),
-      ),
+      batches: z.array(batchSchema()),
       baselineCount: count('baseline batches'),
       raw: chartSet.describe('raw specific energy [MJ per kg water]'),
       physics: physicsView.nullable().describe("against the dryer's own physics [% of expected]"),
@@ -255,15 +276,11 @@ function buildEnergySchemas() {
       summary: texts('the answer in sentences; the first is the answer'),
     })
     .describe('control charts of a heated dryer’s energy use')
-  return { energyChartResponseSchema }
-}
-
-/** The schemas, built on first use (GET /openapi.json, GET /docs, tests) and kept. */
-export const energySchemas = once(buildEnergySchemas)
+})
 
 /** Compile-time check that the schema describes the analysis type (see assessment.ts). */
 type Describes<T, S extends T> = S
 export type EnergyChartDescribed = Describes<
   EnergyChartAssessment,
-  z.output<ReturnType<typeof energySchemas>['energyChartResponseSchema']>
+  z.output<ReturnType<typeof energyChartResponseSchema>>
 >

@@ -6,10 +6,64 @@
 import { z } from 'zod'
 import { count, num, numOrNull, once, text, texts } from './common.ts'
 
-function buildInspectSchemas() {
-  const timing = z.enum(['instant', 'interval-mean', 'interval-total']).describe('what a value stands for')
+/** How a column was read. */
+const columnSchema = once(() =>
+  z.strictObject({
+    variable: text('the variable (dryBulb, relativeHumidity, …)'),
+    source: text('the column header, EPW field, or what supplied it'),
+    unit: text('the unit as read, before conversion to SI'),
+    unitFrom: z
+      .enum(['header', 'mapping', 'format', 'detected', 'assumed', 'supplied'])
+      .describe('where the unit came from'),
+    timing: z.enum(['instant', 'interval-mean', 'interval-total']).describe('what a value stands for'),
+    missing: count('values read as missing'),
+  }),
+)
 
-  const inspectResponseSchema = z
+/** The site and its clock. */
+const siteSchema = once(() =>
+  z
+    .strictObject({
+      name: text('site name'),
+      latitudeDeg: numOrNull('latitude [° N]'),
+      longitudeDeg: numOrNull('longitude [° E, west negative]'),
+      elevationM: numOrNull('elevation [m]'),
+      timeZone: z.string().nullable().describe("IANA zone of the site's clock, when known"),
+      utcOffsetHours: numOrNull("offset of the site's standard time from UTC [h]"),
+      utcOffsetSource: z
+        .enum(['option', 'file', 'timestamps', 'longitude'])
+        .nullable()
+        .optional()
+        .describe("where the site's clock came from"),
+      windHeightM: num('height of the wind measurement [m]'),
+    })
+    .describe('the site and its clock'),
+)
+
+/** How rows became hours. */
+const hourlySchema = once(() =>
+  z
+    .strictObject({
+      sampling: z
+        .enum(['readings', 'reports'])
+        .describe('readings averaged and summed, or one report per hour'),
+      stepMinutes: num('most common spacing of the rows [min]'),
+      reportMinute: numOrNull('minute after the hour most reports carry [min]'),
+      alignedReports: count('reports moved to the nearest hour'),
+      hoursFromSeveralRows: count('hours built from more than one row'),
+      partialHours: count('hours kept with some readings missing'),
+      hoursBelowCoverage: z
+        .record(z.string(), count('hours left missing'))
+        .describe('per variable, hours whose readings covered too little of the hour [count]'),
+      supersededRows: count('reports not used'),
+      rule: text('the rule applied, with its source'),
+    })
+    .describe('how rows became hours'),
+)
+
+/** How a weather file was understood. */
+export const inspectResponseSchema = once(() =>
+  z
     .strictObject({
       format: z.enum(['csv', 'epw']).describe('file format'),
       dialect: z
@@ -43,51 +97,9 @@ function buildInspectSchemas() {
           }),
         )
         .describe('daylight-saving changes met'),
-      columns: z.array(
-        z.strictObject({
-          variable: text('the variable (dryBulb, relativeHumidity, …)'),
-          source: text('the column header, EPW field, or what supplied it'),
-          unit: text('the unit as read, before conversion to SI'),
-          unitFrom: z
-            .enum(['header', 'mapping', 'format', 'detected', 'assumed', 'supplied'])
-            .describe('where the unit came from'),
-          timing,
-          missing: count('values read as missing'),
-        }),
-      ),
-      site: z
-        .strictObject({
-          name: text('site name'),
-          latitudeDeg: numOrNull('latitude [° N]'),
-          longitudeDeg: numOrNull('longitude [° E, west negative]'),
-          elevationM: numOrNull('elevation [m]'),
-          timeZone: z.string().nullable().describe("IANA zone of the site's clock, when known"),
-          utcOffsetHours: numOrNull("offset of the site's standard time from UTC [h]"),
-          utcOffsetSource: z
-            .enum(['option', 'file', 'timestamps', 'longitude'])
-            .nullable()
-            .optional()
-            .describe("where the site's clock came from"),
-          windHeightM: num('height of the wind measurement [m]'),
-        })
-        .describe('the site and its clock'),
-      hourly: z
-        .strictObject({
-          sampling: z
-            .enum(['readings', 'reports'])
-            .describe('readings averaged and summed, or one report per hour'),
-          stepMinutes: num('most common spacing of the rows [min]'),
-          reportMinute: numOrNull('minute after the hour most reports carry [min]'),
-          alignedReports: count('reports moved to the nearest hour'),
-          hoursFromSeveralRows: count('hours built from more than one row'),
-          partialHours: count('hours kept with some readings missing'),
-          hoursBelowCoverage: z
-            .record(z.string(), count('hours left missing'))
-            .describe('per variable, hours whose readings covered too little of the hour [count]'),
-          supersededRows: count('reports not used'),
-          rule: text('the rule applied, with its source'),
-        })
-        .describe('how rows became hours'),
+      columns: z.array(columnSchema()),
+      site: siteSchema(),
+      hourly: hourlySchema(),
       variables: z.array(
         z.strictObject({
           variable: text('the variable'),
@@ -134,9 +146,5 @@ function buildInspectSchemas() {
       warnings: texts('what limits the use of the file'),
       notes: texts('what was supplied rather than read'),
     })
-    .describe('how the weather file was understood')
-  return { inspectResponseSchema }
-}
-
-/** The schemas, built on first use (GET /openapi.json, GET /docs, tests) and kept. */
-export const inspectSchemas = once(buildInspectSchemas)
+    .describe('how the weather file was understood'),
+)

@@ -9,27 +9,38 @@ import type { WeighingsFit } from '../../../product/fit-weighings.ts'
 import type { ProductProfile } from '../../../product/profile.ts'
 import { count, num, numOrNull, once, text, texts } from './common.ts'
 
-function buildProductSchemas() {
-  const confidence = z
+/** How a number is known. */
+const confidenceSchema = once(() =>
+  z
     .enum(['published', 'transcribed', 'fitted', 'memory', 'user'])
     .describe(
       'how the number is known: read in the source, transcribed, fitted, from memory, or given by the user',
+    ),
+)
+
+/** A number with its source and how it is known. */
+const sourced = (what: string, unit: string) =>
+  z
+    .strictObject({
+      value: num(`${what} [${unit}]`),
+      source: text('where the number comes from'),
+      confidence: confidenceSchema(),
+    })
+    .describe(`${what} [${unit}], with its source`)
+
+/** The source of each constant of an equation, where they differ. */
+const parameterSourcesSchema = once(() =>
+  z
+    .record(
+      z.string(),
+      z.strictObject({ source: text('source of the constant'), confidence: confidenceSchema() }),
     )
-
-  const sourced = (what: string, unit: string) =>
-    z
-      .strictObject({
-        value: num(`${what} [${unit}]`),
-        source: text('where the number comes from'),
-        confidence,
-      })
-      .describe(`${what} [${unit}], with its source`)
-
-  const parameterSources = z
-    .record(z.string(), z.strictObject({ source: text('source of the constant'), confidence }))
     .optional()
-    .describe('the source of each constant, where they differ')
+    .describe('the source of each constant, where they differ'),
+)
 
+/** A sorption isotherm: its equation (ASABE D245 forms or GAB) and where it was fitted. */
+const isothermSpecSchema = once(() => {
   const d245 = <M extends string>(model: M, a: string, b: string, c: string) =>
     z.strictObject({
       model: z.literal(model).describe('ASABE D245 equation, Me in % dry basis, T in °C, RH a fraction'),
@@ -58,11 +69,11 @@ function buildProductSchemas() {
     }),
   ])
 
-  const isothermSpec = z.strictObject({
+  return z.strictObject({
     equation: isothermEquation,
     source: text('source of the isotherm'),
-    confidence,
-    parameters: parameterSources,
+    confidence: confidenceSchema(),
+    parameters: parameterSourcesSchema(),
     validTempC: z
       .tuple([num('lowest [°C]'), num('highest [°C]')])
       .describe('temperatures it was fitted at [°C]'),
@@ -70,7 +81,10 @@ function buildProductSchemas() {
       .tuple([num('lowest [%]'), num('highest [%]')])
       .describe('relative humidities it was fitted at [%]'),
   })
+})
 
+/** A thin-layer drying equation and the rate law of its constant. */
+const kineticsEquationSchema = once(() => {
   const rateLaw = z.discriminatedUnion('form', [
     z.strictObject({
       form: z.literal('arrhenius'),
@@ -87,7 +101,7 @@ function buildProductSchemas() {
     }),
   ])
 
-  const kineticsEquation = z.discriminatedUnion('model', [
+  return z.discriminatedUnion('model', [
     z.strictObject({ model: z.literal('lewis'), k: rateLaw }),
     z.strictObject({
       model: z.literal('page'),
@@ -114,8 +128,15 @@ function buildProductSchemas() {
     }),
     z.strictObject({ model: z.literal('thompson-corn') }),
   ])
+})
 
-  const productProfileResponseSchema = z
+/** A product profile: every number with its source and confidence. */
+const productProfileResponseSchema = once(() => {
+  const confidence = confidenceSchema()
+  const parameterSources = parameterSourcesSchema()
+  const isothermSpec = isothermSpecSchema()
+  const kineticsEquation = kineticsEquationSchema()
+  return z
     .strictObject({
       id: text('product id'),
       name: text('product name'),
@@ -151,8 +172,12 @@ function buildProductSchemas() {
       notes: z.string().optional().describe('notes'),
     })
     .describe('a product profile: every number with its source and confidence')
+})
 
-  const productSummaryResponseSchema = z.array(
+/** The catalogue list. */
+const productSummaryResponseSchema = once(() => {
+  const confidence = confidenceSchema()
+  return z.array(
     z.strictObject({
       id: text('product id'),
       name: text('product name'),
@@ -168,7 +193,11 @@ function buildProductSchemas() {
       kineticsConfidence: confidence,
     }),
   )
+})
 
+/** The equilibrium moisture at an air state, or the equilibrium RH of a moisture. */
+const equilibriumResponseSchema = once(() => {
+  const confidence = confidenceSchema()
   const equilibriumBase = {
     productId: text('product id'),
     dryBulbC: num('air temperature [°C]'),
@@ -185,7 +214,7 @@ function buildProductSchemas() {
     extrapolated: z.boolean().describe('outside the temperatures or humidities it was fitted at'),
   }
 
-  const equilibriumResponseSchema = z.union([
+  return z.union([
     z
       .strictObject({
         ...equilibriumBase,
@@ -206,8 +235,11 @@ function buildProductSchemas() {
       })
       .describe('with moistureWb: the equilibrium relative humidity (water activity)'),
   ])
+})
 
-  const fittedModel = z.strictObject({
+/** One drying model fitted to the weighings. */
+const fittedModelSchema = once(() =>
+  z.strictObject({
     model: z.enum(['lewis', 'page', 'diffusion']).describe('drying model'),
     params: z
       .record(
@@ -224,8 +256,11 @@ function buildProductSchemas() {
     r2: num('coefficient of determination [0–1]'),
     aicc: num('small-sample Akaike information criterion [dimensionless]'),
     converged: z.boolean().describe('the fit converged'),
-  })
+  }),
+)
 
+/** The columns the weighings were read from. */
+const weighingColumnsSchema = once(() => {
   const column = <U extends z.ZodType>(unit: U) =>
     z.strictObject({
       index: count('column, from 0'),
@@ -233,8 +268,31 @@ function buildProductSchemas() {
       unit,
       unitFrom: z.enum(['header', 'default']).describe('unit written in the header, or assumed'),
     })
+  return z
+    .strictObject({
+      time: column(z.enum(['s', 'min', 'h', 'd']).describe('time unit')).extend({
+        dateTime: z.boolean().describe('a date-time column'),
+      }),
+      mass: column(z.enum(['g', 'kg', 'lb', 'oz']).describe('mass unit')),
+      airTemp: column(z.enum(['C', 'F']).describe('temperature unit')).nullable(),
+      rh: column(z.literal('%').describe('relative humidity unit')).nullable(),
+      alsoMatched: z.array(
+        z.strictObject({
+          role: z
+            .enum(['time', 'mass', 'air temperature', 'relative humidity'])
+            .describe('what it could have been'),
+          header: text('the header'),
+        }),
+      ),
+    })
+    .nullable()
+    .describe('the columns the weighings were read from')
+})
 
-  const fitResponseSchema = z
+/** Drying kinetics fitted to weighings. */
+const fitResponseSchema = once(() => {
+  const fittedModel = fittedModelSchema()
+  return z
     .strictObject({
       criterion: z
         .literal('AICc (small-sample Akaike information criterion)')
@@ -293,42 +351,23 @@ function buildProductSchemas() {
         .nullable(),
       meanAirTempC: numOrNull('mean air temperature of the weighings [°C]'),
       meanRhPct: numOrNull('mean relative humidity of the weighings [%]'),
-      columns: z
-        .strictObject({
-          time: column(z.enum(['s', 'min', 'h', 'd']).describe('time unit')).extend({
-            dateTime: z.boolean().describe('a date-time column'),
-          }),
-          mass: column(z.enum(['g', 'kg', 'lb', 'oz']).describe('mass unit')),
-          airTemp: column(z.enum(['C', 'F']).describe('temperature unit')).nullable(),
-          rh: column(z.literal('%').describe('relative humidity unit')).nullable(),
-          alsoMatched: z.array(
-            z.strictObject({
-              role: z
-                .enum(['time', 'mass', 'air temperature', 'relative humidity'])
-                .describe('what it could have been'),
-              header: text('the header'),
-            }),
-          ),
-        })
-        .nullable()
-        .describe('the columns the weighings were read from'),
+      columns: weighingColumnsSchema(),
       columnsRead: z.string().nullable().describe('the same, in one sentence'),
       warnings: texts('what limits the fit'),
-      profile: productProfileResponseSchema
+      profile: productProfileResponseSchema()
         .nullable()
         .describe('with product: a profile with the fitted kinetics'),
     })
     .describe('drying kinetics fitted to weighings')
-  return {
-    productProfileResponseSchema,
-    productSummaryResponseSchema,
-    equilibriumResponseSchema,
-    fitResponseSchema,
-  }
-}
+})
 
 /** The schemas, built on first use (GET /openapi.json, GET /docs, tests) and kept. */
-export const productSchemas = once(buildProductSchemas)
+export const productSchemas = once(() => ({
+  productProfileResponseSchema: productProfileResponseSchema(),
+  productSummaryResponseSchema: productSummaryResponseSchema(),
+  equilibriumResponseSchema: equilibriumResponseSchema(),
+  fitResponseSchema: fitResponseSchema(),
+}))
 
 /** Compile-time checks that the schemas describe the types (see assessment.ts). */
 type Describes<T, S extends T> = S
