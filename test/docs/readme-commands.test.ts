@@ -72,6 +72,23 @@ function words(line: string): string[] {
 }
 
 const commands = readmeCommands(readme)
+
+/**
+ * Commands written in the README's prose as inline code (`dryhours products figs`): those with arguments and without a
+ * placeholder (`<file>`, `[…]`, `a|b`, `…`). Table rows are left to the test of their table
+ * (test/hostile/readme-tables.test.ts: the exit-status examples).
+ */
+function inlineCommands(text: string): string[] {
+  const out: string[] = []
+  for (const line of text.split('\n')) {
+    if (line.startsWith('|')) continue
+    for (const m of line.matchAll(/`(dryhours [a-z-]+ [^`]+)`/g)) {
+      if (!/[<>[\]|…]/.test(m[1])) out.push(m[1])
+    }
+  }
+  return out
+}
+const inline = inlineCommands(readme)
 const temp = mkdtempSync(join(tmpdir(), 'dryhours-readme-'))
 afterAll(() => rmSync(temp, { recursive: true, force: true }))
 
@@ -241,6 +258,17 @@ describe('README: every command of its code blocks runs', () => {
         `README command of an unknown kind: ${line}`,
       ).toBe(true)
     }
+  })
+
+  it('has fenced code only as sh blocks, so no command is left out of the run below', () => {
+    const fences = readme.split('\n').filter((l) => l.startsWith('```') && l.trim() !== '```')
+    expect(fences.filter((l) => l.trim() !== '```sh')).toEqual([])
+  })
+
+  it.each(inline.map((c) => [c]))('in the text: %s', async (line) => {
+    const f = cliIo()
+    expect(await runCli(words(line).slice(1), f.io), f.err()).toBe(0)
+    expect(f.out().length).toBeGreaterThan(10)
   })
 
   // in README order, one after the other: a later command may read what an earlier one wrote
