@@ -20,6 +20,8 @@ export const GAS_CONSTANT_WATER_VAPOR_J_PER_KG_K = GAS_CONSTANT_J_PER_MOL_K / MO
 /** Stefan–Boltzmann constant σ [W m⁻² K⁻⁴]: CODATA 2018 (exact since the 2019 SI). */
 export const STEFAN_BOLTZMANN_WM2K4 = 5.670374419e-8
 
+/** Hours per day. Definition. */
+export const HOURS_PER_DAY = 24
 /** Seconds per hour. Definition. */
 export const S_PER_HOUR = 3600
 /** Seconds per day. Definition. */
