@@ -19,6 +19,7 @@ import { AdiabaticPath, adiabaticEndDryBulbC, solveAdiabaticPath } from '../phys
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
 import { saturationPressureLiquidPa } from '../physics/saturation.ts'
+import { moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import {
   allocateColumns,
@@ -324,6 +325,9 @@ export function computeHourlyConditions(
   const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method)
   const methodHour = model.prepare(method, {
     series,
+    profile: product.profile,
+    initialWbPct: options.initialWbPct,
+    targetWbPct: moistureWbPctFromDb(options.targetDb),
     solar,
     thresholds: options.thresholds,
     maxProductTempC: options.maxProductTempC,
