@@ -208,6 +208,6 @@ export function binStage(
     })),
     runs: result.runs,
     runsLeftOut: result.runsLeftOut,
-    cautions: [...BIN_CAUTIONS, ...spoilage.cautions],
+    cautions: [...BIN_CAUTIONS],
   }
 }
