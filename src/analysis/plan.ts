@@ -221,8 +221,8 @@ function monthDayOption(option: keyof AssessOptions, text: string, name: string)
  * Cost of one layer-hour of the bin model in batch-hours of the thin-layer batches, the unit of the work budget.
  * Measured by dryhours (bench/sections/bins.ts, "bin layer-hour in batch-hours"): CPU time of a bin assessment per
  * layer-hour the planner counts, over CPU time of a slow batch assessment (shade drying of corn, batches running
- * long) per batch-hour it counts, the same demo file in the same process: 1.4 (dry upland) and 1.5 (humid valley,
- * where the bin runs last the whole season); 2 leaves a margin.
+ * long) per batch-hour it counts, the same demo file in the same process: 1.3–1.65 in three runs on the dry upland
+ * and the humid valley files (on a loaded shared machine); 2 leaves a margin.
  */
 export const BIN_LAYER_HOUR_IN_BATCH_HOURS = 2
 
