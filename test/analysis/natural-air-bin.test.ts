@@ -4,6 +4,7 @@
  * planner's count of bin work and the API's refusal above the budget, the CLI text, the report section, its CSV
  * tables and its US display.
  */
+import { readFileSync } from 'node:fs'
 import { readFile } from 'node:fs/promises'
 import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
@@ -246,27 +247,12 @@ function fakeIo() {
 }
 
 describe('the CLI, the report and the comparison', () => {
-  const args = [
-    'assess',
-    'climate-demo/quillow-valley-2021-2023-local-dst-imperial.csv',
-    '--tz',
-    'America/Chicago',
-    '--product',
-    'shelled-corn',
-    '--method',
-    'natural-air-bin',
-    '--airflow',
-    '1,2,3',
-    '--initial-wb',
-    '20',
-    '--target-wb',
-    '15.5',
-    '--start',
-    '09-15',
-    '--end',
-    '10-15',
-    '--quiet',
-  ]
+  // the README's command (section "Grain in a bin"): the contract that it runs and answers as documented
+  const readme = readFileSync('README.md', 'utf8')
+  const section = readme.slice(readme.indexOf('### Grain in a bin'))
+  const line = section.split('\n').find((l) => l.startsWith('npx dryhours assess '))
+  if (!line) throw new Error('README: no bin command')
+  const args = [...line.slice('npx dryhours '.length).split(' '), '--quiet']
 
   it('the text answer carries the minimum airflow per start month and the per-start rows, and equals the JSON', async () => {
     const { io, out } = fakeIo()
