@@ -10,7 +10,10 @@
  * 5. {@link startDatesStage}: the start-date table and the best start windows;
  * 6. {@link heatSummary} (analysis/heat-summary.ts): heat and fuel, with a cross-check;
  * 7. {@link psychrometricSummary} (analysis/psychrometric.ts): the hours on a psychrometric chart;
- * 8. {@link assembleAssessment}: the JSON-safe {@link Assessment} with its assumptions and warnings.
+ * 8. {@link assembleAssessment} (analysis/assemble.ts): the JSON-safe {@link Assessment} with its assumptions and
+ *    warnings.
+ * For grain in a bin (a method with `batches: 'deep-bed'`), stages 4–5 are the bin stage instead
+ * (analysis/bin-stage.ts: the deep-bed model per start date × airflow × year), and the heat has no batches.
  */
 import {
   computeHourlyConditions,
