@@ -43,6 +43,22 @@ function byAirflow(b: BinAssessment): BinStartAirflow[][] {
   )
 }
 
+/** One chart series per airflow: `value` of each start date (null where there is no row). */
+function airflowSeries(
+  b: BinAssessment,
+  ctx: SectionContext,
+  value: (s: BinStartAirflow) => number | null,
+): { name: string; values: (number | null)[] }[] {
+  const dates = startDates(b)
+  return byAirflow(b).map((g, i) => ({
+    name: airflowLabel(ctx, b.airflows[i]),
+    values: dates.map((d) => {
+      const row = g.find((s) => s.startDate === d)
+      return row ? value(row) : null
+    }),
+  }))
+}
+
 function energy(ctx: SectionContext, kwhPerTonne: number | null): number | null {
   return finite(kwhPerTonne) ? round(ctx.units.energyPerMass(kwhPerTonne).value, 1) : null
 }
@@ -214,10 +230,7 @@ export function binSection(a: Assessment, ctx: SectionContext): string {
       title: `Top-layer dry-matter loss by start date, ${ctx.siteName}`,
       description: dmlAlt,
       x: dates,
-      series: groups.map((g, i) => ({
-        name: airflowLabel(ctx, b.airflows[i]),
-        values: dates.map((d) => g.find((s) => s.startDate === d)?.topLayerDryMatterLossPct.p90 ?? null),
-      })),
+      series: airflowSeries(b, ctx, (s) => s.topLayerDryMatterLossPct.p90),
       yLabel: 'dry-matter loss [%]',
       xLabel: 'start date (MM-DD)',
       unit: '%',
@@ -242,10 +255,7 @@ export function binSection(a: Assessment, ctx: SectionContext): string {
       title: `Days until the top layer is dry, ${ctx.siteName}`,
       description: daysAlt,
       x: dates,
-      series: groups.map((g, i) => ({
-        name: airflowLabel(ctx, b.airflows[i]),
-        values: dates.map((d) => g.find((s) => s.startDate === d)?.daysUntilTopLayerDry.median ?? null),
-      })),
+      series: airflowSeries(b, ctx, (s) => s.daysUntilTopLayerDry.median),
       yLabel: 'days',
       xLabel: 'start date (MM-DD)',
       unit: 'days',
