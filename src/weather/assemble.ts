@@ -7,6 +7,7 @@
  * produce a {@link RawTable}.
  */
 
+import { MS_PER_HOUR, MS_PER_MINUTE } from '../physics/constants.ts'
 import { standardPressureKpaAtElevation } from '../physics/moist-air.ts'
 import { summarizeCoverage } from './coverage.ts'
 import { fillDaytimeIrradiance, fixNightIrradiance, hourSun, interpolateShortGaps } from './gap-fill.ts'
@@ -55,7 +56,6 @@ import {
 } from './units.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
-const MS_PER_HOUR = 3_600_000
 /** Longest series accepted [h]: 100 years. Guards against one stray year turning into a huge grid. */
 export const MAX_SERIES_HOURS = 100 * 8784
 
@@ -558,7 +558,7 @@ function rescaleAmountToMean(
   intervals: Float64Array | undefined,
 ): Float64Array {
   for (let i = 0; i < values.length; i++) {
-    const minutes = intervals !== undefined ? intervals[i] / 60_000 : intervalMinutes
+    const minutes = intervals !== undefined ? intervals[i] / MS_PER_MINUTE : intervalMinutes
     values[i] = minutes > 0 ? (values[i] * 60) / minutes : Number.NaN
   }
   return values

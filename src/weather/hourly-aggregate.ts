@@ -9,11 +9,9 @@
  * report per hour is taken, the routine one before a special, the nearest to the hour first.
  * Running totals (counters since a reset) are first turned into interval totals.
  */
+import { MS_PER_HOUR, MS_PER_MINUTE } from '../physics/constants.ts'
 import type { IntervalLabel, RowSampling, ValueKind } from './raw-table.ts'
 import { ReportKind } from './raw-table.ts'
-
-const MS_PER_MINUTE = 60_000
-const MS_PER_HOUR = 3_600_000
 
 /**
  * Share of an hour that readings must cover for an hourly mean (instants and interval means): one

@@ -7,6 +7,7 @@
  * in local time (a logger set to the site's clock), or from the longitude (mean solar time rounded to
  * the hour, with a warning). A file in UTC says nothing about the site's clock.
  */
+import { MS_PER_HOUR } from '../physics/constants.ts'
 import type { SiteInfo } from './series.ts'
 import type { TimestampBasis } from './time-basis.ts'
 import { formatOffset } from './time-basis.ts'
@@ -61,7 +62,7 @@ export function zoneStandardOffsetHours(zone: string, utcMs: number): number {
       Number(p.hour) % 24,
       Number(p.minute),
     )
-    return (wall - t) / 3_600_000
+    return (wall - t) / MS_PER_HOUR
   }
   return Math.min(offsetAt(Date.UTC(year, 0, 1, 12)), offsetAt(Date.UTC(year, 6, 1, 12)))
 }

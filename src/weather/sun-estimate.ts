@@ -15,6 +15,7 @@
  * Night hours (sun below the horizon for the whole hour) are 0. The site's latitude and longitude
  * are needed for any of it.
  */
+import { MS_PER_DAY, MS_PER_HOUR, S_PER_HOUR } from '../physics/constants.ts'
 import { dayOfYearAt, extraterrestrialRadiationDailyMjM2 } from '../physics/fao56-solar.ts'
 import {
   clearSkyRadiationFao56,
@@ -22,9 +23,6 @@ import {
 } from '../physics/irradiance.ts'
 import { sinGeometricSunAltitude } from '../physics/sun.ts'
 import { type HourlySeries, QualityFlag } from './series.ts'
-
-const MS_PER_HOUR = 3_600_000
-const MS_PER_DAY = 86_400_000
 
 /**
  * Kasten & Czeplak (1980), "Solar and terrestrial radiation dependent on the amount and type of
@@ -190,7 +188,7 @@ export function estimateMissingIrradiance(
         const rsMj = hargreavesSamaniDailyMjM2(tMax, tMin, ra, kRs, elevation)
         for (let k = s; k < e; k++) {
           if (!Number.isNaN(ghi[k])) continue
-          ghi[k] = clearSum > 0 ? (rsMj * 1e6 * clear[k]) / (3600 * clearSum) : 0
+          ghi[k] = clearSum > 0 ? (rsMj * 1e6 * clear[k]) / (S_PER_HOUR * clearSum) : 0
           quality[k] |= QualityFlag.irradianceEstimated
           fromRange++
         }

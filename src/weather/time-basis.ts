@@ -5,6 +5,7 @@
  * run 01:00–24:00), offsets written in the text, a fixed offset, or an IANA zone with daylight
  * saving (spring gap and autumn doubled hour reported).
  */
+import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { IntervalLabel } from './raw-table.ts'
 import { offsetAtUtc, utcCandidates, zoneOffsets } from './time-zone.ts'
@@ -16,8 +17,6 @@ import {
   wallClockMs,
 } from './timestamps.ts'
 import { WeatherInputError } from './weather-input-error.ts'
-
-const MS_PER_HOUR = 3_600_000
 
 /** Nominal year of a typical-year file without 29 February (any common year would do). */
 export const NOMINAL_COMMON_YEAR = 2001
@@ -362,5 +361,5 @@ export function formatOffset(hours: number): string {
 
 /** Midnight UTC [ms] of a civil date; exported for tests and writers. */
 export function civilMidnightUtcMs(year: number, month: number, day: number): number {
-  return daysFromCivil(year, month, day) * 86_400_000
+  return daysFromCivil(year, month, day) * MS_PER_DAY
 }

@@ -5,9 +5,7 @@
  * that happens twice) made explicit. Offsets are sampled once per day over the file's span and the
  * transitions located to the minute, so a 30-year file costs about 11,000 `Intl` calls, not 263,000.
  */
-
-const MS_PER_MINUTE = 60_000
-const MS_PER_DAY = 86_400_000
+import { MS_PER_DAY, MS_PER_HOUR, MS_PER_MINUTE } from '../physics/constants.ts'
 
 /** Offset of the zone from UTC [ms] at a UTC instant, from Intl's formatted wall clock. */
 function intlOffsetMs(format: Intl.DateTimeFormat, utcMs: number): number {
@@ -91,9 +89,9 @@ export function utcCandidates(z: ZoneOffsets, wallMs: number): number[] {
   const seen = new Set<number>()
   const out: number[] = []
   const near = [
-    offsetAtUtc(z, wallMs - 14 * 3_600_000),
+    offsetAtUtc(z, wallMs - 14 * MS_PER_HOUR),
     offsetAtUtc(z, wallMs),
-    offsetAtUtc(z, wallMs + 14 * 3_600_000),
+    offsetAtUtc(z, wallMs + 14 * MS_PER_HOUR),
   ]
   for (const o of near) {
     if (seen.has(o)) continue

@@ -9,6 +9,7 @@
  * 12-hour clocks (`1:00 PM`, `1:00a`, `12:30p`, `p.m.`), and 24:00 for midnight at the end of a day.
  * Components go into columns so the date order can be decided after every row has been seen.
  */
+import { MS_PER_DAY, MS_PER_MINUTE } from '../physics/constants.ts'
 
 /** Parsed components of all rows; NaN where a row's timestamp could not be read. */
 export interface TimestampColumns {
@@ -588,7 +589,7 @@ export function wallClockMs(ts: TimestampColumns, i: number, order: 'mdy' | 'dmy
   const day = yearFirst || order === 'mdy' ? ts.second[i] : ts.first[i]
   if (!(month >= 1 && month <= 12) || !(day >= 1) || day > daysInMonth(year, month)) return Number.NaN
   if (!(year >= 1800 && year <= 2200)) return Number.NaN
-  return daysFromCivil(year, month, day) * 86_400_000 + ts.minuteOfDay[i] * 60_000
+  return daysFromCivil(year, month, day) * MS_PER_DAY + ts.minuteOfDay[i] * MS_PER_MINUTE
 }
 
 /** Month (1–12) and day of row `i` under `order`. */

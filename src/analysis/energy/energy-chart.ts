@@ -8,7 +8,9 @@
  * CUSUM, locates the change (./change-point.ts) and says whether the signal stands without the batches whose
  * weather the baseline never saw (./weather-range.ts). Plain JSON-safe data for report/.
  */
+
 import type { FuelId } from '../../drying/method.ts'
+import { MS_PER_HOUR } from '../../physics/constants.ts'
 import { STANDARD_PRESSURE_KPA, standardPressureKpaAtElevation } from '../../physics/moist-air.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
@@ -158,7 +160,7 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
   const fallbackPressureKpa =
     elevation === null ? STANDARD_PRESSURE_KPA : standardPressureKpaAtElevation(elevation)
   const timed = log.batches
-    .map((b) => ({ b, startUtcMs: b.startLocalMs - (b.startOffsetHours ?? offset ?? 0) * 3_600_000 }))
+    .map((b) => ({ b, startUtcMs: b.startLocalMs - (b.startOffsetHours ?? offset ?? 0) * MS_PER_HOUR }))
     .sort((x, y) => x.startUtcMs - y.startUtcMs)
   const batches = timed.map(({ b, startUtcMs }, i) =>
     batchEnergy(b, i, startUtcMs, ambientOf(b, startUtcMs, options, fallbackPressureKpa), {
