@@ -67,8 +67,8 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
     ...(Array.isArray(o.upper) ? o.upper : [o.upper]),
     ...(o.lower === null ? [] : Array.isArray(o.lower) ? o.lower : [o.lower]),
   ].filter(Number.isFinite)
-  let lo = limitValues.reduce((m, v) => (v < m ? v : m), Number.POSITIVE_INFINITY)
-  let hi = limitValues.reduce((m, v) => (v > m ? v : m), Number.NEGATIVE_INFINITY)
+  let lo = limitValues.reduce((m, v) => Math.min(v, m), Number.POSITIVE_INFINITY)
+  let hi = limitValues.reduce((m, v) => Math.max(v, m), Number.NEGATIVE_INFINITY)
   const pad = (hi - lo) * 0.06 || 1
   lo -= pad
   hi += pad

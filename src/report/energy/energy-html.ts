@@ -210,9 +210,7 @@ function chartFigures(
           // C⁺ (more energy) is the main series.
           label: labels[i],
           value: v,
-          rules: c.signals.some((s) => s.index === i && s.side === 'above')
-            ? [signalLabel('CUSUM', 'above')]
-            : [],
+          rules: cusumUp.has(i) ? [signalLabel('CUSUM', 'above')] : [],
           outside: outside[i],
         })),
         second: {
