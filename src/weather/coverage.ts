@@ -2,10 +2,10 @@
  * @module weather/coverage
  * Share of usable hours (dry bulb and humidity present) per calendar month, in site standard time.
  */
+import { daysInMonth } from '../physics/calendar.ts'
 import { MS_PER_HOUR } from '../physics/constants.ts'
 import type { MonthCoverage } from './result.ts'
 import type { HourlySeries } from './series.ts'
-import { daysInMonth } from './timestamps.ts'
 
 /** Coverage per month and the distinct years, months taken in the site's standard time (UTC when unknown). */
 export function summarizeCoverage(

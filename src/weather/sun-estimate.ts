@@ -15,8 +15,9 @@
  * Night hours (sun below the horizon for the whole hour) are 0. The site's latitude and longitude
  * are needed for any of it.
  */
+import { dayOfYearAt } from '../physics/calendar.ts'
 import { MS_PER_DAY, MS_PER_HOUR, S_PER_HOUR } from '../physics/constants.ts'
-import { dayOfYearAt, extraterrestrialRadiationDailyMjM2 } from '../physics/fao56-solar.ts'
+import { extraterrestrialRadiationDailyMjM2 } from '../physics/fao56-solar.ts'
 import {
   clearSkyRadiationFao56,
   clearSkyGhiHaurwitzCosZenithWm2 as haurwitzClearSkyWm2,

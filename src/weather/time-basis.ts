@@ -5,17 +5,11 @@
  * run 01:00–24:00), offsets written in the text, a fixed offset, or an IANA zone with daylight
  * saving (spring gap and autumn doubled hour reported).
  */
-import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
+import { MS_PER_HOUR } from '../physics/constants.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { IntervalLabel } from './raw-table.ts'
 import { offsetAtUtc, utcCandidates, zoneOffsets } from './time-zone.ts'
-import {
-  type DateOrder,
-  daysFromCivil,
-  detectDateOrder,
-  type TimestampColumns,
-  wallClockMs,
-} from './timestamps.ts'
+import { type DateOrder, detectDateOrder, type TimestampColumns, wallClockMs } from './timestamps.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
 /** Nominal year of a typical-year file without 29 February (any common year would do). */
@@ -357,9 +351,4 @@ export function formatOffset(hours: number): string {
   const h = Math.floor(abs)
   const m = Math.round((abs - h) * 60)
   return `${sign}${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`
-}
-
-/** Midnight UTC [ms] of a civil date; exported for tests and writers. */
-export function civilMidnightUtcMs(year: number, month: number, day: number): number {
-  return daysFromCivil(year, month, day) * MS_PER_DAY
 }

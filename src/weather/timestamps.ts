@@ -9,6 +9,7 @@
  * 12-hour clocks (`1:00 PM`, `1:00a`, `12:30p`, `p.m.`), and 24:00 for midnight at the end of a day.
  * Components go into columns so the date order can be decided after every row has been seen.
  */
+import { daysFromCivil, daysInMonth } from '../physics/calendar.ts'
 import { MS_PER_DAY, MS_PER_MINUTE } from '../physics/constants.ts'
 
 /** Parsed components of all rows; NaN where a row's timestamp could not be read. */
@@ -560,23 +561,6 @@ export function detectDateOrder(ts: TimestampColumns): DateOrder | 'ambiguous' |
   if (firstOver12) return 'dmy'
   if (secondOver12) return 'mdy'
   return 'ambiguous'
-}
-
-/** Days from 1970-01-01 to the civil date (proleptic Gregorian); Hinnant (2013), "chrono-Compatible Low-Level Date Algorithms", days_from_civil. */
-export function daysFromCivil(year: number, month: number, day: number): number {
-  const y = month <= 2 ? year - 1 : year
-  const era = Math.floor(y / 400)
-  const yoe = y - era * 400
-  const mp = (month + 9) % 12
-  const doy = Math.floor((153 * mp + 2) / 5) + day - 1
-  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy
-  return era * 146097 + doe - 719468
-}
-
-/** Days in a month of the Gregorian calendar. */
-export function daysInMonth(year: number, month: number): number {
-  if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31
 }
 
 /**

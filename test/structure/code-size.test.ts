@@ -32,9 +32,8 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     why: 'catalogue being re-sourced (branches engine15, calib15)',
   },
   { where: 'src/weather/columns.ts', upTo: 708, why: 'split in progress (branch tidy14)' },
-  { where: 'src/weather/delimited.ts', upTo: 979, why: 'split in progress (branch tidy14)' },
   { where: 'src/weather/option-spec.ts', upTo: 491, why: 'split in progress (branch tidy14)' },
-  { where: 'src/weather/timestamps.ts', upTo: 599, why: 'split in progress (branch tidy14)' },
+  { where: 'src/weather/timestamps.ts', upTo: 583, why: 'split in progress (branch tidy14)' },
   {
     where: 'src/analysis/energy/energy-chart.ts › analyzeEnergyLog',
     upTo: 145,
@@ -51,7 +50,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     why: 'split in progress (branch tidy14)',
   },
   { where: 'src/weather/columns.ts › planColumns', upTo: 222, why: 'split in progress (branch tidy14)' },
-  { where: 'src/weather/delimited.ts › readDelimited', upTo: 364, why: 'split in progress (branch tidy14)' },
   { where: 'src/weather/read-weather.ts › readWeather', upTo: 139, why: 'split in progress (branch tidy14)' },
   {
     where: 'src/weather/sun-estimate.ts › estimateMissingIrradiance',
