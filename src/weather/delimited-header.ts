@@ -6,9 +6,10 @@
  * the most when a title line above uses another. Header cells split by an unquoted delimiter inside
  * brackets are joined again.
  */
+
 import Papa from 'papaparse'
-import { analyseHeader } from './columns.ts'
 import type { DelimitedLayout, ReadDelimitedOptions } from './delimited.ts'
+import { analyseHeader } from './header-parts.ts'
 import { parseDecimal } from './numbers.ts'
 import { escapeControlCharacters, snippet } from './snippet.ts'
 import { createTimestampColumns, parseTimestampInto } from './timestamps.ts'

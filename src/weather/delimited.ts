@@ -5,11 +5,14 @@
  * start with a site line), columns planned by {@link planColumns}, the rows split (delimited-body.ts),
  * their times (delimited-times.ts) and values (delimited-values.ts) read.
  */
-import { type ColumnPlan, type ColumnPreset, findNamedColumn, planColumns, splitHeader } from './columns.ts'
+
+import { type ColumnPreset, findNamedColumn } from './column-preset.ts'
+import { type ColumnPlan, planColumns } from './columns.ts'
 import { dropBodyRows, papaparseBody, scanBody } from './delimited-body.ts'
 import { findHeader, headerNames } from './delimited-header.ts'
 import { readRowTimes } from './delimited-times.ts'
 import { readValueColumns } from './delimited-values.ts'
+import { splitHeader } from './header-parts.ts'
 import { isDecimalCommaNumber } from './numbers.ts'
 import type { ColumnMapping, MappingKey } from './options.ts'
 import type { ProblemLog } from './problem-log.ts'

@@ -31,7 +31,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     upTo: 431,
     why: 'catalogue being re-sourced (branches engine15, calib15)',
   },
-  { where: 'src/weather/columns.ts', upTo: 708, why: 'split in progress (branch tidy14)' },
   { where: 'src/weather/option-spec.ts', upTo: 491, why: 'split in progress (branch tidy14)' },
   { where: 'src/weather/timestamps.ts', upTo: 583, why: 'split in progress (branch tidy14)' },
   {
@@ -49,7 +48,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     upTo: 195,
     why: 'split in progress (branch tidy14)',
   },
-  { where: 'src/weather/columns.ts › planColumns', upTo: 222, why: 'split in progress (branch tidy14)' },
   { where: 'src/weather/read-weather.ts › readWeather', upTo: 139, why: 'split in progress (branch tidy14)' },
   {
     where: 'src/weather/sun-estimate.ts › estimateMissingIrradiance',

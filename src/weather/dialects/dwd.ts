@@ -14,7 +14,7 @@
  * product descriptions, from memory.)
  */
 import { MS_PER_HOUR } from '../../physics/constants.ts'
-import type { ColumnPreset } from '../columns.ts'
+import type { ColumnPreset } from '../column-preset.ts'
 import { readDelimited } from '../delimited.ts'
 import { WeatherInputError } from '../weather-input-error.ts'
 import {
