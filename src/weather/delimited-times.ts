@@ -5,18 +5,15 @@
  * hour columns. Cells go into {@link TimestampColumns} (timestamps.ts); a row that cannot be read keeps
  * its reason for the row account, a row rejected for a stray quote is logged.
  */
+
 import { monthDayOfYear } from '../physics/calendar.ts'
 import type { BodyCells } from './delimited-body.ts'
 import { parseField } from './numbers.ts'
 import type { TimeField } from './options.ts'
 import type { ProblemLog } from './problem-log.ts'
 import { snippet } from './snippet.ts'
-import {
-  createTimestampColumns,
-  parseTimeOfDay,
-  parseTimestampInto,
-  type TimestampColumns,
-} from './timestamps.ts'
+import { createTimestampColumns, type TimestampColumns } from './timestamp-columns.ts'
+import { parseTimeOfDay, parseTimestampInto } from './timestamps.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
 /**

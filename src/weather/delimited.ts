@@ -17,7 +17,7 @@ import { isDecimalCommaNumber } from './numbers.ts'
 import type { ColumnMapping, MappingKey } from './options.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { RawTable } from './raw-table.ts'
-import type { DateOrder } from './timestamps.ts'
+import type { DateOrder } from './timestamp-columns.ts'
 import type { WeatherVariable } from './units.ts'
 
 export interface DelimitedInfo {

@@ -5,11 +5,12 @@
  * run 01:00–24:00), offsets written in the text, a fixed offset, or an IANA zone with daylight
  * saving (spring gap and autumn doubled hour reported).
  */
+
 import { MS_PER_HOUR } from '../physics/constants.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { IntervalLabel } from './raw-table.ts'
 import { offsetAtUtc, utcCandidates, zoneOffsets } from './time-zone.ts'
-import { type DateOrder, detectDateOrder, type TimestampColumns, wallClockMs } from './timestamps.ts'
+import { type DateOrder, detectDateOrder, type TimestampColumns, wallClockMs } from './timestamp-columns.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 
 /** Nominal year of a typical-year file without 29 February (any common year would do). */

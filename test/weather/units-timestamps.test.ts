@@ -7,12 +7,8 @@
 import { describe, expect, it } from 'vitest'
 import { analyseHeader } from '../../src/weather/header-parts.ts'
 import { headerTimeBasis } from '../../src/weather/header-time.ts'
-import {
-  createTimestampColumns,
-  parseTimeOfDay,
-  parseTimestampInto,
-  type TimestampColumns,
-} from '../../src/weather/timestamps.ts'
+import { createTimestampColumns, type TimestampColumns } from '../../src/weather/timestamp-columns.ts'
+import { parseTimeOfDay, parseTimestampInto } from '../../src/weather/timestamps.ts'
 import { isUnitToken, unitConversion, type WeatherVariable } from '../../src/weather/units.ts'
 
 function si(variable: WeatherVariable, token: string, value: number): number {
