@@ -31,7 +31,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     upTo: 431,
     why: 'catalogue being re-sourced (branches engine15, calib15)',
   },
-  { where: 'src/weather/option-spec.ts', upTo: 491, why: 'split in progress (branch tidy14)' },
   {
     where: 'src/analysis/energy/energy-chart.ts › analyzeEnergyLog',
     upTo: 145,
