@@ -168,7 +168,7 @@ export function extraterrestrialRadiationForPeriodUtcMjM2(
   if (!(lonEastDeg >= -180 && lonEastDeg <= 180)) {
     throw new RangeError(`longitude must be between -180 and 180 degrees (east positive), got ${lonEastDeg}`)
   }
-  const midMs = startUtcMs + periodHours * 1_800_000
+  const midMs = startUtcMs + periodHours * (MS_PER_HOUR / 2)
   const j = dayOfYearAt(midMs, lonEastDeg / 15)
   const utcHour = (((midMs % MS_PER_DAY) + MS_PER_DAY) % MS_PER_DAY) / MS_PER_HOUR
   const w = hourAngleFromUtcRad(utcHour, lonEastDeg, j)

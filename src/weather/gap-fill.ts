@@ -97,7 +97,7 @@ export function hourSun(
       // a reading above the limit only needs the night test: the sun up at mid-hour settles it
       if (
         g > NIGHT_IRRADIANCE_LIMIT_WM2 &&
-        sinGeometricSunAltitude(startUtcMs[s] + 1_800_000, latDeg, lonDeg) > 0
+        sinGeometricSunAltitude(startUtcMs[s] + MS_PER_HOUR / 2, latDeg, lonDeg) > 0
       ) {
         clearSkyWm2[s] = Number.NaN
         continue

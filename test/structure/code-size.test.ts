@@ -47,11 +47,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     why: 'split in progress (branch tidy14)',
   },
   { where: 'src/weather/read-weather.ts › readWeather', upTo: 139, why: 'split in progress (branch tidy14)' },
-  {
-    where: 'src/weather/sun-estimate.ts › estimateMissingIrradiance',
-    upTo: 159,
-    why: 'split in progress (branch tidy14)',
-  },
 ]
 
 describe('code size (DEVELOPERS.md: one concept per file, short functions)', () => {
