@@ -32,11 +32,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     why: 'catalogue being re-sourced (branches engine15, calib15)',
   },
   {
-    where: 'src/analysis/energy/energy-chart.ts › analyzeEnergyLog',
-    upTo: 145,
-    why: 'split in progress (branch tidy14)',
-  },
-  {
     where: 'src/report/energy/control-chart-svg.ts › controlChartSvg',
     upTo: 136,
     why: 'split in progress (branch tidy14)',
