@@ -31,16 +31,6 @@ const PENDING: { where: string; upTo: number; why: string }[] = [
     upTo: 431,
     why: 'catalogue being re-sourced (branches engine15, calib15)',
   },
-  {
-    where: 'src/report/energy/control-chart-svg.ts › controlChartSvg',
-    upTo: 136,
-    why: 'split in progress (branch tidy14)',
-  },
-  {
-    where: 'src/report/energy/energy-html.ts › chartFigures',
-    upTo: 195,
-    why: 'split in progress (branch tidy14)',
-  },
 ]
 
 describe('code size (DEVELOPERS.md: one concept per file, short functions)', () => {
