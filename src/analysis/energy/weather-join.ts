@@ -4,9 +4,8 @@
  * ratio of the hours whose start falls inside [start, start + duration). Humidity ratio from RH (over
  * liquid water) and station pressure by ASHRAE HOF 2017 ch. 1 eq 20.
  */
+import { humidityRatioFromRh } from '../../physics/air-processes.ts'
 import { MS_PER_HOUR } from '../../physics/constants.ts'
-import { humidityRatioFromVaporPressure } from '../../physics/moist-air.ts'
-import { saturationVaporPressureLiquidKpa } from '../../physics/saturation.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 
 /** Share of a batch's hours that must have dry bulb and RH for a mean (assumption, common practice, no source). */
@@ -23,8 +22,7 @@ export interface BatchAmbient {
 
 /** Humidity ratio [g/kg dry air] from dry bulb [°C], RH over water [%] and pressure [kPa]. */
 export function humidityRatioGPerKgFromRh(dryBulbC: number, rhPct: number, pressureKpa: number): number {
-  const pw = (rhPct / 100) * saturationVaporPressureLiquidKpa(dryBulbC)
-  return 1000 * humidityRatioFromVaporPressure(pw, pressureKpa)
+  return 1000 * humidityRatioFromRh(dryBulbC, rhPct, pressureKpa)
 }
 
 /**
