@@ -86,18 +86,18 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   // Units once, per reading; missing codes and ranges judged per reading, with its own line.
   const { converted, columns, rowChanged } = convertColumns(raw, log, warnings)
   logDuplicates(raw, plan, series.quality, log)
-  const hourly = rowsToHours(
+  const hourly = rowsToHours({
     raw,
     plan,
-    times.labels,
-    ctx.variableTiming,
+    fileLabels: times.labels,
+    overrides: ctx.variableTiming,
     converted,
     columns,
     grid,
     rowChanged,
     log,
     warnings,
-  )
+  })
   const si = hourly.si
   const notes = ctx.notes ?? []
   checkHours(raw, si, grid, series, ctx, notes)

@@ -72,6 +72,24 @@ function describeAggregation(a: HourlyAggregation, plan: RowPlan, warnings: stri
   }
 }
 
+/** What {@link rowsToHours} works from. */
+export interface RowsToHoursInput {
+  raw: RawTable
+  plan: RowPlan
+  /** The file-wide label convention the rows' times were read with. */
+  fileLabels: IntervalLabel
+  /** The user's per-variable labels and intervals. */
+  overrides: Partial<Record<WeatherVariable, VariableTimingOverride>> | undefined
+  converted: Partial<Record<WeatherVariable, ConvertedColumn>>
+  /** The account of the columns; a column that cannot be split into hours is taken out of it. */
+  columns: ColumnReport[]
+  grid: HourGrid
+  /** Per row: 1 where a reading was changed, 2 where one was rejected by the range checks (running totals: here). */
+  rowChanged: Uint8Array
+  log: ProblemLog
+  warnings: string[]
+}
+
 /** The hourly columns of the variables a table has, in series units, and how rows became hours. */
 export interface HourlyColumnsOfTable {
   si: Partial<Record<WeatherVariable, Float64Array>>
@@ -84,18 +102,18 @@ export interface HourlyColumnsOfTable {
  * Rows to hours for every converted column (see the module). Sets the partial-hour and rejected-value
  * flags of the hours, and, for reports, the row each hour's dry bulb came from in `grid.slotRow`.
  */
-export function rowsToHours(
-  raw: RawTable,
-  plan: RowPlan,
-  fileLabels: IntervalLabel,
-  overrides: Partial<Record<WeatherVariable, VariableTimingOverride>> | undefined,
-  converted: Partial<Record<WeatherVariable, ConvertedColumn>>,
-  columns: ColumnReport[],
-  grid: HourGrid,
-  rowChanged: Uint8Array,
-  log: ProblemLog,
-  warnings: string[],
-): HourlyColumnsOfTable {
+export function rowsToHours({
+  raw,
+  plan,
+  fileLabels,
+  overrides,
+  converted,
+  columns,
+  grid,
+  rowChanged,
+  log,
+  warnings,
+}: RowsToHoursInput): HourlyColumnsOfTable {
   const n = raw.rows
   const hours = plan.hours
   const si: Partial<Record<WeatherVariable, Float64Array>> = {}
