@@ -26,7 +26,9 @@ export const HOURS_PER_DAY = 24
 export const S_PER_HOUR = 3600
 /** Seconds per day. Definition. */
 export const S_PER_DAY = 86_400
-/** Milliseconds per hour (UTC time stamps are in ms). Definition. */
+/** Milliseconds per minute (UTC time stamps are in ms). Definition. */
+export const MS_PER_MINUTE = 60_000
+/** Milliseconds per hour. Definition. */
 export const MS_PER_HOUR = 3_600_000
 /** Milliseconds per day. Definition. */
 export const MS_PER_DAY = 86_400_000

@@ -16,7 +16,7 @@ import {
   WeatherOptionError,
   WeatherOptionsInvalid,
   weatherOptionsFromTexts,
-} from '../weather/option-spec.ts'
+} from '../weather/option-texts.ts'
 
 /** Most weather files one comparison takes, unless the server says otherwise (the API's `maxSites`). */
 export const MAX_SITES = 8
