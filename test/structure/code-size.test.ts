@@ -10,22 +10,6 @@ import { MAX_FILE_LINES, MAX_FUNCTION_LINES, measureText, measureTree } from './
 
 /** `file` or `file › function name` (as code-size.ts names it), the lines it may not exceed, and why it waits. */
 const PENDING: { where: string; upTo: number; why: string }[] = [
-  { where: 'src/drying/deep-bed/bin-run.ts', upTo: 586, why: 'deep-bed tidy in progress (branch bin16)' },
-  {
-    where: 'src/drying/deep-bed/bin-run.ts › simulateDeepBed',
-    upTo: 198,
-    why: 'deep-bed tidy in progress (branch bin16)',
-  },
-  {
-    where: 'src/drying/deep-bed/bin-run.ts › solve',
-    upTo: 127,
-    why: 'deep-bed tidy in progress (branch bin16)',
-  },
-  {
-    where: 'src/drying/deep-bed/bin-assessment.ts › assessBinDrying',
-    upTo: 153,
-    why: 'deep-bed tidy in progress (branch bin16)',
-  },
   {
     where: 'src/product/catalogue-fruit.ts',
     upTo: 431,

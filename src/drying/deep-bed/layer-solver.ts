@@ -144,12 +144,7 @@ export class LayerSolver {
     const airW = air[1]
     const m0 = moisture[i]
     const tg = temp[i]
-    const md = this.md
-    const ma = this.ma
-    const r = this.r
-    const p = this.p
-    const mdCd = this.mdCd
-    const mdCw = this.mdCw
+    const { md, ma, r, p, mdCd, mdCw, erhValues: values, nM } = this
     const eIn =
       ma *
         (CP_DRY_AIR_KJ_PER_KG_K * airT +
@@ -159,8 +154,6 @@ export class LayerSolver {
     // d(numerator)/dm1 and d(denominator)/dm1 of the exit temperature t1 = num/den
     const dNum = mdq + md * VAPOR_ENTHALPY_0C_KJ_PER_KG
     const dDen = md * (CP_LIQUID_WATER_KJ_PER_KG_K - CP_WATER_VAPOR_KJ_PER_KG_K)
-    const values = this.erhValues
-    const nM = this.nM
     // bracket [a, b] with g(a) > 0 > g(b), set after the first evaluation; an end not yet evaluated has g = NaN
     let a = m0
     let b = m0
