@@ -9,15 +9,13 @@
  * and its file. Runtime-neutral: the entry points read the files.
  */
 import Papa from 'papaparse'
+import { optionSpec, WEATHER_OPTION_SPECS, type WeatherOptionSpec } from '../weather/option-spec.ts'
 import {
   checkWeatherOptions,
-  optionSpec,
-  WEATHER_OPTION_SPECS,
   WeatherOptionError,
-  type WeatherOptionSpec,
   WeatherOptionsInvalid,
   weatherOptionsFromTexts,
-} from '../weather/option-spec.ts'
+} from '../weather/option-texts.ts'
 import type { WeatherReadOptions } from '../weather/options.ts'
 import { snippet } from '../weather/snippet.ts'
 

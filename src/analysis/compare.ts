@@ -13,11 +13,16 @@
 import { MS_PER_DAY } from '../physics/constants.ts'
 import { type AssessOptions, assess } from './assess.ts'
 import type { Assessment } from './assessment.ts'
+import { binSeasonAirflow } from './compare-methods-bin.ts'
 import { parseMonthDay } from './local-time.ts'
 import { quantileSorted, roundOrNull } from './statistics.ts'
 
 export const COMPARE_CRITERIA = ['probability-within-deadline', 'usable-hours-p10', 'heat-per-tonne'] as const
 export type CompareCriterion = (typeof COMPARE_CRITERIA)[number]
+
+/** The first criterion in words for natural-air bins (their assessments carry no batches). */
+export const BIN_PROBABILITY_DESCRIPTION =
+  'mean, over the season start dates and the airflows compared, of the share of years in which the top layer of the bin dries below the dry-matter loss limit within the season (higher is better)'
 
 export const CRITERION_DESCRIPTIONS: Record<CompareCriterion, string> = {
   'probability-within-deadline':
@@ -47,6 +52,11 @@ export interface SiteScore {
   meanProbabilityWithinDeadline: number | null
   medianHeatKwhPerTonne: number | null
   bestStartWindow: string | null
+  /**
+   * Natural-air bins: the largest of the start months' minimum airflows [m³/min per t] (the airflow that serves
+   * the whole season), null when some month has none among those compared; absent for other methods.
+   */
+  binSeasonMinimumAirflowM3PerMinPerTonne?: number | null
   warnings: string[]
 }
 
@@ -103,13 +113,20 @@ export function seasonUsableHoursByYear(a: Assessment): number[] {
   return [...byYear.values()].filter((e) => e.months === needed).map((e) => e.sum)
 }
 
+/** Mean share of safe years over a bin's start dates × airflows (NaN without runs). */
+function binMeanShareSafe(a: Assessment): number {
+  const rows = (a.bin?.startDates ?? []).filter((r) => r.years > 0)
+  return rows.length > 0 ? rows.reduce((s, r) => s + r.shareOfYearsSafe, 0) / rows.length : Number.NaN
+}
+
 type Scored = Omit<SiteScore, 'rank' | 'decidedBy'>
 
 function score(a: Assessment): Scored {
   const hours = seasonUsableHoursByYear(a).sort((x, y) => x - y)
   const withYears = a.startDates.filter((r) => r.years > 0)
-  const meanP =
-    withYears.length > 0
+  const meanP = a.bin
+    ? binMeanShareSafe(a)
+    : withYears.length > 0
       ? withYears.reduce((s, r) => s + r.probabilityWithinDeadline, 0) / withYears.length
       : Number.NaN
   const best = a.bestStartWindows[0]
@@ -120,6 +137,7 @@ function score(a: Assessment): Scored {
     meanProbabilityWithinDeadline: roundOrNull(meanP, 3),
     medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
     bestStartWindow: best ? `${best.from} to ${best.to}` : null,
+    ...(a.bin ? { binSeasonMinimumAirflowM3PerMinPerTonne: binSeasonAirflow(a.bin) } : {}),
     warnings: a.warnings,
     file: null,
     given: 0,
@@ -211,7 +229,10 @@ export function rankAssessments(
   return {
     schema: 'dryhours.comparison/1',
     criterion,
-    criterionDescription: CRITERION_DESCRIPTIONS[criterion],
+    criterionDescription:
+      criterion === 'probability-within-deadline' && assessments.every((a) => a.bin)
+        ? BIN_PROBABILITY_DESCRIPTION
+        : CRITERION_DESCRIPTIONS[criterion],
     tieBreak: tieBreakText(criterion),
     caveats: typicalYearCaveats(sites),
     product: first.product,

@@ -16,6 +16,7 @@ import type { WeatherReadOptions } from '../weather/options.ts'
 import { readWeatherBytes } from '../weather/read-weather.ts'
 import type { WeatherReadResult } from '../weather/result.ts'
 import { WeatherInputError } from '../weather/weather-input-error.ts'
+import { BIN_FLAGS_HELP, BIN_PARSE_OPTIONS, setBinOptions } from './bin.ts'
 import { type CliIo, numberOption, UsageError } from './command.ts'
 import { WEATHER_FLAGS_HELP, WEATHER_PARSE_OPTIONS, weatherOptionsFromCli } from './weather-flags.ts'
 
@@ -28,6 +29,7 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
+${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
                   API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
 Season and batches:
@@ -78,6 +80,7 @@ export const ENGINE_PARSE_OPTIONS = {
   'min-deficit': { type: 'string' },
   'rain-mm': { type: 'string' },
   'night-cooling': { type: 'string' },
+  ...BIN_PARSE_OPTIONS,
   ...WEATHER_PARSE_OPTIONS,
   json: { type: 'boolean' },
   quiet: { type: 'boolean' },
@@ -182,19 +185,23 @@ function methodFromFlags(kind: string, values: EngineValues): Record<string, unk
 
 /**
  * The methods of `--method` with their flags and `--param`s. A `--param` goes to every listed method that
- * has that parameter; one that none of them has is refused.
+ * has that parameter; one that none of them has is refused. The bin flags go to natural-air-bin and are
+ * refused when it is not among the methods (`product`: its bushel weight converts cfm per bushel).
  */
-export function methodsFromFlags(values: EngineValues): Record<string, unknown>[] {
+export function methodsFromFlags(values: EngineValues, product: ProductProfile): Record<string, unknown>[] {
   const kinds = methodKinds(values)
   const list = (kinds === 'all' ? [...DRYING_METHOD_KINDS] : kinds).map((k) => methodFromFlags(k, values))
+  const bin = list.find((m) => m.kind === 'natural-air-bin')
+  // with another method only, setBinOptions refuses the bin flags, naming the first given
+  setBinOptions(bin ?? list[0], values, product)
   setMethodParams(list, (values.param as string[] | undefined) ?? [])
   return list
 }
 
-/** `--method` as the engine's method list: `all`, or the methods with their parameters. */
-export function methodListFromFlags(values: EngineValues): MethodList {
-  const methods = methodsFromFlags(values)
-  return methodKinds(values) === 'all' ? 'all' : (methods as AssessOptions['method'][])
+/** `--method` as the engine's method list: every method (`all`, with their flags), or the methods listed. */
+export function methodListFromFlags(values: EngineValues, product: ProductProfile): MethodList {
+  const methods = methodsFromFlags(values, product) as AssessOptions['method'][]
+  return methodKinds(values) === 'all' ? { all: methods } : methods
 }
 
 /** Build the assess options from parsed CLI values (the first method, season, heat, prices). */
@@ -205,7 +212,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
   if (fuel !== undefined && !(FUEL_IDS as readonly string[]).includes(fuel)) {
     throw new UsageError(`--fuel must be one of ${FUEL_IDS.join(', ')}, got '${fuel}'`)
   }
-  const methods = methodsFromFlags(values)
+  methodKinds(values) // --method is checked before the product is read
   let product: ProductProfile
   try {
     product = await loadProduct(str('product'), io)
@@ -213,6 +220,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     if (e instanceof RangeError) throw new UsageError(e.message)
     throw e
   }
+  const methods = methodsFromFlags(values, product)
   const method = methods[0]
   const backupHeater: Record<string, unknown> = {}
   if (methods.some((m) => m.kind !== 'heated')) {

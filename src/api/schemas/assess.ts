@@ -26,7 +26,7 @@ import { rethrowAsProblem } from '../errors.ts'
 import { ApiProblem } from '../problem.ts'
 import { parseOrProblem } from '../validate.ts'
 import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
-import { numberParam } from './params.ts'
+import { numberListParam, numberParam } from './params.ts'
 
 const monthDay = z.string().regex(/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, 'must be MM-DD, e.g. 07-15')
 
@@ -48,7 +48,7 @@ export const assessOptionsJsonSchema = z.strictObject({
         .max(DRYING_METHOD_KINDS.length),
     ])
     .describe(
-      `drying method kind (${DRYING_METHOD_KINDS.join(', ')}), or an object {kind, …parameters}; /v1/assess also takes a list of them, or "all", to compare methods side by side`,
+      `drying method kind, or an object {kind, …parameters} (${DRYING_METHOD_KINDS.join(', ')}; natural-air-bin: depthM [m], binDiameterM [m] or floorAreaM2 [m²], airflowsM3PerMinPerTonne [m³/min per t], heatRiseK [K], fanControl, fanEfficiency [0–1], layers, dryMatterLossLimitPct [%]); /v1/assess also takes a list of them, or "all", to compare methods side by side`,
     ),
   targetWbPct: z
     .number()
@@ -148,6 +148,17 @@ export const assessQuerySchema = z.strictObject({
   deadlineDays: numberParam('window to reach the target [days]').optional(),
   maxDays: numberParam('a batch fails after this many days [days]').optional(),
   batchKg: numberParam('batch size [kg fresh]').optional(),
+  airflow: numberListParam(
+    'natural-air-bin: airflows to compare [m³/min per tonne of grain], e.g. 0.5,1,2 (default 0.5,1,1.5,2,3)',
+  ).optional(),
+  binDepth: numberParam('natural-air-bin: grain depth [m] (default 4)').optional(),
+  binDiameter: numberParam('natural-air-bin: bin diameter [m] (default 9.1)').optional(),
+  floorArea: numberParam('natural-air-bin: floor area [m²], instead of a diameter').optional(),
+  heatRise: numberParam('natural-air-bin: temperature rise from a heater [K] (default 0)').optional(),
+  fanControl: z
+    .enum(['continuous', 'air-emc-below', 'rh-below'])
+    .optional()
+    .describe('natural-air-bin: when the fan runs (default continuous)'),
   fuel: z.enum(FUEL_IDS).optional().describe('fuel for the heat and cost figures'),
   price: z.string().optional().describe('fuel prices per unit, e.g. propane=0.9;electricity=0.25'),
   currency: z.string().optional().describe('the currency of your prices (e.g. EUR), shown with every cost'),
@@ -181,6 +192,36 @@ const QUERY_NAMES: Record<string, string> = {
   seasonEnd: 'end',
   startStepDays: 'stepDays',
   batchKgFresh: 'batchKg',
+  'method.airflowsM3PerMinPerTonne': 'airflow',
+}
+
+/** The natural-air bin's query fields as method parameters; refused with another method. */
+function binQueryParams(q: AssessQuery, kinds: string | string[]): Record<string, unknown> {
+  const params: Record<string, unknown> = {
+    airflowsM3PerMinPerTonne: q.airflow,
+    depthM: q.binDepth,
+    binDiameterM: q.binDiameter,
+    floorAreaM2: q.floorArea,
+    heatRiseK: q.heatRise,
+    fanControl: q.fanControl,
+  }
+  const given = Object.entries(params).filter(([, v]) => v !== undefined)
+  const withBin = kinds === 'all' || [kinds].flat().includes('natural-air-bin')
+  if (given.length > 0 && !withBin) {
+    const names: Record<string, string> = {
+      airflowsM3PerMinPerTonne: 'airflow',
+      depthM: 'binDepth',
+      binDiameterM: 'binDiameter',
+      floorAreaM2: 'floorArea',
+      heatRiseK: 'heatRise',
+      fanControl: 'fanControl',
+    }
+    const name = names[given[0][0]]
+    throw new ApiProblem(400, `${name} goes with method=natural-air-bin`, [
+      { path: name, message: 'only for method=natural-air-bin' },
+    ])
+  }
+  return Object.fromEntries(given)
 }
 
 /** Check the options with the engine's planner now, before any file is read: 400 naming the field. */
@@ -234,8 +275,13 @@ function resolveMethod(value: string | Record<string, unknown>, path: string): A
 function resolveMethods(
   value: string | Record<string, unknown> | (string | Record<string, unknown>)[],
   path: string,
+  allWith: (string | Record<string, unknown>)[] = [],
 ): { first: AssessOptions['method']; methods: MethodList | null } {
-  if (value === 'all') return { first: resolveMethod(DRYING_METHOD_KINDS[0], path), methods: 'all' }
+  if (value === 'all') {
+    const first = resolveMethod(DRYING_METHOD_KINDS[0], path)
+    if (allWith.length === 0) return { first, methods: 'all' }
+    return { first, methods: { all: allWith.map((m) => resolveMethod(m, path)) } }
+  }
   if (!Array.isArray(value)) return { first: resolveMethod(value, path), methods: null }
   const list = value.map((m, i) => resolveMethod(m, `${path}.${i}`))
   const kinds = list.map((m) => m.kind)
@@ -301,7 +347,15 @@ export function assessRequestFromQuery(
     fuelPrices[m[1] as FuelId] = price
   }
   const weather = weatherOptionsFromQuery(q)
-  const m = resolveMethods(methodsFromQuery(q.method), 'method')
+  const kinds = methodsFromQuery(q.method)
+  const bin = binQueryParams(q, kinds)
+  // the bin's parameters go to natural-air-bin, alone, in a list, or among all methods
+  const withParams = (k: string): string | Record<string, unknown> =>
+    k === 'natural-air-bin' && Object.keys(bin).length > 0 ? { kind: k, ...bin } : k
+  const m =
+    kinds === 'all'
+      ? resolveMethods('all', 'method', Object.keys(bin).length > 0 ? [withParams('natural-air-bin')] : [])
+      : resolveMethods(Array.isArray(kinds) ? kinds.map(withParams) : withParams(kinds), 'method')
   const request = planned({
     methods: m.methods,
     surface: 'query',

@@ -23,6 +23,7 @@ import { renderOptionNames } from '../../weather/option-spec.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { overrideWarning } from '../../weather/site-overrides.ts'
+import { binText } from '../bin.ts'
 import { type CliCommand, type CliIo, UsageError } from '../command.ts'
 import {
   ENGINE_OPTIONS_HELP,
@@ -81,30 +82,9 @@ const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
 const f1 = (x: number | null): string => (x === null ? '–' : x.toFixed(1))
 
-/** The readable summary of an assessment. */
-export function assessmentText(a: Assessment): string {
+/** Start windows, the start-date table and the heat of a batch method. */
+function batchesText(a: Assessment): string[] {
   const out: string[] = []
-  const p = a.product
-  out.push(
-    `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
-  )
-  out.push(
-    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
-  )
-  out.push('')
-  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
-  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
-  for (const m of a.monthly) {
-    const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
-      .map((r) => [r, m.medianHoursByReason[r]] as const)
-      .sort((x, y) => y[1] - x[1])
-    const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
-    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
-    out.push(
-      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
-    )
-  }
-  out.push('')
   out.push(`Best start windows (${a.bestStartWindowCriterion}):`)
   if (a.bestStartWindows.length === 0) out.push('  none')
   for (const w of a.bestStartWindows) {
@@ -140,15 +120,44 @@ export function assessmentText(a: Assessment): string {
   out.push(
     `  cross-check: ${c.waterToRemoveKgPerTonne} kg water/t × ${c.heatOfEvaporationKjPerKg} kJ/kg ÷ efficiency = ${c.evaporationHeatFuelKwhPerTonne} kWh/t; heated every hour uses ${c.ratioHeatedEveryHour ?? '–'} × that`,
   )
+  return out
+}
+
+/** The readable summary of an assessment. */
+export function assessmentText(a: Assessment): string {
+  const out: string[] = []
+  const p = a.product
+  out.push(
+    `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
+  )
+  out.push(
+    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
+  )
+  out.push('')
+  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
+  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
+  for (const m of a.monthly) {
+    const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
+      .map((r) => [r, m.medianHoursByReason[r]] as const)
+      .sort((x, y) => y[1] - x[1])
+    const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
+    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
+    out.push(
+      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
+    )
+  }
+  out.push('')
+  out.push(...(a.bin ? binText(a, a.bin) : batchesText(a)))
   if (a.warnings.length > 0) {
     out.push('')
     out.push('Warnings:')
     for (const w of a.warnings) out.push(`  - ${w}`)
   }
-  if (p.cautions.length > 0) {
+  const cautions = [...(a.bin?.cautions ?? []), ...p.cautions]
+  if (cautions.length > 0) {
     out.push('')
     out.push('Cautions:')
-    for (const w of p.cautions) out.push(`  - ${w}`)
+    for (const w of cautions) out.push(`  - ${w}`)
   }
   out.push('')
   out.push(`${a.assumptions.length} assumptions (thresholds, defaults and their sources): see --json`)
@@ -187,7 +196,7 @@ function renderResult(r: SiteResult, o: ReportOutputChoice, file: string): strin
 /** Assess one series with one method, or compare the listed methods. */
 function runSite(series: HourlySeries, options: AssessOptions, methods: MethodList): SiteResult {
   try {
-    if (methods !== 'all' && methods.length === 1) return assess(series, options)
+    if (Array.isArray(methods) && methods.length === 1) return assess(series, options)
     return compareMethods(series, options, methods)
   } catch (e) {
     if (e instanceof RangeError) throw new UsageError(e.message)
@@ -229,7 +238,7 @@ async function assessSites(
     )
   }
   const options = await engineOptions(values, io)
-  const methods = methodListFromFlags(values)
+  const methods = methodListFromFlags(values, options.product)
   const results: { site: CliSite; result: SiteResult }[] = []
   for (const site of sites) {
     const read = await readSite(site, io)
@@ -316,7 +325,7 @@ export const assessCommand: CliCommand = {
       throw new UsageError('give exactly one weather file (dryhours assess <file>), or --sites <sites.csv>')
     const file = parsed.positionals[0]
     const options = await engineOptions(values, io)
-    const methods = methodListFromFlags(values)
+    const methods = methodListFromFlags(values, options.product)
     const read = await readSeries(file, values, io)
     if (!values.quiet) options.onProgress = progressPrinter(io, `assess ${file}`)
     const result = runSite(read.series, options, methods)

@@ -11,6 +11,7 @@ import { FUEL_IDS } from '../../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, type DryingMethodKind } from '../../../drying/method.ts'
 import { METHOD_MODELS } from '../../../drying/methods/index.ts'
 import { HOUR_STATUS_NAMES, type HourStatusName } from '../../../drying/usable-hour.ts'
+import { binAssessmentSchema } from './bin.ts'
 import {
   count,
   medianP90,
@@ -287,6 +288,7 @@ export const assessmentResponseSchema = once(() => {
       ),
       warnings: texts('what limits the answer, in words'),
       coverage: coverageSchema(),
+      bin: binAssessmentSchema(),
     })
     .describe('the seasonal assessment of one site, one product and one method')
 })

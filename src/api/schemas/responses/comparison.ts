@@ -9,6 +9,7 @@ import type { Comparison } from '../../../analysis/compare.ts'
 import { COMPARE_CRITERIA } from '../../../analysis/compare.ts'
 import { CALENDAR_STATES, type MethodComparison } from '../../../analysis/compare-methods.ts'
 import { assessmentParts, assessmentResponseSchema } from './assessment.ts'
+import { methodBinFiguresSchema } from './bin.ts'
 import {
   count,
   medianP90,
@@ -49,6 +50,7 @@ const methodFiguresSchema = once(() => {
     }),
     costPerTonneFresh: numOrNull('fuel cost at the median heat [currency per tonne fresh]'),
     costPerKgDried: numOrNull('fuel cost at the median heat [currency per kg of dried product]'),
+    bin: methodBinFiguresSchema(),
   })
 })
 
@@ -142,6 +144,13 @@ export const comparisonResponseSchema = once(() => {
             ),
             medianHeatKwhPerTonne: numOrNull('median supplemental heat [kWh per tonne fresh]'),
             bestStartWindow: z.string().nullable().describe("the best start window, 'MM-DD to MM-DD'"),
+            binSeasonMinimumAirflowM3PerMinPerTonne: z
+              .number()
+              .nullable()
+              .optional()
+              .describe(
+                'grain in a bin: the airflow that serves every start month, the largest monthly minimum [m³/min per t]; null: some month has none; absent for batch methods',
+              ),
             warnings: texts("the site's warnings"),
           }),
         )
