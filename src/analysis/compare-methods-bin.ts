@@ -11,8 +11,9 @@
  * - "finishes in time" = the share of years safe (top layer dry within the season, dry-matter loss below
  *   the limit); "spoils first" = the share of years the top layer passes the limit;
  * - days to target = days until the top layer is dry; heat = the heater's heat into the air, its fuel at the
- *   heater efficiency and fuel of the assessment; the fan's electricity is given apart (the cost of every
- *   method counts fuel for heat only).
+ *   heater efficiency and fuel of the assessment; the fan's electricity is given too and, the fan being the
+ *   bin's dryer, its cost at the electricity price is part of the bin's cost (the other methods' costs count
+ *   fuel for heat only: their fans are small beside their heat).
  */
 import { FUELS, fuelForHeat } from '../drying/fuels.ts'
 import type { Assessment } from './assessment.ts'
@@ -28,6 +29,11 @@ export interface MethodBinFigures {
   airflowRule: string
   /** Fan electricity at that airflow, median over the season's start dates [kWh per tonne]. */
   fanEnergyKwhPerTonne: number | null
+  /** Cost of that electricity [currency per tonne], part of the method's cost. */
+  fanCostPerTonne: number | null
+  /** The electricity price [currency per kWh] and whether it is an example. */
+  electricityPricePerKwh: number
+  electricityPriceIsExample: boolean
   /** What "in time" and "spoils first" mean for a bin, in words. */
   meaning: string
 }
@@ -86,13 +92,21 @@ export function binMethodFigures(a: Assessment & { bin: BinAssessment }) {
   const safe = meanOrNull(rows.map((s) => s.shareOfYearsSafe))
   const spoiled = meanOrNull(rows.map(binSpoiledShare))
   const fan = a.bin.airflows.find((f) => f.airflowM3PerMinPerTonne === airflow)
+  const fanKwh = medianNotReached(rows.map((s) => s.fanEnergyKwhPerTonne.median))
+  const power = a.heat.fuels.find((f) => f.fuel === 'electricity')
+  const powerPrice = power && !power.priceIsExample ? power.pricePerUnit : undefined
+  const fanUse = fanKwh === null ? null : fuelForHeat(fanKwh, 1, 'electricity', powerPrice)
   const bin: MethodBinFigures = {
     airflowM3PerMinPerTonne: airflow,
     airflowCfmPerBushel: fan?.airflowCfmPerBushel ?? rows[0]?.airflowCfmPerBushel ?? 0,
     airflowRule: rule,
-    fanEnergyKwhPerTonne: medianNotReached(rows.map((s) => s.fanEnergyKwhPerTonne.median)),
+    fanEnergyKwhPerTonne: fanKwh,
+    fanCostPerTonne: fanUse ? roundOrNull(fanUse.cost, 2) : null,
+    electricityPricePerKwh: powerPrice ?? FUELS.electricity.examplePricePerUnit,
+    electricityPriceIsExample: powerPrice === undefined,
     meaning: BIN_MEANING,
   }
+  const heatCost = use ? use.cost : heat.median === null ? null : 0
   return {
     daysToTarget: {
       median: medianNotReached(rows.map((s) => s.daysUntilTopLayerDry.median)),
@@ -110,7 +124,7 @@ export function binMethodFigures(a: Assessment & { bin: BinAssessment }) {
       pricePerUnit: price ?? FUELS[fuelId].examplePricePerUnit,
       priceIsExample: price === undefined,
     },
-    costPerTonneFresh: use ? roundOrNull(use.cost, 2) : null,
+    costPerTonneFresh: heatCost === null || fanUse === null ? null : roundOrNull(heatCost + fanUse.cost, 2),
     bin,
   }
 }

@@ -122,6 +122,8 @@ export function isAllMethods(
 
 const COST_NOTE =
   'fuel for heat only, at the median heat of the season’s batches: no fans, labour, equipment or its depreciation'
+const COST_NOTE_BIN =
+  '; for grain in a bin, its fan’s electricity too (the fan is its dryer), at the median of the season’s start dates'
 
 const capitalised = (t: string): string => t.charAt(0).toUpperCase() + t.slice(1)
 
@@ -174,7 +176,7 @@ function recommend(
   const spoilPart = spoilageAssessed
     ? ` and spoil before they are dry in fewer than ${pct(SPOILAGE_MARGINAL_SHARE)} of years`
     : ''
-  const criterion = `the lowest fuel cost per kg of dried product among the methods whose batches finish within ${deadlineDays} days by themselves in at least ${pct(GOOD_START_PROBABILITY)} of years (mean over the season's start dates)${spoilPart}; ties go to fewer median days to target${methods.some((m) => m.bin) ? `; ${BIN_MEANING}` : ''}`
+  const criterion = `the lowest fuel cost per kg of dried product among the methods whose batches finish within ${deadlineDays} days by themselves in at least ${pct(GOOD_START_PROBABILITY)} of years (mean over the season's start dates)${spoilPart}; ties go to fewer median days to target${methods.some((m) => m.bin) ? `; ${BIN_MEANING}; a bin's cost includes its fan's electricity` : ''}`
   const qualifies = methods.filter(
     (m) =>
       m.probabilityWithinDeadline !== null &&
@@ -198,12 +200,14 @@ function recommend(
     }
   }
   const chosen = [...qualifies].sort((x, y) => cost(x) - cost(y) || days(x) - days(y))[0]
+  const what = chosen.bin ? 'fuel and fan electricity' : 'fuel'
+  const example = chosen.bin ? chosen.bin.electricityPriceIsExample : chosen.fuel.priceIsExample
   const money =
     chosen.costPerKgDried === null
-      ? 'fuel cost not computed'
+      ? `${what} cost not computed`
       : chosen.costPerKgDried === 0
-        ? `no fuel at the median ${chosen.bin ? 'start date' : 'batch'}`
-        : `fuel ${chosen.costPerKgDried}${currency ? ` ${currency}` : ''} per kg dried${chosen.fuel.priceIsExample && chosen.costPerKgDried > 0 ? ' at an example price' : ''}`
+        ? 'no fuel at the median batch'
+        : `${what} ${chosen.costPerKgDried}${currency ? ` ${currency}` : ''} per kg dried${example ? ' at an example price' : ''}`
   return {
     kind: chosen.kind,
     text: chosen.bin
@@ -279,7 +283,7 @@ export function compareMethods(
     maxDays: first.maxDays,
     driedKgPerTonneFresh: roundOrNull(driedKg, 1) ?? 0,
     currency: first.heat.currency,
-    costNote: COST_NOTE,
+    costNote: list.some((m) => m.bin) ? COST_NOTE + COST_NOTE_BIN : COST_NOTE,
     spoilageAssessed,
     methods: list,
     notAssessed,

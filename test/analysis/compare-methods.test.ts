@@ -7,7 +7,9 @@ import {
   compareMethods,
   driedKgPerTonne,
 } from '../../src/analysis/compare-methods.ts'
+import { binComparisonAirflow, binSeasonAirflow } from '../../src/analysis/compare-methods-bin.ts'
 import { GOOD_START_PROBABILITY } from '../../src/analysis/start-dates.ts'
+import { fuelForHeat } from '../../src/drying/fuels.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import { demoSeries, sliceSeries } from '../drying/demo-weather.ts'
 
@@ -109,8 +111,15 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
     s.site = { ...s.site, latitudeDeg: null, longitudeDeg: null }
     const short = { ...options, seasonStart: '07-20', seasonEnd: '07-27', startStepDays: 7, maxDays: 20 }
     const all = compareMethods(s, short, 'all')
-    expect(all.notAssessed.map((n) => n.kind).sort()).toEqual(['open-air', 'solar-cabinet'])
-    expect(all.notAssessed[0].reason).toMatch(/needs the sun/)
+    expect(all.notAssessed.map((n) => n.kind).sort()).toEqual([
+      'natural-air-bin',
+      'open-air',
+      'solar-cabinet',
+    ])
+    // grapes are not grain: the bin is left out for the product, before any work, with its reason
+    expect(all.notAssessed[0].kind).toBe('natural-air-bin')
+    expect(all.notAssessed[0].reason).toMatch(/grain/)
+    expect(all.notAssessed[1].reason).toMatch(/needs the sun/)
     expect(all.methods.map((m) => m.kind)).toEqual(['shade', 'heated'])
     expect(() => compareMethods(s, short, [{ kind: 'open-air' }, { kind: 'heated' }])).toThrow(
       /open-air method needs the sun/,
@@ -122,5 +131,95 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
     expect(() =>
       compareMethods(demoSeries('dryUpland'), { ...options, currency: '<b>' }, [{ kind: 'heated' }]),
     ).toThrow(/currency/)
+  })
+})
+
+/**
+ * Grain in a bin among the methods (analysis/compare-methods-bin.ts): corn harvested into a bin in the humid
+ * valley (invented weather), Sep 15 – Oct 15, as the bin golden case. Consistency checks of how the bin's
+ * answer enters the comparison; the bin model itself is checked in test/drying/deep-bed/.
+ */
+describe('grain in a bin among the methods side by side', () => {
+  const corn = {
+    product: productById('shelled-corn'),
+    initialWbPct: 20,
+    targetWbPct: 15.5,
+    seasonStart: '09-15',
+    seasonEnd: '10-15',
+    fuelPrices: { propane: 0.8, electricity: 0.2 },
+    currency: 'EUR',
+  }
+  const bin = { kind: 'natural-air-bin' as const, airflowsM3PerMinPerTonne: [1, 2, 3] }
+  const c = compareMethods(demoSeries('humidValley'), corn, [bin, { kind: 'heated' }])
+  const a = c.assessments[0]
+  const m = c.methods[0]
+
+  it('the bin is assessed as by itself, and its row is at the airflow that serves every start month', () => {
+    expect(a).toEqual(assess(demoSeries('humidValley'), { ...corn, method: bin }))
+    expect(a.bin).toBeDefined()
+    const months = a.bin!.minimumAirflowByMonth
+    const serving = binSeasonAirflow(a.bin!)
+    if (months.every((x) => x.minimumAirflowM3PerMinPerTonne !== null))
+      expect(serving).toBe(Math.max(...months.map((x) => x.minimumAirflowM3PerMinPerTonne as number)))
+    else expect(serving).toBeNull()
+    expect(m.bin?.airflowM3PerMinPerTonne).toBe(binComparisonAirflow(a.bin!).airflow)
+    expect(m.bin?.airflowRule).toMatch(serving === null ? /the largest/ : /smallest airflow compared/)
+  })
+
+  it('its shares, days and energy come from its start dates at that airflow', () => {
+    const q = m.bin!.airflowM3PerMinPerTonne
+    const rows = a.bin!.startDates.filter((s) => s.airflowM3PerMinPerTonne === q && s.years > 0)
+    expect(rows.length).toBeGreaterThan(1)
+    const safe = rows.reduce((s, r) => s + r.shareOfYearsSafe, 0) / rows.length
+    expect(m.probabilityWithinDeadline).toBeCloseTo(safe, 3)
+    const spoiled = rows.reduce((s, r) => s + r.yearsDryMatterLossLimitExceeded / r.years, 0) / rows.length
+    expect(m.spoilageProbability).toBeCloseTo(spoiled, 3)
+    const days = rows
+      .map((r) => r.daysUntilTopLayerDry.median ?? Number.POSITIVE_INFINITY)
+      .sort((x, y) => x - y)
+    const mid = (days.length - 1) / 2
+    const median = (days[Math.floor(mid)] + days[Math.ceil(mid)]) / 2
+    expect(m.daysToTarget.median).toBeCloseTo(median, 1)
+    // no heater: no heat, no fuel; the fan's electricity is priced at the given 0.2 per kWh
+    expect(m.heatToAirKwhPerTonne.median).toBe(0)
+    expect(m.bin!.electricityPricePerKwh).toBe(0.2)
+    expect(m.bin!.electricityPriceIsExample).toBe(false)
+    const fan = m.bin!.fanEnergyKwhPerTonne as number
+    expect(fan).toBeGreaterThan(0)
+    expect(m.bin!.fanCostPerTonne).toBeCloseTo(fuelForHeat(fan, 1, 'electricity', 0.2).cost, 2)
+    expect(m.costPerTonneFresh).toBeCloseTo(m.bin!.fanCostPerTonne as number, 2)
+    expect(m.costPerKgDried).toBeCloseTo((m.costPerTonneFresh as number) / c.driedKgPerTonneFresh, 3)
+    expect(c.costNote).toMatch(/fan’s electricity/)
+  })
+
+  it('its calendar row comes from the same start dates, week by week', () => {
+    const q = m.bin!.airflowM3PerMinPerTonne
+    const row = c.calendar.rows[0]
+    expect(row.kind).toBe('natural-air-bin')
+    expect(row.cells).toHaveLength(c.calendar.weekStarts.length)
+    const first = a.bin!.startDates.find((s) => s.airflowM3PerMinPerTonne === q && s.startDate === '09-15')
+    expect(row.probabilityWithinDeadline[0]).toBeCloseTo(first!.shareOfYearsSafe, 3)
+    row.cells.forEach((cell, w) => {
+      expect(cell).toBe(calendarState(row.probabilityWithinDeadline[w], row.spoilageProbability[w]))
+    })
+  })
+
+  it('the recommendation states what in time means for a bin, and its cost includes the fan', () => {
+    expect(c.recommendation.criterion).toMatch(/grain in a bin: "finishes in time"/)
+    expect(c.recommendation.criterion).toMatch(/fan's electricity/)
+    if (c.recommendation.kind === 'natural-air-bin') {
+      expect(c.recommendation.text).toMatch(/top layer dries safely in/)
+      expect(c.recommendation.text).toMatch(/fuel and fan electricity .* EUR per kg dried/)
+    }
+  })
+
+  it('with all, a grain takes the bin with the parameters given for it', () => {
+    const short = { ...corn, seasonStart: '09-15', seasonEnd: '09-22', startStepDays: 7 }
+    const all = compareMethods(demoSeries('humidValley'), short, {
+      all: [{ ...bin, airflowsM3PerMinPerTonne: [2] }],
+    })
+    expect(all.methods.map((x) => x.kind)).toContain('natural-air-bin')
+    const b = all.assessments.find((x) => x.method.kind === 'natural-air-bin')
+    expect(b?.bin?.airflows.map((x) => x.airflowM3PerMinPerTonne)).toEqual([2])
   })
 })

@@ -140,6 +140,9 @@ export const methodBinFiguresSchema = once(() =>
       airflowCfmPerBushel: num('the same [cfm per bushel]'),
       airflowRule: text('how that airflow was chosen'),
       fanEnergyKwhPerTonne: numOrNull('fan electricity, median over the start dates [kWh per tonne]'),
+      fanCostPerTonne: numOrNull("that electricity's cost, part of the method's cost [currency per tonne]"),
+      electricityPricePerKwh: num('electricity price [currency per kWh]'),
+      electricityPriceIsExample: z.boolean().describe('the electricity price is an example'),
       meaning: text('what "finishes in time" and "spoils first" mean for a bin'),
     })
     .nullable()
