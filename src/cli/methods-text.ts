@@ -4,6 +4,7 @@
  * season calendar with the rule of every state, and the recommendation with its criterion.
  */
 import type { CalendarState, MethodComparison } from '../analysis/compare-methods.ts'
+import { binSentences, comparisonCautions } from '../report/methods-html.ts'
 
 /** One letter per calendar state in the text calendar (the legend says which). */
 export const STATE_LETTERS: Record<CalendarState, string> = {
@@ -65,6 +66,7 @@ export function methodComparisonText(c: MethodComparison): string {
     out.push(
       'Spoilage: not assessed for this product and these methods (no spoilage model in the assessment).',
     )
+  for (const b of binSentences(c)) out.push(`Grain in a bin: ${b}`)
   for (const n of c.notAssessed) out.push(`Not assessed: ${n.kind}: ${n.reason}`)
   out.push('')
   out.push('Season calendar: one cell per start week (7 days from the first start date)')
@@ -90,6 +92,12 @@ export function methodComparisonText(c: MethodComparison): string {
     out.push('Warnings:')
     for (const w of shared) out.push(`  ${w}`)
     for (const w of own) out.push(`  ${w}`)
+  }
+  const cautions = comparisonCautions(c)
+  if (cautions.length > 0) {
+    out.push('')
+    out.push('Cautions:')
+    for (const w of cautions) out.push(`  - ${w}`)
   }
   out.push('')
   out.push('Each method’s full assessment: --json (assessments), or --format html')

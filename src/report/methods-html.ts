@@ -24,6 +24,29 @@ export const CALENDAR_STATE_WORDS: Record<CalendarState, string> = {
 
 const share = (x: number | null): number | null => (x === null ? null : round(100 * x, 0))
 
+/** What a comparison says of each grain bin among its methods, one sentence per bin. */
+export function binSentences(c: MethodComparison, units: UnitSystem = 'si'): string[] {
+  const cur = c.currency ? ` ${c.currency}` : ''
+  return c.methods.flatMap((m) => {
+    const b = m.bin
+    if (b === null) return []
+    const airflow =
+      units === 'us'
+        ? `${b.airflowCfmPerBushel} cfm per bushel (${b.airflowM3PerMinPerTonne} m³/min per t)`
+        : `${b.airflowM3PerMinPerTonne} m³/min per t (${b.airflowCfmPerBushel} cfm/bu)`
+    const fan =
+      b.fanEnergyKwhPerTonne === null
+        ? 'fan electricity not computed'
+        : `the fan uses ${b.fanEnergyKwhPerTonne} kWh per tonne${b.fanCostPerTonne === null ? '' : `, ${b.fanCostPerTonne}${cur} per tonne at ${b.electricityPricePerKwh}${cur} per kWh${b.electricityPriceIsExample ? ' (example price)' : ''}`}`
+    return [`${m.label}: figures at ${airflow}, ${b.airflowRule}; ${fan}; ${b.meaning}.`]
+  })
+}
+
+/** The cautions of every method compared (grain-bin safety, the product's food safety), each once. */
+export function comparisonCautions(c: MethodComparison): string[] {
+  return [...new Set(c.assessments.flatMap((a) => [...(a.bin?.cautions ?? []), ...a.product.cautions]))]
+}
+
 /** The methods side by side, one row per method. */
 export function methodsTable(c: MethodComparison, units: UnitSystem = 'si'): ReportTable {
   const u = unitFormatter(units)
@@ -138,6 +161,7 @@ export function renderMethodComparisonArticle(c: MethodComparison, o: MethodsRep
           'The weather file is a typical year (one constructed year): each share of years is 0 or 100 % per start date.',
         ]
       : []),
+    ...binSentences(c, units),
     ...c.notAssessed.map((n) => `Not assessed: ${n.kind}: ${n.reason}`),
   ]
   const perMethod = c.assessments

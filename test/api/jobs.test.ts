@@ -73,6 +73,46 @@ describe('POST /v1/assess with several methods', () => {
   })
 })
 
+describe('POST /v1/assess: a natural-air bin beside heated air', () => {
+  it('method=natural-air-bin,heated with airflow: the bin parameters go to the bin; fruit with all lists the bin as not assessed', async () => {
+    const q =
+      'product=shelled-corn&method=natural-air-bin,heated&tz=America/Chicago&initialWb=20&targetWb=15.5&start=09-15&end=10-15&stepDays=7&airflow=1,2'
+    const r = await post(`/v1/assess?${q}`, demo('quillow-valley-2021-2023-local-dst-imperial.csv'), {
+      'content-type': 'text/csv',
+    })
+    expect(r.status, r.text.slice(0, 300)).toBe(200)
+    const c = JSON.parse(r.text)
+    expect(c.methods.map((m: { kind: string }) => m.kind)).toEqual(['natural-air-bin', 'heated'])
+    expect(c.assessments[0].method.airflowsM3PerMinPerTonne).toEqual([1, 2])
+    expect([1, 2]).toContain(c.methods[0].bin.airflowM3PerMinPerTonne)
+    const html = await post(
+      `/v1/assess?${q}&format=html`,
+      demo('quillow-valley-2021-2023-local-dst-imperial.csv'),
+      {
+        'content-type': 'text/csv',
+      },
+    )
+    expect(html.text).toMatch(/figures at [\d.]+ m³\/min per t/)
+    const fruit = await post(
+      '/v1/assess?product=apricot-halves&method=all&start=07-01&end=07-15&stepDays=7&airflow=2',
+      demo(typical),
+      { 'content-type': 'text/csv' },
+    )
+    expect(fruit.status, fruit.text.slice(0, 300)).toBe(200)
+    const all = JSON.parse(fruit.text)
+    expect(all.notAssessed.map((n: { kind: string }) => n.kind)).toContain('natural-air-bin')
+    const refused = await post(
+      '/v1/assess?product=apricot-halves&method=shade,heated&airflow=2',
+      demo(typical),
+      {
+        'content-type': 'text/csv',
+      },
+    )
+    expect(refused.status).toBe(400)
+    expect(refused.text).toMatch(/airflow goes with method=natural-air-bin/)
+  })
+})
+
 describe('POST /v1/compare with a sites part', () => {
   const options = JSON.stringify({ product: 'apricot-halves', method: 'open-air', ...season })
   it('each site read with its own settings, the sites best first, a typical year marked with its caveat', async () => {

@@ -3,6 +3,7 @@
  * number in it states its unit, and the real answers of every documented example validate against the
  * declared schema (JSON Schema 2020-12, which OpenAPI 3.1 uses, checked with Ajv 8's 2020 draft).
  */
+import { readFileSync } from 'node:fs'
 import Ajv2020 from 'ajv/dist/2020.js'
 import { describe, expect, it } from 'vitest'
 import { createApp } from '../../src/api/app.ts'
@@ -124,6 +125,55 @@ describe('OpenAPI: the answers, with the unit of every field', () => {
         : (validate.errors ?? [])
             .slice(0, 5)
             .map((e) => `${e.instancePath} ${e.message} ${JSON.stringify(e.params)}`),
+    ).toEqual([])
+  })
+
+  // grain in a bin: assessment.bin, a bin among the methods, bins ranked (the demo valley, invented weather)
+  const valley = readFileSync('climate-demo/quillow-valley-2021-2023-local-dst-imperial.csv')
+  const corn =
+    'product=shelled-corn&tz=America/Chicago&initialWb=20&targetWb=15.5&start=09-15&end=09-29&stepDays=7&airflow=1,2'
+  it.each([
+    ['one bin', `/v1/assess?${corn}&method=natural-air-bin`],
+    ['a bin beside heated air', `/v1/assess?${corn}&method=natural-air-bin,heated`],
+  ])('the answer with %s validates against its declared schema', async (_n, url) => {
+    const res = await app.request(url, {
+      method: 'POST',
+      body: valley,
+      headers: { 'content-type': 'text/csv' },
+    })
+    const text = await res.text()
+    expect(res.status, text.slice(0, 300)).toBe(200)
+    const validate = ajv.compile(declared('post', '/v1/assess'))
+    const ok = validate(JSON.parse(text))
+    expect(
+      ok ? [] : (validate.errors ?? []).slice(0, 40).map((e) => `${e.instancePath} ${e.message}`),
+    ).toEqual([])
+  })
+
+  it('bins ranked by /v1/compare validate against its declared schema', async () => {
+    const f = new FormData()
+    f.append('site', new Blob([valley]), 'a.csv')
+    f.append('site', new Blob([valley]), 'b.csv')
+    f.append(
+      'options',
+      JSON.stringify({
+        product: 'shelled-corn',
+        method: { kind: 'natural-air-bin', airflowsM3PerMinPerTonne: [2] },
+        initialWbPct: 20,
+        targetWbPct: 15.5,
+        seasonStart: '09-15',
+        seasonEnd: '09-22',
+        startStepDays: 7,
+        weather: { timeZone: 'America/Chicago' },
+      }),
+    )
+    const res = await app.request('/v1/compare', { method: 'POST', body: f })
+    const text = await res.text()
+    expect(res.status, text.slice(0, 300)).toBe(200)
+    const validate = ajv.compile(declared('post', '/v1/compare'))
+    const ok = validate(JSON.parse(text))
+    expect(
+      ok ? [] : (validate.errors ?? []).slice(0, 40).map((e) => `${e.instancePath} ${e.message}`),
     ).toEqual([])
   })
 

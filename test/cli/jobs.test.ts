@@ -182,6 +182,97 @@ describe('the grower: methods side by side', () => {
   })
 })
 
+describe('the grower with grain: a natural-air bin beside heated air', () => {
+  it('assess --method natural-air-bin,heated with --airflow: the bin at the airflow serving every start month, its fan, its cautions', async () => {
+    const f = io()
+    const args = [
+      'assess',
+      'climate-demo/quillow-valley-2021-2023-local-dst-imperial.csv',
+      '--tz',
+      'America/Chicago',
+      '--product',
+      'shelled-corn',
+      '--method',
+      'natural-air-bin,heated',
+      '--initial-wb',
+      '20',
+      '--target-wb',
+      '15.5',
+      '--start',
+      '09-15',
+      '--end',
+      '10-15',
+      '--step-days',
+      '7',
+      '--airflow',
+      '1,2,3',
+      '--currency',
+      'USD',
+      '--price',
+      'electricity=0.12',
+      '--quiet',
+    ]
+    expect(await runCli([...args, '--json'], f.cli), f.err()).toBe(0)
+    const c = JSON.parse(f.out())
+    expect(c.methods.map((m: { kind: string }) => m.kind)).toEqual(['natural-air-bin', 'heated'])
+    const bin = c.methods[0].bin
+    // the bin flags went to the bin, the heated method has none
+    expect(
+      c.assessments[0].bin.airflows.map(
+        (a: { airflowM3PerMinPerTonne: number }) => a.airflowM3PerMinPerTonne,
+      ),
+    ).toEqual([1, 2, 3])
+    expect(c.assessments[1].bin).toBeUndefined()
+    expect([1, 2, 3]).toContain(bin.airflowM3PerMinPerTonne)
+    expect(bin.electricityPricePerKwh).toBe(0.12)
+    expect(c.methods[1].bin).toBeNull()
+    const t = io()
+    expect(await runCli(args, t.cli), t.err()).toBe(0)
+    expect(t.out()).toMatch(/^Grain in a bin: natural-air bin .* figures at \d/m)
+    expect(t.out()).toMatch(/the fan uses [\d.]+ kWh per tonne, [\d.]+ USD per tonne at 0\.12 USD per kWh/)
+    // the grain-bin cautions (engulfment, electrical work) come with the comparison
+    expect(t.out()).toMatch(/Cautions:[\s\S]*licensed electricians[\s\S]*engulfs/)
+  })
+
+  it('--method all with fruit lists the bin as not assessed with its reason; bin flags without the bin are refused', async () => {
+    const f = io()
+    const code = await runCli(
+      [
+        'assess',
+        'climate-demo/ardentine-upland-typical-year.epw',
+        '--product',
+        'apricot-halves',
+        '--method',
+        'all',
+        ...season,
+        '--json',
+      ],
+      f.cli,
+    )
+    expect(code, f.err()).toBe(0)
+    const c = JSON.parse(f.out())
+    const bin = c.notAssessed.find((n: { kind: string }) => n.kind === 'natural-air-bin')
+    expect(bin?.reason).toMatch(/grain/)
+    const g = io()
+    const refused = await runCli(
+      [
+        'assess',
+        'climate-demo/ardentine-upland-typical-year.epw',
+        '--product',
+        'apricot-halves',
+        '--method',
+        'shade,heated',
+        '--airflow',
+        '2',
+        ...season,
+      ],
+      g.cli,
+    )
+    expect(refused).toBe(2)
+    expect(g.err()).toMatch(/--airflow goes with --method natural-air-bin/)
+  })
+})
+
 describe('the co-op: sites with their own settings', () => {
   it('compare --sites: ranked best first, criterion and tie-break stated, per-site settings used', async () => {
     const f = io()

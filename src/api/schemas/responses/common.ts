@@ -56,12 +56,14 @@ export const medianP90 = (unit: string, of = 'across years') =>
  * test then names it).
  */
 const UNIT_SUFFIXES: [string, string][] = [
+  ['M3PerMinPerTonne', 'm³/min per tonne as loaded'],
   ['KgPerSPerTonne', 'kg of air per second per tonne of fresh product'],
   ['KgPerSPerM2', 'kg of air per second per m² of collector'],
   ['M2PerTonne', 'm² per tonne of fresh product'],
   ['KgPerM2', 'kg per m²'],
   ['GPerKg', 'g/kg dry air'],
   ['Wm2K', 'W m⁻² K⁻¹'],
+  ['AreaM2', 'm²'],
   ['Wm2', 'W/m²'],
   ['Ms', 'm/s'],
   ['Pct', '%'],
@@ -78,6 +80,8 @@ const UNITLESS: Record<string, string> = {
   groundAlbedo: '0–1',
   frTauAlpha: '0–1',
   surfaceAreaPerTrayArea: 'm² of product surface per m² of tray',
+  fanEfficiency: '0–1',
+  layers: 'count',
 }
 
 export function unitOfName(name: string): string | null {
@@ -101,7 +105,11 @@ export function parametersSchema(shape: Record<string, z.ZodType>, what: string)
     const optional = def?.type === 'optional'
     const unit = unitOfName(name)
     let s: z.ZodType
+    const inner = def?.type === 'default' || def?.type === 'optional' ? def.innerType : def
+    const element = (inner as { element?: { def?: { type?: string } } } | undefined)?.element?.def?.type
     if (type === 'number') s = z.number().describe(`${what} parameter ${name}${unit ? ` [${unit}]` : ''}`)
+    else if (type === 'array' && element === 'number')
+      s = z.array(z.number()).describe(`${what} parameter ${name}${unit ? ` [${unit}]` : ''}`)
     else if (type === 'boolean') s = z.boolean().describe(`${what} parameter ${name} (true or false)`)
     else if (type === 'literal') s = (field as z.ZodType).describe(`${what} kind`)
     else s = z.string().describe(`${what} parameter ${name}`)
