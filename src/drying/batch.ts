@@ -93,6 +93,10 @@ export function simulateBatch(
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const ts = product.thompsonTimeScale
+  // the caps are per kg of the dry matter of the conditions' initial moisture; this batch's dry matter per
+  // tonne fresh (or per m²) is 1/(1 + initialDb): rescale so the water per kg of air is what the air carries
+  const capScalePrimary = (1 + initialDb) / (1 + primary.capInitialDb)
+  const capScaleBackup = backup === undefined ? 1 : (1 + initialDb) / (1 + backup.capInitialDb)
   let m = initialDb
   let rewettingHours = 0
   let rainExposureHours = 0
@@ -156,7 +160,7 @@ export function simulateBatch(
             next = meDes + (m - meDes) * Math.exp(-firstOrderRateConstant(c.rateK[i], c.rateN[i], ts))
           }
           let drop = m - next
-          const cap = c.capDbPerH[i]
+          const cap = c.capDbPerH[i] * (c === primary ? capScalePrimary : capScaleBackup)
           if (drop > cap) drop = cap
           if (drop > 0) {
             m -= drop

@@ -59,7 +59,10 @@ export interface HourColumns {
   deficitToTargetGPerKg: Float64Array
   /** Wet-surface (Penman) evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN for forced-air methods and covered hours. */
   evaporationKgPerM2H: Float64Array
-  /** Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit. */
+  /**
+   * Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit, per kg of the dry
+   * matter of fresh product at `initialWbPct` (see {@link HourlyConditions.capInitialDb}).
+   */
   capDbPerH: Float64Array
   emcDesorptionDb: Float64Array
   /** The same array as {@link emcDesorptionDb} when the profile has one isotherm for both directions. */
@@ -89,6 +92,12 @@ export interface HourlyConditions extends HourColumns {
   method: DryingMethod
   /** Dry-air flow per tonne of fresh product [kg/s]; 0 for exposed methods. */
   airFlowKgPerSPerTonne: number
+  /**
+   * Initial moisture [kg/kg db] whose dry matter per kg of fresh product {@link capDbPerH} is per (from
+   * `initialWbPct`): a batch that starts at another moisture has another dry matter per tonne (or per m²)
+   * and rescales the cap by (1 + its M0)/(1 + this), so the water per kg of air stays what the air can carry.
+   */
+  capInitialDb: number
   /** Hours whose irradiance or wind was missing and was taken as 0 W/m² / the default wind of drying/hourly-conditions.ts (hours computed when the object was returned). */
   assumedIrradianceHours: number
   assumedWindHours: number

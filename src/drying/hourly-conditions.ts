@@ -19,6 +19,7 @@ import { AdiabaticPath, adiabaticEndDryBulbC, solveAdiabaticPath } from '../phys
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
 import { saturationPressureLiquidPa } from '../physics/saturation.ts'
+import { moistureDbFromWbPct } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import {
   allocateColumns,
@@ -354,6 +355,7 @@ export function computeHourlyConditions(
     hours: n,
     method,
     airFlowKgPerSPerTonne,
+    capInitialDb: moistureDbFromWbPct(options.initialWbPct),
     assumedIrradianceHours: 0,
     assumedWindHours: 0,
     noRainData: !anyRain,
