@@ -123,9 +123,9 @@ export const apricotHalves: ProductProfile = {
   name: 'Apricot halves',
   category: 'fruit',
   initialMoistureWbPct: sourced(
-    86,
-    `86 % wb fresh: from memory, inside the 85–90 % of ${REJABOV_2024} (87.5, the middle, is not used yet: test/drying/batch.test.ts hard-codes 86 % for this profile)`,
-    'memory',
+    87.5,
+    `the middle of the 85–90 % wb of fresh apricots in ${REJABOV_2024}`,
+    'fitted',
   ),
   targetMoistureWbPct: sourced(25, `the upper end of 20–25 %, ${CODEX_APRICOTS_VIA_SUMMARY}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
@@ -140,11 +140,17 @@ export const apricotHalves: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.05, 45, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(0.05, 45, 46379) },
     15,
     'slab',
-    `Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots took 10 days, an indirect natural-convection solar dryer 6 days: E3S Web Conf. 661:02003, 2025, abstract; authors not shown); ${ASSUMED_EA_SOURCE.source}. The published activation energy of untreated apricot halves, 46.379–51.514 kJ/mol (${PAVKOV_2021}), is not applied yet: with it the heated-air mass-balance test (test/drying/batch.test.ts) shows an outlet above saturation, an engine issue to fix first`,
+    'Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots took 10 days, an indirect natural-convection solar dryer 6 days: E3S Web Conf. 661:02003, 2025, abstract; authors not shown)',
     'memory',
+    {
+      'k.activationEnergyJPerMol': param(
+        `${PAVKOV_2021}: hot-air drying of untreated apricot halves at 40–60 °C, activation energy 46.379–51.514 kJ/mol, greater at the greater air velocity; the value for the lower velocity (1.0 m/s) is used`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(15, 'halved fruit; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(10, 'single layer, cut face up; from memory', 'memory'),
