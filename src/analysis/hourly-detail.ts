@@ -22,7 +22,13 @@ export interface HourDetail {
   startUtc: string
   airC: number | null
   airRhPct: number | null
+  /** Product surface temperature [°C] of a product that evaporates nothing (near its target). */
   productC: number | null
+  /**
+   * Exposed methods: surface temperature [°C] of a product that still holds free water (cooled by what it
+   * evaporates); a drying batch lies between the two. Null for forced-air methods and covered hours.
+   */
+  productWetC: number | null
   surfaceRhPct: number | null
   deficitToSaturationGPerKg: number | null
   deficitToTargetGPerKg: number | null
@@ -91,6 +97,7 @@ export function hourlyDetail(
       airC: roundOrNull(c.airC[i], 2),
       airRhPct: roundOrNull(c.airRhPct[i], 1),
       productC: roundOrNull(c.productC[i], 2),
+      productWetC: c.surfaceBalance ? roundOrNull(c.productWetC[i], 2) : null,
       surfaceRhPct: roundOrNull(c.surfaceRhPct[i], 1),
       deficitToSaturationGPerKg: roundOrNull(dSat, 3),
       deficitToTargetGPerKg: roundOrNull(c.deficitToTargetGPerKg[i], 3),

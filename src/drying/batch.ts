@@ -3,7 +3,9 @@
  * One batch, hour by hour, over precomputed {@link HourlyConditions} (docs/model.md §7):
  * - drying (M above the desorption equilibrium): thin-layer step by equivalent time
  *   (drying/product-response.ts), never removing more than the hour's constant-rate limit (wet-surface
- *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air);
+ *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air); an exposed product's
+ *   temperature follows its surface balance between the wet-surface and the no-evaporation temperature by the
+ *   share of the wet-surface rate it evaporates ({@link surfaceBalancedDrop});
  * - rewetting (M below the adsorption equilibrium): M → Me_ads − (Me_ads − M)·exp(−f·k·1 h), f the profile's
  *   rewetting rate factor (Lewis form; stated simplification);
  * - rain on an exposed product: rewetting toward the equilibrium at 99.5 % RH, counted as rain exposure;
@@ -12,6 +14,8 @@
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of docs/model.md §8.
  */
+
+import { surfaceBalancedDrop } from '../product/stepping.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'
 import {
@@ -59,6 +63,11 @@ export interface BatchResult {
   waterFromRainDb: number
   /** Moisture [kg/kg db] after each hour, when recordTrace. */
   trace?: Float64Array
+  /**
+   * Product (surface) temperature [°C] in each hour, when recordTrace: from its surface balance in drying hours
+   * of exposed methods, the conditions' product temperature in other hours, NaN in covered and missing hours.
+   */
+  productTrace?: Float64Array
   /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
   usedBackup?: Uint8Array
 }
@@ -92,6 +101,7 @@ export function simulateBatch(
   backup?.ensure(startIndex, maxHours, wrap)
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
+  const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const ts = product.thompsonTimeScale
   // the caps are per kg of the dry matter of the conditions' initial moisture; this batch's dry matter per
   // tonne fresh (or per m²) is 1/(1 + initialDb): rescale so the water per kg of air is what the air carries
@@ -148,20 +158,25 @@ export function simulateBatch(
         const meDes = c.emcDesorptionDb[i]
         const meAds = c.emcAdsorptionDb[i]
         if (m > meDes) {
-          let next: number
-          const decay = c.decayPerHour[i]
-          if (!Number.isNaN(decay)) {
-            // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
-            next = meDes + (m - meDes) * decay
-          } else if (initialDb > meDes) {
-            const mr = (m - meDes) / (initialDb - meDes)
-            next = meDes + stepMoistureRatio(mr, c.rateK[i], c.rateN[i], 1, ts) * (initialDb - meDes)
-          } else {
-            next = meDes + (m - meDes) * Math.exp(-firstOrderRateConstant(c.rateK[i], c.rateN[i], ts))
-          }
-          let drop = m - next
+          const dropDry = fallingRateDrop(m, meDes, c.decayPerHour[i], c.rateK[i], c.rateN[i], initialDb, ts)
           const cap = c.capDbPerH[i] * (c === primary ? capScalePrimary : capScaleBackup)
-          if (drop > cap) drop = cap
+          let drop = dropDry
+          if (c.surfaceBalance) {
+            const dropWet = fallingRateDrop(
+              m,
+              c.emcWetDb[i],
+              c.decayWetPerHour[i],
+              c.rateKWet[i],
+              c.rateNWet[i],
+              initialDb,
+              ts,
+            )
+            drop = surfaceBalancedDrop(dropDry, dropWet, cap)
+            if (productTrace) {
+              const tDry = c.productC[i]
+              productTrace[h] = cap > 0 ? tDry - (drop / cap) * (tDry - c.productWetC[i]) : tDry
+            }
+          } else if (drop > cap) drop = cap
           if (drop > 0) {
             m -= drop
             toAir += drop
@@ -175,6 +190,9 @@ export function simulateBatch(
       }
     }
     if (trace) trace[h] = m
+    if (productTrace && Number.isNaN(productTrace[h]) && mode !== HourMode.paused) {
+      productTrace[h] = c.productC[i] // no drying step: the product evaporates nothing
+    }
     if (m <= targetDb) {
       hoursToTarget = h + 1
       break
@@ -195,6 +213,35 @@ export function simulateBatch(
     waterToAirDb: toAir,
     waterFromRainDb: fromRain,
     trace,
+    productTrace,
     usedBackup,
   }
+}
+
+/**
+ * Water [kg/kg db] a falling-rate step of one hour removes from moisture `m` toward equilibrium `me` with the
+ * hour's step parameters (first order: exp(−k) as `decay`; Page and Thompson: equivalent time from the batch's
+ * `initialDb`); 0 when m is not above me.
+ */
+function fallingRateDrop(
+  m: number,
+  me: number,
+  decay: number,
+  k: number,
+  nExp: number,
+  initialDb: number,
+  ts: number,
+): number {
+  if (!(m > me)) return 0
+  let next: number
+  if (!Number.isNaN(decay)) {
+    // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
+    next = me + (m - me) * decay
+  } else if (initialDb > me) {
+    const mr = (m - me) / (initialDb - me)
+    next = me + stepMoistureRatio(mr, k, nExp, 1, ts) * (initialDb - me)
+  } else {
+    next = me + (m - me) * Math.exp(-firstOrderRateConstant(k, nExp, ts))
+  }
+  return m - next
 }

@@ -45,8 +45,23 @@ export interface HourColumns {
   airC: Float64Array
   /** RH of that air [%]. */
   airRhPct: Float64Array
-  /** Product (surface) temperature [°C]. */
+  /**
+   * Product (surface) temperature [°C] of a product that evaporates nothing (near its target, or stopped):
+   * the temperature of the verdict, the deficits and the equilibrium columns below.
+   */
   productC: Float64Array
+  /**
+   * Exposed methods: surface temperature [°C] of the product while it holds free water (evaporating at the
+   * wet-surface rate); a batch's product lies between it and {@link productC}. NaN for paused and missing
+   * hours; empty (length 0) for forced-air methods.
+   */
+  productWetC: Float64Array
+  /** Exposed methods: desorption equilibrium [kg/kg db] at {@link productWetC} and the surface RH there; empty otherwise. */
+  emcWetDb: Float64Array
+  /** Exposed methods: the step parameters k, n and exp(−k·1 h) (n = 1) at {@link productWetC}; empty otherwise. */
+  rateKWet: Float64Array
+  rateNWet: Float64Array
+  decayWetPerHour: Float64Array
   /** RH at the product surface [%]: ambient vapour pressure over saturation at the product temperature. */
   surfaceRhPct: Float64Array
   /** Saturation pressure of the ambient air, exp(ln pws) [Pa] (ASHRAE HOF 2017 ch. 1 eq 6); NaN for missing and not yet computed hours. */
@@ -93,6 +108,12 @@ export interface HourlyConditions extends HourColumns {
   /** Dry-air flow per tonne of fresh product [kg/s]; 0 for exposed methods. */
   airFlowKgPerSPerTonne: number
   /**
+   * True for exposed methods: the product's temperature follows its surface energy balance, between
+   * {@link HourColumns.productWetC} and {@link HourColumns.productC} by the share of the wet-surface rate it
+   * evaporates (drying/batch.ts). False: the product is at {@link HourColumns.productC} whatever it evaporates.
+   */
+  surfaceBalance: boolean
+  /**
    * Initial moisture [kg/kg db] whose dry matter per kg of fresh product {@link capDbPerH} is per (from
    * `initialWbPct`): a batch that starts at another moisture has another dry matter per tonne (or per m²)
    * and rescales the cap by (1 + its M0)/(1 + this), so the water per kg of air stays what the air can carry.
@@ -109,6 +130,7 @@ export function allocateColumns(
   n: number,
   options: HourlyConditionsOptions,
   sameIsotherm: boolean,
+  surfaceBalance: boolean,
 ): HourColumns {
   const verdict = options.verdict !== false
   const diagnostics = options.diagnostics !== false
@@ -127,6 +149,11 @@ export function allocateColumns(
     airC: f(n),
     airRhPct: f(nDiagnostic),
     productC: f(n),
+    productWetC: f(surfaceBalance ? n : 0),
+    emcWetDb: f(surfaceBalance ? n : 0),
+    rateKWet: f(surfaceBalance ? n : 0),
+    rateNWet: f(surfaceBalance ? n : 0),
+    decayWetPerHour: f(surfaceBalance ? n : 0),
     surfaceRhPct: f(nDiagnostic),
     humidityRatio: f(nDiagnostic),
     deficitToSaturationGPerKg: f(nDiagnostic),
@@ -150,6 +177,7 @@ export function allocateColumns(
     // hours not yet computed read as missing temperatures, never as 0 °C
     columns.airC.fill(Number.NaN)
     columns.productC.fill(Number.NaN)
+    columns.productWetC.fill(Number.NaN)
     if (shared === undefined) columns.ambientSaturationPa.fill(Number.NaN)
   }
   return columns

@@ -62,6 +62,8 @@ class Engine {
   readonly verdictInput = new HourVerdict()
   /** [EMC desorption, EMC adsorption, k, n] of the hour (product-response.ts HOUR_* slots). */
   readonly response = new Float64Array(4)
+  /** The same at the wet-surface temperature (exposed methods). */
+  readonly responseWet = new Float64Array(4)
   readonly step = new Float64Array(2)
   /** Cooling along the adiabatic path in the previous hour [K], to saturation and to the target ERH: the solver's start. */
   depressionToSaturationK = 0
@@ -145,6 +147,7 @@ function readAmbientHour(e: Engine, i: number): boolean {
   // outputs the method may leave alone
   hour.airC = t
   hour.productC = t
+  hour.productWetC = Number.NaN
   hour.mode = HourMode.active
   hour.pausedByNight = false
   hour.coveredForRain = false
@@ -161,6 +164,7 @@ function markMissing(e: Engine, i: number): void {
   c.mode[i] = HourMode.missing
   c.status[i] = HourStatus.missingData
   c.airC[i] = c.airRhPct[i] = c.productC[i] = c.surfaceRhPct[i] = c.humidityRatio[i] = Number.NaN
+  c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
   c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = c.evaporationKgPerM2H[i] = Number.NaN
   c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
 }
@@ -199,6 +203,43 @@ function deficitAlongPath(
   return path.endHumidityRatio - hour.humidityRatio
 }
 
+/**
+ * The product's equilibrium and step parameters at the temperature of its wet surface (exposed methods), where
+ * a product still holding free water sits: its surface RH is the air's vapour pressure over saturation there.
+ * The same as at {@link MethodHour.productC} when the two temperatures are equal (no evaporation, or none
+ * possible) or the method gives none.
+ */
+function wetSurfaceResponse(e: Engine, i: number): void {
+  const { columns: c, hour, product } = e
+  const tWet = hour.productWetC
+  const tDry = hour.productC
+  c.productWetC[i] = Number.isNaN(tWet) ? tDry : tWet
+  if (Number.isNaN(tWet) || tWet === tDry) {
+    c.emcWetDb[i] = c.emcDesorptionDb[i]
+    c.rateKWet[i] = c.rateK[i]
+    c.rateNWet[i] = c.rateN[i]
+    c.decayWetPerHour[i] = c.decayPerHour[i]
+    return
+  }
+  const pwsWetPa = tWet === hour.dryBulbC ? hour.saturationPa : saturationPressureLiquidPa(tWet)
+  let rhWet = (100 * hour.vaporPressureKpa) / (pwsWetPa * 1e-3)
+  if (!(rhWet <= EMC_RH_CAP_PCT)) rhWet = EMC_RH_CAP_PCT
+  const r = e.responseWet
+  if (product.hourResponse !== undefined) product.hourResponse(tWet, rhWet, r)
+  else {
+    r[HOUR_EMC_DESORPTION] = product.emcDesorptionDb(tWet, rhWet)
+    product.stepParameters(tWet, rhWet, e.step)
+    r[HOUR_RATE_K] = e.step[0]
+    r[HOUR_RATE_N] = e.step[1]
+  }
+  c.emcWetDb[i] = r[HOUR_EMC_DESORPTION]
+  const k = r[HOUR_RATE_K]
+  const nExp = r[HOUR_RATE_N]
+  c.rateKWet[i] = k
+  c.rateNWet[i] = nExp
+  c.decayWetPerHour[i] = nExp === 1 ? Math.exp(-k) : Number.NaN
+}
+
 /** The product's response, the deficits, the limit and the verdict of an hour in which it meets the air. */
 function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceSaturationPa: number): void {
   const { columns: c, hour, product, response } = e
@@ -225,6 +266,7 @@ function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceSaturati
   c.rewetDecayPerHour[i] = Math.exp(
     -product.rewettingRateFactor * firstOrderRateConstant(k, nExp, product.thompsonTimeScale),
   )
+  if (e.exposed) wetSurfaceResponse(e, i)
   // Deficits are taken for air at the product temperature (it is what touches the product).
   // Deficit to saturation: the forced-air constant-rate limit. Exposed methods use the Penman rate as
   // their limit and skip it (NaN), which saves a solver per hour.
@@ -291,6 +333,7 @@ function computeHour(e: Engine, i: number): void {
   c.surfaceRhPct[i] = rhSurface
   if (hour.mode === HourMode.paused) {
     // covered product or fans off: no exchange with the air, so nothing else is needed for this hour
+    c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
     c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
     c.rateK[i] = c.rateN[i] = c.decayPerHour[i] = c.rewetDecayPerHour[i] = Number.NaN
     c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = Number.NaN
@@ -320,7 +363,13 @@ export function computeHourlyConditions(
     options.solar !== undefined && (!model.needs.sunAzimuth || options.solar.azimuthDeg.length === n)
       ? options.solar
       : computeSolarColumns(series)
-  const columns = allocateColumns(n, options, product.profile.isotherm.adsorption === undefined)
+  const surfaceBalance = model.exposure === 'exposed'
+  const columns = allocateColumns(
+    n,
+    options,
+    product.profile.isotherm.adsorption === undefined,
+    surfaceBalance,
+  )
   const dmPerKgFresh = 1 - options.initialWbPct / 100
   const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method)
   const methodHour = model.prepare(method, {
@@ -328,6 +377,11 @@ export function computeHourlyConditions(
     solar,
     thresholds: options.thresholds,
     maxProductTempC: options.maxProductTempC,
+    product: {
+      shape: product.profile.kinetics.shape,
+      sizeMm: product.thicknessMm,
+      loadingKgPerM2: options.loadingKgPerM2,
+    },
   })
   const e = new Engine(
     series,
@@ -355,6 +409,7 @@ export function computeHourlyConditions(
     hours: n,
     method,
     airFlowKgPerSPerTonne,
+    surfaceBalance,
     capInitialDb: moistureDbFromWbPct(options.initialWbPct),
     assumedIrradianceHours: 0,
     assumedWindHours: 0,

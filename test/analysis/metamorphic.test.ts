@@ -121,7 +121,15 @@ describe('metamorphic: raising every hour’s RH never increases usable hours', 
           if (a.status[i] === HourStatus.usable) usableA++
           if (b.status[i] === HourStatus.usable) {
             usableB++
-            expect(a.status[i]).toBe(HourStatus.usable)
+            // one exception, physical: humid air sends more long-wave down (FAO-56 eq 39, net emissivity
+            // 0.34 − 0.14·√ea), so a sunlit product sits a few hundredths of a kelvin warmer and may just
+            // cross the 'too cold' threshold
+            const edgeOfCold =
+              a.status[i] === HourStatus.tooCold &&
+              b.productC[i] - a.productC[i] > 0 &&
+              b.productC[i] - a.productC[i] < 0.1 &&
+              Math.abs(a.productC[i] - opts.thresholds.minProductTempC) < 0.1
+            if (!edgeOfCold) expect(a.status[i]).toBe(HourStatus.usable)
           }
         }
         expect(usableB).toBeLessThan(usableA)

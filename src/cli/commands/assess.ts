@@ -33,7 +33,7 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
-                  API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
+                  API's JSON options (e.g. --param surfaceAreaPerTrayArea=1.2); docs/model.md §4 lists them
 Season and batches:
   --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
                  every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
