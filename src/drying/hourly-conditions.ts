@@ -19,6 +19,7 @@ import { AdiabaticPath, adiabaticEndDryBulbC, solveAdiabaticPath } from '../phys
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
 import { saturationPressureLiquidPa } from '../physics/saturation.ts'
+import { saturationPressureFromTableKpa } from '../physics/saturation-table.ts'
 import { moistureDbFromWbPct } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import {
@@ -221,8 +222,8 @@ function wetSurfaceResponse(e: Engine, i: number): void {
     c.decayWetPerHour[i] = c.decayPerHour[i]
     return
   }
-  const pwsWetPa = tWet === hour.dryBulbC ? hour.saturationPa : saturationPressureLiquidPa(tWet)
-  let rhWet = (100 * hour.vaporPressureKpa) / (pwsWetPa * 1e-3)
+  // saturation at the wet surface from the interpolated table of eq 6 (within 1e-9 relative)
+  let rhWet = (100 * hour.vaporPressureKpa) / saturationPressureFromTableKpa(tWet, false)
   if (!(rhWet <= EMC_RH_CAP_PCT)) rhWet = EMC_RH_CAP_PCT
   const r = e.responseWet
   if (product.hourResponse !== undefined) product.hourResponse(tWet, rhWet, r)

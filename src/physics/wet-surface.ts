@@ -50,6 +50,7 @@ import {
   SATURATION_MIN_C,
   saturationVaporPressureLiquidKpa,
 } from './saturation.ts'
+import { saturationPressureFromTableKpa, saturationTableSlopes } from './saturation-table.ts'
 
 /** In and out of {@link solveWetSurface}. */
 export class WetSurface {
@@ -180,12 +181,12 @@ export function solveWetSurface(s: WetSurface): void {
   if (s.exact && sensible > 0) {
     // Newton on f(T) = Q − (H + R)(T − Ta) − (H/γ)(es(T) − ea), from Penman's (linearised) root
     const vapour = sensible / gamma
+    // (es and its slope from the interpolated table of eq 6, within 1e-9 relative: physics/saturation-table.ts)
     for (let iter = 0; iter < 8; iter++) {
       const t = surfaceC < SATURATION_MIN_C ? SATURATION_MIN_C : Math.min(surfaceC, SATURATION_MAX_C)
-      const esT = saturationVaporPressureLiquidKpa(t)
+      const esT = saturationPressureFromTableKpa(t, false)
       const f = s.availableEnergyWm2 - conductance * (t - airC) - vapour * (esT - ea)
-      const slopeT = esT * dLnSaturationPressureLiquidDT(t + KELVIN_OFFSET)
-      const step = f / (conductance + vapour * slopeT)
+      const step = f / (conductance + vapour * saturationTableSlopes[0])
       surfaceC = t + step
       if (Math.abs(step) < 1e-4) break
     }
