@@ -267,6 +267,7 @@ export function assessmentWarnings(
   estimatedSunHours: number,
 ): string[] {
   const warnings: string[] = []
+  if (run.dryTarget.warning !== null) warnings.push(run.dryTarget.warning)
   const { years, time } = calendar
   if (years.length === 0) {
     warnings.push(
@@ -352,6 +353,23 @@ export function assembleAssessment(
       initialMoistureWbPct: run.initialWbPct,
       targetMoistureWbPct: run.targetWbPct,
       targetErhPctAt25C: roundOrNull(product.erhPct(25, run.targetDb), 1) ?? 0,
+      dryTarget: {
+        basis: run.dryTarget.basis,
+        safeWaterActivity: run.dryTarget.safeWaterActivity,
+        safeWaterActivitySource: run.dryTarget.safeWaterActivitySource,
+        storageTempC: run.dryTarget.storageTempC,
+        waterActivityAtTarget: roundOrNull(run.dryTarget.waterActivityAtTarget ?? Number.NaN, 3),
+        moistureAtSafeWaterActivityWbPct: roundOrNull(
+          run.dryTarget.moistureAtSafeWaterActivityWbPct ?? Number.NaN,
+          2,
+        ),
+        profileMoistureWbPct: run.dryTarget.profileMoistureWbPct,
+        waterActivityAtProfileMoisture: roundOrNull(
+          run.dryTarget.waterActivityAtProfileMoisture ?? Number.NaN,
+          3,
+        ),
+        sentence: run.dryTarget.sentence,
+      },
       maxProductTempC: run.maxProductTempC,
       thicknessMm: product.thicknessMm,
       loadingKgPerM2: run.loadingKgPerM2,

@@ -28,10 +28,34 @@ export interface AssessmentProduct {
   targetMoistureWbPct: number
   /** Equilibrium RH [%] of the product at its target moisture, at 25 °C (desorption isotherm). */
   targetErhPctAt25C: number
+  /** What "dry" means for this assessment: the target's basis and the water activities (product/dry-target.ts). */
+  dryTarget: AssessmentDryTarget
   maxProductTempC: number | null
   thicknessMm: number
   loadingKgPerM2: number
   cautions: string[]
+}
+
+export interface AssessmentDryTarget {
+  /**
+   * 'water-activity': the moisture of the product's safe water activity at the storage temperature;
+   * 'profile-moisture': the profile's own moisture figure, drier than that; 'user': given by the user.
+   */
+  basis: 'water-activity' | 'profile-moisture' | 'user'
+  /** Water activity at or below which the dried product is safe [–], and its source. */
+  safeWaterActivity: number
+  safeWaterActivitySource: string
+  /** Temperature of the store at which the water activity is judged [°C]. */
+  storageTempC: number
+  /** Water activity at the target moisture and storage temperature [–]; null when the isotherm gives none. */
+  waterActivityAtTarget: number | null
+  /** Moisture [% wb] at the safe water activity and storage temperature; null when the isotherm gives none. */
+  moistureAtSafeWaterActivityWbPct: number | null
+  /** The profile's own moisture figure [% wb] and its water activity at the storage temperature. */
+  profileMoistureWbPct: number
+  waterActivityAtProfileMoisture: number | null
+  /** What "dry" means here, in one sentence (also in the CLI text and the report). */
+  sentence: string
 }
 
 export interface YearValue {

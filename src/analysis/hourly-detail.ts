@@ -13,6 +13,7 @@ import { productResponse } from '../drying/product-response.ts'
 import { parseDryingThresholds } from '../drying/thresholds.ts'
 import { HOUR_STATUS_NAMES, type HourStatusName } from '../drying/usable-hour.ts'
 import { adiabaticHumidityRatioAtRh } from '../physics/air-processes.ts'
+import { resolveDryTarget } from '../product/dry-target.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import type { AssessOptions } from './assess.ts'
@@ -71,7 +72,10 @@ export function hourlyDetail(
   const profile = options.product
   const method = parseDryingMethod(options.method)
   const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
-  const targetDb = moistureDbFromWbPct(options.targetWbPct ?? profile.targetMoistureWbPct.value)
+  const targetDb = moistureDbFromWbPct(
+    resolveDryTarget(profile, { userTargetWbPct: options.targetWbPct, storageTempC: options.storageTempC })
+      .targetWbPct,
+  )
   const response = productResponse(profile, options.thicknessMm)
   const c = computeHourlyConditions(slice, method, response, {
     targetDb,

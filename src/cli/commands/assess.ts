@@ -28,6 +28,8 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
   --method <kind>           ${DRYING_METHOD_KINDS.join(' | ')}
   --target-wb <%>  --initial-wb <%>  --thickness <mm>
+  --storage-temp <°C>  store temperature at which the dried product's water activity is judged (default 25);
+                 without --target-wb the target is the moisture of the product's safe water activity there
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
@@ -70,6 +72,7 @@ export const ENGINE_PARSE_OPTIONS = {
   product: { type: 'string' },
   method: { type: 'string' },
   'target-wb': { type: 'string' },
+  'storage-temp': { type: 'string' },
   'initial-wb': { type: 'string' },
   thickness: { type: 'string' },
   absorptivity: { type: 'string' },
@@ -213,6 +216,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     method: method as AssessOptions['method'],
     thresholds,
     targetWbPct: num('target-wb'),
+    storageTempC: num('storage-temp'),
     initialWbPct: num('initial-wb'),
     thicknessMm: num('thickness'),
     seasonStart: str('start'),
@@ -267,6 +271,7 @@ export function assessmentText(a: Assessment): string {
   out.push(
     `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
   )
+  out.push(`dry means ${p.dryTarget.sentence}`)
   out.push(
     `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
   )
