@@ -17,6 +17,7 @@ import {
   computeSolarColumns,
   type HourlyConditions,
 } from '../drying/hourly-conditions.ts'
+import { heatedLimitWarnings } from '../drying/methods/heated.ts'
 import { type HourlySeries, QualityFlag } from '../weather/series.ts'
 import type { AssessOptions } from './assess-options.ts'
 import {
@@ -39,6 +40,7 @@ import {
 import { type PsychrometricSummary, psychrometricSummary } from './psychrometric.ts'
 import {
   bestStartWindows,
+  knownOutcomes,
   runStart,
   type StartContext,
   type StartOutcome,
@@ -111,14 +113,25 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   const { primary, backup } = hourlyConditionsStage(series, run)
   const calendar = calendarStage(series, primary)
   const ctx = startContext(series, run, calendar.time, primary, backup)
-  monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
+  const monthlyUnknown = monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
   const starts = startDatesStage(ctx, calendar.years, run)
-  const heat = heatSummary(starts.table.outcomes, backup, run, ctx)
+  const heat = heatSummary(knownOutcomes(starts.table.outcomes), backup, run, ctx)
   const psychrometric = psychrometricSummary(series, run.profile, run.targetWbPct, {
     utcOffsetHours: calendar.time.utcOffsetHours,
     saturationPa: primary.ambientSaturationPa,
   })
-  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric })
+  const unknown = [...monthlyUnknown, ...starts.table.outcomes.filter((o) => o.unknown)]
+  return assembleAssessment(series, run, {
+    primary,
+    calendar,
+    starts,
+    heat,
+    psychrometric,
+    unknownBatches: {
+      count: unknown.length,
+      missingHours: unknown.reduce((sum, o) => sum + o.missingHours, 0),
+    },
+  })
 }
 
 /** Stage 2: the method's hourly conditions for every hour and the backup heater's, lazily. */
@@ -222,13 +235,18 @@ export function monthlyHeatStage(
   monthly: MonthlyRow[],
   years: number[],
   run: ResolvedAssessOptions,
-): void {
+): StartOutcome[] {
+  const unknown: StartOutcome[] = []
   for (let month = 1; month <= 12; month++) {
     const outcomes: StartOutcome[] = []
     for (const day of MONTHLY_HEAT_START_DAYS) {
       for (const year of years) {
         const index = startIndexFor(ctx, year, { month, day })
-        if (index !== null) outcomes.push(runStart(ctx, index))
+        if (index === null) continue
+        const o = runStart(ctx, index)
+        // a batch that ran into missing weather has no known outcome: left out, not counted as slow
+        if (o.unknown) unknown.push(o)
+        else outcomes.push(o)
       }
     }
     const row = monthly[month - 1]
@@ -241,6 +259,7 @@ export function monthlyHeatStage(
     row.medianDaysToTarget = roundOrNull(quantileSorted(days, 0.5), 1)
     run.onProgress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
+  return unknown
 }
 
 export interface StartDates {
@@ -268,6 +287,11 @@ export function assessmentWarnings(
 ): string[] {
   const warnings: string[] = []
   if (run.dryTarget.warning !== null) warnings.push(run.dryTarget.warning)
+  warnings.push(
+    ...(run.method.kind === 'heated'
+      ? heatedLimitWarnings(run.method, run.maxProductTempC, 'heated air')
+      : heatedLimitWarnings(run.backupMethod, run.maxProductTempC, 'backup heater')),
+  )
   const { years, time } = calendar
   if (years.length === 0) {
     warnings.push(
@@ -316,6 +340,16 @@ export function assessmentWarnings(
   return warnings
 }
 
+/** The warning for batches that ran into hours without weather (none when there are none). */
+function unknownBatchWarnings(u: { count: number; missingHours: number }): string[] {
+  if (u.count === 0) return []
+  return [
+    `${u.count} batch${u.count === 1 ? '' : 'es'} ran into hours without weather (${u.missingHours} such hours, summed over those batches): ` +
+      'what the product did then is not known, so their outcome is unknown; they are left out of the days to ' +
+      'target, the probabilities and the heat figures (not counted as slow)',
+  ]
+}
+
 function isoHour(ms: number): string {
   return new Date(ms).toISOString().slice(0, 13) + ':00Z'
 }
@@ -330,6 +364,8 @@ export function assembleAssessment(
     starts: StartDates
     heat: Assessment['heat']
     psychrometric: PsychrometricSummary
+    /** Batches that ran into hours without weather (outcome unknown) and the hours they missed. */
+    unknownBatches: { count: number; missingHours: number }
   },
 ): Assessment {
   const { primary, calendar, starts } = parts
@@ -393,7 +429,10 @@ export function assembleAssessment(
       // what the weather reader supplied rather than read (estimated irradiance, a constant pressure)
       ...(series.supplied ?? []),
     ],
-    warnings: assessmentWarnings(series, run, primary, calendar, starts, estimatedSunHours),
+    warnings: [
+      ...assessmentWarnings(series, run, primary, calendar, starts, estimatedSunHours),
+      ...unknownBatchWarnings(parts.unknownBatches),
+    ],
     coverage: {
       firstHourUtc: isoHour(series.startUtcMs[0]),
       lastHourUtc: isoHour(series.startUtcMs[series.hours - 1]),
@@ -407,6 +446,8 @@ export function assembleAssessment(
       hasRainData: !primary.noRainData,
       startDateBatchesRun: starts.table.batches,
       startDateBatchesSkippedForData: starts.table.skipped,
+      batchesWithUnknownOutcome: parts.unknownBatches.count,
+      missingWeatherHoursInBatches: parts.unknownBatches.missingHours,
     },
   }
 }

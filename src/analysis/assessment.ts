@@ -94,8 +94,12 @@ export interface HourOfDayTable {
 export interface StartDateRow {
   /** 'MM-DD' in local standard time. */
   start: string
-  /** Years with a complete batch from this start. */
+  /** Years with a complete batch from this start whose outcome is known (no hour without weather). */
   years: number
+  /** Years whose batch from this start ran into hours without weather: outcome unknown, left out of the figures. */
+  yearsUnknown: number
+  /** Hours without weather those batches ran into (summed). */
+  missingWeatherHours: number
   /** Days to target by the method alone; null when that percentile does not finish within `maxDays`. */
   daysToTarget: { median: number | null; p90: number | null }
   /** Share of years finishing within the deadline by the method alone, without supplemental heat [0–1]. */
@@ -188,6 +192,12 @@ export interface Coverage {
   hasRainData: boolean
   startDateBatchesRun: number
   startDateBatchesSkippedForData: number
+  /**
+   * Batches (start dates and the monthly 1st/16th batches) that ran into hours without weather: their outcome is
+   * unknown and they are left out of the time, probability and heat figures; and the hours they missed.
+   */
+  batchesWithUnknownOutcome: number
+  missingWeatherHoursInBatches: number
 }
 
 export interface Assessment {

@@ -10,7 +10,8 @@
  *   rewetting rate factor (Lewis form; stated simplification);
  * - rain on an exposed product: rewetting toward the equilibrium at 99.5 % RH, counted as rain exposure;
  *   that water comes from rain, not from the air;
- * - paused (covered, fans off) and missing hours: no change.
+ * - paused (covered, fans off) and missing hours: no change; a batch that meets missing hours has an unknown
+ *   outcome (`outcomeUnknown`), which the assessment reports as such, never as a slow batch.
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of docs/model.md §8.
  */
@@ -50,7 +51,14 @@ export interface BatchResult {
   finalDb: number
   rewettingHours: number
   rainExposureHours: number
+  /** Hours without weather the batch ran into before it ended (the product is held unchanged through them). */
   missingHours: number
+  /**
+   * True when the batch ran into hours without weather before it reached its target or its maximum duration:
+   * what the product did in them is not known, so neither is the batch's outcome (reported as unknown, not
+   * as slow).
+   */
+  outcomeUnknown: boolean
   /** Hours in which the backup (heated) air was used. */
   backupHours: number
   /** Heat from the heater into the air [kWh per tonne fresh]. */
@@ -207,6 +215,7 @@ export function simulateBatch(
     rewettingHours,
     rainExposureHours,
     missingHours,
+    outcomeUnknown: missingHours > 0,
     backupHours,
     heaterKwhPerTonne: heater,
     solarKwhPerTonne: solar,

@@ -263,6 +263,11 @@ export function progressPrinter(io: CliIo, label: string): (p: AssessProgress) =
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
 const f1 = (x: number | null): string => (x === null ? '–' : x.toFixed(1))
+/** A start row's batches with unknown outcome (they met hours without weather), when there are any. */
+const unknownNote = (r: Assessment['startDates'][number]): string =>
+  r.yearsUnknown > 0
+    ? `  + ${r.yearsUnknown} year${r.yearsUnknown === 1 ? '' : 's'} unknown (${r.missingWeatherHours} h without weather)`
+    : ''
 
 /** The readable summary of an assessment. */
 export function assessmentText(a: Assessment): string {
@@ -305,7 +310,7 @@ export function assessmentText(a: Assessment): string {
   a.startDates.forEach((r, i) => {
     if (i % every !== 0) return
     out.push(
-      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})`,
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})${unknownNote(r)}`,
     )
   })
   const h = a.heat
