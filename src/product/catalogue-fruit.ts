@@ -8,6 +8,7 @@
  * fitted by dryhours to one published drying time under stated assumed mean conditions.
  */
 
+import { calibratedConstant } from './calibration.ts'
 import {
   ASSUMED_EA_J_PER_MOL,
   ASSUMED_EA_SOURCE,
@@ -47,7 +48,9 @@ const FRUIT_CAUTIONS = [
 const SUGAR_GAB_MEMORY =
   'C = 3, K = 1.0 and no temperature term: from memory (type III sugar-fruit isotherm; Maroulis et al. 1988, J. Food Eng. 7:63, and Tsami et al. 1990, J. Food Sci. 55:1594, not read)'
 
-const GRAPE_LEWIS_FIT = `Lewis k fitted by dryhours to ${DOYMAZ_2012}: seedless grapes 17.2 mm, open sun, 78.2 → 22 % wb in 176 h, assuming a constant mean 35 °C and 35 % RH at the fruit (Me from the isotherm) around the clock`
+const GRAPE_K = calibratedConstant('grapes-to-raisins', 'k.kRefPerH')
+const GRAPE_LEWIS_FIT = GRAPE_K.source
+const GRAPE_T_REF = `reference temperature 35 °C, set by dryhours, of the k fitted through the engine to ${DOYMAZ_2012} (run ${GRAPE_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the stated activation energy`
 
 export const grapesToRaisins: ProductProfile = {
   id: 'grapes-to-raisins',
@@ -81,14 +84,14 @@ export const grapesToRaisins: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.01616, 35, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(GRAPE_K.value, 35, ASSUMED_EA_J_PER_MOL) },
     17.2,
     'sphere',
     ASSUMED_EA_SOURCE.source,
     'memory',
     {
       'k.kRefPerH': param(GRAPE_LEWIS_FIT, 'fitted'),
-      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      'k.tRefC': param(GRAPE_T_REF, 'fitted'),
       referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
     },
   ),
@@ -108,7 +111,7 @@ export const grapesToRaisinsDipped: ProductProfile = {
     source: `untreated grapes k × 2 and Ea: from memory (dipping roughly halves sun-drying time; dipped grapes dried faster than untreated in Doymaz & Pala 2002, J. Food Eng. 52:413, and Mahmutoglu, Emir & Saygi 1996, J. Food Eng. 29:289, but their abstracts give no factor). Whether the untreated calibration run (Doymaz 2012) was dipped is not stated in its abstract. ${ASSUMED_EA_SOURCE.source}`,
     confidence: 'memory',
     parameters: {
-      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      'k.tRefC': param(GRAPE_T_REF, 'fitted'),
       referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
     },
   },
@@ -331,7 +334,8 @@ export const tomatoHalves: ProductProfile = {
   ],
 }
 
-const CHILLI_LEWIS_FIT = `Lewis k fitted by dryhours to ${HOSSAIN_BALA_2007}: red chilli 2.85 → 0.05 kg/kg db in 20 h in a solar tunnel drier, assuming a constant mean 50 °C and 15 % RH in the tunnel (the abstract credits blanching of the samples with part of the shorter drying: the fitted k may include it)`
+const CHILLI_K = calibratedConstant('chili-peppers', 'k.kRefPerH')
+const CHILLI_LEWIS_FIT = CHILLI_K.source
 
 export const chiliPeppers: ProductProfile = {
   id: 'chili-peppers',
@@ -355,14 +359,17 @@ export const chiliPeppers: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.257, 50, 27000) },
+    { model: 'lewis', k: arrhenius(CHILLI_K.value, 50, 27000) },
     10,
     'cylinder',
     'pod diameter 10 mm at which k holds: from memory',
     'memory',
     {
       'k.kRefPerH': param(CHILLI_LEWIS_FIT, 'fitted'),
-      'k.tRefC': param(`${CHILLI_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 50 °C, set by dryhours, of the k fitted through the engine to ${HOSSAIN_BALA_2007} (run ${CHILLI_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the published activation energy`,
+        'fitted',
+      ),
       'k.activationEnergyJPerMol': param(
         `${SIMAL_2005}: red pepper air-dried at 30–90 °C, the Page k followed Arrhenius with an activation energy of about 27 kJ/mol`,
         'published',

@@ -1,0 +1,155 @@
+/**
+ * Calibration through the engine: for each kinetics constant that comes from a calibration experiment,
+ * find the value with which the ENGINE (weather reconstruction → hourly conditions → batch, exactly as an
+ * assessment runs) reproduces the published drying time, and write it into `src/product/calibration.ts`,
+ * which the catalogue reads (level `fitted`, citing the experiment, the weather and this script).
+ *
+ *   npm run calibrate            (writes src/product/calibration.ts and prints the fits)
+ *   npm run calibrate -- --check (prints only; exits 1 when a written value is more than 0.5 % off the fit)
+ *
+ * Only runs whose role is `calibration` are used (test/experiments/cases.ts); a validation run is never
+ * fitted. The fit is a bisection on the logarithm of the constant (the predicted time falls as the rate
+ * constant rises), to 0.01 % of the published time, or to the step nearest it where the engine's time jumps
+ * (an end point that slips past a night).
+ */
+import { writeFileSync } from 'node:fs'
+import { CALIBRATED_CONSTANTS } from '../../src/product/calibration.ts'
+import type { ProductProfile } from '../../src/product/profile.ts'
+import { CALIBRATION_TARGETS, type CalibrationTarget, withParameter } from './calibration-targets.ts'
+import { caseId, caseProfile, ENGINE_CASES, type EngineCase } from './cases.ts'
+import { runCase } from './run-case.ts'
+
+export interface FitResult {
+  target: CalibrationTarget
+  engineCase: EngineCase
+  value: number
+  /** Predicted ÷ published with the fitted value (rounded as written). */
+  ratio: number
+  iterations: number
+}
+
+/** Significant digits written to the catalogue. */
+const DIGITS = 4
+
+function roundSignificant(x: number): number {
+  return Number(x.toPrecision(DIGITS))
+}
+
+function predictedRatio(c: EngineCase, base: ProductProfile, t: CalibrationTarget, value: number): number {
+  const r = runCase(c, withParameter(base, t.parameter, value))
+  return r.reached ? r.ratio : Number.POSITIVE_INFINITY
+}
+
+/** Fit one target: bisection on ln(value) until the engine's time is within 0.01 % of the published one. */
+export function fitTarget(t: CalibrationTarget): FitResult {
+  const c = ENGINE_CASES.find((x) => caseId(x) === t.caseId)
+  if (!c) throw new RangeError(`calibration case '${t.caseId}' is not in test/experiments/cases.ts`)
+  if (c.role !== 'calibration')
+    throw new RangeError(`'${t.caseId}' is a ${c.role} run: it must never be fitted`)
+  const base = caseProfile(c)
+  let lo = Math.log(t.searchRange[0])
+  let hi = Math.log(t.searchRange[1])
+  if (!(predictedRatio(c, base, t, Math.exp(lo)) > 1 && predictedRatio(c, base, t, Math.exp(hi)) < 1)) {
+    throw new RangeError(`${t.caseId}: the published time is not bracketed by ${t.searchRange.join('…')}`)
+  }
+  let iterations = 0
+  for (; iterations < 60 && hi - lo > 1e-7; iterations++) {
+    const mid = (lo + hi) / 2
+    const ratio = predictedRatio(c, base, t, Math.exp(mid))
+    if (Math.abs(ratio - 1) < 1e-4) {
+      lo = mid
+      hi = mid
+      break
+    }
+    if (ratio > 1) lo = mid
+    else hi = mid
+  }
+  // The engine's time can jump where the end point slips past a night (the last few hundredths of moisture
+  // then wait for the next day): the fit is the rounded value on either side of the step nearest the
+  // published time.
+  const candidates = [roundSignificant(Math.exp(lo)), roundSignificant(Math.exp(hi))]
+  let best = candidates[0]
+  let bestRatio = predictedRatio(c, base, t, best)
+  const other = predictedRatio(c, base, t, candidates[1])
+  if (Math.abs(other - 1) < Math.abs(bestRatio - 1)) {
+    best = candidates[1]
+    bestRatio = other
+  }
+  return { target: t, engineCase: c, value: best, ratio: bestRatio, iterations }
+}
+
+function sourceText(f: FitResult): string {
+  const c = f.engineCase
+  return `${f.target.parameterLabel} fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces ${f.target.citation}: run '${c.runId}', ${c.initialWbPct.value.toFixed(1)} → ${c.endWbPct.value.toFixed(1)} % wb in ${c.published.timeH} h (${c.published.kind} time) with method ${c.method.kind} on the weather reconstruction '${c.weather}' (test/fixtures/experiments/weather/; ${f.target.weatherNote}); engine ÷ published ${f.ratio.toFixed(4)}`
+}
+
+function moduleText(fits: FitResult[]): string {
+  const entries = fits
+    .map(
+      (f) => `  {
+    productId: ${JSON.stringify(f.target.productId)},
+    parameter: ${JSON.stringify(f.target.parameter)},
+    value: ${f.value},
+    caseId: ${JSON.stringify(f.target.caseId)},
+    source: ${JSON.stringify(sourceText(f))},
+  },`,
+    )
+    .join('\n')
+  return `/**
+ * @module product/calibration
+ * Kinetics constants fitted THROUGH THE ENGINE to the calibration experiments: each value is the one with
+ * which the hourly engine, run on the experiment's weather reconstruction with its method, night practice,
+ * size and moistures, reproduces the published drying time. Generated by \`npm run calibrate\`
+ * (test/experiments/calibrate.ts): do not edit by hand; re-run it after any change to the engine or the
+ * weather reconstructions. The catalogue reads these values (level \`fitted\`).
+ */
+
+export interface CalibratedConstant {
+  productId: string
+  /** Path of the constant inside the profile's kinetics equation (e.g. \`k.kRefPerH\`). */
+  parameter: string
+  value: number
+  /** The calibration run (test/experiments/cases.ts). */
+  caseId: string
+  source: string
+}
+
+export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
+${entries}
+]
+
+/** The fitted constant of \`productId\` at \`parameter\`; throws when \`npm run calibrate\` has not written it. */
+export function calibratedConstant(productId: string, parameter: string): CalibratedConstant {
+  const found = CALIBRATED_CONSTANTS.find((c) => c.productId === productId && c.parameter === parameter)
+  if (!found) throw new RangeError(\`no calibrated constant \${parameter} for \${productId}: run npm run calibrate\`)
+  return found
+}
+`
+}
+
+function main(): void {
+  const check = process.argv.includes('--check')
+  const fits = CALIBRATION_TARGETS.map(fitTarget)
+  let stale = false
+  for (const f of fits) {
+    const written = CALIBRATED_CONSTANTS.find(
+      (c) => c.productId === f.target.productId && c.parameter === f.target.parameter,
+    )
+    const off = written ? Math.abs(written.value / f.value - 1) : Number.POSITIVE_INFINITY
+    if (off > 0.005) stale = true
+    console.log(
+      `${f.target.caseId}: ${f.target.productId} ${f.target.parameter} = ${f.value} (engine ÷ published ${f.ratio.toFixed(4)}, ${f.iterations} bisections; written ${written?.value ?? 'none'})`,
+    )
+  }
+  if (check) {
+    if (stale) {
+      console.error('the written constants differ from the fit: run npm run calibrate')
+      process.exitCode = 1
+    }
+    return
+  }
+  writeFileSync(new URL('../../src/product/calibration.ts', import.meta.url), moduleText(fits))
+  console.log('wrote src/product/calibration.ts')
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) main()
