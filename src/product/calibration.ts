@@ -24,7 +24,7 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     value: 0.02165,
     caseId: 'doymaz-2012-grapes-open-sun/seedless',
     source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Doymaz I. 2012, Sun drying of seedless and seeded grapes, J. Food Sci. Technol. 49(2):214–220 (abstract), seedless grapes 17.2 mm in open sun: run 'seedless', 78.2 → 22.0 % wb in 176 h (active time) with method open-air on the weather reconstruction 'istanbul-september-2009' (test/fixtures/experiments/weather/; Istanbul September climate, site and month assumed: the part read gives no site, date or weather); engine ÷ published 0.9998",
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Doymaz I. 2012, Sun drying of seedless and seeded grapes, J. Food Sci. Technol. 49(2):214–220 (abstract), seedless grapes 17.2 mm in open sun: run 'seedless', 78.2 → 22.0 % wb in 176 h (active time) with method open-air on the weather reconstruction 'istanbul-september-2009' (test/fixtures/experiments/weather/; Istanbul September climate, site and month assumed: the part read gives no site, date or weather); engine ÷ target 0.9998",
   },
   {
     productId: 'chili-peppers',
@@ -32,7 +32,15 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     value: 0.3887,
     caseId: 'hossain-bala-2007-chilli-solar-tunnel/red-tunnel',
     source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Hossain M.A., Bala B.K. 2007, Drying of hot chilli using solar tunnel drier, Solar Energy 81:85–92 (abstract), red chilli in the solar tunnel drier (possibly blanched: the abstract credits blanching with part of the shorter drying): run 'red-tunnel', 74.0 → 4.8 % wb in 20 h (active time) with method solar-cabinet on the weather reconstruction 'gazipur-march-2003' (test/fixtures/experiments/weather/; Dhaka March climate, site and month assumed: the abstract gives no weather figure); engine ÷ published 0.9500",
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Hossain M.A., Bala B.K. 2007, Drying of hot chilli using solar tunnel drier, Solar Energy 81:85–92 (abstract), red chilli in the solar tunnel drier (possibly blanched: the abstract credits blanching with part of the shorter drying): run 'red-tunnel', 74.0 → 4.8 % wb in 20 h (active time) with method solar-cabinet on the weather reconstruction 'gazipur-march-2003' (test/fixtures/experiments/weather/; Dhaka March climate, site and month assumed: the abstract gives no weather figure); engine ÷ target 0.9500",
+  },
+  {
+    productId: 'figs',
+    parameter: 'k.kRefPerH',
+    value: 0.01935,
+    caseId: 'oksar-2017-figs-tunnel/august-open-air',
+    source:
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Oksar R.E., Şen F., Aksoy U. 2017, Effect of drying under plastic tunnels on drying rate and quality of fig (Ficus carica L. 'Sarılop'), Acta Hortic. 1173:297–302 (abstract), figs part-dried on the tree, on trays in the open air in August: run 'august-open-air', 40.0 → 22.0 % wb in 96 h (elapsed time, sampled every 24 h: fitted to 84 h, the middle of the last interval) with method open-air on the weather reconstruction 'aydin-august-2015' (test/fixtures/experiments/weather/; Aydın August climate and the fig-region drying-season humidity, date assumed: the abstract gives no weather figure; initial moisture 40 % wb assumed from the 30–50 % of semi-dried figs); engine ÷ target 0.9879",
   },
 ]
 

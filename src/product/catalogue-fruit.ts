@@ -157,6 +157,8 @@ export const apricotHalves: ProductProfile = {
   ],
 }
 
+const FIG_K = calibratedConstant('figs', 'k.kRefPerH')
+
 export const figs: ProductProfile = {
   id: 'figs',
   name: 'Figs (whole)',
@@ -193,11 +195,18 @@ export const figs: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.03, 40, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(FIG_K.value, 40, ASSUMED_EA_J_PER_MOL) },
     40,
     'sphere',
-    `Lewis k = 0.03 h⁻¹ at 40 °C for 40 mm whole figs: from memory (figs part-dried on the tree reached the end point in 72–96 h under a plastic tunnel and 96–120 h in open air, ${OKSAR_2017}); ${ASSUMED_EA_SOURCE.source}`,
+    `whole figs of 40 mm, the size at which k holds: from memory; ${ASSUMED_EA_SOURCE.source}`,
     'memory',
+    {
+      'k.kRefPerH': param(FIG_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 40 °C, set by dryhours, of the k fitted through the engine to ${OKSAR_2017} (run ${FIG_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(40, 'whole fig diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(8, 'single layer on trays; from memory', 'memory'),

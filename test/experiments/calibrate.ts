@@ -16,14 +16,14 @@ import { writeFileSync } from 'node:fs'
 import { CALIBRATED_CONSTANTS } from '../../src/product/calibration.ts'
 import type { ProductProfile } from '../../src/product/profile.ts'
 import { CALIBRATION_TARGETS, type CalibrationTarget, withParameter } from './calibration-targets.ts'
-import { caseId, caseProfile, ENGINE_CASES, type EngineCase } from './cases.ts'
+import { caseId, caseProfile, ENGINE_CASES, type EngineCase, fitTargetH } from './cases.ts'
 import { runCase } from './run-case.ts'
 
 export interface FitResult {
   target: CalibrationTarget
   engineCase: EngineCase
   value: number
-  /** Predicted ÷ published with the fitted value (rounded as written). */
+  /** Predicted ÷ the fit's target time with the fitted value (rounded as written). */
   ratio: number
   iterations: number
 }
@@ -37,7 +37,7 @@ function roundSignificant(x: number): number {
 
 function predictedRatio(c: EngineCase, base: ProductProfile, t: CalibrationTarget, value: number): number {
   const r = runCase(c, withParameter(base, t.parameter, value))
-  return r.reached ? r.ratio : Number.POSITIVE_INFINITY
+  return r.reached ? r.continuousH / fitTargetH(c) : Number.POSITIVE_INFINITY
 }
 
 /** Fit one target: bisection on ln(value) until the engine's time is within 0.01 % of the published one. */
@@ -80,7 +80,7 @@ export function fitTarget(t: CalibrationTarget): FitResult {
 
 function sourceText(f: FitResult): string {
   const c = f.engineCase
-  return `${f.target.parameterLabel} fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces ${f.target.citation}: run '${c.runId}', ${c.initialWbPct.value.toFixed(1)} → ${c.endWbPct.value.toFixed(1)} % wb in ${c.published.timeH} h (${c.published.kind} time) with method ${c.method.kind} on the weather reconstruction '${c.weather}' (test/fixtures/experiments/weather/; ${f.target.weatherNote}); engine ÷ published ${f.ratio.toFixed(4)}`
+  return `${f.target.parameterLabel} fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces ${f.target.citation}: run '${c.runId}', ${c.initialWbPct.value.toFixed(1)} → ${c.endWbPct.value.toFixed(1)} % wb in ${c.published.timeH} h (${c.published.kind} time${c.published.sampledEveryH ? `, sampled every ${c.published.sampledEveryH} h: fitted to ${fitTargetH(c)} h, the middle of the last interval` : ''}) with method ${c.method.kind} on the weather reconstruction '${c.weather}' (test/fixtures/experiments/weather/; ${f.target.weatherNote}); engine ÷ target ${f.ratio.toFixed(4)}`
 }
 
 function moduleText(fits: FitResult[]): string {

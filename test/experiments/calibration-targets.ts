@@ -44,6 +44,17 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
     weatherNote: 'Dhaka March climate, site and month assumed: the abstract gives no weather figure',
     searchRange: [1e-3, 5],
   },
+  {
+    productId: 'figs',
+    parameter: 'k.kRefPerH',
+    parameterLabel: 'Lewis k at the reference temperature',
+    caseId: 'oksar-2017-figs-tunnel/august-open-air',
+    citation:
+      "Oksar R.E., Şen F., Aksoy U. 2017, Effect of drying under plastic tunnels on drying rate and quality of fig (Ficus carica L. 'Sarılop'), Acta Hortic. 1173:297–302 (abstract), figs part-dried on the tree, on trays in the open air in August",
+    weatherNote:
+      'Aydın August climate and the fig-region drying-season humidity, date assumed: the abstract gives no weather figure; initial moisture 40 % wb assumed from the 30–50 % of semi-dried figs',
+    searchRange: [1e-3, 1],
+  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */

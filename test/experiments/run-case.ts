@@ -17,18 +17,23 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import type { HourlySeries } from '../../src/weather/series.ts'
 import { RECONSTRUCTIONS } from '../fixtures/experiments/weather/reconstructions.ts'
 import { caseProfile, type EngineCase } from './cases.ts'
-import { readOptionsFor } from './weather-reconstruction.ts'
+import { hourIndexAt, type Reconstruction, readOptionsFor } from './weather-reconstruction.ts'
 
 const WEATHER_DIR = new URL('../fixtures/experiments/weather/', import.meta.url)
 
 const seriesCache = new Map<string, HourlySeries>()
 
+function reconstruction(weatherId: string): Reconstruction {
+  const spec = RECONSTRUCTIONS.find((r) => r.id === weatherId)
+  if (!spec) throw new RangeError(`no weather reconstruction '${weatherId}'`)
+  return spec
+}
+
 /** The reconstruction's hourly series, read from its committed CSV by the ordinary reader. */
 export function caseWeather(weatherId: string): HourlySeries {
   const cached = seriesCache.get(weatherId)
   if (cached) return cached
-  const spec = RECONSTRUCTIONS.find((r) => r.id === weatherId)
-  if (!spec) throw new RangeError(`no weather reconstruction '${weatherId}'`)
+  const spec = reconstruction(weatherId)
   const text = readFileSync(new URL(`${weatherId}.csv`, WEATHER_DIR), 'utf8')
   const { series } = readWeather(text, readOptionsFor(spec))
   seriesCache.set(weatherId, series)
@@ -40,9 +45,14 @@ export interface CaseResult {
   elapsedH: number
   /** Predicted active drying hours to the end point (NaN when not reached). */
   activeH: number
-  /** The predicted time of the published kind (elapsed or active). */
+  /** The predicted time of the published kind (elapsed or active), before any sampling. */
+  continuousH: number
+  /**
+   * The predicted time as the paper would have recorded it: the first sample at or after the end point when
+   * the paper sampled at fixed intervals (e.g. every 24 h), else {@link continuousH}.
+   */
   predictedH: number
-  /** Predicted ÷ published. */
+  /** Predicted ÷ published ({@link predictedH} ÷ the published time). */
   ratio: number
   reached: boolean
   /** Moisture [% wb] at the end of the file when the end point was not reached. */
@@ -52,7 +62,7 @@ export interface CaseResult {
 /** Run `c` through the engine; `profile` replaces the catalogue profile (the calibration's trial constants). */
 export function runCase(c: EngineCase, profile: ProductProfile = caseProfile(c)): CaseResult {
   const series = caseWeather(c.weather)
-  const startIndex = c.start.day * 24 + c.start.localHour
+  const startIndex = hourIndexAt(reconstruction(c.weather), c.start.day, c.start.localHour)
   const hoursLeft = series.hours - startIndex
   const run = resolveAssessOptions({
     product: profile,
@@ -60,6 +70,7 @@ export function runCase(c: EngineCase, profile: ProductProfile = caseProfile(c))
     initialWbPct: c.initialWbPct.value,
     targetWbPct: c.endWbPct.value,
     thicknessMm: c.sizeMm?.value,
+    deadlineDays: 1,
     maxDays: Math.max(1, Math.ceil(hoursLeft / 24)),
   })
   const { primary } = hourlyConditionsStage(series, run)
@@ -86,11 +97,14 @@ export function runCase(c: EngineCase, profile: ProductProfile = caseProfile(c))
     }
     activeH = active + fraction
   }
-  const predictedH = c.published.kind === 'active' ? activeH : elapsedH
+  const continuousH = c.published.kind === 'active' ? activeH : elapsedH
+  const every = c.published.sampledEveryH
+  const predictedH = every === undefined ? continuousH : Math.ceil(continuousH / every - 1e-9) * every
   const finalDb = batch.finalDb
   return {
     elapsedH,
     activeH,
+    continuousH,
     predictedH,
     ratio: predictedH / c.published.timeH,
     reached: batch.reached,

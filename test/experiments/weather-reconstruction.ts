@@ -112,10 +112,23 @@ export const reconstructionFileSchema = z.object({
   reconstructions: z.array(reconstructionSchema).min(1),
 })
 
-/** UTC ms of the file's first hour: local midnight of `firstLocalDate`. */
-export function firstHourUtcMs(spec: Reconstruction): number {
+/** UTC ms of local `localHour` on day `day` of the file (day 0 = `firstLocalDate`). */
+export function localTimeUtcMs(spec: Reconstruction, day: number, localHour: number): number {
   const [y, m, d] = spec.firstLocalDate.split('-').map(Number)
-  return Date.UTC(y, m - 1, d) - spec.utcOffsetHours * HOUR_MS
+  return Date.UTC(y, m - 1, d + day) + (localHour - spec.utcOffsetHours) * HOUR_MS
+}
+
+/**
+ * UTC ms of the file's first hour: local midnight of `firstLocalDate`, or the whole UTC hour before it
+ * where the site's offset is not a whole number of hours (UTC+5:30), since the export's rows are UTC hours.
+ */
+export function firstHourUtcMs(spec: Reconstruction): number {
+  return Math.floor(localTimeUtcMs(spec, 0, 0) / HOUR_MS) * HOUR_MS
+}
+
+/** Index of the hour of the file that contains local `localHour` on day `day`. */
+export function hourIndexAt(spec: Reconstruction, day: number, localHour: number): number {
+  return Math.floor((localTimeUtcMs(spec, day, localHour) - firstHourUtcMs(spec)) / HOUR_MS)
 }
 
 /** Actual vapour pressure [kPa] of a day with extremes tMax, tMin from the spec's humidity (FAO-56 eqs 17, 19). */
