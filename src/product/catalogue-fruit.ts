@@ -39,6 +39,7 @@ import {
   SIMAL_2005,
   USDA_RAISIN_GRADES,
 } from './citations.ts'
+import { derivePretreatedVariant } from './pretreatment-variants.ts'
 import type { ProductProfile } from './profile.ts'
 
 const FRUIT_CAUTIONS = [
@@ -101,20 +102,7 @@ export const grapesToRaisins: ProductProfile = {
 }
 
 export const grapesToRaisinsDipped: ProductProfile = {
-  ...grapesToRaisins,
-  id: 'grapes-to-raisins-dipped',
-  name: 'Grapes to raisins (dipped in alkaline ethyl-oleate emulsion)',
-  variantOf: 'grapes-to-raisins',
-  kinetics: {
-    ...grapesToRaisins.kinetics,
-    equation: { model: 'lewis', k: arrhenius(0.03232, 35, ASSUMED_EA_J_PER_MOL) },
-    source: `untreated grapes k × 2 and Ea: from memory (dipping roughly halves sun-drying time; dipped grapes dried faster than untreated in Doymaz & Pala 2002, J. Food Eng. 52:413, and Mahmutoglu, Emir & Saygi 1996, J. Food Eng. 29:289, but their abstracts give no factor). Whether the untreated calibration run (Doymaz 2012) was dipped is not stated in its abstract. ${ASSUMED_EA_SOURCE.source}`,
-    confidence: 'memory',
-    parameters: {
-      'k.tRefC': param(GRAPE_T_REF, 'fitted'),
-      referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
-    },
-  },
+  ...derivePretreatedVariant(grapesToRaisins, 'grapes-to-raisins-dipped'),
   cautions: [
     ...grapesToRaisins.cautions,
     'Use food-grade dipping oil and potassium carbonate at the stated strength.',

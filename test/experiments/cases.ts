@@ -430,7 +430,7 @@ export function caseId(c: EngineCase): string {
 }
 
 const BLANCHED_FIT =
-  "the chilli rate constant was fitted to Hossain & Bala's tunnel run, whose abstract credits blanching of the samples with part of the shorter drying; this run's chillies were not blanched as far as the part read says, and no published blanching factor exists to derive an unblanched rate (test/fixtures/pretreatments.json, blanching-chilli: no factor)"
+  "the chilli rate constant was fitted to Hossain & Bala's tunnel run, whose abstract credits blanching of the samples with part of the shorter drying; this run's chillies were not blanched as far as the part read says, and no published blanching factor exists to derive an unblanched rate (src/product/pretreatments.ts, blanching-chilli: no factor; the variant chili-peppers-unblanched is declared not derivable)"
 const IMPROVED_CONVENTIONAL =
   "'improved' and 'conventional' sun drying are not defined in the abstract and run alike in the engine; in the same 32–35 h the conventional runs ended far wetter (0.40 and 0.70 against 0.09 and 0.10 kg/kg db), which one open-air model cannot give both"
 const APRICOT_MEMORY =
