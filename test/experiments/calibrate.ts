@@ -15,9 +15,12 @@
 import { writeFileSync } from 'node:fs'
 import { CALIBRATED_CONSTANTS } from '../../src/product/calibration.ts'
 import type { ProductProfile } from '../../src/product/profile.ts'
+import type { HourlySeries } from '../../src/weather/series.ts'
+import { RECONSTRUCTIONS } from '../fixtures/experiments/weather/reconstructions.ts'
 import { CALIBRATION_TARGETS, type CalibrationTarget, withParameter } from './calibration-targets.ts'
 import { caseId, caseProfile, ENGINE_CASES, type EngineCase, fitTargetH } from './cases.ts'
 import { runCase } from './run-case.ts'
+import { type Reconstruction, reconstructWeather } from './weather-reconstruction.ts'
 
 export interface FitResult {
   target: CalibrationTarget
@@ -35,13 +38,22 @@ function roundSignificant(x: number): number {
   return Number(x.toPrecision(DIGITS))
 }
 
-function predictedRatio(c: EngineCase, base: ProductProfile, t: CalibrationTarget, value: number): number {
-  const r = runCase(c, withParameter(base, t.parameter, value))
+function predictedRatio(
+  c: EngineCase,
+  base: ProductProfile,
+  t: CalibrationTarget,
+  value: number,
+  series?: HourlySeries,
+): number {
+  const r = runCase(c, withParameter(base, t.parameter, value), series)
   return r.reached ? r.continuousH / fitTargetH(c) : Number.POSITIVE_INFINITY
 }
 
-/** Fit one target: bisection on ln(value) until the engine's time is within 0.01 % of the published one. */
-export function fitTarget(t: CalibrationTarget): FitResult {
+/**
+ * Fit one target: bisection on ln(value) until the engine's time is within 0.01 % of the published one.
+ * `series` replaces the committed weather (sensitivity runs).
+ */
+export function fitTarget(t: CalibrationTarget, series?: HourlySeries): FitResult {
   const c = ENGINE_CASES.find((x) => caseId(x) === t.caseId)
   if (!c) throw new RangeError(`calibration case '${t.caseId}' is not in test/experiments/cases.ts`)
   if (c.role !== 'calibration')
@@ -49,13 +61,18 @@ export function fitTarget(t: CalibrationTarget): FitResult {
   const base = caseProfile(c)
   let lo = Math.log(t.searchRange[0])
   let hi = Math.log(t.searchRange[1])
-  if (!(predictedRatio(c, base, t, Math.exp(lo)) > 1 && predictedRatio(c, base, t, Math.exp(hi)) < 1)) {
+  if (
+    !(
+      predictedRatio(c, base, t, Math.exp(lo), series) > 1 &&
+      predictedRatio(c, base, t, Math.exp(hi), series) < 1
+    )
+  ) {
     throw new RangeError(`${t.caseId}: the published time is not bracketed by ${t.searchRange.join('…')}`)
   }
   let iterations = 0
   for (; iterations < 60 && hi - lo > 1e-7; iterations++) {
     const mid = (lo + hi) / 2
-    const ratio = predictedRatio(c, base, t, Math.exp(mid))
+    const ratio = predictedRatio(c, base, t, Math.exp(mid), series)
     if (Math.abs(ratio - 1) < 1e-4) {
       lo = mid
       hi = mid
@@ -69,8 +86,8 @@ export function fitTarget(t: CalibrationTarget): FitResult {
   // published time.
   const candidates = [roundSignificant(Math.exp(lo)), roundSignificant(Math.exp(hi))]
   let best = candidates[0]
-  let bestRatio = predictedRatio(c, base, t, best)
-  const other = predictedRatio(c, base, t, candidates[1])
+  let bestRatio = predictedRatio(c, base, t, best, series)
+  const other = predictedRatio(c, base, t, candidates[1], series)
   if (Math.abs(other - 1) < Math.abs(bestRatio - 1)) {
     best = candidates[1]
     bestRatio = other
@@ -127,9 +144,118 @@ export function calibratedConstant(productId: string, parameter: string): Calibr
 `
 }
 
+/** The weather variants of the sensitivity study: each changes one input of the reconstruction. */
+export const WEATHER_VARIANTS: { label: string; change: (r: Reconstruction) => Reconstruction }[] = [
+  { label: 'temperatures −2 K', change: (r) => shiftTemperatures(r, -2) },
+  { label: 'temperatures +2 K', change: (r) => shiftTemperatures(r, 2) },
+  { label: 'air 10 % RH drier (dew point −2 K)', change: (r) => shiftHumidity(r, -1) },
+  { label: 'air 10 % RH moister (dew point +2 K)', change: (r) => shiftHumidity(r, 1) },
+  { label: 'sunshine −1.5 h a day', change: (r) => shiftSunshine(r, -1.5) },
+  { label: 'sunshine +1.5 h a day', change: (r) => shiftSunshine(r, 1.5) },
+]
+
+function shiftTemperatures(r: Reconstruction, dK: number): Reconstruction {
+  const t = r.temperature
+  return {
+    ...r,
+    temperature: {
+      tMaxC: { ...t.tMaxC, value: t.tMaxC.value + dK },
+      tMinC: { ...t.tMinC, value: t.tMinC.value + dK },
+    },
+  }
+}
+
+function shiftHumidity(r: Reconstruction, sign: number): Reconstruction {
+  const h = r.humidity
+  switch (h.kind) {
+    case 'rh-range':
+      return {
+        ...r,
+        humidity: {
+          ...h,
+          rhMaxPct: { ...h.rhMaxPct, value: Math.min(100, h.rhMaxPct.value + 10 * sign) },
+          rhMinPct: { ...h.rhMinPct, value: h.rhMinPct.value + 10 * sign },
+        },
+      }
+    case 'rh-mean':
+      return { ...r, humidity: { ...h, rhMeanPct: { ...h.rhMeanPct, value: h.rhMeanPct.value + 10 * sign } } }
+    case 'dew-point':
+      return { ...r, humidity: { ...h, dewPointC: { ...h.dewPointC, value: h.dewPointC.value + 2 * sign } } }
+  }
+}
+
+function shiftSunshine(r: Reconstruction, dH: number): Reconstruction {
+  const s = r.sun
+  return s.kind === 'sunshine-hours'
+    ? { ...r, sun: { ...s, hours: { ...s.hours, value: Math.max(0, s.hours.value + dH) } } }
+    : { ...r, sun: { ...s, mjPerM2: { ...s.mjPerM2, value: s.mjPerM2.value * (1 + dH / 10) } } }
+}
+
+export interface SensitivityRow {
+  target: CalibrationTarget
+  label: string
+  /** The constant fitted on the changed weather ÷ the constant fitted on the committed one. */
+  factor: number
+}
+
+/** Fit every target again on each weather variant (in memory; the committed CSVs are not touched). */
+export function sensitivity(fits: FitResult[]): SensitivityRow[] {
+  const rows: SensitivityRow[] = []
+  for (const f of fits) {
+    const spec = RECONSTRUCTIONS.find((r) => r.id === f.engineCase.weather)
+    if (!spec) throw new RangeError(`no reconstruction ${f.engineCase.weather}`)
+    for (const v of WEATHER_VARIANTS) {
+      const refit = fitTarget(f.target, reconstructWeather(v.change(spec)))
+      rows.push({ target: f.target, label: v.label, factor: refit.value / f.value })
+    }
+  }
+  return rows
+}
+
+function calibrationDoc(fits: FitResult[], rows: SensitivityRow[]): string {
+  const out = [
+    '# Calibration through the engine',
+    '',
+    'Written by `npm run calibrate` (test/experiments/calibrate.ts) together with src/product/calibration.ts;',
+    '`test/experiments/calibration.test.ts` checks that the values here are the ones the catalogue uses and that',
+    'the engine reproduces each calibration run with them. The runs, their weather and their assumptions are in',
+    '[validation.md](validation.md).',
+    '',
+    '## Fitted constants',
+    '',
+    '| product | constant | value | calibration run | engine ÷ target |',
+    '|---|---|---:|---|---:|',
+  ]
+  for (const f of fits) {
+    out.push(
+      `| ${f.target.productId} | ${f.target.parameter} | ${f.value} | ${f.target.caseId} | ${f.ratio.toFixed(4)} |`,
+    )
+  }
+  out.push(
+    '',
+    '## How much each constant rests on the weather reconstruction',
+    '',
+    'Each constant fitted again with one input of its weather reconstruction changed (in memory, same seed):',
+    'the factor is the new constant ÷ the committed one. None of the papers reports its weather, so these are the',
+    'uncertainties a user inherits from the reconstructions, before any uncertainty of the papers themselves.',
+    '',
+    `| change | ${fits.map((f) => f.target.productId).join(' | ')} |`,
+    `|---|${fits.map(() => '---:').join('|')}|`,
+  )
+  for (const v of WEATHER_VARIANTS) {
+    const cells = fits.map((f) => {
+      const row = rows.find((r) => r.target === f.target && r.label === v.label)
+      return row ? `× ${row.factor.toFixed(2)}` : '—'
+    })
+    out.push(`| ${v.label} | ${cells.join(' | ')} |`)
+  }
+  out.push('')
+  return out.join('\n')
+}
+
 function main(): void {
   const check = process.argv.includes('--check')
-  const fits = CALIBRATION_TARGETS.map(fitTarget)
+  const fits = CALIBRATION_TARGETS.map((t) => fitTarget(t))
   let stale = false
   for (const f of fits) {
     const written = CALIBRATED_CONSTANTS.find(
@@ -149,7 +275,12 @@ function main(): void {
     return
   }
   writeFileSync(new URL('../../src/product/calibration.ts', import.meta.url), moduleText(fits))
-  console.log('wrote src/product/calibration.ts')
+  console.log('wrote src/product/calibration.ts; fitting again on each weather variant …')
+  writeFileSync(
+    new URL('../../docs/calibration.md', import.meta.url),
+    calibrationDoc(fits, sensitivity(fits)),
+  )
+  console.log('wrote docs/calibration.md')
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) main()

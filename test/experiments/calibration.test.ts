@@ -6,6 +6,7 @@
  * re-run. Fits that cannot land on the published time (the engine's time jumps where the end point slips
  * past a night) carry the nearest step; the bound below is that step's distance.
  */
+import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import { CALIBRATED_CONSTANTS } from '../../src/product/calibration.ts'
 import { productById } from '../../src/product/catalogue.ts'
@@ -30,5 +31,14 @@ describe.each(CALIBRATION_TARGETS.map((t) => [t.caseId, t] as const))('calibrati
     const r = runCase(c)
     expect(r.reached).toBe(true)
     expect(Math.abs(r.ratio - 1)).toBeLessThan(0.06)
+  })
+})
+
+describe('docs/calibration.md', () => {
+  it('lists the constants the catalogue uses (npm run calibrate writes both)', () => {
+    const doc = readFileSync(new URL('../../docs/calibration.md', import.meta.url), 'utf8')
+    for (const c of CALIBRATED_CONSTANTS) {
+      expect(doc).toContain(`| ${c.productId} | ${c.parameter} | ${c.value} | ${c.caseId} |`)
+    }
   })
 })

@@ -59,9 +59,15 @@ export interface CaseResult {
   finalWbPct: number
 }
 
-/** Run `c` through the engine; `profile` replaces the catalogue profile (the calibration's trial constants). */
-export function runCase(c: EngineCase, profile: ProductProfile = caseProfile(c)): CaseResult {
-  const series = caseWeather(c.weather)
+/**
+ * Run `c` through the engine; `profile` replaces the catalogue profile (the calibration's trial constants) and
+ * `series` the committed weather (the calibration's sensitivity to the reconstruction).
+ */
+export function runCase(
+  c: EngineCase,
+  profile: ProductProfile = caseProfile(c),
+  series: HourlySeries = caseWeather(c.weather),
+): CaseResult {
   const startIndex = hourIndexAt(reconstruction(c.weather), c.start.day, c.start.localHour)
   const hoursLeft = series.hours - startIndex
   const run = resolveAssessOptions({
