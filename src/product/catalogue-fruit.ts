@@ -109,6 +109,8 @@ export const grapesToRaisinsDipped: ProductProfile = {
   ],
 }
 
+const APRICOT_K = calibratedConstant('apricot-halves', 'k.kRefPerH')
+
 export const apricotHalves: ProductProfile = {
   id: 'apricot-halves',
   name: 'Apricot halves',
@@ -131,11 +133,18 @@ export const apricotHalves: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.05, 45, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(APRICOT_K.value, 45, ASSUMED_EA_J_PER_MOL) },
     15,
     'slab',
-    `Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots took 10 days, an indirect natural-convection solar dryer 6 days: E3S Web Conf. 661:02003, 2025, abstract; authors not shown); ${ASSUMED_EA_SOURCE.source}. The published activation energy of untreated apricot halves, 46.379–51.514 kJ/mol (${PAVKOV_2021}), is not applied yet: with it the heated-air mass-balance test (test/drying/batch.test.ts) shows an outlet above saturation, an engine issue to fix first`,
+    `15 mm halves, the size at which k holds: from memory; ${ASSUMED_EA_SOURCE.source}. The published activation energy of untreated apricot halves, 46.379–51.514 kJ/mol (${PAVKOV_2021}), is not applied yet: with it the heated-air mass-balance test (test/drying/batch.test.ts) shows an outlet above saturation, an engine issue to fix first`,
     'memory',
+    {
+      'k.kRefPerH': param(APRICOT_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 45 °C, set by dryhours, of the k fitted through the engine to the E3S Web Conf. 661:02003 (2025) open-air run (${APRICOT_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(15, 'halved fruit; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(10, 'single layer, cut face up; from memory', 'memory'),

@@ -55,6 +55,17 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
       'Aydın August climate and the fig-region drying-season humidity, date assumed: the abstract gives no weather figure; initial moisture 40 % wb assumed from the 30–50 % of semi-dried figs',
     searchRange: [1e-3, 1],
   },
+  {
+    productId: 'apricot-halves',
+    parameter: 'k.kRefPerH',
+    parameterLabel: 'Lewis k at the reference temperature',
+    caseId: 'e3s-2025-apricots-uzbekistan/open-air',
+    citation:
+      'Experimental study of apricot drying using direct and indirect solar dryers with natural convection, E3S Web Conf. 661:02003, 2025 (abstract; authors not shown on the copy read), apricots in open air to equilibrium moisture in 10 days',
+    weatherNote:
+      'Tashkent July climate from memory, site and month assumed: the abstract gives no site, date or weather; halves and the 20 % wb end point assumed',
+    searchRange: [1e-3, 1],
+  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */

@@ -376,6 +376,7 @@ function e3sRuns(): EngineCase[] {
     {
       ...base,
       runId: 'open-air',
+      role: 'calibration',
       method: { kind: 'open-air' },
       methodNote: COVERED_AT_NIGHT,
       published: { timeH: 240, kind: 'elapsed', kindReason: elapsed },
@@ -508,9 +509,6 @@ const BLANCHED_FIT =
   "the chilli rate constant was fitted to Hossain & Bala's tunnel run, whose abstract credits blanching of the samples with part of the shorter drying; this run's chillies were not blanched as far as the part read says, and no published blanching factor exists to derive an unblanched rate (src/product/pretreatments.ts, blanching-chilli: no factor; the variant chili-peppers-unblanched is declared not derivable)"
 const IMPROVED_CONVENTIONAL =
   "'improved' and 'conventional' sun drying are not defined in the abstract and run alike in the engine; in the same 32–35 h the conventional runs ended far wetter (0.40 and 0.70 against 0.09 and 0.10 kg/kg db), which one open-air model cannot give both"
-const APRICOT_MEMORY =
-  'the apricot rate constant is from memory (no apricot calibration run exists: E3S 2025 is the only apricot experiment with times, and all three of its runs are validation), and the end point is not in the abstract'
-
 /** Runs expected outside their band, with the reason (as measured on the engine of this commit). */
 const OUTSIDE: Record<string, string> = {
   'arun-2014-grapes-solar-tunnel/tunnel':
@@ -523,9 +521,8 @@ const OUTSIDE: Record<string, string> = {
     'the air flow per tonne is the engine default (0.5 kg/s per tonne): the published 2.5 m/s through the bed cannot be turned into a flow per tonne without the bed area and depth, which the abstract does not give',
   'hossain-bala-2007-chilli-solar-tunnel/red-conventional-sun': IMPROVED_CONVENTIONAL,
   'hossain-bala-2007-chilli-solar-tunnel/green-conventional-sun': IMPROVED_CONVENTIONAL,
-  'e3s-2025-apricots-uzbekistan/open-air': APRICOT_MEMORY,
-  'e3s-2025-apricots-uzbekistan/direct': `${APRICOT_MEMORY}; a natural-convection direct dryer runs as the forced-air solar cabinet`,
-  'e3s-2025-apricots-uzbekistan/indirect': `${APRICOT_MEMORY}; a natural-convection indirect dryer runs as the forced-air solar cabinet, so direct and indirect come out alike`,
+  'e3s-2025-apricots-uzbekistan/indirect':
+    'the natural-convection direct and indirect dryers both run as the forced-air solar cabinet (the engine has no natural-convection dryer), so they come out alike (196 h), while the paper found the indirect one two days faster than the direct one; the apricot rate was fitted to the open-air run of the same trial',
   'meghwar-chilli-umerkot/tunnel': BLANCHED_FIT,
   'meghwar-chilli-umerkot/open-sun': BLANCHED_FIT,
   'fadhel-2014-red-pepper-tunisia/solar-drier': `${BLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli`,
