@@ -387,6 +387,7 @@ export const chiliPeppers: ProductProfile = {
   cautions: [
     ...FRUIT_CAUTIONS,
     'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
+    'The drying rate was fitted to chillies that were probably blanched (Hossain & Bala 2007); unblanched chillies dried several times slower than this profile predicts in published trials (docs/validation.md): check the moisture before storage.',
   ],
 }
 
