@@ -10,7 +10,8 @@
  * Only runs whose role is `calibration` are used (test/experiments/cases.ts); a validation run is never
  * fitted. The fit is a bisection on the logarithm of the constant (the predicted time falls as the rate
  * constant rises), to 0.01 % of the published time, or to the step nearest it where the engine's time jumps
- * (an end point that slips past a night).
+ * (an end point that slips past a night). A time sampled every 24 h is met by a range of constants: the fit is
+ * the geometric middle of that range.
  */
 import { writeFileSync } from 'node:fs'
 import { CALIBRATED_CONSTANTS } from '../../src/product/calibration.ts'
@@ -18,7 +19,7 @@ import type { ProductProfile } from '../../src/product/profile.ts'
 import type { HourlySeries } from '../../src/weather/series.ts'
 import { RECONSTRUCTIONS } from '../fixtures/experiments/weather/reconstructions.ts'
 import { CALIBRATION_TARGETS, type CalibrationTarget, withParameter } from './calibration-targets.ts'
-import { caseId, caseProfile, ENGINE_CASES, type EngineCase, fitTargetH } from './cases.ts'
+import { caseId, caseProfile, ENGINE_CASES, type EngineCase } from './cases.ts'
 import { runCase } from './run-case.ts'
 import { type Reconstruction, reconstructWeather } from './weather-reconstruction.ts'
 
@@ -29,6 +30,8 @@ export interface FitResult {
   /** Predicted ÷ the fit's target time with the fitted value (rounded as written). */
   ratio: number
   iterations: number
+  /** For a sampled end point: the range of values that meet it at the published sample. */
+  sampledRange?: [number, number]
 }
 
 /** Significant digits written to the catalogue. */
@@ -46,7 +49,7 @@ function predictedRatio(
   series?: HourlySeries,
 ): number {
   const r = runCase(c, withParameter(base, t.parameter, value), series)
-  return r.reached ? r.continuousH / fitTargetH(c) : Number.POSITIVE_INFINITY
+  return r.reached ? r.continuousH / c.published.timeH : Number.POSITIVE_INFINITY
 }
 
 /**
@@ -59,6 +62,7 @@ export function fitTarget(t: CalibrationTarget, series?: HourlySeries): FitResul
   if (c.role !== 'calibration')
     throw new RangeError(`'${t.caseId}' is a ${c.role} run: it must never be fitted`)
   const base = caseProfile(c)
+  if (c.published.sampledEveryH !== undefined) return fitSampled(t, c, base, series)
   let lo = Math.log(t.searchRange[0])
   let hi = Math.log(t.searchRange[1])
   if (
@@ -95,9 +99,64 @@ export function fitTarget(t: CalibrationTarget, series?: HourlySeries): FitResul
   return { target: t, engineCase: c, value: best, ratio: bestRatio, iterations }
 }
 
+/** The sampled time (the first sample at or after the end point) the engine gives with `value`. */
+function sampledTimeH(
+  c: EngineCase,
+  base: ProductProfile,
+  t: CalibrationTarget,
+  value: number,
+  series?: HourlySeries,
+): number {
+  const r = runCase(c, withParameter(base, t.parameter, value), series)
+  return r.reached ? r.predictedH : Number.POSITIVE_INFINITY
+}
+
+/** Smallest value (on a log scale, to 1e-6) for which `ok` holds; `ok` must be monotone in the value. */
+function lowestWhere(lo: number, hi: number, ok: (value: number) => boolean): number {
+  let a = Math.log(lo)
+  let b = Math.log(hi)
+  for (let i = 0; i < 60 && b - a > 1e-6; i++) {
+    const mid = (a + b) / 2
+    if (ok(Math.exp(mid))) b = mid
+    else a = mid
+  }
+  return Math.exp(b)
+}
+
+/**
+ * A sampled end point (the paper weighed every 24 h): every constant whose engine run meets the end point
+ * after the previous sample and by the published one reproduces the paper; the fit is the geometric middle of
+ * that range of constants. (Aiming at a continuous time in the middle of the interval would often aim at a
+ * night, when covered product does not dry.)
+ */
+function fitSampled(
+  t: CalibrationTarget,
+  c: EngineCase,
+  base: ProductProfile,
+  series?: HourlySeries,
+): FitResult {
+  const published = c.published.timeH
+  const [lo, hi] = t.searchRange
+  const time = (v: number) => sampledTimeH(c, base, t, v, series)
+  if (!(time(lo) > published && time(hi) < published)) {
+    throw new RangeError(`${t.caseId}: the published time is not bracketed by ${t.searchRange.join('…')}`)
+  }
+  const first = lowestWhere(lo, hi, (v) => time(v) <= published)
+  const beyond = lowestWhere(lo, hi, (v) => time(v) < published)
+  const value = roundSignificant(Math.sqrt(first * beyond))
+  return {
+    target: t,
+    engineCase: c,
+    value,
+    ratio: time(value) / published,
+    iterations: 120,
+    sampledRange: [roundSignificant(first), roundSignificant(beyond)],
+  }
+}
+
 function sourceText(f: FitResult): string {
   const c = f.engineCase
-  return `${f.target.parameterLabel} fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces ${f.target.citation}: run '${c.runId}', ${c.initialWbPct.value.toFixed(1)} → ${c.endWbPct.value.toFixed(1)} % wb in ${c.published.timeH} h (${c.published.kind} time${c.published.sampledEveryH ? `, sampled every ${c.published.sampledEveryH} h: fitted to ${fitTargetH(c)} h, the middle of the last interval` : ''}) with method ${c.method.kind} on the weather reconstruction '${c.weather}' (test/fixtures/experiments/weather/; ${f.target.weatherNote}); engine ÷ target ${f.ratio.toFixed(4)}`
+  return `${f.target.parameterLabel} fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces ${f.target.citation}: run '${c.runId}', ${c.initialWbPct.value.toFixed(1)} → ${c.endWbPct.value.toFixed(1)} % wb in ${c.published.timeH} h (${c.published.kind} time${c.published.sampledEveryH ? `, sampled every ${c.published.sampledEveryH} h: the geometric middle of the constants ${f.sampledRange?.join('–')} that meet the end point at that sample` : ''}) with method ${c.method.kind} on the weather reconstruction '${c.weather}' (test/fixtures/experiments/weather/; ${f.target.weatherNote}); engine ÷ target ${f.ratio.toFixed(4)}`
 }
 
 function moduleText(fits: FitResult[]): string {

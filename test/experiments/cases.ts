@@ -57,15 +57,6 @@ export interface EngineCase {
 
 const wb = (db: number): number => (100 * db) / (1 + db)
 
-/**
- * The time a fit aims at: the published time, or for a sampled end point the middle of the last sampling
- * interval (the end point was met after the previous sample and by this one).
- */
-export function fitTargetH(c: EngineCase): number {
-  const every = c.published.sampledEveryH
-  return every === undefined ? c.published.timeH : c.published.timeH - every / 2
-}
-
 /** Lower and upper ratio bounds of the validation target (issue: 0.75–1.33, 0.8–1.25 with reported weather). */
 export function band(c: EngineCase): [number, number] {
   return c.weatherReported ? [0.8, 1.25] : [0.75, 1.33]

@@ -96,7 +96,8 @@ export function renderValidationDoc(rows: CaseRow[] = caseRows()): string {
     '  method dried (not covered, fans running). Where the part read does not say, a time given in hours by a',
     '  solar-drying study is taken as active (daylight) hours, and a time in days, sampled every 24 h or stated to',
     '  include nights as elapsed. A time sampled every 24 h is compared as the first sample at which the engine',
-    '  has reached the end point (and fitted to the middle of the last interval).',
+    '  has reached the end point; a calibration on such a time takes the geometric middle of the constants that',
+    '  meet it at that sample.',
     '- **Nearest method**: the engine has no solar-tunnel or greenhouse method yet; such runs use the solar cabinet',
     '  and say so. The weather is a reconstruction from climate normals (the papers give none): the ratios measure',
     "  the engine and the fit on a typical season at the paper's place, not on the days of the trial.",
@@ -109,7 +110,7 @@ export function renderValidationDoc(rows: CaseRow[] = caseRows()): string {
   for (const { c, r } of calibration) {
     const k = CALIBRATED_CONSTANTS.find((x) => x.caseId === caseId(c))
     out.push(
-      `| ${caseId(c)} | ${c.productId} | ${k?.parameter ?? '—'} | ${k?.value ?? '—'} | ${c.published.timeH} (${c.published.kind}) | ${f1(r.continuousH)} | ${f2(r.ratio)} |`,
+      `| ${caseId(c)} | ${c.productId} | ${k?.parameter ?? '—'} | ${k?.value ?? '—'} | ${c.published.timeH} (${c.published.kind}${c.published.sampledEveryH ? `, sampled every ${c.published.sampledEveryH} h` : ''}) | ${c.published.sampledEveryH ? `${f1(r.predictedH)} (${f1(r.continuousH)})` : f1(r.continuousH)} | ${f2(r.ratio)} |`,
     )
   }
   out.push(
@@ -138,7 +139,7 @@ export function renderValidationDoc(rows: CaseRow[] = caseRows()): string {
   out.push('', '## Runs and their assumptions', '')
   for (const { c } of rows) {
     out.push(
-      `- **${caseId(c)}** (${c.role}; ${cite(c.experimentId)}): weather \`${c.weather}\`, start day ${c.start.day} at ${c.start.localHour}:00 (${c.start.source}); product \`${c.productId}\`${c.sizeMm ? `, size ${c.sizeMm.value} mm (${c.sizeMm.source})` : ''}; ${f1(c.initialWbPct.value)} → ${f1(c.endWbPct.value)} % wb (${c.initialWbPct.source}; ${c.endWbPct.source}); method: ${c.methodNote}; published time ${c.published.timeH} h, ${c.published.kind}: ${c.published.kindReason}.`,
+      `- **${caseId(c)}** (${c.role}; ${cite(c.experimentId)}): weather \`${c.weather}\`, start day ${c.start.day} at ${c.start.localHour}:00 (${c.start.source}); product \`${c.productId}\`${c.sizeMm ? `, size ${c.sizeMm.value} mm (${c.sizeMm.source})` : ''}; ${f1(c.initialWbPct.value)} → ${f1(c.endWbPct.value)} % wb (${c.initialWbPct.source}; ${c.endWbPct.source}); method: ${c.methodNote}; published time ${c.published.timeH} h (${c.published.kindReason}).`,
     )
   }
   out.push('', '## Published runs not put through the engine', '')
