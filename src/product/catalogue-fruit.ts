@@ -8,6 +8,7 @@
  * fitted by dryhours to one published drying time under stated assumed mean conditions.
  */
 
+import { calibratedConstant } from './calibration.ts'
 import {
   ASSUMED_EA_J_PER_MOL,
   ASSUMED_EA_SOURCE,
@@ -38,6 +39,7 @@ import {
   SIMAL_2005,
   USDA_RAISIN_GRADES,
 } from './citations.ts'
+import { derivePretreatedVariant } from './pretreatment-variants.ts'
 import type { KineticsSpec, ProductProfile, Sourced } from './profile.ts'
 
 /** Kinetics with a surface (skin) resistance: the mass-transfer Biot number at the reference size. */
@@ -57,7 +59,9 @@ const FRUIT_CAUTIONS = [
 const SUGAR_GAB_MEMORY =
   'C = 3, K = 1.0 and no temperature term: from memory (type III sugar-fruit isotherm; Maroulis et al. 1988, J. Food Eng. 7:63, and Tsami et al. 1990, J. Food Sci. 55:1594, not read)'
 
-const GRAPE_LEWIS_FIT = `Lewis k fitted by dryhours to ${DOYMAZ_2012}: seedless grapes 17.2 mm, open sun, 78.2 → 22 % wb in 176 h, assuming a constant mean 35 °C and 35 % RH at the fruit (Me from the isotherm) around the clock`
+const GRAPE_K = calibratedConstant('grapes-to-raisins', 'k.kRefPerH')
+const GRAPE_LEWIS_FIT = GRAPE_K.source
+const GRAPE_T_REF = `reference temperature 35 °C, set by dryhours, of the k fitted through the engine to ${DOYMAZ_2012} (run ${GRAPE_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the stated activation energy`
 
 export const grapesToRaisins: ProductProfile = {
   id: 'grapes-to-raisins',
@@ -92,14 +96,14 @@ export const grapesToRaisins: ProductProfile = {
   },
   kinetics: withSkin(
     kinetics(
-      { model: 'lewis', k: arrhenius(0.01616, 35, ASSUMED_EA_J_PER_MOL) },
+      { model: 'lewis', k: arrhenius(GRAPE_K.value, 35, ASSUMED_EA_J_PER_MOL) },
       17.2,
       'sphere',
       ASSUMED_EA_SOURCE.source,
       'memory',
       {
         'k.kRefPerH': param(GRAPE_LEWIS_FIT, 'fitted'),
-        'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+        'k.tRefC': param(GRAPE_T_REF, 'fitted'),
         referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
       },
     ),
@@ -115,25 +119,14 @@ export const grapesToRaisins: ProductProfile = {
 }
 
 export const grapesToRaisinsDipped: ProductProfile = {
-  ...grapesToRaisins,
-  id: 'grapes-to-raisins-dipped',
-  name: 'Grapes to raisins (dipped in alkaline ethyl-oleate emulsion)',
-  variantOf: 'grapes-to-raisins',
-  kinetics: {
-    ...grapesToRaisins.kinetics,
-    equation: { model: 'lewis', k: arrhenius(0.03232, 35, ASSUMED_EA_J_PER_MOL) },
-    source: `untreated grapes k × 2 and Ea: from memory (dipping roughly halves sun-drying time; dipped grapes dried faster than untreated in Doymaz & Pala 2002, J. Food Eng. 52:413, and Mahmutoglu, Emir & Saygi 1996, J. Food Eng. 29:289, but their abstracts give no factor). Whether the untreated calibration run (Doymaz 2012) was dipped is not stated in its abstract. ${ASSUMED_EA_SOURCE.source}`,
-    confidence: 'memory',
-    parameters: {
-      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
-      referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
-    },
-  },
+  ...derivePretreatedVariant(grapesToRaisins, 'grapes-to-raisins-dipped'),
   cautions: [
     ...grapesToRaisins.cautions,
     'Use food-grade dipping oil and potassium carbonate at the stated strength.',
   ],
 }
+
+const APRICOT_K = calibratedConstant('apricot-halves', 'k.kRefPerH')
 
 export const apricotHalves: ProductProfile = {
   id: 'apricot-halves',
@@ -157,12 +150,17 @@ export const apricotHalves: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.05, 45, 46379) },
+    { model: 'lewis', k: arrhenius(APRICOT_K.value, 45, 46379) },
     15,
     'slab',
-    'Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots took 10 days, an indirect natural-convection solar dryer 6 days: E3S Web Conf. 661:02003, 2025, abstract; authors not shown)',
+    '15 mm halves, the size at which k holds: from memory',
     'memory',
     {
+      'k.kRefPerH': param(APRICOT_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 45 °C, set by dryhours, of the k fitted through the engine to the E3S Web Conf. 661:02003 (2025) open-air run (${APRICOT_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
       'k.activationEnergyJPerMol': param(
         `${PAVKOV_2021}: hot-air drying of untreated apricot halves at 40–60 °C, activation energy 46.379–51.514 kJ/mol, greater at the greater air velocity; the value for the lower velocity (1.0 m/s) is used`,
         'published',
@@ -176,6 +174,8 @@ export const apricotHalves: ProductProfile = {
     'Sulphuring (if used) must follow local food law; declare sulphite (allergen).',
   ],
 }
+
+const FIG_K = calibratedConstant('figs', 'k.kRefPerH')
 
 export const figs: ProductProfile = {
   id: 'figs',
@@ -213,11 +213,18 @@ export const figs: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.03, 40, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(FIG_K.value, 40, ASSUMED_EA_J_PER_MOL) },
     40,
     'sphere',
-    `Lewis k = 0.03 h⁻¹ at 40 °C for 40 mm whole figs: from memory (figs part-dried on the tree reached the end point in 72–96 h under a plastic tunnel and 96–120 h in open air, ${OKSAR_2017}); ${ASSUMED_EA_SOURCE.source}`,
+    `whole figs of 40 mm, the size at which k holds: from memory; ${ASSUMED_EA_SOURCE.source}`,
     'memory',
+    {
+      'k.kRefPerH': param(FIG_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 40 °C, set by dryhours, of the k fitted through the engine to ${OKSAR_2017} (run ${FIG_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(40, 'whole fig diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(8, 'single layer on trays; from memory', 'memory'),
@@ -354,7 +361,8 @@ export const tomatoHalves: ProductProfile = {
   ],
 }
 
-const CHILLI_LEWIS_FIT = `Lewis k fitted by dryhours to ${HOSSAIN_BALA_2007}: red chilli 2.85 → 0.05 kg/kg db in 20 h in a solar tunnel drier, assuming a constant mean 50 °C and 15 % RH in the tunnel (the abstract credits blanching of the samples with part of the shorter drying: the fitted k may include it)`
+const CHILLI_K = calibratedConstant('chili-peppers', 'k.kRefPerH')
+const CHILLI_LEWIS_FIT = CHILLI_K.source
 
 export const chiliPeppers: ProductProfile = {
   id: 'chili-peppers',
@@ -379,14 +387,17 @@ export const chiliPeppers: ProductProfile = {
   },
   kinetics: hollow(
     kinetics(
-      { model: 'lewis', k: arrhenius(0.257, 50, 27000) },
+      { model: 'lewis', k: arrhenius(CHILLI_K.value, 50, 27000) },
       10,
       'cylinder',
       'pod diameter 10 mm at which k holds: from memory',
       'memory',
       {
         'k.kRefPerH': param(CHILLI_LEWIS_FIT, 'fitted'),
-        'k.tRefC': param(`${CHILLI_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
+        'k.tRefC': param(
+          `reference temperature 50 °C, set by dryhours, of the k fitted through the engine to ${HOSSAIN_BALA_2007} (run ${CHILLI_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the published activation energy`,
+          'fitted',
+        ),
         'k.activationEnergyJPerMol': param(
           `${SIMAL_2005}: red pepper air-dried at 30–90 °C, the Page k followed Arrhenius with an activation energy of about 27 kJ/mol`,
           'published',
@@ -404,6 +415,7 @@ export const chiliPeppers: ProductProfile = {
   cautions: [
     ...FRUIT_CAUTIONS,
     'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
+    'The drying rate was fitted to chillies that were probably blanched (Hossain & Bala 2007); unblanched chillies dried several times slower than this profile predicts in published trials (docs/validation.md): check the moisture before storage.',
   ],
 }
 

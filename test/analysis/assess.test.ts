@@ -25,7 +25,7 @@ const summerFruit = {
   seasonStart: '07-01',
   seasonEnd: '08-31',
   startStepDays: 7,
-  deadlineDays: 21,
+  deadlineDays: 10,
   maxDays: 40,
 }
 
@@ -131,7 +131,7 @@ describe('the assessment', () => {
 })
 
 describe('every demo site gives a plausible, different answer', () => {
-  it('the dry upland beats the humid valley for open-air raisins (usable July hours, finishing in 21 days)', () => {
+  it('the dry upland beats the humid valley for open-air raisins (usable July hours, finishing in 10 days)', () => {
     const u = uplandRaisins()
     const v = valleyRaisins()
     expect(u.monthly[6].usableHours.median!).toBeGreaterThan(v.monthly[6].usableHours.median! * 1.2)
