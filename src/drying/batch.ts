@@ -7,7 +7,8 @@
  *   temperature follows its surface balance between the wet-surface and the no-evaporation temperature by the
  *   share of the wet-surface rate it evaporates ({@link surfaceBalancedDrop});
  * - rewetting (M below the adsorption equilibrium): M → Me_ads − (Me_ads − M)·exp(−f·k·1 h), f the profile's
- *   rewetting rate factor (Lewis form; stated simplification);
+ *   rewetting rate factor (Lewis form; stated simplification); an exposed product never takes up more than the
+ *   vapour the air delivers to its surface in the hour ({@link vaporUptakeLimitDb});
  * - rain on an exposed product: rewetting toward the equilibrium at 99.5 % RH, counted as rain exposure;
  *   that water comes from rain, not from the air;
  * - paused (covered, fans off) and missing hours: no change; a batch that meets missing hours has an unknown
@@ -191,7 +192,12 @@ export function simulateBatch(
           }
         } else if (m < meAds) {
           rewettingHours++
-          const next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
+          let next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
+          if (c.surfaceBalance) {
+            const limit =
+              vaporUptakeLimitDb(c, i, product, m) * (c === primary ? capScalePrimary : capScaleBackup)
+            if (next - m > limit) next = m + Math.max(0, limit)
+          }
           toAir -= next - m
           m = next
         }
@@ -225,6 +231,22 @@ export function simulateBatch(
     productTrace,
     usedBackup,
   }
+}
+
+/**
+ * Most water [kg/kg db] an exposed product at moisture `m` can take up from the air in hour `i`: the vapour the
+ * air delivers to its surface through the conductance of the wet-surface balance, g·(ea − aw·es(T)), at the
+ * product's water activity aw (its isotherm at `m`) and the temperature of a surface that exchanges no latent
+ * heat; the heat released by the uptake warms the surface, so the true uptake is less (an upper bound). The
+ * first-order approach to the adsorption equilibrium alone takes up water in proportion to that equilibrium,
+ * which grows without bound as the surface RH nears 100 % (a radiatively cooled product at dawn). +Infinity
+ * when the hour has no conductance (no limit known).
+ */
+function vaporUptakeLimitDb(c: HourlyConditions, i: number, product: ProductResponse, m: number): number {
+  const air = c.vaporUptakeAirDbPerH[i]
+  if (!(air >= 0)) return Number.POSITIVE_INFINITY
+  const aw = product.erhPct(c.productC[i], m) / 100
+  return air - aw * c.vaporUptakeSurfaceDbPerH[i]
 }
 
 /**

@@ -62,6 +62,15 @@ export interface HourColumns {
   rateKWet: Float64Array
   rateNWet: Float64Array
   decayWetPerHour: Float64Array
+  /**
+   * Exposed methods: most water the product can take up from the air in the hour [kg per kg dry matter per h]
+   * is vaporUptakeAirDbPerH − aw·vaporUptakeSurfaceDbPerH, aw the product's water activity: the vapour
+   * conductance of the wet-surface balance (per kg dry matter, as {@link capDbPerH}) times the ambient vapour
+   * pressure and times the saturation pressure at {@link productC}. NaN in paused and missing hours; empty
+   * (length 0) for forced-air methods.
+   */
+  vaporUptakeAirDbPerH: Float64Array
+  vaporUptakeSurfaceDbPerH: Float64Array
   /** RH at the product surface [%]: ambient vapour pressure over saturation at the product temperature. */
   surfaceRhPct: Float64Array
   /** Saturation pressure of the ambient air, exp(ln pws) [Pa] (ASHRAE HOF 2017 ch. 1 eq 6); NaN for missing and not yet computed hours. */
@@ -154,6 +163,8 @@ export function allocateColumns(
     rateKWet: f(surfaceBalance ? n : 0),
     rateNWet: f(surfaceBalance ? n : 0),
     decayWetPerHour: f(surfaceBalance ? n : 0),
+    vaporUptakeAirDbPerH: f(surfaceBalance ? n : 0),
+    vaporUptakeSurfaceDbPerH: f(surfaceBalance ? n : 0),
     surfaceRhPct: f(nDiagnostic),
     humidityRatio: f(nDiagnostic),
     deficitToSaturationGPerKg: f(nDiagnostic),

@@ -154,6 +154,7 @@ function readAmbientHour(e: Engine, i: number): boolean {
   hour.coveredForRain = false
   hour.uncoveredNight = false
   hour.evaporationKgPerM2H = Number.NaN
+  hour.vaporConductanceKgPerM2HKpa = Number.NaN
   hour.heaterKwhPerTonne = 0
   hour.solarKwhPerTonne = 0
   return true
@@ -166,6 +167,7 @@ function markMissing(e: Engine, i: number): void {
   c.status[i] = HourStatus.missingData
   c.airC[i] = c.airRhPct[i] = c.productC[i] = c.surfaceRhPct[i] = c.humidityRatio[i] = Number.NaN
   c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
+  c.vaporUptakeAirDbPerH[i] = c.vaporUptakeSurfaceDbPerH[i] = Number.NaN
   c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = c.evaporationKgPerM2H[i] = Number.NaN
   c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
 }
@@ -294,6 +296,12 @@ function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceSaturati
   const evaporation = hour.evaporationKgPerM2H
   c.evaporationKgPerM2H[i] = evaporation
   c.capDbPerH[i] = exposed ? Math.max(0, evaporation) * e.exposedCapFactor : dSat * e.forcedCapFactor
+  if (exposed) {
+    // vapour uptake limit (drying/batch.ts rewetting): conductance × (ea − aw·es(T_product)), per kg dry matter
+    const g = hour.vaporConductanceKgPerM2HKpa * e.exposedCapFactor
+    c.vaporUptakeAirDbPerH[i] = g * hour.vaporPressureKpa
+    c.vaporUptakeSurfaceDbPerH[i] = g * surfaceSaturationPa * 1e-3
+  }
   if (!e.verdict) {
     c.status[i] = HourStatus.usable
     return
@@ -335,6 +343,7 @@ function computeHour(e: Engine, i: number): void {
   if (hour.mode === HourMode.paused) {
     // covered product or fans off: no exchange with the air, so nothing else is needed for this hour
     c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
+    c.vaporUptakeAirDbPerH[i] = c.vaporUptakeSurfaceDbPerH[i] = Number.NaN
     c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
     c.rateK[i] = c.rateN[i] = c.decayPerHour[i] = c.rewetDecayPerHour[i] = Number.NaN
     c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = Number.NaN

@@ -102,6 +102,12 @@ export class WetSurface {
   surfaceC = Number.NaN
   /** Out: evaporation [kg m⁻² h⁻¹], λE divided by λ at the air temperature. */
   evaporationKgPerM2H = Number.NaN
+  /**
+   * Out: vapour conductance of the exchange surface per m² of reference area [kg m⁻² h⁻¹ kPa⁻¹], (H/γ)/λ: the
+   * vapour flux per kPa of vapour-pressure difference between the surface and the air, the transfer of the
+   * latent term above (λE = (H/γ)·(es(Ts) − ea)); 0 with no air exchange.
+   */
+  vaporConductanceKgPerM2HKpa = Number.NaN
 }
 
 /** Specific heat of moist air per kg of moist air [kJ kg⁻¹ K⁻¹], (1.006 + 1.86 W)/(1 + W) (eq 30). */
@@ -195,6 +201,7 @@ export function solveWetSurface(s: WetSurface): void {
   s.latentFluxWm2 = latent
   s.surfaceC = surfaceC
   s.evaporationKgPerM2H = evaporationKgPerM2HFromLatentFlux(latent, airC)
+  s.vaporConductanceKgPerM2HKpa = sensible > 0 ? evaporationKgPerM2HFromLatentFlux(sensible / gamma, airC) : 0
 }
 
 const scratch = new WetSurface()

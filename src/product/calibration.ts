@@ -21,10 +21,10 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
   {
     productId: 'grapes-to-raisins',
     parameter: 'k.kRefPerH',
-    value: 0.02165,
+    value: 0.02465,
     caseId: 'doymaz-2012-grapes-open-sun/seedless',
     source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Doymaz I. 2012, Sun drying of seedless and seeded grapes, J. Food Sci. Technol. 49(2):214–220 (abstract), seedless grapes 17.2 mm in open sun: run 'seedless', 78.2 → 22.0 % wb in 176 h (active time) with method open-air on the weather reconstruction 'istanbul-september-2009' (test/fixtures/experiments/weather/; Istanbul September climate, site and month assumed: the part read gives no site, date or weather); engine ÷ target 0.9998",
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Doymaz I. 2012, Sun drying of seedless and seeded grapes, J. Food Sci. Technol. 49(2):214–220 (abstract), seedless grapes 17.2 mm in open sun: run 'seedless', 78.2 → 22.0 % wb in 176 h (active time) with method open-air on the weather reconstruction 'istanbul-september-2009' (test/fixtures/experiments/weather/; Istanbul September climate, site and month assumed: the part read gives no site, date or weather); engine ÷ target 1.0000",
   },
   {
     productId: 'chili-peppers',
@@ -37,18 +37,18 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
   {
     productId: 'figs',
     parameter: 'k.kRefPerH',
-    value: 0.02171,
+    value: 0.02759,
     caseId: 'oksar-2017-figs-tunnel/august-open-air',
     source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Oksar R.E., Şen F., Aksoy U. 2017, Effect of drying under plastic tunnels on drying rate and quality of fig (Ficus carica L. 'Sarılop'), Acta Hortic. 1173:297–302 (abstract), figs part-dried on the tree, on trays in the open air in August: run 'august-open-air', 40.0 → 22.0 % wb in 96 h (elapsed time, sampled every 24 h: the geometric middle of the constants 0.01935–0.02437 that meet the end point at that sample) with method open-air on the weather reconstruction 'aydin-august-2015' (test/fixtures/experiments/weather/; Aydın August climate and the fig-region drying-season humidity, date assumed: the abstract gives no weather figure; initial moisture 40 % wb assumed from the 30–50 % of semi-dried figs); engine ÷ target 1.0000",
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Oksar R.E., Şen F., Aksoy U. 2017, Effect of drying under plastic tunnels on drying rate and quality of fig (Ficus carica L. 'Sarılop'), Acta Hortic. 1173:297–302 (abstract), figs part-dried on the tree, on trays in the open air in August: run 'august-open-air', 40.0 → 22.0 % wb in 96 h (elapsed time, sampled every 24 h: the geometric middle of the constants 0.02593–0.02936 that meet the end point at that sample) with method open-air on the weather reconstruction 'aydin-august-2015' (test/fixtures/experiments/weather/; Aydın August climate and the fig-region drying-season humidity, date assumed: the abstract gives no weather figure; initial moisture 40 % wb assumed from the 30–50 % of semi-dried figs); engine ÷ target 1.0000",
   },
   {
     productId: 'apricot-halves',
     parameter: 'k.kRefPerH',
-    value: 0.02865,
+    value: 0.02949,
     caseId: 'e3s-2025-apricots-uzbekistan/open-air',
     source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Experimental study of apricot drying using direct and indirect solar dryers with natural convection, E3S Web Conf. 661:02003, 2025 (abstract; authors not shown on the copy read), apricots in open air to equilibrium moisture in 10 days: run 'open-air', 86.0 → 20.0 % wb in 240 h (elapsed time) with method open-air on the weather reconstruction 'tashkent-july-2024' (test/fixtures/experiments/weather/; Tashkent July climate from memory, site and month assumed: the abstract gives no site, date or weather; halves and the 20 % wb end point assumed); engine ÷ target 0.9999",
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Experimental study of apricot drying using direct and indirect solar dryers with natural convection, E3S Web Conf. 661:02003, 2025 (abstract; authors not shown on the copy read), apricots in open air to equilibrium moisture in 10 days: run 'open-air', 86.0 → 20.0 % wb in 240 h (elapsed time) with method open-air on the weather reconstruction 'tashkent-july-2024' (test/fixtures/experiments/weather/; Tashkent July climate from memory, site and month assumed: the abstract gives no site, date or weather; halves and the 20 % wb end point assumed); engine ÷ target 1.0000",
   },
 ]
 

@@ -79,6 +79,11 @@ export class MethodHour {
   uncoveredNight = false
   /** Out: wet-surface evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN when not an exposed method or covered. */
   evaporationKgPerM2H = Number.NaN
+  /**
+   * Out: vapour conductance between the air and the product surface per m² of drying surface
+   * [kg m⁻² h⁻¹ kPa⁻¹] (the transfer of the wet-surface balance); NaN when not an exposed method or covered.
+   */
+  vaporConductanceKgPerM2HKpa = Number.NaN
   /** Out: heat from a heater into the air [kWh per tonne fresh product in this hour]. */
   heaterKwhPerTonne = 0
   /** Out: heat from a solar collector into the air [kWh per tonne fresh product in this hour]. */
@@ -142,8 +147,8 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
  * `availableEnergyWm2` (isothermal: absorbed sun minus the net long-wave at air temperature) per m² of the area
  * the product covers, wind at 2 m `windMs`, the ambient air of `hour`, the exchange surface and radiative
  * conductance set on `scratch` (the method's own {@link WetSurface}, reused every hour). Writes
- * `hour.evaporationKgPerM2H` per m² of tray (× `coverage`, the share of the tray the product covers) and
- * `hour.productWetC`; returns H + R [W m⁻² K⁻¹] per m² covered, from which a product evaporating less sits
+ * `hour.evaporationKgPerM2H` and `hour.vaporConductanceKgPerM2HKpa` per m² of tray (× `coverage`, the share of
+ * the tray the product covers) and `hour.productWetC`; returns H + R [W m⁻² K⁻¹] per m² covered, from which a product evaporating less sits
  * warmer: Ta + (Q − λE)/(H + R).
  */
 export function wetSurfaceEvaporationOfHour(
@@ -163,6 +168,7 @@ export function wetSurfaceEvaporationOfHour(
   scratch.aerodynamicResistanceSPerM = Number.NaN
   solveWetSurface(scratch)
   hour.evaporationKgPerM2H = scratch.evaporationKgPerM2H * coverage
+  hour.vaporConductanceKgPerM2HKpa = scratch.vaporConductanceKgPerM2HKpa * coverage
   hour.productWetC = scratch.surfaceC
   return scratch.heatConductanceWm2K
 }

@@ -143,6 +143,7 @@ export const openAir: MethodModel<typeof openAirSchema> = {
       if (hour.mode === HourMode.paused) {
         // covered in rain by day: the product exchanges nothing
         hour.evaporationKgPerM2H = Number.NaN
+        hour.vaporConductanceKgPerM2HKpa = Number.NaN
         hour.productWetC = Number.NaN
       }
     }
