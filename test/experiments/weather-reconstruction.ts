@@ -31,9 +31,9 @@
  */
 import { z } from 'zod'
 import { ar1Series, randomStream } from '../../climate-demo/random.ts'
+import { dayOfYearAt } from '../../src/physics/calendar.ts'
 import {
   daylightHours,
-  dayOfYearAt,
   extraterrestrialRadiationDailyMjM2,
   extraterrestrialRadiationForPeriodUtcMjM2,
   solarDeclinationRad,

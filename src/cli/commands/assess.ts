@@ -14,6 +14,7 @@ import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import { BIN_FLAGS_HELP, BIN_PARSE_OPTIONS, binText, setBinOptions } from '../bin.ts'
 import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
 import {
   REPORT_OUTPUT_HELP,
@@ -34,6 +35,7 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
+${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
                   API's JSON options (e.g. --param surfaceAreaPerTrayArea=1.2); docs/model.md §4 lists them
 Season and batches:
@@ -100,6 +102,7 @@ export const ENGINE_PARSE_OPTIONS = {
   'min-deficit': { type: 'string' },
   'rain-mm': { type: 'string' },
   'night-cooling': { type: 'string' },
+  ...BIN_PARSE_OPTIONS,
   ...WEATHER_PARSE_OPTIONS,
   json: { type: 'boolean' },
   quiet: { type: 'boolean' },
@@ -179,13 +182,14 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     set('tiltDeg', num('tilt'))
     set('azimuthDeg', num('azimuth'))
     set('airFlowKgPerSPerM2', num('air-flow'))
-  } else {
+  } else if (kind === 'heated') {
     set('setPointC', num('set-point'))
     set('targetRhPct', num('target-rh'))
     set('airFlowKgPerSPerTonne', num('air-flow'))
     set('heaterEfficiency', num('efficiency'))
     set('fuel', fuel)
   }
+  setBinOptions(method, values, product)
   if (kind !== 'heated') {
     if (num('efficiency') !== undefined) backupHeater.heaterEfficiency = num('efficiency')
     if (fuel !== undefined) backupHeater.fuel = fuel
@@ -269,31 +273,9 @@ const unknownNote = (r: Assessment['startDates'][number]): string =>
     ? `  + ${r.yearsUnknown} year${r.yearsUnknown === 1 ? '' : 's'} unknown (${r.missingWeatherHours} h without weather)`
     : ''
 
-/** The readable summary of an assessment. */
-export function assessmentText(a: Assessment): string {
+/** Start windows, the start-date table and the heat of a batch method. */
+function batchesText(a: Assessment): string[] {
   const out: string[] = []
-  const p = a.product
-  out.push(
-    `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
-  )
-  out.push(`dry means ${p.dryTarget.sentence}`)
-  out.push(
-    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
-  )
-  out.push('')
-  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
-  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
-  for (const m of a.monthly) {
-    const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
-      .map((r) => [r, m.medianHoursByReason[r]] as const)
-      .sort((x, y) => y[1] - x[1])
-    const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
-    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
-    out.push(
-      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
-    )
-  }
-  out.push('')
   out.push(`Best start windows (${a.bestStartWindowCriterion}):`)
   if (a.bestStartWindows.length === 0) out.push('  none')
   for (const w of a.bestStartWindows) {
@@ -328,15 +310,45 @@ export function assessmentText(a: Assessment): string {
   out.push(
     `  cross-check: ${c.waterToRemoveKgPerTonne} kg water/t × ${c.heatOfEvaporationKjPerKg} kJ/kg ÷ efficiency = ${c.evaporationHeatFuelKwhPerTonne} kWh/t; heated every hour uses ${c.ratioHeatedEveryHour ?? '–'} × that`,
   )
+  return out
+}
+
+/** The readable summary of an assessment. */
+export function assessmentText(a: Assessment): string {
+  const out: string[] = []
+  const p = a.product
+  out.push(
+    `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
+  )
+  out.push(`dry means ${p.dryTarget.sentence}`)
+  out.push(
+    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
+  )
+  out.push('')
+  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
+  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
+  for (const m of a.monthly) {
+    const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
+      .map((r) => [r, m.medianHoursByReason[r]] as const)
+      .sort((x, y) => y[1] - x[1])
+    const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
+    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
+    out.push(
+      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
+    )
+  }
+  out.push('')
+  out.push(...(a.bin ? binText(a, a.bin) : batchesText(a)))
   if (a.warnings.length > 0) {
     out.push('')
     out.push('Warnings:')
     for (const w of a.warnings) out.push(`  - ${w}`)
   }
-  if (p.cautions.length > 0) {
+  const cautions = [...(a.bin?.cautions ?? []), ...p.cautions]
+  if (cautions.length > 0) {
     out.push('')
     out.push('Cautions:')
-    for (const w of p.cautions) out.push(`  - ${w}`)
+    for (const w of cautions) out.push(`  - ${w}`)
   }
   out.push('')
   out.push(`${a.assumptions.length} assumptions (thresholds, defaults and their sources): see --json`)
