@@ -156,48 +156,25 @@ export function simulateBatch(
       solar += c.solarKwhPerTonne[i]
       if (mode === HourMode.rainExposed) {
         rainExposureHours++
-        // rain-wetted surface: toward the equilibrium at the highest RH evaluated
-        const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
-        if (meWet > m) {
-          const next = meWet - (meWet - m) * c.rewetDecayPerHour[i]
-          fromRain += next - m
-          m = next
-        }
+        const next = rainWettedDb(c, i, product, m)
+        fromRain += next - m
+        m = next
       } else {
-        const meDes = c.emcDesorptionDb[i]
-        const meAds = c.emcAdsorptionDb[i]
-        if (m > meDes) {
-          const dropDry = fallingRateDrop(m, meDes, c.decayPerHour[i], c.rateK[i], c.rateN[i], initialDb, ts)
-          const cap = c.capDbPerH[i] * (c === primary ? capScalePrimary : capScaleBackup)
-          let drop = dropDry
-          if (c.surfaceBalance) {
-            const dropWet = fallingRateDrop(
-              m,
-              c.emcWetDb[i],
-              c.decayWetPerHour[i],
-              c.rateKWet[i],
-              c.rateNWet[i],
-              initialDb,
-              ts,
-            )
-            drop = surfaceBalancedDrop(dropDry, dropWet, cap)
-            if (productTrace) {
-              const tDry = c.productC[i]
-              productTrace[h] = cap > 0 ? tDry - (drop / cap) * (tDry - c.productWetC[i]) : tDry
-            }
-          } else if (drop > cap) drop = cap
+        const capScale = c === primary ? capScalePrimary : capScaleBackup
+        if (m > c.emcDesorptionDb[i]) {
+          const cap = c.capDbPerH[i] * capScale
+          const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          if (productTrace && c.surfaceBalance) {
+            const tDry = c.productC[i]
+            productTrace[h] = cap > 0 ? tDry - (drop / cap) * (tDry - c.productWetC[i]) : tDry
+          }
           if (drop > 0) {
             m -= drop
             toAir += drop
           }
-        } else if (m < meAds) {
+        } else if (m < c.emcAdsorptionDb[i]) {
           rewettingHours++
-          let next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
-          if (c.surfaceBalance) {
-            const limit =
-              vaporUptakeLimitDb(c, i, product, m) * (c === primary ? capScalePrimary : capScaleBackup)
-            if (next - m > limit) next = m + Math.max(0, limit)
-          }
+          const next = rewettedDb(c, i, product, m, capScale)
           toAir -= next - m
           m = next
         }
@@ -231,6 +208,70 @@ export function simulateBatch(
     productTrace,
     usedBackup,
   }
+}
+
+/**
+ * Water [kg/kg db] removed in hour `i` from moisture `m` above the desorption equilibrium: the falling-rate step,
+ * never more than the hour's constant-rate limit `cap`; for exposed methods the product sits on its surface
+ * balance between the wet-surface and the no-evaporation ends ({@link surfaceBalancedDrop}).
+ */
+function dryingDropDb(
+  c: HourlyConditions,
+  i: number,
+  m: number,
+  cap: number,
+  initialDb: number,
+  ts: number,
+): number {
+  const dropDry = fallingRateDrop(
+    m,
+    c.emcDesorptionDb[i],
+    c.decayPerHour[i],
+    c.rateK[i],
+    c.rateN[i],
+    initialDb,
+    ts,
+  )
+  if (!c.surfaceBalance) {
+    // (not Math.min: a NaN limit leaves the step as it is, as it always has)
+    if (dropDry > cap) return cap
+    return dropDry
+  }
+  const dropWet = fallingRateDrop(
+    m,
+    c.emcWetDb[i],
+    c.decayWetPerHour[i],
+    c.rateKWet[i],
+    c.rateNWet[i],
+    initialDb,
+    ts,
+  )
+  return surfaceBalancedDrop(dropDry, dropWet, cap)
+}
+
+/**
+ * Moisture [kg/kg db] after hour `i` of a product at `m` below the adsorption equilibrium: first order toward
+ * it at the rewetting rate, and for an exposed product never more than the vapour the air delivers
+ * ({@link vaporUptakeLimitDb}, × `capScale` for the batch's dry matter).
+ */
+function rewettedDb(
+  c: HourlyConditions,
+  i: number,
+  product: ProductResponse,
+  m: number,
+  capScale: number,
+): number {
+  const meAds = c.emcAdsorptionDb[i]
+  const next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
+  if (!c.surfaceBalance) return next
+  const limit = vaporUptakeLimitDb(c, i, product, m) * capScale
+  return next - m > limit ? m + Math.max(0, limit) : next
+}
+
+/** Moisture [kg/kg db] after a rain-exposed hour: toward the equilibrium at the highest RH evaluated (the rain-wetted surface). */
+function rainWettedDb(c: HourlyConditions, i: number, product: ProductResponse, m: number): number {
+  const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
+  return meWet > m ? meWet - (meWet - m) * c.rewetDecayPerHour[i] : m
 }
 
 /**

@@ -3,7 +3,8 @@
  * Pretreated variants derived from catalogue profiles by published factors (product/pretreatment-variants.ts).
  * The dipped grapes stay in catalogue-fruit.ts, where users have always found them.
  */
-import { appleSlices, figs, tomatoHalves } from './catalogue-fruit.ts'
+import { appleSlices, figs } from './catalogue-fruit.ts'
+import { tomatoHalves } from './catalogue-vegetables.ts'
 import { derivePretreatedVariant } from './pretreatment-variants.ts'
 import type { ProductProfile } from './profile.ts'
 

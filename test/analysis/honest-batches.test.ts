@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
-import { assessmentText } from '../../src/cli/commands/assess.ts'
+import { assessmentText } from '../../src/cli/assessment-text.ts'
 import { simulateBatch } from '../../src/drying/batch.ts'
 import { computeHourlyConditions } from '../../src/drying/hourly-conditions.ts'
 import { parseDryingMethod } from '../../src/drying/method.ts'
