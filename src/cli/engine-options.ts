@@ -25,13 +25,15 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   --method <kind>[,<kind>…]  ${DRYING_METHOD_KINDS.join(' | ')}; several separated by commas, or all,
                             to compare methods side by side (assess only)
   --target-wb <%>  --initial-wb <%>  --thickness <mm>
+  --storage-temp <°C>  store temperature at which the dried product's water activity is judged (default 25);
+                 without --target-wb the target is the moisture of the product's safe water activity there
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
 ${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
-                  API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
+                  API's JSON options (e.g. --param surfaceAreaPerTrayArea=1.2); docs/model.md §4 lists them
 Season and batches:
   --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
                  every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
@@ -54,6 +56,7 @@ export const ENGINE_PARSE_OPTIONS = {
   'target-wb': { type: 'string' },
   'initial-wb': { type: 'string' },
   thickness: { type: 'string' },
+  'storage-temp': { type: 'string' },
   absorptivity: { type: 'string' },
   loading: { type: 'string' },
   'uncovered-night': { type: 'boolean' },
@@ -255,6 +258,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     targetWbPct: num('target-wb'),
     initialWbPct: num('initial-wb'),
     thicknessMm: num('thickness'),
+    storageTempC: num('storage-temp'),
     seasonStart: str('start'),
     seasonEnd: str('end'),
     startStepDays: num('step-days'),

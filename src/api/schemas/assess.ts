@@ -55,7 +55,17 @@ export const assessOptionsJsonSchema = z.strictObject({
     .min(R.targetWbPct[0])
     .max(R.targetWbPct[1])
     .optional()
-    .describe('target moisture, wet basis [%]; default the product profile’s'),
+    .describe(
+      'target moisture, wet basis [%]; default the moisture of the product’s safe water activity at the storage temperature (or the profile’s figure when drier)',
+    ),
+  storageTempC: z
+    .number()
+    .min(R.storageTempC[0])
+    .max(R.storageTempC[1])
+    .optional()
+    .describe(
+      'temperature of the store at which the dried product’s water activity is judged [°C]; default 25',
+    ),
   initialWbPct: z
     .number()
     .min(R.initialWbPct[0])
@@ -140,6 +150,7 @@ export const assessQuerySchema = z.strictObject({
       `${DRYING_METHOD_KINDS.join(', ')} (defaults for its parameters); /v1/assess also takes several separated by commas, or all, to compare methods side by side`,
     ),
   targetWb: numberParam('target moisture, wet basis [%]').optional(),
+  storageTemp: numberParam('storage temperature for the water activity of the dried product [°C]').optional(),
   initialWb: numberParam('initial moisture, wet basis [%]').optional(),
   thickness: numberParam('product thickness [mm]').optional(),
   start: monthDay.optional().describe('first start date of the season [MM-DD]'),
@@ -186,6 +197,7 @@ export interface AssessRequest {
 /** Query names of the engine's options (the rest keep their names). */
 const QUERY_NAMES: Record<string, string> = {
   targetWbPct: 'targetWb',
+  storageTempC: 'storageTemp',
   initialWbPct: 'initialWb',
   thicknessMm: 'thickness',
   seasonStart: 'start',
@@ -365,6 +377,7 @@ export function assessRequestFromQuery(
       product: resolveProduct(q.product, 'product'),
       method: m.first,
       targetWbPct: q.targetWb,
+      storageTempC: q.storageTemp,
       initialWbPct: q.initialWb,
       thicknessMm: q.thickness,
       seasonStart: q.start,

@@ -28,8 +28,10 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
       `supplemental heat, median [${u.energyPerMassUnit}]`,
       `supplemental heat, P90 [${u.energyPerMassUnit}]`,
       'years not reachable even with heat',
+      'years unknown (ran into hours without weather)',
+      'hours without weather in those batches',
     ],
-    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0],
+    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0],
     rows: a.startDates.map((s) => [
       s.start,
       s.years,
@@ -46,6 +48,8 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
         ? round(u.energyPerMass(s.supplementalHeat.p90KwhPerTonne).value, 1)
         : null,
       s.yearsNotReachable,
+      s.yearsUnknown,
+      s.missingWeatherHours,
     ]),
   }
 }

@@ -54,6 +54,27 @@ export const assessmentParts = once(() => {
     thicknessMm: num('product thickness [mm]'),
     loadingKgPerM2: num('product loading [kg fresh per m²]'),
     cautions: texts('food-safety and handling cautions of the product'),
+    dryTarget: z
+      .strictObject({
+        basis: z
+          .enum(['water-activity', 'profile-moisture', 'user'])
+          .describe(
+            "what set the target: the product's safe water activity, the profile's own moisture, or the user",
+          ),
+        safeWaterActivity: num('water activity at or below which the dried product is safe [0–1]'),
+        safeWaterActivitySource: text('its source'),
+        storageTempC: num('temperature of the store at which the water activity is judged [°C]'),
+        waterActivityAtTarget: numOrNull(
+          'water activity at the target moisture and storage temperature [0–1]; null: the isotherm gives none',
+        ),
+        moistureAtSafeWaterActivityWbPct: numOrNull(
+          'moisture at the safe water activity and storage temperature, wet basis [%]; null: the isotherm gives none',
+        ),
+        profileMoistureWbPct: num("the profile's own target moisture, wet basis [%]"),
+        waterActivityAtProfileMoisture: numOrNull('water activity at that moisture [0–1]'),
+        sentence: text('what "dry" means here, in one sentence'),
+      })
+      .describe('what "dry" means for this assessment'),
   })
   /** The method as applied: its kind and every parameter with the unit its name carries. */
   const methodResponseSchema = z
@@ -121,7 +142,9 @@ const seasonTableSchemas = once(() => {
 
   const startDateRowSchema = z.strictObject({
     start: monthDay('start date, local'),
-    years: count('years with a complete batch from this start'),
+    years: count('years with a complete batch from this start whose outcome is known'),
+    yearsUnknown: count('years whose batch ran into hours without weather: outcome unknown, left out'),
+    missingWeatherHours: num('hours without weather those batches ran into, summed [h]'),
     daysToTarget: medianP90('days', 'across years').describe(
       'days to target by the method alone [days]; null: not within the maximum duration',
     ),
@@ -240,6 +263,10 @@ const coverageSchema = once(() => {
     hasRainData: z.boolean().describe('the file has rain'),
     startDateBatchesRun: count('batches run for the start-date table'),
     startDateBatchesSkippedForData: count('batches skipped for missing data'),
+    batchesWithUnknownOutcome: count(
+      'batches that ran into hours without weather: outcome unknown, left out of the figures',
+    ),
+    missingWeatherHoursInBatches: num('hours without weather those batches missed [h]'),
   })
 })
 
