@@ -81,6 +81,7 @@ const UNITLESS: Record<string, string> = {
   frTauAlpha: '0–1',
   surfaceAreaPerTrayArea: 'm² of product surface per m² of tray',
   fanEfficiency: '0–1',
+  emissivity: '0–1',
   layers: 'count',
 }
 

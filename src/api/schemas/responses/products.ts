@@ -157,6 +157,11 @@ const productProfileResponseSchema = once(() => {
         confidence,
         parameters: parameterSources,
         rewettingRateFactor: sourced('rewetting rate ÷ drying rate', 'ratio'),
+        biotNumber: sourced('mass-transfer Biot number at the reference size, h·L/D', 'dimensionless')
+          .optional()
+          .describe('surface (skin) resistance against the inside; absent: none'),
+        wallThicknessMm: sourced('wall thickness of a hollow product, its drying length', 'mm').optional(),
+        referenceWallThicknessMm: num('wall at which the kinetics were measured [mm]').optional(),
         airVelocity: z
           .strictObject({
             referenceMs: num('air speed of the measurements [m/s]'),
