@@ -2,6 +2,7 @@
 // /v1/compare (a `sites` part), and the formats the summaries are made in.
 import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
+import { parseSitesCsv } from '../../src/analysis/compare-sites.ts'
 import { createApp } from '../../src/api/app.ts'
 
 const app = createApp()
@@ -261,5 +262,38 @@ describe('POST /v1/compare with a sites part', () => {
     expect(r.status, r.text.slice(0, 200)).toBe(200)
     expect(r.type).toMatch(/text\/csv/)
     expect(r.text.split('\r\n')[0]).toMatch(/^rank,site,/)
+  })
+})
+
+describe('the advisor through the API: one summary per farm of the demo sites table', () => {
+  it('each farm of climate-demo/verrowmark-sites.csv, posted with its own settings, answers its HTML summary', async () => {
+    const sites = parseSitesCsv(
+      readFileSync('climate-demo/verrowmark-sites.csv', 'utf8'),
+      'climate-demo/verrowmark-sites.csv',
+    )
+    expect(sites.map((s) => s.name)).toEqual([
+      'Ardentine Ridge',
+      'Quillow Landing',
+      'Gullhaven Point',
+      'Tamarel Estate',
+    ])
+    for (const site of sites) {
+      const options = JSON.stringify({
+        product: 'apricot-halves',
+        method: 'open-air',
+        weather: { ...site.weather, siteName: site.name },
+        ...season,
+      })
+      const html = await post(
+        '/v1/assess?format=html',
+        form([
+          ['file', demo(site.file), site.file],
+          ['options', options],
+        ]),
+      )
+      expect(html.status, `${site.name}: ${html.text.slice(0, 300)}`).toBe(200)
+      expect(html.text).toMatch(/^<!doctype html>/)
+      expect(html.text).toContain(site.name)
+    }
   })
 })
