@@ -37,6 +37,7 @@ import {
   totalReasons,
 } from './monthly-tables.ts'
 import { type PsychrometricSummary, psychrometricSummary } from './psychrometric.ts'
+import { assessmentSpoilage, spoilageSetup, summariseSpoilage } from './spoilage.ts'
 import {
   bestStartWindows,
   runStart,
@@ -118,7 +119,14 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     utcOffsetHours: calendar.time.utcOffsetHours,
     saturationPa: primary.ambientSaturationPa,
   })
-  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric })
+  const spoilage =
+    ctx.spoilage === undefined
+      ? null
+      : assessmentSpoilage(
+          ctx.spoilage.model,
+          starts.table.outcomes.map((o) => o.spoilage),
+        )
+  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric, spoilage })
 }
 
 /** Stage 2: the method's hourly conditions for every hour and the backup heater's, lazily. */
@@ -213,6 +221,7 @@ function startContext(
     maxHours: Math.round(run.maxDays * 24),
     startHourLocal: run.season.startHourLocal,
     wrap: series.typicalYear,
+    spoilage: run.spoilage ? spoilageSetup(run.profile) : undefined,
   }
 }
 
@@ -239,6 +248,13 @@ export function monthlyHeatStage(
     if (outcomes.length < 5) row.supplementalHeatKwhPerTonne.p10 = row.supplementalHeatKwhPerTonne.p90 = null
     const days = outcomes.map((o) => o.hoursToTarget / 24).sort((a, b) => a - b)
     row.medianDaysToTarget = roundOrNull(quantileSorted(days, 0.5), 1)
+    row.spoilage =
+      ctx.spoilage === undefined
+        ? null
+        : summariseSpoilage(
+            ctx.spoilage.model,
+            outcomes.map((o) => o.spoilage),
+          )
     run.onProgress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
 }
@@ -329,6 +345,8 @@ export function assembleAssessment(
     starts: StartDates
     heat: Assessment['heat']
     psychrometric: PsychrometricSummary
+    /** The spoilage block (null when the assessment ran without spoilage; absent: null). */
+    spoilage?: Assessment['spoilage']
   },
 ): Assessment {
   const { primary, calendar, starts } = parts
@@ -366,6 +384,7 @@ export function assembleAssessment(
     hourOfDay: hourOfDayTable(calendar.counts),
     hoursByReason: reasons,
     startDates: starts.table.rows,
+    spoilage: parts.spoilage ?? null,
     bestStartWindows: starts.best.windows,
     bestStartWindowCriterion: starts.best.criterion,
     heat: parts.heat,

@@ -6,12 +6,14 @@
  * conditions computed once per method.
  */
 
+import type { BatchSpoilageResult, BatchSpoilageSetup } from '../drying/batch.ts'
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
 import type { ProductResponse } from '../drying/product-response.ts'
 import { type HeatStrategy, supplementalHeat } from '../drying/supplemental-heat.ts'
 import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import type { StartDateRow, StartWindow } from './assessment.ts'
+import { summariseSpoilage } from './spoilage.ts'
 import { quantileSorted, roundOrNull } from './statistics.ts'
 
 /** Windows are runs of start days whose probability of finishing within the deadline is at least this (assumption). */
@@ -30,6 +32,8 @@ export interface StartContext {
   startHourLocal: number
   /** Typical year: batches wrap from the end of the file to its start. */
   wrap: boolean
+  /** The spoilage model stepped along every batch of the method alone; absent: no spoilage figures. */
+  spoilage?: BatchSpoilageSetup
 }
 
 export interface StartOutcome {
@@ -43,6 +47,8 @@ export interface StartOutcome {
   /** Solar collector heat into the air during the batch by the method alone [kWh/t] (solar cabinet). */
   solarKwhPerTonne: number
   strategy: HeatStrategy
+  /** The spoilage model's outcome along the method-alone batch (when the context has a model). */
+  spoilage?: BatchSpoilageResult
 }
 
 export interface MonthDay {
@@ -92,6 +98,7 @@ export function runStart(ctx: StartContext, index: number): StartOutcome {
       initialDb: ctx.initialDb,
       targetDb: ctx.targetDb,
       wrap: ctx.wrap,
+      spoilage: ctx.spoilage,
     },
     ctx.deadlineHours,
   )
@@ -104,6 +111,7 @@ export function runStart(ctx: StartContext, index: number): StartOutcome {
     heatKwhPerTonne: r.heatKwhPerTonne,
     solarKwhPerTonne: r.natural.solarKwhPerTonne,
     strategy: r.strategy,
+    spoilage: r.natural.spoilage,
   }
 }
 
@@ -119,8 +127,12 @@ function medianP90(values: number[], digits: number): { median: number | null; p
   }
 }
 
-/** Summarise the outcomes of one start day across years. */
-export function startDateRow(start: MonthDay, outcomes: StartOutcome[]): StartDateRow {
+/** Summarise the outcomes of one start day across years (spoilage with `spoilage`'s model, when given). */
+export function startDateRow(
+  start: MonthDay,
+  outcomes: StartOutcome[],
+  spoilage?: BatchSpoilageSetup,
+): StartDateRow {
   const n = outcomes.length
   const days = outcomes.map((o) => o.hoursToTarget / 24)
   const heat = outcomes.map((o) => o.heatKwhPerTonne)
@@ -150,6 +162,13 @@ export function startDateRow(start: MonthDay, outcomes: StartOutcome[]): StartDa
       outcomes.map((o) => o.solarKwhPerTonne),
       1,
     ),
+    spoilage:
+      spoilage === undefined
+        ? null
+        : summariseSpoilage(
+            spoilage.model,
+            outcomes.map((o) => o.spoilage),
+          ),
   }
 }
 
@@ -183,7 +202,7 @@ export function startDateTable(
       outcomes.push(runStart(ctx, index))
       batches++
     }
-    rows.push(startDateRow(d, outcomes))
+    rows.push(startDateRow(d, outcomes, ctx.spoilage))
     all.push(...outcomes)
     onDay?.(di)
   })

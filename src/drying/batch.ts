@@ -11,7 +11,15 @@
  * - paused (covered, fans off) and missing hours: no change.
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of docs/model.md §8.
+ *
+ * Spoilage (optional, `options.spoilage`): every hour of the batch, paused and covered hours included, the
+ * product family's spoilage model (product/spoilage/) is stepped with the hour's product temperature, the
+ * moisture at the start of the hour and the water activity of the isotherm at that temperature and moisture
+ * (drying/water-activity-table.ts), until the target is reached or the batch ends. Hours with missing
+ * weather keep the last product temperature (the clock runs; before the first known hour nothing is
+ * stepped). One accumulator per batch; nothing is allocated per hour.
  */
+import { type SpoilageModel, spoilageAccumulator } from '../product/spoilage/model.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'
 import {
@@ -21,6 +29,32 @@ import {
   stepMoistureRatio,
 } from './product-response.ts'
 import { HourStatus } from './usable-hour.ts'
+import type { WaterActivityTable } from './water-activity-table.ts'
+
+/** What a batch needs to step a spoilage model along its hours. */
+export interface BatchSpoilageSetup {
+  model: SpoilageModel
+  /** The product's water activity by temperature and moisture (one table per product, shared by batches). */
+  waterActivity: WaterActivityTable
+}
+
+/** The spoilage model's state when the batch reached its target (or at its end). */
+export interface BatchSpoilageResult {
+  /** The model's measure (its `measureUnit`); every model's measure only grows, so this is its highest value. */
+  measure: number
+  /** The measure as a share of the model's limit (1 = spoiled). */
+  limitUsedFraction: number
+  /** The limit was reached at or before the hour the batch reached its target (or, not reached, by its end). */
+  spoiledBeforeDry: boolean
+  hoursAtRisk: number
+  hoursOutsideRange: number
+  /** Hours stepped (hours of the batch with a known product temperature). */
+  hours: number
+}
+
+/** Product temperatures passed to a spoilage model are held within the models' accepted input range [°C]. */
+const SPOILAGE_T_MIN_C = -40
+const SPOILAGE_T_MAX_C = 120
 
 export interface BatchOptions {
   /** Index of the first hour. */
@@ -33,6 +67,8 @@ export interface BatchOptions {
   wrap?: boolean
   /** Record the moisture after every hour (tests, single-batch reports). */
   recordTrace?: boolean
+  /** Step this spoilage model along the batch (the primary method's hours only; see the module comment). */
+  spoilage?: BatchSpoilageSetup
 }
 
 export interface BatchResult {
@@ -61,6 +97,8 @@ export interface BatchResult {
   trace?: Float64Array
   /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
   usedBackup?: Uint8Array
+  /** The spoilage model's outcome, when `options.spoilage` was given. */
+  spoilage?: BatchSpoilageResult
 }
 
 function checkBatchOptions(options: BatchOptions, hours: number): void {
@@ -93,6 +131,10 @@ export function simulateBatch(
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const ts = product.thompsonTimeScale
+  const spoilage = options.spoilage
+  const acc = spoilage === undefined ? undefined : spoilageAccumulator(spoilage.model)
+  const awTable = spoilage?.waterActivity
+  let lastProductC = Number.NaN
   let m = initialDb
   let rewettingHours = 0
   let rainExposureHours = 0
@@ -124,6 +166,15 @@ export function simulateBatch(
       c = backup
       backupHours++
       if (usedBackup) usedBackup[h] = 1
+    }
+    if (acc !== undefined && awTable !== undefined) {
+      // the hour's product temperature (held through missing hours), the moisture at its start
+      const tRead = c.productC[i]
+      if (!Number.isNaN(tRead))
+        lastProductC = tRead < SPOILAGE_T_MIN_C ? SPOILAGE_T_MIN_C : Math.min(tRead, SPOILAGE_T_MAX_C)
+      if (!Number.isNaN(lastProductC)) {
+        acc.add(lastProductC, (100 * m) / (1 + m), awTable.at(lastProductC, m), 1)
+      }
     }
     const mode = c.mode[i]
     if (mode === HourMode.missing) {
@@ -176,6 +227,18 @@ export function simulateBatch(
       break
     }
   }
+  let spoilageResult: BatchSpoilageResult | undefined
+  if (acc !== undefined && spoilage !== undefined) {
+    const state = acc.state()
+    spoilageResult = {
+      measure: state.measure,
+      limitUsedFraction: state.measure / spoilage.model.spoiledAt,
+      spoiledBeforeDry: state.measure >= spoilage.model.spoiledAt,
+      hoursAtRisk: state.hoursAtRisk,
+      hoursOutsideRange: state.hoursOutsideRange,
+      hours: state.hours,
+    }
+  }
   return {
     reached: Number.isFinite(hoursToTarget),
     hoursToTarget,
@@ -192,5 +255,6 @@ export function simulateBatch(
     waterFromRainDb: fromRain,
     trace,
     usedBackup,
+    spoilage: spoilageResult,
   }
 }

@@ -6,7 +6,14 @@
  * fish is at 10 °C or warmer. Salted fish held near the aw of saturated brine (about 0.75) stays below the
  * bacterial level but still moulds: `spoilageModelFor` gives salted fish the mould-free-time model instead.
  */
-import { checkStepInput, type SpoilageModel, type SpoilageState, type SpoilageStepInput } from './model.ts'
+import {
+  checkStepInput,
+  checkStepValues,
+  type SpoilageAccumulator,
+  type SpoilageModel,
+  type SpoilageState,
+  type SpoilageStepInput,
+} from './model.ts'
 
 export const FISH_BACTERIAL_AW = 0.91
 export const FISH_WARM_C = 10
@@ -20,6 +27,7 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
     citation: 'common practice, no source',
     equation: `hours with aw ≥ ${FISH_BACTERIAL_AW} and product ≥ ${FISH_WARM_C} °C ≤ ${FISH_LIMIT_HOURS} h`,
     confidence: 'memory',
+    short: 'common practice, no source',
   },
   measureName: `hours at aw ≥ ${FISH_BACTERIAL_AW} and ≥ ${FISH_WARM_C} °C`,
   measureUnit: 'h',
@@ -40,6 +48,19 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
       hoursAtRisk: state.hoursAtRisk + h,
       hoursOutsideRange: state.hoursOutsideRange,
       hours: state.hours + input.hours,
+    }
+  },
+  accumulator(): SpoilageAccumulator {
+    let measure = 0
+    let hours = 0
+    return {
+      add(productTempC, moistureWbPct, waterActivity, stepHours) {
+        checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
+        if (waterActivity >= FISH_BACTERIAL_AW && productTempC >= FISH_WARM_C) measure += stepHours
+        hours += stepHours
+      },
+      measure: () => measure,
+      state: () => ({ measure, hoursAtRisk: measure, hoursOutsideRange: 0, hours }),
     }
   },
 }

@@ -157,6 +157,7 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
       equation:
         'DML = 0.0883·[exp(0.006·θ) − 1] + 0.00102·θ; θ = Σ Δt/(M_T·M_M·M_D); M_M = 0.103·[exp(455/M_db^1.53) − 0.00845·M_db + 1.558]; M_T = 32.3·exp(−3.48·T_F/60) [+ min(0.01(M_wb − 19), 0.09)·exp(0.61(T_F − 60)/60) above 60 °F and 19 % wb]; M_D = 2.08·exp(−0.0239·D)',
       confidence: 'transcribed',
+      short: 'Steele 1967; Thompson 1972',
     },
     measureName: 'dry-matter loss',
     measureUnit: '%',

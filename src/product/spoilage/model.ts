@@ -28,6 +28,8 @@ export interface SpoilageSource {
   /** The equation, table or clause used, with its number where the source numbers it. */
   equation: string
   confidence: SpoilageConfidence
+  /** Authors and years only, e.g. "Steele 1967; Thompson 1972", for tables that name the source on every row. */
+  short?: string
 }
 
 /** Conditions of the product during one step. */
