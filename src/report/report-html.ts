@@ -16,6 +16,7 @@ import { heatSection } from './sections/heat.ts'
 import { hourOfDaySection } from './sections/hour-of-day.ts'
 import { monthlySection } from './sections/monthly.ts'
 import { psychrometricSection } from './sections/psychrometric.ts'
+import { spoilageSection } from './sections/spoilage.ts'
 import { startDatesSection } from './sections/start-dates.ts'
 import { answerHtml, headerHtml } from './sections/summary.ts'
 
@@ -54,6 +55,7 @@ ${monthlySection(a, ctx)}
 ${hourOfDaySection(a, ctx)}
 ${psychrometricSection(a, ctx)}
 ${startDatesSection(a, ctx)}
+${spoilageSection(a, ctx)}
 ${heatSection(a, ctx)}
 ${cautionsSection(a, ctx)}
 <footer>${escapeHtml(o.footer ?? 'Made by dryhours from the weather file and the options shown above. Check the numbers against local experience before you build or buy.')}</footer>
