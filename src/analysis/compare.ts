@@ -34,6 +34,8 @@ export interface SiteScore {
   meanProbabilityWithinDeadline: number | null
   medianHeatKwhPerTonne: number | null
   bestStartWindow: string | null
+  /** Share of the season's batches that spoiled before they were dry (the assessment's `spoilage.season`). */
+  spoilageProbability: number | null
   warnings: string[]
 }
 
@@ -99,6 +101,7 @@ function score(a: Assessment): Omit<SiteScore, 'rank'> {
     meanProbabilityWithinDeadline: roundOrNull(meanP, 3),
     medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
     bestStartWindow: best ? `${best.from} to ${best.to}` : null,
+    spoilageProbability: a.spoilage?.season.probability ?? null,
     warnings: a.warnings,
   }
 }

@@ -151,6 +151,7 @@ function readAmbientHour(e: Engine, i: number): boolean {
   hour.evaporationKgPerM2H = Number.NaN
   hour.heaterKwhPerTonne = 0
   hour.solarKwhPerTonne = 0
+  hour.airFlowShare = 1
   return true
 }
 
@@ -249,7 +250,9 @@ function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceSaturati
   c.deficitToTargetGPerKg[i] = 1000 * dTarget
   const evaporation = hour.evaporationKgPerM2H
   c.evaporationKgPerM2H[i] = evaporation
-  c.capDbPerH[i] = exposed ? Math.max(0, evaporation) * e.exposedCapFactor : dSat * e.forcedCapFactor
+  c.capDbPerH[i] = exposed
+    ? Math.max(0, evaporation) * e.exposedCapFactor
+    : dSat * e.forcedCapFactor * hour.airFlowShare
   if (!e.verdict) {
     c.status[i] = HourStatus.usable
     return
@@ -321,12 +324,13 @@ export function computeHourlyConditions(
       : computeSolarColumns(series)
   const columns = allocateColumns(n, options, product.profile.isotherm.adsorption === undefined)
   const dmPerKgFresh = 1 - options.initialWbPct / 100
-  const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method)
+  const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method, options.loadingKgPerM2)
   const methodHour = model.prepare(method, {
     series,
     solar,
     thresholds: options.thresholds,
     maxProductTempC: options.maxProductTempC,
+    loadingKgPerM2: options.loadingKgPerM2,
   })
   const e = new Engine(
     series,

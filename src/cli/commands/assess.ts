@@ -31,6 +31,8 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
+  tunnel:         --loading <kg/m²> --air-flow <kg/s at full flow>; --param collectorLengthM=, dryingLengthM=, widthM=,
+                  fans=pv|constant, nightPractice=closed|open, cover=polyethylene|glass
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
                   API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
@@ -176,6 +178,9 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     set('tiltDeg', num('tilt'))
     set('azimuthDeg', num('azimuth'))
     set('airFlowKgPerSPerM2', num('air-flow'))
+  } else if (kind === 'tunnel') {
+    set('loadingKgPerM2', num('loading'))
+    set('airFlowKgPerS', num('air-flow'))
   } else {
     set('setPointC', num('set-point'))
     set('targetRhPct', num('target-rh'))
@@ -271,7 +276,7 @@ export function spoilageText(a: Assessment): string[] {
       ? `${s.model.measureName} = ${s.model.limit}`
       : `${s.model.limit} ${s.model.measureUnit} ${s.model.measureName}`
   return [
-    `Spoilage before dry: ${s.model.name} (${s.season.source}; confidence ${s.model.source.confidence}); spoiled at ${limit}`,
+    `Spoilage before dry: ${s.model.name}; source ${s.season.source} (${s.model.source.confidence}); spoiled at ${limit}`,
     `  season: ${s.season.batchesSpoiledBeforeDry} of ${s.season.batches} batches (${pct(s.season.probability)} %) spoiled before they were dry; hours at risk median ${f0(s.season.hoursAtRisk.median)} (P90 ${f0(s.season.hoursAtRisk.p90)})`,
     ...s.cautions.slice(0, 2).map((c) => `  ! ${c}`),
   ]
