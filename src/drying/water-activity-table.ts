@@ -32,7 +32,7 @@ export function waterActivityDirect(profile: ProductProfile, tC: number, moistur
   const t = tC < ISOTHERM_T_MIN_C ? ISOTHERM_T_MIN_C : Math.min(tC, ISOTHERM_T_MAX_C)
   try {
     const aw = equilibriumRelativeHumidityPct(profile, t, moistureDb, 'desorption') / 100
-    return aw < 0 ? 0 : aw > 1 ? 1 : aw
+    return Math.min(Math.max(aw, 0), 1)
   } catch {
     return 1
   }

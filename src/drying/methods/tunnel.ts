@@ -140,7 +140,7 @@ function transmittanceTable(cover: CoverSpec): Float64Array {
 /** Linear interpolation in the table at `incidenceDeg` (0 at and beyond 90°). */
 function tableTransmittance(table: Float64Array, incidenceDeg: number): number {
   if (!(incidenceDeg < 89)) return incidenceDeg >= 90 ? 0 : table[89] * (90 - incidenceDeg)
-  const x = incidenceDeg < 0 ? 0 : incidenceDeg
+  const x = Math.max(incidenceDeg, 0)
   const i = Math.floor(x)
   const f = x - i
   return table[i] * (1 - f) + table[i + 1] * f
