@@ -73,7 +73,7 @@ export function riskBarsChart(o: RiskBarsOptions): string {
   const every = o.labelEvery ?? Math.max(1, Math.ceil(n / 8))
   const xt = o.points.map((p, i) => ({ x: x(i), label: p.x, i })).filter((t) => t.i % every === 0)
   const ry = px(y(100 * HALF))
-  const ref = `<g class="reference" data-value="${100 * HALF}"><line x1="${f.left}" x2="${f.width - f.right}" y1="${ry}" y2="${ry}" stroke="${INK.text}" stroke-width="1" stroke-dasharray="2 3"/><text x="${f.width - f.right - 2}" y="${ry}" dy="-0.35em" text-anchor="end" font-size="9.5" fill="${INK.text}">half of the years</text></g>`
+  const ref = `<g class="reference" data-value="${100 * HALF}"><line x1="${f.left}" x2="${f.width - f.right}" y1="${ry}" y2="${ry}" stroke="${INK.text}" stroke-width="1" stroke-dasharray="2 3"/><text x="${f.width - f.right - 2}" y="${ry}" dy="-0.35em" text-anchor="end" font-size="9.5" fill="${INK.text}" stroke="${HIGH_CONTRAST.white}" stroke-width="3" paint-order="stroke">half of the years</text></g>`
   const items = [
     {
       swatch: `<rect x="0" y="-1" width="14" height="10" fill="url(#${hatchId})" stroke="${HIGH_CONTRAST.red}" stroke-width="0.6"/>`,
