@@ -17,9 +17,9 @@
  * moisture at the start of the hour and the water activity of the isotherm at that temperature and moisture
  * (drying/water-activity-table.ts), until the target is reached or the batch ends. Hours with missing
  * weather keep the last product temperature (the clock runs; before the first known hour nothing is
- * stepped). One accumulator per batch; nothing is allocated per hour.
+ * stepped). One hour stepper per batch, fed through fields; nothing is allocated per hour.
  */
-import { type SpoilageModel, spoilageAccumulator } from '../product/spoilage/model.ts'
+import { type SpoilageModel, spoilageHourStepper } from '../product/spoilage/model.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'
 import {
@@ -132,7 +132,7 @@ export function simulateBatch(
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const ts = product.thompsonTimeScale
   const spoilage = options.spoilage
-  const acc = spoilage === undefined ? undefined : spoilageAccumulator(spoilage.model)
+  const acc = spoilage === undefined ? undefined : spoilageHourStepper(spoilage.model)
   const awTable = spoilage?.waterActivity
   let lastProductC = Number.NaN
   let m = initialDb
@@ -173,7 +173,14 @@ export function simulateBatch(
       if (!Number.isNaN(tRead))
         lastProductC = tRead < SPOILAGE_T_MIN_C ? SPOILAGE_T_MIN_C : Math.min(tRead, SPOILAGE_T_MAX_C)
       if (!Number.isNaN(lastProductC)) {
-        acc.add(lastProductC, (100 * m) / (1 + m), awTable.at(lastProductC, m), 1)
+        // inputs through fields: no number crosses these calls
+        awTable.tC = lastProductC
+        awTable.moistureDb = m
+        awTable.lookup()
+        acc.productTempC = lastProductC
+        acc.moistureWbPct = (100 * m) / (1 + m)
+        acc.waterActivity = awTable.aw
+        acc.stepHour()
       }
     }
     const mode = c.mode[i]

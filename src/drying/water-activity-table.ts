@@ -9,7 +9,8 @@
  * fraction from 0 to {@link AW_GRID_WB_MAX} every {@link AW_GRID_WB_STEP} (0.25 % wb): water activity
  * is smooth in wet-basis moisture over the whole drying range (it is near 1 for fresh produce and falls
  * steeply below about 40 % wb), while the dry-basis axis would crowd every dried product into its first
- * cells. Bilinear interpolation; its error against the isotherm is checked in the tests.
+ * cells. Linear in moisture at the nearest temperature node; its error against the isotherm is checked in
+ * the tests.
  * Outside the grid: temperature held at its ends; moisture above the top row reads the top row; a node the
  * isotherm cannot evaluate (outside its domain) reads 1 (the wet, safe-side value for spoilage).
  */
@@ -55,22 +56,38 @@ export class WaterActivityTable {
     return v
   }
 
-  /** Water activity (0–1) at product temperature tC [°C] and moisture [kg/kg db]. */
-  at(tC: number, moistureDb: number): number {
-    let x = (tC - T_MIN) / AW_GRID_T_STEP_C
-    let y = moistureDb / (1 + moistureDb) / AW_GRID_WB_STEP
+  /** In: product temperature [°C] for {@link lookup}. */
+  tC = Number.NaN
+  /** In: moisture [kg/kg db] for {@link lookup}. */
+  moistureDb = Number.NaN
+  /** Out: the water activity of the last {@link lookup}. */
+  aw = Number.NaN
+
+  /**
+   * Water activity (0–1) at `tC` [°C] and `moistureDb` [kg/kg db] into `aw`, through fields (the hour loops call
+   * it: no number crosses the call). Linear in moisture on the grid row of the nearest temperature node (water
+   * activity changes by a few thousandths per kelvin, so the nearest row, at most 0.25 K away, costs less than
+   * the moisture interpolation and halves the reads).
+   */
+  lookup(): void {
+    const m = this.moistureDb
+    let x = (this.tC - T_MIN) / AW_GRID_T_STEP_C + 0.5
+    let y = m / (1 + m) / AW_GRID_WB_STEP
     if (!(x > 0)) x = 0
-    else if (x > NT - 1.000001) x = NT - 1.000001
+    else if (x > NT - 1) x = NT - 1
     if (!(y > 0)) y = 0
     else if (y > NU - 1.000001) y = NU - 1.000001
     const it = Math.floor(x)
     const iu = Math.floor(y)
-    const fx = x - it
-    const fy = y - iu
     const a = this.node(it, iu)
-    const b = this.node(it + 1, iu)
-    const c = this.node(it, iu + 1)
-    const d = this.node(it + 1, iu + 1)
-    return (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
+    this.aw = a + (this.node(it, iu + 1) - a) * (y - iu)
+  }
+
+  /** Water activity (0–1) at product temperature tC [°C] and moisture [kg/kg db] (the {@link lookup} as a call). */
+  at(tC: number, moistureDb: number): number {
+    this.tC = tC
+    this.moistureDb = moistureDb
+    this.lookup()
+    return this.aw
   }
 }

@@ -15,9 +15,11 @@
  * for the transfer, said so in the model's source).
  */
 import {
+  checkHourStepper,
   checkStepInput,
   checkStepValues,
   type SpoilageAccumulator,
+  type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
   type SpoilageStepInput,
@@ -35,6 +37,27 @@ export interface AwWindowSpec {
   source: SpoilageModel['source']
   spoiledAtSource: string
   cautions: string[]
+}
+
+/** A window model fed hour by hour through fields. */
+class WindowHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  measure = 0
+  hours = 0
+  constructor(
+    readonly awLow: number,
+    readonly awHigh: number,
+  ) {}
+  stepHour(): void {
+    checkHourStepper(this)
+    if (this.waterActivity >= this.awLow && this.waterActivity <= this.awHigh) this.measure += 1
+    this.hours += 1
+  }
+  state(): SpoilageState {
+    return { measure: this.measure, hoursAtRisk: this.measure, hoursOutsideRange: 0, hours: this.hours }
+  }
 }
 
 /** A window model: `measure` is the hours spent with awLow ≤ aw ≤ awHigh. */
@@ -80,6 +103,7 @@ export function awWindowModel(spec: AwWindowSpec): SpoilageModel {
         state: () => ({ measure, hoursAtRisk: measure, hoursOutsideRange: 0, hours }),
       }
     },
+    hourStepper: () => new WindowHours(spec.awLow, spec.awHigh),
   }
 }
 

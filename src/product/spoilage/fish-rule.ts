@@ -7,9 +7,11 @@
  * bacterial level but still moulds: `spoilageModelFor` gives salted fish the mould-free-time model instead.
  */
 import {
+  checkHourStepper,
   checkStepInput,
   checkStepValues,
   type SpoilageAccumulator,
+  type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
   type SpoilageStepInput,
@@ -18,6 +20,23 @@ import {
 export const FISH_BACTERIAL_AW = 0.91
 export const FISH_WARM_C = 10
 export const FISH_LIMIT_HOURS = 24
+
+/** The fish rule fed hour by hour through fields. */
+class WetWarmHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  measure = 0
+  hours = 0
+  stepHour(): void {
+    checkHourStepper(this)
+    if (this.waterActivity >= FISH_BACTERIAL_AW && this.productTempC >= FISH_WARM_C) this.measure += 1
+    this.hours += 1
+  }
+  state(): SpoilageState {
+    return { measure: this.measure, hoursAtRisk: this.measure, hoursOutsideRange: 0, hours: this.hours }
+  }
+}
 
 export const FISH_WET_WARM_RULE: SpoilageModel = {
   id: 'fish-wet-warm-hours',
@@ -63,4 +82,5 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
       state: () => ({ measure, hoursAtRisk: measure, hoursOutsideRange: 0, hours }),
     }
   },
+  hourStepper: () => new WetWarmHours(),
 }

@@ -28,9 +28,11 @@
  */
 import { moistureDbFromWbPct } from '../moisture-basis.ts'
 import {
+  checkHourStepper,
   checkStepInput,
   checkStepValues,
   type SpoilageAccumulator,
+  type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
   type SpoilageStepInput,
@@ -207,5 +209,44 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         state: () => ({ measure: dmlFromEquivalentHours(theta), hoursAtRisk, hoursOutsideRange, hours }),
       }
     },
+    hourStepper: () => new GrainDmlHours(damagePct, atRiskAw),
+  }
+}
+
+/** The DML model fed hour by hour through fields (same arithmetic as the accumulator). */
+class GrainDmlHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  theta = 0
+  hoursAtRisk = 0
+  hoursOutsideRange = 0
+  hours = 0
+  readonly damage: number
+  readonly damageClamped: boolean
+  constructor(
+    damagePct: number,
+    readonly atRiskAw: number,
+  ) {
+    const d = clamp(damagePct, DML_VALID_DAMAGE_PCT)
+    this.damage = damageMultiplier(d)
+    this.damageClamped = d !== damagePct
+  }
+  stepHour(): void {
+    checkHourStepper(this)
+    const t = clamp(this.productTempC, DML_VALID_TEMP_C)
+    const m = clamp(this.moistureWbPct, DML_VALID_MOISTURE_WB_PCT)
+    this.theta += 1 / (temperatureMultiplier(t, m) * moistureMultiplier(m) * this.damage)
+    if (this.waterActivity >= this.atRiskAw) this.hoursAtRisk += 1
+    if (this.damageClamped || t !== this.productTempC || m !== this.moistureWbPct) this.hoursOutsideRange += 1
+    this.hours += 1
+  }
+  state(): SpoilageState {
+    return {
+      measure: dmlFromEquivalentHours(this.theta),
+      hoursAtRisk: this.hoursAtRisk,
+      hoursOutsideRange: this.hoursOutsideRange,
+      hours: this.hours,
+    }
   }
 }

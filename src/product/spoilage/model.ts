@@ -82,6 +82,57 @@ export interface SpoilageModel {
    * to `step` when a model has none.
    */
   accumulator?(): SpoilageAccumulator
+  /**
+   * Optional form for the longest loops (every hour of every batch of an assessment): the inputs are set as
+   * fields and `stepHour()` adds one hour, so no number crosses a call V8 may not inline (it would box each
+   * one). Same arithmetic as `step`. {@link spoilageHourStepper} falls back to the accumulator.
+   */
+  hourStepper?(): SpoilageHourStepper
+}
+
+/**
+ * A running state of one model fed one hour at a time through fields: set `productTempC` [°C], `moistureWbPct`
+ * [% wb] and `waterActivity`, call `stepHour()`. The inputs are checked as in {@link checkStepInput}.
+ */
+export interface SpoilageHourStepper {
+  productTempC: number
+  moistureWbPct: number
+  waterActivity: number
+  /** Adds one hour at the inputs set. */
+  stepHour(): void
+  /** A snapshot of the state so far. */
+  state(): SpoilageState
+}
+
+/** The hour stepper of `model`: its own, or its accumulator behind fields. */
+export function spoilageHourStepper(model: SpoilageModel): SpoilageHourStepper {
+  if (model.hourStepper) return model.hourStepper()
+  const acc = spoilageAccumulator(model)
+  const stepper: SpoilageHourStepper = {
+    productTempC: Number.NaN,
+    moistureWbPct: Number.NaN,
+    waterActivity: Number.NaN,
+    stepHour() {
+      acc.add(stepper.productTempC, stepper.moistureWbPct, stepper.waterActivity, 1)
+    },
+    state: () => acc.state(),
+  }
+  return stepper
+}
+
+/** {@link checkStepInput} for one hour of a stepper (the object crosses the call, not its numbers). */
+export function checkHourStepper(s: SpoilageHourStepper): void {
+  if (!(s.productTempC >= -40 && s.productTempC <= 120)) {
+    throw new RangeError(`spoilage step: productTempC must be between -40 and 120 °C, got ${s.productTempC}`)
+  }
+  if (!(s.moistureWbPct >= 0 && s.moistureWbPct < 100)) {
+    throw new RangeError(
+      `spoilage step: moistureWbPct must be in [0, 100) % wet basis, got ${s.moistureWbPct}`,
+    )
+  }
+  if (!(s.waterActivity >= 0 && s.waterActivity <= 1)) {
+    throw new RangeError(`spoilage step: waterActivity must be between 0 and 1, got ${s.waterActivity}`)
+  }
 }
 
 /** A mutable running state of one model: `add` one step at a time, read `measure()` or `state()` at any point. */

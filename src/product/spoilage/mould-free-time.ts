@@ -30,9 +30,11 @@
  *   equations (which fall with temperature up to 35 °C) would count those hours as the most dangerous.
  */
 import {
+  checkHourStepper,
   checkStepInput,
   checkStepValues,
   type SpoilageAccumulator,
+  type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
   type SpoilageStepInput,
@@ -79,6 +81,45 @@ export function mouldFreeDaysValue(tempC: number, waterActivity: number): number
 export function mouldFreeClamped(tempC: number, waterActivity: number): boolean {
   if (waterActivity < MFSL_NO_GROWTH_BELOW_AW || tempC >= MFSL_NO_GROWTH_AT_OR_ABOVE_C) return false
   return waterActivity < MFSL_VALID_AW[0] || waterActivity > MFSL_VALID_AW[1] || tempC < 21 || tempC > 27
+}
+
+const [LINE_21, LINE_27] = MFSL_LINES
+const LINE_SPAN_C = LINE_27.tempC - LINE_21.tempC
+
+/** The mould-free model fed hour by hour through fields (same arithmetic as `step`). */
+class MouldFreeHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  measure = 0
+  hoursAtRisk = 0
+  hoursOutsideRange = 0
+  hours = 0
+  stepHour(): void {
+    checkHourStepper(this)
+    const tC = this.productTempC
+    const aw = this.waterActivity
+    this.hours += 1
+    if (aw < MFSL_NO_GROWTH_BELOW_AW || tC >= MFSL_NO_GROWTH_AT_OR_ABOVE_C) return
+    // mouldFreeDaysValue, written out: the fraction of mould-free time used in one hour
+    const erh = 100 * (aw < MFSL_VALID_AW[1] ? aw : MFSL_VALID_AW[1])
+    const t =
+      tC < MFSL_TEMP_RANGE_C[0] ? MFSL_TEMP_RANGE_C[0] : tC > MFSL_TEMP_RANGE_C[1] ? MFSL_TEMP_RANGE_C[1] : tC
+    const log21 = LINE_21.intercept - LINE_21.slopePerErhPct * erh
+    const log27 = LINE_27.intercept - LINE_27.slopePerErhPct * erh
+    const log = log21 + ((log27 - log21) * (t - LINE_21.tempC)) / LINE_SPAN_C
+    this.measure += 1 / 24 / Math.exp(log * Math.LN10)
+    if (aw < MFSL_VALID_AW[0] || aw > MFSL_VALID_AW[1] || tC < 21 || tC > 27) this.hoursOutsideRange += 1
+    if (aw >= MFSL_VALID_AW[0]) this.hoursAtRisk += 1
+  }
+  state(): SpoilageState {
+    return {
+      measure: this.measure,
+      hoursAtRisk: this.hoursAtRisk,
+      hoursOutsideRange: this.hoursOutsideRange,
+      hours: this.hours,
+    }
+  }
 }
 
 export function mouldFreeTimeModel(appliesTo: string[] = ['fruit', 'vegetable', 'herb']): SpoilageModel {
@@ -139,5 +180,6 @@ export function mouldFreeTimeModel(appliesTo: string[] = ['fruit', 'vegetable', 
         state: () => ({ measure, hoursAtRisk, hoursOutsideRange, hours }),
       }
     },
+    hourStepper: () => new MouldFreeHours(),
   }
 }
