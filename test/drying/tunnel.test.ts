@@ -110,6 +110,25 @@ describe('solar tunnel', () => {
     }
   })
 
+  it('without a collector section (a plastic tunnel over the trays) the air is ambient and only the product is warmed', () => {
+    const c = computeHourlyConditions(
+      week,
+      parseDryingMethod({ kind: 'tunnel', collectorLengthM: 0, fans: 'constant' }),
+      direct,
+      options(),
+    )
+    let sunny = 0
+    for (let i = 0; i < week.hours; i++) {
+      expect(c.airC[i]).toBe(week.dryBulbC[i])
+      expect(c.solarKwhPerTonne[i]).toBe(0)
+      if (week.ghiWm2[i] > 500) {
+        sunny++
+        expect(c.productC[i]).toBeGreaterThan(c.airC[i] + 5)
+      }
+    }
+    expect(sunny).toBeGreaterThan(10)
+  })
+
   it('sizes its air per tonne by the drying floor and the loading', () => {
     const m = parseDryingMethod({ kind: 'tunnel' })
     if (m.kind !== 'tunnel') throw new Error('kind')

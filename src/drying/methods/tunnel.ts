@@ -69,8 +69,9 @@ export const tunnelSchema = z.object({
    * Length of the collector section [m]. 4.5 m, the solar air heater of the CIAE Bhopal tunnel (2.0 m wide,
    * 4.5 m heater, 8.0 m drying tunnel, UV-stabilised polyethylene film, PV-driven axial fans; Singh, Ganesan &
    * Singh, "Performance Study of a Solar Tunnel Dryer for Horticultural Crops", RERIC journal, abstract read).
+   * 0: no collector section (a plastic tunnel or greenhouse over the trays; the air enters at ambient).
    */
-  collectorLengthM: z.number().gt(0).max(100).default(4.5),
+  collectorLengthM: z.number().min(0).max(100).default(4.5),
   /** Length of the drying section [m]; 8.0 m as in the CIAE tunnel (abstract read, above). */
   dryingLengthM: z.number().gt(0).max(200).default(8),
   /** Inside width of the tunnel [m]; 2.0 m as in the CIAE tunnel (abstract read, above). */
@@ -237,12 +238,10 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
       }
       const flow = m.airFlowKgPerS * share
       const capacity = flow * 1000 * moistAirHeatCapacityKjPerKgK(hour.humidityRatio)
-      const fr = heatRemovalFactor(
-        collectorAreaM2,
-        m.collectorLossWm2K,
-        m.collectorEfficiencyFactor,
-        capacity,
-      )
+      const fr =
+        collectorAreaM2 > 0
+          ? heatRemovalFactor(collectorAreaM2, m.collectorLossWm2K, m.collectorEfficiencyFactor, capacity)
+          : 0
       const gainW = fr * collectorAreaM2 * m.absorberAbsorptance * transmitted
       const tAir = t + gainW / capacity
       hour.airC = tAir
