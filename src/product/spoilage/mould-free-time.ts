@@ -102,9 +102,8 @@ class MouldFreeHours implements SpoilageHourStepper {
     this.hours += 1
     if (aw < MFSL_NO_GROWTH_BELOW_AW || tC >= MFSL_NO_GROWTH_AT_OR_ABOVE_C) return
     // mouldFreeDaysValue, written out: the fraction of mould-free time used in one hour
-    const erh = 100 * (aw < MFSL_VALID_AW[1] ? aw : MFSL_VALID_AW[1])
-    const t =
-      tC < MFSL_TEMP_RANGE_C[0] ? MFSL_TEMP_RANGE_C[0] : tC > MFSL_TEMP_RANGE_C[1] ? MFSL_TEMP_RANGE_C[1] : tC
+    const erh = 100 * Math.min(aw, MFSL_VALID_AW[1])
+    const t = Math.min(Math.max(tC, MFSL_TEMP_RANGE_C[0]), MFSL_TEMP_RANGE_C[1])
     const log21 = LINE_21.intercept - LINE_21.slopePerErhPct * erh
     const log27 = LINE_27.intercept - LINE_27.slopePerErhPct * erh
     const log = log21 + ((log27 - log21) * (t - LINE_21.tempC)) / LINE_SPAN_C
