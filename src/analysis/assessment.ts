@@ -5,6 +5,7 @@
  */
 import type { DryingMethod, FuelId } from '../drying/method.ts'
 import type { HourStatusName } from '../drying/usable-hour.ts'
+import type { BinAssessment } from './assessment-bin.ts'
 import type { PsychrometricSummary } from './psychrometric.ts'
 import type { Spread } from './statistics.ts'
 
@@ -239,4 +240,10 @@ export interface Assessment {
   assumptions: Assumption[]
   warnings: string[]
   coverage: Coverage
+  /**
+   * Natural-air bin drying (methods with deep-bed batches): per start date and airflow, days until the top layer
+   * is dry, its dry-matter loss and fan energy; per start month the minimum airflow. Absent for other methods,
+   * whose start-date table, best windows and heat come from batches instead (those are then empty).
+   */
+  bin?: BinAssessment
 }

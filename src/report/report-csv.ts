@@ -7,6 +7,7 @@
 import type { Assessment, ReportInputInfo } from './assessment-view.ts'
 import type { UnitSystem } from './display-units.ts'
 import { sectionContext } from './report-html.ts'
+import { binFanTable, binMinimumAirflowTable, binStartDatesTable } from './sections/bin.ts'
 import { fuelTable, heatTable } from './sections/heat.ts'
 import { hourOfDayFractions, hourOfDayTable } from './sections/hour-of-day.ts'
 import { monthlyTable, usableHoursByYearTable } from './sections/monthly.ts'
@@ -35,7 +36,9 @@ export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
   if (a.psychrometric) out.push(psychroTable(a.psychrometric))
   if (a.startDates.length) out.push(startDatesTable(a, ctx))
   if (a.startDates.length && a.spoilage) out.push(spoilageTable(a))
-  out.push(heatTable(a, ctx), fuelTable(a, ctx))
+  if (a.bin)
+    out.push(binMinimumAirflowTable(a.bin, ctx), binStartDatesTable(a.bin, ctx), binFanTable(a.bin, ctx))
+  else out.push(heatTable(a, ctx), fuelTable(a, ctx))
   if (a.assumptions.length) {
     out.push({
       id: 'assumptions',
@@ -57,6 +60,9 @@ export const REPORT_TABLE_IDS = [
   'psychrometric-hours',
   'start-dates',
   'spoilage-by-start-date',
+  'bin-minimum-airflow',
+  'bin-start-dates',
+  'bin-fans',
   'supplemental-heat-by-month',
   'fuel',
   'assumptions',

@@ -10,6 +10,7 @@ import { type Assessment, type ReportInputInfo, siteDisplayName } from './assess
 import { type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
 import { type Paper, reportCss } from './report-css.ts'
+import { binSection } from './sections/bin.ts'
 import { cautionsSection } from './sections/cautions.ts'
 import type { SectionContext } from './sections/context.ts'
 import { heatSection } from './sections/heat.ts'
@@ -54,9 +55,7 @@ ${answerHtml(a, ctx)}
 ${monthlySection(a, ctx)}
 ${hourOfDaySection(a, ctx)}
 ${psychrometricSection(a, ctx)}
-${startDatesSection(a, ctx)}
-${spoilageSection(a, ctx)}
-${heatSection(a, ctx)}
+${a.bin ? binSection(a, ctx) : `${startDatesSection(a, ctx)}\n${spoilageSection(a, ctx)}\n${heatSection(a, ctx)}`}
 ${cautionsSection(a, ctx)}
 <footer>${escapeHtml(o.footer ?? 'Made by dryhours from the weather file and the options shown above. Check the numbers against local experience before you build or buy.')}</footer>
 </article>`

@@ -16,7 +16,7 @@ import {
   WeatherOptionError,
   WeatherOptionsInvalid,
   weatherOptionsFromTexts,
-} from '../weather/option-spec.ts'
+} from '../weather/option-texts.ts'
 
 /** Most weather files one comparison takes, unless the server says otherwise (the API's `maxSites`). */
 export const MAX_SITES = 8
@@ -59,6 +59,31 @@ function numberField(form: FormData, name: string, lo: number, hi: number, unit:
     throw new RangeError(`${name}: must be a number from ${lo} to ${hi} ${unit}, got ${JSON.stringify(t)}`)
   }
   return n
+}
+
+/**
+ * A list of numbers (e.g. airflows "0.5 1 2"): separated by spaces or semicolons, or by commas when the numbers
+ * use decimal points; decimal commas are read as points otherwise.
+ */
+function numberListField(
+  form: FormData,
+  name: string,
+  lo: number,
+  hi: number,
+  unit: string,
+): number[] | undefined {
+  const t = text(form, name)
+  if (t === undefined) return undefined
+  const parts = t.split(t.includes('.') ? /[;,\s]+/ : /[;\s]+/).filter((p) => p !== '')
+  return parts.map((p) => {
+    const n = Number(p.replace(',', '.'))
+    if (!(Number.isFinite(n) && n >= lo && n <= hi)) {
+      throw new RangeError(
+        `${name}: each value must be a number from ${lo} to ${hi} ${unit}, got ${JSON.stringify(p)}`,
+      )
+    }
+    return n
+  })
 }
 
 function choice<T extends string>(form: FormData, name: string, options: readonly T[], fallback: T): T {
@@ -168,6 +193,16 @@ export async function parseForm(
   if (area !== undefined && kind === 'solar-cabinet') method.collectorAreaM2PerTonne = area
   const setPoint = numberField(form, 'setPointC', 0, 120, '°C')
   if (setPoint !== undefined && kind === 'heated') method.setPointC = setPoint
+  if (kind === 'natural-air-bin') {
+    const airflows = numberListField(form, 'binAirflows', 0.01, 50, 'm³/min per t')
+    if (airflows !== undefined) method.airflowsM3PerMinPerTonne = airflows
+    const depth = numberField(form, 'binDepthM', 0.1, 30, 'm')
+    if (depth !== undefined) method.depthM = depth
+    const diameter = numberField(form, 'binDiameterM', 0.5, 50, 'm')
+    if (diameter !== undefined) method.binDiameterM = diameter
+    const rise = numberField(form, 'heatRiseK', 0, 30, 'K')
+    if (rise !== undefined) method.heatRiseK = rise
+  }
   const efficiency = numberField(form, 'heaterEfficiencyPct', 1, 100, '%')
   const fuel =
     text(form, 'fuel') === undefined ? undefined : choice<FuelId>(form, 'fuel', FUEL_IDS, 'propane')

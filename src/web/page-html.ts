@@ -202,6 +202,10 @@ ${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', place
 ${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade, solar tunnel)', v, { inputmode: 'decimal', methods: 'open-air shade tunnel' })}
 ${field('collectorAreaM2PerTonne', 'Collector area [m² per tonne] (solar cabinet)', v, { inputmode: 'decimal', placeholder: '100', methods: 'solar-cabinet' })}
 ${field('setPointC', 'Air set point [°C] (heated; empty = just enough)', v, { inputmode: 'decimal', methods: 'heated' })}
+${field('binAirflows', 'Airflows to compare [m³/min per tonne] (bin)', v, { placeholder: '0.5 1 1.5 2 3', methods: 'natural-air-bin', hint: 'one, or several separated by spaces; 1 m³/min per t is about 0.9 cfm/bu of corn' })}
+${field('binDepthM', 'Grain depth [m] (bin)', v, { inputmode: 'decimal', placeholder: '4', methods: 'natural-air-bin' })}
+${field('binDiameterM', 'Bin diameter [m] (bin)', v, { inputmode: 'decimal', placeholder: '9.1', methods: 'natural-air-bin' })}
+${field('heatRiseK', 'Heater rise [K] (bin; empty = no heater)', v, { inputmode: 'decimal', methods: 'natural-air-bin' })}
 </div>
 <details class="questions"><summary>Heater and fuel for supplemental heat</summary><div class="grid">
 <div class="field"><label for="f-fuel">Fuel</label><select id="f-fuel" name="fuel"><option value="">(heater default: propane)</option>${fuelOptions}</select></div>

@@ -27,7 +27,8 @@ export const MODEL_LIMITS: readonly string[] = [
 export function cautionsSection(a: Assessment, ctx: SectionContext): string {
   const productCautions = a.product.cautions
   const list = (xs: readonly string[]) => `<ul>${xs.map((x) => `<li>${escapeHtml(x)}</li>`).join('')}</ul>`
-  return `<section class="report-section cautions" id="${ctx.idPrefix}sec-cautions" data-section="cautions"><h2>Cautions</h2>${list([...productCautions, ...GENERAL_CAUTIONS])}</section>
+  const binCautions = a.bin?.cautions ?? []
+  return `<section class="report-section cautions" id="${ctx.idPrefix}sec-cautions" data-section="cautions"><h2>Cautions</h2>${list([...binCautions, ...productCautions, ...GENERAL_CAUTIONS])}</section>
 <section class="report-section limits" id="${ctx.idPrefix}sec-limits" data-section="limits"><h2>Limits of the model and assumptions</h2>${list(MODEL_LIMITS)}${a.assumptions.length ? `<h3>Assumptions of this assessment</h3>${assumptionsHtml(a)}` : ''}</section>`
 }
 

@@ -6,6 +6,7 @@ import type { Assessment } from '../assessment-view.ts'
 import { MONTH_LONG } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
 import { escapeHtml } from '../escape.ts'
+import { binAnswerSentences } from './bin.ts'
 import { finite, perMassFactor, perMassWords, type SectionContext } from './context.ts'
 import { fuelName } from './heat.ts'
 import { monthList, suitableMonths } from './monthly.ts'
@@ -69,7 +70,8 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     'Season',
     `start days ${a.season.start} to ${a.season.end}, every ${a.season.stepDays} day${a.season.stepDays === 1 ? '' : 's'} at ${String(a.season.startHourLocal).padStart(2, '0')}:00`,
   ])
-  rows.push(['Deadline', `${a.deadlineDays} days per batch (counted as failed after ${a.maxDays} days)`])
+  if (a.bin) rows.push(['Season in the bin', `${a.bin.seasonDays} days for the top layer to dry`])
+  else rows.push(['Deadline', `${a.deadlineDays} days per batch (counted as failed after ${a.maxDays} days)`])
   rows.push(['Units', u.system === 'us' ? 'US customary (°F, lb, gal)' : 'SI'])
   return rows
 }
@@ -83,6 +85,7 @@ export function headerHtml(a: Assessment, ctx: SectionContext): string {
 
 /** The answer in plain sentences, most important first. */
 export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
+  if (a.bin) return [...binAnswerSentences(a, a.bin, ctx), ...usableHourSentences(a)]
   const out: string[] = []
   const u = ctx.units
   const method = methodName(a)
@@ -101,18 +104,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     )
   }
   out.push(...spoilageSentences(a))
-  const top = a.monthly.reduce(
-    (x, y) => ((y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x),
-    a.monthly[0],
-  )
-  if (top && finite(top.usableHours.median) && a.method.kind !== 'heated') {
-    out.push(
-      `The air dries the product most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} usable hours ${median}` +
-        (typical || !finite(top.usableHours.p10)
-          ? '.'
-          : `, at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
-    )
-  }
+  if (a.method.kind !== 'heated') out.push(...usableHourSentences(a))
   const w = bestStartWindow(a)
   if (w) {
     out.push(
@@ -237,6 +229,26 @@ export function spoilageSentences(a: Assessment): string[] {
     )
   }
   return out
+}
+
+/** The month in which the air dries the product most hours (the air entering the bin, for a bin). */
+function usableHourSentences(a: Assessment): string[] {
+  const typical = a.site.typicalYear
+  const median = typical ? 'in this typical year' : 'in the median year'
+  const top = a.monthly.reduce(
+    (x, y) => ((y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x),
+    a.monthly[0],
+  )
+  if (!top || !finite(top.usableHours.median)) return []
+  const subject = a.bin
+    ? 'The air blown into the bin can dry the grain toward the target'
+    : 'The air dries the product'
+  return [
+    `${subject} most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} usable hours ${median}` +
+      (typical || !finite(top.usableHours.p10)
+        ? '.'
+        : `, at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
+  ]
 }
 
 export function answerHtml(a: Assessment, ctx: SectionContext): string {
