@@ -7,10 +7,9 @@ import type { CliIo } from '../../src/cli/command.ts'
 import { runCli } from '../../src/cli/main.ts'
 
 const readme = readFileSync('README.md', 'utf8')
-const section = readme.slice(
-  readme.indexOf('#### Will it dry before it spoils?'),
-  readme.indexOf('`dryhours compare a.epw b.epw'),
-)
+const sectionStart = readme.indexOf('#### Will it dry before it spoils?')
+// the section runs to the next heading
+const section = readme.slice(sectionStart, readme.indexOf('\n#', sectionStart + 1))
 const commands = section
   .split('\n')
   .filter((l) => l.startsWith('npx dryhours '))
