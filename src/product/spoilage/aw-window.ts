@@ -17,8 +17,6 @@
 import {
   checkHourStepper,
   checkStepInput,
-  checkStepValues,
-  type SpoilageAccumulator,
   type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
@@ -87,20 +85,6 @@ export function awWindowModel(spec: AwWindowSpec): SpoilageModel {
         hoursAtRisk: state.hoursAtRisk + h,
         hoursOutsideRange: state.hoursOutsideRange,
         hours: state.hours + input.hours,
-      }
-    },
-    accumulator(): SpoilageAccumulator {
-      // same arithmetic as `step`, without a state object per step
-      let measure = 0
-      let hours = 0
-      return {
-        add(productTempC, moistureWbPct, waterActivity, stepHours) {
-          checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
-          if (waterActivity >= spec.awLow && waterActivity <= spec.awHigh) measure += stepHours
-          hours += stepHours
-        },
-        measure: () => measure,
-        state: () => ({ measure, hoursAtRisk: measure, hoursOutsideRange: 0, hours }),
       }
     },
     hourStepper: () => new WindowHours(spec.awLow, spec.awHigh),

@@ -9,8 +9,6 @@
 import {
   checkHourStepper,
   checkStepInput,
-  checkStepValues,
-  type SpoilageAccumulator,
   type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
@@ -67,19 +65,6 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
       hoursAtRisk: state.hoursAtRisk + h,
       hoursOutsideRange: state.hoursOutsideRange,
       hours: state.hours + input.hours,
-    }
-  },
-  accumulator(): SpoilageAccumulator {
-    let measure = 0
-    let hours = 0
-    return {
-      add(productTempC, moistureWbPct, waterActivity, stepHours) {
-        checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
-        if (waterActivity >= FISH_BACTERIAL_AW && productTempC >= FISH_WARM_C) measure += stepHours
-        hours += stepHours
-      },
-      measure: () => measure,
-      state: () => ({ measure, hoursAtRisk: measure, hoursOutsideRange: 0, hours }),
     }
   },
   hourStepper: () => new WetWarmHours(),

@@ -30,8 +30,6 @@ import { moistureDbFromWbPct } from '../moisture-basis.ts'
 import {
   checkHourStepper,
   checkStepInput,
-  checkStepValues,
-  type SpoilageAccumulator,
   type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
@@ -186,34 +184,11 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         hours: state.hours + input.hours,
       }
     },
-    accumulator(): SpoilageAccumulator {
-      // θ is kept as such (no inversion of the curve per step); same arithmetic as `step` otherwise.
-      let theta = 0
-      let hoursAtRisk = 0
-      let hoursOutsideRange = 0
-      let hours = 0
-      const d = clamp(damagePct, DML_VALID_DAMAGE_PCT)
-      const damage = damageMultiplier(d)
-      const damageClamped = d !== damagePct
-      return {
-        add(productTempC, moistureWbPct, waterActivity, stepHours) {
-          checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
-          const t = clamp(productTempC, DML_VALID_TEMP_C)
-          const m = clamp(moistureWbPct, DML_VALID_MOISTURE_WB_PCT)
-          theta += stepHours / (temperatureMultiplier(t, m) * moistureMultiplier(m) * damage)
-          if (waterActivity >= atRiskAw) hoursAtRisk += stepHours
-          if (damageClamped || t !== productTempC || m !== moistureWbPct) hoursOutsideRange += stepHours
-          hours += stepHours
-        },
-        measure: () => dmlFromEquivalentHours(theta),
-        state: () => ({ measure: dmlFromEquivalentHours(theta), hoursAtRisk, hoursOutsideRange, hours }),
-      }
-    },
     hourStepper: () => new GrainDmlHours(damagePct, atRiskAw),
   }
 }
 
-/** The DML model fed hour by hour through fields (same arithmetic as the accumulator). */
+/** The DML model fed hour by hour through fields: θ kept as such (no inversion of the DML curve per hour), same arithmetic as `step` otherwise. */
 class GrainDmlHours implements SpoilageHourStepper {
   productTempC = Number.NaN
   moistureWbPct = Number.NaN
@@ -241,9 +216,12 @@ class GrainDmlHours implements SpoilageHourStepper {
     if (this.damageClamped || t !== this.productTempC || m !== this.moistureWbPct) this.hoursOutsideRange += 1
     this.hours += 1
   }
+  get measure(): number {
+    return dmlFromEquivalentHours(this.theta)
+  }
   state(): SpoilageState {
     return {
-      measure: dmlFromEquivalentHours(this.theta),
+      measure: this.measure,
       hoursAtRisk: this.hoursAtRisk,
       hoursOutsideRange: this.hoursOutsideRange,
       hours: this.hours,

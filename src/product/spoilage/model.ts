@@ -77,15 +77,10 @@ export interface SpoilageModel {
   cautions: string[]
   step(state: SpoilageState, input: SpoilageStepInput): SpoilageState
   /**
-   * Optional mutable fast path for long hour loops (the bin model steps the top layer every hour of many
-   * runs): same result as `step`, without a new state object per hour. {@link spoilageAccumulator} falls back
-   * to `step` when a model has none.
-   */
-  accumulator?(): SpoilageAccumulator
-  /**
-   * Optional form for the longest loops (every hour of every batch of an assessment): the inputs are set as
-   * fields and `stepHour()` adds one hour, so no number crosses a call V8 may not inline (it would box each
-   * one). Same arithmetic as `step`. {@link spoilageHourStepper} falls back to the accumulator.
+   * Optional form for the long hour loops (every hour of every batch of an assessment, the top layer of every
+   * bin run): the inputs are set as fields and `stepHour()` adds one hour, so no number crosses a call V8 may
+   * not inline (it would box each one) and no state object is made per hour. Same arithmetic as `step`.
+   * {@link spoilageHourStepper} falls back to `step` when a model has none.
    */
   hourStepper?(): SpoilageHourStepper
 }
@@ -100,22 +95,32 @@ export interface SpoilageHourStepper {
   waterActivity: number
   /** Adds one hour at the inputs set. */
   stepHour(): void
+  /** The accumulated measure so far (as `SpoilageState.measure`). */
+  readonly measure: number
   /** A snapshot of the state so far. */
   state(): SpoilageState
 }
 
-/** The hour stepper of `model`: its own, or its accumulator behind fields. */
+/** The hour stepper of `model`: its own, or `step` behind fields. */
 export function spoilageHourStepper(model: SpoilageModel): SpoilageHourStepper {
   if (model.hourStepper) return model.hourStepper()
-  const acc = spoilageAccumulator(model)
+  let current = initialSpoilageState()
   const stepper: SpoilageHourStepper = {
     productTempC: Number.NaN,
     moistureWbPct: Number.NaN,
     waterActivity: Number.NaN,
     stepHour() {
-      acc.add(stepper.productTempC, stepper.moistureWbPct, stepper.waterActivity, 1)
+      current = model.step(current, {
+        productTempC: stepper.productTempC,
+        moistureWbPct: stepper.moistureWbPct,
+        waterActivity: stepper.waterActivity,
+        hours: 1,
+      })
     },
-    state: () => acc.state(),
+    get measure() {
+      return current.measure
+    },
+    state: () => ({ ...current }),
   }
   return stepper
 }
@@ -132,29 +137,6 @@ export function checkHourStepper(s: SpoilageHourStepper): void {
   }
   if (!(s.waterActivity >= 0 && s.waterActivity <= 1)) {
     throw new RangeError(`spoilage step: waterActivity must be between 0 and 1, got ${s.waterActivity}`)
-  }
-}
-
-/** A mutable running state of one model: `add` one step at a time, read `measure()` or `state()` at any point. */
-export interface SpoilageAccumulator {
-  /** Adds one step; the inputs are those of {@link SpoilageStepInput}, checked the same way. */
-  add(productTempC: number, moistureWbPct: number, waterActivity: number, hours: number): void
-  /** The accumulated measure so far (as `SpoilageState.measure`). */
-  measure(): number
-  /** A snapshot of the state so far. */
-  state(): SpoilageState
-}
-
-/** A running accumulator for `model`: its own fast path, or `step` wrapped. */
-export function spoilageAccumulator(model: SpoilageModel): SpoilageAccumulator {
-  if (model.accumulator) return model.accumulator()
-  let current = initialSpoilageState()
-  return {
-    add(productTempC, moistureWbPct, waterActivity, hours) {
-      current = model.step(current, { productTempC, moistureWbPct, waterActivity, hours })
-    },
-    measure: () => current.measure,
-    state: () => ({ ...current }),
   }
 }
 

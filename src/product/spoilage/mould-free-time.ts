@@ -32,8 +32,6 @@
 import {
   checkHourStepper,
   checkStepInput,
-  checkStepValues,
-  type SpoilageAccumulator,
   type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
@@ -157,26 +155,6 @@ export function mouldFreeTimeModel(appliesTo: string[] = ['fruit', 'vegetable', 
             : 0),
         hoursOutsideRange: state.hoursOutsideRange + (clamped && Number.isFinite(days) ? input.hours : 0),
         hours: state.hours + input.hours,
-      }
-    },
-    accumulator(): SpoilageAccumulator {
-      // same arithmetic as `step`, without a state object per step
-      let measure = 0
-      let hoursAtRisk = 0
-      let hoursOutsideRange = 0
-      let hours = 0
-      return {
-        add(productTempC, moistureWbPct, waterActivity, stepHours) {
-          checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
-          if (waterActivity >= MFSL_NO_GROWTH_BELOW_AW && productTempC < MFSL_NO_GROWTH_AT_OR_ABOVE_C) {
-            measure += stepHours / 24 / mouldFreeDaysValue(productTempC, waterActivity)
-            if (mouldFreeClamped(productTempC, waterActivity)) hoursOutsideRange += stepHours
-            if (waterActivity >= MFSL_VALID_AW[0]) hoursAtRisk += stepHours
-          }
-          hours += stepHours
-        },
-        measure: () => measure,
-        state: () => ({ measure, hoursAtRisk, hoursOutsideRange, hours }),
       }
     },
     hourStepper: () => new MouldFreeHours(),

@@ -11,7 +11,6 @@ import {
   mouldFreeTimeModel,
   runSpoilage,
   type SpoilageStepInput,
-  spoilageAccumulator,
   spoilageHourStepper,
   spoilageModelFor,
   spoilageModels,
@@ -156,28 +155,7 @@ describe('model choice per product', () => {
   })
 })
 
-describe("accumulators (the batch loop's fast path)", () => {
-  it('give the same state as step, hour by hour, for the window, fish and mould-free models', () => {
-    for (const model of [COFFEE_OTA_WINDOW, COCOA_OTA_WINDOW, FISH_WET_WARM_RULE, mouldFreeTimeModel()]) {
-      expect(model.accumulator, model.id).toBeDefined()
-      const fast = spoilageAccumulator(model)
-      let state = initialSpoilageState()
-      for (let h = 0; h < 500; h++) {
-        const tC = 24 + 22 * Math.sin(h / 6) // 2 … 46 °C: across the 42.5 °C cut and the 10 °C fish limit
-        const m = 70 - h / 10
-        const aw = 0.99 - h / 600 // 0.99 → 0.16: through every window
-        state = model.step(state, { productTempC: tC, moistureWbPct: m, waterActivity: aw, hours: 1 })
-        fast.add(tC, m, aw, 1)
-      }
-      const s = fast.state()
-      expect(s.measure, model.id).toBeCloseTo(state.measure, 12)
-      expect(s.hoursAtRisk, model.id).toBe(state.hoursAtRisk)
-      expect(s.hoursOutsideRange, model.id).toBe(state.hoursOutsideRange)
-      expect(s.hours).toBe(500)
-      expect(() => fast.add(20, 20, 1.2, 1)).toThrow(/waterActivity/)
-    }
-  })
-
+describe("hour steppers (the batch loop's and the bin's fast path)", () => {
   it('hour steppers (inputs as fields) give the same state as step for every model', () => {
     for (const model of [...spoilageModels(), grainDryMatterLossModel({ damagePct: 12 })]) {
       expect(model.hourStepper, model.id).toBeDefined()
