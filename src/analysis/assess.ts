@@ -37,6 +37,7 @@ import { psychrometricSummary } from './psychrometric.ts'
 import { assessmentSpoilage, spoilageSetup, summariseSpoilage } from './spoilage.ts'
 import {
   bestStartWindows,
+  knownOutcomes,
   runStart,
   type StartContext,
   type StartOutcome,
@@ -114,17 +115,20 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       heat,
       psychrometric: psychrometric(),
       bin,
+      unknownBatches: { count: 0, missingHours: 0 },
     })
   }
-  monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
+  const monthlyUnknown = monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
   const starts = startDatesStage(ctx, calendar.years, run)
-  const heat = heatSummary(starts.table.outcomes, backup, run, ctx)
+  const known = knownOutcomes(starts.table.outcomes)
+  const heat = heatSummary(known, backup, run, ctx)
+  const unknown = [...monthlyUnknown, ...starts.table.outcomes.filter((o) => o.unknown)]
   const spoilage =
     ctx.spoilage === undefined
       ? null
       : assessmentSpoilage(
           ctx.spoilage.model,
-          starts.table.outcomes.map((o) => o.spoilage),
+          known.map((o) => o.spoilage),
         )
   return assembleAssessment(series, run, {
     primary,
@@ -133,6 +137,10 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     heat,
     psychrometric: psychrometric(),
     spoilage,
+    unknownBatches: {
+      count: unknown.length,
+      missingHours: unknown.reduce((sum, o) => sum + o.missingHours, 0),
+    },
   })
 }
 
@@ -244,13 +252,18 @@ export function monthlyHeatStage(
   monthly: MonthlyRow[],
   years: number[],
   run: ResolvedAssessOptions,
-): void {
+): StartOutcome[] {
+  const unknown: StartOutcome[] = []
   for (let month = 1; month <= 12; month++) {
     const outcomes: StartOutcome[] = []
     for (const day of MONTHLY_HEAT_START_DAYS) {
       for (const year of years) {
         const index = startIndexFor(ctx, year, { month, day })
-        if (index !== null) outcomes.push(runStart(ctx, index))
+        if (index === null) continue
+        const o = runStart(ctx, index)
+        // a batch that ran into missing weather has no known outcome: left out, not counted as slow
+        if (o.unknown) unknown.push(o)
+        else outcomes.push(o)
       }
     }
     const row = monthly[month - 1]
@@ -270,6 +283,7 @@ export function monthlyHeatStage(
           )
     run.onProgress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
+  return unknown
 }
 
 export interface StartDates {

@@ -1,16 +1,35 @@
 /**
  * @module drying/batch
- * One batch, hour by hour, over precomputed {@link HourlyConditions} (docs/model.md §7): the moisture of
- * each hour by drying/batch-moisture.ts (drying, rewetting, rain, paused and missing hours), the product
- * family's spoilage model by drying/batch-spoilage.ts when `options.spoilage` is given.
+ * One batch, hour by hour, over precomputed {@link HourlyConditions} (docs/model.md §7):
+ * - drying (M above the desorption equilibrium): thin-layer step by equivalent time
+ *   (drying/product-response.ts), never removing more than the hour's constant-rate limit (wet-surface
+ *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air); an exposed product's
+ *   temperature follows its surface balance between the wet-surface and the no-evaporation temperature by the
+ *   share of the wet-surface rate it evaporates ({@link surfaceBalancedDrop});
+ * - rewetting (M below the adsorption equilibrium): M → Me_ads − (Me_ads − M)·exp(−f·k·1 h), f the profile's
+ *   rewetting rate factor (Lewis form; stated simplification); an exposed product never takes up more than the
+ *   vapour the air delivers to its surface in the hour ({@link vaporUptakeLimitDb});
+ * - rain on an exposed product: rewetting toward the equilibrium at 99.5 % RH, counted as rain exposure;
+ *   that water comes from rain, not from the air;
+ * - paused (covered, fans off) and missing hours: no change; a batch that meets missing hours has an unknown
+ *   outcome (`outcomeUnknown`), which the assessment reports as such, never as a slow batch.
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of docs/model.md §8.
+ * With `options.spoilage`, the product family's spoilage model is stepped every hour of the batch (paused and
+ * covered hours included) with the hour's product temperature (the surface-balanced one in drying hours of
+ * exposed methods) and the moisture at the start of the hour (drying/batch-spoilage.ts).
  */
-import { BatchMoisture } from './batch-moisture.ts'
+
+import { surfaceBalancedDrop } from '../product/stepping.ts'
 import { type BatchSpoilageResult, type BatchSpoilageSetup, BatchSpoilageTrack } from './batch-spoilage.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'
-import type { ProductResponse } from './product-response.ts'
+import {
+  EMC_RH_CAP_PCT,
+  firstOrderRateConstant,
+  type ProductResponse,
+  stepMoistureRatio,
+} from './product-response.ts'
 import { HourStatus } from './usable-hour.ts'
 
 export type { BatchSpoilageResult, BatchSpoilageSetup } from './batch-spoilage.ts'
@@ -26,7 +45,7 @@ export interface BatchOptions {
   wrap?: boolean
   /** Record the moisture after every hour (tests, single-batch reports). */
   recordTrace?: boolean
-  /** Step this spoilage model along the batch (the primary method's hours only; see the module comment). */
+  /** Step this spoilage model along the batch (see the module comment). */
   spoilage?: BatchSpoilageSetup
 }
 
@@ -41,7 +60,14 @@ export interface BatchResult {
   finalDb: number
   rewettingHours: number
   rainExposureHours: number
+  /** Hours without weather the batch ran into before it ended (the product is held unchanged through them). */
   missingHours: number
+  /**
+   * True when the batch ran into hours without weather before it reached its target or its maximum duration:
+   * what the product did in them is not known, so neither is the batch's outcome (reported as unknown, not
+   * as slow).
+   */
+  outcomeUnknown: boolean
   /** Hours in which the backup (heated) air was used. */
   backupHours: number
   /** Heat from the heater into the air [kWh per tonne fresh]. */
@@ -54,6 +80,11 @@ export interface BatchResult {
   waterFromRainDb: number
   /** Moisture [kg/kg db] after each hour, when recordTrace. */
   trace?: Float64Array
+  /**
+   * Product (surface) temperature [°C] in each hour, when recordTrace: from its surface balance in drying hours
+   * of exposed methods, the conditions' product temperature in other hours, NaN in covered and missing hours.
+   */
+  productTrace?: Float64Array
   /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
   usedBackup?: Uint8Array
   /** The spoilage model's outcome, when `options.spoilage` was given. */
@@ -81,7 +112,7 @@ export function simulateBatch(
   options: BatchOptions,
   backup?: HourlyConditions,
 ): BatchResult {
-  const { startIndex, maxHours, targetDb } = options
+  const { startIndex, maxHours, initialDb, targetDb } = options
   const n = primary.hours
   checkBatchOptions(options, n)
   const wrap = options.wrap === true
@@ -89,9 +120,22 @@ export function simulateBatch(
   backup?.ensure(startIndex, maxHours, wrap)
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
+  const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const track = options.spoilage === undefined ? undefined : new BatchSpoilageTrack(options.spoilage)
-  const batch = new BatchMoisture(product, options.initialDb)
+  const ts = product.thompsonTimeScale
+  // the caps are per kg of the dry matter of the conditions' initial moisture; this batch's dry matter per
+  // tonne fresh (or per m²) is 1/(1 + initialDb): rescale so the water per kg of air is what the air carries
+  const capScalePrimary = (1 + initialDb) / (1 + primary.capInitialDb)
+  const capScaleBackup = backup === undefined ? 1 : (1 + initialDb) / (1 + backup.capInitialDb)
+  let m = initialDb
+  let rewettingHours = 0
+  let rainExposureHours = 0
+  let missingHours = 0
   let backupHours = 0
+  let heater = 0
+  let solar = 0
+  let toAir = 0
+  let fromRain = 0
   let hoursToTarget = Number.NaN
   let simulated = 0
   let ranOut = false
@@ -115,14 +159,46 @@ export function simulateBatch(
       backupHours++
       if (usedBackup) usedBackup[h] = 1
     }
+    const mode = c.mode[i]
+    const mStart = m
+    // the product's temperature in the hour: the conditions' (it evaporates nothing), or on its surface balance
+    let tHour = c.productC[i]
+    if (mode === HourMode.missing) {
+      missingHours++
+    } else if (mode !== HourMode.paused) {
+      heater += c.heaterKwhPerTonne[i]
+      solar += c.solarKwhPerTonne[i]
+      if (mode === HourMode.rainExposed) {
+        rainExposureHours++
+        const next = rainWettedDb(c, i, product, m)
+        fromRain += next - m
+        m = next
+      } else {
+        const capScale = c === primary ? capScalePrimary : capScaleBackup
+        if (m > c.emcDesorptionDb[i]) {
+          const cap = c.capDbPerH[i] * capScale
+          const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          if (c.surfaceBalance && cap > 0) tHour -= (drop / cap) * (tHour - c.productWetC[i])
+          if (drop > 0) {
+            m -= drop
+            toAir += drop
+          }
+        } else if (m < c.emcAdsorptionDb[i]) {
+          rewettingHours++
+          const next = rewettedDb(c, i, product, m, capScale)
+          toAir -= next - m
+          m = next
+        }
+      }
+    }
+    if (trace) trace[h] = m
+    if (productTrace && mode !== HourMode.paused) productTrace[h] = tHour
     if (track !== undefined) {
-      track.productC = c.productC[i]
-      track.moistureDb = batch.moistureDb
+      track.productC = tHour
+      track.moistureDb = mStart
       track.stepHour()
     }
-    batch.stepHour(c, i)
-    if (trace) trace[h] = batch.moistureDb
-    if (batch.moistureDb <= targetDb) {
+    if (m <= targetDb) {
       hoursToTarget = h + 1
       break
     }
@@ -132,17 +208,127 @@ export function simulateBatch(
     hoursToTarget,
     hoursSimulated: simulated,
     ranOutOfData: ranOut,
-    finalDb: batch.moistureDb,
-    rewettingHours: batch.rewettingHours,
-    rainExposureHours: batch.rainExposureHours,
-    missingHours: batch.missingHours,
+    finalDb: m,
+    rewettingHours,
+    rainExposureHours,
+    missingHours,
+    outcomeUnknown: missingHours > 0,
     backupHours,
-    heaterKwhPerTonne: batch.heaterKwhPerTonne,
-    solarKwhPerTonne: batch.solarKwhPerTonne,
-    waterToAirDb: batch.waterToAirDb,
-    waterFromRainDb: batch.waterFromRainDb,
+    heaterKwhPerTonne: heater,
+    solarKwhPerTonne: solar,
+    waterToAirDb: toAir,
+    waterFromRainDb: fromRain,
     trace,
+    productTrace,
     usedBackup,
     spoilage: track?.result(),
   }
+}
+
+/**
+ * Water [kg/kg db] removed in hour `i` from moisture `m` above the desorption equilibrium: the falling-rate step,
+ * never more than the hour's constant-rate limit `cap`; for exposed methods the product sits on its surface
+ * balance between the wet-surface and the no-evaporation ends ({@link surfaceBalancedDrop}).
+ */
+function dryingDropDb(
+  c: HourlyConditions,
+  i: number,
+  m: number,
+  cap: number,
+  initialDb: number,
+  ts: number,
+): number {
+  const dropDry = fallingRateDrop(
+    m,
+    c.emcDesorptionDb[i],
+    c.decayPerHour[i],
+    c.rateK[i],
+    c.rateN[i],
+    initialDb,
+    ts,
+  )
+  if (!c.surfaceBalance) {
+    // (not Math.min: a NaN limit leaves the step as it is, as it always has)
+    if (dropDry > cap) return cap
+    return dropDry
+  }
+  const dropWet = fallingRateDrop(
+    m,
+    c.emcWetDb[i],
+    c.decayWetPerHour[i],
+    c.rateKWet[i],
+    c.rateNWet[i],
+    initialDb,
+    ts,
+  )
+  return surfaceBalancedDrop(dropDry, dropWet, cap)
+}
+
+/**
+ * Moisture [kg/kg db] after hour `i` of a product at `m` below the adsorption equilibrium: first order toward
+ * it at the rewetting rate, and for an exposed product never more than the vapour the air delivers
+ * ({@link vaporUptakeLimitDb}, × `capScale` for the batch's dry matter).
+ */
+function rewettedDb(
+  c: HourlyConditions,
+  i: number,
+  product: ProductResponse,
+  m: number,
+  capScale: number,
+): number {
+  const meAds = c.emcAdsorptionDb[i]
+  const next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
+  if (!c.surfaceBalance) return next
+  const limit = vaporUptakeLimitDb(c, i, product, m) * capScale
+  return next - m > limit ? m + Math.max(0, limit) : next
+}
+
+/** Moisture [kg/kg db] after a rain-exposed hour: toward the equilibrium at the highest RH evaluated (the rain-wetted surface). */
+function rainWettedDb(c: HourlyConditions, i: number, product: ProductResponse, m: number): number {
+  const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
+  return meWet > m ? meWet - (meWet - m) * c.rewetDecayPerHour[i] : m
+}
+
+/**
+ * Most water [kg/kg db] an exposed product at moisture `m` can take up from the air in hour `i`: the vapour the
+ * air delivers to its surface through the conductance of the wet-surface balance, g·(ea − aw·es(T)), at the
+ * product's water activity aw (its isotherm at `m`) and the temperature of a surface that exchanges no latent
+ * heat; the heat released by the uptake warms the surface, so the true uptake is less (an upper bound). The
+ * first-order approach to the adsorption equilibrium alone takes up water in proportion to that equilibrium,
+ * which grows without bound as the surface RH nears 100 % (a radiatively cooled product at dawn). +Infinity
+ * when the hour has no conductance (no limit known).
+ */
+function vaporUptakeLimitDb(c: HourlyConditions, i: number, product: ProductResponse, m: number): number {
+  const air = c.vaporUptakeAirDbPerH[i]
+  if (!(air >= 0)) return Number.POSITIVE_INFINITY
+  const aw = product.erhPct(c.productC[i], m) / 100
+  return air - aw * c.vaporUptakeSurfaceDbPerH[i]
+}
+
+/**
+ * Water [kg/kg db] a falling-rate step of one hour removes from moisture `m` toward equilibrium `me` with the
+ * hour's step parameters (first order: exp(−k) as `decay`; Page and Thompson: equivalent time from the batch's
+ * `initialDb`); 0 when m is not above me.
+ */
+function fallingRateDrop(
+  m: number,
+  me: number,
+  decay: number,
+  k: number,
+  nExp: number,
+  initialDb: number,
+  ts: number,
+): number {
+  if (!(m > me)) return 0
+  let next: number
+  if (!Number.isNaN(decay)) {
+    // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
+    next = me + (m - me) * decay
+  } else if (initialDb > me) {
+    const mr = (m - me) / (initialDb - me)
+    next = me + stepMoistureRatio(mr, k, nExp, 1, ts) * (initialDb - me)
+  } else {
+    next = me + (m - me) * Math.exp(-firstOrderRateConstant(k, nExp, ts))
+  }
+  return m - next
 }

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
-import { assessmentText } from '../../src/cli/commands/assess.ts'
+import { assessmentText } from '../../src/cli/assessment-text.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import { sectionContext } from '../../src/report/report-html.ts'
 import { answerSentences } from '../../src/report/sections/summary.ts'
@@ -25,10 +25,16 @@ describe('spoilage along the batches of an assessment', () => {
     const d = dry.spoilage?.season
     const h = humid.spoilage?.season
     expect(d?.modelId).toBe('mould-free-time')
-    expect(h?.probability as number).toBeGreaterThan(d?.probability as number)
-    expect(h?.shareOfLimitUsed.median as number).toBeGreaterThan(d?.shareOfLimitUsed.median as number)
-    // the contrast is large, not a rounding difference (measured: about 0.2 dry, 0.95 humid)
-    expect((h?.probability as number) - (d?.probability as number)).toBeGreaterThan(0.4)
+    // Measured with the calibrated kinetics and the water-activity dry targets: every batch at both sites uses
+    // up its mould-free time before it is dry (probability 1 and 1), so the share of years cannot tell the sites
+    // apart; the share of the mould-free time used and the hours at risk do (median 1.56 dry, 3.37 humid; hours
+    // at risk 178 and 405).
+    expect(h?.probability as number).toBeGreaterThanOrEqual(d?.probability as number)
+    const dShare = d?.shareOfLimitUsed
+    const hShare = h?.shareOfLimitUsed
+    expect(hShare?.median as number).toBeGreaterThan(1.5 * (dShare?.median as number))
+    expect(hShare?.p90 as number).toBeGreaterThan(dShare?.p90 as number)
+    expect(h?.hoursAtRisk.median as number).toBeGreaterThan(1.5 * (d?.hoursAtRisk.median as number))
   })
 
   it('counts per start date and month what it sums over the season', () => {

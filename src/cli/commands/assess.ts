@@ -12,6 +12,7 @@ import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import { assessmentText } from '../assessment-text.ts'
 import { BIN_FLAGS_HELP, BIN_PARSE_OPTIONS, setBinOptions } from '../bin.ts'
 import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
 import {
@@ -22,12 +23,13 @@ import {
   writeReportOutput,
 } from '../report-output.ts'
 import { WEATHER_FLAGS_HELP, WEATHER_PARSE_OPTIONS, weatherOptionsFromCli } from '../weather-flags.ts'
-import { assessmentText } from './assess-text.ts'
 
 export const ENGINE_OPTIONS_HELP = `Product and method:
   --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
   --method <kind>           ${DRYING_METHOD_KINDS.join(' | ')}
   --target-wb <%>  --initial-wb <%>  --thickness <mm>
+  --storage-temp <°C>  store temperature at which the dried product's water activity is judged (default 25);
+                 without --target-wb the target is the moisture of the product's safe water activity there
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
@@ -36,7 +38,7 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
 ${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
-                  API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
+                  API's JSON options (e.g. --param surfaceAreaPerTrayArea=1.2); docs/model.md §4 lists them
 Season and batches:
   --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
                  every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
@@ -73,6 +75,7 @@ export const ENGINE_PARSE_OPTIONS = {
   product: { type: 'string' },
   method: { type: 'string' },
   'target-wb': { type: 'string' },
+  'storage-temp': { type: 'string' },
   'initial-wb': { type: 'string' },
   thickness: { type: 'string' },
   absorptivity: { type: 'string' },
@@ -221,6 +224,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     method: method as AssessOptions['method'],
     thresholds,
     targetWbPct: num('target-wb'),
+    storageTempC: num('storage-temp'),
     initialWbPct: num('initial-wb'),
     thicknessMm: num('thickness'),
     seasonStart: str('start'),
@@ -263,8 +267,6 @@ export function progressPrinter(io: CliIo, label: string): (p: AssessProgress) =
     io.stderr(`${label}: ${p.stage} ${p.done}/${p.total}\n`)
   }
 }
-
-export { assessmentText, spoilageText } from './assess-text.ts'
 
 /** The assessment in the chosen format (html and csv: the report's renderings). */
 function renderAssessment(a: Assessment, o: ReportOutputChoice, file: string): string {

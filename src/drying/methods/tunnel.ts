@@ -203,12 +203,12 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
       },
     ]
   },
-  prepare(m, { solar, thresholds, loadingKgPerM2 }) {
+  prepare(m, { solar, thresholds, product }) {
     const cover = coverOf(m)
     const table = transmittanceTable(cover)
     const diffuseTau = tableTransmittance(table, diffuseEquivalentAnglesDeg(0).skyDeg)
     const collectorAreaM2 = m.collectorLengthM * m.widthM
-    const tonnes = tunnelTonnes(m, loadingKgPerM2)
+    const tonnes = tunnelTonnes(m, product.loadingKgPerM2)
     const hc = flatPlateHeatTransferCoefficientWm2K(m.airSpeedOverProductMs)
     const { altitudeDeg, raWm2 } = solar
     return (hour: MethodHour): void => {

@@ -30,8 +30,10 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
       'years not reachable even with heat',
       'spoiled before dry [%]',
       'hours at risk of spoilage, median',
+      'years unknown (ran into hours without weather)',
+      'hours without weather in those batches',
     ],
-    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
     rows: a.startDates.map((s) => [
       s.start,
       s.years,
@@ -50,6 +52,8 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
       s.yearsNotReachable,
       finite(s.spoilage?.probability) ? round((s.spoilage?.probability as number) * 100, 1) : null,
       s.spoilage?.hoursAtRisk.median ?? null,
+      s.yearsUnknown,
+      s.missingWeatherHours,
     ]),
   }
 }

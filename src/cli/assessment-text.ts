@@ -1,19 +1,23 @@
 /**
- * @module cli/commands/assess-text
- * The readable (text) summary of an assessment that `dryhours assess` prints by default: the spoilage
- * before dry, usable hours per month, then the start windows, start dates and heat of a batch method or the
- * natural-air bin's tables.
+ * @module cli/assessment-text
+ * The readable summary of an assessment that `dryhours assess` prints: the spoilage before dry, the monthly table, the start windows and
+ * start-date table with the heat of a batch method (or the bin's answer), the warnings and cautions.
  */
-import type { Assessment } from '../../analysis/assessment.ts'
-import { FUELS } from '../../drying/fuels.ts'
-import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
-import { binText } from '../bin.ts'
+import type { Assessment } from '../analysis/assessment.ts'
+import { FUELS } from '../drying/fuels.ts'
+import { HOUR_STATUS_NAMES } from '../drying/usable-hour.ts'
+import { binText } from './bin.ts'
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
 const f1 = (x: number | null): string => (x === null ? '–' : x.toFixed(1))
 const pct = (x: number | null | undefined): string =>
   x === null || x === undefined ? '–' : (100 * x).toFixed(0)
+/** A start row's batches with unknown outcome (they met hours without weather), when there are any. */
+const unknownNote = (r: Assessment['startDates'][number]): string =>
+  r.yearsUnknown > 0
+    ? `  + ${r.yearsUnknown} year${r.yearsUnknown === 1 ? '' : 's'} unknown (${r.missingWeatherHours} h without weather)`
+    : ''
 
 /** The spoilage lines of the text summary: the model, its source and limit, and the season's share. */
 export function spoilageText(a: Assessment): string[] {
@@ -51,7 +55,7 @@ function batchesText(a: Assessment): string[] {
   a.startDates.forEach((r, i) => {
     if (i % every !== 0) return
     out.push(
-      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${`${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})`.padEnd(25)}  ${pct(r.spoilage?.probability).padStart(14)}  ${f0(r.spoilage?.hoursAtRisk.median ?? null).padStart(9)}`,
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${`${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})`.padEnd(25)}  ${pct(r.spoilage?.probability).padStart(14)}  ${f0(r.spoilage?.hoursAtRisk.median ?? null).padStart(9)}${unknownNote(r)}`,
     )
   })
   const h = a.heat
@@ -79,6 +83,7 @@ export function assessmentText(a: Assessment): string {
   out.push(
     `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
   )
+  out.push(`dry means ${p.dryTarget.sentence}`)
   out.push(
     `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
   )
