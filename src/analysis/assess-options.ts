@@ -65,6 +65,11 @@ export interface AssessOptions {
   fuelPrices?: Partial<Record<FuelId, number>>
   /** The currency of the prices and costs as the user names it (e.g. `EUR`, `US$`); none when absent. */
   currency?: string
+  /**
+   * false: skip the spoilage models (every `spoilage` of the assessment is then null). Default true. For
+   * benchmarks that time the engine without them; every entry point leaves it on.
+   */
+  spoilage?: boolean
   onProgress?: (p: AssessProgress) => void
 }
 
@@ -105,6 +110,8 @@ export interface ResolvedAssessOptions {
   fuelPrices?: Partial<Record<FuelId, number>>
   /** The currency of prices and costs as given, or null (costs then in the unnamed unit of the example prices). */
   currency: string | null
+  /** Step the product family's spoilage model along every batch. */
+  spoilage: boolean
   onProgress?: (p: AssessProgress) => void
 }
 
@@ -149,6 +156,7 @@ export function resolveAssessOptions(options: AssessOptions): ResolvedAssessOpti
     fuel: options.fuel,
     fuelPrices: options.fuelPrices,
     currency: checkCurrency(options.currency),
+    spoilage: options.spoilage !== false,
     onProgress: options.onProgress,
   }
 }

@@ -63,11 +63,11 @@ export function comparisonText(c: Comparison): string {
   const label = (s: Comparison['sites'][number]) => `${s.site}${s.typicalYear ? ' (typical year)' : ''}`
   const width = Math.max(4, ...c.sites.map((s) => label(s).length))
   out.push(
-    `rank  ${'site'.padEnd(width)}  P(within deadline)  usable h P10 (median)  heat kWh/t  best start window  placed by`,
+    `rank  ${'site'.padEnd(width)}  P(within deadline)  usable h P10 (median)  heat kWh/t  spoils first  best start window  placed by`,
   )
   for (const s of c.sites) {
     out.push(
-      `${String(s.rank).padStart(4)}  ${label(s).padEnd(width)}  ${(s.meanProbabilityWithinDeadline === null ? '–' : `${(100 * s.meanProbabilityWithinDeadline).toFixed(0)} %`).padStart(18)}  ${`${f(s.usableHoursInSeasonP10)} (${f(s.usableHoursInSeasonMedian)})`.padStart(21)}  ${f(s.medianHeatKwhPerTonne).padStart(10)}  ${(s.bestStartWindow ?? '–').padEnd(17)}  ${s.decidedBy ?? ''}`,
+      `${String(s.rank).padStart(4)}  ${label(s).padEnd(width)}  ${(s.meanProbabilityWithinDeadline === null ? '–' : `${(100 * s.meanProbabilityWithinDeadline).toFixed(0)} %`).padStart(18)}  ${`${f(s.usableHoursInSeasonP10)} (${f(s.usableHoursInSeasonMedian)})`.padStart(21)}  ${f(s.medianHeatKwhPerTonne).padStart(10)}  ${(s.spoilageProbability === null || s.spoilageProbability === undefined ? '–' : `${(100 * s.spoilageProbability).toFixed(0)} %`).padStart(12)}  ${(s.bestStartWindow ?? '–').padEnd(17)}  ${s.decidedBy ?? ''}`,
     )
   }
   for (const caveat of c.caveats) out.push(`Caveat: ${caveat}`)

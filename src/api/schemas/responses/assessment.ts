@@ -25,6 +25,7 @@ import {
   text,
   texts,
 } from './common.ts'
+import { assessmentSpoilageSchema, spoilageSummarySchema } from './spoilage.ts'
 
 /** What an assessment shares with the comparisons: the method kind, the site, the product, the method, the season. */
 export const assessmentParts = once(() => {
@@ -137,6 +138,7 @@ const seasonTableSchemas = once(() => {
       'heat to reach the target by the deadline, batches from the 1st and 16th [kWh per tonne fresh]',
     ),
     medianDaysToTarget: numOrNull('median days to target of those batches [days]'),
+    spoilage: spoilageSummarySchema(),
     yearsWithData: count('years with enough data in the month'),
   })
 
@@ -163,6 +165,7 @@ const seasonTableSchemas = once(() => {
     solarHeatKwhPerTonne: medianP90('kWh per tonne fresh', 'across years').describe(
       'solar collector heat used by the method alone [kWh per tonne fresh]',
     ),
+    spoilage: spoilageSummarySchema(),
   })
   return { monthlyRowSchema, startDateRowSchema }
 })
@@ -315,6 +318,7 @@ export const assessmentResponseSchema = once(() => {
       ),
       warnings: texts('what limits the answer, in words'),
       coverage: coverageSchema(),
+      spoilage: assessmentSpoilageSchema(),
       bin: binAssessmentSchema(),
     })
     .describe('the seasonal assessment of one site, one product and one method')

@@ -144,6 +144,7 @@ export const comparisonResponseSchema = once(() => {
             ),
             medianHeatKwhPerTonne: numOrNull('median supplemental heat [kWh per tonne fresh]'),
             bestStartWindow: z.string().nullable().describe("the best start window, 'MM-DD to MM-DD'"),
+            spoilageProbability: share("share of the season's batches that spoiled before they were dry"),
             binSeasonMinimumAirflowM3PerMinPerTonne: z
               .number()
               .nullable()
