@@ -167,6 +167,27 @@ function figures(a: Assessment, driedKg: number): MethodFigures {
   }
 }
 
+/**
+ * The recommendation when no method meets the criterion: which method comes closest, said with both of
+ * its shares (a method that finishes in time but spoils first is not "the most reliable"): the least
+ * spoilage among those that finish in time often enough, else the most years finishing in time.
+ */
+function noMethodText(methods: MethodFigures[], deadlineDays: number, spoilageAssessed: boolean): string {
+  const head = `No method meets the criterion: none finishes within ${deadlineDays} days by itself in ${pct(GOOD_START_PROBABILITY)} of years${spoilageAssessed ? ' without spoiling' : ''}`
+  const known = methods.filter((m) => m.probabilityWithinDeadline !== null)
+  if (known.length === 0) return `${head}.`
+  const inTime = known.filter((m) => (m.probabilityWithinDeadline as number) >= GOOD_START_PROBABILITY)
+  const closest = (inTime.length > 0 ? inTime : known).sort(
+    (x, y) =>
+      (inTime.length > 0 ? (x.spoilageProbability ?? 0) - (y.spoilageProbability ?? 0) : 0) ||
+      (y.probabilityWithinDeadline as number) - (x.probabilityWithinDeadline as number) ||
+      (x.spoilageProbability ?? 0) - (y.spoilageProbability ?? 0),
+  )[0]
+  const spoils =
+    closest.spoilageProbability === null ? '' : `, spoils first in ${ofYears(closest.spoilageProbability)}`
+  return `${head}; the closest is ${closest.label}: it finishes in time in ${ofYears(closest.probabilityWithinDeadline as number)}${spoils}.`
+}
+
 function recommend(
   methods: MethodFigures[],
   deadlineDays: number,
@@ -186,18 +207,7 @@ function recommend(
   const cost = (m: MethodFigures) => m.costPerKgDried ?? Number.POSITIVE_INFINITY
   const days = (m: MethodFigures) => m.daysToTarget.median ?? Number.POSITIVE_INFINITY
   if (qualifies.length === 0) {
-    const best = [...methods].sort(
-      (x, y) => (y.probabilityWithinDeadline ?? -1) - (x.probabilityWithinDeadline ?? -1),
-    )[0]
-    const bestText =
-      best && best.probabilityWithinDeadline !== null
-        ? `; the most reliable is ${best.label} (${ofYears(best.probabilityWithinDeadline)})`
-        : ''
-    return {
-      kind: null,
-      text: `No method meets the criterion: none finishes within ${deadlineDays} days by itself in ${pct(GOOD_START_PROBABILITY)} of years${spoilageAssessed ? ' without spoiling' : ''}${bestText}.`,
-      criterion,
-    }
+    return { kind: null, text: noMethodText(methods, deadlineDays, spoilageAssessed), criterion }
   }
   const chosen = [...qualifies].sort((x, y) => cost(x) - cost(y) || days(x) - days(y))[0]
   const what = chosen.bin ? 'fuel and fan electricity' : 'fuel'

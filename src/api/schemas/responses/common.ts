@@ -56,6 +56,7 @@ export const medianP90 = (unit: string, of = 'across years') =>
  * test then names it).
  */
 const UNIT_SUFFIXES: [string, string][] = [
+  ['KgPerS', 'kg of air per second'],
   ['M3PerMinPerTonne', 'm³/min per tonne as loaded'],
   ['KgPerSPerTonne', 'kg of air per second per tonne of fresh product'],
   ['KgPerSPerM2', 'kg of air per second per m² of collector'],
@@ -82,6 +83,11 @@ const UNITLESS: Record<string, string> = {
   surfaceAreaPerTrayArea: 'm² of product surface per m² of tray',
   fanEfficiency: '0–1',
   emissivity: '0–1',
+  coverRefractiveIndex: 'dimensionless',
+  coverExtinctionThickness: 'extinction coefficient × thickness, dimensionless',
+  absorberAbsorptance: '0–1',
+  collectorEfficiencyFactor: '0–1',
+  productAbsorptivity: '0–1',
   layers: 'count',
 }
 
