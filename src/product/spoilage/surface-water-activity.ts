@@ -64,8 +64,8 @@ export function surfaceWaterActivity(
 ): number {
   if (exchange === SurfaceExchange.wetted) return 1
   if (exchange !== SurfaceExchange.air || !(surfaceRh >= 0)) return pieceAw
-  const rh = surfaceRh > 1 ? 1 : surfaceRh
-  const w = wetShare > 1 ? 1 : wetShare > 0 ? wetShare : 0
+  const rh = Math.min(surfaceRh, 1)
+  const w = wetShare > 0 ? Math.min(wetShare, 1) : 0
   const aw = w + (1 - w) * rh
   // a drying product's surface is not wetter than its interior
   return w > 0 && aw > pieceAw ? pieceAw : aw
