@@ -45,6 +45,17 @@ export const assessmentSpoilageSchema = once(() =>
         limitSource: text('where the limit comes from'),
         atRiskWhen: text('when an hour counts as at risk'),
         validity: text('where the model holds'),
+        waterActivity: z
+          .strictObject({
+            of: z
+              .enum(['surface', 'piece'])
+              .describe(
+                "the water activity fed: at the product's surface, or of the piece (its mean moisture)",
+              ),
+            rule: text('the rule in words'),
+            source: text('its sources'),
+          })
+          .describe('which water activity the model is fed along a batch'),
       }),
       rule: text('how the model is stepped along a batch'),
       season: spoilageSummarySchema().unwrap().describe("all the season's start-date batches together"),
