@@ -37,6 +37,7 @@ import {
   totalReasons,
 } from './monthly-tables.ts'
 import { type PsychrometricSummary, psychrometricSummary } from './psychrometric.ts'
+import { seasonCalendar } from './season-calendar.ts'
 import {
   bestStartWindows,
   runStart,
@@ -203,7 +204,7 @@ function startContext(
 ): StartContext {
   return {
     series,
-    utcOffsetHours: time.utcOffsetHours,
+    toUtcMs: time.toUtcMs,
     primary,
     backup,
     product: run.product,
@@ -344,6 +345,7 @@ export function assembleAssessment(
       elevationM: series.site.elevationM,
       utcOffsetHours: calendar.time.utcOffsetHours,
       utcOffsetSource: calendar.time.offsetSource,
+      timeZone: calendar.time.timeZone,
       typicalYear: series.typicalYear,
     },
     product: {
@@ -368,6 +370,7 @@ export function assembleAssessment(
     startDates: starts.table.rows,
     bestStartWindows: starts.best.windows,
     bestStartWindowCriterion: starts.best.criterion,
+    seasonCalendar: seasonCalendar(starts.table.rows, run.season.stepDays),
     heat: parts.heat,
     psychrometric: parts.psychrometric,
     assumptions: [

@@ -79,7 +79,7 @@ export interface AssembleContext {
   elevationKnown: boolean
   /** Per-variable timing given by the user (option `labels`), over the reader's. */
   variableTiming?: Partial<Record<WeatherVariable, VariableTimingOverride>>
-  /** Notes for the assumptions: what was supplied rather than read (irradiance estimates). */
+  /** Notes: how the file was understood and what was supplied rather than read (irradiance estimates); not problems. */
   notes?: string[]
   /** How rows become hours, when the user says (`sampling`); else the reader's or detected. */
   sampling?: 'readings' | 'reports'
@@ -310,13 +310,13 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
       }
     }
   }
-  describeAggregation(aggregation, plan, warnings)
+  const notes = ctx.notes ?? []
+  describeAggregation(aggregation, plan, notes)
 
   const dry = si.dryBulb!
   if (si.dewPoint) humidityBelowDryBulbCheck(grid, log, 'dewPoint', si.dewPoint, dry)
   if (si.wetBulb) humidityBelowDryBulbCheck(grid, log, 'wetBulb', si.wetBulb, dry)
   const supplied = suppliedPressureHours(series.quality, raw.rowFlags !== undefined)
-  const notes = ctx.notes ?? []
   for (const variable of [
     'dryBulb',
     'dewPoint',
@@ -625,13 +625,13 @@ function logBelowCoverage(
 }
 
 /** A sentence on how rows became hours, when it was more than one row per hour. */
-function describeAggregation(a: HourlyAggregation, plan: RowPlan, warnings: string[]): void {
+function describeAggregation(a: HourlyAggregation, plan: RowPlan, notes: string[]): void {
   if (plan.summaryRows > 0)
-    warnings.push(
+    notes.push(
       `${plan.summaryRows} summary rows (daily or monthly summaries) left out: they are not hourly observations`,
     )
   if (a.sampling === 'reports') {
-    warnings.push(
+    notes.push(
       `weather reports (most at :${String(a.reportMinute ?? 0).padStart(2, '0')}): each aligned to the nearest hour (${a.alignedReports} moved), one per hour, routine before special`,
     )
     return
@@ -640,12 +640,12 @@ function describeAggregation(a: HourlyAggregation, plan: RowPlan, warnings: stri
     const below = Object.entries(a.hoursBelowCoverage)
       .map(([v, k]) => `${v} ${k}`)
       .join(', ')
-    warnings.push(
+    notes.push(
       `readings every ${plan.stepMinutes} minutes: instants averaged and totals summed into hours; ` +
         `${a.partialHours} hour${a.partialHours === 1 ? '' : 's'} kept with some readings missing${below ? `, hours with too few readings left missing: ${below}` : ''}`,
     )
   } else if (plan.stepMinutes > 60) {
-    warnings.push(
+    notes.push(
       `rows are ${plan.stepMinutes} minutes apart: hours between rows have no values (gaps up to 3 hours are interpolated)`,
     )
   }

@@ -353,20 +353,22 @@ export function readDelimited(
       ['header'],
     )
   }
+  // how the file was understood: notes for the reader's account, not warnings
+  const notes: string[] = []
   const before = found.twoRowIndex ?? headerIndex
   if (before > 0 && layout.headerRow === undefined)
-    warnings.push(`lines 1–${before} before the header row were skipped`)
+    notes.push(`lines 1–${before} before the header row were skipped`)
   if (found.twoRowIndex !== null)
-    warnings.push(
+    notes.push(
       `the header spans lines ${found.twoRowIndex + 1}–${found.twoRowIndex + 2}: their cells were joined`,
     )
-  if (found.unitsIndex !== null) warnings.push(`line ${found.unitsIndex + 1} gives the units of the columns`)
+  if (found.unitsIndex !== null) notes.push(`line ${found.unitsIndex + 1} gives the units of the columns`)
   if (found.skipped > 0 && layout.skipAfterHeader === undefined)
-    warnings.push(
+    notes.push(
       `${found.skipped} line${found.skipped === 1 ? '' : 's'} under the header without numbers ${found.skipped === 1 ? 'was' : 'were'} skipped`,
     )
   const plan = planColumns(headers, mapping, found.unitsRow, layout.columns)
-  warnings.push(...plan.notes)
+  notes.push(...plan.notes)
   let decimalComma = false
   if (delimiter !== ',') {
     for (let r = found.firstDataRow; r < head.length && !decimalComma; r++) {
@@ -611,7 +613,7 @@ export function readDelimited(
     if (unit.startsWith('mm') && unit.slice(3, 5) === 'dd') headerDateOrder = 'mdy'
     else if (unit.startsWith('dd') && unit.slice(3, 5) === 'mm') headerDateOrder = 'dmy'
   }
-  if (plan.headerTimeNote !== null) warnings.push(plan.headerTimeNote)
+  if (plan.headerTimeNote !== null) notes.push(plan.headerTimeNote)
   let reportKind: Uint8Array | undefined
   if (kindColumn >= 0 && layout.reportKind) {
     reportKind = new Uint8Array(n)
@@ -620,6 +622,7 @@ export function readDelimited(
   return {
     table: {
       format: 'csv',
+      notes,
       rows: n,
       lines,
       time,

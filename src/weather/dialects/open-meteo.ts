@@ -71,7 +71,7 @@ export const openMeteo: WeatherDialect = {
       timestampUtcOffsetHours: offsetSeconds / 3600,
       siteTimeZone: isIanaZone(zone) && zone !== 'GMT' && zone !== 'UTC' ? zone : undefined,
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `Open-Meteo metadata: grid cell at ${meta('latitude')}, ${meta('longitude')}, ${meta('elevation')} m; ` +
         `times at the fixed offset of ${Number.isFinite(offsetSeconds) ? offsetSeconds / 3600 : '?'} h (${snippet(zone)}); ` +
         'radiation and precipitation cover the hour before each time',
