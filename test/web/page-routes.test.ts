@@ -69,7 +69,11 @@ describe('GET /', () => {
     const q = list.find((d) => d.file.startsWith('quillow'))
     expect(q?.readOptions?.timeZone).toBe('America/Chicago')
     const t = list.find((d) => d.file === 'tamarel-lowland-2021-2023-utc.csv')
-    expect(t?.readOptions).toMatchObject({ utcOffsetHours: 7, latitudeDeg: 11.9, longitudeDeg: 104.6 })
+    expect(t?.readOptions).toMatchObject({
+      siteTimeZone: 'Asia/Bangkok',
+      latitudeDeg: 11.9,
+      longitudeDeg: 104.6,
+    })
     expect(renderPage({ demo: list })).toContain('<select id="f-demo" name="demo">')
     expect(renderPage({})).not.toContain('name="demo"')
   })
