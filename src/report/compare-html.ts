@@ -1,8 +1,11 @@
 /**
  * @module report/compare-html
- * Several sites side by side for one product and method: a ranking by a stated criterion, grouped bars
- * (usable hours, days to target, supplemental heat by month) with their tables, then each site's own
- * report. The ranking is the analysis one (analysis/compare.ts); nothing is computed here.
+ * Several sites side by side for one product and method: the ranking by its stated criterion, the season
+ * calendar with one row per site, grouped bars (usable hours and supplemental heat by month) with their
+ * tables, then a short summary of each site (its facts, its answer, a thinned start-date table) and the
+ * cautions once. Each site's full report is its own document (`assess`); the comparison stays a few pages
+ * (three sites: at most 8 A4 pages, checked by the browser tests). The ranking is the analysis one
+ * (analysis/compare.ts); nothing is computed here.
  */
 import type { Comparison } from '../analysis/compare.ts'
 import type { Assessment } from './assessment-view.ts'
@@ -12,9 +15,12 @@ import { MONTH_SHORT } from './charts/svg.ts'
 import { formatNumber, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
 import { figureHtml } from './figure.ts'
-import { htmlDocument, type ReportOptions, renderReportArticle } from './report-html.ts'
+import { htmlDocument, type ReportOptions, sectionContext } from './report-html.ts'
+import { calendarBlock } from './sections/calendar.ts'
+import { cautionsHtml } from './sections/cautions.ts'
 import { finite, round } from './sections/context.ts'
-import { methodName } from './sections/summary.ts'
+import { handoutStartTable } from './sections/start-dates.ts'
+import { answerSentences, headerRows, methodName, warningList } from './sections/summary.ts'
 import type { ReportTable } from './tables.ts'
 import { tableHtml } from './tables.ts'
 
@@ -94,7 +100,34 @@ function monthlyCompareTable(
   }
 }
 
-export interface ComparisonOptions extends Pick<ReportOptions, 'units' | 'paper'> {
+/** Start dates a site's summary shows at most in a comparison (every n-th above it, said under the table). */
+export const COMPARISON_START_ROWS = 12
+
+/** Facts of a site worth repeating in a comparison (the rest are the same for every site). */
+const SITE_FACTS = new Set(['Location', 'Data', 'Period', 'Coverage', 'Clock'])
+
+/** One site's short summary in a comparison: facts, answer, warnings, a thinned start-date table. */
+function siteSummary(site: ComparedSite, index: number, o: ComparisonOptions): string {
+  const a = site.assessment
+  const ctx = sectionContext(a, {
+    ...site.options,
+    units: o.units,
+    idPrefix: `s${index + 1}-`,
+    optionSurface: o.optionSurface,
+  })
+  const facts = headerRows(a, ctx)
+    .filter(([k]) => SITE_FACTS.has(k))
+    .map(([k, v]) => `<div class="kv"><dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd></div>`)
+    .join('')
+  const answer = answerSentences(a, ctx)
+    .filter((x) => !x.startsWith('A solar cabinet heats the air'))
+    .map((x) => `<li>${escapeHtml(x)}</li>`)
+    .join('')
+  const warnings = warningList(a, ctx)
+  return `<section class="report-section site-summary" id="s${index + 1}-sec-site" data-section="site" data-site="${index + 1}"><h2>${escapeHtml(`${index + 1}. ${ctx.siteName}`)}</h2><dl class="facts">${facts}</dl><ul class="sentences">${answer}</ul>${warnings.length ? `<div class="warnings" role="note"><h3>Warnings</h3><ul>${warnings.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>` : ''}${handoutStartTable(a, ctx, COMPARISON_START_ROWS).replace('the appendix (“When to start a batch”)', 'the site’s own report')}</section>`
+}
+
+export interface ComparisonOptions extends Pick<ReportOptions, 'units' | 'paper' | 'optionSurface'> {
   /** The analysis ranking (analysis/compare.ts `compare` or `rankAssessments`). */
   ranking: Ranking
 }
@@ -204,16 +237,29 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
       heatValue,
     ),
   })
-  const perSite = sites
-    .map((s, i) => renderReportArticle(s.assessment, { ...s.options, units, idPrefix: `s${i + 1}-` }))
-    .join('\n')
+  // the calendar: one row per site, in rank order
+  const byName = new Map(sites.map((x, i) => [names[i], x]))
+  const calendarRows = ranks
+    .map((r) => ({ label: r.name, site: byName.get(r.name) }))
+    .filter((r) => r.site?.assessment.seasonCalendar?.cells.length)
+    .map((r) => ({ label: r.label, calendar: (r.site as ComparedSite).assessment.seasonCalendar }))
+  const calendar = calendarRows.length
+    ? `<section class="report-section" data-section="calendar"><h2>The season at a glance, site by site</h2>${calendarBlock(calendarRows, 'cmp-calendar')}</section>`
+    : ''
+  const perSite = sites.map((x, i) => siteSummary(x, i, o)).join('\n')
   return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
-<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
+<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Season</dt><dd>${escapeHtml(`batches start ${first.season.start} to ${first.season.end}`)}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
 <section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(o.ranking, units))}</section>
-<section class="report-section" data-section="compare-monthly"><h2>Sites side by side</h2>${usable}${heat}</section>
-</article>
-${perSite}`
+${calendar}
+${perSite}
+<section class="report-section" data-section="compare-monthly"><h2>Sites side by side, month by month</h2>${usable}${heat}</section>
+${cautionsHtml(
+  sites.flatMap((x) => x.assessment.product.cautions),
+  'cmp-',
+)}
+<footer>Made by dryhours from the weather files and the options shown above. Each site's full report (charts, every start date, the assumptions) is its own document. Check the numbers against local experience before you build or buy.</footer>
+</article>`
 }
 
 export function renderComparisonHtml(sites: ComparedSite[], o: ComparisonOptions): string {

@@ -6,19 +6,10 @@
  */
 import type { Assessment } from '../analysis/assessment.ts'
 import type { CalendarState } from '../analysis/season-calendar.ts'
-import type { HourStatusName } from '../drying/usable-hour.ts'
+import { HOUR_STATUS_WORDS, type HourStatusName } from '../drying/usable-hour.ts'
 
 /** Why an hour is not a drying hour, in a grower's words (short enough for a table cell). */
-export const REASON_WORDS: Record<HourStatusName, string> = {
-  usable: 'dries',
-  missingData: 'no weather data',
-  nightWithoutDrying: 'night: covered or fans off',
-  rain: 'rain',
-  tooCold: 'too cold to dry',
-  aboveProductTempLimit: 'too hot for the product',
-  dewRisk: 'dew on the product',
-  tooHumid: 'air too humid',
-}
+export const REASON_WORDS: Record<HourStatusName, string> = HOUR_STATUS_WORDS
 
 /** The state of a start week, in words, and its one-letter mark (the second cue beside the colour). */
 export const CALENDAR_WORDS: Record<CalendarState, { words: string; mark: string }> = {

@@ -43,6 +43,8 @@ export interface AssessedSite {
   series: HourlySeries
   assessment: Assessment
   readWarnings: string[]
+  /** How the reader understood the file (notes, not problems), option names as the page's labels. */
+  readNotes: string[]
   dataSource: string
 }
 
@@ -154,6 +156,7 @@ export async function runForm(
       series: read.series,
       assessment,
       readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
+      readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
       dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
     })
   })
@@ -162,7 +165,12 @@ export async function runForm(
     const s = sites[0]
     const opts = {
       units,
-      info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
+      info: {
+        fileName: s.fileName,
+        dataSource: s.dataSource,
+        readerWarnings: s.readWarnings,
+        readerNotes: s.readNotes,
+      },
     }
     return {
       sites,
@@ -178,7 +186,12 @@ export async function runForm(
   const compared: ComparedSite[] = sites.map((s) => ({
     assessment: s.assessment,
     options: {
-      info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
+      info: {
+        fileName: s.fileName,
+        dataSource: s.dataSource,
+        readerWarnings: s.readWarnings,
+        readerNotes: s.readNotes,
+      },
     },
   }))
   return {

@@ -245,7 +245,7 @@ describe('demo sites supplied by the entry point', () => {
 })
 
 describe('several files', () => {
-  it('answer with the sites side by side and each site report', async () => {
+  it('answer with the sites side by side and a summary of each site', async () => {
     const f = form({ ...BASE, format: 'bundle' }, [
       { name: 'first site.csv', bytes: tamarel },
       { name: 'second site.csv', bytes: tamarel },
@@ -254,7 +254,7 @@ describe('several files', () => {
     expect(res.status).toBe(200)
     const b = (await res.json()) as { article: string; csv: string; json: string }
     expect(b.article).toContain('data-report="comparison"')
-    expect((b.article.match(/data-report="assessment"/g) ?? []).length).toBe(2)
+    expect((b.article.match(/data-section="site"/g) ?? []).length).toBe(2)
     expect(b.article).toContain('first site')
     expect(b.article).toContain('second site')
     expect(b.csv.startsWith('Sites ranked\r\n')).toBe(true)

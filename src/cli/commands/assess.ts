@@ -2,13 +2,12 @@ import { parseArgs } from 'node:util'
 import { type AssessOptions, type AssessProgress, assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
 import { ASSESS_DEFAULTS } from '../../analysis/plan.ts'
-import { FUELS } from '../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, FUEL_IDS, type FuelId } from '../../drying/method.ts'
 import { methodModel } from '../../drying/methods/index.ts'
-import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
 import { productById } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
+import { assessmentText } from '../../report/assessment-text.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
@@ -256,97 +255,20 @@ export function progressPrinter(io: CliIo, label: string): (p: AssessProgress) =
   }
 }
 
-const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
-const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
-const f1 = (x: number | null): string => (x === null ? '–' : x.toFixed(1))
-
-/** The readable summary of an assessment. */
-export function assessmentText(a: Assessment): string {
-  const out: string[] = []
-  const p = a.product
-  out.push(
-    `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
-  )
-  out.push(
-    `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
-  )
-  out.push('')
-  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
-  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
-  for (const m of a.monthly) {
-    const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
-      .map((r) => [r, m.medianHoursByReason[r]] as const)
-      .sort((x, y) => y[1] - x[1])
-    const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
-    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
-    out.push(
-      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
-    )
-  }
-  out.push('')
-  out.push(`Best start windows (${a.bestStartWindowCriterion}):`)
-  if (a.bestStartWindows.length === 0) out.push('  none')
-  for (const w of a.bestStartWindows) {
-    out.push(
-      `  ${w.from} to ${w.to}: finishes within ${a.deadlineDays} days in ≥ ${(100 * w.minProbabilityWithinDeadline).toFixed(0)} % of years, median ${f1(w.medianDaysToTarget)} days`,
-    )
-  }
-  out.push('')
-  out.push(
-    `Start dates (${a.season.start} to ${a.season.end}, batch starts ${a.season.startHourLocal}:00 local)`,
-  )
-  out.push('start  years  days median  days P90  P(within deadline)  rewet h  heat kWh/t median (P90)')
-  const every = Math.max(1, Math.ceil(a.startDates.length / 20))
-  a.startDates.forEach((r, i) => {
-    if (i % every !== 0) return
-    out.push(
-      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})`,
-    )
-  })
-  const h = a.heat
-  out.push('')
-  out.push(
-    `Supplemental heat to finish within ${a.deadlineDays} days: median ${f0(h.heatToAirKwhPerTonne.median)} kWh/t into the air (P10 ${f0(h.heatToAirKwhPerTonne.p10)}, P90 ${f0(h.heatToAirKwhPerTonne.p90)}), ${f0(h.fuelHeatKwhPerTonne.median)} kWh/t of fuel at efficiency ${h.heaterEfficiency}; batch of ${h.batchKgFresh} kg: ${f0(h.heatToAirKwhPerBatch.median)} kWh`,
-  )
-  for (const fu of h.fuels) {
-    const mark = fu.priceIsExample ? ' (example price)' : ''
-    out.push(
-      `  ${FUELS[fu.fuel].name.padEnd(36)} ${f1(fu.quantityPerTonne).padStart(8)} ${fu.unit}/t  cost ${f1(fu.costPerTonne)}/t at ${fu.pricePerUnit}/${fu.unit}${mark}`,
-    )
-  }
-  const c = h.crossCheck
-  out.push(
-    `  cross-check: ${c.waterToRemoveKgPerTonne} kg water/t × ${c.heatOfEvaporationKjPerKg} kJ/kg ÷ efficiency = ${c.evaporationHeatFuelKwhPerTonne} kWh/t; heated every hour uses ${c.ratioHeatedEveryHour ?? '–'} × that`,
-  )
-  if (a.warnings.length > 0) {
-    out.push('')
-    out.push('Warnings:')
-    for (const w of a.warnings) out.push(`  - ${w}`)
-  }
-  if (p.cautions.length > 0) {
-    out.push('')
-    out.push('Cautions:')
-    for (const w of p.cautions) out.push(`  - ${w}`)
-  }
-  out.push('')
-  out.push(`${a.assumptions.length} assumptions (thresholds, defaults and their sources): see --json`)
-  return `${out.join('\n')}\n`
-}
-
 /** The assessment in the chosen format (html and csv: the report's renderings). */
 function renderAssessment(a: Assessment, o: ReportOutputChoice, file: string): string {
   const info = { fileName: file.split(/[\\/]/).pop() }
   if (o.format === 'json') return `${JSON.stringify(a)}\n`
-  if (o.format === 'html') return renderReportHtml(a, { units: o.units, info })
+  if (o.format === 'html') return renderReportHtml(a, { units: o.units, info, optionSurface: 'cli' })
   if (o.format === 'csv') {
     try {
-      return renderReportCsv(a, { units: o.units, info, table: o.table })
+      return renderReportCsv(a, { units: o.units, info, table: o.table, optionSurface: 'cli' })
     } catch (e) {
       if (e instanceof RangeError) throw new UsageError(`--table: ${e.message}`)
       throw e
     }
   }
-  return assessmentText(a)
+  return assessmentText(a, { units: o.units })
 }
 
 export const assessCommand: CliCommand = {

@@ -64,16 +64,22 @@ export const openAir: MethodModel<typeof openAirSchema> = {
   heatsWithFuel: false,
   rainMatters: () => true,
   needs: { sun: true, sunAzimuth: false, coordinates: false },
-  assumptions: (m) => [
+  assumptions: (m, product) => [
     {
       name: 'absorptivity',
       value: String(m.absorptivity),
-      source: 'assumption for dark moist fruit (from memory)',
+      source:
+        product === undefined || product.category === 'fruit'
+          ? 'assumption for dark moist fruit (from memory)'
+          : `assumption for dark moist fruit (from memory), not measured for ${product.name}`,
     },
     {
       name: 'product surface per tray area',
       value: String(m.surfaceAreaPerTrayArea),
-      source: 'own estimate for a single layer of 17 mm berries at 10 kg/m²',
+      source:
+        product === undefined || product.id.startsWith('grapes')
+          ? 'own estimate for a single layer of grape berries (17 mm) at 10 kg/m²'
+          : `the default, estimated for a single layer of grape berries (17 mm) at 10 kg/m²; not estimated for ${product.name} (flat slices on a tray are nearer 1–2)`,
     },
     {
       name: 'covered at night / in rain',

@@ -1,0 +1,150 @@
+/**
+ * @module report/assessment-text
+ * The readable text of an assessment for a terminal (`dryhours assess` without `--json`): the same words as
+ * the HTML report (reasons in words, "every year", the site's clock named, the daylight share, costs with
+ * their currency, heat called "heat" when it is all the heat) in the chosen display units, in columns.
+ * A table that shows only some rows says so.
+ */
+import type { Assessment } from '../analysis/assessment.ts'
+import {
+  formatNumber,
+  formatPrice,
+  KJ_PER_KG_PER_BTU_PER_LB,
+  type UnitSystem,
+  unitFormatter,
+} from './display-units.ts'
+import { sectionContext } from './report-html.ts'
+import { calendarRuns } from './sections/calendar.ts'
+import { currencyOf, finite, perMassFactor, perMassWords } from './sections/context.ts'
+import { fuelName, fuelRows, heatIsAllTheHeat, heatWord } from './sections/heat.ts'
+import { mainReasonWords } from './sections/monthly.ts'
+import { methodName, siteClock, startTimeWords, stopsAtNight } from './sections/summary.ts'
+import { clockWords, thinnedNote, yearsWords } from './words.ts'
+
+const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
+
+/** Start dates the text table shows at most (every n-th above it, said above the table). */
+export const TEXT_START_ROWS = 20
+
+export interface TextOptions {
+  units?: UnitSystem
+  /** Notes on how the weather file was read (shown apart from the warnings). */
+  readerNotes?: string[]
+  /** Where the full table is, for the note above a thinned table. */
+  fullTableHint?: string
+}
+
+/** The readable summary of an assessment, for a terminal. */
+export function assessmentText(a: Assessment, o: TextOptions = {}): string {
+  const u = unitFormatter(o.units ?? 'si')
+  const ctx = sectionContext(a, { units: o.units, optionSurface: 'cli' })
+  const f0 = (x: number | null | undefined): string => formatNumber(x ?? null, 0)
+  const f1 = (x: number | null | undefined): string => formatNumber(x ?? null, 1)
+  const e = (kwhPerTonne: number | null | undefined) =>
+    finite(kwhPerTonne) ? f0(u.energyPerMass(kwhPerTonne).value) : '–'
+  const out: string[] = []
+  const p = a.product
+  out.push(
+    `${ctx.siteName}: ${p.name}, ${methodName(a)}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wet basis`,
+  )
+  out.push(
+    `weather ${a.coverage.firstHourUtc.slice(0, 10)} to ${a.coverage.lastHourUtc.slice(0, 10)} (UTC), ${a.site.typicalYear ? 'a typical year' : `years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}`}`,
+  )
+  out.push(`times on ${clockWords(siteClock(a))}`)
+  out.push('')
+  const daylight = stopsAtNight(a) && a.monthly.some((m) => finite(m.usableDaylightFraction))
+  out.push('Usable drying hours per month (median, P10–P90 across years; P10 = reached in 9 of 10 years)')
+  const shareHead = daylight ? '% of daylight h' : '% of all hours'
+  const heatHead = `${heatWord(a).toLowerCase()} ${u.energyPerMassUnit}`
+  out.push(
+    `month  median  P10–P90   ${shareHead.padStart(15)}  ${'main reason an hour does not dry'.padEnd(40)} ${heatHead.padStart(26)}  days to dry`,
+  )
+  for (const m of a.monthly) {
+    const share = daylight ? m.usableDaylightFraction : m.usableFraction
+    const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
+    out.push(
+      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(finite(share) ? (100 * share).toFixed(0) : '–').padStart(15)}  ${mainReasonWords(m).padEnd(40)} ${e(m.supplementalHeatKwhPerTonne.median).padStart(26)}  ${f1(m.medianDaysToTarget).padStart(11)}`,
+    )
+  }
+  out.push('')
+  if (a.seasonCalendar?.cells.length) {
+    out.push(`The season at a glance (start weeks): ${calendarRuns(a.seasonCalendar)}.`)
+    out.push('')
+  }
+  out.push(`Best start windows (${a.bestStartWindowCriterion}):`)
+  if (a.bestStartWindows.length === 0) out.push('  none')
+  for (const w of a.bestStartWindows) {
+    out.push(
+      `  ${w.from} to ${w.to}: finishes within ${a.deadlineDays} days ${w.minProbabilityWithinDeadline >= 1 ? 'in every year' : `in at least ${yearsWords(w.minProbabilityWithinDeadline)}`}, median ${f1(w.medianDaysToTarget)} days`,
+    )
+  }
+  out.push('')
+  out.push(`Start dates ${a.season.start} to ${a.season.end}, batches start at ${startTimeWords(a)}`)
+  const step = Math.max(1, Math.ceil(a.startDates.length / TEXT_START_ROWS))
+  const shown = a.startDates.filter((_, i) => i % step === 0)
+  const note = thinnedNote(
+    step,
+    shown.length,
+    a.startDates.length,
+    'start date',
+    o.fullTableHint ?? 'the JSON or CSV output',
+  )
+  if (note) out.push(note)
+  out.push(
+    `start  years  days median  days, 9 in 10 years  within ${a.deadlineDays} days       rewetting h  ${heatWord(a).toLowerCase()} ${u.energyPerMassUnit} median (1 in 10)`,
+  )
+  for (const r of shown) {
+    out.push(
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(19)}  ${(r.years > 0 ? yearsWords(r.probabilityWithinDeadline) : 'no data').padEnd(18)}  ${f0(r.rewettingHours.median).padStart(11)}  ${e(r.supplementalHeat.medianKwhPerTonne)} (${e(r.supplementalHeat.p90KwhPerTonne)})`,
+    )
+  }
+  const h = a.heat
+  out.push('')
+  const mass = perMassWords(ctx)
+  out.push(
+    heatIsAllTheHeat(a)
+      ? `Heat to finish within ${a.deadlineDays} days (the dryer's heater: all the heat the batch gets):`
+      : `Supplemental heat to finish within ${a.deadlineDays} days (a backup heater for what the air does not do):`,
+  )
+  out.push(
+    `  median ${e(h.heatToAirKwhPerTonne.median)} ${u.energyPerMassUnit} into the air (P10 ${e(h.heatToAirKwhPerTonne.p10)}, P90 ${e(h.heatToAirKwhPerTonne.p90)}), ${e(h.fuelHeatKwhPerTonne.median)} ${u.energyPerMassUnit} of fuel heat at ${Math.round(h.heaterEfficiency * 100)} % heater efficiency; a batch of ${formatNumber(u.mass(h.batchKgFresh).value, 0)} ${u.mass(1).unit}: ${f0(h.heatToAirKwhPerBatch.median)} kWh`,
+  )
+  const currency = currencyOf(a)
+  const allExample = h.fuels.every((x) => x.priceIsExample)
+  const money = currency ?? (allExample ? 'example-price units, no currency' : "your prices' currency")
+  out.push(`  fuel ${mass} of fresh product (prices and costs in ${money}):`)
+  for (const r of fuelRows(a, ctx)) {
+    const mark = r.fuel.priceIsExample ? ' (example price)' : ''
+    out.push(
+      `  ${fuelName(r.fuel).padEnd(36)} ${f1(r.quantity).padStart(8)} ${r.unit.padEnd(3)}  cost ${f1(r.cost)} at ${formatPrice(r.price)} per ${r.unit}${mark}`,
+    )
+  }
+  const c = h.crossCheck
+  const water =
+    u.system === 'us'
+      ? (c.waterToRemoveKgPerTonne / 0.45359237) * perMassFactor(ctx)
+      : c.waterToRemoveKgPerTonne
+  out.push(
+    `  cross-check: ${f1(water)} ${u.system === 'us' ? 'lb' : 'kg'} of water ${mass} × ${u.system === 'us' ? `${f0(c.heatOfEvaporationKjPerKg / KJ_PER_KG_PER_BTU_PER_LB)} Btu/lb` : `${c.heatOfEvaporationKjPerKg} kJ/kg`} ÷ efficiency = ${e(c.evaporationHeatFuelKwhPerTonne)} ${u.energyPerMassUnit}; heated every hour uses ${c.ratioHeatedEveryHour ?? '–'} × that`,
+  )
+  if (a.warnings.length > 0) {
+    out.push('')
+    out.push('Warnings:')
+    for (const w of a.warnings) out.push(`  - ${w}`)
+  }
+  if ((o.readerNotes ?? []).length > 0) {
+    out.push('')
+    out.push('Notes on how the weather file was read:')
+    for (const n of o.readerNotes ?? []) out.push(`  - ${n}`)
+  }
+  if (p.cautions.length > 0) {
+    out.push('')
+    out.push('Cautions:')
+    for (const w of p.cautions) out.push(`  - ${w}`)
+  }
+  out.push('')
+  out.push(
+    `${a.assumptions.length} assumptions (thresholds, defaults and their sources) are listed in the JSON and the HTML report`,
+  )
+  return `${out.join('\n')}\n`
+}
