@@ -370,7 +370,7 @@ export function assembleAssessment(
     startDates: starts.table.rows,
     bestStartWindows: starts.best.windows,
     bestStartWindowCriterion: starts.best.criterion,
-    seasonCalendar: seasonCalendar(starts.table.rows, run.season.stepDays),
+    seasonCalendar: seasonCalendar(starts.table.rows, run.season),
     heat: parts.heat,
     psychrometric: parts.psychrometric,
     assumptions: [

@@ -1,102 +1,134 @@
 /**
  * @module analysis/season-calendar
- * The season at a glance: the start-date table folded into start weeks, each in one state a grower acts on:
- * the batch dries by the deadline, it is marginal, it needs heat, it cannot finish even with heat, or it
- * spoils first. Derived from the start-date rows only (no weather), so an assessment's JSON gives the same
- * calendar again; the criterion is stated with the cells.
+ * The season at a glance: the start-date table folded into weeks of 7 days from the season's first start
+ * date, each week in one state a grower acts on: the batch dries by the deadline, it is marginal, it needs
+ * heat, or it spoils first. Derived from the start-date rows only (no weather), so an assessment's JSON gives
+ * the same calendar again; the rule of every state is stated with the cells. The rule is the one of the
+ * methods side by side (a week's shares are the means over its start dates), so a one-method calendar reads
+ * the same as that method's row there.
  */
+import { MS_PER_DAY } from '../physics/constants.ts'
 import type { StartDateRow } from './assessment.ts'
-import { GOOD_START_PROBABILITY } from './start-dates.ts'
+import { parseMonthDay } from './local-time.ts'
+import { formatMonthDay, GOOD_START_PROBABILITY } from './start-dates.ts'
+import { roundOrNull } from './statistics.ts'
 
 /**
- * Below {@link GOOD_START_PROBABILITY} but at least this share of years within the deadline: "marginal"
- * (half the years: our choice, stated in the criterion).
+ * Below this share of years within the deadline a week "needs heat"; from this share of years spoiling first
+ * a week "spoils first" (half the years: our choice, stated in the rules).
  */
-export const MARGINAL_START_PROBABILITY = 0.5
+export const HALF_OF_YEARS = 0.5
+/** From this share of years spoiling first a week is at best "marginal" (our choice, stated in the rules). */
+export const SPOILAGE_MARGINAL_SHARE = 0.2
 
-/** A week whose batches spoil before they are dry in at least this share of years is "spoils first" (our choice). */
-export const SPOILS_FIRST_PROBABILITY = 0.5
-
-export const CALENDAR_STATES = [
-  'dries',
-  'marginal',
-  'needs-heat',
-  'out-of-reach',
-  'spoils-first',
-  'no-data',
-] as const
+/** The states of a week, from best to worst, then "no data". */
+export const CALENDAR_STATES = ['dries', 'marginal', 'needs-heat', 'spoils-first', 'no-data'] as const
 export type CalendarState = (typeof CALENDAR_STATES)[number]
 
+const pct = (x: number): string => `${Math.round(100 * x)} %`
+
+/** The rule of each state, in words (also in the JSON, so every reader sees the same rule). */
+export const CALENDAR_RULES: Record<CalendarState, string> = {
+  dries: `the method as set finishes a batch within the deadline in at least ${pct(GOOD_START_PROBABILITY)} of years (mean over the week's start dates) and, where spoilage is assessed, spoils before it is dry in fewer than ${pct(SPOILAGE_MARGINAL_SHARE)} of years`,
+  marginal: `finishes within the deadline in ${pct(HALF_OF_YEARS)} to ${pct(GOOD_START_PROBABILITY)} of years, or spoils before it is dry in ${pct(SPOILAGE_MARGINAL_SHARE)} to ${pct(HALF_OF_YEARS)} of years`,
+  'needs-heat': `finishes within the deadline in fewer than ${pct(HALF_OF_YEARS)} of years: a batch needs (more) heat to finish in time`,
+  'spoils-first': `spoils before it is dry in at least ${pct(HALF_OF_YEARS)} of years (only where the assessment carries a spoilage model); this state wins over the others`,
+  'no-data': 'no start date of the week had a complete batch in any year of the file',
+}
+
 export interface SeasonCalendarCell {
-  /** First and last start day of the week ('MM-DD' on the site's clock). */
+  /** First and last day of the week ('MM-DD' on the site's clock). */
   from: string
   to: string
-  /** Start days of the table in this week. */
+  /** Start dates of the table in this week that had a complete batch. */
   starts: number
   state: CalendarState
-  /** Lowest share of years finishing within the deadline by the method alone, over the week's start days [0–1]; null without data. */
-  minProbabilityWithinDeadline: number | null
-  /** Highest share of years in which a batch of the week spoils before it is dry [0–1]; null when the assessment has no spoilage figure. */
-  maxSpoilageProbability: number | null
+  /** Share of years finishing within the deadline by the method as set, mean over the week's start dates [0–1]; null without data. */
+  probabilityWithinDeadline: number | null
+  /** Share of years in which a batch spoils before it is dry, mean over the week's start dates [0–1]; null when not assessed. */
+  spoilageProbability: number | null
 }
 
 export interface SeasonCalendar {
-  /** How a week gets its state, in words. */
-  criterion: string
+  /** The rule of every state, in words. */
+  rules: { state: CalendarState; rule: string }[]
   cells: SeasonCalendarCell[]
 }
 
-/** The spoilage probability of a start row, when the assessment carries one (`startDates[].spoilage.probability`). */
-function spoilageProbability(row: StartDateRow): number | null {
-  const p = (row as StartDateRow & { spoilage?: { probability?: unknown } | null }).spoilage?.probability
-  return typeof p === 'number' && Number.isFinite(p) ? p : null
+/** The spoilage share of a start row, when the assessment carries one (`startDates[].spoilage.probability`). */
+export function spoilageOf(row: StartDateRow): number | null {
+  const s = (row as { spoilage?: { probability?: unknown } | null }).spoilage
+  return s !== undefined && s !== null && typeof s.probability === 'number' && Number.isFinite(s.probability)
+    ? s.probability
+    : null
 }
 
-function stateOf(rows: StartDateRow[]): Omit<SeasonCalendarCell, 'from' | 'to' | 'starts'> {
-  const withYears = rows.filter((r) => r.years > 0)
-  if (withYears.length === 0)
-    return { state: 'no-data', minProbabilityWithinDeadline: null, maxSpoilageProbability: null }
-  const minP = Math.min(...withYears.map((r) => r.probabilityWithinDeadline))
-  const spoil = withYears.map(spoilageProbability).filter((p): p is number => p !== null)
-  const maxSpoil = spoil.length > 0 ? Math.max(...spoil) : null
-  const outOfReach = withYears.some((r) => r.yearsNotReachable >= r.years)
-  const state: CalendarState =
-    maxSpoil !== null && maxSpoil >= SPOILS_FIRST_PROBABILITY
-      ? 'spoils-first'
-      : minP >= GOOD_START_PROBABILITY
-        ? 'dries'
-        : minP >= MARGINAL_START_PROBABILITY
-          ? 'marginal'
-          : outOfReach
-            ? 'out-of-reach'
-            : 'needs-heat'
-  return { state, minProbabilityWithinDeadline: minP, maxSpoilageProbability: maxSpoil }
+/** The state of a week from its mean shares (see {@link CALENDAR_RULES}). */
+export function calendarState(probability: number | null, spoilage: number | null): CalendarState {
+  if (probability === null) return 'no-data'
+  if (spoilage !== null && spoilage >= HALF_OF_YEARS) return 'spoils-first'
+  if (probability < HALF_OF_YEARS) return 'needs-heat'
+  if (probability < GOOD_START_PROBABILITY || (spoilage !== null && spoilage >= SPOILAGE_MARGINAL_SHARE))
+    return 'marginal'
+  return 'dries'
+}
+
+const mean = (xs: number[]): number | null =>
+  xs.length > 0 ? xs.reduce((s, v) => s + v, 0) / xs.length : null
+
+/** First days of the weeks of 7 days from the season's first start date to its last (wrapping the year end). */
+export function seasonWeekStarts(season: { start: string; end: string }): string[] {
+  const s = parseMonthDay(season.start, 'season start')
+  const e = parseMonthDay(season.end, 'season end')
+  const ref = 2001 // a non-leap year, as the start-date table uses
+  const startMs = Date.UTC(ref, s.month - 1, s.day)
+  let endMs = Date.UTC(ref, e.month - 1, e.day)
+  if (endMs < startMs) endMs = Date.UTC(ref + 1, e.month - 1, e.day)
+  const count = Math.floor((endMs - startMs) / MS_PER_DAY / 7) + 1
+  const out: string[] = []
+  for (let w = 0; w < count; w++) {
+    const d = new Date(startMs + 7 * w * MS_PER_DAY)
+    out.push(formatMonthDay({ month: d.getUTCMonth() + 1, day: d.getUTCDate() }))
+  }
+  return out
+}
+
+/** The day 6 days after 'MM-DD' (the last day of its week), in the non-leap reference year. */
+function weekEnd(from: string, season: { end: string }, last: boolean): string {
+  if (last) return season.end
+  const d = parseMonthDay(from, 'week start')
+  const t = new Date(Date.UTC(2001, d.month - 1, d.day) + 6 * MS_PER_DAY)
+  return formatMonthDay({ month: t.getUTCMonth() + 1, day: t.getUTCDate() })
 }
 
 /**
- * Fold the start-date rows (in season order, `stepDays` apart) into weeks of 7 days from the season's first
- * start day; a week takes the state of its worst start day.
+ * The season calendar of a start-date table: row k of the table starts k × `season.stepDays` days after the
+ * season's first start date and falls in week ⌊k × stepDays / 7⌋.
  */
-export function seasonCalendar(rows: readonly StartDateRow[], stepDays: number): SeasonCalendar {
-  const perWeek = Math.max(1, Math.floor(7 / Math.max(1, stepDays)))
-  const cells: SeasonCalendarCell[] = []
-  for (let i = 0; i < rows.length; i += perWeek) {
-    const week = rows.slice(i, i + perWeek)
-    cells.push({
-      from: week[0].start,
-      to: week[week.length - 1].start,
-      starts: week.length,
-      ...stateOf(week),
-    })
-  }
-  const good = Math.round(GOOD_START_PROBABILITY * 100)
-  const marginal = Math.round(MARGINAL_START_PROBABILITY * 100)
-  const spoil = Math.round(SPOILS_FIRST_PROBABILITY * 100)
-  return {
-    criterion:
-      `each cell is a start week (its worst start day counts): dries = batches finish within the deadline by the method alone in at least ${good} % of years; ` +
-      `marginal = in ${marginal} to ${good} % of years; needs heat = in fewer than ${marginal} % of years, heat would finish them; ` +
-      `out of reach = not even heating every hour finishes them in time; spoils first = the batch spoils before it is dry in at least ${spoil} % of years (where the assessment has a spoilage figure)`,
-    cells,
-  }
+export function seasonCalendar(
+  rows: readonly StartDateRow[],
+  season: { start: string; end: string; stepDays: number },
+): SeasonCalendar {
+  const weeks = seasonWeekStarts(season)
+  const byWeek: StartDateRow[][] = weeks.map(() => [])
+  rows.forEach((row, k) => {
+    const w = Math.floor((k * season.stepDays) / 7)
+    if (w < weeks.length && row.years > 0) byWeek[w].push(row)
+  })
+  const cells = weeks.map((from, w): SeasonCalendarCell => {
+    const inWeek = byWeek[w]
+    const p = mean(inWeek.map((r) => r.probabilityWithinDeadline))
+    const spoil = inWeek.map(spoilageOf).filter((v): v is number => v !== null)
+    const probability = p === null ? null : roundOrNull(p, 3)
+    const spoilage = spoil.length > 0 ? roundOrNull(mean(spoil) as number, 3) : null
+    return {
+      from,
+      to: weekEnd(from, season, w === weeks.length - 1),
+      starts: inWeek.length,
+      state: calendarState(probability, spoilage),
+      probabilityWithinDeadline: probability,
+      spoilageProbability: spoilage,
+    }
+  })
+  return { rules: CALENDAR_STATES.map((state) => ({ state, rule: CALENDAR_RULES[state] })), cells }
 }

@@ -16,7 +16,6 @@ export const CALENDAR_WORDS: Record<CalendarState, { words: string; mark: string
   dries: { words: 'dries in time', mark: 'D' },
   marginal: { words: 'marginal', mark: 'M' },
   'needs-heat': { words: 'needs heat', mark: 'H' },
-  'out-of-reach': { words: 'not even with heat', mark: '×' },
   'spoils-first': { words: 'spoils first', mark: 'S' },
   'no-data': { words: 'no data', mark: '·' },
 }

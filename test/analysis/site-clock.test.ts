@@ -100,34 +100,46 @@ function row(start: string, p: number, extra: Partial<StartDateRow> = {}): Start
 }
 
 describe('the season calendar', () => {
-  it('folds daily start dates into weeks, each taking its worst day, with the criterion stated', () => {
+  const season = { start: '07-01', end: '07-23', stepDays: 1 }
+  it('folds daily start dates into weeks from the first start date, each from the mean of its days, with the rules', () => {
     const rows = [
       ...['07-01', '07-02', '07-03', '07-04', '07-05', '07-06', '07-07'].map((d) => row(d, 1)),
       ...['07-08', '07-09', '07-10', '07-11', '07-12', '07-13'].map((d) => row(d, 0.9)),
-      row('07-14', 0.6),
+      row('07-14', 0),
       ...['07-15', '07-16'].map((d) => row(d, 0.2)),
-      ...['07-22', '07-23'].map((d) => row(d, 0, { yearsNotReachable: 4 })),
+      ...['07-17', '07-18', '07-19', '07-20', '07-21'].map((d) => ({ ...row(d, 0), years: 0 })),
+      ...['07-22', '07-23'].map((d) => ({ ...row(d, 0), years: 0 })),
     ]
-    const c = seasonCalendar(rows, 1)
+    const c = seasonCalendar(rows, season)
     expect(c.cells.map((x) => [x.from, x.to, x.state])).toEqual([
       ['07-01', '07-07', 'dries'],
-      ['07-08', '07-14', 'marginal'],
-      ['07-15', '07-23', 'out-of-reach'],
+      ['07-08', '07-14', 'marginal'], // (6 × 0.9 + 0) / 7 = 0.771
+      ['07-15', '07-21', 'needs-heat'],
+      ['07-22', '07-23', 'no-data'],
     ])
-    expect(c.cells[1].minProbabilityWithinDeadline).toBe(0.6)
-    expect(c.criterion).toMatch(/at least 80 % of years/)
+    expect(c.cells[1].probabilityWithinDeadline).toBe(0.771)
+    expect(c.cells[2].starts).toBe(2)
+    expect(c.rules.find((r) => r.state === 'dries')?.rule).toMatch(/at least 80 % of years/)
   })
 
-  it('keeps one cell per start day when starts are a week or more apart, and marks spoilage first', () => {
+  it('keeps one week per start date a week apart, and marks spoilage first (or marginal) where it is assessed', () => {
+    const weekly = { start: '06-01', end: '06-29', stepDays: 7 }
     const rows = [
       row('06-01', 0.3),
       row('06-08', 1, { spoilage: { probability: 0.7 } } as Partial<StartDateRow>),
-      row('06-15', 1),
-      { ...row('06-22', 0), years: 0 },
+      row('06-15', 1, { spoilage: { probability: 0.3 } } as Partial<StartDateRow>),
+      row('06-22', 1),
+      { ...row('06-29', 0), years: 0 },
     ]
-    const c = seasonCalendar(rows, 7)
-    expect(c.cells.map((x) => x.state)).toEqual(['needs-heat', 'spoils-first', 'dries', 'no-data'])
-    expect(c.cells[1].maxSpoilageProbability).toBe(0.7)
-    expect(c.cells[2].maxSpoilageProbability).toBeNull()
+    const c = seasonCalendar(rows, weekly)
+    expect(c.cells.map((x) => x.state)).toEqual([
+      'needs-heat',
+      'spoils-first',
+      'marginal',
+      'dries',
+      'no-data',
+    ])
+    expect(c.cells[1].spoilageProbability).toBe(0.7)
+    expect(c.cells[3].spoilageProbability).toBeNull()
   })
 })

@@ -14,14 +14,13 @@ import type { SectionContext } from './context.ts'
 
 /**
  * Box colours of the states, from Tol's muted scheme (Tol 2021, fig. 4): green for "dries", sand for
- * "marginal", rose for "needs heat", wine for "not even with heat", indigo for "spoils first"; pale grey
- * for no data. Ink: white on the dark ones, black on the light ones.
+ * "marginal", rose for "needs heat", indigo for "spoils first"; pale grey for no data. Ink: white on the
+ * dark ones, black on the light ones.
  */
 export const CALENDAR_COLOURS: Record<CalendarState, { fill: string; ink: string }> = {
   dries: { fill: MUTED[3], ink: '#FFFFFF' },
   marginal: { fill: MUTED[5], ink: '#1A1A1A' },
   'needs-heat': { fill: MUTED[6], ink: '#1A1A1A' },
-  'out-of-reach': { fill: MUTED[7], ink: '#FFFFFF' },
   'spoils-first': { fill: MUTED[0], ink: '#FFFFFF' },
   'no-data': { fill: NO_DATA_GREY, ink: '#1A1A1A' },
 }
@@ -73,8 +72,12 @@ export function calendarBlock(rows: CalendarRow[], id: string): string {
   const words = rows
     .map((r) => `${rows.length > 1 ? `${r.label}: ` : ''}${calendarRuns(r.calendar)}.`)
     .join(' ')
-  const criterion = rows[0]?.calendar.criterion ?? ''
-  return `<div class="calendar" id="${id}" data-calendar="${rows.length}">${body}${legendHtml(rows)}<p class="alt"><span class="alt-label">In words:</span> ${escapeHtml(words)}</p><p class="note">${escapeHtml(`Each box is a week of start days, labelled with its first day: ${criterion}.`)}</p></div>`
+  const used = new Set(rows.flatMap((r) => r.calendar.cells.map((c) => c.state)))
+  const rules = (rows[0]?.calendar.rules ?? [])
+    .filter((r) => used.has(r.state))
+    .map((r) => `${CALENDAR_WORDS[r.state].words}: ${r.rule}`)
+    .join('; ')
+  return `<div class="calendar" id="${id}" data-calendar="${rows.length}">${body}${legendHtml(rows)}<p class="alt"><span class="alt-label">In words:</span> ${escapeHtml(words)}</p><p class="note">${escapeHtml(`Each box is a week of start days, labelled with its first day. ${rules}.`)}</p></div>`
 }
 
 function rowKey(label: string): string {
