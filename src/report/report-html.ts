@@ -11,7 +11,8 @@
  * alone.
  */
 
-import { type OptionSurface, renderOptionNames } from '../weather/option-spec.ts'
+import { optionWords } from '../analysis/option-names.ts'
+import type { OptionSurface } from '../weather/option-spec.ts'
 import { type Assessment, type ReportInputInfo, siteDisplayName } from './assessment-view.ts'
 import { type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
@@ -59,7 +60,7 @@ export function sectionContext(a: Assessment, o: ReportOptions): SectionContext 
     units: unitFormatter(o.units ?? 'si'),
     idPrefix: o.idPrefix ?? '',
     nextFigure: () => ++n,
-    optionWords: surface === 'cli' ? (m) => m : (m) => renderOptionNames(m, surface),
+    optionWords: (m) => optionWords(m, surface),
   }
 }
 

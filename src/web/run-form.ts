@@ -24,7 +24,7 @@ import type { WeatherReadResult } from '../weather/result.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { WeatherInputError } from '../weather/weather-input-error.ts'
 import type { DemoProvider } from './demo-files.ts'
-import type { FormInput } from './form-input.ts'
+import { FormFieldError, type FormInput } from './form-input.ts'
 
 /** A weather file that needs answers the form can give (time zone, column mapping …). */
 export class FormQuestion extends Error {
@@ -54,6 +54,8 @@ export interface FormResult {
   article: string
   /** The complete standalone HTML document. */
   document: string
+  /** The two-page summary alone (a comparison: the same as `document`, which is already short). */
+  handout: string
   csv: string
   /** The assessment (one site) or the list of assessments (comparison), JSON text. */
   json: string
@@ -63,8 +65,8 @@ export interface FormResult {
 async function inputs(
   input: FormInput,
   demo?: DemoProvider,
-): Promise<{ name: string; bytes: Uint8Array; options: Record<string, unknown> }[]> {
-  const out: { name: string; bytes: Uint8Array; options: Record<string, unknown> }[] = []
+): Promise<{ name: string; bytes: Uint8Array; options: Record<string, unknown>; row?: number }[]> {
+  const out: { name: string; bytes: Uint8Array; options: Record<string, unknown>; row?: number }[] = []
   if (input.demo && demo) {
     const entry = demo.list().find((d) => d.file === input.demo)
     const bytes = await demo.read(input.demo)
@@ -76,6 +78,14 @@ async function inputs(
   }
   for (const f of input.files)
     out.push({ name: f.name, bytes: f.bytes, options: { ...input.weatherOptions } })
+  // the sites table: each site with its own options (a site name typed in its row names it)
+  for (const site of input.sites)
+    out.push({
+      name: site.file.name,
+      bytes: site.file.bytes,
+      options: { ...site.weatherOptions },
+      row: site.row,
+    })
   return out
 }
 
@@ -95,10 +105,16 @@ export async function runForm(
   const sites: AssessedSite[] = []
   const files = await inputs(input, demo)
   const reads: { name: string; read: WeatherReadResult }[] = []
+  if (input.task === 'assess' && input.methods.length > 1)
+    throw new FormFieldError(
+      'method',
+      'several methods side by side are not available on this page yet: choose one',
+    )
   for (const f of files) {
-    // A site name typed in the form names a single file; with several files, each keeps its own name.
-    const options = files.length > 1 ? { ...f.options, siteName: undefined } : f.options
+    const options = f.options
     if (options.siteName === undefined) delete options.siteName
+    // a site of the sites table is named by its row in messages
+    const where = f.row !== undefined ? `Site ${f.row} (${f.name})` : f.name
     let read: WeatherReadResult
     try {
       read = readWeatherBytes(f.bytes, options)
@@ -106,12 +122,12 @@ export async function runForm(
       if (e instanceof WeatherInputError) {
         // the reader names options as CLI flags; on the page they are the fields' labels
         throw new FormQuestion(
-          `${f.name}: ${renderOptionNames(e.message, 'form')} (under “Site, time zone and columns”)`,
+          `${where}: ${renderOptionNames(e.message, 'form')}${f.row !== undefined ? ' (in its row of the sites table)' : ' (under “Site, time zone and columns”)'}`,
           f.name,
           e.missing,
         )
       }
-      if (e instanceof RangeError && !isRuntimeFault(e)) throw new RangeError(`${f.name}: ${e.message}`)
+      if (e instanceof RangeError && !isRuntimeFault(e)) throw new RangeError(`${where}: ${e.message}`)
       throw e
     }
     if (!read.series.site.name && files.length > 1) read.series.site.name = f.name.replace(/\.[^.]+$/, '')
@@ -176,6 +192,7 @@ export async function runForm(
       sites,
       article: renderReportArticle(s.assessment, opts),
       document: renderReportHtml(s.assessment, opts),
+      handout: renderReportHtml(s.assessment, { ...opts, layout: 'handout' }),
       csv: renderReportCsv(s.assessment, opts),
       json: JSON.stringify(s.assessment, null, 2),
       title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
@@ -198,6 +215,7 @@ export async function runForm(
     sites,
     article: renderComparisonArticle(compared, { units, ranking: rank }),
     document: renderComparisonHtml(compared, { units, ranking: rank }),
+    handout: renderComparisonHtml(compared, { units, ranking: rank }),
     csv:
       tablesCsv([comparisonTable(rank, units)]) +
       '\r\n' +
