@@ -64,9 +64,14 @@ ${calendarCss()}
   .dryhours-report table.stack thead{position:absolute;width:1px;height:1px;overflow:hidden;clip:rect(0 0 0 0)}
   .dryhours-report table.stack,.dryhours-report table.stack tbody,.dryhours-report table.stack tr,.dryhours-report table.stack th,.dryhours-report table.stack td{display:block;width:100%}
   .dryhours-report table.stack tr{border-bottom:2px solid var(--rule);padding:.25rem 0}
-  .dryhours-report table.stack th[scope=row]{font-weight:700;border:0}
-  .dryhours-report table.stack td{display:flex;justify-content:space-between;gap:1rem;border:0;text-align:right;white-space:normal}
-  .dryhours-report table.stack td::before{content:attr(data-label);text-align:left;color:var(--muted);font-weight:600}
+  .dryhours-report table.stack th[scope=row]{font-weight:700;border:0;white-space:normal;overflow-wrap:anywhere}
+  .dryhours-report table.stack td,.dryhours-report table.stack td.num{border:0;text-align:right;white-space:normal;overflow-wrap:anywhere}
+  .dryhours-report table.stack td::after{content:"";display:block;clear:both}
+  .dryhours-report table.stack td::before{content:attr(data-label);float:left;max-width:62%;margin-right:.6rem;text-align:left;color:var(--muted);font-weight:600}
+  .dryhours-report table.data{table-layout:fixed}
+  .dryhours-report table.data th,.dryhours-report table.data td,.dryhours-report table.data th[scope=row],.dryhours-report table.data td.num{white-space:normal;overflow-wrap:anywhere}
+  .dryhours-report .facts{padding:.5rem .6rem}
+  .dryhours-report svg.chart{max-width:100%}
 }
 @page{size:${size};margin:15mm}
 @media print{
