@@ -63,6 +63,7 @@ ${calendarCss()}
   /* wide tables: each row a block, each cell under its column's name (no sideways scrolling) */
   .dryhours-report table.stack thead{position:absolute;width:1px;height:1px;overflow:hidden;clip:rect(0 0 0 0)}
   .dryhours-report table.stack,.dryhours-report table.stack tbody,.dryhours-report table.stack tr,.dryhours-report table.stack th,.dryhours-report table.stack td{display:block;width:100%}
+  .dryhours-report table.stack caption{display:block;width:100%}
   .dryhours-report table.stack tr{border-bottom:2px solid var(--rule);padding:.25rem 0}
   .dryhours-report table.stack th[scope=row]{font-weight:700;border:0;white-space:normal;overflow-wrap:anywhere}
   .dryhours-report table.stack td,.dryhours-report table.stack td.num{border:0;text-align:right;white-space:normal;overflow-wrap:anywhere}
