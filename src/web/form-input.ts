@@ -238,6 +238,16 @@ const SITE_OPTION_PARAMS: Record<string, string> = { siteName: 'name' }
 /** The sites table of the compare form: every row with a file; a row with values but no file is an error. */
 async function sitesOf(form: FormData, maxSites: number): Promise<SiteInput[]> {
   const sites: SiteInput[] = []
+  let rows = 0
+  for (const key of form.keys()) {
+    const m = /^site(\d{1,4})\.file$/.exec(key)
+    if (m && (await fileParts(form, key)).length > 0) rows = Math.max(rows, Number(m[1]))
+  }
+  if (rows > maxSites)
+    throw new FormFieldError(
+      `site${rows}.file`,
+      `at most ${maxSites} sites can be compared at once on this server`,
+    )
   for (let i = 1; i <= maxSites; i++) {
     const prefix = `site${i}.`
     const files = await fileParts(form, `${prefix}file`)

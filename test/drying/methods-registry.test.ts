@@ -66,7 +66,9 @@ describe('the method registry', () => {
         deadlineDays: 2,
       })
       expect(a.methodLabel).toBe(model.label)
-      for (const x of methodModel(model.kind).assumptions(method)) expect(a.assumptions).toContainEqual(x)
+      const product = { id: apricots.id, name: apricots.name, category: apricots.category }
+      for (const x of methodModel(model.kind).assumptions(method, product))
+        expect(a.assumptions).toContainEqual(x)
       expect(renderPage({})).toContain(`value="${model.kind}"`)
     })
   }
