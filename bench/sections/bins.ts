@@ -5,11 +5,17 @@
  * and by the same model's reference implementation (`simulateDeepBedReference`: exact isotherm, bisection),
  * measured in the same process; their agreement on that run; the one-off cost of the grain's tables; and an
  * assessment-sized workload (`assessBinDrying`: 10 years of the dry upland demo site × 4 start dates × 4
- * airflows, each run until the top layer is dry or 60 days).
+ * airflows, each run until the top layer is dry or 60 days); and the cost of a bin layer-hour in batch-hours, the
+ * weight the planner gives bin work (analysis/plan.ts `BIN_LAYER_HOUR_IN_BATCH_HOURS`): CPU time of a natural-air
+ * bin assessment per layer-hour the planner counts over CPU time of a slow batch assessment (shade drying of
+ * corn) per batch-hour it counts, on the dry upland and humid valley demo files.
  *
  * Timing: one warm-up of each, then the median of the timed runs, by wall clock and by process CPU time.
  */
+import { readFileSync } from 'node:fs'
 import { longUtcCsv } from '../../climate-demo/demo-files.ts'
+import { assess } from '../../src/analysis/assess.ts'
+import { assessmentCost, planAssessment } from '../../src/analysis/plan.ts'
 import {
   assessBinDrying,
   BUSHEL_WEIGHT_KG,
@@ -201,6 +207,43 @@ export const section: BenchSection = {
       unit: 'runs/s',
       note: `mean run ${(simulatedDays / Math.max(1, a.runs)).toFixed(1)} days (stops when the top layer is dry)`,
     })
+    figures.push(...layerHourWeight())
     return figures
   },
+}
+
+/** The planner's weight of a bin layer-hour, measured on two demo files (see the module comment). */
+function layerHourWeight(): BenchFigure[] {
+  const figures: BenchFigure[] = []
+  const sites = [
+    { name: 'dry upland', file: 'ardentine-upland-2021-2024-utc.csv', options: { utcOffsetHours: 1 } },
+    {
+      name: 'humid valley',
+      file: 'quillow-valley-2021-2023-local-dst-imperial.csv',
+      options: { timeZone: 'America/Chicago' },
+    },
+  ]
+  for (const site of sites) {
+    const text = readFileSync(`climate-demo/${site.file}`, 'utf8')
+    const series = readWeather(text, site.options).series
+    const base = { product: productById('shelled-corn'), seasonStart: '09-01', seasonEnd: '10-31' }
+    const batch = { ...base, method: { kind: 'shade' as const } }
+    const bin = { ...base, method: { kind: 'natural-air-bin' as const } }
+    assess(series, batch)
+    assess(series, { ...bin, seasonEnd: '09-01' })
+    const tBatch = Math.min(
+      measure(() => assess(series, batch)).cpuMs,
+      measure(() => assess(series, batch)).cpuMs,
+    )
+    const tBin = measure(() => assess(series, bin)).cpuMs
+    const batchHours = assessmentCost(planAssessment(batch), series.hours).batchHours
+    const layerHours = assessmentCost(planAssessment(bin), series.hours).binLayerHours
+    figures.push({
+      name: `bin layer-hour in batch-hours, ${site.name}`,
+      value: tBin / layerHours / (tBatch / batchHours),
+      unit: 'x',
+      note: `bin ${Math.round(tBin)} ms CPU for ${(layerHours / 1e6).toFixed(2)} M layer-h counted; shade batches ${Math.round(tBatch)} ms for ${(batchHours / 1e6).toFixed(2)} M batch-h`,
+    })
+  }
+  return figures
 }

@@ -39,7 +39,8 @@ export const section: BenchSection = {
         latitudeDeg: 38.3,
         longitudeDeg: -2.6,
         elevationM: 1050,
-        utcOffsetHours: 1,
+        utcOffsetHours: 0,
+        siteTimeZone: 'Europe/Madrid',
       }),
     )
     const series = read.value.series

@@ -24,7 +24,7 @@ import { planAssessment } from './plan.ts'
 import type { MonthDay } from './start-dates.ts'
 
 export interface AssessProgress {
-  stage: 'hourly-conditions' | 'monthly-heat' | 'start-dates' | 'done'
+  stage: 'hourly-conditions' | 'monthly-heat' | 'start-dates' | 'bin-runs' | 'done'
   done: number
   total: number
 }

@@ -10,7 +10,10 @@
  * 5. {@link startDatesStage}: the start-date table and the best start windows;
  * 6. {@link heatSummary} (analysis/heat-summary.ts): heat and fuel, with a cross-check;
  * 7. {@link psychrometricSummary} (analysis/psychrometric.ts): the hours on a psychrometric chart;
- * 8. {@link assembleAssessment}: the JSON-safe {@link Assessment} with its assumptions and warnings.
+ * 8. {@link assembleAssessment} (analysis/assemble.ts): the JSON-safe {@link Assessment} with its assumptions and
+ *    warnings.
+ * For grain in a bin (a method with `batches: 'deep-bed'`), stages 4–5 are the bin stage instead
+ * (analysis/bin-stage.ts: the deep-bed model per start date × airflow × year), and the heat has no batches.
  */
 import {
   computeHourlyConditions,
@@ -18,26 +21,19 @@ import {
   type HourlyConditions,
 } from '../drying/hourly-conditions.ts'
 import { type HourlySeries, QualityFlag } from '../weather/series.ts'
+import { assembleAssessment, MIN_HOURS_FOR_A_YEAR } from './assemble.ts'
 import type { AssessOptions } from './assess-options.ts'
 import {
   MONTHLY_HEAT_START_DAYS,
   type ResolvedAssessOptions,
   resolveAssessOptions,
 } from './assess-options.ts'
-import { ASSESSMENT_SCHEMA, type Assessment, type MonthlyRow } from './assessment.ts'
-import { assessmentAssumptions } from './assumptions.ts'
+import type { Assessment, MonthlyRow } from './assessment.ts'
+import { binStage } from './bin-stage.ts'
 import { heatSummary } from './heat-summary.ts'
 import { type LocalTimeColumns, localTimeColumns } from './local-time.ts'
-import {
-  countMonthly,
-  hourOfDayTable,
-  MONTH_COVERAGE_REQUIRED,
-  type MonthlyCounts,
-  monthlyRows,
-  totalReasons,
-} from './monthly-tables.ts'
-import { type PsychrometricSummary, psychrometricSummary } from './psychrometric.ts'
-import { seasonCalendar } from './season-calendar.ts'
+import { countMonthly, type MonthlyCounts, monthlyRows } from './monthly-tables.ts'
+import { psychrometricSummary } from './psychrometric.ts'
 import {
   bestStartWindows,
   runStart,
@@ -49,15 +45,14 @@ import {
 } from './start-dates.ts'
 import { quantileSorted, roundOrNull, spread } from './statistics.ts'
 
+export { assembleAssessment, assessmentWarnings } from './assemble.ts'
+
 export {
   type AssessOptions,
   type AssessProgress,
   BACKUP_MIN_AIR_C,
   resolveAssessOptions,
 } from './assess-options.ts'
-
-/** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */
-const MIN_HOURS_FOR_A_YEAR = 168
 
 /**
  * Share of the usable hours that may lack irradiance before a method that needs the sun is refused:
@@ -92,17 +87,6 @@ export function requireSun(series: HourlySeries, kind: string): void {
   }
 }
 
-/** How the weather reader names the assumption it adds when it estimates the sun. */
-const ESTIMATED_SUN_PREFIX = 'irradiance estimated from '
-
-/** Daylight hours (irradiance above 0) whose irradiance the reader estimated. */
-function countEstimatedSun(series: HourlySeries): number {
-  let n = 0
-  for (let i = 0; i < series.hours; i++)
-    if (series.quality[i] & QualityFlag.irradianceEstimated && series.ghiWm2[i] > 0) n++
-  return n
-}
-
 /** Assess one site (one series) for one product and method. Throws RangeError for bad options. */
 export function assess(series: HourlySeries, options: AssessOptions): Assessment {
   if (series.hours < 24)
@@ -112,14 +96,35 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   const { primary, backup } = hourlyConditionsStage(series, run)
   const calendar = calendarStage(series, primary)
   const ctx = startContext(series, run, calendar.time, primary, backup)
+  const psychrometric = () =>
+    psychrometricSummary(series, run.profile, run.targetWbPct, {
+      utcOffsetHours: calendar.time.utcOffsetHours,
+      saturationPa: primary.ambientSaturationPa,
+    })
+  if (run.model.batches === 'deep-bed') {
+    // grain in a bin: the deep-bed model per start date, airflow and year instead of batches
+    const bin = binStage(series, run, calendar.time.utcOffsetHours)
+    const starts: StartDates = { table: { rows: [], outcomes: [], batches: 0, skipped: 0 }, best: NO_WINDOWS }
+    const heat = heatSummary([], backup, run, ctx, { heatedSample: false })
+    return assembleAssessment(series, run, {
+      primary,
+      calendar,
+      starts,
+      heat,
+      psychrometric: psychrometric(),
+      bin,
+    })
+  }
   monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
   const starts = startDatesStage(ctx, calendar.years, run)
   const heat = heatSummary(starts.table.outcomes, backup, run, ctx)
-  const psychrometric = psychrometricSummary(series, run.profile, run.targetWbPct, {
-    utcOffsetHours: calendar.time.utcOffsetHours,
-    saturationPa: primary.ambientSaturationPa,
-  })
-  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric })
+  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric: psychrometric() })
+}
+
+/** The best windows of a bin assessment: none (its answer is the minimum airflow per start month). */
+const NO_WINDOWS: StartDates['best'] = {
+  windows: [],
+  criterion: 'grain in a bin: see the minimum airflow per start month instead of start windows',
 }
 
 /** Stage 2: the method's hourly conditions for every hour and the backup heater's, lazily. */
@@ -256,142 +261,4 @@ export function startDatesStage(ctx: StartContext, years: number[], run: Resolve
     run.onProgress?.({ stage: 'start-dates', done: di + 1, total: days.length }),
   )
   return { table, best: bestStartWindows(table.rows) }
-}
-
-/** What the file and the options leave uncertain, in sentences for the user. */
-export function assessmentWarnings(
-  series: HourlySeries,
-  run: ResolvedAssessOptions,
-  primary: HourlyConditions,
-  calendar: Calendar,
-  starts: StartDates,
-  estimatedSunHours: number,
-): string[] {
-  const warnings: string[] = []
-  const { years, time } = calendar
-  if (years.length === 0) {
-    warnings.push(
-      `no year holds ${MIN_HOURS_FOR_A_YEAR} hours (a week) with dry bulb and humidity: the monthly and start-date tables are empty`,
-    )
-  } else if (series.typicalYear || years.length < 2) {
-    warnings.push(
-      series.typicalYear
-        ? 'typical-year file: one synthetic year, so spread across years (P10/P90) cannot be computed; the figures describe that one year only'
-        : 'the file holds one year: spread across years (P10/P90) cannot be computed',
-    )
-  } else if (years.length < 10) {
-    warnings.push(`only ${years.length} years of data: P10 and P90 across so few years are rough`)
-  }
-  if (estimatedSunHours > 0 && run.model.needs.sun) {
-    const from = (series.supplied ?? [])
-      .filter((s) => s.name.startsWith(ESTIMATED_SUN_PREFIX))
-      .map((s) => s.name.slice(ESTIMATED_SUN_PREFIX.length))
-    warnings.push(
-      `the sun in ${estimatedSunHours} daylight hours is estimated${from.length > 0 ? ` from ${from.join(' and ')}` : ''}, ` +
-        'not measured: usable hours and drying times rest on that estimate, which is meant for sums over many days ' +
-        'and is rough hour by hour (see the assumptions)',
-    )
-  }
-  if (primary.noRainData && run.model.rainMatters(run.method)) {
-    warnings.push(
-      'the file has no rain: rain on the exposed product is not assessed (hours are never flagged as rain)',
-    )
-  }
-  if (time.offsetSource === 'longitude' || time.offsetSource === 'assumed-utc') {
-    warnings.push(
-      `the site's clock is not known: local time taken as UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours} (${time.offsetSource === 'longitude' ? 'longitude / 15' : 'no longitude either'}); give --site-tz <zone> for the site's own`,
-    )
-  } else if (time.offsetSource === 'timestamps') {
-    warnings.push(
-      `the site's clock is taken from the file's local timestamps (UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}); give --site-tz <zone> if the site keeps another`,
-    )
-  }
-  if (primary.assumedIrradianceHours > 0) {
-    warnings.push(
-      `${primary.assumedIrradianceHours} daylight hours had no irradiance and were taken as 0 W/m²`,
-    )
-  }
-  if (starts.table.batches === 0)
-    warnings.push('no start date in the season had a complete batch in the data')
-  return warnings
-}
-
-function isoHour(ms: number): string {
-  return new Date(ms).toISOString().slice(0, 13) + ':00Z'
-}
-
-/** Stage 8: the JSON-safe assessment. */
-export function assembleAssessment(
-  series: HourlySeries,
-  run: ResolvedAssessOptions,
-  parts: {
-    primary: HourlyConditions
-    calendar: Calendar
-    starts: StartDates
-    heat: Assessment['heat']
-    psychrometric: PsychrometricSummary
-  },
-): Assessment {
-  const { primary, calendar, starts } = parts
-  const { profile, product } = run
-  const reasons = totalReasons(calendar.counts)
-  const estimatedSunHours = countEstimatedSun(series)
-  return {
-    schema: ASSESSMENT_SCHEMA,
-    site: {
-      name: series.site.name,
-      latitudeDeg: series.site.latitudeDeg,
-      longitudeDeg: series.site.longitudeDeg,
-      elevationM: series.site.elevationM,
-      utcOffsetHours: calendar.time.utcOffsetHours,
-      utcOffsetSource: calendar.time.offsetSource,
-      timeZone: calendar.time.timeZone,
-      typicalYear: series.typicalYear,
-    },
-    product: {
-      id: profile.id,
-      name: profile.name,
-      initialMoistureWbPct: run.initialWbPct,
-      targetMoistureWbPct: run.targetWbPct,
-      targetErhPctAt25C: roundOrNull(product.erhPct(25, run.targetDb), 1) ?? 0,
-      maxProductTempC: run.maxProductTempC,
-      thicknessMm: product.thicknessMm,
-      loadingKgPerM2: run.loadingKgPerM2,
-      cautions: [...profile.cautions],
-    },
-    method: run.method,
-    methodLabel: run.model.label,
-    season: run.season,
-    deadlineDays: run.deadlineDays,
-    maxDays: run.maxDays,
-    monthly: calendar.monthly,
-    hourOfDay: hourOfDayTable(calendar.counts),
-    hoursByReason: reasons,
-    startDates: starts.table.rows,
-    bestStartWindows: starts.best.windows,
-    bestStartWindowCriterion: starts.best.criterion,
-    seasonCalendar: seasonCalendar(starts.table.rows, run.season),
-    heat: parts.heat,
-    psychrometric: parts.psychrometric,
-    assumptions: [
-      ...assessmentAssumptions(run),
-      // what the weather reader supplied rather than read (estimated irradiance, a constant pressure)
-      ...(series.supplied ?? []),
-    ],
-    warnings: assessmentWarnings(series, run, primary, calendar, starts, estimatedSunHours),
-    coverage: {
-      firstHourUtc: isoHour(series.startUtcMs[0]),
-      lastHourUtc: isoHour(series.startUtcMs[series.hours - 1]),
-      hours: series.hours,
-      missingHours: reasons.missingData,
-      years: calendar.years,
-      monthCoverageRequired: MONTH_COVERAGE_REQUIRED,
-      assumedIrradianceHours: primary.assumedIrradianceHours,
-      estimatedIrradianceHours: estimatedSunHours,
-      assumedWindHours: primary.assumedWindHours,
-      hasRainData: !primary.noRainData,
-      startDateBatchesRun: starts.table.batches,
-      startDateBatchesSkippedForData: starts.table.skipped,
-    },
-  }
 }

@@ -5,6 +5,7 @@
  */
 import type { DryingMethod, FuelId } from '../drying/method.ts'
 import type { HourStatusName } from '../drying/usable-hour.ts'
+import type { BinAssessment } from './assessment-bin.ts'
 import type { PsychrometricSummary } from './psychrometric.ts'
 import type { SeasonCalendar } from './season-calendar.ts'
 import type { Spread } from './statistics.ts'
@@ -196,7 +197,7 @@ export interface Assessment {
   startDates: StartDateRow[]
   bestStartWindows: StartWindow[]
   bestStartWindowCriterion: string
-  /** The start-date table folded into start weeks, each with one state (dries, marginal, needs heat …) and the criterion. */
+  /** The start-date table folded into start weeks, each with one state (dries, marginal, needs heat …) and the criterion; no cells for a bin. */
   seasonCalendar: SeasonCalendar
   heat: HeatSummary
   /** The site's hours on a psychrometric chart, with the air that dries the product to its target. */
@@ -204,4 +205,10 @@ export interface Assessment {
   assumptions: Assumption[]
   warnings: string[]
   coverage: Coverage
+  /**
+   * Natural-air bin drying (methods with deep-bed batches): per start date and airflow, days until the top layer
+   * is dry, its dry-matter loss and fan energy; per start month the minimum airflow. Absent for other methods,
+   * whose start-date table, best windows and heat come from batches instead (those are then empty).
+   */
+  bin?: BinAssessment
 }

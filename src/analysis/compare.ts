@@ -17,6 +17,10 @@ import { quantileSorted, roundOrNull } from './statistics.ts'
 export const COMPARE_CRITERIA = ['probability-within-deadline', 'usable-hours-p10', 'heat-per-tonne'] as const
 export type CompareCriterion = (typeof COMPARE_CRITERIA)[number]
 
+/** The first criterion in words for natural-air bins (their assessments carry no batches). */
+export const BIN_PROBABILITY_DESCRIPTION =
+  'mean, over the season start dates and the airflows compared, of the share of years in which the top layer of the bin dries below the dry-matter loss limit within the season (higher is better)'
+
 export const CRITERION_DESCRIPTIONS: Record<CompareCriterion, string> = {
   'probability-within-deadline':
     'mean, over the season start dates, of the share of years in which a batch finishes within the deadline by the method alone (higher is better)',
@@ -34,6 +38,11 @@ export interface SiteScore {
   meanProbabilityWithinDeadline: number | null
   medianHeatKwhPerTonne: number | null
   bestStartWindow: string | null
+  /**
+   * Natural-air bins: the largest of the start months' minimum airflows [m³/min per t] (the airflow that serves
+   * the whole season), null when some month has none among those compared; absent for other methods.
+   */
+  binSeasonMinimumAirflowM3PerMinPerTonne?: number | null
   warnings: string[]
 }
 
@@ -84,11 +93,25 @@ export function seasonUsableHoursByYear(a: Assessment): number[] {
   return [...byYear.values()].filter((e) => e.months === needed).map((e) => e.sum)
 }
 
+/** Mean share of safe years over a bin's start dates × airflows (NaN without runs). */
+function binMeanShareSafe(a: Assessment): number {
+  const rows = (a.bin?.startDates ?? []).filter((r) => r.years > 0)
+  return rows.length > 0 ? rows.reduce((s, r) => s + r.shareOfYearsSafe, 0) / rows.length : Number.NaN
+}
+
+/** The airflow that serves every start month of a bin: the largest monthly minimum; null if a month has none. */
+function binSeasonMinimumAirflow(a: Assessment): number | null {
+  const months = a.bin?.minimumAirflowByMonth ?? []
+  if (months.length === 0 || months.some((m) => m.minimumAirflowM3PerMinPerTonne === null)) return null
+  return Math.max(...months.map((m) => m.minimumAirflowM3PerMinPerTonne as number))
+}
+
 function score(a: Assessment): Omit<SiteScore, 'rank'> {
   const hours = seasonUsableHoursByYear(a).sort((x, y) => x - y)
   const withYears = a.startDates.filter((r) => r.years > 0)
-  const meanP =
-    withYears.length > 0
+  const meanP = a.bin
+    ? binMeanShareSafe(a)
+    : withYears.length > 0
       ? withYears.reduce((s, r) => s + r.probabilityWithinDeadline, 0) / withYears.length
       : Number.NaN
   const best = a.bestStartWindows[0]
@@ -99,6 +122,7 @@ function score(a: Assessment): Omit<SiteScore, 'rank'> {
     meanProbabilityWithinDeadline: roundOrNull(meanP, 3),
     medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
     bestStartWindow: best ? `${best.from} to ${best.to}` : null,
+    ...(a.bin ? { binSeasonMinimumAirflowM3PerMinPerTonne: binSeasonMinimumAirflow(a) } : {}),
     warnings: a.warnings,
   }
 }
@@ -145,7 +169,10 @@ export function rankAssessments(
   return {
     schema: 'dryhours.comparison/1',
     criterion,
-    criterionDescription: CRITERION_DESCRIPTIONS[criterion],
+    criterionDescription:
+      criterion === 'probability-within-deadline' && assessments.every((a) => a.bin)
+        ? BIN_PROBABILITY_DESCRIPTION
+        : CRITERION_DESCRIPTIONS[criterion],
     product: first.product,
     method: first.method,
     season: first.season,

@@ -72,6 +72,7 @@ export function heatSummary(
   backup: HourlyConditions,
   run: ResolvedAssessOptions,
   ctx: StartContext,
+  options: { heatedSample?: boolean } = {},
 ): HeatSummary {
   const heater = run.backupMethod
   const tonnes = run.batchKgFresh / 1000
@@ -88,7 +89,7 @@ export function heatSummary(
   const meanHeatedC = Number.isFinite(meanComputedC) ? meanComputedC : heater.minAirC
   const sorption = heatOfSorption(run.profile, Math.min(Math.max(meanHeatedC, 0), 90), run.targetDb)
   const evaporationFuelKwh = (water * sorption.totalKjPerKg) / S_PER_HOUR / eff
-  const heatedOnly = heatedEveryHourSample(ctx, HEATED_SAMPLE_BATCHES)
+  const heatedOnly = options.heatedSample === false ? [] : heatedEveryHourSample(ctx, HEATED_SAMPLE_BATCHES)
   const ratio =
     heatedOnly.length > 0
       ? quantileSorted(

@@ -5,6 +5,7 @@
  */
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
 import { HOUR_STATUS_NAMES, HourStatus, type HourStatusName } from '../drying/usable-hour.ts'
+import { daysInMonth } from '../physics/calendar.ts'
 import type { HourOfDayTable, MonthlyRow, YearValue } from './assessment.ts'
 import type { LocalTimeColumns } from './local-time.ts'
 import { quantileSorted, roundOrNull, spread } from './statistics.ts'
@@ -13,10 +14,6 @@ import { quantileSorted, roundOrNull, spread } from './statistics.ts'
 export const MONTH_COVERAGE_REQUIRED = 0.8
 
 const REASONS = HOUR_STATUS_NAMES.length
-
-function daysInMonth(year: number, month: number): number {
-  return new Date(Date.UTC(year, month, 0)).getUTCDate()
-}
 
 export interface MonthlyCounts {
   years: number[]

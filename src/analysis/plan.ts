@@ -5,6 +5,9 @@
  * the defaults) for their limits and messages. Runtime-neutral; throws {@link AssessOptionError} naming the
  * option for any value outside its range.
  */
+import { parseDryingMethod } from '../drying/method.ts'
+import { methodModel } from '../drying/methods/index.ts'
+import { binAirflows, type NaturalAirBinMethod } from '../drying/methods/natural-air-bin.ts'
 import type { AssessOptions } from './assess.ts'
 import { parseMonthDay } from './local-time.ts'
 import { type MonthDay, seasonDays } from './start-dates.ts'
@@ -25,6 +28,12 @@ export const ASSESS_DEFAULTS = {
   /** Days between start dates when a season is given / when it is not. */
   stepDaysWithSeason: 1,
   stepDaysWholeYear: 7,
+  /**
+   * Days between start dates of a bin (grain harvested into a bin): every bin run is a deep-bed simulation per
+   * airflow, so the dates are spread wider (7 days with a season, 14 over the whole year; our choice).
+   */
+  binStepDaysWithSeason: 7,
+  binStepDaysWholeYear: 14,
 } as const
 
 /** Accepted ranges of the options, checked by {@link planAssessment} [unit in the name]. */
@@ -79,6 +88,8 @@ export interface AssessPlan {
   stepDays: number
   /** The season's start days, in order. */
   startDays: MonthDay[]
+  /** For a bin (deep-bed) method: its candidate airflows and model layers; null for batch methods. */
+  bin: { airflows: number; layers: number } | null
 }
 
 function checkRange(
@@ -135,14 +146,20 @@ export function planAssessment(options: AssessOptions): AssessPlan {
       `start hour must be a whole hour from 0 to 23, got ${startHourLocal}`,
     )
   }
+  const bin = binPlan(options)
   const seasonGiven = options.seasonStart !== undefined || options.seasonEnd !== undefined
   const seasonStart = options.seasonStart ?? ASSESS_DEFAULTS.seasonStart
   const seasonEnd = options.seasonEnd ?? ASSESS_DEFAULTS.seasonEnd
   const start = monthDayOption('seasonStart', seasonStart, 'season start')
   const end = monthDayOption('seasonEnd', seasonEnd, 'season end')
-  const stepDays =
-    options.startStepDays ??
-    (seasonGiven ? ASSESS_DEFAULTS.stepDaysWithSeason : ASSESS_DEFAULTS.stepDaysWholeYear)
+  const defaultStep = bin
+    ? seasonGiven
+      ? ASSESS_DEFAULTS.binStepDaysWithSeason
+      : ASSESS_DEFAULTS.binStepDaysWholeYear
+    : seasonGiven
+      ? ASSESS_DEFAULTS.stepDaysWithSeason
+      : ASSESS_DEFAULTS.stepDaysWholeYear
+  const stepDays = options.startStepDays ?? defaultStep
   const [stepLo, stepHi] = ASSESS_RANGES.startStepDays
   if (!(Number.isInteger(stepDays) && stepDays >= stepLo && stepDays <= stepHi)) {
     throw new AssessOptionError(
@@ -162,7 +179,34 @@ export function planAssessment(options: AssessOptions): AssessPlan {
     seasonEnd,
     stepDays,
     startDays: seasonDays(start, end, stepDays),
+    bin,
   }
+}
+
+/**
+ * The bin part of the plan when the method assesses grain in a bin (deep-bed batches); null for batch methods (and
+ * for a method kind that does not exist: the engine names it when it runs). Refuses a product the method cannot
+ * take (`productFits`, e.g. fruit in a grain bin).
+ */
+function binPlan(options: AssessOptions): AssessPlan['bin'] {
+  const kind = (options.method as { kind?: unknown }).kind
+  if (typeof kind !== 'string') return null
+  let model: ReturnType<typeof methodModel>
+  try {
+    model = methodModel(kind)
+  } catch {
+    return null
+  }
+  const unfit = model.productFits?.(options.product) ?? null
+  if (unfit !== null) throw new AssessOptionError('method', unfit)
+  if (model.batches !== 'deep-bed') return null
+  let method: NaturalAirBinMethod
+  try {
+    method = parseDryingMethod(options.method) as NaturalAirBinMethod
+  } catch (e) {
+    throw new AssessOptionError('method', (e as Error).message)
+  }
+  return { airflows: binAirflows(method).length, layers: method.layers }
 }
 
 function monthDayOption(option: keyof AssessOptions, text: string, name: string): MonthDay {
@@ -173,21 +217,48 @@ function monthDayOption(option: keyof AssessOptions, text: string, name: string)
   }
 }
 
+/**
+ * Cost of one layer-hour of the bin model in batch-hours of the thin-layer batches, the unit of the work budget.
+ * Measured by dryhours (bench/sections/bins.ts, "bin layer-hour in batch-hours"): CPU time of a bin assessment per
+ * layer-hour the planner counts, over CPU time of a slow batch assessment (shade drying of corn, batches running
+ * long) per batch-hour it counts, the same demo file in the same process: 1.3–1.65 in three runs on the dry upland
+ * and the humid valley files (on a loaded shared machine); 2 leaves a margin.
+ */
+export const BIN_LAYER_HOUR_IN_BATCH_HOURS = 2
+
 /** What an assessment of a series will cost, before it runs. */
 export interface AssessCost {
   /** Years the series spans (at least 1). */
   years: number
-  /** Batches simulated: (start days + 24 monthly heat starts) × years + the 30 heated-every-hour samples. */
+  /** Batches simulated: (start days + 24 monthly heat starts) × years + the 30 heated-every-hour samples (0 for a bin). */
   batches: number
-  /** Batches × the longest a batch may run [h]: the bound on simulated batch-hours. */
+  /**
+   * The bound on simulated batch-hours: batches × the longest a batch may run [h]; for a bin, its layer-hours in
+   * batch-hour equivalents ({@link BIN_LAYER_HOUR_IN_BATCH_HOURS}).
+   */
   batchHours: number
+  /** Bin runs (start days × airflows × years) and their layer-hours (× season hours × layers); 0 for batch methods. */
+  binRuns: number
+  binLayerHours: number
 }
 
 /** Cost of assessing a series of `seriesHours` hours with this plan. */
 export function assessmentCost(plan: AssessPlan, seriesHours: number): AssessCost {
   const years = Math.max(1, Math.ceil(seriesHours / HOURS_PER_LEAP_YEAR))
+  const seasonHours = Math.round(plan.maxDays * 24)
+  if (plan.bin) {
+    const binRuns = plan.startDays.length * plan.bin.airflows * years
+    const binLayerHours = binRuns * Math.max(24, seasonHours) * plan.bin.layers
+    return {
+      years,
+      batches: 0,
+      batchHours: Math.ceil(binLayerHours * BIN_LAYER_HOUR_IN_BATCH_HOURS),
+      binRuns,
+      binLayerHours,
+    }
+  }
   const batches = (plan.startDays.length + MONTHLY_HEAT_STARTS) * years + HEATED_SAMPLE_BATCHES
-  return { years, batches, batchHours: batches * Math.round(plan.maxDays * 24) }
+  return { years, batches, batchHours: batches * seasonHours, binRuns: 0, binLayerHours: 0 }
 }
 
 /** Simulated batch-hours of assessing each of the series (hours per series) with the same options. */

@@ -7,6 +7,7 @@
  * over liquid water (eq 6); the boundary is the product isotherm's equilibrium RH at the target moisture
  * (product/equilibrium.ts) as a humidity ratio at that pressure.
  */
+import { humidityRatioFromRh } from '../physics/air-processes.ts'
 import { MS_PER_HOUR } from '../physics/constants.ts'
 import { humidityRatioFromVaporPressure, STANDARD_PRESSURE_KPA } from '../physics/moist-air.ts'
 import { saturationVaporPressureLiquidKpa } from '../physics/saturation.ts'
@@ -75,9 +76,7 @@ const GRID_W_BINS = 1024
 
 /** Humidity ratio [g/kg] at dry bulb tC and RH rhPct (over liquid water) at pressureKpa (eqs 6, 20). */
 export function humidityRatioAtRhGPerKg(tC: number, rhPct: number, pressureKpa: number): number {
-  return (
-    1000 * humidityRatioFromVaporPressure((rhPct / 100) * saturationVaporPressureLiquidKpa(tC), pressureKpa)
-  )
+  return 1000 * humidityRatioFromRh(tC, rhPct, pressureKpa)
 }
 
 class CellCounter {

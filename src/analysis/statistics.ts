@@ -7,6 +7,7 @@
  * year) and p90 the figure exceeded in 1 of 10 years (a good year). For days to target, p90 is the
  * time within which 9 of 10 years finish.
  */
+import { quantileSorted } from '../math/quantile.ts'
 import { integerPower } from '../physics/power.ts'
 
 /** The convention, in words, for the assumptions list of an assessment. */
@@ -15,24 +16,7 @@ export const PERCENTILE_CONVENTION =
   'For usable hours p10 is exceeded in 9 of 10 years (bad year), p90 in 1 of 10 (good year); ' +
   'for days to target p90 is the time within which 9 of 10 years finish.'
 
-/**
- * Quantile `q` ∈ [0, 1] of `sorted` (ascending, finite or +Infinity), Hyndman–Fan definition 7:
- * h = (n − 1)q, x⌊h⌋ + (h − ⌊h⌋)(x⌊h⌋+1 − x⌊h⌋). Example: [1, 2, 3, 4] at 0.1 → 1.3.
- * Returns NaN for an empty array. +Infinity entries (e.g. batches that never finished) propagate.
- */
-export function quantileSorted(sorted: ArrayLike<number>, q: number): number {
-  const n = sorted.length
-  if (n === 0) return Number.NaN
-  if (!(q >= 0 && q <= 1)) throw new RangeError(`quantile must be between 0 and 1, got ${q}`)
-  const h = (n - 1) * q
-  const lo = Math.floor(h)
-  const hi = Math.min(lo + 1, n - 1)
-  const a = sorted[lo]
-  const b = sorted[hi]
-  if (a === b) return a
-  if (b === Number.POSITIVE_INFINITY) return h === lo ? a : Number.POSITIVE_INFINITY
-  return a + (h - lo) * (b - a)
-}
+export { quantileSorted }
 
 export interface Spread {
   median: number | null

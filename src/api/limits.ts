@@ -4,7 +4,7 @@
  * /v1/assess, /v1/compare and the page, before any hour is computed.
  */
 import type { AssessOptions } from '../analysis/assess.ts'
-import { estimateBatchHours } from '../analysis/plan.ts'
+import { estimateBatchHours, planAssessment } from '../analysis/plan.ts'
 import type { ApiConfig } from './config.ts'
 import { rethrowAsProblem } from './errors.ts'
 import { ApiProblem } from './problem.ts'
@@ -24,6 +24,17 @@ export function checkBatchHours(
     work = estimateBatchHours(options, seriesHours)
   } catch (e) {
     rethrowAsProblem(e, { optionPath, rangeStatus: 400 })
+  }
+  if (work > config.maxBatchHours && planAssessment(options).bin) {
+    const levers = ['seasonStart', 'startStepDays', 'method.airflowsM3PerMinPerTonne', 'maxDays'].map(
+      optionPath,
+    )
+    throw new ApiProblem(
+      422,
+      `this request would simulate about ${(work / 1e6).toFixed(1)} million batch-hours of bin runs (start dates × airflows × years × season hours × layers, in batch-hour equivalents), more than the limit of ${(config.maxBatchHours / 1e6).toFixed(1)} million: give the harvest season only (${levers[0]}), a larger start-date step (${levers[1]}), fewer airflows to compare (${levers[2]}), a shorter season in the bin (${levers[3]}), or fewer years per file`,
+      levers.map((path) => ({ path, message: 'too much work for one request' })),
+      'too-much-work',
+    )
   }
   if (work > config.maxBatchHours) {
     const levers = ['startStepDays', 'seasonStart', 'maxDays'].map(optionPath)

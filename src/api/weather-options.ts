@@ -6,15 +6,13 @@
  * names the option as the request gave it (query parameter or JSON key).
  */
 import { z } from 'zod'
+import { type OptionSurface, renderOptionNames, WEATHER_OPTION_SPECS } from '../weather/option-spec.ts'
 import {
   checkWeatherOptions,
-  type OptionSurface,
-  renderOptionNames,
-  WEATHER_OPTION_SPECS,
   WeatherOptionError,
   WeatherOptionsInvalid,
   weatherOptionsFromTexts,
-} from '../weather/option-spec.ts'
+} from '../weather/option-texts.ts'
 import type { WeatherReadOptions } from '../weather/options.ts'
 import type { WeatherReadResult } from '../weather/result.ts'
 import type { WeatherInputError } from '../weather/weather-input-error.ts'

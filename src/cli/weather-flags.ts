@@ -4,14 +4,13 @@
  * compare, energy-chart --weather): the flags, their help and their reading come from the one table in
  * `weather/option-spec.ts`.
  */
+import { cliWeatherHelp, cliWeatherParseOptions } from '../weather/option-spec.ts'
 import {
   checkWeatherOptions,
-  cliWeatherHelp,
-  cliWeatherParseOptions,
   WeatherOptionError,
   WeatherOptionsInvalid,
   weatherOptionsFromTexts,
-} from '../weather/option-spec.ts'
+} from '../weather/option-texts.ts'
 import type { WeatherReadOptions } from '../weather/options.ts'
 import { UsageError } from './command.ts'
 

@@ -15,10 +15,13 @@
  * (physics/air-processes.ts), the constant-rate limit and the verdict (drying/usable-hour.ts).
  * Columns preallocated, one state object per series: no allocation per hour.
  */
+
 import { AdiabaticPath, adiabaticEndDryBulbC, solveAdiabaticPath } from '../physics/air-processes.ts'
+import { S_PER_HOUR } from '../physics/constants.ts'
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
 import { saturationPressureLiquidPa } from '../physics/saturation.ts'
+import { moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import {
   allocateColumns,
@@ -324,6 +327,9 @@ export function computeHourlyConditions(
   const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method)
   const methodHour = model.prepare(method, {
     series,
+    profile: product.profile,
+    initialWbPct: options.initialWbPct,
+    targetWbPct: moistureWbPctFromDb(options.targetDb),
     solar,
     thresholds: options.thresholds,
     maxProductTempC: options.maxProductTempC,
@@ -341,7 +347,7 @@ export function computeHourlyConditions(
     options.ambientSaturationPa !== undefined,
     options.verdict !== false,
     1 / (options.loadingKgPerM2 * dmPerKgFresh), // × E [kg/m²/h]
-    (airFlowKgPerSPerTonne * 3600) / (1000 * dmPerKgFresh), // × deficit [kg/kg]
+    (airFlowKgPerSPerTonne * S_PER_HOUR) / (1000 * dmPerKgFresh), // × deficit [kg/kg]
   )
   let anyRain = false
   for (let i = 0; i < n && !anyRain; i++) if (Number.isFinite(series.rainMm[i])) anyRain = true

@@ -9,6 +9,7 @@ import { METHOD_MODELS, type MethodModels } from './methods/index.ts'
 
 export { FUEL_IDS, type FuelId } from './fuels.ts'
 export { type HeatedMethod, heatedSchema } from './methods/heated.ts'
+export type { NaturalAirBinMethod } from './methods/natural-air-bin.ts'
 export type { OpenAirMethod } from './methods/open-air.ts'
 export type { ShadeMethod } from './methods/shade.ts'
 export type { SolarCabinetMethod } from './methods/solar-cabinet.ts'

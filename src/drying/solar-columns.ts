@@ -6,10 +6,10 @@
  * carried through the night (physics/fao56-reference-et.ts).
  */
 
+import { dayOfYearAt } from '../physics/calendar.ts'
 import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import { fillNightShortwaveRatioColumn } from '../physics/fao56-reference-et.ts'
 import {
-  dayOfYearAt,
   inverseRelativeDistanceEarthSun,
   mjPerM2HourFromWm2,
   SOLAR_CONSTANT_WM2,

@@ -20,11 +20,15 @@ export const GAS_CONSTANT_WATER_VAPOR_J_PER_KG_K = GAS_CONSTANT_J_PER_MOL_K / MO
 /** Stefan–Boltzmann constant σ [W m⁻² K⁻⁴]: CODATA 2018 (exact since the 2019 SI). */
 export const STEFAN_BOLTZMANN_WM2K4 = 5.670374419e-8
 
+/** Hours per day. Definition. */
+export const HOURS_PER_DAY = 24
 /** Seconds per hour. Definition. */
 export const S_PER_HOUR = 3600
 /** Seconds per day. Definition. */
 export const S_PER_DAY = 86_400
-/** Milliseconds per hour (UTC time stamps are in ms). Definition. */
+/** Milliseconds per minute (UTC time stamps are in ms). Definition. */
+export const MS_PER_MINUTE = 60_000
+/** Milliseconds per hour. Definition. */
 export const MS_PER_HOUR = 3_600_000
 /** Milliseconds per day. Definition. */
 export const MS_PER_DAY = 86_400_000

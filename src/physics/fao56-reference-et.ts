@@ -10,7 +10,8 @@
  * Units: MJ m⁻² h⁻¹, kPa, °C, m/s, mm/h.
  */
 
-import { dayOfYearAt, extraterrestrialRadiationPeriodMjM2, fao56HourAngleRad } from './fao56-solar.ts'
+import { dayOfYearAt } from './calendar.ts'
+import { extraterrestrialRadiationPeriodMjM2, fao56HourAngleRad } from './fao56-solar.ts'
 import { clearSkyRadiationFao56 } from './irradiance.ts'
 import { power } from './power.ts'
 

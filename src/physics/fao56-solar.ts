@@ -9,6 +9,7 @@
  * t = UTC − Lz/15, the eq 31 term t + (Lz − Lm)/15 equals UTC + lonEast/15, which is what
  * {@link hourAngleFromUtcRad} uses (same result, no time-zone needed; FAO writes 1/15 as 0.06667).
  */
+import { dayOfYearAt } from './calendar.ts'
 import { MS_PER_DAY, MS_PER_HOUR, S_PER_HOUR } from './constants.ts'
 
 /** Solar constant [MJ m⁻² min⁻¹]; FAO-56 eq 21 (= 1366.7 W/m²). */
@@ -152,24 +153,6 @@ export function extraterrestrialRadiationDailyMjM2(latRad: number, dayOfYear: nu
 }
 
 /**
- * Day of the year (1…366) of the civil date containing `utcMs` + `offsetHours` [h], without
- * allocation (days-from-civil arithmetic, H. Hinnant, "chrono-compatible low-level date algorithms").
- */
-export function dayOfYearAt(utcMs: number, offsetHours = 0): number {
-  const days = Math.floor((utcMs + offsetHours * MS_PER_HOUR) / MS_PER_DAY)
-  const z = days + 719468
-  const era = Math.floor(z / 146097)
-  const doe = z - era * 146097
-  const yoe = Math.floor(
-    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365,
-  )
-  const doyMar = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100)) // days since 1 March
-  const year = yoe + era * 400 + (doyMar >= 306 ? 1 : 0)
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0
-  return doyMar >= 306 ? doyMar - 305 : doyMar + 60 + (leap ? 1 : 0)
-}
-
-/**
  * Extraterrestrial radiation on a horizontal surface for the hour (or period) starting at `startUtcMs`
  * [MJ m⁻² per period], for latitude/east longitude [°]: FAO-56 eqs 23–25, 28–33 evaluated at the period
  * midpoint; J is the day of the local mean-solar date (UTC + lon/15 h). No allocation.
@@ -185,7 +168,7 @@ export function extraterrestrialRadiationForPeriodUtcMjM2(
   if (!(lonEastDeg >= -180 && lonEastDeg <= 180)) {
     throw new RangeError(`longitude must be between -180 and 180 degrees (east positive), got ${lonEastDeg}`)
   }
-  const midMs = startUtcMs + periodHours * 1_800_000
+  const midMs = startUtcMs + periodHours * (MS_PER_HOUR / 2)
   const j = dayOfYearAt(midMs, lonEastDeg / 15)
   const utcHour = (((midMs % MS_PER_DAY) + MS_PER_DAY) % MS_PER_DAY) / MS_PER_HOUR
   const w = hourAngleFromUtcRad(utcHour, lonEastDeg, j)

@@ -159,6 +159,21 @@ export function moistAirSpecificVolumeM3PerKg(
   )
 }
 
+/**
+ * Heat capacity of moist air per m³ [J m⁻³ K⁻¹]: (1.006 + 1.86 W)·1000 / v, the heat capacity per kg of dry air
+ * (∂h/∂t of eq 30) over the volume of that kg (eq 26).
+ */
+export function moistAirVolumetricHeatCapacityJPerM3K(
+  dryBulbC: number,
+  humidityRatioKgPerKg: number,
+  pressureKpa: number,
+): number {
+  return (
+    (1000 * moistAirHeatCapacityKjPerKgK(humidityRatioKgPerKg)) /
+    moistAirSpecificVolumeM3PerKg(dryBulbC, humidityRatioKgPerKg, pressureKpa)
+  )
+}
+
 /** Moist-air density [kg moist air / m³] = (1 + W)/v; ASHRAE HOF 2017 ch. 1 eq 11 with eq 26. */
 export function moistAirDensityKgPerM3(
   dryBulbC: number,

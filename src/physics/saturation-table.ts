@@ -84,6 +84,29 @@ export function saturationPressureFromTableKpa(tC: number, ice: boolean): number
   return y0 + u * (m0 + u * (c2 + u * c3))
 }
 
+/**
+ * The liquid-water branch of {@link saturationPressureFromTableKpa} (the same value and first derivative, to the
+ * bit) with dpws/dT [kPa/K] written to the caller's `slope[0]` and no second derivative: small enough for the
+ * compiler to inline into a solver's inner loop (the bin model's layer solver calls it some ten million times
+ * per assessment; as a call it cost that loop about 5 %, measured in `bench/sections/bins.ts`'s workload).
+ */
+export function liquidSaturationPressureFromTableKpa(tC: number, slope: Float64Array): number {
+  const s = (tC - SATURATION_MIN_C) * INV_STEP
+  let k = Math.floor(s)
+  if (k < 0) k = 0
+  else if (k > LIQUID_LAST) k = LIQUID_LAST
+  const u = s - k
+  const j = 2 * k
+  const y0 = LIQUID[j]
+  const m0 = LIQUID[j + 1]
+  const y1 = LIQUID[j + 2]
+  const m1 = LIQUID[j + 3]
+  const c2 = 3 * (y1 - y0) - 2 * m0 - m1
+  const c3 = 2 * (y0 - y1) + m0 + m1
+  slope[0] = (m0 + u * (2 * c2 + 3 * c3 * u)) * INV_STEP
+  return y0 + u * (m0 + u * (c2 + u * c3))
+}
+
 /** Node spacing of the inverse table in ln(pws/Pa). */
 const LN_STEP = 0.02
 const INV_LN_STEP = 1 / LN_STEP

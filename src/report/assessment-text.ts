@@ -6,6 +6,7 @@
  * A table that shows only some rows says so.
  */
 import type { Assessment } from '../analysis/assessment.ts'
+import { binText } from './bin-text.ts'
 import {
   formatNumber,
   formatPrice,
@@ -34,24 +35,52 @@ export interface TextOptions {
   fullTableHint?: string
 }
 
+/** What every part of the text shares: the assessment, its report context and the number formats. */
+interface TextContext {
+  a: Assessment
+  o: TextOptions
+  u: ReturnType<typeof unitFormatter>
+  ctx: ReturnType<typeof sectionContext>
+  f0: (x: number | null | undefined) => string
+  f1: (x: number | null | undefined) => string
+  /** An energy per tonne [kWh/t] in the display unit, no unit written. */
+  e: (kwhPerTonne: number | null | undefined) => string
+}
+
 /** The readable summary of an assessment, for a terminal. */
 export function assessmentText(a: Assessment, o: TextOptions = {}): string {
   const u = unitFormatter(o.units ?? 'si')
-  const ctx = sectionContext(a, { units: o.units, optionSurface: 'cli' })
   const f0 = (x: number | null | undefined): string => formatNumber(x ?? null, 0)
-  const f1 = (x: number | null | undefined): string => formatNumber(x ?? null, 1)
-  const e = (kwhPerTonne: number | null | undefined) =>
-    finite(kwhPerTonne) ? f0(u.energyPerMass(kwhPerTonne).value) : '–'
-  const out: string[] = []
+  const t: TextContext = {
+    a,
+    o,
+    u,
+    ctx: sectionContext(a, { units: o.units, optionSurface: 'cli' }),
+    f0,
+    f1: (x) => formatNumber(x ?? null, 1),
+    e: (kwhPerTonne) => (finite(kwhPerTonne) ? f0(u.energyPerMass(kwhPerTonne).value) : '–'),
+  }
+  const out = [...headText(t), ...monthlyText(t), '']
+  if (a.bin) out.push(...binText(a, a.bin))
+  else out.push(...startsText(t), '', ...heatText(t))
+  out.push(...closingText(t))
+  return `${out.join('\n')}\n`
+}
+
+/** The site, product, method, the weather's years and the clock times are on. */
+function headText({ a, ctx }: TextContext): string[] {
   const p = a.product
-  out.push(
+  return [
     `${ctx.siteName}: ${p.name}, ${methodName(a)}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wet basis`,
-  )
-  out.push(
     `weather ${a.coverage.firstHourUtc.slice(0, 10)} to ${a.coverage.lastHourUtc.slice(0, 10)} (UTC), ${a.site.typicalYear ? 'a typical year' : `years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}`}`,
-  )
-  out.push(`times on ${clockWords(siteClock(a))}`)
-  out.push('')
+    `times on ${clockWords(siteClock(a))}`,
+    '',
+  ]
+}
+
+/** Usable drying hours per month, with the share of daylight hours for methods that stop at night. */
+function monthlyText({ a, u, f0, f1, e }: TextContext): string[] {
+  const out: string[] = []
   const daylight = stopsAtNight(a) && a.monthly.some((m) => finite(m.usableDaylightFraction))
   out.push('Usable drying hours per month (median, P10–P90 across years; P10 = reached in 9 of 10 years)')
   const shareHead = daylight ? '% of daylight h' : '% of all hours'
@@ -66,7 +95,12 @@ export function assessmentText(a: Assessment, o: TextOptions = {}): string {
       `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(finite(share) ? (100 * share).toFixed(0) : '–').padStart(15)}  ${mainReasonWords(m).padEnd(40)} ${e(m.supplementalHeatKwhPerTonne.median).padStart(26)}  ${f1(m.medianDaysToTarget).padStart(11)}`,
     )
   }
-  out.push('')
+  return out
+}
+
+/** The season calendar in a line, the best start windows and the start-date table (thinned, said so). */
+function startsText({ a, o, u, f0, f1, e }: TextContext): string[] {
+  const out: string[] = []
   if (a.seasonCalendar?.cells.length) {
     out.push(`The season at a glance (start weeks): ${calendarRuns(a.seasonCalendar)}.`)
     out.push('')
@@ -98,8 +132,13 @@ export function assessmentText(a: Assessment, o: TextOptions = {}): string {
       `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(19)}  ${(r.years > 0 ? yearsWords(r.probabilityWithinDeadline) : 'no data').padEnd(18)}  ${f0(r.rewettingHours.median).padStart(11)}  ${e(r.supplementalHeat.medianKwhPerTonne)} (${e(r.supplementalHeat.p90KwhPerTonne)})`,
     )
   }
+  return out
+}
+
+/** Heat to finish within the deadline, the fuels with their costs, and the cross-check. */
+function heatText({ a, u, ctx, f0, f1, e }: TextContext): string[] {
+  const out: string[] = []
   const h = a.heat
-  out.push('')
   const mass = perMassWords(ctx)
   out.push(
     heatIsAllTheHeat(a)
@@ -127,24 +166,23 @@ export function assessmentText(a: Assessment, o: TextOptions = {}): string {
   out.push(
     `  cross-check: ${f1(water)} ${u.system === 'us' ? 'lb' : 'kg'} of water ${mass} × ${u.system === 'us' ? `${f0(c.heatOfEvaporationKjPerKg / KJ_PER_KG_PER_BTU_PER_LB)} Btu/lb` : `${c.heatOfEvaporationKjPerKg} kJ/kg`} ÷ efficiency = ${e(c.evaporationHeatFuelKwhPerTonne)} ${u.energyPerMassUnit}; heated every hour uses ${c.ratioHeatedEveryHour ?? '–'} × that`,
   )
-  if (a.warnings.length > 0) {
-    out.push('')
-    out.push('Warnings:')
-    for (const w of a.warnings) out.push(`  - ${w}`)
+  return out
+}
+
+/** Warnings, the reader's notes apart from them, the cautions (the bin's first) and where the assumptions are. */
+function closingText({ a, o }: TextContext): string[] {
+  const out: string[] = []
+  const list = (title: string, items: readonly string[]) => {
+    if (items.length === 0) return
+    out.push('', title)
+    for (const x of items) out.push(`  - ${x}`)
   }
-  if ((o.readerNotes ?? []).length > 0) {
-    out.push('')
-    out.push('Notes on how the weather file was read:')
-    for (const n of o.readerNotes ?? []) out.push(`  - ${n}`)
-  }
-  if (p.cautions.length > 0) {
-    out.push('')
-    out.push('Cautions:')
-    for (const w of p.cautions) out.push(`  - ${w}`)
-  }
+  list('Warnings:', a.warnings)
+  list('Notes on how the weather file was read:', o.readerNotes ?? [])
+  list('Cautions:', [...(a.bin?.cautions ?? []), ...a.product.cautions])
   out.push('')
   out.push(
     `${a.assumptions.length} assumptions (thresholds, defaults and their sources) are listed in the JSON and the HTML report`,
   )
-  return `${out.join('\n')}\n`
+  return out
 }

@@ -147,7 +147,9 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
   const sentences = [
     `${best.name} ranks first for ${first.product.name} by ${methodName(first)}` +
       (finite(best.meanProbabilityWithinDeadline)
-        ? `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years finish a batch within ${first.deadlineDays} days across the season's start days.`
+        ? first.bin
+          ? `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years dry the bin's top layer below the dry-matter loss limit within ${first.bin.seasonDays} days, across the season's start days and the airflows compared.`
+          : `: on average ${Math.round(best.meanProbabilityWithinDeadline * 100)} % of years finish a batch within ${first.deadlineDays} days across the season's start days.`
         : '.'),
     `Ranking criterion: ${ranked.criterion}.`,
   ]

@@ -78,7 +78,7 @@ function calendarMm(a: Assessment): number {
 
 function cautionsMm(a: Assessment): number {
   let mm = H2_MM + 8
-  for (const c of [...new Set(a.product.cautions), ...GENERAL_CAUTIONS])
+  for (const c of [...new Set([...(a.bin?.cautions ?? []), ...a.product.cautions]), ...GENERAL_CAUTIONS])
     mm += lines(c, CHARS_PER_LINE - 12) * LINE_MM + 1.2
   return mm
 }
@@ -104,8 +104,33 @@ export function handoutBlocks(a: Assessment, ctx: SectionContext, maxWarnings = 
   }
 }
 
+/** A bin's handout tables: the minimum airflow per start month and the fan at each airflow. */
+function binTablesMm(bin: NonNullable<Assessment['bin']>): number {
+  return (
+    H2_MM +
+    2 * (TABLE_HEAD_MM + LINE_MM) +
+    (bin.minimumAirflowByMonth.length + bin.airflows.length) * TABLE_ROW_MM
+  )
+}
+
+/** A bin's handout: no start-date table or calendar; as many warnings as fit beside its two tables. */
+function binHandoutPlan(
+  a: Assessment,
+  bin: NonNullable<Assessment['bin']>,
+  ctx: SectionContext,
+): HandoutPlan {
+  let estimateMm = 0
+  for (const maxWarnings of [6, 3, 1]) {
+    estimateMm = headerMm(a, ctx) + answerMm(a, ctx, maxWarnings) + binTablesMm(bin) + cautionsMm(a)
+    if (estimateMm <= HANDOUT_BUDGET_MM || maxWarnings === 1)
+      return { startRows: 0, startFigure: false, maxWarnings, estimateMm }
+  }
+  return { startRows: 0, startFigure: false, maxWarnings: 1, estimateMm }
+}
+
 /** What the handout of `a` holds within {@link HANDOUT_BUDGET_MM}. */
 export function handoutPlan(a: Assessment, ctx: SectionContext): HandoutPlan {
+  if (a.bin) return binHandoutPlan(a, a.bin, ctx)
   const total = a.startDates.length
   for (const maxWarnings of [6, 3, 1]) {
     const fixed = headerMm(a, ctx) + answerMm(a, ctx, maxWarnings) + calendarMm(a) + cautionsMm(a)

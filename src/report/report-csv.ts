@@ -8,6 +8,7 @@ import type { OptionSurface } from '../weather/option-spec.ts'
 import type { Assessment, ReportInputInfo } from './assessment-view.ts'
 import type { UnitSystem } from './display-units.ts'
 import { sectionContext } from './report-html.ts'
+import { binFanTable, binMinimumAirflowTable, binStartDatesTable } from './sections/bin.ts'
 import { fuelTable, heatTable } from './sections/heat.ts'
 import { hourOfDayFractions, hourOfDayTable } from './sections/hour-of-day.ts'
 import { monthlyTable, usableHoursByYearTable } from './sections/monthly.ts'
@@ -37,7 +38,9 @@ export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
   if (fr) out.push(hourOfDayTable(fr, clockShort(siteClock(a))))
   if (a.psychrometric) out.push(psychroTable(a.psychrometric, ctx))
   if (a.startDates.length) out.push(startDatesTable(a, ctx))
-  out.push(heatTable(a, ctx), fuelTable(a, ctx))
+  if (a.bin)
+    out.push(binMinimumAirflowTable(a.bin, ctx), binStartDatesTable(a.bin, ctx), binFanTable(a.bin, ctx))
+  else out.push(heatTable(a, ctx), fuelTable(a, ctx))
   if (a.assumptions.length) {
     out.push({
       id: 'assumptions',
@@ -67,6 +70,9 @@ export const REPORT_TABLE_IDS = [
   'hour-of-day-usable-share',
   'psychrometric-hours',
   'start-dates',
+  'bin-minimum-airflow',
+  'bin-start-dates',
+  'bin-fans',
   'supplemental-heat-by-month',
   'fuel',
   'assumptions',

@@ -18,6 +18,7 @@ import { type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
 import { handoutPlan } from './handout-fit.ts'
 import { type Paper, reportCss } from './report-css.ts'
+import { binHandoutSection, binSection } from './sections/bin.ts'
 import { calendarSection } from './sections/calendar.ts'
 import { cautionsSection, limitsSection, notesSection } from './sections/cautions.ts'
 import type { SectionContext } from './sections/context.ts'
@@ -71,8 +72,7 @@ export function handoutHtml(a: Assessment, ctx: SectionContext): string {
   return `<div class="handout" data-part="handout" data-start-rows="${plan.startRows}" data-estimate-mm="${Math.round(plan.estimateMm)}">
 ${headerHtml(a, ctx)}
 ${answerHtml(a, ctx, plan.maxWarnings)}
-${calendarSection(a.seasonCalendar, methodName(a), ctx)}
-${start}
+${a.bin ? binHandoutSection(a, ctx) : `${calendarSection(a.seasonCalendar, methodName(a), ctx)}\n${start}`}
 ${cautionsSection(a, ctx)}
 </div>`
 }
@@ -83,8 +83,7 @@ export function appendixHtml(a: Assessment, ctx: SectionContext): string {
 ${monthlySection(a, ctx)}
 ${hourOfDaySection(a, ctx)}
 ${psychrometricSection(a, ctx)}
-${startDatesSection(a, ctx)}
-${heatSection(a, ctx)}
+${a.bin ? binSection(a, ctx) : `${startDatesSection(a, ctx)}\n${heatSection(a, ctx)}`}
 ${limitsSection(a, ctx)}
 ${notesSection(warningList(a, ctx), (ctx.info.readerNotes ?? []).map(ctx.optionWords), ctx)}
 </div>`

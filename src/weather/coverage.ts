@@ -2,16 +2,17 @@
  * @module weather/coverage
  * Share of usable hours (dry bulb and humidity present) per calendar month, in site standard time.
  */
+import { daysInMonth } from '../physics/calendar.ts'
+import { MS_PER_HOUR } from '../physics/constants.ts'
 import type { MonthCoverage } from './result.ts'
 import type { HourlySeries } from './series.ts'
-import { daysInMonth } from './timestamps.ts'
 
 /** Coverage per month and the distinct years, months taken in the site's standard time (UTC when unknown). */
 export function summarizeCoverage(
   series: HourlySeries,
   missing: Uint8Array,
 ): { months: MonthCoverage[]; years: number[] } {
-  const offsetMs = (series.site.utcOffsetHours ?? 0) * 3_600_000
+  const offsetMs = (series.site.utcOffsetHours ?? 0) * MS_PER_HOUR
   const counts = new Map<number, number>()
   let key = 0
   let nextMonthMs = Number.NEGATIVE_INFINITY

@@ -11,7 +11,7 @@
 import type { ProblemLog } from './problem-log.ts'
 import type { RawColumn, RawTable } from './raw-table.ts'
 import { snippet } from './snippet.ts'
-import { createTimestampColumns } from './timestamps.ts'
+import { createTimestampColumns } from './timestamp-columns.ts'
 import { siUnit, type UnitConversion, type WeatherVariable } from './units.ts'
 import { WeatherInputError } from './weather-input-error.ts'
 

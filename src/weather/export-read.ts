@@ -5,11 +5,13 @@
  * Its values already passed the checks when it was made, so spike and stuck-sensor checks are not
  * repeated (a gap filled between two equal values would otherwise look like a stuck run).
  */
+
 import { HOURLY_EXPORT_HEADER, parseFlagWords } from './export.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { RawColumn, RawTable } from './raw-table.ts'
 import { snippet } from './snippet.ts'
-import { createTimestampColumns, parseTimestampInto } from './timestamps.ts'
+import { createTimestampColumns } from './timestamp-columns.ts'
+import { parseTimestampInto } from './timestamps.ts'
 import { siUnit, type WeatherVariable } from './units.ts'
 
 /** The export's columns after `time_utc`, in order, and what each is. */

@@ -6,6 +6,7 @@
  * clear-sky index of the nearest valid daytime neighbour (within the same limit), times the hour's
  * clear-sky irradiance (Haurwitz 1945). Every filled value is flagged and logged.
  */
+import { MS_PER_HOUR } from '../physics/constants.ts'
 import { clearSkyGhiHaurwitzCosZenithWm2 as haurwitzClearSkyWm2 } from '../physics/irradiance.ts'
 import { sinGeometricSunAltitude } from '../physics/sun.ts'
 import type { ProblemLog } from './problem-log.ts'
@@ -96,7 +97,7 @@ export function hourSun(
       // a reading above the limit only needs the night test: the sun up at mid-hour settles it
       if (
         g > NIGHT_IRRADIANCE_LIMIT_WM2 &&
-        sinGeometricSunAltitude(startUtcMs[s] + 1_800_000, latDeg, lonDeg) > 0
+        sinGeometricSunAltitude(startUtcMs[s] + MS_PER_HOUR / 2, latDeg, lonDeg) > 0
       ) {
         clearSkyWm2[s] = Number.NaN
         continue
@@ -116,8 +117,8 @@ function computeHour(
   s: number,
 ): void {
   const a = sinGeometricSunAltitude(t, latDeg, lonDeg)
-  const m = sinGeometricSunAltitude(t + 1_800_000, latDeg, lonDeg)
-  const b = sinGeometricSunAltitude(t + 3_600_000, latDeg, lonDeg)
+  const m = sinGeometricSunAltitude(t + MS_PER_HOUR / 2, latDeg, lonDeg)
+  const b = sinGeometricSunAltitude(t + MS_PER_HOUR, latDeg, lonDeg)
   // Simpson's rule over the hour: (start + 4·middle + end) / 6
   clearSkyWm2[s] = (haurwitzClearSkyWm2(a) + 4 * haurwitzClearSkyWm2(m) + haurwitzClearSkyWm2(b)) / 6
   night[s] = a <= 0 && m <= 0 && b <= 0 ? 1 : 0

@@ -108,3 +108,51 @@ function hasRadixPrefix(s: string, x: number): boolean {
   const c = t.charCodeAt(1) | 32 // lower case
   return c === 120 || c === 98 || c === 111 // 'x', 'b', 'o'
 }
+
+/** `12,5`, ` -3,25 `: a number with a decimal comma (and nothing else). */
+export function isDecimalCommaNumber(text: string): boolean {
+  let k = 0
+  while (k < text.length && text.charCodeAt(k) === 32) k++
+  if (text[k] === '-' || text[k] === '+') k++
+  const intStart = k
+  while (k < text.length && text.charCodeAt(k) >= 48 && text.charCodeAt(k) <= 57) k++
+  if (k === intStart || text[k] !== ',') return false
+  k++
+  const fracStart = k
+  while (k < text.length && text.charCodeAt(k) >= 48 && text.charCodeAt(k) <= 57) k++
+  if (k === fracStart) return false
+  while (k < text.length && text.charCodeAt(k) === 32) k++
+  return k === text.length
+}
+
+const POW10 = [1, 10, 100, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15]
+
+/** `[-+]?digits[.digits]` between from and to (spaces allowed around), at most 15 digits; NaN otherwise. */
+export function parseDecimal(text: string, from: number, to: number, comma: number): number {
+  let k = from
+  while (k < to && text.charCodeAt(k) === 32) k++
+  let end = to
+  while (end > k && text.charCodeAt(end - 1) === 32) end--
+  if (k >= end) return Number.NaN
+  let negative = false
+  let ch = text.charCodeAt(k)
+  if (ch === 45 || ch === 43) {
+    negative = ch === 45
+    k++
+  }
+  let mantissa = 0
+  let digits = 0
+  let fraction = -1
+  for (; k < end; k++) {
+    ch = text.charCodeAt(k)
+    if (ch >= 48 && ch <= 57) {
+      mantissa = mantissa * 10 + (ch - 48)
+      digits++
+      if (fraction >= 0) fraction++
+    } else if ((ch === 46 || ch === comma) && fraction < 0) fraction = 0
+    else return Number.NaN
+  }
+  if (digits === 0 || digits > 15) return Number.NaN
+  const value = fraction > 0 ? mantissa / POW10[fraction] : mantissa
+  return negative ? -value : value
+}

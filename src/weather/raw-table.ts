@@ -8,7 +8,7 @@
  */
 import type { ColumnPlan } from './columns.ts'
 import type { ValueTiming } from './series.ts'
-import type { TimestampColumns } from './timestamps.ts'
+import type { TimestampColumns } from './timestamp-columns.ts'
 import type { UnitConversion, WeatherVariable } from './units.ts'
 
 /**

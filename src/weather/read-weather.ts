@@ -46,53 +46,73 @@ export function readWeather(
   const format =
     opts.format === undefined || opts.format === 'auto' ? (looksLikeEpw(text) ? 'epw' : 'csv') : opts.format
   if (looksLikeHourlyExport(text) && format === 'csv') return readOwnExport(text, opts, log, warnings)
-  if (format === 'epw') {
-    const { table, header } = readEpw(text, log, warnings)
-    if (opts.mapping !== undefined)
-      warnings.push('the column mapping is ignored for EPW files (fixed fields)')
-    if (opts.timeZone !== undefined)
-      warnings.push(
-        `EPW files are in local standard time (header: UTC${header.utcOffsetHours >= 0 ? '+' : ''}${header.utcOffsetHours}); --tz ${opts.timeZone} is ignored`,
-      )
-    if (opts.labels === 'start')
-      warnings.push(
-        'EPW timestamps label the end of each hour (EPW data dictionary); --labels start is ignored',
-      )
-    const offset = opts.utcOffsetHours ?? header.utcOffsetHours
-    if (opts.utcOffsetHours !== undefined && opts.utcOffsetHours !== header.utcOffsetHours) {
-      warnings.push(
-        `the given UTC offset ${opts.utcOffsetHours} h overrides the EPW header's ${header.utcOffsetHours} h`,
-      )
-    }
-    const site: SiteInfo = {
-      name:
-        opts.siteName ??
-        escapeControlCharacters(
-          [header.city, header.region, header.country].filter((s) => s !== '' && s !== '-').join(', '),
-        ),
-      latitudeDeg: opts.latitudeDeg ?? header.latitudeDeg,
-      longitudeDeg: opts.longitudeDeg ?? header.longitudeDeg,
-      elevationM: opts.elevationM ?? clampElevation(header.elevationM),
-      timeZone: null,
-      utcOffsetHours: null,
-      windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
-    }
-    return assemble(table, {
-      site,
-      time: {
-        labels: 'end',
-        fixedOffsetHours: offset,
-        zone: null,
-        headerSaysUtc: false,
-      },
-      log,
-      warnings,
-      elevationKnown: true,
-      variableTiming: opts.variableLabels,
-      sampling: opts.sampling,
-      siteClock: { optionZone: opts.siteTimeZone, fileOffsetHours: offset },
-    })
+  if (format === 'epw') return readEpwFile(text, opts, log, warnings)
+  return readTableFile(text, opts, log, warnings)
+}
+
+/** An EPW file: fixed fields, local standard time at the header's offset, hour-ending labels. */
+function readEpwFile(
+  text: string,
+  opts: WeatherReadOptions,
+  log: ProblemLog,
+  warnings: string[],
+): WeatherReadResult {
+  const { table, header } = readEpw(text, log, warnings)
+  if (opts.mapping !== undefined) warnings.push('the column mapping is ignored for EPW files (fixed fields)')
+  if (opts.timeZone !== undefined)
+    warnings.push(
+      `EPW files are in local standard time (header: UTC${header.utcOffsetHours >= 0 ? '+' : ''}${header.utcOffsetHours}); --tz ${opts.timeZone} is ignored`,
+    )
+  if (opts.labels === 'start')
+    warnings.push(
+      'EPW timestamps label the end of each hour (EPW data dictionary); --labels start is ignored',
+    )
+  const offset = opts.utcOffsetHours ?? header.utcOffsetHours
+  if (opts.utcOffsetHours !== undefined && opts.utcOffsetHours !== header.utcOffsetHours) {
+    warnings.push(
+      `the given UTC offset ${opts.utcOffsetHours} h overrides the EPW header's ${header.utcOffsetHours} h`,
+    )
   }
+  const site: SiteInfo = {
+    name:
+      opts.siteName ??
+      escapeControlCharacters(
+        [header.city, header.region, header.country].filter((s) => s !== '' && s !== '-').join(', '),
+      ),
+    latitudeDeg: opts.latitudeDeg ?? header.latitudeDeg,
+    longitudeDeg: opts.longitudeDeg ?? header.longitudeDeg,
+    elevationM: opts.elevationM ?? clampElevation(header.elevationM),
+    timeZone: null,
+    utcOffsetHours: null,
+    windHeightM: opts.windHeightM ?? DEFAULT_WIND_HEIGHT_M,
+  }
+  return assemble(table, {
+    site,
+    time: {
+      labels: 'end',
+      fixedOffsetHours: offset,
+      zone: null,
+      headerSaysUtc: false,
+    },
+    log,
+    warnings,
+    elevationKnown: true,
+    variableTiming: opts.variableLabels,
+    sampling: opts.sampling,
+    siteClock: { optionZone: opts.siteTimeZone, fileOffsetHours: offset },
+  })
+}
+
+/**
+ * Delimited text, through a known layout (a dialect) or the generic reader; what the file states
+ * about its clock and site applies where the user's options say nothing.
+ */
+function readTableFile(
+  text: string,
+  opts: WeatherReadOptions,
+  log: ProblemLog,
+  warnings: string[],
+): WeatherReadResult {
   const clockGiven = opts.utcOffsetHours !== undefined || opts.timeZone !== undefined
   const head = dialectHead(text)
   const dialect = opts.format === undefined || opts.format === 'auto' ? detectDialect(head) : null

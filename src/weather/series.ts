@@ -5,6 +5,7 @@
  * start of each hour. Columns rather than row objects: several times smaller and faster on
  * 30-year files (263,000 hours).
  */
+import { MS_PER_HOUR } from '../physics/constants.ts'
 
 /** Where the site is and how its clock relates to UTC. */
 export interface SiteInfo {
@@ -115,7 +116,7 @@ export function createEmptySeries(
   const nanColumn = (): Float64Array =>
     columns ? new Float64Array(hours).fill(Number.NaN) : new Float64Array(0)
   const startUtcMs = new Float64Array(hours)
-  for (let i = 0; i < hours; i++) startUtcMs[i] = firstStartUtcMs + i * 3_600_000
+  for (let i = 0; i < hours; i++) startUtcMs[i] = firstStartUtcMs + i * MS_PER_HOUR
   return {
     site,
     hours,

@@ -10,6 +10,7 @@
 import type { SiteInfo } from './series.ts'
 import type { TimestampBasis } from './time-basis.ts'
 import { formatOffset } from './time-basis.ts'
+import { zoneStandardOffsetHours } from './time-zone.ts'
 
 /** Where the site's clock came from. */
 export type SiteClockSource = NonNullable<SiteInfo['utcOffsetSource']>
@@ -35,35 +36,6 @@ export interface SiteClock {
   source: SiteClockSource | null
   /** A sentence for the warnings when the clock was inferred (timestamps, longitude) or missing. */
   note: string | null
-}
-
-/**
- * Standard-time offset of an IANA zone [h] near `utcMs`: the smaller of its offsets on 1 January and
- * 1 July of that year (daylight saving only ever adds), read from `Intl`.
- */
-export function zoneStandardOffsetHours(zone: string, utcMs: number): number {
-  const year = new Date(utcMs).getUTCFullYear()
-  const format = new Intl.DateTimeFormat('en-US', {
-    timeZone: zone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-  })
-  const offsetAt = (t: number): number => {
-    const p = Object.fromEntries(format.formatToParts(t).map((x) => [x.type, x.value]))
-    const wall = Date.UTC(
-      Number(p.year),
-      Number(p.month) - 1,
-      Number(p.day),
-      Number(p.hour) % 24,
-      Number(p.minute),
-    )
-    return (wall - t) / 3_600_000
-  }
-  return Math.min(offsetAt(Date.UTC(year, 0, 1, 12)), offsetAt(Date.UTC(year, 6, 1, 12)))
 }
 
 /** Resolve the site's clock (see the module). */

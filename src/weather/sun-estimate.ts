@@ -15,16 +15,15 @@
  * Night hours (sun below the horizon for the whole hour) are 0. The site's latitude and longitude
  * are needed for any of it.
  */
-import { dayOfYearAt, extraterrestrialRadiationDailyMjM2 } from '../physics/fao56-solar.ts'
+import { dayOfYearAt } from '../physics/calendar.ts'
+import { MS_PER_DAY, MS_PER_HOUR, S_PER_HOUR } from '../physics/constants.ts'
+import { extraterrestrialRadiationDailyMjM2 } from '../physics/fao56-solar.ts'
 import {
   clearSkyRadiationFao56,
   clearSkyGhiHaurwitzCosZenithWm2 as haurwitzClearSkyWm2,
 } from '../physics/irradiance.ts'
 import { sinGeometricSunAltitude } from '../physics/sun.ts'
 import { type HourlySeries, QualityFlag } from './series.ts'
-
-const MS_PER_HOUR = 3_600_000
-const MS_PER_DAY = 86_400_000
 
 /**
  * Kasten & Czeplak (1980), "Solar and terrestrial radiation dependent on the amount and type of
@@ -130,16 +129,20 @@ export function estimateMissingIrradiance(
     }
   }
   const kRs = context.kRs ?? KRS_INTERIOR
-  const elevation = series.site.elevationM ?? 0
+  // clear-sky irradiance of the hours the cloud pass looked at, reused by the range pass
+  const clear = new Float64Array(n)
+  const fromCloud = estimateFromCloudCover(series, lat, lon, clear)
+  const range = estimateFromTemperatureRange(series, lat, lon, clear, kRs)
+  return describeEstimate(what, fromCloud, range.estimated, range.left, kRs)
+}
+
+/** 1. Cloud cover, hour by hour; night hours are 0. Returns the daylight hours estimated. */
+function estimateFromCloudCover(series: HourlySeries, lat: number, lon: number, clear: Float64Array): number {
+  const n = series.hours
+  const ghi = series.ghiWm2
   const cloud = series.cloudCoverPct
   const quality = series.quality
-  const solarOffsetMs = (lon / 15) * MS_PER_HOUR
-  const clear = new Float64Array(n)
   let fromCloud = 0
-  let fromRange = 0
-  let left = 0
-
-  // 1. Cloud cover, hour by hour; night hours are 0.
   for (let s = 0; s < n; s++) {
     if (!Number.isNaN(ghi[s])) continue
     const t = series.startUtcMs[s]
@@ -156,8 +159,28 @@ export function estimateMissingIrradiance(
       fromCloud++
     }
   }
+  return fromCloud
+}
 
-  // 2. The day's temperature range (days of local mean solar time), for the hours still missing.
+/**
+ * 2. The day's temperature range (days of local mean solar time), for the hours still missing: a
+ * complete day's Hargreaves–Samani total spread in the clear-sky shape. Returns the hours estimated
+ * and the daylight hours left without a value.
+ */
+function estimateFromTemperatureRange(
+  series: HourlySeries,
+  lat: number,
+  lon: number,
+  clear: Float64Array,
+  kRs: number,
+): { estimated: number; left: number } {
+  const n = series.hours
+  const ghi = series.ghiWm2
+  const quality = series.quality
+  const elevation = series.site.elevationM ?? 0
+  const solarOffsetMs = (lon / 15) * MS_PER_HOUR
+  let fromRange = 0
+  let left = 0
   let s = 0
   while (s < n) {
     const day = Math.floor((series.startUtcMs[s] + solarOffsetMs) / MS_PER_DAY)
@@ -190,7 +213,7 @@ export function estimateMissingIrradiance(
         const rsMj = hargreavesSamaniDailyMjM2(tMax, tMin, ra, kRs, elevation)
         for (let k = s; k < e; k++) {
           if (!Number.isNaN(ghi[k])) continue
-          ghi[k] = clearSum > 0 ? (rsMj * 1e6 * clear[k]) / (3600 * clearSum) : 0
+          ghi[k] = clearSum > 0 ? (rsMj * 1e6 * clear[k]) / (S_PER_HOUR * clearSum) : 0
           quality[k] |= QualityFlag.irradianceEstimated
           fromRange++
         }
@@ -198,7 +221,17 @@ export function estimateMissingIrradiance(
     }
     s = e
   }
+  return { estimated: fromRange, left }
+}
 
+/** What was estimated, in warnings, assumption notes and supplied entries. */
+function describeEstimate(
+  what: string,
+  fromCloud: number,
+  fromRange: number,
+  left: number,
+  kRs: number,
+): IrradianceEstimate {
   const hours = fromCloud + fromRange
   const warnings: string[] = []
   const notes: string[] = []

@@ -1,28 +1,18 @@
 /**
  * @module weather/time-basis
- * Row timestamps to UTC hour starts: date order, typical-year recognition (months from different
+ * Row timestamps to UTC hour starts: date order, typical years (typical-year.ts: months from different
  * years mapped onto one nominal year, leap day kept), hour-ending labels (EPW, and CSV files that
  * run 01:00–24:00), offsets written in the text, a fixed offset, or an IANA zone with daylight
  * saving (spring gap and autumn doubled hour reported).
  */
+
+import { MS_PER_HOUR, MS_PER_MINUTE } from '../physics/constants.ts'
 import type { ProblemLog } from './problem-log.ts'
 import type { IntervalLabel } from './raw-table.ts'
-import { offsetAtUtc, utcCandidates, zoneOffsets } from './time-zone.ts'
-import {
-  type DateOrder,
-  daysFromCivil,
-  detectDateOrder,
-  type TimestampColumns,
-  wallClockMs,
-} from './timestamps.ts'
+import { offsetAtUtc, utcCandidates, type ZoneOffsets, zoneOffsets } from './time-zone.ts'
+import { type DateOrder, detectDateOrder, type TimestampColumns, wallClockMs } from './timestamp-columns.ts'
+import { detectTypicalYear, NOMINAL_COMMON_YEAR, NOMINAL_LEAP_YEAR } from './typical-year.ts'
 import { WeatherInputError } from './weather-input-error.ts'
-
-const MS_PER_HOUR = 3_600_000
-
-/** Nominal year of a typical-year file without 29 February (any common year would do). */
-export const NOMINAL_COMMON_YEAR = 2001
-/** Nominal year of a typical-year file that contains 29 February (a leap year, so the day is kept). */
-export const NOMINAL_LEAP_YEAR = 2000
 
 export interface TimeBasisInput {
   declaredOrder?: DateOrder
@@ -70,63 +60,6 @@ const FIRST_YEAR = 1800
 const LAST_YEAR = 2200
 
 /**
- * Hours a typical year must hold to be taken as one: 90 % of 8760. Typical-year files (e.g. TMY3,
- * Wilcox & Marion 2008, NREL/TP-581-43156, from memory) are one complete year of 8760 hours with each
- * calendar month taken whole from one source year; the 10 % margin for missing rows is common
- * practice, no source.
- */
-const TYPICAL_YEAR_MIN_HOURS = 7884
-/** At most a leap year plus two days of rows (sub-hourly files are never typical years). */
-const TYPICAL_YEAR_MAX_HOURS = 8784 + 48
-
-/**
- * A typical (synthetic) year: rows in calendar order, all twelve months present, each month from a
- * single year, at least two source years, and about one year of hours. Rows flagged in `skip` (years
- * outside the accepted range) are left out.
- */
-function detectTypicalYear(
-  ts: TimestampColumns,
-  order: 'mdy' | 'dmy',
-  skip: Uint8Array,
-): { typical: boolean; years: number[]; leap: boolean } {
-  const years = new Set<number>()
-  const yearOfMonth = new Float64Array(13).fill(Number.NaN)
-  let previousKey = -1
-  let monotonic = true
-  let monthsFromOneYear = true
-  let leap = false
-  let valid = 0
-  for (let i = 0; i < ts.year.length; i++) {
-    if (skip[i] === 1 || Number.isNaN(ts.year[i]) || Number.isNaN(ts.minuteOfDay[i])) continue
-    valid++
-    const year = ts.year[i]
-    years.add(year)
-    // month and day under the date order, without a tuple per row (a 30-year file has 263,000 rows)
-    const monthFirst = ts.yearFirst[i] === 1 || order === 'mdy'
-    const month = monthFirst ? ts.first[i] : ts.second[i]
-    const day = monthFirst ? ts.second[i] : ts.first[i]
-    if (month >= 1 && month <= 12) {
-      if (Number.isNaN(yearOfMonth[month])) yearOfMonth[month] = year
-      else if (yearOfMonth[month] !== year) monthsFromOneYear = false
-    }
-    if (month === 2 && day === 29) leap = true
-    const key = (month * 32 + day) * 1441 + ts.minuteOfDay[i]
-    if (key < previousKey) monotonic = false
-    previousKey = key
-  }
-  let months = 0
-  for (let m = 1; m <= 12; m++) if (!Number.isNaN(yearOfMonth[m])) months++
-  const typical =
-    years.size > 1 &&
-    monotonic &&
-    monthsFromOneYear &&
-    months === 12 &&
-    valid >= TYPICAL_YEAR_MIN_HOURS &&
-    valid <= TYPICAL_YEAR_MAX_HOURS
-  return { typical, years: [...years].sort((a, b) => a - b), leap }
-}
-
-/**
  * Flag rows whose year lies outside {@link FIRST_YEAR}–{@link LAST_YEAR} and report each with its
  * line, so that one stray row cannot change how the others are read.
  */
@@ -153,8 +86,43 @@ export function resolveRowTimes(
   input: TimeBasisInput,
   log: ProblemLog,
 ): ResolvedTimes {
-  const n = ts.year.length
   const warnings: string[] = []
+  const order = dateOrder(ts, input.declaredOrder, warnings)
+  const skip = rejectOutOfRangeYears(ts, lines, log)
+  const { typical, years, leap } = detectTypicalYear(ts, order, skip)
+  const nominal = leap ? NOMINAL_LEAP_YEAR : NOMINAL_COMMON_YEAR
+  if (typical) {
+    warnings.push(
+      `typical year: months come from ${years.length} different years (${years.join(', ')}); ` +
+        `placed on the nominal year ${nominal}${leap ? ' (a leap year, as the file has 29 February)' : ''}`,
+    )
+  }
+  const labels = input.labels ?? detectLabels(ts, warnings)
+  const wall = wallClock(ts, order, typical ? nominal : null, skip)
+  const clock = clockOfTimestamps(input, wall, warnings)
+  const zone =
+    input.zone !== null && clock.fixedOffsetMs === null && Number.isFinite(wall.minMs)
+      ? zoneOffsets(input.zone, wall.minMs - 14 * MS_PER_HOUR, wall.maxMs + 14 * MS_PER_HOUR)
+      : null
+  const utc = toUtc(ts, wall.ms, skip, clock.fixedOffsetMs, zone, lines, log)
+  return {
+    rowUtcMs: utc.rowUtcMs,
+    typicalYear: typical,
+    sourceYears: typical ? years : [],
+    labels,
+    description: `${clock.description}; timestamps label the ${labels} of the interval each row describes`,
+    dstEvents: zone === null ? [] : dstEvents(zone, wall, utc),
+    warnings,
+    zoneStandardOffsetHours: zone === null ? null : Math.min(...zone.offsetMs) / MS_PER_HOUR,
+    basis: clock.basis,
+  }
+}
+
+/**
+ * The order of slash dates with the year last: as declared, else detected (month/day unless some
+ * first number exceeds 12); dates that fit neither order, or both with nothing to tell, are an error.
+ */
+function dateOrder(ts: TimestampColumns, declared: DateOrder | undefined, warnings: string[]): 'mdy' | 'dmy' {
   let order: 'mdy' | 'dmy' = 'mdy'
   let detected: DateOrder | 'ambiguous' | null
   try {
@@ -164,7 +132,7 @@ export function resolveRowTimes(
       'date order',
     ])
   }
-  if (input.declaredOrder === 'dmy' || input.declaredOrder === 'mdy') order = input.declaredOrder
+  if (declared === 'dmy' || declared === 'mdy') order = declared
   else if (detected === 'ambiguous') {
     throw new WeatherInputError(
       'dates like 03/04/2020 could be month/day or day/month and no date has a number above 12 to tell: ' +
@@ -175,66 +143,88 @@ export function resolveRowTimes(
   if (
     detected !== null &&
     detected !== 'ambiguous' &&
-    input.declaredOrder &&
-    input.declaredOrder !== 'ymd' &&
-    detected !== input.declaredOrder
+    declared &&
+    declared !== 'ymd' &&
+    detected !== declared
   ) {
-    warnings.push(
-      `dates were declared ${input.declaredOrder} but some only fit ${detected}; those rows are rejected`,
-    )
+    warnings.push(`dates were declared ${declared} but some only fit ${detected}; those rows are rejected`)
   }
+  return order
+}
 
-  const skip = rejectOutOfRangeYears(ts, lines, log)
-  const { typical, years, leap } = detectTypicalYear(ts, order, skip)
-  const nominal = leap ? NOMINAL_LEAP_YEAR : NOMINAL_COMMON_YEAR
-  if (typical) {
-    warnings.push(
-      `typical year: months come from ${years.length} different years (${years.join(', ')}); ` +
-        `placed on the nominal year ${nominal}${leap ? ' (a leap year, as the file has 29 February)' : ''}`,
-    )
+/** Labels when nobody declared them: hour-ending when the hours run 01:00–24:00 (no 00:00), else start. */
+function detectLabels(ts: TimestampColumns, warnings: string[]): IntervalLabel {
+  let has24 = false
+  let has0 = false
+  for (let i = 0; i < ts.minuteOfDay.length; i++) {
+    if (ts.minuteOfDay[i] === 1440) has24 = true
+    else if (ts.minuteOfDay[i] === 0) has0 = true
   }
+  if (!has24 || has0) return 'start'
+  warnings.push('hours run 01:00–24:00: read as hour-ending labels (01:00 = the hour 00:00–01:00)')
+  return 'end'
+}
 
-  let labels: IntervalLabel = 'start'
-  if (input.labels) labels = input.labels
-  else {
-    let has24 = false
-    let has0 = false
-    for (let i = 0; i < n; i++) {
-      if (ts.minuteOfDay[i] === 1440) has24 = true
-      else if (ts.minuteOfDay[i] === 0) has0 = true
-    }
-    if (has24 && !has0) {
-      labels = 'end'
-      warnings.push('hours run 01:00–24:00: read as hour-ending labels (01:00 = the hour 00:00–01:00)')
-    }
-  }
+/** Every row's wall-clock time [ms, local time read as UTC] and what the offsets written in the text say. */
+interface WallClock {
+  /** NaN for rows rejected or not calendar dates. */
+  ms: Float64Array
+  minMs: number
+  maxMs: number
+  anyOffsetInText: boolean
+  anyWithoutOffset: boolean
+  /** The first non-zero offset written in the text [h], NaN when none. */
+  nonZeroTextOffsetHours: number
+}
 
-  const wall = new Float64Array(n)
+/** Wall-clock times under the date order, on the nominal year for a typical year (`year` not null). */
+function wallClock(
+  ts: TimestampColumns,
+  order: 'mdy' | 'dmy',
+  nominalYear: number | null,
+  skip: Uint8Array,
+): WallClock {
+  const n = ts.year.length
+  const ms = new Float64Array(n)
   let anyOffsetInText = false
   let anyWithoutOffset = false
-  let nonZeroTextOffset = Number.NaN
-  let minWall = Number.POSITIVE_INFINITY
-  let maxWall = Number.NEGATIVE_INFINITY
+  let nonZeroTextOffsetHours = Number.NaN
+  let minMs = Number.POSITIVE_INFINITY
+  let maxMs = Number.NEGATIVE_INFINITY
   for (let i = 0; i < n; i++) {
-    const year = typical ? nominal : ts.year[i]
+    const year = nominalYear ?? ts.year[i]
     const w = skip[i] === 1 || Number.isNaN(ts.minuteOfDay[i]) ? Number.NaN : wallClockMs(ts, i, order, year)
-    wall[i] = w
+    ms[i] = w
     if (Number.isNaN(w)) continue
-    if (w < minWall) minWall = w
-    if (w > maxWall) maxWall = w
+    if (w < minMs) minMs = w
+    if (w > maxMs) maxMs = w
     if (Number.isNaN(ts.offsetMin[i])) anyWithoutOffset = true
     else {
       anyOffsetInText = true
-      if (ts.offsetMin[i] !== 0 && Number.isNaN(nonZeroTextOffset)) nonZeroTextOffset = ts.offsetMin[i] / 60
+      if (ts.offsetMin[i] !== 0 && Number.isNaN(nonZeroTextOffsetHours))
+        nonZeroTextOffsetHours = ts.offsetMin[i] / 60
     }
   }
+  return { ms, minMs, maxMs, anyOffsetInText, anyWithoutOffset, nonZeroTextOffsetHours }
+}
 
+/**
+ * The clock the timestamps are written in: offsets in the text, a fixed offset, a zone, UTC because
+ * the header says so; none of them for stamps without an offset is an error naming the options.
+ */
+function clockOfTimestamps(
+  input: TimeBasisInput,
+  wall: WallClock,
+  warnings: string[],
+): { fixedOffsetMs: number | null; description: string; basis: TimestampBasis } {
+  const { anyOffsetInText, anyWithoutOffset } = wall
   let fixedOffsetMs: number | null =
     input.fixedOffsetHours === null ? null : input.fixedOffsetHours * MS_PER_HOUR
   let description = 'offsets written in each timestamp'
   let basis: TimestampBasis = { kind: 'utc' }
   if (anyOffsetInText && !anyWithoutOffset) {
-    if (!Number.isNaN(nonZeroTextOffset)) basis = { kind: 'offset', offsetHours: nonZeroTextOffset }
+    if (!Number.isNaN(wall.nonZeroTextOffsetHours))
+      basis = { kind: 'offset', offsetHours: wall.nonZeroTextOffsetHours }
   } else if (fixedOffsetMs !== null) {
     if (input.fixedOffsetHours !== 0) basis = { kind: 'offset', offsetHours: input.fixedOffsetHours! }
   } else if (input.zone !== null) basis = { kind: 'zone', zone: input.zone }
@@ -262,11 +252,31 @@ export function resolveRowTimes(
   if (anyOffsetInText && (fixedOffsetMs !== null || input.zone !== null)) {
     warnings.push('timestamps with a written offset use it; the given offset or zone applies to the others')
   }
+  return { fixedOffsetMs, description, basis }
+}
 
-  const zone =
-    input.zone !== null && fixedOffsetMs === null && Number.isFinite(minWall)
-      ? zoneOffsets(input.zone, minWall - 14 * MS_PER_HOUR, maxWall + 14 * MS_PER_HOUR)
-      : null
+/** Rows' UTC instants, and per daylight-saving transition the rows that fell in its gap or overlap. */
+interface UtcRows {
+  rowUtcMs: Float64Array
+  gapRows: Map<number, number>
+  overlapRows: Map<number, number>
+}
+
+/**
+ * Wall-clock times to UTC: the offset written in the row, else the fixed offset, else the zone (a
+ * local time in the spring gap is rejected; one in the autumn overlap is the first occurrence unless
+ * an earlier row already passed it). Each rejected or doubled row is logged with its line.
+ */
+function toUtc(
+  ts: TimestampColumns,
+  wall: Float64Array,
+  skip: Uint8Array,
+  fixedOffsetMs: number | null,
+  zone: ZoneOffsets | null,
+  lines: Int32Array,
+  log: ProblemLog,
+): UtcRows {
+  const n = wall.length
   const out = new Float64Array(n).fill(Number.NaN)
   let lastUtc = Number.NEGATIVE_INFINITY
   const gapRows = new Map<number, number>()
@@ -284,7 +294,7 @@ export function resolveRowTimes(
       continue
     }
     let utc: number
-    if (!Number.isNaN(ts.offsetMin[i])) utc = w - ts.offsetMin[i] * 60_000
+    if (!Number.isNaN(ts.offsetMin[i])) utc = w - ts.offsetMin[i] * MS_PER_MINUTE
     else if (fixedOffsetMs !== null) utc = w - fixedOffsetMs
     else if (zone !== null) {
       const c = utcCandidates(zone, w)
@@ -316,30 +326,23 @@ export function resolveRowTimes(
     out[i] = utc
     lastUtc = utc
   }
-  const dstEvents: DstEvent[] = []
-  if (zone !== null) {
-    for (let k = 1; k < zone.fromUtcMs.length; k++) {
-      const at = zone.fromUtcMs[k]
-      if (at < minWall - 14 * MS_PER_HOUR || at > maxWall + 14 * MS_PER_HOUR) continue
-      const forward = zone.offsetMs[k] > zone.offsetMs[k - 1]
-      dstEvents.push({
-        kind: forward ? 'spring-gap' : 'autumn-overlap',
-        atUtc: new Date(at).toISOString(),
-        rows: (forward ? gapRows.get(at) : overlapRows.get(at)) ?? 0,
-      })
-    }
+  return { rowUtcMs: out, gapRows, overlapRows }
+}
+
+/** The zone's transitions within the file's span (14 h of margin), with the rows each affected. */
+function dstEvents(zone: ZoneOffsets, wall: WallClock, utc: UtcRows): DstEvent[] {
+  const events: DstEvent[] = []
+  for (let k = 1; k < zone.fromUtcMs.length; k++) {
+    const at = zone.fromUtcMs[k]
+    if (at < wall.minMs - 14 * MS_PER_HOUR || at > wall.maxMs + 14 * MS_PER_HOUR) continue
+    const forward = zone.offsetMs[k] > zone.offsetMs[k - 1]
+    events.push({
+      kind: forward ? 'spring-gap' : 'autumn-overlap',
+      atUtc: new Date(at).toISOString(),
+      rows: (forward ? utc.gapRows.get(at) : utc.overlapRows.get(at)) ?? 0,
+    })
   }
-  return {
-    rowUtcMs: out,
-    typicalYear: typical,
-    sourceYears: typical ? years : [],
-    labels,
-    description: `${description}; timestamps label the ${labels} of the interval each row describes`,
-    dstEvents,
-    warnings,
-    zoneStandardOffsetHours: zone === null ? null : Math.min(...zone.offsetMs) / MS_PER_HOUR,
-    basis,
-  }
+  return events
 }
 
 function transitionNear(fromUtcMs: number[], utc: number): number {
@@ -358,9 +361,4 @@ export function formatOffset(hours: number): string {
   const h = Math.floor(abs)
   const m = Math.round((abs - h) * 60)
   return `${sign}${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`
-}
-
-/** Midnight UTC [ms] of a civil date; exported for tests and writers. */
-export function civilMidnightUtcMs(year: number, month: number, day: number): number {
-  return daysFromCivil(year, month, day) * 86_400_000
 }

@@ -5,9 +5,20 @@
  * that happens twice) made explicit. Offsets are sampled once per day over the file's span and the
  * transitions located to the minute, so a 30-year file costs about 11,000 `Intl` calls, not 263,000.
  */
+import { MS_PER_DAY, MS_PER_HOUR, MS_PER_MINUTE } from '../physics/constants.ts'
 
-const MS_PER_MINUTE = 60_000
-const MS_PER_DAY = 86_400_000
+/** A formatter of the zone's wall clock to the minute (24-hour clock). */
+function wallClockFormat(zone: string): Intl.DateTimeFormat {
+  return new Intl.DateTimeFormat('en-US', {
+    timeZone: zone,
+    hourCycle: 'h23',
+    year: 'numeric',
+    month: 'numeric',
+    day: 'numeric',
+    hour: 'numeric',
+    minute: 'numeric',
+  })
+}
 
 /** Offset of the zone from UTC [ms] at a UTC instant, from Intl's formatted wall clock. */
 function intlOffsetMs(format: Intl.DateTimeFormat, utcMs: number): number {
@@ -37,15 +48,7 @@ export interface ZoneOffsets {
 
 /** Offsets of `zone` between two UTC instants (one day of margin is added each side). */
 export function zoneOffsets(zone: string, startUtcMs: number, endUtcMs: number): ZoneOffsets {
-  const format = new Intl.DateTimeFormat('en-US', {
-    timeZone: zone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-  })
+  const format = wallClockFormat(zone)
   const start = Math.floor(startUtcMs / MS_PER_DAY) * MS_PER_DAY - 2 * MS_PER_DAY
   const end = endUtcMs + 2 * MS_PER_DAY
   const fromUtcMs = [Number.NEGATIVE_INFINITY]
@@ -91,9 +94,9 @@ export function utcCandidates(z: ZoneOffsets, wallMs: number): number[] {
   const seen = new Set<number>()
   const out: number[] = []
   const near = [
-    offsetAtUtc(z, wallMs - 14 * 3_600_000),
+    offsetAtUtc(z, wallMs - 14 * MS_PER_HOUR),
     offsetAtUtc(z, wallMs),
-    offsetAtUtc(z, wallMs + 14 * 3_600_000),
+    offsetAtUtc(z, wallMs + 14 * MS_PER_HOUR),
   ]
   for (const o of near) {
     if (seen.has(o)) continue
@@ -102,4 +105,17 @@ export function utcCandidates(z: ZoneOffsets, wallMs: number): number[] {
     if (offsetAtUtc(z, utc) === o) out.push(utc)
   }
   return out.sort((a, b) => a - b)
+}
+
+/**
+ * Standard-time offset of an IANA zone [h] near `utcMs`: the smaller of its offsets at noon UTC on
+ * 1 January and 1 July of that year (daylight saving only ever adds), read from `Intl`.
+ */
+export function zoneStandardOffsetHours(zone: string, utcMs: number): number {
+  const year = new Date(utcMs).getUTCFullYear()
+  const format = wallClockFormat(zone)
+  return (
+    Math.min(intlOffsetMs(format, Date.UTC(year, 0, 1, 12)), intlOffsetMs(format, Date.UTC(year, 6, 1, 12))) /
+    MS_PER_HOUR
+  )
 }

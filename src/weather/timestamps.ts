@@ -7,171 +7,30 @@
  * `3 mars 2021` in six languages), compact dates (`20210101`, `2021010113`, `202101011330`,
  * `20090101:0010`, `2021010113:26`), a separate time or hour column (`HH:MM`, `H:MM`, `HHMM`, `HH`, `0100`–`2400`),
  * 12-hour clocks (`1:00 PM`, `1:00a`, `12:30p`, `p.m.`), and 24:00 for midnight at the end of a day.
- * Components go into columns so the date order can be decided after every row has been seen.
+ * Components go into {@link TimestampColumns} (timestamp-columns.ts) so the date order can be decided
+ * after every row has been seen.
  */
-
-/** Parsed components of all rows; NaN where a row's timestamp could not be read. */
-export interface TimestampColumns {
-  year: Float64Array
-  /** First date number of a slash date whose year is last (month or day, per the date order). */
-  first: Float64Array
-  /** Second date number. */
-  second: Float64Array
-  /** Minutes after the day's midnight, 0…1440 (1440 = 24:00); seconds as a fraction. */
-  minuteOfDay: Float64Array
-  /** Offset written in the text [min east of UTC], NaN when none. */
-  offsetMin: Float64Array
-  /**
-   * 1 when month and day are known regardless of the date order (first = month, second = day): a
-   * year-first, dotted, compact or month-word date.
-   */
-  yearFirst: Uint8Array
-  /** Rows whose year was written with two digits (read with {@link TWO_DIGIT_YEAR_PIVOT}). */
-  twoDigitYears: number
-}
-
-export function createTimestampColumns(n: number): TimestampColumns {
-  return {
-    year: new Float64Array(n).fill(Number.NaN),
-    first: new Float64Array(n).fill(Number.NaN),
-    second: new Float64Array(n).fill(Number.NaN),
-    minuteOfDay: new Float64Array(n).fill(Number.NaN),
-    offsetMin: new Float64Array(n).fill(Number.NaN),
-    yearFirst: new Uint8Array(n),
-    twoDigitYears: 0,
-  }
-}
+import { monthOfWord } from './month-words.ts'
+import {
+  COLON,
+  COMMA,
+  Cursor,
+  DASH,
+  DOT,
+  isDigit,
+  isLetter,
+  MINUS_SIGN,
+  PLUS,
+  SLASH,
+  SPACE,
+} from './text-cursor.ts'
+import type { TimestampColumns } from './timestamp-columns.ts'
 
 /**
  * Two-digit years: 69–99 are 1969–1999, 00–68 are 2000–2068 (The Open Group, Single UNIX
  * Specification v2 (1997), strptime() `%y`).
  */
 export const TWO_DIGIT_YEAR_PIVOT = 69
-
-/**
- * Month-word prefixes (lower case, accents removed) in English, German, Spanish, French, Portuguese
- * and Italian; from memory. The longest prefix wins (`juil` July before `jul`, `juin` June).
- */
-const MONTH_WORDS: readonly [string, number][] = [
-  ['jan', 1],
-  ['ene', 1],
-  ['gen', 1],
-  ['feb', 2],
-  ['fev', 2],
-  ['mar', 3],
-  ['mrz', 3],
-  ['apr', 4],
-  ['abr', 4],
-  ['avr', 4],
-  ['may', 5],
-  ['mai', 5],
-  ['mag', 5],
-  ['jun', 6],
-  ['juin', 6],
-  ['giu', 6],
-  ['jul', 7],
-  ['juil', 7],
-  ['lug', 7],
-  ['aug', 8],
-  ['ago', 8],
-  ['aou', 8],
-  ['sep', 9],
-  ['set', 9],
-  ['oct', 10],
-  ['okt', 10],
-  ['out', 10],
-  ['ott', 10],
-  ['nov', 11],
-  ['dec', 12],
-  ['dez', 12],
-  ['dic', 12],
-]
-
-/** Month 1–12 of a month word (`Jan`, `janvier`, `März`, `dic`), 0 when it is none. */
-export function monthOfWord(word: string): number {
-  if (word.length < 3 || word.length > 10) return 0
-  let w = ''
-  for (const ch of word.normalize('NFD').toLowerCase()) {
-    const c = ch.charCodeAt(0)
-    if (c >= 97 && c <= 122) w += ch
-    else if (c < 0x300 || c > 0x36f) return 0 // combining accents dropped, anything else is not a month word
-  }
-  let best = 0
-  let bestLength = 0
-  for (const [prefix, month] of MONTH_WORDS) {
-    if (prefix.length > bestLength && w.startsWith(prefix)) {
-      best = month
-      bestLength = prefix.length
-    }
-  }
-  return best
-}
-
-const TAB = 9
-const SPACE = 32
-const PLUS = 43
-const COMMA = 44
-const DASH = 45
-const DOT = 46
-const SLASH = 47
-const COLON = 58
-const MINUS_SIGN = 0x2212
-
-function isSpace(c: number): boolean {
-  return c === SPACE || c === TAB || c === 0xa0
-}
-function isDigit(c: number): boolean {
-  return c >= 48 && c <= 57
-}
-function isLetter(c: number): boolean {
-  return (
-    (c >= 65 && c <= 90) || (c >= 97 && c <= 122) || (c >= 0xc0 && c <= 0x24f && c !== 0xd7 && c !== 0xf7)
-  )
-}
-
-/**
- * A left-to-right reader over one cell. Each step looks at each character at most once and never
- * goes back further than the start of the step, so any text is read in time linear in its length.
- */
-class Cursor {
-  k = 0
-  constructor(readonly text: string) {}
-  get atEnd(): boolean {
-    return this.k >= this.text.length
-  }
-  peek(): number {
-    return this.k < this.text.length ? this.text.charCodeAt(this.k) : -1
-  }
-  skipSpaces(): number {
-    const from = this.k
-    while (this.k < this.text.length && isSpace(this.text.charCodeAt(this.k))) this.k++
-    return this.k - from
-  }
-  /** A run of digits: its value (first 15 digits) and its length (0 when none). */
-  digits(): { value: number; length: number } {
-    let value = 0
-    const from = this.k
-    while (this.k < this.text.length && isDigit(this.text.charCodeAt(this.k))) {
-      if (this.k - from < 15) value = value * 10 + (this.text.charCodeAt(this.k) - 48)
-      this.k++
-    }
-    return { value, length: this.k - from }
-  }
-  /** A run of letters (ASCII and Latin-1/Extended-A) and combining accents. */
-  word(): string {
-    const from = this.k
-    for (; this.k < this.text.length; this.k++) {
-      const c = this.text.charCodeAt(this.k)
-      if (!isLetter(c) && !(c >= 0x300 && c <= 0x36f)) break
-    }
-    return this.text.slice(from, this.k)
-  }
-  eat(c: number): boolean {
-    if (this.peek() !== c) return false
-    this.k++
-    return true
-  }
-}
 
 /** Calendar part of a timestamp. */
 interface DatePart {
@@ -531,68 +390,4 @@ export function parseTimeOfDay(text: string): number {
   const minutes = readClock(c, true)
   c.skipSpaces()
   return c.atEnd ? minutes : Number.NaN
-}
-
-export type DateOrder = 'ymd' | 'mdy' | 'dmy'
-
-/**
- * The order of slash dates with the year last: `mdy` if some first number exceeds 12 is impossible,
- * `dmy` if some first number exceeds 12; null when every date fits both (ambiguous) or none has the
- * year last. Throws RangeError when both a first and a second number exceed 12 (not one order).
- */
-export function detectDateOrder(ts: TimestampColumns): DateOrder | 'ambiguous' | null {
-  let anyYearLast = false
-  let firstOver12 = false
-  let secondOver12 = false
-  for (let i = 0; i < ts.year.length; i++) {
-    if (ts.yearFirst[i] === 1 || Number.isNaN(ts.year[i])) continue
-    anyYearLast = true
-    if (ts.first[i] > 12) firstOver12 = true
-    if (ts.second[i] > 12) secondOver12 = true
-  }
-  if (!anyYearLast) return null
-  if (firstOver12 && secondOver12) {
-    throw new RangeError(
-      'dates mix day-first and month-first order (both first and second numbers exceed 12)',
-    )
-  }
-  if (firstOver12) return 'dmy'
-  if (secondOver12) return 'mdy'
-  return 'ambiguous'
-}
-
-/** Days from 1970-01-01 to the civil date (proleptic Gregorian); Hinnant (2013), "chrono-Compatible Low-Level Date Algorithms", days_from_civil. */
-export function daysFromCivil(year: number, month: number, day: number): number {
-  const y = month <= 2 ? year - 1 : year
-  const era = Math.floor(y / 400)
-  const yoe = y - era * 400
-  const mp = (month + 9) % 12
-  const doy = Math.floor((153 * mp + 2) / 5) + day - 1
-  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy
-  return era * 146097 + doe - 719468
-}
-
-/** Days in a month of the Gregorian calendar. */
-export function daysInMonth(year: number, month: number): number {
-  if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31
-}
-
-/**
- * Wall-clock milliseconds (the local date and time read as if it were UTC) of row `i`, using
- * `order` for year-last dates; NaN when the date is not a calendar date (e.g. 30 February).
- */
-export function wallClockMs(ts: TimestampColumns, i: number, order: 'mdy' | 'dmy', year: number): number {
-  const yearFirst = ts.yearFirst[i] === 1
-  const month = yearFirst || order === 'mdy' ? ts.first[i] : ts.second[i]
-  const day = yearFirst || order === 'mdy' ? ts.second[i] : ts.first[i]
-  if (!(month >= 1 && month <= 12) || !(day >= 1) || day > daysInMonth(year, month)) return Number.NaN
-  if (!(year >= 1800 && year <= 2200)) return Number.NaN
-  return daysFromCivil(year, month, day) * 86_400_000 + ts.minuteOfDay[i] * 60_000
-}
-
-/** Month (1–12) and day of row `i` under `order`. */
-export function monthDayOf(ts: TimestampColumns, i: number, order: 'mdy' | 'dmy'): [number, number] {
-  const yearFirst = ts.yearFirst[i] === 1
-  return yearFirst || order === 'mdy' ? [ts.first[i], ts.second[i]] : [ts.second[i], ts.first[i]]
 }

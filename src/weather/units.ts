@@ -4,6 +4,7 @@
  * and a plausibility check of a column's values against its unit. Conversion happens once, here.
  */
 
+import { S_PER_DAY, S_PER_HOUR } from '../physics/constants.ts'
 import { snippet } from './snippet.ts'
 
 /** The variables a reader can take from a file. */
@@ -143,11 +144,11 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     mph: u('mph', 0.44704),
     'mi/h': u('mph', 0.44704),
     'mi/hr': u('mph', 0.44704),
-    kn: u('knots', 1852 / 3600),
-    kt: u('knots', 1852 / 3600),
-    kts: u('knots', 1852 / 3600),
-    knot: u('knots', 1852 / 3600),
-    knots: u('knots', 1852 / 3600),
+    kn: u('knots', 1852 / S_PER_HOUR),
+    kt: u('knots', 1852 / S_PER_HOUR),
+    kts: u('knots', 1852 / S_PER_HOUR),
+    knot: u('knots', 1852 / S_PER_HOUR),
+    knots: u('knots', 1852 / S_PER_HOUR),
   },
   irradiance: {
     wm2: u('W/m²', 1),
@@ -158,23 +159,23 @@ const TOKENS: Record<Family, Record<string, UnitConversion>> = {
     'wh/m2': perHour('Wh/m² per hour', 1),
     kwhm2: perHour('kWh/m² per hour', 1000),
     'kwh/m2': perHour('kWh/m² per hour', 1000),
-    jm2: perHour('J/m² per hour', 1 / 3600),
-    'j/m2': perHour('J/m² per hour', 1 / 3600),
-    kjm2: perHour('kJ/m² per hour', 1000 / 3600),
-    'kj/m2': perHour('kJ/m² per hour', 1000 / 3600),
-    mjm2: perHour('MJ/m² per hour', 1e6 / 3600),
-    'mj/m2': perHour('MJ/m² per hour', 1e6 / 3600),
-    jcm2: perHour('J/cm² per hour', 1e4 / 3600),
-    'j/cm2': perHour('J/cm² per hour', 1e4 / 3600),
-    'ly/day': u('langley/day', 41840 / 86400),
-    'ly/d': u('langley/day', 41840 / 86400),
-    'langley/day': u('langley/day', 41840 / 86400),
-    'langleys/day': u('langley/day', 41840 / 86400),
+    jm2: perHour('J/m² per hour', 1 / S_PER_HOUR),
+    'j/m2': perHour('J/m² per hour', 1 / S_PER_HOUR),
+    kjm2: perHour('kJ/m² per hour', 1000 / S_PER_HOUR),
+    'kj/m2': perHour('kJ/m² per hour', 1000 / S_PER_HOUR),
+    mjm2: perHour('MJ/m² per hour', 1e6 / S_PER_HOUR),
+    'mj/m2': perHour('MJ/m² per hour', 1e6 / S_PER_HOUR),
+    jcm2: perHour('J/cm² per hour', 1e4 / S_PER_HOUR),
+    'j/cm2': perHour('J/cm² per hour', 1e4 / S_PER_HOUR),
+    'ly/day': u('langley/day', 41840 / S_PER_DAY),
+    'ly/d': u('langley/day', 41840 / S_PER_DAY),
+    'langley/day': u('langley/day', 41840 / S_PER_DAY),
+    'langleys/day': u('langley/day', 41840 / S_PER_DAY),
     'w/sqm': u('W/m²', 1),
     'w/sq.m': u('W/m²', 1),
-    ly: perHour('langley per hour', 41840 / 3600),
-    langley: perHour('langley per hour', 41840 / 3600),
-    langleys: perHour('langley per hour', 41840 / 3600),
+    ly: perHour('langley per hour', 41840 / S_PER_HOUR),
+    langley: perHour('langley per hour', 41840 / S_PER_HOUR),
+    langleys: perHour('langley per hour', 41840 / S_PER_HOUR),
   },
   depth: {
     mm: u('mm', 1),

@@ -37,10 +37,10 @@ export interface DemoCatalogue {
 
 /**
  * The page's demo list from the demo catalogue, with the reader options each file needs: CSV files with
- * UTC time stamps get the site's coordinates and the site's own zone (`siteTimeZone`: local months, hours
- * and start times on the site's clock, daylight saving included); local-clock CSV files get the IANA zone
- * of their time stamps when their time basis names one; files whose header states the site and clock
- * (EPW, or an offset in the header) get nothing but the site name.
+ * UTC time stamps are read as UTC (`utcOffsetHours` 0: the offset of the file's own time stamps) with the
+ * site's coordinates and IANA zone (`siteTimeZone`, for local months, hours and start times); local-clock
+ * CSV files get the IANA zone of their time stamps when their time basis names one; files whose header
+ * states the site and clock (EPW, or an offset in the header) get nothing but the site name.
  */
 export function demoFilesFromCatalogue(catalogue: DemoCatalogue): DemoFile[] {
   const out: DemoFile[] = []
@@ -52,8 +52,10 @@ export function demoFilesFromCatalogue(catalogue: DemoCatalogue): DemoFile[] {
         readOptions.latitudeDeg = s.latitudeDeg
         readOptions.longitudeDeg = s.longitudeDeg
         readOptions.elevationM = s.elevationM
-        if (/^UTC\b/.test(f.timeBasis)) readOptions.siteTimeZone = s.timeZone
-        else if (f.timeBasis.includes(s.timeZone)) readOptions.timeZone = s.timeZone
+        if (/^UTC\b/.test(f.timeBasis)) {
+          readOptions.utcOffsetHours = 0
+          readOptions.siteTimeZone = s.timeZone
+        } else if (f.timeBasis.includes(s.timeZone)) readOptions.timeZone = s.timeZone
       }
       out.push({ file: f.file, label: `${s.name}, ${s.climateType}: ${f.file}`, readOptions })
     }

@@ -16,7 +16,7 @@ import {
   WeatherOptionError,
   WeatherOptionsInvalid,
   weatherOptionsFromTexts,
-} from '../weather/option-spec.ts'
+} from '../weather/option-texts.ts'
 
 /** Most weather files one comparison takes, unless the server says otherwise (the API's `maxSites`). */
 export const MAX_SITES = 8
@@ -90,6 +90,32 @@ export function numberField(
     throw new FormFieldError(name, `must be a number from ${lo} to ${hi} ${unit}, got ${JSON.stringify(t)}`)
   }
   return n
+}
+
+/**
+ * A list of numbers (e.g. airflows "0.5 1 2"): separated by spaces or semicolons, or by commas when the numbers
+ * use decimal points; decimal commas are read as points otherwise.
+ */
+function numberListField(
+  form: FormData,
+  name: string,
+  lo: number,
+  hi: number,
+  unit: string,
+): number[] | undefined {
+  const t = text(form, name)
+  if (t === undefined) return undefined
+  const parts = t.split(t.includes('.') ? /[;,\s]+/ : /[;\s]+/).filter((p) => p !== '')
+  return parts.map((p) => {
+    const n = Number(p.replace(',', '.'))
+    if (!(Number.isFinite(n) && n >= lo && n <= hi)) {
+      throw new FormFieldError(
+        name,
+        `each value must be a number from ${lo} to ${hi} ${unit}, got ${JSON.stringify(p)}`,
+      )
+    }
+    return n
+  })
 }
 
 export function choice<T extends string>(
@@ -195,6 +221,7 @@ function methodsOf(form: FormData): { kinds: string[]; inputs: AssessOptions['me
   const efficiency = numberField(form, 'heaterEfficiencyPct', 1, 100, '%')
   const fuel =
     text(form, 'fuel') === undefined ? undefined : choice<FuelId>(form, 'fuel', FUEL_IDS, 'propane')
+  const bin = kinds.includes('natural-air-bin') ? binFields(form) : {}
   const inputs = kinds.map((kind) => {
     const method: Record<string, unknown> = { kind }
     if (loading !== undefined && (kind === 'open-air' || kind === 'shade')) method.loadingKgPerM2 = loading
@@ -204,9 +231,24 @@ function methodsOf(form: FormData): { kinds: string[]; inputs: AssessOptions['me
       if (efficiency !== undefined) method.heaterEfficiency = efficiency / 100
       if (fuel !== undefined) method.fuel = fuel
     }
+    if (kind === 'natural-air-bin') Object.assign(method, bin)
     return method as AssessOptions['method']
   })
   return { kinds, inputs }
+}
+
+/** The natural-air bin's fields: the airflows to compare, the bin's depth and diameter, the heater's rise. */
+function binFields(form: FormData): Record<string, unknown> {
+  const out: Record<string, unknown> = {}
+  const airflows = numberListField(form, 'binAirflows', 0.01, 50, 'm³/min per t')
+  if (airflows !== undefined) out.airflowsM3PerMinPerTonne = airflows
+  const depth = numberField(form, 'binDepthM', 0.1, 30, 'm')
+  if (depth !== undefined) out.depthM = depth
+  const diameter = numberField(form, 'binDiameterM', 0.5, 50, 'm')
+  if (diameter !== undefined) out.binDiameterM = diameter
+  const rise = numberField(form, 'heatRiseK', 0, 30, 'K')
+  if (rise !== undefined) out.heatRiseK = rise
+  return out
 }
 
 /** The options every method shares: product moisture, season, deadline, the backup heater and prices. */

@@ -1,6 +1,7 @@
 /**
  * The demo climates (invented sites, climate-demo/), read with the site metadata of climate-demo/sites.json
- * (the CSV files carry no coordinates). Cached per test process.
+ * (the CSV files carry no coordinates): the UTC files as UTC (`utcOffsetHours` is the offset of the file's
+ * own time stamps) with the site's zone as `siteTimeZone`. Cached per test process.
  */
 import { readFileSync } from 'node:fs'
 import { readWeather } from '../../src/weather/read-weather.ts'
@@ -14,7 +15,13 @@ interface DemoSpec {
 export const DEMO = {
   dryUpland: {
     file: 'climate-demo/ardentine-upland-2021-2024-utc.csv',
-    options: { latitudeDeg: 38.3, longitudeDeg: -2.6, elevationM: 1050, utcOffsetHours: 1 },
+    options: {
+      latitudeDeg: 38.3,
+      longitudeDeg: -2.6,
+      elevationM: 1050,
+      utcOffsetHours: 0,
+      siteTimeZone: 'Europe/Madrid',
+    },
   },
   humidValley: {
     file: 'climate-demo/quillow-valley-2021-2023-local-dst-imperial.csv',
@@ -23,7 +30,13 @@ export const DEMO = {
   coolCoast: { file: 'climate-demo/gullhaven-coast-2022-2024.epw', options: {} },
   tropical: {
     file: 'climate-demo/tamarel-lowland-2021-2023-utc.csv',
-    options: { latitudeDeg: 11.9, longitudeDeg: 104.6, elevationM: 95, utcOffsetHours: 7 },
+    options: {
+      latitudeDeg: 11.9,
+      longitudeDeg: 104.6,
+      elevationM: 95,
+      utcOffsetHours: 0,
+      siteTimeZone: 'Asia/Bangkok',
+    },
   },
   typicalUpland: { file: 'climate-demo/ardentine-upland-typical-year.epw', options: {} },
   faultyLogger: {

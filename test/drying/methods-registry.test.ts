@@ -11,7 +11,7 @@ import { METHOD_MODELS, methodModel } from '../../src/drying/methods/index.ts'
 import { HourMode } from '../../src/drying/methods/method-model.ts'
 import { productResponse } from '../../src/drying/product-response.ts'
 import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
-import { productById } from '../../src/product/catalogue.ts'
+import { PRODUCT_CATALOGUE, productById } from '../../src/product/catalogue.ts'
 import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
 import { renderPage } from '../../src/web/page-html.ts'
 import { demoSeries, sliceSeries } from './demo-weather.ts'
@@ -33,12 +33,16 @@ describe('the method registry', () => {
   for (const model of METHOD_MODELS) {
     it(`${model.kind}: hours with physical values, its assumptions listed, offered on the page`, () => {
       const method = parseDryingMethod({ kind: model.kind })
-      const c = computeHourlyConditions(week, method, productResponse(apricots), {
-        targetDb: moistureDbFromWbPct(apricots.targetMoistureWbPct.value),
-        initialWbPct: apricots.initialMoistureWbPct.value,
-        loadingKgPerM2: apricots.defaultLoadingKgPerM2.value,
+      // apricots, or the first catalogue product the method takes (a grain bin takes grain only)
+      const product = [apricots, ...PRODUCT_CATALOGUE].find((p) => (model.productFits?.(p) ?? null) === null)
+      if (!product) throw new Error(`${model.kind} takes no catalogue product`)
+      if (product !== apricots) expect(model.productFits?.(apricots)).toMatch(/apricot/i)
+      const c = computeHourlyConditions(week, method, productResponse(product), {
+        targetDb: moistureDbFromWbPct(product.targetMoistureWbPct.value),
+        initialWbPct: product.initialMoistureWbPct.value,
+        loadingKgPerM2: product.defaultLoadingKgPerM2.value,
         thresholds: parseDryingThresholds({}),
-        maxProductTempC: apricots.maxProductTempC?.value ?? null,
+        maxProductTempC: product.maxProductTempC?.value ?? null,
       })
       expect(c.airFlowKgPerSPerTonne > 0).toBe(model.exposure === 'forced-air')
       let active = 0
@@ -58,7 +62,7 @@ describe('the method registry', () => {
       expect(active).toBeGreaterThan(0)
       if (model.heatsWithFuel) expect(c.heaterKwhPerTonne.some((v) => v > 0)).toBe(true)
       const a = assess(week, {
-        product: apricots,
+        product,
         method,
         seasonStart: '07-10',
         seasonEnd: '07-11',
@@ -66,8 +70,8 @@ describe('the method registry', () => {
         deadlineDays: 2,
       })
       expect(a.methodLabel).toBe(model.label)
-      const product = { id: apricots.id, name: apricots.name, category: apricots.category }
-      for (const x of methodModel(model.kind).assumptions(method, product))
+      const named = { id: product.id, name: product.name, category: product.category }
+      for (const x of methodModel(model.kind).assumptions(method, named))
         expect(a.assumptions).toContainEqual(x)
       expect(renderPage({})).toContain(`value="${model.kind}"`)
     })

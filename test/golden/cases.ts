@@ -167,6 +167,45 @@ export const GOLDEN_CASES: GoldenCase[] = [
       startStepDays: 10,
     },
   },
+  // Natural-air bin drying of corn harvested into a bin in the humid valley: three airflows compared (the
+  // report's bin section, its CSV tables); and wheat in the dry upland with a heater, a humidistat and a
+  // given floor area (method options off their defaults).
+  {
+    id: 'quillow--shelled-corn--natural-air-bin',
+    site: 'humidValley',
+    rendered: true,
+    options: {
+      product: productById('shelled-corn'),
+      method: { kind: 'natural-air-bin', airflowsM3PerMinPerTonne: [1, 2, 3] },
+      initialWbPct: 20,
+      targetWbPct: 15.5,
+      seasonStart: '09-15',
+      seasonEnd: '10-15',
+      thresholds: { minProductTempC: 0 },
+    },
+  },
+  {
+    id: 'ardentine--wheat--natural-air-bin-heater-humidistat',
+    site: 'dryUpland',
+    options: {
+      product: productById('wheat'),
+      method: {
+        kind: 'natural-air-bin',
+        airflowsM3PerMinPerTonne: [0.75, 1.5],
+        depthM: 3,
+        floorAreaM2: 40,
+        heatRiseK: 3,
+        heaterOnAboveRhPct: 70,
+        fanControl: 'rh-below',
+        fanMaxRhPct: 80,
+      },
+      initialWbPct: 18,
+      targetWbPct: 13,
+      seasonStart: '07-01',
+      seasonEnd: '07-29',
+      maxDays: 40,
+    },
+  },
   // The faulty logger year: gaps, stuck sensor, doubled rows (the assessment's coverage and warnings).
   {
     id: 'tamarel-faulty-logger--coffee-parchment--open-air',

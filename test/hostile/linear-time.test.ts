@@ -2,12 +2,15 @@
 // about 13 s; a header of 1,000 cells of 100 '(' about 12 s, freezing the server). Every reader on
 // user text now runs in time linear in its length: these tests assert what is answered, not how
 // fast (the times are printed by `npx tsx bench/run.ts hostile`).
+
 import { describe, expect, it } from 'vitest'
 import { normaliseHeader } from '../../src/analysis/energy/log-columns.ts'
-import { analyseHeader, headerTimeBasis, splitHeader } from '../../src/weather/columns.ts'
+import { analyseHeader, splitHeader } from '../../src/weather/header-parts.ts'
+import { headerTimeBasis } from '../../src/weather/header-time.ts'
 import { parseField } from '../../src/weather/numbers.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
-import { createTimestampColumns, parseTimeOfDay, parseTimestampInto } from '../../src/weather/timestamps.ts'
+import { createTimestampColumns } from '../../src/weather/timestamp-columns.ts'
+import { parseTimeOfDay, parseTimestampInto } from '../../src/weather/timestamps.ts'
 import { normalizeUnitToken } from '../../src/weather/units.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 import { COARSE_QUERY, expectInspect, expectProblem, post } from './hostile-helpers.ts'

@@ -1,7 +1,7 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
+import { dayOfYearAt } from '../../src/physics/calendar.ts'
 import {
-  dayOfYearAt,
   extraterrestrialRadiationDailyMjM2,
   extraterrestrialRadiationForPeriodUtcMjM2,
   extraterrestrialRadiationPeriodMjM2,

@@ -13,6 +13,7 @@ import {
   saturationVaporPressureLiquidKpa,
 } from '../../src/physics/saturation.ts'
 import {
+  liquidSaturationPressureFromTableKpa,
   saturationPressureFromTableKpa,
   saturationTableSlopes,
   saturationTemperatureFromTableC,
@@ -36,6 +37,17 @@ describe('saturation table', () => {
     }
     expect(e).toBeLessThan(1e-9)
     expect(e1).toBeLessThan(1e-6)
+  })
+  it('the liquid-water inner-loop form gives the same bits as the general read (value and dpws/dT)', () => {
+    const slope = new Float64Array(1)
+    let differ = 0
+    for (const t of temps) {
+      const own = liquidSaturationPressureFromTableKpa(t, slope)
+      const general = saturationPressureFromTableKpa(t, false)
+      if (own !== general || slope[0] !== saturationTableSlopes[0]) differ++
+    }
+    expect(temps.length).toBeGreaterThan(8000)
+    expect(differ).toBe(0)
   })
   it('ice, −100…0.01 °C: pws within 1e-9 relative, dpws/dT within 1e-6', () => {
     let e = 0

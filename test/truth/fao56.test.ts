@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { dayOfYearAt } from '../../src/physics/calendar.ts'
 import { windSpeedAt2mMs } from '../../src/physics/evaporation.ts'
 import {
   atmosphericPressureFao56Kpa,
@@ -10,7 +11,6 @@ import {
 } from '../../src/physics/fao56-reference-et.ts'
 import {
   daylightHours,
-  dayOfYearAt,
   extraterrestrialRadiationDailyMjM2,
   extraterrestrialRadiationPeriodMjM2,
   fao56HourAngleRad,

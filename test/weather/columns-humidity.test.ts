@@ -1,8 +1,10 @@
 // Column recognition, explicit mapping, and RH from wet bulb (checked against psychrolib 1.1.1,
 // which implements ASHRAE Handbook — Fundamentals 2017 ch. 1; above 0 °C its RH is over liquid water like ours).
+
 import psychrolib from 'psychrolib'
 import { describe, expect, it } from 'vitest'
-import { analyseHeader, classifyHeader, planColumns, splitHeader } from '../../src/weather/columns.ts'
+import { planColumns } from '../../src/weather/columns.ts'
+import { analyseHeader, classifyHeader, splitHeader } from '../../src/weather/header-parts.ts'
 import { parseMappingArgument } from '../../src/weather/options.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
 import { csv, hourStamps } from './csv-builder.ts'

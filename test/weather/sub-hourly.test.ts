@@ -6,8 +6,9 @@
 // scheduled report … taken at 0855 UTC").
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { aggregateVariable, deaccumulate, planRows } from '../../src/weather/hourly-aggregate.ts'
+import { aggregateVariable, deaccumulate } from '../../src/weather/hourly-aggregate.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
+import { planRows } from '../../src/weather/row-plan.ts'
 import { QualityFlag } from '../../src/weather/series.ts'
 import { csv } from './csv-builder.ts'
 

@@ -1,11 +1,12 @@
 // The timestamps' basis kept apart from the site's clock (src/weather/site-clock.ts), and honest ends:
 // a file with no usable hour is an error that says why; constant pressure is a note; RH plateaus at or
 // above 90 % in wet weather are not a stuck sensor (quality.ts, common practice, no source).
+
 import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import { readWeather } from '../../src/weather/read-weather.ts'
-import { zoneStandardOffsetHours } from '../../src/weather/site-clock.ts'
+import { zoneStandardOffsetHours } from '../../src/weather/time-zone.ts'
 import { WeatherInputError } from '../../src/weather/weather-input-error.ts'
 import { csv, hourStamps } from './csv-builder.ts'
 import { epwText } from './epw-builder.ts'

@@ -3,14 +3,12 @@
 // (SI)", App. B.8 and B.9): °F (t − 32)/1.8, K t − 273.15, 1 inHg (conventional) = 3386.389 Pa,
 // 1 mph = 0.44704 m/s, 1 knot = 1852/3600 m/s, 1 in = 25.4 mm, 1 cal_th/cm² (langley) = 41 840 J/m²
 // (from memory). Two-digit years: The Open Group, Single UNIX Specification v2, strptime `%y`.
+
 import { describe, expect, it } from 'vitest'
-import { analyseHeader, headerTimeBasis } from '../../src/weather/columns.ts'
-import {
-  createTimestampColumns,
-  parseTimeOfDay,
-  parseTimestampInto,
-  type TimestampColumns,
-} from '../../src/weather/timestamps.ts'
+import { analyseHeader } from '../../src/weather/header-parts.ts'
+import { headerTimeBasis } from '../../src/weather/header-time.ts'
+import { createTimestampColumns, type TimestampColumns } from '../../src/weather/timestamp-columns.ts'
+import { parseTimeOfDay, parseTimestampInto } from '../../src/weather/timestamps.ts'
 import { isUnitToken, unitConversion, type WeatherVariable } from '../../src/weather/units.ts'
 
 function si(variable: WeatherVariable, token: string, value: number): number {

@@ -69,7 +69,9 @@ describe('GET /', () => {
     const q = list.find((d) => d.file.startsWith('quillow'))
     expect(q?.readOptions?.timeZone).toBe('America/Chicago')
     const t = list.find((d) => d.file === 'tamarel-lowland-2021-2023-utc.csv')
+    // the file's time stamps are UTC; the site keeps its own zone (climate-demo/sites.json)
     expect(t?.readOptions).toMatchObject({
+      utcOffsetHours: 0,
       siteTimeZone: 'Asia/Bangkok',
       latitudeDeg: 11.9,
       longitudeDeg: 104.6,

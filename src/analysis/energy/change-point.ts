@@ -77,7 +77,7 @@ export function estimateChangePoint(
       sums[i - from] = sum
     }
   }
-  const max = logPost.reduce((m, l) => (l > m ? l : m), Number.NEGATIVE_INFINITY)
+  const max = logPost.reduce((m, l) => Math.max(l, m), Number.NEGATIVE_INFINITY)
   const weights = logPost.map((l) => Math.exp(l - max))
   const total = weights.reduce((s, w) => s + w, 0)
   const candidates = weights.map((w, j) => ({ index: from + j, probability: w / total }))

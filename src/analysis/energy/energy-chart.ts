@@ -8,7 +8,9 @@
  * CUSUM, locates the change (./change-point.ts) and says whether the signal stands without the batches whose
  * weather the baseline never saw (./weather-range.ts). Plain JSON-safe data for report/.
  */
+
 import type { FuelId } from '../../drying/method.ts'
+import { MS_PER_HOUR } from '../../physics/constants.ts'
 import { STANDARD_PRESSURE_KPA, standardPressureKpaAtElevation } from '../../physics/moist-air.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
@@ -146,33 +148,7 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
         (options.dryingTempC === undefined ? ' (default, an assumption: give --drying-temp)' : ''),
     )
   }
-  const offset = options.utcOffsetHours ?? options.weather?.site.utcOffsetHours ?? null
-  if (log.batches.some((b) => b.startOffsetHours === null)) {
-    assumptions.push(
-      offset === null
-        ? 'Start times without an offset are taken as UTC (no --utc-offset and no offset in the weather file)'
-        : `Start times without an offset are local standard time at UTC${offset >= 0 ? '+' : ''}${offset} h`,
-    )
-  }
-  const elevation = options.elevationM ?? options.weather?.site.elevationM ?? null
-  const fallbackPressureKpa =
-    elevation === null ? STANDARD_PRESSURE_KPA : standardPressureKpaAtElevation(elevation)
-  const timed = log.batches
-    .map((b) => ({ b, startUtcMs: b.startLocalMs - (b.startOffsetHours ?? offset ?? 0) * 3_600_000 }))
-    .sort((x, y) => x.startUtcMs - y.startUtcMs)
-  const batches = timed.map(({ b, startUtcMs }, i) =>
-    batchEnergy(b, i, startUtcMs, ambientOf(b, startUtcMs, options, fallbackPressureKpa), {
-      dryingTempC,
-      profile: options.profile,
-    }),
-  )
-  if (timed.some(({ b }, i) => i > 0 && b.line < timed[i - 1].b.line))
-    assumptions.push('Rows were put in order of start time')
-  if (batches.some((b) => b.ambient?.source === 'weather')) {
-    assumptions.push(
-      `Outside air from the weather file: mean of the batch's hours, needing ${MIN_WEATHER_COVERAGE * 100} % of them`,
-    )
-  }
+  const batches = batchesInTime(log, options, dryingTempC, assumptions)
   const n = batches.length
   const baselineCount =
     options.baselineCount ?? Math.max(MIN_BASELINE_POINTS, Math.min(20, Math.floor(n / 2)))
@@ -204,18 +180,8 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
   const physics = phys.view
   const adjusted = reg.view
   if (phys.view) {
-    warnings.push(...phys.leftOff.map((t) => `left off the physics view: ${t}`))
-    if (phys.view.fit.efficiency > 1) {
-      warnings.push(
-        `the physics fit gives an overall efficiency of ${(100 * phys.view.fit.efficiency).toFixed(0)} %, above what a dryer can reach: check drying_temp_c (or --drying-temp) and the energy figures`,
-      )
-    }
     const assumed = log.batches.filter((b) => b.dryingTempC === null).length
-    if (assumed > 0 && options.dryingTempC === undefined) {
-      warnings.push(
-        `the physics view takes the drying-air temperature as ${dryingTempC} °C (the default) for ${assumed} batches: the expected heat depends on it, so give drying_temp_c in the log or --drying-temp`,
-      )
-    }
+    warnings.push(...physicsViewWarnings(phys.view, phys.leftOff, assumed, options, dryingTempC))
   }
   if (reg.view && reg.extrapolation) warnings.push(reg.extrapolation)
   const complete = batches.filter((b) => b.ambient !== null).length
@@ -235,12 +201,6 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
   const chosen: ChartSet =
     choice.view === 'physics' ? physics! : choice.view === 'regression' ? adjusted! : raw
   const answer = { ...choice, robustness: signalWithoutOutside(chosen, batches, outside) }
-  const cusumDesign: CusumDesign = {
-    k: CUSUM_K,
-    h: CUSUM_H,
-    inControlArl: twoSidedCusumArl(CUSUM_K, CUSUM_H, 0),
-    arlAtShiftSigma: [1, 2, 3].map((s) => ({ shiftSigma: s, arl: twoSidedCusumArl(CUSUM_K, CUSUM_H, s) })),
-  }
   const partial = {
     kind: 'energy-chart' as const,
     accounting: log.accounting,
@@ -255,26 +215,104 @@ export function analyzeEnergyLog(text: string, options: EnergyChartOptions = {})
     answer,
     baselineWeather,
     outsideBaselineWeather: outside,
-    cusumDesign,
+    cusumDesign: cusumDesign(),
     assumptions,
     warnings,
-    sources: [
-      CONTROL_CHART_SOURCE,
-      `CUSUM: tabular (Page 1954, Biometrika 41:100), standardized by the baseline's x̄ and MR̄/d2, k = ${CUSUM_K}, h = ${CUSUM_H} ` +
-        '(Montgomery & Runger, Applied Statistics and Probability for Engineers, section 16-10); average run lengths by the integral equation ' +
-        '(Goel & Wu 1971; Vance 1986), checked against Lucas & Crosier (1982, Technometrics 24:199) Table 1.',
-      'Change point: posterior over the first shifted batch for one sustained step, flat prior on its size (Smith 1975, ' +
-        'Biometrika 62:407); its mode is close to the maximum-likelihood estimate (Hinkley 1970, Biometrika 57:1).',
-      'Physics view: heat to warm the outside air to the drying temperature at constant humidity ratio, for the air that ' +
-        "carries the water removed up to saturation at the heated air's wet bulb, plus the sorption heat (moist-air relations " +
-        'of ASHRAE Handbook — Fundamentals 2017 ch. 1 eqs 20, 30, 33); overall efficiency and fixed loss per batch fitted over ' +
-        'the baseline by least squares; views compared by leave-one-out (PRESS) error.',
-      'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',
-      'Heating values: higher heating values of src/drying/fuels.ts (US EIA Btu conversion factors).',
-      'Regression: ordinary least squares over the baseline batches (specific energy on outside humidity ratio, outside temperature, load); ' +
-        'the regression view plots residuals standardized by their leverage h, e/√(1 − h) in the baseline and e/√(1 + h) after it ' +
-        '(Montgomery, Peck & Vining, Introduction to Linear Regression Analysis, ch. 3–4).',
-    ],
+    sources: energyChartSources(),
   }
   return { ...partial, summary: summaryLines(partial) }
+}
+
+/**
+ * Every batch's energy with its outside air (the log's, else the weather file's), in order of start
+ * time (UTC: the batch's own offset, else the option's or the weather file's, else UTC); assumptions
+ * say what was taken.
+ */
+function batchesInTime(
+  log: ReturnType<typeof readBatchLog>,
+  options: EnergyChartOptions,
+  dryingTempC: number,
+  assumptions: string[],
+): BatchEnergy[] {
+  const offset = options.utcOffsetHours ?? options.weather?.site.utcOffsetHours ?? null
+  if (log.batches.some((b) => b.startOffsetHours === null)) {
+    assumptions.push(
+      offset === null
+        ? 'Start times without an offset are taken as UTC (no --utc-offset and no offset in the weather file)'
+        : `Start times without an offset are local standard time at UTC${offset >= 0 ? '+' : ''}${offset} h`,
+    )
+  }
+  const elevation = options.elevationM ?? options.weather?.site.elevationM ?? null
+  const fallbackPressureKpa =
+    elevation === null ? STANDARD_PRESSURE_KPA : standardPressureKpaAtElevation(elevation)
+  const timed = log.batches
+    .map((b) => ({ b, startUtcMs: b.startLocalMs - (b.startOffsetHours ?? offset ?? 0) * MS_PER_HOUR }))
+    .sort((x, y) => x.startUtcMs - y.startUtcMs)
+  const batches = timed.map(({ b, startUtcMs }, i) =>
+    batchEnergy(b, i, startUtcMs, ambientOf(b, startUtcMs, options, fallbackPressureKpa), {
+      dryingTempC,
+      profile: options.profile,
+    }),
+  )
+  if (timed.some(({ b }, i) => i > 0 && b.line < timed[i - 1].b.line))
+    assumptions.push('Rows were put in order of start time')
+  if (batches.some((b) => b.ambient?.source === 'weather')) {
+    assumptions.push(
+      `Outside air from the weather file: mean of the batch's hours, needing ${MIN_WEATHER_COVERAGE * 100} % of them`,
+    )
+  }
+  return batches
+}
+
+/** What the physics view's fit and inputs call for: batches left off, an efficiency above 1, a default drying temperature. */
+function physicsViewWarnings(
+  view: PhysicsView,
+  leftOff: string[],
+  assumedTemperatures: number,
+  options: EnergyChartOptions,
+  dryingTempC: number,
+): string[] {
+  const warnings = leftOff.map((t) => `left off the physics view: ${t}`)
+  if (view.fit.efficiency > 1) {
+    warnings.push(
+      `the physics fit gives an overall efficiency of ${(100 * view.fit.efficiency).toFixed(0)} %, above what a dryer can reach: check drying_temp_c (or --drying-temp) and the energy figures`,
+    )
+  }
+  if (assumedTemperatures > 0 && options.dryingTempC === undefined) {
+    warnings.push(
+      `the physics view takes the drying-air temperature as ${dryingTempC} °C (the default) for ${assumedTemperatures} batches: the expected heat depends on it, so give drying_temp_c in the log or --drying-temp`,
+    )
+  }
+  return warnings
+}
+
+/** The tabular CUSUM's design: k, h and its two-sided average run lengths. */
+function cusumDesign(): CusumDesign {
+  return {
+    k: CUSUM_K,
+    h: CUSUM_H,
+    inControlArl: twoSidedCusumArl(CUSUM_K, CUSUM_H, 0),
+    arlAtShiftSigma: [1, 2, 3].map((s) => ({ shiftSigma: s, arl: twoSidedCusumArl(CUSUM_K, CUSUM_H, s) })),
+  }
+}
+
+/** The methods behind the energy charts, with their sources. */
+function energyChartSources(): string[] {
+  return [
+    CONTROL_CHART_SOURCE,
+    `CUSUM: tabular (Page 1954, Biometrika 41:100), standardized by the baseline's x̄ and MR̄/d2, k = ${CUSUM_K}, h = ${CUSUM_H} ` +
+      '(Montgomery & Runger, Applied Statistics and Probability for Engineers, section 16-10); average run lengths by the integral equation ' +
+      '(Goel & Wu 1971; Vance 1986), checked against Lucas & Crosier (1982, Technometrics 24:199) Table 1.',
+    'Change point: posterior over the first shifted batch for one sustained step, flat prior on its size (Smith 1975, ' +
+      'Biometrika 62:407); its mode is close to the maximum-likelihood estimate (Hinkley 1970, Biometrika 57:1).',
+    'Physics view: heat to warm the outside air to the drying temperature at constant humidity ratio, for the air that ' +
+      "carries the water removed up to saturation at the heated air's wet bulb, plus the sorption heat (moist-air relations " +
+      'of ASHRAE Handbook — Fundamentals 2017 ch. 1 eqs 20, 30, 33); overall efficiency and fixed loss per batch fitted over ' +
+      'the baseline by least squares; views compared by leave-one-out (PRESS) error.',
+    'Latent heat λ = 2.501 − 0.002361·T MJ/kg (FAO-56 Annex 3 eq 3-1); heat of sorption from the isotherm by Clausius–Clapeyron.',
+    'Heating values: higher heating values of src/drying/fuels.ts (US EIA Btu conversion factors).',
+    'Regression: ordinary least squares over the baseline batches (specific energy on outside humidity ratio, outside temperature, load); ' +
+      'the regression view plots residuals standardized by their leverage h, e/√(1 − h) in the baseline and e/√(1 + h) after it ' +
+      '(Montgomery, Peck & Vining, Introduction to Linear Regression Analysis, ch. 3–4).',
+  ]
 }

@@ -69,3 +69,8 @@ export function ewmaChart(
     firstMonitoringSignal: later ? later.index : null,
   }
 }
+
+/** Half-width of the EWMA limits once they have settled [unit of the values]: Lσ√(λ/(2 − λ)). */
+export function ewmaSteadyHalfWidth(e: Pick<EwmaChart, 'lambda' | 'limitWidthL' | 'sigma'>): number {
+  return e.limitWidthL * e.sigma * Math.sqrt(e.lambda / (2 - e.lambda))
+}

@@ -92,6 +92,6 @@ export function individualsChart(values: readonly number[], baselineCount: numbe
     movingRangeLowerLimit: D3_MOVING_RANGE_OF_TWO * meanMovingRange,
     signals,
     movingRangeSignals,
-    firstMonitoringSignal: monitoring.length > 0 ? monitoring.reduce((a, b) => (b < a ? b : a)) : null,
+    firstMonitoringSignal: monitoring.length > 0 ? monitoring.reduce((a, b) => Math.min(b, a)) : null,
   }
 }

@@ -119,8 +119,8 @@ export function extrapolationWarning(baseline: number[][], monitored: number[][]
   if (monitored.length === 0) return null
   const parts: string[] = []
   REGRESSOR_WORDS.forEach((word, j) => {
-    const lo = baseline.reduce((m, r) => (r[j] < m ? r[j] : m), Number.POSITIVE_INFINITY)
-    const hi = baseline.reduce((m, r) => (r[j] > m ? r[j] : m), Number.NEGATIVE_INFINITY)
+    const lo = baseline.reduce((m, r) => Math.min(r[j], m), Number.POSITIVE_INFINITY)
+    const hi = baseline.reduce((m, r) => Math.max(r[j], m), Number.NEGATIVE_INFINITY)
     const outside = monitored.filter((r) => r[j] < lo || r[j] > hi).length
     if (outside > 0)
       parts.push(`${outside} ${parts.length === 0 ? "lie outside the baseline's range of " : 'of '}${word}`)

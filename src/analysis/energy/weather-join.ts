@@ -4,8 +4,8 @@
  * ratio of the hours whose start falls inside [start, start + duration). Humidity ratio from RH (over
  * liquid water) and station pressure by ASHRAE HOF 2017 ch. 1 eq 20.
  */
-import { humidityRatioFromVaporPressure } from '../../physics/moist-air.ts'
-import { saturationVaporPressureLiquidKpa } from '../../physics/saturation.ts'
+import { humidityRatioFromRh } from '../../physics/air-processes.ts'
+import { MS_PER_HOUR } from '../../physics/constants.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 
 /** Share of a batch's hours that must have dry bulb and RH for a mean (assumption, common practice, no source). */
@@ -20,12 +20,9 @@ export interface BatchAmbient {
   hoursInBatch: number
 }
 
-const HOUR_MS = 3_600_000
-
 /** Humidity ratio [g/kg dry air] from dry bulb [°C], RH over water [%] and pressure [kPa]. */
 export function humidityRatioGPerKgFromRh(dryBulbC: number, rhPct: number, pressureKpa: number): number {
-  const pw = (rhPct / 100) * saturationVaporPressureLiquidKpa(dryBulbC)
-  return 1000 * humidityRatioFromVaporPressure(pw, pressureKpa)
+  return 1000 * humidityRatioFromRh(dryBulbC, rhPct, pressureKpa)
 }
 
 /**
@@ -41,8 +38,8 @@ export function batchAmbientFromSeries(
   const hoursInBatch = Math.max(1, Math.ceil(durationH))
   const first = series.hours > 0 ? series.startUtcMs[0] : 0
   // Hours start on the hour: the batch covers the hours whose start is in [start, end), plus the hour it began in.
-  const fromIndex = Math.floor((startUtcMs - first) / HOUR_MS)
-  const toIndex = Math.ceil((startUtcMs + durationH * HOUR_MS - first) / HOUR_MS) - 1
+  const fromIndex = Math.floor((startUtcMs - first) / MS_PER_HOUR)
+  const toIndex = Math.ceil((startUtcMs + durationH * MS_PER_HOUR - first) / MS_PER_HOUR) - 1
   let n = 0
   let tSum = 0
   let rhSum = 0

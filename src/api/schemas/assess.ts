@@ -25,7 +25,7 @@ import { rethrowAsProblem } from '../errors.ts'
 import { ApiProblem } from '../problem.ts'
 import { parseOrProblem } from '../validate.ts'
 import { weatherOptionsFromQuery, weatherQueryFields } from '../weather-options.ts'
-import { numberParam } from './params.ts'
+import { numberListParam, numberParam } from './params.ts'
 
 const monthDay = z.string().regex(/^(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, 'must be MM-DD, e.g. 07-15')
 
@@ -39,7 +39,7 @@ export const assessOptionsJsonSchema = z.strictObject({
   method: z
     .union([z.enum(kinds), z.record(z.string(), z.unknown())])
     .describe(
-      'drying method kind, or an object {kind, …parameters} (open-air, shade, solar-cabinet, heated)',
+      `drying method kind, or an object {kind, …parameters} (${DRYING_METHOD_KINDS.join(', ')}; natural-air-bin: depthM [m], binDiameterM [m] or floorAreaM2 [m²], airflowsM3PerMinPerTonne [m³/min per t], heatRiseK [K], fanControl, fanEfficiency [0–1], layers, dryMatterLossLimitPct [%])`,
     ),
   targetWbPct: z
     .number()
@@ -120,7 +120,7 @@ export const assessOptionsJsonSchema = z.strictObject({
 /** Query form (raw file body). */
 export const assessQuerySchema = z.strictObject({
   product: z.string().min(1).describe('catalogue product id (GET /v1/products)'),
-  method: z.enum(kinds).describe('open-air, shade, solar-cabinet or heated (defaults for its parameters)'),
+  method: z.enum(kinds).describe(`${DRYING_METHOD_KINDS.join(', ')} (defaults for its parameters)`),
   targetWb: numberParam('target moisture, wet basis [%]').optional(),
   initialWb: numberParam('initial moisture, wet basis [%]').optional(),
   thickness: numberParam('product thickness [mm]').optional(),
@@ -130,6 +130,17 @@ export const assessQuerySchema = z.strictObject({
   deadlineDays: numberParam('window to reach the target [days]').optional(),
   maxDays: numberParam('a batch fails after this many days [days]').optional(),
   batchKg: numberParam('batch size [kg fresh]').optional(),
+  airflow: numberListParam(
+    'natural-air-bin: airflows to compare [m³/min per tonne of grain], e.g. 0.5,1,2 (default 0.5,1,1.5,2,3)',
+  ).optional(),
+  binDepth: numberParam('natural-air-bin: grain depth [m] (default 4)').optional(),
+  binDiameter: numberParam('natural-air-bin: bin diameter [m] (default 9.1)').optional(),
+  floorArea: numberParam('natural-air-bin: floor area [m²], instead of a diameter').optional(),
+  heatRise: numberParam('natural-air-bin: temperature rise from a heater [K] (default 0)').optional(),
+  fanControl: z
+    .enum(['continuous', 'air-emc-below', 'rh-below'])
+    .optional()
+    .describe('natural-air-bin: when the fan runs (default continuous)'),
   fuel: z.enum(FUEL_IDS).optional().describe('fuel for the heat and cost figures'),
   price: z.string().optional().describe('fuel prices per unit, e.g. propane=0.9;electricity=0.25'),
   format: z.enum(['json', 'csv', 'html']).optional().describe('answer format; default json'),
@@ -159,6 +170,35 @@ const QUERY_NAMES: Record<string, string> = {
   seasonEnd: 'end',
   startStepDays: 'stepDays',
   batchKgFresh: 'batchKg',
+  'method.airflowsM3PerMinPerTonne': 'airflow',
+}
+
+/** The natural-air bin's query fields as method parameters; refused with another method. */
+function binQueryParams(q: AssessQuery): Record<string, unknown> {
+  const params: Record<string, unknown> = {
+    airflowsM3PerMinPerTonne: q.airflow,
+    depthM: q.binDepth,
+    binDiameterM: q.binDiameter,
+    floorAreaM2: q.floorArea,
+    heatRiseK: q.heatRise,
+    fanControl: q.fanControl,
+  }
+  const given = Object.entries(params).filter(([, v]) => v !== undefined)
+  if (given.length > 0 && q.method !== 'natural-air-bin') {
+    const names: Record<string, string> = {
+      airflowsM3PerMinPerTonne: 'airflow',
+      depthM: 'binDepth',
+      binDiameterM: 'binDiameter',
+      floorAreaM2: 'floorArea',
+      heatRiseK: 'heatRise',
+      fanControl: 'fanControl',
+    }
+    const name = names[given[0][0]]
+    throw new ApiProblem(400, `${name} goes with method=natural-air-bin`, [
+      { path: name, message: 'only for method=natural-air-bin' },
+    ])
+  }
+  return Object.fromEntries(given)
 }
 
 /** Check the options with the engine's planner now, before any file is read: 400 naming the field. */
@@ -250,7 +290,7 @@ export function assessRequestFromQuery(
     optionPath: (option) => QUERY_NAMES[option] ?? option,
     options: {
       product: resolveProduct(q.product, 'product'),
-      method: resolveMethod(q.method, 'method'),
+      method: resolveMethod({ kind: q.method, ...binQueryParams(q) }, 'method'),
       targetWbPct: q.targetWb,
       initialWbPct: q.initialWb,
       thicknessMm: q.thickness,

@@ -13,6 +13,7 @@ import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
+import { BIN_FLAGS_HELP, BIN_PARSE_OPTIONS, setBinOptions } from '../bin.ts'
 import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
 import {
   REPORT_OUTPUT_HELP,
@@ -31,6 +32,7 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
+${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
                   API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
 Season and batches:
@@ -96,6 +98,7 @@ export const ENGINE_PARSE_OPTIONS = {
   'min-deficit': { type: 'string' },
   'rain-mm': { type: 'string' },
   'night-cooling': { type: 'string' },
+  ...BIN_PARSE_OPTIONS,
   ...WEATHER_PARSE_OPTIONS,
   json: { type: 'boolean' },
   quiet: { type: 'boolean' },
@@ -175,13 +178,14 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     set('tiltDeg', num('tilt'))
     set('azimuthDeg', num('azimuth'))
     set('airFlowKgPerSPerM2', num('air-flow'))
-  } else {
+  } else if (kind === 'heated') {
     set('setPointC', num('set-point'))
     set('targetRhPct', num('target-rh'))
     set('airFlowKgPerSPerTonne', num('air-flow'))
     set('heaterEfficiency', num('efficiency'))
     set('fuel', fuel)
   }
+  setBinOptions(method, values, product)
   if (kind !== 'heated') {
     if (num('efficiency') !== undefined) backupHeater.heaterEfficiency = num('efficiency')
     if (fuel !== undefined) backupHeater.fuel = fuel

@@ -41,7 +41,7 @@ const f = (x: number | null, d = 0): string => (x === null ? '–' : x.toFixed(d
 export function comparisonText(c: Comparison): string {
   const out: string[] = []
   out.push(
-    `${c.product.name}, ${c.method.kind}, season ${c.season.start} to ${c.season.end}, deadline ${c.deadlineDays} days`,
+    `${c.product.name}, ${c.method.kind}, season ${c.season.start} to ${c.season.end}, ${c.assessments[0]?.bin ? `${c.assessments[0].bin.seasonDays} days in the bin for the top layer to dry` : `deadline ${c.deadlineDays} days`}`,
   )
   out.push(`ranked by ${c.criterion}: ${c.criterionDescription}`)
   out.push('')
@@ -53,6 +53,19 @@ export function comparisonText(c: Comparison): string {
     out.push(
       `${String(s.rank).padStart(4)}  ${s.site.padEnd(width)}  ${(s.meanProbabilityWithinDeadline === null ? '–' : `${(100 * s.meanProbabilityWithinDeadline).toFixed(0)} %`).padStart(18)}  ${`${f(s.usableHoursInSeasonP10)} (${f(s.usableHoursInSeasonMedian)})`.padStart(21)}  ${f(s.medianHeatKwhPerTonne).padStart(10)}  ${s.bestStartWindow ?? '–'}`,
     )
+  }
+  if (c.assessments.some((a) => a.bin)) {
+    out.push('')
+    out.push(
+      'Natural-air bin: P(within deadline) above is the share of years the top layer dries below the DML limit.',
+    )
+    out.push('Airflow that serves every start month (the largest monthly minimum):')
+    for (const s of c.sites) {
+      const q = s.binSeasonMinimumAirflowM3PerMinPerTonne
+      out.push(
+        `  ${s.site}: ${q === undefined ? '–' : q === null ? 'none of the airflows compared' : `${q} m³/min per t`}`,
+      )
+    }
   }
   const warned = c.sites.filter((s) => s.warnings.length > 0)
   if (warned.length > 0) {

@@ -116,3 +116,9 @@ export const BUSHEL_WEIGHT_KG: Readonly<Record<string, number>> = {
 export function m3PerMinPerTonneFromCfmPerBu(cfmPerBu: number, bushelKg: number): number {
   return (cfmPerBu * 0.3048 ** 3 * 1000) / bushelKg
 }
+
+/**
+ * Pascals per inch of water, the unit of static pressure in US bin practice: inch of water (39.2 °F) =
+ * 2.49082 × 10² Pa (NIST SP 811, 2008, Appendix B.8; as transcribed in the SysML v2 SI/ISQ units library).
+ */
+export const PA_PER_INCH_OF_WATER = 249.082

@@ -21,12 +21,20 @@
  *   rule reads "in the typical year" and cannot say anything about 9 of 10 years.
  * - The grain goes in at the mean outside temperature of its first 24 hours (an assumption) unless given.
  */
-import { quantileSorted } from '../../analysis/statistics.ts'
+import { HOURS_PER_DAY, MS_PER_HOUR } from '../../physics/constants.ts'
 import { grainDryMatterLossModel } from '../../product/spoilage/grain-dml.ts'
 import type { SpoilageModel } from '../../product/spoilage/model.ts'
-import { type BinWeather, binFan, simulateDeepBed } from './bin-run.ts'
+import { type BinWeather, simulateDeepBed } from './bin-run.ts'
+import {
+  type BinAirflowFacts,
+  type BinMonthAirflow,
+  type BinStartResult,
+  type BinYearRun,
+  minimumAirflowByMonth,
+  summariseStart,
+} from './bin-summary.ts'
 import { describeFanControl } from './fan-control.ts'
-import { type BinSetup, checkBinSetup, type DeepBedGrain } from './layer-model.ts'
+import { type BinSetup, binFan, checkBinSetup, type DeepBedGrain } from './layer-model.ts'
 
 /** A start (filling) date, month 1–12 and day of month, the same every year. */
 export interface BinStartDate {
@@ -62,66 +70,8 @@ export interface BinAssessmentInput {
   requiredShareOfYears?: number
   /** Count a top layer not dry by the end of the season as safe if below the limit; default false. */
   countNotDryAsSafe?: boolean
-}
-
-export interface BinYearRun {
-  /** Calendar year of the start date (local time); with a typical year, the file's year. */
-  year: number
-  /** Days from filling until the top layer was at or below the target; null: not within the season. */
-  daysUntilTopDry: number | null
-  /** Top layer's spoilage measure at the end of the run (dry-matter loss [%] for grain). */
-  topDryMatterLossPct: number
-  /** The top layer reached the spoilage limit during the run. */
-  topLimitExceeded: boolean
-  /** Days from filling until it did; null if it did not. */
-  daysUntilTopSpoiled: number | null
-  fanHours: number
-  fanEnergyKwhPerT: number
-  heaterEnergyKwhPerT: number
-  waterRemovedKgPerT: number
-  /** Hours of the run with missing weather (fan off then). */
-  missingWeatherHours: number
-  /** Initial grain temperature used [°C]. */
-  initialGrainTempC: number
-  /** Safe by the rule of the assessment. */
-  safe: boolean
-}
-
-export interface BinStartResult {
-  /** `MM-DD`. */
-  startDate: string
-  month: number
-  airflowM3PerMinPerT: number
-  years: number
-  yearsDryWithinSeason: number
-  yearsLimitExceeded: number
-  yearsSafe: number
-  shareOfYearsSafe: number
-  /** Across years; null when the percentile falls on a year not dry within the season. */
-  medianDaysUntilTopDry: number | null
-  p90DaysUntilTopDry: number | null
-  medianTopDryMatterLossPct: number
-  p90TopDryMatterLossPct: number
-  medianFanEnergyKwhPerT: number
-  p90FanEnergyKwhPerT: number
-  runs: BinYearRun[]
-}
-
-export interface BinAirflowFacts {
-  airflowM3PerMinPerT: number
-  staticPressurePa: number
-  /** Fan electrical power per tonne as loaded [kW/t]. */
-  fanPowerKwPerT: number
-}
-
-export interface BinMonthAirflow {
-  month: number
-  startDates: string[]
-  /** Smallest candidate meeting the rule at every start date of the month; null when none does. */
-  minimumAirflowM3PerMinPerT: number | null
-  /** Share of safe years at that airflow (the lowest over the month's start dates); at the largest candidate when none met the rule. */
-  shareOfYearsSafe: number
-  years: number
+  /** Called after each start date × airflow with the runs made so far (progress; may throw to cancel). */
+  onRun?: (runsDone: number) => void
 }
 
 export interface BinAssessment {
@@ -144,26 +94,26 @@ export interface BinAssessment {
   runs: number
 }
 
-const HOUR_MS = 3_600_000
 const pad = (x: number): string => String(x).padStart(2, '0')
 
-function checkInput(input: BinAssessmentInput): void {
-  if (input.startDates.length === 0) throw new RangeError('startDates must list at least one date')
-  for (const d of input.startDates) {
+function checkStartDates(dates: readonly BinStartDate[]): void {
+  if (dates.length === 0) throw new RangeError('startDates must list at least one date')
+  for (const d of dates) {
     const days = new Date(Date.UTC(2000, d.month, 0)).getUTCDate()
-    if (
-      !(
-        Number.isInteger(d.month) &&
-        d.month >= 1 &&
-        d.month <= 12 &&
-        Number.isInteger(d.day) &&
-        d.day >= 1 &&
-        d.day <= days
-      )
-    ) {
+    const valid =
+      Number.isInteger(d.month) &&
+      d.month >= 1 &&
+      d.month <= 12 &&
+      Number.isInteger(d.day) &&
+      d.day >= 1 &&
+      d.day <= days
+    if (!valid)
       throw new RangeError(`start date ${d.month}-${d.day} is not a date (month 1–12, day of that month)`)
-    }
   }
+}
+
+function checkInput(input: BinAssessmentInput): void {
+  checkStartDates(input.startDates)
   if (input.airflowsM3PerMinPerT.length === 0)
     throw new RangeError('airflowsM3PerMinPerT must list at least one airflow')
   for (const q of input.airflowsM3PerMinPerT) {
@@ -182,14 +132,14 @@ function checkInput(input: BinAssessmentInput): void {
   if (!(offset >= -14 && offset <= 14))
     throw new RangeError(`utcOffsetHours must be between -14 and 14, got ${offset}`)
   const n = input.weather.startUtcMs.length
-  if (n < 24) throw new RangeError(`the weather must hold at least 24 hours, got ${n}`)
+  if (n < HOURS_PER_DAY) throw new RangeError(`the weather must hold at least 24 hours, got ${n}`)
 }
 
 /** Mean of the non-missing outside temperatures of the first 24 hours from `start` (wrapping); NaN if none. */
 function meanFirstDayC(weather: BinWeather, start: number, n: number): number {
   let sum = 0
   let count = 0
-  for (let h = 0; h < 24; h++) {
+  for (let h = 0; h < HOURS_PER_DAY; h++) {
     const t = weather.dryBulbC[(start + h) % n]
     if (!Number.isNaN(t)) {
       sum += t
@@ -199,162 +149,162 @@ function meanFirstDayC(weather: BinWeather, start: number, n: number): number {
   return count > 0 ? sum / count : Number.NaN
 }
 
-function sortedQuantile(values: number[], q: number): number {
-  return quantileSorted(
-    [...values].sort((a, b) => a - b),
-    q,
-  )
+/** The hours of the file an assessment works on, and the years its start dates fall in. */
+interface Calendar {
+  n: number
+  t0: number
+  wrap: boolean
+  offsetMs: number
+  startHour: number
+  seasonHours: number
+  firstYear: number
+  lastYear: number
 }
 
-function finiteOrNull(x: number): number | null {
-  return Number.isFinite(x) ? x : null
-}
-
-/**
- * Runs the bin for every start date × airflow × year and summarises; see the module comment for the rules.
- * Work grows with years × start dates × airflows × season length; the caller bounds it.
- */
-export function assessBinDrying(input: BinAssessmentInput): BinAssessment {
-  checkInput(input)
-  const { weather, grain } = input
-  const spoilage = input.spoilage ?? grainDryMatterLossModel()
-  const share = input.requiredShareOfYears ?? 0.9
-  const offsetMs = (input.utcOffsetHours ?? 0) * HOUR_MS
-  const startHour = input.startHourLocal ?? 12
-  const seasonHours = input.seasonDays * 24
+function calendarOf(input: BinAssessmentInput): Calendar {
+  const { weather } = input
   const n = weather.startUtcMs.length
   const t0 = weather.startUtcMs[0]
   const wrap = weather.typicalYear
+  const offsetMs = (input.utcOffsetHours ?? 0) * MS_PER_HOUR
   const firstYear = new Date(t0 + offsetMs).getUTCFullYear()
-  const lastYear = wrap ? firstYear : new Date(weather.startUtcMs[n - 1] + offsetMs).getUTCFullYear()
-  // check the bin once with a representative airflow and temperature (names the field on bad input)
-  checkBinSetup({
-    ...input.bin,
-    airflowM3PerMinPerT: input.airflowsM3PerMinPerT[0],
-    initialGrainTempC: input.bin.initialGrainTempC ?? 10,
-  })
-
-  const airflows = [...input.airflowsM3PerMinPerT].sort((a, b) => a - b)
-  const starts: BinStartResult[] = []
-  const yearsSeen = new Set<number>()
-  let leftOut = 0
-  let runs = 0
-
-  for (const date of input.startDates) {
-    const label = `${pad(date.month)}-${pad(date.day)}`
-    // start index per year
-    const indices: { year: number; index: number }[] = []
-    for (let year = firstYear; year <= lastYear; year++) {
-      if (date.month === 2 && date.day === 29) {
-        leftOut += airflows.length
-        continue
-      }
-      let index = Math.round((Date.UTC(year, date.month - 1, date.day, startHour) - offsetMs - t0) / HOUR_MS)
-      if (wrap) index = ((index % n) + n) % n
-      if (index < 0 || index >= n || (!wrap && index + seasonHours > n)) {
-        // a year the file only partly covers: left out silently only when it is before or after the file
-        if (index + seasonHours > 0 && index < n) leftOut += airflows.length
-        continue
-      }
-      indices.push({ year, index })
-    }
-    for (const q of airflows) {
-      const yearRuns: BinYearRun[] = []
-      for (const { year, index } of indices) {
-        const initialC = input.bin.initialGrainTempC ?? meanFirstDayC(weather, index, n)
-        if (Number.isNaN(initialC)) {
-          leftOut++
-          continue
-        }
-        const r = simulateDeepBed(
-          grain,
-          { ...input.bin, airflowM3PerMinPerT: q, initialGrainTempC: initialC },
-          weather,
-          spoilage,
-          { startIndex: index, hours: seasonHours, wrap, stopWhen: 'top-dry' },
-        )
-        runs++
-        yearsSeen.add(year)
-        const dry = r.hoursUntilTopDry !== null
-        const exceeded = r.topSpoiled
-        yearRuns.push({
-          year,
-          daysUntilTopDry: dry ? (r.hoursUntilTopDry as number) / 24 : null,
-          topDryMatterLossPct: r.topDryMatterLossPct,
-          topLimitExceeded: exceeded,
-          daysUntilTopSpoiled: r.hoursUntilTopSpoiled === null ? null : r.hoursUntilTopSpoiled / 24,
-          fanHours: r.fanHours,
-          fanEnergyKwhPerT: r.fanEnergyKwhPerT,
-          heaterEnergyKwhPerT: r.heaterEnergyKwhPerT,
-          waterRemovedKgPerT: r.waterRemovedKgPerT,
-          missingWeatherHours: r.missingWeatherHours,
-          initialGrainTempC: initialC,
-          safe: !exceeded && (dry || input.countNotDryAsSafe === true),
-        })
-      }
-      const days = yearRuns.map((y) => y.daysUntilTopDry ?? Number.POSITIVE_INFINITY)
-      const dml = yearRuns.map((y) => y.topDryMatterLossPct)
-      const fan = yearRuns.map((y) => y.fanEnergyKwhPerT)
-      const yearsSafe = yearRuns.filter((y) => y.safe).length
-      starts.push({
-        startDate: label,
-        month: date.month,
-        airflowM3PerMinPerT: q,
-        years: yearRuns.length,
-        yearsDryWithinSeason: yearRuns.filter((y) => y.daysUntilTopDry !== null).length,
-        yearsLimitExceeded: yearRuns.filter((y) => y.topLimitExceeded).length,
-        yearsSafe,
-        shareOfYearsSafe: yearRuns.length > 0 ? yearsSafe / yearRuns.length : 0,
-        medianDaysUntilTopDry: finiteOrNull(sortedQuantile(days, 0.5)),
-        p90DaysUntilTopDry: finiteOrNull(sortedQuantile(days, 0.9)),
-        medianTopDryMatterLossPct: sortedQuantile(dml, 0.5),
-        p90TopDryMatterLossPct: sortedQuantile(dml, 0.9),
-        medianFanEnergyKwhPerT: sortedQuantile(fan, 0.5),
-        p90FanEnergyKwhPerT: sortedQuantile(fan, 0.9),
-        runs: yearRuns,
-      })
-    }
+  return {
+    n,
+    t0,
+    wrap,
+    offsetMs,
+    startHour: input.startHourLocal ?? 12,
+    seasonHours: input.seasonDays * HOURS_PER_DAY,
+    firstYear,
+    lastYear: wrap ? firstYear : new Date(weather.startUtcMs[n - 1] + offsetMs).getUTCFullYear(),
   }
+}
 
-  const months = [...new Set(input.startDates.map((d) => d.month))].sort((a, b) => a - b)
-  const minimumAirflowByMonth: BinMonthAirflow[] = months.map((month) => {
-    const ofMonth = starts.filter((s) => s.month === month)
-    const dates = [...new Set(ofMonth.map((s) => s.startDate))]
-    let chosen: number | null = null
-    let shareAt = 0
-    let years = 0
-    for (const q of airflows) {
-      const rows = ofMonth.filter((s) => s.airflowM3PerMinPerT === q)
-      const counted = rows.filter((s) => s.years > 0)
-      const lowest = counted.length > 0 ? Math.min(...counted.map((s) => s.shareOfYearsSafe)) : 0
-      shareAt = lowest
-      years = counted.length > 0 ? Math.min(...counted.map((s) => s.years)) : 0
-      if (counted.length === rows.length && counted.length > 0 && lowest >= share) {
-        chosen = q
-        break
-      }
+/**
+ * The first hour of a season starting on `date` in every year the file covers; `leftOut` counts the years whose
+ * season the file only partly covers (and 29 February, which most years lack).
+ */
+function startIndices(
+  date: BinStartDate,
+  cal: Calendar,
+): { runs: { year: number; index: number }[]; leftOut: number } {
+  const runs: { year: number; index: number }[] = []
+  let leftOut = 0
+  for (let year = cal.firstYear; year <= cal.lastYear; year++) {
+    if (date.month === 2 && date.day === 29) {
+      leftOut++
+      continue
     }
-    return { month, startDates: dates, minimumAirflowM3PerMinPerT: chosen, shareOfYearsSafe: shareAt, years }
-  })
+    const utcMs = Date.UTC(year, date.month - 1, date.day, cal.startHour) - cal.offsetMs
+    let index = Math.round((utcMs - cal.t0) / MS_PER_HOUR)
+    if (cal.wrap) index = ((index % cal.n) + cal.n) % cal.n
+    if (index < 0 || index >= cal.n || (!cal.wrap && index + cal.seasonHours > cal.n)) {
+      // a year the file only partly covers: left out silently only when it is before or after the file
+      if (index + cal.seasonHours > 0 && index < cal.n) leftOut++
+      continue
+    }
+    runs.push({ year, index })
+  }
+  return { runs, leftOut }
+}
 
-  const limit = spoilage.spoiledAt
+/** One bin run per year from the given start hours at airflow `q`; a year without weather on its first day is left out. */
+function runYears(
+  input: BinAssessmentInput,
+  spoilage: SpoilageModel,
+  cal: Calendar,
+  starts: { year: number; index: number }[],
+  q: number,
+): { runs: BinYearRun[]; leftOut: number } {
+  const runs: BinYearRun[] = []
+  let leftOut = 0
+  for (const { year, index } of starts) {
+    const initialC = input.bin.initialGrainTempC ?? meanFirstDayC(input.weather, index, cal.n)
+    if (Number.isNaN(initialC)) {
+      leftOut++
+      continue
+    }
+    const r = simulateDeepBed(
+      input.grain,
+      { ...input.bin, airflowM3PerMinPerT: q, initialGrainTempC: initialC },
+      input.weather,
+      spoilage,
+      { startIndex: index, hours: cal.seasonHours, wrap: cal.wrap, stopWhen: 'top-dry' },
+    )
+    const dry = r.hoursUntilTopDry !== null
+    runs.push({
+      year,
+      daysUntilTopDry: r.hoursUntilTopDry === null ? null : r.hoursUntilTopDry / HOURS_PER_DAY,
+      topDryMatterLossPct: r.topDryMatterLossPct,
+      topLimitExceeded: r.topSpoiled,
+      daysUntilTopSpoiled: r.hoursUntilTopSpoiled === null ? null : r.hoursUntilTopSpoiled / HOURS_PER_DAY,
+      fanHours: r.fanHours,
+      fanEnergyKwhPerT: r.fanEnergyKwhPerT,
+      heaterEnergyKwhPerT: r.heaterEnergyKwhPerT,
+      waterRemovedKgPerT: r.waterRemovedKgPerT,
+      missingWeatherHours: r.missingWeatherHours,
+      initialGrainTempC: initialC,
+      safe: !r.topSpoiled && (dry || input.countNotDryAsSafe === true),
+    })
+  }
+  return { runs, leftOut }
+}
+
+function ruleText(input: BinAssessmentInput, spoilage: SpoilageModel, share: number, wrap: boolean): string {
   const notDry = input.countNotDryAsSafe
     ? 'a top layer still wet at the end of the season counts as safe if below the limit'
     : 'a top layer not dry by the end of the season counts as not safe'
   const yearsText = wrap
     ? 'in the typical year (one year only: the file cannot tell how often this fails)'
     : `in at least ${Math.round(share * 100)} % of the years (counted; ${share === 0.9 ? '9 of 10 years' : 'share of years'})`
+  return `safe: the top layer reaches ${input.bin.targetMoistureWbPct} % wb within ${input.seasonDays} days with its ${spoilage.measureName} below ${spoilage.spoiledAt} ${spoilage.measureUnit}; ${notDry}; a month's minimum airflow is the smallest candidate safe ${yearsText} at every start date of that month`
+}
+
+/**
+ * Runs the bin for every start date × airflow × year and summarises; see the module comment for the rules.
+ * Work grows with years × start dates × airflows × season length × layers; the caller bounds it
+ * (analysis/plan.ts counts it for an assessment).
+ */
+export function assessBinDrying(input: BinAssessmentInput): BinAssessment {
+  checkInput(input)
+  const spoilage = input.spoilage ?? grainDryMatterLossModel()
+  const share = input.requiredShareOfYears ?? 0.9
+  const cal = calendarOf(input)
+  // check the bin once with a representative airflow and temperature (names the field on bad input)
+  checkBinSetup({
+    ...input.bin,
+    airflowM3PerMinPerT: input.airflowsM3PerMinPerT[0],
+    initialGrainTempC: input.bin.initialGrainTempC ?? 10,
+  })
+  const airflows = [...input.airflowsM3PerMinPerT].sort((a, b) => a - b)
+  const starts: BinStartResult[] = []
+  const yearsSeen = new Set<number>()
+  let leftOut = 0
+  let runs = 0
+  for (const date of input.startDates) {
+    const label = `${pad(date.month)}-${pad(date.day)}`
+    const indices = startIndices(date, cal)
+    leftOut += indices.leftOut * airflows.length
+    for (const q of airflows) {
+      const years = runYears(input, spoilage, cal, indices.runs, q)
+      leftOut += years.leftOut
+      runs += years.runs.length
+      for (const r of years.runs) yearsSeen.add(r.year)
+      starts.push(summariseStart(label, date.month, q, years.runs))
+      input.onRun?.(runs)
+    }
+  }
   return {
-    typicalYear: wrap,
+    typicalYear: cal.wrap,
     years: [...yearsSeen].sort((a, b) => a - b),
     seasonDays: input.seasonDays,
     requiredShareOfYears: share,
-    spoilageLimit: limit,
+    spoilageLimit: spoilage.spoiledAt,
     spoilageModelId: spoilage.id,
-    rule: `safe: the top layer reaches ${input.bin.targetMoistureWbPct} % wb within ${input.seasonDays} days with its ${spoilage.measureName} below ${limit} ${spoilage.measureUnit}; ${notDry}; a month's minimum airflow is the smallest candidate safe ${yearsText} at every start date of that month`,
+    rule: ruleText(input, spoilage, share, cal.wrap),
     fanControl: describeFanControl(input.bin.fanControl ?? { mode: 'continuous' }),
     airflows: airflows.map((q): BinAirflowFacts => {
-      const f = binFan(grain, { ...input.bin, airflowM3PerMinPerT: q, initialGrainTempC: 10 })
+      const f = binFan(input.grain, { ...input.bin, airflowM3PerMinPerT: q, initialGrainTempC: 10 })
       return {
         airflowM3PerMinPerT: q,
         staticPressurePa: f.staticPressurePa,
@@ -362,7 +312,7 @@ export function assessBinDrying(input: BinAssessmentInput): BinAssessment {
       }
     }),
     starts,
-    minimumAirflowByMonth,
+    minimumAirflowByMonth: minimumAirflowByMonth(starts, airflows, share),
     runsLeftOut: leftOut,
     runs,
   }

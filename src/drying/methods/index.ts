@@ -9,12 +9,13 @@
  */
 import { heated } from './heated.ts'
 import type { MethodModel } from './method-model.ts'
+import { naturalAirBin } from './natural-air-bin.ts'
 import { openAir } from './open-air.ts'
 import { shade } from './shade.ts'
 import { solarCabinet } from './solar-cabinet.ts'
 
 /** Every drying method, in the order the CLI, the API and the page list them. */
-export const METHOD_MODELS = [openAir, shade, solarCabinet, heated] as const
+export const METHOD_MODELS = [openAir, shade, solarCabinet, heated, naturalAirBin] as const
 
 export type MethodModels = typeof METHOD_MODELS
 

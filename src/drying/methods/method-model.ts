@@ -13,6 +13,7 @@
  */
 import type { z } from 'zod'
 import { solveWetSurface, type WetSurface } from '../../physics/wet-surface.ts'
+import type { ProductProfile } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import type { SolarColumns } from '../solar-columns.ts'
 import type { DryingThresholds } from '../thresholds.ts'
@@ -77,6 +78,11 @@ export class MethodHour {
 /** What a method may read when it prepares for a series. */
 export interface MethodSetup {
   series: HourlySeries
+  /** The product (a bin needs the grain's bulk density and airflow resistance). */
+  profile: ProductProfile
+  /** Initial and target moisture of the assessment [% wb]. */
+  initialWbPct: number
+  targetWbPct: number
   /** Sun position and radiation columns of the series. */
   solar: SolarColumns
   thresholds: DryingThresholds
@@ -114,6 +120,17 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
    * a known flow (the limit is the deficit to saturation × air mass).
    */
   exposure: 'exposed' | 'forced-air'
+  /**
+   * How the product goes through the hours: `thin-layer` (the default) runs batches of product in the hourly air
+   * (the start-date table, monthly heat, supplemental heat); `deep-bed` is grain in a bin, assessed by the
+   * deep-bed model of drying/deep-bed/ per start date, airflow and year (analysis/bin-stage.ts) instead.
+   */
+  batches?: 'thin-layer' | 'deep-bed'
+  /**
+   * Whether the method can take this product: null when it can, else the reason in a sentence (the planner
+   * refuses the assessment with it, naming the method). Absent: every product.
+   */
+  productFits?(profile: ProductProfile): string | null
   /** Dry-air flow per tonne of fresh product [kg/s] (0 for exposed methods). */
   airFlowKgPerSPerTonne(method: z.output<S>): number
   /** True when the method heats its air with fuel: its own heater energy is the heat, and no backup heater is added. */

@@ -60,6 +60,38 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
   const f = FRAME
   const n = o.points.length
   const values = o.points.map((p) => p.value)
+  const { lo, hi, ticks } = valueAxis(o, values)
+  const y = linearScale([lo, hi], [f.height - f.bottom, f.top])
+  const x = (i: number) => f.left + (n <= 1 ? plotWidth(f) / 2 : ((i + 0.5) / n) * plotWidth(f))
+  const parts = [
+    ...phaseParts(o, x),
+    ...referenceLineParts(o, x, y),
+    ...seriesParts(o, values, x, y),
+    ...markerParts(o, x),
+    ...pointParts(o, x, y),
+  ]
+  const every = Math.max(1, Math.ceil(n / 8))
+  const xt = o.points.map((p, i) => ({ x: x(i), label: p.label, i })).filter((t) => t.i % every === 0)
+  const body =
+    parts[0] +
+    yAxis(f, y, ticks, o.yLabel) +
+    xAxis(f, xt, 'batch', false) +
+    parts.slice(1).join('') +
+    legend(f.left, 12, legendItems(o))
+  return svgDocument({
+    id: o.id,
+    frame: f,
+    title: o.title,
+    description: o.description,
+    body,
+    chart: 'control',
+  })
+}
+
+type Scale = (v: number) => number
+
+/** The value axis: every value, limit and the centre, padded by 6 % and widened to whole ticks. */
+function valueAxis(o: ControlChartSvgOptions, values: number[]): { lo: number; hi: number; ticks: number[] } {
   const limitValues = [
     ...values,
     ...(o.second?.values ?? []),
@@ -67,16 +99,21 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
     ...(Array.isArray(o.upper) ? o.upper : [o.upper]),
     ...(o.lower === null ? [] : Array.isArray(o.lower) ? o.lower : [o.lower]),
   ].filter(Number.isFinite)
-  let lo = limitValues.reduce((m, v) => (v < m ? v : m), Number.POSITIVE_INFINITY)
-  let hi = limitValues.reduce((m, v) => (v > m ? v : m), Number.NEGATIVE_INFINITY)
+  let lo = limitValues.reduce((m, v) => Math.min(v, m), Number.POSITIVE_INFINITY)
+  let hi = limitValues.reduce((m, v) => Math.max(v, m), Number.NEGATIVE_INFINITY)
   const pad = (hi - lo) * 0.06 || 1
   lo -= pad
   hi += pad
   const ticks = niceTicks(lo, hi)
   lo = Math.min(lo, ticks[0])
   hi = Math.max(hi, ticks[ticks.length - 1])
-  const y = linearScale([lo, hi], [f.height - f.bottom, f.top])
-  const x = (i: number) => f.left + (n <= 1 ? plotWidth(f) / 2 : ((i + 0.5) / n) * plotWidth(f))
+  return { lo, hi, ticks }
+}
+
+/** The baseline (phase I) band and the two phase labels; the band comes first (drawn under the axes). */
+function phaseParts(o: ControlChartSvgOptions, x: Scale): string[] {
+  const f = FRAME
+  const n = o.points.length
   const x0 = f.left
   const x1 = f.width - f.right
   const split =
@@ -87,6 +124,15 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
     `<text x="${px((x0 + Number(split)) / 2)}" y="${f.top + 10}" text-anchor="middle" font-size="9.5" fill="${INK.muted}">baseline (phase I)</text>`,
     `<text x="${px((Number(split) + x1) / 2)}" y="${f.top + 10}" text-anchor="middle" font-size="9.5" fill="${INK.muted}">monitoring (phase II)</text>`,
   )
+  return parts
+}
+
+/** The zones (±1σ, ±2σ), the centre line and the control limits (fixed or per point). */
+function referenceLineParts(o: ControlChartSvgOptions, x: Scale, y: Scale): string[] {
+  const f = FRAME
+  const x0 = f.left
+  const x1 = f.width - f.right
+  const parts: string[] = []
   const hline = (v: number, cls: string, dash: string, colour: string, width = 1) =>
     `<line class="${cls}" data-value="${v}" x1="${x0}" x2="${x1}" y1="${px(y(v))}" y2="${px(y(v))}" stroke="${colour}" stroke-width="${width}"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`
   if (o.zoneSigma !== null) {
@@ -101,6 +147,13 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
   }
   parts.push(limitPath(o.upper, 'upper-limit'))
   if (o.lower !== null) parts.push(limitPath(o.lower, 'lower-limit'))
+  return parts
+}
+
+/** The series' line, and the second series (line and points) when there is one. */
+function seriesParts(o: ControlChartSvgOptions, values: number[], x: Scale, y: Scale): string[] {
+  const n = o.points.length
+  const parts: string[] = []
   if (n > 1) {
     parts.push(
       `<polyline class="series" points="${values.map((v, i) => `${px(x(i))},${px(y(v))}`).join(' ')}" fill="none" stroke="${HIGH_CONTRAST.blue}" stroke-width="1.2"/>`,
@@ -123,12 +176,26 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
       )
     })
   }
+  return parts
+}
+
+/** The estimated start of a change, as a vertical line with its label. */
+function markerParts(o: ControlChartSvgOptions, x: Scale): string[] {
+  const f = FRAME
+  const n = o.points.length
+  const parts: string[] = []
   if (o.marker && o.marker.index >= 0 && o.marker.index < n) {
     const mx = px(x(o.marker.index))
     parts.push(
       `<g class="change-marker" data-index="${o.marker.index}"><line x1="${mx}" x2="${mx}" y1="${f.top + 14}" y2="${f.height - f.bottom}" stroke="${HIGH_CONTRAST.yellow}" stroke-width="2"/><text x="${mx}" y="${f.top + 22}" dx="3" font-size="9.5" fill="${INK.text}">${escapeHtml(o.marker.label)}</text></g>`,
     )
   }
+  return parts
+}
+
+/** Every point with its tooltip, signal mark and the ring of a batch outside the baseline's weather. */
+function pointParts(o: ControlChartSvgOptions, x: Scale, y: Scale): string[] {
+  const parts: string[] = []
   o.points.forEach((p, i) => {
     const cx = px(x(i))
     const cy = px(y(p.value))
@@ -144,9 +211,12 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
       `<g class="point" data-batch="${escapeHtml(p.label)}" data-value="${p.value}" data-rules="${escapeHtml(p.rules.join(' '))}"${p.outside ? ' data-outside="true"' : ''}><title>${escapeHtml(p.outside ? `${tip}; weather outside the baseline's range` : tip)}</title>${mark}${ring}</g>`,
     )
   })
-  const every = Math.max(1, Math.ceil(n / 8))
-  const xt = o.points.map((p, i) => ({ x: x(i), label: p.label, i })).filter((t) => t.i % every === 0)
-  const items = [
+  return parts
+}
+
+/** The legend's entries, the second series and the weather ring only when present. */
+function legendItems(o: ControlChartSvgOptions): { swatch: string; label: string }[] {
+  return [
     { swatch: `<circle cx="7" cy="4" r="2.2" fill="${HIGH_CONTRAST.blue}"/>`, label: 'batch' },
     {
       swatch: `<path d="M7,-0.5l4.5,4.5l-4.5,4.5l-4.5,-4.5z" fill="${HIGH_CONTRAST.red}" stroke="${INK.text}" stroke-width="0.6"/>`,
@@ -177,18 +247,4 @@ export function controlChartSvg(o: ControlChartSvgOptions): string {
         ]
       : []),
   ]
-  const body =
-    parts[0] +
-    yAxis(f, y, ticks, o.yLabel) +
-    xAxis(f, xt, 'batch', false) +
-    parts.slice(1).join('') +
-    legend(f.left, 12, items)
-  return svgDocument({
-    id: o.id,
-    frame: f,
-    title: o.title,
-    description: o.description,
-    body,
-    chart: 'control',
-  })
 }

@@ -8,6 +8,7 @@
  * (src/report/report-html.ts). All user text is escaped.
  */
 import type { ChartSet, EnergyChartAssessment } from '../../analysis/energy/energy-chart.ts'
+import { ewmaSteadyHalfWidth } from '../../analysis/energy/ewma-chart.ts'
 import { escapeHtml } from '../escape.ts'
 import { figureHtml } from '../figure.ts'
 import { htmlDocument } from '../report-html.ts'
@@ -47,6 +48,26 @@ interface ViewWords {
   digits: number
 }
 
+/** What the four charts of one view share. */
+interface ViewCharts {
+  set: ChartSet
+  what: ViewWords
+  prefix: string
+  /** Batch id of each charted point. */
+  labels: string[]
+  /** Whether each charted batch ran in weather outside the baseline's range. */
+  outside: boolean[]
+  /** Rules signalled at each point. */
+  rules: string[][]
+  /** Decimals of the charted values. */
+  d: number
+  baseline: number
+  /** The estimated start of a change, marked on the individuals and CUSUM charts. */
+  marker: { index: number; label: string } | undefined
+  ind: ChartSet['individuals']
+}
+
+/** The individuals, moving-range, EWMA and CUSUM figures of one view. */
 function chartFigures(
   set: ChartSet,
   a: EnergyChartAssessment,
@@ -54,193 +75,212 @@ function chartFigures(
   prefix: string,
   next: () => number,
 ): string {
-  const labels = set.batchIndices.map((b) => a.batches[b].batchId)
-  const outside = set.batchIndices.map((b) => a.outsideBaselineWeather[b])
-  const outsideCount = outside.filter(Boolean).length
-  const rules = rulesByPoint(set)
-  const ind = set.individuals
-  const d = what.digits
   const change = set.finding.estimatedChangeStart
   const markerIndex = change ? set.batchIndices.indexOf(change.batchIndex) : -1
-  const marker = markerIndex >= 0 ? { index: markerIndex, label: `change ≈ ${change!.batchId}` } : undefined
+  const v: ViewCharts = {
+    set,
+    what,
+    prefix,
+    labels: set.batchIndices.map((b) => a.batches[b].batchId),
+    outside: set.batchIndices.map((b) => a.outsideBaselineWeather[b]),
+    rules: rulesByPoint(set),
+    d: what.digits,
+    baseline: set.individuals.baselineCount,
+    marker: markerIndex >= 0 ? { index: markerIndex, label: `change ≈ ${change!.batchId}` } : undefined,
+    ind: set.individuals,
+  }
+  return [
+    individualsFigure(v, next()),
+    movingRangeFigure(v, next()),
+    ewmaFigure(v, next()),
+    cusumFigure(v, next()),
+  ].join('\n')
+}
+
+/** The individuals chart with its limits from the baseline. */
+function individualsFigure(v: ViewCharts, number: number): string {
+  const { set, what, prefix, labels, outside, rules, d, baseline, marker, ind } = v
   const rise = set.finding.firstRiseSignal
   const signalText = rise
     ? `The first signal of more energy after the baseline is batch ${rise.batchId} (${rise.rules.join(', ')}), ${rise.batchesAfterBaseline} batches after the baseline.`
     : 'No signal of more energy after the baseline.'
+  const outsideCount = outside.filter(Boolean).length
   const outsideText =
     outsideCount > 0
       ? ` ${outsideCount} batches (open squares) ran in weather outside the baseline's range.`
       : ''
-  const baseline = ind.baselineCount
-  const figures: string[] = []
-  figures.push(
-    figureHtml({
-      id: `${prefix}${what.key}-individuals`,
-      number: next(),
-      caption: `${what.name}: individuals chart, limits from the first ${baseline} batches`,
-      svg: controlChartSvg({
-        id: `${prefix}${what.key}-individuals-svg`,
-        title: `${what.name}, individuals chart`,
-        description: `Centre ${fixed(ind.centerLine, d + 1)}, limits ${fixed(ind.lowerControlLimit, d + 1)} to ${fixed(ind.upperControlLimit, d + 1)} ${what.unit}. ${signalText}${outsideText}`,
-        points: ind.values.map((v, i) => ({
-          label: labels[i],
-          value: v,
-          rules: rules[i].filter((r) => !r.startsWith('EWMA') && !r.startsWith('CUSUM')),
-          outside: outside[i],
-        })),
-        baselineCount: baseline,
-        centerLine: ind.centerLine,
-        upper: ind.upperControlLimit,
-        lower: ind.lowerControlLimit,
-        zoneSigma: ind.sigma,
-        yLabel: what.yLabel,
-        unit: what.unit,
-        marker,
-      }),
-      alt: `${what.name} for ${ind.values.length} batches against a centre of ${fixed(ind.centerLine, d)} ${what.unit} and 3σ limits ${fixed(ind.lowerControlLimit, d)} to ${fixed(ind.upperControlLimit, d)} ${what.unit} (σ̂ = MR̄/1.128 = ${fixed(ind.sigma, d + 1)}). ${signalText}${outsideText}`,
-      table: {
-        id: `${what.key}-individuals`,
-        title: `${what.name} by batch`,
-        columns: [
-          'batch',
-          `value [${what.unit}]`,
-          `moving range [${what.unit}]`,
-          'outside baseline weather',
-          'signals',
-        ],
-        rows: ind.values.map((v, i) => [
-          labels[i],
-          v,
-          ind.movingRanges[i],
-          outside[i] ? 'yes' : '',
-          rules[i].join(' '),
-        ]),
-        digits: [0, d + 1, d + 1, 0, 0],
-      },
-      note: 'Dotted lines: 1σ and 2σ zones of the Western Electric rules (WE1 one point beyond 3σ; WE2 two of three beyond 2σ; WE3 four of five beyond 1σ; WE4 eight in a row on one side). ↑ more energy than the baseline, ↓ less. Grey area: the baseline (phase I) the limits come from. Open squares: batches in weather outside the baseline’s range.',
+  return figureHtml({
+    id: `${prefix}${what.key}-individuals`,
+    number,
+    caption: `${what.name}: individuals chart, limits from the first ${baseline} batches`,
+    svg: controlChartSvg({
+      id: `${prefix}${what.key}-individuals-svg`,
+      title: `${what.name}, individuals chart`,
+      description: `Centre ${fixed(ind.centerLine, d + 1)}, limits ${fixed(ind.lowerControlLimit, d + 1)} to ${fixed(ind.upperControlLimit, d + 1)} ${what.unit}. ${signalText}${outsideText}`,
+      points: ind.values.map((v, i) => ({
+        label: labels[i],
+        value: v,
+        rules: rules[i].filter((r) => !r.startsWith('EWMA') && !r.startsWith('CUSUM')),
+        outside: outside[i],
+      })),
+      baselineCount: baseline,
+      centerLine: ind.centerLine,
+      upper: ind.upperControlLimit,
+      lower: ind.lowerControlLimit,
+      zoneSigma: ind.sigma,
+      yLabel: what.yLabel,
+      unit: what.unit,
+      marker,
     }),
-  )
+    alt: `${what.name} for ${ind.values.length} batches against a centre of ${fixed(ind.centerLine, d)} ${what.unit} and 3σ limits ${fixed(ind.lowerControlLimit, d)} to ${fixed(ind.upperControlLimit, d)} ${what.unit} (σ̂ = MR̄/1.128 = ${fixed(ind.sigma, d + 1)}). ${signalText}${outsideText}`,
+    table: {
+      id: `${what.key}-individuals`,
+      title: `${what.name} by batch`,
+      columns: [
+        'batch',
+        `value [${what.unit}]`,
+        `moving range [${what.unit}]`,
+        'outside baseline weather',
+        'signals',
+      ],
+      rows: ind.values.map((v, i) => [
+        labels[i],
+        v,
+        ind.movingRanges[i],
+        outside[i] ? 'yes' : '',
+        rules[i].join(' '),
+      ]),
+      digits: [0, d + 1, d + 1, 0, 0],
+    },
+    note: 'Dotted lines: 1σ and 2σ zones of the Western Electric rules (WE1 one point beyond 3σ; WE2 two of three beyond 2σ; WE3 four of five beyond 1σ; WE4 eight in a row on one side). ↑ more energy than the baseline, ↓ less. Grey area: the baseline (phase I) the limits come from. Open squares: batches in weather outside the baseline’s range.',
+  })
+}
+
+/** The moving-range chart of consecutive batches. */
+function movingRangeFigure(v: ViewCharts, number: number): string {
+  const { what, prefix, labels, d, baseline, ind } = v
   const mrValues = ind.movingRanges.slice(1) as number[]
   const mrSignals = new Set(ind.movingRangeSignals)
-  figures.push(
-    figureHtml({
-      id: `${prefix}${what.key}-moving-range`,
-      number: next(),
-      caption: `${what.name}: moving range of consecutive batches`,
-      svg: controlChartSvg({
-        id: `${prefix}${what.key}-moving-range-svg`,
-        title: `${what.name}, moving-range chart`,
-        description: `Mean moving range ${fixed(ind.meanMovingRange, d + 1)}, upper limit D4·MR̄ = ${fixed(ind.movingRangeUpperLimit, d + 1)} ${what.unit}; ${ind.movingRangeSignals.length} moving ranges above it.`,
-        points: mrValues.map((v, i) => ({
-          label: labels[i + 1],
-          value: v,
-          rules: mrSignals.has(i + 1) ? ['MR above D4·MR̄'] : [],
-        })),
-        baselineCount: baseline - 1,
-        centerLine: ind.meanMovingRange,
-        upper: ind.movingRangeUpperLimit,
-        lower: null,
-        zoneSigma: null,
-        yLabel: `moving range [${what.unit}]`,
-        unit: what.unit,
-      }),
-      alt: `Moving ranges of ${what.name.toLowerCase()}: mean ${fixed(ind.meanMovingRange, d + 1)} ${what.unit} over the baseline, upper limit ${fixed(ind.movingRangeUpperLimit, d + 1)} (D4 = 3.267, D3 = 0); ${ind.movingRangeSignals.length} points above it.`,
-      table: {
-        id: `${what.key}-moving-range`,
-        title: `Moving ranges of ${what.name.toLowerCase()}`,
-        columns: ['batch', `moving range [${what.unit}]`],
-        rows: mrValues.map((v, i) => [labels[i + 1], v]),
-        digits: [0, d + 1],
-      },
+  return figureHtml({
+    id: `${prefix}${what.key}-moving-range`,
+    number,
+    caption: `${what.name}: moving range of consecutive batches`,
+    svg: controlChartSvg({
+      id: `${prefix}${what.key}-moving-range-svg`,
+      title: `${what.name}, moving-range chart`,
+      description: `Mean moving range ${fixed(ind.meanMovingRange, d + 1)}, upper limit D4·MR̄ = ${fixed(ind.movingRangeUpperLimit, d + 1)} ${what.unit}; ${ind.movingRangeSignals.length} moving ranges above it.`,
+      points: mrValues.map((v, i) => ({
+        label: labels[i + 1],
+        value: v,
+        rules: mrSignals.has(i + 1) ? ['MR above D4·MR̄'] : [],
+      })),
+      baselineCount: baseline - 1,
+      centerLine: ind.meanMovingRange,
+      upper: ind.movingRangeUpperLimit,
+      lower: null,
+      zoneSigma: null,
+      yLabel: `moving range [${what.unit}]`,
+      unit: what.unit,
     }),
-  )
+    alt: `Moving ranges of ${what.name.toLowerCase()}: mean ${fixed(ind.meanMovingRange, d + 1)} ${what.unit} over the baseline, upper limit ${fixed(ind.movingRangeUpperLimit, d + 1)} (D4 = 3.267, D3 = 0); ${ind.movingRangeSignals.length} points above it.`,
+    table: {
+      id: `${what.key}-moving-range`,
+      title: `Moving ranges of ${what.name.toLowerCase()}`,
+      columns: ['batch', `moving range [${what.unit}]`],
+      rows: mrValues.map((v, i) => [labels[i + 1], v]),
+      digits: [0, d + 1],
+    },
+  })
+}
+
+/** The EWMA chart for small sustained shifts. */
+function ewmaFigure(v: ViewCharts, number: number): string {
+  const { set, what, prefix, labels, outside, d, baseline } = v
   const e = set.ewma
   const ewmaFirst = e.firstMonitoringSignal
   const ewmaRules = new Map<number, string[]>()
   for (const sig of e.signals)
     ewmaRules.set(sig.index, [...(ewmaRules.get(sig.index) ?? []), signalLabel('EWMA', sig.side)])
-  figures.push(
-    figureHtml({
-      id: `${prefix}${what.key}-ewma`,
-      number: next(),
-      caption: `${what.name}: EWMA chart (λ = ${e.lambda}, L = ${e.limitWidthL}) for small sustained shifts`,
-      svg: controlChartSvg({
-        id: `${prefix}${what.key}-ewma-svg`,
-        title: `${what.name}, EWMA chart`,
-        description: `EWMA with target ${fixed(e.centerLine, d + 1)} ${what.unit}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]}`}.`,
-        points: e.ewma.map((v, i) => ({
-          label: labels[i],
-          value: v,
-          rules: ewmaRules.get(i) ?? [],
-          outside: outside[i],
-        })),
-        baselineCount: baseline,
-        centerLine: e.centerLine,
-        upper: e.upperLimits,
-        lower: e.lowerLimits,
-        zoneSigma: null,
-        yLabel: `EWMA of ${what.yLabel}`,
-        unit: what.unit,
-      }),
-      alt: `Exponentially weighted moving average of ${what.name.toLowerCase()} against ${fixed(e.centerLine, d)} ${what.unit} with limits that widen to ±${fixed(e.limitWidthL * e.sigma * Math.sqrt(e.lambda / (2 - e.lambda)), d + 1)}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]} (${e.signals.find((s) => s.index === ewmaFirst)?.side === 'above' ? 'more' : 'less'} energy)`}.`,
-      table: {
-        id: `${what.key}-ewma`,
-        title: `EWMA of ${what.name.toLowerCase()}`,
-        columns: ['batch', `EWMA [${what.unit}]`, 'lower limit', 'upper limit'],
-        rows: e.ewma.map((v, i) => [labels[i], v, e.lowerLimits[i], e.upperLimits[i]]),
-        digits: [0, d + 1, d + 1, d + 1],
-      },
+  return figureHtml({
+    id: `${prefix}${what.key}-ewma`,
+    number,
+    caption: `${what.name}: EWMA chart (λ = ${e.lambda}, L = ${e.limitWidthL}) for small sustained shifts`,
+    svg: controlChartSvg({
+      id: `${prefix}${what.key}-ewma-svg`,
+      title: `${what.name}, EWMA chart`,
+      description: `EWMA with target ${fixed(e.centerLine, d + 1)} ${what.unit}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]}`}.`,
+      points: e.ewma.map((v, i) => ({
+        label: labels[i],
+        value: v,
+        rules: ewmaRules.get(i) ?? [],
+        outside: outside[i],
+      })),
+      baselineCount: baseline,
+      centerLine: e.centerLine,
+      upper: e.upperLimits,
+      lower: e.lowerLimits,
+      zoneSigma: null,
+      yLabel: `EWMA of ${what.yLabel}`,
+      unit: what.unit,
     }),
-  )
+    alt: `Exponentially weighted moving average of ${what.name.toLowerCase()} against ${fixed(e.centerLine, d)} ${what.unit} with limits that widen to ±${fixed(ewmaSteadyHalfWidth(e), d + 1)}; ${ewmaFirst === null ? 'no signal after the baseline' : `first signal after the baseline at batch ${labels[ewmaFirst]} (${e.signals.find((s) => s.index === ewmaFirst)?.side === 'above' ? 'more' : 'less'} energy)`}.`,
+    table: {
+      id: `${what.key}-ewma`,
+      title: `EWMA of ${what.name.toLowerCase()}`,
+      columns: ['batch', `EWMA [${what.unit}]`, 'lower limit', 'upper limit'],
+      rows: e.ewma.map((v, i) => [labels[i], v, e.lowerLimits[i], e.upperLimits[i]]),
+      digits: [0, d + 1, d + 1, d + 1],
+    },
+  })
+}
+
+/** The tabular CUSUM, upper and lower sums. */
+function cusumFigure(v: ViewCharts, number: number): string {
+  const { set, what, prefix, labels, outside, d, baseline, marker, ind } = v
   const c = set.cusum
   const f = set.finding
   const cusumUp = new Set(c.signals.filter((s) => s.side === 'above').map((s) => s.index))
   const cusumDown = new Set(c.signals.filter((s) => s.side === 'below').map((s) => s.index))
   const cusumText = `${f.cusumRise ? `the upper sum first crosses h at batch ${f.cusumRise.batchId} (more energy)` : 'the upper sum stays below h after the baseline'}; ${f.cusumFall ? `the lower sum first crosses h at batch ${f.cusumFall.batchId} (less energy)` : 'the lower sum stays below h'}.`
-  figures.push(
-    figureHtml({
-      id: `${prefix}${what.key}-cusum`,
-      number: next(),
-      caption: `${what.name}: CUSUM (k = ${c.k}, h = ${c.h}, in σ units), restarted at the first monitored batch`,
-      svg: controlChartSvg({
-        id: `${prefix}${what.key}-cusum-svg`,
-        title: `${what.name}, CUSUM chart`,
-        description: `Upper sum C⁺ above zero and lower sum C⁻ drawn below zero, decision interval ±${c.h} σ; ${cusumText}`,
-        points: c.upper.map((v, i) => ({
-          // C⁺ (more energy) is the main series.
-          label: labels[i],
-          value: v,
-          rules: c.signals.some((s) => s.index === i && s.side === 'above')
-            ? [signalLabel('CUSUM', 'above')]
-            : [],
-          outside: outside[i],
-        })),
-        second: {
-          values: c.lower.map((v) => (v === 0 ? 0 : -v)),
-          label: '−C⁻ (less energy)',
-          rules: c.lower.map((_, i) => (cusumDown.has(i) ? [signalLabel('CUSUM', 'below')] : [])),
-        },
-        baselineCount: baseline,
-        centerLine: 0,
-        upper: c.h,
-        lower: -c.h,
-        zoneSigma: null,
-        yLabel: 'CUSUM [σ]',
-        unit: 'σ',
-        marker,
-      }),
-      alt: `Tabular CUSUM of ${what.name.toLowerCase()} standardized by the baseline's centre ${fixed(ind.centerLine, d)} ${what.unit} and σ̂ ${fixed(ind.sigma, d + 1)} ${what.unit}, k = ${c.k}, h = ${c.h}: ${cusumText}`,
-      table: {
-        id: `${what.key}-cusum`,
-        title: `CUSUM of ${what.name.toLowerCase()}`,
-        columns: ['batch', 'C⁺ [σ]', 'C⁻ [σ]', 'outside baseline weather'],
-        rows: c.upper.map((v, i) => [labels[i], v, c.lower[i], outside[i] ? 'yes' : '']),
-        digits: [0, 2, 2, 0],
+  return figureHtml({
+    id: `${prefix}${what.key}-cusum`,
+    number,
+    caption: `${what.name}: CUSUM (k = ${c.k}, h = ${c.h}, in σ units), restarted at the first monitored batch`,
+    svg: controlChartSvg({
+      id: `${prefix}${what.key}-cusum-svg`,
+      title: `${what.name}, CUSUM chart`,
+      description: `Upper sum C⁺ above zero and lower sum C⁻ drawn below zero, decision interval ±${c.h} σ; ${cusumText}`,
+      points: c.upper.map((v, i) => ({
+        // C⁺ (more energy) is the main series.
+        label: labels[i],
+        value: v,
+        rules: cusumUp.has(i) ? [signalLabel('CUSUM', 'above')] : [],
+        outside: outside[i],
+      })),
+      second: {
+        values: c.lower.map((v) => (v === 0 ? 0 : -v)),
+        label: '−C⁻ (less energy)',
+        rules: c.lower.map((_, i) => (cusumDown.has(i) ? [signalLabel('CUSUM', 'below')] : [])),
       },
-      note: 'C⁺ adds up how far each batch lies above the baseline centre, less k = 0.5 σ, and never drops below zero; it signals when it passes h = 5 σ. C⁻ does the same for batches below. On a steady dryer with a known baseline this gives a false signal about once in 465 batches; a step of 3σ is found after about 2.6 batches on average.',
+      baselineCount: baseline,
+      centerLine: 0,
+      upper: c.h,
+      lower: -c.h,
+      zoneSigma: null,
+      yLabel: 'CUSUM [σ]',
+      unit: 'σ',
+      marker,
     }),
-  )
-  return figures.join('\n')
+    alt: `Tabular CUSUM of ${what.name.toLowerCase()} standardized by the baseline's centre ${fixed(ind.centerLine, d)} ${what.unit} and σ̂ ${fixed(ind.sigma, d + 1)} ${what.unit}, k = ${c.k}, h = ${c.h}: ${cusumText}`,
+    table: {
+      id: `${what.key}-cusum`,
+      title: `CUSUM of ${what.name.toLowerCase()}`,
+      columns: ['batch', 'C⁺ [σ]', 'C⁻ [σ]', 'outside baseline weather'],
+      rows: c.upper.map((v, i) => [labels[i], v, c.lower[i], outside[i] ? 'yes' : '']),
+      digits: [0, 2, 2, 0],
+    },
+    note: 'C⁺ adds up how far each batch lies above the baseline centre, less k = 0.5 σ, and never drops below zero; it signals when it passes h = 5 σ. C⁻ does the same for batches below. On a steady dryer with a known baseline this gives a false signal about once in 465 batches; a step of 3σ is found after about 2.6 batches on average.',
+  })
 }
 
 /** Fixed decimals without a negative zero (−0.00 reads as a value). */

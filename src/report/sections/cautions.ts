@@ -28,7 +28,8 @@ const list = (xs: readonly string[]) => `<ul>${xs.map((x) => `<li>${escapeHtml(x
 
 /** The cautions: the product's own, then the general ones (food safety, mycotoxins, heaters, trades, fire). */
 export function cautionsSection(a: Assessment, ctx: SectionContext): string {
-  return cautionsHtml(a.product.cautions, ctx.idPrefix)
+  // a bin's own cautions (fans, grain entrapment, …) first
+  return cautionsHtml([...(a.bin?.cautions ?? []), ...a.product.cautions], ctx.idPrefix)
 }
 
 /** Cautions for a list of product cautions (several products in a comparison: each once). */

@@ -9,6 +9,7 @@ import { MONTH_LONG } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
 import { escapeHtml } from '../escape.ts'
 import { clockShort, clockWords, yearsWords } from '../words.ts'
+import { binAnswerSentences } from './bin.ts'
 import { finite, moneyWords, perMassFactor, perMassWords, type SectionContext } from './context.ts'
 import { fuelName, heatIsAllTheHeat } from './heat.ts'
 import { monthList, suitableMonths } from './monthly.ts'
@@ -79,14 +80,19 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
   ])
   rows.push(['Method', methodName(a)])
+  const every = a.season.stepDays === 1 ? 'day' : `${a.season.stepDays} days`
   rows.push([
     'Season',
-    `batches start ${a.season.start} to ${a.season.end}, every ${a.season.stepDays === 1 ? 'day' : `${a.season.stepDays} days`}, at ${startTimeWords(a)}`,
+    a.bin
+      ? `the bin filled on dates from ${a.season.start} to ${a.season.end}, every ${every}, the fan starting at ${startTimeWords(a)}`
+      : `batches start ${a.season.start} to ${a.season.end}, every ${every}, at ${startTimeWords(a)}`,
   ])
-  rows.push([
-    'Deadline',
-    `${a.deadlineDays} days per batch (a batch still drying after ${a.maxDays} days counts as failed)`,
-  ])
+  if (a.bin) rows.push(['Season in the bin', `${a.bin.seasonDays} days for the top layer to dry`])
+  else
+    rows.push([
+      'Deadline',
+      `${a.deadlineDays} days per batch (a batch still drying after ${a.maxDays} days counts as failed)`,
+    ])
   rows.push([
     'Units',
     u.system === 'us' ? 'US customary (°F, lb, short ton, gal, ft³)' : 'SI (°C, kg, tonne, L, m³)',
@@ -121,6 +127,7 @@ export function usableShareWords(a: Assessment, m: Assessment['monthly'][number]
 
 /** The answer in plain sentences, most important first. */
 export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
+  if (a.bin) return [...binAnswerSentences(a, a.bin, ctx), ...usableHourSentences(a)]
   const out: string[] = []
   const u = ctx.units
   const method = methodName(a)
@@ -138,19 +145,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
       `By ${method}, no month's batches of ${a.product.name} reach ${target} within ${a.deadlineDays} days ${median}.`,
     )
   }
-  const top = a.monthly.reduce(
-    (x, y) => ((y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x),
-    a.monthly[0],
-  )
-  if (top && finite(top.usableHours.median) && !heatIsAllTheHeat(a)) {
-    const share = usableShareWords(a, top)
-    out.push(
-      `The air dries the product most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} hours ${median}${share ? ` (${share})` : ''}` +
-        (typical || !finite(top.usableHours.p10)
-          ? '.'
-          : `, and at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
-    )
-  }
+  if (!heatIsAllTheHeat(a)) out.push(...usableHourSentences(a))
   const w = bestStartWindow(a)
   if (w) {
     out.push(
@@ -201,6 +196,27 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     )
   }
   return out
+}
+
+/** The month in which the air dries the product most hours (the air entering the bin, for a bin). */
+function usableHourSentences(a: Assessment): string[] {
+  const typical = a.site.typicalYear
+  const median = typical ? 'in this typical year' : 'in the median year'
+  const top = a.monthly.reduce(
+    (x, y) => ((y.usableHours.median ?? -1) > (x.usableHours.median ?? -1) ? y : x),
+    a.monthly[0],
+  )
+  if (!top || !finite(top.usableHours.median)) return []
+  const subject = a.bin
+    ? 'The air blown into the bin can dry the grain toward the target'
+    : 'The air dries the product'
+  const share = usableShareWords(a, top)
+  return [
+    `${subject} most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} hours ${median}${share ? ` (${share})` : ''}` +
+      (typical || !finite(top.usableHours.p10)
+        ? '.'
+        : `, and at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
+  ]
 }
 
 /** The warnings that bear on the answer: the assessment's, then the weather file's (option names for the surface). */

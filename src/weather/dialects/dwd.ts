@@ -13,7 +13,8 @@
  * header line) are merged by time, the solar product's sums first shared out onto UTC hours. (DWD CDC
  * product descriptions, from memory.)
  */
-import type { ColumnPreset } from '../columns.ts'
+import { MS_PER_HOUR } from '../../physics/constants.ts'
+import type { ColumnPreset } from '../column-preset.ts'
 import { readDelimited } from '../delimited.ts'
 import { WeatherInputError } from '../weather-input-error.ts'
 import {
@@ -90,8 +91,6 @@ function splitBlocks(text: string): Block[] {
   }
   return blocks
 }
-
-const MS_PER_HOUR = 3_600_000
 
 /** UTC instant of a MESS_DATUM `YYYYMMDDHH` or `YYYYMMDDHH:MM`; NaN when it is neither. */
 function messDatumMs(text: string): number {

@@ -8,7 +8,7 @@
  * memory.)
  */
 
-import type { ColumnPreset } from '../columns.ts'
+import type { ColumnPreset } from '../column-preset.ts'
 import { type DelimitedLayout, readDelimited } from '../delimited.ts'
 import {
   type DialectContext,

@@ -18,10 +18,10 @@ import {
   type DialectHead,
   type DialectReading,
   numberOf,
-  quotedCells,
   stated,
   type WeatherDialect,
 } from './dialect.ts'
+import { NOAA_SUMMARY_ROWS, noaaReportKind, noaaReportTiming, noaaStation } from './noaa-station-csv.ts'
 
 /** An LCD value: `s` (suspect) and `*` suffixes dropped, `M` missing, `T` (trace) → 0 where allowed. */
 export function lcdValue(text: string, traceIsZero = false): number {
@@ -70,15 +70,8 @@ export const noaaLcd: WeatherDialect = {
         rain: (t) => lcdValue(t, true),
         cloudCover: lcdSkyCover,
       },
-      dropRows: {
-        names: ['REPORT_TYPE'],
-        drop: (t) => t.trim() === 'SOD' || t.trim() === 'SOM',
-        reason: 'summary-of-day or summary-of-month rows (REPORT_TYPE SOD/SOM, not observations)',
-      },
-      reportKind: {
-        names: ['REPORT_TYPE'],
-        kind: (t) => (ROUTINE.has(t.trim()) ? 1 : t.trim() === 'FM-16' ? 2 : 0),
-      },
+      dropRows: NOAA_SUMMARY_ROWS,
+      reportKind: noaaReportKind(ROUTINE),
       columns: {
         only: true,
         columns: {
@@ -93,18 +86,10 @@ export const noaaLcd: WeatherDialect = {
         },
       },
     })
-    if (table.columns.rain)
-      table.columns.rain.timing = { kind: 'interval-total', label: 'end', intervalMinutes: 60 }
-    table.labels = 'start'
-    table.sampling = 'reports'
-    const names = quotedCells(head.lower[0]).map((n) => n.trim())
-    const first = quotedCells(head.lines[1] ?? '')
-    const at = (name: string): string | undefined => first[names.indexOf(name)]
+    noaaReportTiming(table)
+    const { site, at } = noaaStation(head)
     table.statements = stated({
-      siteName: at('name')?.trim(),
-      latitudeDeg: numberOf(at('latitude')),
-      longitudeDeg: numberOf(at('longitude')),
-      elevationM: numberOf(at('elevation')),
+      ...site,
       windHeightM: 10,
       dialect: 'noaa-lcd',
     })

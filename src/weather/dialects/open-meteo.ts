@@ -8,6 +8,7 @@
  * mean and `precipitation` the sum over the preceding hour (the service's variable documentation,
  * from memory). A daily block after a second blank line is not read.
  */
+import { S_PER_HOUR } from '../../physics/constants.ts'
 import { readDelimited } from '../delimited.ts'
 import { snippet } from '../snippet.ts'
 import {
@@ -68,12 +69,12 @@ export const openMeteo: WeatherDialect = {
       elevationM: numberOf(meta('elevation')),
       dialect: 'open-meteo',
       windHeightM: table.columns.wind ? 10 : undefined,
-      timestampUtcOffsetHours: offsetSeconds / 3600,
+      timestampUtcOffsetHours: offsetSeconds / S_PER_HOUR,
       siteTimeZone: isIanaZone(zone) && zone !== 'GMT' && zone !== 'UTC' ? zone : undefined,
     })
     ctx.notes.push(
       `Open-Meteo metadata: grid cell at ${meta('latitude')}, ${meta('longitude')}, ${meta('elevation')} m; ` +
-        `times at the fixed offset of ${Number.isFinite(offsetSeconds) ? offsetSeconds / 3600 : '?'} h (${snippet(zone)}); ` +
+        `times at the fixed offset of ${Number.isFinite(offsetSeconds) ? offsetSeconds / S_PER_HOUR : '?'} h (${snippet(zone)}); ` +
         'radiation and precipitation cover the hour before each time',
     )
     return { table, info }
