@@ -136,6 +136,169 @@ function formAnswer(
   }
 }
 
+/** The page a posted form came from (a "check the file first" answer shows above the assess form). */
+function pageTaskOf(form: FormData): PageTask {
+  const first = form.get('task')
+  return typeof first === 'string' && (TASK_IDS as string[]).includes(first) ? (first as PageTask) : 'assess'
+}
+
+/** What answering one posted form needs: the request, the format asked for, and the page to show again. */
+interface PostedForm {
+  c: Context
+  config: PageConfig
+  form: FormData
+  format: string
+  work: ReturnType<typeof workControl>
+  /** The page with these form values (and a message or a result). */
+  page: (state: Parameters<typeof renderPage>[0]) => string
+  pageTask: PageTask
+  values: Record<string, string>
+  multi: Record<string, string[]>
+  demoIds: string[]
+}
+
+/** A problem as the form's answer: problem JSON for the page script and downloads, else the page with the message. */
+function failAnswer(p: PostedForm, problem: ApiProblem, ask: boolean, field?: string): Response {
+  const { status, message } = problem
+  if (wantsJson(p.format)) {
+    return p.c.body(
+      JSON.stringify({
+        ...problemBody(status, message, problem.errors, problem.type),
+        askFileQuestions: ask,
+        field: field ?? null,
+      }),
+      status as 400,
+      { 'content-type': 'application/problem+json', ...NO_STORE },
+    )
+  }
+  return p.c.html(
+    p.page({
+      task: p.pageTask,
+      values: p.values,
+      multi: p.multi,
+      error: { message, askFileQuestions: ask, field },
+    }),
+    status as 400,
+  )
+}
+
+/** An error thrown while answering a form, as its answer: the field named by its label where there is one. */
+function errorAnswer(p: PostedForm, e: unknown, ask = false): Response {
+  if (e instanceof FormFieldError) {
+    const message = `${fieldLabel(e.field)}: ${e.detail}`
+    return failAnswer(
+      p,
+      new ApiProblem(400, message, [{ path: e.field, message: e.detail }]),
+      e.field === 'file',
+      e.field,
+    )
+  }
+  if (e instanceof FormQuestion) return failAnswer(p, new ApiProblem(422, e.message), true)
+  if (e instanceof AssessOptionError) {
+    const field = formField(e.option)
+    const message = `${fieldLabel(field)}: ${e.message}`
+    return failAnswer(p, new ApiProblem(400, message, [{ path: field, message: e.message }]), false, field)
+  }
+  const problem = problemFor(e, { optionPath: formField })
+  if (problem === null) {
+    console.error(`dryhours: internal error on POST /report: ${(e as Error).message}`)
+    return failAnswer(
+      p,
+      new ApiProblem(503, 'internal error; nothing was assessed', undefined, 'internal'),
+      false,
+    )
+  }
+  return failAnswer(p, problem, ask)
+}
+
+/** The page with the result above the form (the answer without JavaScript). */
+function resultPage(p: PostedForm): (article: string) => string {
+  return (article) =>
+    p.page({
+      task: p.pageTask,
+      values: p.values,
+      multi: p.multi,
+      result: `<p class="hint no-print">To download the result, choose a file under “Answer as” and send the form again.</p>${article}`,
+    })
+}
+
+/** The same row and column limits as the API's files, before any reader runs. */
+function uploadChecker(config: PageConfig) {
+  return (file: { name: string; bytes: Uint8Array }, field: string, kind?: 'weighings' | 'log' | 'weather') =>
+    checkedUploadText({ name: file.name, field, bytes: file.bytes }, config, kind)
+}
+
+/** Inspect, fit and energy charts: no engine planner, the tool's own reader. */
+async function answerTool(p: PostedForm, task: 'inspect' | 'fit' | 'energy'): Promise<Response> {
+  const run = task === 'inspect' ? runInspect : task === 'fit' ? runFit : runEnergy
+  let out: ToolResult
+  try {
+    out = await run(p.form, {
+      demo: p.config.demo,
+      demoIds: p.demoIds,
+      checkUpload: uploadChecker(p.config),
+      onProgress: p.work.checkpoint,
+    })
+    p.work.checkpoint()
+  } catch (e) {
+    return errorAnswer(p, e)
+  }
+  return formAnswer(p.c, p.format === 'csv' ? 'json' : p.format, out, resultPage(p))
+}
+
+/** The form of an assess or compare job, read and planned before any file is read. */
+async function readAssessForm(p: PostedForm): Promise<FormInput | Response> {
+  const checkUpload = uploadChecker(p.config)
+  try {
+    const input = await parseForm(p.form, p.demoIds, p.config.maxSites)
+    // The engine's planner checks the options before any file is read.
+    planAssessment({ ...input.assess, product: input.product })
+    for (const f of input.files) checkUpload(f, 'file')
+    for (const s of input.sites) checkUpload(s.file, `site${s.row}.file`)
+    return input
+  } catch (e) {
+    return formInputError(p, e)
+  }
+}
+
+/** A bad value in the form: a plain RangeError names its field by the text before the colon. */
+function formInputError(p: PostedForm, e: unknown): Response {
+  if (
+    e instanceof RangeError &&
+    !isRuntimeFault(e) &&
+    !(e instanceof AssessOptionError) &&
+    !(e instanceof FormFieldError)
+  ) {
+    const field = /^([A-Za-z]+):/.exec(e.message)?.[1]
+    return failAnswer(
+      p,
+      new ApiProblem(400, e.message, field ? [{ path: field, message: e.message }] : undefined),
+      e.message.startsWith('file:'),
+    )
+  }
+  return errorAnswer(p, e)
+}
+
+/** Assess a site or compare sites: the same work limit and time budget as the API. */
+async function answerAssess(p: PostedForm): Promise<Response> {
+  const input = await readAssessForm(p)
+  if (input instanceof Response) return input
+  let out: FormResult
+  try {
+    out = await runForm(input, p.config.demo, {
+      beforeAssess: (hours) => {
+        p.work.checkpoint()
+        checkBatchHours({ ...input.assess, product: input.product }, hours, p.config, formField)
+      },
+      onProgress: p.work.checkpoint,
+    })
+    p.work.checkpoint()
+  } catch (e) {
+    return errorAnswer(p, e)
+  }
+  return formAnswer(p.c, input.format, out, resultPage(p))
+}
+
 export function pageRouter(config: PageConfig): Hono {
   const demo = config.demo
   const demoList = () => demo?.list() ?? []
@@ -156,126 +319,20 @@ export function pageRouter(config: PageConfig): Hono {
     const form = await readPageForm(c)
     if (!(form instanceof FormData)) return form
     const formatRaw = form.get('format')
-    const format = typeof formatRaw === 'string' ? formatRaw : 'page'
+    const posted: PostedForm = {
+      c,
+      config,
+      form,
+      format: typeof formatRaw === 'string' ? formatRaw : 'page',
+      work,
+      page,
+      pageTask: pageTaskOf(form),
+      ...echoValues(form),
+      demoIds: demoList().map((d) => d.file),
+    }
     const task = taskOf(form)
-    // the page the form came from (a "check the file first" answer shows above the assess form)
-    const pageTask = ((): PageTask => {
-      const first = form.get('task')
-      return typeof first === 'string' && (TASK_IDS as string[]).includes(first)
-        ? (first as PageTask)
-        : 'assess'
-    })()
-    const { values, multi } = echoValues(form)
-    const fail = (problem: ApiProblem, ask: boolean, field?: string) => {
-      const { status, message } = problem
-      if (wantsJson(format)) {
-        return c.body(
-          JSON.stringify({
-            ...problemBody(status, message, problem.errors, problem.type),
-            askFileQuestions: ask,
-            field: field ?? null,
-          }),
-          status as 400,
-          { 'content-type': 'application/problem+json', ...NO_STORE },
-        )
-      }
-      return c.html(
-        page({ task: pageTask, values, multi, error: { message, askFileQuestions: ask, field } }),
-        status as 400,
-      )
-    }
-    const failWith = (e: unknown, ask = false) => {
-      if (e instanceof FormFieldError) {
-        const message = `${fieldLabel(e.field)}: ${e.detail}`
-        return fail(
-          new ApiProblem(400, message, [{ path: e.field, message: e.detail }]),
-          e.field === 'file',
-          e.field,
-        )
-      }
-      if (e instanceof FormQuestion) return fail(new ApiProblem(422, e.message), true)
-      if (e instanceof AssessOptionError) {
-        const field = formField(e.option)
-        const message = `${fieldLabel(field)}: ${e.message}`
-        return fail(new ApiProblem(400, message, [{ path: field, message: e.message }]), false, field)
-      }
-      const problem = problemFor(e, { optionPath: formField })
-      if (problem === null) {
-        console.error(`dryhours: internal error on POST /report: ${(e as Error).message}`)
-        return fail(new ApiProblem(503, 'internal error; nothing was assessed', undefined, 'internal'), false)
-      }
-      return fail(problem, ask)
-    }
-    const pageWith = (article: string) =>
-      page({
-        task: pageTask,
-        values,
-        multi,
-        result: `<p class="hint no-print">To download the result, choose a file under “Answer as” and send the form again.</p>${article}`,
-      })
-    // The same row and column limits as the API's files, before any reader runs.
-    const checkUpload = (
-      file: { name: string; bytes: Uint8Array },
-      field: string,
-      kind?: 'weighings' | 'log' | 'weather',
-    ) => checkedUploadText({ name: file.name, field, bytes: file.bytes }, config, kind)
-    if (task === 'inspect' || task === 'fit' || task === 'energy') {
-      const run = task === 'inspect' ? runInspect : task === 'fit' ? runFit : runEnergy
-      let out: ToolResult
-      try {
-        out = await run(form, {
-          demo,
-          demoIds: demoList().map((d) => d.file),
-          checkUpload,
-          onProgress: work.checkpoint,
-        })
-        work.checkpoint()
-      } catch (e) {
-        return failWith(e)
-      }
-      return formAnswer(c, format === 'csv' ? 'json' : format, out, pageWith)
-    }
-    let input: FormInput
-    try {
-      input = await parseForm(
-        form,
-        demoList().map((d) => d.file),
-        config.maxSites,
-      )
-      // The engine's planner checks the options before any file is read.
-      planAssessment({ ...input.assess, product: input.product })
-      for (const f of input.files) checkUpload(f, 'file')
-      for (const s of input.sites) checkUpload(s.file, `site${s.row}.file`)
-    } catch (e) {
-      if (
-        e instanceof RangeError &&
-        !isRuntimeFault(e) &&
-        !(e instanceof AssessOptionError) &&
-        !(e instanceof FormFieldError)
-      ) {
-        const field = /^([A-Za-z]+):/.exec(e.message)?.[1]
-        return fail(
-          new ApiProblem(400, e.message, field ? [{ path: field, message: e.message }] : undefined),
-          e.message.startsWith('file:'),
-        )
-      }
-      return failWith(e)
-    }
-    let out: FormResult
-    try {
-      out = await runForm(input, demo, {
-        // The same work limit and time budget as the API.
-        beforeAssess: (hours) => {
-          work.checkpoint()
-          checkBatchHours({ ...input.assess, product: input.product }, hours, config, formField)
-        },
-        onProgress: work.checkpoint,
-      })
-      work.checkpoint()
-    } catch (e) {
-      return failWith(e)
-    }
-    return formAnswer(c, input.format, out, pageWith)
+    if (task === 'inspect' || task === 'fit' || task === 'energy') return answerTool(posted, task)
+    return answerAssess(posted)
   })
   return router
 }
