@@ -12,7 +12,7 @@ import type { Assessment } from './assessment-view.ts'
 import { siteDisplayName } from './assessment-view.ts'
 import { groupedBarsChart } from './charts/grouped-bars.ts'
 import { MONTH_SHORT } from './charts/svg.ts'
-import { formatNumber, unitFormatter } from './display-units.ts'
+import { formatNumber, type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
 import { figureHtml } from './figure.ts'
 import { htmlDocument, type ReportOptions, sectionContext } from './report-html.ts'
@@ -132,18 +132,10 @@ export interface ComparisonOptions extends Pick<ReportOptions, 'units' | 'paper'
   ranking: Ranking
 }
 
-export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOptions): string {
-  if (sites.length === 0) throw new RangeError('a comparison needs at least one site')
-  const units = o.units ?? 'si'
-  const u = unitFormatter(units)
-  const names = sites.map((s) => siteDisplayName(s.assessment, s.options?.info))
+/** The answer: the first site, by what criterion, and a caution when the sites were not assessed alike. */
+function rankingSentences(sites: ComparedSite[], ranked: ReturnType<typeof rankRows>): string[] {
   const first = sites[0].assessment
-  const categories = MONTH_SHORT.map((label, i) => ({ key: String(i + 1), label }))
-  const month = (a: Assessment, m: number) => a.monthly.find((r) => r.month === m)
-  let fig = 0
-  const ranked = rankRows(o.ranking)
-  const ranks = ranked.rows
-  const best = ranks[0]
+  const best = ranked.rows[0]
   const sentences = [
     `${best.name} ranks first for ${first.product.name} by ${methodName(first)}` +
       (finite(best.meanProbabilityWithinDeadline)
@@ -163,6 +155,14 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
       'Caution: the sites were assessed for different products, methods, seasons or deadlines, so the ranking is not like for like.',
     )
   }
+  return sentences
+}
+
+const CATEGORIES = MONTH_SHORT.map((label, i) => ({ key: String(i + 1), label }))
+const monthOf = (a: Assessment, m: number) => a.monthly.find((r) => r.month === m)
+
+/** Usable drying hours per month, sites side by side (median, P10–P90), with its table. */
+function usableFigure(sites: ComparedSite[], names: string[], number: number): string {
   const usableAlt =
     `Median usable drying hours per month for ${names.length} sites (${names.join(', ')}); whiskers P10 to P90. ` +
     names
@@ -174,20 +174,20 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
       })
       .join('; ') +
     '.'
-  const usable = figureHtml({
+  return figureHtml({
     id: 'cmp-fig-usable',
-    number: ++fig,
+    number,
     caption: 'Usable drying hours per month, sites side by side (median, P10–P90)',
     svg: groupedBarsChart({
       id: 'cmp-fig-usable-svg',
       title: 'Usable drying hours per month by site',
       description: usableAlt,
-      categories,
+      categories: CATEGORIES,
       series: sites.map((s, i) => ({
         name: names[i],
-        values: categories.map((c) => month(s.assessment, Number(c.key))?.usableHours.median ?? null),
-        low: categories.map((c) => month(s.assessment, Number(c.key))?.usableHours.p10 ?? null),
-        high: categories.map((c) => month(s.assessment, Number(c.key))?.usableHours.p90 ?? null),
+        values: CATEGORIES.map((c) => monthOf(s.assessment, Number(c.key))?.usableHours.median ?? null),
+        low: CATEGORIES.map((c) => monthOf(s.assessment, Number(c.key))?.usableHours.p10 ?? null),
+        high: CATEGORIES.map((c) => monthOf(s.assessment, Number(c.key))?.usableHours.p90 ?? null),
       })),
       yLabel: 'usable drying hours [h]',
       unit: 'h',
@@ -198,9 +198,20 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
       'Median usable drying hours per month by site [h]',
       sites,
       names,
-      (a, m) => month(a, m)?.usableHours.median ?? null,
+      (a, m) => monthOf(a, m)?.usableHours.median ?? null,
     ),
   })
+}
+
+/** Supplemental heat by start month, sites side by side (median), with its table. */
+function heatFigure(
+  sites: ComparedSite[],
+  names: string[],
+  ranks: ReturnType<typeof rankRows>['rows'],
+  units: UnitSystem,
+  number: number,
+): string {
+  const u = unitFormatter(units)
   const heatAlt =
     `Median supplemental heat per ${units === 'us' ? 'short ton' : 'tonne'} for batches started in each month, by site. ` +
     ranks
@@ -211,21 +222,21 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
       .join('; ') +
     '.'
   const heatValue = (a: Assessment, m: number) => {
-    const v = month(a, m)?.supplementalHeatKwhPerTonne.median
+    const v = monthOf(a, m)?.supplementalHeatKwhPerTonne.median
     return finite(v) ? round(u.energyPerMass(v).value, 1) : null
   }
-  const heat = figureHtml({
+  return figureHtml({
     id: 'cmp-fig-heat',
-    number: ++fig,
+    number,
     caption: 'Supplemental heat by start month, sites side by side (median)',
     svg: groupedBarsChart({
       id: 'cmp-fig-heat-svg',
       title: 'Supplemental heat by start month and site',
       description: heatAlt,
-      categories,
+      categories: CATEGORIES,
       series: sites.map((s, i) => ({
         name: names[i],
-        values: categories.map((c) => heatValue(s.assessment, Number(c.key))),
+        values: CATEGORIES.map((c) => heatValue(s.assessment, Number(c.key))),
       })),
       yLabel: `heat into the air [${u.energyPerMassUnit}]`,
       unit: u.energyPerMassUnit,
@@ -239,25 +250,43 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
       heatValue,
     ),
   })
-  // the calendar: one row per site, in rank order
+}
+
+/** The season calendar: one row per site, in rank order (sites without start weeks, such as bins, left out). */
+function comparisonCalendar(
+  sites: ComparedSite[],
+  names: string[],
+  ranks: ReturnType<typeof rankRows>['rows'],
+): string {
   const byName = new Map(sites.map((x, i) => [names[i], x]))
   const calendarRows = ranks
     .map((r) => ({ label: r.name, site: byName.get(r.name) }))
     .filter((r) => r.site?.assessment.seasonCalendar?.cells.length)
     .map((r) => ({ label: r.label, calendar: (r.site as ComparedSite).assessment.seasonCalendar }))
-  const calendar = calendarRows.length
+  return calendarRows.length
     ? `<section class="report-section" data-section="calendar"><h2>The season at a glance, site by site</h2>${calendarBlock(calendarRows, 'cmp-calendar')}</section>`
     : ''
+}
+
+export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOptions): string {
+  if (sites.length === 0) throw new RangeError('a comparison needs at least one site')
+  const units = o.units ?? 'si'
+  const names = sites.map((s) => siteDisplayName(s.assessment, s.options?.info))
+  const first = sites[0].assessment
+  const ranked = rankRows(o.ranking)
+  const sentences = rankingSentences(sites, ranked)
+  const usable = usableFigure(sites, names, 1)
+  const heat = heatFigure(sites, names, ranked.rows, units, 2)
   const perSite = sites.map((x, i) => siteSummary(x, i, o)).join('\n')
   return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
-<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Season</dt><dd>${escapeHtml(`batches start ${first.season.start} to ${first.season.end}`)}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
+<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Season</dt><dd>${escapeHtml(`${first.bin ? 'the bin filled on dates from' : 'batches start'} ${first.season.start} to ${first.season.end}`)}</dd></div><div class="kv"><dt>${first.bin ? 'Season in the bin' : 'Deadline'}</dt><dd>${first.bin ? `${first.bin.seasonDays} days for the top layer to dry` : `${first.deadlineDays} days`}</dd></div></dl></header>
 <section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(o.ranking, units))}</section>
-${calendar}
+${comparisonCalendar(sites, names, ranked.rows)}
 ${perSite}
 <section class="report-section" data-section="compare-monthly"><h2>Sites side by side, month by month</h2>${usable}${heat}</section>
 ${cautionsHtml(
-  sites.flatMap((x) => x.assessment.product.cautions),
+  sites.flatMap((x) => [...(x.assessment.bin?.cautions ?? []), ...x.assessment.product.cautions]),
   'cmp-',
 )}
 <footer>Made by dryhours from the weather files and the options shown above. Each site's full report (charts, every start date, the assumptions) is its own document. Check the numbers against local experience before you build or buy.</footer>
