@@ -97,19 +97,12 @@ export interface FormWorkHooks {
   onProgress?: () => void
 }
 
-export async function runForm(
-  input: FormInput,
-  demo?: DemoProvider,
-  hooks: FormWorkHooks = {},
-): Promise<FormResult> {
-  const sites: AssessedSite[] = []
-  const files = await inputs(input, demo)
-  const reads: { name: string; read: WeatherReadResult }[] = []
-  if (input.task === 'assess' && input.methods.length > 1)
-    throw new FormFieldError(
-      'method',
-      'several methods side by side are not available on this page yet: choose one',
-    )
+type FormFile = Awaited<ReturnType<typeof inputs>>[number]
+type NamedRead = { name: string; read: WeatherReadResult }
+
+/** Read every file of the form; a reader's question names the file (and its row of the sites table). */
+function readFiles(files: FormFile[]): NamedRead[] {
+  const reads: NamedRead[] = []
   for (const f of files) {
     const options = f.options
     if (options.siteName === undefined) delete options.siteName
@@ -133,91 +126,83 @@ export async function runForm(
     if (!read.series.site.name && files.length > 1) read.series.site.name = f.name.replace(/\.[^.]+$/, '')
     reads.push({ name: f.name, read })
   }
-  hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
-  let assessments: Assessment[]
-  let ranking: Ranking | undefined
+  return reads
+}
+
+/** One site assessed, or several compared and ranked (analysis/compare.ts). */
+function runEngine(
+  reads: NamedRead[],
+  input: FormInput,
+  hooks: FormWorkHooks,
+): { assessments: Assessment[]; ranking?: Ranking } {
   try {
     if (reads.length === 1) {
-      assessments = [
-        assess(reads[0].read.series, {
-          ...input.assess,
-          product: input.product,
-          onProgress: hooks.onProgress,
-        }),
-      ]
-    } else {
-      const c = compare(
-        reads.map((r) => r.read.series),
-        {
-          ...input.assess,
-          product: input.product,
-          onProgress: hooks.onProgress,
-          labels: reads.map((r) => r.read.series.site.name || r.name),
-        },
-      )
-      assessments = c.assessments
-      ranking = c
+      return {
+        assessments: [
+          assess(reads[0].read.series, {
+            ...input.assess,
+            product: input.product,
+            onProgress: hooks.onProgress,
+          }),
+        ],
+      }
     }
+    const c = compare(
+      reads.map((r) => r.read.series),
+      {
+        ...input.assess,
+        product: input.product,
+        onProgress: hooks.onProgress,
+        labels: reads.map((r) => r.read.series.site.name || r.name),
+      },
+    )
+    return { assessments: c.assessments, ranking: c }
   } catch (e) {
     // an option the planner refused keeps its class (it names the form field); engine faults pass as they are
     if (e instanceof RangeError && !(e instanceof AssessOptionError) && !isRuntimeFault(e))
       throw new RangeError(`${reads.length === 1 ? `${reads[0].name}: ` : ''}${e.message}`)
     throw e
   }
-  reads.forEach(({ name, read }, i) => {
-    const assessment = assessments[i]
-    assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
-    sites.push({
-      fileName: name,
-      series: read.series,
-      assessment,
-      readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
-      readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
-      dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
-    })
-  })
-  const units = input.units
-  if (sites.length === 1) {
-    const s = sites[0]
-    const opts = {
-      units,
-      info: {
-        fileName: s.fileName,
-        dataSource: s.dataSource,
-        readerWarnings: s.readWarnings,
-        readerNotes: s.readNotes,
-      },
-    }
-    return {
-      sites,
-      article: renderReportArticle(s.assessment, opts),
-      document: renderReportHtml(s.assessment, opts),
-      handout: renderReportHtml(s.assessment, { ...opts, layout: 'handout' }),
-      csv: renderReportCsv(s.assessment, opts),
-      json: JSON.stringify(s.assessment, null, 2),
-      title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
-    }
+}
+
+/** The report's facts about the file a site was read from. */
+function siteInfo(s: AssessedSite) {
+  return {
+    fileName: s.fileName,
+    dataSource: s.dataSource,
+    readerWarnings: s.readWarnings,
+    readerNotes: s.readNotes,
   }
-  // several sites are always compared (and ranked) by analysis/compare.ts above
-  const rank = ranking ?? rankAssessments(sites.map((s) => s.assessment))
+}
+
+/** One site: the page's article, the full report, the two-page handout, CSV and JSON. */
+function siteResult(sites: AssessedSite[], units: FormInput['units']): FormResult {
+  const s = sites[0]
+  const opts = { units, info: siteInfo(s) }
+  return {
+    sites,
+    article: renderReportArticle(s.assessment, opts),
+    document: renderReportHtml(s.assessment, opts),
+    handout: renderReportHtml(s.assessment, { ...opts, layout: 'handout' }),
+    csv: renderReportCsv(s.assessment, opts),
+    json: JSON.stringify(s.assessment, null, 2),
+    title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
+  }
+}
+
+/** Several sites: the comparison (its printout is the handout too), CSV of the ranking and every site, JSON. */
+function comparisonResult(sites: AssessedSite[], ranking: Ranking, units: FormInput['units']): FormResult {
   const compared: ComparedSite[] = sites.map((s) => ({
     assessment: s.assessment,
-    options: {
-      info: {
-        fileName: s.fileName,
-        dataSource: s.dataSource,
-        readerWarnings: s.readWarnings,
-        readerNotes: s.readNotes,
-      },
-    },
+    options: { info: siteInfo(s) },
   }))
   return {
     sites,
-    article: renderComparisonArticle(compared, { units, ranking: rank }),
-    document: renderComparisonHtml(compared, { units, ranking: rank }),
-    handout: renderComparisonHtml(compared, { units, ranking: rank }),
+    article: renderComparisonArticle(compared, { units, ranking }),
+    document: renderComparisonHtml(compared, { units, ranking }),
+    handout: renderComparisonHtml(compared, { units, ranking }),
     csv:
-      tablesCsv([comparisonTable(rank, units)]) +
+      tablesCsv([comparisonTable(ranking, units)]) +
       '\r\n' +
       sites.map((s) => renderReportCsv(s.assessment, { units, info: { fileName: s.fileName } })).join('\r\n'),
     json: JSON.stringify(
@@ -227,4 +212,35 @@ export async function runForm(
     ),
     title: `comparison of ${sites.length} sites – ${sites[0].assessment.product.name}`,
   }
+}
+
+export async function runForm(
+  input: FormInput,
+  demo?: DemoProvider,
+  hooks: FormWorkHooks = {},
+): Promise<FormResult> {
+  const files = await inputs(input, demo)
+  if (input.task === 'assess' && input.methods.length > 1)
+    throw new FormFieldError(
+      'method',
+      'several methods side by side are not available on this page yet: choose one',
+    )
+  const reads = readFiles(files)
+  hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
+  const { assessments, ranking } = runEngine(reads, input, hooks)
+  const sites: AssessedSite[] = reads.map(({ name, read }, i) => {
+    const assessment = assessments[i]
+    assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
+    return {
+      fileName: name,
+      series: read.series,
+      assessment,
+      readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
+      readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
+      dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
+    }
+  })
+  if (sites.length === 1) return siteResult(sites, input.units)
+  // several sites are always compared (and ranked) by analysis/compare.ts above
+  return comparisonResult(sites, ranking ?? rankAssessments(sites.map((s) => s.assessment)), input.units)
 }
