@@ -274,6 +274,40 @@ describe('the grower: check the file, then assess, on a phone', () => {
   })
 })
 
+describe('the grower: grain in a bin', () => {
+  it('chooses the natural-air bin on the page, gives its airflows, and prints its summary on two A4 and two Letter pages', async () => {
+    const { context, page } = await open(DESK, 'bin')
+    await page.goto(`${server.url}/`)
+    await page.selectOption('#f-demo', 'quillow-valley-2021-2023-local-dst-imperial.csv')
+    await page.selectOption('#f-product', 'shelled-corn')
+    // the bin's fields appear only with its method
+    expect(await page.isVisible('#f-binAirflows')).toBe(false)
+    await page.uncheck('input[name="method"][value="open-air"]')
+    await page.check('input[name="method"][value="natural-air-bin"]')
+    expect(await page.isVisible('#f-binAirflows')).toBe(true)
+    expect(await page.isVisible('#f-loadingKgPerM2')).toBe(false)
+    await page.fill('#f-binAirflows', '1 2 3')
+    await page.fill('#f-initialWbPct', '20')
+    await page.fill('#f-targetWbPct', '15.5')
+    await page.fill('#f-seasonStart', '09-15')
+    await page.fill('#f-seasonEnd', '10-15')
+    await page.click('#submit')
+    await page.waitForSelector('#result article[data-report="assessment"]', { timeout: 180_000 })
+    const sections = await page.$$eval('#result .handout [data-section]', (s) =>
+      s.map((x) => x.getAttribute('data-section')),
+    )
+    expect(sections).toEqual(['header', 'answer', 'bin-airflow', 'cautions'])
+    expect(
+      await page.$$eval('#result .handout table[data-table="bin-minimum-airflow"] tbody tr', (r) => r.length),
+    ).toBe(2)
+    expect(await page.textContent('#result .handout')).toMatch(/needs at least|none of the airflows/)
+    await look(page, 'bin-report-desktop')
+    const handout = await download(page, '#downloads a[download$="-summary.html"]')
+    expect(await printed(handout, 'bin-summary')).toEqual({ a4: 2, letter: 2 })
+    await context.close()
+  })
+})
+
 describe('the other jobs', () => {
   it('fits weighings and draws energy charts, on a phone', async () => {
     const { context, page } = await open(PHONE, 'tools')

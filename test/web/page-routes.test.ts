@@ -240,6 +240,47 @@ describe('demo sites supplied by the entry point', () => {
     expect(a.site.utcOffsetHours).toBe(-6)
   }, 30_000)
 
+  it('assesses grain in a bin (natural-air-bin) from the page: its fields reach the method, its handout shows the airflow per start month', async () => {
+    expect(await (await demoApp.request('/')).text()).toContain('data-methods="natural-air-bin"')
+    const f = form({
+      demo: 'quillow-valley-2021-2023-local-dst-imperial.csv',
+      product: 'shelled-corn',
+      method: 'natural-air-bin',
+      binAirflows: '1 2',
+      binDepthM: '3',
+      initialWbPct: '20',
+      targetWbPct: '15.5',
+      seasonStart: '09-15',
+      seasonEnd: '10-15',
+      format: 'bundle',
+    })
+    const res = await demoApp.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { json: string; handout: string; document: string }
+    const a = JSON.parse(b.json) as {
+      method: { kind: string; airflowsM3PerMinPerTonne: number[]; depthM: number }
+      bin: { airflows: { airflowM3PerMinPerTonne: number }[]; bin: { depthM: number } }
+      seasonCalendar: { cells: unknown[] }
+    }
+    expect(a.method).toMatchObject({ kind: 'natural-air-bin', airflowsM3PerMinPerTonne: [1, 2], depthM: 3 })
+    expect(a.bin.airflows.map((q) => q.airflowM3PerMinPerTonne)).toEqual([1, 2])
+    expect(a.bin.bin.depthM).toBe(3)
+    // no start weeks for a bin: the handout shows the airflow per start month instead of the calendar
+    expect(a.seasonCalendar.cells).toEqual([])
+    expect(b.handout).toContain('data-section="bin-airflow"')
+    expect(b.handout).toContain('data-table="bin-minimum-airflow"')
+    expect(b.handout).not.toContain('data-section="start-table"')
+    expect(b.handout).not.toContain('data-section="calendar"')
+    expect(b.handout).toMatch(/Never enter a bin/)
+    expect(b.document).toContain('data-section="bin"')
+    // a bad airflow names its field by the label
+    f.set('binAirflows', '1 fast')
+    f.set('format', 'page')
+    const bad = await demoApp.request('/report', { method: 'POST', body: f })
+    expect(bad.status).toBe(400)
+    expect(await bad.text()).toMatch(/Airflows to compare: each value must be a number from 0.01 to 50/)
+  }, 60_000)
+
   it('refuses a demo name that is not in the list (no path tricks)', async () => {
     const res = await demoApp.request('/report', {
       method: 'POST',
