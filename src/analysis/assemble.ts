@@ -4,6 +4,7 @@
  * assumption and the warnings (what the file and the options leave uncertain, in sentences for the user).
  */
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
+import { heatedLimitWarnings } from '../drying/methods/heated.ts'
 import { type HourlySeries, QualityFlag } from '../weather/series.ts'
 import type { Calendar, StartDates } from './assess.ts'
 import type { ResolvedAssessOptions } from './assess-options.ts'
@@ -40,6 +41,12 @@ export function assessmentWarnings(
   bin?: BinAssessment,
 ): string[] {
   const warnings: string[] = []
+  if (run.dryTarget.warning !== null) warnings.push(run.dryTarget.warning)
+  warnings.push(
+    ...(run.method.kind === 'heated'
+      ? heatedLimitWarnings(run.method, run.maxProductTempC, 'heated air')
+      : heatedLimitWarnings(run.backupMethod, run.maxProductTempC, 'backup heater')),
+  )
   const { years, time } = calendar
   if (years.length === 0) {
     warnings.push(
@@ -89,6 +96,38 @@ export function assessmentWarnings(
   return warnings
 }
 
+/** The warning for batches that ran into hours without weather (none when there are none). */
+function unknownBatchWarnings(u: UnknownBatches): string[] {
+  if (u.count === 0) return []
+  return [
+    `${u.count} batch${u.count === 1 ? '' : 'es'} ran into hours without weather (${u.missingHours} such hours, summed over those batches): ` +
+      'what the product did then is not known, so their outcome is unknown; they are left out of the days to ' +
+      'target, the probabilities and the heat figures (not counted as slow)',
+  ]
+}
+
+/** Batches that ran into hours without weather (outcome unknown) and the hours they missed, summed. */
+export interface UnknownBatches {
+  count: number
+  missingHours: number
+}
+
+/** The product's dry target as the assessment shows it (basis, water activities, the sentence). */
+function dryTargetView(run: ResolvedAssessOptions): Assessment['product']['dryTarget'] {
+  const t = run.dryTarget
+  return {
+    basis: t.basis,
+    safeWaterActivity: t.safeWaterActivity,
+    safeWaterActivitySource: t.safeWaterActivitySource,
+    storageTempC: t.storageTempC,
+    waterActivityAtTarget: roundOrNull(t.waterActivityAtTarget ?? Number.NaN, 3),
+    moistureAtSafeWaterActivityWbPct: roundOrNull(t.moistureAtSafeWaterActivityWbPct ?? Number.NaN, 2),
+    profileMoistureWbPct: t.profileMoistureWbPct,
+    waterActivityAtProfileMoisture: roundOrNull(t.waterActivityAtProfileMoisture ?? Number.NaN, 3),
+    sentence: t.sentence,
+  }
+}
+
 function isoHour(ms: number): string {
   return new Date(ms).toISOString().slice(0, 13) + ':00Z'
 }
@@ -105,6 +144,8 @@ export function assembleAssessment(
     psychrometric: PsychrometricSummary
     /** The bin stage's answer (methods with deep-bed batches). */
     bin?: BinAssessment
+    /** Batches that ran into hours without weather (outcome unknown) and the hours they missed. */
+    unknownBatches: UnknownBatches
   },
 ): Assessment {
   const { primary, calendar, starts } = parts
@@ -129,6 +170,7 @@ export function assembleAssessment(
       initialMoistureWbPct: run.initialWbPct,
       targetMoistureWbPct: run.targetWbPct,
       targetErhPctAt25C: roundOrNull(product.erhPct(25, run.targetDb), 1) ?? 0,
+      dryTarget: dryTargetView(run),
       maxProductTempC: run.maxProductTempC,
       thicknessMm: product.thicknessMm,
       loadingKgPerM2: run.loadingKgPerM2,
@@ -154,7 +196,10 @@ export function assembleAssessment(
       // what the weather reader supplied rather than read (estimated irradiance, a constant pressure)
       ...(series.supplied ?? []),
     ],
-    warnings: assessmentWarnings(series, run, primary, calendar, starts, estimatedSunHours, parts.bin),
+    warnings: [
+      ...assessmentWarnings(series, run, primary, calendar, starts, estimatedSunHours, parts.bin),
+      ...unknownBatchWarnings(parts.unknownBatches),
+    ],
     coverage: {
       firstHourUtc: isoHour(series.startUtcMs[0]),
       lastHourUtc: isoHour(series.startUtcMs[series.hours - 1]),
@@ -168,6 +213,8 @@ export function assembleAssessment(
       hasRainData: !primary.noRainData,
       startDateBatchesRun: starts.table.batches,
       startDateBatchesSkippedForData: starts.table.skipped,
+      batchesWithUnknownOutcome: parts.unknownBatches.count,
+      missingWeatherHoursInBatches: parts.unknownBatches.missingHours,
     },
     ...(parts.bin ? { bin: parts.bin } : {}),
   }

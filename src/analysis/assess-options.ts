@@ -18,6 +18,7 @@ import type { MethodModel } from '../drying/methods/method-model.ts'
 import { type ProductResponse, productResponse } from '../drying/product-response.ts'
 import { tabulatedResponse } from '../drying/product-tables.ts'
 import { type DryingThresholds, parseDryingThresholds } from '../drying/thresholds.ts'
+import type { DryTarget } from '../product/dry-target.ts'
 import { moistureDbFromWbPct } from '../product/moisture-basis.ts'
 import type { ProductProfile } from '../product/profile.ts'
 import { planAssessment } from './plan.ts'
@@ -32,8 +33,13 @@ export interface AssessProgress {
 export interface AssessOptions {
   product: ProductProfile
   method: DryingMethodInput | DryingMethod
-  /** Target moisture [% wb]; default the profile's. */
+  /**
+   * Target moisture [% wb]; default: the moisture at which the product's isotherm gives its safe water activity
+   * at the storage temperature, or the profile's moisture figure when that is drier (product/dry-target.ts).
+   */
   targetWbPct?: number
+  /** Temperature of the store at which the dried product's water activity is judged [°C]; default 25. */
+  storageTempC?: number
   /** Initial moisture [% wb]; default the profile's. */
   initialWbPct?: number
   thicknessMm?: number
@@ -84,6 +90,8 @@ export interface ResolvedAssessOptions {
   product: ProductResponse
   initialWbPct: number
   targetWbPct: number
+  /** What "dry" means: target, basis, water activities (product/dry-target.ts). */
+  dryTarget: DryTarget
   initialDb: number
   targetDb: number
   batchKgFresh: number
@@ -124,6 +132,7 @@ export function resolveAssessOptions(options: AssessOptions): ResolvedAssessOpti
     product,
     initialWbPct,
     targetWbPct,
+    dryTarget: plan.dryTarget,
     initialDb: moistureDbFromWbPct(initialWbPct),
     targetDb,
     batchKgFresh,

@@ -36,6 +36,7 @@ import { countMonthly, type MonthlyCounts, monthlyRows } from './monthly-tables.
 import { psychrometricSummary } from './psychrometric.ts'
 import {
   bestStartWindows,
+  knownOutcomes,
   runStart,
   type StartContext,
   type StartOutcome,
@@ -113,12 +114,24 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
       heat,
       psychrometric: psychrometric(),
       bin,
+      unknownBatches: { count: 0, missingHours: 0 },
     })
   }
-  monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
+  const monthlyUnknown = monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
   const starts = startDatesStage(ctx, calendar.years, run)
-  const heat = heatSummary(starts.table.outcomes, backup, run, ctx)
-  return assembleAssessment(series, run, { primary, calendar, starts, heat, psychrometric: psychrometric() })
+  const heat = heatSummary(knownOutcomes(starts.table.outcomes), backup, run, ctx)
+  const unknown = [...monthlyUnknown, ...starts.table.outcomes.filter((o) => o.unknown)]
+  return assembleAssessment(series, run, {
+    primary,
+    calendar,
+    starts,
+    heat,
+    psychrometric: psychrometric(),
+    unknownBatches: {
+      count: unknown.length,
+      missingHours: unknown.reduce((sum, o) => sum + o.missingHours, 0),
+    },
+  })
 }
 
 /** The best windows of a bin assessment: none (its answer is the minimum airflow per start month). */
@@ -228,13 +241,18 @@ export function monthlyHeatStage(
   monthly: MonthlyRow[],
   years: number[],
   run: ResolvedAssessOptions,
-): void {
+): StartOutcome[] {
+  const unknown: StartOutcome[] = []
   for (let month = 1; month <= 12; month++) {
     const outcomes: StartOutcome[] = []
     for (const day of MONTHLY_HEAT_START_DAYS) {
       for (const year of years) {
         const index = startIndexFor(ctx, year, { month, day })
-        if (index !== null) outcomes.push(runStart(ctx, index))
+        if (index === null) continue
+        const o = runStart(ctx, index)
+        // a batch that ran into missing weather has no known outcome: left out, not counted as slow
+        if (o.unknown) unknown.push(o)
+        else outcomes.push(o)
       }
     }
     const row = monthly[month - 1]
@@ -247,6 +265,7 @@ export function monthlyHeatStage(
     row.medianDaysToTarget = roundOrNull(quantileSorted(days, 0.5), 1)
     run.onProgress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
+  return unknown
 }
 
 export interface StartDates {

@@ -13,6 +13,7 @@ import { productResponse } from '../drying/product-response.ts'
 import { parseDryingThresholds } from '../drying/thresholds.ts'
 import { HOUR_STATUS_NAMES, type HourStatusName } from '../drying/usable-hour.ts'
 import { adiabaticHumidityRatioAtRh } from '../physics/air-processes.ts'
+import { resolveDryTarget } from '../product/dry-target.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import type { AssessOptions } from './assess.ts'
@@ -22,7 +23,13 @@ export interface HourDetail {
   startUtc: string
   airC: number | null
   airRhPct: number | null
+  /** Product surface temperature [°C] of a product that evaporates nothing (near its target). */
   productC: number | null
+  /**
+   * Exposed methods: surface temperature [°C] of a product that still holds free water (cooled by what it
+   * evaporates); a drying batch lies between the two. Null for forced-air methods and covered hours.
+   */
+  productWetC: number | null
   surfaceRhPct: number | null
   deficitToSaturationGPerKg: number | null
   deficitToTargetGPerKg: number | null
@@ -65,7 +72,10 @@ export function hourlyDetail(
   const profile = options.product
   const method = parseDryingMethod(options.method)
   const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
-  const targetDb = moistureDbFromWbPct(options.targetWbPct ?? profile.targetMoistureWbPct.value)
+  const targetDb = moistureDbFromWbPct(
+    resolveDryTarget(profile, { userTargetWbPct: options.targetWbPct, storageTempC: options.storageTempC })
+      .targetWbPct,
+  )
   const response = productResponse(profile, options.thicknessMm)
   const c = computeHourlyConditions(slice, method, response, {
     targetDb,
@@ -91,6 +101,7 @@ export function hourlyDetail(
       airC: roundOrNull(c.airC[i], 2),
       airRhPct: roundOrNull(c.airRhPct[i], 1),
       productC: roundOrNull(c.productC[i], 2),
+      productWetC: c.surfaceBalance ? roundOrNull(c.productWetC[i], 2) : null,
       surfaceRhPct: roundOrNull(c.surfaceRhPct[i], 1),
       deficitToSaturationGPerKg: roundOrNull(dSat, 3),
       deficitToTargetGPerKg: roundOrNull(c.deficitToTargetGPerKg[i], 3),

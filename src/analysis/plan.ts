@@ -8,6 +8,7 @@
 import { parseDryingMethod } from '../drying/method.ts'
 import { methodModel } from '../drying/methods/index.ts'
 import { binAirflows, type NaturalAirBinMethod } from '../drying/methods/natural-air-bin.ts'
+import { type DryTarget, resolveDryTarget, STORAGE_TEMP_RANGE_C } from '../product/dry-target.ts'
 import type { AssessOptions } from './assess.ts'
 import { parseMonthDay } from './local-time.ts'
 import { type MonthDay, seasonDays } from './start-dates.ts'
@@ -40,6 +41,8 @@ export const ASSESS_DEFAULTS = {
 export const ASSESS_RANGES = {
   initialWbPct: [1, 95],
   targetWbPct: [0.5, 90],
+  /** Temperature of the store at which the dried product's water activity is judged (product/dry-target.ts). */
+  storageTempC: STORAGE_TEMP_RANGE_C,
   deadlineDays: [0.25, 365],
   /** Lower bound: the deadline. */
   maxDays: [0.25, 366],
@@ -77,6 +80,8 @@ export class AssessOptionError extends RangeError {
 export interface AssessPlan {
   initialWbPct: number
   targetWbPct: number
+  /** What "dry" means: the target, its basis (water activity, the profile's moisture or the user's) and the water activities. */
+  dryTarget: DryTarget
   deadlineDays: number
   maxDays: number
   batchKgFresh: number
@@ -108,7 +113,20 @@ function checkRange(
 export function planAssessment(options: AssessOptions): AssessPlan {
   const profile = options.product
   const initialWbPct = options.initialWbPct ?? profile.initialMoistureWbPct.value
-  const targetWbPct = options.targetWbPct ?? profile.targetMoistureWbPct.value
+  if (options.storageTempC !== undefined) {
+    checkRange(
+      'storageTempC',
+      'storage temperature',
+      options.storageTempC,
+      ...ASSESS_RANGES.storageTempC,
+      '°C',
+    )
+  }
+  const dryTarget = resolveDryTarget(profile, {
+    userTargetWbPct: options.targetWbPct,
+    storageTempC: options.storageTempC,
+  })
+  const targetWbPct = dryTarget.targetWbPct
   checkRange('initialWbPct', 'initial moisture', initialWbPct, ...ASSESS_RANGES.initialWbPct, '% wb')
   checkRange('targetWbPct', 'target moisture', targetWbPct, ...ASSESS_RANGES.targetWbPct, '% wb')
   if (!(targetWbPct < initialWbPct)) {
@@ -170,6 +188,7 @@ export function planAssessment(options: AssessOptions): AssessPlan {
   return {
     initialWbPct,
     targetWbPct,
+    dryTarget,
     deadlineDays,
     maxDays,
     batchKgFresh,

@@ -34,7 +34,14 @@ export interface StartContext {
 }
 
 export interface StartOutcome {
-  /** Hours to target by the method alone; +Infinity when not within the maximum duration. */
+  /**
+   * True when the batch ran into hours without weather: its outcome is unknown, and it is left out of every
+   * time, probability and heat figure (counted in `yearsUnknown` instead).
+   */
+  unknown: boolean
+  /** Hours without weather the batch ran into. */
+  missingHours: number
+  /** Hours to target by the method alone; +Infinity when not within the maximum duration; NaN when unknown. */
   hoursToTarget: number
   withinDeadline: boolean
   rewettingHours: number
@@ -96,16 +103,24 @@ export function runStart(ctx: StartContext, index: number): StartOutcome {
     },
     ctx.deadlineHours,
   )
-  const hours = r.natural.reached ? r.natural.hoursToTarget : Number.POSITIVE_INFINITY
+  const unknown = r.natural.outcomeUnknown
+  const hours = unknown ? Number.NaN : r.natural.reached ? r.natural.hoursToTarget : Number.POSITIVE_INFINITY
   return {
+    unknown,
+    missingHours: r.natural.missingHours,
     hoursToTarget: hours,
     withinDeadline: hours <= ctx.deadlineHours,
     rewettingHours: r.natural.rewettingHours,
     rainExposureHours: r.natural.rainExposureHours,
-    heatKwhPerTonne: r.heatKwhPerTonne,
+    heatKwhPerTonne: unknown ? Number.NaN : r.heatKwhPerTonne,
     solarKwhPerTonne: r.natural.solarKwhPerTonne,
     strategy: r.strategy,
   }
+}
+
+/** The outcomes whose batches met no missing weather (the others are unknown, not slow). */
+export function knownOutcomes(outcomes: StartOutcome[]): StartOutcome[] {
+  return outcomes.filter((o) => !o.unknown)
 }
 
 function sortedFinite(values: number[]): number[] {
@@ -121,13 +136,16 @@ function medianP90(values: number[], digits: number): { median: number | null; p
 }
 
 /** Summarise the outcomes of one start day across years. */
-export function startDateRow(start: MonthDay, outcomes: StartOutcome[]): StartDateRow {
+export function startDateRow(start: MonthDay, all: StartOutcome[]): StartDateRow {
+  const outcomes = knownOutcomes(all)
   const n = outcomes.length
   const days = outcomes.map((o) => o.hoursToTarget / 24)
   const heat = outcomes.map((o) => o.heatKwhPerTonne)
   return {
     start: formatMonthDay(start),
     years: n,
+    yearsUnknown: all.length - n,
+    missingWeatherHours: all.reduce((sum, o) => sum + (o.unknown ? o.missingHours : 0), 0),
     daysToTarget: medianP90(days, 1),
     probabilityWithinDeadline:
       n > 0 ? (roundOrNull(outcomes.filter((o) => o.withinDeadline).length / n, 3) ?? 0) : 0,
@@ -156,7 +174,7 @@ export function startDateRow(start: MonthDay, outcomes: StartOutcome[]): StartDa
 
 export interface StartTableResult {
   rows: StartDateRow[]
-  /** Every outcome, for season-wide heat figures. */
+  /** Every outcome, for season-wide heat figures (unknown ones included: filter with {@link knownOutcomes}). */
   outcomes: StartOutcome[]
   batches: number
   skipped: number

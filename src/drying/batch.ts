@@ -3,15 +3,21 @@
  * One batch, hour by hour, over precomputed {@link HourlyConditions} (docs/model.md §7):
  * - drying (M above the desorption equilibrium): thin-layer step by equivalent time
  *   (drying/product-response.ts), never removing more than the hour's constant-rate limit (wet-surface
- *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air);
+ *   evaporation for exposed products, humidity-ratio deficit × air mass for forced air); an exposed product's
+ *   temperature follows its surface balance between the wet-surface and the no-evaporation temperature by the
+ *   share of the wet-surface rate it evaporates ({@link surfaceBalancedDrop});
  * - rewetting (M below the adsorption equilibrium): M → Me_ads − (Me_ads − M)·exp(−f·k·1 h), f the profile's
- *   rewetting rate factor (Lewis form; stated simplification);
+ *   rewetting rate factor (Lewis form; stated simplification); an exposed product never takes up more than the
+ *   vapour the air delivers to its surface in the hour ({@link vaporUptakeLimitDb});
  * - rain on an exposed product: rewetting toward the equilibrium at 99.5 % RH, counted as rain exposure;
  *   that water comes from rain, not from the air;
- * - paused (covered, fans off) and missing hours: no change.
+ * - paused (covered, fans off) and missing hours: no change; a batch that meets missing hours has an unknown
+ *   outcome (`outcomeUnknown`), which the assessment reports as such, never as a slow batch.
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of docs/model.md §8.
  */
+
+import { surfaceBalancedDrop } from '../product/stepping.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'
 import {
@@ -46,7 +52,14 @@ export interface BatchResult {
   finalDb: number
   rewettingHours: number
   rainExposureHours: number
+  /** Hours without weather the batch ran into before it ended (the product is held unchanged through them). */
   missingHours: number
+  /**
+   * True when the batch ran into hours without weather before it reached its target or its maximum duration:
+   * what the product did in them is not known, so neither is the batch's outcome (reported as unknown, not
+   * as slow).
+   */
+  outcomeUnknown: boolean
   /** Hours in which the backup (heated) air was used. */
   backupHours: number
   /** Heat from the heater into the air [kWh per tonne fresh]. */
@@ -59,6 +72,11 @@ export interface BatchResult {
   waterFromRainDb: number
   /** Moisture [kg/kg db] after each hour, when recordTrace. */
   trace?: Float64Array
+  /**
+   * Product (surface) temperature [°C] in each hour, when recordTrace: from its surface balance in drying hours
+   * of exposed methods, the conditions' product temperature in other hours, NaN in covered and missing hours.
+   */
+  productTrace?: Float64Array
   /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
   usedBackup?: Uint8Array
 }
@@ -92,7 +110,12 @@ export function simulateBatch(
   backup?.ensure(startIndex, maxHours, wrap)
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
+  const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const ts = product.thompsonTimeScale
+  // the caps are per kg of the dry matter of the conditions' initial moisture; this batch's dry matter per
+  // tonne fresh (or per m²) is 1/(1 + initialDb): rescale so the water per kg of air is what the air carries
+  const capScalePrimary = (1 + initialDb) / (1 + primary.capInitialDb)
+  const capScaleBackup = backup === undefined ? 1 : (1 + initialDb) / (1 + backup.capInitialDb)
   let m = initialDb
   let rewettingHours = 0
   let rainExposureHours = 0
@@ -133,44 +156,34 @@ export function simulateBatch(
       solar += c.solarKwhPerTonne[i]
       if (mode === HourMode.rainExposed) {
         rainExposureHours++
-        // rain-wetted surface: toward the equilibrium at the highest RH evaluated
-        const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
-        if (meWet > m) {
-          const next = meWet - (meWet - m) * c.rewetDecayPerHour[i]
-          fromRain += next - m
-          m = next
-        }
+        const next = rainWettedDb(c, i, product, m)
+        fromRain += next - m
+        m = next
       } else {
-        const meDes = c.emcDesorptionDb[i]
-        const meAds = c.emcAdsorptionDb[i]
-        if (m > meDes) {
-          let next: number
-          const decay = c.decayPerHour[i]
-          if (!Number.isNaN(decay)) {
-            // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
-            next = meDes + (m - meDes) * decay
-          } else if (initialDb > meDes) {
-            const mr = (m - meDes) / (initialDb - meDes)
-            next = meDes + stepMoistureRatio(mr, c.rateK[i], c.rateN[i], 1, ts) * (initialDb - meDes)
-          } else {
-            next = meDes + (m - meDes) * Math.exp(-firstOrderRateConstant(c.rateK[i], c.rateN[i], ts))
+        const capScale = c === primary ? capScalePrimary : capScaleBackup
+        if (m > c.emcDesorptionDb[i]) {
+          const cap = c.capDbPerH[i] * capScale
+          const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          if (productTrace && c.surfaceBalance) {
+            const tDry = c.productC[i]
+            productTrace[h] = cap > 0 ? tDry - (drop / cap) * (tDry - c.productWetC[i]) : tDry
           }
-          let drop = m - next
-          const cap = c.capDbPerH[i]
-          if (drop > cap) drop = cap
           if (drop > 0) {
             m -= drop
             toAir += drop
           }
-        } else if (m < meAds) {
+        } else if (m < c.emcAdsorptionDb[i]) {
           rewettingHours++
-          const next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
+          const next = rewettedDb(c, i, product, m, capScale)
           toAir -= next - m
           m = next
         }
       }
     }
     if (trace) trace[h] = m
+    if (productTrace && Number.isNaN(productTrace[h]) && mode !== HourMode.paused) {
+      productTrace[h] = c.productC[i] // no drying step: the product evaporates nothing
+    }
     if (m <= targetDb) {
       hoursToTarget = h + 1
       break
@@ -185,12 +198,122 @@ export function simulateBatch(
     rewettingHours,
     rainExposureHours,
     missingHours,
+    outcomeUnknown: missingHours > 0,
     backupHours,
     heaterKwhPerTonne: heater,
     solarKwhPerTonne: solar,
     waterToAirDb: toAir,
     waterFromRainDb: fromRain,
     trace,
+    productTrace,
     usedBackup,
   }
+}
+
+/**
+ * Water [kg/kg db] removed in hour `i` from moisture `m` above the desorption equilibrium: the falling-rate step,
+ * never more than the hour's constant-rate limit `cap`; for exposed methods the product sits on its surface
+ * balance between the wet-surface and the no-evaporation ends ({@link surfaceBalancedDrop}).
+ */
+function dryingDropDb(
+  c: HourlyConditions,
+  i: number,
+  m: number,
+  cap: number,
+  initialDb: number,
+  ts: number,
+): number {
+  const dropDry = fallingRateDrop(
+    m,
+    c.emcDesorptionDb[i],
+    c.decayPerHour[i],
+    c.rateK[i],
+    c.rateN[i],
+    initialDb,
+    ts,
+  )
+  if (!c.surfaceBalance) {
+    // (not Math.min: a NaN limit leaves the step as it is, as it always has)
+    if (dropDry > cap) return cap
+    return dropDry
+  }
+  const dropWet = fallingRateDrop(
+    m,
+    c.emcWetDb[i],
+    c.decayWetPerHour[i],
+    c.rateKWet[i],
+    c.rateNWet[i],
+    initialDb,
+    ts,
+  )
+  return surfaceBalancedDrop(dropDry, dropWet, cap)
+}
+
+/**
+ * Moisture [kg/kg db] after hour `i` of a product at `m` below the adsorption equilibrium: first order toward
+ * it at the rewetting rate, and for an exposed product never more than the vapour the air delivers
+ * ({@link vaporUptakeLimitDb}, × `capScale` for the batch's dry matter).
+ */
+function rewettedDb(
+  c: HourlyConditions,
+  i: number,
+  product: ProductResponse,
+  m: number,
+  capScale: number,
+): number {
+  const meAds = c.emcAdsorptionDb[i]
+  const next = meAds - (meAds - m) * c.rewetDecayPerHour[i]
+  if (!c.surfaceBalance) return next
+  const limit = vaporUptakeLimitDb(c, i, product, m) * capScale
+  return next - m > limit ? m + Math.max(0, limit) : next
+}
+
+/** Moisture [kg/kg db] after a rain-exposed hour: toward the equilibrium at the highest RH evaluated (the rain-wetted surface). */
+function rainWettedDb(c: HourlyConditions, i: number, product: ProductResponse, m: number): number {
+  const meWet = product.emcAdsorptionDb(c.productC[i], EMC_RH_CAP_PCT)
+  return meWet > m ? meWet - (meWet - m) * c.rewetDecayPerHour[i] : m
+}
+
+/**
+ * Most water [kg/kg db] an exposed product at moisture `m` can take up from the air in hour `i`: the vapour the
+ * air delivers to its surface through the conductance of the wet-surface balance, g·(ea − aw·es(T)), at the
+ * product's water activity aw (its isotherm at `m`) and the temperature of a surface that exchanges no latent
+ * heat; the heat released by the uptake warms the surface, so the true uptake is less (an upper bound). The
+ * first-order approach to the adsorption equilibrium alone takes up water in proportion to that equilibrium,
+ * which grows without bound as the surface RH nears 100 % (a radiatively cooled product at dawn). +Infinity
+ * when the hour has no conductance (no limit known).
+ */
+function vaporUptakeLimitDb(c: HourlyConditions, i: number, product: ProductResponse, m: number): number {
+  const air = c.vaporUptakeAirDbPerH[i]
+  if (!(air >= 0)) return Number.POSITIVE_INFINITY
+  const aw = product.erhPct(c.productC[i], m) / 100
+  return air - aw * c.vaporUptakeSurfaceDbPerH[i]
+}
+
+/**
+ * Water [kg/kg db] a falling-rate step of one hour removes from moisture `m` toward equilibrium `me` with the
+ * hour's step parameters (first order: exp(−k) as `decay`; Page and Thompson: equivalent time from the batch's
+ * `initialDb`); 0 when m is not above me.
+ */
+function fallingRateDrop(
+  m: number,
+  me: number,
+  decay: number,
+  k: number,
+  nExp: number,
+  initialDb: number,
+  ts: number,
+): number {
+  if (!(m > me)) return 0
+  let next: number
+  if (!Number.isNaN(decay)) {
+    // first order: equivalent-time stepping reduces to M' = Me + (M − Me)·exp(−k)
+    next = me + (m - me) * decay
+  } else if (initialDb > me) {
+    const mr = (m - me) / (initialDb - me)
+    next = me + stepMoistureRatio(mr, k, nExp, 1, ts) * (initialDb - me)
+  } else {
+    next = me + (m - me) * Math.exp(-firstOrderRateConstant(k, nExp, ts))
+  }
+  return m - next
 }

@@ -45,8 +45,32 @@ export interface HourColumns {
   airC: Float64Array
   /** RH of that air [%]. */
   airRhPct: Float64Array
-  /** Product (surface) temperature [°C]. */
+  /**
+   * Product (surface) temperature [°C] of a product that evaporates nothing (near its target, or stopped):
+   * the temperature of the verdict, the deficits and the equilibrium columns below.
+   */
   productC: Float64Array
+  /**
+   * Exposed methods: surface temperature [°C] of the product while it holds free water (evaporating at the
+   * wet-surface rate); a batch's product lies between it and {@link productC}. NaN for paused and missing
+   * hours; empty (length 0) for forced-air methods.
+   */
+  productWetC: Float64Array
+  /** Exposed methods: desorption equilibrium [kg/kg db] at {@link productWetC} and the surface RH there; empty otherwise. */
+  emcWetDb: Float64Array
+  /** Exposed methods: the step parameters k, n and exp(−k·1 h) (n = 1) at {@link productWetC}; empty otherwise. */
+  rateKWet: Float64Array
+  rateNWet: Float64Array
+  decayWetPerHour: Float64Array
+  /**
+   * Exposed methods: most water the product can take up from the air in the hour [kg per kg dry matter per h]
+   * is vaporUptakeAirDbPerH − aw·vaporUptakeSurfaceDbPerH, aw the product's water activity: the vapour
+   * conductance of the wet-surface balance (per kg dry matter, as {@link capDbPerH}) times the ambient vapour
+   * pressure and times the saturation pressure at {@link productC}. NaN in paused and missing hours; empty
+   * (length 0) for forced-air methods.
+   */
+  vaporUptakeAirDbPerH: Float64Array
+  vaporUptakeSurfaceDbPerH: Float64Array
   /** RH at the product surface [%]: ambient vapour pressure over saturation at the product temperature. */
   surfaceRhPct: Float64Array
   /** Saturation pressure of the ambient air, exp(ln pws) [Pa] (ASHRAE HOF 2017 ch. 1 eq 6); NaN for missing and not yet computed hours. */
@@ -59,7 +83,10 @@ export interface HourColumns {
   deficitToTargetGPerKg: Float64Array
   /** Wet-surface (Penman) evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN for forced-air methods and covered hours. */
   evaporationKgPerM2H: Float64Array
-  /** Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit. */
+  /**
+   * Most water the hour can remove [kg per kg dry matter per h]: the constant-rate limit, per kg of the dry
+   * matter of fresh product at `initialWbPct` (see {@link HourlyConditions.capInitialDb}).
+   */
   capDbPerH: Float64Array
   emcDesorptionDb: Float64Array
   /** The same array as {@link emcDesorptionDb} when the profile has one isotherm for both directions. */
@@ -89,6 +116,18 @@ export interface HourlyConditions extends HourColumns {
   method: DryingMethod
   /** Dry-air flow per tonne of fresh product [kg/s]; 0 for exposed methods. */
   airFlowKgPerSPerTonne: number
+  /**
+   * True for exposed methods: the product's temperature follows its surface energy balance, between
+   * {@link HourColumns.productWetC} and {@link HourColumns.productC} by the share of the wet-surface rate it
+   * evaporates (drying/batch.ts). False: the product is at {@link HourColumns.productC} whatever it evaporates.
+   */
+  surfaceBalance: boolean
+  /**
+   * Initial moisture [kg/kg db] whose dry matter per kg of fresh product {@link capDbPerH} is per (from
+   * `initialWbPct`): a batch that starts at another moisture has another dry matter per tonne (or per m²)
+   * and rescales the cap by (1 + its M0)/(1 + this), so the water per kg of air stays what the air can carry.
+   */
+  capInitialDb: number
   /** Hours whose irradiance or wind was missing and was taken as 0 W/m² / the default wind of drying/hourly-conditions.ts (hours computed when the object was returned). */
   assumedIrradianceHours: number
   assumedWindHours: number
@@ -100,6 +139,7 @@ export function allocateColumns(
   n: number,
   options: HourlyConditionsOptions,
   sameIsotherm: boolean,
+  surfaceBalance: boolean,
 ): HourColumns {
   const verdict = options.verdict !== false
   const diagnostics = options.diagnostics !== false
@@ -118,6 +158,13 @@ export function allocateColumns(
     airC: f(n),
     airRhPct: f(nDiagnostic),
     productC: f(n),
+    productWetC: f(surfaceBalance ? n : 0),
+    emcWetDb: f(surfaceBalance ? n : 0),
+    rateKWet: f(surfaceBalance ? n : 0),
+    rateNWet: f(surfaceBalance ? n : 0),
+    decayWetPerHour: f(surfaceBalance ? n : 0),
+    vaporUptakeAirDbPerH: f(surfaceBalance ? n : 0),
+    vaporUptakeSurfaceDbPerH: f(surfaceBalance ? n : 0),
     surfaceRhPct: f(nDiagnostic),
     humidityRatio: f(nDiagnostic),
     deficitToSaturationGPerKg: f(nDiagnostic),
@@ -141,6 +188,7 @@ export function allocateColumns(
     // hours not yet computed read as missing temperatures, never as 0 °C
     columns.airC.fill(Number.NaN)
     columns.productC.fill(Number.NaN)
+    columns.productWetC.fill(Number.NaN)
     if (shared === undefined) columns.ambientSaturationPa.fill(Number.NaN)
   }
   return columns

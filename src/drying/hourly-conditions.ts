@@ -13,36 +13,25 @@
  * at the product temperature), the product's equilibrium moisture and drying rate there
  * (drying/product-response.ts), the humidity-ratio deficits along the adiabatic path
  * (physics/air-processes.ts), the constant-rate limit and the verdict (drying/usable-hour.ts).
- * Columns preallocated, one state object per series: no allocation per hour.
+ * Columns preallocated, one state object per series (drying/hour-engine.ts): no allocation per hour. The
+ * product's side of an hour is in drying/hour-product.ts.
  */
 
-import { AdiabaticPath, adiabaticEndDryBulbC, solveAdiabaticPath } from '../physics/air-processes.ts'
 import { S_PER_HOUR } from '../physics/constants.ts'
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
 import { saturationPressureLiquidPa } from '../physics/saturation.ts'
-import { moistureWbPctFromDb } from '../product/moisture-basis.ts'
+import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
-import {
-  allocateColumns,
-  type HourColumns,
-  type HourlyConditions,
-  type HourlyConditionsOptions,
-} from './hour-columns.ts'
+import { allocateColumns, type HourlyConditions, type HourlyConditionsOptions } from './hour-columns.ts'
+import { Engine } from './hour-engine.ts'
+import { productHour } from './hour-product.ts'
 import type { DryingMethod } from './method.ts'
 import { methodModel } from './methods/index.ts'
-import { HourMode, MethodHour, type MethodHourFunction, type MethodModel } from './methods/method-model.ts'
-import {
-  EMC_RH_CAP_PCT,
-  firstOrderRateConstant,
-  HOUR_EMC_ADSORPTION,
-  HOUR_EMC_DESORPTION,
-  HOUR_RATE_K,
-  HOUR_RATE_N,
-  type ProductResponse,
-} from './product-response.ts'
+import { HourMode } from './methods/method-model.ts'
+import type { ProductResponse } from './product-response.ts'
 import { computeSolarColumns } from './solar-columns.ts'
-import { HourStatus, HourVerdict, pausedHourStatus, usableHourStatus } from './usable-hour.ts'
+import { HourStatus, pausedHourStatus } from './usable-hour.ts'
 
 export type { HourColumns, HourlyConditions, HourlyConditionsOptions } from './hour-columns.ts'
 export { HourMode } from './methods/method-model.ts'
@@ -53,46 +42,6 @@ export const DEFAULT_WIND_MS = 1
 /** Weather accepted for an hour [°C, % RH, kPa]; outside, the hour counts as missing data (our choice). */
 const HOUR_DRY_BULB_RANGE_C = [-60, 70] as const
 const HOUR_PRESSURE_RANGE_KPA = [30, 110] as const
-
-/**
- * Everything the hour computation reads and the few numbers it carries from hour to hour, in one object
- * (fields, not captured `let` variables, which V8 would box).
- */
-class Engine {
-  readonly hour = new MethodHour()
-  readonly path = new AdiabaticPath()
-  readonly verdictInput = new HourVerdict()
-  /** [EMC desorption, EMC adsorption, k, n] of the hour (product-response.ts HOUR_* slots). */
-  readonly response = new Float64Array(4)
-  readonly step = new Float64Array(2)
-  /** Cooling along the adiabatic path in the previous hour [K], to saturation and to the target ERH: the solver's start. */
-  depressionToSaturationK = 0
-  depressionToTargetK = 0
-  /** The last heated or damped air temperature evaluated [°C] and its exp(ln pws) [Pa] (often held hour after hour). */
-  heldAirC = Number.NaN
-  heldSaturationPa = Number.NaN
-  assumedIrradianceHours = 0
-  assumedWindHours = 0
-  readonly exposed: boolean
-  constructor(
-    readonly series: HourlySeries,
-    readonly columns: HourColumns,
-    readonly methodHour: MethodHourFunction,
-    readonly model: MethodModel,
-    readonly product: ProductResponse,
-    readonly options: HourlyConditionsOptions,
-    readonly altitudeDeg: Float64Array,
-    /** FAO-56 eq 47 is linear in the wind: its height factor, computed once. */
-    readonly windTo2m: number,
-    readonly hasCoords: boolean,
-    readonly sharedSaturation: boolean,
-    readonly verdict: boolean,
-    readonly exposedCapFactor: number,
-    readonly forcedCapFactor: number,
-  ) {
-    this.exposed = model.exposure === 'exposed'
-  }
-}
 
 /**
  * The ambient air of hour i into `e.hour` (and the night, saturation and humidity-ratio columns). False
@@ -147,11 +96,13 @@ function readAmbientHour(e: Engine, i: number): boolean {
   // outputs the method may leave alone
   hour.airC = t
   hour.productC = t
+  hour.productWetC = Number.NaN
   hour.mode = HourMode.active
   hour.pausedByNight = false
   hour.coveredForRain = false
   hour.uncoveredNight = false
   hour.evaporationKgPerM2H = Number.NaN
+  hour.vaporConductanceKgPerM2HKpa = Number.NaN
   hour.heaterKwhPerTonne = 0
   hour.solarKwhPerTonne = 0
   return true
@@ -163,6 +114,8 @@ function markMissing(e: Engine, i: number): void {
   c.mode[i] = HourMode.missing
   c.status[i] = HourStatus.missingData
   c.airC[i] = c.airRhPct[i] = c.productC[i] = c.surfaceRhPct[i] = c.humidityRatio[i] = Number.NaN
+  c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
+  c.vaporUptakeAirDbPerH[i] = c.vaporUptakeSurfaceDbPerH[i] = Number.NaN
   c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = c.evaporationKgPerM2H[i] = Number.NaN
   c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
 }
@@ -176,97 +129,6 @@ function airSaturationPa(e: Engine, airC: number): number {
   e.heldAirC = airC
   e.heldSaturationPa = pa
   return pa
-}
-
-/**
- * Humidity-ratio deficit [kg/kg] of the air at the product (its temperature `productC`, the ambient W)
- * to RH `rhFraction` along the adiabatic path, started from the previous hour's cooling `depressionK`.
- */
-function deficitAlongPath(
-  e: Engine,
-  productC: number,
-  rhFraction: number,
-  depressionK: number,
-  saturationPa: number,
-): number {
-  const path = e.path
-  const hour = e.hour
-  path.dryBulbC = productC
-  path.humidityRatio = hour.humidityRatio
-  path.pressureKpa = hour.pressureKpa
-  path.endRhFraction = rhFraction
-  path.guessC = productC - depressionK
-  path.saturationPa = saturationPa
-  solveAdiabaticPath(path)
-  return path.endHumidityRatio - hour.humidityRatio
-}
-
-/** The product's response, the deficits, the limit and the verdict of an hour in which it meets the air. */
-function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceSaturationPa: number): void {
-  const { columns: c, hour, product, response } = e
-  const tProduct = hour.productC
-  const w = hour.humidityRatio
-  const rhForEmc = Math.min(surfaceRhPct, EMC_RH_CAP_PCT)
-  if (product.hourResponse !== undefined) product.hourResponse(tProduct, rhForEmc, response)
-  else {
-    response[HOUR_EMC_DESORPTION] = product.emcDesorptionDb(tProduct, rhForEmc)
-    if (c.emcAdsorptionDb !== c.emcDesorptionDb) {
-      response[HOUR_EMC_ADSORPTION] = product.emcAdsorptionDb(tProduct, rhForEmc)
-    }
-    product.stepParameters(tProduct, rhForEmc, e.step)
-    response[HOUR_RATE_K] = e.step[0]
-    response[HOUR_RATE_N] = e.step[1]
-  }
-  const k = response[HOUR_RATE_K]
-  const nExp = response[HOUR_RATE_N]
-  c.emcDesorptionDb[i] = response[HOUR_EMC_DESORPTION]
-  if (c.emcAdsorptionDb !== c.emcDesorptionDb) c.emcAdsorptionDb[i] = response[HOUR_EMC_ADSORPTION]
-  c.rateK[i] = k
-  c.rateN[i] = nExp
-  c.decayPerHour[i] = nExp === 1 ? Math.exp(-k) : Number.NaN
-  c.rewetDecayPerHour[i] = Math.exp(
-    -product.rewettingRateFactor * firstOrderRateConstant(k, nExp, product.thompsonTimeScale),
-  )
-  // Deficits are taken for air at the product temperature (it is what touches the product).
-  // Deficit to saturation: the forced-air constant-rate limit. Exposed methods use the Penman rate as
-  // their limit and skip it (NaN), which saves a solver per hour.
-  const exposed = e.exposed
-  let dSat = Number.NaN
-  if (!exposed) {
-    dSat =
-      surfaceRhPct >= 100
-        ? 0
-        : deficitAlongPath(e, tProduct, 1, e.depressionToSaturationK, surfaceSaturationPa)
-    if (dSat > 0) e.depressionToSaturationK = tProduct - adiabaticEndDryBulbC(tProduct, w, dSat)
-  }
-  c.deficitToSaturationGPerKg[i] = 1000 * dSat
-  const erhTarget = e.verdict ? product.erhPct(tProduct, e.options.targetDb) : Number.NaN
-  let dTarget = Number.NaN
-  if (e.verdict) {
-    dTarget =
-      surfaceRhPct >= erhTarget
-        ? 0
-        : deficitAlongPath(e, tProduct, erhTarget / 100, e.depressionToTargetK, surfaceSaturationPa)
-    if (dTarget > 0) e.depressionToTargetK = tProduct - adiabaticEndDryBulbC(tProduct, w, dTarget)
-  }
-  c.deficitToTargetGPerKg[i] = 1000 * dTarget
-  const evaporation = hour.evaporationKgPerM2H
-  c.evaporationKgPerM2H[i] = evaporation
-  c.capDbPerH[i] = exposed ? Math.max(0, evaporation) * e.exposedCapFactor : dSat * e.forcedCapFactor
-  if (!e.verdict) {
-    c.status[i] = HourStatus.usable
-    return
-  }
-  const v = e.verdictInput
-  v.pausedByNight = hour.pausedByNight
-  v.coveredForRain = hour.coveredForRain
-  v.rainExposed = hour.mode === HourMode.rainExposed
-  v.uncoveredNight = hour.uncoveredNight
-  v.productC = tProduct
-  v.surfaceRhPct = surfaceRhPct
-  v.targetErhPct = erhTarget
-  v.deficitToTargetGPerKg = 1000 * dTarget
-  c.status[i] = usableHourStatus(v, e.options.thresholds, e.options.maxProductTempC)
 }
 
 /** Compute hour i of the series into the columns. */
@@ -293,6 +155,8 @@ function computeHour(e: Engine, i: number): void {
   c.surfaceRhPct[i] = rhSurface
   if (hour.mode === HourMode.paused) {
     // covered product or fans off: no exchange with the air, so nothing else is needed for this hour
+    c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
+    c.vaporUptakeAirDbPerH[i] = c.vaporUptakeSurfaceDbPerH[i] = Number.NaN
     c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
     c.rateK[i] = c.rateN[i] = c.decayPerHour[i] = c.rewetDecayPerHour[i] = Number.NaN
     c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = Number.NaN
@@ -322,7 +186,13 @@ export function computeHourlyConditions(
     options.solar !== undefined && (!model.needs.sunAzimuth || options.solar.azimuthDeg.length === n)
       ? options.solar
       : computeSolarColumns(series)
-  const columns = allocateColumns(n, options, product.profile.isotherm.adsorption === undefined)
+  const surfaceBalance = model.exposure === 'exposed'
+  const columns = allocateColumns(
+    n,
+    options,
+    product.profile.isotherm.adsorption === undefined,
+    surfaceBalance,
+  )
   const dmPerKgFresh = 1 - options.initialWbPct / 100
   const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method)
   const methodHour = model.prepare(method, {
@@ -333,6 +203,11 @@ export function computeHourlyConditions(
     solar,
     thresholds: options.thresholds,
     maxProductTempC: options.maxProductTempC,
+    product: {
+      shape: product.profile.kinetics.shape,
+      sizeMm: product.thicknessMm,
+      loadingKgPerM2: options.loadingKgPerM2,
+    },
   })
   const e = new Engine(
     series,
@@ -360,6 +235,8 @@ export function computeHourlyConditions(
     hours: n,
     method,
     airFlowKgPerSPerTonne,
+    surfaceBalance,
+    capInitialDb: moistureDbFromWbPct(options.initialWbPct),
     assumedIrradianceHours: 0,
     assumedWindHours: 0,
     noRainData: !anyRain,

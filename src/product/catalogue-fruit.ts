@@ -1,6 +1,6 @@
 /**
  * @module product/catalogue-fruit
- * Fruit and vegetable profiles. Only monolayer values were read for the sugar-rich fruit isotherms: their C and
+ * Fruit profiles (vegetables: catalogue-vegetables.ts). Only monolayer values were read for the sugar-rich fruit isotherms: their C and
  * K and any temperature term are from memory (type III sugar isotherms, C ≈ 1–6, K ≈ 0.9–1.0). Publications with
  * full temperature-dependent constants exist (Kaymak-Ertekin & Gedik 2004, LWT 37:429: grapes, apricots, apples
  * and potatoes at 30/45/60 °C, Halsey best; Tsami, Marinos-Kouris & Maroulis 1990 for raisins, figs, prunes and
@@ -8,6 +8,7 @@
  * fitted by dryhours to one published drying time under stated assumed mean conditions.
  */
 
+import { calibratedConstant } from './calibration.ts'
 import {
   ASSUMED_EA_J_PER_MOL,
   ASSUMED_EA_SOURCE,
@@ -21,33 +22,35 @@ import {
   sourced,
 } from './catalogue-helpers.ts'
 import {
-  ALAM_ISLAM_2015,
-  BHONG_KALE_2020,
   CODEX_APRICOTS_VIA_SUMMARY,
   COSTA_FUJI_APPLE,
-  DOYMAZ_2007,
   DOYMAZ_2012,
   ESMAIILI_2014,
-  HOSSAIN_BALA_2007,
-  MEGHWAR_PJAR,
   MORAES_2008_APPLE,
   NEWMAN_1996,
   OKSAR_2017,
   PAVKOV_2021,
   REJABOV_2024,
-  SIMAL_2005,
   USDA_RAISIN_GRADES,
 } from './citations.ts'
-import type { ProductProfile } from './profile.ts'
+import { derivePretreatedVariant } from './pretreatment-variants.ts'
+import type { KineticsSpec, ProductProfile, Sourced } from './profile.ts'
 
-const FRUIT_CAUTIONS = [
+/** Kinetics with a surface (skin) resistance: the mass-transfer Biot number at the reference size. */
+function withSkin(spec: KineticsSpec, biotNumber: Sourced<number>): KineticsSpec {
+  return { ...spec, biotNumber }
+}
+
+export const FRUIT_CAUTIONS = [
   'Reach the water-activity target before storage: moulds and osmophilic yeasts spoil under-dried fruit.',
   'Protect from dust, insects, birds, rain and dew; cover or bring in at night.',
 ]
 const SUGAR_GAB_MEMORY =
   'C = 3, K = 1.0 and no temperature term: from memory (type III sugar-fruit isotherm; Maroulis et al. 1988, J. Food Eng. 7:63, and Tsami et al. 1990, J. Food Sci. 55:1594, not read)'
 
-const GRAPE_LEWIS_FIT = `Lewis k fitted by dryhours to ${DOYMAZ_2012}: seedless grapes 17.2 mm, open sun, 78.2 → 22 % wb in 176 h, assuming a constant mean 35 °C and 35 % RH at the fruit (Me from the isotherm) around the clock`
+const GRAPE_K = calibratedConstant('grapes-to-raisins', 'k.kRefPerH')
+const GRAPE_LEWIS_FIT = GRAPE_K.source
+const GRAPE_T_REF = `reference temperature 35 °C, set by dryhours, of the k fitted through the engine to ${DOYMAZ_2012} (run ${GRAPE_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the stated activation energy`
 
 export const grapesToRaisins: ProductProfile = {
   id: 'grapes-to-raisins',
@@ -80,17 +83,24 @@ export const grapesToRaisins: ProductProfile = {
       },
     ),
   },
-  kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.01616, 35, ASSUMED_EA_J_PER_MOL) },
-    17.2,
-    'sphere',
-    ASSUMED_EA_SOURCE.source,
-    'memory',
-    {
-      'k.kRefPerH': param(GRAPE_LEWIS_FIT, 'fitted'),
-      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
-      referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
-    },
+  kinetics: withSkin(
+    kinetics(
+      { model: 'lewis', k: arrhenius(GRAPE_K.value, 35, ASSUMED_EA_J_PER_MOL) },
+      17.2,
+      'sphere',
+      ASSUMED_EA_SOURCE.source,
+      'memory',
+      {
+        'k.kRefPerH': param(GRAPE_LEWIS_FIT, 'fitted'),
+        'k.tRefC': param(GRAPE_T_REF, 'fitted'),
+        referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
+      },
+    ),
+    sourced(
+      0.23,
+      `fitted by dryhours to the two berry sizes of ${DOYMAZ_2012}: seedless 17.2 mm in 176 h and seeded 22.0 mm in 228 h to 22 % wb (time ∝ d^1.05), through the first root of the sphere's surface-evaporation condition β cot β = 1 − Bi (Crank 1975); the skin limits drying. The dipped variant keeps it (dipping lowers the skin's resistance; no value read)`,
+      'fitted',
+    ),
   ),
   defaultThicknessMm: sourced(17.2, `${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
   defaultLoadingKgPerM2: sourced(12, 'single layer of bunches on racks or mats; from memory', 'memory'),
@@ -98,34 +108,23 @@ export const grapesToRaisins: ProductProfile = {
 }
 
 export const grapesToRaisinsDipped: ProductProfile = {
-  ...grapesToRaisins,
-  id: 'grapes-to-raisins-dipped',
-  name: 'Grapes to raisins (dipped in alkaline ethyl-oleate emulsion)',
-  variantOf: 'grapes-to-raisins',
-  kinetics: {
-    ...grapesToRaisins.kinetics,
-    equation: { model: 'lewis', k: arrhenius(0.03232, 35, ASSUMED_EA_J_PER_MOL) },
-    source: `untreated grapes k × 2 and Ea: from memory (dipping roughly halves sun-drying time; dipped grapes dried faster than untreated in Doymaz & Pala 2002, J. Food Eng. 52:413, and Mahmutoglu, Emir & Saygi 1996, J. Food Eng. 29:289, but their abstracts give no factor). Whether the untreated calibration run (Doymaz 2012) was dipped is not stated in its abstract. ${ASSUMED_EA_SOURCE.source}`,
-    confidence: 'memory',
-    parameters: {
-      'k.tRefC': param(`${GRAPE_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
-      referenceThicknessMm: param(`${DOYMAZ_2012}: seedless berry size 1.72 cm`, 'published'),
-    },
-  },
+  ...derivePretreatedVariant(grapesToRaisins, 'grapes-to-raisins-dipped'),
   cautions: [
     ...grapesToRaisins.cautions,
     'Use food-grade dipping oil and potassium carbonate at the stated strength.',
   ],
 }
 
+const APRICOT_K = calibratedConstant('apricot-halves', 'k.kRefPerH')
+
 export const apricotHalves: ProductProfile = {
   id: 'apricot-halves',
   name: 'Apricot halves',
   category: 'fruit',
   initialMoistureWbPct: sourced(
-    86,
-    `86 % wb fresh: from memory, inside the 85–90 % of ${REJABOV_2024} (87.5, the middle, is not used yet: test/drying/batch.test.ts hard-codes 86 % for this profile)`,
-    'memory',
+    87.5,
+    `the middle of the 85–90 % wb of fresh apricots in ${REJABOV_2024}`,
+    'fitted',
   ),
   targetMoistureWbPct: sourced(25, `the upper end of 20–25 %, ${CODEX_APRICOTS_VIA_SUMMARY}`, 'transcribed'),
   waterActivityTarget: SAFE_AW_MOULD,
@@ -140,11 +139,22 @@ export const apricotHalves: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.05, 45, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(APRICOT_K.value, 45, 46379) },
     15,
     'slab',
-    `Lewis k = 0.05 h⁻¹ at 45 °C for 15 mm halves: from memory (open-air apricots took 10 days, an indirect natural-convection solar dryer 6 days: E3S Web Conf. 661:02003, 2025, abstract; authors not shown); ${ASSUMED_EA_SOURCE.source}. The published activation energy of untreated apricot halves, 46.379–51.514 kJ/mol (${PAVKOV_2021}), is not applied yet: with it the heated-air mass-balance test (test/drying/batch.test.ts) shows an outlet above saturation, an engine issue to fix first`,
+    '15 mm halves, the size at which k holds: from memory',
     'memory',
+    {
+      'k.kRefPerH': param(APRICOT_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 45 °C, set by dryhours, of the k fitted through the engine to the E3S Web Conf. 661:02003 (2025) open-air run (${APRICOT_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+      'k.activationEnergyJPerMol': param(
+        `${PAVKOV_2021}: hot-air drying of untreated apricot halves at 40–60 °C, activation energy 46.379–51.514 kJ/mol, greater at the greater air velocity; the value for the lower velocity (1.0 m/s) is used`,
+        'published',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(15, 'halved fruit; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(10, 'single layer, cut face up; from memory', 'memory'),
@@ -153,6 +163,8 @@ export const apricotHalves: ProductProfile = {
     'Sulphuring (if used) must follow local food law; declare sulphite (allergen).',
   ],
 }
+
+const FIG_K = calibratedConstant('figs', 'k.kRefPerH')
 
 export const figs: ProductProfile = {
   id: 'figs',
@@ -190,11 +202,18 @@ export const figs: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.03, 40, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(FIG_K.value, 40, ASSUMED_EA_J_PER_MOL) },
     40,
     'sphere',
-    `Lewis k = 0.03 h⁻¹ at 40 °C for 40 mm whole figs: from memory (figs part-dried on the tree reached the end point in 72–96 h under a plastic tunnel and 96–120 h in open air, ${OKSAR_2017}); ${ASSUMED_EA_SOURCE.source}`,
+    `whole figs of 40 mm, the size at which k holds: from memory; ${ASSUMED_EA_SOURCE.source}`,
     'memory',
+    {
+      'k.kRefPerH': param(FIG_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 40 °C, set by dryhours, of the k fitted through the engine to ${OKSAR_2017} (run ${FIG_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+    },
   ),
   defaultThicknessMm: sourced(40, 'whole fig diameter; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(8, 'single layer on trays; from memory', 'memory'),
@@ -280,144 +299,6 @@ export const appleSlices: ProductProfile = {
   cautions: FRUIT_CAUTIONS,
 }
 
-export const tomatoHalves: ProductProfile = {
-  id: 'tomato-halves',
-  name: 'Tomato halves',
-  category: 'vegetable',
-  initialMoistureWbPct: sourced(94.5, `${DOYMAZ_2007}: dried from 94.5 % wb`, 'published'),
-  targetMoistureWbPct: sourced(
-    11,
-    `${DOYMAZ_2007}: dried to 11 % wb (the study's end point, not a storage standard)`,
-    'published',
-  ),
-  waterActivityTarget: SAFE_AW_DRIED_FRUIT,
-  maxProductTempC: sourced(
-    70,
-    'Doymaz 2007 dried at 55–70 °C; the limit itself is from memory (lycopene loss, browning)',
-    'memory',
-  ),
-  isotherm: {
-    desorption: isotherm(
-      gab(0.1, 5, 0.95),
-      'GAB Xm0 0.10, C 5, K 0.95 and no temperature term: from memory (GAB and Peleg fit tomato best at 30–60 °C, Ben Mariem & Ben Mabrouk 2015, not re-read)',
-      'memory',
-      [30, 60],
-      [10, 90],
-    ),
-  },
-  kinetics: kinetics(
-    { model: 'diffusion', dRefM2PerS: 3.91e-10, tRefC: 55, activationEnergyJPerMol: 32940 },
-    20,
-    'slab',
-    'half-tomato thickness 20 mm at which the diffusivity is applied: from memory (the abstract gives no size)',
-    'memory',
-    {
-      dRefM2PerS: param(
-        `${DOYMAZ_2007}: untreated tomatoes, Deff 3.91–6.65e-10 m²/s over 55–70 °C at 1.5 m/s; the lowest value goes with the lowest temperature`,
-        'published',
-      ),
-      tRefC: param(`${DOYMAZ_2007}: lowest drying temperature, 55 °C`, 'published'),
-      activationEnergyJPerMol: param(
-        `${DOYMAZ_2007}: activation energy 17.40–32.94 kJ/mol; 32.94 matches the untreated Deff pair (R·ln(6.65/3.91)/(1/328.15 − 1/343.15) = 33.1 kJ/mol), 17.40 the dipped one`,
-        'published',
-      ),
-    },
-  ),
-  defaultThicknessMm: sourced(20, 'half-tomato thickness; from memory', 'memory'),
-  defaultLoadingKgPerM2: sourced(10, 'single layer, cut face up; from memory', 'memory'),
-  cautions: [
-    ...FRUIT_CAUTIONS,
-    'Tomatoes are low-acid: hold clean, dry fast in the first day to avoid spoilage.',
-  ],
-}
-
-const CHILLI_LEWIS_FIT = `Lewis k fitted by dryhours to ${HOSSAIN_BALA_2007}: red chilli 2.85 → 0.05 kg/kg db in 20 h in a solar tunnel drier, assuming a constant mean 50 °C and 15 % RH in the tunnel (the abstract credits blanching of the samples with part of the shorter drying: the fitted k may include it)`
-
-export const chiliPeppers: ProductProfile = {
-  id: 'chili-peppers',
-  name: 'Chili peppers (red, whole pods)',
-  category: 'vegetable',
-  initialMoistureWbPct: sourced(80, `${MEGHWAR_PJAR}: initial moisture taken as 80 % wb`, 'published'),
-  targetMoistureWbPct: sourced(
-    11,
-    `the middle of the 10–12 % wb the chillies were dried to in ${MEGHWAR_PJAR}`,
-    'fitted',
-  ),
-  waterActivityTarget: SAFE_AW_DRIED_FRUIT,
-  maxProductTempC: sourced(65, 'colour (capsanthin) loss above about 65 °C; from memory', 'memory'),
-  isotherm: {
-    desorption: isotherm(
-      gab(0.06, 6, 0.9),
-      'GAB Xm0 0.06, C 6, K 0.9 and no temperature term: from memory (at three temperatures GAB fits green and Oswin fits red Mareko Fana chilli best, Getahun, Gabbiye, Delele, Fanta, Gebrehiwot & Vanierschot 2020, Heliyon 6:e04608, abstract; constants not read)',
-      'memory',
-      [30, 60],
-      [10, 90],
-    ),
-  },
-  kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.257, 50, 27000) },
-    10,
-    'cylinder',
-    'pod diameter 10 mm at which k holds: from memory',
-    'memory',
-    {
-      'k.kRefPerH': param(CHILLI_LEWIS_FIT, 'fitted'),
-      'k.tRefC': param(`${CHILLI_LEWIS_FIT}: the reference temperature is the assumed mean`, 'fitted'),
-      'k.activationEnergyJPerMol': param(
-        `${SIMAL_2005}: red pepper air-dried at 30–90 °C, the Page k followed Arrhenius with an activation energy of about 27 kJ/mol`,
-        'published',
-      ),
-    },
-  ),
-  defaultThicknessMm: sourced(10, 'pod diameter; from memory', 'memory'),
-  defaultLoadingKgPerM2: sourced(8, 'single layer; from memory', 'memory'),
-  cautions: [
-    ...FRUIT_CAUTIONS,
-    'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
-  ],
-}
-
-export const onionSlices: ProductProfile = {
-  id: 'onion-slices',
-  name: 'Onion slices',
-  category: 'vegetable',
-  initialMoistureWbPct: sourced(88, 'typical 86–90 %; from memory', 'memory'),
-  targetMoistureWbPct: sourced(5, 'dehydrated onion at most 4–5 %; from memory', 'memory'),
-  waterActivityTarget: SAFE_AW_DRIED_FRUIT,
-  maxProductTempC: sourced(60, 'browning and pungency loss above about 60 °C; from memory', 'memory'),
-  isotherm: {
-    desorption: isotherm(
-      gab(0.11, 4, 0.95),
-      'GAB C 4, K 0.95 and no temperature term: from memory (modified Halsey fits onion shreds best at 30–50 °C and 15–85 % RH, Viswanathan, Jayas & Hulasare 2003, Biosyst. Eng. 86:465, abstract read; its constants are not in the abstract)',
-      'memory',
-      [30, 50],
-      [15, 85],
-      {
-        xm0: param(
-          `${ALAM_ISLAM_2015}: air-dried, untreated onion at room temperature (saturated salts, aw 0.11–0.93), GAB monolayer moisture 11.0 g/100 g dry matter (BET 9.8; vacuum-dried: GAB 8.2, BET 9.7)`,
-          'published',
-        ),
-      },
-    ),
-  },
-  kinetics: kinetics(
-    { model: 'page', k: arrhenius(0.3, 60, 11821), n: 1.1 },
-    5,
-    'slab',
-    'Page k = 0.3 h⁻ⁿ, n = 1.1 at 60 °C for 5 mm slices: from memory (Page fits onion slices best at 50–70 °C and 0.5–2 m/s, El-Mesery & Mwithiga 2012, Afr. J. Agric. Res. 7(30):4284, abstract; constants not read)',
-    'memory',
-    {
-      'k.activationEnergyJPerMol': param(
-        `the middle of the 10.87–12.77 kJ/mol activation energy of onion slices at 50–70 °C and 2–7.7 m/s in ${BHONG_KALE_2020}`,
-        'fitted',
-      ),
-    },
-  ),
-  defaultThicknessMm: sourced(5, 'slice thickness; from memory', 'memory'),
-  defaultLoadingKgPerM2: sourced(6, 'single layer; from memory', 'memory'),
-  cautions: FRUIT_CAUTIONS,
-}
-
 export const FRUIT_PROFILES: ProductProfile[] = [
   grapesToRaisins,
   grapesToRaisinsDipped,
@@ -425,7 +306,4 @@ export const FRUIT_PROFILES: ProductProfile[] = [
   figs,
   plumsToPrunes,
   appleSlices,
-  tomatoHalves,
-  chiliPeppers,
-  onionSlices,
 ]

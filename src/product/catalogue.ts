@@ -5,12 +5,16 @@
 import { FRUIT_PROFILES } from './catalogue-fruit.ts'
 import { GRAIN_PROFILES } from './catalogue-grains.ts'
 import { OTHER_PROFILES } from './catalogue-other.ts'
+import { PRETREATED_PROFILES } from './catalogue-pretreated.ts'
+import { VEGETABLE_PROFILES } from './catalogue-vegetables.ts'
 import type { ProductProfile } from './profile.ts'
 
 export const PRODUCT_CATALOGUE: readonly ProductProfile[] = [
   ...GRAIN_PROFILES,
   ...FRUIT_PROFILES,
+  ...VEGETABLE_PROFILES,
   ...OTHER_PROFILES,
+  ...PRETREATED_PROFILES,
 ]
 
 export function productIds(): string[] {

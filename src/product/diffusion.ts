@@ -7,7 +7,9 @@
  * - cylinder: MR = Σ 4/βn²·exp(−βn²τ), βn the roots of J0 (2.40483, 5.52008, …)
  * - sphere:   MR = Σ 6/(n²π²)·exp(−n²π²τ)
  * The first term gives the rate constant used hour by hour: k = π²Deff/(4L²) (slab), β1²Deff/r² (cylinder),
- * π²Deff/r² (sphere). Halving the thickness quadruples k.
+ * π²Deff/r² (sphere). Halving the thickness quadruples k. With a resistance at the surface (a skin), the
+ * surface-evaporation condition of Crank 1975 replaces these roots by those of {@link firstSurfaceRoot}, and
+ * size scaling moves from d² toward d¹ as the Biot number falls ({@link sizeTimeScale}).
  */
 import type { Shape } from './profile.ts'
 
@@ -34,17 +36,116 @@ export function firstEigenvalue(shape: Shape): number {
   return Math.PI * Math.PI
 }
 
-/** Hour-by-hour rate constant [h⁻¹] from Deff [m²/s], shape and thickness/diameter [mm] (first series term). */
+/**
+ * Hour-by-hour rate constant [h⁻¹] from Deff [m²/s], shape and thickness/diameter [mm] (first series term);
+ * with a surface resistance, `biot` Bi = h·L/D at this size, the first root of the surface-evaporation
+ * condition replaces the equilibrium-surface one ({@link firstSurfaceRoot}).
+ */
 export function diffusionRateConstantPerH(
   diffusivityM2PerS: number,
   shape: Shape,
   thicknessMm: number,
+  biot = Number.POSITIVE_INFINITY,
 ): number {
   if (!(diffusivityM2PerS > 0 && diffusivityM2PerS < 1e-5)) {
     throw new RangeError(`effective diffusivity must be between 0 and 1e-5 m²/s, got ${diffusivityM2PerS}`)
   }
   const l = characteristicLengthM(thicknessMm)
-  return (firstEigenvalue(shape) * diffusivityM2PerS * 3600) / (l * l)
+  const beta = biot === Number.POSITIVE_INFINITY ? Number.NaN : firstSurfaceRoot(shape, biot)
+  const lambda = Number.isNaN(beta) ? firstEigenvalue(shape) : beta * beta
+  return (lambda * diffusivityM2PerS * 3600) / (l * l)
+}
+
+/**
+ * J0(x) and J1(x) by their power series (Abramowitz & Stegun 1964, eq 9.1.10), for 0 ≤ x ≤ 3 where 30 terms
+ * reach full double precision; into `out` [J0, J1].
+ */
+function besselJ01(x: number, out: Float64Array): void {
+  const q = -(x * x) / 4
+  let term0 = 1
+  let term1 = x / 2
+  let j0 = term0
+  let j1 = term1
+  for (let k = 1; k < 30; k++) {
+    term0 *= q / (k * k)
+    term1 *= q / (k * (k + 1))
+    j0 += term0
+    j1 += term1
+  }
+  out[0] = j0
+  out[1] = j1
+}
+
+const bessel = new Float64Array(2)
+
+/**
+ * f(β) whose root in the first interval is the first eigenvalue of drying with a surface resistance (Crank
+ * 1975, The Mathematics of Diffusion, 2nd ed., the "evaporation at the surface" condition −D ∂C/∂n = h(C_s − C_e):
+ * plane sheet β tan β = Bi (§4.3.5), cylinder β J1(β) − Bi J0(β) = 0 (§5.3.2), sphere β cot β + Bi − 1 = 0
+ * (§6.3.4); sections from memory), written without poles: slab β sin β − Bi cos β, sphere β cos β − (1 − Bi)
+ * sin β, cylinder β J1(β) − Bi J0(β). Negative left of the root, positive right of it.
+ */
+function surfaceRootFunction(shape: Shape, biot: number, beta: number): number {
+  if (shape === 'slab') return beta * Math.sin(beta) - biot * Math.cos(beta)
+  if (shape === 'sphere') return -(beta * Math.cos(beta) - (1 - biot) * Math.sin(beta))
+  besselJ01(beta, bessel)
+  return beta * bessel[1] - biot * bessel[0]
+}
+
+/** The first root's bracket: (0, π/2) for a slab, (0, j0,1) for a cylinder, (0, π) for a sphere. */
+function surfaceRootUpper(shape: Shape): number {
+  if (shape === 'slab') return Math.PI / 2
+  if (shape === 'cylinder') return J0_ROOTS[0]
+  return Math.PI
+}
+
+let lastShape: Shape | null = null
+let lastBiot = Number.NaN
+let lastRoot = Number.NaN
+
+/**
+ * First root β1 of the surface-evaporation eigenvalue equation for `shape` at Biot number `biot` (Bi = h·L/D,
+ * L the half-thickness or the radius; see {@link surfaceRootFunction}), by bisection to 1e-14: the first-term
+ * rate constant is β1²·D/L². Bi → ∞ gives the equilibrium-surface roots π/2, 2.40483, π (internal diffusion:
+ * time ∝ size²); Bi → 0 gives β1² → Bi, 2·Bi, 3·Bi (the skin limits: k = Bi·D/L² ∝ h/L, time ∝ size). The roots
+ * are those tabulated by Crank 1975 (Tables 4.1, 5.2, 6.1, not read here) and by Watts 2007 (Appendix A,
+ * Tables A.1 and A.2), checked in test/product/surface-resistance.test.ts. The last result is kept (the engine
+ * asks for the same product and size many times).
+ */
+export function firstSurfaceRoot(shape: Shape, biot: number): number {
+  if (!(biot > 0)) throw new RangeError(`Biot number must be above 0, got ${biot}`)
+  if (biot === Number.POSITIVE_INFINITY) return Math.sqrt(firstEigenvalue(shape))
+  if (shape === lastShape && biot === lastBiot) return lastRoot
+  let lo = 0
+  let hi = surfaceRootUpper(shape)
+  for (let i = 0; i < 200 && hi - lo > 1e-14; i++) {
+    const mid = 0.5 * (lo + hi)
+    if (surfaceRootFunction(shape, biot, mid) < 0) lo = mid
+    else hi = mid
+  }
+  lastShape = shape
+  lastBiot = biot
+  lastRoot = 0.5 * (lo + hi)
+  return lastRoot
+}
+
+/**
+ * Time-scale factor [–] of drying at size `sizeMm` against `referenceMm` by the first term of diffusion with a
+ * surface resistance: the product at size d needs s times the reference time, s = (d/d_ref)²·β1(Bi_ref)²/β1(Bi_d)²,
+ * Bi_d = Bi_ref·d/d_ref (Bi grows with size: the internal resistance does, the skin's does not). Bi_ref = ∞
+ * (no surface resistance) gives (d/d_ref)².
+ */
+export function sizeTimeScale(
+  shape: Shape,
+  sizeMm: number,
+  referenceMm: number,
+  biotAtReference: number,
+): number {
+  const r = sizeMm / referenceMm
+  if (biotAtReference === Number.POSITIVE_INFINITY) return r * r
+  const bRef = firstSurfaceRoot(shape, biotAtReference)
+  const bD = firstSurfaceRoot(shape, biotAtReference * r)
+  return (r * r * bRef * bRef) / (bD * bD)
 }
 
 /** Full series MR(τ) for a shape (60 terms); τ < 1e-3 uses the short-time expansion instead. */

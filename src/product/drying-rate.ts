@@ -6,11 +6,33 @@
  * scales with (vRef/v)^e when the profile gives an exponent, otherwise velocity is ignored.
  */
 import { power } from '../physics/power.ts'
-import { diffusionRateConstantPerH } from './diffusion.ts'
+import { diffusionRateConstantPerH, sizeTimeScale } from './diffusion.ts'
 import { diffusivityAt, pageExponentAt, rateConstantAt, thompsonTimeH } from './kinetics-models.ts'
 import type { ProductProfile } from './profile.ts'
 
-/** Time-scale factor s: the product at thickness d and velocity v needs s times the reference time. */
+/**
+ * Drying length of `profile` at thickness or diameter `thicknessMm` [mm] and the length at which its kinetics
+ * hold: the wall of a hollow product (its diameter does not enter), else the thickness or diameter itself.
+ */
+export function dryingLengthsMm(
+  profile: ProductProfile,
+  thicknessMm: number,
+): { sizeMm: number; referenceMm: number } {
+  const k = profile.kinetics
+  if (k.wallThicknessMm !== undefined) {
+    return {
+      sizeMm: k.wallThicknessMm.value,
+      referenceMm: k.referenceWallThicknessMm ?? k.wallThicknessMm.value,
+    }
+  }
+  return { sizeMm: thicknessMm, referenceMm: k.referenceThicknessMm }
+}
+
+/**
+ * Time-scale factor s: the product at thickness d and velocity v needs s times the reference time. Size:
+ * by the first term of diffusion with the profile's surface resistance (`biotNumber`; none: (d/dRef)², Crank
+ * 1975), over the wall for hollow products (product/diffusion.ts `sizeTimeScale`).
+ */
 export function timeScaleFactor(
   profile: ProductProfile,
   thicknessMm?: number,
@@ -22,7 +44,11 @@ export function timeScaleFactor(
     if (!(thicknessMm > 0 && thicknessMm < 1000)) {
       throw new RangeError(`thickness must be between 0 and 1000 mm, got ${thicknessMm}`)
     }
-    s *= (thicknessMm / k.referenceThicknessMm) ** 2
+    const { sizeMm, referenceMm } = dryingLengthsMm(profile, thicknessMm)
+    s *=
+      k.biotNumber === undefined
+        ? (sizeMm / referenceMm) ** 2
+        : sizeTimeScale(k.shape, sizeMm, referenceMm, k.biotNumber.value)
   }
   if (airVelocityMs !== undefined && k.airVelocity) {
     if (!(airVelocityMs > 0 && airVelocityMs <= 30)) {
@@ -55,7 +81,18 @@ export function rateParametersAt(
   const d = thicknessMm ?? profile.defaultThicknessMm.value
   if (eq.model === 'thompson-corn') return null
   if (eq.model === 'diffusion') {
-    const k = diffusionRateConstantPerH(diffusivityAt(eq, tC), profile.kinetics.shape, d)
+    const kin = profile.kinetics
+    const { sizeMm, referenceMm } = dryingLengthsMm(profile, d)
+    const biot =
+      kin.biotNumber === undefined ? Number.POSITIVE_INFINITY : (kin.biotNumber.value * sizeMm) / referenceMm
+    // a hollow product's wall dries from its outer face: a slab of twice the wall drying from both faces
+    const hollow = kin.wallThicknessMm !== undefined
+    const k = diffusionRateConstantPerH(
+      diffusivityAt(eq, tC),
+      hollow ? 'slab' : kin.shape,
+      hollow ? 2 * sizeMm : sizeMm,
+      biot,
+    )
     return { kPerHn: k / timeScaleFactor(profile, undefined, airVelocityMs), n: 1 }
   }
   const n = eq.model === 'page' ? pageExponentAt(eq.n, tC, rhPct) : 1

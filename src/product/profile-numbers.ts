@@ -148,6 +148,28 @@ function kineticsNumbers(k: KineticsSpec): ProfileNumber[] {
   out.push(
     sourced('kinetics', 'kinetics.rewettingRateFactor', 'rewetting rate factor', '', k.rewettingRateFactor),
   )
+  if (k.biotNumber) {
+    out.push(
+      sourced(
+        'kinetics',
+        'kinetics.biotNumber',
+        'mass-transfer Biot number at the reference size (skin against inside)',
+        '',
+        k.biotNumber,
+      ),
+    )
+  }
+  if (k.wallThicknessMm) {
+    out.push(
+      sourced(
+        'kinetics',
+        'kinetics.wallThicknessMm',
+        'wall thickness of the hollow product (its drying length)',
+        'mm',
+        k.wallThicknessMm,
+      ),
+    )
+  }
   if (k.airVelocity) {
     const a = k.airVelocity
     out.push(

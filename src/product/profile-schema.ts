@@ -101,6 +101,9 @@ export const kineticsSpecSchema = z.object({
   airVelocity: z
     .object({ referenceMs: positive.max(30), exponent: z.number().min(0).max(3), source: text, confidence })
     .optional(),
+  biotNumber: sourcedNumber(1e-4, 1e6, '').optional(),
+  wallThicknessMm: sourcedNumber(0.05, 100, 'mm').optional(),
+  referenceWallThicknessMm: positive.max(100).optional(),
 })
 
 const kebab = z
@@ -141,6 +144,8 @@ export const profileVariantSchema = z
     waterActivityTarget: z.number().min(0.05).max(1).optional(),
     maxProductTempC: z.number().min(0).max(150).optional(),
     thicknessMm: z.number().positive().max(1000).optional(),
+    /** Hollow products: the wall [mm] (the drying length); the kinetics scale from the profile's wall. */
+    wallThicknessMm: z.number().min(0.05).max(100).optional(),
     loadingKgPerM2: z.number().positive().max(2000).optional(),
     kinetics: kineticsSpecSchema.optional(),
   })
@@ -170,6 +175,16 @@ export function applyVariant(v: ProfileVariant): ProductProfile {
   if (v.thicknessMm !== undefined) p.defaultThicknessMm = user(v.thicknessMm)
   if (v.loadingKgPerM2 !== undefined) p.defaultLoadingKgPerM2 = user(v.loadingKgPerM2)
   if (v.kinetics !== undefined) p.kinetics = v.kinetics
+  if (v.wallThicknessMm !== undefined) {
+    if (p.kinetics.wallThicknessMm === undefined) {
+      throw new RangeError(`profile: wallThicknessMm applies to hollow products only; ${base.id} is not one`)
+    }
+    p.kinetics = {
+      ...p.kinetics,
+      referenceWallThicknessMm: p.kinetics.referenceWallThicknessMm ?? p.kinetics.wallThicknessMm.value,
+      wallThicknessMm: user(v.wallThicknessMm),
+    }
+  }
   if (!(p.targetMoistureWbPct.value < p.initialMoistureWbPct.value)) {
     throw new RangeError(
       `profile: target moisture ${p.targetMoistureWbPct.value} % wb must be below the initial moisture ${p.initialMoistureWbPct.value} % wb`,

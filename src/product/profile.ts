@@ -89,6 +89,21 @@ export interface KineticsSpec {
    * (Madamba, Driscoll & Buckle 1996 found air flow not significant for garlic slices above 0.5 m/s).
    */
   airVelocity?: { referenceMs: number; exponent: number; source: string; confidence: Confidence }
+  /**
+   * Mass-transfer Biot number at the reference size, Bi = h·L/D: the resistance of the surface (a skin)
+   * against that of the inside. Small for fruit whose skin limits drying (drying time ∝ size near d¹), large
+   * for cut faces and slices (time ∝ d²); absent: no surface resistance (Bi = ∞). Bi grows with size
+   * (product/diffusion.ts `sizeTimeScale`, Crank 1975 surface-evaporation condition).
+   */
+  biotNumber?: Sourced<number>
+  /**
+   * Hollow products (pods): water leaves through the wall, so the wall thickness [mm] is the drying length;
+   * the pod's diameter (the product's thickness or diameter) only places it on the tray. The kinetics hold
+   * at this wall; a variant with another wall scales time by it.
+   */
+  wallThicknessMm?: Sourced<number>
+  /** The wall [mm] at which the kinetics were measured (hollow products); the profile's own wall when absent. */
+  referenceWallThicknessMm?: number
 }
 
 export type ProductCategory = 'grain' | 'oilseed' | 'fruit' | 'vegetable' | 'herb' | 'fish' | 'beverage-crop'

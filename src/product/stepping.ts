@@ -6,7 +6,8 @@
  *   Hall 1992, ch. 9; from memory); for first-order models this reduces to MR·exp(−k·Δt), and
  *   Henderson–Pabis (MR = a·exp(−k·t)) steps exactly like Lewis with its k: `a` only shifts the time origin;
  * - a constant-rate cap: the loss in a step cannot exceed the wet-surface evaporation the caller computed
- *   (Penman, or humidity-ratio deficit × air flow), per kg of dry matter on the tray;
+ *   (Penman, or humidity-ratio deficit × air flow), per kg of dry matter on the tray; with a wet-surface state,
+ *   the product's temperature follows its surface balance ({@link surfaceBalancedDrop});
  * - rewetting when the adsorption EMC is above the moisture, first order at `rewettingRateFactor` × the
  *   drying rate; no change inside the hysteresis band between adsorption and desorption EMC.
  * Air above 99.5 % RH (fog, saturation) is treated as 99.5 % with `saturatedAir` set, because no
@@ -65,6 +66,13 @@ export interface HourConditions {
   airVelocityMs?: number
   /** Upper bound on evaporation [kg water/(m²·h)] (wet-surface rate); omit for no cap. */
   maxEvaporationKgPerM2H?: number
+  /**
+   * With the cap: the product's surface while it holds free water, at temperature `tC` [°C] and the RH of the
+   * air there `rhPct` [%] (the wet-surface balance); `tC`/`rhPct` above are then those of a surface that
+   * evaporates nothing, and the step follows {@link surfaceBalancedDrop}. Omit: the product is at `tC` whatever
+   * it evaporates.
+   */
+  wetSurface?: { tC: number; rhPct: number }
 }
 
 export type StepPhase = 'falling-rate' | 'constant-rate' | 'rewetting' | 'hysteresis-hold'
@@ -77,6 +85,37 @@ export interface StepResult {
   /** Water lost in the step [kg per kg dry matter]; negative when the product gained water. */
   waterLossKgPerKgDm: number
   saturatedAir: boolean
+}
+
+/**
+ * Water [kg/kg db] the falling-rate model removes in `dtH` hours from `m` (batch start `m0`) at tC, rhPct; 0
+ * when m is not above the desorption equilibrium there.
+ */
+function fallingRateLoss(
+  profile: ProductProfile,
+  thicknessMm: number,
+  m: number,
+  m0: number,
+  tC: number,
+  rhPct: number,
+  airVelocityMs: number | undefined,
+  dtH: number,
+): number {
+  const rh = Math.min(RH_STEP_MAX_PCT, Math.max(RH_STEP_MIN_PCT, rhPct))
+  const me = equilibriumMoistureDb(profile, tC, rh, 'desorption')
+  if (!(m > me)) return 0
+  const mr = m0 > me ? (m - me) / (m0 - me) : 1
+  let mrNext: number
+  const p = rateParametersAt(profile, tC, rh, airVelocityMs, thicknessMm)
+  if (p) {
+    const tEq = mr >= 1 ? 0 : power(-Math.log(mr) / p.kPerHn, 1 / p.n)
+    mrNext = Math.exp(-p.kPerHn * power(tEq + dtH, p.n))
+  } else {
+    const s = timeScaleFactor(profile, thicknessMm, airVelocityMs)
+    const tEq = mr >= 1 ? 0 : thompsonTimeH(tC, mr)
+    mrNext = thompsonMoistureRatio(tC, tEq + dtH / s)
+  }
+  return m - (me + mrNext * (m0 - me))
 }
 
 /** One step of dtH hours [0 < dtH ≤ 24] under `conditions`. Pure: returns a new state. */
@@ -118,6 +157,12 @@ export function stepMoisture(state: MoistureState, conditions: HourConditions, d
     if (cap !== undefined) {
       if (!(cap >= 0)) throw new RangeError(`maximum evaporation must be ≥ 0 kg/(m²·h), got ${cap}`)
       const maxLoss = (cap * dtH) / product.dryMatterKgPerM2
+      const wet = conditions.wetSurface
+      if (wet !== undefined) {
+        const dropWet = fallingRateLoss(profile, thicknessMm, m, m0, wet.tC, wet.rhPct, airVelocityMs, dtH)
+        const drop = surfaceBalancedDrop(m - next, dropWet, maxLoss)
+        return done(m - drop, drop >= maxLoss ? 'constant-rate' : 'falling-rate', meDes)
+      }
       if (m - next > maxLoss) return done(m - maxLoss, 'constant-rate', meDes)
     }
     return done(next, 'falling-rate', meDes)
@@ -131,4 +176,18 @@ export function stepMoisture(state: MoistureState, conditions: HourConditions, d
     return done(next, 'rewetting', meAds)
   }
   return done(m, 'hysteresis-hold', meDes)
+}
+
+/**
+ * The hour's drop [kg/kg db] of a product whose temperature follows its surface balance: it evaporates a share
+ * f of the wet-surface rate `cap` and sits at T = T_dry − f·(T_dry − T_wet) (exact for the linearised balance,
+ * physics/wet-surface.ts; the engine's batch loop, drying/batch.ts, calls it too); its falling-rate drop at that temperature is taken linear between `dropDry` (at
+ * T_dry, f = 0) and `dropWet` (at T_wet, f = 1), and f·cap must equal it:
+ * f = dropDry / (dropDry − dropWet + cap), or f = 1 (the constant-rate period: the drop is the cap) when the
+ * product evaporates the full wet-surface rate even at T_wet.
+ */
+export function surfaceBalancedDrop(dropDry: number, dropWet: number, cap: number): number {
+  if (!(cap > 0)) return 0
+  if (dropWet >= cap) return cap
+  return (cap * dropDry) / (dropDry - dropWet + cap)
 }

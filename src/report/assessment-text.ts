@@ -24,6 +24,12 @@ import { clockWords, thinnedNote, yearsWords } from './words.ts'
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 
+/** A start row's batches with unknown outcome (they met hours without weather), when there are any. */
+const unknownNote = (r: Assessment['startDates'][number]): string =>
+  r.yearsUnknown > 0
+    ? `  + ${r.yearsUnknown} year${r.yearsUnknown === 1 ? '' : 's'} unknown (${r.missingWeatherHours} h without weather)`
+    : ''
+
 /** Start dates the text table shows at most (every n-th above it, said above the table). */
 export const TEXT_START_ROWS = 20
 
@@ -72,6 +78,7 @@ function headText({ a, ctx }: TextContext): string[] {
   const p = a.product
   return [
     `${ctx.siteName}: ${p.name}, ${methodName(a)}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wet basis`,
+    `dry means ${p.dryTarget.sentence}`,
     `weather ${a.coverage.firstHourUtc.slice(0, 10)} to ${a.coverage.lastHourUtc.slice(0, 10)} (UTC), ${a.site.typicalYear ? 'a typical year' : `years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}`}`,
     `times on ${clockWords(siteClock(a))}`,
     '',
@@ -129,7 +136,7 @@ function startsText({ a, o, u, f0, f1, e }: TextContext): string[] {
   )
   for (const r of shown) {
     out.push(
-      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(19)}  ${(r.years > 0 ? yearsWords(r.probabilityWithinDeadline) : 'no data').padEnd(18)}  ${f0(r.rewettingHours.median).padStart(11)}  ${e(r.supplementalHeat.medianKwhPerTonne)} (${e(r.supplementalHeat.p90KwhPerTonne)})`,
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(19)}  ${(r.years > 0 ? yearsWords(r.probabilityWithinDeadline) : 'no data').padEnd(18)}  ${f0(r.rewettingHours.median).padStart(11)}  ${e(r.supplementalHeat.medianKwhPerTonne)} (${e(r.supplementalHeat.p90KwhPerTonne)})${unknownNote(r)}`,
     )
   }
   return out

@@ -201,11 +201,21 @@ describe('dryhours assess --format html|csv: the report of the same assessment a
 describe('dryhours assess --param: any parameter of the method by its API name', () => {
   const base = ['assess', typical, '--product', 'apricot-halves', '--start', '07-01', '--end', '07-11']
   const tail = ['--step-days', '10', '--quiet', '--json']
-  it('sets numbers and booleans of the chosen method (open-air rack height, uncovered at night)', async () => {
+  it('sets numbers and booleans of the chosen method (open-air surface per tray area, uncovered at night)', async () => {
     const f = fakeIo()
-    const extra = ['--method', 'open-air', '--param', 'productHeightM=1.2', '--param', 'coveredAtNight=false']
+    const extra = [
+      '--method',
+      'open-air',
+      '--param',
+      'surfaceAreaPerTrayArea=1.2',
+      '--param',
+      'coveredAtNight=false',
+    ]
     expect(await runCli([...base, ...extra, ...tail], f.io)).toBe(0)
-    expect(JSON.parse(f.out.join('')).method).toMatchObject({ productHeightM: 1.2, coveredAtNight: false })
+    expect(JSON.parse(f.out.join('')).method).toMatchObject({
+      surfaceAreaPerTrayArea: 1.2,
+      coveredAtNight: false,
+    })
   })
   it('refuses a name the method does not have, listing the ones it has (exit 2)', async () => {
     const f = fakeIo()

@@ -89,12 +89,17 @@ describe('metamorphic: a drier, warmer, windier or sunnier copy never dries slow
         for (let k = 0; k < t.length; k++) expect(t[k]).toBeLessThanOrEqual(open[k])
       })
       // Windier is tested under shade: in the sun, more wind also cools the product, which can slow the
-      // falling-rate period (as Thompson 1981 found for swaths), so it is not a monotone change there.
-      it('windier: wind × 1.5 (shade)', () => {
+      // falling-rate period (as Thompson 1981 found for swaths), so it is not a monotone change there. And only
+      // in hours whose air is drier than the product ever is in a batch (RH below its equilibrium RH at the
+      // target): in wetter air more wind also brings more vapour to a product below the air's equilibrium (the
+      // vapour-uptake limit of drying/batch.ts), so it may rewet faster, as it physically does.
+      it('windier: wind × 1.5 in hours drier than the product at its target (shade)', () => {
         const shade = times(conditions(base, { kind: 'shade' }))
         const t = times(
           conditions(
-            altered(base, (c, i) => (c.windMs[i] *= 1.5)),
+            altered(base, (c, i) => {
+              if (c.relativeHumidityPct[i] < response.erhPct(c.dryBulbC[i], opts.targetDb)) c.windMs[i] *= 1.5
+            }),
             { kind: 'shade' },
           ),
         )
@@ -121,7 +126,15 @@ describe('metamorphic: raising every hour’s RH never increases usable hours', 
           if (a.status[i] === HourStatus.usable) usableA++
           if (b.status[i] === HourStatus.usable) {
             usableB++
-            expect(a.status[i]).toBe(HourStatus.usable)
+            // one exception, physical: humid air sends more long-wave down (FAO-56 eq 39, net emissivity
+            // 0.34 − 0.14·√ea), so a sunlit product sits a few hundredths of a kelvin warmer and may just
+            // cross the 'too cold' threshold
+            const edgeOfCold =
+              a.status[i] === HourStatus.tooCold &&
+              b.productC[i] - a.productC[i] > 0 &&
+              b.productC[i] - a.productC[i] < 0.1 &&
+              Math.abs(a.productC[i] - opts.thresholds.minProductTempC) < 0.1
+            if (!edgeOfCold) expect(a.status[i]).toBe(HourStatus.usable)
           }
         }
         expect(usableB).toBeLessThan(usableA)

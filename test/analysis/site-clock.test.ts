@@ -94,6 +94,8 @@ function row(start: string, p: number, extra: Partial<StartDateRow> = {}): Start
     rainExposureHours: { median: 0, p90: 0 },
     supplementalHeat: { medianKwhPerTonne: 0, p90KwhPerTonne: 0, yearsNeedingHeat: 0 },
     yearsNotReachable: 0,
+    yearsUnknown: 0,
+    missingWeatherHours: 0,
     solarHeatKwhPerTonne: { median: 0, p90: 0 },
     ...extra,
   }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { simulateBatch } from '../../src/drying/batch.ts'
 import { computeHourlyConditions } from '../../src/drying/hourly-conditions.ts'
-import { type DryingMethodInput, parseDryingMethod } from '../../src/drying/method.ts'
+import { parseDryingMethod } from '../../src/drying/method.ts'
 import { productResponse } from '../../src/drying/product-response.ts'
 import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
 import { humidityRatioFromVaporPressure } from '../../src/physics/moist-air.ts'
@@ -9,7 +9,7 @@ import { saturationVaporPressureLiquidKpa } from '../../src/physics/saturation.t
 import { wetSurfaceEvaporationPenman1948KgPerM2H as wetSurfaceEvaporation } from '../../src/physics/wet-surface.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../../src/product/moisture-basis.ts'
-import { constantSeries, type DiurnalWeather, diurnalSeries } from './synthetic-weather.ts'
+import { constantSeries } from './synthetic-weather.ts'
 
 describe('Penman open-water check (evaporation-and-sun.md §3)', () => {
   // FAO-56 Example 18 weather (Brussels, 6 July): T 16.9 °C, es − ea 0.5889 kPa (FAO-56 eq 12 mean es),
@@ -58,90 +58,5 @@ describe('equilibrium moisture of shelled corn in natural-air drying air', () =>
   })
 })
 
-/**
- * Published sun- and solar-drying experiments, time to target. The papers report place, season and
- * product; the weather here is reconstructed from that as a clear-sky diurnal cycle with climatological
- * values for the place and month (from memory, stated per case). Tolerance ±35 % on the time to target:
- * the reconstructed weather is a typical day, not the days of the experiment.
- */
-function timeToTarget(
-  id: string,
-  w: DiurnalWeather,
-  method: DryingMethodInput,
-  initialWbPct: number,
-  targetWbPct: number,
-): number {
-  const profile = productById(id)
-  const r = productResponse(profile)
-  const c = computeHourlyConditions(diurnalSeries(w), parseDryingMethod(method), r, {
-    targetDb: moistureDbFromWbPct(targetWbPct),
-    initialWbPct,
-    loadingKgPerM2: profile.defaultLoadingKgPerM2.value,
-    thresholds: parseDryingThresholds({}),
-    maxProductTempC: null,
-  })
-  // batches start at 08:00 local
-  const b = simulateBatch(c, r, {
-    startIndex: 8,
-    maxHours: 24 * 30,
-    initialDb: moistureDbFromWbPct(initialWbPct),
-    targetDb: moistureDbFromWbPct(targetWbPct),
-  })
-  return b.hoursToTarget
-}
-
-const TOLERANCE = 0.35
-
-describe('published drying experiments reproduced (time to target within ±35 %)', () => {
-  it('Doymaz 2012 (J. Food Sci. Technol. 49:214): seedless grapes 17.2 mm, open sun, 78.2 → 22 % wb in 176 h', () => {
-    // Aegean grape region (Manisa, 38.6 °N, 27.4 °E), mid-August: Tmax 34 °C, Tmin 20 °C, dew point 14 °C,
-    // wind 2.5 m/s, clear (climatology from memory). Note: the profile's k was fitted to this experiment
-    // under an assumed 35 °C/35 % at the fruit, so this checks the sun/temperature chain more than k.
-    const hours = timeToTarget(
-      'grapes-to-raisins',
-      {
-        latitudeDeg: 38.6,
-        longitudeDeg: 27.4,
-        utcOffsetHours: 3,
-        firstDayUtcMs: Date.UTC(2010, 7, 15),
-        days: 31,
-        tMinC: 20,
-        tMaxC: 34,
-        dewPointC: 14,
-        windMs: 2.5,
-      },
-      { kind: 'open-air' },
-      78.2,
-      22,
-    )
-    expect(Math.abs(hours - 176) / 176).toBeLessThan(TOLERANCE)
-  })
-  const umerkot: DiurnalWeather = {
-    // Umerkot, Sindh (25.4 °N, 69.7 °E), mid-November: Tmax 31 °C, Tmin 14 °C, dew point 8 °C, wind 2 m/s,
-    // clear dry-season sky (climatology from memory).
-    latitudeDeg: 25.4,
-    longitudeDeg: 69.7,
-    utcOffsetHours: 5,
-    firstDayUtcMs: Date.UTC(2022, 10, 10),
-    days: 31,
-    tMinC: 14,
-    tMaxC: 31,
-    dewPointC: 8,
-    windMs: 2,
-  }
-  // Meghwar et al., Pak. J. Agric. Res. 36(1):63: red chilli 'Longi', Umerkot, Nov 2022, 80 → 10–12 % wb:
-  // 81 h open sun, 63 h solar tunnel. Independent of the profile's k (fitted to Hossain & Bala 2007).
-  it('Meghwar et al.: red chilli, open sun, 80 → 11 % wb in 81 h', () => {
-    const hours = timeToTarget('chili-peppers', umerkot, { kind: 'open-air' }, 80, 11)
-    expect(Math.abs(hours - 81) / 81).toBeLessThan(TOLERANCE)
-  })
-  it('Meghwar et al.: red chilli, solar tunnel (modelled as a solar cabinet, fans in sun), 80 → 11 % wb in 63 h', () => {
-    const hours = timeToTarget('chili-peppers', umerkot, { kind: 'solar-cabinet' }, 80, 11)
-    expect(Math.abs(hours - 63) / 63).toBeLessThan(TOLERANCE)
-  })
-  it('and the solar tunnel is faster than open sun, as published (63 h vs 81 h)', () => {
-    expect(timeToTarget('chili-peppers', umerkot, { kind: 'solar-cabinet' }, 80, 11)).toBeLessThan(
-      timeToTarget('chili-peppers', umerkot, { kind: 'open-air' }, 80, 11),
-    )
-  })
-})
+// Published sun- and solar-drying experiments run on reconstructions of their weather: test/experiments/
+// (calibration.test.ts for the fitted runs, validation.test.ts and docs/validation.md for the others).

@@ -111,7 +111,7 @@ export function hourlyColumnDigests(): GoldenFile {
       )
       const t = b.trace as Float64Array
       traces.update(new Uint8Array(t.buffer, t.byteOffset, t.byteLength))
-      const { trace: _t, usedBackup: _u, ...figures } = b
+      const { trace: _t, productTrace: _p, usedBackup: _u, ...figures } = b
       results.update(JSON.stringify(figures))
     }
     entry['batch traces'] = traces.digest('hex')

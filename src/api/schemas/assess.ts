@@ -46,7 +46,17 @@ export const assessOptionsJsonSchema = z.strictObject({
     .min(R.targetWbPct[0])
     .max(R.targetWbPct[1])
     .optional()
-    .describe('target moisture, wet basis [%]; default the product profile’s'),
+    .describe(
+      'target moisture, wet basis [%]; default the moisture of the product’s safe water activity at the storage temperature (or the profile’s figure when drier)',
+    ),
+  storageTempC: z
+    .number()
+    .min(R.storageTempC[0])
+    .max(R.storageTempC[1])
+    .optional()
+    .describe(
+      'temperature of the store at which the dried product’s water activity is judged [°C]; default 25',
+    ),
   initialWbPct: z
     .number()
     .min(R.initialWbPct[0])
@@ -122,6 +132,7 @@ export const assessQuerySchema = z.strictObject({
   product: z.string().min(1).describe('catalogue product id (GET /v1/products)'),
   method: z.enum(kinds).describe(`${DRYING_METHOD_KINDS.join(', ')} (defaults for its parameters)`),
   targetWb: numberParam('target moisture, wet basis [%]').optional(),
+  storageTemp: numberParam('storage temperature for the water activity of the dried product [°C]').optional(),
   initialWb: numberParam('initial moisture, wet basis [%]').optional(),
   thickness: numberParam('product thickness [mm]').optional(),
   start: monthDay.optional().describe('first start date of the season [MM-DD]'),
@@ -164,6 +175,7 @@ export interface AssessRequest {
 /** Query names of the engine's options (the rest keep their names). */
 const QUERY_NAMES: Record<string, string> = {
   targetWbPct: 'targetWb',
+  storageTempC: 'storageTemp',
   initialWbPct: 'initialWb',
   thicknessMm: 'thickness',
   seasonStart: 'start',
@@ -292,6 +304,7 @@ export function assessRequestFromQuery(
       product: resolveProduct(q.product, 'product'),
       method: resolveMethod({ kind: q.method, ...binQueryParams(q) }, 'method'),
       targetWbPct: q.targetWb,
+      storageTempC: q.storageTemp,
       initialWbPct: q.initialWb,
       thicknessMm: q.thickness,
       seasonStart: q.start,

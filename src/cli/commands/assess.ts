@@ -28,13 +28,15 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   --product <id|file.json>  catalogue id (dryhours products) or a profile JSON file
   --method <kind>           ${DRYING_METHOD_KINDS.join(' | ')}
   --target-wb <%>  --initial-wb <%>  --thickness <mm>
+  --storage-temp <°C>  store temperature at which the dried product's water activity is judged (default 25);
+                 without --target-wb the target is the moisture of the product's safe water activity there
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
 ${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
-                  API's JSON options (e.g. --param productHeightM=1.2); docs/model.md §4 lists them
+                  API's JSON options (e.g. --param surfaceAreaPerTrayArea=1.2); docs/model.md §4 lists them
 Season and batches:
   --start <MM-DD> --end <MM-DD>  start dates (default the whole year, every ${ASSESS_DEFAULTS.stepDaysWholeYear} days;
                  every ${ASSESS_DEFAULTS.stepDaysWithSeason} day when a season is given)
@@ -71,6 +73,7 @@ export const ENGINE_PARSE_OPTIONS = {
   product: { type: 'string' },
   method: { type: 'string' },
   'target-wb': { type: 'string' },
+  'storage-temp': { type: 'string' },
   'initial-wb': { type: 'string' },
   thickness: { type: 'string' },
   absorptivity: { type: 'string' },
@@ -216,6 +219,7 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     method: method as AssessOptions['method'],
     thresholds,
     targetWbPct: num('target-wb'),
+    storageTempC: num('storage-temp'),
     initialWbPct: num('initial-wb'),
     thicknessMm: num('thickness'),
     seasonStart: str('start'),

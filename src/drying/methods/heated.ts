@@ -43,6 +43,30 @@ export const heatedSchema = z.object({
 
 export type HeatedMethod = z.output<typeof heatedSchema>
 
+/**
+ * What the user must be told when the heated air asked for passes the product's temperature limit (or the
+ * 100 °C of the moist-air relations): the engine holds the air at the limit, so the figures are for that air,
+ * not for the set point given. `role` names the heater in the sentence ('heated air', 'backup heater').
+ */
+export function heatedLimitWarnings(m: HeatedMethod, maxProductTempC: number | null, role: string): string[] {
+  const out: string[] = []
+  const limit = maxProductTempC === null ? HEATED_AIR_MAX_C : Math.min(maxProductTempC, HEATED_AIR_MAX_C)
+  const why =
+    maxProductTempC !== null && maxProductTempC <= HEATED_AIR_MAX_C
+      ? `the product's temperature limit of ${limit} °C`
+      : `${HEATED_AIR_MAX_C} °C, the upper end of the moist-air relations used`
+  if (m.setPointC !== undefined && m.setPointC > limit) {
+    out.push(
+      `the ${role} set point ${m.setPointC} °C is above ${why}: the air is held at ${limit} °C (unless the outside air is warmer), and every figure is for that air; set the dryer no higher`,
+    )
+  } else if (m.setPointC === undefined && m.minAirC > limit) {
+    out.push(
+      `the ${role}'s lowest air temperature ${m.minAirC} °C is above ${why}: the air is held at ${limit} °C, and every figure is for that air`,
+    )
+  }
+  return out
+}
+
 export const heated: MethodModel<typeof heatedSchema> = {
   kind: 'heated',
   label: 'heated air',

@@ -13,7 +13,7 @@
  */
 import type { z } from 'zod'
 import { solveWetSurface, type WetSurface } from '../../physics/wet-surface.ts'
-import type { ProductProfile } from '../../product/profile.ts'
+import type { ProductProfile, Shape } from '../../product/profile.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import type { SolarColumns } from '../solar-columns.ts'
 import type { DryingThresholds } from '../thresholds.ts'
@@ -57,8 +57,18 @@ export class MethodHour {
 
   /** Out: air temperature at the product [°C] (ambient unless the method heats it). */
   airC = Number.NaN
-  /** Out: product (surface) temperature [°C]. */
+  /**
+   * Out: product (surface) temperature [°C] of a product that evaporates nothing (dry surface, or one that
+   * has stopped drying): the temperature of the verdict, of rewetting and of a product near its target.
+   */
   productC = Number.NaN
+  /**
+   * Out: surface temperature [°C] of the product while it still holds free water at its surface (evaporating at
+   * the wet-surface rate {@link evaporationKgPerM2H}); a batch's product sits between the two, by how much of
+   * that rate it evaporates (drying/batch.ts). NaN: the method has no such balance (forced air, where the
+   * kinetics were measured against the air temperature and the product is taken at it).
+   */
+  productWetC = Number.NaN
   /** Out: {@link HourMode}. */
   mode: HourModeCode = HourMode.active
   /** Out: no drying because of night or no collector heat (covered product, fans off). */
@@ -69,6 +79,11 @@ export class MethodHour {
   uncoveredNight = false
   /** Out: wet-surface evaporation per m² of drying surface [kg m⁻² h⁻¹]; NaN when not an exposed method or covered. */
   evaporationKgPerM2H = Number.NaN
+  /**
+   * Out: vapour conductance between the air and the product surface per m² of drying surface
+   * [kg m⁻² h⁻¹ kPa⁻¹] (the transfer of the wet-surface balance); NaN when not an exposed method or covered.
+   */
+  vaporConductanceKgPerM2HKpa = Number.NaN
   /** Out: heat from a heater into the air [kWh per tonne fresh product in this hour]. */
   heaterKwhPerTonne = 0
   /** Out: heat from a solar collector into the air [kWh per tonne fresh product in this hour]. */
@@ -88,6 +103,8 @@ export interface MethodSetup {
   thresholds: DryingThresholds
   /** Highest product temperature for quality [°C], or null. */
   maxProductTempC: number | null
+  /** The product as laid out: shape, size (diameter or thickness) [mm] and loading [kg fresh per m²]. */
+  product: { shape: Shape; sizeMm: number; loadingKgPerM2: number }
 }
 
 /** The per-hour function a method returns from `prepare`. */
@@ -152,16 +169,21 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
 }
 
 /**
- * Penman wet-surface evaporation of the hour (physics/wet-surface.ts) with available energy
- * `availableEnergyWm2` and wind at 2 m `windMs`, the ambient air of `hour`, written to
- * `hour.evaporationKgPerM2H`. `scratch` is the method's own {@link WetSurface}, reused every hour.
+ * Wet-surface balance of an exposed product in the hour (physics/wet-surface.ts): available energy
+ * `availableEnergyWm2` (isothermal: absorbed sun minus the net long-wave at air temperature) per m² of the area
+ * the product covers, wind at 2 m `windMs`, the ambient air of `hour`, the exchange surface and radiative
+ * conductance set on `scratch` (the method's own {@link WetSurface}, reused every hour). Writes
+ * `hour.evaporationKgPerM2H` and `hour.vaporConductanceKgPerM2HKpa` per m² of tray (× `coverage`, the share of
+ * the tray the product covers) and `hour.productWetC`; returns H + R [W m⁻² K⁻¹] per m² covered, from which a product evaporating less sits
+ * warmer: Ta + (Q − λE)/(H + R).
  */
 export function wetSurfaceEvaporationOfHour(
   hour: MethodHour,
   scratch: WetSurface,
   availableEnergyWm2: number,
   windMs: number,
-): void {
+  coverage = 1,
+): number {
   scratch.availableEnergyWm2 = availableEnergyWm2
   scratch.airC = hour.dryBulbC
   scratch.vaporPressureKpa = hour.vaporPressureKpa
@@ -171,5 +193,8 @@ export function wetSurfaceEvaporationOfHour(
   scratch.saturationPa = hour.saturationPa
   scratch.aerodynamicResistanceSPerM = Number.NaN
   solveWetSurface(scratch)
-  hour.evaporationKgPerM2H = scratch.evaporationKgPerM2H
+  hour.evaporationKgPerM2H = scratch.evaporationKgPerM2H * coverage
+  hour.vaporConductanceKgPerM2HKpa = scratch.vaporConductanceKgPerM2HKpa * coverage
+  hour.productWetC = scratch.surfaceC
+  return scratch.heatConductanceWm2K
 }

@@ -32,8 +32,10 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
       `${heat}, median [${u.energyPerMassUnit}]`,
       `${heat}, 1 in 10 batches [${u.energyPerMassUnit}]`,
       'years not reachable even with heat',
+      'years unknown (ran into hours without weather)',
+      'hours without weather in those batches',
     ],
-    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0],
+    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0],
     rows: a.startDates.map((s) => [
       s.start,
       s.years,
@@ -50,6 +52,8 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
         ? round(u.energyPerMass(s.supplementalHeat.p90KwhPerTonne).value, 1)
         : null,
       s.yearsNotReachable,
+      s.yearsUnknown,
+      s.missingWeatherHours,
     ]),
   }
 }
@@ -167,7 +171,11 @@ export function handoutStartTable(a: Assessment, ctx: SectionContext, maxRows = 
   const shown = rows.filter((_, i) => i % step === 0)
   const u = ctx.units
   const heat = heatWord(a).toLowerCase()
-  const days = (v: number | null) => (finite(v) ? formatNumber(v, 1) : `over ${a.maxDays}`)
+  // no known outcome: no data at all, or batches that met hours without weather (unknown, not slow)
+  const noOutcome = (s: Assessment['startDates'][number]) =>
+    (s.yearsUnknown ?? 0) > 0 ? 'unknown' : 'no data'
+  const days = (s: Assessment['startDates'][number], v: number | null) =>
+    finite(v) ? formatNumber(v, 1) : s.years > 0 ? `over ${a.maxDays}` : noOutcome(s)
   const table: ReportTable = {
     id: 'handout-start-dates',
     title: `A batch started on … (at ${String(a.season.startHourLocal).padStart(2, '0')}:00 on the site's clock)`,
@@ -181,9 +189,9 @@ export function handoutStartTable(a: Assessment, ctx: SectionContext, maxRows = 
     digits: [0, 1, 1, 0, 0],
     rows: shown.map((s) => [
       s.start,
-      days(s.daysToTarget.median),
-      days(s.daysToTarget.p90),
-      s.years > 0 ? yearsWords(s.probabilityWithinDeadline) : 'no data',
+      days(s, s.daysToTarget.median),
+      days(s, s.daysToTarget.p90),
+      s.years > 0 ? yearsWords(s.probabilityWithinDeadline) : noOutcome(s),
       finite(s.supplementalHeat.medianKwhPerTonne)
         ? round(u.energyPerMass(s.supplementalHeat.medianKwhPerTonne).value, 0)
         : null,

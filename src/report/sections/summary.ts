@@ -79,6 +79,7 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     'Moisture',
     `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
   ])
+  rows.push(['Dry means', a.product.dryTarget.sentence])
   rows.push(['Method', methodName(a)])
   const every = a.season.stepDays === 1 ? 'day' : `${a.season.stepDays} days`
   rows.push([

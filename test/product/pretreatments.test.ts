@@ -1,0 +1,71 @@
+/**
+ * Pretreatment as data: variants derived from the published factors of src/product/pretreatments.ts, never
+ * counted twice. Factors checked against the numbers of their sources (named beside each check).
+ */
+import { describe, expect, it } from 'vitest'
+import { productById } from '../../src/product/catalogue.ts'
+import { derivePretreatedVariant } from '../../src/product/pretreatment-variants.ts'
+import { PRETREATMENT_VARIANTS, pretreatmentById, rateFactor } from '../../src/product/pretreatments.ts'
+
+const rate = (id: string): number => {
+  const eq = productById(id).kinetics.equation
+  if (eq.model === 'diffusion') return eq.dRefM2PerS
+  if ('k' in eq && eq.k.form === 'arrhenius') return eq.k.kRefPerH
+  throw new Error(`${id}: no single rate constant`)
+}
+
+describe('pretreated variants in the catalogue', () => {
+  it('dipped grapes dry faster than the untreated base by 1 ÷ the middle of the 0.774–0.805 time factor (Doymaz & Ismail 2011, sweet cherry, 19.5–22.6 % shorter)', () => {
+    expect(rate('grapes-to-raisins-dipped') / rate('grapes-to-raisins')).toBeCloseTo(
+      1 / ((0.774 + 0.805) / 2),
+      6,
+    )
+  })
+  it('peeled figs: 1 ÷ 0.54, the peeled-to-unpeeled relaxation-time ratio (Xanthopoulos et al. 2010)', () => {
+    expect(rate('figs-peeled') / rate('figs')).toBeCloseTo(1 / 0.54, 6)
+  })
+  it('dipped tomato: the diffusivity ratio 1.13–1.45, middle 1.29 (Doymaz 2007: 5.65/3.91 and 7.53/6.65)', () => {
+    expect(rate('tomato-halves-dipped') / rate('tomato-halves')).toBeCloseTo(1.29, 6)
+    expect(5.65 / 3.91).toBeCloseTo(1.445, 3)
+    expect(7.53 / 6.65).toBeCloseTo(1.132, 3)
+  })
+  it('osmotic apple: the diffusivity falls 38–64 % (Simal et al. 1997), middle factor 0.49', () => {
+    expect(rate('apple-slices-osmotic') / rate('apple-slices')).toBeCloseTo(0.49, 6)
+  })
+  it('each derived variant cites its treatment and says what its base was measured on, at level fitted', () => {
+    for (const v of PRETREATMENT_VARIANTS.filter((x) => x.derivable)) {
+      const p = productById(v.variantId)
+      expect(p.variantOf).toBe(v.baseId)
+      const sources = Object.values(p.kinetics.parameters ?? {}).filter((s) =>
+        s.source.startsWith('set by dryhours'),
+      )
+      expect(sources).toHaveLength(1)
+      expect(sources[0].confidence).toBe('fitted')
+      expect(sources[0].source).toContain(pretreatmentById(v.pretreatmentId).citation)
+      expect(sources[0].source).toContain(v.baseNote)
+    }
+  })
+})
+
+describe('never counted twice', () => {
+  it('a variant whose base already had the treatment is refused (chilli fitted on blanched samples)', () => {
+    expect(() => derivePretreatedVariant(productById('chili-peppers'), 'chili-peppers-unblanched')).toThrow(
+      /cannot be derived|already includes/,
+    )
+  })
+  it('a variant without a published factor is refused and not in the catalogue', () => {
+    for (const v of PRETREATMENT_VARIANTS.filter((x) => !x.derivable)) {
+      expect(() => derivePretreatedVariant(productById(v.baseId), v.variantId)).toThrow(/cannot be derived/)
+      expect(() => productById(v.variantId)).toThrow(/unknown product/)
+    }
+  })
+  it('deriving from an already derived variant is refused (the variant is not the base the spec names)', () => {
+    expect(() =>
+      derivePretreatedVariant(productById('grapes-to-raisins-dipped'), 'grapes-to-raisins-dipped'),
+    ).toThrow(/variant of grapes-to-raisins/)
+  })
+  it('effects that are not rate factors give none (salting holds water activity, apricot osmotic gives energies)', () => {
+    expect(rateFactor(pretreatmentById('salting-fish-brine-aw').effect)).toBeNull()
+    expect(rateFactor(pretreatmentById('osmotic-apricot-halves').effect)).toBeNull()
+  })
+})
