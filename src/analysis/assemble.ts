@@ -82,7 +82,8 @@ export function assessmentWarnings(
     )
   } else if (time.offsetSource === 'timestamps') {
     warnings.push(
-      `the site's clock is taken from the file's local timestamps (UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}); give --site-tz <zone> if the site keeps another`,
+      // the zone when the timestamps name one (its daylight saving is followed), else their fixed offset
+      `the site's clock is taken from the file's local timestamps (${time.timeZone ? `${time.timeZone} time` : `UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}`}); give --site-tz <zone> if the site keeps another`,
     )
   }
   if (primary.assumedIrradianceHours > 0) {
