@@ -145,6 +145,8 @@ export function assembleAssessment(
     psychrometric: PsychrometricSummary
     /** The bin stage's answer (methods with deep-bed batches). */
     bin?: BinAssessment
+    /** The spoilage block (null when the assessment ran without spoilage; absent: null). */
+    spoilage?: Assessment['spoilage']
     /** Batches that ran into hours without weather (outcome unknown) and the hours they missed. */
     unknownBatches: UnknownBatches
   },
@@ -186,6 +188,7 @@ export function assembleAssessment(
     hourOfDay: hourOfDayTable(calendar.counts),
     hoursByReason: reasons,
     startDates: starts.table.rows,
+    spoilage: parts.spoilage ?? null,
     bestStartWindows: starts.best.windows,
     bestStartWindowCriterion: starts.best.criterion,
     // a bin has no batches by start week (its answer is the minimum airflow per start month): no cells

@@ -24,6 +24,9 @@ import { clockWords, thinnedNote, yearsWords } from './words.ts'
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 
+/** A share [0–1] as a whole percent, '–' when unknown. */
+const pct = (x: number | null | undefined): string => (finite(x) ? (100 * x).toFixed(0) : '–')
+
 /** A start row's batches with unknown outcome (they met hours without weather), when there are any. */
 const unknownNote = (r: Assessment['startDates'][number]): string =>
   r.yearsUnknown > 0
@@ -66,7 +69,8 @@ export function assessmentText(a: Assessment, o: TextOptions = {}): string {
     f1: (x) => formatNumber(x ?? null, 1),
     e: (kwhPerTonne) => (finite(kwhPerTonne) ? f0(u.energyPerMass(kwhPerTonne).value) : '–'),
   }
-  const out = [...headText(t), ...monthlyText(t), '']
+  const spoilage = spoilageText(t)
+  const out = [...headText(t), ...spoilage, ...(spoilage.length > 0 ? [''] : []), ...monthlyText(t), '']
   if (a.bin) out.push(...binText(a, a.bin))
   else out.push(...startsText(t), '', ...heatText(t))
   out.push(...closingText(t))
@@ -85,21 +89,39 @@ function headText({ a, ctx }: TextContext): string[] {
   ]
 }
 
+/** Spoiling before dry: the model, its source and limit, the season's share of batches and the first cautions. */
+function spoilageText({ a, f0 }: TextContext): string[] {
+  const s = a.spoilage
+  if (!s) return []
+  const limit =
+    s.model.measureUnit === ''
+      ? `${s.model.measureName} = ${s.model.limit}`
+      : `${s.model.limit} ${s.model.measureUnit} ${s.model.measureName}`
+  const share = finite(s.season.probability) ? ` (${Math.round(100 * s.season.probability)} %)` : ''
+  return [
+    `Spoilage before dry: ${s.model.name}, after ${s.season.source} (${s.model.source.confidence}); a batch counts as spoiled at ${limit}`,
+    `  this season: ${s.season.batchesSpoiledBeforeDry} of ${s.season.batches} batches${share} spoiled before they were dry; hours at risk per batch ${f0(s.season.hoursAtRisk.median)} in the median batch (1 in 10 batches: ${f0(s.season.hoursAtRisk.p90)} or more)`,
+    ...s.cautions.slice(0, 2).map((c) => `  ! ${c}`),
+    '',
+  ]
+}
+
 /** Usable drying hours per month, with the share of daylight hours for methods that stop at night. */
 function monthlyText({ a, u, f0, f1, e }: TextContext): string[] {
   const out: string[] = []
   const daylight = stopsAtNight(a) && a.monthly.some((m) => finite(m.usableDaylightFraction))
+  const spoils = a.spoilage !== null && a.spoilage !== undefined
   out.push('Usable drying hours per month (median, P10–P90 across years; P10 = reached in 9 of 10 years)')
   const shareHead = daylight ? '% of daylight h' : '% of all hours'
   const heatHead = `${heatWord(a).toLowerCase()} ${u.energyPerMassUnit}`
   out.push(
-    `month  median  P10–P90   ${shareHead.padStart(15)}  ${'main reason an hour does not dry'.padEnd(40)} ${heatHead.padStart(26)}  days to dry`,
+    `month  median  P10–P90   ${shareHead.padStart(15)}  ${'main reason an hour does not dry'.padEnd(40)} ${heatHead.padStart(26)}  days to dry${spoils ? '  spoils first %' : ''}`,
   )
   for (const m of a.monthly) {
     const share = daylight ? m.usableDaylightFraction : m.usableFraction
     const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
     out.push(
-      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(finite(share) ? (100 * share).toFixed(0) : '–').padStart(15)}  ${mainReasonWords(m).padEnd(40)} ${e(m.supplementalHeatKwhPerTonne.median).padStart(26)}  ${f1(m.medianDaysToTarget).padStart(11)}`,
+      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(finite(share) ? (100 * share).toFixed(0) : '–').padStart(15)}  ${mainReasonWords(m).padEnd(40)} ${e(m.supplementalHeatKwhPerTonne.median).padStart(26)}  ${f1(m.medianDaysToTarget).padStart(11)}${spoils ? pct(m.spoilage?.probability).padStart(16) : ''}`,
     )
   }
   return out
@@ -120,6 +142,7 @@ function startsText({ a, o, u, f0, f1, e }: TextContext): string[] {
     )
   }
   out.push('')
+  const spoils = a.spoilage !== null && a.spoilage !== undefined
   out.push(`Start dates ${a.season.start} to ${a.season.end}, batches start at ${startTimeWords(a)}`)
   const step = Math.max(1, Math.ceil(a.startDates.length / TEXT_START_ROWS))
   const shown = a.startDates.filter((_, i) => i % step === 0)
@@ -132,11 +155,11 @@ function startsText({ a, o, u, f0, f1, e }: TextContext): string[] {
   )
   if (note) out.push(note)
   out.push(
-    `start  years  days median  days, 9 in 10 years  within ${a.deadlineDays} days       rewetting h  ${heatWord(a).toLowerCase()} ${u.energyPerMassUnit} median (1 in 10)`,
+    `start  years  days median  days, 9 in 10 years  within ${a.deadlineDays} days       rewetting h  ${`${heatWord(a).toLowerCase()} ${u.energyPerMassUnit} median (1 in 10)`.padEnd(34)}${spoils ? '  spoils first %  hours at risk' : ''}`,
   )
   for (const r of shown) {
     out.push(
-      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(19)}  ${(r.years > 0 ? yearsWords(r.probabilityWithinDeadline) : 'no data').padEnd(18)}  ${f0(r.rewettingHours.median).padStart(11)}  ${e(r.supplementalHeat.medianKwhPerTonne)} (${e(r.supplementalHeat.p90KwhPerTonne)})${unknownNote(r)}`,
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(19)}  ${(r.years > 0 ? yearsWords(r.probabilityWithinDeadline) : 'no data').padEnd(18)}  ${f0(r.rewettingHours.median).padStart(11)}  ${`${e(r.supplementalHeat.medianKwhPerTonne)} (${e(r.supplementalHeat.p90KwhPerTonne)})`.padEnd(34)}${spoils ? `  ${pct(r.spoilage?.probability).padStart(14)}  ${f0(r.spoilage?.hoursAtRisk.median).padStart(13)}` : ''}${unknownNote(r)}`,
     )
   }
   return out

@@ -26,6 +26,7 @@ import { heatSection } from './sections/heat.ts'
 import { hourOfDaySection } from './sections/hour-of-day.ts'
 import { monthlySection } from './sections/monthly.ts'
 import { psychrometricSection } from './sections/psychrometric.ts'
+import { spoilageSection } from './sections/spoilage.ts'
 import { handoutStartTable, startDatesFigure, startDatesSection } from './sections/start-dates.ts'
 import { answerHtml, headerHtml, methodName, warningList } from './sections/summary.ts'
 
@@ -83,7 +84,7 @@ export function appendixHtml(a: Assessment, ctx: SectionContext): string {
 ${monthlySection(a, ctx)}
 ${hourOfDaySection(a, ctx)}
 ${psychrometricSection(a, ctx)}
-${a.bin ? binSection(a, ctx) : `${startDatesSection(a, ctx)}\n${heatSection(a, ctx)}`}
+${a.bin ? binSection(a, ctx) : `${startDatesSection(a, ctx)}\n${spoilageSection(a, ctx)}\n${heatSection(a, ctx)}`}
 ${limitsSection(a, ctx)}
 ${notesSection(warningList(a, ctx), (ctx.info.readerNotes ?? []).map(ctx.optionWords), ctx)}
 </div>`

@@ -97,8 +97,9 @@ function row(start: string, p: number, extra: Partial<StartDateRow> = {}): Start
     yearsUnknown: 0,
     missingWeatherHours: 0,
     solarHeatKwhPerTonne: { median: 0, p90: 0 },
+    spoilage: null,
     ...extra,
-  }
+  } as StartDateRow
 }
 
 describe('the season calendar', () => {

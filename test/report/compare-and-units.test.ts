@@ -70,6 +70,7 @@ describe('comparison with the analysis ranking', () => {
           meanProbabilityWithinDeadline: 0.5,
           medianHeatKwhPerTonne: 100,
           bestStartWindow: null,
+          spoilageProbability: null,
           warnings: [],
         },
         {
@@ -80,6 +81,7 @@ describe('comparison with the analysis ranking', () => {
           meanProbabilityWithinDeadline: 0.9,
           medianHeatKwhPerTonne: 0,
           bestStartWindow: '07-01 to 07-31',
+          spoilageProbability: null,
           warnings: [],
         },
       ],

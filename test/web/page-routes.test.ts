@@ -198,7 +198,7 @@ describe('POST /report', () => {
       [{ product: 'wheat', seasonStart: '6/15' }, /First start day: must be a day as MM-DD/],
       [
         { product: 'wheat', method: 'microwave' },
-        /Drying method: must be one of open-air, shade, solar-cabinet, heated/,
+        /Drying method: must be one of open-air, shade, solar-cabinet, tunnel, heated/,
       ],
     ] as const) {
       const res = await app.request('/report', {

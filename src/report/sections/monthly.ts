@@ -38,6 +38,7 @@ export function monthlyTable(a: Assessment): ReportTable {
       daylight ? 'usable share of daylight hours [%]' : 'usable share of all hours, day and night [%]',
       'main reason an hour does not dry (median hours)',
       'median days to target, batches started in the month',
+      'spoiled before dry, batches started in the month [%]',
     ],
     rows: a.monthly.map((m) => {
       const share = daylight ? m.usableDaylightFraction : m.usableFraction
@@ -50,9 +51,10 @@ export function monthlyTable(a: Assessment): ReportTable {
         finite(share) ? Math.round(share * 1000) / 10 : null,
         mainReasonWords(m),
         m.medianDaysToTarget,
+        finite(m.spoilage?.probability) ? Math.round((m.spoilage?.probability as number) * 1000) / 10 : null,
       ]
     }),
-    digits: [0, 0, 0, 0, 0, 1, 0, 1],
+    digits: [0, 0, 0, 0, 0, 1, 0, 1, 0],
   }
 }
 
