@@ -100,6 +100,9 @@ function spoilageText({ a, f0 }: TextContext): string[] {
   const share = finite(s.season.probability) ? ` (${Math.round(100 * s.season.probability)} %)` : ''
   return [
     `Spoilage before dry: ${s.model.name}, after ${s.season.source} (${s.model.source.confidence}); a batch counts as spoiled at ${limit}`,
+    s.model.waterActivity.of === 'surface'
+      ? '  fed the water activity at the product surface (from the air at the product, its drying rate, rain and cover; the JSON gives the rule)'
+      : '  fed the product’s water activity (its isotherm at its mean moisture)',
     `  this season: ${s.season.batchesSpoiledBeforeDry} of ${s.season.batches} batches${share} spoiled before they were dry; hours at risk per batch ${f0(s.season.hoursAtRisk.median)} in the median batch (1 in 10 batches: ${f0(s.season.hoursAtRisk.p90)} or more)`,
     ...s.cautions.slice(0, 2).map((c) => `  ! ${c}`),
     '',
