@@ -87,7 +87,10 @@ export interface WeatherReadResult {
   warnings: string[]
   /** Values the file states about its site that the user's options replaced (each also a warning naming both). */
   overrides?: SiteOverride[]
-  /** Statements for the assumptions: what was supplied rather than read (estimated irradiance, constant pressure). */
+  /**
+   * Notes, apart from the warnings: how the file was understood (delimiter, header, the layout's conventions,
+   * columns left out) and what was supplied rather than read (estimated irradiance, a constant pressure).
+   */
   notes: string[]
   period: { start: string; end: string }
   /** How the timestamps became UTC. */

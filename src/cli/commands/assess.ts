@@ -7,6 +7,7 @@ import {
   type MethodComparison,
   type MethodList,
 } from '../../analysis/compare-methods.ts'
+import { assessmentText } from '../../report/assessment-text.ts'
 import { renderMethodComparisonCsv, renderMethodComparisonHtml } from '../../report/methods-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
@@ -21,7 +22,6 @@ import { renderOptionNames } from '../../weather/option-spec.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { overrideWarning } from '../../weather/site-overrides.ts'
-import { assessmentText } from '../assessment-text.ts'
 import { type CliCommand, type CliIo, UsageError } from '../command.ts'
 import {
   ENGINE_OPTIONS_HELP,
@@ -91,18 +91,18 @@ function renderResult(r: SiteResult, o: ReportOutputChoice, file: string): strin
   if (o.format === 'html')
     return isMethods(r)
       ? renderMethodComparisonHtml(r, { units: o.units, fileName })
-      : renderReportHtml(r, { units: o.units, info })
+      : renderReportHtml(r, { units: o.units, info, optionSurface: 'cli' })
   if (o.format === 'csv') {
     try {
       return isMethods(r)
         ? renderMethodComparisonCsv(r, { units: o.units, table: o.table })
-        : renderReportCsv(r, { units: o.units, info, table: o.table })
+        : renderReportCsv(r, { units: o.units, info, table: o.table, optionSurface: 'cli' })
     } catch (e) {
       if (e instanceof RangeError) throw new UsageError(`--table: ${e.message}`)
       throw e
     }
   }
-  return isMethods(r) ? methodComparisonText(r) : assessmentText(r)
+  return isMethods(r) ? methodComparisonText(r) : assessmentText(r, { units: o.units })
 }
 
 /** Assess one series with one method, or compare the listed methods. */

@@ -25,6 +25,7 @@ import {
   text,
   texts,
 } from './common.ts'
+import { seasonCalendarSchema } from './season-calendar.ts'
 import { assessmentSpoilageSchema, spoilageSummarySchema } from './spoilage.ts'
 
 /** What an assessment shares with the comparisons: the method kind, the site, the product, the method, the season. */
@@ -39,6 +40,12 @@ export const assessmentParts = once(() => {
       longitudeDeg: numOrNull('longitude [° E, west negative]'),
       elevationM: numOrNull('elevation [m]'),
       utcOffsetHours: num("offset of the site's local standard time from UTC [h]"),
+      timeZone: z
+        .string()
+        .nullable()
+        .describe(
+          "IANA zone of the site's clock when known (daylight saving followed); null: standard time all year",
+        ),
       utcOffsetSource: z
         .enum(['option', 'file', 'timestamps', 'longitude', 'assumed-utc'])
         .describe("where the site's clock came from"),
@@ -126,7 +133,11 @@ const seasonTableSchemas = once(() => {
           .describe('usable hours of the month in each year with enough data'),
       })
       .describe('usable drying hours in the month [h]'),
-    usableFraction: share("usable share of the month's hours with data, all years pooled"),
+    usableFraction: share(
+      "usable share of ALL the month's hours with data (day and night), all years pooled",
+    ),
+    usableDaylightFraction: share("usable share of the month's daylight hours with data, all years pooled"),
+    usableNightHoursShare: share("share of the month's usable hours that fall at night"),
     medianHoursByReason: reasonsSchema('h, median across years'),
     meanDaytimeDeficitToTargetGPerKg: numOrNull(
       "mean humidity-ratio deficit to the product's equilibrium RH at target, daylight hours [g/kg dry air]",
@@ -319,6 +330,7 @@ export const assessmentResponseSchema = once(() => {
       warnings: texts('what limits the answer, in words'),
       coverage: coverageSchema(),
       spoilage: assessmentSpoilageSchema(),
+      seasonCalendar: seasonCalendarSchema(),
       bin: binAssessmentSchema(),
     })
     .describe('the seasonal assessment of one site, one product and one method')
