@@ -177,7 +177,10 @@ export function simulateBatch(
         const capScale = c === primary ? capScalePrimary : capScaleBackup
         if (m > c.emcDesorptionDb[i]) {
           const cap = c.capDbPerH[i] * capScale
-          const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          let drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          // a tunnel: never more than the air stream can carry away
+          if (c.airCapDbPerH.length > 0 && drop > c.airCapDbPerH[i] * capScale)
+            drop = c.airCapDbPerH[i] * capScale
           if (c.surfaceBalance && cap > 0) tHour -= (drop / cap) * (tHour - c.productWetC[i])
           if (drop > 0) {
             m -= drop
