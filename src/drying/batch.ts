@@ -177,10 +177,7 @@ export function simulateBatch(
         const capScale = c === primary ? capScalePrimary : capScaleBackup
         if (m > c.emcDesorptionDb[i]) {
           const cap = c.capDbPerH[i] * capScale
-          let drop = dryingDropDb(c, i, m, cap, initialDb, ts)
-          // a tunnel: never more than the air stream can carry away
-          if (c.airCapDbPerH.length > 0 && drop > c.airCapDbPerH[i] * capScale)
-            drop = c.airCapDbPerH[i] * capScale
+          const drop = airLimitedDrop(c, i, dryingDropDb(c, i, m, cap, initialDb, ts), capScale)
           if (c.surfaceBalance && cap > 0) tHour -= (drop / cap) * (tHour - c.productWetC[i])
           if (drop > 0) {
             m -= drop
@@ -265,6 +262,18 @@ function dryingDropDb(
     ts,
   )
   return surfaceBalancedDrop(dropDry, dropWet, cap)
+}
+
+/**
+ * A forced-air method on a surface balance (the tunnel): the hour's drop `drop` [kg/kg db], never more than the
+ * air stream can carry away (its {@link HourlyConditions.airCapDbPerH} × `capScale`); unchanged for other methods.
+ */
+function airLimitedDrop(c: HourlyConditions, i: number, drop: number, capScale: number): number {
+  if (c.airCapDbPerH.length === 0) return drop
+  const air = c.airCapDbPerH[i] * capScale
+  // (not Math.min: a NaN limit leaves the drop as it is)
+  if (drop > air) return air
+  return drop
 }
 
 /**
