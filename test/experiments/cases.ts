@@ -6,8 +6,9 @@
  * - the weather: a reconstruction (test/fixtures/experiments/weather/reconstructions.ts) and the start hour;
  * - the product profile (and its pretreatment variant), size, initial moisture and end point;
  * - the method with its parameters and night practice, the nearest method the engine has where it lacks the
- *   paper's (solar tunnels and greenhouses run as the tunnel method, configured by the rule above
- *   {@link COLLECTOR_TUNNEL}; other natural-convection solar dryers as the solar cabinet);
+ *   paper's: solar tunnels and greenhouses whose product lies under the cover run as the tunnel method,
+ *   configured by the rule of {@link COLLECTOR_TUNNEL}; indirect dryers (product out of the sun) and other
+ *   natural-convection solar dryers as the solar cabinet;
  * - whether the published time is elapsed clock time or active drying time, decided where the part read
  *   does not say by one rule: a time given in hours by a solar-drying study is taken as active drying
  *   (daylight) hours, because such studies join the drying days end to end; a time given in days, sampled
@@ -101,6 +102,11 @@ const PLASTIC_TUNNEL_CLOSED: DryingMethodInput = {
 /** Hossain & Bala 2007: the tunnel's defaults with the drier's 80 kg (abstract) on the default 16 m² floor. */
 const HOSSAIN_BALA_TUNNEL: DryingMethodInput = { kind: 'tunnel', loadingKgPerM2: 5 }
 const HOSSAIN_BALA_NOTE = `mixed-mode forced-convection tunnel (abstract: plastic-covered flat-plate collector in series with the drying tunnel, two PV-driven fans): ${COLLECTOR_TUNNEL}; loading 5 kg/m², the 80 kg capacity of the abstract on the default 16 m² drying floor`
+const TUNNEL_AS_CABINET =
+  'run as the solar cabinet (air heated by a collector, fans only in sun), the nearest method: the tunnel method is used where the product lies under the cover in the sun; collector defaults unless stated'
+
+/** Unblanched chillies (Meghwar et al., Fadhel et al., the ghost-chilli study: no pretreatment named). */
+const UNBLANCHED = 'chili-peppers-unblanched'
 
 const DOYMAZ_START = {
   day: 1,
@@ -417,10 +423,9 @@ function e3sRuns(): EngineCase[] {
 function meghwarRuns(): EngineCase[] {
   const base = {
     experimentId: 'meghwar-chilli-umerkot',
-    role: 'validation' as const,
     weather: 'umerkot-november-2022',
     start: { day: 1, localHour: 9, source: 'assumption: spread at 09:00 (day 1 of the file)' },
-    productId: 'chili-peppers',
+    productId: UNBLANCHED,
     initialWbPct: { value: 80, source: 'Meghwar et al. abstract: initial moisture taken as 80 % wb' },
     endWbPct: { value: 11, source: 'Meghwar et al. abstract: about 10–12 % wb (the middle)' },
     weatherReported: false,
@@ -430,13 +435,20 @@ function meghwarRuns(): EngineCase[] {
     {
       ...base,
       runId: 'tunnel',
+      role: 'validation',
       method: PLASTIC_TUNNEL_CLOSED,
       methodNote: `small-scale natural-convection solar tunnel dryer, 2000 g samples (abstract): ${PLASTIC_TUNNEL_NOTE}; closed at night (active hours); the product's default loading`,
       published: { timeH: 63, kind: 'active', kindReason: ACTIVE_RULE },
     },
     {
+      // The calibration run of chili-peppers-unblanched: of the unblanched runs it is the one the engine models
+      // most directly (open air needs no collector, air flow or cover the abstract does not give), on the
+      // paper's own place and month, with both moistures in the abstract, of the red C. annuum chilli the
+      // catalogue profile describes (Fadhel et al.'s Baklouti is a large mild pepper; the ghost chilli another
+      // species, at a place and season the part read does not give).
       ...base,
       runId: 'open-sun',
+      role: 'calibration',
       method: { kind: 'open-air' },
       methodNote: COVERED_AT_NIGHT,
       published: { timeH: 81, kind: 'active', kindReason: ACTIVE_RULE },
@@ -450,7 +462,7 @@ function fadhelRuns(): EngineCase[] {
     role: 'validation' as const,
     weather: 'hammam-lif-september-2012',
     start: { day: 1, localHour: 9, source: 'assumption: spread at 09:00 (day 1 of the file)' },
-    productId: 'chili-peppers',
+    productId: UNBLANCHED,
     initialWbPct: {
       value: 80,
       source: 'not in the abstract: the catalogue value for red chilli (80 % wb, Meghwar et al.)',
@@ -495,7 +507,7 @@ function ghostChilliRuns(): EngineCase[] {
     role: 'validation' as const,
     weather: 'guwahati-october-2015',
     start: { day: 1, localHour: 9, source: 'assumption: spread at 09:00 (day 1 of the file)' },
-    productId: 'chili-peppers',
+    productId: UNBLANCHED,
     initialWbPct: { value: wb(5.896), source: 'abstract: 589.6 % db' },
     endWbPct: { value: wb(0.12), source: 'abstract: 12 % db' },
     weatherReported: false,
@@ -505,8 +517,8 @@ function ghostChilliRuns(): EngineCase[] {
     {
       ...base,
       runId: 'tunnel',
-      method: { kind: 'tunnel' },
-      methodNote: `indirect forced-convection solar tunnel (abstract: two double-pass solar air heaters in series, a blower; 9 kg in six trays): ${COLLECTOR_TUNNEL}; the blower's power supply is not in the part read (PV form: no flow at night, as the active-hours rule assumes); the product's default loading`,
+      method: { kind: 'solar-cabinet' },
+      methodNote: `indirect forced-convection solar tunnel: two double-pass air heaters, a blower and the chillies on trays out of the sun (abstract), closer to the solar cabinet than to a tunnel whose product lies in the sun: ${TUNNEL_AS_CABINET}`,
       published: { timeH: 123, kind: 'active', kindReason: ACTIVE_RULE },
     },
     {
@@ -528,8 +540,8 @@ export function caseId(c: EngineCase): string {
   return `${c.experimentId}/${c.runId}`
 }
 
-const BLANCHED_FIT =
-  "the chilli rate constant was fitted to Hossain & Bala's tunnel run, whose abstract credits blanching of the samples with part of the shorter drying; this run's chillies were not blanched as far as the part read says, and no published blanching factor exists to derive an unblanched rate (src/product/pretreatments.ts, blanching-chilli: no factor; the variant chili-peppers-unblanched is declared not derivable)"
+const UNBLANCHED_FIT =
+  "the unblanched rate (chili-peppers-unblanched) is fitted to Meghwar et al.'s open-sun run of red 'Longi' chillies at Umerkot, on a November reconstruction from memory, with its 81 h read as active (daylight) hours by this file's rule (the abstract does not say); read as elapsed hours the fit would be 0.176 h⁻¹ instead of 0.0919 (measured once, not used)"
 const IMPROVED_CONVENTIONAL =
   "'improved' and 'conventional' sun drying are not defined in the abstract and run alike in the engine; in the same 32–35 h the conventional runs ended far wetter (0.40 and 0.70 against 0.09 and 0.10 kg/kg db), which one open-air model cannot give both"
 const TUNNEL_WITHOUT_GAIN =
@@ -545,12 +557,11 @@ const OUTSIDE: Record<string, string> = {
     'the air flow per tonne is the engine default (0.5 kg/s per tonne): the published 2.5 m/s through the bed cannot be turned into a flow per tonne without the bed area and depth, which the abstract does not give',
   'hossain-bala-2007-chilli-solar-tunnel/red-conventional-sun': IMPROVED_CONVENTIONAL,
   'hossain-bala-2007-chilli-solar-tunnel/green-conventional-sun': IMPROVED_CONVENTIONAL,
-  'meghwar-chilli-umerkot/open-sun': BLANCHED_FIT,
-  'fadhel-2014-red-pepper-tunisia/solar-drier': `${BLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli`,
-  'fadhel-2014-red-pepper-tunisia/greenhouse': `${BLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli; ${TUNNEL_WITHOUT_GAIN}`,
-  'fadhel-2014-red-pepper-tunisia/open-sun': `${BLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli`,
-  'renewable-energy-2017-ghost-chilli/tunnel': `${BLANCHED_FIT}; ghost chilli (Capsicum chinense) is another species with a thicker, waxier pod, and its site and season are not in the part read`,
-  'renewable-energy-2017-ghost-chilli/open-sun': `${BLANCHED_FIT}; ghost chilli (Capsicum chinense) is another species with a thicker, waxier pod, and its site and season are not in the part read`,
+  'fadhel-2014-red-pepper-tunisia/solar-drier': `${UNBLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli, and the abstract gives neither its moistures (the catalogue's 80 → 11 % wb taken) nor whether it was cut; the natural-convection drier runs as the forced-air cabinet with fans only in sun, so it dries by day only while the published time includes nights`,
+  'fadhel-2014-red-pepper-tunisia/greenhouse': `${TUNNEL_WITHOUT_GAIN}; Baklouti is a large mild pepper, not a hot chilli. Also: ${UNBLANCHED_FIT}`,
+  'fadhel-2014-red-pepper-tunisia/open-sun': `${UNBLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli, and the abstract gives neither its moistures (the catalogue's 80 → 11 % wb taken) nor whether it was cut; the engine covers open-sun product at night (left out, it dries slower still in this reconstruction: it takes up water at night), while the published time includes nights`,
+  'renewable-energy-2017-ghost-chilli/tunnel': `${UNBLANCHED_FIT}; ghost chilli (Capsicum chinense) is another species with a thicker, waxier pod and wetter at the start (589.6 % db), and its site and season are not in the part read (the weakest reconstruction of the set); the forced-convection tunnel runs as the solar cabinet`,
+  'renewable-energy-2017-ghost-chilli/open-sun': `${UNBLANCHED_FIT}; ghost chilli (Capsicum chinense) is another species with a thicker, waxier pod and wetter at the start (589.6 % db), and its site and season are not in the part read (the weakest reconstruction of the set)`,
 }
 
 function withExpectations(cases: EngineCase[]): EngineCase[] {
