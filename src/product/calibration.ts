@@ -69,10 +69,10 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
   {
     productId: 'fish-fillets',
     parameter: 'k.kRefPerH',
-    value: 0.09353,
+    value: 0.06363,
     caseId: 'kituu-tilapia-brining-solar-tunnel/unbrined',
     source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Kituu G.M., Shitanda D., Kanali C.L., Mailutha J.T. n.d. (no year on the page read), Effect of Brining on the Drying Rate of Tilapia in a Solar Tunnel Dryer, ACTA Press paper 34014 (abstract), unbrined tilapia pieces 9 mm thick in a solar tunnel dryer in Kenya: run 'unbrined', 84.8 → 10.0 % wb in 40 h (active time) with method tunnel on the weather reconstruction 'juja-february-2010' (test/fixtures/experiments/weather/; Juja February climate from memory, site and month assumed: the abstract gives the country only and no weather figure; initial moisture from the same authors' CIGR Journal abstract); engine ÷ target 1.0001",
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Kituu G.M., Shitanda D., Kanali C.L., Mailutha J.T. n.d. (no year on the page read), Effect of Brining on the Drying Rate of Tilapia in a Solar Tunnel Dryer, ACTA Press paper 34014 (abstract), unbrined tilapia pieces 9 mm thick in a solar tunnel dryer in Kenya: run 'unbrined', 84.8 → 10.0 % wb in 40 h (active time) with method tunnel on the weather reconstruction 'juja-february-2010' (test/fixtures/experiments/weather/; Juja February climate from memory, site and month assumed: the abstract gives the country only and no weather figure; initial moisture from the same authors' CIGR Journal abstract); engine ÷ target 1.0000",
   },
 ]
 
