@@ -173,6 +173,7 @@ function allCases(): EngineCase[] {
     ...ghostChilliRuns(),
     ...arunRuns(),
     ...joelRuns(),
+    kituuRun(),
     ...muazuRuns(),
     owusuRun(),
   ]
@@ -248,6 +249,34 @@ function joelRuns(): EngineCase[] {
       published: days,
     },
   ]
+}
+
+/** Kituu et al.: unbrined tilapia pieces in a solar tunnel dryer in Kenya (the fish calibration run). */
+function kituuRun(): EngineCase {
+  return {
+    experimentId: 'kituu-tilapia-brining-solar-tunnel',
+    runId: 'unbrined',
+    role: 'calibration',
+    weather: 'juja-february-2010',
+    start: { day: 1, localHour: 8, source: 'assumption: loaded at 08:00 on the second day of the file' },
+    productId: 'fish-fillets',
+    sizeMm: { value: 9, source: 'Kituu et al. abstract: pieces of about 4 cm by 3 cm by 9 mm' },
+    initialWbPct: {
+      value: wb(5.58),
+      source:
+        "Kituu et al. n.d., Influence of brining on the drying parameters of tilapia in a glass-covered solar tunnel dryer, CIGR Journal article 1349 (abstract): 5.58 kg/kg db for the unbrined fish, read as its moisture when drying began (the same authors' ACTA Press abstract gives none)",
+    },
+    endWbPct: {
+      value: 10,
+      source:
+        "Kituu et al. abstract: 'about ... 10% for un-brined samples' (basis not stated; taken as wet basis)",
+    },
+    method: { kind: 'tunnel' },
+    methodNote: `solar tunnel dryer with a plenum chamber before the tunnel section (abstract), glass-covered (companion abstract): ${COLLECTOR_TUNNEL}`,
+    published: { timeH: 40, kind: 'active', kindReason: ACTIVE_RULE },
+    weatherReported: false,
+    expect: 'within',
+  }
 }
 
 function muazuRuns(): EngineCase[] {
