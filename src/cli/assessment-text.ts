@@ -6,6 +6,7 @@
 import type { Assessment } from '../analysis/assessment.ts'
 import { FUELS } from '../drying/fuels.ts'
 import { HOUR_STATUS_NAMES } from '../drying/usable-hour.ts'
+import { memoryFiguresLine } from '../product/memory-figures.ts'
 import { binText } from './bin.ts'
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
@@ -65,6 +66,7 @@ export function assessmentText(a: Assessment): string {
     `${a.site.name}: ${p.name}, ${a.method.kind}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wb`,
   )
   out.push(`dry means ${p.dryTarget.sentence}`)
+  out.push(memoryFiguresLine(p.figuresFromMemory, p.figureCounts, p.id))
   out.push(
     `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
   )

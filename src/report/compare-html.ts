@@ -14,7 +14,7 @@ import { escapeHtml } from './escape.ts'
 import { figureHtml } from './figure.ts'
 import { htmlDocument, type ReportOptions, renderReportArticle } from './report-html.ts'
 import { finite, round } from './sections/context.ts'
-import { methodName } from './sections/summary.ts'
+import { methodName, productMemoryLine } from './sections/summary.ts'
 import type { ReportTable } from './tables.ts'
 import { tableHtml } from './tables.ts'
 
@@ -211,7 +211,7 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
     .join('\n')
   return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
-<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div></dl></header>
+<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Deadline</dt><dd>${first.deadlineDays} days</dd></div><div class="kv"><dt>Recalled figures</dt><dd>${escapeHtml(productMemoryLine(first.product))}</dd></div></dl></header>
 <section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(o.ranking, units))}</section>
 <section class="report-section" data-section="compare-monthly"><h2>Sites side by side</h2>${usable}${heat}</section>
 </article>

@@ -1,5 +1,6 @@
 import { parseArgs } from 'node:util'
 import { COMPARE_CRITERIA, type CompareCriterion, type Comparison, compare } from '../../analysis/compare.ts'
+import { memoryFiguresLine } from '../../product/memory-figures.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { type CliCommand, UsageError } from '../command.ts'
 import {
@@ -44,6 +45,7 @@ export function comparisonText(c: Comparison): string {
     `${c.product.name}, ${c.method.kind}, season ${c.season.start} to ${c.season.end}, ${c.assessments[0]?.bin ? `${c.assessments[0].bin.seasonDays} days in the bin for the top layer to dry` : `deadline ${c.deadlineDays} days`}`,
   )
   out.push(`ranked by ${c.criterion}: ${c.criterionDescription}`)
+  out.push(memoryFiguresLine(c.product.figuresFromMemory, c.product.figureCounts, c.product.id))
   out.push('')
   const width = Math.max(4, ...c.sites.map((s) => s.site.length))
   out.push(

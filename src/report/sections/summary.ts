@@ -2,6 +2,7 @@
  * @module report/sections/summary
  * The header (site, data, coverage, product, method, target) and the answer in plain sentences.
  */
+import { memoryFiguresLine } from '../../product/memory-figures.ts'
 import type { Assessment } from '../assessment-view.ts'
 import { MONTH_LONG } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
@@ -23,6 +24,11 @@ function coord(v: number | null | undefined, pos: string, neg: string): string {
 
 function offsetText(h: number): string {
   return `UTC${h >= 0 ? '+' : '−'}${Math.abs(h)}`
+}
+
+/** Which of the product's figures rest on memory, in one line (product/memory-figures.ts). */
+export function productMemoryLine(p: Assessment['product']): string {
+  return memoryFiguresLine(p.figuresFromMemory, p.figureCounts, p.id)
 }
 
 /** Rows of the header as label/value pairs (plain text; escaped when rendered). */
@@ -65,6 +71,7 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
   ])
   rows.push(['Dry means', a.product.dryTarget.sentence])
+  rows.push(['Recalled figures', productMemoryLine(a.product)])
   rows.push(['Method', methodName(a)])
   rows.push([
     'Season',
