@@ -21,6 +21,8 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import { type BenchFigure, type BenchSection, median } from '../section.ts'
 
 const REPEATS = 3
+/** Pairs of runs without and with the spoilage models for their cost. */
+const SPOILAGE_PAIRS = 6
 const SEED = 20_210_003
 
 function timed<T>(f: () => T): { ms: number; value: T } {
@@ -80,6 +82,27 @@ export const section: BenchSection = {
       batches = t.value.coverage.startDateBatchesRun
     }
     const heapAfter = process.memoryUsage().heapUsed
+    // The same assessment without the spoilage models (the engine before they were stepped along every
+    // batch) against with them, in interleaved pairs (without, with) so that both see the same load and heap:
+    // the ratio per pair, median over the pairs, is the cost of spoilage in this run.
+    const noSpoilage = { ...options, spoilage: false }
+    assess(series, noSpoilage) // warm-up
+    const refCpu: number[] = []
+    const withCpu: number[] = []
+    const pairRatios: number[] = []
+    const cpuOf = (o: typeof options): number => {
+      const c0 = process.cpuUsage()
+      assess(series, o)
+      const c = process.cpuUsage(c0)
+      return (c.user + c.system) / 1000
+    }
+    for (let r = 0; r < SPOILAGE_PAIRS; r++) {
+      const off = cpuOf(noSpoilage)
+      const on = cpuOf(options)
+      refCpu.push(off)
+      withCpu.push(on)
+      pairRatios.push(on / off)
+    }
     figures.push({
       name: '30-year assessment, CPU time',
       value: Math.round(median(cpuRuns)),
@@ -91,6 +114,18 @@ export const section: BenchSection = {
       value: Math.round(median(runs)),
       unit: 'ms',
       note: `median of ${REPEATS}; best ${Math.round(Math.min(...runs))} ms; target < 500 ms; ${startRows} start days, ${batches} batches`,
+    })
+    figures.push({
+      name: 'the same assessment without spoilage models, CPU time',
+      value: Math.round(median(refCpu)),
+      unit: 'ms',
+      note: `median of ${SPOILAGE_PAIRS}, interleaved with as many runs with them (median ${Math.round(median(withCpu))} ms)`,
+    })
+    figures.push({
+      name: 'with / without spoilage models (CPU time)',
+      value: Math.round(100 * median(pairRatios)) / 100,
+      unit: 'x',
+      note: `median of ${SPOILAGE_PAIRS} interleaved pairs (${pairRatios.map((x) => x.toFixed(2)).join(', ')}); the spoilage model steps every hour of every batch`,
     })
     figures.push({
       name: 'heap growth over the timed assessments',

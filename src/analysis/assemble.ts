@@ -160,6 +160,8 @@ export function assembleAssessment(
     psychrometric: PsychrometricSummary
     /** The bin stage's answer (methods with deep-bed batches). */
     bin?: BinAssessment
+    /** The spoilage block (null when the assessment ran without spoilage; absent: null). */
+    spoilage?: Assessment['spoilage']
     /** Batches that ran into hours without weather (outcome unknown) and the hours they missed. */
     unknownBatches: UnknownBatches
   },
@@ -203,6 +205,7 @@ export function assembleAssessment(
     hourOfDay: hourOfDayTable(calendar.counts),
     hoursByReason: reasons,
     startDates: starts.table.rows,
+    spoilage: parts.spoilage ?? null,
     bestStartWindows: starts.best.windows,
     bestStartWindowCriterion: starts.best.criterion,
     heat: parts.heat,

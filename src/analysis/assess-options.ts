@@ -63,6 +63,11 @@ export interface AssessOptions {
   fuel?: FuelId
   /** Prices per fuel unit; missing prices use the marked examples. */
   fuelPrices?: Partial<Record<FuelId, number>>
+  /**
+   * false: skip the spoilage models (every `spoilage` of the assessment is then null). Default true. For
+   * benchmarks that time the engine without them; every entry point leaves it on.
+   */
+  spoilage?: boolean
   onProgress?: (p: AssessProgress) => void
 }
 
@@ -101,6 +106,8 @@ export interface ResolvedAssessOptions {
   backupMethod: HeatedMethod
   fuel?: FuelId
   fuelPrices?: Partial<Record<FuelId, number>>
+  /** Step the product family's spoilage model along every batch. */
+  spoilage: boolean
   onProgress?: (p: AssessProgress) => void
 }
 
@@ -144,6 +151,7 @@ export function resolveAssessOptions(options: AssessOptions): ResolvedAssessOpti
         : heatedBackup(options.backupHeater, product.erhPct(25, targetDb), maxProductTempC),
     fuel: options.fuel,
     fuelPrices: options.fuelPrices,
+    spoilage: options.spoilage !== false,
     onProgress: options.onProgress,
   }
 }

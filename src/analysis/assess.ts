@@ -34,6 +34,7 @@ import { heatSummary } from './heat-summary.ts'
 import { type LocalTimeColumns, localTimeColumns } from './local-time.ts'
 import { countMonthly, type MonthlyCounts, monthlyRows } from './monthly-tables.ts'
 import { psychrometricSummary } from './psychrometric.ts'
+import { assessmentSpoilage, spoilageSetup, summariseSpoilage } from './spoilage.ts'
 import {
   bestStartWindows,
   knownOutcomes,
@@ -119,14 +120,23 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
   }
   const monthlyUnknown = monthlyHeatStage(ctx, calendar.monthly, calendar.years, run)
   const starts = startDatesStage(ctx, calendar.years, run)
-  const heat = heatSummary(knownOutcomes(starts.table.outcomes), backup, run, ctx)
+  const known = knownOutcomes(starts.table.outcomes)
+  const heat = heatSummary(known, backup, run, ctx)
   const unknown = [...monthlyUnknown, ...starts.table.outcomes.filter((o) => o.unknown)]
+  const spoilage =
+    ctx.spoilage === undefined
+      ? null
+      : assessmentSpoilage(
+          ctx.spoilage.model,
+          known.map((o) => o.spoilage),
+        )
   return assembleAssessment(series, run, {
     primary,
     calendar,
     starts,
     heat,
     psychrometric: psychrometric(),
+    spoilage,
     unknownBatches: {
       count: unknown.length,
       missingHours: unknown.reduce((sum, o) => sum + o.missingHours, 0),
@@ -232,6 +242,7 @@ function startContext(
     maxHours: Math.round(run.maxDays * 24),
     startHourLocal: run.season.startHourLocal,
     wrap: series.typicalYear,
+    spoilage: run.spoilage ? spoilageSetup(run.profile) : undefined,
   }
 }
 
@@ -263,6 +274,13 @@ export function monthlyHeatStage(
     if (outcomes.length < 5) row.supplementalHeatKwhPerTonne.p10 = row.supplementalHeatKwhPerTonne.p90 = null
     const days = outcomes.map((o) => o.hoursToTarget / 24).sort((a, b) => a - b)
     row.medianDaysToTarget = roundOrNull(quantileSorted(days, 0.5), 1)
+    row.spoilage =
+      ctx.spoilage === undefined
+        ? null
+        : summariseSpoilage(
+            ctx.spoilage.model,
+            outcomes.map((o) => o.spoilage),
+          )
     run.onProgress?.({ stage: 'monthly-heat', done: month, total: 12 })
   }
   return unknown

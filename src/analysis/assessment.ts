@@ -46,6 +46,50 @@ export interface AssessmentProduct {
   figureCounts: FigureCounts
 }
 
+/**
+ * Spoilage along the batches of one start date (or of one month's monthly batches): the product family's
+ * spoilage model (see {@link AssessmentSpoilage}) stepped hour by hour along each batch of the method alone.
+ */
+export interface SpoilageSummary {
+  /** Id of the spoilage model (`spoilage.model.id` of the assessment). */
+  modelId: string
+  /** Its source in short (authors and years); the full citation is in `spoilage.model.source`. */
+  source: string
+  /** Batches summarised (one per year for a start date; two per year, the 1st and 16th, for a month). */
+  batches: number
+  /** Batches whose spoilage measure reached the model's limit before the product reached its target. */
+  batchesSpoiledBeforeDry: number
+  /** Share of those batches [0–1]: the probability that a batch spoils before it is dry; null without batches. */
+  probability: number | null
+  /** Hours the product spent in conditions the model counts as at risk, until dry (or the batch's end). */
+  hoursAtRisk: { median: number | null; p90: number | null }
+  /** The model's measure when the batch was dry (or at its end) as a share of its limit (1 = spoiled). */
+  shareOfLimitUsed: { median: number | null; p90: number | null }
+}
+
+/** The spoilage model of an assessment, what it counts and how the engine steps it. */
+export interface AssessmentSpoilage {
+  model: {
+    id: string
+    name: string
+    source: { citation: string; equation: string; confidence: string }
+    /** What the measure is, e.g. "dry-matter loss", and its unit ('' for a fraction). */
+    measureName: string
+    measureUnit: string
+    /** The measure at which a batch counts as spoiled, and where that comes from. */
+    limit: number
+    limitSource: string
+    atRiskWhen: string
+    validity: string
+  }
+  /** How the model is stepped along a batch, in words. */
+  rule: string
+  /** All the season's start-date batches together. */
+  season: SpoilageSummary
+  /** What a reader must know with these figures (the model's own cautions first). */
+  cautions: string[]
+}
+
 export interface AssessmentDryTarget {
   /**
    * 'water-activity': the moisture of the product's safe water activity at the storage temperature;
@@ -91,6 +135,8 @@ export interface MonthlyRow {
   medianDaysToTarget: number | null
   /** Years with enough data in the month (≥ the stated coverage). */
   yearsWithData: number
+  /** Spoilage along those batches (the 1st and 16th); null when the assessment ran without spoilage. */
+  spoilage: SpoilageSummary | null
 }
 
 export interface HourOfDayTable {
@@ -128,6 +174,8 @@ export interface StartDateRow {
   yearsNotReachable: number
   /** Solar collector heat used by the method alone over the batch [kWh per tonne fresh] (0 unless solar cabinet). */
   solarHeatKwhPerTonne: { median: number | null; p90: number | null }
+  /** Spoilage along the batches of the method alone; null when the assessment ran without spoilage. */
+  spoilage: SpoilageSummary | null
 }
 
 export interface StartWindow {
@@ -225,6 +273,8 @@ export interface Assessment {
   /** Hours per reason over the whole file. */
   hoursByReason: Record<HourStatusName, number>
   startDates: StartDateRow[]
+  /** The spoilage model and the season's figures; null when the assessment ran without spoilage. */
+  spoilage: AssessmentSpoilage | null
   bestStartWindows: StartWindow[]
   bestStartWindowCriterion: string
   heat: HeatSummary

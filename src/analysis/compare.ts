@@ -38,6 +38,8 @@ export interface SiteScore {
   meanProbabilityWithinDeadline: number | null
   medianHeatKwhPerTonne: number | null
   bestStartWindow: string | null
+  /** Share of the season's batches that spoiled before they were dry (the assessment's `spoilage.season`). */
+  spoilageProbability: number | null
   /**
    * Natural-air bins: the largest of the start months' minimum airflows [m³/min per t] (the airflow that serves
    * the whole season), null when some month has none among those compared; absent for other methods.
@@ -122,6 +124,7 @@ function score(a: Assessment): Omit<SiteScore, 'rank'> {
     meanProbabilityWithinDeadline: roundOrNull(meanP, 3),
     medianHeatKwhPerTonne: a.heat.heatToAirKwhPerTonne.median,
     bestStartWindow: best ? `${best.from} to ${best.to}` : null,
+    spoilageProbability: a.spoilage?.season.probability ?? null,
     ...(a.bin ? { binSeasonMinimumAirflowM3PerMinPerTonne: binSeasonMinimumAirflow(a) } : {}),
     warnings: a.warnings,
   }

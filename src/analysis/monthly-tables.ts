@@ -142,6 +142,7 @@ export function monthlyRows(counts: MonthlyCounts): MonthlyRow[] {
       supplementalHeatKwhPerTonne: { median: null, p10: null, p90: null },
       medianDaysToTarget: null,
       yearsWithData: byYear.length,
+      spoilage: null,
     })
   }
   return rows

@@ -6,12 +6,14 @@
  * conditions computed once per method.
  */
 
+import type { BatchSpoilageResult, BatchSpoilageSetup } from '../drying/batch.ts'
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
 import type { ProductResponse } from '../drying/product-response.ts'
 import { type HeatStrategy, supplementalHeat } from '../drying/supplemental-heat.ts'
 import { MS_PER_DAY, MS_PER_HOUR } from '../physics/constants.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import type { StartDateRow, StartWindow } from './assessment.ts'
+import { summariseSpoilage } from './spoilage.ts'
 import { quantileSorted, roundOrNull } from './statistics.ts'
 
 /** Windows are runs of start days whose probability of finishing within the deadline is at least this (assumption). */
@@ -30,6 +32,8 @@ export interface StartContext {
   startHourLocal: number
   /** Typical year: batches wrap from the end of the file to its start. */
   wrap: boolean
+  /** The spoilage model stepped along every batch of the method alone; absent: no spoilage figures. */
+  spoilage?: BatchSpoilageSetup
 }
 
 export interface StartOutcome {
@@ -50,6 +54,8 @@ export interface StartOutcome {
   /** Solar collector heat into the air during the batch by the method alone [kWh/t] (solar cabinet). */
   solarKwhPerTonne: number
   strategy: HeatStrategy
+  /** The spoilage model's outcome along the method-alone batch (when the context has a model). */
+  spoilage?: BatchSpoilageResult
 }
 
 export interface MonthDay {
@@ -99,6 +105,7 @@ export function runStart(ctx: StartContext, index: number): StartOutcome {
       initialDb: ctx.initialDb,
       targetDb: ctx.targetDb,
       wrap: ctx.wrap,
+      spoilage: ctx.spoilage,
     },
     ctx.deadlineHours,
   )
@@ -114,6 +121,7 @@ export function runStart(ctx: StartContext, index: number): StartOutcome {
     heatKwhPerTonne: unknown ? Number.NaN : r.heatKwhPerTonne,
     solarKwhPerTonne: r.natural.solarKwhPerTonne,
     strategy: r.strategy,
+    spoilage: r.natural.spoilage,
   }
 }
 
@@ -134,8 +142,15 @@ function medianP90(values: number[], digits: number): { median: number | null; p
   }
 }
 
-/** Summarise the outcomes of one start day across years. */
-export function startDateRow(start: MonthDay, all: StartOutcome[]): StartDateRow {
+/**
+ * Summarise the outcomes of one start day across years (spoilage with `spoilage`'s model, when given). Batches
+ * whose outcome is unknown (they ran into hours without weather) are left out of every figure, spoilage too.
+ */
+export function startDateRow(
+  start: MonthDay,
+  all: StartOutcome[],
+  spoilage?: BatchSpoilageSetup,
+): StartDateRow {
   const outcomes = knownOutcomes(all)
   const n = outcomes.length
   const days = outcomes.map((o) => o.hoursToTarget / 24)
@@ -168,6 +183,13 @@ export function startDateRow(start: MonthDay, all: StartOutcome[]): StartDateRow
       outcomes.map((o) => o.solarKwhPerTonne),
       1,
     ),
+    spoilage:
+      spoilage === undefined
+        ? null
+        : summariseSpoilage(
+            spoilage.model,
+            outcomes.map((o) => o.spoilage),
+          ),
   }
 }
 
@@ -201,7 +223,7 @@ export function startDateTable(
       outcomes.push(runStart(ctx, index))
       batches++
     }
-    rows.push(startDateRow(d, outcomes))
+    rows.push(startDateRow(d, outcomes, ctx.spoilage))
     all.push(...outcomes)
     onDay?.(di)
   })

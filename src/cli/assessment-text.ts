@@ -1,6 +1,6 @@
 /**
  * @module cli/assessment-text
- * The readable summary of an assessment that `dryhours assess` prints: the monthly table, the start windows and
+ * The readable summary of an assessment that `dryhours assess` prints: the spoilage before dry, the monthly table, the start windows and
  * start-date table with the heat of a batch method (or the bin's answer), the warnings and cautions.
  */
 import type { Assessment } from '../analysis/assessment.ts'
@@ -12,11 +12,28 @@ import { binText } from './bin.ts'
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
 const f0 = (x: number | null): string => (x === null ? '–' : x.toFixed(0))
 const f1 = (x: number | null): string => (x === null ? '–' : x.toFixed(1))
+const pct = (x: number | null | undefined): string =>
+  x === null || x === undefined ? '–' : (100 * x).toFixed(0)
 /** A start row's batches with unknown outcome (they met hours without weather), when there are any. */
 const unknownNote = (r: Assessment['startDates'][number]): string =>
   r.yearsUnknown > 0
     ? `  + ${r.yearsUnknown} year${r.yearsUnknown === 1 ? '' : 's'} unknown (${r.missingWeatherHours} h without weather)`
     : ''
+
+/** The spoilage lines of the text summary: the model, its source and limit, and the season's share. */
+export function spoilageText(a: Assessment): string[] {
+  const s = a.spoilage
+  if (!s) return []
+  const limit =
+    s.model.measureUnit === ''
+      ? `${s.model.measureName} = ${s.model.limit}`
+      : `${s.model.limit} ${s.model.measureUnit} ${s.model.measureName}`
+  return [
+    `Spoilage before dry: ${s.model.name}; source ${s.season.source} (${s.model.source.confidence}); spoiled at ${limit}`,
+    `  season: ${s.season.batchesSpoiledBeforeDry} of ${s.season.batches} batches (${pct(s.season.probability)} %) spoiled before they were dry; hours at risk median ${f0(s.season.hoursAtRisk.median)} (P90 ${f0(s.season.hoursAtRisk.p90)})`,
+    ...s.cautions.slice(0, 2).map((c) => `  ! ${c}`),
+  ]
+}
 
 /** Start windows, the start-date table and the heat of a batch method. */
 function batchesText(a: Assessment): string[] {
@@ -32,12 +49,14 @@ function batchesText(a: Assessment): string[] {
   out.push(
     `Start dates (${a.season.start} to ${a.season.end}, batch starts ${a.season.startHourLocal}:00 local)`,
   )
-  out.push('start  years  days median  days P90  P(within deadline)  rewet h  heat kWh/t median (P90)')
+  out.push(
+    'start  years  days median  days P90  P(within deadline)  rewet h  heat kWh/t median (P90)  spoils first %  at-risk h',
+  )
   const every = Math.max(1, Math.ceil(a.startDates.length / 20))
   a.startDates.forEach((r, i) => {
     if (i % every !== 0) return
     out.push(
-      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})${unknownNote(r)}`,
+      `${r.start}  ${String(r.years).padStart(5)}  ${f1(r.daysToTarget.median).padStart(11)}  ${f1(r.daysToTarget.p90).padStart(8)}  ${(100 * r.probabilityWithinDeadline).toFixed(0).padStart(17)} %  ${f0(r.rewettingHours.median).padStart(7)}  ${`${f0(r.supplementalHeat.medianKwhPerTonne)} (${f0(r.supplementalHeat.p90KwhPerTonne)})`.padEnd(25)}  ${pct(r.spoilage?.probability).padStart(14)}  ${f0(r.spoilage?.hoursAtRisk.median ?? null).padStart(9)}${unknownNote(r)}`,
     )
   })
   const h = a.heat
@@ -70,9 +89,16 @@ export function assessmentText(a: Assessment): string {
   out.push(
     `data ${a.coverage.firstHourUtc} to ${a.coverage.lastHourUtc}, years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}; local time UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours}`,
   )
+  const spoilageLines = spoilageText(a)
+  if (spoilageLines.length > 0) {
+    out.push('')
+    out.push(...spoilageLines)
+  }
   out.push('')
   out.push('Usable drying hours per month (median, P10–P90 across years; P10 = exceeded in 9 of 10 years)')
-  out.push('month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target')
+  out.push(
+    'month  median  P10–P90   usable %  main reason not usable   heat kWh/t  days to target  spoils first %',
+  )
   for (const m of a.monthly) {
     const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
       .map((r) => [r, m.medianHoursByReason[r]] as const)
@@ -80,7 +106,7 @@ export function assessmentText(a: Assessment): string {
     const main = reasons[0][1] > 0 ? `${reasons[0][0]} (${reasons[0][1]} h)` : '–'
     const range = `${f0(m.usableHours.p10)}–${f0(m.usableHours.p90)}`
     out.push(
-      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}`,
+      `${MONTHS[m.month - 1].padEnd(5)}  ${f0(m.usableHours.median).padStart(6)}  ${range.padEnd(9)} ${(m.usableFraction === null ? '–' : (100 * m.usableFraction).toFixed(0)).padStart(8)}  ${main.padEnd(24)} ${f0(m.supplementalHeatKwhPerTonne.median).padStart(10)}  ${f1(m.medianDaysToTarget).padStart(14)}  ${pct(m.spoilage?.probability).padStart(14)}`,
     )
   }
   out.push('')

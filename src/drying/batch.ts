@@ -15,9 +15,13 @@
  *   outcome (`outcomeUnknown`), which the assessment reports as such, never as a slow batch.
  * An optional backup (heated forced air) replaces the primary method in every hour the primary would not
  * dry: the supplemental-heat strategy of docs/model.md §8.
+ * With `options.spoilage`, the product family's spoilage model is stepped every hour of the batch (paused and
+ * covered hours included) with the hour's product temperature (the surface-balanced one in drying hours of
+ * exposed methods) and the moisture at the start of the hour (drying/batch-spoilage.ts).
  */
 
 import { surfaceBalancedDrop } from '../product/stepping.ts'
+import { type BatchSpoilageResult, type BatchSpoilageSetup, BatchSpoilageTrack } from './batch-spoilage.ts'
 import type { HourlyConditions } from './hourly-conditions.ts'
 import { HourMode } from './methods/method-model.ts'
 import {
@@ -27,6 +31,8 @@ import {
   stepMoistureRatio,
 } from './product-response.ts'
 import { HourStatus } from './usable-hour.ts'
+
+export type { BatchSpoilageResult, BatchSpoilageSetup } from './batch-spoilage.ts'
 
 export interface BatchOptions {
   /** Index of the first hour. */
@@ -39,6 +45,8 @@ export interface BatchOptions {
   wrap?: boolean
   /** Record the moisture after every hour (tests, single-batch reports). */
   recordTrace?: boolean
+  /** Step this spoilage model along the batch (see the module comment). */
+  spoilage?: BatchSpoilageSetup
 }
 
 export interface BatchResult {
@@ -79,6 +87,8 @@ export interface BatchResult {
   productTrace?: Float64Array
   /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
   usedBackup?: Uint8Array
+  /** The spoilage model's outcome, when `options.spoilage` was given. */
+  spoilage?: BatchSpoilageResult
 }
 
 function checkBatchOptions(options: BatchOptions, hours: number): void {
@@ -111,6 +121,7 @@ export function simulateBatch(
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
+  const track = options.spoilage === undefined ? undefined : new BatchSpoilageTrack(options.spoilage)
   const ts = product.thompsonTimeScale
   // the caps are per kg of the dry matter of the conditions' initial moisture; this batch's dry matter per
   // tonne fresh (or per m²) is 1/(1 + initialDb): rescale so the water per kg of air is what the air carries
@@ -149,6 +160,9 @@ export function simulateBatch(
       if (usedBackup) usedBackup[h] = 1
     }
     const mode = c.mode[i]
+    const mStart = m
+    // the product's temperature in the hour: the conditions' (it evaporates nothing), or on its surface balance
+    let tHour = c.productC[i]
     if (mode === HourMode.missing) {
       missingHours++
     } else if (mode !== HourMode.paused) {
@@ -164,10 +178,7 @@ export function simulateBatch(
         if (m > c.emcDesorptionDb[i]) {
           const cap = c.capDbPerH[i] * capScale
           const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
-          if (productTrace && c.surfaceBalance) {
-            const tDry = c.productC[i]
-            productTrace[h] = cap > 0 ? tDry - (drop / cap) * (tDry - c.productWetC[i]) : tDry
-          }
+          if (c.surfaceBalance && cap > 0) tHour -= (drop / cap) * (tHour - c.productWetC[i])
           if (drop > 0) {
             m -= drop
             toAir += drop
@@ -181,8 +192,11 @@ export function simulateBatch(
       }
     }
     if (trace) trace[h] = m
-    if (productTrace && Number.isNaN(productTrace[h]) && mode !== HourMode.paused) {
-      productTrace[h] = c.productC[i] // no drying step: the product evaporates nothing
+    if (productTrace && mode !== HourMode.paused) productTrace[h] = tHour
+    if (track !== undefined) {
+      track.productC = tHour
+      track.moistureDb = mStart
+      track.stepHour()
     }
     if (m <= targetDb) {
       hoursToTarget = h + 1
@@ -207,6 +221,7 @@ export function simulateBatch(
     trace,
     productTrace,
     usedBackup,
+    spoilage: track?.result(),
   }
 }
 

@@ -132,7 +132,10 @@ export function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceS
   c.deficitToTargetGPerKg[i] = 1000 * dTarget
   const evaporation = hour.evaporationKgPerM2H
   c.evaporationKgPerM2H[i] = evaporation
-  c.capDbPerH[i] = exposed ? Math.max(0, evaporation) * e.exposedCapFactor : dSat * e.forcedCapFactor
+  // a forced-air method's flow share of the hour (fans on a PV module) scales its limit; 1 for the others
+  c.capDbPerH[i] = exposed
+    ? Math.max(0, evaporation) * e.exposedCapFactor
+    : dSat * e.forcedCapFactor * hour.airFlowShare
   if (exposed) {
     // vapour uptake limit (drying/batch.ts rewetting): conductance × (ea − aw·es(T_product)), per kg dry matter
     const g = hour.vaporConductanceKgPerM2HKpa * e.exposedCapFactor

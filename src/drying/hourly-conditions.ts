@@ -105,6 +105,7 @@ function readAmbientHour(e: Engine, i: number): boolean {
   hour.vaporConductanceKgPerM2HKpa = Number.NaN
   hour.heaterKwhPerTonne = 0
   hour.solarKwhPerTonne = 0
+  hour.airFlowShare = 1
   return true
 }
 
@@ -194,7 +195,7 @@ export function computeHourlyConditions(
     surfaceBalance,
   )
   const dmPerKgFresh = 1 - options.initialWbPct / 100
-  const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method)
+  const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method, options.loadingKgPerM2)
   const methodHour = model.prepare(method, {
     series,
     profile: product.profile,

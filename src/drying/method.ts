@@ -13,6 +13,7 @@ export type { NaturalAirBinMethod } from './methods/natural-air-bin.ts'
 export type { OpenAirMethod } from './methods/open-air.ts'
 export type { ShadeMethod } from './methods/shade.ts'
 export type { SolarCabinetMethod } from './methods/solar-cabinet.ts'
+export type { TunnelMethod } from './methods/tunnel.ts'
 
 type MethodSchema = MethodModels[number]['schema']
 

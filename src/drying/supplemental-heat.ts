@@ -45,7 +45,8 @@ export function supplementalHeat(
       heatKwhPerTonne: primaryHeats ? natural.heaterKwhPerTonne : 0,
     }
   }
-  const byDeadline = { ...options, maxHours: deadlineHours, recordTrace: false }
+  // the spoilage clock runs along the method-alone batch only
+  const byDeadline = { ...options, maxHours: deadlineHours, recordTrace: false, spoilage: undefined }
   if (!primaryHeats) {
     const hybrid = simulateBatch(primary, product, byDeadline, backup)
     if (hybrid.reached) {

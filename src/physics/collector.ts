@@ -100,3 +100,30 @@ export function collectorOutletC(
   const cpJPerKgK = moistAirHeatCapacityKjPerKgK(humidityRatioKgPerKg) * 1000
   return inletC + (usefulGainWm2 * areaM2) / (dryAirFlowKgPerS * cpJPerKgK)
 }
+
+/**
+ * Collector heat removal factor FR [–] of a collector of area `areaM2` [m²], loss coefficient `lossUlWm2K`
+ * [W m⁻² K⁻¹] and collector efficiency factor F′ `efficiencyFactor` [–], at capacity rate ṁ·cp
+ * `capacityRateWPerK` [W/K] (Duffie & Beckman 2013, ch. 6, eq 6.7.6 form):
+ * FR = (ṁ·cp / (Ac·UL))·[1 − exp(−Ac·UL·F′ / (ṁ·cp))]. FR → F′ as the flow grows and falls with the flow, which
+ * is why a collector whose fans follow the sun keeps its outlet temperature fairly steady. 0 without flow.
+ */
+export function heatRemovalFactor(
+  areaM2: number,
+  lossUlWm2K: number,
+  efficiencyFactor: number,
+  capacityRateWPerK: number,
+): number {
+  if (!(areaM2 > 0)) throw new RangeError(`collector area must be > 0 m2, got ${areaM2}`)
+  if (!(lossUlWm2K > 0 && lossUlWm2K <= 100)) {
+    throw new RangeError(`collector loss coefficient UL must be in (0, 100] W/m2K, got ${lossUlWm2K}`)
+  }
+  if (!(efficiencyFactor > 0 && efficiencyFactor <= 1)) {
+    throw new RangeError(`collector efficiency factor F' must be in (0, 1], got ${efficiencyFactor}`)
+  }
+  if (!(capacityRateWPerK >= 0))
+    throw new RangeError(`capacity rate must be >= 0 W/K, got ${capacityRateWPerK}`)
+  if (capacityRateWPerK === 0) return 0
+  const x = (areaM2 * lossUlWm2K) / capacityRateWPerK
+  return (1 - Math.exp(-x * efficiencyFactor)) / x
+}

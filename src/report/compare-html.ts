@@ -33,6 +33,8 @@ export interface RankRow {
   bestWindow: string | null
   usableHoursSeasonP10: number | null
   medianHeatKwhPerTonne: number | null
+  /** Share of the season's batches spoiled before dry (null when not known). */
+  spoilageProbability: number | null
 }
 
 /** Rows in the rank order of the analysis ranking (analysis/compare.ts). */
@@ -48,6 +50,7 @@ export function rankRows(ranking: Ranking): { criterion: string; rows: RankRow[]
         bestWindow: r.bestStartWindow,
         usableHoursSeasonP10: r.usableHoursInSeasonP10,
         medianHeatKwhPerTonne: r.medianHeatKwhPerTonne,
+        spoilageProbability: r.spoilageProbability ?? null,
       })),
   }
 }
@@ -65,8 +68,9 @@ export function comparisonTable(ranking: Ranking, units: 'si' | 'us' = 'si'): Re
       'best start window',
       usableTitle,
       `supplemental heat, median [${u.energyPerMassUnit}]`,
+      'batches spoiled before dry [%]',
     ],
-    digits: [0, 0, 0, 0, 0, 0],
+    digits: [0, 0, 0, 0, 0, 0, 0],
     rows: rows.map((r, i) => [
       String(i + 1),
       r.name,
@@ -74,6 +78,7 @@ export function comparisonTable(ranking: Ranking, units: 'si' | 'us' = 'si'): Re
       r.bestWindow ?? 'none',
       r.usableHoursSeasonP10,
       finite(r.medianHeatKwhPerTonne) ? round(u.energyPerMass(r.medianHeatKwhPerTonne).value, 1) : null,
+      finite(r.spoilageProbability) ? round(r.spoilageProbability * 100, 1) : null,
     ]),
   }
 }

@@ -12,6 +12,7 @@ import { fuelTable, heatTable } from './sections/heat.ts'
 import { hourOfDayFractions, hourOfDayTable } from './sections/hour-of-day.ts'
 import { monthlyTable, usableHoursByYearTable } from './sections/monthly.ts'
 import { psychroTable } from './sections/psychrometric.ts'
+import { spoilageTable } from './sections/spoilage.ts'
 import { startDatesTable } from './sections/start-dates.ts'
 import { headerRows } from './sections/summary.ts'
 import { type ReportTable, tableCsv, tablesCsv } from './tables.ts'
@@ -34,6 +35,7 @@ export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
   if (fr) out.push(hourOfDayTable(fr))
   if (a.psychrometric) out.push(psychroTable(a.psychrometric))
   if (a.startDates.length) out.push(startDatesTable(a, ctx))
+  if (a.startDates.length && a.spoilage) out.push(spoilageTable(a))
   if (a.bin)
     out.push(binMinimumAirflowTable(a.bin, ctx), binStartDatesTable(a.bin, ctx), binFanTable(a.bin, ctx))
   else out.push(heatTable(a, ctx), fuelTable(a, ctx))
@@ -57,6 +59,7 @@ export const REPORT_TABLE_IDS = [
   'hour-of-day-usable-share',
   'psychrometric-hours',
   'start-dates',
+  'spoilage-by-start-date',
   'bin-minimum-airflow',
   'bin-start-dates',
   'bin-fans',

@@ -17,6 +17,7 @@ import { heatSection } from './sections/heat.ts'
 import { hourOfDaySection } from './sections/hour-of-day.ts'
 import { monthlySection } from './sections/monthly.ts'
 import { psychrometricSection } from './sections/psychrometric.ts'
+import { spoilageSection } from './sections/spoilage.ts'
 import { startDatesSection } from './sections/start-dates.ts'
 import { answerHtml, headerHtml } from './sections/summary.ts'
 
@@ -54,7 +55,7 @@ ${answerHtml(a, ctx)}
 ${monthlySection(a, ctx)}
 ${hourOfDaySection(a, ctx)}
 ${psychrometricSection(a, ctx)}
-${a.bin ? binSection(a, ctx) : `${startDatesSection(a, ctx)}\n${heatSection(a, ctx)}`}
+${a.bin ? binSection(a, ctx) : `${startDatesSection(a, ctx)}\n${spoilageSection(a, ctx)}\n${heatSection(a, ctx)}`}
 ${cautionsSection(a, ctx)}
 <footer>${escapeHtml(o.footer ?? 'Made by dryhours from the weather file and the options shown above. Check the numbers against local experience before you build or buy.')}</footer>
 </article>`

@@ -187,7 +187,8 @@ export async function parseForm(
   const kind = choice(form, 'method', METHOD_KINDS, 'open-air')
   const method: Record<string, unknown> = { kind }
   const loading = numberField(form, 'loadingKgPerM2', 0.1, 200, 'kg/m²')
-  if (loading !== undefined && (kind === 'open-air' || kind === 'shade')) method.loadingKgPerM2 = loading
+  if (loading !== undefined && (kind === 'open-air' || kind === 'shade' || kind === 'tunnel'))
+    method.loadingKgPerM2 = loading
   const area = numberField(form, 'collectorAreaM2PerTonne', 1, 10_000, 'm²/t')
   if (area !== undefined && kind === 'solar-cabinet') method.collectorAreaM2PerTonne = area
   const setPoint = numberField(form, 'setPointC', 0, 120, '°C')

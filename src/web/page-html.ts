@@ -199,7 +199,7 @@ ${field('initialWbPct', 'Initial moisture [% wet basis]', v, { inputmode: 'decim
 ${field('seasonStart', 'First start day (MM-DD)', v, { placeholder: '06-15', pattern: '\\d{2}-\\d{2}' })}
 ${field('seasonEnd', 'Last start day (MM-DD)', v, { placeholder: '09-15', pattern: '\\d{2}-\\d{2}' })}
 ${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', placeholder: String(ASSESS_DEFAULTS.deadlineDays) })}
-${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade)', v, { inputmode: 'decimal', methods: 'open-air shade' })}
+${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade, solar tunnel)', v, { inputmode: 'decimal', methods: 'open-air shade tunnel' })}
 ${field('collectorAreaM2PerTonne', 'Collector area [m² per tonne] (solar cabinet)', v, { inputmode: 'decimal', placeholder: '100', methods: 'solar-cabinet' })}
 ${field('setPointC', 'Air set point [°C] (heated; empty = just enough)', v, { inputmode: 'decimal', methods: 'heated' })}
 ${field('binAirflows', 'Airflows to compare [m³/min per tonne] (bin)', v, { placeholder: '0.5 1 1.5 2 3', methods: 'natural-air-bin', hint: 'one, or several separated by spaces; 1 m³/min per t is about 0.9 cfm/bu of corn' })}

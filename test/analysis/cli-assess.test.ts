@@ -99,7 +99,7 @@ describe('dryhours assess', () => {
     const cases: [string[], RegExp][] = [
       [
         ['assess', typical, '--product', 'apricot-halves', '--method', 'kiln'],
-        /--method must be one of open-air, shade, solar-cabinet, heated/,
+        /--method must be one of open-air, shade, solar-cabinet, tunnel, heated/,
       ],
       [['assess', typical, '--product', 'no-such', '--method', 'shade'], /unknown product 'no-such'/],
       [

@@ -81,7 +81,14 @@ describe('the page with JavaScript', () => {
     const kinds = await page.$$eval('#result svg.chart', (els) =>
       els.map((e) => e.getAttribute('data-chart')),
     )
-    expect(kinds).toEqual(['spread-bars', 'heat-map', 'psychrometric', 'line-band', 'spread-bars'])
+    expect(kinds).toEqual([
+      'spread-bars',
+      'heat-map',
+      'psychrometric',
+      'line-band',
+      'risk-bars',
+      'spread-bars',
+    ])
     for (const box of await page.$$('#result svg.chart')) {
       const b = await box.boundingBox()
       expect(b?.width ?? 0).toBeGreaterThan(500)
@@ -96,6 +103,7 @@ describe('the page with JavaScript', () => {
     await page.locator('#fig-hour-of-day').screenshot({ path: join(ARTIFACTS, 'chart-hour-of-day.png') })
     await page.locator('#fig-start-dates').screenshot({ path: join(ARTIFACTS, 'chart-start-dates.png') })
     await page.locator('#fig-heat').screenshot({ path: join(ARTIFACTS, 'chart-heat.png') })
+    await page.locator('#fig-spoilage').screenshot({ path: join(ARTIFACTS, 'chart-spoilage.png') })
 
     // The table view opens without a round trip and holds the same numbers as the bars.
     await page.click('#fig-monthly summary')
@@ -192,7 +200,7 @@ describe('the page without JavaScript', () => {
     await Promise.all([page.waitForURL(`${server.url}/report`, { timeout: 90_000 }), page.click('#submit')])
     // Without a script the report comes first on the answer page, the form (kept filled in) after it.
     await page.waitForSelector('#result-first article[data-report="assessment"]')
-    expect(await page.$$eval('#result-first svg.chart', (els) => els.length)).toBe(5)
+    expect(await page.$$eval('#result-first svg.chart', (els) => els.length)).toBe(6)
     const order = await page.evaluate(() => {
       const r = document.getElementById('result-first')
       const f = document.getElementById('assess-form')

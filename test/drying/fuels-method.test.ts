@@ -45,7 +45,9 @@ describe('drying methods', () => {
     expect(() => parseDryingMethod({ kind: 'open-air', absorptivity: 1.4 })).toThrow(
       /method\.absorptivity.*between 0 and 1.*1\.4/,
     )
-    expect(() => parseDryingMethod({ kind: 'kiln' })).toThrow(/kinds: open-air, shade, solar-cabinet, heated/)
+    expect(() => parseDryingMethod({ kind: 'kiln' })).toThrow(
+      /kinds: open-air, shade, solar-cabinet, tunnel, heated/,
+    )
     expect(() => parseDryingMethod({ kind: 'heated', heaterEfficiency: 0 })).toThrow(/heaterEfficiency/)
   })
   it('thresholds have defaults and reject out-of-range values', () => {

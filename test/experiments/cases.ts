@@ -6,7 +6,8 @@
  * - the weather: a reconstruction (test/fixtures/experiments/weather/reconstructions.ts) and the start hour;
  * - the product profile (and its pretreatment variant), size, initial moisture and end point;
  * - the method with its parameters and night practice, the nearest method the engine has where it lacks the
- *   paper's (a solar tunnel or a greenhouse runs as the solar cabinet until the tunnel method lands);
+ *   paper's (a solar tunnel or a greenhouse still runs as the solar cabinet; the tunnel method on these runs is
+ *   measured in docs/spoilage-and-bins.md);
  * - whether the published time is elapsed clock time or active drying time, decided where the part read
  *   does not say by one rule: a time given in hours by a solar-drying study is taken as active drying
  *   (daylight) hours, because such studies join the drying days end to end; a time given in days, sampled
@@ -67,7 +68,7 @@ const ACTIVE_RULE =
 const COVERED_AT_NIGHT =
   'open air with the engine defaults: covered at night and in rain (the part read does not give the night practice; assumption)'
 const TUNNEL_AS_CABINET =
-  'solar tunnel run as the solar cabinet (air heated by a collector, fans only in sun) until the tunnel method lands; collector defaults unless stated'
+  'solar tunnel run as the solar cabinet (air heated by a collector, fans only in sun), the stand-in of this table (the tunnel method on this run: docs/spoilage-and-bins.md); collector defaults unless stated'
 
 const DOYMAZ_START = {
   day: 1,
@@ -284,7 +285,7 @@ const OKSAR_START = { day: 1, localHour: 9, source: 'assumption: trays set out a
 const OKSAR_ELAPSED =
   'elapsed: samples every 24 h from placing on the trays (abstract); the end point is the sample at which it was met'
 const TUNNEL_AS_GREENHOUSE =
-  'plastic tunnel (a greenhouse over the trays) run as the solar cabinet, the nearest method the engine has, until the tunnel method lands: the product gets warmed air but no sun of its own'
+  'plastic tunnel (a greenhouse over the trays) run as the solar cabinet, the stand-in of this table (the tunnel method on this run: docs/spoilage-and-bins.md): the product gets warmed air but no sun of its own'
 
 function oksarRuns(): EngineCase[] {
   const base = {
@@ -503,7 +504,7 @@ const IMPROVED_CONVENTIONAL =
 /** Runs expected outside their band, with the reason (as measured on the engine of this commit). */
 const OUTSIDE: Record<string, string> = {
   'arun-2014-grapes-solar-tunnel/tunnel':
-    'the natural-convection tunnel greenhouse runs as the forced-air solar cabinet with its default collector: the grapes inside get no sun of their own (the open-sun run of the same trial, on the same weather, is within its band); waits for the tunnel method',
+    'the natural-convection tunnel greenhouse runs as the forced-air solar cabinet with its default collector: the grapes inside get no sun of their own (the open-sun run of the same trial, on the same weather, is within its band); the tunnel method on this run: docs/spoilage-and-bins.md',
   'muazu-2019-tomato-active-solar/plywood-cabinet':
     "the cabinet's collector size and air flow are not in the abstract (engine defaults, 100 m² per tonne); the tomato diffusivity is Doymaz's hot-air value at 55 °C scaled by thickness² from the catalogue's assumed 20 mm to 10 mm slices; not investigated further",
   'muazu-2019-tomato-active-solar/glass-cabinet':
@@ -513,7 +514,7 @@ const OUTSIDE: Record<string, string> = {
   'hossain-bala-2007-chilli-solar-tunnel/red-conventional-sun': IMPROVED_CONVENTIONAL,
   'hossain-bala-2007-chilli-solar-tunnel/green-conventional-sun': IMPROVED_CONVENTIONAL,
   'oksar-2017-figs-tunnel/august-tunnel':
-    'the fig rate is fitted to the open-air run of the same trial, where the product now sits at its surface energy balance (cooled by its evaporation, rewetting at dawn limited by vapour transfer): k 0.0276 h⁻¹, 27 % above the 0.0217 fitted to the fixed temperature rise of the earlier engine; the plastic tunnel runs as the forced-air solar cabinet ventilated day and night, the product at the air temperature with no evaporative cooling, so the same k dries it faster than the paper (with the earlier k this run came out at the published 72 h); waits for a tunnel method',
+    'the fig rate is fitted to the open-air run of the same trial, where the product now sits at its surface energy balance (cooled by its evaporation, rewetting at dawn limited by vapour transfer): k 0.0276 h⁻¹, 27 % above the 0.0217 fitted to the fixed temperature rise of the earlier engine; the plastic tunnel runs as the forced-air solar cabinet ventilated day and night, the product at the air temperature with no evaporative cooling, so the same k dries it faster than the paper (with the earlier k this run came out at the published 72 h); the tunnel method on this run: docs/spoilage-and-bins.md',
   'meghwar-chilli-umerkot/tunnel': BLANCHED_FIT,
   'meghwar-chilli-umerkot/open-sun': BLANCHED_FIT,
   'fadhel-2014-red-pepper-tunisia/solar-drier': `${BLANCHED_FIT}; Baklouti is a large mild pepper, not a hot chilli`,

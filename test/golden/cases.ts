@@ -167,6 +167,31 @@ export const GOLDEN_CASES: GoldenCase[] = [
       startStepDays: 10,
     },
   },
+  // The solar tunnel: the README's apricots with the defaults (PV fans, closed at night), and chillies in the
+  // tropical lowland with constant fans, an open tunnel when they stop and a glass cover.
+  {
+    id: 'ardentine--apricot-halves--tunnel',
+    site: 'dryUpland',
+    rendered: true,
+    options: {
+      product: productById('apricot-halves'),
+      method: { kind: 'tunnel' },
+      seasonStart: '07-01',
+      seasonEnd: '08-15',
+      startStepDays: 3,
+    },
+  },
+  {
+    id: 'tamarel--chili-peppers--tunnel-constant-open-glass',
+    site: 'tropical',
+    options: {
+      product: productById('chili-peppers'),
+      method: { kind: 'tunnel', fans: 'constant', nightPractice: 'open', cover: 'glass', loadingKgPerM2: 5 },
+      seasonStart: '01-01',
+      seasonEnd: '03-31',
+      startStepDays: 7,
+    },
+  },
   // Natural-air bin drying of corn harvested into a bin in the humid valley: three airflows compared (the
   // report's bin section, its CSV tables); and wheat in the dry upland with a heater, a humidistat and a
   // given floor area (method options off their defaults).

@@ -67,6 +67,7 @@ describe('comparison with the analysis ranking', () => {
           meanProbabilityWithinDeadline: 0.5,
           medianHeatKwhPerTonne: 100,
           bestStartWindow: null,
+          spoilageProbability: null,
           warnings: [],
         },
         {
@@ -77,6 +78,7 @@ describe('comparison with the analysis ranking', () => {
           meanProbabilityWithinDeadline: 0.9,
           medianHeatKwhPerTonne: 0,
           bestStartWindow: '07-01 to 07-31',
+          spoilageProbability: null,
           warnings: [],
         },
       ],

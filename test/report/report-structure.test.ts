@@ -24,6 +24,7 @@ const SECTIONS = [
   'hour-of-day',
   'psychrometric',
   'start-dates',
+  'spoilage',
   'heat',
   'cautions',
   'limits',
@@ -33,6 +34,7 @@ const CHARTS: [string, string][] = [
   ['fig-hour-of-day-svg', 'heat-map'],
   ['fig-psychro-svg', 'psychrometric'],
   ['fig-start-dates-svg', 'line-band'],
+  ['fig-spoilage-svg', 'risk-bars'],
   ['fig-heat-svg', 'spread-bars'],
 ]
 
@@ -130,6 +132,20 @@ describe('report of each demo site', () => {
         'class="reference"',
       )
       expect(num(ref[0]?.['data-value'])).toBe(c.assessment.deadlineDays)
+    }
+  })
+
+  it('draws the spoilage risk of every start date as in the assessment', () => {
+    for (const c of cases) {
+      const bars = elements(byId(html.get(c.file) as string, 'svg', 'fig-spoilage-svg'), 'g', 'class="bar"')
+      expect(bars.map((b) => b['data-x'])).toEqual(c.assessment.startDates.map((s) => s.start))
+      c.assessment.startDates.forEach((s, i) => {
+        expect(num(bars[i]['data-probability']), `${c.file} ${s.start}`).toBe(s.spoilage?.probability ?? null)
+        expect(num(bars[i]['data-hours-at-risk'])).toBe(s.spoilage?.hoursAtRisk.median ?? null)
+      })
+      const section = byId(html.get(c.file) as string, 'section', 'sec-spoilage')
+      expect(section).toContain(c.assessment.spoilage?.model.name.replaceAll('&', '&amp;') ?? 'missing')
+      expect(section).toMatch(/mycotoxins/)
     }
   })
 

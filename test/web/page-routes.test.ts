@@ -194,7 +194,7 @@ describe('POST /report', () => {
       [{ product: 'wheat', seasonStart: '6/15' }, /seasonStart: must be a day as MM-DD/],
       [
         { product: 'wheat', method: 'microwave' },
-        /method: must be one of open-air, shade, solar-cabinet, heated/,
+        /method: must be one of open-air, shade, solar-cabinet, tunnel, heated/,
       ],
     ] as const) {
       const res = await app.request('/report', {

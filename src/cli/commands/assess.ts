@@ -33,6 +33,8 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
   open-air:       --absorptivity <0–1> --loading <kg/m²> --uncovered-night --uncovered-rain
   shade:          --loading <kg/m²>
   solar-cabinet:  --collector-area <m²/t> --tilt <°> --azimuth <° from N> --air-flow <kg/s per m²>
+  tunnel:         --loading <kg/m²> --air-flow <kg/s at full flow>; --param collectorLengthM=, dryingLengthM=, widthM=,
+                  fans=pv|constant, nightPractice=closed|open, cover=polyethylene|glass
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
 ${BIN_FLAGS_HELP}
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
@@ -181,6 +183,9 @@ export async function engineOptions(values: EngineValues, io: CliIo): Promise<As
     set('tiltDeg', num('tilt'))
     set('azimuthDeg', num('azimuth'))
     set('airFlowKgPerSPerM2', num('air-flow'))
+  } else if (kind === 'tunnel') {
+    set('loadingKgPerM2', num('loading'))
+    set('airFlowKgPerS', num('air-flow'))
   } else if (kind === 'heated') {
     set('setPointC', num('set-point'))
     set('targetRhPct', num('target-rh'))

@@ -49,11 +49,11 @@ export function comparisonText(c: Comparison): string {
   out.push('')
   const width = Math.max(4, ...c.sites.map((s) => s.site.length))
   out.push(
-    `rank  ${'site'.padEnd(width)}  P(within deadline)  usable h P10 (median)  heat kWh/t  best start window`,
+    `rank  ${'site'.padEnd(width)}  P(within deadline)  usable h P10 (median)  heat kWh/t  spoils first  best start window`,
   )
   for (const s of c.sites) {
     out.push(
-      `${String(s.rank).padStart(4)}  ${s.site.padEnd(width)}  ${(s.meanProbabilityWithinDeadline === null ? '–' : `${(100 * s.meanProbabilityWithinDeadline).toFixed(0)} %`).padStart(18)}  ${`${f(s.usableHoursInSeasonP10)} (${f(s.usableHoursInSeasonMedian)})`.padStart(21)}  ${f(s.medianHeatKwhPerTonne).padStart(10)}  ${s.bestStartWindow ?? '–'}`,
+      `${String(s.rank).padStart(4)}  ${s.site.padEnd(width)}  ${(s.meanProbabilityWithinDeadline === null ? '–' : `${(100 * s.meanProbabilityWithinDeadline).toFixed(0)} %`).padStart(18)}  ${`${f(s.usableHoursInSeasonP10)} (${f(s.usableHoursInSeasonMedian)})`.padStart(21)}  ${f(s.medianHeatKwhPerTonne).padStart(10)}  ${(s.spoilageProbability === null || s.spoilageProbability === undefined ? '–' : `${(100 * s.spoilageProbability).toFixed(0)} %`).padStart(12)}  ${s.bestStartWindow ?? '–'}`,
     )
   }
   if (c.assessments.some((a) => a.bin)) {

@@ -11,7 +11,7 @@
  * runs as `setup.fanControl` says, for `hours` hours or until the top layer (or every layer) is dry.
  */
 import { moistureWbPctFromDb } from '../../product/moisture-basis.ts'
-import { type SpoilageModel, type SpoilageState, spoilageAccumulator } from '../../product/spoilage/model.ts'
+import { type SpoilageModel, type SpoilageState, spoilageHourStepper } from '../../product/spoilage/model.ts'
 import { Bed, hourlyColumns, recordHour } from './bin-bed.ts'
 import { CONTINUOUS_FAN, checkFanControl, type FanControl } from './fan-control.ts'
 import type { GrainTables } from './grain-tables.ts'
@@ -178,7 +178,7 @@ export function simulateDeepBed(
   const plan = planRun(setup, weather, options)
   const bed = new Bed(grain, setup, plan.nLayers)
   const { moisture, temp, top, tables } = bed
-  const acc = spoilageAccumulator(spoilage)
+  const acc = spoilageHourStepper(spoilage)
   const hourly = options.recordHourly === true ? hourlyColumns(plan.hoursToRun) : null
   const profiles: BinRunResult['profiles'] = []
   const at: Milestones = { simulated: 0, missing: 0, topDry: null, allDry: null, topSpoiled: null }
@@ -194,9 +194,12 @@ export function simulateDeepBed(
     if (fanOn) bed.blow(tOut, rhOut, p)
     else bed.still(tOut, rhOut)
     const aw = Math.min(1, tables.erhPct(temp[top], moisture[top]) / 100)
-    acc.add(temp[top], moistureWbPctFromDb(moisture[top]), aw, 1)
+    acc.productTempC = temp[top]
+    acc.moistureWbPct = moistureWbPctFromDb(moisture[top])
+    acc.waterActivity = aw
+    acc.stepHour()
     at.simulated = h + 1
-    const dml = acc.measure()
+    const dml = acc.measure
     if (at.topSpoiled === null && dml >= spoilage.spoiledAt) at.topSpoiled = h + 1
     const front = bed.dryLayersFromFloor()
     const topDry = moisture[top] <= bed.targetDb

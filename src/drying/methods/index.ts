@@ -13,9 +13,10 @@ import { naturalAirBin } from './natural-air-bin.ts'
 import { openAir } from './open-air.ts'
 import { shade } from './shade.ts'
 import { solarCabinet } from './solar-cabinet.ts'
+import { tunnel } from './tunnel.ts'
 
 /** Every drying method, in the order the CLI, the API and the page list them. */
-export const METHOD_MODELS = [openAir, shade, solarCabinet, heated, naturalAirBin] as const
+export const METHOD_MODELS = [openAir, shade, solarCabinet, tunnel, heated, naturalAirBin] as const
 
 export type MethodModels = typeof METHOD_MODELS
 
@@ -31,9 +32,11 @@ export function methodModel(kind: string): MethodModel {
 }
 
 /**
- * The loading [kg fresh per m²] a method states, for exposed methods that give one (`loadingKgPerM2`);
- * undefined otherwise (the product profile's default loading then applies).
+ * The loading [kg fresh per m²] a method states, for exposed methods and methods sized by a drying area
+ * (`usesLoading`) that give one (`loadingKgPerM2`); undefined otherwise (the product profile's default
+ * loading then applies).
  */
 export function methodLoadingKgPerM2(method: { kind: string; loadingKgPerM2?: number }): number | undefined {
-  return methodModel(method.kind).exposure === 'exposed' ? method.loadingKgPerM2 : undefined
+  const model = methodModel(method.kind)
+  return model.exposure === 'exposed' || model.usesLoading === true ? method.loadingKgPerM2 : undefined
 }

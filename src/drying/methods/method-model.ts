@@ -88,6 +88,11 @@ export class MethodHour {
   heaterKwhPerTonne = 0
   /** Out: heat from a solar collector into the air [kWh per tonne fresh product in this hour]. */
   solarKwhPerTonne = 0
+  /**
+   * Out: the hour's air flow as a share of the method's nominal flow (`airFlowKgPerSPerTonne`) [0–1]; scales the
+   * forced-air constant-rate limit (fans that follow the sun). 1 unless the method says otherwise.
+   */
+  airFlowShare = 1
 }
 
 /** What a method may read when it prepares for a series. */
@@ -131,6 +136,11 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
    */
   exposure: 'exposed' | 'forced-air'
   /**
+   * True when a forced-air method's size is set by a drying area and a loading (the solar tunnel): its
+   * `loadingKgPerM2` is then taken as the assessment's loading, as for exposed methods.
+   */
+  usesLoading?: boolean
+  /**
    * How the product goes through the hours: `thin-layer` (the default) runs batches of product in the hourly air
    * (the start-date table, monthly heat, supplemental heat); `deep-bed` is grain in a bin, assessed by the
    * deep-bed model of drying/deep-bed/ per start date, airflow and year (analysis/bin-stage.ts) instead.
@@ -141,8 +151,11 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
    * refuses the assessment with it, naming the method). Absent: every product.
    */
   productFits?(profile: ProductProfile): string | null
-  /** Dry-air flow per tonne of fresh product [kg/s] (0 for exposed methods). */
-  airFlowKgPerSPerTonne(method: z.output<S>): number
+  /**
+   * Dry-air flow per tonne of fresh product at the nominal flow [kg/s] (0 for exposed methods); `loadingKgPerM2`
+   * is the assessment's loading, for methods sized by a drying area.
+   */
+  airFlowKgPerSPerTonne(method: z.output<S>, loadingKgPerM2?: number): number
   /** True when the method heats its air with fuel: its own heater energy is the heat, and no backup heater is added. */
   heatsWithFuel: boolean
   /** True when rain decides hours of this method (it wets or covers the product): a file without rain then gets a warning. */

@@ -14,7 +14,14 @@
  * beans; no cocoa-specific time limit was read, so the coffee window is applied by analogy (confidence `memory`
  * for the transfer, said so in the model's source).
  */
-import { checkStepInput, type SpoilageModel, type SpoilageState, type SpoilageStepInput } from './model.ts'
+import {
+  checkHourStepper,
+  checkStepInput,
+  type SpoilageHourStepper,
+  type SpoilageModel,
+  type SpoilageState,
+  type SpoilageStepInput,
+} from './model.ts'
 
 export interface AwWindowSpec {
   id: string
@@ -28,6 +35,27 @@ export interface AwWindowSpec {
   source: SpoilageModel['source']
   spoiledAtSource: string
   cautions: string[]
+}
+
+/** A window model fed hour by hour through fields. */
+class WindowHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  measure = 0
+  hours = 0
+  constructor(
+    readonly awLow: number,
+    readonly awHigh: number,
+  ) {}
+  stepHour(): void {
+    checkHourStepper(this)
+    if (this.waterActivity >= this.awLow && this.waterActivity <= this.awHigh) this.measure += 1
+    this.hours += 1
+  }
+  state(): SpoilageState {
+    return { measure: this.measure, hoursAtRisk: this.measure, hoursOutsideRange: 0, hours: this.hours }
+  }
 }
 
 /** A window model: `measure` is the hours spent with awLow ≤ aw ≤ awHigh. */
@@ -59,6 +87,7 @@ export function awWindowModel(spec: AwWindowSpec): SpoilageModel {
         hours: state.hours + input.hours,
       }
     },
+    hourStepper: () => new WindowHours(spec.awLow, spec.awHigh),
   }
 }
 
@@ -80,6 +109,7 @@ export const COFFEE_OTA_WINDOW: SpoilageModel = awWindowModel({
       'FAO 2006, Guidelines for the Prevention of Mould Formation in Coffee (HACCP guidance), as quoted in Kornman, C. 2016, Green Coffee Analytics Part I: Total Moisture Content and Water Activity; basis of Codex CAC/RCP 69-2009',
     equation: '"all coffee, cherry or parchment, must spend no more than four days between 0.95 and 0.80" aw',
     confidence: 'transcribed',
+    short: 'FAO 2006 as quoted by Kornman 2016',
   },
   spoiledAtSource: 'four days (96 h) between aw 0.95 and 0.80 (FAO 2006 as quoted)',
   cautions: OTA_CAUTIONS,
@@ -98,6 +128,7 @@ export const COCOA_OTA_WINDOW: SpoilageModel = awWindowModel({
       'Codex CAC/RCP 72-2013, Code of practice for the prevention and reduction of ochratoxin A contamination in cocoa, §2 (same OTA-producing aspergilli as in coffee); time limit taken over from FAO 2006 (coffee) by analogy, no cocoa-specific limit read',
     equation: 'hours between aw 0.95 and 0.80 ≤ 96 h (coffee rule, analogy)',
     confidence: 'memory',
+    short: 'Codex CAC/RCP 72-2013; coffee limit by analogy',
   },
   spoiledAtSource: 'coffee rule (FAO 2006 as quoted) applied to cocoa by analogy: no cocoa-specific source',
   cautions: OTA_CAUTIONS,

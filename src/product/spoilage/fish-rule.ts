@@ -6,11 +6,35 @@
  * fish is at 10 °C or warmer. Salted fish held near the aw of saturated brine (about 0.75) stays below the
  * bacterial level but still moulds: `spoilageModelFor` gives salted fish the mould-free-time model instead.
  */
-import { checkStepInput, type SpoilageModel, type SpoilageState, type SpoilageStepInput } from './model.ts'
+import {
+  checkHourStepper,
+  checkStepInput,
+  type SpoilageHourStepper,
+  type SpoilageModel,
+  type SpoilageState,
+  type SpoilageStepInput,
+} from './model.ts'
 
 export const FISH_BACTERIAL_AW = 0.91
 export const FISH_WARM_C = 10
 export const FISH_LIMIT_HOURS = 24
+
+/** The fish rule fed hour by hour through fields. */
+class WetWarmHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  measure = 0
+  hours = 0
+  stepHour(): void {
+    checkHourStepper(this)
+    if (this.waterActivity >= FISH_BACTERIAL_AW && this.productTempC >= FISH_WARM_C) this.measure += 1
+    this.hours += 1
+  }
+  state(): SpoilageState {
+    return { measure: this.measure, hoursAtRisk: this.measure, hoursOutsideRange: 0, hours: this.hours }
+  }
+}
 
 export const FISH_WET_WARM_RULE: SpoilageModel = {
   id: 'fish-wet-warm-hours',
@@ -20,6 +44,7 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
     citation: 'common practice, no source',
     equation: `hours with aw ≥ ${FISH_BACTERIAL_AW} and product ≥ ${FISH_WARM_C} °C ≤ ${FISH_LIMIT_HOURS} h`,
     confidence: 'memory',
+    short: 'common practice, no source',
   },
   measureName: `hours at aw ≥ ${FISH_BACTERIAL_AW} and ≥ ${FISH_WARM_C} °C`,
   measureUnit: 'h',
@@ -42,4 +67,5 @@ export const FISH_WET_WARM_RULE: SpoilageModel = {
       hours: state.hours + input.hours,
     }
   },
+  hourStepper: () => new WetWarmHours(),
 }

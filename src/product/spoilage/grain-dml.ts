@@ -28,9 +28,9 @@
  */
 import { moistureDbFromWbPct } from '../moisture-basis.ts'
 import {
+  checkHourStepper,
   checkStepInput,
-  checkStepValues,
-  type SpoilageAccumulator,
+  type SpoilageHourStepper,
   type SpoilageModel,
   type SpoilageState,
   type SpoilageStepInput,
@@ -157,6 +157,7 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
       equation:
         'DML = 0.0883·[exp(0.006·θ) − 1] + 0.00102·θ; θ = Σ Δt/(M_T·M_M·M_D); M_M = 0.103·[exp(455/M_db^1.53) − 0.00845·M_db + 1.558]; M_T = 32.3·exp(−3.48·T_F/60) [+ min(0.01(M_wb − 19), 0.09)·exp(0.61(T_F − 60)/60) above 60 °F and 19 % wb]; M_D = 2.08·exp(−0.0239·D)',
       confidence: 'transcribed',
+      short: 'Steele 1967; Thompson 1972',
     },
     measureName: 'dry-matter loss',
     measureUnit: '%',
@@ -183,28 +184,47 @@ export function grainDryMatterLossModel(options: GrainDmlOptions = {}): Spoilage
         hours: state.hours + input.hours,
       }
     },
-    accumulator(): SpoilageAccumulator {
-      // θ is kept as such (no inversion of the curve per step); same arithmetic as `step` otherwise.
-      let theta = 0
-      let hoursAtRisk = 0
-      let hoursOutsideRange = 0
-      let hours = 0
-      const d = clamp(damagePct, DML_VALID_DAMAGE_PCT)
-      const damage = damageMultiplier(d)
-      const damageClamped = d !== damagePct
-      return {
-        add(productTempC, moistureWbPct, waterActivity, stepHours) {
-          checkStepValues(productTempC, moistureWbPct, waterActivity, stepHours)
-          const t = clamp(productTempC, DML_VALID_TEMP_C)
-          const m = clamp(moistureWbPct, DML_VALID_MOISTURE_WB_PCT)
-          theta += stepHours / (temperatureMultiplier(t, m) * moistureMultiplier(m) * damage)
-          if (waterActivity >= atRiskAw) hoursAtRisk += stepHours
-          if (damageClamped || t !== productTempC || m !== moistureWbPct) hoursOutsideRange += stepHours
-          hours += stepHours
-        },
-        measure: () => dmlFromEquivalentHours(theta),
-        state: () => ({ measure: dmlFromEquivalentHours(theta), hoursAtRisk, hoursOutsideRange, hours }),
-      }
-    },
+    hourStepper: () => new GrainDmlHours(damagePct, atRiskAw),
+  }
+}
+
+/** The DML model fed hour by hour through fields: θ kept as such (no inversion of the DML curve per hour), same arithmetic as `step` otherwise. */
+class GrainDmlHours implements SpoilageHourStepper {
+  productTempC = Number.NaN
+  moistureWbPct = Number.NaN
+  waterActivity = Number.NaN
+  theta = 0
+  hoursAtRisk = 0
+  hoursOutsideRange = 0
+  hours = 0
+  readonly damage: number
+  readonly damageClamped: boolean
+  constructor(
+    damagePct: number,
+    readonly atRiskAw: number,
+  ) {
+    const d = clamp(damagePct, DML_VALID_DAMAGE_PCT)
+    this.damage = damageMultiplier(d)
+    this.damageClamped = d !== damagePct
+  }
+  stepHour(): void {
+    checkHourStepper(this)
+    const t = clamp(this.productTempC, DML_VALID_TEMP_C)
+    const m = clamp(this.moistureWbPct, DML_VALID_MOISTURE_WB_PCT)
+    this.theta += 1 / (temperatureMultiplier(t, m) * moistureMultiplier(m) * this.damage)
+    if (this.waterActivity >= this.atRiskAw) this.hoursAtRisk += 1
+    if (this.damageClamped || t !== this.productTempC || m !== this.moistureWbPct) this.hoursOutsideRange += 1
+    this.hours += 1
+  }
+  get measure(): number {
+    return dmlFromEquivalentHours(this.theta)
+  }
+  state(): SpoilageState {
+    return {
+      measure: this.measure,
+      hoursAtRisk: this.hoursAtRisk,
+      hoursOutsideRange: this.hoursOutsideRange,
+      hours: this.hours,
+    }
   }
 }

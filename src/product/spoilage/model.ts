@@ -28,6 +28,8 @@ export interface SpoilageSource {
   /** The equation, table or clause used, with its number where the source numbers it. */
   equation: string
   confidence: SpoilageConfidence
+  /** Authors and years only, e.g. "Steele 1967; Thompson 1972", for tables that name the source on every row. */
+  short?: string
 }
 
 /** Conditions of the product during one step. */
@@ -75,33 +77,66 @@ export interface SpoilageModel {
   cautions: string[]
   step(state: SpoilageState, input: SpoilageStepInput): SpoilageState
   /**
-   * Optional mutable fast path for long hour loops (the bin model steps the top layer every hour of many
-   * runs): same result as `step`, without a new state object per hour. {@link spoilageAccumulator} falls back
-   * to `step` when a model has none.
+   * Optional form for the long hour loops (every hour of every batch of an assessment, the top layer of every
+   * bin run): the inputs are set as fields and `stepHour()` adds one hour, so no number crosses a call V8 may
+   * not inline (it would box each one) and no state object is made per hour. Same arithmetic as `step`.
+   * {@link spoilageHourStepper} falls back to `step` when a model has none.
    */
-  accumulator?(): SpoilageAccumulator
+  hourStepper?(): SpoilageHourStepper
 }
 
-/** A mutable running state of one model: `add` one step at a time, read `measure()` or `state()` at any point. */
-export interface SpoilageAccumulator {
-  /** Adds one step; the inputs are those of {@link SpoilageStepInput}, checked the same way. */
-  add(productTempC: number, moistureWbPct: number, waterActivity: number, hours: number): void
+/**
+ * A running state of one model fed one hour at a time through fields: set `productTempC` [°C], `moistureWbPct`
+ * [% wb] and `waterActivity`, call `stepHour()`. The inputs are checked as in {@link checkStepInput}.
+ */
+export interface SpoilageHourStepper {
+  productTempC: number
+  moistureWbPct: number
+  waterActivity: number
+  /** Adds one hour at the inputs set. */
+  stepHour(): void
   /** The accumulated measure so far (as `SpoilageState.measure`). */
-  measure(): number
+  readonly measure: number
   /** A snapshot of the state so far. */
   state(): SpoilageState
 }
 
-/** A running accumulator for `model`: its own fast path, or `step` wrapped. */
-export function spoilageAccumulator(model: SpoilageModel): SpoilageAccumulator {
-  if (model.accumulator) return model.accumulator()
+/** The hour stepper of `model`: its own, or `step` behind fields. */
+export function spoilageHourStepper(model: SpoilageModel): SpoilageHourStepper {
+  if (model.hourStepper) return model.hourStepper()
   let current = initialSpoilageState()
-  return {
-    add(productTempC, moistureWbPct, waterActivity, hours) {
-      current = model.step(current, { productTempC, moistureWbPct, waterActivity, hours })
+  const stepper: SpoilageHourStepper = {
+    productTempC: Number.NaN,
+    moistureWbPct: Number.NaN,
+    waterActivity: Number.NaN,
+    stepHour() {
+      current = model.step(current, {
+        productTempC: stepper.productTempC,
+        moistureWbPct: stepper.moistureWbPct,
+        waterActivity: stepper.waterActivity,
+        hours: 1,
+      })
     },
-    measure: () => current.measure,
+    get measure() {
+      return current.measure
+    },
     state: () => ({ ...current }),
+  }
+  return stepper
+}
+
+/** {@link checkStepInput} for one hour of a stepper (the object crosses the call, not its numbers). */
+export function checkHourStepper(s: SpoilageHourStepper): void {
+  if (!(s.productTempC >= -40 && s.productTempC <= 120)) {
+    throw new RangeError(`spoilage step: productTempC must be between -40 and 120 °C, got ${s.productTempC}`)
+  }
+  if (!(s.moistureWbPct >= 0 && s.moistureWbPct < 100)) {
+    throw new RangeError(
+      `spoilage step: moistureWbPct must be in [0, 100) % wet basis, got ${s.moistureWbPct}`,
+    )
+  }
+  if (!(s.waterActivity >= 0 && s.waterActivity <= 1)) {
+    throw new RangeError(`spoilage step: waterActivity must be between 0 and 1, got ${s.waterActivity}`)
   }
 }
 

@@ -22,6 +22,7 @@ export function monthlyTable(a: Assessment): ReportTable {
       'years with data',
       'usable share of hours [%]',
       'median days to target, batches started in the month',
+      'spoiled before dry, batches started in the month [%]',
     ],
     rows: a.monthly.map((m) => [
       MONTH_LONG[m.month - 1] ?? String(m.month),
@@ -31,8 +32,9 @@ export function monthlyTable(a: Assessment): ReportTable {
       m.yearsWithData,
       finite(m.usableFraction) ? Math.round(m.usableFraction * 1000) / 10 : null,
       m.medianDaysToTarget,
+      finite(m.spoilage?.probability) ? Math.round((m.spoilage?.probability as number) * 1000) / 10 : null,
     ]),
-    digits: [0, 0, 0, 0, 0, 1, 1],
+    digits: [0, 0, 0, 0, 0, 1, 1, 0],
   }
 }
 

@@ -28,10 +28,12 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
       `supplemental heat, median [${u.energyPerMassUnit}]`,
       `supplemental heat, P90 [${u.energyPerMassUnit}]`,
       'years not reachable even with heat',
+      'spoiled before dry [%]',
+      'hours at risk of spoilage, median',
       'years unknown (ran into hours without weather)',
       'hours without weather in those batches',
     ],
-    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+    digits: [0, 0, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
     rows: a.startDates.map((s) => [
       s.start,
       s.years,
@@ -48,6 +50,8 @@ export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable
         ? round(u.energyPerMass(s.supplementalHeat.p90KwhPerTonne).value, 1)
         : null,
       s.yearsNotReachable,
+      finite(s.spoilage?.probability) ? round((s.spoilage?.probability as number) * 100, 1) : null,
+      s.spoilage?.hoursAtRisk.median ?? null,
       s.yearsUnknown,
       s.missingWeatherHours,
     ]),
@@ -61,6 +65,8 @@ export interface WindowSummary {
   minProbability: number
   medianDays: number | null
   p90Days: number | null
+  /** Highest share of years spoiled before dry among the window's start dates (null without spoilage figures). */
+  maxSpoilageProbability: number | null
 }
 
 /** The assessment's best start window with the P90 days inside it (worst of the window's start days). */
@@ -78,6 +84,10 @@ export function bestStartWindow(a: Assessment): WindowSummary | null {
     minProbability: w.minProbabilityWithinDeadline,
     medianDays: w.medianDaysToTarget,
     p90Days: p90s.length === inside.length && p90s.length > 0 ? Math.max(...p90s) : null,
+    maxSpoilageProbability: (() => {
+      const ps = inside.map((s) => s.spoilage?.probability).filter(finite)
+      return ps.length > 0 ? Math.max(...ps) : null
+    })(),
   }
 }
 

@@ -11,6 +11,7 @@ import { binAnswerSentences } from './bin.ts'
 import { finite, perMassFactor, perMassWords, type SectionContext } from './context.ts'
 import { fuelName } from './heat.ts'
 import { monthList, suitableMonths } from './monthly.ts'
+import { inTenYears } from './spoilage.ts'
 import { bestStartWindow } from './start-dates.ts'
 
 /** The method in words: the assessment's label (its kind for assessments without one). */
@@ -110,13 +111,19 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
       `By ${method}, no month's batches of ${a.product.name} reach ${target} within ${a.deadlineDays} days ${median}.`,
     )
   }
+  out.push(...spoilageSentences(a))
   if (a.method.kind !== 'heated') out.push(...usableHourSentences(a))
   const w = bestStartWindow(a)
   if (w) {
     out.push(
       `The best start window is ${w.from} to ${w.to}: batches reach ${target} in about ${formatNumber(w.medianDays, 1)} days in a median year` +
         (finite(w.p90Days) ? ` and within ${formatNumber(w.p90Days, 1)} days in 9 of 10 years` : '') +
-        `; ${w.minProbability >= 1 ? 'every year finishes' : `at least ${Math.round(w.minProbability * 100)} % of years finish`} within ${a.deadlineDays} days.`,
+        `; ${w.minProbability >= 1 ? 'every year finishes' : `at least ${Math.round(w.minProbability * 100)} % of years finish`} within ${a.deadlineDays} days` +
+        (finite(w.maxSpoilageProbability) && w.maxSpoilageProbability > 0
+          ? typical
+            ? ', but batches in it spoil before they are dry.'
+            : `, but batches in it spoil before they are dry in up to ${inTenYears(w.maxSpoilageProbability)}.`
+          : '.'),
     )
   } else if (a.startDates.length > 0) {
     const best = a.startDates.reduce((x, y) =>
@@ -154,6 +161,79 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
   if (a.method.kind === 'open-air' || a.method.kind === 'shade') {
     out.push(
       'A solar cabinet heats the air before it reaches the product, which lowers its relative humidity: assess the same file with the solar-cabinet method to see how many hours and days it gains.',
+    )
+  }
+  return out
+}
+
+/** Tenths of a share for words: at least 1 when above 0, at most 9 when below 1. */
+function tenths(p: number): number {
+  const k = Math.round(10 * p)
+  return p > 0 && k === 0 ? 1 : p < 1 && k === 10 ? 9 : k
+}
+
+/** "7 of 10 years" or "7 to 10 of 10 years" for a range of shares. */
+function tenYearsRange(lo: number, hi: number): string {
+  const a = tenths(lo)
+  const b = tenths(hi)
+  return a === b ? inTenYears(hi) : `${a} to ${b} of 10 years`
+}
+
+/**
+ * The spoilage answer: months whose batches dry but spoil first in most years (with their days to target),
+ * and the months of lowest risk. From `monthly[].spoilage` (batches of the 1st and 16th); nothing without a
+ * spoilage model.
+ */
+export function spoilageSentences(a: Assessment): string[] {
+  const s = a.spoilage
+  if (!s) return []
+  const rows = a.monthly.filter((m) => m.spoilage && m.spoilage.batches > 0 && finite(m.spoilage.probability))
+  if (rows.length === 0) return []
+  const p = (m: (typeof rows)[number]) => m.spoilage?.probability as number
+  const model = `spoilage model after ${s.season.source}`
+  const typical = a.site.typicalYear
+  const share = (ms: typeof rows) => {
+    if (typical) {
+      const spoiled = ms.reduce((n, m) => n + (m.spoilage?.batchesSpoiledBeforeDry ?? 0), 0)
+      const all = ms.reduce((n, m) => n + (m.spoilage?.batches ?? 0), 0)
+      return `${spoiled} of ${all} batches of this typical year`
+    }
+    return tenYearsRange(Math.min(...ms.map(p)), Math.max(...ms.map(p)))
+  }
+  if (rows.every((m) => p(m) === 0)) {
+    return [
+      `No batch spoiled before it was dry in ${typical ? 'this typical year' : 'any year of the file'} by the spoilage model (${model}).`,
+    ]
+  }
+  const out: string[] = []
+  const suit = new Set(suitableMonths(a))
+  const risky = rows.filter((m) => p(m) >= 0.5)
+  const riskyDrying = risky.filter((m) => suit.has(m.month))
+  if (riskyDrying.length > 0) {
+    const days = riskyDrying.map((m) => m.medianDaysToTarget).filter(finite)
+    const dayText =
+      days.length === 0
+        ? ''
+        : Math.min(...days) === Math.max(...days)
+          ? ` in ${formatNumber(days[0], 1)} days`
+          : ` in ${formatNumber(Math.min(...days), 1)} to ${formatNumber(Math.max(...days), 1)} days`
+    out.push(
+      `But batches started in ${monthList(riskyDrying.map((m) => m.month))} dry${dayText} and spoil first in ${share(riskyDrying)} (${model}).`,
+    )
+  } else if (risky.length > 0) {
+    out.push(
+      `Batches started in ${monthList(risky.map((m) => m.month))} spoil before they are dry in ${share(risky)} (${model}).`,
+    )
+  }
+  const low = rows.filter((m) => p(m) <= 0.1)
+  if (low.length > 0 && low.length < rows.length) {
+    out.push(
+      `Lowest spoilage risk: batches started in ${monthList(low.map((m) => m.month))} (spoiled first in ${typical ? share(low) : `at most ${tenYearsRange(Math.max(...low.map(p)), Math.max(...low.map(p)))}`}).`,
+    )
+  } else if (low.length === 0) {
+    const best = rows.reduce((x, y) => (p(y) < p(x) ? y : x))
+    out.push(
+      `No month is free of spoilage risk: even batches started in ${MONTH_LONG[best.month - 1]} spoil first in ${share([best])}.`,
     )
   }
   return out

@@ -4,12 +4,14 @@ import {
   COCOA_OTA_WINDOW,
   COFFEE_OTA_WINDOW,
   FISH_WET_WARM_RULE,
+  grainDryMatterLossModel,
   initialSpoilageState,
   isSpoiled,
   mouldFreeDays,
   mouldFreeTimeModel,
   runSpoilage,
   type SpoilageStepInput,
+  spoilageHourStepper,
   spoilageModelFor,
   spoilageModels,
 } from '../../../src/product/spoilage/index.ts'
@@ -150,5 +152,39 @@ describe('model choice per product', () => {
       expect(m.spoiledAt).toBeGreaterThan(0)
       expect(m.cautions.length).toBeGreaterThan(0)
     }
+  })
+})
+
+describe("hour steppers (the batch loop's and the bin's fast path)", () => {
+  it('hour steppers (inputs as fields) give the same state as step for every model', () => {
+    for (const model of [...spoilageModels(), grainDryMatterLossModel({ damagePct: 12 })]) {
+      expect(model.hourStepper, model.id).toBeDefined()
+      const fast = spoilageHourStepper(model)
+      let state = initialSpoilageState()
+      for (let h = 0; h < 300; h++) {
+        // 14 … 46 °C across the 42.5 °C cut and the 21–27 °C range; grain 10 … 30 °C (its `step` inverts the DML
+        // curve every hour, which overflows once the loss is astronomically past the limit)
+        const tC =
+          model.id === 'grain-dry-matter-loss' ? 20 + 10 * Math.sin(h / 6) : 30 + 16 * Math.sin(h / 6)
+        const m = 30 - h / 25 // 30 → 10 % wb: through the grain model's range and below it
+        const aw = 0.99 - h / 600
+        state = model.step(state, { productTempC: tC, moistureWbPct: m, waterActivity: aw, hours: 1 })
+        fast.productTempC = tC
+        fast.moistureWbPct = m
+        fast.waterActivity = aw
+        fast.stepHour()
+      }
+      const s = fast.state()
+      expect(s.measure / (state.measure || 1), model.id).toBeCloseTo(state.measure === 0 ? 0 : 1, 9)
+      expect(s.hoursAtRisk, model.id).toBe(state.hoursAtRisk)
+      expect(s.hoursOutsideRange, model.id).toBe(state.hoursOutsideRange)
+      expect(s.hours).toBe(300)
+      fast.waterActivity = 1.2
+      expect(() => fast.stepHour()).toThrow(/waterActivity/)
+    }
+  })
+
+  it('name their source in short for the start-date table', () => {
+    for (const model of spoilageModels()) expect(model.source.short, model.id).toBeTruthy()
   })
 })

@@ -9,7 +9,7 @@ import {
   isSpoiled,
   moistureMultiplier,
   runSpoilage,
-  spoilageAccumulator,
+  spoilageHourStepper,
   temperatureMultiplier,
 } from '../../../src/product/spoilage/index.ts'
 
@@ -157,29 +157,38 @@ describe('grain dry-matter loss (Steele 1967 / Thompson 1972)', () => {
     expect(() => grainDryMatterLossModel({ damagePct: -1 })).toThrow(/damagePct/)
   })
 
-  it('gives the same state through its accumulator as through step, hour by hour (also the generic wrapper)', () => {
+  it('gives the same state through its hour stepper as through step, hour by hour (also the generic wrapper)', () => {
     for (const model of [
       grainDryMatterLossModel({ damagePct: 12 }),
       grainDryMatterLossModel({ damagePct: 55 }),
     ]) {
-      const fast = spoilageAccumulator(model)
-      const generic = spoilageAccumulator({ ...model, accumulator: undefined })
+      const fast = spoilageHourStepper(model)
+      const generic = spoilageHourStepper({ ...model, hourStepper: undefined })
       let state = initialSpoilageState()
       for (let h = 0; h < 600; h++) {
         const tC = 12 + 14 * Math.sin(h / 7) // 0.3 … 26 °C, below Steele's range some hours
         const m = 24 - h / 60 // 24 → 14 % wb
         const aw = 0.6 + 0.3 * Math.cos(h / 11)
         state = model.step(state, { productTempC: tC, moistureWbPct: m, waterActivity: aw, hours: 1 })
-        fast.add(tC, m, aw, 1)
-        generic.add(tC, m, aw, 1)
-        expect(fast.measure() / state.measure).toBeCloseTo(1, 9)
+        for (const s of [fast, generic]) {
+          s.productTempC = tC
+          s.moistureWbPct = m
+          s.waterActivity = aw
+          s.stepHour()
+        }
+        expect(fast.measure / state.measure).toBeCloseTo(1, 9)
       }
       const s = fast.state()
       expect(s.hoursAtRisk).toBe(state.hoursAtRisk)
       expect(s.hoursOutsideRange).toBe(state.hoursOutsideRange)
       expect(s.hours).toBe(600)
       expect(generic.state()).toEqual(state)
+      expect(generic.measure).toBe(state.measure)
     }
-    expect(() => spoilageAccumulator(grainDryMatterLossModel()).add(20, 20, 0.9, 0)).toThrow(/hours/)
+    const s = spoilageHourStepper(grainDryMatterLossModel())
+    s.productTempC = 20
+    s.moistureWbPct = 20
+    s.waterActivity = 1.2
+    expect(() => s.stepHour()).toThrow(/waterActivity/)
   })
 })
