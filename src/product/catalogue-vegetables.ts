@@ -23,6 +23,7 @@ import {
   MEGHWAR_PJAR,
   SIMAL_2005,
 } from './citations.ts'
+import { pretreatmentVariantSpec } from './pretreatments.ts'
 import type { KineticsSpec, ProductProfile, Sourced } from './profile.ts'
 
 /** Kinetics of a hollow product (a pod) whose wall is the drying length. */
@@ -86,7 +87,7 @@ const CHILLI_LEWIS_FIT = CHILLI_K.source
 
 export const chiliPeppers: ProductProfile = {
   id: 'chili-peppers',
-  name: 'Chili peppers (red, whole pods)',
+  name: 'Chili peppers (red, whole pods, blanched)',
   category: 'vegetable',
   initialMoistureWbPct: sourced(80, `${MEGHWAR_PJAR}: initial moisture taken as 80 % wb`, 'published'),
   targetMoistureWbPct: sourced(
@@ -135,7 +136,38 @@ export const chiliPeppers: ProductProfile = {
   cautions: [
     ...FRUIT_CAUTIONS,
     'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
-    'The drying rate was fitted to chillies that were probably blanched (Hossain & Bala 2007); unblanched chillies dried several times slower than this profile predicts in published trials (docs/validation.md): check the moisture before storage.',
+    'The drying rate of this profile was fitted to chillies that were probably blanched (Hossain & Bala 2007). For chillies dried without blanching choose chili-peppers-unblanched: in published trials unblanched chillies dried several times slower than this profile predicts (docs/validation.md). Check the moisture before storage.',
+  ],
+}
+
+const CHILLI_UNBLANCHED_K = calibratedConstant('chili-peppers-unblanched', 'k.kRefPerH')
+
+/**
+ * Unblanched chillies. No published blanching factor turns the blanched base's rate into an unblanched one
+ * (product/pretreatments.ts, chili-peppers-unblanched), so this variant has a Lewis k of its own, fitted through
+ * the engine to the open-sun run of Meghwar et al. (npm run calibrate); every other number is the base's.
+ */
+export const chiliPeppersUnblanched: ProductProfile = {
+  ...chiliPeppers,
+  id: 'chili-peppers-unblanched',
+  name: pretreatmentVariantSpec('chili-peppers-unblanched').name,
+  variantOf: chiliPeppers.id,
+  kinetics: {
+    ...chiliPeppers.kinetics,
+    equation: { model: 'lewis', k: arrhenius(CHILLI_UNBLANCHED_K.value, 50, 27000) },
+    parameters: {
+      ...chiliPeppers.kinetics.parameters,
+      'k.kRefPerH': param(CHILLI_UNBLANCHED_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 50 °C, set by dryhours as for chili-peppers, of the k fitted through the engine to ${MEGHWAR_PJAR} (run ${CHILLI_UNBLANCHED_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+    },
+  },
+  cautions: [
+    ...FRUIT_CAUTIONS,
+    'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
+    "The drying rate of this profile was fitted to one open-sun trial of unblanched red chillies (Meghwar et al., Umerkot, November 2022) on a reconstruction of that month's weather; how far it carries to other dryers, varieties and places is in docs/validation.md. Blanched chillies dry faster: choose chili-peppers for them. Check the moisture before storage.",
   ],
 }
 
@@ -180,4 +212,9 @@ export const onionSlices: ProductProfile = {
   cautions: FRUIT_CAUTIONS,
 }
 
-export const VEGETABLE_PROFILES: ProductProfile[] = [tomatoHalves, chiliPeppers, onionSlices]
+export const VEGETABLE_PROFILES: ProductProfile[] = [
+  tomatoHalves,
+  chiliPeppers,
+  chiliPeppersUnblanched,
+  onionSlices,
+]

@@ -7,8 +7,10 @@
  * Never counted twice: each variant states what the base's rate was measured on. A rate fitted on untreated
  * product is multiplied by the published factor; a rate fitted on product that already had the treatment IS the
  * treated variant, and the untreated one is derived only by a published factor, or is declared not derivable
- * ({@link PRETREATMENT_VARIANTS} `derivable: false`, with the reason). Moved here from
- * test/fixtures/pretreatments.json (now removed) so that the catalogue (core, no file reads) can use it.
+ * ({@link PRETREATMENT_VARIANTS} `derivable: false`, with the reason); such a variant is offered only when it
+ * has a rate of its own fitted through the engine to a published run of product in that state (`fittedTo`).
+ * Moved here from test/fixtures/pretreatments.json (now removed) so that the catalogue (core, no file reads)
+ * can use it.
  */
 
 export interface PretreatmentEffect {
@@ -210,8 +212,14 @@ export interface PretreatmentVariantSpec {
   /** What the base profile's rate constant was fitted or read on. */
   baseMeasuredOn: 'untreated' | 'treated'
   baseNote: string
-  /** False when no published factor allows the derivation (then the variant is not offered). */
+  /** False when no published factor allows the derivation (then the variant is not derived). */
   derivable: boolean
+  /**
+   * Set when a variant that cannot be derived has a rate of its own instead, fitted through the engine to one
+   * published run of product in that state (the calibration run, test/experiments/cases.ts): then it is in the
+   * catalogue although not derivable.
+   */
+  fittedTo?: string
   note: string
 }
 
@@ -261,13 +269,14 @@ export const PRETREATMENT_VARIANTS: readonly PretreatmentVariantSpec[] = [
   {
     variantId: 'chili-peppers-unblanched',
     baseId: 'chili-peppers',
-    name: 'Chili peppers (unblanched)',
+    name: 'Chili peppers (red, whole pods, unblanched)',
     pretreatmentId: 'blanching-chilli',
     baseMeasuredOn: 'treated',
     baseNote:
       'the base rate was fitted to Hossain & Bala 2007, whose abstract credits blanching of the samples with part of the shorter drying: the base is taken as blanched',
     derivable: false,
-    note: 'no published blanching factor was read, so an unblanched rate cannot be derived from the blanched base; unblanched chillies dry slower than the base says (the validation runs of Meghwar et al., Fadhel et al. and the ghost-chilli study show it)',
+    fittedTo: 'meghwar-chilli-umerkot/open-sun',
+    note: "no published blanching factor was read, so the unblanched rate is not derived from the blanched base: the variant has a rate of its own, fitted through the engine to the open-sun run of Meghwar et al. (fresh red 'Longi' pods from the field, no pretreatment named in the abstract: taken as unblanched); the other unblanched runs (Meghwar et al.'s tunnel, Fadhel et al., the ghost-chilli study) validate it (docs/validation.md)",
   },
   {
     variantId: 'apricot-halves-sulphured',

@@ -200,16 +200,18 @@ export function renderProductSourcesDoc(): string {
     "Each variant multiplies its base's rate constant (or diffusivity) by the treatment's rate factor (the middle of",
     'the published range: 1 ÷ a drying-time or relaxation-time factor, or a diffusivity factor itself), never twice:',
     'a base whose rate was measured on treated product is not multiplied again, and a variant without a published',
-    'factor is not derived (`src/product/pretreatment-variants.ts`).',
+    'factor is not derived (`src/product/pretreatment-variants.ts`); it is offered only with a rate of its own,',
+    'fitted through the engine to a published run of product in that state (docs/calibration.md).',
     '',
     '| variant | base | treatment | base rate measured on | rate factor | offered | why |',
     '|---|---|---|---|---|---|---|',
   )
   for (const v of PRETREATMENT_VARIANTS) {
     const f = rateFactor(pretreatmentById(v.pretreatmentId).effect)
-    const offered = v.derivable && v.baseMeasuredOn === 'untreated' && f !== null
+    const derived = v.derivable && v.baseMeasuredOn === 'untreated' && f !== null
+    const offered = derived ? 'yes' : v.fittedTo ? `yes: own rate fitted to ${v.fittedTo}` : 'no'
     out.push(
-      `| \`${v.variantId}\` | \`${v.baseId}\` | ${cell(pretreatmentById(v.pretreatmentId).treatment)} | ${v.baseMeasuredOn} (${cell(v.baseNote)}) | ${f ? `× ${f.value.toFixed(3)}` : 'none'} | ${offered ? 'yes' : 'no'} | ${cell(v.note)} |`,
+      `| \`${v.variantId}\` | \`${v.baseId}\` | ${cell(pretreatmentById(v.pretreatmentId).treatment)} | ${v.baseMeasuredOn} (${cell(v.baseNote)}) | ${f ? `× ${f.value.toFixed(3)}` : 'none'} | ${offered} | ${cell(v.note)} |`,
     )
   }
   out.push('')

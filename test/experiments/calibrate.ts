@@ -5,7 +5,8 @@
  * which the catalogue reads (level `fitted`, citing the experiment, the weather and this script).
  *
  *   npm run calibrate            (writes src/product/calibration.ts and prints the fits)
- *   npm run calibrate -- --check (prints only; exits 1 when a written value is more than 0.5 % off the fit)
+ *   npm run calibrate:check      (prints only; exits 1 when a written value is more than 0.5 % off the fit;
+ *                                 `npm run calibrate -- --check` would hand the flag to the formatter instead)
  *
  * Only runs whose role is `calibration` are used (test/experiments/cases.ts); a validation run is never
  * fitted. The fit is a bisection on the logarithm of the constant (the predicted time falls as the rate

@@ -3,6 +3,7 @@
  * counted twice. Factors checked against the numbers of their sources (named beside each check).
  */
 import { describe, expect, it } from 'vitest'
+import { calibratedConstant } from '../../src/product/calibration.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import { derivePretreatedVariant } from '../../src/product/pretreatment-variants.ts'
 import { PRETREATMENT_VARIANTS, pretreatmentById, rateFactor } from '../../src/product/pretreatments.ts'
@@ -53,11 +54,33 @@ describe('never counted twice', () => {
       /cannot be derived|already includes/,
     )
   })
-  it('a variant without a published factor is refused and not in the catalogue', () => {
+  it('a variant without a published factor is refused, and not in the catalogue unless it has a rate of its own fitted to a run', () => {
     for (const v of PRETREATMENT_VARIANTS.filter((x) => !x.derivable)) {
       expect(() => derivePretreatedVariant(productById(v.baseId), v.variantId)).toThrow(/cannot be derived/)
-      expect(() => productById(v.variantId)).toThrow(/unknown product/)
+      if (v.fittedTo === undefined) expect(() => productById(v.variantId)).toThrow(/unknown product/)
     }
+  })
+  it('unblanched chillies have their own rate, fitted through the engine to the unblanched open-sun run of Meghwar et al. (not the blanched base times a factor)', () => {
+    const spec = PRETREATMENT_VARIANTS.find((v) => v.variantId === 'chili-peppers-unblanched')
+    expect(spec?.fittedTo).toBe('meghwar-chilli-umerkot/open-sun')
+    const fitted = calibratedConstant('chili-peppers-unblanched', 'k.kRefPerH')
+    expect(fitted.caseId).toBe(spec?.fittedTo)
+    const p = productById('chili-peppers-unblanched')
+    expect(p.variantOf).toBe('chili-peppers')
+    expect(rate('chili-peppers-unblanched')).toBe(fitted.value)
+    expect(p.kinetics.parameters?.['k.kRefPerH']).toEqual({ source: fitted.source, confidence: 'fitted' })
+    expect(fitted.source).toContain('Meghwar')
+    // Unblanched chillies dried slower than the (probably blanched) base in every published pair read.
+    expect(rate('chili-peppers-unblanched')).toBeLessThan(rate('chili-peppers'))
+  })
+  it('the blanched base names the unblanched variant in its name and caution, and the variant names the base', () => {
+    const base = productById('chili-peppers')
+    expect(base.name).toMatch(/blanched/)
+    expect(base.cautions.join(' ')).toContain('chili-peppers-unblanched')
+    const variant = productById('chili-peppers-unblanched')
+    expect(variant.name).toMatch(/unblanched/)
+    expect(variant.cautions.join(' ')).toContain('Blanched chillies dry faster: choose chili-peppers')
+    expect(variant.cautions.join(' ')).not.toContain('probably blanched')
   })
   it('deriving from an already derived variant is refused (the variant is not the base the spec names)', () => {
     expect(() =>
