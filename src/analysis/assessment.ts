@@ -81,6 +81,11 @@ export interface AssessmentSpoilage {
     limitSource: string
     atRiskWhen: string
     validity: string
+    /**
+     * Which water activity the model is fed along a batch: 'surface' (models of mould: the water activity at
+     * the product's surface) or 'piece' (the isotherm at the mean moisture), the rule in words and its sources.
+     */
+    waterActivity: { of: 'surface' | 'piece'; rule: string; source: string }
   }
   /** How the model is stepped along a batch, in words. */
   rule: string

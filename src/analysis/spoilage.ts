@@ -9,7 +9,12 @@
 import type { BatchSpoilageResult, BatchSpoilageSetup } from '../drying/batch.ts'
 import { WaterActivityTable } from '../drying/water-activity-table.ts'
 import type { ProductProfile } from '../product/profile.ts'
-import { type SpoilageModel, spoilageModelFor } from '../product/spoilage/index.ts'
+import {
+  type SpoilageModel,
+  SURFACE_WATER_ACTIVITY_RULE,
+  SURFACE_WATER_ACTIVITY_SOURCE,
+  spoilageModelFor,
+} from '../product/spoilage/index.ts'
 import type { AssessmentSpoilage, SpoilageSummary } from './assessment.ts'
 import { quantileSorted, roundOrNull } from './statistics.ts'
 
@@ -20,7 +25,18 @@ export function spoilageSetup(profile: ProductProfile): BatchSpoilageSetup {
 
 /** How the engine steps the model along a batch, in words (the assessment's `spoilage.rule`). */
 export const SPOILAGE_RULE =
-  'stepped every hour of each batch of the method alone, from its start until the product reaches its target moisture (or the batch ends), covered and paused hours included: product temperature of the hour, moisture at its start, water activity from the desorption isotherm at that temperature and moisture; hours with missing weather keep the last product temperature. A batch spoils before it is dry when the measure reaches the limit by the hour the target is reached; batches that never reach the target count as spoiled when the limit is reached within the maximum duration.'
+  'stepped every hour of each batch of the method alone, from its start until the product reaches its target moisture (or the batch ends), covered and paused hours included: product temperature of the hour, moisture at its start, water activity from the desorption isotherm at that temperature and moisture, or for a model of mould the water activity at the product surface (model.waterActivity); hours with missing weather keep the last product temperature. A batch spoils before it is dry when the measure reaches the limit by the hour the target is reached; batches that never reach the target count as spoiled when the limit is reached within the maximum duration.'
+
+/** Which water activity the model is fed, and how it is worked out (the assessment's `spoilage.model.waterActivity`). */
+function waterActivityFed(model: SpoilageModel): AssessmentSpoilage['model']['waterActivity'] {
+  if (model.waterActivityOf === 'surface')
+    return { of: 'surface', rule: SURFACE_WATER_ACTIVITY_RULE, source: SURFACE_WATER_ACTIVITY_SOURCE }
+  return {
+    of: 'piece',
+    rule: 'the product’s water activity from its desorption isotherm at its temperature and mean moisture',
+    source: 'the product profile’s isotherm (dryhours products <id>)',
+  }
+}
 
 function medianP90(values: number[], digits: number): { median: number | null; p90: number | null } {
   const s = values.filter((v) => Number.isFinite(v)).sort((a, b) => a - b)
@@ -74,6 +90,7 @@ export function assessmentSpoilage(
       limitSource: model.spoiledAtSource,
       atRiskWhen: model.atRiskWhen,
       validity: model.validity,
+      waterActivity: waterActivityFed(model),
     },
     rule: SPOILAGE_RULE,
     season: summariseSpoilage(model, seasonResults),
@@ -85,5 +102,5 @@ export function assessmentSpoilage(
 export const SPOILAGE_CAUTIONS: readonly string[] = [
   'The spoilage figures come from a published model (or a stated rule) driven by the modelled product temperature and water activity; they are an estimate of risk, not a food-safety test.',
   'Where batches came near or past the limit, sort out mouldy or discoloured product and have lots tested for mycotoxins (aflatoxins, ochratoxin A) by an accredited laboratory before food or feed use.',
-  'Hygiene, insects, birds, dust, dew and rain on the product are not in the models; keep them away from the product.',
+  'Hygiene, insects, birds and dust are not in the models, and dew and rain only through the product’s moisture and, for mould, its wetted surface; keep them all away from the product.',
 ]

@@ -30,6 +30,9 @@ export function spoilageText(a: Assessment): string[] {
       : `${s.model.limit} ${s.model.measureUnit} ${s.model.measureName}`
   return [
     `Spoilage before dry: ${s.model.name}; source ${s.season.source} (${s.model.source.confidence}); spoiled at ${limit}`,
+    s.model.waterActivity.of === 'surface'
+      ? '  fed the water activity at the product surface (from the air at the product, its drying rate, rain and cover: JSON spoilage.model.waterActivity)'
+      : '  fed the product’s water activity (its isotherm at its mean moisture)',
     `  season: ${s.season.batchesSpoiledBeforeDry} of ${s.season.batches} batches (${pct(s.season.probability)} %) spoiled before they were dry; hours at risk median ${f0(s.season.hoursAtRisk.median)} (P90 ${f0(s.season.hoursAtRisk.p90)})`,
     ...s.cautions.slice(0, 2).map((c) => `  ! ${c}`),
   ]

@@ -3,15 +3,21 @@
  * The product family's spoilage model stepped along one batch (docs/model.md §7). Every hour of the batch,
  * paused and covered hours included, the model is stepped with the hour's product temperature, the moisture
  * at the start of the hour and the water activity of the isotherm at that temperature and moisture
- * (drying/water-activity-table.ts), until the target is reached or the batch ends. Hours with missing weather
- * keep the last product temperature (the clock runs; before the first known hour nothing is stepped). One
- * track per batch, fed through fields; nothing is allocated per hour.
+ * (drying/water-activity-table.ts), until the target is reached or the batch ends; a model of mould
+ * (`waterActivityOf: 'surface'`) gets the water activity at the product's surface instead
+ * (product/spoilage/surface-water-activity.ts: from the air's vapour pressure at the product temperature, the
+ * share of the free-water rate the product evaporated, rain, and whether the product met the air). Hours with
+ * missing weather keep the last product temperature (the clock runs; before the first known hour nothing is
+ * stepped). One track per batch, fed through fields; nothing is allocated per hour.
  */
+import { saturationPressureFromTableKpa } from '../physics/saturation-table.ts'
 import {
   type SpoilageHourStepper,
   type SpoilageModel,
   spoilageHourStepper,
 } from '../product/spoilage/model.ts'
+import { SurfaceExchange, surfaceWaterActivity } from '../product/spoilage/surface-water-activity.ts'
+import { HourMode } from './methods/method-model.ts'
 import type { WaterActivityTable } from './water-activity-table.ts'
 
 /** What a batch needs to step a spoilage model along its hours. */
@@ -39,19 +45,64 @@ export interface BatchSpoilageResult {
 const SPOILAGE_T_MIN_C = -40
 const SPOILAGE_T_MAX_C = 120
 
-/** One batch's spoilage: set `productC` and `moistureDb`, then `stepHour()`, once per hour of the batch. */
+/** One batch's spoilage: `stepBatchHour` once per hour of the batch (or set the fields and call `stepHour()`). */
 export class BatchSpoilageTrack {
   /** The hour's product temperature [°C]; NaN when the hour's weather is missing. */
   productC = Number.NaN
   /** Moisture at the start of the hour [kg/kg db]. */
   moistureDb = Number.NaN
+  /** How the product met the air in the hour ({@link SurfaceExchange}); read by surface models only. */
+  exchange: number = SurfaceExchange.none
+  /** Vapour pressure of the air at the product [kPa] (with `exchange` air). */
+  airVaporPressureKpa = Number.NaN
+  /** Share of the hour's free-water (constant-rate) limit the product evaporated, 0–1. */
+  wetShare = 0
+  /** The water activity the model was fed in the last hour stepped. */
+  lastWaterActivity = Number.NaN
   private lastProductC = Number.NaN
   private readonly stepper: SpoilageHourStepper
   private readonly awTable: WaterActivityTable
+  private readonly surface: boolean
 
-  constructor(private readonly setup: BatchSpoilageSetup) {
+  /** The water activity fed to the model in each hour of the batch, when a trace was asked for (NaN: not stepped). */
+  readonly waterActivityTrace: Float64Array | undefined
+
+  /** `traceHours` > 0: keep {@link waterActivityTrace} for that many hours. */
+  constructor(
+    private readonly setup: BatchSpoilageSetup,
+    traceHours = 0,
+  ) {
+    this.waterActivityTrace = traceHours > 0 ? new Float64Array(traceHours).fill(Number.NaN) : undefined
     this.stepper = spoilageHourStepper(setup.model)
     this.awTable = setup.waterActivity
+    this.surface = setup.model.waterActivityOf === 'surface'
+  }
+
+  /**
+   * Hour `h` of a batch (drying/batch.ts): its {@link HourMode}, the product temperature [°C] (NaN when missing),
+   * the moisture at the hour's start [kg/kg db], the air's vapour pressure [kPa] and the share of the hour's
+   * free-water limit the product evaporated.
+   */
+  stepBatchHour(
+    h: number,
+    mode: number,
+    productC: number,
+    moistureDb: number,
+    airVaporPressureKpa: number,
+    wetShare: number,
+  ): void {
+    this.productC = productC
+    this.moistureDb = moistureDb
+    this.exchange =
+      mode === HourMode.rainExposed
+        ? SurfaceExchange.wetted
+        : mode === HourMode.paused || mode === HourMode.missing
+          ? SurfaceExchange.none
+          : SurfaceExchange.air
+    this.airVaporPressureKpa = airVaporPressureKpa
+    this.wetShare = wetShare
+    this.stepHour()
+    if (this.waterActivityTrace !== undefined) this.waterActivityTrace[h] = this.lastWaterActivity
   }
 
   stepHour(): void {
@@ -66,10 +117,18 @@ export class BatchSpoilageTrack {
     aw.tC = t
     aw.moistureDb = this.moistureDb
     aw.lookup()
+    let awFed = aw.aw
+    if (this.surface) {
+      // the surface's water activity; the surface RH at the batch's own product temperature
+      const ea = this.airVaporPressureKpa
+      const rh = ea >= 0 ? ea / saturationPressureFromTableKpa(t, false) : Number.NaN
+      awFed = surfaceWaterActivity(this.exchange, awFed, rh, this.wetShare)
+    }
+    this.lastWaterActivity = awFed
     const acc = this.stepper
     acc.productTempC = t
     acc.moistureWbPct = (100 * this.moistureDb) / (1 + this.moistureDb)
-    acc.waterActivity = aw.aw
+    acc.waterActivity = awFed
     acc.stepHour()
   }
 

@@ -17,7 +17,9 @@
  * dry: the supplemental-heat strategy of docs/model.md §8.
  * With `options.spoilage`, the product family's spoilage model is stepped every hour of the batch (paused and
  * covered hours included) with the hour's product temperature (the surface-balanced one in drying hours of
- * exposed methods) and the moisture at the start of the hour (drying/batch-spoilage.ts).
+ * exposed methods), the moisture at the start of the hour, and for models of mould what the surface's water
+ * activity needs: the hour's mode, the air's vapour pressure and the share of the hour's free-water limit the
+ * product evaporated (drying/batch-spoilage.ts, product/spoilage/surface-water-activity.ts).
  */
 
 import { surfaceBalancedDrop } from '../product/stepping.ts'
@@ -87,6 +89,11 @@ export interface BatchResult {
   productTrace?: Float64Array
   /** Which conditions drove each hour (0 primary, 1 backup), when recordTrace. */
   usedBackup?: Uint8Array
+  /**
+   * The water activity the spoilage model was fed in each hour (the piece's, or the surface's for mould
+   * models), when recordTrace and `options.spoilage`; NaN for hours not stepped.
+   */
+  spoilageWaterActivityTrace?: Float64Array
   /** The spoilage model's outcome, when `options.spoilage` was given. */
   spoilage?: BatchSpoilageResult
 }
@@ -121,7 +128,8 @@ export function simulateBatch(
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
-  const track = options.spoilage === undefined ? undefined : new BatchSpoilageTrack(options.spoilage)
+  const track =
+    options.spoilage && new BatchSpoilageTrack(options.spoilage, options.recordTrace ? maxHours : 0)
   const ts = product.thompsonTimeScale
   // the caps are per kg of the dry matter of the conditions' initial moisture; this batch's dry matter per
   // tonne fresh (or per m²) is 1/(1 + initialDb): rescale so the water per kg of air is what the air carries
@@ -161,6 +169,7 @@ export function simulateBatch(
     }
     const mode = c.mode[i]
     const mStart = m
+    let wetShare = 0
     // the product's temperature in the hour: the conditions' (it evaporates nothing), or on its surface balance
     let tHour = c.productC[i]
     if (mode === HourMode.missing) {
@@ -178,6 +187,8 @@ export function simulateBatch(
         if (m > c.emcDesorptionDb[i]) {
           const cap = c.capDbPerH[i] * capScale
           const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          // the share of the hour's free-water limit evaporated (an unknown limit: as a free-water surface)
+          wetShare = cap > 0 ? drop / cap : drop > 0 ? 1 : 0
           if (c.surfaceBalance && cap > 0) tHour -= (drop / cap) * (tHour - c.productWetC[i])
           if (drop > 0) {
             m -= drop
@@ -193,11 +204,7 @@ export function simulateBatch(
     }
     if (trace) trace[h] = m
     if (productTrace && mode !== HourMode.paused) productTrace[h] = tHour
-    if (track !== undefined) {
-      track.productC = tHour
-      track.moistureDb = mStart
-      track.stepHour()
-    }
+    track?.stepBatchHour(h, mode, tHour, mStart, c.vaporPressureKpa[i], wetShare)
     if (m <= targetDb) {
       hoursToTarget = h + 1
       break
@@ -221,6 +228,7 @@ export function simulateBatch(
     trace,
     productTrace,
     usedBackup,
+    spoilageWaterActivityTrace: track?.waterActivityTrace,
     spoilage: track?.result(),
   }
 }

@@ -71,6 +71,11 @@ export interface HourColumns {
    */
   vaporUptakeAirDbPerH: Float64Array
   vaporUptakeSurfaceDbPerH: Float64Array
+  /**
+   * Vapour pressure of the air at the product [kPa] (heating does not change it): the spoilage track's surface RH
+   * at the batch's own product temperature (product/spoilage/surface-water-activity.ts). NaN for missing hours.
+   */
+  vaporPressureKpa: Float64Array
   /** RH at the product surface [%]: ambient vapour pressure over saturation at the product temperature. */
   surfaceRhPct: Float64Array
   /** Saturation pressure of the ambient air, exp(ln pws) [Pa] (ASHRAE HOF 2017 ch. 1 eq 6); NaN for missing and not yet computed hours. */
@@ -165,6 +170,7 @@ export function allocateColumns(
     decayWetPerHour: f(surfaceBalance ? n : 0),
     vaporUptakeAirDbPerH: f(surfaceBalance ? n : 0),
     vaporUptakeSurfaceDbPerH: f(surfaceBalance ? n : 0),
+    vaporPressureKpa: f(n),
     surfaceRhPct: f(nDiagnostic),
     humidityRatio: f(nDiagnostic),
     deficitToSaturationGPerKg: f(nDiagnostic),

@@ -83,6 +83,7 @@ function readAmbientHour(e: Engine, i: number): boolean {
   const pw = (rh / 100) * (pwsPa * 1e-3)
   const w = humidityRatioFromVaporPressure(pw, p)
   c.humidityRatio[i] = w
+  c.vaporPressureKpa[i] = pw
   hour.index = i
   hour.dryBulbC = t
   hour.pressureKpa = p
@@ -115,6 +116,7 @@ function markMissing(e: Engine, i: number): void {
   c.mode[i] = HourMode.missing
   c.status[i] = HourStatus.missingData
   c.airC[i] = c.airRhPct[i] = c.productC[i] = c.surfaceRhPct[i] = c.humidityRatio[i] = Number.NaN
+  c.vaporPressureKpa[i] = Number.NaN
   c.productWetC[i] = c.emcWetDb[i] = c.rateKWet[i] = c.rateNWet[i] = c.decayWetPerHour[i] = Number.NaN
   c.vaporUptakeAirDbPerH[i] = c.vaporUptakeSurfaceDbPerH[i] = Number.NaN
   c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = c.evaporationKgPerM2H[i] = Number.NaN

@@ -15,6 +15,7 @@ export * from './fish-rule.ts'
 export * from './grain-dml.ts'
 export * from './model.ts'
 export * from './mould-free-time.ts'
+export * from './surface-water-activity.ts'
 
 /** Every model, for listing (the grain model with its default damage and threshold). */
 export function spoilageModels(): SpoilageModel[] {

@@ -38,7 +38,10 @@ export interface SpoilageStepInput {
   productTempC: number
   /** Product moisture [% wet basis]. */
   moistureWbPct: number
-  /** Product water activity (0–1), from the product's isotherm at its moisture and temperature. */
+  /**
+   * Water activity (0–1): the product's, from its isotherm at its moisture and temperature, or for models fed
+   * the surface's (`SpoilageModel.waterActivityOf`) the water activity at its surface.
+   */
   waterActivity: number
   /** Length of the step [h] (> 0). */
   hours: number
@@ -75,6 +78,12 @@ export interface SpoilageModel {
   validity: string
   /** Cautions the report must show with this model's result. */
   cautions: string[]
+  /**
+   * Which water activity the model is fed along a batch: 'piece' (default), the product's isotherm at its mean
+   * moisture; 'surface', the water activity at the product's surface (mould grows there;
+   * product/spoilage/surface-water-activity.ts).
+   */
+  waterActivityOf?: 'piece' | 'surface'
   step(state: SpoilageState, input: SpoilageStepInput): SpoilageState
   /**
    * Optional form for the long hour loops (every hour of every batch of an assessment, the top layer of every

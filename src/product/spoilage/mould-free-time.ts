@@ -14,7 +14,9 @@
  * use of a constant-condition time as the grain allowable-storage-time rule); mould is expected once it reaches 1.
  *
  * An isopleth-type model in (T, aw) for fruit, vegetables and herbs, measured on cakes: an approximation for
- * other sugar-rich intermediate-moisture foods, and the limits below are dryhours' choices:
+ * other sugar-rich intermediate-moisture foods. Along a batch it is fed the water activity at the product's
+ * SURFACE, where mould germinates (`waterActivityOf: 'surface'`; the rule and its sources in
+ * surface-water-activity.ts), not the piece's mean. The limits below are dryhours' choices:
  * - aw above 0.90 is held at 0.90 (no extrapolation beyond the data; for cut fruit at aw > 0.9 likely
  *   optimistic: wet surfaces also spoil by yeasts and bacteria);
  * - aw below 0.60 adds nothing (no microbial proliferation below aw 0.60: Beuchat, L.R. 1981, *Cereal Foods
@@ -132,15 +134,16 @@ export function mouldFreeTimeModel(appliesTo: string[] = ['fruit', 'vegetable', 
       confidence: 'transcribed',
       short: 'Seiler; Cauvain & Seiler (cakes), as quoted',
     },
+    waterActivityOf: 'surface',
     measureName: 'fraction of mould-free time used',
     measureUnit: '',
     spoiledAt: 1,
     spoiledAtSource: 'visible mould expected when the whole mould-free time is used (fraction 1)',
-    atRiskWhen: `product water activity ≥ ${MFSL_VALID_AW[0]} and product below ${MFSL_NO_GROWTH_AT_OR_ABOVE_C} °C`,
+    atRiskWhen: `water activity at the product surface ≥ ${MFSL_VALID_AW[0]} and product below ${MFSL_NO_GROWTH_AT_OR_ABOVE_C} °C`,
     validity:
       'cakes at aw 0.74–0.90, 21–27 °C (measured); other foods, aw and temperatures by extrapolation; no growth counted at or above 42.5 °C',
     cautions: [
-      'Measured on bakery products: for fruit, vegetables and herbs an approximation. Dew, rain and insects add risks it does not model.',
+      'Measured on bakery products: for fruit, vegetables and herbs an approximation. It is fed the water activity at the product surface, worked out from the air, the drying rate, rain and cover (dryhours’ rule, stated with the model); a surface kept wet by juice from cuts, splits or crushed fruit, and insects, add risks it does not model.',
       'Mouldy dried fruit can carry mycotoxins (aflatoxins, ochratoxin A in raisins and figs): discard visibly mouldy lots; test where risk was high.',
     ],
     step(state: SpoilageState, input: SpoilageStepInput): SpoilageState {

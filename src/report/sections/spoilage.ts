@@ -108,6 +108,6 @@ export function spoilageSection(a: Assessment, ctx: SectionContext): string {
     svg,
     alt,
     table: spoilageTable(a),
-    note: `How the model is stepped: ${s.rule}`,
+    note: `How the model is stepped: ${s.rule} Water activity fed to the model: ${s.model.waterActivity.rule} (${s.model.waterActivity.source}).`,
   })}${cautions}</section>`
 }
