@@ -58,6 +58,14 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     source:
       "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Experimental study of apricot drying using direct and indirect solar dryers with natural convection, E3S Web Conf. 661:02003, 2025 (abstract; authors not shown on the copy read), apricots in open air to equilibrium moisture in 10 days: run 'open-air', 86.0 → 20.0 % wb in 240 h (elapsed time) with method open-air on the weather reconstruction 'tashkent-july-2024' (test/fixtures/experiments/weather/; Tashkent July climate from memory, site and month assumed: the abstract gives no site, date or weather; halves and the 20 % wb end point assumed); engine ÷ target 1.0000",
   },
+  {
+    productId: 'tomato-halves',
+    parameter: 'dRefM2PerS',
+    value: 9.014e-10,
+    caseId: 'joel-2024-tomato-kano-parabolic/open-sun',
+    source:
+      "effective moisture diffusivity at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Joel J., Alkali A.K., Ibrahim B., Ahmmad A.A., Babba F.J., Dayo O. 2024, Evaluation of NSPRI Parabolic Shaped Solar Dryer (PSSD) for Drying of Tomatoes Under Semi-arid Climate Zone, Research Square preprint, doi:10.21203/rs.3.rs-4558322/v1 (abstract), 'Eka' tomatoes sliced 15 mm in open sun at Kano: run 'open-sun', 89.1 → 17.8 % wb in 144 h (elapsed time, sampled every 24 h: the geometric middle of the constants 7.968e-10–1.02e-9 that meet the end point at that sample) with method open-air on the weather reconstruction 'kano-february-2023' (test/fixtures/experiments/weather/; Kano February climate from memory, month assumed: the abstract gives the place but no month; its open-sun 47.5 °C at 66.6 % RH is not an air state and is not used); engine ÷ target 1.0000",
+  },
 ]
 
 /** The fitted constant of `productId` at `parameter`; throws when `npm run calibrate` has not written it. */

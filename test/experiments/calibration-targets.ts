@@ -77,6 +77,17 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
       'Tashkent July climate from memory, site and month assumed: the abstract gives no site, date or weather; halves and the 20 % wb end point assumed',
     searchRange: [1e-3, 1],
   },
+  {
+    productId: 'tomato-halves',
+    parameter: 'dRefM2PerS',
+    parameterLabel: 'effective moisture diffusivity at the reference temperature',
+    caseId: 'joel-2024-tomato-kano-parabolic/open-sun',
+    citation:
+      "Joel J., Alkali A.K., Ibrahim B., Ahmmad A.A., Babba F.J., Dayo O. 2024, Evaluation of NSPRI Parabolic Shaped Solar Dryer (PSSD) for Drying of Tomatoes Under Semi-arid Climate Zone, Research Square preprint, doi:10.21203/rs.3.rs-4558322/v1 (abstract), 'Eka' tomatoes sliced 15 mm in open sun at Kano",
+    weatherNote:
+      'Kano February climate from memory, month assumed: the abstract gives the place but no month; its open-sun 47.5 °C at 66.6 % RH is not an air state and is not used',
+    searchRange: [1e-11, 1e-7],
+  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */
