@@ -15,6 +15,7 @@ import type { BinAssessment } from './assessment-bin.ts'
 import { assessmentAssumptions } from './assumptions.ts'
 import { hourOfDayTable, MONTH_COVERAGE_REQUIRED, totalReasons } from './monthly-tables.ts'
 import type { PsychrometricSummary } from './psychrometric.ts'
+import { seasonCalendar } from './season-calendar.ts'
 import { roundOrNull } from './statistics.ts'
 
 /** Hours of data that make a year count when no month of it is complete enough: one week (our choice). */
@@ -83,7 +84,8 @@ export function assessmentWarnings(
     )
   } else if (time.offsetSource === 'timestamps') {
     warnings.push(
-      `the site's clock is taken from the file's local timestamps (UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}); give --site-tz <zone> if the site keeps another`,
+      // the zone when the timestamps name one (its daylight saving is followed), else their fixed offset
+      `the site's clock is taken from the file's local timestamps (${time.timeZone ? `${time.timeZone} time` : `UTC${time.utcOffsetHours >= 0 ? '+' : ''}${time.utcOffsetHours}`}); give --site-tz <zone> if the site keeps another`,
     )
   }
   if (primary.assumedIrradianceHours > 0) {
@@ -180,6 +182,7 @@ export function assembleAssessment(
       elevationM: series.site.elevationM,
       utcOffsetHours: calendar.time.utcOffsetHours,
       utcOffsetSource: calendar.time.offsetSource,
+      timeZone: calendar.time.timeZone,
       typicalYear: series.typicalYear,
     },
     product: {
@@ -208,6 +211,8 @@ export function assembleAssessment(
     spoilage: parts.spoilage ?? null,
     bestStartWindows: starts.best.windows,
     bestStartWindowCriterion: starts.best.criterion,
+    // a bin has no batches by start week (its answer is the minimum airflow per start month): no cells
+    seasonCalendar: parts.bin ? { rules: [], cells: [] } : seasonCalendar(starts.table.rows, run.season),
     heat: parts.heat,
     psychrometric: parts.psychrometric,
     assumptions: [

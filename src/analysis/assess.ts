@@ -105,7 +105,7 @@ export function assess(series: HourlySeries, options: AssessOptions): Assessment
     })
   if (run.model.batches === 'deep-bed') {
     // grain in a bin: the deep-bed model per start date, airflow and year instead of batches
-    const bin = binStage(series, run, calendar.time.utcOffsetHours)
+    const bin = binStage(series, run, calendar.time)
     const starts: StartDates = { table: { rows: [], outcomes: [], batches: 0, skipped: 0 }, best: NO_WINDOWS }
     const heat = heatSummary([], backup, run, ctx, { heatedSample: false })
     return assembleAssessment(series, run, {
@@ -232,7 +232,7 @@ function startContext(
 ): StartContext {
   return {
     series,
-    utcOffsetHours: time.utcOffsetHours,
+    toUtcMs: time.toUtcMs,
     primary,
     backup,
     product: run.product,

@@ -8,6 +8,7 @@ import type { HourStatusName } from '../drying/usable-hour.ts'
 import type { FigureCounts, MemoryFigure } from '../product/memory-figures.ts'
 import type { BinAssessment } from './assessment-bin.ts'
 import type { PsychrometricSummary } from './psychrometric.ts'
+import type { SeasonCalendar } from './season-calendar.ts'
 import type { Spread } from './statistics.ts'
 
 export const ASSESSMENT_SCHEMA = 'dryhours.assessment/1'
@@ -17,9 +18,14 @@ export interface AssessmentSite {
   latitudeDeg: number | null
   longitudeDeg: number | null
   elevationM: number | null
-  /** Offset of the local standard time used for months, hours and start dates [h]. */
+  /** Offset of the site's local standard time [h]; months, hours and start dates follow it when `timeZone` is null. */
   utcOffsetHours: number
   utcOffsetSource: 'option' | 'file' | 'timestamps' | 'longitude' | 'assumed-utc'
+  /**
+   * IANA zone of the site's clock when known: months, hours and start dates then follow that clock,
+   * daylight saving included; null: local standard time (UTC + `utcOffsetHours`) all year.
+   */
+  timeZone: string | null
   typicalYear: boolean
 }
 
@@ -126,8 +132,15 @@ export interface MonthlyRow {
   month: number
   /** Usable drying hours in the month: per year and across years (see assumptions for the convention). */
   usableHours: Spread & { byYear: YearValue[] }
-  /** Usable share of the month's hours with data, all years pooled [0–1]. */
+  /** Usable share of ALL the month's hours with data (day and night), all years pooled [0–1]. */
   usableFraction: number | null
+  /**
+   * Usable share of the month's DAYLIGHT hours with data (sun above the night threshold of the
+   * assumptions), all years pooled [0–1]: the figure to read for methods that stop at night.
+   */
+  usableDaylightFraction: number | null
+  /** Share of the month's usable hours that fall at night (heated air, a collector's stored heat) [0–1]. */
+  usableNightHoursShare: number | null
   /** Hours per reason, median across years. */
   medianHoursByReason: Record<HourStatusName, number>
   /** Mean humidity-ratio deficit to the product's equilibrium RH at target, over daylight hours [g/kg]. */
@@ -145,7 +158,7 @@ export interface MonthlyRow {
 }
 
 export interface HourOfDayTable {
-  /** Local standard hour 0–23 (start of the hour). */
+  /** Hour 0–23 on the site's clock (start of the hour; see `site.timeZone`). */
   hours: number[]
   months: number[]
   /** usableFraction[month − 1][hour], null where there is no data. */
@@ -153,7 +166,7 @@ export interface HourOfDayTable {
 }
 
 export interface StartDateRow {
-  /** 'MM-DD' in local standard time. */
+  /** 'MM-DD' on the site's clock. */
   start: string
   /** Years with a complete batch from this start whose outcome is known (no hour without weather). */
   years: number
@@ -282,6 +295,8 @@ export interface Assessment {
   spoilage: AssessmentSpoilage | null
   bestStartWindows: StartWindow[]
   bestStartWindowCriterion: string
+  /** The start-date table folded into start weeks, each with one state (dries, marginal, needs heat …) and the criterion; no cells for a bin. */
+  seasonCalendar: SeasonCalendar
   heat: HeatSummary
   /** The site's hours on a psychrometric chart, with the air that dries the product to its target. */
   psychrometric: PsychrometricSummary

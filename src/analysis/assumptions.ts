@@ -5,7 +5,7 @@
  */
 
 import { methodModel } from '../drying/methods/index.ts'
-import { HOUR_STATUS_MEANINGS } from '../drying/usable-hour.ts'
+import { HOUR_STATUS_MEANINGS, HOUR_STATUS_WORDS, type HourStatusName } from '../drying/usable-hour.ts'
 import type { ResolvedAssessOptions } from './assess-options.ts'
 import type { Assumption } from './assessment.ts'
 import { MONTH_COVERAGE_REQUIRED } from './monthly-tables.ts'
@@ -23,8 +23,8 @@ export function assessmentAssumptions(run: ResolvedAssessOptions): Assumption[] 
         'the air at the product (at the product temperature) has an equilibrium moisture below the target, a humidity-ratio deficit to the equilibrium RH at target of at least the threshold, no rain on an exposed product, and the product temperature within its limits',
       source: 'dryhours model, docs/model.md §6',
     },
-    ...Object.entries(HOUR_STATUS_MEANINGS).map(([name, meaning]) => ({
-      name: `reason ${name}`,
+    ...(Object.entries(HOUR_STATUS_MEANINGS) as [HourStatusName, string][]).map(([name, meaning]) => ({
+      name: `hour ${name === 'usable' ? 'that dries' : `not drying: ${HOUR_STATUS_WORDS[name]}`}`,
       value: meaning,
       source: 'definition',
     })),
@@ -89,5 +89,6 @@ export function assessmentAssumptions(run: ResolvedAssessOptions): Assumption[] 
       source: 'user input',
     },
   ]
-  return [...list, ...methodModel(method.kind).assumptions(method)]
+  const product = { id: profile.id, name: profile.name, category: profile.category }
+  return [...list, ...methodModel(method.kind).assumptions(method, product)]
 }

@@ -119,7 +119,10 @@ export function binRunCount(starts: number, airflows: number, years: number): nu
 export function binStage(
   series: HourlySeries,
   run: ResolvedAssessOptions,
-  utcOffsetHours: number,
+  clock: {
+    utcOffsetHours: number
+    toUtcMs: (year: number, month: number, day: number, hour: number) => number
+  },
 ): BinAssessment {
   const method = run.method as NaturalAirBinMethod
   const grain = deepBedGrainFromProfile(run.profile)
@@ -138,7 +141,9 @@ export function binStage(
     airflowsM3PerMinPerT: airflows,
     seasonDays: Math.max(1, Math.round(run.maxDays)),
     spoilage,
-    utcOffsetHours,
+    // the fan starts at the season's hour on the site's clock (daylight saving where the zone keeps it)
+    utcOffsetHours: clock.utcOffsetHours,
+    toUtcMs: clock.toUtcMs,
     startHourLocal: run.season.startHourLocal,
     onRun: () => {
       // progress by start date × airflow (the years of each are run together)

@@ -20,6 +20,9 @@ export interface MonthlyCounts {
   /** usable[yearIndex * 12 + month − 1] */
   usable: Int32Array
   withData: Int32Array
+  /** Daylight hours with data (sun above the night threshold), and the usable ones among them. */
+  daylight: Int32Array
+  usableDaylight: Int32Array
   /** reasons[(yearIndex * 12 + month − 1) * REASONS + code] */
   reasons: Int32Array
   deficitSum: Float64Array
@@ -46,6 +49,8 @@ export function countMonthly(c: HourlyConditions, t: LocalTimeColumns): MonthlyC
     years,
     usable: new Int32Array(cells),
     withData: new Int32Array(cells),
+    daylight: new Int32Array(cells),
+    usableDaylight: new Int32Array(cells),
     reasons: new Int32Array(cells * REASONS),
     deficitSum: new Float64Array(cells),
     deficitHours: new Int32Array(cells),
@@ -58,7 +63,7 @@ export function countMonthly(c: HourlyConditions, t: LocalTimeColumns): MonthlyC
   const { year, month, hour } = t
   const { status, night, deficitToTargetGPerKg, evaporationKgPerM2H } = c
   const { reasons, withData, hourWithData, usable, hourUsable } = out
-  const { deficitSum, deficitHours, evaporationSum, evaporationHours } = out
+  const { deficitSum, deficitHours, evaporationSum, evaporationHours, daylight, usableDaylight } = out
   for (let i = 0; i < n; i++) {
     const cell = (year[i] - minYear) * 12 + month[i] - 1
     const s = status[i]
@@ -67,9 +72,12 @@ export function countMonthly(c: HourlyConditions, t: LocalTimeColumns): MonthlyC
     withData[cell]++
     const hourCell = (month[i] - 1) * 24 + hour[i]
     hourWithData[hourCell]++
+    const day = night[i] === 0
+    if (day) daylight[cell]++
     if (s === HourStatus.usable) {
       usable[cell]++
       hourUsable[hourCell]++
+      if (day) usableDaylight[cell]++
     }
     const d = deficitToTargetGPerKg[i]
     if (night[i] === 0 && Number.isFinite(d)) {
@@ -99,6 +107,8 @@ export function monthlyRows(counts: MonthlyCounts): MonthlyRow[] {
     const reasonValues: number[][] = HOUR_STATUS_NAMES.map(() => [])
     let usableAll = 0
     let dataAll = 0
+    let usableDay = 0
+    let dayAll = 0
     let defSum = 0
     let defHours = 0
     let evSum = 0
@@ -112,6 +122,8 @@ export function monthlyRows(counts: MonthlyCounts): MonthlyRow[] {
       for (let r = 0; r < REASONS; r++) reasonValues[r].push(counts.reasons[cell * REASONS + r])
       usableAll += counts.usable[cell]
       dataAll += withData
+      usableDay += counts.usableDaylight[cell]
+      dayAll += counts.daylight[cell]
       defSum += counts.deficitSum[cell]
       defHours += counts.deficitHours[cell]
       evSum += counts.evaporationSum[cell]
@@ -135,6 +147,8 @@ export function monthlyRows(counts: MonthlyCounts): MonthlyRow[] {
         byYear,
       },
       usableFraction: dataAll > 0 ? roundOrNull(usableAll / dataAll, 3) : null,
+      usableDaylightFraction: dayAll > 0 ? roundOrNull(usableDay / dayAll, 3) : null,
+      usableNightHoursShare: usableAll > 0 ? roundOrNull((usableAll - usableDay) / usableAll, 3) : null,
       medianHoursByReason,
       meanDaytimeDeficitToTargetGPerKg: defHours > 0 ? roundOrNull(defSum / defHours, 2) : null,
       // per day with data, counting only the hours the product is exposed (covered hours add nothing)

@@ -21,7 +21,8 @@ export const GOOD_START_PROBABILITY = 0.8
 
 export interface StartContext {
   series: HourlySeries
-  utcOffsetHours: number
+  /** The UTC instant of a time on the site's clock (analysis/local-time.ts). */
+  toUtcMs: (year: number, month: number, day: number, hour: number) => number
   primary: HourlyConditions
   backup: HourlyConditions
   product: ProductResponse
@@ -83,10 +84,10 @@ export function seasonDays(start: MonthDay, end: MonthDay, stepDays: number): Mo
   return days
 }
 
-/** Index of the hour starting at local standard `hour` on year-month-day, or null when outside the series. */
+/** Index of the hour starting at `startHourLocal` on the site's clock on year-month-day, or null when outside the series. */
 export function startIndexFor(ctx: StartContext, year: number, d: MonthDay): number | null {
   if (d.month === 2 && d.day === 29) return null
-  const utcMs = Date.UTC(year, d.month - 1, d.day, ctx.startHourLocal) - ctx.utcOffsetHours * MS_PER_HOUR
+  const utcMs = ctx.toUtcMs(year, d.month, d.day, ctx.startHourLocal)
   const index = Math.round((utcMs - ctx.series.startUtcMs[0]) / MS_PER_HOUR)
   if (index < 0 || index >= ctx.series.hours) return null
   if (!ctx.wrap && index + ctx.maxHours > ctx.series.hours) return null

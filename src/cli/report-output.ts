@@ -18,7 +18,7 @@ export const REPORT_OUTPUT_HELP = `Output:
   --json                the full result as JSON (same as --format json)
   --format <f>          text (default), json, html (the printable summary) or csv (its tables)
   --table <id>          with csv: one table only (its ids are listed when a wrong one is given)
-  --units <si|us>       display units of html and csv (default si)
+  --units <si|us>       display units of the text, html and csv (default si)
   --out <file>          write to the file instead of stdout`
 
 export interface ReportOutputChoice {

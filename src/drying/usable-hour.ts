@@ -36,6 +36,18 @@ export const HOUR_STATUS_NAMES = [
 ] as const
 export type HourStatusName = (typeof HOUR_STATUS_NAMES)[number]
 
+/** Each reason in a grower's words, short enough for a table cell (every display uses these, never the JSON names). */
+export const HOUR_STATUS_WORDS: Record<HourStatusName, string> = {
+  usable: 'dries',
+  missingData: 'no weather data',
+  nightWithoutDrying: 'night: covered or fans off',
+  rain: 'rain',
+  tooCold: 'too cold to dry',
+  aboveProductTempLimit: 'too hot for the product',
+  dewRisk: 'dew on the product',
+  tooHumid: 'air too humid',
+}
+
 /** Plain-language description of each reason, for the assumptions and the readable summary. */
 export const HOUR_STATUS_MEANINGS: Record<HourStatusName, string> = {
   usable: 'the air at the product moves it toward its target moisture',

@@ -13,8 +13,10 @@ export interface ReportInputInfo {
   fileName?: string
   /** What the data are, e.g. "CSV, 35 064 rows; dry bulb from column T_air" (untrusted). */
   dataSource?: string
-  /** What the weather reader noted about the file (untrusted), shown with the assessment's warnings. */
+  /** What the weather reader warned about the file (untrusted), shown with the assessment's warnings. */
   readerWarnings?: string[]
+  /** How the weather reader understood the file (untrusted): notes, shown apart from the warnings. */
+  readerNotes?: string[]
 }
 
 /** Display name of the site: the assessment's, else the file name, else "unnamed site". */

@@ -110,6 +110,14 @@ export function formatNumber(value: number | null | undefined, digits = 0): stri
   return sign + grouped + (frac !== undefined ? `.${frac}` : '')
 }
 
+/** A price per unit: two decimals, or four below 0.1 (a natural-gas price per ft³ is a few hundredths). */
+export function formatPrice(value: number | null | undefined): string {
+  return formatNumber(value, value !== null && value !== undefined && Math.abs(value) < 0.1 ? 4 : 2)
+}
+
+/** 1 Btu (International Table) per pound = 2.326 kJ/kg exactly (NIST SP 811, 2008, B.8). */
+export const KJ_PER_KG_PER_BTU_PER_LB = 2.326
+
 /** `formatNumber` of a quantity with its unit, separated by a no-break space. */
 export function formatQuantity(q: Quantity, digits = 0): string {
   return `${formatNumber(q.value, digits)}\u00A0${q.unit}`

@@ -16,11 +16,13 @@ export interface FigureInput {
   alt: string
   table: ReportTable
   note?: string
+  /** Extra class on the figure (`compact`: a shorter chart in the handout). */
+  className?: string
 }
 
 export function figureHtml(f: FigureInput): string {
   const id = escapeHtml(f.id)
-  return `<figure class="chart-figure" id="${id}" data-figure="${id}">
+  return `<figure class="chart-figure${f.className ? ` ${escapeHtml(f.className)}` : ''}" id="${id}" data-figure="${id}">
 <figcaption><span class="fig-no">Figure ${f.number}.</span> ${escapeHtml(f.caption)}</figcaption>
 ${f.svg}
 <p class="alt" id="${id}-alt"><span class="alt-label">In words:</span> ${escapeHtml(f.alt)}</p>

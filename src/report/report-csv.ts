@@ -4,6 +4,7 @@
  * the page agree. Text cells are neutralised against spreadsheet formula injection (`csvCell`).
  */
 
+import type { OptionSurface } from '../weather/option-spec.ts'
 import type { Assessment, ReportInputInfo } from './assessment-view.ts'
 import type { UnitSystem } from './display-units.ts'
 import { sectionContext } from './report-html.ts'
@@ -14,12 +15,15 @@ import { monthlyTable, usableHoursByYearTable } from './sections/monthly.ts'
 import { psychroTable } from './sections/psychrometric.ts'
 import { spoilageTable } from './sections/spoilage.ts'
 import { startDatesTable } from './sections/start-dates.ts'
-import { headerRows } from './sections/summary.ts'
+import { headerRows, siteClock, warningList } from './sections/summary.ts'
 import { type ReportTable, tableCsv, tablesCsv } from './tables.ts'
+import { clockShort } from './words.ts'
 
 export interface CsvOptions {
   units?: UnitSystem
   info?: ReportInputInfo
+  /** How messages name options (see ReportOptions.optionSurface). */
+  optionSurface?: OptionSurface
 }
 
 /** All tables of the report, in report order; the first is the header (site, product, method …). */
@@ -32,8 +36,8 @@ export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
   const byYear = usableHoursByYearTable(a)
   if (byYear) out.push(byYear)
   const fr = hourOfDayFractions(a)
-  if (fr) out.push(hourOfDayTable(fr))
-  if (a.psychrometric) out.push(psychroTable(a.psychrometric))
+  if (fr) out.push(hourOfDayTable(fr, clockShort(siteClock(a))))
+  if (a.psychrometric) out.push(psychroTable(a.psychrometric, ctx))
   if (a.startDates.length) out.push(startDatesTable(a, ctx))
   if (a.startDates.length && a.spoilage) out.push(spoilageTable(a))
   if (a.bin)
@@ -47,8 +51,17 @@ export function reportTables(a: Assessment, o: CsvOptions = {}): ReportTable[] {
       rows: a.assumptions.map((x) => [x.name, x.value, x.source]),
     })
   }
-  if (a.warnings.length)
-    out.push({ id: 'warnings', title: 'Warnings', columns: ['warning'], rows: a.warnings.map((s) => [s]) })
+  const warnings = warningList(a, ctx)
+  if (warnings.length)
+    out.push({ id: 'warnings', title: 'Warnings', columns: ['warning'], rows: warnings.map((s) => [s]) })
+  const notes = (o.info?.readerNotes ?? []).map(ctx.optionWords)
+  if (notes.length)
+    out.push({
+      id: 'notes',
+      title: 'How the weather file was read',
+      columns: ['note'],
+      rows: notes.map((s) => [s]),
+    })
   return out
 }
 
@@ -67,6 +80,7 @@ export const REPORT_TABLE_IDS = [
   'fuel',
   'assumptions',
   'warnings',
+  'notes',
 ] as const
 
 /**

@@ -19,22 +19,29 @@ export interface ReportTable {
   digits?: number[]
 }
 
+/** Tables with more columns than this stack their cells under labels on a narrow screen (no sideways scrolling). */
+export const STACK_ABOVE_COLUMNS = 4
+
 export function tableHtml(t: ReportTable, options: { className?: string } = {}): string {
   const head = t.columns.map((c) => `<th scope="col">${escapeHtml(c)}</th>`).join('')
+  const labels = t.columns.map((c) => escapeHtml(c))
   const body = t.rows
     .map(
       (r) =>
         `<tr>${r
           .map((cell, i) => {
             if (typeof cell === 'number' || cell === null) {
-              return `<td class="num">${escapeHtml(formatNumber(cell, t.digits?.[i] ?? 0))}</td>`
+              return `<td class="num" data-label="${labels[i]}">${escapeHtml(formatNumber(cell, t.digits?.[i] ?? 0))}</td>`
             }
-            return i === 0 ? `<th scope="row">${escapeHtml(cell)}</th>` : `<td>${escapeHtml(cell)}</td>`
+            return i === 0
+              ? `<th scope="row">${escapeHtml(cell)}</th>`
+              : `<td data-label="${labels[i]}">${escapeHtml(cell)}</td>`
           })
           .join('')}</tr>`,
     )
     .join('')
-  return `<table class="${options.className ?? 'data'}" data-table="${escapeHtml(t.id)}"><caption>${escapeHtml(t.title)}</caption><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table>`
+  const cls = `${options.className ?? 'data'}${t.columns.length > STACK_ABOVE_COLUMNS ? ' stack' : ''}`
+  return `<table class="${cls}" data-table="${escapeHtml(t.id)}"><caption>${escapeHtml(t.title)}</caption><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table>`
 }
 
 /** One table as CSV (CRLF line ends, numbers unrounded, text cells injection-safe). */

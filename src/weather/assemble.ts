@@ -48,7 +48,7 @@ export interface AssembleContext {
   elevationKnown: boolean
   /** Per-variable timing given by the user (option `labels`), over the reader's. */
   variableTiming?: Partial<Record<WeatherVariable, VariableTimingOverride>>
-  /** Notes for the assumptions: what was supplied rather than read (irradiance estimates). */
+  /** Notes: how the file was understood and what was supplied rather than read (irradiance estimates); not problems. */
   notes?: string[]
   /** How rows become hours, when the user says (`sampling`); else the reader's or detected. */
   sampling?: 'readings' | 'reports'
@@ -85,6 +85,7 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
   }
   // Units once, per reading; missing codes and ranges judged per reading, with its own line.
   const { converted, columns, rowChanged } = convertColumns(raw, log, warnings)
+  const notes = ctx.notes ?? []
   logDuplicates(raw, plan, series.quality, log)
   const hourly = rowsToHours({
     raw,
@@ -97,9 +98,9 @@ export function assemble(raw: RawTable, ctx: AssembleContext): WeatherReadResult
     rowChanged,
     log,
     warnings,
+    notes,
   })
   const si = hourly.si
-  const notes = ctx.notes ?? []
   checkHours(raw, si, grid, series, ctx, notes)
   series.pressureKpa = si.pressure ?? missingColumn(hours)
   const dry = si.dryBulb!
@@ -238,12 +239,14 @@ function checkHours(
     const v = si[variable]
     if (v === undefined) continue
     if (!raw.checked) spikeCheck(grid, log, variable, v, SERIES_UNIT[variable])
+    const notesBefore = notes.length
     if (variable === 'pressure' && constantPressure(v, ctx.site.elevationM, warnings, notes)) {
       series.supplied = [
         ...(series.supplied ?? []),
         {
           name: 'station pressure',
-          value: notes[notes.length - 1] ?? warnings[warnings.length - 1],
+          // the note when the constant is used as given, else the warning that replaced it
+          value: notes.length > notesBefore ? notes[notes.length - 1] : warnings[warnings.length - 1],
           source: 'the file',
         },
       ]

@@ -326,6 +326,7 @@ export function headerNames(
   layout: ReadDelimitedOptions,
   mapped: boolean,
   warnings: string[],
+  notes: string[],
 ): string[] {
   const headerLine = layout.headerLine
   const headers = mergeUnbalancedHeaders(found.headers, delimiter, warnings).map((h) =>
@@ -344,16 +345,17 @@ export function headerNames(
       ['header'],
     )
   }
+  // how the file was understood: notes for the reader's account, not warnings
   const before = found.twoRowIndex ?? found.headerIndex
   if (before > 0 && layout.headerRow === undefined)
-    warnings.push(`lines 1–${before} before the header row were skipped`)
+    notes.push(`lines 1–${before} before the header row were skipped`)
   if (found.twoRowIndex !== null)
-    warnings.push(
+    notes.push(
       `the header spans lines ${found.twoRowIndex + 1}–${found.twoRowIndex + 2}: their cells were joined`,
     )
-  if (found.unitsIndex !== null) warnings.push(`line ${found.unitsIndex + 1} gives the units of the columns`)
+  if (found.unitsIndex !== null) notes.push(`line ${found.unitsIndex + 1} gives the units of the columns`)
   if (found.skipped > 0 && layout.skipAfterHeader === undefined)
-    warnings.push(
+    notes.push(
       `${found.skipped} line${found.skipped === 1 ? '' : 's'} under the header without numbers ${found.skipped === 1 ? 'was' : 'were'} skipped`,
     )
   return headers

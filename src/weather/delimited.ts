@@ -83,9 +83,11 @@ export function readDelimited(
 ): { table: RawTable; info: DelimitedInfo } {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text
   const { delimiter, head, found } = findHeader(body, layout)
-  const headers = headerNames(found, delimiter, layout, Object.keys(mapping).length > 0, warnings)
+  // how the file was understood: notes for the reader's account, not warnings
+  const notes: string[] = []
+  const headers = headerNames(found, delimiter, layout, Object.keys(mapping).length > 0, warnings, notes)
   const plan = planColumns(headers, mapping, found.unitsRow, layout.columns)
-  warnings.push(...plan.notes)
+  notes.push(...plan.notes)
   let decimalComma = false
   if (delimiter !== ',') {
     for (let r = found.firstDataRow; r < head.length && !decimalComma; r++) {
@@ -118,7 +120,7 @@ export function readDelimited(
     log,
     warnings,
   })
-  if (plan.headerTimeNote !== null) warnings.push(plan.headerTimeNote)
+  if (plan.headerTimeNote !== null) notes.push(plan.headerTimeNote)
   let reportKind: Uint8Array | undefined
   if (needs.kindColumn >= 0 && layout.reportKind) {
     reportKind = new Uint8Array(n)
@@ -128,6 +130,7 @@ export function readDelimited(
   return {
     table: {
       format: 'csv',
+      notes,
       rows: n,
       lines: cells.lines,
       time,

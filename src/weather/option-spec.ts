@@ -219,7 +219,11 @@ function looksLikeValue(text: string): boolean {
  * (“Column mapping, one per line”: dryBulb=<column>). Only known flags are rewritten. One pass over
  * the text, no pattern matching (linear in its length).
  */
-export function renderOptionNames(message: string, surface: OptionSurface): string {
+export function renderOptionNames(
+  message: string,
+  surface: OptionSurface,
+  more: readonly Pick<WeatherOptionSpec, 'flag' | 'param' | 'key' | 'label'>[] = [],
+): string {
   if (surface === 'cli' || !message.includes('--')) return message
   let out = ''
   let k = 0
@@ -233,7 +237,8 @@ export function renderOptionNames(message: string, surface: OptionSurface): stri
     out += message.slice(k, at)
     let end = at + 2
     while (end < n && isFlagChar(message.charCodeAt(end))) end++
-    const s = WEATHER_OPTION_SPECS.find((x) => x.flag === message.slice(at + 2, end))
+    const flag = message.slice(at + 2, end)
+    const s = WEATHER_OPTION_SPECS.find((x) => x.flag === flag) ?? more.find((x) => x.flag === flag)
     const before = at === 0 ? 32 : message.charCodeAt(at - 1)
     if (
       s === undefined ||
@@ -275,7 +280,11 @@ function isWordEnd(c: number): boolean {
   return c === 32 || c === 44 || c === 59 || c === 41 || c === 10
 }
 
-function renderOne(s: WeatherOptionSpec, surface: OptionSurface, value: string): string {
+function renderOne(
+  s: Pick<WeatherOptionSpec, 'param' | 'key' | 'label'>,
+  surface: OptionSurface,
+  value: string,
+): string {
   if (surface === 'query') return value === '' ? s.param : `${s.param}=${value}`
   if (surface === 'json') return value === '' ? s.key : `${s.key}: ${value}`
   return value === '' ? `“${s.label}”` : `“${s.label}”: ${value}`

@@ -117,6 +117,8 @@ export interface FileStatements {
 
 export interface RawTable {
   format: 'csv' | 'epw'
+  /** How the reader understood the file (delimiter, header, conventions, columns left out): notes, not problems. */
+  notes?: string[]
   rows: number
   /** 1-based file line of each row. */
   lines: Int32Array

@@ -116,17 +116,21 @@ function readTableFile(
   const clockGiven = opts.utcOffsetHours !== undefined || opts.timeZone !== undefined
   const head = dialectHead(text)
   const dialect = opts.format === undefined || opts.format === 'auto' ? detectDialect(head) : null
+  const notes: string[] = []
   const reading = dialect
     ? dialect.read(text, head, {
         mapping: opts.mapping ?? {},
         log,
         warnings,
+        notes,
         headerLine: opts.headerLine,
         clockGiven,
       })
     : readDelimited(text, opts.mapping ?? {}, log, warnings, { headerLine: opts.headerLine })
   const table = reading.table
   const info = reading.info
+  // the layout's conventions, then how the table itself was read
+  notes.push(...(table.notes ?? []))
   if (dialect) table.dialect ??= { id: dialect.id, title: dialect.title }
   // What the file states about its clock and site; the user's options win.
   const said = table.statements ?? {}
@@ -182,6 +186,7 @@ function readTableFile(
     },
     log,
     warnings,
+    notes,
     elevationKnown: site.elevationM !== null,
     variableTiming: opts.variableLabels,
     sampling: opts.sampling,
@@ -221,13 +226,13 @@ function readOwnExport(
     elevationKnown: opts.elevationM !== undefined,
     siteClock: { optionZone: opts.siteTimeZone },
   })
-  result.warnings.unshift("dryhours' own hourly export: UTC hour starts, values and flags read as written")
+  result.notes.unshift("dryhours' own hourly export: UTC hour starts, values and flags read as written")
   return result
 }
 
 function describeCsv(result: WeatherReadResult, info: DelimitedInfo, dialect: string | undefined): void {
   const name = info.delimiter === '\t' ? 'tab' : info.delimiter === ';' ? 'semicolon' : 'comma'
-  result.warnings.unshift(
+  result.notes.unshift(
     `${dialect ? `${dialect}: ` : ''}${name}-separated, ${info.headerLine > 0 ? `header on line ${info.headerLine}` : 'no header row'}${info.decimalComma ? ', decimal commas' : ''}`,
   )
 }

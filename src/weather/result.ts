@@ -84,7 +84,10 @@ export interface WeatherReadResult {
   /** Problems beyond the cap that are counted but not listed. */
   problemsOmitted: number
   warnings: string[]
-  /** Statements for the assumptions: what was supplied rather than read (estimated irradiance, constant pressure). */
+  /**
+   * Notes, apart from the warnings: how the file was understood (delimiter, header, the layout's conventions,
+   * columns left out) and what was supplied rather than read (estimated irradiance, a constant pressure).
+   */
   notes: string[]
   period: { start: string; end: string }
   /** How the timestamps became UTC. */

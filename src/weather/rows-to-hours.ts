@@ -46,13 +46,13 @@ function logBelowCoverage(
 }
 
 /** A sentence on how rows became hours, when it was more than one row per hour. */
-function describeAggregation(a: HourlyAggregation, plan: RowPlan, warnings: string[]): void {
+function describeAggregation(a: HourlyAggregation, plan: RowPlan, notes: string[]): void {
   if (plan.summaryRows > 0)
-    warnings.push(
+    notes.push(
       `${plan.summaryRows} summary rows (daily or monthly summaries) left out: they are not hourly observations`,
     )
   if (a.sampling === 'reports') {
-    warnings.push(
+    notes.push(
       `weather reports (most at :${String(a.reportMinute ?? 0).padStart(2, '0')}): each aligned to the nearest hour (${a.alignedReports} moved), one per hour, routine before special`,
     )
     return
@@ -61,12 +61,12 @@ function describeAggregation(a: HourlyAggregation, plan: RowPlan, warnings: stri
     const below = Object.entries(a.hoursBelowCoverage)
       .map(([v, k]) => `${v} ${k}`)
       .join(', ')
-    warnings.push(
+    notes.push(
       `readings every ${plan.stepMinutes} minutes: instants averaged and totals summed into hours; ` +
         `${a.partialHours} hour${a.partialHours === 1 ? '' : 's'} kept with some readings missing${below ? `, hours with too few readings left missing: ${below}` : ''}`,
     )
   } else if (plan.stepMinutes > 60) {
-    warnings.push(
+    notes.push(
       `rows are ${plan.stepMinutes} minutes apart: hours between rows have no values (gaps up to 3 hours are interpolated)`,
     )
   }
@@ -88,6 +88,8 @@ export interface RowsToHoursInput {
   rowChanged: Uint8Array
   log: ProblemLog
   warnings: string[]
+  /** How the file was understood (how rows became hours): notes, not problems. */
+  notes: string[]
 }
 
 /** The hourly columns of the variables a table has, in series units, and how rows became hours. */
@@ -113,6 +115,7 @@ export function rowsToHours({
   rowChanged,
   log,
   warnings,
+  notes,
 }: RowsToHoursInput): HourlyColumnsOfTable {
   const n = raw.rows
   const hours = plan.hours
@@ -208,6 +211,6 @@ export function rowsToHours({
       }
     }
   }
-  describeAggregation(aggregation, plan, warnings)
+  describeAggregation(aggregation, plan, notes)
   return { si, aggregation, rowPlaced }
 }

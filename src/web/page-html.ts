@@ -1,229 +1,140 @@
 /**
  * @module web/page-html
- * The page at `/`: one form that works as a plain multipart post without JavaScript (POST /report answers
- * with this page and the report below it) and that /app.js enhances (upload progress, the report inline,
- * downloads). Questions about the file (time zone, site, column mapping) sit in a section that opens
- * when the reader needs them. Every value echoed back into the form is escaped.
+ * The page: one form per job, each on its own address so it works as a plain multipart post without
+ * JavaScript (POST /report answers with the page and the result above the form) and /app.js enhances it
+ * (upload progress, the result inline, downloads):
+ * - `/` assess a site (one method for the full report, several side by side), with "check the file first";
+ * - `/compare` sites side by side, each site with its own file, location and clock;
+ * - `/inspect` how a weather file is understood; `/fit` drying speed from weighings; `/energy` energy charts.
+ * Questions about the file (time zone, site, column mapping) sit in a section that opens when the reader
+ * needs them; the time zones are a searchable list of IANA names. Every value echoed back is escaped.
  */
 
-import { ASSESS_DEFAULTS } from '../analysis/plan.ts'
-import { FUELS } from '../drying/fuels.ts'
-import { FUEL_IDS } from '../drying/method.ts'
-import { METHOD_MODELS } from '../drying/methods/index.ts'
-import { PRODUCT_CATALOGUE } from '../product/catalogue.ts'
-import type { ProductCategory } from '../product/profile.ts'
 import { escapeHtml } from '../report/escape.ts'
-import { WEATHER_OPTION_SPECS } from '../weather/option-spec.ts'
 import type { DemoFile } from './demo-files.ts'
 import { MAX_SITES } from './form-input.ts'
+import { timeZoneList } from './page-fields.ts'
+import { assessForm, compareForm, energyForm, fitForm, inspectForm } from './page-forms.ts'
+
+export { FIELD_LABELS, fieldLabel, timeZoneNames } from './page-fields.ts'
+
+export type PageTask = 'assess' | 'compare' | 'inspect' | 'fit' | 'energy'
+
+export interface TaskInfo {
+  path: string
+  /** The link text in the navigation. */
+  nav: string
+  /** The page's heading. */
+  title: string
+  /** Who it is for and what it answers, in one sentence. */
+  intro: string
+}
+
+export const PAGE_TASKS: Record<PageTask, TaskInfo> = {
+  assess: {
+    path: '/',
+    nav: 'Assess a site',
+    title: 'Can this weather dry this crop?',
+    intro:
+      'One weather file and one product: choose one drying method for the full report, or several to see them side by side. The report starts with a two-page summary to print and hand out.',
+  },
+  compare: {
+    path: '/compare',
+    nav: 'Compare sites',
+    title: 'Which site dries best?',
+    intro:
+      'One weather file per candidate site, each with its own location and clock, assessed for the same product, method and season and ranked by a stated rule.',
+  },
+  inspect: {
+    path: '/inspect',
+    nav: 'Check a weather file',
+    title: 'How does dryhours read this weather file?',
+    intro:
+      'Before you assess: which columns and units were taken, the clock of the time stamps, each variable at a glance, months with little data, and every problem with its line.',
+  },
+  fit: {
+    path: '/fit',
+    nav: 'Fit from weighings',
+    title: 'How fast does your product dry?',
+    intro:
+      'Weigh a tray as it dries and upload the weighings: dryhours fits the drying curve (Lewis, Page, diffusion) and says which fits best.',
+  },
+  energy: {
+    path: '/energy',
+    nav: 'Energy charts',
+    title: 'Is the dryer using more energy than it should?',
+    intro:
+      'A log of batches (fuel used, water removed) on control charts that allow for the weather, with the batch where a change most likely began.',
+  },
+}
+
+export const TASK_IDS = Object.keys(PAGE_TASKS) as PageTask[]
 
 export interface PageState {
+  /** Which job the page shows (default: assess). */
+  task?: PageTask
   demo?: readonly DemoFile[]
   /** The server's limit of files per comparison (default {@link MAX_SITES}). */
   maxSites?: number
   /** Form values to show again (after an error or with a result). */
   values?: Record<string, string>
-  /** A message for the user, and whether the file questions should be open. */
-  error?: { message: string; askFileQuestions: boolean }
-  /** The report article to show below the form (no-JavaScript result). */
+  /** Values given several times (the methods chosen). */
+  multi?: Record<string, string[]>
+  /** A message for the user, the field it concerns, and whether the file questions should be open. */
+  error?: { message: string; askFileQuestions: boolean; field?: string }
+  /** The result article to show above the form (no-JavaScript result). */
   result?: string
 }
 
-const CATEGORY_NAMES: Record<ProductCategory, string> = {
-  grain: 'Grain',
-  oilseed: 'Oilseeds',
-  fruit: 'Fruit',
-  vegetable: 'Vegetables',
-  herb: 'Herbs',
-  fish: 'Fish',
-  'beverage-crop': 'Coffee, cocoa and tea',
-}
-
-/** The drying methods of the registry (drying/methods/), in its order: kind, name, one line. */
-const METHODS: [string, string, string][] = METHOD_MODELS.map((m) => [m.kind, m.title, m.hint])
-
-function attr(v: string | undefined): string {
-  return escapeHtml(v ?? '')
-}
-
-function field(
-  name: string,
-  label: string,
-  values: Record<string, string>,
-  o: {
-    hint?: string
-    placeholder?: string
-    inputmode?: string
-    type?: string
-    pattern?: string
-    methods?: string
-  } = {},
-): string {
-  const id = `f-${name}`
-  return `<div class="field${o.methods ? ' method-only' : ''}"${o.methods ? ` data-methods="${o.methods}"` : ''}><label for="${id}">${escapeHtml(label)}</label><input id="${id}" name="${name}" type="${o.type ?? 'text'}"${o.inputmode ? ` inputmode="${o.inputmode}"` : ''}${o.placeholder ? ` placeholder="${attr(o.placeholder)}"` : ''}${o.pattern ? ` pattern="${attr(o.pattern)}"` : ''} value="${attr(values[name])}"${o.hint ? ` aria-describedby="${id}-hint"` : ''}>${o.hint ? `<small id="${id}-hint">${escapeHtml(o.hint)}</small>` : ''}</div>`
-}
-
-/** Page-only presentation of the weather options (placeholders, hints); names and labels come from the shared table. */
-const WEATHER_FIELD_HINTS: Record<
-  string,
-  { placeholder?: string; hint?: string; inputmode?: string; choices?: string[] }
-> = {
-  siteName: { placeholder: 'e.g. north field' },
-  lat: { inputmode: 'decimal' },
-  lon: { inputmode: 'decimal' },
-  elevation: { inputmode: 'decimal' },
-  utcOffset: {
-    inputmode: 'decimal',
-    placeholder: 'e.g. -6',
-    hint: '0 for UTC; or give the time zone instead',
-  },
-  tz: { placeholder: 'e.g. America/Chicago', hint: 'IANA name, when the time stamps follow daylight saving' },
-  siteTz: { placeholder: 'e.g. Europe/Madrid', hint: 'when the file is in UTC and does not say where' },
-  map: {
-    placeholder: 'dryBulb=Temp:F\nrelativeHumidity=RH',
-    hint: 'variable=column or variable=column:unit, only for columns that are not recognised',
-  },
-  labels: {
-    placeholder: 'end\nghi=end:60',
-    hint: 'start or end of the interval a time stamp labels; per variable, e.g. rain=end:60 for rain over the preceding hour',
-  },
-  dateOrder: { choices: ['', 'mdy', 'dmy', 'ymd'] },
-  headerLine: { inputmode: 'numeric' },
-  sampling: { choices: ['', 'readings', 'reports'] },
-  windHeight: { inputmode: 'decimal', placeholder: '10' },
-}
-
-/** The weather option fields of one group, from the shared option table (weather/option-spec.ts). */
-function weatherFields(group: 'site' | 'columns', values: Record<string, string>): string {
-  return WEATHER_OPTION_SPECS.filter((s) => s.group === group)
-    .map((s) => {
-      const h = WEATHER_FIELD_HINTS[s.param] ?? {}
-      const id = `f-${s.param}`
-      const hint = h.hint ? `<small id="${id}-hint">${escapeHtml(h.hint)}</small>` : ''
-      const described = h.hint ? ` aria-describedby="${id}-hint"` : ''
-      if (s.multiple)
-        return `<div class="field"><label for="${id}">${escapeHtml(s.label)}</label><textarea id="${id}" name="${s.param}" rows="2"${h.placeholder ? ` placeholder="${attr(h.placeholder).replaceAll('\n', '&#10;')}"` : ''}${described}>${escapeHtml(values[s.param] ?? '')}</textarea>${hint}</div>`
-      if (h.choices)
-        return `<div class="field"><label for="${id}">${escapeHtml(s.label)}</label><select id="${id}" name="${s.param}">${h.choices
-          .map(
-            (c) =>
-              `<option value="${c}"${(values[s.param] ?? '') === c ? ' selected' : ''}>${c === '' ? '(detect)' : c}</option>`,
-          )
-          .join('')}</select></div>`
-      return field(s.param, s.label, values, {
-        placeholder: h.placeholder,
-        hint: h.hint,
-        inputmode: h.inputmode,
-      })
-    })
-    .join('\n')
-}
-
-function productOptions(selected: string | undefined): string {
-  const groups = new Map<ProductCategory, string[]>()
-  for (const p of PRODUCT_CATALOGUE) {
-    const list = groups.get(p.category) ?? []
-    list.push(
-      `<option value="${attr(p.id)}"${p.id === selected ? ' selected' : ''}>${escapeHtml(p.name)}</option>`,
-    )
-    groups.set(p.category, list)
-  }
-  return [...groups.entries()]
-    .map(([c, opts]) => `<optgroup label="${escapeHtml(CATEGORY_NAMES[c] ?? c)}">${opts.join('')}</optgroup>`)
-    .join('')
-}
-
 export function renderPage(state: PageState = {}): string {
+  const task = state.task ?? 'assess'
+  const info = PAGE_TASKS[task]
   const v = state.values ?? {}
-  const demo = state.demo ?? []
-  const method = v.method ?? 'open-air'
-  const units = v.units ?? 'si'
-  const product = v.product ?? 'grapes-to-raisins'
-  const ask = state.error?.askFileQuestions === true
-  const demoBlock = demo.length
-    ? `<div class="field"><label for="f-demo">…or a demo site</label><select id="f-demo" name="demo"><option value="">(none)</option>${demo
-        .map(
-          (d) =>
-            `<option value="${attr(d.file)}"${v.demo === d.file ? ' selected' : ''}>${escapeHtml(d.label)}</option>`,
+  const formHtml =
+    task === 'compare'
+      ? compareForm(state, v)
+      : task === 'inspect'
+        ? inspectForm(state, v)
+        : task === 'fit'
+          ? fitForm(state, v)
+          : task === 'energy'
+            ? energyForm(state, v)
+            : assessForm(state, v)
+  // the field a message is about: marked for screen readers (and outlined) where the form has it
+  const bad = state.error?.field
+  const form =
+    bad && /^[A-Za-z0-9.]+$/.test(bad)
+      ? formHtml.replace(
+          new RegExp(`( name="${bad.replace('.', '\\.')}")(?![^>]*aria-invalid)`),
+          '$1 aria-invalid="true"',
         )
-        .join('')}</select><small>Invented sites with generated weather, for trying the page.</small></div>`
-    : `<p class="hint">No demo files on this server: the repository's <code>climate-demo/</code> folder holds some to upload.</p>`
-  const methodRadios = METHODS.map(
-    ([k, label, hint]) =>
-      `<label class="choice"><input type="radio" name="method" value="${k}"${method === k ? ' checked' : ''}><span><strong>${escapeHtml(label)}</strong><small>${escapeHtml(hint)}</small></span></label>`,
-  ).join('')
-  const fuelOptions = FUEL_IDS.map(
-    (id) =>
-      `<option value="${id}"${v.fuel === id ? ' selected' : ''}>${escapeHtml(FUELS[id].name)} (per ${escapeHtml(FUELS[id].unit)})</option>`,
+      : formHtml
+  const nav = TASK_IDS.map(
+    (t) =>
+      `<li><a href="${PAGE_TASKS[t].path}"${t === task ? ' aria-current="page"' : ''}>${escapeHtml(PAGE_TASKS[t].nav)}</a></li>`,
   ).join('')
   return `<!doctype html>
 <html lang="en">
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width,initial-scale=1">
-<title>dryhours – can this weather dry this crop?</title>
+<title>dryhours – ${escapeHtml(info.nav.toLowerCase())}</title>
 <link rel="icon" href="data:,">
 <link rel="stylesheet" href="/app.css">
 <script src="/app.js" defer></script>
 </head>
-<body>
+<body data-task="${task}">
 <a class="skip" href="#main">Skip to the form</a>
-<header class="masthead"><div class="wrap"><p class="brand">dryhours</p><p class="tagline">Can this site’s weather dry this crop, when, how fast, and with how much heat?</p><nav><a href="/docs">API</a></nav></div></header>
-<main id="main" class="wrap">
-${state.result ? `<div id="result-first" class="result">${state.result}<p class="again no-print"><a href="#assess-form">Change the inputs and assess again ↓</a></p></div>` : ''}
-<form id="assess-form" class="card" method="post" action="/report" enctype="multipart/form-data" novalidate>
-${state.error ? `<div class="error" id="form-error" role="alert"><strong>Please check:</strong> ${escapeHtml(state.error.message)}<br><small>Browsers do not keep a chosen file across pages: choose the weather file again before you assess.</small></div>` : '<div class="error" id="form-error" role="alert" hidden></div>'}
-<fieldset class="step"><legend><span class="n">1</span> Weather</legend>
-<div class="field"><label for="f-file">Hourly weather file (CSV or EPW)</label><input id="f-file" name="file" type="file" accept=".csv,.txt,.tsv,.epw,text/csv,text/plain" multiple aria-describedby="f-file-hint"><small id="f-file-hint">One file for a report; up to ${state.maxSites ?? MAX_SITES} files to compare sites. Dry bulb and a humidity column at least; time stamps hourly.</small></div>
-${demoBlock}
-<details id="file-questions" class="questions"${ask ? ' open' : ''}><summary>Site, time zone and columns${ask ? ' (needed for this file)' : ' (only if the file does not say)'}</summary>
-<div class="grid">
-${weatherFields('site', v)}
-</div>
-<div class="grid">
-${weatherFields('columns', v)}
-</div>
-</details>
-</fieldset>
-<fieldset class="step"><legend><span class="n">2</span> Product</legend>
-<div class="grid">
-<div class="field wide"><label for="f-product">From the catalogue</label><select id="f-product" name="product">${productOptions(product)}</select></div>
-<div class="field"><label for="f-profile">…or your own profile (JSON)</label><input id="f-profile" name="profile" type="file" accept=".json,application/json"></div>
-${field('targetWbPct', 'Target moisture [% wet basis]', v, { inputmode: 'decimal', placeholder: "the product's" })}
-${field('initialWbPct', 'Initial moisture [% wet basis]', v, { inputmode: 'decimal', placeholder: "the product's" })}
-</div>
-</fieldset>
-<fieldset class="step"><legend><span class="n">3</span> Method and season</legend>
-<div class="choices" role="radiogroup">${methodRadios}</div>
-<div class="grid">
-${field('seasonStart', 'First start day (MM-DD)', v, { placeholder: '06-15', pattern: '\\d{2}-\\d{2}' })}
-${field('seasonEnd', 'Last start day (MM-DD)', v, { placeholder: '09-15', pattern: '\\d{2}-\\d{2}' })}
-${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', placeholder: String(ASSESS_DEFAULTS.deadlineDays) })}
-${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade, solar tunnel)', v, { inputmode: 'decimal', methods: 'open-air shade tunnel' })}
-${field('collectorAreaM2PerTonne', 'Collector area [m² per tonne] (solar cabinet)', v, { inputmode: 'decimal', placeholder: '100', methods: 'solar-cabinet' })}
-${field('setPointC', 'Air set point [°C] (heated; empty = just enough)', v, { inputmode: 'decimal', methods: 'heated' })}
-${field('binAirflows', 'Airflows to compare [m³/min per tonne] (bin)', v, { placeholder: '0.5 1 1.5 2 3', methods: 'natural-air-bin', hint: 'one, or several separated by spaces; 1 m³/min per t is about 0.9 cfm/bu of corn' })}
-${field('binDepthM', 'Grain depth [m] (bin)', v, { inputmode: 'decimal', placeholder: '4', methods: 'natural-air-bin' })}
-${field('binDiameterM', 'Bin diameter [m] (bin)', v, { inputmode: 'decimal', placeholder: '9.1', methods: 'natural-air-bin' })}
-${field('heatRiseK', 'Heater rise [K] (bin; empty = no heater)', v, { inputmode: 'decimal', methods: 'natural-air-bin' })}
-</div>
-<details class="questions"><summary>Heater and fuel for supplemental heat</summary><div class="grid">
-<div class="field"><label for="f-fuel">Fuel</label><select id="f-fuel" name="fuel"><option value="">(heater default: propane)</option>${fuelOptions}</select></div>
-${field('fuelPrice', 'Your price per fuel unit', v, { inputmode: 'decimal', hint: 'empty = an example price, marked as such' })}
-${field('heaterEfficiencyPct', 'Heater efficiency [%]', v, { inputmode: 'decimal', placeholder: '80' })}
-</div></details>
-</fieldset>
-<fieldset class="step last"><legend><span class="n">4</span> Report</legend>
-<div class="grid">
-<div class="field"><span class="label">Units</span><label class="inline"><input type="radio" name="units" value="si"${units === 'si' ? ' checked' : ''}> SI (°C, kg, L)</label><label class="inline"><input type="radio" name="units" value="us"${units === 'us' ? ' checked' : ''}> US (°F, lb, gal)</label></div>
-<div class="field"><label for="f-format">Answer as</label><select id="f-format" name="format"><option value="page"${(v.format ?? 'page') === 'page' ? ' selected' : ''}>this page</option><option value="html"${v.format === 'html' ? ' selected' : ''}>HTML file (download)</option><option value="csv"${v.format === 'csv' ? ' selected' : ''}>CSV tables (download)</option><option value="json"${v.format === 'json' ? ' selected' : ''}>JSON (download)</option></select></div>
-</div>
-<div class="actions"><button type="submit" id="submit">Assess</button><span class="hint">A few seconds per year of hourly data.</span></div>
-<div id="status" class="status" aria-live="polite" hidden><progress id="progress" max="100"></progress><span id="status-text"></span></div>
-</fieldset>
-</form>
+<header class="masthead"><div class="wrap"><p class="brand">dryhours</p><p class="tagline">Can this site’s weather dry this crop, when, how fast, and with how much heat?</p>
+<nav aria-label="What to do"><ul>${nav}<li><a href="/docs">API</a></li></ul></nav></div></header>
+<main id="main" class="wrap" tabindex="-1">
+<h1 id="page-title" class="page-title">${escapeHtml(info.title)}</h1>
+<p class="intro">${escapeHtml(info.intro)}</p>
+${state.result ? `<div id="result-first" class="result">${state.result}<p class="again no-print"><a href="#${task === 'assess' ? 'assess' : task}-form">Change the inputs and send again ↓</a></p></div>` : ''}
+${form}
 <div id="downloads" class="downloads" hidden></div>
-<div id="result" class="result"></div>
+<div id="result" class="result" tabindex="-1" aria-label="Result"></div>
+${timeZoneList()}
 </main>
 <footer class="wrap page-foot">dryhours: open methods, named sources. Results are estimates from the weather file; see the cautions in each report.</footer>
 </body>

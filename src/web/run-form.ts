@@ -24,7 +24,7 @@ import type { WeatherReadResult } from '../weather/result.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { WeatherInputError } from '../weather/weather-input-error.ts'
 import type { DemoProvider } from './demo-files.ts'
-import type { FormInput } from './form-input.ts'
+import { FormFieldError, type FormInput } from './form-input.ts'
 
 /** A weather file that needs answers the form can give (time zone, column mapping …). */
 export class FormQuestion extends Error {
@@ -43,6 +43,8 @@ export interface AssessedSite {
   series: HourlySeries
   assessment: Assessment
   readWarnings: string[]
+  /** How the reader understood the file (notes, not problems), option names as the page's labels. */
+  readNotes: string[]
   dataSource: string
 }
 
@@ -52,6 +54,8 @@ export interface FormResult {
   article: string
   /** The complete standalone HTML document. */
   document: string
+  /** The two-page summary alone (a comparison: the same as `document`, which is already short). */
+  handout: string
   csv: string
   /** The assessment (one site) or the list of assessments (comparison), JSON text. */
   json: string
@@ -61,8 +65,8 @@ export interface FormResult {
 async function inputs(
   input: FormInput,
   demo?: DemoProvider,
-): Promise<{ name: string; bytes: Uint8Array; options: Record<string, unknown> }[]> {
-  const out: { name: string; bytes: Uint8Array; options: Record<string, unknown> }[] = []
+): Promise<{ name: string; bytes: Uint8Array; options: Record<string, unknown>; row?: number }[]> {
+  const out: { name: string; bytes: Uint8Array; options: Record<string, unknown>; row?: number }[] = []
   if (input.demo && demo) {
     const entry = demo.list().find((d) => d.file === input.demo)
     const bytes = await demo.read(input.demo)
@@ -74,6 +78,14 @@ async function inputs(
   }
   for (const f of input.files)
     out.push({ name: f.name, bytes: f.bytes, options: { ...input.weatherOptions } })
+  // the sites table: each site with its own options (a site name typed in its row names it)
+  for (const site of input.sites)
+    out.push({
+      name: site.file.name,
+      bytes: site.file.bytes,
+      options: { ...site.weatherOptions },
+      row: site.row,
+    })
   return out
 }
 
@@ -85,18 +97,17 @@ export interface FormWorkHooks {
   onProgress?: () => void
 }
 
-export async function runForm(
-  input: FormInput,
-  demo?: DemoProvider,
-  hooks: FormWorkHooks = {},
-): Promise<FormResult> {
-  const sites: AssessedSite[] = []
-  const files = await inputs(input, demo)
-  const reads: { name: string; read: WeatherReadResult }[] = []
+type FormFile = Awaited<ReturnType<typeof inputs>>[number]
+type NamedRead = { name: string; read: WeatherReadResult }
+
+/** Read every file of the form; a reader's question names the file (and its row of the sites table). */
+function readFiles(files: FormFile[]): NamedRead[] {
+  const reads: NamedRead[] = []
   for (const f of files) {
-    // A site name typed in the form names a single file; with several files, each keeps its own name.
-    const options = files.length > 1 ? { ...f.options, siteName: undefined } : f.options
+    const options = f.options
     if (options.siteName === undefined) delete options.siteName
+    // a site of the sites table is named by its row in messages
+    const where = f.row !== undefined ? `Site ${f.row} (${f.name})` : f.name
     let read: WeatherReadResult
     try {
       read = readWeatherBytes(f.bytes, options)
@@ -104,89 +115,94 @@ export async function runForm(
       if (e instanceof WeatherInputError) {
         // the reader names options as CLI flags; on the page they are the fields' labels
         throw new FormQuestion(
-          `${f.name}: ${renderOptionNames(e.message, 'form')} (under “Site, time zone and columns”)`,
+          `${where}: ${renderOptionNames(e.message, 'form')}${f.row !== undefined ? ' (in its row of the sites table)' : ' (under “Site, time zone and columns”)'}`,
           f.name,
           e.missing,
         )
       }
-      if (e instanceof RangeError && !isRuntimeFault(e)) throw new RangeError(`${f.name}: ${e.message}`)
+      if (e instanceof RangeError && !isRuntimeFault(e)) throw new RangeError(`${where}: ${e.message}`)
       throw e
     }
     if (!read.series.site.name && files.length > 1) read.series.site.name = f.name.replace(/\.[^.]+$/, '')
     reads.push({ name: f.name, read })
   }
-  hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
-  let assessments: Assessment[]
-  let ranking: Ranking | undefined
+  return reads
+}
+
+/** One site assessed, or several compared and ranked (analysis/compare.ts). */
+function runEngine(
+  reads: NamedRead[],
+  input: FormInput,
+  hooks: FormWorkHooks,
+): { assessments: Assessment[]; ranking?: Ranking } {
   try {
     if (reads.length === 1) {
-      assessments = [
-        assess(reads[0].read.series, {
-          ...input.assess,
-          product: input.product,
-          onProgress: hooks.onProgress,
-        }),
-      ]
-    } else {
-      const c = compare(
-        reads.map((r) => r.read.series),
-        {
-          ...input.assess,
-          product: input.product,
-          onProgress: hooks.onProgress,
-          labels: reads.map((r) => r.read.series.site.name || r.name),
-        },
-      )
-      assessments = c.assessments
-      ranking = c
+      return {
+        assessments: [
+          assess(reads[0].read.series, {
+            ...input.assess,
+            product: input.product,
+            onProgress: hooks.onProgress,
+          }),
+        ],
+      }
     }
+    const c = compare(
+      reads.map((r) => r.read.series),
+      {
+        ...input.assess,
+        product: input.product,
+        onProgress: hooks.onProgress,
+        labels: reads.map((r) => r.read.series.site.name || r.name),
+      },
+    )
+    return { assessments: c.assessments, ranking: c }
   } catch (e) {
     // an option the planner refused keeps its class (it names the form field); engine faults pass as they are
     if (e instanceof RangeError && !(e instanceof AssessOptionError) && !isRuntimeFault(e))
       throw new RangeError(`${reads.length === 1 ? `${reads[0].name}: ` : ''}${e.message}`)
     throw e
   }
-  reads.forEach(({ name, read }, i) => {
-    const assessment = assessments[i]
-    assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
-    sites.push({
-      fileName: name,
-      series: read.series,
-      assessment,
-      readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
-      dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
-    })
-  })
-  const units = input.units
-  if (sites.length === 1) {
-    const s = sites[0]
-    const opts = {
-      units,
-      info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
-    }
-    return {
-      sites,
-      article: renderReportArticle(s.assessment, opts),
-      document: renderReportHtml(s.assessment, opts),
-      csv: renderReportCsv(s.assessment, opts),
-      json: JSON.stringify(s.assessment, null, 2),
-      title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
-    }
+}
+
+/** The report's facts about the file a site was read from. */
+function siteInfo(s: AssessedSite) {
+  return {
+    fileName: s.fileName,
+    dataSource: s.dataSource,
+    readerWarnings: s.readWarnings,
+    readerNotes: s.readNotes,
   }
-  // several sites are always compared (and ranked) by analysis/compare.ts above
-  const rank = ranking ?? rankAssessments(sites.map((s) => s.assessment))
+}
+
+/** One site: the page's article, the full report, the two-page handout, CSV and JSON. */
+function siteResult(sites: AssessedSite[], units: FormInput['units']): FormResult {
+  const s = sites[0]
+  const opts = { units, info: siteInfo(s) }
+  return {
+    sites,
+    article: renderReportArticle(s.assessment, opts),
+    document: renderReportHtml(s.assessment, opts),
+    handout: renderReportHtml(s.assessment, { ...opts, layout: 'handout' }),
+    csv: renderReportCsv(s.assessment, opts),
+    json: JSON.stringify(s.assessment, null, 2),
+    title: `${s.assessment.site.name || s.fileName} – ${s.assessment.product.name}`,
+  }
+}
+
+/** Several sites: the comparison (its printout is the handout too), CSV of the ranking and every site, JSON. */
+function comparisonResult(sites: AssessedSite[], ranking: Ranking, units: FormInput['units']): FormResult {
   const compared: ComparedSite[] = sites.map((s) => ({
     assessment: s.assessment,
-    options: {
-      info: { fileName: s.fileName, dataSource: s.dataSource, readerWarnings: s.readWarnings },
-    },
+    options: { info: siteInfo(s) },
   }))
   return {
     sites,
-    article: renderComparisonArticle(compared, { units, ranking: rank }),
-    document: renderComparisonHtml(compared, { units, ranking: rank }),
+    article: renderComparisonArticle(compared, { units, ranking }),
+    document: renderComparisonHtml(compared, { units, ranking }),
+    handout: renderComparisonHtml(compared, { units, ranking }),
     csv:
-      tablesCsv([comparisonTable(rank, units)]) +
+      tablesCsv([comparisonTable(ranking, units)]) +
       '\r\n' +
       sites.map((s) => renderReportCsv(s.assessment, { units, info: { fileName: s.fileName } })).join('\r\n'),
     json: JSON.stringify(
@@ -196,4 +212,35 @@ export async function runForm(
     ),
     title: `comparison of ${sites.length} sites – ${sites[0].assessment.product.name}`,
   }
+}
+
+export async function runForm(
+  input: FormInput,
+  demo?: DemoProvider,
+  hooks: FormWorkHooks = {},
+): Promise<FormResult> {
+  const files = await inputs(input, demo)
+  if (input.task === 'assess' && input.methods.length > 1)
+    throw new FormFieldError(
+      'method',
+      'several methods side by side are not available on this page yet: choose one',
+    )
+  const reads = readFiles(files)
+  hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
+  const { assessments, ranking } = runEngine(reads, input, hooks)
+  const sites: AssessedSite[] = reads.map(({ name, read }, i) => {
+    const assessment = assessments[i]
+    assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
+    return {
+      fileName: name,
+      series: read.series,
+      assessment,
+      readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
+      readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
+      dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
+    }
+  })
+  if (sites.length === 1) return siteResult(sites, input.units)
+  // several sites are always compared (and ranked) by analysis/compare.ts above
+  return comparisonResult(sites, ranking ?? rankAssessments(sites.map((s) => s.assessment)), input.units)
 }

@@ -92,7 +92,11 @@ describe('dryhours assess', () => {
     const text = out.join('')
     expect(text).toMatch(/Usable drying hours per month/)
     expect(text).toMatch(/Best start windows/)
-    expect(text).toMatch(/propane \(LPG\).*at 0\.9\/L\n/)
+    expect(text).toMatch(/propane \(LPG\).*at 0\.90 per L\n/)
+    // plain words: no engine identifiers, shares of years in words, the clock named
+    expect(text).not.toMatch(/nightWithoutDrying|tooHumid|≥ 100 %/)
+    expect(text).toMatch(/finishes within \d+ days in (every year|at least \d+ % of years)/)
+    expect(text).toMatch(/times on /)
     expect(text).toMatch(/wood pellets.*\(example price\)/)
   })
   it('bad input: exit 2 and one line naming what is wrong', async () => {

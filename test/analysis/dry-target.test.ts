@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
 import { planAssessment } from '../../src/analysis/plan.ts'
-import { assessmentText } from '../../src/cli/assessment-text.ts'
 import { productById } from '../../src/product/catalogue.ts'
+import { assessmentText } from '../../src/report/assessment-text.ts'
 import { renderReportHtml } from '../../src/report/report-html.ts'
 import { demoSeries, sliceSeries } from '../drying/demo-weather.ts'
 

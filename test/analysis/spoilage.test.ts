@@ -4,8 +4,8 @@
  */
 import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
-import { assessmentText } from '../../src/cli/assessment-text.ts'
 import { productById } from '../../src/product/catalogue.ts'
+import { assessmentText } from '../../src/report/assessment-text.ts'
 import { sectionContext } from '../../src/report/report-html.ts'
 import { answerSentences } from '../../src/report/sections/summary.ts'
 import { demoSeries } from '../drying/demo-weather.ts'

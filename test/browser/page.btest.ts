@@ -66,19 +66,22 @@ describe('the page with JavaScript', () => {
     watch(page, 'js')
     await page.goto(`${server.url}/`)
     await page.screenshot({ path: join(ARTIFACTS, 'page-form.png'), fullPage: true })
-    // Only the chosen method's options show.
+    // Only the chosen methods' options show.
     expect(await page.isVisible('#f-loadingKgPerM2')).toBe(true)
     expect(await page.isVisible('#f-collectorAreaM2PerTonne')).toBe(false)
     await page.check('input[name=method][value=solar-cabinet]')
+    await page.uncheck('input[name=method][value=open-air]')
     expect(await page.isVisible('#f-collectorAreaM2PerTonne')).toBe(true)
+    expect(await page.isVisible('#f-loadingKgPerM2')).toBe(false)
     await page.check('input[name=method][value=open-air]')
+    await page.uncheck('input[name=method][value=solar-cabinet]')
 
     await fillArdentine(page, true)
     await page.click('#submit')
     await page.waitForSelector('#status:not([hidden])')
     await page.waitForSelector('#result article[data-report="assessment"]', { timeout: 90_000 })
     expect(await page.textContent('#status-text')).toMatch(/^Done in \d+\.\d s$/)
-    const kinds = await page.$$eval('#result svg.chart', (els) =>
+    const kinds = await page.$$eval('#result .appendix svg.chart', (els) =>
       els.map((e) => e.getAttribute('data-chart')),
     )
     expect(kinds).toEqual([
@@ -89,7 +92,14 @@ describe('the page with JavaScript', () => {
       'risk-bars',
       'spread-bars',
     ])
-    for (const box of await page.$$('#result svg.chart')) {
+    // the result's heading has the focus (a screen reader reads the answer), the status is a live region
+    expect(
+      await page.evaluate(
+        () => document.activeElement?.closest('#result') !== null && document.activeElement?.tagName,
+      ),
+    ).toBe('H1')
+    expect(await page.getAttribute('#status', 'aria-live')).toBe('polite')
+    for (const box of await page.$$('#result .appendix svg.chart')) {
       const b = await box.boundingBox()
       expect(b?.width ?? 0).toBeGreaterThan(500)
       expect(b?.height ?? 0).toBeGreaterThan(200)
@@ -200,7 +210,7 @@ describe('the page without JavaScript', () => {
     await Promise.all([page.waitForURL(`${server.url}/report`, { timeout: 90_000 }), page.click('#submit')])
     // Without a script the report comes first on the answer page, the form (kept filled in) after it.
     await page.waitForSelector('#result-first article[data-report="assessment"]')
-    expect(await page.$$eval('#result-first svg.chart', (els) => els.length)).toBe(6)
+    expect(await page.$$eval('#result-first .appendix svg.chart', (els) => els.length)).toBe(6)
     const order = await page.evaluate(() => {
       const r = document.getElementById('result-first')
       const f = document.getElementById('assess-form')
@@ -235,6 +245,7 @@ describe('the page without JavaScript', () => {
     await page.fill('#f-seasonStart', '09-15')
     await page.fill('#f-seasonEnd', '10-31')
     await page.check('input[name=method][value=heated]')
+    await page.uncheck('input[name=method][value=open-air]')
     await Promise.all([page.waitForURL(`${server.url}/report`, { timeout: 90_000 }), page.click('#submit')])
     await page.waitForSelector('#result-first article')
     expect(await page.title()).not.toBe('pwned')

@@ -70,7 +70,9 @@ describe('the method registry', () => {
         deadlineDays: 2,
       })
       expect(a.methodLabel).toBe(model.label)
-      for (const x of methodModel(model.kind).assumptions(method)) expect(a.assumptions).toContainEqual(x)
+      const named = { id: product.id, name: product.name, category: product.category }
+      for (const x of methodModel(model.kind).assumptions(method, named))
+        expect(a.assumptions).toContainEqual(x)
       expect(renderPage({})).toContain(`value="${model.kind}"`)
     })
   }

@@ -103,10 +103,13 @@ describe('the page form has the API limits', () => {
   it('the page takes as many files as the API (maxSites), not a number of its own', async () => {
     const two = createApp({ maxSites: 2 })
     const form = pageForm({})
-    form.append('file', new Blob([JULY]), 'b.csv')
-    form.append('file', new Blob([JULY]), 'c.csv')
+    form.set('task', 'compare')
+    form.delete('file')
+    for (const i of [1, 2, 3]) form.append(`site${i}.file`, new Blob([JULY]), `s${i}.csv`)
     const p = await expectProblem(await post('/report', form, undefined, two), [400])
-    expect(p.detail).toMatch(/at most 2 weather files/)
+    expect(p.detail).toMatch(/at most 2 sites/)
+    // and the page shows that many rows at most
+    expect(await (await two.request('/compare')).text()).not.toContain('data-site="3"')
   })
 })
 

@@ -7,7 +7,6 @@ import { describe, expect, it } from 'vitest'
 import { assess } from '../../src/analysis/assess.ts'
 import type { Assessment } from '../../src/analysis/assessment.ts'
 import { rankAssessments } from '../../src/analysis/compare.ts'
-import { assessmentText } from '../../src/cli/assessment-text.ts'
 import { comparisonText } from '../../src/cli/commands/compare.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import {
@@ -18,6 +17,7 @@ import {
 } from '../../src/product/memory-figures.ts'
 import type { ProductProfile } from '../../src/product/profile.ts'
 import { NUMBER_GROUPS, profileNumbers } from '../../src/product/profile-numbers.ts'
+import { assessmentText } from '../../src/report/assessment-text.ts'
 import { renderReportHtml } from '../../src/report/report-html.ts'
 import { demoSeries } from '../drying/demo-weather.ts'
 

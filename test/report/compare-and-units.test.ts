@@ -28,12 +28,15 @@ describe('comparison of two demo sites', () => {
         expect(num(b?.['data-value'])).toBe(m.usableHours.median)
       }
     })
-    // Each site's own report follows, with prefixed ids: no id repeats in the document.
+    // Each site's short summary follows (its full report is its own document): no id repeats.
     const ids = [...h.matchAll(/\sid="([^"]+)"/g)].map((m) => m[1])
-    expect(ids.length).toBeGreaterThan(40)
+    expect(ids.length).toBeGreaterThan(15)
     expect(new Set(ids).size).toBe(ids.length)
     expect(h).toContain('data-report="comparison"')
-    expect((h.match(/data-report="assessment"/g) ?? []).length).toBe(2)
+    expect((h.match(/data-section="site"/g) ?? []).length).toBe(2)
+    expect((h.match(/data-report="assessment"/g) ?? []).length).toBe(0)
+    // the season calendar has one row per site, in rank order
+    expect((byId(h, 'div', 'cmp-calendar').match(/class="cal-row"/g) ?? []).length).toBe(2)
   })
 
   it('ranks by the mean probability of finishing within the deadline (analysis ranking, in rank order)', () => {
@@ -89,7 +92,7 @@ describe('comparison with the analysis ranking', () => {
     const table = h.slice(h.indexOf('data-table="site-comparison"'))
     expect(table.indexOf('>Beta<')).toBeLessThan(table.indexOf('>Alpha<'))
     expect(table).toContain(
-      '<th scope="row">1</th><td>Beta</td><td class="num">90</td><td>07-01 to 07-31</td>',
+      '<th scope="row">1</th><td data-label="site">Beta</td><td class="num" data-label="finishing within the deadline, mean over start days [%]">90</td><td data-label="best start window">07-01 to 07-31</td>',
     )
   })
 })
@@ -101,7 +104,11 @@ describe('US customary report', () => {
     expect(h).toContain('data-units="us"')
     expect(h).toContain('dry bulb [°F]')
     expect(h).toContain('humidity ratio [gr/lb]')
-    expect(h).toContain('US customary (°F, lb, gal)')
+    expect(h).toContain('US customary (°F, lb, short ton, gal, ft³)')
+    // the psychrometric table and the cross-check are in US units too
+    expect(h).toContain('dry bulb from [°F]')
+    expect(h).toMatch(/Btu\/lb/)
+    expect(h).not.toMatch(/\[°C\]|\[g\/kg\]|kWh\/t\b/)
     const bars = elements(byId(h, 'svg', 'fig-heat-svg'), 'g', 'class="bar"')
     for (const m of c.assessment.monthly) {
       const si = m.supplementalHeatKwhPerTonne.median

@@ -17,16 +17,19 @@ beforeAll(() => {
   for (const c of cases) html.set(c.file, renderReportHtml(c.assessment, { info: { fileName: c.file } }))
 }, 120_000)
 
+// the two-page handout, then the appendix (the notes section only when there are warnings or notes)
 const SECTIONS = [
   'header',
   'answer',
+  'calendar',
+  'start-table',
+  'cautions',
   'monthly',
   'hour-of-day',
   'psychrometric',
   'start-dates',
   'spoilage',
   'heat',
-  'cautions',
   'limits',
 ]
 const CHARTS: [string, string][] = [
@@ -46,8 +49,9 @@ describe('report of each demo site', () => {
   it('has every section, in order', () => {
     for (const c of cases) {
       const h = html.get(c.file) as string
-      const found = [...h.matchAll(/data-section="([^"]+)"/g)].map((m) => m[1])
+      const found = [...h.matchAll(/data-section="([^"]+)"/g)].map((m) => m[1]).filter((x) => x !== 'notes')
       expect(found, c.file).toEqual(SECTIONS)
+      expect(h.indexOf('data-part="handout"')).toBeLessThan(h.indexOf('data-part="appendix"'))
     }
   })
 
@@ -70,7 +74,7 @@ describe('report of each demo site', () => {
           ),
         )
         expect(figure).toMatch(
-          /<details class="table-view"><summary>Table view of figure \d+<\/summary><table class="data"/,
+          /<details class="table-view"><summary>Table view of figure \d+<\/summary><table class="data( stack)?"/,
         )
       }
     }

@@ -65,7 +65,7 @@ describe('ERA5-Land accumulations since 00 UTC', () => {
     }
     const r = readWeather(lines.join('\n'))
     expect(r.dialect?.id).toBe('era5')
-    expect(r.warnings.some((w) => w.includes('ERA5-Land'))).toBe(true)
+    expect(r.notes.some((w) => w.includes('ERA5-Land'))).toBe(true)
     const noon = r.series.startUtcMs.indexOf(Date.UTC(2024, 0, 15, 16))
     expect(r.series.ghiWm2[noon]).toBeCloseTo(400, 6)
     const night = r.series.startUtcMs.indexOf(Date.UTC(2024, 0, 15, 23))
@@ -84,7 +84,7 @@ describe('files without a header row', () => {
     )
     const r = readWeather(rows.join('\n'), { latitudeDeg: 51.8, longitudeDeg: 9.6, elevationM: 310 })
     expect(r.dialect?.id).toBe('meteostat-bulk')
-    expect(r.warnings[0]).toMatch(/comma-separated, no header row/)
-    expect(r.warnings.join('\n')).not.toMatch(/header on line 0/)
+    expect(r.notes[0]).toMatch(/comma-separated, no header row/)
+    expect(r.notes.join('\n')).not.toMatch(/header on line 0/)
   })
 })

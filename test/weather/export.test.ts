@@ -104,7 +104,7 @@ describe('reading the export back', () => {
     expect(r.series.quality[2] & QualityFlag.filled).toBeTruthy()
     const exported = hourlyExportCsv(r.series)
     const back = readWeather(exported)
-    expect(back.warnings[0]).toMatch(/own hourly export/)
+    expect(back.notes[0]).toMatch(/own hourly export/)
     expect(back.series.quality[2] & QualityFlag.filled).toBeTruthy()
     expect(hourlyExportCsv(back.series)).toBe(exported)
   })

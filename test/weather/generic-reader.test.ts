@@ -23,8 +23,8 @@ describe('header search', () => {
     const text = [...notes, 'time (UTC),temp (°C),rh (%)', ...rows(24, (h) => `${T(h)},${RH(h)}`)].join('\n')
     const r = readWeather(text)
     expect(r.rows.read).toBe(24)
-    expect(r.warnings.some((w) => w.includes('header on line 61'))).toBe(true)
-    expect(r.warnings.some((w) => w.includes('lines 1–60 before the header row were skipped'))).toBe(true)
+    expect(r.notes.some((w) => w.includes('header on line 61'))).toBe(true)
+    expect(r.notes.some((w) => w.includes('lines 1–60 before the header row were skipped'))).toBe(true)
   })
 
   it('beyond 100 lines the header is not searched for, unless its line is given', () => {
@@ -47,7 +47,7 @@ describe('header search', () => {
       ...table,
     ].join('\n')
     const r = readWeather(text)
-    expect(r.warnings.some((w) => w.startsWith('semicolon-separated, header on line 2'))).toBe(true)
+    expect(r.notes.some((w) => w.startsWith('semicolon-separated, header on line 2'))).toBe(true)
     expect(r.series.dryBulbC[15]).toBe(24)
     // a header named by its line gives its own delimiter, whatever the names
     const unknown = ['Station export, shed 2, v1.3', 'stamp;probeA;probeB', ...table].join('\n')
@@ -73,7 +73,7 @@ describe('header search', () => {
       ...rows(24, (h) => `${(Number(T(h)) * 1.8 + 32).toFixed(1)},${RH(h)},${36 + 3.6 * (h % 4)}`),
     ].join('\n')
     const r = readWeather(text, { utcOffsetHours: 0 })
-    expect(r.warnings.some((w) => w.includes('line 2 gives the units'))).toBe(true)
+    expect(r.notes.some((w) => w.includes('line 2 gives the units'))).toBe(true)
     expect(r.columns.find((c) => c.variable === 'wind')).toMatchObject({ unit: 'km/h', unitFrom: 'header' })
     expect(r.series.windMs[4]).toBeCloseTo(10, 10) // 36 km/h = 10 m/s (NIST SP 811: 1 km/h = 1/3.6 m/s)
     expect(r.series.windMs[5]).toBeCloseTo(11, 10) // 39.6 km/h
@@ -90,7 +90,7 @@ describe('columns that are not what they look like', () => {
     const r = readWeather(text)
     expect(r.series.windMs[0]).toBeCloseTo(5, 10) // 3-4-5 triangle
     expect(r.series.dryBulbC[2]).toBeCloseTo(20, 10) // 293.15 K − 273.15
-    expect(r.warnings.some((w) => w.includes('√(u² + v²)'))).toBe(true)
+    expect(r.notes.some((w) => w.includes('√(u² + v²)'))).toBe(true)
   })
 
   it('one component alone is not a wind speed', () => {
@@ -109,7 +109,7 @@ describe('columns that are not what they look like', () => {
     expect(pressure?.unitFrom).toBe('supplied') // the standard atmosphere at 500 m, not 102 kPa
     expect(r.series.pressureKpa[0]).toBeLessThan(96.5)
     for (const name of ['slp', 'altimeter', 'vapour pressure'])
-      expect(r.warnings.some((w) => w.startsWith(`column '${name}`) && w.includes('not used'))).toBe(true)
+      expect(r.notes.some((w) => w.startsWith(`column '${name}`) && w.includes('not used'))).toBe(true)
   })
 })
 

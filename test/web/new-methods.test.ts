@@ -41,15 +41,24 @@ interface Bundle {
 }
 
 describe('the page offers the tunnel and the natural-air bin', () => {
-  it('has one radio per method of the registry, the tunnel and the bin among them, with their own fields', () => {
+  it('has one choice per method of the registry on both forms, the tunnel and the bin among them, with their own fields', () => {
+    // the assess form takes one or several methods (checkboxes), the compare form one (radios)
+    for (const [task, type] of [
+      ['assess', 'checkbox'],
+      ['compare', 'radio'],
+    ] as const) {
+      const page = renderPage({ task })
+      const kinds = [
+        ...page.matchAll(new RegExp(`<input type="${type}" name="method" value="([a-z-]+)"`, 'g')),
+      ].map((m) => m[1])
+      expect(kinds, task).toEqual(METHOD_MODELS.map((m) => m.kind))
+      expect(kinds).toContain('tunnel')
+      expect(kinds).toContain('natural-air-bin')
+    }
     const html = renderPage({})
-    const radios = [...html.matchAll(/<input type="radio" name="method" value="([a-z-]+)"/g)].map((m) => m[1])
-    expect(radios).toEqual(METHOD_MODELS.map((m) => m.kind))
-    expect(radios).toContain('tunnel')
-    expect(radios).toContain('natural-air-bin')
     for (const kind of ['tunnel', 'natural-air-bin']) {
       const model = METHOD_MODELS.find((m) => m.kind === kind)
-      expect(html).toContain(`value="${kind}"><span><strong>${model?.title}</strong>`)
+      expect(html).toMatch(new RegExp(`value="${kind}"( checked)?><span><strong>${model?.title}</strong>`))
     }
     // the loading field is shown for the tunnel; the bin's fields only for the bin
     expect(html).toMatch(/data-methods="open-air shade tunnel"><label for="[^"]+">Loading/)

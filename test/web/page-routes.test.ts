@@ -42,7 +42,7 @@ describe('GET /', () => {
     expect(csp).toContain("script-src 'self'")
     const html = await res.text()
     expect(html).toContain(
-      '<form id="assess-form" class="card" method="post" action="/report" enctype="multipart/form-data"',
+      '<form id="assess-form" class="card task-form" data-task="assess" method="post" action="/report" enctype="multipart/form-data"',
     )
     const scripts = [...html.matchAll(/<script([^>]*)>([\s\S]*?)<\/script>/g)]
     expect(scripts).toHaveLength(1)
@@ -76,7 +76,9 @@ describe('GET /', () => {
       latitudeDeg: 11.9,
       longitudeDeg: 104.6,
     })
-    expect(renderPage({ demo: list })).toContain('<select id="f-demo" name="demo">')
+    expect(renderPage({ demo: list })).toContain(
+      '<select id="f-demo" name="demo" aria-describedby="f-demo-hint">',
+    )
     expect(renderPage({})).not.toContain('name="demo"')
   })
 })
@@ -141,7 +143,7 @@ describe('POST /report', () => {
     const html = await res.text()
     expect(html).toContain('<details id="file-questions" class="questions" open>')
     expect(html).toMatch(
-      /role="alert"><strong>Please check:<\/strong> quillow\.csv: the timestamps carry no UTC offset/,
+      /role="alert" tabindex="-1"><strong>Please check:<\/strong> quillow\.csv: the timestamps carry no UTC offset/,
     )
     // the reader's --utc-offset and --tz are named by the form's labels
     expect(html).toContain('“UTC offset of the file&#39;s time stamps [h]”')
@@ -170,7 +172,9 @@ describe('POST /report', () => {
     })
     expect(res.status).toBe(400)
     const html = await res.text()
-    expect(html).toContain('deadlineDays: must be a number from 0.25 to 365 days, got &quot;soon&quot;')
+    // the field by its label, and marked for screen readers
+    expect(html).toContain('Finish within: must be a number from 0.25 to 365 days, got &quot;soon&quot;')
+    expect(html).toMatch(/id="f-deadlineDays" name="deadlineDays"[^>]*aria-invalid="true"/)
     expect(html).not.toContain('<script>alert(1)')
     expect(html).toContain('value="&quot;&gt;&lt;script&gt;alert(1)&lt;/script&gt;"')
   })
@@ -190,11 +194,11 @@ describe('POST /report', () => {
 
   it('rejects an unknown product and a bad season day by field name', async () => {
     for (const [fields, msg] of [
-      [{ product: 'unobtainium' }, /product: unknown product &#39;unobtainium&#39;/],
-      [{ product: 'wheat', seasonStart: '6/15' }, /seasonStart: must be a day as MM-DD/],
+      [{ product: 'unobtainium' }, /Product: unknown product &#39;unobtainium&#39;/],
+      [{ product: 'wheat', seasonStart: '6/15' }, /First start day: must be a day as MM-DD/],
       [
         { product: 'wheat', method: 'microwave' },
-        /method: must be one of open-air, shade, solar-cabinet, tunnel, heated/,
+        /Drying method: must be one of open-air, shade, solar-cabinet, tunnel, heated/,
       ],
     ] as const) {
       const res = await app.request('/report', {
@@ -236,30 +240,219 @@ describe('demo sites supplied by the entry point', () => {
     expect(a.site.utcOffsetHours).toBe(-6)
   }, 30_000)
 
+  it('assesses grain in a bin (natural-air-bin) from the page: its fields reach the method, its handout shows the airflow per start month', async () => {
+    expect(await (await demoApp.request('/')).text()).toContain('data-methods="natural-air-bin"')
+    const f = form({
+      demo: 'quillow-valley-2021-2023-local-dst-imperial.csv',
+      product: 'shelled-corn',
+      method: 'natural-air-bin',
+      binAirflows: '1 2',
+      binDepthM: '3',
+      initialWbPct: '20',
+      targetWbPct: '15.5',
+      seasonStart: '09-15',
+      seasonEnd: '10-15',
+      format: 'bundle',
+    })
+    const res = await demoApp.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { json: string; handout: string; document: string }
+    const a = JSON.parse(b.json) as {
+      method: { kind: string; airflowsM3PerMinPerTonne: number[]; depthM: number }
+      bin: { airflows: { airflowM3PerMinPerTonne: number }[]; bin: { depthM: number } }
+      seasonCalendar: { cells: unknown[] }
+    }
+    expect(a.method).toMatchObject({ kind: 'natural-air-bin', airflowsM3PerMinPerTonne: [1, 2], depthM: 3 })
+    expect(a.bin.airflows.map((q) => q.airflowM3PerMinPerTonne)).toEqual([1, 2])
+    expect(a.bin.bin.depthM).toBe(3)
+    // no start weeks for a bin: the handout shows the airflow per start month instead of the calendar
+    expect(a.seasonCalendar.cells).toEqual([])
+    expect(b.handout).toContain('data-section="bin-airflow"')
+    expect(b.handout).toContain('data-table="bin-minimum-airflow"')
+    expect(b.handout).not.toContain('data-section="start-table"')
+    expect(b.handout).not.toContain('data-section="calendar"')
+    expect(b.handout).toMatch(/Never enter a bin/)
+    expect(b.document).toContain('data-section="bin"')
+    // a bad airflow names its field by the label
+    f.set('binAirflows', '1 fast')
+    f.set('format', 'page')
+    const bad = await demoApp.request('/report', { method: 'POST', body: f })
+    expect(bad.status).toBe(400)
+    expect(await bad.text()).toMatch(/Airflows to compare: each value must be a number from 0.01 to 50/)
+  }, 60_000)
+
   it('refuses a demo name that is not in the list (no path tricks)', async () => {
     const res = await demoApp.request('/report', {
       method: 'POST',
       body: form({ demo: '../package.json', product: 'wheat' }),
     })
     expect(res.status).toBe(400)
-    expect(await res.text()).toContain('demo: unknown demo file &quot;../package.json&quot;')
+    expect(await res.text()).toContain('Demo site: unknown demo file &quot;../package.json&quot;')
   })
 })
 
-describe('several files', () => {
-  it('answer with the sites side by side and each site report', async () => {
-    const f = form({ ...BASE, format: 'bundle' }, [
-      { name: 'first site.csv', bytes: tamarel },
-      { name: 'second site.csv', bytes: tamarel },
-    ])
+describe('the sites table (compare)', () => {
+  function sitesForm(fields: Record<string, string>, sites: { name: string; bytes: Uint8Array }[]): FormData {
+    const f = form({ task: 'compare', ...fields })
+    sites.forEach((x, i) => {
+      f.append(
+        `site${i + 1}.file`,
+        new File([x.bytes as Uint8Array<ArrayBuffer>], x.name, { type: 'text/csv' }),
+      )
+    })
+    return f
+  }
+
+  it('compares the sites, each with its own name, position and clock, with a short summary of each', async () => {
+    const f = sitesForm(
+      {
+        product: 'apricot-halves',
+        method: 'open-air',
+        seasonStart: '07-01',
+        seasonEnd: '07-31',
+        format: 'bundle',
+        'site1.name': 'Tamarel <east>',
+        'site1.lat': '11.9',
+        'site1.lon': '104.6',
+        'site1.siteTz': 'Asia/Bangkok',
+        'site2.name': 'Tamarel west',
+        'site2.lat': '11.9',
+        'site2.lon': '104.5',
+      },
+      [
+        { name: 'first site.csv', bytes: tamarel },
+        { name: 'second site.csv', bytes: tamarel },
+      ],
+    )
     const res = await app.request('/report', { method: 'POST', body: f })
     expect(res.status).toBe(200)
     const b = (await res.json()) as { article: string; csv: string; json: string }
     expect(b.article).toContain('data-report="comparison"')
-    expect((b.article.match(/data-report="assessment"/g) ?? []).length).toBe(2)
-    expect(b.article).toContain('first site')
-    expect(b.article).toContain('second site')
+    expect((b.article.match(/data-section="site"/g) ?? []).length).toBe(2)
+    expect(b.article).toContain('Tamarel &lt;east&gt;')
+    expect(b.article).toContain('Tamarel west')
     expect(b.csv.startsWith('Sites ranked\r\n')).toBe(true)
-    expect((JSON.parse(b.json) as unknown[]).length).toBe(2)
+    const sites = JSON.parse(b.json) as {
+      site: { name: string; timeZone: string | null; longitudeDeg: number }
+    }[]
+    expect(sites.map((x) => x.site.name)).toEqual(['Tamarel <east>', 'Tamarel west'])
+    expect(sites[0].site.timeZone).toBe('Asia/Bangkok')
+    expect(sites[1].site.longitudeDeg).toBe(104.5)
   }, 60_000)
+
+  it('names the site row of a missing file and of a file that needs a question answered', async () => {
+    const noFile = await app.request('/report', {
+      method: 'POST',
+      body: sitesForm({ product: 'wheat', 'site2.name': 'B' }, [{ name: 'a.csv', bytes: tamarel }]),
+    })
+    expect(noFile.status).toBe(400)
+    expect(await noFile.text()).toContain(
+      'Site 2: Weather file (CSV or EPW): choose this site’s weather file',
+    )
+    const question = await app.request('/report', {
+      method: 'POST',
+      body: sitesForm({ product: 'shelled-corn', format: 'bundle' }, [
+        { name: 'a.csv', bytes: tamarel },
+        { name: 'q.csv', bytes: quillow },
+      ]),
+    })
+    expect(question.status).toBe(422)
+    const p = (await question.json()) as { detail: string }
+    expect(p.detail).toMatch(/^Site 2 \(q\.csv\): the timestamps carry no UTC offset/)
+    expect(p.detail).not.toContain('--')
+  }, 60_000)
+
+  it('serves the compare page with three site rows, each field labelled, and a searchable zone list', async () => {
+    const html = await (await app.request('/compare')).text()
+    expect(html).toContain('aria-current="page">Compare sites</a>')
+    expect((html.match(/<fieldset class="site"/g) ?? []).length).toBe(3)
+    expect(html).toContain('<label for="f-site2-siteTz">Site&#39;s time zone</label>')
+    expect(html).toMatch(/id="f-site2-siteTz" name="site2.siteTz" type="text"[^>]* list="tz-names"/)
+    expect(html).toContain('<option value="Europe/Madrid"></option>')
+  })
+})
+
+describe('the other jobs: check a file, fit weighings, energy charts', () => {
+  it('checks a weather file: how it was read, each variable, problems, warnings apart from notes', async () => {
+    const res = await app.request('/report', {
+      method: 'POST',
+      body: form({ task: 'inspect', lat: '11.9', lon: '104.6', format: 'bundle' }, [
+        { name: 'tamarel.csv', bytes: tamarel },
+      ]),
+    })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { article: string; json: string }
+    expect(b.article).toContain('data-report="inspect"')
+    for (const section of ['columns', 'variables', 'coverage', 'problems', 'warnings', 'notes'])
+      expect(b.article).toContain(`data-section="${section}"`)
+    expect(b.article).toContain('air temperature (dry bulb)')
+    const notes = b.article.slice(b.article.indexOf('data-section="notes"'))
+    expect(notes).toMatch(/comma-separated, header on line 1/)
+    const warnings = b.article.slice(
+      b.article.indexOf('data-section="warnings"'),
+      b.article.indexOf('data-section="notes"'),
+    )
+    expect(warnings).not.toMatch(/separated/)
+    expect(JSON.parse(b.json).format).toBe('csv')
+  }, 30_000)
+
+  it('"check the file first" on the assess form answers with the inspection above the assess form', async () => {
+    const f = form({ ...BASE })
+    f.append('file', new File([tamarel as Uint8Array<ArrayBuffer>], 'tamarel.csv', { type: 'text/csv' }))
+    f.set('task', 'assess')
+    f.append('task', 'inspect')
+    const res = await app.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const html = await res.text()
+    expect(html).toContain('data-report="inspect"')
+    expect(html).toContain('<form id="assess-form"')
+    expect(html.indexOf('data-report="inspect"')).toBeLessThan(html.indexOf('<form id="assess-form"'))
+  }, 30_000)
+
+  it('fits weighings and names the form field when the reference is missing', async () => {
+    const weighings = readFileSync(join(import.meta.dirname, '../fixtures/product/demo-weighings.csv'))
+    const f = form({
+      task: 'fit',
+      reference: 'dryMass',
+      referenceValue: '150',
+      thicknessMm: '5',
+      targetWbPct: '20',
+      format: 'bundle',
+    })
+    f.append('weighings', new File([weighings as Uint8Array<ArrayBuffer>], 'w.csv', { type: 'text/csv' }))
+    const res = await app.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { article: string; json: string }
+    expect(b.article).toContain('data-report="fit"')
+    expect(b.article).toContain('data-table="fit-models"')
+    expect(JSON.parse(b.json).best.model).toMatch(/^(lewis|page|diffusion)$/)
+    const g = form({ task: 'fit', reference: 'dryMass' })
+    g.append('weighings', new File([weighings as Uint8Array<ArrayBuffer>], 'w.csv', { type: 'text/csv' }))
+    const bad = await app.request('/report', { method: 'POST', body: g })
+    expect(bad.status).toBe(400)
+    expect(await bad.text()).toContain('Its value: give the dry mass or one moisture')
+  }, 30_000)
+
+  it('draws the energy charts of the demo batch log', async () => {
+    const log = readFileSync(join(DEMO, 'energy/quillow-dryer-batches-2026.csv'))
+    const f = form({ task: 'energy', format: 'bundle' })
+    f.append('log', new File([log as Uint8Array<ArrayBuffer>], 'batches.csv', { type: 'text/csv' }))
+    const res = await app.request('/report', { method: 'POST', body: f })
+    expect(res.status).toBe(200)
+    const b = (await res.json()) as { article: string }
+    expect(b.article).toMatch(/data-chart="control-chart"|<svg/)
+  }, 30_000)
+
+  it('serves each job on its own address with the navigation marking it', async () => {
+    for (const [path, name] of [
+      ['/', 'Assess a site'],
+      ['/inspect', 'Check a weather file'],
+      ['/fit', 'Fit from weighings'],
+      ['/energy', 'Energy charts'],
+    ]) {
+      const html = await (await app.request(path)).text()
+      expect(html, path).toContain(`aria-current="page">${name}</a>`)
+      expect((html.match(/aria-current=/g) ?? []).length).toBe(1)
+    }
+  })
 })

@@ -7,12 +7,12 @@ import { methodModel } from '../../drying/methods/index.ts'
 import { productById } from '../../product/catalogue.ts'
 import type { ProductProfile } from '../../product/profile.ts'
 import { parseUserProfile } from '../../product/profile-schema.ts'
+import { assessmentText } from '../../report/assessment-text.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
 import { readWeatherBytes } from '../../weather/read-weather.ts'
 import type { HourlySeries } from '../../weather/series.ts'
 import { WeatherInputError } from '../../weather/weather-input-error.ts'
-import { assessmentText } from '../assessment-text.ts'
 import { BIN_FLAGS_HELP, BIN_PARSE_OPTIONS, setBinOptions } from '../bin.ts'
 import { type CliCommand, type CliIo, numberOption, UsageError } from '../command.ts'
 import {
@@ -272,16 +272,16 @@ export function progressPrinter(io: CliIo, label: string): (p: AssessProgress) =
 function renderAssessment(a: Assessment, o: ReportOutputChoice, file: string): string {
   const info = { fileName: file.split(/[\\/]/).pop() }
   if (o.format === 'json') return `${JSON.stringify(a)}\n`
-  if (o.format === 'html') return renderReportHtml(a, { units: o.units, info })
+  if (o.format === 'html') return renderReportHtml(a, { units: o.units, info, optionSurface: 'cli' })
   if (o.format === 'csv') {
     try {
-      return renderReportCsv(a, { units: o.units, info, table: o.table })
+      return renderReportCsv(a, { units: o.units, info, table: o.table, optionSurface: 'cli' })
     } catch (e) {
       if (e instanceof RangeError) throw new UsageError(`--table: ${e.message}`)
       throw e
     }
   }
-  return assessmentText(a)
+  return assessmentText(a, { units: o.units })
 }
 
 export const assessCommand: CliCommand = {

@@ -88,8 +88,8 @@ function text(r: WeatherReadResult, file: string): string {
   }
   out.push(`      ${MONTHS.map((m) => m.padStart(5)).join('')}`)
   for (const [year, row] of byYear) out.push(`  ${year}${row.join('')}`)
-  for (const wText of r.warnings) out.push(`note: ${wText}`)
-  for (const n of r.notes) out.push(`assumed: ${n}`)
+  for (const wText of r.warnings) out.push(`warning: ${wText}`)
+  for (const n of r.notes) out.push(`note: ${n}`)
   const counts = Object.entries(r.problemCounts)
   if (counts.length > 0) {
     out.push(`problems    ${counts.map(([k, v]) => `${k} ${v}`).join(', ')}`)

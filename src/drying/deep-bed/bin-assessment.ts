@@ -64,6 +64,11 @@ export interface BinAssessmentInput {
   spoilage?: SpoilageModel
   /** Offset of local standard time from UTC [h] for the start dates; default 0. */
   utcOffsetHours?: number
+  /**
+   * The site's clock, when it keeps daylight saving: the UTC instant [ms] of a local date and hour. Start dates
+   * then begin at `startHourLocal` on that clock; without it, on standard time (`utcOffsetHours`).
+   */
+  toUtcMs?: (year: number, month: number, day: number, hour: number) => number
   /** Local hour the bin is filled and the fan starts (0–23); default 12. */
   startHourLocal?: number
   /** Share of years that must be safe; default 0.9 (9 of 10 years). */
@@ -155,6 +160,7 @@ interface Calendar {
   t0: number
   wrap: boolean
   offsetMs: number
+  toUtcMs: ((year: number, month: number, day: number, hour: number) => number) | undefined
   startHour: number
   seasonHours: number
   firstYear: number
@@ -173,6 +179,7 @@ function calendarOf(input: BinAssessmentInput): Calendar {
     t0,
     wrap,
     offsetMs,
+    toUtcMs: input.toUtcMs,
     startHour: input.startHourLocal ?? 12,
     seasonHours: input.seasonDays * HOURS_PER_DAY,
     firstYear,
@@ -195,7 +202,9 @@ function startIndices(
       leftOut++
       continue
     }
-    const utcMs = Date.UTC(year, date.month - 1, date.day, cal.startHour) - cal.offsetMs
+    const utcMs = cal.toUtcMs
+      ? cal.toUtcMs(year, date.month, date.day, cal.startHour)
+      : Date.UTC(year, date.month - 1, date.day, cal.startHour) - cal.offsetMs
     let index = Math.round((utcMs - cal.t0) / MS_PER_HOUR)
     if (cal.wrap) index = ((index % cal.n) + cal.n) % cal.n
     if (index < 0 || index >= cal.n || (!cal.wrap && index + cal.seasonHours > cal.n)) {

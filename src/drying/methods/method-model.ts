@@ -118,6 +118,13 @@ export type MethodHourFunction = (hour: MethodHour) => void
 // biome-ignore lint/suspicious/noExplicitAny: the registry holds models of different parameter shapes
 export type AnyMethodSchema = z.ZodObject<any>
 
+/** What a method's assumptions may say about the product assessed. */
+export interface AssumptionProduct {
+  id: string
+  name: string
+  category: string
+}
+
 export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
   /** The `kind` of the method (kebab-case), also its zod literal. */
   kind: string
@@ -165,8 +172,11 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
    * azimuth (tilted collectors), the site coordinates.
    */
   needs: { sun: boolean; sunAzimuth: boolean; coordinates: boolean }
-  /** The method's own assumptions, with their sources, for the assessment. */
-  assumptions(method: z.output<S>): MethodAssumption[]
+  /**
+   * The method's own assumptions, with their sources, for the assessment; `product` lets a default that was
+   * estimated for one product say so when another is assessed.
+   */
+  assumptions(method: z.output<S>, product?: AssumptionProduct): MethodAssumption[]
   /** Prepare for one series; the returned function sets the outputs of each hour. */
   prepare(method: z.output<S>, setup: MethodSetup): MethodHourFunction
 }

@@ -69,11 +69,14 @@ export const openAir: MethodModel<typeof openAirSchema> = {
   heatsWithFuel: false,
   rainMatters: () => true,
   needs: { sun: true, sunAzimuth: false, coordinates: false },
-  assumptions: (m) => [
+  assumptions: (m, product) => [
     {
       name: 'absorptivity',
       value: String(m.absorptivity),
-      source: 'assumption for dark moist fruit (from memory)',
+      source:
+        product === undefined || product.category === 'fruit'
+          ? 'assumption for dark moist fruit (from memory)'
+          : `assumption for dark moist fruit (from memory), not measured for ${product.name}`,
     },
     {
       name: 'product surface per tray area covered',

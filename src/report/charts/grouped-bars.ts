@@ -8,13 +8,13 @@ import { escapeHtml } from '../escape.ts'
 import { HIGH_CONTRAST, patternDef, siteStyle, styleFill } from '../palette.ts'
 import {
   type Frame,
-  legend,
   linearScale,
   niceMax,
   niceTicks,
   plotWidth,
   px,
   svgDocument,
+  wrappedLegend,
   xAxis,
   yAxis,
 } from './svg.ts'
@@ -34,7 +34,11 @@ const finite = (v: number | null | undefined): v is number =>
   v !== null && v !== undefined && Number.isFinite(v)
 
 export function groupedBarsChart(o: GroupedBarsOptions): string {
-  const legendRows = Math.ceil(o.series.length / 3)
+  const items = o.series.map((s, i) => ({
+    swatch: `<rect x="0" y="-1" width="14" height="10" fill="${styleFill(`${o.id}-p${i}`, siteStyle(i))}" stroke="${siteStyle(i).colour}"/>`,
+    label: s.name.length > 60 ? `${s.name.slice(0, 59)}…` : s.name,
+  }))
+  const legendRows = wrappedLegend(0, 0, items, 640 - 56 - 12).rows
   const f: Frame = {
     width: 640,
     height: 270 + legendRows * 16,
@@ -76,14 +80,7 @@ export function groupedBarsChart(o: GroupedBarsOptions): string {
       bars.push(`${g}</g>`)
     })
   })
-  const items = o.series.map((s, i) => ({
-    swatch: `<rect x="0" y="-1" width="14" height="10" fill="${styleFill(`${o.id}-p${i}`, styles[i])}" stroke="${styles[i].colour}"/>`,
-    label: s.name.length > 34 ? `${s.name.slice(0, 33)}…` : s.name,
-    width: 205,
-  }))
-  const legendParts: string[] = []
-  for (let r = 0; r < legendRows; r++)
-    legendParts.push(legend(f.left, 10 + r * 16, items.slice(r * 3, r * 3 + 3)))
+  const legendParts = [wrappedLegend(f.left, 10, items, plotWidth(f)).svg]
   const body =
     yAxis(f, y, niceTicks(0, yMax), o.yLabel) +
     xAxis(

@@ -40,6 +40,8 @@ export interface LineBandOptions {
   unit: string
   lowLabel?: string
   highLabel: string
+  /** Legend label of the line (default "median"). */
+  lineLabel?: string
   /** A horizontal reference line (e.g. the deadline), with its label. */
   reference?: { value: number; label: string }
   /** Label every n-th x position (default: about 8 labels). */
@@ -129,13 +131,15 @@ export function lineBandChart(o: LineBandOptions): string {
   const items = [
     {
       swatch: `<line x1="0" x2="14" y1="4" y2="4" stroke="${HIGH_CONTRAST.blue}" stroke-width="2"/>`,
-      label: 'median',
-    },
-    {
-      swatch: `<rect x="0" y="-1" width="14" height="10" fill="${HIGH_CONTRAST.yellow}" fill-opacity="0.45"/><line x1="0" x2="14" y1="-1" y2="-1" stroke="${HIGH_CONTRAST.red}" stroke-dasharray="5 3"/>`,
-      label: `${o.lowLabel ? `${o.lowLabel} to ` : 'median to '}${o.highLabel}`,
+      label: o.lineLabel ?? 'median',
     },
   ]
+  if (o.points.some((p) => finite(p.high))) {
+    items.push({
+      swatch: `<rect x="0" y="-1" width="14" height="10" fill="${HIGH_CONTRAST.yellow}" fill-opacity="0.45"/><line x1="0" x2="14" y1="-1" y2="-1" stroke="${HIGH_CONTRAST.red}" stroke-dasharray="5 3"/>`,
+      label: `${o.lowLabel ? `${o.lowLabel} to ` : 'median to '}${o.highLabel}`,
+    })
+  }
   if (o.points.some((p) => !finite(p.median))) {
     items.push({
       swatch: `<path d="M4,1l6,6m0,-6l-6,6" stroke="${HIGH_CONTRAST.red}" stroke-width="1.6"/>`,

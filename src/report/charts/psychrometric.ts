@@ -64,7 +64,10 @@ export function psychrometricChart(o: PsychrometricOptions): string {
   const ch = Math.abs(y(0) - y(d.binHumidityRatioGPerKg))
   for (const c of d.cells) {
     const share = maxCount > 0 ? Math.sqrt(c.hours / maxCount) : 0
-    const label = `${c.dryBulbC} to ${c.dryBulbC + d.binDryBulbC} °C, ${c.humidityRatioGPerKg} to ${c.humidityRatioGPerKg + d.binHumidityRatioGPerKg} g/kg: ${c.hours} h`
+    const uu = o.units
+    const tt = (v: number) => uu.temperature(v).value.toFixed(0)
+    const ww = (v: number) => uu.humidityRatio(v).value.toFixed(uu.system === 'us' ? 0 : 1)
+    const label = `${tt(c.dryBulbC)} to ${tt(c.dryBulbC + d.binDryBulbC)} ${uu.temperatureUnit}, ${ww(c.humidityRatioGPerKg)} to ${ww(c.humidityRatioGPerKg + d.binHumidityRatioGPerKg)} ${uu.humidityRatioUnit}: ${c.hours} h`
     parts.push(
       `<rect class="hours" data-t="${c.dryBulbC}" data-w="${c.humidityRatioGPerKg}" data-hours="${c.hours}" x="${px(x(c.dryBulbC))}" y="${px(y(c.humidityRatioGPerKg + d.binHumidityRatioGPerKg))}" width="${px(cw)}" height="${px(ch)}" fill="${sequentialColour(0.15 + 0.85 * share)}" fill-opacity="0.9"><title>${escapeHtml(label)}</title></rect>`,
     )

@@ -155,6 +155,34 @@ export const MONTH_LONG = [
 ]
 
 /** A legend row: swatch + label items laid out left to right from (x, y). */
+/** Estimated width of a legend label at font size 10 [px of the viewBox]: 5.6 px a character, generous for sans-serif. */
+export const legendLabelWidth = (label: string): number => label.length * 5.6
+
+/**
+ * A legend whose items wrap onto as many rows as the width needs (each item: 18 px swatch, its label,
+ * 14 px gap), so that long names never run past the chart's edge. Returns the rows used.
+ */
+export function wrappedLegend(
+  x: number,
+  y: number,
+  items: { swatch: string; label: string }[],
+  maxWidth: number,
+  rowHeight = 16,
+): { svg: string; rows: number } {
+  const rows: { swatch: string; label: string; width: number }[][] = [[]]
+  let used = 0
+  for (const it of items) {
+    const width = 18 + legendLabelWidth(it.label) + 14
+    if (used > 0 && used + width > maxWidth) {
+      rows.push([])
+      used = 0
+    }
+    rows[rows.length - 1].push({ ...it, width })
+    used += width
+  }
+  return { svg: rows.map((r, i) => legend(x, y + i * rowHeight, r)).join(''), rows: rows.length }
+}
+
 export function legend(
   x: number,
   y: number,

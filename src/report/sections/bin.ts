@@ -203,6 +203,17 @@ export function binAnswerSentences(a: Assessment, b: BinAssessment, ctx: Section
   return out
 }
 
+/** The bin's part of the two-page handout: the smallest airflow per start month and the fan at each airflow. */
+export function binHandoutSection(a: Assessment, ctx: SectionContext): string {
+  const b = a.bin
+  if (!b) return ''
+  const tables = [binMinimumAirflowTable(b, ctx), binFanTable(b, ctx)]
+    .map((t) => `<div class="table-wrap">${tableHtml(t)}</div>`)
+    .join('')
+  return `<section class="report-section" id="${ctx.idPrefix}sec-bin-handout" data-section="bin-airflow"><h2>Airflow for each start month</h2>${tables}</section>`
+}
+
+/** The full bin section of the appendix: its tables, the two charts by start date and airflow, the model's limits. */
 export function binSection(a: Assessment, ctx: SectionContext): string {
   const b = a.bin
   if (!b) return ''

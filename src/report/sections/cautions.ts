@@ -24,12 +24,40 @@ export const MODEL_LIMITS: readonly string[] = [
   'Supplemental heat assumes the heater raises the intake air at constant humidity ratio with the stated efficiency; losses from the dryer shell are not included.',
 ]
 
+const list = (xs: readonly string[]) => `<ul>${xs.map((x) => `<li>${escapeHtml(x)}</li>`).join('')}</ul>`
+
+/** The cautions: the product's own, then the general ones (food safety, mycotoxins, heaters, trades, fire). */
 export function cautionsSection(a: Assessment, ctx: SectionContext): string {
-  const productCautions = a.product.cautions
-  const list = (xs: readonly string[]) => `<ul>${xs.map((x) => `<li>${escapeHtml(x)}</li>`).join('')}</ul>`
-  const binCautions = a.bin?.cautions ?? []
-  return `<section class="report-section cautions" id="${ctx.idPrefix}sec-cautions" data-section="cautions"><h2>Cautions</h2>${list([...binCautions, ...productCautions, ...GENERAL_CAUTIONS])}</section>
-<section class="report-section limits" id="${ctx.idPrefix}sec-limits" data-section="limits"><h2>Limits of the model and assumptions</h2>${list(MODEL_LIMITS)}${a.assumptions.length ? `<h3>Assumptions of this assessment</h3>${assumptionsHtml(a)}` : ''}</section>`
+  // a bin's own cautions (fans, grain entrapment, …) first
+  return cautionsHtml([...(a.bin?.cautions ?? []), ...a.product.cautions], ctx.idPrefix)
+}
+
+/** Cautions for a list of product cautions (several products in a comparison: each once). */
+export function cautionsHtml(productCautions: readonly string[], idPrefix = ''): string {
+  const unique = [...new Set(productCautions)]
+  return `<section class="report-section cautions" id="${idPrefix}sec-cautions" data-section="cautions"><h2>Cautions</h2>${list([...unique, ...GENERAL_CAUTIONS])}</section>`
+}
+
+/** The model's limits and the assessment's assumptions (as the engine records them, in SI units). */
+export function limitsSection(a: Assessment, ctx: SectionContext): string {
+  const si =
+    ctx.units.system === 'us'
+      ? '<p class="note">The assumptions are listed as the engine records them, in SI units.</p>'
+      : ''
+  return `<section class="report-section limits" id="${ctx.idPrefix}sec-limits" data-section="limits"><h2>Limits of the model and assumptions</h2>${list(MODEL_LIMITS)}${a.assumptions.length ? `<h3>Assumptions of this assessment</h3>${si}${assumptionsHtml(a)}` : ''}</section>`
+}
+
+/**
+ * Warnings (in full) and notes on how the weather file was read (delimiter, header, the layout's conventions,
+ * columns left out): notes are not problems, so they stay out of the answer.
+ */
+export function notesSection(
+  warnings: readonly string[],
+  notes: readonly string[],
+  ctx: SectionContext,
+): string {
+  if (warnings.length === 0 && notes.length === 0) return ''
+  return `<section class="report-section file-notes" id="${ctx.idPrefix}sec-notes" data-section="notes"><h2>Warnings and notes</h2>${warnings.length ? `<h3>Warnings</h3>${list(warnings)}` : '<p>No warnings.</p>'}${notes.length ? `<h3>How the weather file was read</h3>${list(notes)}` : ''}</section>`
 }
 
 function assumptionsHtml(a: Assessment): string {

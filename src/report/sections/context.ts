@@ -7,7 +7,7 @@
 import type { Spread } from '../../analysis/statistics.ts'
 import { integerPower } from '../../physics/power.ts'
 import type { ReportInputInfo } from '../assessment-view.ts'
-import type { UnitFormatter } from '../display-units.ts'
+import { formatNumber, type UnitFormatter } from '../display-units.ts'
 
 export interface SectionContext {
   units: UnitFormatter
@@ -17,6 +17,8 @@ export interface SectionContext {
   /** Prefix for element ids, so that several reports can share one page. */
   idPrefix: string
   nextFigure: () => number
+  /** A message with its option names as the reader's interface names them (flags, API keys or form labels). */
+  optionWords: (message: string) => string
 }
 
 export const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v)
@@ -33,6 +35,28 @@ export function round(v: number | null | undefined, digits = 1): number | null {
   if (!finite(v)) return null
   const k = integerPower(10, digits)
   return Math.round(v * k) / k
+}
+
+/** The currency of the assessment's prices (`heat.currency`), or null when none was given. */
+export function currencyOf(a: { heat: object }): string | null {
+  const c = (a.heat as { currency?: unknown }).currency
+  return typeof c === 'string' && c.trim() !== '' ? c.trim() : null
+}
+
+/**
+ * An amount of money in words: "95.00 EUR" with a currency; without one, the number and what it is in:
+ * "95.00 in example-price units (no currency)" when every price is an example, else "95.00 (your prices' currency)".
+ */
+export function moneyWords(
+  value: number | null,
+  a: { heat: object },
+  allExample: boolean,
+  digits = 2,
+): string {
+  const c = currencyOf(a)
+  const n = formatNumber(value, digits)
+  if (c) return `${n} ${c}`
+  return allExample ? `${n} in example-price units (no currency)` : `${n} (in your prices' currency)`
 }
 
 /** "per tonne" or "per short ton" for the unit system. */

@@ -7,7 +7,9 @@ import { heatMapChart } from '../charts/heat-map.ts'
 import { MONTH_LONG, MONTH_SHORT } from '../charts/svg.ts'
 import { figureHtml } from '../figure.ts'
 import type { ReportTable } from '../tables.ts'
+import { clockShort } from '../words.ts'
 import { finite, round, type SectionContext } from './context.ts'
+import { siteClock } from './summary.ts'
 
 /** `fractions[month-1][hour]` (12 × 24, null where no data); null when the assessment has none. */
 export function hourOfDayFractions(a: Assessment): (number | null)[][] | null {
@@ -27,10 +29,10 @@ export function hourOfDayFractions(a: Assessment): (number | null)[][] | null {
   return out
 }
 
-export function hourOfDayTable(fr: (number | null)[][]): ReportTable {
+export function hourOfDayTable(fr: (number | null)[][], clock = "the site's clock"): ReportTable {
   return {
     id: 'hour-of-day-usable-share',
-    title: 'Share of usable drying hours by local hour and month [%]',
+    title: `Share of usable drying hours by hour (${clock}) and month [%]`,
     columns: ['hour', ...MONTH_SHORT],
     rows: Array.from({ length: 24 }, (_, h) => [
       `${String(h).padStart(2, '0')}:00`,
@@ -54,7 +56,7 @@ export function hourOfDayAlt(fr: (number | null)[][]): string {
   })
   if (best.m < 0) return 'No hour-of-day data.'
   return (
-    `Each cell is the share of hours at that local hour in that month that dry the product (darker = more; the number is the percentage, blank = 0 %). ` +
+    `Each cell is the share of hours at that hour of the site's clock in that month that dry the product (darker = more; the number is the percentage, blank = 0 %). ` +
     `Highest: ${MONTH_LONG[best.m]} at ${String(best.h).padStart(2, '0')}:00, ${Math.round(best.v * 100)} %. ` +
     (windows.length
       ? `Hours usable at least half of the time: ${windows.join(', ')}.`
@@ -74,7 +76,7 @@ export function hourOfDaySection(a: Assessment, ctx: SectionContext): string {
     title: `Usable share by hour of day and month, ${ctx.siteName}`,
     description: alt,
     fractions: fr,
-    hourLabel: `local standard time (UTC${a.site.utcOffsetHours >= 0 ? '+' : ''}${a.site.utcOffsetHours})`,
+    hourLabel: `hour on the site's clock (${clockShort(siteClock(a))})`,
   })
   return `<section class="report-section" id="${ctx.idPrefix}sec-hours" data-section="hour-of-day"><h2>Hours of the day</h2>${figureHtml(
     {
@@ -83,7 +85,7 @@ export function hourOfDaySection(a: Assessment, ctx: SectionContext): string {
       caption: 'Share of usable drying hours by hour of day and month (all years together)',
       svg,
       alt,
-      table: hourOfDayTable(fr),
+      table: hourOfDayTable(fr, clockShort(siteClock(a))),
     },
   )}</section>`
 }

@@ -3,14 +3,29 @@
  * Usable drying hours per month: median with the P10–P90 spread across years (figure), the monthly
  * table and the year × month table.
  */
+
+import { HOUR_STATUS_NAMES } from '../../drying/usable-hour.ts'
 import type { Assessment } from '../assessment-view.ts'
 import { spreadBarsChart } from '../charts/spread-bars.ts'
 import { MONTH_LONG, MONTH_SHORT } from '../charts/svg.ts'
 import { figureHtml } from '../figure.ts'
 import type { ReportTable } from '../tables.ts'
+import { REASON_WORDS } from '../words.ts'
 import { finite, type SectionContext } from './context.ts'
+import { stopsAtNight } from './summary.ts'
+
+/** The reason most of a month's hours that do not dry fail, in words ("night: covered or fans off (293 h)"). */
+export function mainReasonWords(m: Assessment['monthly'][number]): string {
+  const reasons = HOUR_STATUS_NAMES.filter((r) => r !== 'usable')
+    .map((r) => [r, m.medianHoursByReason?.[r] ?? 0] as const)
+    .sort((x, y) => y[1] - x[1])
+  return reasons[0] && reasons[0][1] > 0
+    ? `${REASON_WORDS[reasons[0][0]]} (${reasons[0][1]} h)`
+    : 'none: every hour dries'
+}
 
 export function monthlyTable(a: Assessment): ReportTable {
+  const daylight = stopsAtNight(a) && a.monthly.some((m) => finite(m.usableDaylightFraction))
   return {
     id: 'monthly-usable-hours',
     title: 'Usable drying hours per month across years',
@@ -20,21 +35,26 @@ export function monthlyTable(a: Assessment): ReportTable {
       'P10, exceeded in 9 of 10 years [h]',
       'P90, exceeded in 1 of 10 years [h]',
       'years with data',
-      'usable share of hours [%]',
+      daylight ? 'usable share of daylight hours [%]' : 'usable share of all hours, day and night [%]',
+      'main reason an hour does not dry (median hours)',
       'median days to target, batches started in the month',
       'spoiled before dry, batches started in the month [%]',
     ],
-    rows: a.monthly.map((m) => [
-      MONTH_LONG[m.month - 1] ?? String(m.month),
-      m.usableHours.median,
-      m.usableHours.p10,
-      m.usableHours.p90,
-      m.yearsWithData,
-      finite(m.usableFraction) ? Math.round(m.usableFraction * 1000) / 10 : null,
-      m.medianDaysToTarget,
-      finite(m.spoilage?.probability) ? Math.round((m.spoilage?.probability as number) * 1000) / 10 : null,
-    ]),
-    digits: [0, 0, 0, 0, 0, 1, 1, 0],
+    rows: a.monthly.map((m) => {
+      const share = daylight ? m.usableDaylightFraction : m.usableFraction
+      return [
+        MONTH_LONG[m.month - 1] ?? String(m.month),
+        m.usableHours.median,
+        m.usableHours.p10,
+        m.usableHours.p90,
+        m.yearsWithData,
+        finite(share) ? Math.round(share * 1000) / 10 : null,
+        mainReasonWords(m),
+        m.medianDaysToTarget,
+        finite(m.spoilage?.probability) ? Math.round((m.spoilage?.probability as number) * 1000) / 10 : null,
+      ]
+    }),
+    digits: [0, 0, 0, 0, 0, 1, 0, 1, 0],
   }
 }
 

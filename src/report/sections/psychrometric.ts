@@ -10,24 +10,33 @@ import { psychrometricChart } from '../charts/psychrometric.ts'
 import { formatNumber } from '../display-units.ts'
 import { figureHtml } from '../figure.ts'
 import type { ReportTable } from '../tables.ts'
-import { finite, type SectionContext } from './context.ts'
+import { finite, round, type SectionContext } from './context.ts'
 
-export function psychroTable(d: PsychroDensity): ReportTable {
+/** 1 kPa in inches of mercury (conventional, 0 °C): 1 inHg = 3.386 389 kPa (NIST SP 811, 2008, B.8; from memory, consistent with 1 standard atmosphere = 101.325 kPa = 29.921 inHg). */
+const KPA_TO_IN_HG = 1 / 3.386389
+
+export function psychroTable(d: PsychroDensity, ctx?: Pick<SectionContext, 'units'>): ReportTable {
+  const u = ctx?.units
+  const t = (c: number) => (u ? round(u.temperature(c).value, 1) : c)
+  const w = (g: number) => (u ? round(u.humidityRatio(g).value, 2) : g)
+  const tUnit = u?.temperatureUnit ?? '°C'
+  const wUnit = u?.humidityRatioUnit ?? 'g/kg'
   return {
     id: 'psychrometric-hours',
-    title: 'Hours by dry bulb and humidity ratio (bin lower edges)',
+    title: 'Hours by dry bulb and humidity ratio (bins)',
     columns: [
-      'dry bulb from [°C]',
-      'dry bulb to [°C]',
-      'humidity ratio from [g/kg]',
-      'humidity ratio to [g/kg]',
+      `dry bulb from [${tUnit}]`,
+      `dry bulb to [${tUnit}]`,
+      `humidity ratio from [${wUnit}]`,
+      `humidity ratio to [${wUnit}]`,
       'hours',
     ],
+    digits: [0, 1, 2, 2, 0],
     rows: d.cells.map((c) => [
-      String(c.dryBulbC),
-      c.dryBulbC + d.binDryBulbC,
-      c.humidityRatioGPerKg,
-      c.humidityRatioGPerKg + d.binHumidityRatioGPerKg,
+      String(t(c.dryBulbC)),
+      t(c.dryBulbC + d.binDryBulbC),
+      w(c.humidityRatioGPerKg),
+      w(c.humidityRatioGPerKg + d.binHumidityRatioGPerKg),
       c.hours,
     ]),
   }
@@ -47,10 +56,12 @@ export function psychrometricSection(a: Assessment, ctx: SectionContext): string
   const share = region ? d.shareOfHoursInRegion : null
   const limit = a.product.maxProductTempC
   const alt =
-    `${formatNumber(d.hoursCounted)} hours plotted by dry bulb and humidity ratio at about ${formatNumber(d.pressureKpa, 1)} kPa; dashed curves are relative humidity 10 to 90 %, the solid curve saturation. ` +
+    `${formatNumber(d.hoursCounted)} hours plotted by dry bulb and humidity ratio at about ${ctx.units.system === 'us' ? `${formatNumber(d.pressureKpa * KPA_TO_IN_HG, 2)} inHg` : `${formatNumber(d.pressureKpa, 1)} kPa`}; dashed curves are relative humidity 10 to 90 %, the solid curve saturation. ` +
     (region
       ? `The hatched region below the blue curve is air whose relative humidity is below the product's equilibrium RH at the target moisture` +
-        (limit !== null ? `, up to its temperature limit of ${formatNumber(limit, 0)} °C` : '') +
+        (limit !== null
+          ? `, up to its temperature limit of ${formatNumber(ctx.units.temperature(limit).value, 0)} ${ctx.units.temperatureUnit}`
+          : '') +
         `; ${share !== null ? `${Math.round(share * 100)} % of the hours fall in it (before sun, rain and night rules).` : ''}`
       : 'The drying region is not drawn: the product isotherm is not available to the report.')
   const svg = psychrometricChart({
@@ -69,7 +80,7 @@ export function psychrometricSection(a: Assessment, ctx: SectionContext): string
       'Every hour of the file by dry bulb and humidity ratio, with the air that dries the product to its target',
     svg,
     alt,
-    table: psychroTable(d),
+    table: psychroTable(d, ctx),
     note: 'The region uses the air as it is; sun on the product (open air) or heating (solar cabinet, heated air) moves an hour to the right, toward drier relative humidity.',
   })}</section>`
 }

@@ -7,26 +7,30 @@ import type { StartWindow } from '../../analysis/assessment.ts'
 import type { Assessment } from '../assessment-view.ts'
 import { lineBandChart } from '../charts/line-band.ts'
 import { formatNumber } from '../display-units.ts'
+import { escapeHtml } from '../escape.ts'
 import { figureHtml } from '../figure.ts'
-import type { ReportTable } from '../tables.ts'
+import { type ReportTable, tableHtml } from '../tables.ts'
+import { thinnedNote, yearsWords } from '../words.ts'
 import { finite, round, type SectionContext } from './context.ts'
+import { heatWord } from './heat.ts'
 
 export function startDatesTable(a: Assessment, ctx: SectionContext): ReportTable {
   const u = ctx.units
+  const heat = heatWord(a).toLowerCase()
   return {
     id: 'start-dates',
-    title: 'Batches by start date across years',
+    title: `Batches by start date across years (start at ${String(a.season.startHourLocal).padStart(2, '0')}:00 on the site's clock)`,
     columns: [
       'start (MM-DD)',
       'years',
       'days to target, median',
-      'days to target, P90',
-      `finished within ${a.deadlineDays} days [%]`,
-      `finished within ${a.maxDays} days [%]`,
+      'days to target, 9 in 10 years within',
+      `finished within ${a.deadlineDays} days [% of years]`,
+      `finished within ${a.maxDays} days [% of years]`,
       'rewetting hours, median',
       'rain-exposed hours, median',
-      `supplemental heat, median [${u.energyPerMassUnit}]`,
-      `supplemental heat, P90 [${u.energyPerMassUnit}]`,
+      `${heat}, median [${u.energyPerMassUnit}]`,
+      `${heat}, 1 in 10 batches [${u.energyPerMassUnit}]`,
       'years not reachable even with heat',
       'spoiled before dry [%]',
       'hours at risk of spoilage, median',
@@ -111,16 +115,18 @@ export function startDatesAlt(a: Assessment): string {
       ? `${notReached} of ${rows.length} start days do not reach the target within ${a.maxDays} days in the median year. `
       : '') +
     (w
-      ? `Best window ${w.from} to ${w.to}: ${w.minProbability >= 1 ? 'every year finishes' : `at least ${Math.round(w.minProbability * 100)} % of years finish`} within the deadline.`
+      ? `Best window ${w.from} to ${w.to}: batches finish within the deadline ${w.minProbability >= 1 ? 'in every year' : `in at least ${yearsWords(w.minProbability)}`}.`
       : 'No start window finishes within the deadline in most years.')
   )
 }
 
-export function startDatesSection(a: Assessment, ctx: SectionContext): string {
-  const head = `<section class="report-section" id="${ctx.idPrefix}sec-starts" data-section="start-dates"><h2>When to start a batch</h2>`
-  if (a.startDates.length === 0)
-    return `${head}<p class="missing">No start dates were assessed.</p></section>`
-  const id = `${ctx.idPrefix}fig-start-dates`
+/** The days-to-target chart with its full table view; `compact` for the handout (a shorter chart, no note). */
+export function startDatesFigure(
+  a: Assessment,
+  ctx: SectionContext,
+  o: { compact?: boolean; idSuffix?: string } = {},
+): string {
+  const id = `${ctx.idPrefix}fig-start-dates${o.idSuffix ?? ''}`
   const alt = startDatesAlt(a)
   const svg = lineBandChart({
     id: `${id}-svg`,
@@ -132,19 +138,81 @@ export function startDatesSection(a: Assessment, ctx: SectionContext): string {
       high: s.daysToTarget.p90,
     })),
     yLabel: 'days to target',
-    xLabel: 'start date (MM-DD)',
+    xLabel: `start date (MM-DD), batches starting at ${String(a.season.startHourLocal).padStart(2, '0')}:00`,
     unit: 'days',
-    highLabel: 'P90',
+    highLabel: 'P90 (9 in 10 years finish within)',
     reference: { value: a.deadlineDays, label: `deadline ${a.deadlineDays} days` },
   })
-  const crit = a.bestStartWindowCriterion ? `Best window criterion: ${a.bestStartWindowCriterion}` : undefined
-  return `${head}${figureHtml({
+  const crit = a.bestStartWindowCriterion
+    ? `Best window criterion: ${a.bestStartWindowCriterion}.`
+    : undefined
+  return figureHtml({
     id,
     number: ctx.nextFigure(),
-    caption: 'Days to reach the target moisture against the start date (median and P90 across years)',
+    caption:
+      'Days to reach the target moisture against the start date (median, and the days 9 in 10 years stay within)',
     svg,
     alt,
     table: startDatesTable(a, ctx),
-    note: crit,
-  })}</section>`
+    note: o.compact ? undefined : crit,
+    className: o.compact ? 'compact' : undefined,
+  })
+}
+
+export function startDatesSection(a: Assessment, ctx: SectionContext): string {
+  const head = `<section class="report-section" id="${ctx.idPrefix}sec-starts" data-section="start-dates"><h2>Days to dry by start date</h2>`
+  if (a.startDates.length === 0)
+    return `${head}<p class="missing">No start dates were assessed.</p></section>`
+  return `${head}${startDatesFigure(a, ctx)}</section>`
+}
+
+/** Rows a handout's start-date table shows at most (the rest: every n-th row, said under the table). */
+export const HANDOUT_START_ROWS = 18
+
+/**
+ * The handout's start-date table: start, days (median and 9 in 10 years), the share of years finishing by
+ * the deadline in words, and the heat to finish in time; every n-th start date when the season has more
+ * than `maxRows` (the note under it says so, and the appendix has all of them).
+ */
+export function handoutStartTable(a: Assessment, ctx: SectionContext, maxRows = HANDOUT_START_ROWS): string {
+  const rows = a.startDates
+  if (rows.length === 0) return '<p class="missing">No start dates were assessed.</p>'
+  const step = Math.max(1, Math.ceil(rows.length / maxRows))
+  const shown = rows.filter((_, i) => i % step === 0)
+  const u = ctx.units
+  const heat = heatWord(a).toLowerCase()
+  // no known outcome: no data at all, or batches that met hours without weather (unknown, not slow)
+  const noOutcome = (s: Assessment['startDates'][number]) =>
+    (s.yearsUnknown ?? 0) > 0 ? 'unknown' : 'no data'
+  const days = (s: Assessment['startDates'][number], v: number | null) =>
+    finite(v) ? formatNumber(v, 1) : s.years > 0 ? `over ${a.maxDays}` : noOutcome(s)
+  const table: ReportTable = {
+    id: 'handout-start-dates',
+    title: `A batch started on … (at ${String(a.season.startHourLocal).padStart(2, '0')}:00 on the site's clock)`,
+    columns: [
+      'start',
+      'days to dry, median',
+      'days, 9 in 10 years',
+      `done within ${a.deadlineDays} days`,
+      `${heat} to finish in time, median [${u.energyPerMassUnit}]`,
+    ],
+    digits: [0, 1, 1, 0, 0],
+    rows: shown.map((s) => [
+      s.start,
+      days(s, s.daysToTarget.median),
+      days(s, s.daysToTarget.p90),
+      s.years > 0 ? yearsWords(s.probabilityWithinDeadline) : noOutcome(s),
+      finite(s.supplementalHeat.medianKwhPerTonne)
+        ? round(u.energyPerMass(s.supplementalHeat.medianKwhPerTonne).value, 0)
+        : null,
+    ]),
+  }
+  const note = thinnedNote(
+    step,
+    shown.length,
+    rows.length,
+    'start date',
+    'the appendix (“When to start a batch”)',
+  )
+  return `${tableHtml(table, { className: 'data compact' })}${note ? `<p class="note thinned" data-thinned="${step}">${escapeHtml(note)}</p>` : ''}`
 }

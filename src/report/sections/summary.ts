@@ -1,15 +1,18 @@
 /**
  * @module report/sections/summary
- * The header (site, data, coverage, product, method, target) and the answer in plain sentences.
+ * The header (site, data, clock, product, method, season) and the answer in plain sentences, with the
+ * warnings that bear on it. Words, not identifiers; shares of years as "every year"; times on the site's
+ * clock; costs with their currency (or what they are in when there is none).
  */
 import { memoryFiguresLine } from '../../product/memory-figures.ts'
 import type { Assessment } from '../assessment-view.ts'
 import { MONTH_LONG } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
 import { escapeHtml } from '../escape.ts'
+import { clockShort, clockWords, yearsWords } from '../words.ts'
 import { binAnswerSentences } from './bin.ts'
-import { finite, perMassFactor, perMassWords, type SectionContext } from './context.ts'
-import { fuelName } from './heat.ts'
+import { finite, moneyWords, perMassFactor, perMassWords, type SectionContext } from './context.ts'
+import { fuelName, heatIsAllTheHeat } from './heat.ts'
 import { monthList, suitableMonths } from './monthly.ts'
 import { inTenYears } from './spoilage.ts'
 import { bestStartWindow } from './start-dates.ts'
@@ -23,8 +26,20 @@ function coord(v: number | null | undefined, pos: string, neg: string): string {
   return finite(v) ? `${formatNumber(Math.abs(v), 2)}° ${v >= 0 ? pos : neg}` : 'unknown'
 }
 
-function offsetText(h: number): string {
-  return `UTC${h >= 0 ? '+' : '−'}${Math.abs(h)}`
+/** The site's clock of an assessment made before it carried one (no `timeZone`: standard time). */
+export function siteClock(
+  a: Assessment,
+): Pick<Assessment['site'], 'timeZone' | 'utcOffsetHours' | 'utcOffsetSource'> {
+  return {
+    timeZone: a.site.timeZone ?? null,
+    utcOffsetHours: a.site.utcOffsetHours,
+    utcOffsetSource: a.site.utcOffsetSource,
+  }
+}
+
+/** "08:00 Europe/Madrid time": the batches' start hour on the site's clock, named. */
+export function startTimeWords(a: Assessment): string {
+  return `${String(a.season.startHourLocal).padStart(2, '0')}:00 ${clockShort(siteClock(a))}`
 }
 
 /** Which of the product's figures rest on memory, in one line (product/memory-figures.ts). */
@@ -57,16 +72,16 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
   rows.push([
     'Period',
     s.typicalYear
-      ? 'typical year (months from different years)'
-      : `${c.firstHourUtc.slice(0, 10)} to ${c.lastHourUtc.slice(0, 10)} (UTC), ${years} year${years === 1 ? '' : 's'} of data per month`,
+      ? 'a typical year (months taken from different years)'
+      : `${c.firstHourUtc.slice(0, 10)} to ${c.lastHourUtc.slice(0, 10)}, ${years} year${years === 1 ? '' : 's'} of data per month`,
   ])
   const withData = c.hours - c.missingHours
   rows.push([
     'Coverage',
     `${formatNumber(c.hours > 0 ? (100 * withData) / c.hours : null, 1)} % of ${formatNumber(c.hours)} hours with data${c.hasRainData ? '' : '; no rain data'}`,
   ])
-  rows.push(['Local time', `${offsetText(s.utcOffsetHours)} (${OFFSET_SOURCE_WORDS[s.utcOffsetSource]})`])
-  rows.push(['Product', `${a.product.name} (${a.product.id})`])
+  rows.push(['Clock', clockWords(siteClock(a))])
+  rows.push(['Product', a.product.name])
   rows.push([
     'Moisture',
     `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
@@ -74,13 +89,23 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
   rows.push(['Dry means', a.product.dryTarget.sentence])
   rows.push(['Recalled figures', productMemoryLine(a.product)])
   rows.push(['Method', methodName(a)])
+  const every = a.season.stepDays === 1 ? 'day' : `${a.season.stepDays} days`
   rows.push([
     'Season',
-    `start days ${a.season.start} to ${a.season.end}, every ${a.season.stepDays} day${a.season.stepDays === 1 ? '' : 's'} at ${String(a.season.startHourLocal).padStart(2, '0')}:00`,
+    a.bin
+      ? `the bin filled on dates from ${a.season.start} to ${a.season.end}, every ${every}, the fan starting at ${startTimeWords(a)}`
+      : `batches start ${a.season.start} to ${a.season.end}, every ${every}, at ${startTimeWords(a)}`,
   ])
   if (a.bin) rows.push(['Season in the bin', `${a.bin.seasonDays} days for the top layer to dry`])
-  else rows.push(['Deadline', `${a.deadlineDays} days per batch (counted as failed after ${a.maxDays} days)`])
-  rows.push(['Units', u.system === 'us' ? 'US customary (°F, lb, gal)' : 'SI'])
+  else
+    rows.push([
+      'Deadline',
+      `${a.deadlineDays} days per batch (a batch still drying after ${a.maxDays} days counts as failed)`,
+    ])
+  rows.push([
+    'Units',
+    u.system === 'us' ? 'US customary (°F, lb, short ton, gal, ft³)' : 'SI (°C, kg, tonne, L, m³)',
+  ])
   return rows
 }
 
@@ -89,6 +114,24 @@ export function headerHtml(a: Assessment, ctx: SectionContext): string {
     .map(([k, v]) => `<div class="kv"><dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd></div>`)
     .join('')
   return `<header class="report-header" data-section="header"><p class="kicker">dryhours · seasonal drying summary</p><h1>Can ${escapeHtml(ctx.siteName)} dry ${escapeHtml(a.product.name)}?</h1><dl class="facts">${rows}</dl></header>`
+}
+
+/** Whether the method stops drying at night (its usable hours are all daylight hours). */
+export function stopsAtNight(a: Assessment): boolean {
+  const night = a.monthly.map((m) => m.usableNightHoursShare).filter(finite)
+  if (night.length > 0) return night.every((x) => x === 0)
+  return (a.hoursByReason?.nightWithoutDrying ?? 0) > 0
+}
+
+/**
+ * The usable share of a month in words, saying which hours it counts: of its daylight hours for a method
+ * that stops at night, of all its hours otherwise. Null when the assessment has no such figure.
+ */
+export function usableShareWords(a: Assessment, m: Assessment['monthly'][number]): string | null {
+  if (stopsAtNight(a) && finite(m.usableDaylightFraction))
+    return `${Math.round(m.usableDaylightFraction * 100)} % of its daylight hours`
+  if (finite(m.usableFraction)) return `${Math.round(m.usableFraction * 100)} % of all its hours`
+  return null
 }
 
 /** The answer in plain sentences, most important first. */
@@ -112,13 +155,13 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     )
   }
   out.push(...spoilageSentences(a))
-  if (a.method.kind !== 'heated') out.push(...usableHourSentences(a))
+  if (!heatIsAllTheHeat(a)) out.push(...usableHourSentences(a))
   const w = bestStartWindow(a)
   if (w) {
     out.push(
       `The best start window is ${w.from} to ${w.to}: batches reach ${target} in about ${formatNumber(w.medianDays, 1)} days in a median year` +
         (finite(w.p90Days) ? ` and within ${formatNumber(w.p90Days, 1)} days in 9 of 10 years` : '') +
-        `; ${w.minProbability >= 1 ? 'every year finishes' : `at least ${Math.round(w.minProbability * 100)} % of years finish`} within ${a.deadlineDays} days` +
+        `; they finish within ${a.deadlineDays} days ${w.minProbability >= 1 ? 'in every year' : `in at least ${yearsWords(w.minProbability)}`}` +
         (finite(w.maxSpoilageProbability) && w.maxSpoilageProbability > 0
           ? typical
             ? ', but batches in it spoil before they are dry.'
@@ -130,7 +173,7 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
       y.probabilityWithinDeadline > x.probabilityWithinDeadline ? y : x,
     )
     out.push(
-      `No start day finishes within ${a.deadlineDays} days in most years${best.probabilityWithinDeadline > 0 ? `; the best, ${best.start}, does in ${Math.round(best.probabilityWithinDeadline * 100)} % of years` : ''}.`,
+      `No start day finishes within ${a.deadlineDays} days in most years${best.probabilityWithinDeadline > 0 ? `; the best, ${best.start}, does in ${yearsWords(best.probabilityWithinDeadline)}` : ''}.`,
     )
   }
   const heat = a.heat.heatToAirKwhPerTonne
@@ -140,11 +183,15 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
     const cost = fuel && finite(fuel.costPerTonne) ? fuel.costPerTonne * perMassFactor(ctx) : null
     const costText =
       fuel && finite(cost)
-        ? `, costing about ${formatNumber(cost, 0)} ${perMassWords(ctx)} in ${fuelName(fuel)}${fuel.priceIsExample ? ' at the example price' : ''}`
+        ? `, costing about ${moneyWords(cost, a, fuel.priceIsExample, 0)} ${perMassWords(ctx)} in ${fuelName(fuel)}${fuel.priceIsExample ? ' at an example price' : ''}`
         : ''
     const e = (v: number | null) =>
       `${formatNumber(finite(v) ? u.energyPerMass(v).value : null)} ${u.energyPerMassUnit}`
-    if (heat.median === 0 && (!finite(heat.p90) || heat.p90 === 0)) {
+    if (heatIsAllTheHeat(a)) {
+      out.push(
+        `The dryer's heater supplies all the heat: about ${e(heat.median)} into the air for a median batch to finish by the deadline (1 in 10 batches: ${e(heat.p90)}), ${e(fuelHeat.median)} of fuel heat${costText}.`,
+      )
+    } else if (heat.median === 0 && (!finite(heat.p90) || heat.p90 === 0)) {
       out.push(
         'Batches started in this season need no supplemental heat to finish by the deadline in 9 of 10 cases.',
       )
@@ -154,13 +201,13 @@ export function answerSentences(a: Assessment, ctx: SectionContext): string[] {
       )
     } else {
       out.push(
-        `To finish by the deadline, ${a.method.kind === 'heated' ? "the dryer's heater" : 'a backup heater'} adds about ${e(heat.median)} to the air in a median batch (1 in 10 batches: ${e(heat.p90)}), ${e(fuelHeat.median)} of fuel heat${costText}.`,
+        `To finish by the deadline, a backup heater adds about ${e(heat.median)} to the air in a median batch (1 in 10 batches: ${e(heat.p90)}), ${e(fuelHeat.median)} of fuel heat${costText}.`,
       )
     }
   }
   if (a.method.kind === 'open-air' || a.method.kind === 'shade') {
     out.push(
-      'A solar cabinet heats the air before it reaches the product, which lowers its relative humidity: assess the same file with the solar-cabinet method to see how many hours and days it gains.',
+      'A solar cabinet heats the air before it reaches the product, which lowers its relative humidity: assess the same file with the solar-cabinet method (or the methods side by side) to see how many hours and days it gains.',
     )
   }
   return out
@@ -251,29 +298,36 @@ function usableHourSentences(a: Assessment): string[] {
   const subject = a.bin
     ? 'The air blown into the bin can dry the grain toward the target'
     : 'The air dries the product'
+  const share = usableShareWords(a, top)
   return [
-    `${subject} most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} usable hours ${median}` +
+    `${subject} most hours in ${MONTH_LONG[top.month - 1]}: ${formatNumber(top.usableHours.median)} hours ${median}${share ? ` (${share})` : ''}` +
       (typical || !finite(top.usableHours.p10)
         ? '.'
-        : `, at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
+        : `, and at least ${formatNumber(top.usableHours.p10)} in 9 of 10 years.`),
   ]
 }
 
-export function answerHtml(a: Assessment, ctx: SectionContext): string {
+/** The warnings that bear on the answer: the assessment's, then the weather file's (option names for the surface). */
+export function warningList(a: Assessment, ctx: SectionContext): string[] {
+  return [...a.warnings, ...(ctx.info.readerWarnings ?? []).map((w) => `weather file: ${w}`)].map(
+    ctx.optionWords,
+  )
+}
+
+/** The answer section; `maxWarnings` shortens the warning list (the handout), saying where the rest are. */
+export function answerHtml(
+  a: Assessment,
+  ctx: SectionContext,
+  maxWarnings = Number.POSITIVE_INFINITY,
+): string {
   const items = answerSentences(a, ctx)
     .map((s) => `<li>${escapeHtml(s)}</li>`)
     .join('')
-  const all = [...a.warnings, ...(ctx.info.readerWarnings ?? []).map((w) => `weather file: ${w}`)]
+  const all = warningList(a, ctx)
+  const shown = all.slice(0, maxWarnings)
+  const more = all.length - shown.length
   const warnings = all.length
-    ? `<div class="warnings" role="note"><h3>Warnings</h3><ul>${all.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`
+    ? `<div class="warnings" role="note" data-warnings="${all.length}"><h3>Warnings</h3><ul>${shown.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul>${more > 0 ? `<p class="note">${more} more warning${more === 1 ? '' : 's'} in the appendix (“Warnings and notes”).</p>` : ''}</div>`
     : ''
   return `<section class="report-section answer" id="${ctx.idPrefix}sec-answer" data-section="answer"><h2>The answer</h2><ul class="sentences">${items}</ul>${warnings}</section>`
-}
-
-const OFFSET_SOURCE_WORDS: Record<string, string> = {
-  option: 'as given',
-  file: 'from the file',
-  timestamps: "from the file's local timestamps",
-  longitude: 'from the longitude',
-  'assumed-utc': 'assumed',
 }

@@ -65,7 +65,7 @@ export const agNetwork: WeatherDialect = {
     const first = cellsOf(head.lines[1] ?? '')
     const names = cellsOf(head.lower[0] ?? '')
     table.statements = stated({ siteName: first[names.indexOf('stn name')], dialect: 'ag-network-hourly' })
-    ctx.warnings.push(
+    ctx.notes.push(
       'agricultural network report: hours 0100–2400 end the hour they describe, in local standard time all year; ' +
         'values flagged M, R, N, S or I read as missing (Y kept); humidity from the dew point (tenths of a degree) rather than the whole-percent RH; ' +
         'vapour pressure and ETo not used; the station location is not in the file',

@@ -70,7 +70,7 @@ export const consoleExport: WeatherDialect = {
     table.labels = 'end'
     table.sampling = 'readings'
     table.statements = stated({ dialect: 'console-export', timestampsInSiteClock: true })
-    ctx.warnings.push(
+    ctx.notes.push(
       `console export: ${us ? 'barometer in inches of mercury, so US units (°F, mph, in)' : 'barometer in hPa, so metric units (°C, m/s, mm)'}; ` +
         'each row ends its archive interval (means and totals over the interval before it); Bar is reduced to sea level and not used; ' +
         "the clock is the station's local time, not stated in the file",

@@ -48,6 +48,8 @@ export interface DialectContext {
   mapping: Partial<Record<MappingKey, ColumnMapping>>
   log: ProblemLog
   warnings: string[]
+  /** How the layout was read (its conventions, columns left out): notes, not problems. */
+  notes: string[]
   headerLine?: number
   /** The user gave the timestamps' clock (`--utc-offset` or `--tz`). */
   clockGiven: boolean

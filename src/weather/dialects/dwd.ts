@@ -249,7 +249,7 @@ export const dwdHourly: WeatherDialect = {
       windHeightM: table.columns.wind ? 10 : undefined,
       dialect: id,
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `DWD product${products.length > 1 ? 's' : ''} ${products.join(', ')}: times in UTC, -999 missing, P (sea level) not used` +
         (blocks.length > 1 ? `; ${blocks.length} products merged by MESS_DATUM` : '') +
         (merged?.shifted

@@ -84,7 +84,7 @@ export const era5: WeatherDialect = {
       windHeightM: 10,
       dialect: 'era5',
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `ERA5-style columns: times in UTC; t2m/d2m in K, sp in Pa, tp in m; ssrd and tp ${runningTotal ? 'accumulated from 00 UTC (ERA5-Land): differenced hour by hour' : 'accumulated over the hour ending at each time'}; coordinates are the grid point's`,
     )
     return { table, info }

@@ -106,7 +106,7 @@ export const iemAsos: WeatherDialect = {
       ctx.warnings.push(
         'IEM ASOS times read as UTC (the download default); give --utc-offset or --tz if another zone was chosen',
       )
-    ctx.warnings.push(
+    ctx.notes.push(
       subHourly
         ? `readings every ${spacing} min; p01i is a running amount since the hourly reset`
         : 'hourly reports (routine near :53, specials between); p01i is the precipitation since the previous routine report',

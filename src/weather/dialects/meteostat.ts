@@ -56,7 +56,7 @@ function finish(reading: DialectReading, ctx: DialectContext, id: string): Diale
   table.labels = 'start'
   table.sampling = 'readings'
   table.statements = stated({ timestampUtcOffsetHours: 0, windHeightM: 10, dialect: id })
-  ctx.warnings.push(
+  ctx.notes.push(
     'Meteostat: times in UTC; wspd in km/h; prcp over the hour ending at each time; pres is reduced to sea level and not used as station pressure; tsun (sunshine minutes) not used',
   )
   return reading
@@ -100,7 +100,7 @@ export const meteostatBulk: WeatherDialect = {
     return looksLikeBulkRow(first) && first.split(',').length === BULK_COLUMNS.length
   },
   read(text, _head, ctx) {
-    ctx.warnings.push(`no header row: columns read as Meteostat's ${BULK_COLUMNS.join(',')}`)
+    ctx.notes.push(`no header row: columns read as Meteostat's ${BULK_COLUMNS.join(',')}`)
     return finish(
       readDelimited(text, ctx.mapping, ctx.log, ctx.warnings, {
         headerRow: -1,

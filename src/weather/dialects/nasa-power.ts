@@ -107,7 +107,7 @@ export const nasaPower: WeatherDialect = {
           : undefined,
       dialect: 'nasa-power',
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `NASA POWER header: ${solarTime ? 'local solar time (UTC + longitude/15 h)' : 'times in UTC'}; ` +
         `elevation ${Number.isFinite(elevation) ? `${elevation} m is the grid cell's mean` : 'not stated'}; ` +
         'each row describes the hour that starts at its time',

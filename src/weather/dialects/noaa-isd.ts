@@ -108,7 +108,7 @@ export const noaaIsd: WeatherDialect = {
       windHeightM: 10,
       dialect: 'noaa-isd',
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `ISD station ${snippet(at('station') ?? '')}: times in UTC; TMP/DEW/WND/MA1/AA1 decoded (scale 10, quality codes 2, 3, 6, 7 rejected); ` +
         'station pressure from MA1 (SLP is sea-level pressure, not used); AA1 read only when it covers one hour',
     )

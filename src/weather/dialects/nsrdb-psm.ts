@@ -71,7 +71,7 @@ export const nsrdbPsm: WeatherDialect = {
       siteUtcOffsetHours: numberOf(meta('local time zone')),
       dialect: 'nsrdb-psm',
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `NSRDB metadata: location ${meta('location id') ?? '?'}, timestamps at UTC${offset >= 0 ? '+' : ''}${offset} h; instantaneous values at the stamp (HH:30 describes HH:00–HH+1:00)`,
     )
     return { table, info }

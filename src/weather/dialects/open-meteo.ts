@@ -72,7 +72,7 @@ export const openMeteo: WeatherDialect = {
       timestampUtcOffsetHours: offsetSeconds / S_PER_HOUR,
       siteTimeZone: isIanaZone(zone) && zone !== 'GMT' && zone !== 'UTC' ? zone : undefined,
     })
-    ctx.warnings.push(
+    ctx.notes.push(
       `Open-Meteo metadata: grid cell at ${meta('latitude')}, ${meta('longitude')}, ${meta('elevation')} m; ` +
         `times at the fixed offset of ${Number.isFinite(offsetSeconds) ? offsetSeconds / S_PER_HOUR : '?'} h (${snippet(zone)}); ` +
         'radiation and precipitation cover the hour before each time',

@@ -64,7 +64,7 @@ function readPvgis(
     },
   })
   if (!horizontal && !table.columns.ghi)
-    ctx.warnings.push(`G(i) is the irradiance on a plane tilted ${slope}°, not global horizontal: not used`)
+    ctx.notes.push(`G(i) is the irradiance on a plane tilted ${slope}°, not global horizontal: not used`)
   // Instantaneous satellite values (scan time HH:10): each stands for the hour it falls in.
   if (table.columns.ghi) table.columns.ghi.timing = { kind: 'instant' }
   table.labels = 'start'
@@ -77,7 +77,7 @@ function readPvgis(
     windHeightM: table.columns.wind ? 10 : undefined,
     dialect: typicalYear ? 'pvgis-tmy' : 'pvgis-hourly',
   })
-  ctx.warnings.push(
+  ctx.notes.push(
     `PVGIS ${typicalYear ? 'typical year' : 'hourly series'}: times in UTC; instantaneous values, each describing the hour its stamp falls in; footer lines not read`,
   )
   return { table, info }

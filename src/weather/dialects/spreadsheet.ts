@@ -130,7 +130,7 @@ function stepMinutes(table: RawTable): number {
   return Number.isFinite(best) ? best : Number.NaN
 }
 
-function endLabelSubHourly(table: RawTable, warnings: string[]): void {
+function endLabelSubHourly(table: RawTable, notes: string[]): void {
   const step = stepMinutes(table)
   if (!(step < 60)) return
   for (const variable of ['wind', 'ghi', 'rain'] as const) {
@@ -142,7 +142,7 @@ function endLabelSubHourly(table: RawTable, warnings: string[]): void {
       intervalMinutes: step,
     }
   }
-  warnings.push(
+  notes.push(
     `readings every ${step} min: wind, irradiance and precipitation read as means or totals over the ${step} minutes ending at each time (give --labels start if they begin there)`,
   )
 }
@@ -157,7 +157,7 @@ export const spreadsheet: WeatherDialect = {
     const language = headerLanguage(head) ?? 'xx'
     const reading = readDelimited(text, ctx.mapping, ctx.log, ctx.warnings, { headerLine: ctx.headerLine })
     const table = reading.table
-    endLabelSubHourly(table, ctx.warnings)
+    endLabelSubHourly(table, ctx.notes)
     const id = `spreadsheet-${language}`
     table.dialect = { id, title: `Spreadsheet CSV (${LANGUAGE_NAMES[language] ?? language} headers)` }
     table.statements = { ...table.statements, ...stated({ dialect: id }), timestampsInSiteClock: true }
@@ -184,7 +184,7 @@ export const excelUnitsRow: WeatherDialect = {
   },
   read(text: string, _head: DialectHead, ctx: DialectContext): DialectReading {
     const reading = readDelimited(text, ctx.mapping, ctx.log, ctx.warnings, { headerLine: ctx.headerLine })
-    endLabelSubHourly(reading.table, ctx.warnings)
+    endLabelSubHourly(reading.table, ctx.notes)
     reading.table.statements = {
       ...reading.table.statements,
       ...stated({ dialect: 'excel-units-row' }),

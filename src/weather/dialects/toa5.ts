@@ -45,7 +45,7 @@ export const toa5: WeatherDialect = {
     table.labels = 'start'
     table.sampling = 'readings'
     table.statements = stated({ siteName: environment[1]?.trim(), dialect: 'toa5' })
-    ctx.warnings.push(
+    ctx.notes.push(
       `TOA5 table '${environment[7] ?? ''}' from station '${environment[1] ?? ''}': TIMESTAMP ends each interval (Avg and Tot cover the interval before it, Smp is taken at it); the logger clock's zone is not in the file`,
     )
     return { table, info }

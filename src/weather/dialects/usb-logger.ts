@@ -36,7 +36,7 @@ export const usbLogger: WeatherDialect = {
     table.labels = 'start'
     table.sampling = 'readings'
     table.statements = stated({ siteName: title || undefined, dialect: 'usb-logger' })
-    ctx.warnings.push(
+    ctx.notes.push(
       'logger export: instantaneous samples; event columns (coupler, host, end of file) ignored; rows without readings are skipped',
     )
     return { table, info }

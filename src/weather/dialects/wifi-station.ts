@@ -60,7 +60,7 @@ export const wifiStation: WeatherDialect = {
     table.labels = 'start'
     table.sampling = 'readings'
     table.statements = stated({ dialect: 'wifi-station', timestampsInSiteClock: true })
-    ctx.warnings.push(
+    ctx.notes.push(
       'Wi-Fi station export: outdoor readings only; ABS pressure is station pressure (REL is reduced to sea level, not used); ' +
         "rain from the Daily Rain counter (it resets at local midnight); the clock is the station's local time, not stated in the file",
     )

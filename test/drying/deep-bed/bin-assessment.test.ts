@@ -146,6 +146,23 @@ describe('natural-air bin assessment over years', () => {
     expect(a.starts[0].runs[0].daysUntilTopDry).not.toBeNull() // ran on into January of the same file
   })
 
+  it("starts on the site's clock when it is given: a summer clock an hour ahead starts as standard time + 1 h", () => {
+    const w = tenYears((y) => (y % 3 === 0 ? 'medium' : 'good'))
+    const pick = (a: ReturnType<typeof assess>) =>
+      a.starts.map((s) => s.runs.map((r) => [r.year, r.daysUntilTopDry, r.initialGrainTempC]))
+    // standard time UTC−6, daylight saving time UTC−5 in September (as America/Chicago)
+    const summer = assess(w, {
+      utcOffsetHours: -6,
+      startHourLocal: 8,
+      toUtcMs: (y, m, d, h) => Date.UTC(y, m - 1, d, h) + 5 * 3_600_000,
+    })
+    const standardPlusOne = assess(w, { utcOffsetHours: -5, startHourLocal: 8 })
+    const standard = assess(w, { utcOffsetHours: -6, startHourLocal: 8 })
+    expect(pick(summer)).toEqual(pick(standardPlusOne))
+    // and the hour makes a difference here (the test could fail): grain goes in at another temperature
+    expect(pick(summer)).not.toEqual(pick(standard))
+  })
+
   it('rejects bad dates, airflows and seasons by name', () => {
     const w = tenYears(() => 'good')
     expect(() => assess(w, { startDates: [{ month: 2, day: 30 }] })).toThrow(/start date/)
