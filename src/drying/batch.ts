@@ -186,7 +186,7 @@ export function simulateBatch(
         const capScale = c === primary ? capScalePrimary : capScaleBackup
         if (m > c.emcDesorptionDb[i]) {
           const cap = c.capDbPerH[i] * capScale
-          const drop = dryingDropDb(c, i, m, cap, initialDb, ts)
+          const drop = airLimitedDrop(c, i, dryingDropDb(c, i, m, cap, initialDb, ts), capScale)
           // the share of the hour's free-water limit evaporated (an unknown limit: as a free-water surface)
           wetShare = cap > 0 ? drop / cap : drop > 0 ? 1 : 0
           if (c.surfaceBalance && cap > 0) tHour -= (drop / cap) * (tHour - c.productWetC[i])
@@ -270,6 +270,18 @@ function dryingDropDb(
     ts,
   )
   return surfaceBalancedDrop(dropDry, dropWet, cap)
+}
+
+/**
+ * A forced-air method on a surface balance (the tunnel): the hour's drop `drop` [kg/kg db], never more than the
+ * air stream can carry away (its {@link HourlyConditions.airCapDbPerH} × `capScale`); unchanged for other methods.
+ */
+function airLimitedDrop(c: HourlyConditions, i: number, drop: number, capScale: number): number {
+  if (c.airCapDbPerH.length === 0) return drop
+  const air = c.airCapDbPerH[i] * capScale
+  // (not Math.min: a NaN limit leaves the drop as it is)
+  if (drop > air) return air
+  return drop
 }
 
 /**

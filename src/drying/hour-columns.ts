@@ -93,6 +93,12 @@ export interface HourColumns {
    * matter of fresh product at `initialWbPct` (see {@link HourlyConditions.capInitialDb}).
    */
   capDbPerH: Float64Array
+  /**
+   * Forced-air methods on a surface balance (the tunnel): the air's own limit [kg per kg dry matter per h], the
+   * deficit to saturation × the hour's air flow, while {@link capDbPerH} is the wet-surface evaporation; a batch
+   * removes no more than the smaller. Empty (length 0) for other methods.
+   */
+  airCapDbPerH: Float64Array
   emcDesorptionDb: Float64Array
   /** The same array as {@link emcDesorptionDb} when the profile has one isotherm for both directions. */
   emcAdsorptionDb: Float64Array
@@ -122,7 +128,7 @@ export interface HourlyConditions extends HourColumns {
   /** Dry-air flow per tonne of fresh product [kg/s]; 0 for exposed methods. */
   airFlowKgPerSPerTonne: number
   /**
-   * True for exposed methods: the product's temperature follows its surface energy balance, between
+   * True for exposed methods and the tunnel: the product's temperature follows its surface energy balance, between
    * {@link HourColumns.productWetC} and {@link HourColumns.productC} by the share of the wet-surface rate it
    * evaporates (drying/batch.ts). False: the product is at {@link HourColumns.productC} whatever it evaporates.
    */
@@ -145,6 +151,7 @@ export function allocateColumns(
   options: HourlyConditionsOptions,
   sameIsotherm: boolean,
   surfaceBalance: boolean,
+  airCap = false,
 ): HourColumns {
   const verdict = options.verdict !== false
   const diagnostics = options.diagnostics !== false
@@ -177,6 +184,7 @@ export function allocateColumns(
     deficitToTargetGPerKg: f(nMonthly),
     evaporationKgPerM2H: f(nMonthly),
     capDbPerH: f(n),
+    airCapDbPerH: f(airCap ? n : 0),
     emcDesorptionDb,
     // one isotherm for both directions: the two columns are one array (same values, half the memory)
     emcAdsorptionDb: sameIsotherm ? emcDesorptionDb : f(n),

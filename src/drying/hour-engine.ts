@@ -32,6 +32,8 @@ export class Engine {
   assumedIrradianceHours = 0
   assumedWindHours = 0
   readonly exposed: boolean
+  /** The product's temperature follows its surface balance (exposed methods and the tunnel). */
+  readonly surfaceBalance: boolean
   constructor(
     readonly series: HourlySeries,
     readonly columns: HourColumns,
@@ -49,5 +51,6 @@ export class Engine {
     readonly forcedCapFactor: number,
   ) {
     this.exposed = model.exposure === 'exposed'
+    this.surfaceBalance = this.exposed || model.surfaceBalance === true
   }
 }

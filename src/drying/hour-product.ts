@@ -106,7 +106,7 @@ export function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceS
   c.rewetDecayPerHour[i] = Math.exp(
     -product.rewettingRateFactor * firstOrderRateConstant(k, nExp, product.thompsonTimeScale),
   )
-  if (e.exposed) wetSurfaceResponse(e, i)
+  if (e.surfaceBalance) wetSurfaceResponse(e, i)
   // Deficits are taken for air at the product temperature (it is what touches the product).
   // Deficit to saturation: the forced-air constant-rate limit. Exposed methods use the Penman rate as
   // their limit and skip it (NaN), which saves a solver per hour.
@@ -133,10 +133,11 @@ export function productHour(e: Engine, i: number, surfaceRhPct: number, surfaceS
   const evaporation = hour.evaporationKgPerM2H
   c.evaporationKgPerM2H[i] = evaporation
   // a forced-air method's flow share of the hour (fans on a PV module) scales its limit; 1 for the others
-  c.capDbPerH[i] = exposed
-    ? Math.max(0, evaporation) * e.exposedCapFactor
-    : dSat * e.forcedCapFactor * hour.airFlowShare
-  if (exposed) {
+  const airCap = exposed ? Number.NaN : dSat * e.forcedCapFactor * hour.airFlowShare
+  // a product on its surface balance: the wet-surface evaporation (per m² of floor → per kg dry matter)
+  c.capDbPerH[i] = e.surfaceBalance ? Math.max(0, evaporation) * e.exposedCapFactor : airCap
+  c.airCapDbPerH[i] = airCap
+  if (e.surfaceBalance) {
     // vapour uptake limit (drying/batch.ts rewetting): conductance × (ea − aw·es(T_product)), per kg dry matter
     const g = hour.vaporConductanceKgPerM2HKpa * e.exposedCapFactor
     c.vaporUptakeAirDbPerH[i] = g * hour.vaporPressureKpa

@@ -121,6 +121,7 @@ function markMissing(e: Engine, i: number): void {
   c.vaporUptakeAirDbPerH[i] = c.vaporUptakeSurfaceDbPerH[i] = Number.NaN
   c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = c.evaporationKgPerM2H[i] = Number.NaN
   c.emcDesorptionDb[i] = c.emcAdsorptionDb[i] = Number.NaN
+  c.airCapDbPerH[i] = 0
 }
 
 /** exp(ln pws) [Pa] at the air temperature of the hour: the ambient value, the held one, or computed and held. */
@@ -165,6 +166,7 @@ function computeHour(e: Engine, i: number): void {
     c.deficitToSaturationGPerKg[i] = c.deficitToTargetGPerKg[i] = Number.NaN
     c.evaporationKgPerM2H[i] = hour.evaporationKgPerM2H
     c.capDbPerH[i] = 0
+    c.airCapDbPerH[i] = 0
     c.status[i] = e.verdict ? pausedHourStatus(hour.pausedByNight) : HourStatus.usable
     return
   }
@@ -189,12 +191,13 @@ export function computeHourlyConditions(
     options.solar !== undefined && (!model.needs.sunAzimuth || options.solar.azimuthDeg.length === n)
       ? options.solar
       : computeSolarColumns(series)
-  const surfaceBalance = model.exposure === 'exposed'
+  const surfaceBalance = model.exposure === 'exposed' || model.surfaceBalance === true
   const columns = allocateColumns(
     n,
     options,
     product.profile.isotherm.adsorption === undefined,
     surfaceBalance,
+    surfaceBalance && model.exposure === 'forced-air',
   )
   const dmPerKgFresh = 1 - options.initialWbPct / 100
   const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method, options.loadingKgPerM2)

@@ -204,6 +204,22 @@ export function solveWetSurface(s: WetSurface): void {
   s.vaporConductanceKgPerM2HKpa = sensible > 0 ? evaporationKgPerM2HFromLatentFlux(sensible / gamma, airC) : 0
 }
 
+/**
+ * Aerodynamic resistance [s/m] of a convective heat-transfer coefficient `hcWm2K` [W m⁻² K⁻¹], ra = ρa·cp/hc, with
+ * ρa and cp of the air at `airC`, humidity ratio `w` and pressure `pressureKpa` as {@link solveWetSurface} takes
+ * them, so that the solver's H = A·ρa·cp/ra is A·hc exactly (heat and vapour through the same resistance: the
+ * Lewis analogy, Le ≈ 1 for water vapour in air).
+ */
+export function resistanceOfHeatTransferCoefficientSPerM(
+  hcWm2K: number,
+  airC: number,
+  w: number,
+  pressureKpa: number,
+): number {
+  if (!(hcWm2K > 0)) throw new RangeError(`heat-transfer coefficient must be > 0 W m⁻² K⁻¹, got ${hcWm2K}`)
+  return (moistAirDensityKgPerM3(airC, w, pressureKpa) * moistAirCpPerKgMoistAir(w) * 1000) / hcWm2K
+}
+
 const scratch = new WetSurface()
 
 function solveScratch(

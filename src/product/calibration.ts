@@ -66,6 +66,14 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     source:
       "effective moisture diffusivity at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Joel J., Alkali A.K., Ibrahim B., Ahmmad A.A., Babba F.J., Dayo O. 2024, Evaluation of NSPRI Parabolic Shaped Solar Dryer (PSSD) for Drying of Tomatoes Under Semi-arid Climate Zone, Research Square preprint, doi:10.21203/rs.3.rs-4558322/v1 (abstract), 'Eka' tomatoes sliced 15 mm in open sun at Kano: run 'open-sun', 89.1 → 17.8 % wb in 144 h (elapsed time, sampled every 24 h: the geometric middle of the constants 7.968e-10–1.02e-9 that meet the end point at that sample) with method open-air on the weather reconstruction 'kano-february-2023' (test/fixtures/experiments/weather/; Kano February climate from memory, month assumed: the abstract gives the place but no month; its open-sun 47.5 °C at 66.6 % RH is not an air state and is not used); engine ÷ target 1.0000",
   },
+  {
+    productId: 'fish-fillets',
+    parameter: 'k.kRefPerH',
+    value: 0.06363,
+    caseId: 'kituu-tilapia-brining-solar-tunnel/unbrined',
+    source:
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Kituu G.M., Shitanda D., Kanali C.L., Mailutha J.T. n.d. (no year on the page read), Effect of Brining on the Drying Rate of Tilapia in a Solar Tunnel Dryer, ACTA Press paper 34014 (abstract), unbrined tilapia pieces 9 mm thick in a solar tunnel dryer in Kenya: run 'unbrined', 84.8 → 10.0 % wb in 40 h (active time) with method tunnel on the weather reconstruction 'juja-february-2010' (test/fixtures/experiments/weather/; Juja February climate from memory, site and month assumed: the abstract gives the country only and no weather figure; initial moisture from the same authors' CIGR Journal abstract); engine ÷ target 1.0000",
+  },
 ]
 
 /** The fitted constant of `productId` at `parameter`; throws when `npm run calibrate` has not written it. */

@@ -3,6 +3,7 @@
  * Herbs, fish, coffee, cocoa and hops.
  */
 
+import { calibratedConstant } from './calibration.ts'
 import {
   ASSUMED_EA_J_PER_MOL,
   ASSUMED_EA_SOURCE,
@@ -77,6 +78,9 @@ const FISH_CAUTIONS = [
   'Histamine forms in some species (tuna, mackerel, sardine) held warm before drying.',
 ]
 
+/** Fish drying constant fitted through the engine to a solar-tunnel run (npm run calibrate). */
+const FISH_K = calibratedConstant('fish-fillets', 'k.kRefPerH')
+
 export const fishFillets: ProductProfile = {
   id: 'fish-fillets',
   name: 'Fish fillets (unsalted)',
@@ -109,11 +113,20 @@ export const fishFillets: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(0.08, 40, ASSUMED_EA_J_PER_MOL) },
+    { model: 'lewis', k: arrhenius(FISH_K.value, 40, ASSUMED_EA_J_PER_MOL) },
     10,
     'slab',
-    `Lewis k = 0.08 h⁻¹ at 40 °C for 10 mm fillets: from memory (open-sun Deff 8.708e-11 m²/s for chelwa and 11.11e-11 for prawn, ${JAIN_PATHARE_2007}, not used: the abstract gives no thickness); ${ASSUMED_EA_SOURCE.source}`,
+    `10 mm fillets, the size at which k holds: from memory (open-sun Deff 8.708e-11 m²/s for chelwa and 11.11e-11 for prawn, ${JAIN_PATHARE_2007}, not used: the abstract gives no thickness)`,
     'memory',
+    {
+      // Before the fit: Lewis k 0.08 h⁻¹ at 40 °C for 10 mm fillets, from memory.
+      'k.kRefPerH': param(FISH_K.source, 'fitted'),
+      'k.tRefC': param(
+        `reference temperature 40 °C, set by dryhours, of the k fitted through the engine to Kituu et al. n.d. (ACTA Press paper 34014), unbrined tilapia run (${FISH_K.caseId}; npm run calibrate)`,
+        'fitted',
+      ),
+      'k.activationEnergyJPerMol': ASSUMED_EA_SOURCE,
+    },
   ),
   defaultThicknessMm: sourced(10, 'fillet thickness; from memory', 'memory'),
   defaultLoadingKgPerM2: sourced(8, 'single layer on mesh racks; from memory', 'memory'),

@@ -93,17 +93,17 @@ describe('solar tunnel', () => {
       nights++
       expect(closed.mode[i]).toBe(HourMode.paused)
       expect(open.mode[i]).toBe(HourMode.active)
-      expect(open.capDbPerH[i]).toBe(0) // no flow: nothing dries, rewetting still possible
+      expect(open.airCapDbPerH[i]).toBe(0) // no flow: nothing dries, rewetting still possible
       expect(constant.mode[i]).toBe(HourMode.active)
-      expect(constant.capDbPerH[i]).toBeGreaterThanOrEqual(0)
+      expect(constant.airCapDbPerH[i]).toBeGreaterThanOrEqual(0)
     }
     expect(nights).toBeGreaterThan(50)
     // cap per unit deficit ∝ flow share: at half the full-flow irradiance, about half of the constant fans' cap
     for (let i = 0; i < week.hours; i++) {
       const g = week.ghiWm2[i]
       if (closed.night[i] === 1 || !(g > 100 && g < 700)) continue
-      const share = closed.capDbPerH[i] / closed.deficitToSaturationGPerKg[i]
-      const fullShare = constant.capDbPerH[i] / constant.deficitToSaturationGPerKg[i]
+      const share = closed.airCapDbPerH[i] / closed.deficitToSaturationGPerKg[i]
+      const fullShare = constant.airCapDbPerH[i] / constant.deficitToSaturationGPerKg[i]
       if (!(Number.isFinite(share) && Number.isFinite(fullShare) && fullShare > 0)) continue
       // deficits differ (warmer air with less flow); the cap per g/kg of deficit is the flow itself
       expect(share / fullShare).toBeCloseTo(g / 800, 6)

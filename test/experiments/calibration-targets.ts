@@ -88,6 +88,17 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
       'Kano February climate from memory, month assumed: the abstract gives the place but no month; its open-sun 47.5 °C at 66.6 % RH is not an air state and is not used',
     searchRange: [1e-11, 1e-7],
   },
+  {
+    productId: 'fish-fillets',
+    parameter: 'k.kRefPerH',
+    parameterLabel: 'Lewis k at the reference temperature',
+    caseId: 'kituu-tilapia-brining-solar-tunnel/unbrined',
+    citation:
+      'Kituu G.M., Shitanda D., Kanali C.L., Mailutha J.T. n.d. (no year on the page read), Effect of Brining on the Drying Rate of Tilapia in a Solar Tunnel Dryer, ACTA Press paper 34014 (abstract), unbrined tilapia pieces 9 mm thick in a solar tunnel dryer in Kenya',
+    weatherNote:
+      "Juja February climate from memory, site and month assumed: the abstract gives the country only and no weather figure; initial moisture from the same authors' CIGR Journal abstract",
+    searchRange: [1e-3, 5],
+  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */

@@ -143,6 +143,13 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
    */
   exposure: 'exposed' | 'forced-air'
   /**
+   * True when a forced-air method's product lies in the air stream on a floor under the sun (the solar tunnel):
+   * its temperature follows the surface balance of exposed methods (the method sets
+   * {@link MethodHour.productWetC} and the wet-surface evaporation), its constant-rate limit is the smaller of
+   * that evaporation and the air's capacity. Exposed methods always have it.
+   */
+  surfaceBalance?: boolean
+  /**
    * True when a forced-air method's size is set by a drying area and a loading (the solar tunnel): its
    * `loadingKgPerM2` is then taken as the assessment's loading, as for exposed methods.
    */
@@ -197,14 +204,43 @@ export function wetSurfaceEvaporationOfHour(
   windMs: number,
   coverage = 1,
 ): number {
-  scratch.availableEnergyWm2 = availableEnergyWm2
   scratch.airC = hour.dryBulbC
+  scratch.saturationPa = hour.saturationPa
+  scratch.windAt2mMs = windMs
+  scratch.aerodynamicResistanceSPerM = Number.NaN
+  return solveHourSurface(hour, scratch, availableEnergyWm2, coverage)
+}
+
+/**
+ * The same balance in air warmer than the ambient at the same humidity ratio (a tunnel's air after its
+ * collector), air temperature `airC`, through the aerodynamic resistance `resistanceSPerM` [s/m] (from the air
+ * speed over the product) instead of the wind function.
+ */
+export function wetSurfaceEvaporationInAir(
+  hour: MethodHour,
+  scratch: WetSurface,
+  availableEnergyWm2: number,
+  airC: number,
+  resistanceSPerM: number,
+  coverage = 1,
+): number {
+  scratch.airC = airC
+  scratch.saturationPa = airC === hour.dryBulbC ? hour.saturationPa : Number.NaN
+  scratch.windAt2mMs = Number.NaN
+  scratch.aerodynamicResistanceSPerM = resistanceSPerM
+  return solveHourSurface(hour, scratch, availableEnergyWm2, coverage)
+}
+
+function solveHourSurface(
+  hour: MethodHour,
+  scratch: WetSurface,
+  availableEnergyWm2: number,
+  coverage: number,
+): number {
+  scratch.availableEnergyWm2 = availableEnergyWm2
   scratch.vaporPressureKpa = hour.vaporPressureKpa
   scratch.pressureKpa = hour.pressureKpa
   scratch.humidityRatio = hour.humidityRatio
-  scratch.windAt2mMs = windMs
-  scratch.saturationPa = hour.saturationPa
-  scratch.aerodynamicResistanceSPerM = Number.NaN
   solveWetSurface(scratch)
   hour.evaporationKgPerM2H = scratch.evaporationKgPerM2H * coverage
   hour.vaporConductanceKgPerM2HKpa = scratch.vaporConductanceKgPerM2HKpa * coverage

@@ -16,21 +16,37 @@
  *   the hour's air flow (Duffie & Beckman 2013 ch. 6, physics/collector.ts `heatRemovalFactor`); the air
  *   is heated at constant humidity ratio, T = Ta + Qu/(ṁ·cp);
  * - drying section: the air at the product is the collector's outlet air (the drying floor's own sun warms the
- *   product, not the air: a simplification that puts the drying section's gain into the product temperature);
- *   the product's surface is warmed above that air by the sun it absorbs through the cover,
- *   ΔT = τ·α_p·G / ((hc + hr)·surface ratio), hc = 2.8 + 3.0·v at the air speed over the product, hr = 4εσT³;
+ *   product, not the air: a simplification that puts the drying section's gain into the product);
+ * - the product's surface balances, per m² of floor it covers, as open air's does (physics/wet-surface.ts, the
+ *   same kernel through method-model.ts): the sun it absorbs through the cover (α_p·τ·G), long-wave exchange with
+ *   the cover rather than the sky, convection and evaporation in the tunnel air. Convection: hc = 2.8 + 3.0·v
+ *   (Watmuff et al. 1977 via Duffie & Beckman 2013 §3.15, from memory) through the exchange surface A of the
+ *   layer (product/layer-geometry.ts), v the air speed over the product at the hour's fan flow (in proportion to
+ *   it); heat and vapour through the same resistance (Lewis analogy). Long-wave: the product sees the cover, as
+ *   in the solar tunnel model of Bala & Woods (1994) as written out by Bala (International Solar Food Processing
+ *   Conference 2009; radiation between product and cover, transcribed), exchanging R = 4·ε·σ·T_c³ per kelvin;
+ *   the cover taken opaque to long-wave, at the temperature its two faces' convection gives between the tunnel
+ *   air and the ambient (physics/cover-exchange.ts). Glass is opaque beyond about 3 µm; clear polyethylene film
+ *   lets part of the long-wave through (films with infrared additives are made to block it: Kalfas 1988,
+ *   Polimery no. 4 p. 148, abstract read), so under clear film the product also sees some of the colder sky,
+ *   which is not modelled (stated limit: under clear film the model's product runs a little too warm). A wet product sits at the
+ *   balance's wet-surface temperature, one that evaporates nothing at T_air + Q/(H + R), and a drying batch
+ *   between them by the share of the wet-surface rate it evaporates (drying/batch.ts), as in open air;
+ * - the constant-rate limit is the smaller of that wet-surface evaporation and the air's own capacity, the
+ *   deficit to saturation × the hour's air flow per tonne (the air's moisture pick-up along the tunnel is not
+ *   followed: the whole floor sees the inlet air);
  * - fans: 'pv' — the flow follows the irradiance, ṁ = ṁ_nominal·min(1, G/G_full), and stops below the
  *   collector threshold (a PV fan has no store; common practice, no source for the linear form); 'constant' —
  *   the nominal flow every hour, day and night (grid or battery);
  * - when the fans stop: 'closed' — the tunnel is shut, no drying and no rewetting (as the cabinet's paused
  *   hours); 'open' — the product sits in still ambient air under the cover: it does not dry (no flow, so no
  *   forced-air capacity) but rewets toward the ambient equilibrium;
- * - the constant-rate limit is the forced-air one: deficit to saturation × the hour's air flow per tonne;
  * - rain does not reach the product.
  * Energy input: the collector heat (kWh per tonne), no fuel; the fans' electricity is from the PV module.
  */
 import { z } from 'zod'
 import { heatRemovalFactor } from '../../physics/collector.ts'
+import { thinCoverTemperatureC } from '../../physics/cover-exchange.ts'
 import {
   type CoverSpec,
   coverTransmittance,
@@ -44,7 +60,9 @@ import {
 } from '../../physics/evaporation.ts'
 import { diffuseHorizontalErbsWm2 } from '../../physics/irradiance.ts'
 import { moistAirHeatCapacityKjPerKgK } from '../../physics/moist-air.ts'
-import { HourMode, type MethodHour, type MethodModel } from './method-model.ts'
+import { resistanceOfHeatTransferCoefficientSPerM, WetSurface } from '../../physics/wet-surface.ts'
+import { layerGeometry } from '../../product/layer-geometry.ts'
+import { HourMode, type MethodHour, type MethodModel, wetSurfaceEvaporationInAir } from './method-model.ts'
 import { PRODUCT_EMISSIVITY } from './open-air.ts'
 import { fraction, loadingSchema } from './parameters.ts'
 
@@ -103,10 +121,14 @@ export const tunnelSchema = z.object({
   collectorEfficiencyFactor: fraction('collectorEfficiencyFactor').default(0.7),
   /** Fraction of the sun reaching the product that it absorbs; 0.7 as for open air (assumption, from memory). */
   productAbsorptivity: fraction('productAbsorptivity').default(0.7),
-  /** Product surface per m² of drying floor (see the open-air method); 3 as for open air. */
-  surfaceAreaPerTrayArea: z.number().min(1).max(20).default(3),
   /**
-   * Air speed over the product [m/s]; 0.25 m/s as measured in a 12 m × 2 m solar tunnel with alternating
+   * Product surface that meets the air per m² of floor it covers [m²/m²]; when absent, from the product's shape
+   * as for open air (product/layer-geometry.ts: π for berries, pods and grains, 2 for slices on a mesh).
+   */
+  surfaceAreaPerTrayArea: z.number().min(1).max(20).optional(),
+  /**
+   * Air speed over the product at the fans' nominal flow [m/s] (in proportion to the hour's flow: PV fans slow
+   * down with the sun, and the air is still when they stop); 0.25 m/s as measured in a 12 m × 2 m solar tunnel with alternating
    * collector and drying zones (dates; abstract read at scholarmate.com/S/6WpLUx, authors not in the copy read).
    */
   airSpeedOverProductMs: z.number().min(0).max(10).default(0.25),
@@ -154,6 +176,7 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
   hint: 'product under a plastic or glass cover; air warmed over a black floor and blown by PV fans',
   schema: tunnelSchema,
   exposure: 'forced-air',
+  surfaceBalance: true,
   usesLoading: true,
   airFlowKgPerSPerTonne: (m, loadingKgPerM2) => m.airFlowKgPerS / tunnelTonnes(m, loadingKgPerM2),
   heatsWithFuel: false,
@@ -197,9 +220,15 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
       },
       {
         name: 'product temperature',
-        value: `collector outlet air + τ·α_p·G/((hc + hr)·${m.surfaceAreaPerTrayArea}), hc = 2.8 + 3.0·${m.airSpeedOverProductMs} m/s, α_p ${m.productAbsorptivity}`,
+        value: `surface balance in the tunnel air: absorbed sun α_p·τ·G (α_p ${m.productAbsorptivity}), long-wave with the cover (opaque, between tunnel air and ambient by convection), convection hc = 2.8 + 3.0·v (v ${m.airSpeedOverProductMs} m/s at full flow) through ${m.surfaceAreaPerTrayArea === undefined ? "the product's exchange surface (π for berries, pods and grains, 2 for slices)" : `${m.surfaceAreaPerTrayArea} m² per m² covered`}, evaporative cooling`,
         source:
-          'Watmuff et al. 1977 via Duffie & Beckman 2013 §3.15 (from memory); air speed: a 12 m × 2 m tunnel, abstract read',
+          'Penman form with radiative resistance as for open air (physics/wet-surface.ts); product–cover radiation as in Bala & Woods 1994 (tunnel model, transcribed); hc Watmuff et al. 1977 via Duffie & Beckman 2013 §3.15 (from memory); air speed: a 12 m × 2 m tunnel, abstract read',
+      },
+      {
+        name: 'constant-rate limit',
+        value:
+          "the smaller of the product's wet-surface evaporation and the air's capacity (deficit to saturation × the hour's flow)",
+        source: 'method assumption; the moisture pick-up along the tunnel is not followed',
       },
     ]
   },
@@ -209,7 +238,15 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
     const diffuseTau = tableTransmittance(table, diffuseEquivalentAnglesDeg(0).skyDeg)
     const collectorAreaM2 = m.collectorLengthM * m.widthM
     const tonnes = tunnelTonnes(m, product.loadingKgPerM2)
-    const hc = flatPlateHeatTransferCoefficientWm2K(m.airSpeedOverProductMs)
+    const layer = layerGeometry(
+      product.shape,
+      product.sizeMm,
+      product.loadingKgPerM2,
+      m.surfaceAreaPerTrayArea,
+    )
+    const surface = new WetSurface()
+    surface.exchangeAreaRatio = layer.exchangeAreaRatio
+    surface.exact = true
     const { altitudeDeg, raWm2 } = solar
     return (hour: MethodHour): void => {
       const i = hour.index
@@ -219,6 +256,14 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
       if (m.fans === 'constant') share = 1
       else if (g >= thresholds.collectorOnWm2) share = g >= m.pvFullFlowWm2 ? 1 : g / m.pvFullFlowWm2
       hour.airFlowShare = share
+      if (share === 0 && m.nightPractice === 'closed') {
+        // fans stopped and the tunnel shut: no exchange (paused)
+        hour.mode = HourMode.paused
+        hour.pausedByNight = true
+        hour.airC = t
+        hour.productC = t
+        return
+      }
       // sun through the cover (horizontal): beam at the zenith angle, diffuse at the isotropic-sky angle
       let transmitted = 0
       if (g > 0) {
@@ -226,28 +271,46 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
         const beam = g - diffuse
         transmitted = beam * tableTransmittance(table, 90 - altitudeDeg[i]) + diffuse * diffuseTau
       }
-      if (share === 0) {
-        // fans stopped: shut (paused) or open to still ambient air (no forced flow: rewetting only)
-        if (m.nightPractice === 'closed') {
-          hour.mode = HourMode.paused
-          hour.pausedByNight = true
-        }
-        hour.airC = t
-        hour.productC = t
-        return
+      // the collector section warms the air at constant humidity ratio (none with the fans stopped: still air)
+      let tAir = t
+      if (share > 0) {
+        const capacity = m.airFlowKgPerS * share * 1000 * moistAirHeatCapacityKjPerKgK(hour.humidityRatio)
+        const fr =
+          collectorAreaM2 > 0
+            ? heatRemovalFactor(collectorAreaM2, m.collectorLossWm2K, m.collectorEfficiencyFactor, capacity)
+            : 0
+        const gainW = fr * collectorAreaM2 * m.absorberAbsorptance * transmitted
+        tAir = t + gainW / capacity
+        hour.solarKwhPerTonne = gainW / 1000 / tonnes
       }
-      const flow = m.airFlowKgPerS * share
-      const capacity = flow * 1000 * moistAirHeatCapacityKjPerKgK(hour.humidityRatio)
-      const fr =
-        collectorAreaM2 > 0
-          ? heatRemovalFactor(collectorAreaM2, m.collectorLossWm2K, m.collectorEfficiencyFactor, capacity)
-          : 0
-      const gainW = fr * collectorAreaM2 * m.absorberAbsorptance * transmitted
-      const tAir = t + gainW / capacity
       hour.airC = tAir
-      hour.solarKwhPerTonne = gainW / 1000 / tonnes
-      const hr = radiativeHeatTransferCoefficientWm2K(PRODUCT_EMISSIVITY, tAir)
-      hour.productC = tAir + (m.productAbsorptivity * transmitted) / ((hc + hr) * m.surfaceAreaPerTrayArea)
+      // the product's surface balance in the tunnel air (physics/wet-surface.ts through method-model.ts)
+      const hIn = flatPlateHeatTransferCoefficientWm2K(m.airSpeedOverProductMs * share)
+      const coverC = thinCoverTemperatureC(
+        hIn,
+        tAir,
+        flatPlateHeatTransferCoefficientWm2K(hour.windAt2mMs),
+        t,
+      )
+      surface.radiativeConductanceWm2K = radiativeHeatTransferCoefficientWm2K(PRODUCT_EMISSIVITY, coverC)
+      const available =
+        m.productAbsorptivity * transmitted - surface.radiativeConductanceWm2K * (tAir - coverC)
+      const resistance = resistanceOfHeatTransferCoefficientSPerM(
+        hIn,
+        tAir,
+        hour.humidityRatio,
+        hour.pressureKpa,
+      )
+      const conductance = wetSurfaceEvaporationInAir(
+        hour,
+        surface,
+        available,
+        tAir,
+        resistance,
+        layer.coverage,
+      )
+      // a surface that evaporates nothing: T_air + Q/(H + R)
+      hour.productC = tAir + available / conductance
     }
   },
 }
