@@ -5,6 +5,8 @@
  */
 import type { HourlyConditions } from '../drying/hourly-conditions.ts'
 import { heatedLimitWarnings } from '../drying/methods/heated.ts'
+import { methodLoadingKgPerM2 } from '../drying/methods/index.ts'
+import { type FiguresInUse, figureCounts, figuresFromMemory } from '../product/memory-figures.ts'
 import { type HourlySeries, QualityFlag } from '../weather/series.ts'
 import type { Calendar, StartDates } from './assess.ts'
 import type { ResolvedAssessOptions } from './assess-options.ts'
@@ -129,6 +131,21 @@ function dryTargetView(run: ResolvedAssessOptions): Assessment['product']['dryTa
   }
 }
 
+/**
+ * Which of the profile's own figures this answer uses: a figure the user replaced (the run's value differs from
+ * the profile's, or the method sets the loading) is the user's; the profile's target moisture counts only when it
+ * decides "dry".
+ */
+function profileFiguresInUse(run: ResolvedAssessOptions): FiguresInUse {
+  const p = run.profile
+  return {
+    initialMoisture: run.initialWbPct === p.initialMoistureWbPct.value,
+    targetMoisture: run.dryTarget.basis === 'profile-moisture',
+    thickness: run.product.thicknessMm === p.defaultThicknessMm.value,
+    loading: methodLoadingKgPerM2(run.method) === undefined,
+  }
+}
+
 function isoHour(ms: number): string {
   return new Date(ms).toISOString().slice(0, 13) + ':00Z'
 }
@@ -155,6 +172,7 @@ export function assembleAssessment(
   const { profile, product } = run
   const reasons = totalReasons(calendar.counts)
   const estimatedSunHours = countEstimatedSun(series)
+  const inUse = profileFiguresInUse(run)
   return {
     schema: ASSESSMENT_SCHEMA,
     site: {
@@ -178,6 +196,8 @@ export function assembleAssessment(
       thicknessMm: product.thicknessMm,
       loadingKgPerM2: run.loadingKgPerM2,
       cautions: [...profile.cautions],
+      figuresFromMemory: figuresFromMemory(profile, inUse),
+      figureCounts: figureCounts(profile, inUse),
     },
     method: run.method,
     methodLabel: run.model.label,

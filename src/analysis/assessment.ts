@@ -5,6 +5,7 @@
  */
 import type { DryingMethod, FuelId } from '../drying/method.ts'
 import type { HourStatusName } from '../drying/usable-hour.ts'
+import type { FigureCounts, MemoryFigure } from '../product/memory-figures.ts'
 import type { BinAssessment } from './assessment-bin.ts'
 import type { PsychrometricSummary } from './psychrometric.ts'
 import type { SeasonCalendar } from './season-calendar.ts'
@@ -41,6 +42,14 @@ export interface AssessmentProduct {
   thicknessMm: number
   loadingKgPerM2: number
   cautions: string[]
+  /**
+   * The product's figures this answer uses that were recalled, not read in a publication (level `memory`,
+   * `dryhours products <id>` gives each with its source); empty when none. A figure the user replaced (initial
+   * moisture, thickness, loading) or that does not decide "dry" (the profile's target moisture) is not listed.
+   */
+  figuresFromMemory: MemoryFigure[]
+  /** Per kind (moisture-and-limits, isotherm, kinetics, geometry-and-loading): figures used, and from memory. */
+  figureCounts: FigureCounts
 }
 
 /**

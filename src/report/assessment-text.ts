@@ -19,7 +19,7 @@ import { calendarRuns } from './sections/calendar.ts'
 import { currencyOf, finite, perMassFactor, perMassWords } from './sections/context.ts'
 import { fuelName, fuelRows, heatIsAllTheHeat, heatWord } from './sections/heat.ts'
 import { mainReasonWords } from './sections/monthly.ts'
-import { methodName, siteClock, startTimeWords, stopsAtNight } from './sections/summary.ts'
+import { methodName, productMemoryLine, siteClock, startTimeWords, stopsAtNight } from './sections/summary.ts'
 import { clockWords, thinnedNote, yearsWords } from './words.ts'
 
 const MONTHS = 'Jan Feb Mar Apr May Jun Jul Aug Sep Oct Nov Dec'.split(' ')
@@ -83,6 +83,7 @@ function headText({ a, ctx }: TextContext): string[] {
   return [
     `${ctx.siteName}: ${p.name}, ${methodName(a)}, ${p.initialMoistureWbPct} → ${p.targetMoistureWbPct} % wet basis`,
     `dry means ${p.dryTarget.sentence}`,
+    productMemoryLine(p),
     `weather ${a.coverage.firstHourUtc.slice(0, 10)} to ${a.coverage.lastHourUtc.slice(0, 10)} (UTC), ${a.site.typicalYear ? 'a typical year' : `years ${a.coverage.years.length > 0 ? a.coverage.years.join(', ') : 'none with a week of data'}`}`,
     `times on ${clockWords(siteClock(a))}`,
     '',

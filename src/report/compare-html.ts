@@ -20,7 +20,13 @@ import { calendarBlock } from './sections/calendar.ts'
 import { cautionsHtml } from './sections/cautions.ts'
 import { finite, round } from './sections/context.ts'
 import { handoutStartTable } from './sections/start-dates.ts'
-import { answerSentences, headerRows, methodName, warningList } from './sections/summary.ts'
+import {
+  answerSentences,
+  headerRows,
+  methodName,
+  productMemoryLine,
+  warningList,
+} from './sections/summary.ts'
 import type { ReportTable } from './tables.ts'
 import { tableHtml } from './tables.ts'
 
@@ -292,7 +298,7 @@ export function renderComparisonArticle(sites: ComparedSite[], o: ComparisonOpti
   const perSite = sites.map((x, i) => siteSummary(x, i, o)).join('\n')
   return `<article class="dryhours-report comparison" data-report="comparison" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · sites side by side</p><h1>Where does ${escapeHtml(first.product.name)} dry best?</h1>
-<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Season</dt><dd>${escapeHtml(`${first.bin ? 'the bin filled on dates from' : 'batches start'} ${first.season.start} to ${first.season.end}`)}</dd></div><div class="kv"><dt>${first.bin ? 'Season in the bin' : 'Deadline'}</dt><dd>${first.bin ? `${first.bin.seasonDays} days for the top layer to dry` : `${first.deadlineDays} days`}</dd></div></dl></header>
+<dl class="facts"><div class="kv"><dt>Product</dt><dd>${escapeHtml(first.product.name)}</dd></div><div class="kv"><dt>Method</dt><dd>${escapeHtml(methodName(first))}</dd></div><div class="kv"><dt>Sites</dt><dd>${escapeHtml(names.join(', '))}</dd></div><div class="kv"><dt>Season</dt><dd>${escapeHtml(`${first.bin ? 'the bin filled on dates from' : 'batches start'} ${first.season.start} to ${first.season.end}`)}</dd></div><div class="kv"><dt>${first.bin ? 'Season in the bin' : 'Deadline'}</dt><dd>${first.bin ? `${first.bin.seasonDays} days for the top layer to dry` : `${first.deadlineDays} days`}</dd></div><div class="kv"><dt>Recalled figures</dt><dd>${escapeHtml(productMemoryLine(first.product))}</dd></div></dl></header>
 <section class="report-section answer" data-section="ranking"><h2>The answer</h2><ul class="sentences">${sentences.map((s) => `<li>${escapeHtml(s)}</li>`).join('')}</ul>${tableHtml(comparisonTable(o.ranking, units))}</section>
 ${comparisonCalendar(sites, names, ranked.rows)}
 ${perSite}

@@ -89,6 +89,14 @@ const SECOND_PASS = [
   'Looked for and not reached (first page or abstract only): Kaymak-Ertekin & Gedik 2004 (grapes, apricots, apples); Tsami et al. 1990, Ayranci et al. 1990, Saravacos et al. 1986 (raisins, figs, prunes, apricots); Esmaiili 2014 beyond the abstract (raisin C and K); PMC3550902 (mint GAB); Getahun et al. 2020 (chilli); Corrêa et al. 2010 (coffee); Hadrich et al. 2008 and Djendoubi et al. 2009 (sardine); Ben Mariem & Ben Mabrouk 2015 (tomato); ASAE D245.5 copies on document-sharing sites (cover page only); Wang & Singh 1978 (rough rice Page); hop and parchment-coffee kinetics (abstracts without constants).',
 ]
 
+/** The third pass: aimed at readable tables for the products whose isotherm is all memory; nothing adopted. */
+const THIRD_PASS = [
+  'Aim: the tables of open full texts (MDPI, PMC, SciELO and publisher HTML), table pages some publishers serve on their own (Nature, a Korean journal), thesis pages stored one page at a time, and extension or FAO documents quoting the ASABE D245 constants with the standard named, for the catalogue products whose isotherm constants all rest on memory (corn, wheat, apricot, plum, apple, tomato, chilli, mint, coffee, hops).',
+  'Routes tried (about 20 look-ups): stored web pages by product and by the words a table uses ("Table … GAB … Xm C K …", "estimated parameters … isotherm models"), the documentation corpus (R sorption packages, standard names), the code corpus (coffee, fruit and grain constants; a public C library of GAB sets holds pasta and potato only).',
+  'Result: no constant adopted, no number changed. Every full-text copy reached was stored from its beginning only (Ben Mariem & Ben Mabrouk 2015 tomato slices in HTML, PMC3550902 mint, Getahun et al. 2020 chilli, Corrêa et al. 2010 coffee, Kaymak-Ertekin & Gedik 2004 grapes, apricots and apples: abstract and introduction, never the constants table); the separately served table pages found belong to other products; the D245.5 copies show the cover page only.',
+  'Where the figures stay at memory, every answer now names them: `product.figuresFromMemory` in the assessment JSON and the line "Figures recalled, not read in a publication" in the CLI, the report and the comparison.',
+]
+
 export function renderProductSourcesDoc(): string {
   const out: string[] = []
   out.push('# Product constants and their sources', '')
@@ -143,6 +151,10 @@ export function renderProductSourcesDoc(): string {
     }),
     '',
     ...SECOND_PASS.map((p) => `- ${p}`),
+    '',
+    '## Third pass: readable tables',
+    '',
+    ...THIRD_PASS.map((p) => `- ${p}`),
     '',
     '## Publications that exist but could not be read here',
     '',

@@ -1,5 +1,6 @@
 import { parseArgs } from 'node:util'
 import { COMPARE_CRITERIA, type CompareCriterion, type Comparison, compare } from '../../analysis/compare.ts'
+import { memoryFiguresLine } from '../../product/memory-figures.ts'
 import { renderComparisonCsv } from '../../report/compare-csv.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
 import { renderOptionNames } from '../../weather/option-spec.ts'
@@ -59,6 +60,7 @@ export function comparisonText(c: Comparison): string {
   )
   out.push(`ranked by ${c.criterion}: ${c.criterionDescription}`)
   out.push(`ties: ${c.tieBreak}`)
+  out.push(memoryFiguresLine(c.product.figuresFromMemory, c.product.figureCounts, c.product.id))
   out.push('')
   const label = (s: Comparison['sites'][number]) => `${s.site}${s.typicalYear ? ' (typical year)' : ''}`
   const width = Math.max(4, ...c.sites.map((s) => label(s).length))

@@ -18,7 +18,7 @@ export const GENERAL_CAUTIONS: readonly string[] = [
 
 export const MODEL_LIMITS: readonly string[] = [
   'The weather file is taken as the climate: a few years cannot show the rare bad year, and a typical-year file shows no spread at all.',
-  'Usable hours and batch times come from published isotherm and drying-rate models fitted to other lots of the product; varieties, pretreatments (dipping, blanching, cutting) and loading change them.',
+  'Usable hours and batch times come from isotherm and drying-rate models fitted to other lots of the product, some of whose figures were recalled rather than read in a publication (listed at the top as recalled figures); varieties, pretreatments (dipping, blanching, cutting) and loading change them.',
   'The air at the product is modelled from the weather station; shelter, ground, nearby water and the dryer itself change it.',
   'Rain, dew and night handling follow the method options (covered or not); real handling delays are not modelled.',
   'Supplemental heat assumes the heater raises the intake air at constant humidity ratio with the stated efficiency; losses from the dryer shell are not included.',

@@ -4,6 +4,7 @@
  * warnings that bear on it. Words, not identifiers; shares of years as "every year"; times on the site's
  * clock; costs with their currency (or what they are in when there is none).
  */
+import { memoryFiguresLine } from '../../product/memory-figures.ts'
 import type { Assessment } from '../assessment-view.ts'
 import { MONTH_LONG } from '../charts/svg.ts'
 import { formatNumber } from '../display-units.ts'
@@ -39,6 +40,11 @@ export function siteClock(
 /** "08:00 Europe/Madrid time": the batches' start hour on the site's clock, named. */
 export function startTimeWords(a: Assessment): string {
   return `${String(a.season.startHourLocal).padStart(2, '0')}:00 ${clockShort(siteClock(a))}`
+}
+
+/** Which of the product's figures rest on memory, in one line (product/memory-figures.ts). */
+export function productMemoryLine(p: Assessment['product']): string {
+  return memoryFiguresLine(p.figuresFromMemory, p.figureCounts, p.id)
 }
 
 /** Rows of the header as label/value pairs (plain text; escaped when rendered). */
@@ -81,6 +87,7 @@ export function headerRows(a: Assessment, ctx: SectionContext): [string, string]
     `from ${formatNumber(a.product.initialMoistureWbPct, 1)} % to ${formatNumber(a.product.targetMoistureWbPct, 1)} % wet basis`,
   ])
   rows.push(['Dry means', a.product.dryTarget.sentence])
+  rows.push(['Recalled figures', productMemoryLine(a.product)])
   rows.push(['Method', methodName(a)])
   const every = a.season.stepDays === 1 ? 'day' : `${a.season.stepDays} days`
   rows.push([

@@ -11,6 +11,7 @@ import { FUEL_IDS } from '../../../drying/fuels.ts'
 import { DRYING_METHOD_KINDS, type DryingMethodKind } from '../../../drying/method.ts'
 import { METHOD_MODELS } from '../../../drying/methods/index.ts'
 import { HOUR_STATUS_NAMES, type HourStatusName } from '../../../drying/usable-hour.ts'
+import { NUMBER_GROUPS } from '../../../product/profile-numbers.ts'
 import { binAssessmentSchema } from './bin.ts'
 import {
   count,
@@ -83,6 +84,27 @@ export const assessmentParts = once(() => {
         sentence: text('what "dry" means here, in one sentence'),
       })
       .describe('what "dry" means for this assessment'),
+    figuresFromMemory: z
+      .array(
+        z.strictObject({
+          name: text('the figure in plain words, as `dryhours products <id>` lists it'),
+          shortName: text('a short name for a one-line summary'),
+          value: num('the figure [in the unit named by `unit`]'),
+          unit: text('its unit'),
+          kind: z.enum(NUMBER_GROUPS).describe('which kind of product figure it is'),
+          path: text('where it sits in the product profile'),
+        }),
+      )
+      .describe('product figures this answer uses that rest on memory (recalled, not read in a publication)'),
+    figureCounts: z
+      .record(
+        z.enum(NUMBER_GROUPS),
+        z.strictObject({
+          figures: count('figures of this kind the answer uses'),
+          fromMemory: count('of them, resting on memory'),
+        }),
+      )
+      .describe('per kind of product figure: how many the answer uses and how many rest on memory'),
   })
   /** The method as applied: its kind and every parameter with the unit its name carries. */
   const methodResponseSchema = z
