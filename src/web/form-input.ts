@@ -58,6 +58,8 @@ export interface FormInput {
   sites: SiteInput[]
   /** The methods chosen (task assess: one for the full report, several side by side). */
   methods: string[]
+  /** Each chosen method with its fields, in the order of `methods`. */
+  methodInputs: AssessOptions['method'][]
   /** Demo site file name chosen instead of (or beside) uploads. */
   demo: string | null
   weatherOptions: Record<string, unknown>
@@ -352,6 +354,7 @@ export async function parseForm(
     files,
     sites,
     methods: kinds,
+    methodInputs: inputs,
     demo,
     weatherOptions,
     product,

@@ -6,6 +6,7 @@
 import { assess } from '../analysis/assess.ts'
 import type { Assessment } from '../analysis/assessment.ts'
 import { compare, rankAssessments } from '../analysis/compare.ts'
+import { compareMethods } from '../analysis/compare-methods.ts'
 import { AssessOptionError } from '../analysis/plan.ts'
 import { isRuntimeFault } from '../api/errors.ts'
 import {
@@ -15,6 +16,11 @@ import {
   renderComparisonArticle,
   renderComparisonHtml,
 } from '../report/compare-html.ts'
+import {
+  renderMethodComparisonArticle,
+  renderMethodComparisonCsv,
+  renderMethodComparisonHtml,
+} from '../report/methods-html.ts'
 import { renderReportCsv } from '../report/report-csv.ts'
 import { renderReportArticle, renderReportHtml } from '../report/report-html.ts'
 import { tablesCsv } from '../report/tables.ts'
@@ -24,7 +30,7 @@ import type { WeatherReadResult } from '../weather/result.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { WeatherInputError } from '../weather/weather-input-error.ts'
 import type { DemoProvider } from './demo-files.ts'
-import { FormFieldError, type FormInput } from './form-input.ts'
+import type { FormInput } from './form-input.ts'
 
 /** A weather file that needs answers the form can give (time zone, column mapping …). */
 export class FormQuestion extends Error {
@@ -224,27 +230,51 @@ export async function runForm(
   hooks: FormWorkHooks = {},
 ): Promise<FormResult> {
   const files = await inputs(input, demo)
-  if (input.task === 'assess' && input.methods.length > 1)
-    throw new FormFieldError(
-      'method',
-      'several methods side by side are not available on this page yet: choose one',
-    )
   const reads = readFiles(files)
+  if (input.task === 'assess' && input.methodInputs.length > 1) return methodsResult(reads[0], input, hooks)
   hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
   const { assessments, ranking } = runEngine(reads, input, hooks)
-  const sites: AssessedSite[] = reads.map(({ name, read }, i) => {
-    const assessment = assessments[i]
-    assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
-    return {
-      fileName: name,
-      series: read.series,
-      assessment,
-      readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
-      readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
-      dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
-    }
-  })
+  const sites = reads.map((r, i) => assessedSite(r, assessments[i]))
   if (sites.length === 1) return siteResult(sites, input.units)
   // several sites are always compared (and ranked) by analysis/compare.ts above
   return comparisonResult(sites, ranking ?? rankAssessments(sites.map((s) => s.assessment)), input.units)
+}
+
+/**
+ * One file by several methods side by side (analysis/compare-methods.ts, as `assess --method a,b` and the API's
+ * methods list): the comparison's article, its document (also the printout), CSV and JSON.
+ */
+function methodsResult(site: NamedRead, input: FormInput, hooks: FormWorkHooks): FormResult {
+  const { method: _one, ...shared } = input.assess
+  hooks.beforeAssess?.(input.methodInputs.map(() => site.read.series.hours))
+  const c = compareMethods(
+    site.read.series,
+    { ...shared, product: input.product, onProgress: hooks.onProgress },
+    input.methodInputs,
+  )
+  const fileName = site.name
+  const opts = { units: input.units, fileName }
+  const sites = c.assessments.map((a) => assessedSite(site, a))
+  return {
+    sites,
+    article: renderMethodComparisonArticle(c, opts),
+    document: renderMethodComparisonHtml(c, opts),
+    handout: renderMethodComparisonHtml(c, opts),
+    csv: renderMethodComparisonCsv(c, { units: input.units }),
+    json: JSON.stringify(c, null, 2),
+    title: `${c.site.name || fileName} – ${c.product.name}: methods side by side`,
+  }
+}
+
+/** A site as the page shows it: the engine's and the reader's messages name options by the form's labels. */
+function assessedSite({ name, read }: NamedRead, assessment: Assessment): AssessedSite {
+  assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
+  return {
+    fileName: name,
+    series: read.series,
+    assessment,
+    readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
+    readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
+    dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
+  }
 }
