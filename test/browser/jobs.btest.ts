@@ -274,6 +274,26 @@ describe('the grower: check the file, then assess, on a phone', () => {
   })
 })
 
+describe('the grower: methods side by side', () => {
+  it('ticks two methods and gets one answer comparing them, with the season calendar and each method after it', async () => {
+    const { context, page } = await open(DESK, 'methods')
+    await page.goto(`${server.url}/`)
+    await page.selectOption('#f-demo', 'ardentine-upland-2021-2024-utc.csv')
+    await page.selectOption('#f-product', 'grapes-to-raisins')
+    await page.check('input[name="method"][value="open-air"]')
+    await page.check('input[name="method"][value="heated"]')
+    await page.fill('#f-seasonStart', '07-01')
+    await page.fill('#f-seasonEnd', '07-21')
+    await page.click('#submit')
+    await page.waitForSelector('#result article[data-report="methods"]', { timeout: 180_000 })
+    expect((await page.textContent('#result .recommendation'))?.trim().length).toBeGreaterThan(0)
+    expect(await page.$$eval('#result [data-section="season-calendar"]', (s) => s.length)).toBe(1)
+    expect(await page.$$eval('#result article[data-report="assessment"]', (a) => a.length)).toBe(2)
+    await look(page, 'grower-methods-desktop')
+    await context.close()
+  })
+})
+
 describe('the grower: grain in a bin', () => {
   it('chooses the natural-air bin on the page, gives its airflows, and prints its summary on two A4 and two Letter pages', async () => {
     const { context, page } = await open(DESK, 'bin')
