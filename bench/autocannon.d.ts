@@ -14,7 +14,8 @@ declare module 'autocannon' {
     duration?: number
   }
   interface Result {
-    requests: Histogram
+    /** Per-second request counts; `total`: responses received in the run. */
+    requests: Histogram & { total: number }
     latency: Histogram
     non2xx: number
     errors: number

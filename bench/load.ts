@@ -5,6 +5,8 @@
  * sent in its middle. Prints every round, then the figures the server must meet, measured in this run:
  * throughput at 4 clients ≥ 1.7 × at 1 client; /healthz p99 < 100 ms while assessments run; 0 errors; resident
  * memory flat across the two passes; the hostile round's throughput within 20 % of the plain 4-client round.
+ * Each round also prints the server's CPU time per answered assessment (all its threads, and the event-loop
+ * thread's share): unlike throughput, it hardly moves when other work shares the machine.
  * Environment: LOAD_SECONDS (per round, default 8), LOAD_PASSES (default 2).
  */
 import { type ChildProcess, spawn } from 'node:child_process'
@@ -92,10 +94,15 @@ function probeHealth(url: string, everyMs = 25): { stop: () => Promise<{ ms: num
   }
 }
 
-/** CPU time used by a process so far [s] (user + system, from /proc, Linux). */
-function cpuSeconds(pid: number): number {
-  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ')
+/**
+ * CPU time used so far [s] (user + system, from /proc, Linux) by a process, or by one of its threads with
+ * `tid` (the event-loop thread's id is the process id).
+ */
+function cpuSeconds(pid: number, tid?: number): number {
+  const path = tid === undefined ? `/proc/${pid}/stat` : `/proc/${pid}/task/${tid}/stat`
+  const fields = readFileSync(path, 'utf8').split(') ')[1].split(' ')
   // fields after the command: state is [0]; utime and stime are fields 14 and 15 of stat(5), here [11], [12]
+  // (clock ticks; 100 per second on Linux)
   return (Number(fields[11]) + Number(fields[12])) / 100
 }
 
@@ -121,6 +128,9 @@ interface Round {
   healthFailed: number
   /** Cores the server kept busy: its CPU seconds per second of the round. */
   cores: number
+  /** Server CPU per answered assessment [ms], all threads; and the event-loop thread's share of it. */
+  cpuMsPerReq: number
+  mainMsPerReq: number
   rss0: number
   rss1: number
 }
@@ -151,6 +161,7 @@ async function main(): Promise<void> {
     const rss0 = rssMiB(pid)
     const probe = probeHealth(url)
     const cpu0 = cpuSeconds(pid)
+    const main0 = cpuSeconds(pid, pid)
     const t0 = performance.now()
     const load = autocannon({
       url: url + assessTarget.path,
@@ -178,7 +189,10 @@ async function main(): Promise<void> {
       else hostileResults.push(...results.filter((r) => !r.ok))
     }
     const result = await load
-    const cores = (cpuSeconds(pid) - cpu0) / ((performance.now() - t0) / 1000)
+    const cpuS = cpuSeconds(pid) - cpu0
+    const mainS = cpuSeconds(pid, pid) - main0
+    const cores = cpuS / ((performance.now() - t0) / 1000)
+    const answered = Math.max(1, result.requests.total)
     const health = await probe.stop()
     rounds.push({
       pass,
@@ -192,6 +206,8 @@ async function main(): Promise<void> {
       healthP99: quantile(health.ms, 0.99),
       healthFailed: health.failed,
       cores,
+      cpuMsPerReq: (1000 * cpuS) / answered,
+      mainMsPerReq: (1000 * mainS) / answered,
       rss0,
       rss1: rssMiB(pid),
     })
@@ -222,7 +238,7 @@ async function main(): Promise<void> {
   )
   console.log(`POST /v1/assess on a one-year file: ${assessTarget.path}`)
   console.log(
-    'pass round             conn  assess/s   p50 ms   p99 ms errors  healthz p50 ms  healthz p99 ms  server cores  rss0 MiB  rss1 MiB',
+    'pass round             conn  assess/s   p50 ms   p99 ms errors  healthz p50 ms  healthz p99 ms  server cores  CPU ms/assess  of it event loop  rss0 MiB  rss1 MiB',
   )
   for (const r of rounds) {
     console.log(
@@ -237,6 +253,8 @@ async function main(): Promise<void> {
         f1(r.healthP50).padStart(15),
         f1(r.healthP99).padStart(15),
         r.cores.toFixed(2).padStart(13),
+        f1(r.cpuMsPerReq).padStart(14),
+        f1(r.mainMsPerReq).padStart(17),
         r.rss0.toFixed(0).padStart(9),
         r.rss1.toFixed(0).padStart(9),
       ].join(' '),

@@ -16,7 +16,7 @@ import { takesFile } from '../api/file-routes.ts'
 import { ApiProblem, problemAnswer } from '../api/problem.ts'
 import { timeBudgetProblem } from '../api/work.ts'
 import { JobCancelled, JobOutOfMemory, JobOverran, PoolBusy, type WireRequest, WorkerPool } from './pool.ts'
-import { configFromEnv, poolFromEnv } from './settings.ts'
+import { configFromEnv, poolFromEnv, tuneServerHeaps } from './settings.ts'
 
 export { configFromEnv } from './settings.ts'
 
@@ -121,6 +121,7 @@ export async function startServer(
   const log = options.log ?? ((line: string) => process.stdout.write(`${line}\n`))
   const settings = poolFromEnv(process.env)
   const base = configFromEnv(process.env)
+  tuneServerHeaps()
   // The defaults under the environment's settings (the same merge as createApp's).
   const config: ApiConfig = { ...DEFAULT_API_CONFIG, ...base }
   const pool =
