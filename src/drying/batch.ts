@@ -124,7 +124,7 @@ export function simulateBatch(
   checkBatchOptions(options, n)
   const wrap = options.wrap === true
   primary.ensure(startIndex, maxHours, wrap)
-  backup?.ensure(startIndex, maxHours, wrap)
+  // a lazy backup computes only the hours the batch hands to it (below), not its whole window
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
@@ -164,6 +164,7 @@ export function simulateBatch(
       primary.mode[i] !== HourMode.missing
     ) {
       c = backup
+      backup.ensure(i, 1, false)
       backupHours++
       if (usedBackup) usedBackup[h] = 1
     }
