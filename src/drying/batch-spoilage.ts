@@ -113,16 +113,11 @@ export class BatchSpoilageTrack {
     const t = this.lastProductC
     if (Number.isNaN(t)) return
     // inputs through fields: no number crosses these calls
-    const aw = this.awTable
-    aw.tC = t
-    aw.moistureDb = this.moistureDb
-    aw.lookup()
-    let awFed = aw.aw
-    if (this.surface) {
-      // the surface's water activity; the surface RH at the batch's own product temperature
-      const ea = this.airVaporPressureKpa
-      const rh = ea >= 0 ? ea / saturationPressureFromTableKpa(t, false) : Number.NaN
-      awFed = surfaceWaterActivity(this.exchange, awFed, rh, this.wetShare)
+    let awFed: number
+    if (this.surface && this.exchange !== SurfaceExchange.none) {
+      awFed = this.surfaceAw(t)
+    } else {
+      awFed = this.pieceAw(t)
     }
     this.lastWaterActivity = awFed
     const acc = this.stepper
@@ -130,6 +125,28 @@ export class BatchSpoilageTrack {
     acc.moistureWbPct = (100 * this.moistureDb) / (1 + this.moistureDb)
     acc.waterActivity = awFed
     acc.stepHour()
+  }
+
+  /** The piece's water activity: the isotherm at the hour's temperature and the moisture at its start. */
+  private pieceAw(t: number): number {
+    const aw = this.awTable
+    aw.tC = t
+    aw.moistureDb = this.moistureDb
+    aw.lookup()
+    return aw.aw
+  }
+
+  /**
+   * The surface's water activity in an hour the product met the air or rain ({@link surfaceWaterActivity}),
+   * the surface RH at the batch's own product temperature. The piece's water activity is looked up only
+   * where the rule reads it (an hour it dried), which gives the same value as looking it up every hour.
+   */
+  private surfaceAw(t: number): number {
+    if (this.exchange === SurfaceExchange.wetted) return 1
+    const ea = this.airVaporPressureKpa
+    const rh = ea >= 0 ? ea / saturationPressureFromTableKpa(t, false) : Number.NaN
+    const needsPiece = !(rh >= 0) || this.wetShare > 0
+    return surfaceWaterActivity(this.exchange, needsPiece ? this.pieceAw(t) : Number.NaN, rh, this.wetShare)
   }
 
   result(): BatchSpoilageResult {
