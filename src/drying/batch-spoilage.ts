@@ -10,7 +10,7 @@
  * missing weather keep the last product temperature (the clock runs; before the first known hour nothing is
  * stepped). One track per batch, fed through fields; nothing is allocated per hour.
  */
-import { saturationPressureFromTableKpa } from '../physics/saturation-table.ts'
+import { liquidSaturationPressureFromTableKpa } from '../physics/saturation-table.ts'
 import {
   type SpoilageHourStepper,
   type SpoilageModel,
@@ -40,6 +40,9 @@ export interface BatchSpoilageResult {
   /** Hours stepped (hours of the batch with a known product temperature). */
   hours: number
 }
+
+/** Scratch for the slope the saturation table also returns (not read here). */
+const saturationSlope = new Float64Array(1)
 
 /** Product temperatures passed to a spoilage model are held within the models' accepted input range [°C]. */
 const SPOILAGE_T_MIN_C = -40
@@ -144,7 +147,7 @@ export class BatchSpoilageTrack {
   private surfaceAw(t: number): number {
     if (this.exchange === SurfaceExchange.wetted) return 1
     const ea = this.airVaporPressureKpa
-    const rh = ea >= 0 ? ea / saturationPressureFromTableKpa(t, false) : Number.NaN
+    const rh = ea >= 0 ? ea / liquidSaturationPressureFromTableKpa(t, saturationSlope) : Number.NaN
     const needsPiece = !(rh >= 0) || this.wetShare > 0
     return surfaceWaterActivity(this.exchange, needsPiece ? this.pieceAw(t) : Number.NaN, rh, this.wetShare)
   }

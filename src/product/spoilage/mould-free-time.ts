@@ -112,8 +112,8 @@ class MouldFreeHours implements SpoilageHourStepper {
     this.hours += 1
     if (aw < MFSL_NO_GROWTH_BELOW_AW || tC >= MFSL_NO_GROWTH_AT_OR_ABOVE_C) return
     // mouldFreeDaysValue, written out: the fraction of mould-free time used in one hour
-    const erh = 100 * (aw < VALID_AW_HIGH ? aw : VALID_AW_HIGH)
-    const t = tC < T_RANGE_LOW_C ? T_RANGE_LOW_C : tC > T_RANGE_HIGH_C ? T_RANGE_HIGH_C : tC
+    const erh = 100 * Math.min(aw, VALID_AW_HIGH)
+    const t = Math.min(Math.max(tC, T_RANGE_LOW_C), T_RANGE_HIGH_C)
     const log21 = L21_INTERCEPT - L21_SLOPE * erh
     const log27 = L27_INTERCEPT - L27_SLOPE * erh
     const log = log21 + ((log27 - log21) * (t - L21_T_C)) / LINE_SPAN_C
