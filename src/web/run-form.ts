@@ -7,6 +7,7 @@ import { type AssessOptions, assess } from '../analysis/assess.ts'
 import type { Assessment } from '../analysis/assessment.ts'
 import { compare, rankAssessments } from '../analysis/compare.ts'
 import { compareMethods, methodOptionSets } from '../analysis/compare-methods.ts'
+import { optionWordsAll } from '../analysis/option-names.ts'
 import { AssessOptionError } from '../analysis/plan.ts'
 import { isRuntimeFault } from '../api/errors.ts'
 import {
@@ -277,13 +278,13 @@ function methodsResult(site: NamedRead, input: FormInput, hooks: FormWorkHooks):
 
 /** A site as the page shows it: the engine's and the reader's messages name options by the form's labels. */
 function assessedSite({ name, read }: NamedRead, assessment: Assessment): AssessedSite {
-  assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
+  assessment.warnings = optionWordsAll(assessment.warnings, 'form')
   return {
     fileName: name,
     series: read.series,
     assessment,
-    readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
-    readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
+    readWarnings: optionWordsAll(read.warnings, 'form'),
+    readNotes: optionWordsAll(read.notes, 'form'),
     dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
   }
 }

@@ -28,6 +28,7 @@ import {
   parseRequest,
   readSite,
   renderAssessmentWarnings,
+  renderMethodComparisonWords,
   runEngine,
 } from './assess-request.ts'
 
@@ -56,12 +57,14 @@ export function assessRouter(config: ApiConfig): Hono {
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (request.methods !== null) {
       const methods = request.methods
-      const comparison = runEngine(
-        () => compareMethods(read.series, { ...request.options, onProgress: work.checkpoint }, methods),
-        request,
-      )
-      comparison.assessments = comparison.assessments.map((a) =>
-        renderAssessmentWarnings(a, request.surface, said),
+      // the engine's messages name options as CLI flags: renamed for this request's surface
+      const comparison = renderMethodComparisonWords(
+        runEngine(
+          () => compareMethods(read.series, { ...request.options, onProgress: work.checkpoint }, methods),
+          request,
+        ),
+        request.surface,
+        said,
       )
       work.checkpoint()
       if (output.format === 'html')
