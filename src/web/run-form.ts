@@ -20,6 +20,7 @@ import {
 import {
   renderMethodComparisonArticle,
   renderMethodComparisonCsv,
+  renderMethodComparisonHandout,
   renderMethodComparisonHtml,
 } from '../report/methods-html.ts'
 import { renderReportCsv } from '../report/report-csv.ts'
@@ -61,7 +62,7 @@ export interface FormResult {
   article: string
   /** The complete standalone HTML document. */
   document: string
-  /** The two-page summary alone (a comparison: the same as `document`, which is already short). */
+  /** The two-page summary alone (sites compared: the same as `document`, which is already short; methods side by side: the comparison without each method's report). */
   handout: string
   csv: string
   /** The assessment (one site) or the list of assessments (comparison), JSON text. */
@@ -269,7 +270,7 @@ function methodsResult(site: NamedRead, input: FormInput, hooks: FormWorkHooks):
     sites,
     article: renderMethodComparisonArticle(c, opts),
     document: renderMethodComparisonHtml(c, opts),
-    handout: renderMethodComparisonHtml(c, opts),
+    handout: renderMethodComparisonHandout(c, opts),
     csv: renderMethodComparisonCsv(c, { units: input.units }),
     json: JSON.stringify(c, null, 2),
     title: `${c.site.name || fileName} – ${c.product.name}: methods side by side`,
