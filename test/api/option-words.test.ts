@@ -22,8 +22,9 @@ const FLAG = /(^|[\s('"“])--[a-z]/
 function flagWords(value: unknown, path = '', out: string[] = []): string[] {
   if (typeof value === 'string') {
     if (FLAG.test(value)) out.push(`${path}: ${value}`)
-  } else if (Array.isArray(value)) value.forEach((v, i) => flagWords(v, `${path}[${i}]`, out))
-  else if (value !== null && typeof value === 'object')
+  } else if (Array.isArray(value)) {
+    for (const [i, v] of value.entries()) flagWords(v, `${path}[${i}]`, out)
+  } else if (value !== null && typeof value === 'object')
     for (const [k, v] of Object.entries(value)) flagWords(v, `${path}.${k}`, out)
   return out
 }
