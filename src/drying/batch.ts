@@ -205,7 +205,13 @@ export function simulateBatch(
     }
     if (trace) trace[h] = m
     if (productTrace && mode !== HourMode.paused) productTrace[h] = tHour
-    track?.stepBatchHour(h, mode, tHour, mStart, c.vaporPressureKpa[i], wetShare)
+    if (track) {
+      track.productC = tHour
+      track.moistureDb = mStart
+      track.airVaporPressureKpa = c.vaporPressureKpa[i]
+      track.wetShare = wetShare
+      track.stepBatchHour(h, mode)
+    }
     if (m <= targetDb) {
       hoursToTarget = h + 1
       break
