@@ -205,13 +205,7 @@ export function simulateBatch(
     }
     if (trace) trace[h] = m
     if (productTrace && mode !== HourMode.paused) productTrace[h] = tHour
-    if (track) {
-      track.productC = tHour
-      track.moistureDb = mStart
-      track.airVaporPressureKpa = c.vaporPressureKpa[i]
-      track.wetShare = wetShare
-      track.stepBatchHour(h, mode)
-    }
+    if (track) stepSpoilage(track, h, mode, tHour, mStart, c.vaporPressureKpa[i], wetShare)
     if (m <= targetDb) {
       hoursToTarget = h + 1
       break
@@ -238,6 +232,26 @@ export function simulateBatch(
     spoilageWaterActivityTrace: track?.waterActivityTrace,
     spoilage: track?.result(),
   }
+}
+
+/**
+ * Hour `h` of the batch's spoilage track: the hour's inputs set in its fields, then stepped (small enough to be
+ * inlined into the hour loop, so the numbers are not boxed on the way).
+ */
+function stepSpoilage(
+  track: BatchSpoilageTrack,
+  h: number,
+  mode: number,
+  productC: number,
+  moistureDb: number,
+  airVaporPressureKpa: number,
+  wetShare: number,
+): void {
+  track.productC = productC
+  track.moistureDb = moistureDb
+  track.airVaporPressureKpa = airVaporPressureKpa
+  track.wetShare = wetShare
+  track.stepBatchHour(h, mode)
 }
 
 /**
