@@ -145,7 +145,7 @@ export interface EnclosureHeatBalance {
   cpJPerKgK: number
 }
 
-const RISE_TOLERANCE_K = 1e-6
+const RISE_TOLERANCE_K = 1e-9
 const RISE_BRACKET_K = 200
 
 /**
@@ -166,12 +166,13 @@ export function enclosureAirRiseK(b: EnclosureHeatBalance): number {
   for (let i = 0; i < 100; i++) {
     const root = Math.sqrt(Math.abs(x))
     const f = (ua + (m0 + s * root) * cp) * x - q
+    if (f === 0) return x
     if (f > 0) hi = x
     else lo = x
     // d/dΔT of (m0 + s·√|ΔT|)·ΔT is m0 + 1.5·s·√|ΔT|
     const slope = ua + (m0 + 1.5 * s * root) * cp
     let next = x - f / slope
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2
+    if (!(next >= lo && next <= hi)) next = (lo + hi) / 2
     if (Math.abs(next - x) < RISE_TOLERANCE_K) return next
     x = next
   }
