@@ -121,12 +121,12 @@ describe('greenhouse dryer: one hour in the sun', () => {
   })
 
   it('without sun the greenhouse is open to still ambient air or closed', () => {
-    const open = hourOf(method({}), 0)
+    const open = hourOf(method({ nightPractice: 'open' }), 0)
     expect(open.airC).toBe(30)
     expect(open.humidityRatio).toBe(0.012)
     expect(open.airFlowShare).toBe(0) // no draught: the product rewets, it does not dry
     expect(open.mode).toBe(HourMode.active)
-    const closed = hourOf(method({ nightPractice: 'closed' }), 0)
+    const closed = hourOf(method({}), 0) // the default
     expect(closed.mode).toBe(HourMode.paused)
     expect(closed.pausedByNight).toBe(true)
   })

@@ -22,9 +22,9 @@
  *   the enclosure, evaporation), between its wet-surface temperature and T_air + Q/(H + R);
  * - its constant-rate limit is the smaller of that evaporation and what the hour's ventilation air can carry to
  *   saturation;
- * - without sun (night, or no irradiance): 'open', the air inside taken at ambient (the ground's release of the
- *   day's heat and the cover's long-wave loss are not modelled), the product rewets toward its equilibrium in still
- *   air; 'closed', the greenhouse is shut, no exchange (as the tunnel's closed nights);
+ * - without sun (night, or no irradiance): 'closed' (the default), the greenhouse is shut, no exchange (as the
+ *   tunnel's closed nights); 'open', the air inside taken at ambient (the ground's release of the day's heat and
+ *   the cover's long-wave loss are not modelled), the product rewets toward its equilibrium in still air;
  * - rain does not reach the product.
  * Energy: the sun absorbed inside and passed to the air (kWh per tonne), no fuel, no fan.
  */
@@ -87,8 +87,11 @@ export const greenhouseSchema = z.object({
   dischargeCoefficient: z.number().gt(0).max(1).default(0.65),
   /** Air changes per hour stated by a paper or the user; replaces the stack flow when given. */
   airChangesPerHour: z.number().min(0).max(600).optional(),
-  /** Without sun: 'open' (still ambient air inside, rewetting only) or 'closed' (no exchange). */
-  nightPractice: z.enum(['open', 'closed']).default('open'),
+  /**
+   * Without sun: 'closed' (vents and doors shut, no exchange: no drying, no rewetting; as the tunnel's default,
+   * common practice, no source) or 'open' (still ambient air inside: rewetting only).
+   */
+  nightPractice: z.enum(['open', 'closed']).default('closed'),
   /** Solar absorptance of the product; 0.7 as for open air (assumption, from memory). */
   productAbsorptivity: fraction('productAbsorptivity').default(0.7),
   /** Solar absorptance of the bare floor between trays; 0.7 for soil or concrete (from memory). */
