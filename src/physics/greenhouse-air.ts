@@ -61,7 +61,10 @@ export function openingsInSeriesAreaM2(lowOpeningM2: number, highOpeningM2: numb
     throw new RangeError(`opening areas must be >= 0 m², got ${lowOpeningM2} and ${highOpeningM2}`)
   }
   if (lowOpeningM2 === 0 || highOpeningM2 === 0) return 0
-  return (lowOpeningM2 * highOpeningM2) / Math.hypot(lowOpeningM2, highOpeningM2)
+  // (√ of the sum of squares rather than Math.hypot: the same bits on every runtime)
+  return (
+    (lowOpeningM2 * highOpeningM2) / Math.sqrt(lowOpeningM2 * lowOpeningM2 + highOpeningM2 * highOpeningM2)
+  )
 }
 
 /**

@@ -86,7 +86,7 @@ export const greenhouseSchema = z.object({
   /** Discharge coefficient of the openings; 0.65 (see physics/greenhouse-air.ts for its sources). */
   dischargeCoefficient: z.number().gt(0).max(1).default(0.65),
   /** Air changes per hour stated by a paper or the user; replaces the stack flow when given. */
-  airChangesPerHour: z.number().min(0).max(600).optional(),
+  airChangesPerHour: z.number().gt(0).max(600).optional(),
   /**
    * Without sun: 'closed' (vents and doors shut, no exchange: no drying, no rewetting; as the tunnel's default,
    * common practice, no source) or 'open' (still ambient air inside: rewetting only).
