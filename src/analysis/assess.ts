@@ -248,6 +248,7 @@ function startContext(
     startHourLocal: run.season.startHourLocal,
     wrap: series.typicalYear,
     spoilage: run.spoilage ? spoilageSetup(run.profile) : undefined,
+    ran: new Map(),
   }
 }
 
