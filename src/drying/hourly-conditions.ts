@@ -155,6 +155,11 @@ function computeHour(e: Engine, i: number): void {
   const tAir = hour.airC
   const tProduct = hour.productC
   c.mode[i] = hour.mode
+  if (hour.vaporPressureKpa !== c.vaporPressureKpa[i]) {
+    // a method that encloses its air (the greenhouse) set the inside humidity
+    c.vaporPressureKpa[i] = hour.vaporPressureKpa
+    c.humidityRatio[i] = hour.humidityRatio
+  }
   c.airC[i] = tAir
   c.productC[i] = tProduct
   c.heaterKwhPerTonne[i] = hour.heaterKwhPerTonne

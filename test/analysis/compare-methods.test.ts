@@ -141,6 +141,7 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
     const short = { ...options, seasonStart: '07-20', seasonEnd: '07-27', startStepDays: 7, maxDays: 20 }
     const all = compareMethods(s, short, 'all')
     expect(all.notAssessed.map((n) => n.kind).sort()).toEqual([
+      'greenhouse',
       'natural-air-bin',
       'open-air',
       'solar-cabinet',
