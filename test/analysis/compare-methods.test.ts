@@ -164,7 +164,7 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
     const short = { ...options, seasonStart: '07-20', seasonEnd: '07-27', startStepDays: 7, maxDays: 20 }
     const all = compareMethods(s, short, 'all')
     const needPosition = all.notAssessed.filter((n) => /latitude and longitude/.test(n.reason))
-    expect(needPosition.map((n) => n.kind).sort()).toEqual(['solar-cabinet', 'tunnel'])
+    expect(needPosition.map((n) => n.kind).sort()).toEqual(['greenhouse', 'solar-cabinet', 'tunnel'])
     expect(all.methods.map((m) => m.kind)).toEqual(expect.arrayContaining(['open-air', 'shade', 'heated']))
     // named alone it is still refused, with the same words
     expect(() => assess(s, { ...short, method: { kind: 'tunnel' } })).toThrow(
