@@ -109,9 +109,10 @@ export const FISH_PATHOGEN_EXPOSURE: SpoilageModel = {
     confidence: 'transcribed',
     short: 'US FDA 2020 seafood HACCP guidance, App. 4, Table A-2 summary (as reproduced); ICMSF 1996',
   },
+  // read as "<limit> <unit> <name>": "24 twenty-fourths of the allowed pathogen-growth exposure used (…)"
   measureName:
-    'allowed pathogen-growth exposure used, in 24ths (an hour above 21.1 °C counts 12, above 10 °C 6, above 4.4 °C 1)',
-  measureUnit: '1/24 of the allowed exposure',
+    'of the allowed pathogen-growth exposure used (an hour above 21.1 °C counts 12, above 10 °C 6, above 4.4 °C 1)',
+  measureUnit: 'twenty-fourths',
   spoiledAt: FISH_EXPOSURE_LIMIT,
   spoiledAtSource:
     'FDA 2020, Appendix 4, summary of Table A-2: 2 h above 21.1 °C, 4 h above 10 °C in all (below 57.2 °C); 24 h above 4.4 °C from memory',
