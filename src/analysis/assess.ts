@@ -94,11 +94,24 @@ export function requireSun(series: HourlySeries, kind: string): void {
   }
 }
 
+/**
+ * Refuse a method that needs the site's position (a collector or cover facing the sun) when the series has
+ * none, as a {@link MethodRefused}: methods side by side over every method then list it as not assessed
+ * with this reason instead of failing the whole request.
+ */
+export function requireCoordinates(series: HourlySeries, kind: string): void {
+  if (series.site.latitudeDeg !== null && series.site.longitudeDeg !== null) return
+  throw new MethodRefused(
+    `the ${kind} method needs the site's latitude and longitude (its collector or cover faces the sun), and the file gives none: give the position (--lat and --lon) or assess the open-air, shade or heated method`,
+  )
+}
+
 /** Assess one site (one series) for one product and method. Throws RangeError for bad options. */
 export function assess(series: HourlySeries, options: AssessOptions): Assessment {
   if (series.hours < 24)
     throw new RangeError(`the weather series must hold at least 24 hours, got ${series.hours}`)
   const run = resolveAssessOptions(options)
+  if (run.model.needs.coordinates) requireCoordinates(series, run.method.kind)
   if (run.model.needs.sun) requireSun(series, run.method.kind)
   const { primary, backup } = hourlyConditionsStage(series, run)
   const calendar = calendarStage(series, primary)
@@ -248,6 +261,7 @@ function startContext(
     startHourLocal: run.season.startHourLocal,
     wrap: series.typicalYear,
     spoilage: run.spoilage ? spoilageSetup(run.profile) : undefined,
+    ran: new Map(),
   }
 }
 

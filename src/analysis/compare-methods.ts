@@ -255,6 +255,19 @@ export function methodsToAssess(
 }
 
 /**
+ * The option sets a request runs: its options alone (`methods` null), or the shared options with each method
+ * that will be assessed side by side, as {@link compareMethods} runs them. The work limit of every entry point
+ * is asked of these (plan.ts `estimateWork`), so the page and the API count the same work.
+ */
+export function methodOptionSets(
+  options: AssessOptions | Omit<AssessOptions, 'method'>,
+  methods: MethodList | null,
+): AssessOptions[] {
+  if (methods === null) return [options as AssessOptions]
+  return methodsToAssess(methods, options.product).inputs.map((method) => ({ ...options, method }))
+}
+
+/**
  * Assess `series` with every method of `methods` (the other options alike) and compare them. When every
  * method is asked for, a method the product or the file cannot serve (grain in a bin for fruit; one that
  * needs the sun on a sunless file) is listed in `notAssessed` with its reason; with an explicit list its

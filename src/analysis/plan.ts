@@ -307,3 +307,29 @@ export function estimateBatchHours(options: AssessOptions, seriesHours: readonly
   const plan = planAssessment(options)
   return seriesHours.reduce((sum, hours) => sum + assessmentCost(plan, hours).batchHours, 0)
 }
+
+/** What a request will cost: its batch-hours and whether bin runs are among them (the limit's message says so). */
+export interface WorkEstimate {
+  batchHours: number
+  bin: boolean
+}
+
+/**
+ * The cost of running every option set on every series: one set for an assessment or a comparison of sites,
+ * one per method for methods side by side (analysis/compare-methods.ts `methodOptionSets`), each with its own
+ * plan (a bin's start step and airflows, a batch method's season). The one estimate the API, the page and the
+ * CLI's limits ask for.
+ */
+export function estimateWork(
+  optionSets: readonly AssessOptions[],
+  seriesHours: readonly number[],
+): WorkEstimate {
+  let batchHours = 0
+  let bin = false
+  for (const options of optionSets) {
+    const plan = planAssessment(options)
+    for (const hours of seriesHours) batchHours += assessmentCost(plan, hours).batchHours
+    bin ||= plan.bin !== null
+  }
+  return { batchHours, bin }
+}

@@ -35,6 +35,11 @@ export interface StartContext {
   wrap: boolean
   /** The spoilage model stepped along every batch of the method alone; absent: no spoilage figures. */
   spoilage?: BatchSpoilageSetup
+  /**
+   * Outcomes already run, by start hour: a start on the 1st or 16th of a month inside the season is both a
+   * monthly-heat start and a start-date row, and its batch is run once (the outcome is read, never changed).
+   */
+  ran?: Map<number, StartOutcome>
 }
 
 export interface StartOutcome {
@@ -96,6 +101,15 @@ export function startIndexFor(ctx: StartContext, year: number, d: MonthDay): num
 
 /** One batch from hour `index`: the method alone, then the heat needed by the deadline. */
 export function runStart(ctx: StartContext, index: number): StartOutcome {
+  const ran = ctx.ran?.get(index)
+  if (ran !== undefined) return ran
+  const outcome = runBatchAt(ctx, index)
+  ctx.ran?.set(index, outcome)
+  return outcome
+}
+
+/** The batch of {@link runStart}, run. */
+function runBatchAt(ctx: StartContext, index: number): StartOutcome {
   const r = supplementalHeat(
     ctx.primary,
     ctx.backup,

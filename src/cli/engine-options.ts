@@ -34,6 +34,8 @@ export const ENGINE_OPTIONS_HELP = `Product and method:
                   fans=pv|constant, nightPractice=closed|open, cover=polyethylene|glass
   heated:         --set-point <°C> | --target-rh <%>; --air-flow <kg/s per t> --efficiency <0–1> --fuel <id>
 ${BIN_FLAGS_HELP}
+  greenhouse:     --loading <kg/m²>; --param lengthM=, widthM=, trayAreaM2=, ventShareOfFloor= (or ventAreaM2=),
+                  airChangesPerHour=, cover=polyethylene|glass, nightPractice=open|closed
   any method:     --param <name>=<value> (repeatable) sets any parameter of the method by the name of the
                   API's JSON options (e.g. --param surfaceAreaPerTrayArea=1.2); docs/model.md §4 lists them
 Season and batches:
@@ -181,6 +183,8 @@ function methodFromFlags(kind: string, values: EngineValues): Record<string, unk
   } else if (kind === 'tunnel') {
     set('loadingKgPerM2', num('loading'))
     set('airFlowKgPerS', num('air-flow'))
+  } else if (kind === 'greenhouse') {
+    set('loadingKgPerM2', num('loading'))
   } else if (kind === 'heated') {
     set('setPointC', num('set-point'))
     set('targetRhPct', num('target-rh'))

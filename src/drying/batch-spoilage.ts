@@ -10,7 +10,7 @@
  * missing weather keep the last product temperature (the clock runs; before the first known hour nothing is
  * stepped). One track per batch, fed through fields; nothing is allocated per hour.
  */
-import { saturationPressureFromTableKpa } from '../physics/saturation-table.ts'
+import { liquidSaturationPressureFromTableKpa } from '../physics/saturation-table.ts'
 import {
   type SpoilageHourStepper,
   type SpoilageModel,
@@ -40,6 +40,9 @@ export interface BatchSpoilageResult {
   /** Hours stepped (hours of the batch with a known product temperature). */
   hours: number
 }
+
+/** Scratch for the slope the saturation table also returns (not read here). */
+const saturationSlope = new Float64Array(1)
 
 /** Product temperatures passed to a spoilage model are held within the models' accepted input range [°C]. */
 const SPOILAGE_T_MIN_C = -40
@@ -79,28 +82,18 @@ export class BatchSpoilageTrack {
   }
 
   /**
-   * Hour `h` of a batch (drying/batch.ts): its {@link HourMode}, the product temperature [°C] (NaN when missing),
-   * the moisture at the hour's start [kg/kg db], the air's vapour pressure [kPa] and the share of the hour's
-   * free-water limit the product evaporated.
+   * Hour `h` of a batch (drying/batch.ts) in {@link HourMode} `mode`, with the hour's inputs already set in
+   * {@link productC} (NaN when missing), {@link moistureDb} (at the hour's start), {@link airVaporPressureKpa} and
+   * {@link wetShare} (the share of the hour's free-water limit the product evaporated). The numbers go through
+   * fields, not arguments: a double passed to a call that is not inlined is boxed, one heap number per hour.
    */
-  stepBatchHour(
-    h: number,
-    mode: number,
-    productC: number,
-    moistureDb: number,
-    airVaporPressureKpa: number,
-    wetShare: number,
-  ): void {
-    this.productC = productC
-    this.moistureDb = moistureDb
+  stepBatchHour(h: number, mode: number): void {
     this.exchange =
       mode === HourMode.rainExposed
         ? SurfaceExchange.wetted
         : mode === HourMode.paused || mode === HourMode.missing
           ? SurfaceExchange.none
           : SurfaceExchange.air
-    this.airVaporPressureKpa = airVaporPressureKpa
-    this.wetShare = wetShare
     this.stepHour()
     if (this.waterActivityTrace !== undefined) this.waterActivityTrace[h] = this.lastWaterActivity
   }
@@ -110,26 +103,43 @@ export class BatchSpoilageTrack {
     const tRead = this.productC
     if (!Number.isNaN(tRead))
       this.lastProductC = Math.min(Math.max(tRead, SPOILAGE_T_MIN_C), SPOILAGE_T_MAX_C)
-    const t = this.lastProductC
-    if (Number.isNaN(t)) return
-    // inputs through fields: no number crosses these calls
+    if (Number.isNaN(this.lastProductC)) return
+    // inputs and outputs through fields: no number crosses these calls
+    if (this.surface && this.exchange !== SurfaceExchange.none) this.surfaceWaterActivityOfHour()
+    else this.pieceWaterActivityOfHour()
+    const acc = this.stepper
+    acc.productTempC = this.lastProductC
+    acc.moistureWbPct = (100 * this.moistureDb) / (1 + this.moistureDb)
+    acc.waterActivity = this.lastWaterActivity
+    acc.stepHour()
+  }
+
+  /** The piece's water activity into {@link lastWaterActivity}: the isotherm at the hour's temperature and the moisture at its start. */
+  private pieceWaterActivityOfHour(): void {
     const aw = this.awTable
-    aw.tC = t
+    aw.tC = this.lastProductC
     aw.moistureDb = this.moistureDb
     aw.lookup()
-    let awFed = aw.aw
-    if (this.surface) {
-      // the surface's water activity; the surface RH at the batch's own product temperature
-      const ea = this.airVaporPressureKpa
-      const rh = ea >= 0 ? ea / saturationPressureFromTableKpa(t, false) : Number.NaN
-      awFed = surfaceWaterActivity(this.exchange, awFed, rh, this.wetShare)
+    this.lastWaterActivity = aw.aw
+  }
+
+  /**
+   * The surface's water activity into {@link lastWaterActivity} in an hour the product met the air or rain
+   * ({@link surfaceWaterActivity}), the surface RH at the batch's own product temperature. The piece's water
+   * activity is looked up only where the rule reads it (an hour it dried, or no air vapour pressure), which
+   * gives the same value as looking it up every hour.
+   */
+  private surfaceWaterActivityOfHour(): void {
+    if (this.exchange === SurfaceExchange.wetted) {
+      this.lastWaterActivity = 1
+      return
     }
-    this.lastWaterActivity = awFed
-    const acc = this.stepper
-    acc.productTempC = t
-    acc.moistureWbPct = (100 * this.moistureDb) / (1 + this.moistureDb)
-    acc.waterActivity = awFed
-    acc.stepHour()
+    const ea = this.airVaporPressureKpa
+    const rh =
+      ea >= 0 ? ea / liquidSaturationPressureFromTableKpa(this.lastProductC, saturationSlope) : Number.NaN
+    if (!(rh >= 0) || this.wetShare > 0) this.pieceWaterActivityOfHour()
+    else this.lastWaterActivity = Number.NaN
+    this.lastWaterActivity = surfaceWaterActivity(this.exchange, this.lastWaterActivity, rh, this.wetShare)
   }
 
   result(): BatchSpoilageResult {

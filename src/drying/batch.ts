@@ -124,7 +124,7 @@ export function simulateBatch(
   checkBatchOptions(options, n)
   const wrap = options.wrap === true
   primary.ensure(startIndex, maxHours, wrap)
-  backup?.ensure(startIndex, maxHours, wrap)
+  // a lazy backup computes only the hours the batch hands to it (below), not its whole window
   const trace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
   const usedBackup = options.recordTrace ? new Uint8Array(maxHours) : undefined
   const productTrace = options.recordTrace ? new Float64Array(maxHours).fill(Number.NaN) : undefined
@@ -164,6 +164,7 @@ export function simulateBatch(
       primary.mode[i] !== HourMode.missing
     ) {
       c = backup
+      backup.ensure(i, 1, false)
       backupHours++
       if (usedBackup) usedBackup[h] = 1
     }
@@ -204,7 +205,7 @@ export function simulateBatch(
     }
     if (trace) trace[h] = m
     if (productTrace && mode !== HourMode.paused) productTrace[h] = tHour
-    track?.stepBatchHour(h, mode, tHour, mStart, c.vaporPressureKpa[i], wetShare)
+    if (track) stepSpoilage(track, h, mode, tHour, mStart, c.vaporPressureKpa[i], wetShare)
     if (m <= targetDb) {
       hoursToTarget = h + 1
       break
@@ -231,6 +232,26 @@ export function simulateBatch(
     spoilageWaterActivityTrace: track?.waterActivityTrace,
     spoilage: track?.result(),
   }
+}
+
+/**
+ * Hour `h` of the batch's spoilage track: the hour's inputs set in its fields, then stepped (small enough to be
+ * inlined into the hour loop, so the numbers are not boxed on the way).
+ */
+function stepSpoilage(
+  track: BatchSpoilageTrack,
+  h: number,
+  mode: number,
+  productC: number,
+  moistureDb: number,
+  airVaporPressureKpa: number,
+  wetShare: number,
+): void {
+  track.productC = productC
+  track.moistureDb = moistureDb
+  track.airVaporPressureKpa = airVaporPressureKpa
+  track.wetShare = wetShare
+  track.stepBatchHour(h, mode)
 }
 
 /**

@@ -20,7 +20,7 @@
 import { S_PER_HOUR } from '../physics/constants.ts'
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
-import { saturationPressureLiquidPa } from '../physics/saturation.ts'
+import { liquidSaturationPressureFromTableKpa } from '../physics/saturation-table.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import { allocateColumns, type HourlyConditions, type HourlyConditionsOptions } from './hour-columns.ts'
@@ -42,6 +42,17 @@ export const DEFAULT_WIND_MS = 1
 /** Weather accepted for an hour [°C, % RH, kPa]; outside, the hour counts as missing data (our choice). */
 const HOUR_DRY_BULB_RANGE_C = [-60, 70] as const
 const HOUR_PRESSURE_RANGE_KPA = [30, 110] as const
+
+/** Scratch for the slope the saturation table also returns (not read here). */
+const saturationSlope = new Float64Array(1)
+
+/**
+ * Saturation pressure over liquid water [Pa] at `tC` [°C] from the interpolated table of ASHRAE HOF 2017 ch. 1
+ * eq 6 (physics/saturation-table.ts: within 1e-9 relative of the formula, without its exp and log).
+ */
+function saturationPa(tC: number): number {
+  return 1000 * liquidSaturationPressureFromTableKpa(tC, saturationSlope)
+}
 
 /**
  * The ambient air of hour i into `e.hour` (and the night, saturation and humidity-ratio columns). False
@@ -77,7 +88,7 @@ function readAmbientHour(e: Engine, i: number): boolean {
   let pwsPa: number
   if (e.sharedSaturation) pwsPa = c.ambientSaturationPa[i]
   else {
-    pwsPa = saturationPressureLiquidPa(t)
+    pwsPa = saturationPa(t)
     c.ambientSaturationPa[i] = pwsPa
   }
   const pw = (rh / 100) * (pwsPa * 1e-3)
@@ -124,12 +135,12 @@ function markMissing(e: Engine, i: number): void {
   c.airCapDbPerH[i] = 0
 }
 
-/** exp(ln pws) [Pa] at the air temperature of the hour: the ambient value, the held one, or computed and held. */
+/** Saturation [Pa] at the air temperature of the hour: the ambient value, the held one, or computed and held. */
 function airSaturationPa(e: Engine, airC: number): number {
   const hour = e.hour
   if (airC === hour.dryBulbC) return hour.saturationPa
   if (airC === e.heldAirC) return e.heldSaturationPa
-  const pa = saturationPressureLiquidPa(airC)
+  const pa = saturationPa(airC)
   e.heldAirC = airC
   e.heldSaturationPa = pa
   return pa
@@ -144,6 +155,11 @@ function computeHour(e: Engine, i: number): void {
   const tAir = hour.airC
   const tProduct = hour.productC
   c.mode[i] = hour.mode
+  if (hour.vaporPressureKpa !== c.vaporPressureKpa[i]) {
+    // a method that encloses its air (the greenhouse) set the inside humidity
+    c.vaporPressureKpa[i] = hour.vaporPressureKpa
+    c.humidityRatio[i] = hour.humidityRatio
+  }
   c.airC[i] = tAir
   c.productC[i] = tProduct
   c.heaterKwhPerTonne[i] = hour.heaterKwhPerTonne
@@ -153,7 +169,7 @@ function computeHour(e: Engine, i: number): void {
   const pw = hour.vaporPressureKpa
   c.airRhPct[i] = (100 * pw) / (pwsAirPa * 1e-3)
   const pwsSurfacePa =
-    tProduct === tAir ? pwsAirPa : tProduct === t ? hour.saturationPa : saturationPressureLiquidPa(tProduct)
+    tProduct === tAir ? pwsAirPa : tProduct === t ? hour.saturationPa : saturationPa(tProduct)
   let rhSurface = (100 * pw) / (pwsSurfacePa * 1e-3)
   if (rhSurface > 100) rhSurface = 100
   c.surfaceRhPct[i] = rhSurface

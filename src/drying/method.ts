@@ -8,6 +8,7 @@ import { z } from 'zod'
 import { METHOD_MODELS, type MethodModels } from './methods/index.ts'
 
 export { FUEL_IDS, type FuelId } from './fuels.ts'
+export type { GreenhouseMethod } from './methods/greenhouse.ts'
 export { type HeatedMethod, heatedSchema } from './methods/heated.ts'
 export type { NaturalAirBinMethod } from './methods/natural-air-bin.ts'
 export type { OpenAirMethod } from './methods/open-air.ts'

@@ -34,11 +34,14 @@ function makeGrid(compute: (tC: number, rhPct: number) => number): Grid {
 
 function node(g: Grid, it: number, ir: number): number {
   const k = it * NRH + ir
-  let v = g.values[k]
-  if (Number.isNaN(v)) {
-    v = g.compute(T_MIN + it * GRID_T_STEP_C, Math.min(ir * GRID_RH_STEP_PCT, EMC_RH_CAP_PCT))
-    g.values[k] = v
-  }
+  const v = g.values[k]
+  return Number.isNaN(v) ? fillNode(g, it, ir) : v
+}
+
+/** Compute, store and return node (it, ir) of `g` (its first use). */
+function fillNode(g: Grid, it: number, ir: number): number {
+  const v = g.compute(T_MIN + it * GRID_T_STEP_C, Math.min(ir * GRID_RH_STEP_PCT, EMC_RH_CAP_PCT))
+  g.values[it * NRH + ir] = v
   return v
 }
 
@@ -75,10 +78,18 @@ function interpolateInto(g: Grid, out: Float64Array, slot: number): void {
   const ir = cell[1]
   const fx = cell[2]
   const fy = cell[3]
-  const a = node(g, it, ir)
-  const b = node(g, it + 1, ir)
-  const c = node(g, it, ir + 1)
-  const d = node(g, it + 1, ir + 1)
+  // the four nodes read in place (a double returned from a call that is not inlined is boxed: one heap
+  // number per node per hour); a node not yet computed is filled first
+  const values = g.values
+  const k = it * NRH + ir
+  if (Number.isNaN(values[k])) fillNode(g, it, ir)
+  if (Number.isNaN(values[k + NRH])) fillNode(g, it + 1, ir)
+  if (Number.isNaN(values[k + 1])) fillNode(g, it, ir + 1)
+  if (Number.isNaN(values[k + NRH + 1])) fillNode(g, it + 1, ir + 1)
+  const a = values[k]
+  const b = values[k + NRH]
+  const c = values[k + 1]
+  const d = values[k + NRH + 1]
   out[slot] = (a * (1 - fx) + b * fx) * (1 - fy) + (c * (1 - fx) + d * fx) * fy
 }
 
@@ -125,11 +136,13 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
     emcDesorptionDb: (t, rh) => lookup(des, t, rh),
     emcAdsorptionDb: (t, rh) => lookup(ads, t, rh),
     erhPct: (t, m) => {
-      if (m !== erhMoisture) {
-        erhMoisture = m
-        erhCache.fill(Number.NaN)
-      }
       const key = Math.round(t * 10)
+      if (m !== erhMoisture) {
+        // another moisture (a batch's own, hour by hour): the same value, not cached; the cache keeps the
+        // first moisture asked for (refilling it for every batch moisture cost more than it saved)
+        if (!Number.isNaN(erhMoisture)) return direct.erhPct(key / 10, m)
+        erhMoisture = m
+      }
       const slot = key + 200
       if (!(slot >= 0 && slot < erhCache.length)) return direct.erhPct(key / 10, m)
       let v = erhCache[slot]

@@ -45,15 +45,10 @@ export class WaterActivityTable {
   private readonly values = new Float64Array(NT * NU).fill(Number.NaN)
   constructor(readonly profile: ProductProfile) {}
 
-  private node(it: number, iu: number): number {
-    const k = it * NU + iu
-    let v = this.values[k]
-    if (Number.isNaN(v)) {
-      const u = iu * AW_GRID_WB_STEP
-      v = waterActivityDirect(this.profile, T_MIN + it * AW_GRID_T_STEP_C, u / (1 - u))
-      this.values[k] = v
-    }
-    return v
+  /** Compute and store node (it, iu) (its first use). */
+  private fill(it: number, iu: number): void {
+    const u = iu * AW_GRID_WB_STEP
+    this.values[it * NU + iu] = waterActivityDirect(this.profile, T_MIN + it * AW_GRID_T_STEP_C, u / (1 - u))
   }
 
   /** In: product temperature [°C] for {@link lookup}. */
@@ -79,8 +74,13 @@ export class WaterActivityTable {
     else if (y > NU - 1.000001) y = NU - 1.000001
     const it = Math.floor(x)
     const iu = Math.floor(y)
-    const a = this.node(it, iu)
-    this.aw = a + (this.node(it, iu + 1) - a) * (y - iu)
+    // the two nodes read in place (no double returned from a call: it would be boxed), filled on first use
+    const values = this.values
+    const k = it * NU + iu
+    if (Number.isNaN(values[k])) this.fill(it, iu)
+    if (Number.isNaN(values[k + 1])) this.fill(it, iu + 1)
+    const a = values[k]
+    this.aw = a + (values[k + 1] - a) * (y - iu)
   }
 
   /** Water activity (0–1) at product temperature tC [°C] and moisture [kg/kg db] (the {@link lookup} as a call). */

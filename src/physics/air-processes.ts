@@ -8,10 +8,11 @@
  *
  * The adiabatic solver has a scalar form ({@link adiabaticHumidityRatioAtRh}) and a kernel form for hot
  * loops ({@link solveAdiabaticPath} on an {@link AdiabaticPath} reused for every hour): the scalar calls the
- * kernel, so both give the same bits.
+ * kernel, so both give the same bits. The solver's iterates read saturation and its slope from the
+ * interpolated table of eq 6 (physics/saturation-table.ts, within 1e-9 relative of the formula: under 1e-8 K
+ * in the end point), which replaces an exp, a log and a derivative per Newton step.
  */
 
-import { KELVIN_OFFSET } from './constants.ts'
 import {
   CP_DRY_AIR_KJ_PER_KG_K,
   CP_WATER_VAPOR_KJ_PER_KG_K,
@@ -25,11 +26,8 @@ import {
   VAPOR_ENTHALPY_0C_KJ_PER_KG,
   vaporPressureFromHumidityRatio,
 } from './moist-air.ts'
-import {
-  dLnSaturationPressureLiquidDT,
-  saturationPressureLiquidPa,
-  saturationVaporPressureLiquidKpa,
-} from './saturation.ts'
+import { saturationPressureLiquidPa, saturationVaporPressureLiquidKpa } from './saturation.ts'
+import { liquidSaturationPressureFromTableKpa } from './saturation-table.ts'
 import { wetBulbFromHumidityRatioC } from './wet-bulb.ts'
 
 /** Newton tolerance of the adiabatic solver [°C] and its iteration cap (our choice). */
@@ -118,10 +116,13 @@ export class AdiabaticPath {
   endHumidityRatio = Number.NaN
 }
 
+/** dpws/dT [kPa/K] of the solver's last table read. */
+const saturationSlope = new Float64Array(1)
+
 /**
  * Humidity ratio reached when air takes up water adiabatically (constant enthalpy) until its RH equals
  * `endRhFraction`: Newton on f(T) = pw(W(T)) − φ·pws(T) with W(T) = (h − 1.006T)/(2501 + 1.86T) (eq 30),
- * pw from eq 20 and pws from eq 6, kept inside the bracket (T − 80 °C, T) by bisection. Tolerance
+ * pw from eq 20 and pws from eq 6 (its interpolated table), kept inside the bracket (T − 80 °C, T) by bisection. Tolerance
  * {@link ADIABATIC_TOLERANCE_C}, at most {@link ADIABATIC_MAX_ITERATIONS} steps (then the last iterate).
  */
 export function solveAdiabaticPath(path: AdiabaticPath): void {
@@ -152,10 +153,9 @@ export function solveAdiabaticPath(path: AdiabaticPath): void {
     // x·x is x ** 2 bit for bit (IEEE pow returns x·x for y = 2) without the pow call
     const dpwDenom = MOLAR_MASS_RATIO_WATER_AIR + wt
     const dpw = (pressureKpa * MOLAR_MASS_RATIO_WATER_AIR * dw) / (dpwDenom * dpwDenom)
-    const tK = t + KELVIN_OFFSET
-    const pws = saturationPressureLiquidPa(t) * 1e-3
+    const pws = liquidSaturationPressureFromTableKpa(t, saturationSlope)
     const f = pw - rhFraction * pws
-    const df = dpw - rhFraction * pws * dLnSaturationPressureLiquidDT(tK)
+    const df = dpw - rhFraction * saturationSlope[0]
     if (f < 0) hi = t
     else lo = t
     let next = t - f / df

@@ -18,7 +18,7 @@
  * in suncalc 2.0.2) written out without allocation, and checked against suncalc in the tests.
  */
 import * as SunCalc from 'suncalc'
-import { MS_PER_DAY, S_PER_DAY } from './constants.ts'
+import { MS_PER_DAY, MS_PER_HOUR, S_PER_DAY } from './constants.ts'
 
 /** Julian day of the Unix epoch 1970-01-01 00:00 UT minus 0.5 (Meeus 1998 ch. 7), as used by suncalc. */
 const JULIAN_DAY_1970 = 2440588
@@ -144,8 +144,149 @@ function solarTerms(utcMs: number, lonDeg: number): void {
 
 /** Atmospheric refraction [rad] at geometric altitude h [rad]: Meeus 1998 eq 16.4 (Sæmundsson), h clamped at 0 as suncalc 2.0.2. */
 function refractionRad(h: number): number {
-  const hc = Math.max(h, 0)
-  return 0.0002967 / Math.tan(hc + 0.00312536 / (hc + 0.08901179))
+  if (h <= 0) return REFRACTION_AT_HORIZON_RAD
+  return 0.0002967 / Math.tan(h + 0.00312536 / (h + 0.08901179))
+}
+
+/** {@link refractionRad} at h ≤ 0, where suncalc clamps the argument to 0: the same expression, evaluated once. */
+const REFRACTION_AT_HORIZON_RAD = 0.0002967 / Math.tan(0 + 0.00312536 / (0 + 0.08901179))
+
+/**
+ * Hour-to-hour recurrences of the column path. Of the terms of {@link solarTerms}, the mean anomaly M, the node
+ * Ω, the apparent longitude λ and the obliquity ε move by less than 0.05° in an hour: rather than eight of the
+ * ten sines and cosines per hour, each of their sines and cosines is advanced from the last hour by the
+ * angle-addition identities, with the small step's sine and cosine from their Taylor series (|step| < 0.001
+ * rad: terms beyond the fifth order are below 1e-18); the sidereal angle θ is evaluated every hour. The angles
+ * themselves are recomputed exactly every hour (the same formulas as {@link solarTerms}); only their sines and
+ * cosines are carried, and they are re-seeded exactly every {@link SEED_EVERY_HOURS} hours and after any step
+ * that is not exactly one hour, so rounding cannot accumulate: the columns agree with the hour-by-hour
+ * evaluation to about 1e-13° (checked in test/physics/sun.test.ts).
+ */
+class HourlySun {
+  /** Hours since the last exact seed. */
+  steps = 0
+  m = 0
+  sinM = 0
+  cosM = 0
+  omega = 0
+  sinOmega = 0
+  cosOmega = 0
+  lambda = 0
+  sinL = 0
+  cosL = 0
+  eps = 0
+  sinEps = 0
+  cosEps = 0
+  sinT = 0
+  cosT = 0
+}
+
+/** Hours between exact evaluations of the recurrences' sines and cosines. */
+const SEED_EVERY_HOURS = 24
+const hourlySun = new HourlySun()
+
+/**
+ * sin θ and cos θ of the local sidereal angle (eq 12.4 + east longitude) at UT day number `d`, evaluated
+ * every hour as in {@link solarTerms}: the day number of an instant is rounded to about 5e-10 day (it passes
+ * through the Julian day), which moves θ by up to ~1e-7°; suncalc rounds it the same way, and carrying θ by a
+ * recurrence instead would depart from it by that much.
+ */
+function siderealAngle(d: number, lonDeg: number): void {
+  const theta = RAD * ((280.46061837 + 360.98564736629 * d + lonDeg) % 360)
+  hourlySun.sinT = Math.sin(theta)
+  hourlySun.cosT = Math.cos(theta)
+}
+
+/** The slowly moving angles M, Ω and the mean ε of {@link solarTerms} at TT centuries `t` into {@link hourlySun} (no sines). */
+function slowAngles(t: number): void {
+  const s = hourlySun
+  s.m = RAD * (357.52911 + t * (35999.05029 - t * 0.0001537))
+  s.omega = RAD * (125.04 - 1934.136 * t)
+  s.eps = RAD * (23.439291 - t * (0.0130042 + t * (0.00000016 - t * 0.000000504)))
+  // ε's nutation term needs cos Ω and λ needs sin M, cos M and sin Ω: added by the callers ({@link apparentLongitude})
+}
+
+/** Apparent longitude λ [rad] at TT centuries `t` from the hour's sin M, cos M and sin Ω (as in {@link solarTerms}). */
+function apparentLongitude(t: number, sinM: number, cosM: number, sinOmega: number): number {
+  const l0 = RAD * (280.46646 + t * (36000.76983 + t * 0.0003032))
+  const c =
+    RAD *
+    ((1.914602 - t * (0.004817 + t * 0.000014)) * sinM +
+      (0.019993 - 0.000101 * t) * 2 * sinM * cosM +
+      0.000289 * sinM * (3 - 4 * sinM * sinM))
+  return l0 + c - RAD * (0.00569 + 0.00478 * sinOmega)
+}
+
+/** Sine and cosine of a small angle step `a` [rad] (Taylor series to the fifth order) into `stepSinCos`. */
+const stepSinCos = new Float64Array(2)
+function smallStep(a: number): void {
+  const a2 = a * a
+  stepSinCos[0] = a * (1 - (a2 / 6) * (1 - a2 / 20))
+  stepSinCos[1] = 1 - (a2 / 2) * (1 - a2 / 12)
+}
+
+/** The outputs of {@link solarTerms} into `scratch` from the carried sines and cosines. */
+function writeTerms(): void {
+  const s = hourlySun
+  const cosEpsSinL = s.cosEps * s.sinL
+  scratch[0] = s.sinEps * s.sinL
+  scratch[1] = s.cosT * s.cosL + s.sinT * cosEpsSinL
+  scratch[2] = s.sinT * s.cosL - s.cosT * cosEpsSinL
+}
+
+/** Exact evaluation at `utcMs` for east longitude `lonDeg`: the angles, their sines and cosines, and `scratch`. */
+function seedHourlySun(utcMs: number, lonDeg: number): void {
+  const s = hourlySun
+  const d = utcMs / MS_PER_DAY - 0.5 + JULIAN_DAY_1970 - JULIAN_DAY_2000
+  const t = (d + deltaTSeconds(d) / S_PER_DAY) / 36525
+  slowAngles(t)
+  s.sinM = Math.sin(s.m)
+  s.cosM = Math.cos(s.m)
+  s.sinOmega = Math.sin(s.omega)
+  s.cosOmega = Math.cos(s.omega)
+  s.eps += RAD * 0.00256 * s.cosOmega
+  s.lambda = apparentLongitude(t, s.sinM, s.cosM, s.sinOmega)
+  s.sinL = Math.sin(s.lambda)
+  s.cosL = Math.cos(s.lambda)
+  s.sinEps = Math.sin(s.eps)
+  s.cosEps = Math.cos(s.eps)
+  siderealAngle(d, lonDeg)
+  s.steps = 0
+  writeTerms()
+}
+
+/** One hour on from the last seed or step: the angles exactly, their sines and cosines by the identities. */
+function stepHourlySun(utcMs: number, lonDeg: number): void {
+  const s = hourlySun
+  const d = utcMs / MS_PER_DAY - 0.5 + JULIAN_DAY_1970 - JULIAN_DAY_2000
+  const t = (d + deltaTSeconds(d) / S_PER_DAY) / 36525
+  const mPrev = s.m
+  const omegaPrev = s.omega
+  const lambdaPrev = s.lambda
+  const epsPrev = s.eps
+  slowAngles(t)
+  let sn: number
+  smallStep(s.m - mPrev)
+  sn = s.sinM * stepSinCos[1] + s.cosM * stepSinCos[0]
+  s.cosM = s.cosM * stepSinCos[1] - s.sinM * stepSinCos[0]
+  s.sinM = sn
+  smallStep(s.omega - omegaPrev)
+  sn = s.sinOmega * stepSinCos[1] + s.cosOmega * stepSinCos[0]
+  s.cosOmega = s.cosOmega * stepSinCos[1] - s.sinOmega * stepSinCos[0]
+  s.sinOmega = sn
+  s.eps += RAD * 0.00256 * s.cosOmega
+  s.lambda = apparentLongitude(t, s.sinM, s.cosM, s.sinOmega)
+  smallStep(s.lambda - lambdaPrev)
+  sn = s.sinL * stepSinCos[1] + s.cosL * stepSinCos[0]
+  s.cosL = s.cosL * stepSinCos[1] - s.sinL * stepSinCos[0]
+  s.sinL = sn
+  smallStep(s.eps - epsPrev)
+  sn = s.sinEps * stepSinCos[1] + s.cosEps * stepSinCos[0]
+  s.cosEps = s.cosEps * stepSinCos[1] - s.sinEps * stepSinCos[0]
+  s.sinEps = sn
+  siderealAngle(d, lonDeg)
+  s.steps++
+  writeTerms()
 }
 
 /**
@@ -187,14 +328,20 @@ export function sunPositionColumns(
   const phi = RAD * latDeg
   const sinPhi = Math.sin(phi)
   const cosPhi = Math.cos(phi)
+  const hour = hourlySun
+  hour.steps = SEED_EVERY_HOURS
+  let previousT = Number.NaN
   for (let i = 0; i < n; i++) {
     const t = instantsUtcMs[i]
     if (!Number.isFinite(t)) {
       outAltitudeDeg[i] = Number.NaN
       if (outAzimuthDeg !== undefined) outAzimuthDeg[i] = Number.NaN
+      previousT = Number.NaN
       continue
     }
-    solarTerms(t + offsetMs, lonDeg)
+    if (t - previousT === MS_PER_HOUR && hour.steps < SEED_EVERY_HOURS) stepHourlySun(t + offsetMs, lonDeg)
+    else seedHourlySun(t + offsetMs, lonDeg)
+    previousT = t
     const sinDec = scratch[0]
     const x = scratch[1]
     const alt = Math.asin(sinPhi * sinDec + cosPhi * x)

@@ -10,6 +10,7 @@ import { type UnitSystem, unitFormatter } from './display-units.ts'
 import { escapeHtml } from './escape.ts'
 import type { Paper } from './report-css.ts'
 import { htmlDocument, renderReportArticle } from './report-html.ts'
+import { cautionsHtml } from './sections/cautions.ts'
 import { finite, round } from './sections/context.ts'
 import { type ReportTable, tableCsv, tableHtml, tablesCsv } from './tables.ts'
 
@@ -136,6 +137,24 @@ export function renderMethodComparisonCsv(
 
 /** The comparison as an `<article>` followed by each method's report. */
 export function renderMethodComparisonArticle(c: MethodComparison, o: MethodsReportOptions = {}): string {
+  const perMethod = c.assessments
+    .map((a, i) =>
+      renderReportArticle(a, {
+        units: o.units ?? 'si',
+        idPrefix: `m${i + 1}-`,
+        info: { fileName: o.fileName },
+        footer: o.footer,
+      }),
+    )
+    .join('\n')
+  return `${comparisonArticle(c, o)}\n${perMethod}`
+}
+
+/**
+ * The comparison's own `<article>` (the answer, the methods table, the season calendar), with the cautions of
+ * every method when it stands alone (the printed summary); `after` closes it.
+ */
+function comparisonArticle(c: MethodComparison, o: MethodsReportOptions, after = ''): string {
   const units = o.units ?? 'si'
   const site = c.site.name.trim() || o.fileName || 'unnamed site'
   const facts: [string, string][] = [
@@ -164,23 +183,27 @@ export function renderMethodComparisonArticle(c: MethodComparison, o: MethodsRep
     ...binSentences(c, units),
     ...c.notAssessed.map((n) => `Not assessed: ${n.kind}: ${n.reason}`),
   ]
-  const perMethod = c.assessments
-    .map((a, i) =>
-      renderReportArticle(a, {
-        units,
-        idPrefix: `m${i + 1}-`,
-        info: { fileName: o.fileName },
-        footer: o.footer,
-      }),
-    )
-    .join('\n')
   return `<article class="dryhours-report methods" data-report="methods" data-units="${units}">
 <header class="report-header" data-section="header"><p class="kicker">dryhours · methods side by side</p><h1>How should ${escapeHtml(c.product.name)} be dried at ${escapeHtml(site)}?</h1>
 <dl class="facts">${facts.map(([k, v]) => `<div class="kv"><dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd></div>`).join('')}</dl></header>
 <section class="report-section answer" data-section="recommendation"><h2>The answer</h2><p class="recommendation" data-method="${escapeHtml(c.recommendation.kind ?? '')}">${escapeHtml(c.recommendation.text)}</p><p class="criterion">Criterion: ${escapeHtml(c.recommendation.criterion)}.</p>${tableHtml(methodsTable(c, units))}<ul class="notes">${notes.map((n) => `<li>${escapeHtml(n)}</li>`).join('')}</ul></section>
-<section class="report-section" data-section="season-calendar"><h2>Season calendar</h2>${tableHtml(calendarTable(c), { className: 'data calendar' })}${tableHtml(calendarRulesTable(c))}</section>
-</article>
-${perMethod}`
+<section class="report-section" data-section="season-calendar"><h2>Season calendar</h2>${tableHtml(calendarTable(c), { className: 'data calendar' })}${tableHtml(calendarRulesTable(c))}</section>${after}
+</article>`
+}
+
+/**
+ * The printed summary of a methods comparison: the comparison alone with the cautions of every method; each
+ * method's own report is in the full document ({@link renderMethodComparisonHtml}).
+ */
+export function renderMethodComparisonHandout(c: MethodComparison, o: MethodsReportOptions = {}): string {
+  const site = c.site.name.trim() || o.fileName || 'unnamed site'
+  const cautions = cautionsHtml(comparisonCautions(c))
+  const more = `<p class="note">Each method's own report (charts, every start date, the assumptions) is in the full document.</p>`
+  return htmlDocument(
+    `Drying methods side by side: ${site} – ${c.product.name} (summary)`,
+    comparisonArticle(c, o, `${cautions}${more}`),
+    o.paper,
+  )
 }
 
 /** The complete HTML document of a methods comparison. */

@@ -216,7 +216,8 @@ function looksLikeValue(text: string): boolean {
  * A message written with CLI option names (`--map dryBulb=<column>`, `--lat`, `--utc-offset 0`)
  * rewritten for another surface: API query parameters (`map=dryBulb=<column>`, `lat`, `utcOffset=0`),
  * JSON option keys (`mapping: dryBulb=<column>`, `latitudeDeg`) or the page's field labels
- * (“Column mapping, one per line”: dryBulb=<column>). Only known flags are rewritten. One pass over
+ * (“Column mapping, one per line”: dryBulb=<column>). Only known flags are rewritten; `more` (the other
+ * options, analysis/option-names.ts) is asked first, so a route's own meaning of a flag wins. One pass over
  * the text, no pattern matching (linear in its length).
  */
 export function renderOptionNames(
@@ -238,7 +239,7 @@ export function renderOptionNames(
     let end = at + 2
     while (end < n && isFlagChar(message.charCodeAt(end))) end++
     const flag = message.slice(at + 2, end)
-    const s = WEATHER_OPTION_SPECS.find((x) => x.flag === flag) ?? more.find((x) => x.flag === flag)
+    const s = more.find((x) => x.flag === flag) ?? WEATHER_OPTION_SPECS.find((x) => x.flag === flag)
     const before = at === 0 ? 32 : message.charCodeAt(at - 1)
     if (
       s === undefined ||

@@ -226,7 +226,10 @@ function methodsOf(form: FormData): { kinds: string[]; inputs: AssessOptions['me
   const bin = kinds.includes('natural-air-bin') ? binFields(form) : {}
   const inputs = kinds.map((kind) => {
     const method: Record<string, unknown> = { kind }
-    if (loading !== undefined && (kind === 'open-air' || kind === 'shade' || kind === 'tunnel'))
+    if (
+      loading !== undefined &&
+      (kind === 'open-air' || kind === 'shade' || kind === 'tunnel' || kind === 'greenhouse')
+    )
       method.loadingKgPerM2 = loading
     if (area !== undefined && kind === 'solar-cabinet') method.collectorAreaM2PerTonne = area
     if (setPoint !== undefined && kind === 'heated') method.setPointC = setPoint

@@ -5,6 +5,7 @@
  * zones, the product catalogue grouped by category, the demo files and the file's questions, and the label
  * of every field for messages. Every value echoed back is escaped.
  */
+import { ENERGY_OPTION_NAMES, OTHER_OPTION_NAMES } from '../analysis/option-names.ts'
 import { PRODUCT_CATALOGUE } from '../product/catalogue.ts'
 import type { ProductCategory } from '../product/profile.ts'
 import { escapeHtml } from '../report/escape.ts'
@@ -21,15 +22,13 @@ const CATEGORY_NAMES: Record<ProductCategory, string> = {
   'beverage-crop': 'Coffee, cocoa and tea',
 }
 
-/** The labels of the page's own fields (the weather options' come from their shared table), for messages. */
+/** The labels of the page's own fields (the options' that messages name come from their shared tables), for messages. */
 export const FIELD_LABELS: Record<string, string> = {
   file: 'Weather file',
   demo: 'Demo site',
-  product: 'Product',
   profile: 'Your own product profile',
   targetWbPct: 'Target moisture',
   initialWbPct: 'Initial moisture',
-  method: 'Drying method',
   seasonStart: 'First start day',
   seasonEnd: 'Last start day',
   deadlineDays: 'Finish within',
@@ -40,7 +39,6 @@ export const FIELD_LABELS: Record<string, string> = {
   binDepthM: 'Grain depth',
   binDiameterM: 'Bin diameter',
   heatRiseK: 'Heater rise',
-  fuel: 'Fuel',
   fuelPrice: 'Your price per fuel unit',
   currency: 'Currency',
   heaterEfficiencyPct: 'Heater efficiency',
@@ -53,12 +51,13 @@ export const FIELD_LABELS: Record<string, string> = {
   referenceValue: 'Its value',
   thicknessMm: 'Thickness',
   shape: 'Shape',
-  baseline: 'Batches in the baseline',
-  dryingTempC: 'Drying-air temperature',
-  logUtcOffset: "UTC offset of the log's times",
   startHourLocal: 'Start hour',
   stepDays: 'Start every',
   ...Object.fromEntries(WEATHER_OPTION_SPECS.map((s) => [s.param, s.label])),
+  // the labels of the options that core messages name, from the one table of option names
+  ...Object.fromEntries(
+    [...OTHER_OPTION_NAMES, ...ENERGY_OPTION_NAMES].flatMap((o) => (o.field ? [[o.field, o.label]] : [])),
+  ),
 }
 
 /** The per-site fields of the sites table (each site also takes the shared options of the form). */

@@ -42,7 +42,7 @@ ${field('deadlineDays', 'Finish within [days]', v, { inputmode: 'decimal', place
 }
 
 function methodParameterFields(v: Record<string, string>): string {
-  return `${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade, solar tunnel)', v, { inputmode: 'decimal', methods: 'open-air shade tunnel' })}
+  return `${field('loadingKgPerM2', 'Loading [kg fresh per m²] (open air, shade, solar tunnel, greenhouse)', v, { inputmode: 'decimal', methods: 'open-air shade tunnel greenhouse' })}
 ${field('collectorAreaM2PerTonne', 'Collector area [m² per tonne] (solar cabinet)', v, { inputmode: 'decimal', placeholder: '100', methods: 'solar-cabinet' })}
 ${field('setPointC', 'Air set point [°C] (heated; empty = just enough)', v, { inputmode: 'decimal', methods: 'heated' })}
 ${field('binAirflows', 'Airflows to compare [m³/min per tonne] (bin)', v, { placeholder: '0.5 1 1.5 2 3', methods: 'natural-air-bin', hint: 'one, or several separated by spaces; 1 m³/min per t is about 0.9 cfm/bu of corn' })}

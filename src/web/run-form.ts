@@ -3,10 +3,11 @@
  * What POST /report does with a parsed form: read each weather file, assess it, and render one report
  * (one site) or a comparison (several). Runtime-neutral; the demo provider is the only I/O and is passed in.
  */
-import { assess } from '../analysis/assess.ts'
+import { type AssessOptions, assess } from '../analysis/assess.ts'
 import type { Assessment } from '../analysis/assessment.ts'
 import { compare, rankAssessments } from '../analysis/compare.ts'
-import { compareMethods } from '../analysis/compare-methods.ts'
+import { compareMethods, methodOptionSets } from '../analysis/compare-methods.ts'
+import { optionWordsAll } from '../analysis/option-names.ts'
 import { AssessOptionError } from '../analysis/plan.ts'
 import { isRuntimeFault } from '../api/errors.ts'
 import {
@@ -19,6 +20,7 @@ import {
 import {
   renderMethodComparisonArticle,
   renderMethodComparisonCsv,
+  renderMethodComparisonHandout,
   renderMethodComparisonHtml,
 } from '../report/methods-html.ts'
 import { renderReportCsv } from '../report/report-csv.ts'
@@ -60,7 +62,7 @@ export interface FormResult {
   article: string
   /** The complete standalone HTML document. */
   document: string
-  /** The two-page summary alone (a comparison: the same as `document`, which is already short). */
+  /** The two-page summary alone (sites compared: the same as `document`, which is already short; methods side by side: the comparison without each method's report). */
   handout: string
   csv: string
   /** The assessment (one site) or the list of assessments (comparison), JSON text. */
@@ -97,8 +99,11 @@ async function inputs(
 
 /** What the server adds to a form's work: its limits and its time budget. */
 export interface FormWorkHooks {
-  /** Called before the engine runs, with the hours of each series (the batch-hour limit). */
-  beforeAssess?: (seriesHours: number[]) => void
+  /**
+   * Called before the engine runs, with the option sets it will run (one, or one per method side by side:
+   * analysis/compare-methods.ts `methodOptionSets`) and the hours of each series: the batch-hour limit.
+   */
+  beforeAssess?: (optionSets: AssessOptions[], seriesHours: number[]) => void
   /** The engine's progress callback (the time budget and cancellation check). */
   onProgress?: () => void
 }
@@ -232,7 +237,10 @@ export async function runForm(
   const files = await inputs(input, demo)
   const reads = readFiles(files)
   if (input.task === 'assess' && input.methodInputs.length > 1) return methodsResult(reads[0], input, hooks)
-  hooks.beforeAssess?.(reads.map((r) => r.read.series.hours))
+  hooks.beforeAssess?.(
+    methodOptionSets({ ...input.assess, product: input.product }, null),
+    reads.map((r) => r.read.series.hours),
+  )
   const { assessments, ranking } = runEngine(reads, input, hooks)
   const sites = reads.map((r, i) => assessedSite(r, assessments[i]))
   if (sites.length === 1) return siteResult(sites, input.units)
@@ -246,7 +254,10 @@ export async function runForm(
  */
 function methodsResult(site: NamedRead, input: FormInput, hooks: FormWorkHooks): FormResult {
   const { method: _one, ...shared } = input.assess
-  hooks.beforeAssess?.(input.methodInputs.map(() => site.read.series.hours))
+  // the work of every method, each with its own plan (a bin's start step and airflows), as the API counts it
+  hooks.beforeAssess?.(methodOptionSets({ ...shared, product: input.product }, input.methodInputs), [
+    site.read.series.hours,
+  ])
   const c = compareMethods(
     site.read.series,
     { ...shared, product: input.product, onProgress: hooks.onProgress },
@@ -259,7 +270,7 @@ function methodsResult(site: NamedRead, input: FormInput, hooks: FormWorkHooks):
     sites,
     article: renderMethodComparisonArticle(c, opts),
     document: renderMethodComparisonHtml(c, opts),
-    handout: renderMethodComparisonHtml(c, opts),
+    handout: renderMethodComparisonHandout(c, opts),
     csv: renderMethodComparisonCsv(c, { units: input.units }),
     json: JSON.stringify(c, null, 2),
     title: `${c.site.name || fileName} – ${c.product.name}: methods side by side`,
@@ -268,13 +279,13 @@ function methodsResult(site: NamedRead, input: FormInput, hooks: FormWorkHooks):
 
 /** A site as the page shows it: the engine's and the reader's messages name options by the form's labels. */
 function assessedSite({ name, read }: NamedRead, assessment: Assessment): AssessedSite {
-  assessment.warnings = assessment.warnings.map((w) => renderOptionNames(w, 'form'))
+  assessment.warnings = optionWordsAll(assessment.warnings, 'form')
   return {
     fileName: name,
     series: read.series,
     assessment,
-    readWarnings: read.warnings.map((w) => renderOptionNames(w, 'form')),
-    readNotes: read.notes.map((n) => renderOptionNames(n, 'form')),
+    readWarnings: optionWordsAll(read.warnings, 'form'),
+    readNotes: optionWordsAll(read.notes, 'form'),
     dataSource: `${read.format.toUpperCase()}, ${read.rows.read} rows read, ${read.rows.used} used, ${read.rows.repaired} repaired, ${read.rows.rejected} rejected`,
   }
 }

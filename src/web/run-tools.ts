@@ -7,6 +7,7 @@
 
 import { BatchLogError } from '../analysis/energy/batch-log.ts'
 import { analyzeEnergyLog, type EnergyChartOptions } from '../analysis/energy/energy-chart.ts'
+import { energyChartWords } from '../analysis/energy/energy-words.ts'
 import { optionWords } from '../analysis/option-names.ts'
 import { FUEL_IDS, type FuelId } from '../drying/method.ts'
 import { productById } from '../product/catalogue.ts'
@@ -181,13 +182,15 @@ export async function runEnergy(form: FormData, ctx: ToolContext): Promise<ToolR
       options.weather = readWeatherBytes(weather.bytes, w).series
     } catch (e) {
       if (e instanceof WeatherInputError || (e instanceof RangeError && !(e instanceof FormFieldError)))
-        throw new FormFieldError('weather', `${weather.name}: ${renderOptionNames(e.message, 'form')}`)
+        // this form's only clock field is the log's offset, which also reads the weather file
+        throw new FormFieldError('weather', `${weather.name}: ${optionWords(e.message, 'form', 'energy')}`)
       throw e
     }
   }
   const text = new TextDecoder().decode(log.bytes)
   try {
-    const assessment = analyzeEnergyLog(text, options)
+    // the engine's messages name options as CLI flags: the page names them by its labels
+    const assessment = energyChartWords(analyzeEnergyLog(text, options), 'form')
     ctx.onProgress?.()
     return {
       article: renderEnergyArticle(assessment, { logName: log.name }),
@@ -202,10 +205,11 @@ export async function runEnergy(form: FormData, ctx: ToolContext): Promise<ToolR
         .join('; ')
       throw new FormFieldError(
         'log',
-        `${log.name}: ${optionWords(e.message, 'form')}${lines ? ` (${lines})` : ''}`,
+        `${log.name}: ${optionWords(e.message, 'form', 'energy')}${lines ? ` (${lines})` : ''}`,
       )
     }
-    if (e instanceof RangeError) throw new RangeError(`${log.name}: ${optionWords(e.message, 'form')}`)
+    if (e instanceof RangeError)
+      throw new RangeError(`${log.name}: ${optionWords(e.message, 'form', 'energy')}`)
     throw e
   }
 }

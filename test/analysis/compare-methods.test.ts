@@ -141,6 +141,7 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
     const short = { ...options, seasonStart: '07-20', seasonEnd: '07-27', startStepDays: 7, maxDays: 20 }
     const all = compareMethods(s, short, 'all')
     expect(all.notAssessed.map((n) => n.kind).sort()).toEqual([
+      'greenhouse',
       'natural-air-bin',
       'open-air',
       'solar-cabinet',
@@ -155,6 +156,20 @@ describe('methods side by side (analysis/compare-methods.ts)', () => {
       /open-air method needs the sun/,
     )
     expect(() => compareMethods(s, short, [{ kind: 'heated' }, { kind: 'heated' }])).toThrow(/twice/)
+  })
+
+  it('with all on a file with sun but no position, the methods facing the sun are listed, not an error', () => {
+    const s = sliceSeries(demoSeries('dryUpland'), 24 * 200, 24 * 60)
+    s.site = { ...s.site, latitudeDeg: null, longitudeDeg: null }
+    const short = { ...options, seasonStart: '07-20', seasonEnd: '07-27', startStepDays: 7, maxDays: 20 }
+    const all = compareMethods(s, short, 'all')
+    const needPosition = all.notAssessed.filter((n) => /latitude and longitude/.test(n.reason))
+    expect(needPosition.map((n) => n.kind).sort()).toEqual(['greenhouse', 'solar-cabinet', 'tunnel'])
+    expect(all.methods.map((m) => m.kind)).toEqual(expect.arrayContaining(['open-air', 'shade', 'heated']))
+    // named alone it is still refused, with the same words
+    expect(() => assess(s, { ...short, method: { kind: 'tunnel' } })).toThrow(
+      /needs the site's latitude and longitude/,
+    )
   })
 
   it('a currency that is not a short printable name is refused before any work', () => {

@@ -290,6 +290,10 @@ describe('the grower: methods side by side', () => {
     expect(await page.$$eval('#result [data-section="season-calendar"]', (s) => s.length)).toBe(1)
     expect(await page.$$eval('#result article[data-report="assessment"]', (a) => a.length)).toBe(2)
     await look(page, 'grower-methods-desktop')
+    // the summary to print: the comparison on two pages, as a single assessment's
+    const handout = await download(page, '#downloads a[download$="-summary.html"]')
+    const pages = await printed(handout, 'grower-methods-summary')
+    expect(pages).toEqual({ a4: 2, letter: 2 })
     await context.close()
   })
 })

@@ -11,6 +11,8 @@ import { METHOD_MODELS, methodModel } from '../../src/drying/methods/index.ts'
 import { HourMode } from '../../src/drying/methods/method-model.ts'
 import { productResponse } from '../../src/drying/product-response.ts'
 import { parseDryingThresholds } from '../../src/drying/thresholds.ts'
+import { humidityRatioFromVaporPressure, moistAirEnthalpyKjPerKg } from '../../src/physics/moist-air.ts'
+import { saturationPressureLiquidPa } from '../../src/physics/saturation.ts'
 import { PRODUCT_CATALOGUE, productById } from '../../src/product/catalogue.ts'
 import { moistureDbFromWbPct } from '../../src/product/moisture-basis.ts'
 import { renderPage } from '../../src/web/page-html.ts'
@@ -18,6 +20,12 @@ import { demoSeries, sliceSeries } from './demo-weather.ts'
 
 const week = sliceSeries(demoSeries('dryUpland'), 24 * 190, 24 * 7)
 const apricots = productById('apricot-halves')
+/** The ambient humidity ratio of hour i as the hourly driver computes it (drying/hourly-conditions.ts). */
+const ambientW = (i: number): number =>
+  humidityRatioFromVaporPressure(
+    (week.relativeHumidityPct[i] / 100) * (saturationPressureLiquidPa(week.dryBulbC[i]) * 1e-3),
+    week.pressureKpa[i],
+  )
 
 describe('the method registry', () => {
   it('kinds are unique, in registry order, and the union schema accepts each with its defaults', () => {
@@ -48,7 +56,12 @@ describe('the method registry', () => {
       let active = 0
       for (let i = 0; i < c.hours; i++) {
         if (c.mode[i] === HourMode.missing) continue
-        expect(c.airC[i]).toBeGreaterThanOrEqual(week.dryBulbC[i] - 1e-9) // heating only, never cooling the air
+        // heating only: the air at the product never holds less energy than the ambient (an enclosure's air may be
+        // cooler than the ambient where the product's evaporation takes more than the sun gives, but wetter)
+        const hAmbient = moistAirEnthalpyKjPerKg(week.dryBulbC[i], ambientW(i))
+        expect(moistAirEnthalpyKjPerKg(c.airC[i], c.humidityRatio[i])).toBeGreaterThanOrEqual(hAmbient - 0.05)
+        if (c.humidityRatio[i] === ambientW(i))
+          expect(c.airC[i]).toBeGreaterThanOrEqual(week.dryBulbC[i] - 1e-9)
         expect(c.productC[i]).toBeGreaterThan(-60)
         expect(c.productC[i]).toBeLessThanOrEqual(100)
         expect(c.heaterKwhPerTonne[i]).toBeGreaterThanOrEqual(0)

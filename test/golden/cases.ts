@@ -192,6 +192,36 @@ export const GOLDEN_CASES: GoldenCase[] = [
       startStepDays: 7,
     },
   },
+  // The greenhouse dryer: the README's apricots in the tropical lowland with the defaults (shut at night), and
+  // grapes in the dry upland in a glass house with stated air changes, trays on part of the floor, open nights.
+  {
+    id: 'tamarel--apricot-halves--greenhouse',
+    site: 'tropical',
+    options: {
+      product: productById('apricot-halves'),
+      method: { kind: 'greenhouse' },
+      seasonStart: '06-01',
+      seasonEnd: '09-30',
+      startStepDays: 10,
+    },
+  },
+  {
+    id: 'ardentine--grapes-to-raisins--greenhouse-glass-air-changes',
+    site: 'dryUpland',
+    options: {
+      product: productById('grapes-to-raisins'),
+      method: {
+        kind: 'greenhouse',
+        cover: 'glass',
+        airChangesPerHour: 30,
+        trayAreaM2: 10,
+        nightPractice: 'closed',
+      },
+      seasonStart: '08-15',
+      seasonEnd: '09-30',
+      startStepDays: 7,
+    },
+  },
   // Natural-air bin drying of corn harvested into a bin in the humid valley: three airflows compared (the
   // report's bin section, its CSV tables); and wheat in the dry upland with a heater, a humidistat and a
   // given floor area (method options off their defaults).

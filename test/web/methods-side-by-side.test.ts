@@ -30,8 +30,13 @@ describe('methods side by side on the page', () => {
     f.append('file', new File([upland as Uint8Array<ArrayBuffer>], 'upland.csv', { type: 'text/csv' }))
     const res = await app.request('/report', { method: 'POST', body: f })
     expect(res.status).toBe(200)
-    const b = (await res.json()) as { article: string; json: string }
+    const b = (await res.json()) as { article: string; json: string; handout: string; document: string }
     const page = JSON.parse(b.json) as MethodComparison
+    // the printed summary: the comparison and the cautions, each method's own report only in the full document
+    expect(b.handout).toContain('data-section="recommendation"')
+    expect(b.handout).toContain('data-section="cautions"')
+    expect(b.handout).not.toContain('data-report="assessment"')
+    expect(b.document.split('data-report="assessment"')).toHaveLength(3)
     expect(page.assessments.map((a) => a.method.kind)).toEqual(['open-air', 'heated'])
     expect(b.article).toContain('open air')
     expect(b.article).toContain('heated')

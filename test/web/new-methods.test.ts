@@ -60,8 +60,8 @@ describe('the page offers the tunnel and the natural-air bin', () => {
       const model = METHOD_MODELS.find((m) => m.kind === kind)
       expect(html).toMatch(new RegExp(`value="${kind}"( checked)?><span><strong>${model?.title}</strong>`))
     }
-    // the loading field is shown for the tunnel; the bin's fields only for the bin
-    expect(html).toMatch(/data-methods="open-air shade tunnel"><label for="[^"]+">Loading/)
+    // the loading field is shown for the tunnel and the greenhouse; the bin's fields only for the bin
+    expect(html).toMatch(/data-methods="open-air shade tunnel greenhouse"><label for="[^"]+">Loading/)
     expect(html).toMatch(/data-methods="natural-air-bin"><label for="[^"]+">Airflows to compare/)
   })
 

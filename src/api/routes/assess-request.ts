@@ -7,7 +7,9 @@
 import type { Context } from 'hono'
 import { z } from 'zod'
 import type { Assessment } from '../../analysis/assessment.ts'
-import { type OptionSurface, renderOptionNames } from '../../weather/option-spec.ts'
+import type { MethodComparison } from '../../analysis/compare-methods.ts'
+import { optionWords } from '../../analysis/option-names.ts'
+import type { OptionSurface } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import { overrideWarning } from '../../weather/site-overrides.ts'
@@ -77,7 +79,7 @@ export function readSite(
 
 /** The options' replacements of what the file states about its site, as warnings for the request's surface. */
 export function overrideWarnings(read: WeatherReadResult, surface: OptionSurface): string[] {
-  return (read.overrides ?? []).map((o) => renderOptionNames(overrideWarning(o), surface))
+  return (read.overrides ?? []).map((o) => optionWords(overrideWarning(o), surface))
 }
 
 /**
@@ -89,7 +91,7 @@ export function runEngine<T>(fn: () => T, request: AssessRequest): T {
     return fn()
   } catch (e) {
     if (e instanceof RangeError && !isRuntimeFault(e)) {
-      e.message = renderOptionNames(e.message, request.surface)
+      e.message = optionWords(e.message, request.surface)
     }
     rethrowAsProblem(e, { optionPath: request.optionPath })
   }
@@ -121,7 +123,23 @@ export function renderAssessmentWarnings(
   surface: OptionSurface,
   first: string[] = [],
 ): Assessment {
-  return { ...a, warnings: [...first, ...a.warnings.map((w) => renderOptionNames(w, surface))] }
+  return { ...a, warnings: [...first, ...a.warnings.map((w) => optionWords(w, surface))] }
+}
+
+/**
+ * Methods side by side with option names as the request gave them: every method's assessment (its warnings
+ * after `first`) and the reasons of the methods not assessed.
+ */
+export function renderMethodComparisonWords(
+  c: MethodComparison,
+  surface: OptionSurface,
+  first: string[] = [],
+): MethodComparison {
+  return {
+    ...c,
+    assessments: c.assessments.map((a) => renderAssessmentWarnings(a, surface, first)),
+    notAssessed: c.notAssessed.map((n) => ({ ...n, reason: optionWords(n.reason, surface) })),
+  }
 }
 
 export const optionsDescription =

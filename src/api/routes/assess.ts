@@ -7,7 +7,7 @@ import { Hono } from 'hono'
 import { z } from 'zod'
 import { assess } from '../../analysis/assess.ts'
 import type { Assessment } from '../../analysis/assessment.ts'
-import { compareMethods, methodsToAssess } from '../../analysis/compare-methods.ts'
+import { compareMethods, methodOptionSets } from '../../analysis/compare-methods.ts'
 import { renderMethodComparisonCsv, renderMethodComparisonHtml } from '../../report/methods-html.ts'
 import { renderReportCsv } from '../../report/report-csv.ts'
 import { renderReportHtml } from '../../report/report-html.ts'
@@ -28,6 +28,7 @@ import {
   parseRequest,
   readSite,
   renderAssessmentWarnings,
+  renderMethodComparisonWords,
   runEngine,
 } from './assess-request.ts'
 
@@ -46,24 +47,24 @@ export function assessRouter(config: ApiConfig): Hono {
     const read = readSite(files[0], request, config)
     work.checkpoint()
     // side by side: the work of every method that will run
-    const optionSets =
-      request.methods === null
-        ? [request.options]
-        : methodsToAssess(request.methods, request.options.product).inputs.map((method) => ({
-            ...request.options,
-            method,
-          }))
-    checkBatchHours(optionSets, [read.series.hours], config, request.optionPath)
+    checkBatchHours(
+      methodOptionSets(request.options, request.methods),
+      [read.series.hours],
+      config,
+      request.optionPath,
+    )
     const said = overrideWarnings(read, request.surface)
     const info = { fileName: files[0].name, readerWarnings: read.warnings }
     if (request.methods !== null) {
       const methods = request.methods
-      const comparison = runEngine(
-        () => compareMethods(read.series, { ...request.options, onProgress: work.checkpoint }, methods),
-        request,
-      )
-      comparison.assessments = comparison.assessments.map((a) =>
-        renderAssessmentWarnings(a, request.surface, said),
+      // the engine's messages name options as CLI flags: renamed for this request's surface
+      const comparison = renderMethodComparisonWords(
+        runEngine(
+          () => compareMethods(read.series, { ...request.options, onProgress: work.checkpoint }, methods),
+          request,
+        ),
+        request.surface,
+        said,
       )
       work.checkpoint()
       if (output.format === 'html')

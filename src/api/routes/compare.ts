@@ -7,9 +7,9 @@
 import { Hono } from 'hono'
 import { compare } from '../../analysis/compare.ts'
 import { type SiteSpec, SiteTableError, sitesFromJson } from '../../analysis/compare-sites.ts'
+import { optionWords } from '../../analysis/option-names.ts'
 import { renderComparisonCsv } from '../../report/compare-csv.ts'
 import { renderComparisonHtml } from '../../report/compare-html.ts'
-import { renderOptionNames } from '../../weather/option-spec.ts'
 import type { WeatherReadResult } from '../../weather/result.ts'
 import { overrideWarning } from '../../weather/site-overrides.ts'
 import type { ApiConfig } from '../config.ts'
@@ -143,7 +143,7 @@ export function compareRouter(config: ApiConfig): Hono {
         if (o) {
           throw new ApiProblem(
             422,
-            `${r.file.name}: ${renderOptionNames(overrideWarning(o), request.surface)}; an option applies to every file, so it would move this site: send a sites part with each site's own settings, or leave the option out`,
+            `${r.file.name}: ${optionWords(overrideWarning(o), request.surface)}; an option applies to every file, so it would move this site: send a sites part with each site's own settings, or leave the option out`,
             undefined,
             'unusable-input',
           )
@@ -171,11 +171,17 @@ export function compareRouter(config: ApiConfig): Hono {
       request,
     )
     work.checkpoint()
+    const assessments = comparison.assessments.map((a, i) =>
+      renderAssessmentWarnings(a, request.surface, reads[comparison.sites[i].given].said),
+    )
+    // the ranking's sites carry their assessment's warnings: in the same words
     const rendered = {
       ...comparison,
-      assessments: comparison.assessments.map((a, i) =>
-        renderAssessmentWarnings(a, request.surface, reads[comparison.sites[i].given].said),
-      ),
+      sites: comparison.sites.map((s) => ({
+        ...s,
+        warnings: s.warnings.map((w) => optionWords(w, request.surface)),
+      })),
+      assessments,
     }
     if (output.format === 'html') {
       return c.html(

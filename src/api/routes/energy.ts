@@ -10,11 +10,12 @@ import { Hono } from 'hono'
 import { z } from 'zod'
 import { BatchLogError } from '../../analysis/energy/batch-log.ts'
 import { analyzeEnergyLog, type EnergyChartOptions } from '../../analysis/energy/energy-chart.ts'
+import { energyChartWords } from '../../analysis/energy/energy-words.ts'
+import { optionWords } from '../../analysis/option-names.ts'
 import { FUEL_IDS } from '../../drying/method.ts'
 import { productById } from '../../product/catalogue.ts'
 import { ENERGY_TABLE_IDS, renderEnergyCsv } from '../../report/energy/energy-csv.ts'
 import { renderEnergyHtml } from '../../report/energy/energy-html.ts'
-import { renderOptionNames } from '../../weather/option-spec.ts'
 import { readWeather } from '../../weather/read-weather.ts'
 import { charsetOf, checkedCharset } from '../body.ts'
 import type { ApiConfig } from '../config.ts'
@@ -173,7 +174,7 @@ export const energyRouter = (config: ApiConfig) =>
         const p = problemFor(e, { filePrefix: 'weather' })
         if (p === null) throw e
         // the reader names options as CLI flags: renamed as this request gives them
-        const message = renderOptionNames(p.message, 'query')
+        const message = optionWords(p.message, 'query')
         throw new ApiProblem(
           p.status,
           message,
@@ -195,7 +196,7 @@ export const energyRouter = (config: ApiConfig) =>
         }))
         throw new ApiProblem(
           422,
-          `log: ${e.message}`,
+          `log: ${optionWords(e.message, 'query', 'energy')}`,
           errors.length > 0 ? errors : [{ path: 'log', message: e.message }],
         )
       }
@@ -206,11 +207,15 @@ export const energyRouter = (config: ApiConfig) =>
           : /^drying temperature/.test(e.message)
             ? 'dryingTempC'
             : 'options'
-        throw new ApiProblem(400, `${path}: ${e.message}`, [{ path, message: e.message }])
+        const message = optionWords(e.message, 'query', 'energy')
+        throw new ApiProblem(400, `${path}: ${message}`, [{ path, message }])
       }
       rethrowAsProblem(e)
     }
     work.checkpoint()
+    // the engine's messages name options as CLI flags: renamed as this request names them (query and options
+    // part have the same keys)
+    assessment = energyChartWords(assessment, 'query')
     if (q.format === 'html') return c.html(renderEnergyHtml(assessment, { logName: upload.log.name }))
     if (q.format === 'csv') {
       return c.body(renderEnergyCsv(assessment, q.table), 200, { 'content-type': 'text/csv; charset=utf-8' })

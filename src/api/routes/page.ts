@@ -62,6 +62,21 @@ function wantsJson(format: string | null): boolean {
 /** Page form fields of the engine's options (the form uses the engine's names where it has the field). */
 const formField = (option: string): string => option
 
+/**
+ * The form's field for an engine option that can lower the work (the batch-hour limit's message names it by its
+ * label), or null: the form has no start-date step or maximum batch length.
+ */
+const LEVER_FIELDS: Record<string, string | null> = {
+  seasonStart: 'seasonStart',
+  startStepDays: null,
+  maxDays: null,
+  'method.airflowsM3PerMinPerTonne': 'binAirflows',
+}
+const leverWords = (option: string): string | null => {
+  const field = option in LEVER_FIELDS ? LEVER_FIELDS[option] : option
+  return field === null ? null : `“${fieldLabel(field)}”`
+}
+
 type FormResult = Awaited<ReturnType<typeof runForm>>
 
 function problemResponse(c: Context, status: 400 | 415, message: string, type?: ProblemType): Response {
@@ -286,9 +301,9 @@ async function answerAssess(p: PostedForm): Promise<Response> {
   let out: FormResult
   try {
     out = await runForm(input, p.config.demo, {
-      beforeAssess: (hours) => {
+      beforeAssess: (optionSets, hours) => {
         p.work.checkpoint()
-        checkBatchHours({ ...input.assess, product: input.product }, hours, p.config, formField)
+        checkBatchHours(optionSets, hours, p.config, formField, leverWords)
       },
       onProgress: p.work.checkpoint,
     })

@@ -6,6 +6,7 @@
 import { Hono } from 'hono'
 import { z } from 'zod'
 import { equilibriumHumidityAnswer, equilibriumMoistureAnswer } from '../../analysis/equilibrium-answers.ts'
+import { optionWords, optionWordsAll } from '../../analysis/option-names.ts'
 import { PRODUCT_CATALOGUE, productById, productIds } from '../../product/catalogue.ts'
 import { fitWeighings, profileFromFit } from '../../product/fit-weighings.ts'
 import type { ProductProfile } from '../../product/profile.ts'
@@ -13,7 +14,7 @@ import { type MoistureReference, parseWeighingsCsv } from '../../product/weighin
 import { fitJson } from '../../report/fit-json.ts'
 import { productSummaryJson } from '../../report/product-json.ts'
 import type { ApiConfig } from '../config.ts'
-import { rethrowAsProblem } from '../errors.ts'
+import { isRuntimeFault, rethrowAsProblem } from '../errors.ts'
 import { registerOperation } from '../operations.ts'
 import { ApiProblem } from '../problem.ts'
 import { numberParam } from '../schemas/params.ts'
@@ -131,8 +132,10 @@ export const fitRouter = (config: ApiConfig) =>
         targetWbPct: q.targetWb,
       })
       const profile = base ? profileFromFit(fit, base, q.id ?? `${base.id}-calibrated`, q.targetWb) : null
-      return c.json({ ...fitJson(fit), profile })
+      // the engine's messages name options as CLI flags: renamed as this request names them
+      return c.json({ ...fitJson(fit), warnings: optionWordsAll(fit.warnings, 'query'), profile })
     } catch (e) {
+      if (e instanceof RangeError && !isRuntimeFault(e)) e.message = optionWords(e.message, 'query')
       rethrowAsProblem(e)
     }
   })

@@ -48,7 +48,7 @@ export const assessOptionsJsonSchema = z.strictObject({
         .max(DRYING_METHOD_KINDS.length),
     ])
     .describe(
-      `drying method kind, or an object {kind, …parameters} (${DRYING_METHOD_KINDS.join(', ')}; natural-air-bin: depthM [m], binDiameterM [m] or floorAreaM2 [m²], airflowsM3PerMinPerTonne [m³/min per t], heatRiseK [K], fanControl, fanEfficiency [0–1], layers, dryMatterLossLimitPct [%]); /v1/assess also takes a list of them, or "all", to compare methods side by side`,
+      `drying method kind, or an object {kind, …parameters} (${DRYING_METHOD_KINDS.join(', ')}; natural-air-bin: depthM [m], binDiameterM [m] or floorAreaM2 [m²], airflowsM3PerMinPerTonne [m³/min per t], heatRiseK [K], fanControl, fanEfficiency [0–1], layers, dryMatterLossLimitPct [%]; greenhouse: lengthM, widthM [m], trayAreaM2 [m²], ventShareOfFloor or ventAreaM2 [m²], airChangesPerHour [h⁻¹], cover, nightPractice, loadingKgPerM2); /v1/assess also takes a list of them, or "all", to compare methods side by side`,
     ),
   targetWbPct: z
     .number()

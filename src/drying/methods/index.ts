@@ -7,6 +7,7 @@
  * CLI, the API and the page, the assumptions of an assessment and the hourly engine all follow from
  * this list.
  */
+import { greenhouse } from './greenhouse.ts'
 import { heated } from './heated.ts'
 import type { MethodModel } from './method-model.ts'
 import { naturalAirBin } from './natural-air-bin.ts'
@@ -16,7 +17,15 @@ import { solarCabinet } from './solar-cabinet.ts'
 import { tunnel } from './tunnel.ts'
 
 /** Every drying method, in the order the CLI, the API and the page list them. */
-export const METHOD_MODELS = [openAir, shade, solarCabinet, tunnel, heated, naturalAirBin] as const
+export const METHOD_MODELS = [
+  openAir,
+  shade,
+  solarCabinet,
+  tunnel,
+  heated,
+  naturalAirBin,
+  greenhouse,
+] as const
 
 export type MethodModels = typeof METHOD_MODELS
 

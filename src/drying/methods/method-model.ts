@@ -38,9 +38,12 @@ export class MethodHour {
   index = 0
   /** Ambient dry bulb [°C]. */
   dryBulbC = Number.NaN
-  /** Ambient vapour pressure [kPa]. */
+  /**
+   * Ambient vapour pressure [kPa]; a method that encloses its air (the greenhouse) may set the inside air's, with
+   * {@link humidityRatio}, and the driver then takes it as the air at the product.
+   */
   vaporPressureKpa = Number.NaN
-  /** Ambient humidity ratio [kg/kg] (heating does not change it). */
+  /** Ambient humidity ratio [kg/kg] (heating does not change it); see {@link vaporPressureKpa}. */
   humidityRatio = Number.NaN
   /** Station pressure [kPa]. */
   pressureKpa = Number.NaN

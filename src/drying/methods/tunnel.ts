@@ -50,7 +50,6 @@ import { thinCoverTemperatureC } from '../../physics/cover-exchange.ts'
 import {
   type CoverSpec,
   coverTransmittance,
-  diffuseEquivalentAnglesDeg,
   GLASS_REFRACTIVE_INDEX,
   LOW_IRON_GLASS_EXTINCTION_PER_M,
 } from '../../physics/cover-transmittance.ts'
@@ -58,10 +57,10 @@ import {
   flatPlateHeatTransferCoefficientWm2K,
   radiativeHeatTransferCoefficientWm2K,
 } from '../../physics/evaporation.ts'
-import { diffuseHorizontalErbsWm2 } from '../../physics/irradiance.ts'
 import { moistAirHeatCapacityKjPerKgK } from '../../physics/moist-air.ts'
 import { resistanceOfHeatTransferCoefficientSPerM, WetSurface } from '../../physics/wet-surface.ts'
 import { layerGeometry } from '../../product/layer-geometry.ts'
+import { HorizontalCoverSun } from './cover-sun.ts'
 import { HourMode, type MethodHour, type MethodModel, wetSurfaceEvaporationInAir } from './method-model.ts'
 import { PRODUCT_EMISSIVITY } from './open-air.ts'
 import { fraction, loadingSchema } from './parameters.ts'
@@ -145,28 +144,17 @@ export function tunnelTonnes(m: TunnelMethod, loadingKgPerM2?: number): number {
   return (m.dryingLengthM * m.widthM * loading) / 1000
 }
 
-function coverOf(m: TunnelMethod): CoverSpec {
+/** The cover optics of `m`: its material's, with the overrides it gives. */
+export function coverOf(m: {
+  cover: keyof typeof TUNNEL_COVERS
+  coverRefractiveIndex?: number
+  coverExtinctionThickness?: number
+}): CoverSpec {
   const base = TUNNEL_COVERS[m.cover]
   return {
     refractiveIndex: m.coverRefractiveIndex ?? base.refractiveIndex,
     extinctionThickness: m.coverExtinctionThickness ?? base.extinctionThickness,
   }
-}
-
-/** Beam transmittance every whole degree of incidence 0…90 (one table per series: no allocation per hour). */
-function transmittanceTable(cover: CoverSpec): Float64Array {
-  const t = new Float64Array(92)
-  for (let d = 0; d <= 89; d++) t[d] = coverTransmittance(cover, d)
-  return t
-}
-
-/** Linear interpolation in the table at `incidenceDeg` (0 at and beyond 90°). */
-function tableTransmittance(table: Float64Array, incidenceDeg: number): number {
-  if (!(incidenceDeg < 89)) return incidenceDeg >= 90 ? 0 : table[89] * (90 - incidenceDeg)
-  const x = Math.max(incidenceDeg, 0)
-  const i = Math.floor(x)
-  const f = x - i
-  return table[i] * (1 - f) + table[i + 1] * f
 }
 
 export const tunnel: MethodModel<typeof tunnelSchema> = {
@@ -234,8 +222,7 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
   },
   prepare(m, { solar, thresholds, product }) {
     const cover = coverOf(m)
-    const table = transmittanceTable(cover)
-    const diffuseTau = tableTransmittance(table, diffuseEquivalentAnglesDeg(0).skyDeg)
+    const coverSun = new HorizontalCoverSun(cover)
     const collectorAreaM2 = m.collectorLengthM * m.widthM
     const tonnes = tunnelTonnes(m, product.loadingKgPerM2)
     const layer = layerGeometry(
@@ -265,12 +252,7 @@ export const tunnel: MethodModel<typeof tunnelSchema> = {
         return
       }
       // sun through the cover (horizontal): beam at the zenith angle, diffuse at the isotropic-sky angle
-      let transmitted = 0
-      if (g > 0) {
-        const diffuse = diffuseHorizontalErbsWm2(g, raWm2[i])
-        const beam = g - diffuse
-        transmitted = beam * tableTransmittance(table, 90 - altitudeDeg[i]) + diffuse * diffuseTau
-      }
+      const transmitted = coverSun.transmittedWm2(g, raWm2[i], altitudeDeg[i])
       // the collector section warms the air at constant humidity ratio (none with the fans stopped: still air)
       let tAir = t
       if (share > 0) {

@@ -85,6 +85,16 @@ export function mouldFreeClamped(tempC: number, waterActivity: number): boolean 
 
 const [LINE_21, LINE_27] = MFSL_LINES
 const LINE_SPAN_C = LINE_27.tempC - LINE_21.tempC
+// the same constants as plain numbers for the hour loop (no array or object read per hour)
+const L21_INTERCEPT = LINE_21.intercept
+const L21_SLOPE = LINE_21.slopePerErhPct
+const L21_T_C = LINE_21.tempC
+const L27_INTERCEPT = LINE_27.intercept
+const L27_SLOPE = LINE_27.slopePerErhPct
+const VALID_AW_LOW = MFSL_VALID_AW[0]
+const VALID_AW_HIGH = MFSL_VALID_AW[1]
+const T_RANGE_LOW_C = MFSL_TEMP_RANGE_C[0]
+const T_RANGE_HIGH_C = MFSL_TEMP_RANGE_C[1]
 
 /** The mould-free model fed hour by hour through fields (same arithmetic as `step`). */
 class MouldFreeHours implements SpoilageHourStepper {
@@ -102,14 +112,14 @@ class MouldFreeHours implements SpoilageHourStepper {
     this.hours += 1
     if (aw < MFSL_NO_GROWTH_BELOW_AW || tC >= MFSL_NO_GROWTH_AT_OR_ABOVE_C) return
     // mouldFreeDaysValue, written out: the fraction of mould-free time used in one hour
-    const erh = 100 * Math.min(aw, MFSL_VALID_AW[1])
-    const t = Math.min(Math.max(tC, MFSL_TEMP_RANGE_C[0]), MFSL_TEMP_RANGE_C[1])
-    const log21 = LINE_21.intercept - LINE_21.slopePerErhPct * erh
-    const log27 = LINE_27.intercept - LINE_27.slopePerErhPct * erh
-    const log = log21 + ((log27 - log21) * (t - LINE_21.tempC)) / LINE_SPAN_C
+    const erh = 100 * Math.min(aw, VALID_AW_HIGH)
+    const t = Math.min(Math.max(tC, T_RANGE_LOW_C), T_RANGE_HIGH_C)
+    const log21 = L21_INTERCEPT - L21_SLOPE * erh
+    const log27 = L27_INTERCEPT - L27_SLOPE * erh
+    const log = log21 + ((log27 - log21) * (t - L21_T_C)) / LINE_SPAN_C
     this.measure += 1 / 24 / Math.exp(log * Math.LN10)
-    if (aw < MFSL_VALID_AW[0] || aw > MFSL_VALID_AW[1] || tC < 21 || tC > 27) this.hoursOutsideRange += 1
-    if (aw >= MFSL_VALID_AW[0]) this.hoursAtRisk += 1
+    if (aw < VALID_AW_LOW || aw > VALID_AW_HIGH || tC < 21 || tC > 27) this.hoursOutsideRange += 1
+    if (aw >= VALID_AW_LOW) this.hoursAtRisk += 1
   }
   state(): SpoilageState {
     return {

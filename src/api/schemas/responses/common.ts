@@ -88,6 +88,11 @@ const UNITLESS: Record<string, string> = {
   absorberAbsorptance: '0–1',
   collectorEfficiencyFactor: '0–1',
   productAbsorptivity: '0–1',
+  floorAbsorptance: '0–1',
+  groundShare: '0–1',
+  ventShareOfFloor: 'm² of openings per m² of floor',
+  dischargeCoefficient: 'dimensionless',
+  airChangesPerHour: 'volumes of the enclosure per hour',
   layers: 'count',
 }
 
