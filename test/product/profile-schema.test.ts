@@ -1,10 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import {
-  PRODUCT_ALIASES,
-  PRODUCT_CATALOGUE,
-  productById,
-  productIds,
-} from '../../src/product/catalogue.ts'
+import { PRODUCT_ALIASES, PRODUCT_CATALOGUE, productById, productIds } from '../../src/product/catalogue.ts'
 import { parseUserProfile, productProfileSchema } from '../../src/product/profile-schema.ts'
 
 const REQUIRED = [
