@@ -77,7 +77,7 @@ describe('every spoilage model is described', () => {
     'coffee-ota-window': 'Coffee/cocoa',
     'cocoa-ota-window': 'Coffee/cocoa',
     'mould-free-time': 'Mould-free time',
-    'fish-wet-warm-hours': 'Fish',
+    'fish-pathogen-exposure': 'Fish',
   }
   const models = section(spoilage, '## Spoilage models (`src/product/spoilage/`)')
 
@@ -97,7 +97,7 @@ describe('every spoilage model is described', () => {
     const s = section(readme, '#### Will it dry before it spoils?')
     expect(s).toMatch(/Steele 1967; Thompson 1972; 0\.5 % DML/)
     expect(s).toMatch(/Seiler; Cauvain & Seiler/)
-    expect(s).toMatch(/common practice, no source/)
+    expect(s).toMatch(/Fish and Fishery Products Hazards and Controls Guidance/)
     expect(s).toMatch(/where risk was high, have lots tested for\s+mycotoxins/)
     expect(s).toMatch(/docs\/spoilage-and-bins\.md/)
     const safety = section(readme, '## Safety')

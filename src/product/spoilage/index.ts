@@ -5,13 +5,13 @@
  */
 import type { ProductProfile } from '../profile.ts'
 import { COCOA_OTA_WINDOW, COFFEE_OTA_WINDOW } from './aw-window.ts'
-import { FISH_WET_WARM_RULE } from './fish-rule.ts'
+import { FISH_PATHOGEN_EXPOSURE } from './fish-pathogen-exposure.ts'
 import { grainDryMatterLossModel } from './grain-dml.ts'
 import type { SpoilageModel } from './model.ts'
 import { mouldFreeTimeModel } from './mould-free-time.ts'
 
 export * from './aw-window.ts'
-export * from './fish-rule.ts'
+export * from './fish-pathogen-exposure.ts'
 export * from './grain-dml.ts'
 export * from './model.ts'
 export * from './mould-free-time.ts'
@@ -24,7 +24,7 @@ export function spoilageModels(): SpoilageModel[] {
     COFFEE_OTA_WINDOW,
     COCOA_OTA_WINDOW,
     mouldFreeTimeModel(),
-    FISH_WET_WARM_RULE,
+    FISH_PATHOGEN_EXPOSURE,
   ]
 }
 
@@ -45,7 +45,7 @@ export function spoilageModelFor(
     case 'oilseed':
       return grainDryMatterLossModel()
     case 'fish':
-      return FISH_WET_WARM_RULE
+      return FISH_PATHOGEN_EXPOSURE
     default:
       return mouldFreeTimeModel()
   }

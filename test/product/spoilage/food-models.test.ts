@@ -3,7 +3,9 @@ import { productById } from '../../../src/product/catalogue.ts'
 import {
   COCOA_OTA_WINDOW,
   COFFEE_OTA_WINDOW,
-  FISH_WET_WARM_RULE,
+  FISH_EXPOSURE_MAX_C,
+  FISH_PATHOGEN_EXPOSURE,
+  FISH_PATHOGEN_MIN_AW,
   grainDryMatterLossModel,
   initialSpoilageState,
   isSpoiled,
@@ -121,15 +123,92 @@ describe('mould-free time (Seiler; Cauvain & Seiler)', () => {
   })
 })
 
-describe('fish rule (common practice, no source)', () => {
-  it('is labelled as common practice and counts only wet, warm hours', () => {
-    expect(FISH_WET_WARM_RULE.source.citation).toBe('common practice, no source')
-    const cold = hours(48, { productTempC: 5, moistureWbPct: 75, waterActivity: 0.98 })
-    const warm = hours(24, { productTempC: 25, moistureWbPct: 75, waterActivity: 0.98 })
-    const dryish = hours(48, { productTempC: 25, moistureWbPct: 40, waterActivity: 0.85 })
-    const r = runSpoilage(FISH_WET_WARM_RULE, [...cold, ...dryish, ...warm])
-    expect(r.state.measure).toBe(24)
-    expect(r.spoiledAfterHours).toBe(120)
+describe('fish: cumulative exposure to pathogen growth (FDA seafood HACCP guidance, App. 4, Table A-2)', () => {
+  const model = FISH_PATHOGEN_EXPOSURE
+  const at = (productTempC: number, waterActivity: number) => ({
+    productTempC,
+    moistureWbPct: 75,
+    waterActivity,
+  })
+  const hoursToLimit = (input: Omit<SpoilageStepInput, 'hours'>, n = 200) =>
+    runSpoilage(model, hours(n, input)).spoiledAfterHours
+
+  it('names the FDA appendix and the copy it was read in (`transcribed`)', () => {
+    expect(model.source.confidence).toBe('transcribed')
+    expect(model.source.citation).toMatch(/Fish and Fishery Products Hazards and Controls Guidance/)
+    expect(model.source.citation).toMatch(/Appendix 4/)
+    expect(model.source.citation).toMatch(/as given in/)
+    expect(model.cautions.join(' ')).toMatch(/local food regulations and HACCP/)
+  })
+
+  it('reaches the limit after exactly the published hours in each band', () => {
+    // FDA 2020, Appendix 4, summary of Table A-2 (raw, ready-to-eat): 2 h when above 21.1 °C (70 °F)
+    expect(hoursToLimit(at(25, 0.97))).toBe(2)
+    expect(hoursToLimit(at(40, 0.99))).toBe(2)
+    expect(hoursToLimit(at(21.2, 0.97))).toBe(2)
+    // ibid.: 4 h above 10 °C (50 °F) in all (the summary's own limit for fish never above 21.1 °C, 5 h, is from
+    // memory and not used: 4 h is the stricter read limit)
+    expect(hoursToLimit(at(15, 0.97))).toBe(4)
+    expect(hoursToLimit(at(21.1, 0.97))).toBe(4)
+    // 24 h above 4.4 °C (40 °F) for fish never above 10 °C: from memory of the same summary
+    expect(hoursToLimit(at(8, 0.97))).toBe(24)
+    expect(hoursToLimit(at(10, 0.97))).toBe(24)
+  })
+
+  it('counts nothing at or above 57.2 °C (135 °F), at or below 4.4 °C, or below aw 0.83', () => {
+    // FDA 2020, App. 4: exposure time is time above 10 °C "but below 135ºF (57.2ºC)"; S. aureus grows down to
+    // aw 0.83 (ICMSF 1996, as tabulated by the USDA ARS Pathogen Modeling Program)
+    expect(FISH_EXPOSURE_MAX_C).toBe(57.2)
+    expect(FISH_PATHOGEN_MIN_AW).toBe(0.83)
+    for (const input of [
+      at(57.2, 0.99),
+      at(65, 0.99),
+      at(4.4, 0.99),
+      at(0, 0.99),
+      at(30, 0.829),
+      at(45, 0.7),
+    ]) {
+      const { state, spoiledAfterHours } = runSpoilage(model, hours(500, input))
+      expect(state.measure, JSON.stringify(input)).toBe(0)
+      expect(state.hoursAtRisk).toBe(0)
+      expect(spoiledAfterHours).toBeNull()
+    }
+    expect(hoursToLimit(at(57.1, 0.99))).toBe(2)
+    expect(hoursToLimit(at(30, 0.83))).toBe(2)
+  })
+
+  it('never allows more than the FDA summary: at most 2 h above 21.1 °C and 4 h above 10 °C in all', () => {
+    // every sequence of up to 6 hours, each at 25 °C (hot), 15 °C (warm) or 3 °C (cold)
+    const temps = [25, 15, 3]
+    for (let code = 0; code < 3 ** 6; code++) {
+      let c = code
+      const seq: SpoilageStepInput[] = []
+      for (let i = 0; i < 6; i++) {
+        seq.push({ ...at(temps[c % 3] as number, 0.97), hours: 1 })
+        c = Math.floor(c / 3)
+      }
+      let hot = 0
+      let warm = 0
+      let state = initialSpoilageState()
+      for (const input of seq) {
+        state = model.step(state, input)
+        if (input.productTempC > 21.1) hot++
+        else if (input.productTempC > 10) warm++
+        const beyondFda = hot > 2 || hot + warm > 4
+        if (beyondFda) expect(isSpoiled(model, state), JSON.stringify(seq)).toBe(true)
+      }
+    }
+    // stricter than the summary inside it: 1 h above 21.1 °C and 2 h at 10–21.1 °C (the summary allows up to 4 h)
+    expect(runSpoilage(model, [...hours(1, at(25, 0.97)), ...hours(2, at(15, 0.97))]).spoiledAfterHours).toBe(
+      3,
+    )
+  })
+
+  it('adds fractional steps as whole hours do', () => {
+    let s = initialSpoilageState()
+    for (let i = 0; i < 4; i++) s = model.step(s, { ...at(30, 0.95), hours: 0.5 })
+    expect(s.measure).toBe(model.spoiledAt)
+    expect(s.hoursAtRisk).toBe(2)
   })
 })
 
@@ -142,7 +221,7 @@ describe('model choice per product', () => {
     expect(spoilageModelFor(productById('cocoa-beans')).id).toBe('cocoa-ota-window')
     expect(spoilageModelFor(productById('apricot-halves')).id).toBe('mould-free-time')
     expect(spoilageModelFor(productById('mint-leaves')).id).toBe('mould-free-time')
-    expect(spoilageModelFor(productById('fish-fillets')).id).toBe('fish-wet-warm-hours')
+    expect(spoilageModelFor(productById('fish-fillets')).id).toBe('fish-pathogen-exposure')
     expect(spoilageModelFor(productById('fish-fillets-salted')).id).toBe('mould-free-time')
   })
 

@@ -28,8 +28,9 @@ describe('spoilage model sources use the catalogue levels', () => {
   })
 
   it('a rule of thumb is `memory` and says "common practice, no source"', () => {
+    // none is left: the fish rule of thumb gave way to the FDA seafood HACCP exposure limits
     const rules = spoilageModels().filter((m) => /common practice/i.test(m.source.citation))
-    expect(rules.map((m) => m.id)).toEqual(['fish-wet-warm-hours'])
+    expect(rules.map((m) => m.id)).toEqual([])
     for (const m of rules) {
       expect(m.source.confidence, m.id).toBe('memory')
       expect(m.source.citation, m.id).toMatch(/common practice, no source/)
