@@ -29,18 +29,18 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
   {
     productId: 'chili-peppers',
     parameter: 'k.kRefPerH',
-    value: 0.3887,
-    caseId: 'hossain-bala-2007-chilli-solar-tunnel/red-tunnel',
-    source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Hossain M.A., Bala B.K. 2007, Drying of hot chilli using solar tunnel drier, Solar Energy 81:85–92 (abstract), red chilli in the solar tunnel drier (possibly blanched: the abstract credits blanching with part of the shorter drying): run 'red-tunnel', 74.0 → 4.8 % wb in 20 h (active time) with method solar-cabinet on the weather reconstruction 'gazipur-march-2003' (test/fixtures/experiments/weather/; Dhaka March climate, site and month assumed: the abstract gives no weather figure); engine ÷ target 0.9500",
-  },
-  {
-    productId: 'chili-peppers-unblanched',
-    parameter: 'k.kRefPerH',
     value: 0.09189,
     caseId: 'meghwar-chilli-umerkot/open-sun',
     source:
       "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Meghwar B.L., Khan A., Lakhiar I.A., Mirani A.A., Daper M.S., Kalroo M.W., Comparison between solar tunnel, solar-cum gas dryer, and open sun drying methods for drying red chilies, Pak. J. Agric. Res. 36(1):63–70 (abstract; trials of November 2022), red 'Longi' chillies from the field (no pretreatment named: taken as unblanched) in open sun: run 'open-sun', 80.0 → 11.0 % wb in 81 h (active time) with method open-air on the weather reconstruction 'umerkot-november-2022' (test/fixtures/experiments/weather/; lower Sindh November climate from memory, day assumed: the abstract gives the place and month but no weather figure); engine ÷ target 1.0000",
+  },
+  {
+    productId: 'chili-peppers-blanched',
+    parameter: 'k.kRefPerH',
+    value: 0.3887,
+    caseId: 'hossain-bala-2007-chilli-solar-tunnel/red-tunnel',
+    source:
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Hossain M.A., Bala B.K. 2007, Drying of hot chilli using solar tunnel drier, Solar Energy 81:85–92 (abstract), red chilli in the solar tunnel drier (possibly blanched: the abstract credits blanching with part of the shorter drying): run 'red-tunnel', 74.0 → 4.8 % wb in 20 h (active time) with method solar-cabinet on the weather reconstruction 'gazipur-march-2003' (test/fixtures/experiments/weather/; Dhaka March climate, site and month assumed: the abstract gives no weather figure); engine ÷ target 0.9500",
   },
   {
     productId: 'figs',

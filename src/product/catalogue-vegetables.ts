@@ -84,12 +84,19 @@ export const tomatoHalves: ProductProfile = {
   ],
 }
 
+/** Unblanched chillies' Lewis k, fitted through the engine to Meghwar et al.'s open-sun run (npm run calibrate). */
 const CHILLI_K = calibratedConstant('chili-peppers', 'k.kRefPerH')
-const CHILLI_LEWIS_FIT = CHILLI_K.source
 
+/** The caution both chilli profiles share. */
+const CHILLI_MYCOTOXIN = 'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.'
+
+/**
+ * Chillies dried as most growers dry them: whole, without blanching. The plain id is this profile; blanched
+ * chillies are the variant chili-peppers-blanched (product/pretreatments.ts), whose rate has a fit of its own.
+ */
 export const chiliPeppers: ProductProfile = {
   id: 'chili-peppers',
-  name: 'Chili peppers (red, whole pods, blanched)',
+  name: 'Chili peppers (red, whole pods, unblanched)',
   category: 'vegetable',
   initialMoistureWbPct: sourced(80, `${MEGHWAR_PJAR}: initial moisture taken as 80 % wb`, 'published'),
   targetMoistureWbPct: sourced(
@@ -116,9 +123,9 @@ export const chiliPeppers: ProductProfile = {
       'pod diameter 10 mm at which k holds: from memory',
       'memory',
       {
-        'k.kRefPerH': param(CHILLI_LEWIS_FIT, 'fitted'),
+        'k.kRefPerH': param(CHILLI_K.source, 'fitted'),
         'k.tRefC': param(
-          `reference temperature 50 °C, set by dryhours, of the k fitted through the engine to ${HOSSAIN_BALA_2007} (run ${CHILLI_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the published activation energy`,
+          `reference temperature 50 °C, set by dryhours, of the k fitted through the engine to ${MEGHWAR_PJAR} (run ${CHILLI_K.caseId}; npm run calibrate): a choice of dryhours at which the fitted k applies, with the published activation energy`,
           'fitted',
         ),
         'k.activationEnergyJPerMol': param(
@@ -137,39 +144,40 @@ export const chiliPeppers: ProductProfile = {
   defaultLoadingKgPerM2: sourced(8, 'single layer; from memory', 'memory'),
   cautions: [
     ...FRUIT_CAUTIONS,
-    'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
-    'The drying rate of this profile was fitted to chillies that were probably blanched (Hossain & Bala 2007). For chillies dried without blanching choose chili-peppers-unblanched: in published trials unblanched chillies dried several times slower than this profile predicts (docs/validation.md). Check the moisture before storage.',
+    CHILLI_MYCOTOXIN,
+    "This profile is for chillies dried without blanching. Its drying rate was fitted to one open-sun trial of unblanched red chillies (Meghwar et al., Umerkot, November 2022) on a reconstruction of that month's weather; how far it carries to other dryers, varieties and places is in docs/validation.md. Chillies blanched in hot water or steam before drying dry several times faster: choose chili-peppers-blanched for them. Check the moisture before storage.",
   ],
 }
 
-const CHILLI_UNBLANCHED_K = calibratedConstant('chili-peppers-unblanched', 'k.kRefPerH')
+const CHILLI_BLANCHED_K = calibratedConstant('chili-peppers-blanched', 'k.kRefPerH')
 
 /**
- * Unblanched chillies. No published blanching factor turns the blanched base's rate into an unblanched one
- * (product/pretreatments.ts, chili-peppers-unblanched), so this variant has a Lewis k of its own, fitted through
- * the engine to the open-sun run of Meghwar et al. (npm run calibrate); every other number is the base's.
+ * Blanched chillies. No published blanching factor turns the unblanched base's rate into a blanched one
+ * (product/pretreatments.ts, chili-peppers-blanched), so this variant has a Lewis k of its own, fitted through
+ * the engine to the red-chilli tunnel run of Hossain & Bala 2007 (npm run calibrate); every other number is the
+ * base's.
  */
-export const chiliPeppersUnblanched: ProductProfile = {
+export const chiliPeppersBlanched: ProductProfile = {
   ...chiliPeppers,
-  id: 'chili-peppers-unblanched',
-  name: pretreatmentVariantSpec('chili-peppers-unblanched').name,
+  id: 'chili-peppers-blanched',
+  name: pretreatmentVariantSpec('chili-peppers-blanched').name,
   variantOf: chiliPeppers.id,
   kinetics: {
     ...chiliPeppers.kinetics,
-    equation: { model: 'lewis', k: arrhenius(CHILLI_UNBLANCHED_K.value, 50, 27000) },
+    equation: { model: 'lewis', k: arrhenius(CHILLI_BLANCHED_K.value, 50, 27000) },
     parameters: {
       ...chiliPeppers.kinetics.parameters,
-      'k.kRefPerH': param(CHILLI_UNBLANCHED_K.source, 'fitted'),
+      'k.kRefPerH': param(CHILLI_BLANCHED_K.source, 'fitted'),
       'k.tRefC': param(
-        `reference temperature 50 °C, set by dryhours as for chili-peppers, of the k fitted through the engine to ${MEGHWAR_PJAR} (run ${CHILLI_UNBLANCHED_K.caseId}; npm run calibrate)`,
+        `reference temperature 50 °C, set by dryhours as for chili-peppers, of the k fitted through the engine to ${HOSSAIN_BALA_2007} (run ${CHILLI_BLANCHED_K.caseId}; npm run calibrate)`,
         'fitted',
       ),
     },
   },
   cautions: [
     ...FRUIT_CAUTIONS,
-    'Aflatoxin and ochratoxin risk in slowly dried chillies; do not dry on bare ground.',
-    "The drying rate of this profile was fitted to one open-sun trial of unblanched red chillies (Meghwar et al., Umerkot, November 2022) on a reconstruction of that month's weather; how far it carries to other dryers, varieties and places is in docs/validation.md. Blanched chillies dry faster: choose chili-peppers for them. Check the moisture before storage.",
+    CHILLI_MYCOTOXIN,
+    'This profile is for chillies blanched in hot water or steam before drying. Its drying rate was fitted to chillies that were probably blanched (Hossain & Bala 2007, solar tunnel drier). For chillies dried without blanching, as most growers dry them, choose chili-peppers: in published trials unblanched chillies dried several times slower than this profile predicts (docs/validation.md). Check the moisture before storage.',
   ],
 }
 
@@ -217,6 +225,6 @@ export const onionSlices: ProductProfile = {
 export const VEGETABLE_PROFILES: ProductProfile[] = [
   tomatoHalves,
   chiliPeppers,
-  chiliPeppersUnblanched,
+  chiliPeppersBlanched,
   onionSlices,
 ]

@@ -5,7 +5,12 @@
  * multiplied by the treatment's factor again, and a variant without a published factor is not derived.
  */
 import type { KineticsEquation } from './kinetics-models.ts'
-import { pretreatmentById, pretreatmentVariantSpec, rateFactor } from './pretreatments.ts'
+import {
+  type PretreatmentVariantSpec,
+  pretreatmentById,
+  pretreatmentVariantSpec,
+  rateFactor,
+} from './pretreatments.ts'
 import type { ProductProfile } from './profile.ts'
 
 /** The path of the rate constant the factor multiplies, and the equation with it multiplied. */
@@ -31,10 +36,14 @@ function scaledRate(
 /**
  * The variant `variantId` of `base` (PRETREATMENT_VARIANTS): the base's rate constant (or diffusivity) times
  * the published rate factor of the treatment. Throws when the variant is declared not derivable or when the
- * base's rate was measured on already treated product (the factor would be counted twice).
+ * base's rate was measured on already treated product (the factor would be counted twice). `spec` replaces
+ * the catalogue's entry for the variant (tests of the refusals).
  */
-export function derivePretreatedVariant(base: ProductProfile, variantId: string): ProductProfile {
-  const spec = pretreatmentVariantSpec(variantId)
+export function derivePretreatedVariant(
+  base: ProductProfile,
+  variantId: string,
+  spec: PretreatmentVariantSpec = pretreatmentVariantSpec(variantId),
+): ProductProfile {
   if (spec.baseId !== base.id)
     throw new RangeError(`${variantId} is a variant of ${spec.baseId}, not ${base.id}`)
   if (!spec.derivable) throw new RangeError(`${variantId} cannot be derived: ${spec.note}`)

@@ -114,14 +114,14 @@ export const PRETREATMENTS: readonly PretreatmentEffect[] = [
     id: 'blanching-chilli',
     treatment: 'blanching (water or steam)',
     product: 'chilli',
-    catalogueIds: ['chili-peppers'],
+    catalogueIds: ['chili-peppers-blanched'],
     effect: {
       quantity: 'drying time',
       statement:
         'blanching with the solar tunnel drier led to a considerable reduction in drying time (Hossain & Bala 2007); water- and steam-blanched chilli dried faster than untreated in sun and solar drying (Tunde-Akintunde 2011)',
       factor: null,
       factorNote:
-        "no factor in the abstracts read; the catalogue's chilli rate was fitted to Hossain & Bala's tunnel run and may include blanching",
+        "no factor in the abstracts read; the blanched chilli rate (chili-peppers-blanched) was fitted to Hossain & Bala's tunnel run, taken as blanched, and the unblanched one (chili-peppers) to Meghwar et al.'s open-sun run",
     },
     conditions: 'solar tunnel (Bangladesh); sun and solar dryer (Nigeria)',
     citation:
@@ -267,16 +267,16 @@ export const PRETREATMENT_VARIANTS: readonly PretreatmentVariantSpec[] = [
     note: 'drop of the diffusivity of the following air drying after osmotic pre-drying of apple cubes (Simal et al. 1997)',
   },
   {
-    variantId: 'chili-peppers-unblanched',
+    variantId: 'chili-peppers-blanched',
     baseId: 'chili-peppers',
-    name: 'Chili peppers (red, whole pods, unblanched)',
+    name: 'Chili peppers (red, whole pods, blanched)',
     pretreatmentId: 'blanching-chilli',
-    baseMeasuredOn: 'treated',
+    baseMeasuredOn: 'untreated',
     baseNote:
-      'the base rate was fitted to Hossain & Bala 2007, whose abstract credits blanching of the samples with part of the shorter drying: the base is taken as blanched',
+      "the base rate was fitted to the open-sun run of Meghwar et al. (fresh red 'Longi' pods from the field, no pretreatment named in the abstract: taken as unblanched), as most growers dry chillies",
     derivable: false,
-    fittedTo: 'meghwar-chilli-umerkot/open-sun',
-    note: "no published blanching factor was read, so the unblanched rate is not derived from the blanched base: the variant has a rate of its own, fitted through the engine to the open-sun run of Meghwar et al. (fresh red 'Longi' pods from the field, no pretreatment named in the abstract: taken as unblanched); the other unblanched runs (Meghwar et al.'s tunnel, Fadhel et al., the ghost-chilli study) validate it (docs/validation.md)",
+    fittedTo: 'hossain-bala-2007-chilli-solar-tunnel/red-tunnel',
+    note: "no published blanching factor was read, so the blanched rate is not derived from the unblanched base: the variant has a rate of its own, fitted through the engine to the red-chilli tunnel run of Hossain & Bala 2007, whose abstract credits blanching of the samples with part of the shorter drying (taken as blanched); their green-chilli and sun runs validate it, and the other unblanched runs (Meghwar et al.'s tunnel, Fadhel et al., the ghost-chilli study) validate the base (docs/validation.md)",
   },
   {
     variantId: 'apricot-halves-sulphured',

@@ -6,7 +6,7 @@
  * of every field for messages. Every value echoed back is escaped.
  */
 import { ENERGY_OPTION_NAMES, OTHER_OPTION_NAMES } from '../analysis/option-names.ts'
-import { PRODUCT_CATALOGUE } from '../product/catalogue.ts'
+import { canonicalProductId, PRODUCT_CATALOGUE } from '../product/catalogue.ts'
 import type { ProductCategory } from '../product/profile.ts'
 import { escapeHtml } from '../report/escape.ts'
 import { WEATHER_OPTION_SPECS } from '../weather/option-spec.ts'
@@ -210,7 +210,9 @@ export function timeZoneList(): string {
     .join('')}</datalist>`
 }
 
-export function productOptions(selected: string | undefined, none?: string): string {
+export function productOptions(asked: string | undefined, none?: string): string {
+  // An older id still accepted (a saved link) selects the profile it now names.
+  const selected = asked === undefined ? undefined : canonicalProductId(asked)
   const groups = new Map<ProductCategory, string[]>()
   for (const p of PRODUCT_CATALOGUE) {
     const list = groups.get(p.category) ?? []

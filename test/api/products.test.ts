@@ -25,6 +25,13 @@ describe('GET /v1/products', () => {
     expect(p.targetMoistureWbPct.source.length).toBeGreaterThan(5)
     await expectProblem(await app.request('/v1/products/no-such-fruit'), 404)
   })
+  it('an older id still accepted gives the profile it now names (chili-peppers-unblanched → chili-peppers)', async () => {
+    const res = await app.request('/v1/products/chili-peppers-unblanched')
+    expect(res.status).toBe(200)
+    const p = (await res.json()) as { id: string; name: string }
+    expect(p.id).toBe('chili-peppers')
+    expect(p.name).toMatch(/unblanched/)
+  })
 })
 
 describe('GET /v1/equilibrium', () => {

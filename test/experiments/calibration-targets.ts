@@ -38,21 +38,21 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
     productId: 'chili-peppers',
     parameter: 'k.kRefPerH',
     parameterLabel: 'Lewis k at the reference temperature',
-    caseId: 'hossain-bala-2007-chilli-solar-tunnel/red-tunnel',
-    citation:
-      'Hossain M.A., Bala B.K. 2007, Drying of hot chilli using solar tunnel drier, Solar Energy 81:85–92 (abstract), red chilli in the solar tunnel drier (possibly blanched: the abstract credits blanching with part of the shorter drying)',
-    weatherNote: 'Dhaka March climate, site and month assumed: the abstract gives no weather figure',
-    searchRange: [1e-3, 5],
-  },
-  {
-    productId: 'chili-peppers-unblanched',
-    parameter: 'k.kRefPerH',
-    parameterLabel: 'Lewis k at the reference temperature',
     caseId: 'meghwar-chilli-umerkot/open-sun',
     citation:
       "Meghwar B.L., Khan A., Lakhiar I.A., Mirani A.A., Daper M.S., Kalroo M.W., Comparison between solar tunnel, solar-cum gas dryer, and open sun drying methods for drying red chilies, Pak. J. Agric. Res. 36(1):63–70 (abstract; trials of November 2022), red 'Longi' chillies from the field (no pretreatment named: taken as unblanched) in open sun",
     weatherNote:
       'lower Sindh November climate from memory, day assumed: the abstract gives the place and month but no weather figure',
+    searchRange: [1e-3, 5],
+  },
+  {
+    productId: 'chili-peppers-blanched',
+    parameter: 'k.kRefPerH',
+    parameterLabel: 'Lewis k at the reference temperature',
+    caseId: 'hossain-bala-2007-chilli-solar-tunnel/red-tunnel',
+    citation:
+      'Hossain M.A., Bala B.K. 2007, Drying of hot chilli using solar tunnel drier, Solar Energy 81:85–92 (abstract), red chilli in the solar tunnel drier (possibly blanched: the abstract credits blanching with part of the shorter drying)',
+    weatherNote: 'Dhaka March climate, site and month assumed: the abstract gives no weather figure',
     searchRange: [1e-3, 5],
   },
   {

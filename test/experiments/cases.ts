@@ -105,8 +105,10 @@ const HOSSAIN_BALA_NOTE = `mixed-mode forced-convection tunnel (abstract: plasti
 const TUNNEL_AS_CABINET =
   'run as the solar cabinet (air heated by a collector, fans only in sun), the nearest method: the tunnel method is used where the product lies under the cover in the sun; collector defaults unless stated'
 
-/** Unblanched chillies (Meghwar et al., Fadhel et al., the ghost-chilli study: no pretreatment named). */
-const UNBLANCHED = 'chili-peppers-unblanched'
+/** Unblanched chillies, the plain chilli profile (Meghwar et al., Fadhel et al., the ghost-chilli study: no pretreatment named). */
+const UNBLANCHED = 'chili-peppers'
+/** Blanched chillies (Hossain & Bala 2007: the abstract credits blanching with part of the shorter drying). */
+const BLANCHED = 'chili-peppers-blanched'
 
 const DOYMAZ_START = {
   day: 1,
@@ -154,7 +156,7 @@ function allCases(): EngineCase[] {
       role: 'calibration',
       weather: 'gazipur-march-2003',
       start: { day: 1, localHour: 8, source: 'assumption: loaded at 08:00 on the second day of the file' },
-      productId: 'chili-peppers',
+      productId: BLANCHED,
       initialWbPct: { value: wb(2.85), source: 'Hossain & Bala 2007 abstract: 2.85 kg/kg db' },
       endWbPct: { value: wb(0.05), source: 'Hossain & Bala 2007 abstract: 0.05 kg/kg db' },
       method: { kind: 'solar-cabinet', collectorAreaM2PerTonne: 250 },
@@ -327,7 +329,7 @@ function hossainBalaValidation(): EngineCase[] {
     role: 'validation' as const,
     weather: 'gazipur-march-2003',
     start: { day: 1, localHour: 8, source: 'assumption: loaded at 08:00 on the second day of the file' },
-    productId: 'chili-peppers',
+    productId: BLANCHED,
     weatherReported: false,
     expect: 'within' as const,
   }
@@ -513,7 +515,7 @@ function meghwarRuns(): EngineCase[] {
       published: { timeH: 63, kind: 'active', kindReason: ACTIVE_RULE },
     },
     {
-      // The calibration run of chili-peppers-unblanched: of the unblanched runs it is the one the engine models
+      // The calibration run of chili-peppers (unblanched): of the unblanched runs it is the one the engine models
       // most directly (open air needs no collector, air flow or cover the abstract does not give), on the
       // paper's own place and month, with both moistures in the abstract, of the red C. annuum chilli the
       // catalogue profile describes (Fadhel et al.'s Baklouti is a large mild pepper; the ghost chilli another
@@ -613,7 +615,7 @@ export function caseId(c: EngineCase): string {
 }
 
 const UNBLANCHED_FIT =
-  "the unblanched rate (chili-peppers-unblanched) is fitted to Meghwar et al.'s open-sun run of red 'Longi' chillies at Umerkot, on a November reconstruction from memory, with its 81 h read as active (daylight) hours by this file's rule (the abstract does not say); read as elapsed hours the fit would be 0.176 h⁻¹ instead of 0.0919 (measured once, not used)"
+  "the unblanched rate (chili-peppers) is fitted to Meghwar et al.'s open-sun run of red 'Longi' chillies at Umerkot, on a November reconstruction from memory, with its 81 h read as active (daylight) hours by this file's rule (the abstract does not say); read as elapsed hours the fit would be 0.176 h⁻¹ instead of 0.0919 (measured once, not used)"
 const IMPROVED_CONVENTIONAL =
   "'improved' and 'conventional' sun drying are not defined in the abstract and run alike in the engine; in the same 32–35 h the conventional runs ended far wetter (0.40 and 0.70 against 0.09 and 0.10 kg/kg db), which one open-air model cannot give both"
 const GREENHOUSE_DEFAULTS =

@@ -167,7 +167,7 @@ export const GOLDEN_CASES: GoldenCase[] = [
       startStepDays: 10,
     },
   },
-  // The solar tunnel: the README's apricots with the defaults (PV fans, closed at night), and chillies in the
+  // The solar tunnel: the README's apricots with the defaults (PV fans, closed at night), and (unblanched) chillies in the
   // tropical lowland with constant fans, an open tunnel when they stop and a glass cover.
   {
     id: 'ardentine--apricot-halves--tunnel',

@@ -46,6 +46,21 @@ describe('dryhours products', () => {
     expect(bad.code).toBe(2)
     expect(bad.err).toMatch(/unknown product 'kiwi'/)
   })
+  it('the plain chilli id is unblanched; the old unblanched id is listed and still gives the same profile', async () => {
+    const t = await cli(['products'])
+    expect(t.out).toMatch(/^chili-peppers +Chili peppers \(red, whole pods, unblanched\)/m)
+    expect(t.out).toMatch(/^chili-peppers-blanched +Chili peppers \(red, whole pods, blanched\)/m)
+    expect(t.out).toMatch(/older ids still accepted[^\n]*\n {2}chili-peppers-unblanched = chili-peppers: /)
+    const old = await cli(['products', 'chili-peppers-unblanched'])
+    expect(old.code).toBe(0)
+    expect(old.out).toMatch(/^\(chili-peppers-unblanched is an older id of chili-peppers, still accepted/)
+    expect(old.out).toContain('Chili peppers (red, whole pods, unblanched) (chili-peppers)')
+    const plain = await cli(['products', 'chili-peppers'])
+    expect(old.out.endsWith(plain.out)).toBe(true)
+    expect(plain.out).not.toContain('older id')
+    const json = JSON.parse((await cli(['products', 'chili-peppers-unblanched', '--json'])).out)
+    expect(json.id).toBe('chili-peppers')
+  })
 })
 
 describe('dryhours equilibrium', () => {

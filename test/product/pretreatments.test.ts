@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest'
 import { calibratedConstant } from '../../src/product/calibration.ts'
-import { productById } from '../../src/product/catalogue.ts'
+import { canonicalProductId, PRODUCT_ALIASES, productById, productIds } from '../../src/product/catalogue.ts'
 import { derivePretreatedVariant } from '../../src/product/pretreatment-variants.ts'
 import { PRETREATMENT_VARIANTS, pretreatmentById, rateFactor } from '../../src/product/pretreatments.ts'
 
@@ -49,10 +49,20 @@ describe('pretreated variants in the catalogue', () => {
 })
 
 describe('never counted twice', () => {
-  it('a variant whose base already had the treatment is refused (chilli fitted on blanched samples)', () => {
-    expect(() => derivePretreatedVariant(productById('chili-peppers'), 'chili-peppers-unblanched')).toThrow(
-      /cannot be derived|already includes/,
-    )
+  it('a variant whose base already had the treatment is refused (the dip counted twice if dipped grapes were the base)', () => {
+    const dipped = PRETREATMENT_VARIANTS.find((v) => v.variantId === 'grapes-to-raisins-dipped')
+    if (dipped === undefined) throw new Error('grapes-to-raisins-dipped is not in PRETREATMENT_VARIANTS')
+    // As catalogued (base measured on untreated grapes) it derives; the same spec on a treated base does not.
+    expect(() => derivePretreatedVariant(productById('grapes-to-raisins'), dipped.variantId)).not.toThrow()
+    expect(() =>
+      derivePretreatedVariant(productById('grapes-to-raisins'), dipped.variantId, {
+        ...dipped,
+        baseMeasuredOn: 'treated',
+      }),
+    ).toThrow(/already includes the treatment/)
+  })
+  it('no catalogued variant sits on a base that already had its treatment', () => {
+    for (const v of PRETREATMENT_VARIANTS) expect(v.baseMeasuredOn, v.variantId).toBe('untreated')
   })
   it('a variant without a published factor is refused, and not in the catalogue unless it has a rate of its own fitted to a run', () => {
     for (const v of PRETREATMENT_VARIANTS.filter((x) => !x.derivable)) {
@@ -60,27 +70,53 @@ describe('never counted twice', () => {
       if (v.fittedTo === undefined) expect(() => productById(v.variantId)).toThrow(/unknown product/)
     }
   })
-  it('unblanched chillies have their own rate, fitted through the engine to the unblanched open-sun run of Meghwar et al. (not the blanched base times a factor)', () => {
-    const spec = PRETREATMENT_VARIANTS.find((v) => v.variantId === 'chili-peppers-unblanched')
-    expect(spec?.fittedTo).toBe('meghwar-chilli-umerkot/open-sun')
-    const fitted = calibratedConstant('chili-peppers-unblanched', 'k.kRefPerH')
-    expect(fitted.caseId).toBe(spec?.fittedTo)
-    const p = productById('chili-peppers-unblanched')
-    expect(p.variantOf).toBe('chili-peppers')
-    expect(rate('chili-peppers-unblanched')).toBe(fitted.value)
+  it('the plain chilli profile is unblanched, its rate fitted through the engine to the open-sun run of Meghwar et al. (no pretreatment named)', () => {
+    const fitted = calibratedConstant('chili-peppers', 'k.kRefPerH')
+    expect(fitted.caseId).toBe('meghwar-chilli-umerkot/open-sun')
+    const p = productById('chili-peppers')
+    expect(p.variantOf).toBeUndefined()
+    expect(rate('chili-peppers')).toBe(fitted.value)
     expect(p.kinetics.parameters?.['k.kRefPerH']).toEqual({ source: fitted.source, confidence: 'fitted' })
     expect(fitted.source).toContain('Meghwar')
-    // Unblanched chillies dried slower than the (probably blanched) base in every published pair read.
-    expect(rate('chili-peppers-unblanched')).toBeLessThan(rate('chili-peppers'))
+    expect(fitted.source).toContain('taken as unblanched')
   })
-  it('the blanched base names the unblanched variant in its name and caution, and the variant names the base', () => {
-    const base = productById('chili-peppers')
-    expect(base.name).toMatch(/blanched/)
-    expect(base.cautions.join(' ')).toContain('chili-peppers-unblanched')
-    const variant = productById('chili-peppers-unblanched')
-    expect(variant.name).toMatch(/unblanched/)
-    expect(variant.cautions.join(' ')).toContain('Blanched chillies dry faster: choose chili-peppers')
-    expect(variant.cautions.join(' ')).not.toContain('probably blanched')
+  it('blanched chillies have their own rate, fitted through the engine to the tunnel run of Hossain & Bala 2007 (not the unblanched base times a factor)', () => {
+    const spec = PRETREATMENT_VARIANTS.find((v) => v.variantId === 'chili-peppers-blanched')
+    expect(spec?.baseId).toBe('chili-peppers')
+    expect(spec?.derivable).toBe(false)
+    expect(spec?.fittedTo).toBe('hossain-bala-2007-chilli-solar-tunnel/red-tunnel')
+    const fitted = calibratedConstant('chili-peppers-blanched', 'k.kRefPerH')
+    expect(fitted.caseId).toBe(spec?.fittedTo)
+    const p = productById('chili-peppers-blanched')
+    expect(p.variantOf).toBe('chili-peppers')
+    expect(rate('chili-peppers-blanched')).toBe(fitted.value)
+    expect(p.kinetics.parameters?.['k.kRefPerH']).toEqual({ source: fitted.source, confidence: 'fitted' })
+    expect(fitted.source).toContain('Hossain M.A., Bala B.K. 2007')
+    expect(pretreatmentById('blanching-chilli').catalogueIds).toEqual(['chili-peppers-blanched'])
+    // Blanched chillies dried faster than unblanched in every published pair read (Hossain & Bala 2007;
+    // Tunde-Akintunde 2011, abstracts).
+    expect(rate('chili-peppers-blanched')).toBeGreaterThan(rate('chili-peppers'))
+  })
+  it('each chilli profile says which pretreatment it describes and points to the other', () => {
+    const plain = productById('chili-peppers')
+    expect(plain.name).toMatch(/unblanched/)
+    expect(plain.cautions.join(' ')).toContain('for chillies dried without blanching')
+    expect(plain.cautions.join(' ')).toContain('choose chili-peppers-blanched')
+    expect(plain.cautions.join(' ')).not.toContain('probably blanched')
+    const blanched = productById('chili-peppers-blanched')
+    expect(blanched.name).toMatch(/, blanched\)/)
+    expect(blanched.cautions.join(' ')).toContain('for chillies blanched')
+    expect(blanched.cautions.join(' ')).toContain(
+      'without blanching, as most growers dry them, choose chili-peppers:',
+    )
+  })
+  it('the old id of unblanched chillies is still accepted and means what it meant (the same profile)', () => {
+    expect(canonicalProductId('chili-peppers-unblanched')).toBe('chili-peppers')
+    expect(productById('chili-peppers-unblanched')).toBe(productById('chili-peppers'))
+    expect(productIds()).not.toContain('chili-peppers-unblanched')
+    expect(PRODUCT_ALIASES.find((a) => a.alias === 'chili-peppers-unblanched')?.note).toContain(
+      'chili-peppers-blanched',
+    )
   })
   it('deriving from an already derived variant is refused (the variant is not the base the spec names)', () => {
     expect(() =>

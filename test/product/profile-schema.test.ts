@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PRODUCT_CATALOGUE, productById, productIds } from '../../src/product/catalogue.ts'
+import { PRODUCT_ALIASES, PRODUCT_CATALOGUE, productById, productIds } from '../../src/product/catalogue.ts'
 import { parseUserProfile, productProfileSchema } from '../../src/product/profile-schema.ts'
 
 const REQUIRED = [
@@ -29,6 +29,14 @@ describe('catalogue', () => {
     expect(productById('grapes-to-raisins-dipped').variantOf).toBe('grapes-to-raisins')
     expect(productById('fish-fillets-salted').variantOf).toBe('fish-fillets')
     expect(new Set(productIds()).size).toBe(PRODUCT_CATALOGUE.length)
+  })
+  it('an older id still accepted is no current id and names a current one', () => {
+    for (const a of PRODUCT_ALIASES) {
+      expect(productIds(), a.alias).not.toContain(a.alias)
+      expect(productIds(), a.alias).toContain(a.id)
+      expect(productById(a.alias).id).toBe(a.id)
+    }
+    expect(() => productById('chili-peppers-dried')).toThrow(/unknown product 'chili-peppers-dried'/)
   })
   it('every profile passes its own schema (JSON round trip) and every number carries a source and a flag', () => {
     for (const p of PRODUCT_CATALOGUE) {

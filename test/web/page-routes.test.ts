@@ -52,6 +52,19 @@ describe('GET /', () => {
     expect(html).not.toMatch(/https?:\/\//) // no external assets
   })
 
+  it('lists the chillies by what growers do (plain id unblanched, blanched its own entry); an older id selects the profile it now names', () => {
+    const html = renderPage({})
+    expect(html).toContain(
+      '<option value="chili-peppers">Chili peppers (red, whole pods, unblanched)</option>',
+    )
+    expect(html).toContain(
+      '<option value="chili-peppers-blanched">Chili peppers (red, whole pods, blanched)</option>',
+    )
+    expect(html).not.toContain('value="chili-peppers-unblanched"')
+    expect(renderPage({ values: { product: 'chili-peppers-unblanched' } })).toContain(
+      '<option value="chili-peppers" selected>',
+    )
+  })
   it('serves /app.js as JavaScript that compiles, and /app.css as CSS', async () => {
     const js = await app.request('/app.js')
     expect(js.headers.get('content-type')).toMatch(/^text\/javascript/)

@@ -1,5 +1,5 @@
 import { parseArgs } from 'node:util'
-import { PRODUCT_CATALOGUE, productById } from '../../product/catalogue.ts'
+import { PRODUCT_ALIASES, PRODUCT_CATALOGUE, productById } from '../../product/catalogue.ts'
 import { CONFIDENCE_LEVELS, type ProductProfile } from '../../product/profile.ts'
 import {
   confidenceCounts,
@@ -20,6 +20,8 @@ Usage:
   dryhours products <id> [--json]           one product: every number with its level and source
   dryhours products --sources [--json]      how many catalogue numbers rest on each level, per kind
   dryhours products <id> --sources [--json] only the numbers of one product, with level and source
+
+An older id the list names under "older ids still accepted" gives the profile it now names.
 
 Levels: published (read in the cited document), transcribed (copied from a secondary source
 that cites the original; both named), fitted (derived by dryhours from the published data
@@ -79,7 +81,19 @@ function list(): string {
       `${memoryNumbers(p).length}/${numbers.length}`,
     ]
   })
-  return table(['id', 'name', 'moisture', 'isotherm', 'kinetics', 'memory'], rows)
+  return table(['id', 'name', 'moisture', 'isotherm', 'kinetics', 'memory'], rows) + aliasesText()
+}
+
+/** The older ids still accepted, each with the profile it now names. */
+function aliasesText(): string {
+  if (PRODUCT_ALIASES.length === 0) return ''
+  return `\nolder ids still accepted (the same profile, the same numbers):\n${PRODUCT_ALIASES.map((a) => `  ${a.alias} = ${a.id}: ${a.note}\n`).join('')}`
+}
+
+/** A line saying that `asked` is an older id of `p`, or nothing. */
+function aliasLine(asked: string, p: ProductProfile): string {
+  const a = PRODUCT_ALIASES.find((x) => x.alias === asked)
+  return a ? `(${asked} is an older id of ${p.id}, still accepted: ${a.note})\n` : ''
 }
 
 function table(head: string[], rows: string[][]): string {
@@ -164,11 +178,11 @@ export const productsCommand: CliCommand = {
         io.stdout(
           values.json
             ? `${JSON.stringify({ id: p.id, numbers })}\n`
-            : `${p.name} (${p.id}): every number, its level and its source\n${numberLines(numbers).join('\n')}\n`,
+            : `${aliasLine(positionals[0], p)}${p.name} (${p.id}): every number, its level and its source\n${numberLines(numbers).join('\n')}\n`,
         )
         return 0
       }
-      io.stdout(values.json ? `${JSON.stringify(p)}\n` : detail(p))
+      io.stdout(values.json ? `${JSON.stringify(p)}\n` : aliasLine(positionals[0], p) + detail(p))
       return 0
     }
     if (values.sources) {
