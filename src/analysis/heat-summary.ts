@@ -35,7 +35,9 @@ function heatedEveryHourSample(ctx: StartContext, count: number): number[] {
   const out: number[] = []
   const last = ctx.series.hours - (ctx.wrap ? 1 : ctx.maxHours)
   if (last <= 0) return out
-  const heated: StartContext = { ...ctx, primary: ctx.backup, spoilage: undefined }
+  // other conditions than the context's: its record of outcomes already run (the method's own batches) must not
+  // answer for these
+  const heated: StartContext = { ...ctx, primary: ctx.backup, spoilage: undefined, ran: undefined }
   for (let k = 0; k < count; k++) {
     const index = Math.floor((k * last) / count)
     const o = runStart(heated, index)

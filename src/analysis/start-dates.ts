@@ -38,6 +38,7 @@ export interface StartContext {
   /**
    * Outcomes already run, by start hour: a start on the 1st or 16th of a month inside the season is both a
    * monthly-heat start and a start-date row, and its batch is run once (the outcome is read, never changed).
+   * A context derived with other conditions (e.g. the heater every hour) must leave it out.
    */
   ran?: Map<number, StartOutcome>
 }
