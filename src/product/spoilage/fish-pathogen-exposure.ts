@@ -121,7 +121,7 @@ export const FISH_PATHOGEN_EXPOSURE: SpoilageModel = {
     'limits for raw, ready-to-eat fish under ordinary circumstances, for the pathogens of greatest concern in seafood; the fish temperature is the engine’s product temperature (in a heated dryer the air temperature, though wet fish sits nearer the wet-bulb temperature); not a model of growth, and says nothing of histamine or of spoilage bacteria',
   cautions: [
     'Food safety: these are US FDA seafood HACCP time-temperature limits; follow your local food regulations and HACCP plan, and keep fresh fish at or below 4.4 °C (40 °F) until drying starts.',
-    'Pathogens grow in wet fish up to about 57 °C: a warm dryer (45–55 °C) does not stop them, and wet fish stays nearer the wet-bulb temperature than the air temperature until its surface dries.',
+    'Warm, fresh fish uses up these limits within hours, in the sun and in a dryer below about 57 °C alike (and wet fish stays nearer the wet-bulb temperature than the air until its surface dries): chill it until drying starts, salt or brine it first (below water activity 0.83 nothing is counted here; the fish-fillets-salted profile), or follow a drying process validated for your product.',
     'Histamine-forming fish (tuna, mackerel, sardines) can become unsafe without looking or smelling spoiled, and histamine is not destroyed by drying or cooking.',
     'Protect drying fish from flies (blowfly larvae), animals and rain.',
   ],
