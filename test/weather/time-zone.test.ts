@@ -11,18 +11,24 @@ import { offsetAtUtc, utcCandidates, zoneOffsets } from '../../src/weather/time-
 
 const HOUR = 3_600_000
 
-/** Offset [ms] by formatToParts, the slow reference. */
+/** Offset [ms] by formatToParts, the slow reference (one formatter per zone). */
+const formats = new Map<string, Intl.DateTimeFormat>()
 function partsOffsetMs(zone: string, utcMs: number): number {
-  const f = new Intl.DateTimeFormat('en-US', {
-    timeZone: zone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-  })
-  const get = (type: string): number => Number(f.formatToParts(utcMs).find((p) => p.type === type)?.value)
+  let f = formats.get(zone)
+  if (f === undefined) {
+    f = new Intl.DateTimeFormat('en-US', {
+      timeZone: zone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: 'numeric',
+      day: 'numeric',
+      hour: 'numeric',
+      minute: 'numeric',
+    })
+    formats.set(zone, f)
+  }
+  const parts = f.formatToParts(utcMs)
+  const get = (type: string): number => Number(parts.find((p) => p.type === type)?.value)
   const wall = Date.UTC(get('year'), get('month') - 1, get('day'), get('hour') % 24, get('minute'))
   return wall - Math.floor(utcMs / 60_000) * 60_000
 }
@@ -60,5 +66,57 @@ describe('zone offsets from Intl', () => {
     expect(new Set(lh.offsetMs)).toEqual(new Set([10.5 * HOUR, 11 * HOUR]))
     const india = zoneOffsets('Asia/Kolkata', Date.UTC(2000, 0, 1), Date.UTC(2020, 11, 31))
     expect(india.offsetMs).toEqual([5.5 * HOUR])
+  })
+
+  it('finds the same transitions as reading the offset every day, in zones with unusual rules (2000–2025)', () => {
+    // Weekly sampling with daily reading of a week that changed must not miss a transition. Reference: the
+    // offset read every day and each change bisected to the minute (the algorithm it replaced; on this
+    // machine the two agree for all 418 zones Intl knows, 1975–2030). Zones: Morocco's Ramadan breaks,
+    // Egypt's suspended summer time, the Levant's Friday rules, Iran, Chile, Brazil's abolished summer time,
+    // Lord Howe's half hour, Chatham's 12:45, Samoa's skipped day, Casey's changes, Pyongyang's 2015 and
+    // 2018 steps.
+    const zones = [
+      'Africa/Casablanca',
+      'Africa/Cairo',
+      'Asia/Gaza',
+      'Asia/Amman',
+      'Asia/Tehran',
+      'America/Santiago',
+      'America/Sao_Paulo',
+      'Australia/Lord_Howe',
+      'Pacific/Chatham',
+      'Pacific/Apia',
+      'Antarctica/Casey',
+      'Asia/Pyongyang',
+    ]
+    const start = Date.UTC(2000, 0, 1)
+    const end = Date.UTC(2025, 0, 1)
+    const DAY = 86_400_000
+    for (const zone of zones) {
+      const from: number[] = [Number.NEGATIVE_INFINITY]
+      const t0 = Math.floor(start / DAY) * DAY - 2 * DAY
+      const offsets: number[] = [partsOffsetMs(zone, t0)]
+      let previous = offsets[0]
+      let previousT = t0
+      for (let t = t0 + DAY; t <= end + 2 * DAY; t += DAY) {
+        const o = partsOffsetMs(zone, t)
+        if (o !== previous) {
+          let lo = previousT
+          let hi = t
+          while (hi - lo > 60_000) {
+            const mid = lo + Math.floor((hi - lo) / 2 / 60_000) * 60_000
+            if (partsOffsetMs(zone, mid) === previous) lo = mid
+            else hi = mid
+          }
+          from.push(hi)
+          offsets.push(o)
+          previous = o
+        }
+        previousT = t
+      }
+      const z = zoneOffsets(zone, start, end)
+      expect(z.fromUtcMs, zone).toEqual(from)
+      expect(z.offsetMs, zone).toEqual(offsets)
+    }
   })
 })
