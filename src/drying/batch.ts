@@ -111,7 +111,8 @@ function checkBatchOptions(options: BatchOptions, hours: number): void {
 
 /**
  * Simulate one batch. `primary` is the method's own hourly conditions; `backup`, when given, is used in
- * every hour whose primary status is not usable (and not missing).
+ * every hour whose primary status is not usable (and not missing). A method that puts no heater or collector
+ * energy in has those columns empty (hour-columns.ts): they add nothing.
  */
 export function simulateBatch(
   primary: HourlyConditions,
@@ -176,8 +177,8 @@ export function simulateBatch(
     if (mode === HourMode.missing) {
       missingHours++
     } else if (mode !== HourMode.paused) {
-      heater += c.heaterKwhPerTonne[i]
-      solar += c.solarKwhPerTonne[i]
+      if (c.heaterKwhPerTonne.length !== 0) heater += c.heaterKwhPerTonne[i]
+      if (c.solarKwhPerTonne.length !== 0) solar += c.solarKwhPerTonne[i]
       if (mode === HourMode.rainExposed) {
         rainExposureHours++
         const next = rainWettedDb(c, i, product, m)

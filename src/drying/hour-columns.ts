@@ -146,12 +146,24 @@ export interface HourlyConditions extends HourColumns {
   noRainData: boolean
 }
 
+/**
+ * Columns that may be left empty: the rate constant and exponent (`rates`: not read by batches of first-order
+ * kinetics, whose step is the decay column), the heater's and the collector's energy (for methods that put
+ * none in). Empty columns read as `undefined`: keep them when something reads them (diagnostics).
+ */
+export interface ColumnsKept {
+  rates: boolean
+  heater: boolean
+  solar: boolean
+}
+
 export function allocateColumns(
   n: number,
   options: HourlyConditionsOptions,
   sameIsotherm: boolean,
   surfaceBalance: boolean,
   airCap = false,
+  keep: ColumnsKept = { rates: true, heater: true, solar: true },
 ): HourColumns {
   const verdict = options.verdict !== false
   const diagnostics = options.diagnostics !== false
@@ -172,8 +184,8 @@ export function allocateColumns(
     productC: f(n),
     productWetC: f(surfaceBalance ? n : 0),
     emcWetDb: f(surfaceBalance ? n : 0),
-    rateKWet: f(surfaceBalance ? n : 0),
-    rateNWet: f(surfaceBalance ? n : 0),
+    rateKWet: f(surfaceBalance && keep.rates ? n : 0),
+    rateNWet: f(surfaceBalance && keep.rates ? n : 0),
     decayWetPerHour: f(surfaceBalance ? n : 0),
     vaporUptakeAirDbPerH: f(surfaceBalance ? n : 0),
     vaporUptakeSurfaceDbPerH: f(surfaceBalance ? n : 0),
@@ -188,12 +200,12 @@ export function allocateColumns(
     emcDesorptionDb,
     // one isotherm for both directions: the two columns are one array (same values, half the memory)
     emcAdsorptionDb: sameIsotherm ? emcDesorptionDb : f(n),
-    rateK: f(n),
-    rateN: f(n),
+    rateK: f(keep.rates ? n : 0),
+    rateN: f(keep.rates ? n : 0),
     decayPerHour: f(n),
     rewetDecayPerHour: f(n),
-    heaterKwhPerTonne: f(n),
-    solarKwhPerTonne: f(n),
+    heaterKwhPerTonne: f(keep.heater ? n : 0),
+    solarKwhPerTonne: f(keep.solar ? n : 0),
     mode: new Uint8Array(n),
     status: new Uint8Array(n),
     night: new Uint8Array(n),

@@ -23,12 +23,17 @@ import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
 import { liquidSaturationPressureFromTableKpa } from '../physics/saturation-table.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
-import { allocateColumns, type HourlyConditions, type HourlyConditionsOptions } from './hour-columns.ts'
+import {
+  allocateColumns,
+  type ColumnsKept,
+  type HourlyConditions,
+  type HourlyConditionsOptions,
+} from './hour-columns.ts'
 import { Engine } from './hour-engine.ts'
 import { productHour } from './hour-product.ts'
 import type { DryingMethod } from './method.ts'
 import { methodModel } from './methods/index.ts'
-import { HourMode } from './methods/method-model.ts'
+import { HourMode, type MethodModel } from './methods/method-model.ts'
 import type { ProductResponse } from './product-response.ts'
 import { computeSolarColumns } from './solar-columns.ts'
 import { HourStatus, pausedHourStatus } from './usable-hour.ts'
@@ -189,6 +194,21 @@ function computeHour(e: Engine, i: number): void {
   productHour(e, i, rhSurface, pwsSurfacePa)
 }
 
+/**
+ * The columns an assessment can leave empty ({@link ColumnsKept}): the rate constant and exponent of first-order
+ * (Lewis) kinetics, whose batches step by the decay column, and the energy inputs the method declares it never
+ * sets; everything is kept for diagnostics (the hourly detail shows every column).
+ */
+function columnsKept(model: MethodModel, product: ProductResponse, diagnostics: boolean): ColumnsKept {
+  if (diagnostics) return { rates: true, heater: true, solar: true }
+  const energy = model.energyInputs ?? { heater: true, solar: true }
+  return {
+    rates: product.profile.kinetics.equation.model !== 'lewis',
+    heater: energy.heater,
+    solar: energy.solar,
+  }
+}
+
 /** Compute every hour's conditions. Throws RangeError when the method needs coordinates the file lacks. */
 export function computeHourlyConditions(
   series: HourlySeries,
@@ -214,6 +234,7 @@ export function computeHourlyConditions(
     product.profile.isotherm.adsorption === undefined,
     surfaceBalance,
     surfaceBalance && model.exposure === 'forced-air',
+    columnsKept(model, product, options.diagnostics !== false),
   )
   const dmPerKgFresh = 1 - options.initialWbPct / 100
   const airFlowKgPerSPerTonne = model.airFlowKgPerSPerTonne(method, options.loadingKgPerM2)

@@ -90,3 +90,30 @@ describe('the method registry', () => {
     })
   }
 })
+
+describe('energy inputs a method declares it never sets (columns left empty when computed for an assessment)', () => {
+  const grapes = productResponse(productById('grapes-to-raisins'))
+  const base = {
+    targetDb: moistureDbFromWbPct(18),
+    initialWbPct: 78.2,
+    loadingKgPerM2: 12,
+    thresholds: parseDryingThresholds({}),
+    maxProductTempC: 70,
+  }
+  for (const model of METHOD_MODELS) {
+    const declared = model.energyInputs
+    if (declared === undefined) continue
+    it(`${model.kind}: the heater and collector columns it declares unused hold only zeros`, () => {
+      const method = parseDryingMethod({ kind: model.kind })
+      const full = computeHourlyConditions(week, method, grapes, base)
+      if (!declared.heater) expect(full.heaterKwhPerTonne.every((v) => v === 0)).toBe(true)
+      if (!declared.solar) expect(full.solarKwhPerTonne.every((v) => v === 0)).toBe(true)
+      const slim = computeHourlyConditions(week, method, grapes, { ...base, diagnostics: false })
+      expect(slim.heaterKwhPerTonne.length).toBe(declared.heater ? week.hours : 0)
+      expect(slim.solarKwhPerTonne.length).toBe(declared.solar ? week.hours : 0)
+      // Lewis kinetics (grapes): batches step by the decay column; the rate columns are left empty
+      expect(slim.rateK.length).toBe(0)
+      expect(Array.from(slim.decayPerHour)).toEqual(Array.from(full.decayPerHour))
+    })
+  }
+})

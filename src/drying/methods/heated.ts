@@ -76,6 +76,7 @@ export const heated: MethodModel<typeof heatedSchema> = {
   exposure: 'forced-air',
   airFlowKgPerSPerTonne: (m) => m.airFlowKgPerSPerTonne,
   heatsWithFuel: true,
+  energyInputs: { heater: true, solar: false },
   rainMatters: () => false,
   needs: { sun: false, sunAzimuth: false, coordinates: false },
   assumptions: () => [],

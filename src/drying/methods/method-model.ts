@@ -175,6 +175,12 @@ export interface MethodModel<S extends AnyMethodSchema = AnyMethodSchema> {
   airFlowKgPerSPerTonne(method: z.output<S>, loadingKgPerM2?: number): number
   /** True when the method heats its air with fuel: its own heater energy is the heat, and no backup heater is added. */
   heatsWithFuel: boolean
+  /**
+   * Which energy inputs the method's hours can set (`MethodHour.heaterKwhPerTonne`, `solarKwhPerTonne`); absent:
+   * both. A method that declares one false has that column left empty when its conditions are computed (it
+   * would hold zeros: less memory per assessment), and its batches count no such energy.
+   */
+  energyInputs?: { heater: boolean; solar: boolean }
   /** True when rain decides hours of this method (it wets or covers the product): a file without rain then gets a warning. */
   rainMatters(method: z.output<S>): boolean
   /**

@@ -67,6 +67,7 @@ export const openAir: MethodModel<typeof openAirSchema> = {
   exposure: 'exposed',
   airFlowKgPerSPerTonne: () => 0,
   heatsWithFuel: false,
+  energyInputs: { heater: false, solar: false },
   rainMatters: () => true,
   needs: { sun: true, sunAzimuth: false, coordinates: false },
   assumptions: (m, product) => [

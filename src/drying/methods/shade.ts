@@ -45,6 +45,7 @@ export const shade: MethodModel<typeof shadeSchema> = {
   exposure: 'exposed',
   airFlowKgPerSPerTonne: () => 0,
   heatsWithFuel: false,
+  energyInputs: { heater: false, solar: false },
   rainMatters: () => false,
   needs: { sun: false, sunAzimuth: false, coordinates: false },
   assumptions: (m) => [
