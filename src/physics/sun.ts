@@ -103,44 +103,9 @@ export function deltaTSeconds(daysSinceJ2000: number): number {
   return -20 + 32 * t * t - 0.5628 * (2150 - y)
 }
 
-// Scratch of the last solarTerms call: [sin δ, cos δ cos H, cos δ sin H]. Module-level so that the
+// Outputs of the last seed or hour step: [sin δ, cos δ cos H, cos δ sin H]. Module-level so that the
 // per-hour path allocates nothing.
 const scratch = new Float64Array(3)
-
-/**
- * Sun terms at UTC instant `utcMs` for east longitude `lonDeg`, written to `scratch`: sin δ, cos δ cos H and
- * cos δ sin H, with δ the apparent declination and H the local hour angle. Same series as suncalc 2.0.2:
- * Meeus (1998) eqs 25.2–25.8 on Terrestrial Time (TT = UT + ΔT), eq 22.2 mean obliquity, eq 12.4 sidereal
- * time (linear term) on UT. Right ascension is not formed: cos δ cos H and cos δ sin H follow from
- * tan α = cos ε sin λ / cos λ by the angle-difference identities (same values as atan2/asin, fewer calls).
- */
-function solarTerms(utcMs: number, lonDeg: number): void {
-  const d = utcMs / MS_PER_DAY - 0.5 + JULIAN_DAY_1970 - JULIAN_DAY_2000 // days since J2000, UT
-  const t = (d + deltaTSeconds(d) / S_PER_DAY) / 36525 // Julian centuries, TT
-  const l0 = RAD * (280.46646 + t * (36000.76983 + t * 0.0003032)) // eq 25.2 geometric mean longitude
-  const m = RAD * (357.52911 + t * (35999.05029 - t * 0.0001537)) // eq 25.3 mean anomaly
-  const sinM = Math.sin(m)
-  const cosM = Math.cos(m)
-  const c =
-    RAD *
-    ((1.914602 - t * (0.004817 + t * 0.000014)) * sinM + // equation of centre (Meeus ch. 25)
-      (0.019993 - 0.000101 * t) * 2 * sinM * cosM +
-      0.000289 * sinM * (3 - 4 * sinM * sinM))
-  const omega = RAD * (125.04 - 1934.136 * t) // longitude of the ascending node (Meeus ch. 25)
-  const lambda = l0 + c - RAD * (0.00569 + 0.00478 * Math.sin(omega)) // apparent longitude
-  // eq 22.2 mean obliquity + eq 25.8 correction for the apparent position
-  const eps =
-    RAD * (23.439291 - t * (0.0130042 + t * (0.00000016 - t * 0.000000504))) + RAD * 0.00256 * Math.cos(omega)
-  const sinL = Math.sin(lambda)
-  const cosL = Math.cos(lambda)
-  const cosEps = Math.cos(eps)
-  const theta = RAD * ((280.46061837 + 360.98564736629 * d + lonDeg) % 360) // eq 12.4 + east longitude
-  const sinT = Math.sin(theta)
-  const cosT = Math.cos(theta)
-  scratch[0] = Math.sin(eps) * sinL // sin δ, eq 25.7
-  scratch[1] = cosT * cosL + sinT * cosEps * sinL // cos δ cos H
-  scratch[2] = sinT * cosL - cosT * cosEps * sinL // cos δ sin H
-}
 
 /** Atmospheric refraction [rad] at geometric altitude h [rad]: Meeus 1998 eq 16.4 (Sæmundsson), h clamped at 0 as suncalc 2.0.2. */
 function refractionRad(h: number): number {
@@ -152,12 +117,12 @@ function refractionRad(h: number): number {
 const REFRACTION_AT_HORIZON_RAD = 0.0002967 / Math.tan(0 + 0.00312536 / (0 + 0.08901179))
 
 /**
- * Hour-to-hour recurrences of the column path. Of the terms of {@link solarTerms}, the mean anomaly M, the node
+ * Hour-to-hour recurrences of the column path. Of the terms of {@link seedHourlySun}, the mean anomaly M, the node
  * Ω, the apparent longitude λ and the obliquity ε move by less than 0.05° in an hour: rather than eight of the
  * ten sines and cosines per hour, each of their sines and cosines is advanced from the last hour by the
  * angle-addition identities, with the small step's sine and cosine from their Taylor series (|step| < 0.001
  * rad: terms beyond the fifth order are below 1e-18); the sidereal angle θ is evaluated every hour. The angles
- * themselves are recomputed exactly every hour (the same formulas as {@link solarTerms}); only their sines and
+ * themselves are recomputed exactly every hour (the same formulas as {@link seedHourlySun}); only their sines and
  * cosines are carried, and they are re-seeded exactly every {@link SEED_EVERY_HOURS} hours and after any step
  * that is not exactly one hour, so rounding cannot accumulate: the columns agree with the hour-by-hour
  * evaluation to about 1e-13° (checked in test/physics/sun.test.ts).
@@ -187,7 +152,7 @@ const hourlySun = new HourlySun()
 
 /**
  * sin θ and cos θ of the local sidereal angle (eq 12.4 + east longitude) at UT day number `d`, evaluated
- * every hour as in {@link solarTerms}: the day number of an instant is rounded to about 5e-10 day (it passes
+ * every hour as in {@link seedHourlySun}: the day number of an instant is rounded to about 5e-10 day (it passes
  * through the Julian day), which moves θ by up to ~1e-7°; suncalc rounds it the same way, and carrying θ by a
  * recurrence instead would depart from it by that much.
  */
@@ -197,21 +162,21 @@ function siderealAngle(d: number, lonDeg: number): void {
   hourlySun.cosT = Math.cos(theta)
 }
 
-/** The slowly moving angles M, Ω and the mean ε of {@link solarTerms} at TT centuries `t` into {@link hourlySun} (no sines). */
+/** The slowly moving angles M, Ω and the mean ε of {@link seedHourlySun} at TT centuries `t` into {@link hourlySun} (no sines). */
 function slowAngles(t: number): void {
   const s = hourlySun
-  s.m = RAD * (357.52911 + t * (35999.05029 - t * 0.0001537))
-  s.omega = RAD * (125.04 - 1934.136 * t)
-  s.eps = RAD * (23.439291 - t * (0.0130042 + t * (0.00000016 - t * 0.000000504)))
+  s.m = RAD * (357.52911 + t * (35999.05029 - t * 0.0001537)) // eq 25.3 mean anomaly
+  s.omega = RAD * (125.04 - 1934.136 * t) // longitude of the ascending node (Meeus ch. 25)
+  s.eps = RAD * (23.439291 - t * (0.0130042 + t * (0.00000016 - t * 0.000000504))) // eq 22.2 mean obliquity
   // ε's nutation term needs cos Ω and λ needs sin M, cos M and sin Ω: added by the callers ({@link apparentLongitude})
 }
 
-/** Apparent longitude λ [rad] at TT centuries `t` from the hour's sin M, cos M and sin Ω (as in {@link solarTerms}). */
+/** Apparent longitude λ [rad] at TT centuries `t` from the hour's sin M, cos M and sin Ω (as in {@link seedHourlySun}). */
 function apparentLongitude(t: number, sinM: number, cosM: number, sinOmega: number): number {
-  const l0 = RAD * (280.46646 + t * (36000.76983 + t * 0.0003032))
+  const l0 = RAD * (280.46646 + t * (36000.76983 + t * 0.0003032)) // eq 25.2 geometric mean longitude
   const c =
     RAD *
-    ((1.914602 - t * (0.004817 + t * 0.000014)) * sinM +
+    ((1.914602 - t * (0.004817 + t * 0.000014)) * sinM + // equation of centre (Meeus ch. 25)
       (0.019993 - 0.000101 * t) * 2 * sinM * cosM +
       0.000289 * sinM * (3 - 4 * sinM * sinM))
   return l0 + c - RAD * (0.00569 + 0.00478 * sinOmega)
@@ -225,7 +190,7 @@ function smallStep(a: number): void {
   stepSinCos[1] = 1 - (a2 / 2) * (1 - a2 / 12)
 }
 
-/** The outputs of {@link solarTerms} into `scratch` from the carried sines and cosines. */
+/** sin δ (eq 25.7), cos δ cos H and cos δ sin H into `scratch` from the carried sines and cosines. */
 function writeTerms(): void {
   const s = hourlySun
   const cosEpsSinL = s.cosEps * s.sinL
@@ -234,17 +199,24 @@ function writeTerms(): void {
   scratch[2] = s.sinT * s.cosL - s.cosT * cosEpsSinL
 }
 
-/** Exact evaluation at `utcMs` for east longitude `lonDeg`: the angles, their sines and cosines, and `scratch`. */
+/**
+ * Sun terms at UTC instant `utcMs` for east longitude `lonDeg`, evaluated exactly, written to `scratch`: sin δ,
+ * cos δ cos H and cos δ sin H, with δ the apparent declination and H the local hour angle; the angles and their
+ * sines and cosines are kept in {@link hourlySun} for the hour steps. Same series as suncalc 2.0.2: Meeus (1998)
+ * eqs 25.2–25.8 on Terrestrial Time (TT = UT + ΔT), eq 22.2 mean obliquity with the eq 25.8 correction, eq 12.4
+ * sidereal time (linear term) on UT. Right ascension is not formed: cos δ cos H and cos δ sin H follow from
+ * tan α = cos ε sin λ / cos λ by the angle-difference identities (same values as atan2/asin, fewer calls).
+ */
 function seedHourlySun(utcMs: number, lonDeg: number): void {
   const s = hourlySun
-  const d = utcMs / MS_PER_DAY - 0.5 + JULIAN_DAY_1970 - JULIAN_DAY_2000
-  const t = (d + deltaTSeconds(d) / S_PER_DAY) / 36525
+  const d = utcMs / MS_PER_DAY - 0.5 + JULIAN_DAY_1970 - JULIAN_DAY_2000 // days since J2000, UT
+  const t = (d + deltaTSeconds(d) / S_PER_DAY) / 36525 // Julian centuries, TT
   slowAngles(t)
   s.sinM = Math.sin(s.m)
   s.cosM = Math.cos(s.m)
   s.sinOmega = Math.sin(s.omega)
   s.cosOmega = Math.cos(s.omega)
-  s.eps += RAD * 0.00256 * s.cosOmega
+  s.eps += RAD * 0.00256 * s.cosOmega // eq 25.8 correction for the apparent position
   s.lambda = apparentLongitude(t, s.sinM, s.cosM, s.sinOmega)
   s.sinL = Math.sin(s.lambda)
   s.cosL = Math.cos(s.lambda)
@@ -360,7 +332,7 @@ export function sunPositionColumns(
 export function sinGeometricSunAltitude(utcMs: number, latDeg: number, lonDeg: number): number {
   checkLatLon(latDeg, lonDeg)
   checkInstant(utcMs)
-  solarTerms(utcMs, lonDeg)
+  seedHourlySun(utcMs, lonDeg)
   const phi = RAD * latDeg
   return Math.sin(phi) * scratch[0] + Math.cos(phi) * scratch[1]
 }
