@@ -44,6 +44,7 @@ import {
   type StartTableResult,
   startDateTable,
   startIndexFor,
+  startRecord,
 } from './start-dates.ts'
 import { quantileSorted, roundOrNull, spread } from './statistics.ts'
 
@@ -248,7 +249,7 @@ function startContext(
   primary: HourlyConditions,
   backup: HourlyConditions,
 ): StartContext {
-  return {
+  const ctx: StartContext = {
     series,
     toUtcMs: time.toUtcMs,
     primary,
@@ -261,8 +262,9 @@ function startContext(
     startHourLocal: run.season.startHourLocal,
     wrap: series.typicalYear,
     spoilage: run.spoilage ? spoilageSetup(run.profile) : undefined,
-    ran: new Map(),
   }
+  ctx.ran = startRecord(ctx)
+  return ctx
 }
 
 /** Stage 4: batches from the 1st and 16th of every month; their heat and median days fill `monthly`. */

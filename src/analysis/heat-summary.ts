@@ -35,9 +35,8 @@ function heatedEveryHourSample(ctx: StartContext, count: number): number[] {
   const out: number[] = []
   const last = ctx.series.hours - (ctx.wrap ? 1 : ctx.maxHours)
   if (last <= 0) return out
-  // other conditions than the context's: its record of outcomes already run (the method's own batches) must not
-  // answer for these
-  const heated: StartContext = { ...ctx, primary: ctx.backup, spoilage: undefined, ran: undefined }
+  // other conditions than the context's: its record of the method's own batches does not answer for these
+  const heated: StartContext = { ...ctx, primary: ctx.backup, spoilage: undefined }
   for (let k = 0; k < count; k++) {
     const index = Math.floor((k * last) / count)
     const o = runStart(heated, index)

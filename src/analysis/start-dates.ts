@@ -38,9 +38,25 @@ export interface StartContext {
   /**
    * Outcomes already run, by start hour: a start on the 1st or 16th of a month inside the season is both a
    * monthly-heat start and a start-date row, and its batch is run once (the outcome is read, never changed).
-   * A context derived with other conditions (e.g. the heater every hour) must leave it out.
    */
-  ran?: Map<number, StartOutcome>
+  ran?: StartRecord
+}
+
+/**
+ * Outcomes of the batches run on one set of conditions: read only by a context with the same primary and
+ * backup conditions and spoilage model (a context derived with others, such as the heater every hour, runs its
+ * own batches even though it carries the record).
+ */
+export interface StartRecord {
+  primary: HourlyConditions
+  backup: HourlyConditions
+  spoilage: BatchSpoilageSetup | undefined
+  outcomes: Map<number, StartOutcome>
+}
+
+/** An empty record of the batches run on `ctx`'s conditions. */
+export function startRecord(ctx: Omit<StartContext, 'ran'>): StartRecord {
+  return { primary: ctx.primary, backup: ctx.backup, spoilage: ctx.spoilage, outcomes: new Map() }
 }
 
 export interface StartOutcome {
@@ -102,10 +118,15 @@ export function startIndexFor(ctx: StartContext, year: number, d: MonthDay): num
 
 /** One batch from hour `index`: the method alone, then the heat needed by the deadline. */
 export function runStart(ctx: StartContext, index: number): StartOutcome {
-  const ran = ctx.ran?.get(index)
+  const r = ctx.ran
+  const record =
+    r !== undefined && r.primary === ctx.primary && r.backup === ctx.backup && r.spoilage === ctx.spoilage
+      ? r.outcomes
+      : undefined
+  const ran = record?.get(index)
   if (ran !== undefined) return ran
   const outcome = runBatchAt(ctx, index)
-  ctx.ran?.set(index, outcome)
+  record?.set(index, outcome)
   return outcome
 }
 

@@ -10,7 +10,12 @@ import { hourlyConditionsStage, resolveAssessOptions } from '../../src/analysis/
 import { heatSummary } from '../../src/analysis/heat-summary.ts'
 import { localTimeColumns } from '../../src/analysis/local-time.ts'
 import { HEATED_SAMPLE_BATCHES } from '../../src/analysis/plan.ts'
-import type { StartContext, StartOutcome } from '../../src/analysis/start-dates.ts'
+import {
+  runStart,
+  type StartContext,
+  type StartOutcome,
+  startRecord,
+} from '../../src/analysis/start-dates.ts'
 import { productById } from '../../src/product/catalogue.ts'
 import { demoSeries, sliceSeries } from '../drying/demo-weather.ts'
 
@@ -56,13 +61,16 @@ describe('heat cross-check sample', () => {
     const plain: StartContext = { ...base }
     // a recorded outcome at every start of the sample (batch k starts at ⌊k·last/count⌋, last = hours − maximum length)
     const last = series.hours - base.maxHours
-    const ran = new Map<number, StartOutcome>()
+    const ran = startRecord(base)
     for (let k = 0; k < HEATED_SAMPLE_BATCHES; k++)
-      ran.set(Math.floor((k * last) / HEATED_SAMPLE_BATCHES), planted)
+      ran.outcomes.set(Math.floor((k * last) / HEATED_SAMPLE_BATCHES), planted)
     const recorded: StartContext = { ...base, ran }
     const a = heatSummary([], backup, run, plain)
     const b = heatSummary([], backup, run, recorded)
     expect(a.crossCheck.ratioHeatedEveryHour).not.toBeNull()
     expect(b.crossCheck.ratioHeatedEveryHour).toBe(a.crossCheck.ratioHeatedEveryHour)
+    // while a context with the record's own conditions reads it (the start is run once)
+    const start = Math.floor((1 * last) / HEATED_SAMPLE_BATCHES)
+    expect(runStart(recorded, start)).toBe(planted)
   })
 })
