@@ -12,7 +12,9 @@ import {
   GELY_GINER_2007,
   GONELI_WHEAT,
   IRRI_DRYING,
+  LOTUS_EMC_25C,
   MUNOZ_REBUFEL_RICE,
+  PAMI_EMC_CHARTS,
   SIMULADOR_SECAGEM,
   UKY_EMC_2012,
   WIKIPEDIA_EMC,
@@ -26,6 +28,7 @@ const GRAIN_CAUTIONS = [
 ]
 
 const WIKI_TABLE = `EMC table at 1.7/10/21.1/37.8 °C and RH 25–40 % (% wb) ${WIKIPEDIA_EMC}`
+const WIKI_TABLE_DURUM = `EMC table at 35/50/70/100 °F and RH 25–35 % (% wb; the 40 % row is cut off in the copy read) ${WIKIPEDIA_EMC}`
 const D245_NOT_READ = 'the ASAE D245.5/D245.6 tables were not read'
 
 export const shelledCorn: ProductProfile = {
@@ -89,11 +92,11 @@ export const wheat: ProductProfile = {
   ),
   isotherm: {
     desorption: isotherm(
-      { model: 'modified-chung-pfost', a: 610.34, b: 0.15526, c: 93.213 },
-      'modified Chung–Pfost constants as found in public code that cites "Storage of Cereal Grains and Their Products", 5th ed., p. 272 (the book was not read): from memory of that code; checked in the tests against 10.8 % wb at 32.2 °C/50 % for soft red winter wheat (extension text, publisher not shown on the copy read)',
-      'memory',
-      [0, 50],
-      [20, 90],
+      { model: 'modified-oswin', a: 13.1053, b: -0.0485494, c: 3.03634 },
+      `modified Oswin fitted by dryhours (least squares on % wb, RMSE 0.14 pt, largest residual 0.35 pt, 19 points; npm run isotherms:fit) to the durum wheat ${WIKI_TABLE_DURUM} and the wheat row at RH 30–90 % of ${LOTUS_EMC_25C}; the form ASABE D245.5 gives durum per ${PAMI_EMC_CHARTS}. Soft red winter wheat 10.8 % wb at 32.2 °C/50 % (extension text, not in the fit): 0.45 pt off. Replaces recalled Chung–Pfost constants (610.34, 0.15526, 93.213)`,
+      'fitted',
+      [1.7, 37.8],
+      [25, 90],
     ),
   },
   kinetics: kinetics(

@@ -79,6 +79,10 @@ export const MUNOZ_REBUFEL_RICE =
   'Muñoz C. R., Rebufel A. P. n.d., Equilibrium moisture to rough rice, variety Oro, to 10°, 25° and 40 °C temperatures, INIA La Platina, Chilean J. Agric. Res. archive (abstract; the year is not shown on the page read)'
 export const ALVES_COFFEE =
   'Alves G.E., Isquierdo E.P., Borém F.M., Siqueira V.C., Oliveira P.D., Andrade E.T. n.d., Drying kinetics of natural coffee for different temperatures and low relative humidity, Coffee Science (UFLA), article 422 (abstract; the year is not shown on the page read)'
+export const LOTUS_EMC_25C =
+  'Lotus Harvestec n.d., Storage technicalities (company web page lotusharvestec.com/storage-technicalities, read): table "Equilibrium Moisture Content (%wb) at 25°C" (its own source not named)'
+export const PAMI_EMC_CHARTS =
+  'PAMI n.d., Moisture content charts for grain storage management (emc.pamifiles.ca; introduction read): modified Oswin "for lentils, durum and oats", after ASABE D245.5'
 export const UKY_EMC_2012 =
   'Lee C. 2012 (Sept. 25), Moisture content charts, University of Kentucky Grain Crops blog, quoting the EMC chart by S. McNeill (page read)'
 

@@ -1,0 +1,72 @@
+/**
+ * @module product/fit-isotherm
+ * Fit the three constants of an ASABE D245 form (modified Henderson, Chung–Pfost, Halsey or Oswin; the forms in
+ * `isotherm-models.ts`) to published equilibrium-moisture points by least squares (Levenberg–Marquardt,
+ * `least-squares.ts`). The residual is the difference in moisture, % wet basis, between the isotherm and the
+ * point, because the tables growers and extension services publish are in % wet basis: the fit minimises what a
+ * reader of the table would see. The isotherm is evaluated by `emcDb`, the function the engine uses, so the
+ * constants that come out are the ones the engine needs.
+ */
+import { emcDb, type IsothermEquation } from './isotherm-models.ts'
+import { levenbergMarquardt } from './least-squares.ts'
+import { moistureWbPctFromDb } from './moisture-basis.ts'
+
+/** One published point: air temperature [°C], relative humidity [%], equilibrium moisture [% wb]. */
+export interface EmcPoint {
+  tC: number
+  rhPct: number
+  emcWbPct: number
+}
+
+export type ThreeConstantModel = Exclude<IsothermEquation['model'], 'gab'>
+
+export interface IsothermFit {
+  equation: Extract<IsothermEquation, { model: ThreeConstantModel }>
+  /** Root-mean-square residual [% wb points]. */
+  rmseWbPct: number
+  /** Largest absolute residual [% wb points]. */
+  maxAbsWbPct: number
+  n: number
+  converged: boolean
+}
+
+/** Residuals [% wb] of `eq` at `points`: isotherm minus point. Throws RangeError outside the model's domain. */
+export function emcResidualsWbPct(eq: IsothermEquation, points: readonly EmcPoint[]): number[] {
+  return points.map((p) => moistureWbPctFromDb(emcDb(eq, p.tC, p.rhPct)) - p.emcWbPct)
+}
+
+/** Residual summary of a given equation against points. */
+export function emcFitQuality(
+  eq: IsothermEquation,
+  points: readonly EmcPoint[],
+): { rmseWbPct: number; maxAbsWbPct: number } {
+  const r = emcResidualsWbPct(eq, points)
+  return {
+    rmseWbPct: Math.sqrt(r.reduce((s, v) => s + v * v, 0) / r.length),
+    maxAbsWbPct: Math.max(...r.map(Math.abs)),
+  }
+}
+
+/**
+ * Least-squares constants of `start.model` for `points`, starting from `start`'s constants (a previous set for
+ * the same product, or a set for a similar grain: the forms are non-linear and need a start in their domain).
+ */
+export function fitIsotherm(
+  start: Extract<IsothermEquation, { model: ThreeConstantModel }>,
+  points: readonly EmcPoint[],
+): IsothermFit {
+  if (points.length < 4) throw new RangeError(`an isotherm fit needs at least 4 points, got ${points.length}`)
+  const model = start.model
+  const eqOf = (p: number[]) => ({ model, a: p[0], b: p[1], c: p[2] }) as IsothermFit['equation']
+  const residuals = (p: number[]) => {
+    const r = emcResidualsWbPct(eqOf(p), points)
+    if (!r.every(Number.isFinite)) throw new RangeError('isotherm outside its domain')
+    return r
+  }
+  const result = levenbergMarquardt(residuals, [start.a, start.b, start.c], {
+    maxIterations: 500,
+    tolerance: 1e-12,
+  })
+  const equation = eqOf(result.params)
+  return { equation, ...emcFitQuality(equation, points), n: points.length, converged: result.converged }
+}
