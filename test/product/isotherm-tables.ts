@@ -71,7 +71,7 @@ export const ISOTHERM_FITS: IsothermFitCase[] = [
     adopted: true,
   },
   {
-    // Not adopted: with it the natural-air bin test (UNL estimate, 20–27 days within 15 %) takes 32.3 days.
+    // Not adopted: with it the natural-air bin test (UNL estimate, 20–27 days within 15 %) takes 32.1 days.
     product: 'shelled-corn',
     start: { model: 'modified-chung-pfost', a: 374.34, b: 0.18662, c: 31.696 },
     tables: ['manual-corn-henderson-thompson', 'wikipedia-corn'],
