@@ -273,17 +273,22 @@ export function computeHourlyConditions(
   // hours still to compute, in a typed array (a captured, reassigned `let` would be boxed)
   const remaining = new Int32Array(1)
   remaining[0] = n
-  const result: HourlyConditions = {
-    ...columns,
+  // The columns object itself grows into the result (Object.assign adds the fields one by one, along the object
+  // shapes every assessment shares): a spread copy of ~30 fields gets a shape of its own each time, and every
+  // batch function compiled for the last assessment's shape would be thrown away and compiled again.
+  const result: HourlyConditions = Object.assign(columns, {
     hours: n,
     method,
-    airFlowKgPerSPerTonne,
+    // a double placeholder, set below: the field starts with a double representation for every method (an
+    // exposed method's 0 would start it as a small integer, and the next heated method's flow would retire that
+    // object shape, sending every batch function compiled for it back to be compiled again, each assessment)
+    airFlowKgPerSPerTonne: 0.5,
     surfaceBalance,
     capInitialDb: moistureDbFromWbPct(options.initialWbPct),
     assumedIrradianceHours: 0,
     assumedWindHours: 0,
     noRainData: !anyRain,
-    ensure: (from, count, wrap) => {
+    ensure: (from: number, count: number, wrap: boolean): void => {
       if (remaining[0] === 0) return
       for (let k = 0; k < count; k++) {
         let i = from + k
@@ -298,7 +303,8 @@ export function computeHourlyConditions(
         }
       }
     },
-  }
+  })
+  result.airFlowKgPerSPerTonne = airFlowKgPerSPerTonne
   if (options.lazy !== true) result.ensure(0, n, false)
   result.assumedIrradianceHours = e.assumedIrradianceHours
   result.assumedWindHours = e.assumedWindHours

@@ -131,8 +131,13 @@ export function tabulatedResponse(direct: ProductResponse): ProductResponse {
   // ERH at one moisture (the target, asked every hour) cached per 0.1 °C from −20 to 100 °C.
   let erhMoisture = Number.NaN
   const erhCache = new Float64Array(1201).fill(Number.NaN)
+  // every field written out (no spread copy of `direct`: a copy gets an object shape of its own each time, and the
+  // hour functions compiled for the last assessment's product would be compiled again)
   return {
-    ...direct,
+    profile: direct.profile,
+    thicknessMm: direct.thicknessMm,
+    thompsonTimeScale: direct.thompsonTimeScale,
+    rewettingRateFactor: direct.rewettingRateFactor,
     emcDesorptionDb: (t, rh) => lookup(des, t, rh),
     emcAdsorptionDb: (t, rh) => lookup(ads, t, rh),
     erhPct: (t, m) => {
