@@ -74,6 +74,14 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     source:
       "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Kituu G.M., Shitanda D., Kanali C.L., Mailutha J.T. n.d. (no year on the page read), Effect of Brining on the Drying Rate of Tilapia in a Solar Tunnel Dryer, ACTA Press paper 34014 (abstract), unbrined tilapia pieces 9 mm thick in a solar tunnel dryer in Kenya: run 'unbrined', 84.8 → 10.0 % wb in 40 h (active time) with method tunnel on the weather reconstruction 'juja-february-2010' (test/fixtures/experiments/weather/; Juja February climate from memory, site and month assumed: the abstract gives the country only and no weather figure; initial moisture from the same authors' CIGR Journal abstract); engine ÷ target 1.0000",
   },
+  {
+    productId: 'cocoa-beans',
+    parameter: 'dRefM2PerS',
+    value: 1.681e-10,
+    caseId: 'puello-mendez-2017-cocoa-colombia/open-air',
+    source:
+      "effective moisture diffusivity at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Puello-Mendez J., Meza-Castellar P. et al. 2017, Comparative Study of Solar Drying of Cocoa Beans: Two Methods Used in Colombian Rural Areas, Chem. Eng. Trans. 57:1711–1716 (abstract), fermented cocoa beans in open air on a farm of the Caribbean region of Colombia: run 'open-air', 58.0 → 7.0 % wb in 144 h (elapsed time, sampled every 24 h: the geometric middle of the constants 1.542e-10–1.833e-10 that meet the end point at that sample) with method open-air on the weather reconstruction 'cartagena-january-2016' (test/fixtures/experiments/weather/; Cartagena January climate, mostly from memory, place and month assumed: the abstract gives no farm, date or weather); engine ÷ target 1.0000",
+  },
 ]
 
 /** The fitted constant of `productId` at `parameter`; throws when `npm run calibrate` has not written it. */

@@ -99,6 +99,17 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
       "Juja February climate from memory, site and month assumed: the abstract gives the country only and no weather figure; initial moisture from the same authors' CIGR Journal abstract",
     searchRange: [1e-3, 5],
   },
+  {
+    productId: 'cocoa-beans',
+    parameter: 'dRefM2PerS',
+    parameterLabel: 'effective moisture diffusivity at the reference temperature',
+    caseId: 'puello-mendez-2017-cocoa-colombia/open-air',
+    citation:
+      'Puello-Mendez J., Meza-Castellar P. et al. 2017, Comparative Study of Solar Drying of Cocoa Beans: Two Methods Used in Colombian Rural Areas, Chem. Eng. Trans. 57:1711–1716 (abstract), fermented cocoa beans in open air on a farm of the Caribbean region of Colombia',
+    weatherNote:
+      'Cartagena January climate, mostly from memory, place and month assumed: the abstract gives no farm, date or weather',
+    searchRange: [1e-12, 1e-7],
+  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */

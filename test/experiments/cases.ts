@@ -178,6 +178,45 @@ function allCases(): EngineCase[] {
     kituuRun(),
     ...muazuRuns(),
     owusuRun(),
+    ...puelloMendezRuns(),
+  ]
+}
+
+/** Puello-Mendez et al. 2017: fermented cocoa beans on a farm of the Caribbean region of Colombia. */
+function puelloMendezRuns(): EngineCase[] {
+  const base = {
+    experimentId: 'puello-mendez-2017-cocoa-colombia',
+    weather: 'cartagena-january-2016',
+    start: { day: 1, localHour: 8, source: 'assumption: spread at 08:00 (day 1 of the file)' },
+    productId: 'cocoa-beans',
+    initialWbPct: { value: 58, source: 'Puello-Mendez et al. 2017 abstract: 58 % (wet basis presumed)' },
+    endWbPct: { value: 7, source: 'Puello-Mendez et al. 2017 abstract: 7 % (wet basis presumed)' },
+    weatherReported: false,
+    expect: 'within' as const,
+  }
+  const days = (n: number) => ({
+    timeH: 24 * n,
+    kind: 'elapsed' as const,
+    kindReason: `elapsed: the abstract gives ${n} d; whole days are taken as a daily check (assumption), so the end point is the first day's end at which it was met`,
+    sampledEveryH: 24,
+  })
+  return [
+    {
+      ...base,
+      runId: 'open-air',
+      role: 'calibration',
+      method: { kind: 'open-air' },
+      methodNote: COVERED_AT_NIGHT,
+      published: days(6),
+    },
+    {
+      ...base,
+      runId: 'greenhouse',
+      role: 'validation',
+      method: PLASTIC_TUNNEL_OPEN,
+      methodNote: `greenhouse drying under a plastic roof built on the farm ('plastic roof solar dryer', abstract; no collector or fan named): ${PLASTIC_TUNNEL_NOTE}; open at night (elapsed time); the product's default loading`,
+      published: days(4),
+    },
   ]
 }
 
@@ -654,6 +693,6 @@ export const NOT_RUN: { id: string; role: 'calibration' | 'validation'; reason: 
     id: 'adeyemi-2020-cocoa-mixed-mode/mixed-mode',
     role: 'validation',
     reason:
-      'not run: the abstract gives neither the initial moisture nor the intermittent schedule (hours of drying a day) of the mixed-mode dryer, nor the season of each run (the time is an average over the wet and dry seasons); the cocoa kinetics are from memory with no calibration run',
+      'not run: the abstract gives neither the initial moisture nor the intermittent schedule (hours of drying a day) of the mixed-mode dryer, nor the season of each run (the time is an average over the wet and dry seasons)',
   },
 ]
