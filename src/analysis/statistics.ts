@@ -7,7 +7,7 @@
  * year) and p90 the figure exceeded in 1 of 10 years (a good year). For days to target, p90 is the
  * time within which 9 of 10 years finish.
  */
-import { quantileSorted } from '../math/quantile.ts'
+import { orderStatistic, quantileSorted } from '../math/quantile.ts'
 import { integerPower } from '../physics/power.ts'
 
 /** The convention, in words, for the assumptions list of an assessment. */
@@ -16,7 +16,7 @@ export const PERCENTILE_CONVENTION =
   'For usable hours p10 is exceeded in 9 of 10 years (bad year), p90 in 1 of 10 (good year); ' +
   'for days to target p90 is the time within which 9 of 10 years finish.'
 
-export { quantileSorted }
+export { orderStatistic, quantileSorted }
 
 export interface Spread {
   median: number | null
@@ -42,43 +42,6 @@ export function spread(values: readonly number[], digits = 1): Spread {
     p10: roundOrNull(quantileSorted(sorted, 0.1), digits),
     p90: roundOrNull(quantileSorted(sorted, 0.9), digits),
   }
-}
-
-/**
- * The k-th smallest value (0-based) of `values`, by selection (Hoare's quickselect with a median-of-three
- * pivot) in linear expected time: the value `sorted[k]` would hold, without sorting. Reorders `values`.
- */
-export function orderStatistic(values: Float64Array, k: number): number {
-  if (!(Number.isInteger(k) && k >= 0 && k < values.length)) {
-    throw new RangeError(`order statistic index must be from 0 to ${values.length - 1}, got ${k}`)
-  }
-  let lo = 0
-  let hi = values.length - 1
-  while (hi > lo) {
-    const mid = (lo + hi) >>> 1
-    // median of three as the pivot value
-    const a = values[lo]
-    const b = values[mid]
-    const c = values[hi]
-    const pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c))
-    let i = lo
-    let j = hi
-    while (i <= j) {
-      while (values[i] < pivot) i++
-      while (values[j] > pivot) j--
-      if (i <= j) {
-        const t = values[i]
-        values[i] = values[j]
-        values[j] = t
-        i++
-        j--
-      }
-    }
-    if (k <= j) hi = j
-    else if (k >= i) lo = i
-    else return values[k]
-  }
-  return values[k]
 }
 
 /** Arithmetic mean, null for no values. */

@@ -32,3 +32,40 @@ export function quantileOf(values: readonly number[], q: number): number {
     q,
   )
 }
+
+/**
+ * The k-th smallest value (0-based) of `values`, by selection (Hoare's quickselect with a median-of-three
+ * pivot) in linear expected time: the value `sorted[k]` would hold, without sorting. Reorders `values`.
+ */
+export function orderStatistic(values: Float64Array, k: number): number {
+  if (!(Number.isInteger(k) && k >= 0 && k < values.length)) {
+    throw new RangeError(`order statistic index must be from 0 to ${values.length - 1}, got ${k}`)
+  }
+  let lo = 0
+  let hi = values.length - 1
+  while (hi > lo) {
+    const mid = (lo + hi) >>> 1
+    // median of three as the pivot value
+    const a = values[lo]
+    const b = values[mid]
+    const c = values[hi]
+    const pivot = Math.max(Math.min(a, b), Math.min(Math.max(a, b), c))
+    let i = lo
+    let j = hi
+    while (i <= j) {
+      while (values[i] < pivot) i++
+      while (values[j] > pivot) j--
+      if (i <= j) {
+        const t = values[i]
+        values[i] = values[j]
+        values[j] = t
+        i++
+        j--
+      }
+    }
+    if (k <= j) hi = j
+    else if (k >= i) lo = i
+    else return values[k]
+  }
+  return values[k]
+}

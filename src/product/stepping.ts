@@ -104,6 +104,25 @@ function fallingRateLoss(
   const rh = Math.min(RH_STEP_MAX_PCT, Math.max(RH_STEP_MIN_PCT, rhPct))
   const me = equilibriumMoistureDb(profile, tC, rh, 'desorption')
   if (!(m > me)) return 0
+  return m - fallingRateNextDb(profile, thicknessMm, m, m0, me, tC, rh, airVelocityMs, dtH)
+}
+
+/**
+ * Moisture [kg/kg db] after `dtH` hours of the falling-rate model from `m` (> `me`, the desorption equilibrium at
+ * tC and the clamped `rh`; batch start `m0`): equivalent-time stepping of the profile's thin-layer equation (Page
+ * or Lewis by its rate parameters, Thompson's corn equation otherwise).
+ */
+function fallingRateNextDb(
+  profile: ProductProfile,
+  thicknessMm: number,
+  m: number,
+  m0: number,
+  me: number,
+  tC: number,
+  rh: number,
+  airVelocityMs: number | undefined,
+  dtH: number,
+): number {
   const mr = m0 > me ? (m - me) / (m0 - me) : 1
   let mrNext: number
   const p = rateParametersAt(profile, tC, rh, airVelocityMs, thicknessMm)
@@ -115,7 +134,7 @@ function fallingRateLoss(
     const tEq = mr >= 1 ? 0 : thompsonTimeH(tC, mr)
     mrNext = thompsonMoistureRatio(tC, tEq + dtH / s)
   }
-  return m - (me + mrNext * (m0 - me))
+  return me + mrNext * (m0 - me)
 }
 
 /** One step of dtH hours [0 < dtH ≤ 24] under `conditions`. Pure: returns a new state. */
@@ -141,18 +160,7 @@ export function stepMoisture(state: MoistureState, conditions: HourConditions, d
 
   if (m > meDes) {
     const m0 = Math.max(state.initialMoistureDb, m)
-    const mr = m0 > meDes ? (m - meDes) / (m0 - meDes) : 1
-    let mrNext: number
-    const p = rateParametersAt(profile, tC, rh, airVelocityMs, thicknessMm)
-    if (p) {
-      const tEq = mr >= 1 ? 0 : power(-Math.log(mr) / p.kPerHn, 1 / p.n)
-      mrNext = Math.exp(-p.kPerHn * power(tEq + dtH, p.n))
-    } else {
-      const s = timeScaleFactor(profile, thicknessMm, airVelocityMs)
-      const tEq = mr >= 1 ? 0 : thompsonTimeH(tC, mr)
-      mrNext = thompsonMoistureRatio(tC, tEq + dtH / s)
-    }
-    const next = meDes + mrNext * (m0 - meDes)
+    const next = fallingRateNextDb(profile, thicknessMm, m, m0, meDes, tC, rh, airVelocityMs, dtH)
     const cap = conditions.maxEvaporationKgPerM2H
     if (cap !== undefined) {
       if (!(cap >= 0)) throw new RangeError(`maximum evaporation must be ≥ 0 kg/(m²·h), got ${cap}`)
