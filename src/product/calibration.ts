@@ -82,14 +82,6 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     source:
       "effective moisture diffusivity at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Puello-Mendez J., Meza-Castellar P. et al. 2017, Comparative Study of Solar Drying of Cocoa Beans: Two Methods Used in Colombian Rural Areas, Chem. Eng. Trans. 57:1711–1716 (abstract), fermented cocoa beans in open air on a farm of the Caribbean region of Colombia: run 'open-air', 58.0 → 7.0 % wb in 144 h (elapsed time, sampled every 24 h: the geometric middle of the constants 1.542e-10–1.833e-10 that meet the end point at that sample) with method open-air on the weather reconstruction 'cartagena-january-2016' (test/fixtures/experiments/weather/; Cartagena January climate, mostly from memory, place and month assumed: the abstract gives no farm, date or weather); engine ÷ target 1.0000",
   },
-  {
-    productId: 'coffee-parchment',
-    parameter: 'k.kRefPerH',
-    value: 0.1399,
-    caseId: 'aims-2023-coffee-colombia-mechanical/open-sun',
-    source:
-      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces The influence of hot-air mechanical drying on the sensory quality of specialty Colombian coffee, AIMS Agric. Food 2023, doi:10.3934/agrfood.2023042 (abstract; authors not shown on the copy read), coffee from three Colombian farms in the open sun to 11 % in 54.48 h: run 'open-sun', 53.0 → 11.0 % wb in 54.48 h (active time) with method open-air on the weather reconstruction 'chinchina-october-2022' (test/fixtures/experiments/weather/; central coffee zone October climate from memory, place and month assumed; initial moisture the catalogue value); engine ÷ target 1.0001",
-  },
 ]
 
 /** The fitted constant of `productId` at `parameter`; throws when `npm run calibrate` has not written it. */

@@ -157,9 +157,6 @@ export const fishFilletsSalted: ProductProfile = {
   cautions: [...FISH_CAUTIONS, 'Salted fish regains water fast above 75 % RH: store dry, covered.'],
 }
 
-/** Coffee drying constant fitted through the engine to an open-sun run (npm run calibrate). */
-const COFFEE_K = calibratedConstant('coffee-parchment', 'k.kRefPerH')
-
 export const coffeeParchment: ProductProfile = {
   id: 'coffee-parchment',
   name: 'Coffee in parchment (washed)',
@@ -190,18 +187,12 @@ export const coffeeParchment: ProductProfile = {
     ),
   },
   kinetics: kinetics(
-    { model: 'lewis', k: arrhenius(COFFEE_K.value, 40, 52890) },
+    { model: 'lewis', k: arrhenius(0.04, 40, 52890) },
     9,
     'sphere',
-    '9 mm beans in parchment, the size at which k holds: from memory (the calibration run gives no size)',
+    'Lewis k = 0.04 h⁻¹ at 40 °C for 9 mm beans in parchment: from memory (sun drying of parchment takes about 1–2 weeks)',
     'memory',
     {
-      // Before the fit: Lewis k 0.04 h⁻¹ at 40 °C, from memory (sun drying of parchment takes about 1–2 weeks).
-      'k.kRefPerH': param(COFFEE_K.source, 'fitted'),
-      'k.tRefC': param(
-        `reference temperature 40 °C, set by dryhours, of the k fitted through the engine to the open-sun run of the AIMS Agric. Food 2023 Colombian coffee study (${COFFEE_K.caseId}; npm run calibrate)`,
-        'fitted',
-      ),
       'k.activationEnergyJPerMol': param(
         `${ALVES_COFFEE}: natural (dry-processed) Arabica coffee fruits dried at 35, 40 and 45 °C with a 2.6 °C dew point, Deff 1.908–3.721e-11 m²/s, activation energy 52.89 kJ/mol (fruits, not washed parchment)`,
         'published',

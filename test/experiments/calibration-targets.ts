@@ -110,17 +110,6 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
       'Cartagena January climate, mostly from memory, place and month assumed: the abstract gives no farm, date or weather',
     searchRange: [1e-12, 1e-7],
   },
-  {
-    productId: 'coffee-parchment',
-    parameter: 'k.kRefPerH',
-    parameterLabel: 'Lewis k at the reference temperature',
-    caseId: 'aims-2023-coffee-colombia-mechanical/open-sun',
-    citation:
-      'The influence of hot-air mechanical drying on the sensory quality of specialty Colombian coffee, AIMS Agric. Food 2023, doi:10.3934/agrfood.2023042 (abstract; authors not shown on the copy read), coffee from three Colombian farms in the open sun to 11 % in 54.48 h',
-    weatherNote:
-      'central coffee zone October climate from memory, place and month assumed; initial moisture the catalogue value',
-    searchRange: [1e-3, 5],
-  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */
