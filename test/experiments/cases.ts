@@ -695,4 +695,10 @@ export const NOT_RUN: { id: string; role: 'calibration' | 'validation'; reason: 
     reason:
       'not run: the abstract gives neither the initial moisture nor the intermittent schedule (hours of drying a day) of the mixed-mode dryer, nor the season of each run (the time is an average over the wet and dry seasons)',
   },
+  {
+    id: 'aims-2023-coffee-colombia (doi:10.3934/agrfood.2023042)/open-sun',
+    role: 'calibration',
+    reason:
+      'tried and not adopted: open-sun specialty coffee to 11 % in 54.48 h (abstract; authors not shown on the copy read), with neither the start moisture nor whether the hours are clock or daylight hours; fitted through the engine on a reconstruction from memory it made washed parchment dry in 2.4 days in open air (1–2 weeks is usual practice) and the same paper’s 35 °C mechanical dryer came out 0.36× its published 71.52 h, so the coffee rate stays from memory',
+  },
 ]
