@@ -5,7 +5,8 @@
  * `least-squares.ts`). The residual is the difference in moisture, % wet basis, between the isotherm and the
  * point, because the tables growers and extension services publish are in % wet basis: the fit minimises what a
  * reader of the table would see. The isotherm is evaluated by `emcDb`, the function the engine uses, so the
- * constants that come out are the ones the engine needs.
+ * constants that come out are the ones the engine needs. `fitGabIsotherm` does the same for the GAB form (Xm0, C0,
+ * K0; the temperature terms are held at the starting set's, because points at one temperature cannot give them).
  */
 import { emcDb, type IsothermEquation } from './isotherm-models.ts'
 import { levenbergMarquardt } from './least-squares.ts'
@@ -64,6 +65,33 @@ export function fitIsotherm(
     return r
   }
   const result = levenbergMarquardt(residuals, [start.a, start.b, start.c], {
+    maxIterations: 500,
+    tolerance: 1e-12,
+  })
+  const equation = eqOf(result.params)
+  return { equation, ...emcFitQuality(equation, points), n: points.length, converged: result.converged }
+}
+
+export type GabEquation = Extract<IsothermEquation, { model: 'gab' }>
+
+export interface GabFit extends Omit<IsothermFit, 'equation'> {
+  equation: GabEquation
+}
+
+/**
+ * Least-squares Xm0, C0 and K0 of the GAB form for `points` [% wb], from `start`; ΔHx, ΔHc and ΔHk stay at
+ * `start`'s. A step that puts K·aw at or above 1 at a point (where GAB diverges) is rejected by the solver.
+ */
+export function fitGabIsotherm(start: GabEquation, points: readonly EmcPoint[]): GabFit {
+  if (points.length < 4) throw new RangeError(`an isotherm fit needs at least 4 points, got ${points.length}`)
+  const eqOf = (p: number[]): GabEquation => ({ ...start, xm0: p[0], c0: p[1], k0: p[2] })
+  const residuals = (p: number[]) => {
+    if (!(p[0] > 0 && p[1] > 0 && p[2] > 0)) throw new RangeError('GAB constants must be > 0')
+    const r = emcResidualsWbPct(eqOf(p), points)
+    if (!r.every(Number.isFinite)) throw new RangeError('isotherm outside its domain')
+    return r
+  }
+  const result = levenbergMarquardt(residuals, [start.xm0, start.c0, start.k0], {
     maxIterations: 500,
     tolerance: 1e-12,
   })

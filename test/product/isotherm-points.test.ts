@@ -8,6 +8,8 @@ import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
 import { productById } from '../../src/product/catalogue.ts'
 import { equilibriumMoistureDb, equilibriumRelativeHumidityPct } from '../../src/product/equilibrium.ts'
+import { type EmcPoint, fitGabIsotherm, type GabEquation } from '../../src/product/fit-isotherm.ts'
+import { emcDb } from '../../src/product/isotherm-models.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../../src/product/moisture-basis.ts'
 
 interface PointSet {
@@ -64,5 +66,34 @@ describe('prunes: Zettler et al. 2001 (California prunes, abstract): 16–38 % m
     expect(p.targetMoistureWbPct.value).toBeLessThan(24.6)
     const aw = equilibriumRelativeHumidityPct(p, 25, moistureDbFromWbPct(p.targetMoistureWbPct.value)) / 100
     expect(aw).toBeLessThan(p.waterActivityTarget.value)
+  })
+})
+
+describe('fitGabIsotherm: the GAB form fitted through the engine (for point sets of four or more)', () => {
+  // Points computed by the engine from the published cocoa GAB (Sandoval et al. 2020, peeled fermented bean,
+  // 25 °C: Xm 0.036, C 21.63, K 0.871): the fit must give those constants back from a start far from them.
+  const cocoa = productById('cocoa-beans').isotherm.desorption.equation as GabEquation
+  const points: EmcPoint[] = [11, 23, 33, 43, 53, 65, 75, 85].map((rhPct) => ({
+    tC: 25,
+    rhPct,
+    emcWbPct: moistureWbPctFromDb(emcDb(cocoa, 25, rhPct)),
+  }))
+  it('recovers Xm0, C0 and K0 to 1e-4 (relative) with zero residual', () => {
+    const start: GabEquation = { ...cocoa, xm0: 0.07, c0: 5, k0: 0.8 }
+    const fit = fitGabIsotherm(start, points)
+    expect(fit.converged).toBe(true)
+    expect(Math.abs(fit.equation.xm0 / cocoa.xm0 - 1)).toBeLessThan(1e-4)
+    expect(Math.abs(fit.equation.c0 / cocoa.c0 - 1)).toBeLessThan(1e-4)
+    expect(Math.abs(fit.equation.k0 / cocoa.k0 - 1)).toBeLessThan(1e-4)
+    expect(fit.maxAbsWbPct).toBeLessThan(1e-4)
+  })
+  it('refuses fewer than four points: the three prune pairs are checks, not a fit', () => {
+    const prunes = set('zettler-2001-prunes').points.map((p) => ({
+      tC: 25,
+      rhPct: 100 * p.aw,
+      emcWbPct: p.moistureWbPct,
+    }))
+    const start = productById('plums-to-prunes').isotherm.desorption.equation as GabEquation
+    expect(() => fitGabIsotherm(start, prunes)).toThrow(RangeError)
   })
 })
