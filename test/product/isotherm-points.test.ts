@@ -69,6 +69,24 @@ describe('prunes: Zettler et al. 2001 (California prunes, abstract): 16–38 % m
   })
 })
 
+describe('coffee: Fretheim 2019 (Cafe Imports, as quoted): 652 of 703 green-coffee lots at 11–11.1 % MC had aw ≤ 0.60', () => {
+  // A bound, not a pair: most lots at 11 % lie at or below aw 0.60. The coffee-parchment GAB (Xm0 0.06, C 10, K 0.85,
+  // from memory) is for coffee in parchment, not green coffee; this records how far it lies from the green-coffee lots.
+  const p = productById('coffee-parchment')
+  const b = (
+    set('fretheim-2019-green-coffee') as PointSet & { bound: { aw: number; lots: number; lotsAbove: number } }
+  ).bound
+  it('the lots as read: more than nine in ten at or below aw 0.60', () => {
+    expect(1 - b.lotsAbove / b.lots).toBeGreaterThan(0.9)
+  })
+  it('the recalled isotherm gives aw 0.65 at 11 % wb and 25 °C: 0.04–0.06 above what most green-coffee lots show (not adopted, not changed)', () => {
+    // measured: 0.648. A change waits for a parchment-coffee table (Corrêa et al. 2010; Ordoñez-Silva et al. 2018).
+    const aw = equilibriumRelativeHumidityPct(p, 25, moistureDbFromWbPct(11)) / 100
+    expect(aw - b.aw).toBeGreaterThan(0.04)
+    expect(aw - b.aw).toBeLessThan(0.06)
+  })
+})
+
 describe('fitGabIsotherm: the GAB form fitted through the engine (for point sets of four or more)', () => {
   // Points computed by the engine from the published cocoa GAB (Sandoval et al. 2020, peeled fermented bean,
   // 25 °C: Xm 0.036, C 21.63, K 0.871): the fit must give those constants back from a start far from them.
