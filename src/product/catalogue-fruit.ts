@@ -238,7 +238,7 @@ export const plumsToPrunes: ProductProfile = {
   isotherm: {
     desorption: isotherm(
       gab(0.1, 3, 1.0),
-      `GAB Xm0 0.10 from memory; ${SUGAR_GAB_MEMORY}`,
+      `GAB Xm0 0.10 from memory; ${SUGAR_GAB_MEMORY}; checked, not fitted: within 0.03 aw of the three pairs read in Zettler et al. 2001, Effect of Modified Atmospheres on Microflora and Respiration of California Prunes (abstract): 16, 24.6 and 38 % m.c. at aw 0.575, 0.70 and 0.858 (test/product/isotherm-points.test.ts)`,
       'memory',
       [25, 45],
       [10, 90],

@@ -82,6 +82,15 @@ const AFTER_THIRD_PASS = {
 }
 
 /** The fourth pass: grain equilibrium-moisture tables of extension services, handbooks and manuals. */
+const FIFTH_PASS = [
+  "Aim: published pairs of (moisture content, water activity) at a stated temperature for the non-grain products whose isotherm rests on memory, read in a stored copy, to fit the profile's own GAB form (four pairs or more: `fitGabIsotherm` in `src/product/fit-isotherm.ts`, Xm0, C0 and K0 by least squares on % wb through `emcDb`, temperature terms held) or, with fewer, to CHECK the isotherm in use. The pairs as read, with their pages and sentences, are in `test/fixtures/isotherm-data/product-aw-points.json`; `test/product/isotherm-points.test.ts` runs the checks.",
+  'Result: no product reached four pairs, so nothing was fitted and no level changed (isotherm constants at `memory`: 108 of 132, as after the fourth pass). Only the first part (abstract) of each stored copy could be read; the data tables of the sorption papers were never reachable.',
+  'Prunes, checked: Zettler et al. 2001, Effect of Modified Atmospheres on Microflora and Respiration of California Prunes (abstract): prunes moisturised to 16–38 % m.c. had aw 0.575–0.858, and aw 0.70 at 24.6 % (three pairs; m.c. read as wet basis; no temperature stated for the readings). The recalled GAB (Xm0 0.10, C 3, K 1.0) gives aw +0.003, +0.028 and −0.012 from them (moisture −0.12, −2.02, +2.03 pt wb at the published aw): the points support those three constants over aw 0.58–0.86, within 0.03 aw; they say nothing about a temperature term, which stays absent (memory).',
+  'Coffee, checked, disagrees: Fretheim 2019, Water Activity in Specialty Green Coffee (Cafe Imports), as quoted on a coffee blog: 51 of 703 green-coffee lots at 11–11.1 % MC had aw above 0.60. The recalled coffee-parchment GAB gives aw 0.648 at 11 % wb and 25 °C, 0.05 above what most lots show. Not changed: one bound, for hulled green coffee, not coffee in parchment; the recalled constants stay at `memory` and the test records the gap.',
+  "Read, not usable as pairs: Elbaz, El-Kady & Mohamed 2025, Egypt. J. Chem. (abstract): apricot, raisin and date isotherms at 25 ± 5 °C, aw 0.11–0.85, monolayer 0.0547 g/g dry matter for apricots and 0.119–0.147 for raisins and dates together (the model behind the apricot value is not named; the apricot profile's recalled Xm0 0.10 is nearly twice it, not changed); Hameed et al. 2016, Biosci. Biotech. Res. Asia 13(4) (abstract): dried tomato slices at aw 0.38–0.64, no moisture given; Gilbert & Senyuva 2008, JSM Mycotoxins 58:73 (abstract): figs pass aw about 0.8 while drying, no moisture; Heřmánek et al. 2025, Sensors 25:4526: hop moisture against the air humidity in a belt dryer, not at equilibrium; a desiccant seller's cargo page giving cocoa at 70–75 % RH and 6–8 % water (storage advice naming no source; not used); salted fish at the aw of saturated brine, 0.75 (an e-course page; no moisture).",
+  'Tried, not readable past the first page: Farahnaky, Ansari & Majzoobi 2009 (figs at 5, 25, 40 °C), Esmaiili Bazardeh & Esmaiili 2014 (sultana raisins at 15, 25, 35 °C), Hadrich, Boudhrioua & Kechaou 2008 (sardine, 25–50 °C), Ben Mariem & Ben Mabrouk 2015 (tomato, 30–60 °C), Ordoñez-Silva et al. 2018 (wet parchment coffee) and Getahun et al. 2020 (chilli): full-text copies are stored, but only their title page and abstract could be read, never the tables of equilibrium moistures; Tsami et al. 1990 and Ayranci et al. 1990 (dried fruit) were not found. About 25 look-ups.',
+]
+
 const FOURTH_PASS = [
   "Aim: published equilibrium-moisture TABLES (EMC in % wb by air temperature and RH) for the grains, read in a stored copy, to fit the catalogue's own isotherm forms by least squares (`src/product/fit-isotherm.ts`, through `emcDb`; the tables as read, with their pages, in `test/fixtures/isotherm-data/grain-emc-tables.json`; `npm run isotherms:fit` reruns the fits; `test/product/isotherm-fits.test.ts` checks them).",
   'Adopted, `fitted`: wheat, modified Oswin a 13.1053, b −0.0485494, c 3.03634, fitted to the Wikipedia durum wheat table (35, 50, 70, 100 °F × RH 25, 30, 35 %; the 40 % row is cut off in the copy read) and the wheat row of the 25 °C table of Lotus Harvestec (RH 30–90 %): 19 points, RMSE 0.14 pt wb, largest residual 0.35 pt. The two tables agree: the form fitted to the durum table alone predicts the 25 °C row within 0.43 pt up to 90 % RH. The independent soft red winter wheat value (10.8 % wb at 32.2 °C/50 %) is 0.45 pt off (its check allows 0.5; the durum-only fit missed it by 0.55, so it was not the one adopted). The recalled Chung–Pfost constants it replaces lay up to 1.1 pt above the 25 °C row. Golden: the wheat bin case moves (13 % wb wheat has aw 0.67 at 25 °C instead of 0.60; more usable hours, bin days +0.1).',
@@ -182,6 +191,10 @@ export function renderProductSourcesDoc(): string {
     })(),
     '',
     ...FOURTH_PASS.map((p) => `- ${p}`),
+    '',
+    '## Fifth pass: published (moisture, water activity) pairs for fruit and other products',
+    '',
+    ...FIFTH_PASS.map((p) => `- ${p}`),
     '',
     '## Publications that exist but could not be read here',
     '',
