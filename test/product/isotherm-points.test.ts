@@ -20,8 +20,18 @@ interface PointSet {
   points: { moistureWbPct: number; aw: number }[]
 }
 
+interface Band {
+  id: string
+  product: string
+  citation: string
+  url: string
+  waterContentWbPct: [number, number]
+  rhPct: [number, number]
+}
+
 const FIXTURE = fileURLToPath(new URL('../fixtures/isotherm-data/product-aw-points.json', import.meta.url))
-const sets = (JSON.parse(readFileSync(FIXTURE, 'utf8')) as { sets: PointSet[] }).sets
+const fixture = JSON.parse(readFileSync(FIXTURE, 'utf8')) as { sets: PointSet[]; bands: Band[] }
+const sets = fixture.sets
 const set = (id: string) => {
   const s = sets.find((x) => x.id === id)
   if (!s) throw new Error(`no point set '${id}' in ${FIXTURE}`)
@@ -85,6 +95,47 @@ describe('coffee: Fretheim 2019 (Cafe Imports, as quoted): 652 of 703 green-coff
     expect(aw - b.aw).toBeGreaterThan(0.04)
     expect(aw - b.aw).toBeLessThan(0.06)
   })
+})
+
+/**
+ * How far [% wb] the isotherm at tC misses the rectangle of a band: 0 when its equilibrium moisture over the RH
+ * range overlaps the water-content range, else the distance between the two ranges.
+ */
+function bandGapWbPct(b: Band, tC: number): number {
+  const p = productById(b.product)
+  const [lo, hi] = b.rhPct.map((rh) => moistureWbPctFromDb(equilibriumMoistureDb(p, tC, rh)))
+  const [m1, m2] = b.waterContentWbPct
+  return Math.max(0, m1 - hi, lo - m2)
+}
+
+describe('storage bands: water content beside the relative humidity at which it keeps (Container Handbook Table 21; Cargo Handbook)', () => {
+  // Measured misses [% wb] at 20 and 25 °C (no profile here has a temperature term, so both give the same):
+  // apples 0.41 (the recalled apple GAB holds 24.4–28.1 % at RH 70–75 %, the band says 20–24 %), sultanas 2.64 (the
+  // raisin GAB gives 14.4 % at RH 60 %; the same table's raisin row, 14–16 % at 55–65 %, is met: the two rows differ
+  // by product; that sultanas are often dipped is from memory), cocoa 0.22 (the published Sandoval et al. 2020 GAB gives 8.2–9.2 % at
+  // RH 70–75 % against 6–8 %). Every other band is met.
+  const misses: Record<string, number> = {
+    'container-handbook/apples': 0.41,
+    'container-handbook/sultanas': 2.64,
+    'cargo-handbook/cocoa': 0.22,
+  }
+  it('every band is checked, and each names its page', () => {
+    expect(fixture.bands.length).toBe(10)
+    for (const b of fixture.bands) expect(b.url).toMatch(/^https?:\/\//)
+  })
+  for (const b of fixture.bands) {
+    const miss = misses[b.id]
+    const what = `${b.product}: ${b.waterContentWbPct.join('–')} % wb at RH ${b.rhPct.join('–')} %`
+    if (miss === undefined) {
+      it(`${b.id} (${what}): the isotherm passes through the band at 20 and 25 °C`, () => {
+        for (const tC of [20, 25]) expect(bandGapWbPct(b, tC)).toBe(0)
+      })
+    } else {
+      it(`${b.id} (${what}): the isotherm misses the band by ${miss} pt wb, as recorded (not changed)`, () => {
+        for (const tC of [20, 25]) expect(Math.abs(bandGapWbPct(b, tC) - miss)).toBeLessThan(0.01)
+      })
+    }
+  }
 })
 
 describe('fitGabIsotherm: the GAB form fitted through the engine (for point sets of four or more)', () => {
