@@ -755,4 +755,10 @@ export const NOT_RUN: { id: string; role: 'calibration' | 'validation'; reason: 
     reason:
       'tried and not adopted: open-sun specialty coffee to 11 % in 54.48 h (abstract; authors not shown on the copy read), with neither the start moisture nor whether the hours are clock or daylight hours; fitted through the engine on a reconstruction from memory it made washed parchment dry in 2.4 days in open air (1–2 weeks is usual practice) and the same paper’s 35 °C mechanical dryer came out 0.36× its published 71.52 h, so the coffee rate stays from memory',
   },
+  {
+    id: 'kituu-tilapia-brining-solar-tunnel/brined-15',
+    role: 'calibration',
+    reason:
+      "tried and not adopted as the salted fish (fish-fillets-salted) rate: tilapia pieces soaked in 15 % brine, 2.76 kg/kg db (73.4 % wb, the companion CIGR abstract) to about 15 % in about 40 h in the same solar tunnel as the unbrined fit, but neither abstract says whether the 40 h are clock or drying hours. Fitted through the engine as the unbrined run is (active hours, the same Juja reconstruction and tunnel) on the salted profile it gives k 0.0350 h⁻¹ at 40 °C, 0.55 × the unbrined fit 0.06363 (the abstracts' own rate constants fall to 0.66 and 0.67 × from 0 to 15 % brine); the salted profile keeps the unbrined k, with which this brined run takes 29.3 h instead of 40 (measured once). With the stated linear fall of the start moisture, 10 % brine gives 0.654 × and 5 % 0.748 ×",
+  },
 ]
