@@ -10,7 +10,7 @@
  * missing weather keep the last product temperature (the clock runs; before the first known hour nothing is
  * stepped). One track per batch, fed through fields; nothing is allocated per hour.
  */
-import { liquidSaturationPressureFromTableKpa } from '../physics/saturation-table.ts'
+import { liquidSaturationValueFromTableKpa } from '../physics/saturation-table.ts'
 import {
   type SpoilageHourStepper,
   type SpoilageModel,
@@ -40,9 +40,6 @@ export interface BatchSpoilageResult {
   /** Hours stepped (hours of the batch with a known product temperature). */
   hours: number
 }
-
-/** Scratch for the slope the saturation table also returns (not read here). */
-const saturationSlope = new Float64Array(1)
 
 /** Product temperatures passed to a spoilage model are held within the models' accepted input range [°C]. */
 const SPOILAGE_T_MIN_C = -40
@@ -135,8 +132,7 @@ export class BatchSpoilageTrack {
       return
     }
     const ea = this.airVaporPressureKpa
-    const rh =
-      ea >= 0 ? ea / liquidSaturationPressureFromTableKpa(this.lastProductC, saturationSlope) : Number.NaN
+    const rh = ea >= 0 ? ea / liquidSaturationValueFromTableKpa(this.lastProductC) : Number.NaN
     if (!(rh >= 0) || this.wetShare > 0) this.pieceWaterActivityOfHour()
     else this.lastWaterActivity = Number.NaN
     this.lastWaterActivity = surfaceWaterActivity(this.exchange, this.lastWaterActivity, rh, this.wetShare)

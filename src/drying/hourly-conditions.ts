@@ -20,7 +20,7 @@
 import { S_PER_HOUR } from '../physics/constants.ts'
 import { windSpeedAt2mMs } from '../physics/evaporation.ts'
 import { humidityRatioFromVaporPressure } from '../physics/moist-air.ts'
-import { liquidSaturationPressureFromTableKpa } from '../physics/saturation-table.ts'
+import { liquidSaturationValueFromTableKpa } from '../physics/saturation-table.ts'
 import { moistureDbFromWbPct, moistureWbPctFromDb } from '../product/moisture-basis.ts'
 import type { HourlySeries } from '../weather/series.ts'
 import {
@@ -48,15 +48,12 @@ export const DEFAULT_WIND_MS = 1
 const HOUR_DRY_BULB_RANGE_C = [-60, 70] as const
 const HOUR_PRESSURE_RANGE_KPA = [30, 110] as const
 
-/** Scratch for the slope the saturation table also returns (not read here). */
-const saturationSlope = new Float64Array(1)
-
 /**
  * Saturation pressure over liquid water [Pa] at `tC` [°C] from the interpolated table of ASHRAE HOF 2017 ch. 1
  * eq 6 (physics/saturation-table.ts: within 1e-9 relative of the formula, without its exp and log).
  */
 function saturationPa(tC: number): number {
-  return 1000 * liquidSaturationPressureFromTableKpa(tC, saturationSlope)
+  return 1000 * liquidSaturationValueFromTableKpa(tC)
 }
 
 /**

@@ -107,6 +107,17 @@ export function liquidSaturationPressureFromTableKpa(tC: number, slope: Float64A
   return y0 + u * (m0 + u * (c2 + u * c3))
 }
 
+/** Scratch for the slope {@link liquidSaturationValueFromTableKpa} does not return. */
+const unreadSlope = new Float64Array(1)
+
+/**
+ * The value alone of {@link liquidSaturationPressureFromTableKpa} [kPa] at `tC` [°C] (the same number, to the bit),
+ * for callers that do not read the slope.
+ */
+export function liquidSaturationValueFromTableKpa(tC: number): number {
+  return liquidSaturationPressureFromTableKpa(tC, unreadSlope)
+}
+
 /** Node spacing of the inverse table in ln(pws/Pa). */
 const LN_STEP = 0.02
 const INV_LN_STEP = 1 / LN_STEP
