@@ -105,6 +105,12 @@ const HEADLINES: { section: string; figure: string; label: string; target: strin
   },
   {
     section: 'engine',
+    figure: 'first assessment in this process',
+    label: '30-year assessment, first in a fresh process',
+    target: 'reported',
+  },
+  {
+    section: 'engine',
     figure: 'engine / moist-air throughput',
     label: 'per-hour engine / moist-air columns',
     target: 'reported',

@@ -4,7 +4,9 @@
  * climate-demo `longUtcCsv` and read by the weather reader): a full `assess` with a 90-day start-date
  * table (one start per day × 30 years), its memory, and the per-hour engine's throughput beside the
  * moist-air column throughput (physics/air-columns.ts) measured on the same hours in the same process.
- * Timings: one warm-up, then the median of {@link REPEATS} runs.
+ * Timings: the first assessment of the process is reported on its own (V8 compiles the engine while it runs); after
+ * a second warm-up, the assessment's figure is the median of {@link ASSESS_REPEATS} runs, the others the median of
+ * {@link REPEATS}.
  */
 import { longUtcCsv } from '../../climate-demo/demo-files.ts'
 import { assess } from '../../src/analysis/assess.ts'
@@ -21,6 +23,8 @@ import { readWeather } from '../../src/weather/read-weather.ts'
 import { type BenchFigure, type BenchSection, median } from '../section.ts'
 
 const REPEATS = 3
+/** Timed assessments after the warm-ups (five: a median of three moved by ±20 % between runs on a shared machine). */
+const ASSESS_REPEATS = 5
 /** Pairs of runs without and with the spoilage models for their cost. */
 const SPOILAGE_PAIRS = 6
 const SEED = 20_210_003
@@ -64,7 +68,9 @@ export const section: BenchSection = {
       deadlineDays: 21,
       maxDays: 40,
     }
-    assess(series, options) // warm-up
+    // the first assessment in this process (the engine compiled while it runs), then a second warm-up
+    const first = timed(() => assess(series, options))
+    assess(series, options)
     const gc = (globalThis as { gc?: () => void }).gc
     gc?.()
     const heapBefore = process.memoryUsage().heapUsed
@@ -72,7 +78,7 @@ export const section: BenchSection = {
     const cpuRuns: number[] = []
     let startRows = 0
     let batches = 0
-    for (let r = 0; r < REPEATS; r++) {
+    for (let r = 0; r < ASSESS_REPEATS; r++) {
       const c0 = process.cpuUsage()
       const t = timed(() => assess(series, options))
       const c = process.cpuUsage(c0)
@@ -113,7 +119,13 @@ export const section: BenchSection = {
       name: '30-year assessment (open-air raisins, 90 start days)',
       value: Math.round(median(runs)),
       unit: 'ms',
-      note: `median of ${REPEATS}; best ${Math.round(Math.min(...runs))} ms; target < 500 ms; ${startRows} start days, ${batches} batches`,
+      note: `median of ${ASSESS_REPEATS} after two warm-ups; best ${Math.round(Math.min(...runs))} ms; target < 500 ms; ${startRows} start days, ${batches} batches`,
+    })
+    figures.push({
+      name: 'first assessment in this process',
+      value: Math.round(first.ms),
+      unit: 'ms',
+      note: 'wall time; V8 compiles the engine while it runs (a one-off command pays this; a running server does not)',
     })
     figures.push({
       name: 'the same assessment without spoilage models, CPU time',
