@@ -82,6 +82,14 @@ export const CALIBRATED_CONSTANTS: readonly CalibratedConstant[] = [
     source:
       "effective moisture diffusivity at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Puello-Mendez J., Meza-Castellar P. et al. 2017, Comparative Study of Solar Drying of Cocoa Beans: Two Methods Used in Colombian Rural Areas, Chem. Eng. Trans. 57:1711–1716 (abstract), fermented cocoa beans in open air on a farm of the Caribbean region of Colombia: run 'open-air', 58.0 → 7.0 % wb in 144 h (elapsed time, sampled every 24 h: the geometric middle of the constants 1.542e-10–1.833e-10 that meet the end point at that sample) with method open-air on the weather reconstruction 'cartagena-january-2016' (test/fixtures/experiments/weather/; Cartagena January climate, mostly from memory, place and month assumed: the abstract gives no farm, date or weather); engine ÷ target 1.0000",
   },
+  {
+    productId: 'mint-leaves',
+    parameter: 'k.kRefPerH',
+    value: 0.435,
+    caseId: 'noori-mint-kabul-solar/open-sun',
+    source:
+      "Lewis k at the reference temperature fitted by dryhours through the engine (npm run calibrate, test/experiments/calibrate.ts) so that the engine reproduces Noori A.W., Royen M.J., Haydary J. n.d. (no year on the page read), Effect of ambient parameters change on mint leaves solar drying, Acta Chimica Slovaca (abstract), mint leaves in the open sun for 7 h: run 'open-sun', 85.3 → 7.4 % wb in 7 h (elapsed time) with method open-air on the weather reconstruction 'kabul-september-2020' (test/fixtures/experiments/weather/; air temperature and humidity of the abstract (20–30 °C, RH 14–28.8 %), Kabul taken from its 82 kPa, September assumed, sunshine from memory); engine ÷ target 1.0000",
+  },
 ]
 
 /** The fitted constant of `productId` at `parameter`; throws when `npm run calibrate` has not written it. */

@@ -110,6 +110,17 @@ export const CALIBRATION_TARGETS: CalibrationTarget[] = [
       'Cartagena January climate, mostly from memory, place and month assumed: the abstract gives no farm, date or weather',
     searchRange: [1e-12, 1e-7],
   },
+  {
+    productId: 'mint-leaves',
+    parameter: 'k.kRefPerH',
+    parameterLabel: 'Lewis k at the reference temperature',
+    caseId: 'noori-mint-kabul-solar/open-sun',
+    citation:
+      'Noori A.W., Royen M.J., Haydary J. n.d. (no year on the page read), Effect of ambient parameters change on mint leaves solar drying, Acta Chimica Slovaca (abstract), mint leaves in the open sun for 7 h',
+    weatherNote:
+      'air temperature and humidity of the abstract (20–30 °C, RH 14–28.8 %), Kabul taken from its 82 kPa, September assumed, sunshine from memory',
+    searchRange: [1e-3, 20],
+  },
 ]
 
 /** A deep copy of `profile` with `kinetics.equation.<path>` set to `value`. */
