@@ -56,18 +56,32 @@ export function fitIsotherm(
   start: Extract<IsothermEquation, { model: ThreeConstantModel }>,
   points: readonly EmcPoint[],
 ): IsothermFit {
-  if (points.length < 4) throw new RangeError(`an isotherm fit needs at least 4 points, got ${points.length}`)
   const model = start.model
-  const eqOf = (p: number[]) => ({ model, a: p[0], b: p[1], c: p[2] }) as IsothermFit['equation']
+  return fitThreeConstants(
+    (p) => ({ model, a: p[0], b: p[1], c: p[2] }) as IsothermFit['equation'],
+    [start.a, start.b, start.c],
+    points,
+  )
+}
+
+/**
+ * The least-squares fit both forms share: three constants `p` turned into an equation by `eqOf`, residuals in
+ * % wb through `emcDb` (a step outside the form's domain, or one `admissible` refuses, is rejected by the solver).
+ */
+function fitThreeConstants<E extends IsothermEquation>(
+  eqOf: (p: number[]) => E,
+  start: number[],
+  points: readonly EmcPoint[],
+  admissible: (p: number[]) => boolean = () => true,
+): Omit<IsothermFit, 'equation'> & { equation: E } {
+  if (points.length < 4) throw new RangeError(`an isotherm fit needs at least 4 points, got ${points.length}`)
   const residuals = (p: number[]) => {
+    if (!admissible(p)) throw new RangeError("constants outside the form's admissible range")
     const r = emcResidualsWbPct(eqOf(p), points)
     if (!r.every(Number.isFinite)) throw new RangeError('isotherm outside its domain')
     return r
   }
-  const result = levenbergMarquardt(residuals, [start.a, start.b, start.c], {
-    maxIterations: 500,
-    tolerance: 1e-12,
-  })
+  const result = levenbergMarquardt(residuals, start, { maxIterations: 500, tolerance: 1e-12 })
   const equation = eqOf(result.params)
   return { equation, ...emcFitQuality(equation, points), n: points.length, converged: result.converged }
 }
@@ -83,18 +97,11 @@ export interface GabFit extends Omit<IsothermFit, 'equation'> {
  * `start`'s. A step that puts K·aw at or above 1 at a point (where GAB diverges) is rejected by the solver.
  */
 export function fitGabIsotherm(start: GabEquation, points: readonly EmcPoint[]): GabFit {
-  if (points.length < 4) throw new RangeError(`an isotherm fit needs at least 4 points, got ${points.length}`)
-  const eqOf = (p: number[]): GabEquation => ({ ...start, xm0: p[0], c0: p[1], k0: p[2] })
-  const residuals = (p: number[]) => {
-    if (!(p[0] > 0 && p[1] > 0 && p[2] > 0)) throw new RangeError('GAB constants must be > 0')
-    const r = emcResidualsWbPct(eqOf(p), points)
-    if (!r.every(Number.isFinite)) throw new RangeError('isotherm outside its domain')
-    return r
-  }
-  const result = levenbergMarquardt(residuals, [start.xm0, start.c0, start.k0], {
-    maxIterations: 500,
-    tolerance: 1e-12,
-  })
-  const equation = eqOf(result.params)
-  return { equation, ...emcFitQuality(equation, points), n: points.length, converged: result.converged }
+  return fitThreeConstants(
+    (p): GabEquation => ({ ...start, xm0: p[0], c0: p[1], k0: p[2] }),
+    [start.xm0, start.c0, start.k0],
+    points,
+    // GAB constants are positive
+    (p) => p[0] > 0 && p[1] > 0 && p[2] > 0,
+  )
 }
