@@ -242,7 +242,8 @@ export function calendarStage(series: HourlySeries, primary: HourlyConditions): 
   return { time, counts, monthly, years }
 }
 
-function startContext(
+/** The context every batch of an assessment runs in, with an empty record of the starts already run. */
+export function startContext(
   series: HourlySeries,
   run: ResolvedAssessOptions,
   time: LocalTimeColumns,

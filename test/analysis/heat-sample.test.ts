@@ -6,7 +6,7 @@
  * at every sample start must not reach the cross-check. Consistency check of the code, no outside source.
  */
 import { describe, expect, it } from 'vitest'
-import { hourlyConditionsStage, resolveAssessOptions } from '../../src/analysis/assess.ts'
+import { hourlyConditionsStage, resolveAssessOptions, startContext } from '../../src/analysis/assess.ts'
 import { heatSummary } from '../../src/analysis/heat-summary.ts'
 import { localTimeColumns } from '../../src/analysis/local-time.ts'
 import { HEATED_SAMPLE_BATCHES } from '../../src/analysis/plan.ts'
@@ -32,20 +32,8 @@ describe('heat cross-check sample', () => {
       deadlineDays: 10,
     })
     const { primary, backup } = hourlyConditionsStage(series, run)
-    const time = localTimeColumns(series)
-    const base = {
-      series,
-      toUtcMs: time.toUtcMs,
-      primary,
-      backup,
-      product: run.product,
-      initialDb: run.initialDb,
-      targetDb: run.targetDb,
-      deadlineHours: Math.round(run.deadlineDays * 24),
-      maxHours: Math.round(run.maxDays * 24),
-      startHourLocal: run.season.startHourLocal,
-      wrap: series.typicalYear,
-    }
+    // the assessment's own context (analysis/assess.ts startContext), its record emptied below for `plain`
+    const base = startContext(series, run, localTimeColumns(series), primary, backup)
     const planted: StartOutcome = {
       unknown: false,
       missingHours: 0,
@@ -58,7 +46,7 @@ describe('heat cross-check sample', () => {
       strategy: 'none-needed',
       spoilage: undefined,
     }
-    const plain: StartContext = { ...base }
+    const plain: StartContext = { ...base, ran: undefined }
     // a recorded outcome at every start of the sample (batch k starts at ⌊k·last/count⌋, last = hours − maximum length)
     const last = series.hours - base.maxHours
     const ran = startRecord(base)
