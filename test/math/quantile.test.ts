@@ -29,7 +29,7 @@ describe('order statistics by selection', () => {
     expect(() => orderStatistic(new Float64Array(3), 1.5)).toThrow(RangeError)
   })
 
-  it('quantileSorted follows Hyndman & Fan definition 7 (their worked value: [1, 2, 3, 4] at 0.1 is 1.3)', () => {
+  it('quantileSorted follows Hyndman & Fan definition 7 ([1, 2, 3, 4] at 0.1 is 1.3, worked by hand from it)', () => {
     // Hyndman R.J., Fan Y. 1996, "Sample quantiles in statistical packages", Am. Stat. 50:361 (definition 7,
     // R's default): h = (n − 1)q = 0.3, so 1 + 0.3·(2 − 1)
     expect(quantileSorted([1, 2, 3, 4], 0.1)).toBeCloseTo(1.3, 12)
